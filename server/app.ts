@@ -1,0 +1,106 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { toNodeHandler } from 'better-auth/node';
+import express, { type RequestHandler } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import helmet from 'helmet';
+import { pino } from 'pino';
+import { pinoHttp } from 'pino-http';
+import swaggerUi from 'swagger-ui-express';
+import { createAuth } from './auth/auth';
+import type { Config } from './config';
+import type { Database } from './db/client';
+import { apiNotFound, errorHandler, HttpError } from './http/errors';
+import { buildOpenApi } from './http/openapi';
+import { mountRoutes } from './http/route';
+import type { Mailer } from './mail/mailer';
+import { apiRoutes } from './routes';
+import { createServices } from './services';
+
+export interface AppDeps {
+  database: Database;
+  config: Config;
+  mailer: Mailer;
+  /** Serve the built client from this folder (production); omitted for API-only tests and dev mode. */
+  clientDir?: string;
+  /** Dev mode: Vite's middleware serving the client with hot reload. */
+  clientMiddleware?: RequestHandler[];
+}
+
+/** Refuses cookie-authenticated writes whose Origin is not ours (CSRF); requests without Origin are not from a browser form. */
+function originCheck(trusted: string[]): RequestHandler {
+  return (req, _res, next) => {
+    if (req.method === 'GET' || req.method === 'HEAD' || req.method === 'OPTIONS') return next();
+    const origin = req.get('origin');
+    if (origin && !trusted.includes(origin)) return next(new HttpError(403, 'bad_origin', 'cross-site request refused'));
+    next();
+  };
+}
+
+/** Builds the Express app without listening, so tests can drive it with supertest. */
+export function createApp({ database, config, mailer, clientDir, clientMiddleware }: AppDeps) {
+  const auth = createAuth(database.db, config, mailer);
+  const services = createServices(database, config, mailer, auth);
+  const logger = pino({ level: config.env === 'test' ? 'silent' : config.logLevel });
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(
+    helmet({
+      // Vite's dev middleware injects inline scripts for hot reload; the CSP applies to the built client.
+      contentSecurityPolicy:
+        clientMiddleware
+          ? false
+          : {
+              directives: {
+                defaultSrc: ["'self'"],
+                scriptSrc: ["'self'"],
+                styleSrc: ["'self'", "'unsafe-inline'"],
+                imgSrc: ["'self'", 'data:', 'blob:'],
+                fontSrc: ["'self'", 'data:'],
+                connectSrc: ["'self'"],
+                objectSrc: ["'none'"],
+                frameAncestors: ["'none'"],
+                upgradeInsecureRequests: null,
+              },
+            },
+    }),
+  );
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+
+  const trusted = (auth.options.trustedOrigins as string[]) ?? [];
+  const authLimiter = rateLimit({
+    windowMs: 60_000,
+    limit: config.authRateLimit,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: (_req, res) =>
+      res.status(429).json({ error: { code: 'rate_limited', message: 'too many attempts; wait a minute and try again' } }),
+  });
+  for (const p of ['/api/auth/sign-in/*splat', '/api/auth/sign-up/*splat', '/api/auth/request-password-reset', '/api/auth/reset-password'])
+    app.use(p, authLimiter);
+  // better-auth must see the raw body: mount it before express.json().
+  app.all('/api/auth/*splat', toNodeHandler(auth));
+
+  app.use(express.json({ limit: '1mb' }));
+  app.use('/api', originCheck(trusted));
+
+  const openapi = buildOpenApi(apiRoutes);
+  app.get('/api/openapi.json', (_req, res) => {
+    res.json(openapi);
+  });
+  app.use('/api/docs', swaggerUi.serve, swaggerUi.setup(openapi, { customSiteTitle: 'Skinwright API reference' }));
+
+  const api = express.Router();
+  mountRoutes(api, apiRoutes, services);
+  app.use('/api', api);
+  app.use('/api', apiNotFound);
+
+  if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+  }
+  for (const m of clientMiddleware ?? []) app.use(m);
+  app.use(errorHandler);
+  return { app, services, auth, logger };
+}

@@ -1,0 +1,68 @@
+import { eq } from 'drizzle-orm';
+import { z } from 'zod';
+import { projectRoleSchema } from '@shared/auth/permissions';
+import { projectInputSchema } from '@shared/schemas/project';
+import demo from '../../data/seed/demo.json' with { type: 'json' };
+import type { Auth } from '../auth/auth';
+import type { Db } from './client';
+import { organisationMembers, organisations, projectMembers, user } from './schema';
+import { createProjectService } from '../services/projects';
+
+const demoSchema = z.object({
+  password: z.string().min(10),
+  firms: z.array(z.object({ key: z.string(), name: z.string() })),
+  users: z.array(
+    z.object({
+      email: z.email(),
+      name: z.string(),
+      firm: z.string(),
+      firmRole: z.enum(['admin', 'member']),
+      siteRole: z.enum(['admin', 'user']).optional(),
+      /** What the account is for in the demo (its role on the demo project). */
+      demoRole: z.string(),
+    }),
+  ),
+  projects: z.array(
+    projectInputSchema.and(
+      z.object({ owner: z.email(), members: z.array(z.object({ email: z.email(), role: projectRoleSchema })) }),
+    ),
+  ),
+});
+export const demoScenario = demoSchema.parse(demo);
+
+/** The demo sign-in accounts, as `npm start` prints them and the README lists them. */
+export const demoAccounts = demoScenario.users.map((u) => ({
+  email: u.email,
+  password: demoScenario.password,
+  role: u.demoRole,
+}));
+
+/** Seeds the invented demo scenario once; running it again changes nothing. */
+export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
+  const first = demoScenario.users[0]!;
+  const [exists] = await db.select({ id: user.id }).from(user).where(eq(user.email, first.email));
+  if (exists) return false;
+
+  const firmIds = new Map<string, string>();
+  for (const f of demoScenario.firms) {
+    const [row] = await db
+      .insert(organisations)
+      .values({ name: f.name, slug: `demo-${f.key}` })
+      .returning({ id: organisations.id });
+    firmIds.set(f.key, row!.id);
+  }
+  const userIds = new Map<string, string>();
+  for (const u of demoScenario.users) {
+    const { user: created } = await auth.api.signUpEmail({ body: { name: u.name, email: u.email, password: demoScenario.password } });
+    userIds.set(u.email, created.id);
+    await db.update(user).set({ role: u.siteRole ?? 'user', emailVerified: true }).where(eq(user.id, created.id));
+    await db.insert(organisationMembers).values({ organisationId: firmIds.get(u.firm)!, userId: created.id, role: u.firmRole });
+  }
+  const projects = createProjectService(db);
+  for (const { owner, members, ...input } of demoScenario.projects) {
+    const created = await projects.create(userIds.get(owner)!, input);
+    for (const m of members)
+      await db.insert(projectMembers).values({ projectId: created.id, userId: userIds.get(m.email)!, role: m.role });
+  }
+  return true;
+}

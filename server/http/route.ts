@@ -1,0 +1,104 @@
+import type { Request, Response, Router } from 'express';
+import { z } from 'zod';
+import { can, type ProjectAction, type ProjectRole } from '@shared/auth/permissions';
+import type { Services } from '../services';
+import { forbidden, HttpError, notFound, unauthorised, zodFields } from './errors';
+
+/**
+ * Who may call a route:
+ * - `public`: anyone (health, docs, public calculations, invitation preview, sheet verification);
+ * - `user`: any signed-in user;
+ * - `siteAdmin`: a site administrator;
+ * - `project`: a member of the project whose role allows `action` (the permission table in shared/auth).
+ *   Non-members get 404 so that a project's existence is not revealed to other firms.
+ */
+export type Access =
+  | { kind: 'public' }
+  | { kind: 'user' }
+  | { kind: 'siteAdmin' }
+  | { kind: 'project'; action: ProjectAction; projectId?: (ctx: { params: Record<string, string>; services: Services }) => Promise<string | null> };
+
+export interface SessionUser {
+  id: string;
+  name: string;
+  email: string;
+  role: string;
+}
+
+export interface RouteContext<P, Q, B> {
+  req: Request;
+  res: Response;
+  params: P;
+  query: Q;
+  body: B;
+  user: SessionUser | null;
+  /** Set for `project` access: the project and the caller's role on it. */
+  project: { id: string; role: ProjectRole } | null;
+  services: Services;
+}
+
+export interface RouteDef<P = unknown, Q = unknown, B = unknown> {
+  method: 'get' | 'post' | 'put' | 'patch' | 'delete';
+  /** Express path under /api, e.g. `/projects/:id`. */
+  path: string;
+  summary: string;
+  tag: string;
+  access: Access;
+  params?: z.ZodType<P>;
+  query?: z.ZodType<Q>;
+  body?: z.ZodType<B>;
+  /** Documented responses (the success first); schemas feed the OpenAPI document. */
+  responses: Record<number, { description: string; schema?: z.ZodType; contentType?: string }>;
+  /** Example request body for the reference page. */
+  example?: unknown;
+  /** Returns the JSON body (status = first documented response) or handles `res` itself and returns undefined. */
+  handler: (ctx: RouteContext<P, Q, B>) => Promise<unknown>;
+}
+
+/** Identity helper that keeps the param/query/body types inferred from the zod schemas. */
+export const defineRoute = <P, Q, B>(def: RouteDef<P, Q, B>): RouteDef<P, Q, B> => def;
+
+// biome-ignore lint/suspicious/noExplicitAny: a registry holds routes of every shape
+export type AnyRoute = RouteDef<any, any, any>;
+
+function parsePart<T>(schema: z.ZodType<T> | undefined, value: unknown, where: string): T {
+  if (!schema) return undefined as T;
+  const r = schema.safeParse(value);
+  if (!r.success) {
+    const fields = zodFields(r.error, where === 'body' ? undefined : where);
+    throw new HttpError(400, 'validation_failed', `the request ${where} is not valid`, fields);
+  }
+  return r.data;
+}
+
+/** Mounts every route on the router: session → validation → permission → handler. */
+export function mountRoutes(router: Router, routes: AnyRoute[], services: Services): void {
+  for (const route of routes) {
+    router[route.method](route.path, async (req, res) => {
+      const user = await services.auth.currentUser(req);
+      const { access } = route;
+      if (access.kind !== 'public' && !user) throw unauthorised();
+      if (access.kind === 'siteAdmin' && user?.role !== 'admin') throw forbidden('site administrators only');
+      const params = parsePart(route.params, req.params, 'params');
+      let project: RouteContext<unknown, unknown, unknown>['project'] = null;
+      if (access.kind === 'project') {
+        const projectId = access.projectId
+          ? await access.projectId({ params: req.params as Record<string, string>, services })
+          : (req.params as Record<string, string>).id;
+        const role = projectId ? await services.projects.roleOf(projectId, user!.id) : null;
+        if (!projectId || !role) throw notFound('project');
+        if (!can(role, access.action)) throw forbidden();
+        project = { id: projectId, role };
+      }
+      const query = parsePart(route.query, req.query, 'query');
+      const body = parsePart(route.body, req.body ?? {}, 'body');
+      const result = await route.handler({ req, res, params, query, body, user, project, services });
+      if (result === undefined) {
+        if (!res.headersSent) res.status(204).end();
+        return;
+      }
+      const status = Number(Object.keys(route.responses)[0] ?? 200);
+      res.status(status).json(result);
+    });
+  }
+}

@@ -1,0 +1,8 @@
+import type { AnyRoute } from '../http/route';
+import { healthRoutes } from './health';
+import { memberRoutes } from './members';
+import { meRoutes } from './me';
+import { projectRoutes } from './projects';
+
+/** Every API route, in one registry: it mounts the routes, generates the OpenAPI document and drives the permission tests. */
+export const apiRoutes: AnyRoute[] = [...healthRoutes, ...meRoutes, ...projectRoutes, ...memberRoutes];

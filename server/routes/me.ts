@@ -1,0 +1,51 @@
+import { z } from 'zod';
+import { apiErrorSchema } from '@shared/schemas/common';
+import { capturedMailSchema, meSchema, preferencesSchema } from '@shared/schemas/me';
+import { defineRoute } from '../http/route';
+
+const unauth = { 401: { description: 'Not signed in', schema: apiErrorSchema } };
+
+export const meRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/me',
+    summary: 'The signed-in user, firms and preferences',
+    tag: 'Account',
+    access: { kind: 'user' },
+    responses: { 200: { description: 'The signed-in user', schema: meSchema }, ...unauth },
+    handler: ({ user, services }) => services.me.me(user!.id),
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/me/preferences',
+    summary: 'Set the display unit system (SI or IP)',
+    tag: 'Account',
+    access: { kind: 'user' },
+    body: preferencesSchema,
+    responses: { 200: { description: 'Updated user', schema: meSchema }, ...unauth },
+    handler: ({ user, body, services }) => services.me.setUnitSystem(user!.id, body.unitSystem),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/organisations',
+    summary: 'Create a firm with the caller as its administrator',
+    tag: 'Account',
+    access: { kind: 'user' },
+    body: z.object({ name: z.string().trim().min(2).max(200) }),
+    responses: { 201: { description: 'Updated user with the new firm', schema: meSchema }, ...unauth },
+    handler: ({ user, body, services }) => services.me.createOrganisation(user!.id, body.name),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/admin/mail',
+    summary: 'Messages captured by the local mail server (site administrators)',
+    tag: 'Administration',
+    access: { kind: 'siteAdmin' },
+    responses: {
+      200: { description: 'Captured messages, newest first', schema: z.object({ messages: z.array(capturedMailSchema) }) },
+      ...unauth,
+      403: { description: 'Not a site administrator', schema: apiErrorSchema },
+    },
+    handler: async ({ services }) => ({ messages: await services.me.capturedMail() }),
+  }),
+];

@@ -1,0 +1,105 @@
+import { z } from 'zod';
+import { apiErrorSchema, uuidParam } from '@shared/schemas/common';
+import {
+  invitationInputSchema,
+  invitationPreviewSchema,
+  invitationSchema,
+  invitationTokenParam,
+  memberRoleUpdateSchema,
+  memberSchema,
+} from '@shared/schemas/members';
+import { defineRoute } from '../http/route';
+
+const errors = {
+  401: { description: 'Not signed in', schema: apiErrorSchema },
+  403: { description: 'Your role does not allow this', schema: apiErrorSchema },
+  404: { description: 'No such project or member', schema: apiErrorSchema },
+};
+const memberParams = uuidParam.extend({ memberId: z.uuid() });
+
+export const memberRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/projects/:id/members',
+    summary: 'Members and pending invitations',
+    tag: 'Members',
+    access: { kind: 'project', action: 'members.read' },
+    params: uuidParam,
+    responses: {
+      200: { description: 'Members', schema: z.object({ members: z.array(memberSchema), invitations: z.array(invitationSchema) }) },
+      ...errors,
+    },
+    handler: ({ project, services }) => services.members.list(project!.id),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/projects/:id/invitations',
+    summary: 'Invite someone by e-mail with a role on this project',
+    tag: 'Members',
+    access: { kind: 'project', action: 'members.invite' },
+    params: uuidParam,
+    body: invitationInputSchema,
+    example: { email: 'engineer@example.com', role: 'engineer' },
+    responses: {
+      201: { description: 'The invitation (an e-mail with the accept link was sent)', schema: invitationSchema },
+      ...errors,
+      409: { description: 'Already a member', schema: apiErrorSchema },
+    },
+    handler: ({ user, project, body, services }) => services.members.invite(project!.id, user!, body),
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/projects/:id/members/:memberId',
+    summary: 'Change a member’s role',
+    tag: 'Members',
+    access: { kind: 'project', action: 'members.manage' },
+    params: memberParams,
+    body: memberRoleUpdateSchema,
+    responses: {
+      200: { description: 'The member', schema: memberSchema },
+      ...errors,
+      409: { description: 'Would leave the project without an owner', schema: apiErrorSchema },
+    },
+    handler: ({ user, project, params, body, services }) => services.members.setRole(project!.id, params.memberId, body.role, user!.id),
+  }),
+  defineRoute({
+    method: 'delete',
+    path: '/projects/:id/members/:memberId',
+    summary: 'Remove a member from the project',
+    tag: 'Members',
+    access: { kind: 'project', action: 'members.manage' },
+    params: memberParams,
+    responses: { 204: { description: 'Removed' }, ...errors, 409: { description: 'Last owner', schema: apiErrorSchema } },
+    handler: async ({ user, project, params, services }) => {
+      await services.members.remove(project!.id, params.memberId, user!.id);
+      return undefined;
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/invitations/:token',
+    summary: 'What an invitation offers (no sign-in needed)',
+    tag: 'Members',
+    access: { kind: 'public' },
+    params: invitationTokenParam,
+    responses: { 200: { description: 'Invitation preview', schema: invitationPreviewSchema }, 404: errors[404] },
+    handler: ({ params, services }) => services.members.preview(params.token),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/invitations/:token/accept',
+    summary: 'Accept an invitation (signed in with the invited address)',
+    tag: 'Members',
+    access: { kind: 'user' },
+    params: invitationTokenParam,
+    responses: {
+      200: { description: 'Joined', schema: z.object({ projectId: z.uuid() }) },
+      401: errors[401],
+      403: { description: 'Signed in with another address', schema: apiErrorSchema },
+      404: errors[404],
+      409: { description: 'Already accepted', schema: apiErrorSchema },
+      410: { description: 'Expired', schema: apiErrorSchema },
+    },
+    handler: ({ user, params, services }) => services.members.accept(params.token, user!),
+  }),
+];

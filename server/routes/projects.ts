@@ -1,0 +1,113 @@
+import { z } from 'zod';
+import { apiErrorSchema, uuidParam } from '@shared/schemas/common';
+import { auditEntrySchema } from '@shared/schemas/me';
+import { projectInputSchema, projectListQuerySchema, projectSchema, projectUpdateSchema } from '@shared/schemas/project';
+import { defineRoute } from '../http/route';
+
+const errors = {
+  401: { description: 'Not signed in', schema: apiErrorSchema },
+  403: { description: 'Your role does not allow this', schema: apiErrorSchema },
+  404: { description: 'No such project, or you are not a member', schema: apiErrorSchema },
+};
+
+const example = {
+  name: 'Example distribution centre',
+  number: 'EX-01',
+  description: '',
+  siteAddress: '1 Example Road',
+  climateZone: '5A',
+  elevationM: 200,
+  buildingHeightM: 12,
+  planLengthM: 120,
+  planWidthM: 60,
+  indoorTempC: 20,
+  indoorRh: 0.4,
+  winterDesignTempC: -18,
+  summerDesignTempC: 31,
+};
+
+export const projectRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/projects',
+    summary: 'Projects the caller is a member of',
+    tag: 'Projects',
+    access: { kind: 'user' },
+    query: projectListQuerySchema,
+    responses: { 200: { description: 'Projects', schema: z.object({ projects: z.array(projectSchema) }) }, 401: errors[401] },
+    handler: async ({ user, query, services }) => ({ projects: await services.projects.list(user!.id, query.archived === 'true') }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/projects',
+    summary: 'Create a project (the caller becomes its owner)',
+    tag: 'Projects',
+    access: { kind: 'user' },
+    body: projectInputSchema,
+    example,
+    responses: {
+      201: { description: 'The new project', schema: projectSchema },
+      400: { description: 'Invalid fields', schema: apiErrorSchema },
+      401: errors[401],
+      422: { description: 'The caller has no firm', schema: apiErrorSchema },
+    },
+    handler: ({ user, body, services }) => services.projects.create(user!.id, body),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/projects/:id',
+    summary: 'One project with its site data and the caller’s role',
+    tag: 'Projects',
+    access: { kind: 'project', action: 'project.read' },
+    params: uuidParam,
+    responses: { 200: { description: 'The project', schema: projectSchema }, ...errors },
+    handler: ({ user, project, services }) => services.projects.get(project!.id, user!.id),
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/projects/:id',
+    summary: 'Update a project (name the version you read; a stale version gets 409)',
+    tag: 'Projects',
+    access: { kind: 'project', action: 'project.update' },
+    params: uuidParam,
+    body: projectUpdateSchema,
+    example: { version: 1, changes: example },
+    responses: {
+      200: { description: 'The updated project', schema: projectSchema },
+      400: { description: 'Invalid fields', schema: apiErrorSchema },
+      ...errors,
+      409: { description: 'Someone saved first; `current` holds their version', schema: apiErrorSchema },
+    },
+    handler: ({ user, project, body, services }) => services.projects.update(project!.id, user!.id, body.version, body.changes),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/projects/:id/archive',
+    summary: 'Archive a project',
+    tag: 'Projects',
+    access: { kind: 'project', action: 'project.archive' },
+    params: uuidParam,
+    responses: { 200: { description: 'The archived project', schema: projectSchema }, ...errors },
+    handler: ({ user, project, services }) => services.projects.setArchived(project!.id, user!.id, true),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/projects/:id/unarchive',
+    summary: 'Bring an archived project back',
+    tag: 'Projects',
+    access: { kind: 'project', action: 'project.archive' },
+    params: uuidParam,
+    responses: { 200: { description: 'The project', schema: projectSchema }, ...errors },
+    handler: ({ user, project, services }) => services.projects.setArchived(project!.id, user!.id, false),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/projects/:id/audit',
+    summary: 'Who changed what on this project',
+    tag: 'Projects',
+    access: { kind: 'project', action: 'audit.read' },
+    params: uuidParam,
+    responses: { 200: { description: 'Audit entries, newest first', schema: z.object({ entries: z.array(auditEntrySchema) }) }, ...errors },
+    handler: async ({ project, services }) => ({ entries: await services.audit.forProject(project!.id) }),
+  }),
+];

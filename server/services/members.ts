@@ -1,0 +1,167 @@
+import { createHash, randomBytes } from 'node:crypto';
+import { and, asc, eq, ne } from 'drizzle-orm';
+import { PROJECT_ROLE_LABELS, type ProjectRole } from '@shared/auth/permissions';
+import type { Invitation, InvitationInput, InvitationPreview, Member } from '@shared/schemas/members';
+import type { Config } from '../config';
+import type { Db } from '../db/client';
+import { invitations, organisationMembers, organisations, projectMembers, projects, user } from '../db/schema';
+import { HttpError, notFound } from '../http/errors';
+import type { Mailer } from '../mail/mailer';
+import { recordAudit } from './audit';
+
+const INVITATION_DAYS = 14;
+const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
+
+function toInvitation(r: typeof invitations.$inferSelect): Invitation {
+  return {
+    id: r.id,
+    email: r.email,
+    role: r.role as ProjectRole,
+    expiresAt: r.expiresAt.toISOString(),
+    acceptedAt: r.acceptedAt?.toISOString() ?? null,
+    createdAt: r.createdAt.toISOString(),
+  };
+}
+
+export function createMemberService(db: Db, config: Config, mailer: Mailer) {
+  async function list(projectId: string): Promise<{ members: Member[]; invitations: Invitation[] }> {
+    const rows = await db
+      .select({ m: projectMembers, name: user.name, email: user.email })
+      .from(projectMembers)
+      .innerJoin(user, eq(user.id, projectMembers.userId))
+      .where(eq(projectMembers.projectId, projectId))
+      .orderBy(asc(user.name));
+    const firms = await db
+      .select({ userId: organisationMembers.userId, name: organisations.name })
+      .from(organisationMembers)
+      .innerJoin(organisations, eq(organisations.id, organisationMembers.organisationId));
+    const firmOf = new Map(firms.map((f) => [f.userId, f.name]));
+    const invites = await db
+      .select()
+      .from(invitations)
+      .where(eq(invitations.projectId, projectId))
+      .orderBy(asc(invitations.createdAt));
+    return {
+      members: rows.map((r) => ({
+        id: r.m.id,
+        userId: r.m.userId,
+        name: r.name,
+        email: r.email,
+        organisationName: firmOf.get(r.m.userId) ?? null,
+        role: r.m.role as ProjectRole,
+      })),
+      invitations: invites.filter((i) => !i.acceptedAt).map(toInvitation),
+    };
+  }
+
+  async function memberRow(projectId: string, memberId: string) {
+    const [m] = await db
+      .select()
+      .from(projectMembers)
+      .where(and(eq(projectMembers.id, memberId), eq(projectMembers.projectId, projectId)));
+    if (!m) throw notFound('member');
+    return m;
+  }
+
+  /** A project must always keep at least one owner. */
+  async function assertNotLastOwner(projectId: string, memberId: string) {
+    const others = await db
+      .select({ id: projectMembers.id })
+      .from(projectMembers)
+      .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.role, 'owner'), ne(projectMembers.id, memberId)));
+    if (others.length === 0) throw new HttpError(409, 'last_owner', 'a project must keep at least one owner');
+  }
+
+  return {
+    list,
+
+    async invite(projectId: string, inviter: { id: string; name: string }, input: InvitationInput): Promise<Invitation> {
+      const [existing] = await db
+        .select({ id: projectMembers.id })
+        .from(projectMembers)
+        .innerJoin(user, eq(user.id, projectMembers.userId))
+        .where(and(eq(projectMembers.projectId, projectId), eq(user.email, input.email)));
+      if (existing) throw new HttpError(409, 'already_member', `${input.email} is already a member`, { email: 'already a member of this project' });
+      const [project] = await db.select({ name: projects.name }).from(projects).where(eq(projects.id, projectId));
+      const token = randomBytes(24).toString('base64url');
+      const row = await db.transaction(async (tx) => {
+        const [inv] = await tx
+          .insert(invitations)
+          .values({
+            projectId,
+            email: input.email,
+            role: input.role,
+            tokenHash: hashToken(token),
+            invitedBy: inviter.id,
+            expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+          })
+          .returning();
+        await recordAudit(tx, { actorId: inviter.id, projectId, entity: 'invitation', entityId: inv!.id, action: 'create', after: input });
+        return inv!;
+      });
+      const link = `${config.baseUrl}/invite/${token}`;
+      await mailer.send({
+        to: input.email,
+        subject: `${inviter.name} invites you to ${project?.name ?? 'a project'} on Skinwright`,
+        text: `${inviter.name} has invited you to join the project "${project?.name}" as ${PROJECT_ROLE_LABELS[input.role]}.\n\nAccept the invitation: ${link}\n\nThe link expires in ${INVITATION_DAYS} days.`,
+      });
+      return toInvitation(row);
+    },
+
+    async preview(token: string): Promise<InvitationPreview> {
+      const [r] = await db
+        .select({ inv: invitations, projectName: projects.name, inviter: user.name })
+        .from(invitations)
+        .innerJoin(projects, eq(projects.id, invitations.projectId))
+        .innerJoin(user, eq(user.id, invitations.invitedBy))
+        .where(eq(invitations.tokenHash, hashToken(token)));
+      if (!r) throw notFound('invitation');
+      return {
+        projectName: r.projectName,
+        invitedBy: r.inviter,
+        email: r.inv.email,
+        role: r.inv.role as ProjectRole,
+        expired: r.inv.expiresAt.getTime() < Date.now(),
+        accepted: r.inv.acceptedAt !== null,
+      };
+    },
+
+    async accept(token: string, invitee: { id: string; email: string }): Promise<{ projectId: string }> {
+      const [inv] = await db.select().from(invitations).where(eq(invitations.tokenHash, hashToken(token)));
+      if (!inv) throw notFound('invitation');
+      if (inv.acceptedAt) throw new HttpError(409, 'already_accepted', 'this invitation has already been accepted');
+      if (inv.expiresAt.getTime() < Date.now()) throw new HttpError(410, 'expired', 'this invitation has expired; ask for a new one');
+      if (inv.email.toLowerCase() !== invitee.email.toLowerCase())
+        throw new HttpError(403, 'wrong_account', `this invitation is for ${inv.email}; sign in with that address`);
+      await db.transaction(async (tx) => {
+        await tx
+          .insert(projectMembers)
+          .values({ projectId: inv.projectId, userId: invitee.id, role: inv.role })
+          .onConflictDoUpdate({ target: [projectMembers.projectId, projectMembers.userId], set: { role: inv.role } });
+        await tx.update(invitations).set({ acceptedAt: new Date(), acceptedBy: invitee.id }).where(eq(invitations.id, inv.id));
+        await recordAudit(tx, { actorId: invitee.id, projectId: inv.projectId, entity: 'member', entityId: invitee.id, action: 'join', after: { role: inv.role } });
+      });
+      return { projectId: inv.projectId };
+    },
+
+    async setRole(projectId: string, memberId: string, role: ProjectRole, actorId: string): Promise<Member> {
+      const m = await memberRow(projectId, memberId);
+      if (m.role === 'owner' && role !== 'owner') await assertNotLastOwner(projectId, memberId);
+      await db.transaction(async (tx) => {
+        await tx.update(projectMembers).set({ role }).where(eq(projectMembers.id, memberId));
+        await recordAudit(tx, { actorId, projectId, entity: 'member', entityId: m.userId, action: 'change_role', before: { role: m.role }, after: { role } });
+      });
+      const { members } = await list(projectId);
+      return members.find((x) => x.id === memberId)!;
+    },
+
+    async remove(projectId: string, memberId: string, actorId: string): Promise<void> {
+      const m = await memberRow(projectId, memberId);
+      if (m.role === 'owner') await assertNotLastOwner(projectId, memberId);
+      await db.transaction(async (tx) => {
+        await tx.delete(projectMembers).where(eq(projectMembers.id, memberId));
+        await recordAudit(tx, { actorId, projectId, entity: 'member', entityId: m.userId, action: 'remove', before: { role: m.role } });
+      });
+    },
+  };
+}

@@ -1,0 +1,126 @@
+import { and, asc, eq, isNotNull, isNull } from 'drizzle-orm';
+import type { ProjectRole } from '@shared/auth/permissions';
+import type { Project, ProjectInput } from '@shared/schemas/project';
+import type { Db } from '../db/client';
+import { organisationMembers, organisations, projectMembers, projects } from '../db/schema';
+import { HttpError, notFound } from '../http/errors';
+import { recordAudit } from './audit';
+
+type ProjectRow = typeof projects.$inferSelect;
+
+function toProject(row: ProjectRow, organisationName: string, myRole: ProjectRole): Project {
+  return {
+    id: row.id,
+    organisationId: row.organisationId,
+    organisationName,
+    name: row.name,
+    number: row.number,
+    description: row.description,
+    siteAddress: row.siteAddress,
+    climateZone: row.climateZone as Project['climateZone'],
+    elevationM: row.elevationM,
+    buildingHeightM: row.buildingHeightM,
+    planLengthM: row.planLengthM,
+    planWidthM: row.planWidthM,
+    indoorTempC: row.indoorTempC,
+    indoorRh: row.indoorRh,
+    winterDesignTempC: row.winterDesignTempC,
+    summerDesignTempC: row.summerDesignTempC,
+    archivedAt: row.archivedAt?.toISOString() ?? null,
+    version: row.version,
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+    myRole,
+  };
+}
+
+export function createProjectService(db: Db) {
+  async function roleOf(projectId: string, userId: string): Promise<ProjectRole | null> {
+    const [m] = await db
+      .select({ role: projectMembers.role })
+      .from(projectMembers)
+      .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.userId, userId)));
+    return (m?.role as ProjectRole | undefined) ?? null;
+  }
+
+  async function get(projectId: string, userId: string): Promise<Project> {
+    const [row] = await db
+      .select({ p: projects, orgName: organisations.name, role: projectMembers.role })
+      .from(projects)
+      .innerJoin(organisations, eq(organisations.id, projects.organisationId))
+      .innerJoin(projectMembers, and(eq(projectMembers.projectId, projects.id), eq(projectMembers.userId, userId)))
+      .where(eq(projects.id, projectId));
+    if (!row) throw notFound('project');
+    return toProject(row.p, row.orgName, row.role as ProjectRole);
+  }
+
+  return {
+    roleOf,
+    get,
+
+    async list(userId: string, archived: boolean): Promise<Project[]> {
+      const rows = await db
+        .select({ p: projects, orgName: organisations.name, role: projectMembers.role })
+        .from(projects)
+        .innerJoin(organisations, eq(organisations.id, projects.organisationId))
+        .innerJoin(projectMembers, and(eq(projectMembers.projectId, projects.id), eq(projectMembers.userId, userId)))
+        .where(archived ? isNotNull(projects.archivedAt) : isNull(projects.archivedAt))
+        .orderBy(asc(projects.name));
+      return rows.map((r) => toProject(r.p, r.orgName, r.role as ProjectRole));
+    },
+
+    /** Creates a project owned by one of the caller's firms; the caller becomes its owner. */
+    async create(userId: string, input: ProjectInput, organisationId?: string): Promise<Project> {
+      const firms = await db
+        .select({ id: organisationMembers.organisationId })
+        .from(organisationMembers)
+        .where(eq(organisationMembers.userId, userId));
+      const orgId = organisationId ?? firms[0]?.id;
+      if (!orgId || !firms.some((f) => f.id === orgId))
+        throw new HttpError(422, 'no_firm', 'a project belongs to a firm: create or join a firm first', {
+          organisationId: 'you are not a member of this firm',
+        });
+      const id = await db.transaction(async (tx) => {
+        const [row] = await tx
+          .insert(projects)
+          .values({ ...input, organisationId: orgId, createdBy: userId })
+          .returning();
+        await tx.insert(projectMembers).values({ projectId: row!.id, userId, role: 'owner' });
+        await recordAudit(tx, { actorId: userId, projectId: row!.id, entity: 'project', entityId: row!.id, action: 'create', after: input });
+        return row!.id;
+      });
+      return get(id, userId);
+    },
+
+    /** Optimistic concurrency: the update applies only to the version the caller read, else 409 with the current record. */
+    async update(projectId: string, userId: string, version: number, changes: ProjectInput): Promise<Project> {
+      const before = await get(projectId, userId);
+      const updated = await db.transaction(async (tx) => {
+        const rows = await tx
+          .update(projects)
+          .set({ ...changes, version: version + 1, updatedAt: new Date() })
+          .where(and(eq(projects.id, projectId), eq(projects.version, version)))
+          .returning({ id: projects.id });
+        if (rows.length === 0) return false;
+        await recordAudit(tx, { actorId: userId, projectId, entity: 'project', entityId: projectId, action: 'update', before, after: changes });
+        return true;
+      });
+      if (!updated)
+        throw new HttpError(409, 'version_conflict', 'someone else saved this project after you opened it', undefined, {
+          current: await get(projectId, userId),
+        });
+      return get(projectId, userId);
+    },
+
+    async setArchived(projectId: string, userId: string, archived: boolean): Promise<Project> {
+      await db.transaction(async (tx) => {
+        await tx
+          .update(projects)
+          .set({ archivedAt: archived ? new Date() : null, updatedAt: new Date() })
+          .where(eq(projects.id, projectId));
+        await recordAudit(tx, { actorId: userId, projectId, entity: 'project', entityId: projectId, action: archived ? 'archive' : 'unarchive' });
+      });
+      return get(projectId, userId);
+    },
+  };
+}

@@ -1,0 +1,46 @@
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { fileURLToPath } from 'node:url';
+import { createApp } from './app';
+import type { Config } from './config';
+import { openDatabase } from './db/client';
+import { demoAccounts, seedDemo } from './db/seed';
+import { startMailCapture } from './mail/capture';
+import { createSmtpMailer } from './mail/mailer';
+
+const clientDir = fileURLToPath(new URL('../dist/client', import.meta.url));
+
+/**
+ * Opens the database (migrating it), starts the local mail capture when no SMTP_URL is set, seeds the demo
+ * on first start, and listens. Returns a stopper that closes everything in order.
+ */
+export async function startServer(config: Config, opts: { dev?: boolean } = {}) {
+  const database = await openDatabase(config);
+  const capture = config.smtpUrl ? null : await startMailCapture(database.db);
+  const mailer = createSmtpMailer(config.smtpUrl ?? capture!.url, config.mailFrom);
+
+  let clientMiddleware: import('express').RequestHandler[] | undefined;
+  let httpServer: Server | undefined;
+  const { createServer } = await import('node:http');
+  httpServer = createServer();
+  let vite: import('vite').ViteDevServer | undefined;
+  if (opts.dev) {
+    const { createServer: createVite } = await import('vite');
+    vite = await createVite({ server: { middlewareMode: true, hmr: { server: httpServer } }, appType: 'spa' });
+    clientMiddleware = [vite.middlewares];
+  }
+  const { app, auth, logger } = createApp({ database, config, mailer, clientDir: opts.dev ? undefined : clientDir, clientMiddleware });
+  const seeded = config.seedDemo ? await seedDemo(database.db, auth) : false;
+
+  httpServer.on('request', app);
+  await new Promise<void>((resolve) => httpServer!.listen(config.port, config.host, resolve));
+  const { port } = httpServer.address() as AddressInfo;
+
+  async function stop() {
+    await new Promise<void>((resolve) => httpServer!.close(() => resolve()));
+    await vite?.close();
+    await capture?.close();
+    await database.close();
+  }
+  return { port, stop, logger, seeded, databaseKind: database.kind, accounts: demoAccounts };
+}

@@ -1,0 +1,70 @@
+import { z } from 'zod';
+
+/**
+ * Roles on a project. One project is shared by people of several firms, each with a role on that project.
+ * `owner` is the project administrator (usually the architect's firm that created it).
+ */
+export const PROJECT_ROLES = ['owner', 'architect', 'envelope_consultant', 'engineer', 'subcontractor', 'viewer'] as const;
+export const projectRoleSchema = z.enum(PROJECT_ROLES);
+export type ProjectRole = z.infer<typeof projectRoleSchema>;
+
+export const PROJECT_ROLE_LABELS: Record<ProjectRole, string> = {
+  owner: 'Owner / admin',
+  architect: 'Architect',
+  envelope_consultant: 'Envelope consultant',
+  engineer: 'Engineer',
+  subcontractor: 'Cladding subcontractor',
+  viewer: 'Viewer',
+};
+
+/** Every action that a route or a button can take on a project. */
+export const PROJECT_ACTIONS = [
+  'project.read',
+  'project.update',
+  'project.archive',
+  'members.read',
+  'members.invite',
+  'members.manage',
+  'audit.read',
+  'assembly.read',
+  'assembly.write',
+  'criteria.write',
+  'checkrun.create',
+  'submittal.create',
+  'submittal.submit',
+  'submittal.review',
+] as const;
+export type ProjectAction = (typeof PROJECT_ACTIONS)[number];
+
+const ALL: readonly ProjectRole[] = PROJECT_ROLES;
+const DESIGNERS: readonly ProjectRole[] = ['owner', 'architect', 'envelope_consultant', 'engineer'];
+const REVIEWERS: readonly ProjectRole[] = ['architect', 'envelope_consultant', 'engineer'];
+
+/**
+ * The one permission table (action × role). The server enforces it on every project route; the client
+ * uses the same table to hide what a role cannot do.
+ */
+export const PERMISSIONS: Record<ProjectAction, readonly ProjectRole[]> = {
+  'project.read': ALL,
+  'project.update': ['owner', 'architect'],
+  'project.archive': ['owner'],
+  'members.read': ALL,
+  'members.invite': ['owner', 'architect'],
+  'members.manage': ['owner'],
+  'audit.read': ['owner', 'architect', 'envelope_consultant', 'engineer'],
+  'assembly.read': ALL,
+  'assembly.write': DESIGNERS,
+  'criteria.write': ['owner', 'architect', 'envelope_consultant'],
+  'checkrun.create': [...DESIGNERS, 'subcontractor'],
+  'submittal.create': ['owner', 'subcontractor'],
+  'submittal.submit': ['owner', 'subcontractor'],
+  'submittal.review': REVIEWERS,
+};
+
+export function can(role: ProjectRole | null | undefined, action: ProjectAction): boolean {
+  return role != null && PERMISSIONS[action].includes(role);
+}
+
+/** Site-wide roles: `admin` runs the installation (mail outbox, every firm); `user` otherwise. */
+export const SITE_ROLES = ['admin', 'user'] as const;
+export type SiteRole = (typeof SITE_ROLES)[number];

@@ -1,0 +1,36 @@
+import { z } from 'zod';
+import { unitSystemSchema } from './common';
+
+export const meSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  email: z.string(),
+  siteRole: z.enum(['admin', 'user']),
+  unitSystem: unitSystemSchema,
+  organisations: z.array(z.object({ id: z.uuid(), name: z.string(), role: z.enum(['admin', 'member']) })),
+});
+export type Me = z.infer<typeof meSchema>;
+
+export const preferencesSchema = z.object({ unitSystem: unitSystemSchema });
+
+export const auditEntrySchema = z.object({
+  id: z.number(),
+  at: z.string(),
+  actorName: z.string().nullable(),
+  entity: z.string(),
+  entityId: z.string(),
+  action: z.string(),
+  before: z.unknown(),
+  after: z.unknown(),
+});
+export type AuditEntry = z.infer<typeof auditEntrySchema>;
+
+export const capturedMailSchema = z.object({
+  id: z.uuid(),
+  receivedAt: z.string(),
+  from: z.string(),
+  to: z.string(),
+  subject: z.string(),
+  text: z.string(),
+});
+export type CapturedMail = z.infer<typeof capturedMailSchema>;

@@ -1,0 +1,68 @@
+import { z } from 'zod';
+import { projectRoleSchema } from '../auth/permissions';
+
+/** ASHRAE 169 climate zone designations: 0–8 with moisture regime A (moist), B (dry), C (marine) where used. */
+export const CLIMATE_ZONES = [
+  '0A', '0B', '1A', '1B', '2A', '2B', '3A', '3B', '3C', '4A', '4B', '4C', '5A', '5B', '5C', '6A', '6B', '7', '8',
+] as const;
+export const climateZoneSchema = z.enum(CLIMATE_ZONES);
+
+const text = (max: number) => z.string().trim().max(max);
+
+/** Site fields of a project, all SI. Ranges are sanity limits for buildings on Earth, not code limits. */
+export const projectSiteSchema = z.object({
+  siteAddress: text(500).default('').describe('Free-text site address.'),
+  climateZone: climateZoneSchema.describe('ASHRAE 169 climate zone designation.'),
+  elevationM: z.number().min(-500).max(6000).default(0).describe('Ground elevation above sea level, m (−500…6000).'),
+  buildingHeightM: z.number().gt(0).max(600).describe('Mean roof height h, m (>0…600).'),
+  planLengthM: z.number().gt(0).max(2000).describe('Plan length (longer side), m (>0…2000).'),
+  planWidthM: z.number().gt(0).max(2000).describe('Plan width (shorter side), m (>0…2000).'),
+  indoorTempC: z.number().min(-40).max(60).describe('Indoor design temperature, °C (−40…60).'),
+  indoorRh: z.number().min(0).max(1).describe('Indoor design relative humidity, fraction 0–1.'),
+  winterDesignTempC: z.number().min(-60).max(40).describe('Winter (heating) design temperature, °C (−60…40).'),
+  summerDesignTempC: z.number().min(-20).max(60).describe('Summer (cooling) design temperature, °C (−20…60).'),
+});
+
+export const projectInputSchema = projectSiteSchema
+  .extend({
+    name: text(200).min(1, 'a project needs a name'),
+    number: text(50).default(''),
+    description: text(4000).default(''),
+  })
+  .refine((p) => p.planWidthM <= p.planLengthM, { path: ['planWidthM'], message: 'plan width must not exceed plan length' })
+  .refine((p) => p.summerDesignTempC > p.winterDesignTempC, {
+    path: ['summerDesignTempC'],
+    message: 'summer design temperature must be above the winter design temperature',
+  });
+export type ProjectInput = z.infer<typeof projectInputSchema>;
+
+/** An update names the version it was based on (optimistic concurrency). */
+export const projectUpdateSchema = z.object({ version: z.number().int().positive(), changes: projectInputSchema });
+export type ProjectUpdate = z.infer<typeof projectUpdateSchema>;
+
+export const projectSchema = z.object({
+  id: z.uuid(),
+  organisationId: z.uuid(),
+  organisationName: z.string(),
+  name: z.string(),
+  number: z.string(),
+  description: z.string(),
+  siteAddress: z.string(),
+  climateZone: climateZoneSchema,
+  elevationM: z.number(),
+  buildingHeightM: z.number(),
+  planLengthM: z.number(),
+  planWidthM: z.number(),
+  indoorTempC: z.number(),
+  indoorRh: z.number(),
+  winterDesignTempC: z.number(),
+  summerDesignTempC: z.number(),
+  archivedAt: z.string().nullable(),
+  version: z.number().int(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  myRole: projectRoleSchema,
+});
+export type Project = z.infer<typeof projectSchema>;
+
+export const projectListQuerySchema = z.object({ archived: z.enum(['true', 'false']).optional() });

@@ -1,0 +1,58 @@
+import { fileURLToPath } from 'node:url';
+import tailwindcss from '@tailwindcss/vite';
+import react from '@vitejs/plugin-react';
+import { defineConfig } from 'vitest/config';
+
+const alias = {
+  '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
+  '@data': fileURLToPath(new URL('./data', import.meta.url)),
+};
+
+export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  resolve: { alias },
+  // convert-units reads `global`; the browser has only globalThis.
+  define: { global: 'globalThis' },
+  build: { outDir: 'dist/client', emptyOutDir: true, chunkSizeWarningLimit: 1500 },
+  test: {
+    projects: [
+      {
+        resolve: { alias },
+        test: {
+          name: 'unit',
+          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'tests/verification/**/*.test.ts', 'tests/architecture/**/*.test.ts'],
+          environment: 'node',
+        },
+      },
+      {
+        plugins: [react()],
+        resolve: { alias },
+        define: { global: 'globalThis' },
+        test: { name: 'client', include: ['src/**/*.test.tsx', 'src/**/*.test.ts'], environment: 'jsdom' },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: 'api',
+          include: ['tests/api/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/setup/postgres.ts'],
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        resolve: { alias },
+        test: {
+          name: 'e2e',
+          include: ['tests/e2e/**/*.test.ts'],
+          environment: 'node',
+          globalSetup: ['tests/setup/build-client.ts'],
+          testTimeout: 90_000,
+          hookTimeout: 120_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});

@@ -32,7 +32,8 @@ function originCheck(trusted: string[]): RequestHandler {
   return (req, _res, next) => {
     if (req.method === 'GET' || req.method === 'HEAD' || req.method === 'OPTIONS') return next();
     const origin = req.get('origin');
-    if (origin && !trusted.includes(origin)) return next(new HttpError(403, 'bad_origin', 'cross-site request refused'));
+    if (origin && !trusted.includes(origin))
+      return next(new HttpError(403, 'bad_origin', 'cross-site request refused'));
     next();
   };
 }
@@ -48,22 +49,21 @@ export function createApp({ database, config, mailer, clientDir, clientMiddlewar
   app.use(
     helmet({
       // Vite's dev middleware injects inline scripts for hot reload; the CSP applies to the built client.
-      contentSecurityPolicy:
-        clientMiddleware
-          ? false
-          : {
-              directives: {
-                defaultSrc: ["'self'"],
-                scriptSrc: ["'self'"],
-                styleSrc: ["'self'", "'unsafe-inline'"],
-                imgSrc: ["'self'", 'data:', 'blob:'],
-                fontSrc: ["'self'", 'data:'],
-                connectSrc: ["'self'"],
-                objectSrc: ["'none'"],
-                frameAncestors: ["'none'"],
-                upgradeInsecureRequests: null,
-              },
+      contentSecurityPolicy: clientMiddleware
+        ? false
+        : {
+            directives: {
+              defaultSrc: ["'self'"],
+              scriptSrc: ["'self'"],
+              styleSrc: ["'self'", "'unsafe-inline'"],
+              imgSrc: ["'self'", 'data:', 'blob:'],
+              fontSrc: ["'self'", 'data:'],
+              connectSrc: ["'self'"],
+              objectSrc: ["'none'"],
+              frameAncestors: ["'none'"],
+              upgradeInsecureRequests: null,
             },
+          },
     }),
   );
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
@@ -75,9 +75,16 @@ export function createApp({ database, config, mailer, clientDir, clientMiddlewar
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: (_req, res) =>
-      res.status(429).json({ error: { code: 'rate_limited', message: 'too many attempts; wait a minute and try again' } }),
+      res
+        .status(429)
+        .json({ error: { code: 'rate_limited', message: 'too many attempts; wait a minute and try again' } }),
   });
-  for (const p of ['/api/auth/sign-in/*splat', '/api/auth/sign-up/*splat', '/api/auth/request-password-reset', '/api/auth/reset-password'])
+  for (const p of [
+    '/api/auth/sign-in/*splat',
+    '/api/auth/sign-up/*splat',
+    '/api/auth/request-password-reset',
+    '/api/auth/reset-password',
+  ])
     app.use(p, authLimiter);
   // better-auth must see the raw body: mount it before express.json().
   app.all('/api/auth/*splat', toNodeHandler(auth));
@@ -89,7 +96,11 @@ export function createApp({ database, config, mailer, clientDir, clientMiddlewar
   app.get('/api/openapi.json', (_req, res) => {
     res.json(openapi);
   });
-  app.use('/api/docs', swaggerUi.serve, swaggerUi.setup(openapi, { customSiteTitle: 'Skinwright API reference' }));
+  app.use(
+    '/api/docs',
+    swaggerUi.serve,
+    swaggerUi.setup(openapi, { customSiteTitle: 'Skinwright API reference' }),
+  );
 
   const api = express.Router();
   mountRoutes(api, apiRoutes, services);

@@ -40,7 +40,8 @@ const DEV_SECRET = 'skinwright-development-secret-not-for-production-use';
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Partial<Config> = {}): Config {
   const e = envSchema.parse(env);
-  if (e.NODE_ENV === 'production' && !e.BETTER_AUTH_SECRET) throw new Error('BETTER_AUTH_SECRET must be set in production');
+  if (e.NODE_ENV === 'production' && !e.BETTER_AUTH_SECRET)
+    throw new Error('BETTER_AUTH_SECRET must be set in production');
   return {
     env: e.NODE_ENV,
     port: e.PORT,

@@ -26,10 +26,19 @@ export async function startServer(config: Config, opts: { dev?: boolean } = {}) 
   let vite: import('vite').ViteDevServer | undefined;
   if (opts.dev) {
     const { createServer: createVite } = await import('vite');
-    vite = await createVite({ server: { middlewareMode: true, hmr: { server: httpServer } }, appType: 'spa' });
+    vite = await createVite({
+      server: { middlewareMode: true, hmr: { server: httpServer } },
+      appType: 'spa',
+    });
     clientMiddleware = [vite.middlewares];
   }
-  const { app, auth, logger } = createApp({ database, config, mailer, clientDir: opts.dev ? undefined : clientDir, clientMiddleware });
+  const { app, auth, logger } = createApp({
+    database,
+    config,
+    mailer,
+    clientDir: opts.dev ? undefined : clientDir,
+    clientMiddleware,
+  });
   const seeded = config.seedDemo ? await seedDemo(database.db, auth) : false;
 
   httpServer.on('request', app);

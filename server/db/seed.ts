@@ -1,12 +1,12 @@
-import { eq } from 'drizzle-orm';
-import { z } from 'zod';
 import { projectRoleSchema } from '@shared/auth/permissions';
 import { projectInputSchema } from '@shared/schemas/project';
+import { eq } from 'drizzle-orm';
+import { z } from 'zod';
 import demo from '../../data/seed/demo.json' with { type: 'json' };
 import type { Auth } from '../auth/auth';
+import { createProjectService } from '../services/projects';
 import type { Db } from './client';
 import { organisationMembers, organisations, projectMembers, user } from './schema';
-import { createProjectService } from '../services/projects';
 
 const demoSchema = z.object({
   password: z.string().min(10),
@@ -24,7 +24,10 @@ const demoSchema = z.object({
   ),
   projects: z.array(
     projectInputSchema.and(
-      z.object({ owner: z.email(), members: z.array(z.object({ email: z.email(), role: projectRoleSchema })) }),
+      z.object({
+        owner: z.email(),
+        members: z.array(z.object({ email: z.email(), role: projectRoleSchema })),
+      }),
     ),
   ),
 });
@@ -53,16 +56,25 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
   }
   const userIds = new Map<string, string>();
   for (const u of demoScenario.users) {
-    const { user: created } = await auth.api.signUpEmail({ body: { name: u.name, email: u.email, password: demoScenario.password } });
+    const { user: created } = await auth.api.signUpEmail({
+      body: { name: u.name, email: u.email, password: demoScenario.password },
+    });
     userIds.set(u.email, created.id);
-    await db.update(user).set({ role: u.siteRole ?? 'user', emailVerified: true }).where(eq(user.id, created.id));
-    await db.insert(organisationMembers).values({ organisationId: firmIds.get(u.firm)!, userId: created.id, role: u.firmRole });
+    await db
+      .update(user)
+      .set({ role: u.siteRole ?? 'user', emailVerified: true })
+      .where(eq(user.id, created.id));
+    await db
+      .insert(organisationMembers)
+      .values({ organisationId: firmIds.get(u.firm)!, userId: created.id, role: u.firmRole });
   }
   const projects = createProjectService(db);
   for (const { owner, members, ...input } of demoScenario.projects) {
     const created = await projects.create(userIds.get(owner)!, input);
     for (const m of members)
-      await db.insert(projectMembers).values({ projectId: created.id, userId: userIds.get(m.email)!, role: m.role });
+      await db
+        .insert(projectMembers)
+        .values({ projectId: created.id, userId: userIds.get(m.email)!, role: m.role });
   }
   return true;
 }

@@ -1,7 +1,7 @@
-import type { ErrorRequestHandler, RequestHandler } from 'express';
-import { ZodError } from 'zod';
 import { CalcInputError } from '@shared/calc/errors';
 import type { ApiError } from '@shared/schemas/common';
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ZodError } from 'zod';
 
 /** An error with an HTTP status and a stable code; everything the API refuses is one of these. */
 export class HttpError extends Error {
@@ -35,21 +35,39 @@ export function toApiError(err: unknown): { status: number; body: ApiError & Rec
   if (err instanceof HttpError)
     return {
       status: err.status,
-      body: { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) }, ...err.extra },
+      body: {
+        error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) },
+        ...err.extra,
+      },
     };
   if (err instanceof ZodError)
-    return { status: 400, body: { error: { code: 'validation_failed', message: 'the request is not valid', fields: zodFields(err) } } };
+    return {
+      status: 400,
+      body: {
+        error: { code: 'validation_failed', message: 'the request is not valid', fields: zodFields(err) },
+      },
+    };
   if (err instanceof CalcInputError)
     return {
       status: 422,
       body: { error: { code: 'invalid_input', message: err.message, fields: { [err.field]: err.reason } } },
     };
   const e = err as { type?: string; status?: number; code?: string };
-  if (e?.type === 'entity.parse.failed') return { status: 400, body: { error: { code: 'invalid_json', message: 'the body is not valid JSON' } } };
-  if (e?.type === 'entity.too.large') return { status: 413, body: { error: { code: 'too_large', message: 'the body is too large' } } };
+  if (e?.type === 'entity.parse.failed')
+    return { status: 400, body: { error: { code: 'invalid_json', message: 'the body is not valid JSON' } } };
+  if (e?.type === 'entity.too.large')
+    return { status: 413, body: { error: { code: 'too_large', message: 'the body is too large' } } };
   if (e?.status && e.status >= 400 && e.status < 500)
-    return { status: e.status, body: { error: { code: 'bad_request', message: 'the request could not be processed' } } };
-  return { status: 500, body: { error: { code: 'internal_error', message: 'something went wrong on our side; it has been logged' } } };
+    return {
+      status: e.status,
+      body: { error: { code: 'bad_request', message: 'the request could not be processed' } },
+    };
+  return {
+    status: 500,
+    body: {
+      error: { code: 'internal_error', message: 'something went wrong on our side; it has been logged' },
+    },
+  };
 }
 
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
@@ -60,5 +78,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
 };
 
 export const apiNotFound: RequestHandler = (req, res) => {
-  res.status(404).json({ error: { code: 'not_found', message: `no API route ${req.method} ${req.originalUrl.split('?')[0]}` } });
+  res.status(404).json({
+    error: { code: 'not_found', message: `no API route ${req.method} ${req.originalUrl.split('?')[0]}` },
+  });
 };

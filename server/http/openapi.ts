@@ -1,5 +1,5 @@
-import { z } from 'zod';
 import { ENGINE_VERSION } from '@shared/calc/trace';
+import { z } from 'zod';
 import type { AnyRoute } from './route';
 
 const toSchema = (schema: z.ZodType, io: 'input' | 'output') =>
@@ -27,9 +27,17 @@ export function buildOpenApi(routes: AnyRoute[]) {
       if (!schema) continue;
       const js = toSchema(schema, 'input') as { properties?: Record<string, unknown>; required?: string[] };
       for (const [name, s] of Object.entries(js.properties ?? {}))
-        parameters.push({ name, in: where, required: where === 'path' || (js.required ?? []).includes(name), schema: s });
+        parameters.push({
+          name,
+          in: where,
+          required: where === 'path' || (js.required ?? []).includes(name),
+          schema: s,
+        });
     }
-    const access = r.access.kind === 'project' ? `${accessText.project} \`${r.access.action}\`.` : accessText[r.access.kind];
+    const access =
+      r.access.kind === 'project'
+        ? `${accessText.project} \`${r.access.action}\`.`
+        : accessText[r.access.kind];
     const op: Record<string, unknown> = {
       tags: [r.tag],
       summary: r.summary,
@@ -40,7 +48,12 @@ export function buildOpenApi(routes: AnyRoute[]) {
         Object.entries(r.responses).map(([status, resp]) => [
           status,
           resp.schema
-            ? { description: resp.description, content: { [resp.contentType ?? 'application/json']: { schema: toSchema(resp.schema, 'output') } } }
+            ? {
+                description: resp.description,
+                content: {
+                  [resp.contentType ?? 'application/json']: { schema: toSchema(resp.schema, 'output') },
+                },
+              }
             : { description: resp.description },
         ]),
       ),
@@ -48,7 +61,12 @@ export function buildOpenApi(routes: AnyRoute[]) {
     if (r.body)
       op.requestBody = {
         required: true,
-        content: { 'application/json': { schema: toSchema(r.body, 'input'), ...(r.example ? { example: r.example } : {}) } },
+        content: {
+          'application/json': {
+            schema: toSchema(r.body, 'input'),
+            ...(r.example ? { example: r.example } : {}),
+          },
+        },
       };
     paths[`/api${openApiPath(r.path)}`] ??= {};
     paths[`/api${openApiPath(r.path)}`]![r.method] = op;

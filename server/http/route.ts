@@ -1,6 +1,6 @@
-import type { Request, Response, Router } from 'express';
-import { z } from 'zod';
 import { can, type ProjectAction, type ProjectRole } from '@shared/auth/permissions';
+import type { Request, Response, Router } from 'express';
+import type { z } from 'zod';
 import type { Services } from '../services';
 import { forbidden, HttpError, notFound, unauthorised, zodFields } from './errors';
 
@@ -16,7 +16,11 @@ export type Access =
   | { kind: 'public' }
   | { kind: 'user' }
   | { kind: 'siteAdmin' }
-  | { kind: 'project'; action: ProjectAction; projectId?: (ctx: { params: Record<string, string>; services: Services }) => Promise<string | null> };
+  | {
+      kind: 'project';
+      action: ProjectAction;
+      projectId?: (ctx: { params: Record<string, string>; services: Services }) => Promise<string | null>;
+    };
 
 export interface SessionUser {
   id: string;

@@ -17,7 +17,9 @@ export async function startMailCapture(db: Db, port = 0): Promise<{ url: string;
     onData(stream, _session, callback) {
       simpleParser(stream)
         .then(async (parsed) => {
-          const to = Array.isArray(parsed.to) ? parsed.to.map((a) => a.text).join(', ') : (parsed.to?.text ?? '');
+          const to = Array.isArray(parsed.to)
+            ? parsed.to.map((a) => a.text).join(', ')
+            : (parsed.to?.text ?? '');
           await db.insert(capturedMail).values({
             from: parsed.from?.text ?? '',
             to,

@@ -19,7 +19,9 @@ export function createSmtpMailer(smtpUrl: string, from: string): Mailer {
     port: Number(url.port || 25),
     secure: url.protocol === 'smtps:',
     ignoreTLS: url.searchParams.get('ignoreTLS') === 'true',
-    auth: url.username ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) } : undefined,
+    auth: url.username
+      ? { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) }
+      : undefined,
   });
   return {
     async send(mail) {

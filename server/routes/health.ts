@@ -1,5 +1,5 @@
-import { z } from 'zod';
 import { ENGINE_VERSION } from '@shared/calc/trace';
+import { z } from 'zod';
 import { defineRoute } from '../http/route';
 
 export const healthRoutes = [
@@ -12,9 +12,17 @@ export const healthRoutes = [
     responses: {
       200: {
         description: 'Healthy',
-        schema: z.object({ status: z.literal('ok'), engineVersion: z.string(), database: z.enum(['pglite', 'postgres']) }),
+        schema: z.object({
+          status: z.literal('ok'),
+          engineVersion: z.string(),
+          database: z.enum(['pglite', 'postgres']),
+        }),
       },
     },
-    handler: async ({ services }) => ({ status: 'ok' as const, engineVersion: ENGINE_VERSION, database: services.databaseKind }),
+    handler: async ({ services }) => ({
+      status: 'ok' as const,
+      engineVersion: ENGINE_VERSION,
+      database: services.databaseKind,
+    }),
   }),
 ];

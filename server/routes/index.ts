@@ -1,7 +1,7 @@
 import type { AnyRoute } from '../http/route';
 import { healthRoutes } from './health';
-import { memberRoutes } from './members';
 import { meRoutes } from './me';
+import { memberRoutes } from './members';
 import { projectRoutes } from './projects';
 
 /** Every API route, in one registry: it mounts the routes, generates the OpenAPI document and drives the permission tests. */

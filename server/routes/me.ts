@@ -1,6 +1,6 @@
-import { z } from 'zod';
 import { apiErrorSchema } from '@shared/schemas/common';
 import { capturedMailSchema, meSchema, preferencesSchema } from '@shared/schemas/me';
+import { z } from 'zod';
 import { defineRoute } from '../http/route';
 
 const unauth = { 401: { description: 'Not signed in', schema: apiErrorSchema } };
@@ -42,7 +42,10 @@ export const meRoutes = [
     tag: 'Administration',
     access: { kind: 'siteAdmin' },
     responses: {
-      200: { description: 'Captured messages, newest first', schema: z.object({ messages: z.array(capturedMailSchema) }) },
+      200: {
+        description: 'Captured messages, newest first',
+        schema: z.object({ messages: z.array(capturedMailSchema) }),
+      },
       ...unauth,
       403: { description: 'Not a site administrator', schema: apiErrorSchema },
     },

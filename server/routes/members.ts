@@ -1,4 +1,3 @@
-import { z } from 'zod';
 import { apiErrorSchema, uuidParam } from '@shared/schemas/common';
 import {
   invitationInputSchema,
@@ -8,6 +7,7 @@ import {
   memberRoleUpdateSchema,
   memberSchema,
 } from '@shared/schemas/members';
+import { z } from 'zod';
 import { defineRoute } from '../http/route';
 
 const errors = {
@@ -26,7 +26,10 @@ export const memberRoutes = [
     access: { kind: 'project', action: 'members.read' },
     params: uuidParam,
     responses: {
-      200: { description: 'Members', schema: z.object({ members: z.array(memberSchema), invitations: z.array(invitationSchema) }) },
+      200: {
+        description: 'Members',
+        schema: z.object({ members: z.array(memberSchema), invitations: z.array(invitationSchema) }),
+      },
       ...errors,
     },
     handler: ({ project, services }) => services.members.list(project!.id),
@@ -41,7 +44,10 @@ export const memberRoutes = [
     body: invitationInputSchema,
     example: { email: 'engineer@example.com', role: 'engineer' },
     responses: {
-      201: { description: 'The invitation (an e-mail with the accept link was sent)', schema: invitationSchema },
+      201: {
+        description: 'The invitation (an e-mail with the accept link was sent)',
+        schema: invitationSchema,
+      },
       ...errors,
       409: { description: 'Already a member', schema: apiErrorSchema },
     },
@@ -60,7 +66,8 @@ export const memberRoutes = [
       ...errors,
       409: { description: 'Would leave the project without an owner', schema: apiErrorSchema },
     },
-    handler: ({ user, project, params, body, services }) => services.members.setRole(project!.id, params.memberId, body.role, user!.id),
+    handler: ({ user, project, params, body, services }) =>
+      services.members.setRole(project!.id, params.memberId, body.role, user!.id),
   }),
   defineRoute({
     method: 'delete',
@@ -69,7 +76,11 @@ export const memberRoutes = [
     tag: 'Members',
     access: { kind: 'project', action: 'members.manage' },
     params: memberParams,
-    responses: { 204: { description: 'Removed' }, ...errors, 409: { description: 'Last owner', schema: apiErrorSchema } },
+    responses: {
+      204: { description: 'Removed' },
+      ...errors,
+      409: { description: 'Last owner', schema: apiErrorSchema },
+    },
     handler: async ({ user, project, params, services }) => {
       await services.members.remove(project!.id, params.memberId, user!.id);
       return undefined;
@@ -82,7 +93,10 @@ export const memberRoutes = [
     tag: 'Members',
     access: { kind: 'public' },
     params: invitationTokenParam,
-    responses: { 200: { description: 'Invitation preview', schema: invitationPreviewSchema }, 404: errors[404] },
+    responses: {
+      200: { description: 'Invitation preview', schema: invitationPreviewSchema },
+      404: errors[404],
+    },
     handler: ({ params, services }) => services.members.preview(params.token),
   }),
   defineRoute({

@@ -1,7 +1,12 @@
-import { z } from 'zod';
 import { apiErrorSchema, uuidParam } from '@shared/schemas/common';
 import { auditEntrySchema } from '@shared/schemas/me';
-import { projectInputSchema, projectListQuerySchema, projectSchema, projectUpdateSchema } from '@shared/schemas/project';
+import {
+  projectInputSchema,
+  projectListQuerySchema,
+  projectSchema,
+  projectUpdateSchema,
+} from '@shared/schemas/project';
+import { z } from 'zod';
 import { defineRoute } from '../http/route';
 
 const errors = {
@@ -34,8 +39,13 @@ export const projectRoutes = [
     tag: 'Projects',
     access: { kind: 'user' },
     query: projectListQuerySchema,
-    responses: { 200: { description: 'Projects', schema: z.object({ projects: z.array(projectSchema) }) }, 401: errors[401] },
-    handler: async ({ user, query, services }) => ({ projects: await services.projects.list(user!.id, query.archived === 'true') }),
+    responses: {
+      200: { description: 'Projects', schema: z.object({ projects: z.array(projectSchema) }) },
+      401: errors[401],
+    },
+    handler: async ({ user, query, services }) => ({
+      projects: await services.projects.list(user!.id, query.archived === 'true'),
+    }),
   }),
   defineRoute({
     method: 'post',
@@ -78,7 +88,8 @@ export const projectRoutes = [
       ...errors,
       409: { description: 'Someone saved first; `current` holds their version', schema: apiErrorSchema },
     },
-    handler: ({ user, project, body, services }) => services.projects.update(project!.id, user!.id, body.version, body.changes),
+    handler: ({ user, project, body, services }) =>
+      services.projects.update(project!.id, user!.id, body.version, body.changes),
   }),
   defineRoute({
     method: 'post',
@@ -107,7 +118,13 @@ export const projectRoutes = [
     tag: 'Projects',
     access: { kind: 'project', action: 'audit.read' },
     params: uuidParam,
-    responses: { 200: { description: 'Audit entries, newest first', schema: z.object({ entries: z.array(auditEntrySchema) }) }, ...errors },
+    responses: {
+      200: {
+        description: 'Audit entries, newest first',
+        schema: z.object({ entries: z.array(auditEntrySchema) }),
+      },
+      ...errors,
+    },
     handler: async ({ project, services }) => ({ entries: await services.audit.forProject(project!.id) }),
   }),
 ];

@@ -1,5 +1,5 @@
-import { desc, eq } from 'drizzle-orm';
 import type { AuditEntry } from '@shared/schemas/me';
+import { desc, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { auditLog, user } from '../db/schema';
 

@@ -1,5 +1,5 @@
-import { desc, eq } from 'drizzle-orm';
 import type { CapturedMail, Me } from '@shared/schemas/me';
+import { desc, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { capturedMail, organisationMembers, organisations, user } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
@@ -26,7 +26,11 @@ export function createMeService(db: Db) {
       email: u.email,
       siteRole: u.role === 'admin' ? 'admin' : 'user',
       unitSystem: u.unitSystem === 'IP' ? 'IP' : 'SI',
-      organisations: orgs.map((o) => ({ id: o.id, name: o.name, role: o.role === 'admin' ? 'admin' : 'member' })),
+      organisations: orgs.map((o) => ({
+        id: o.id,
+        name: o.name,
+        role: o.role === 'admin' ? 'admin' : 'member',
+      })),
     };
   }
 
@@ -40,16 +44,28 @@ export function createMeService(db: Db) {
     async createOrganisation(userId: string, name: string): Promise<Me> {
       const existing = await me(userId);
       if (existing.organisations.some((o) => o.name.toLowerCase() === name.toLowerCase()))
-        throw new HttpError(409, 'duplicate_firm', 'you already belong to a firm of that name', { name: 'already exists' });
+        throw new HttpError(409, 'duplicate_firm', 'you already belong to a firm of that name', {
+          name: 'already exists',
+        });
       await db.transaction(async (tx) => {
-        const [org] = await tx.insert(organisations).values({ name, slug: slugify(name) }).returning();
+        const [org] = await tx
+          .insert(organisations)
+          .values({ name, slug: slugify(name) })
+          .returning();
         await tx.insert(organisationMembers).values({ organisationId: org!.id, userId, role: 'admin' });
       });
       return me(userId);
     },
     async capturedMail(limit = 200): Promise<CapturedMail[]> {
       const rows = await db.select().from(capturedMail).orderBy(desc(capturedMail.receivedAt)).limit(limit);
-      return rows.map((r) => ({ id: r.id, receivedAt: r.receivedAt.toISOString(), from: r.from, to: r.to, subject: r.subject, text: r.text }));
+      return rows.map((r) => ({
+        id: r.id,
+        receivedAt: r.receivedAt.toISOString(),
+        from: r.from,
+        to: r.to,
+        subject: r.subject,
+        text: r.text,
+      }));
     },
   };
 }

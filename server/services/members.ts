@@ -1,10 +1,17 @@
 import { createHash, randomBytes } from 'node:crypto';
-import { and, asc, eq, ne } from 'drizzle-orm';
 import { PROJECT_ROLE_LABELS, type ProjectRole } from '@shared/auth/permissions';
 import type { Invitation, InvitationInput, InvitationPreview, Member } from '@shared/schemas/members';
+import { and, asc, eq, ne } from 'drizzle-orm';
 import type { Config } from '../config';
 import type { Db } from '../db/client';
-import { invitations, organisationMembers, organisations, projectMembers, projects, user } from '../db/schema';
+import {
+  invitations,
+  organisationMembers,
+  organisations,
+  projectMembers,
+  projects,
+  user,
+} from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
 import { recordAudit } from './audit';
@@ -68,21 +75,37 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
     const others = await db
       .select({ id: projectMembers.id })
       .from(projectMembers)
-      .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.role, 'owner'), ne(projectMembers.id, memberId)));
+      .where(
+        and(
+          eq(projectMembers.projectId, projectId),
+          eq(projectMembers.role, 'owner'),
+          ne(projectMembers.id, memberId),
+        ),
+      );
     if (others.length === 0) throw new HttpError(409, 'last_owner', 'a project must keep at least one owner');
   }
 
   return {
     list,
 
-    async invite(projectId: string, inviter: { id: string; name: string }, input: InvitationInput): Promise<Invitation> {
+    async invite(
+      projectId: string,
+      inviter: { id: string; name: string },
+      input: InvitationInput,
+    ): Promise<Invitation> {
       const [existing] = await db
         .select({ id: projectMembers.id })
         .from(projectMembers)
         .innerJoin(user, eq(user.id, projectMembers.userId))
         .where(and(eq(projectMembers.projectId, projectId), eq(user.email, input.email)));
-      if (existing) throw new HttpError(409, 'already_member', `${input.email} is already a member`, { email: 'already a member of this project' });
-      const [project] = await db.select({ name: projects.name }).from(projects).where(eq(projects.id, projectId));
+      if (existing)
+        throw new HttpError(409, 'already_member', `${input.email} is already a member`, {
+          email: 'already a member of this project',
+        });
+      const [project] = await db
+        .select({ name: projects.name })
+        .from(projects)
+        .where(eq(projects.id, projectId));
       const token = randomBytes(24).toString('base64url');
       const row = await db.transaction(async (tx) => {
         const [inv] = await tx
@@ -96,7 +119,14 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
             expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
           })
           .returning();
-        await recordAudit(tx, { actorId: inviter.id, projectId, entity: 'invitation', entityId: inv!.id, action: 'create', after: input });
+        await recordAudit(tx, {
+          actorId: inviter.id,
+          projectId,
+          entity: 'invitation',
+          entityId: inv!.id,
+          action: 'create',
+          after: input,
+        });
         return inv!;
       });
       const link = `${config.baseUrl}/invite/${token}`;
@@ -127,19 +157,41 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
     },
 
     async accept(token: string, invitee: { id: string; email: string }): Promise<{ projectId: string }> {
-      const [inv] = await db.select().from(invitations).where(eq(invitations.tokenHash, hashToken(token)));
+      const [inv] = await db
+        .select()
+        .from(invitations)
+        .where(eq(invitations.tokenHash, hashToken(token)));
       if (!inv) throw notFound('invitation');
-      if (inv.acceptedAt) throw new HttpError(409, 'already_accepted', 'this invitation has already been accepted');
-      if (inv.expiresAt.getTime() < Date.now()) throw new HttpError(410, 'expired', 'this invitation has expired; ask for a new one');
+      if (inv.acceptedAt)
+        throw new HttpError(409, 'already_accepted', 'this invitation has already been accepted');
+      if (inv.expiresAt.getTime() < Date.now())
+        throw new HttpError(410, 'expired', 'this invitation has expired; ask for a new one');
       if (inv.email.toLowerCase() !== invitee.email.toLowerCase())
-        throw new HttpError(403, 'wrong_account', `this invitation is for ${inv.email}; sign in with that address`);
+        throw new HttpError(
+          403,
+          'wrong_account',
+          `this invitation is for ${inv.email}; sign in with that address`,
+        );
       await db.transaction(async (tx) => {
         await tx
           .insert(projectMembers)
           .values({ projectId: inv.projectId, userId: invitee.id, role: inv.role })
-          .onConflictDoUpdate({ target: [projectMembers.projectId, projectMembers.userId], set: { role: inv.role } });
-        await tx.update(invitations).set({ acceptedAt: new Date(), acceptedBy: invitee.id }).where(eq(invitations.id, inv.id));
-        await recordAudit(tx, { actorId: invitee.id, projectId: inv.projectId, entity: 'member', entityId: invitee.id, action: 'join', after: { role: inv.role } });
+          .onConflictDoUpdate({
+            target: [projectMembers.projectId, projectMembers.userId],
+            set: { role: inv.role },
+          });
+        await tx
+          .update(invitations)
+          .set({ acceptedAt: new Date(), acceptedBy: invitee.id })
+          .where(eq(invitations.id, inv.id));
+        await recordAudit(tx, {
+          actorId: invitee.id,
+          projectId: inv.projectId,
+          entity: 'member',
+          entityId: invitee.id,
+          action: 'join',
+          after: { role: inv.role },
+        });
       });
       return { projectId: inv.projectId };
     },
@@ -149,7 +201,15 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
       if (m.role === 'owner' && role !== 'owner') await assertNotLastOwner(projectId, memberId);
       await db.transaction(async (tx) => {
         await tx.update(projectMembers).set({ role }).where(eq(projectMembers.id, memberId));
-        await recordAudit(tx, { actorId, projectId, entity: 'member', entityId: m.userId, action: 'change_role', before: { role: m.role }, after: { role } });
+        await recordAudit(tx, {
+          actorId,
+          projectId,
+          entity: 'member',
+          entityId: m.userId,
+          action: 'change_role',
+          before: { role: m.role },
+          after: { role },
+        });
       });
       const { members } = await list(projectId);
       return members.find((x) => x.id === memberId)!;
@@ -160,7 +220,14 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
       if (m.role === 'owner') await assertNotLastOwner(projectId, memberId);
       await db.transaction(async (tx) => {
         await tx.delete(projectMembers).where(eq(projectMembers.id, memberId));
-        await recordAudit(tx, { actorId, projectId, entity: 'member', entityId: m.userId, action: 'remove', before: { role: m.role } });
+        await recordAudit(tx, {
+          actorId,
+          projectId,
+          entity: 'member',
+          entityId: m.userId,
+          action: 'remove',
+          before: { role: m.role },
+        });
       });
     },
   };

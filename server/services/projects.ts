@@ -1,6 +1,6 @@
-import { and, asc, eq, isNotNull, isNull } from 'drizzle-orm';
 import type { ProjectRole } from '@shared/auth/permissions';
 import type { Project, ProjectInput } from '@shared/schemas/project';
+import { and, asc, eq, isNotNull, isNull } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { organisationMembers, organisations, projectMembers, projects } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
@@ -48,7 +48,10 @@ export function createProjectService(db: Db) {
       .select({ p: projects, orgName: organisations.name, role: projectMembers.role })
       .from(projects)
       .innerJoin(organisations, eq(organisations.id, projects.organisationId))
-      .innerJoin(projectMembers, and(eq(projectMembers.projectId, projects.id), eq(projectMembers.userId, userId)))
+      .innerJoin(
+        projectMembers,
+        and(eq(projectMembers.projectId, projects.id), eq(projectMembers.userId, userId)),
+      )
       .where(eq(projects.id, projectId));
     if (!row) throw notFound('project');
     return toProject(row.p, row.orgName, row.role as ProjectRole);
@@ -63,7 +66,10 @@ export function createProjectService(db: Db) {
         .select({ p: projects, orgName: organisations.name, role: projectMembers.role })
         .from(projects)
         .innerJoin(organisations, eq(organisations.id, projects.organisationId))
-        .innerJoin(projectMembers, and(eq(projectMembers.projectId, projects.id), eq(projectMembers.userId, userId)))
+        .innerJoin(
+          projectMembers,
+          and(eq(projectMembers.projectId, projects.id), eq(projectMembers.userId, userId)),
+        )
         .where(archived ? isNotNull(projects.archivedAt) : isNull(projects.archivedAt))
         .orderBy(asc(projects.name));
       return rows.map((r) => toProject(r.p, r.orgName, r.role as ProjectRole));
@@ -86,14 +92,26 @@ export function createProjectService(db: Db) {
           .values({ ...input, organisationId: orgId, createdBy: userId })
           .returning();
         await tx.insert(projectMembers).values({ projectId: row!.id, userId, role: 'owner' });
-        await recordAudit(tx, { actorId: userId, projectId: row!.id, entity: 'project', entityId: row!.id, action: 'create', after: input });
+        await recordAudit(tx, {
+          actorId: userId,
+          projectId: row!.id,
+          entity: 'project',
+          entityId: row!.id,
+          action: 'create',
+          after: input,
+        });
         return row!.id;
       });
       return get(id, userId);
     },
 
     /** Optimistic concurrency: the update applies only to the version the caller read, else 409 with the current record. */
-    async update(projectId: string, userId: string, version: number, changes: ProjectInput): Promise<Project> {
+    async update(
+      projectId: string,
+      userId: string,
+      version: number,
+      changes: ProjectInput,
+    ): Promise<Project> {
       const before = await get(projectId, userId);
       const updated = await db.transaction(async (tx) => {
         const rows = await tx
@@ -102,13 +120,27 @@ export function createProjectService(db: Db) {
           .where(and(eq(projects.id, projectId), eq(projects.version, version)))
           .returning({ id: projects.id });
         if (rows.length === 0) return false;
-        await recordAudit(tx, { actorId: userId, projectId, entity: 'project', entityId: projectId, action: 'update', before, after: changes });
+        await recordAudit(tx, {
+          actorId: userId,
+          projectId,
+          entity: 'project',
+          entityId: projectId,
+          action: 'update',
+          before,
+          after: changes,
+        });
         return true;
       });
       if (!updated)
-        throw new HttpError(409, 'version_conflict', 'someone else saved this project after you opened it', undefined, {
-          current: await get(projectId, userId),
-        });
+        throw new HttpError(
+          409,
+          'version_conflict',
+          'someone else saved this project after you opened it',
+          undefined,
+          {
+            current: await get(projectId, userId),
+          },
+        );
       return get(projectId, userId);
     },
 
@@ -118,7 +150,13 @@ export function createProjectService(db: Db) {
           .update(projects)
           .set({ archivedAt: archived ? new Date() : null, updatedAt: new Date() })
           .where(eq(projects.id, projectId));
-        await recordAudit(tx, { actorId: userId, projectId, entity: 'project', entityId: projectId, action: archived ? 'archive' : 'unarchive' });
+        await recordAudit(tx, {
+          actorId: userId,
+          projectId,
+          entity: 'project',
+          entityId: projectId,
+          action: archived ? 'archive' : 'unarchive',
+        });
       });
       return get(projectId, userId);
     },

@@ -89,7 +89,10 @@ export const projectMembers = pgTable(
     role: text('role').notNull(),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex('project_members_unique').on(t.projectId, t.userId), index('project_members_user_idx').on(t.userId)],
+  (t) => [
+    uniqueIndex('project_members_unique').on(t.projectId, t.userId),
+    index('project_members_user_idx').on(t.userId),
+  ],
 );
 
 export const invitations = pgTable(

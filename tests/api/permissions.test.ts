@@ -1,0 +1,144 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { apiRoutes } from '../../server/routes';
+import { createTestApp, demoEmail, type TestApp, testDatabases } from '../setup/app';
+
+/**
+ * The permission matrix, written out by hand and independent of the table in shared/auth: for every route
+ * in the registry, who may call it. A route added to the registry without an entry here fails this test.
+ * `public` = anyone; `user` = any signed-in user; `siteAdmin`; or the list of project roles allowed.
+ */
+const PROJECT_ROLES = [
+  'owner',
+  'architect',
+  'envelope_consultant',
+  'engineer',
+  'subcontractor',
+  'viewer',
+] as const;
+type Role = (typeof PROJECT_ROLES)[number];
+const ALL: Role[] = [...PROJECT_ROLES];
+const EXPECTED: Record<string, 'public' | 'user' | 'siteAdmin' | Role[]> = {
+  'GET /health': 'public',
+  'GET /me': 'user',
+  'PUT /me/preferences': 'user',
+  'POST /organisations': 'user',
+  'GET /admin/mail': 'siteAdmin',
+  'GET /projects': 'user',
+  'POST /projects': 'user',
+  'GET /projects/:id': ALL,
+  'PUT /projects/:id': ['owner', 'architect'],
+  'POST /projects/:id/archive': ['owner'],
+  'POST /projects/:id/unarchive': ['owner'],
+  'GET /projects/:id/audit': ['owner', 'architect', 'envelope_consultant', 'engineer'],
+  'GET /projects/:id/members': ALL,
+  'POST /projects/:id/invitations': ['owner', 'architect'],
+  'PUT /projects/:id/members/:memberId': ['owner'],
+  'DELETE /projects/:id/members/:memberId': ['owner'],
+  'GET /invitations/:token': 'public',
+  'POST /invitations/:token/accept': 'user',
+};
+
+/** Demo account per project role; `owner` is also the site administrator. */
+const emailOf: Record<Role | 'outsider', string> = {
+  owner: demoEmail('admin'),
+  architect: demoEmail('architect'),
+  envelope_consultant: demoEmail('consultant'),
+  engineer: demoEmail('engineer'),
+  subcontractor: demoEmail('subcontractor'),
+  viewer: demoEmail('viewer'),
+  outsider: demoEmail('outsider'),
+};
+
+/** Bodies for routes that document no example. */
+const BODIES: Record<string, () => unknown> = {
+  'PUT /me/preferences': () => ({ unitSystem: 'SI' }),
+  'POST /organisations': () => ({ name: `Firm ${Math.random().toString(36).slice(2)}` }),
+  'PUT /projects/:id/members/:memberId': () => ({ role: 'viewer' }),
+};
+
+const key = (r: { method: string; path: string }) => `${r.method.toUpperCase()} ${r.path}`;
+
+describe('every registered route has an entry in the permission matrix', () => {
+  it('has no route without an expectation, and no stale expectation', () => {
+    expect(apiRoutes.map(key).sort()).toEqual(Object.keys(EXPECTED).sort());
+  });
+});
+
+describe.each(testDatabases())('permission matrix on %s', (kind) => {
+  let t: TestApp;
+  const params: Record<string, string> = {};
+  beforeAll(async () => {
+    t = await createTestApp(kind);
+    params.id = await t.demoProjectId();
+    // A spare member whom the member routes may change and remove without disturbing the callers.
+    const owner = await t.as(emailOf.owner);
+    await owner
+      .post(`/api/projects/${params.id}/invitations`)
+      .send({ email: 'spare@example.com', role: 'viewer' });
+    const token = (await t.mail())
+      .find((m) => m.to.includes('spare@example.com'))!
+      .text.match(/\/invite\/([\w-]+)/)![1]!;
+    const spare = request.agent(t.app);
+    await spare
+      .post('/api/auth/sign-up/email')
+      .send({ name: 'Spare', email: 'spare@example.com', password: 'spare-password-1' });
+    await spare.post(`/api/invitations/${token}/accept`);
+    const members = (await owner.get(`/api/projects/${params.id}/members`)).body.members as {
+      id: string;
+      email: string;
+    }[];
+    params.memberId = members.find((m) => m.email === 'spare@example.com')!.id;
+    await owner
+      .post(`/api/projects/${params.id}/invitations`)
+      .send({ email: 'pending@example.com', role: 'viewer' });
+    params.token = (await t.mail())
+      .find((m) => m.to.includes('pending@example.com'))!
+      .text.match(/\/invite\/([\w-]+)/)![1]!;
+  });
+  afterAll(async () => {
+    await t?.close();
+  });
+
+  // Destructive routes last, so that earlier rows still find the spare member.
+  const ordered = [...apiRoutes].sort(
+    (a, b) => Number(a.method === 'delete') - Number(b.method === 'delete'),
+  );
+  it.each(ordered.map((r) => [key(r), r] as const))('%s', async (_name, route) => {
+    const expected = EXPECTED[key(route)]!;
+    const path = `/api${route.path.replace(/:(\w+)/g, (_m, p: string) => params[p]!)}`;
+    const body = BODIES[key(route)]?.() ?? route.example ?? {};
+    const call = async (agent: { [m: string]: (p: string) => request.Test } | null) => {
+      const req = (agent ?? (t.anonymous() as unknown as { [m: string]: (p: string) => request.Test }))[
+        route.method
+      ]!(path);
+      const res =
+        route.method === 'get' || route.method === 'delete' ? await req : await req.send(body as object);
+      return res.status;
+    };
+    const anon = await call(null);
+    if (expected === 'public') expect(anon, 'signed out').toBeLessThan(400);
+    else expect(anon, 'signed out').toBe(401);
+
+    const callers = [...PROJECT_ROLES, 'outsider'] as const;
+    // Allowed callers last: a successful destructive call must not change what the others see.
+    const isAllowed = (c: (typeof callers)[number]) =>
+      expected === 'public' ||
+      expected === 'user' ||
+      (expected === 'siteAdmin' ? c === 'owner' : c !== 'outsider' && expected.includes(c));
+    for (const caller of [...callers].sort((a, b) => Number(isAllowed(a)) - Number(isAllowed(b)))) {
+      const status = await call((await t.as(emailOf[caller])) as never);
+      if (isAllowed(caller)) {
+        expect(status, `${caller} is allowed`).toBeLessThan(500);
+        expect(
+          [401, 403, 404].includes(status) && !(route.path.includes('/accept') && status === 403),
+          `${caller} got ${status}`,
+        ).toBe(false);
+      } else if (Array.isArray(expected) && caller === 'outsider') {
+        expect(status, 'a member of another firm must not learn the project exists').toBe(404);
+      } else {
+        expect(status, `${caller} is refused`).toBe(403);
+      }
+    }
+  });
+});

@@ -1,0 +1,88 @@
+import { randomBytes } from 'node:crypto';
+import pg from 'pg';
+import request from 'supertest';
+import { inject } from 'vitest';
+import { createApp } from '../../server/app';
+import { loadConfig } from '../../server/config';
+import { openDatabase } from '../../server/db/client';
+import { demoScenario, seedDemo } from '../../server/db/seed';
+import { startMailCapture } from '../../server/mail/capture';
+import { createSmtpMailer } from '../../server/mail/mailer';
+
+export type DatabaseKind = 'pglite' | 'postgres';
+
+/** The databases every database test runs on: PGlite always, PostgreSQL when the global setup found one. */
+export function testDatabases(): DatabaseKind[] {
+  return inject('postgresAdminUrl') ? ['pglite', 'postgres'] : ['pglite'];
+}
+
+export const DEMO_PASSWORD = demoScenario.password;
+export const demoEmail = (role: string) => `${role}@skinwright.demo`;
+
+/** A fresh app on a fresh database (in-memory PGlite, or a new database on the PostgreSQL server), seeded with the demo. */
+export async function createTestApp(kind: DatabaseKind = 'pglite', opts: { authRateLimit?: number } = {}) {
+  let databaseUrl: string | undefined;
+  let dropDatabase = async () => {};
+  if (kind === 'postgres') {
+    const adminUrl = inject('postgresAdminUrl');
+    const name = `sw_test_${randomBytes(6).toString('hex')}`;
+    const admin = new pg.Client({ connectionString: adminUrl });
+    await admin.connect();
+    await admin.query(`CREATE DATABASE ${name}`);
+    await admin.end();
+    const u = new URL(adminUrl);
+    u.pathname = `/${name}`;
+    databaseUrl = u.toString();
+    dropDatabase = async () => {
+      const c = new pg.Client({ connectionString: adminUrl });
+      await c.connect();
+      await c.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
+      await c.end();
+    };
+  }
+  const config = loadConfig(
+    { NODE_ENV: 'test' },
+    {
+      databaseUrl,
+      pgliteDir: 'memory://',
+      baseUrl: 'http://localhost:5180',
+      authRateLimit: opts.authRateLimit ?? 10_000,
+    },
+  );
+  const database = await openDatabase(config);
+  const capture = await startMailCapture(database.db);
+  const mailer = createSmtpMailer(capture.url, config.mailFrom);
+  const { app, auth, services } = createApp({ database, config, mailer });
+  await seedDemo(database.db, auth);
+
+  const agents = new Map<string, ReturnType<typeof request.agent>>();
+  /** A supertest agent signed in as the demo user with this e-mail (cached per app). */
+  async function as(email: string) {
+    const cached = agents.get(email);
+    if (cached) return cached;
+    const agent = request.agent(app);
+    const res = await agent.post('/api/auth/sign-in/email').send({ email, password: DEMO_PASSWORD });
+    if (res.status !== 200) throw new Error(`sign-in of ${email} failed: ${res.status} ${res.text}`);
+    agents.set(email, agent);
+    return agent;
+  }
+  async function demoProjectId(): Promise<string> {
+    const res = await (await as(demoEmail('admin'))).get('/api/projects');
+    return res.body.projects[0].id;
+  }
+  return {
+    app,
+    database,
+    services,
+    as,
+    demoProjectId,
+    anonymous: () => request(app),
+    mail: () => services.me.capturedMail(),
+    async close() {
+      await capture.close();
+      await database.close();
+      await dropDatabase();
+    },
+  };
+}
+export type TestApp = Awaited<ReturnType<typeof createTestApp>>;

@@ -1,6 +1,8 @@
-import type { Server } from 'node:http';
+import { createServer } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { fileURLToPath } from 'node:url';
+import type { RequestHandler } from 'express';
+import type { ViteDevServer } from 'vite';
 import { createApp } from './app';
 import type { Config } from './config';
 import { openDatabase } from './db/client';
@@ -19,11 +21,14 @@ export async function startServer(config: Config, opts: { dev?: boolean } = {}) 
   const capture = config.smtpUrl ? null : await startMailCapture(database.db);
   const mailer = createSmtpMailer(config.smtpUrl ?? capture!.url, config.mailFrom);
 
-  let clientMiddleware: import('express').RequestHandler[] | undefined;
-  let httpServer: Server | undefined;
-  const { createServer } = await import('node:http');
-  httpServer = createServer();
-  let vite: import('vite').ViteDevServer | undefined;
+  const httpServer = createServer();
+  await new Promise<void>((resolve) => httpServer.listen(config.port, config.host, resolve));
+  const { port } = httpServer.address() as AddressInfo;
+  // A random port (tests) is known only now; links and the origin check must use it.
+  const effective = config.port === 0 ? { ...config, baseUrl: `http://127.0.0.1:${port}` } : config;
+
+  let vite: ViteDevServer | undefined;
+  let clientMiddleware: RequestHandler[] | undefined;
   if (opts.dev) {
     const { createServer: createVite } = await import('vite');
     vite = await createVite({
@@ -34,22 +39,28 @@ export async function startServer(config: Config, opts: { dev?: boolean } = {}) 
   }
   const { app, auth, logger } = createApp({
     database,
-    config,
+    config: effective,
     mailer,
     clientDir: opts.dev ? undefined : clientDir,
     clientMiddleware,
   });
-  const seeded = config.seedDemo ? await seedDemo(database.db, auth) : false;
-
+  const seeded = effective.seedDemo ? await seedDemo(database.db, auth) : false;
   httpServer.on('request', app);
-  await new Promise<void>((resolve) => httpServer!.listen(config.port, config.host, resolve));
-  const { port } = httpServer.address() as AddressInfo;
 
   async function stop() {
-    await new Promise<void>((resolve) => httpServer!.close(() => resolve()));
+    httpServer.closeAllConnections();
+    await new Promise<void>((resolve) => httpServer.close(() => resolve()));
     await vite?.close();
     await capture?.close();
     await database.close();
   }
-  return { port, stop, logger, seeded, databaseKind: database.kind, accounts: demoAccounts };
+  return {
+    port,
+    baseUrl: effective.baseUrl,
+    stop,
+    logger,
+    seeded,
+    databaseKind: database.kind,
+    accounts: demoAccounts,
+  };
 }

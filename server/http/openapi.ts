@@ -12,6 +12,7 @@ const accessText: Record<AnyRoute['access']['kind'], string> = {
   public: 'Public — no sign-in.',
   user: 'Any signed-in user.',
   siteAdmin: 'Site administrators only.',
+  organisation: 'Members of the firm',
   project: 'Project members whose role allows',
 };
 
@@ -37,7 +38,9 @@ export function buildOpenApi(routes: AnyRoute[]) {
     const access =
       r.access.kind === 'project'
         ? `${accessText.project} \`${r.access.action}\`.`
-        : accessText[r.access.kind];
+        : r.access.kind === 'organisation'
+          ? `${accessText.organisation}${r.access.role === 'admin' ? ' (administrators)' : ''}.`
+          : accessText[r.access.kind];
     const op: Record<string, unknown> = {
       tags: [r.tag],
       summary: r.summary,

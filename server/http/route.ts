@@ -11,11 +11,14 @@ import { forbidden, HttpError, notFound, unauthorised, zodFields } from './error
  * - `siteAdmin`: a site administrator;
  * - `project`: a member of the project whose role allows `action` (the permission table in shared/auth).
  *   Non-members get 404 so that a project's existence is not revealed to other firms.
+ * - `organisation`: a member (or, with `role: 'admin'`, an administrator) of the firm named by `:orgId`;
+ *   non-members get 404.
  */
 export type Access =
   | { kind: 'public' }
   | { kind: 'user' }
   | { kind: 'siteAdmin' }
+  | { kind: 'organisation'; role: 'member' | 'admin' }
   | {
       kind: 'project';
       action: ProjectAction;
@@ -93,6 +96,13 @@ export function mountRoutes(router: Router, routes: AnyRoute[], services: Servic
         if (!projectId || !role) throw notFound('project');
         if (!can(role, access.action)) throw forbidden();
         project = { id: projectId, role };
+      }
+      if (access.kind === 'organisation') {
+        const orgId = (req.params as Record<string, string>).orgId;
+        const role =
+          orgId && /^[0-9a-f-]{36}$/i.test(orgId) ? await services.library.roleIn(orgId, user!.id) : null;
+        if (!role) throw notFound('organisation');
+        if (access.role === 'admin' && role !== 'admin') throw forbidden('firm administrators only');
       }
       const query = parsePart(route.query, req.query, 'query');
       const body = parsePart(route.body, req.body ?? {}, 'body');

@@ -1,8 +1,19 @@
 import type { AnyRoute } from '../http/route';
+import { assemblyRoutes } from './assemblies';
+import { calcRoutes } from './calc';
 import { healthRoutes } from './health';
+import { libraryRoutes } from './library';
 import { meRoutes } from './me';
 import { memberRoutes } from './members';
 import { projectRoutes } from './projects';
 
 /** Every API route, in one registry: it mounts the routes, generates the OpenAPI document and drives the permission tests. */
-export const apiRoutes: AnyRoute[] = [...healthRoutes, ...meRoutes, ...projectRoutes, ...memberRoutes];
+export const apiRoutes: AnyRoute[] = [
+  ...healthRoutes,
+  ...meRoutes,
+  ...projectRoutes,
+  ...memberRoutes,
+  ...assemblyRoutes,
+  ...libraryRoutes,
+  ...calcRoutes,
+];

@@ -3,7 +3,9 @@ import { type Auth, sessionUser } from '../auth/auth';
 import type { Config } from '../config';
 import type { Database } from '../db/client';
 import type { Mailer } from '../mail/mailer';
+import { createAssemblyService } from './assemblies';
 import { createAuditService } from './audit';
+import { createLibraryService } from './library';
 import { createMeService } from './me';
 import { createMemberService } from './members';
 import { createProjectService } from './projects';
@@ -18,6 +20,8 @@ export function createServices(database: Database, config: Config, mailer: Maile
     me: createMeService(db),
     projects: createProjectService(db),
     members: createMemberService(db, config, mailer),
+    assemblies: createAssemblyService(db),
+    library: createLibraryService(db),
   };
 }
 

@@ -4,7 +4,14 @@ import { z } from 'zod';
  * Roles on a project. One project is shared by people of several firms, each with a role on that project.
  * `owner` is the project administrator (usually the architect's firm that created it).
  */
-export const PROJECT_ROLES = ['owner', 'architect', 'envelope_consultant', 'engineer', 'subcontractor', 'viewer'] as const;
+export const PROJECT_ROLES = [
+  'owner',
+  'architect',
+  'envelope_consultant',
+  'engineer',
+  'subcontractor',
+  'viewer',
+] as const;
 export const projectRoleSchema = z.enum(PROJECT_ROLES);
 export type ProjectRole = z.infer<typeof projectRoleSchema>;
 

@@ -16,18 +16,26 @@ export class CalcInputError extends Error {
 
 /** Refuse anything but a finite number strictly greater than zero. */
 export function requirePositive(value: number, field: string, what = 'value'): number {
-  if (!Number.isFinite(value) || value <= 0) throw new CalcInputError(field, `${what} must be a finite number greater than 0 (got ${value})`);
+  if (!Number.isFinite(value) || value <= 0)
+    throw new CalcInputError(field, `${what} must be a finite number greater than 0 (got ${value})`);
   return value;
 }
 
 /** Refuse anything but a finite number ≥ 0. */
 export function requireNonNegative(value: number, field: string, what = 'value'): number {
-  if (!Number.isFinite(value) || value < 0) throw new CalcInputError(field, `${what} must be a finite number of 0 or more (got ${value})`);
+  if (!Number.isFinite(value) || value < 0)
+    throw new CalcInputError(field, `${what} must be a finite number of 0 or more (got ${value})`);
   return value;
 }
 
 /** Refuse anything outside [min, max] (inclusive). */
-export function requireInRange(value: number, min: number, max: number, field: string, what = 'value'): number {
+export function requireInRange(
+  value: number,
+  min: number,
+  max: number,
+  field: string,
+  what = 'value',
+): number {
   if (!Number.isFinite(value) || value < min || value > max)
     throw new CalcInputError(field, `${what} must lie between ${min} and ${max} (got ${value})`);
   return value;

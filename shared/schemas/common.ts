@@ -3,7 +3,9 @@ import { z } from 'zod';
 /** The one error shape of every API response that is not a success. */
 export const apiErrorSchema = z.object({
   error: z.object({
-    code: z.string().describe('Stable machine-readable code, e.g. `validation_failed`, `not_found`, `version_conflict`.'),
+    code: z
+      .string()
+      .describe('Stable machine-readable code, e.g. `validation_failed`, `not_found`, `version_conflict`.'),
     message: z.string().describe('Human-readable explanation.'),
     fields: z
       .record(z.string(), z.string())

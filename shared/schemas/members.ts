@@ -14,7 +14,10 @@ export type Member = z.infer<typeof memberSchema>;
 export const memberRoleUpdateSchema = z.object({ role: projectRoleSchema });
 
 export const invitationInputSchema = z.object({
-  email: z.email().max(320).transform((e) => e.toLowerCase()),
+  email: z
+    .email()
+    .max(320)
+    .transform((e) => e.toLowerCase()),
   role: projectRoleSchema,
 });
 export type InvitationInput = z.infer<typeof invitationInputSchema>;
@@ -40,4 +43,6 @@ export const invitationPreviewSchema = z.object({
 });
 export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
 
-export const invitationTokenParam = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'malformed invitation token') });
+export const invitationTokenParam = z.object({
+  token: z.string().regex(/^[A-Za-z0-9_-]{20,100}$/, 'malformed invitation token'),
+});

@@ -3,7 +3,25 @@ import { projectRoleSchema } from '../auth/permissions';
 
 /** ASHRAE 169 climate zone designations: 0–8 with moisture regime A (moist), B (dry), C (marine) where used. */
 export const CLIMATE_ZONES = [
-  '0A', '0B', '1A', '1B', '2A', '2B', '3A', '3B', '3C', '4A', '4B', '4C', '5A', '5B', '5C', '6A', '6B', '7', '8',
+  '0A',
+  '0B',
+  '1A',
+  '1B',
+  '2A',
+  '2B',
+  '3A',
+  '3B',
+  '3C',
+  '4A',
+  '4B',
+  '4C',
+  '5A',
+  '5B',
+  '5C',
+  '6A',
+  '6B',
+  '7',
+  '8',
 ] as const;
 export const climateZoneSchema = z.enum(CLIMATE_ZONES);
 
@@ -13,14 +31,27 @@ const text = (max: number) => z.string().trim().max(max);
 export const projectSiteSchema = z.object({
   siteAddress: text(500).default('').describe('Free-text site address.'),
   climateZone: climateZoneSchema.describe('ASHRAE 169 climate zone designation.'),
-  elevationM: z.number().min(-500).max(6000).default(0).describe('Ground elevation above sea level, m (−500…6000).'),
+  elevationM: z
+    .number()
+    .min(-500)
+    .max(6000)
+    .default(0)
+    .describe('Ground elevation above sea level, m (−500…6000).'),
   buildingHeightM: z.number().gt(0).max(600).describe('Mean roof height h, m (>0…600).'),
   planLengthM: z.number().gt(0).max(2000).describe('Plan length (longer side), m (>0…2000).'),
   planWidthM: z.number().gt(0).max(2000).describe('Plan width (shorter side), m (>0…2000).'),
   indoorTempC: z.number().min(-40).max(60).describe('Indoor design temperature, °C (−40…60).'),
   indoorRh: z.number().min(0).max(1).describe('Indoor design relative humidity, fraction 0–1.'),
-  winterDesignTempC: z.number().min(-60).max(40).describe('Winter (heating) design temperature, °C (−60…40).'),
-  summerDesignTempC: z.number().min(-20).max(60).describe('Summer (cooling) design temperature, °C (−20…60).'),
+  winterDesignTempC: z
+    .number()
+    .min(-60)
+    .max(40)
+    .describe('Winter (heating) design temperature, °C (−60…40).'),
+  summerDesignTempC: z
+    .number()
+    .min(-20)
+    .max(60)
+    .describe('Summer (cooling) design temperature, °C (−20…60).'),
 });
 
 export const projectInputSchema = projectSiteSchema
@@ -29,7 +60,10 @@ export const projectInputSchema = projectSiteSchema
     number: text(50).default(''),
     description: text(4000).default(''),
   })
-  .refine((p) => p.planWidthM <= p.planLengthM, { path: ['planWidthM'], message: 'plan width must not exceed plan length' })
+  .refine((p) => p.planWidthM <= p.planLengthM, {
+    path: ['planWidthM'],
+    message: 'plan width must not exceed plan length',
+  })
   .refine((p) => p.summerDesignTempC > p.winterDesignTempC, {
     path: ['summerDesignTempC'],
     message: 'summer design temperature must be above the winter design temperature',
@@ -37,7 +71,10 @@ export const projectInputSchema = projectSiteSchema
 export type ProjectInput = z.infer<typeof projectInputSchema>;
 
 /** An update names the version it was based on (optimistic concurrency). */
-export const projectUpdateSchema = z.object({ version: z.number().int().positive(), changes: projectInputSchema });
+export const projectUpdateSchema = z.object({
+  version: z.number().int().positive(),
+  changes: projectInputSchema,
+});
 export type ProjectUpdate = z.infer<typeof projectUpdateSchema>;
 
 export const projectSchema = z.object({

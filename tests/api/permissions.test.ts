@@ -18,7 +18,8 @@ const PROJECT_ROLES = [
 ] as const;
 type Role = (typeof PROJECT_ROLES)[number];
 const ALL: Role[] = [...PROJECT_ROLES];
-const EXPECTED: Record<string, 'public' | 'user' | 'siteAdmin' | Role[]> = {
+type Expectation = 'public' | 'user' | 'siteAdmin' | 'firmMember' | 'firmAdmin' | Role[];
+const EXPECTED: Record<string, Expectation> = {
   'GET /health': 'public',
   'GET /me': 'user',
   'PUT /me/preferences': 'user',
@@ -37,7 +38,25 @@ const EXPECTED: Record<string, 'public' | 'user' | 'siteAdmin' | Role[]> = {
   'DELETE /projects/:id/members/:memberId': ['owner'],
   'GET /invitations/:token': 'public',
   'POST /invitations/:token/accept': 'user',
+  'GET /projects/:id/assemblies': ALL,
+  'POST /projects/:id/assemblies': ['owner', 'architect', 'envelope_consultant', 'engineer'],
+  'GET /assemblies/:assemblyId': ALL,
+  'PUT /assemblies/:assemblyId': ['owner', 'architect', 'envelope_consultant', 'engineer'],
+  'GET /assemblies/:assemblyId/revisions': ALL,
+  'GET /assemblies/:assemblyId/revisions/:revision': ALL,
+  'GET /organisations/:orgId/materials': 'firmMember',
+  'POST /organisations/:orgId/materials': 'firmMember',
+  'DELETE /organisations/:orgId/materials/:itemId': 'firmAdmin',
+  'GET /organisations/:orgId/bridge-values': 'firmMember',
+  'POST /organisations/:orgId/bridge-values': 'firmMember',
+  'DELETE /organisations/:orgId/bridge-values/:itemId': 'firmAdmin',
+  'POST /v1/calc/thermal': 'public',
+  'GET /reference/materials': 'public',
 };
+
+/** The firm whose libraries the matrix exercises (Larchmere: owner is its admin; architect and viewer are members). */
+const FIRM_ADMINS: string[] = ['owner'];
+const FIRM_MEMBERS: string[] = ['owner', 'architect', 'viewer'];
 
 /** Demo account per project role; `owner` is also the site administrator. */
 const emailOf: Record<Role | 'outsider', string> = {
@@ -95,6 +114,22 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
     params.token = (await t.mail())
       .find((m) => m.to.includes('pending@example.com'))!
       .text.match(/\/invite\/([\w-]+)/)![1]!;
+    const example = (k: string) => apiRoutes.find((r) => key(r) === k)!.example as object;
+    params.assemblyId = (
+      await owner.post(`/api/projects/${params.id}/assemblies`).send(example('POST /projects/:id/assemblies'))
+    ).body.id;
+    params.revision = '1';
+    params.orgId = (await owner.get('/api/me')).body.organisations[0].id;
+    params.materialId = (
+      await owner
+        .post(`/api/organisations/${params.orgId}/materials`)
+        .send(example('POST /organisations/:orgId/materials'))
+    ).body.id;
+    params.bridgeId = (
+      await owner
+        .post(`/api/organisations/${params.orgId}/bridge-values`)
+        .send(example('POST /organisations/:orgId/bridge-values'))
+    ).body.id;
   });
   afterAll(async () => {
     await t?.close();
@@ -106,7 +141,8 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
   );
   it.each(ordered.map((r) => [key(r), r] as const))('%s', async (_name, route) => {
     const expected = EXPECTED[key(route)]!;
-    const path = `/api${route.path.replace(/:(\w+)/g, (_m, p: string) => params[p]!)}`;
+    const itemId = route.path.includes('/materials/') ? params.materialId : params.bridgeId;
+    const path = `/api${route.path.replace(/:(\w+)/g, (_m, p: string) => (p === 'itemId' ? itemId : params[p])!)}`;
     const body = BODIES[key(route)]?.() ?? route.example ?? {};
     const call = async (agent: { [m: string]: (p: string) => request.Test } | null) => {
       const req = (agent ?? (t.anonymous() as unknown as { [m: string]: (p: string) => request.Test }))[
@@ -122,10 +158,16 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
 
     const callers = [...PROJECT_ROLES, 'outsider'] as const;
     // Allowed callers last: a successful destructive call must not change what the others see.
-    const isAllowed = (c: (typeof callers)[number]) =>
-      expected === 'public' ||
-      expected === 'user' ||
-      (expected === 'siteAdmin' ? c === 'owner' : c !== 'outsider' && expected.includes(c));
+    const isAllowed = (c: (typeof callers)[number]) => {
+      if (expected === 'public' || expected === 'user') return true;
+      if (expected === 'siteAdmin') return c === 'owner';
+      if (expected === 'firmMember') return FIRM_MEMBERS.includes(c);
+      if (expected === 'firmAdmin') return FIRM_ADMINS.includes(c);
+      return c !== 'outsider' && expected.includes(c);
+    };
+    const hiddenFrom = (c: (typeof callers)[number]) =>
+      (Array.isArray(expected) && c === 'outsider') ||
+      ((expected === 'firmMember' || expected === 'firmAdmin') && !FIRM_MEMBERS.includes(c));
     for (const caller of [...callers].sort((a, b) => Number(isAllowed(a)) - Number(isAllowed(b)))) {
       const status = await call((await t.as(emailOf[caller])) as never);
       if (isAllowed(caller)) {
@@ -134,8 +176,8 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
           [401, 403, 404].includes(status) && !(route.path.includes('/accept') && status === 403),
           `${caller} got ${status}`,
         ).toBe(false);
-      } else if (Array.isArray(expected) && caller === 'outsider') {
-        expect(status, 'a member of another firm must not learn the project exists').toBe(404);
+      } else if (hiddenFrom(caller)) {
+        expect(status, 'a non-member must not learn that the project or firm exists').toBe(404);
       } else {
         expect(status, `${caller} is refused`).toBe(403);
       }

@@ -144,3 +144,78 @@ export const capturedMail = pgTable('captured_mail', {
   text: text('text').notNull(),
   html: text('html'),
 });
+
+/** A wall assembly of a project; its content lives in revisions (each save is one). */
+export const assemblies = pgTable(
+  'assemblies',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    wallCategory: text('wall_category').notNull(),
+    currentRevision: integer('current_revision').notNull().default(1),
+    version: integer('version').notNull().default(1),
+    createdBy: text('created_by').references(() => user.id),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index('assemblies_project_idx').on(t.projectId)],
+);
+
+/** Immutable revision of an assembly: its input and the result the engine of that day produced. */
+export const assemblyRevisions = pgTable(
+  'assembly_revisions',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    assemblyId: uuid('assembly_id')
+      .notNull()
+      .references(() => assemblies.id, { onDelete: 'cascade' }),
+    revision: integer('revision').notNull(),
+    note: text('note').notNull().default(''),
+    input: jsonb('input').notNull(),
+    thermalResult: jsonb('thermal_result'),
+    engineVersion: text('engine_version').notNull(),
+    createdBy: text('created_by').references(() => user.id),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('assembly_revisions_unique').on(t.assemblyId, t.revision)],
+);
+
+/** An organisation's own materials (λ, ρ, μ) with their source. */
+export const orgMaterials = pgTable(
+  'org_materials',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    organisationId: uuid('organisation_id')
+      .notNull()
+      .references(() => organisations.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    conductivity: doublePrecision('conductivity').notNull(),
+    density: doublePrecision('density'),
+    vapourResistanceFactor: doublePrecision('vapour_resistance_factor'),
+    source: text('source').notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index('org_materials_org_idx').on(t.organisationId)],
+);
+
+/** An organisation's own library of χ (W/K) and ψ (W/(m·K)) values with their source. */
+export const orgBridgeValues = pgTable(
+  'org_bridge_values',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    organisationId: uuid('organisation_id')
+      .notNull()
+      .references(() => organisations.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    kind: text('kind').notNull(),
+    value: doublePrecision('value').notNull(),
+    sourceType: text('source_type').notNull(),
+    source: text('source').notNull(),
+    notes: text('notes').notNull().default(''),
+    createdAt: createdAt(),
+  },
+  (t) => [index('org_bridge_values_org_idx').on(t.organisationId)],
+);

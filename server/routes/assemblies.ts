@@ -1,0 +1,122 @@
+import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import {
+  assemblyCreateSchema,
+  assemblyRevisionSchema,
+  assemblySchema,
+  assemblySummarySchema,
+  assemblyUpdateSchema,
+  revisionListSchema,
+} from '@shared/schemas/assembly';
+import { apiErrorSchema, uuidParam } from '@shared/schemas/common';
+import { z } from 'zod';
+import { defineRoute } from '../http/route';
+
+const errors = {
+  400: { description: 'Invalid fields', schema: apiErrorSchema },
+  401: { description: 'Not signed in', schema: apiErrorSchema },
+  403: { description: 'Your role does not allow this', schema: apiErrorSchema },
+  404: { description: 'No such project or assembly, or you are not a member', schema: apiErrorSchema },
+  422: {
+    description: 'Physically impossible input (e.g. framing fractions not summing to 1)',
+    schema: apiErrorSchema,
+  },
+};
+const assemblyParams = z.object({ assemblyId: z.uuid() });
+const viaAssembly = {
+  projectId: ({
+    params,
+    services,
+  }: {
+    params: Record<string, string>;
+    services: import('../services').Services;
+  }) =>
+    z.uuid().safeParse(params.assemblyId).success
+      ? services.assemblies.projectOf(params.assemblyId!)
+      : Promise.resolve(null),
+};
+const example = {
+  name: 'Insulated metal panel on girts',
+  description: '',
+  wallCategory: 'metal_building',
+  attachment: { girtOrientation: 'horizontal', clipType: 'Thermally broken clip', fastenerType: '#14 screw' },
+  thermal: metalPanelWall(),
+};
+
+export const assemblyRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/projects/:id/assemblies',
+    summary: 'Assemblies of a project with their effective U-factor',
+    tag: 'Assemblies',
+    access: { kind: 'project', action: 'assembly.read' },
+    params: uuidParam,
+    responses: {
+      200: { description: 'Assemblies', schema: z.object({ assemblies: z.array(assemblySummarySchema) }) },
+      ...errors,
+    },
+    handler: async ({ project, services }) => ({ assemblies: await services.assemblies.list(project!.id) }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/projects/:id/assemblies',
+    summary:
+      'Create an assembly (revision 1; the thermal result is computed and stored with the engine version)',
+    tag: 'Assemblies',
+    access: { kind: 'project', action: 'assembly.write' },
+    params: uuidParam,
+    body: assemblyCreateSchema,
+    example,
+    responses: { 201: { description: 'The new assembly', schema: assemblySchema }, ...errors },
+    handler: ({ user, project, body, services }) => services.assemblies.create(project!.id, user!.id, body),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/assemblies/:assemblyId',
+    summary: 'One assembly with its current revision and result',
+    tag: 'Assemblies',
+    access: { kind: 'project', action: 'assembly.read', ...viaAssembly },
+    params: assemblyParams,
+    responses: { 200: { description: 'The assembly', schema: assemblySchema }, ...errors },
+    handler: ({ params, services }) => services.assemblies.get(params.assemblyId),
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/assemblies/:assemblyId',
+    summary:
+      'Save a new revision (name the version you read; a stale version gets 409 and nothing is overwritten)',
+    tag: 'Assemblies',
+    access: { kind: 'project', action: 'assembly.write', ...viaAssembly },
+    params: assemblyParams,
+    body: assemblyUpdateSchema,
+    example: { version: 1, note: 'clip spacing revised', input: example },
+    responses: {
+      200: { description: 'The assembly at its new revision', schema: assemblySchema },
+      ...errors,
+      409: { description: 'Someone saved first; `current` holds their revision', schema: apiErrorSchema },
+    },
+    handler: ({ user, params, body, services }) =>
+      services.assemblies.update(params.assemblyId, user!.id, body.version, body.input, body.note),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/assemblies/:assemblyId/revisions',
+    summary: 'Revision history of an assembly',
+    tag: 'Assemblies',
+    access: { kind: 'project', action: 'assembly.read', ...viaAssembly },
+    params: assemblyParams,
+    responses: { 200: { description: 'Revisions, newest first', schema: revisionListSchema }, ...errors },
+    handler: async ({ params, services }) => ({
+      revisions: await services.assemblies.revisions(params.assemblyId),
+    }),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/assemblies/:assemblyId/revisions/:revision',
+    summary: 'One stored revision with its input and result',
+    tag: 'Assemblies',
+    access: { kind: 'project', action: 'assembly.read', ...viaAssembly },
+    params: assemblyParams.extend({ revision: z.coerce.number().int().positive() }),
+    responses: { 200: { description: 'The revision', schema: assemblyRevisionSchema }, ...errors },
+    handler: ({ params, services }) => services.assemblies.revision(params.assemblyId, params.revision),
+  }),
+];

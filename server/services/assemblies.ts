@@ -1,0 +1,194 @@
+import type { ThermalResult } from '@shared/calc/thermal/schema';
+import { calculateThermal } from '@shared/calc/thermal/thermal';
+import { ENGINE_VERSION } from '@shared/calc/trace';
+import type { Assembly, AssemblyInput, AssemblyRevision, AssemblySummary } from '@shared/schemas/assembly';
+import { and, asc, desc, eq } from 'drizzle-orm';
+import type { Db } from '../db/client';
+import { assemblies, assemblyRevisions, user } from '../db/schema';
+import { HttpError, notFound } from '../http/errors';
+import { recordAudit } from './audit';
+
+type AssemblyRow = typeof assemblies.$inferSelect;
+type RevisionRow = typeof assemblyRevisions.$inferSelect;
+
+function toRevision(r: RevisionRow, createdBy: string | null): AssemblyRevision {
+  return {
+    revision: r.revision,
+    note: r.note,
+    input: r.input as AssemblyInput,
+    thermalResult: (r.thermalResult as ThermalResult | null) ?? null,
+    engineVersion: r.engineVersion,
+    createdBy,
+    createdAt: r.createdAt.toISOString(),
+  };
+}
+
+function toSummary(a: AssemblyRow, result: ThermalResult | null): AssemblySummary {
+  return {
+    id: a.id,
+    projectId: a.projectId,
+    name: a.name,
+    wallCategory: a.wallCategory as AssemblySummary['wallCategory'],
+    revision: a.currentRevision,
+    version: a.version,
+    updatedAt: a.updatedAt.toISOString(),
+    Ueff: result?.Ueff ?? null,
+    Reff: result?.Reff ?? null,
+  };
+}
+
+export function createAssemblyService(db: Db) {
+  async function get(assemblyId: string): Promise<Assembly> {
+    const [a] = await db.select().from(assemblies).where(eq(assemblies.id, assemblyId));
+    if (!a) throw notFound('assembly');
+    const [r] = await db
+      .select({ rev: assemblyRevisions, by: user.name })
+      .from(assemblyRevisions)
+      .leftJoin(user, eq(user.id, assemblyRevisions.createdBy))
+      .where(
+        and(eq(assemblyRevisions.assemblyId, assemblyId), eq(assemblyRevisions.revision, a.currentRevision)),
+      );
+    const current = toRevision(r!.rev, r!.by);
+    return { ...toSummary(a, current.thermalResult), current };
+  }
+
+  return {
+    get,
+
+    /** The project an assembly belongs to (for the permission check), or null. */
+    async projectOf(assemblyId: string): Promise<string | null> {
+      const [a] = await db
+        .select({ projectId: assemblies.projectId })
+        .from(assemblies)
+        .where(eq(assemblies.id, assemblyId));
+      return a?.projectId ?? null;
+    },
+
+    async list(projectId: string): Promise<AssemblySummary[]> {
+      const rows = await db
+        .select({ a: assemblies, result: assemblyRevisions.thermalResult })
+        .from(assemblies)
+        .innerJoin(
+          assemblyRevisions,
+          and(
+            eq(assemblyRevisions.assemblyId, assemblies.id),
+            eq(assemblyRevisions.revision, assemblies.currentRevision),
+          ),
+        )
+        .where(eq(assemblies.projectId, projectId))
+        .orderBy(asc(assemblies.name));
+      return rows.map((r) => toSummary(r.a, r.result as ThermalResult | null));
+    },
+
+    async create(projectId: string, userId: string, input: AssemblyInput): Promise<Assembly> {
+      const thermalResult = calculateThermal(input.thermal);
+      const id = await db.transaction(async (tx) => {
+        const [a] = await tx
+          .insert(assemblies)
+          .values({ projectId, name: input.name, wallCategory: input.wallCategory, createdBy: userId })
+          .returning();
+        await tx.insert(assemblyRevisions).values({
+          assemblyId: a!.id,
+          revision: 1,
+          note: 'first issue',
+          input,
+          thermalResult,
+          engineVersion: ENGINE_VERSION,
+          createdBy: userId,
+        });
+        await recordAudit(tx, {
+          actorId: userId,
+          projectId,
+          entity: 'assembly',
+          entityId: a!.id,
+          action: 'create',
+          after: { name: input.name },
+        });
+        return a!.id;
+      });
+      return get(id);
+    },
+
+    /** Each save is a new revision; the save applies only to the version the caller read (409 otherwise). */
+    async update(
+      assemblyId: string,
+      userId: string,
+      version: number,
+      input: AssemblyInput,
+      note: string,
+    ): Promise<Assembly> {
+      const thermalResult = calculateThermal(input.thermal);
+      const saved = await db.transaction(async (tx) => {
+        const rows = await tx
+          .update(assemblies)
+          .set({
+            name: input.name,
+            wallCategory: input.wallCategory,
+            version: version + 1,
+            currentRevision: version + 1,
+            updatedAt: new Date(),
+          })
+          .where(and(eq(assemblies.id, assemblyId), eq(assemblies.version, version)))
+          .returning();
+        const a = rows[0];
+        if (!a) return false;
+        await tx.insert(assemblyRevisions).values({
+          assemblyId,
+          revision: a.currentRevision,
+          note,
+          input,
+          thermalResult,
+          engineVersion: ENGINE_VERSION,
+          createdBy: userId,
+        });
+        await recordAudit(tx, {
+          actorId: userId,
+          projectId: a.projectId,
+          entity: 'assembly',
+          entityId: assemblyId,
+          action: 'revise',
+          after: { revision: a.currentRevision, note },
+        });
+        return true;
+      });
+      if (!saved)
+        throw new HttpError(
+          409,
+          'version_conflict',
+          'someone else saved this assembly after you opened it; your changes were not saved',
+          undefined,
+          {
+            current: await get(assemblyId),
+          },
+        );
+      return get(assemblyId);
+    },
+
+    async revisions(assemblyId: string) {
+      const rows = await db
+        .select({ rev: assemblyRevisions, by: user.name })
+        .from(assemblyRevisions)
+        .leftJoin(user, eq(user.id, assemblyRevisions.createdBy))
+        .where(eq(assemblyRevisions.assemblyId, assemblyId))
+        .orderBy(desc(assemblyRevisions.revision));
+      return rows.map(({ rev, by }) => ({
+        revision: rev.revision,
+        note: rev.note,
+        engineVersion: rev.engineVersion,
+        createdBy: by,
+        createdAt: rev.createdAt.toISOString(),
+        Ueff: (rev.thermalResult as ThermalResult | null)?.Ueff ?? null,
+      }));
+    },
+
+    async revision(assemblyId: string, revision: number): Promise<AssemblyRevision> {
+      const [r] = await db
+        .select({ rev: assemblyRevisions, by: user.name })
+        .from(assemblyRevisions)
+        .leftJoin(user, eq(user.id, assemblyRevisions.createdBy))
+        .where(and(eq(assemblyRevisions.assemblyId, assemblyId), eq(assemblyRevisions.revision, revision)));
+      if (!r) throw notFound('revision');
+      return toRevision(r.rev, r.by);
+    },
+  };
+}

@@ -1,0 +1,40 @@
+import raw from '@data/reference/materials.json';
+import { z } from 'zod';
+
+/** One generic material (data/reference/materials.json; sources in materials.source.md). */
+export const materialSchema = z.object({
+  id: z.string().regex(/^[a-z0-9-]+$/),
+  name: z.string().min(1),
+  category: z.enum(['metal', 'board', 'timber', 'insulation', 'masonry', 'glass', 'gas', 'membrane']),
+  conductivity: z.number().positive().describe('Design thermal conductivity λ, W/(m·K) (greater than 0)'),
+  density: z.number().positive().describe('Density ρ, kg/m³ (greater than 0)'),
+  mu: z.object({
+    dry: z
+      .number()
+      .positive()
+      .nullable()
+      .describe('Vapour resistance factor μ (dry cup), dimensionless; null = ∞'),
+    wet: z
+      .number()
+      .positive()
+      .nullable()
+      .describe('Vapour resistance factor μ (wet cup), dimensionless; null = ∞'),
+  }),
+  source: z.string().min(1).describe('Standard or handbook, edition and table the value belongs to'),
+  provenance: z.string().min(1).describe('"seen — …" or "memory — verify against <table>"'),
+});
+export type Material = z.infer<typeof materialSchema>;
+
+const librarySchema = z
+  .object({ version: z.literal(1), note: z.string(), materials: z.array(materialSchema).min(1) })
+  .refine((lib) => new Set(lib.materials.map((m) => m.id)).size === lib.materials.length, {
+    message: 'material ids must be unique',
+  });
+
+/** The parsed, validated library; importing this module throws if the JSON is malformed. */
+export const materials: readonly Material[] = librarySchema.parse(raw).materials;
+
+const byId = new Map(materials.map((m) => [m.id, m]));
+
+/** Look a material up by id; undefined when unknown. */
+export const findMaterial = (id: string): Material | undefined => byId.get(id);

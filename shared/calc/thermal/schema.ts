@@ -1,0 +1,249 @@
+import { traceStepSchema } from '@shared/calc/trace';
+import { z } from 'zod';
+
+/**
+ * Thermal calculation contract — the single source of truth for the API, the forms and the engine.
+ * Everything is SI: metres, W/(m·K), m²·K/W, W/(m²·K), W/K. Layers are ordered outside → inside.
+ */
+
+const name = z.string().min(1).max(120).describe('Name a practitioner recognises, e.g. "Mineral wool board"');
+const thickness = z.number().positive().max(2).describe('Layer thickness d, m (greater than 0, at most 2 m)');
+const conductivity = z
+  .number()
+  .positive()
+  .max(1000)
+  .describe('Design thermal conductivity λ, W/(m·K) (greater than 0, at most 1000)');
+
+export const homogeneousLayerSchema = z.object({
+  kind: z.literal('homogeneous'),
+  name,
+  thickness,
+  conductivity,
+  materialId: z.string().min(1).optional().describe('Id of the material in data/reference/materials.json'),
+});
+
+export const resistanceLayerSchema = z.object({
+  kind: z.literal('resistance'),
+  name,
+  resistance: z
+    .number()
+    .positive()
+    .max(50)
+    .describe('Declared thermal resistance R, m²·K/W (greater than 0, at most 50)'),
+});
+
+export const airLayerSchema = z.object({
+  kind: z.literal('air'),
+  name,
+  thickness: z
+    .number()
+    .positive()
+    .max(0.3)
+    .describe(
+      'Air layer thickness in the heat-flow direction, m (greater than 0, at most 0.3 m — ISO 6946 Table 8)',
+    ),
+  ventilation: z
+    .enum(['unventilated', 'slightly', 'well'])
+    .describe('ISO 6946:2017 §6.9: unventilated, slightly ventilated, or well ventilated'),
+  emissivityFactor: z
+    .number()
+    .positive()
+    .max(1)
+    .optional()
+    .describe(
+      'Intersurface emittance E = 1/(1/ε₁ + 1/ε₂ − 1), dimensionless (0–1); omit for high-emissivity faces (Table 8)',
+    ),
+});
+
+export const framedSectionSchema = z.object({
+  name,
+  conductivity,
+  fraction: z
+    .number()
+    .positive()
+    .max(1)
+    .describe('Fraction of the wall area taken by this section, dimensionless (0–1]; fractions sum to 1'),
+});
+
+export const framedLayerSchema = z.object({
+  kind: z.literal('framed'),
+  name,
+  thickness,
+  sections: z.array(framedSectionSchema).min(1).max(8),
+  metal: z.boolean().describe('True when the framing is metal (steel or aluminium studs, girts)'),
+  flangeWidth: z
+    .number()
+    .positive()
+    .max(0.5)
+    .optional()
+    .describe('Metal flange width m, m (greater than 0, at most 0.5) — needed by the zone method'),
+  spacing: z
+    .number()
+    .positive()
+    .max(5)
+    .optional()
+    .describe('Member spacing on centre s, m (greater than 0, at most 5) — needed by the zone method'),
+});
+
+export const layerSchema = z.discriminatedUnion('kind', [
+  homogeneousLayerSchema,
+  resistanceLayerSchema,
+  airLayerSchema,
+  framedLayerSchema,
+]);
+
+export const heatFlowSchema = z
+  .enum(['horizontal', 'upward', 'downward'])
+  .describe('Direction of heat flow (ISO 6946:2017 Table 7): horizontal within ±30°, upward, downward');
+
+const chi = z.number().nonnegative().max(10).describe('Point thermal transmittance χ, W/K (0–10)');
+const psi = z.number().nonnegative().max(10).describe('Linear thermal transmittance ψ, W/(m·K) (0–10)');
+const countPerArea = z
+  .number()
+  .positive()
+  .max(10000)
+  .describe('Number of items per square metre of wall, 1/m² (greater than 0, at most 10 000)');
+const spacing = (what: string) =>
+  z.number().positive().max(100).describe(`${what} spacing, m (greater than 0, at most 100)`);
+
+export const pointBridgeBySpacingSchema = z.object({
+  kind: z.literal('point'),
+  name,
+  chi,
+  spacingHorizontal: spacing('Horizontal'),
+  spacingVertical: spacing('Vertical'),
+});
+export const pointBridgeByCountSchema = z.object({ kind: z.literal('point'), name, chi, countPerArea });
+export const linearBridgeBySpacingSchema = z.object({
+  kind: z.literal('linear'),
+  name,
+  psi,
+  spacing: spacing('Member'),
+});
+export const linearBridgeByLengthSchema = z.object({
+  kind: z.literal('linear'),
+  name,
+  psi,
+  lengthPerArea: z
+    .number()
+    .positive()
+    .max(1000)
+    .describe('Length of the linear bridge per square metre of wall, m/m² (greater than 0, at most 1000)'),
+});
+export const fastenerBridgeSchema = z.object({
+  kind: z.literal('fastener'),
+  name,
+  conductivity: z
+    .number()
+    .positive()
+    .max(1000)
+    .describe('Fastener thermal conductivity λ_f, W/(m·K) (0–1000]'),
+  diameter: z
+    .number()
+    .positive()
+    .max(0.05)
+    .describe('Fastener shank diameter, m (greater than 0, at most 0.05)'),
+  countPerArea,
+  penetration: z
+    .enum(['full', 'recessed'])
+    .describe('Whether the fastener passes through the whole insulation layer or is recessed into it'),
+  recessDepth: z
+    .number()
+    .nonnegative()
+    .max(1)
+    .optional()
+    .describe(
+      'Depth by which a recessed fastener head sits below the insulation face, m (0 to layer thickness)',
+    ),
+  layerIndex: z
+    .number()
+    .int()
+    .nonnegative()
+    .describe(
+      'Index of the insulation layer crossed, dimensionless integer ≥ 0 (layers counted outside → inside from 0)',
+    ),
+  bothEndsMetal: z
+    .boolean()
+    .optional()
+    .describe('True when both ends of the fastener touch metal sheets — Annex F then does not apply'),
+});
+
+export const bridgeSchema = z.union([
+  pointBridgeBySpacingSchema,
+  pointBridgeByCountSchema,
+  linearBridgeBySpacingSchema,
+  linearBridgeByLengthSchema,
+  fastenerBridgeSchema,
+]);
+
+export const thermalInputSchema = z.object({
+  layers: z.array(layerSchema).min(1).max(40).describe('Layers ordered outside → inside'),
+  heatFlow: heatFlowSchema,
+  bridges: z.array(bridgeSchema).max(40).describe('Bridges crossing the continuous insulation'),
+});
+
+export const methodNameSchema = z.enum(['parallelPath', 'isothermalPlanes', 'isoCombined', 'zone']);
+
+const rSI = (what: string) => z.number().describe(`${what}, m²·K/W (greater than 0)`);
+const uSI = (what: string) => z.number().describe(`${what}, W/(m²·K) (0 or more)`);
+const rIP = (what: string) => z.number().describe(`${what}, h·ft²·°F/Btu (greater than 0)`);
+const uIP = (what: string) => z.number().describe(`${what}, Btu/(h·ft²·°F) (0 or more)`);
+
+export const thermalResultSchema = z.object({
+  R0: rSI('Clear-field total resistance by the default method (surfaces included)'),
+  U0: uSI('Clear-field thermal transmittance 1/R0'),
+  Ueff: uSI('Effective thermal transmittance U0 + ΣΔU of the bridges'),
+  Reff: rSI('Effective total resistance 1/Ueff'),
+  ip: z.object({
+    R0: rIP('Clear-field total resistance'),
+    Reff: rIP('Effective total resistance'),
+    U0: uIP('Clear-field U-factor'),
+    Ueff: uIP('Effective U-factor'),
+  }),
+  Rsi: rSI('Internal surface resistance used'),
+  Rse: rSI('External surface resistance used'),
+  methods: z.object({
+    parallelPath: rSI('ASHRAE parallel-path total resistance'),
+    isothermalPlanes: rSI('ASHRAE isothermal-planes total resistance'),
+    isoUpper: rSI('ISO 6946 upper limit R′T').nullable(),
+    isoLower: rSI('ISO 6946 lower limit R″T').nullable(),
+    isoCombined: rSI('ISO 6946 combined R_T = (R′T + R″T)/2').nullable(),
+    isoError: z
+      .number()
+      .describe('ISO 6946 maximum relative error e = (R′T − R″T)/(2R_T), dimensionless')
+      .nullable(),
+    zone: rSI('ASHRAE zone-method total resistance').nullable(),
+  }),
+  offeredMethods: z.array(methodNameSchema),
+  defaultMethod: methodNameSchema,
+  methodSpread: z
+    .number()
+    .describe('(max − min)/mean of the offered methods, dimensionless (0 when they agree)'),
+  bridges: z.array(
+    z.object({
+      name: z.string(),
+      kind: z.enum(['point', 'linear', 'fastener']),
+      deltaU: uSI('Added transmittance ΔU'),
+      share: z.number().describe('ΔU / Ueff, dimensionless (0–1)'),
+    }),
+  ),
+  clearFieldShare: z.number().describe('U0 / Ueff, dimensionless (0–1)'),
+  sharesSum: z.number().describe('clearFieldShare + Σ bridge shares, dimensionless (1 by construction)'),
+  trace: z.array(traceStepSchema),
+  warnings: z.array(z.string()),
+});
+
+export type HomogeneousLayer = z.infer<typeof homogeneousLayerSchema>;
+export type ResistanceLayer = z.infer<typeof resistanceLayerSchema>;
+export type AirLayer = z.infer<typeof airLayerSchema>;
+export type FramedLayer = z.infer<typeof framedLayerSchema>;
+export type FramedSection = z.infer<typeof framedSectionSchema>;
+export type Layer = z.infer<typeof layerSchema>;
+export type HeatFlow = z.infer<typeof heatFlowSchema>;
+export type Ventilation = AirLayer['ventilation'];
+export type Bridge = z.infer<typeof bridgeSchema>;
+export type FastenerBridge = z.infer<typeof fastenerBridgeSchema>;
+export type ThermalInput = z.infer<typeof thermalInputSchema>;
+export type MethodName = z.infer<typeof methodNameSchema>;
+export type ThermalResult = z.infer<typeof thermalResultSchema>;
+export type BridgeResult = ThermalResult['bridges'][number];

@@ -1,0 +1,618 @@
+import { CalcInputError } from '@shared/calc/errors';
+import { R_IP_TO_SI, U_IP_TO_SI } from '@shared/units';
+import { describe, expect, it } from 'vitest';
+import { metalPanelWall } from './fixtures';
+import { findMaterial, materials } from './materials';
+import { type Layer, type ThermalInput, thermalInputSchema, thermalResultSchema } from './schema';
+import {
+  AIR_LAYER_TABLE,
+  airLayerResistance,
+  calculateThermal,
+  fastenerAlpha,
+  fastenerDeltaU,
+  framedLayerIsothermalResistance,
+  iso6946Combined,
+  iso6946Lower,
+  iso6946Upper,
+  isothermalPlanes,
+  layerResistance,
+  parallelPath,
+  surfaceResistances,
+  zoneMethod,
+} from './thermal';
+
+const wall = (layers: Layer[], extra: Partial<ThermalInput> = {}): ThermalInput => ({
+  heatFlow: 'horizontal',
+  bridges: [],
+  layers,
+  ...extra,
+});
+const board = (thickness: number, conductivity: number, name = 'Board'): Layer => ({
+  kind: 'homogeneous',
+  name,
+  thickness,
+  conductivity,
+});
+const woodStuds: Layer = {
+  kind: 'framed',
+  name: 'Wood studs with batts',
+  thickness: 0.14,
+  metal: false,
+  sections: [
+    { name: 'Batt', conductivity: 0.04, fraction: 0.85 },
+    { name: 'Timber', conductivity: 0.13, fraction: 0.15 },
+  ],
+};
+
+/** Run `fn` and return the CalcInputError it throws. */
+function inputError(fn: () => unknown): CalcInputError {
+  try {
+    fn();
+  } catch (e) {
+    if (e instanceof CalcInputError) return e;
+    throw e;
+  }
+  throw new Error('expected a CalcInputError');
+}
+
+describe('layer and surface resistances', () => {
+  it('R = d/λ', () => {
+    expect(layerResistance(0.1, 0.04)).toBeCloseTo(2.5, 12);
+  });
+
+  it('surface resistances follow the heat-flow direction', () => {
+    expect(surfaceResistances('upward').Rsi).toBeLessThan(surfaceResistances('horizontal').Rsi);
+    expect(surfaceResistances('horizontal').Rsi).toBeLessThan(surfaceResistances('downward').Rsi);
+  });
+
+  it('refuses an unknown heat-flow direction with the field path', () => {
+    const e = inputError(() => calculateThermal(wall([board(0.1, 1)], { heatFlow: 'sideways' as 'upward' })));
+    expect(e.field).toBe('heatFlow');
+  });
+});
+
+describe('air layers', () => {
+  it('interpolates Table 8 linearly between tabulated thicknesses (derived)', () => {
+    expect(airLayerResistance(0.02, 'horizontal', 'unventilated')).toBeCloseTo((0.17 + 0.18) / 2, 12);
+    expect(airLayerResistance(0.0025, 'downward', 'unventilated')).toBeCloseTo(0.055, 12);
+  });
+
+  it('halves the value for a slightly ventilated layer and drops a well-ventilated one', () => {
+    const full = airLayerResistance(0.05, 'downward', 'unventilated');
+    expect(airLayerResistance(0.05, 'downward', 'slightly')).toBeCloseTo(full / 2, 12);
+    expect(airLayerResistance(0.05, 'downward', 'well')).toBe(0);
+  });
+
+  it('Annex D with E = 0.82 (two ε = 0.9 faces) reproduces Table 8 to its rounding (derived)', () => {
+    const E = 1 / (1 / 0.9 + 1 / 0.9 - 1);
+    for (const flow of ['upward', 'horizontal', 'downward'] as const)
+      AIR_LAYER_TABLE.thickness.forEach((d, k) => {
+        if (d === 0) return;
+        expect(
+          Math.abs(airLayerResistance(d, flow, 'unventilated', E) - AIR_LAYER_TABLE[flow][k]!),
+        ).toBeLessThan(0.006);
+      });
+  });
+
+  it('a low-emittance cavity resists more than a high-emittance one', () => {
+    expect(airLayerResistance(0.025, 'horizontal', 'unventilated', 0.05)).toBeGreaterThan(
+      airLayerResistance(0.025, 'horizontal', 'unventilated'),
+    );
+  });
+
+  it('a well-ventilated layer discards the layers outside it and sets Rse = Rsi', () => {
+    const inner = [board(0.1, 0.035), board(0.0125, 0.25)];
+    const vented = calculateThermal(
+      wall([
+        board(0.02, 1, 'Cladding'),
+        { kind: 'air', name: 'Vented cavity', thickness: 0.04, ventilation: 'well' },
+        ...inner,
+      ]),
+    );
+    const bare = calculateThermal(wall(inner));
+    expect(vented.Rse).toBe(0.13);
+    expect(vented.R0).toBeCloseTo(bare.R0 - 0.04 + 0.13, 12);
+    expect(vented.trace.find((s) => s.id === 'thermal.Rse')?.note).toMatch(/Layers 0–1/);
+  });
+
+  it('warns when the layers outside a slightly ventilated cavity exceed 0.15 m²·K/W', () => {
+    const r = calculateThermal(
+      wall([
+        board(0.1, 0.5, 'Masonry veneer'),
+        { kind: 'air', name: 'Cavity', thickness: 0.05, ventilation: 'slightly' },
+        board(0.1, 0.035),
+      ]),
+    );
+    expect(r.warnings.join(' ')).toMatch(/0\.15/);
+    const thin = calculateThermal(
+      wall([
+        board(0.0007, 50, 'Steel'),
+        { kind: 'air', name: 'Cavity', thickness: 0.05, ventilation: 'slightly' },
+        board(0.1, 0.035),
+      ]),
+    );
+    expect(thin.warnings).toEqual([]);
+  });
+});
+
+describe('methods', () => {
+  it('without framed layers, parallel path and isothermal planes are the series sum', () => {
+    expect(parallelPath(2.5, [])).toBeCloseTo(2.5, 12);
+    expect(isothermalPlanes(2.5, [])).toBe(2.5);
+  });
+
+  it('parallel path with one framed layer: 1/R = Σ f/(R_series + d/λ) (derived)', () => {
+    const framed = [
+      {
+        thickness: 0.1,
+        sections: [
+          { name: 'a', conductivity: 0.04, fraction: 0.9 },
+          { name: 'b', conductivity: 0.1, fraction: 0.1 },
+        ],
+      },
+    ];
+    expect(parallelPath(0.2, framed)).toBeCloseTo(1 / (0.9 / (0.2 + 2.5) + 0.1 / (0.2 + 1)), 12);
+    expect(isothermalPlanes(0.2, framed)).toBeCloseTo(0.2 + 0.1 / (0.9 * 0.04 + 0.1 * 0.1), 12);
+    expect(framedLayerIsothermalResistance(0.1, framed[0]!.sections)).toBeCloseTo(0.1 / 0.046, 12);
+  });
+
+  it('ISO 6946 upper/lower limits are the parallel-path/isothermal-planes arithmetic', () => {
+    expect(iso6946Upper).toBe(parallelPath);
+    expect(iso6946Lower).toBe(isothermalPlanes);
+  });
+
+  it('combined method: mean of the limits and e = (R′ − R″)/(2R)', () => {
+    const c = iso6946Combined(3.4, 3.0);
+    expect(c.R).toBeCloseTo(3.2, 12);
+    expect(c.error).toBeCloseTo(0.4 / 6.4, 12);
+    expect(c.ratio).toBeCloseTo(3.4 / 3.0, 12);
+  });
+
+  it('zone method: zone A as wide as the spacing collapses to isothermal planes (derived)', () => {
+    const z = zoneMethod({
+      restResistance: 0.5,
+      thickness: 0.1,
+      memberConductivity: 50,
+      memberFraction: 0.003,
+      cavityConductivity: 0.04,
+      flangeWidth: 0.04,
+      spacing: 0.05,
+      distance: 0.1,
+    });
+    expect(z.zoneWidth).toBe(0.05);
+    expect(z.R).toBeCloseTo(0.5 + 0.1 / (0.003 * 50 + 0.997 * 0.04), 12);
+  });
+
+  it('zone method: W = m + 2d with d raised to 0.5 in', () => {
+    const p = {
+      restResistance: 0.5,
+      thickness: 0.09,
+      memberConductivity: 50,
+      memberFraction: 0.0027,
+      cavityConductivity: 0.04,
+      flangeWidth: 0.041,
+      spacing: 0.406,
+    };
+    expect(zoneMethod({ ...p, distance: 0.005 }).zoneWidth).toBeCloseTo(0.041 + 2 * 0.0127, 12);
+    expect(zoneMethod({ ...p, distance: 0.0159 }).zoneWidth).toBeCloseTo(0.041 + 2 * 0.0159, 12);
+  });
+
+  it('non-metal framing: ISO 6946 combined is the default and all methods are reported', () => {
+    const r = calculateThermal(wall([board(0.01, 0.13), woodStuds, board(0.0125, 0.25)]));
+    expect(r.defaultMethod).toBe('isoCombined');
+    expect(r.offeredMethods).toEqual(['parallelPath', 'isothermalPlanes', 'isoCombined']);
+    expect(r.methods.isoUpper).toBe(r.methods.parallelPath);
+    expect(r.methods.isoLower).toBe(r.methods.isothermalPlanes);
+    expect(r.R0).toBe(r.methods.isoCombined);
+    expect(r.methods.zone).toBeNull();
+    expect(r.trace.find((s) => s.id === 'thermal.R0')?.note).toMatch(/no metal bridges the layers/);
+  });
+
+  it('metal framing: ISO 6946 is not offered, the zone method is the default and the trace says why', () => {
+    const r = calculateThermal(metalPanelWall());
+    expect(r.defaultMethod).toBe('zone');
+    expect(r.offeredMethods).toEqual(['parallelPath', 'isothermalPlanes', 'zone']);
+    expect(r.methods.isoCombined).toBeNull();
+    expect(r.methods.isoUpper).toBeNull();
+    expect(r.R0).toBe(r.methods.zone);
+    expect(r.trace.find((s) => s.id === 'thermal.R0')?.note).toBe(
+      'ISO 6946:2017 excludes insulation bridged by metal other than fasteners (Scope); the ASHRAE zone method is used',
+    );
+  });
+
+  it('homogeneous layers only: every method agrees and the spread is 0', () => {
+    const r = calculateThermal(wall([board(0.2, 1), board(0.1, 0.035)]));
+    expect(r.methods.parallelPath).toBeCloseTo(r.methods.isothermalPlanes, 12);
+    expect(r.methodSpread).toBeCloseTo(0, 12);
+    expect(r.R0).toBeCloseTo(0.13 + 0.2 + 0.1 / 0.035 + 0.04, 12);
+  });
+
+  it('method spread is (max − min)/mean of the offered methods', () => {
+    const r = calculateThermal(metalPanelWall());
+    const offered = [r.methods.parallelPath, r.methods.isothermalPlanes, r.methods.zone!];
+    const mean = (offered[0]! + offered[1]! + offered[2]!) / 3;
+    expect(r.methodSpread).toBeCloseTo((Math.max(...offered) - Math.min(...offered)) / mean, 12);
+  });
+
+  it('warns when R′T/R″T exceeds 1.5', () => {
+    const r = calculateThermal(
+      wall([
+        {
+          kind: 'framed',
+          name: 'Concrete ribs in foam',
+          thickness: 0.2,
+          metal: false,
+          sections: [
+            { name: 'Foam', conductivity: 0.03, fraction: 0.8 },
+            { name: 'Concrete', conductivity: 2.3, fraction: 0.2 },
+          ],
+        },
+      ]),
+    );
+    expect(r.warnings.join(' ')).toMatch(/exceeds 1\.5/);
+  });
+});
+
+describe('bridges', () => {
+  it('point bridges by spacing equal the same bridges by count', () => {
+    const a = calculateThermal(
+      wall([board(0.1, 0.035)], {
+        bridges: [{ kind: 'point', name: 'Clip', chi: 0.02, spacingHorizontal: 0.4, spacingVertical: 0.5 }],
+      }),
+    );
+    const b = calculateThermal(
+      wall([board(0.1, 0.035)], { bridges: [{ kind: 'point', name: 'Clip', chi: 0.02, countPerArea: 5 }] }),
+    );
+    expect(a.bridges[0]!.deltaU).toBeCloseTo(0.1, 12);
+    expect(b.bridges[0]!.deltaU).toBeCloseTo(0.1, 12);
+  });
+
+  it('linear bridges by spacing equal the same bridges by length per area', () => {
+    const a = calculateThermal(
+      wall([board(0.1, 0.035)], { bridges: [{ kind: 'linear', name: 'Girt', psi: 0.05, spacing: 1.25 }] }),
+    );
+    const b = calculateThermal(
+      wall([board(0.1, 0.035)], {
+        bridges: [{ kind: 'linear', name: 'Girt', psi: 0.05, lengthPerArea: 0.8 }],
+      }),
+    );
+    expect(a.bridges[0]!.deltaU).toBeCloseTo(0.04, 12);
+    expect(b.bridges[0]!.deltaU).toBeCloseTo(0.04, 12);
+  });
+
+  it('fastener: ΔU_f = α·λ_f·A_f·n_f/d₀·(R₁/R_T,h)², α = 0.8 when fully penetrating (derived)', () => {
+    const r = calculateThermal(
+      wall([board(0.1, 0.035, 'Insulation'), board(0.2, 2.3, 'Concrete')], {
+        bridges: [
+          {
+            kind: 'fastener',
+            name: 'Screw',
+            conductivity: 50,
+            diameter: 0.006,
+            countPerArea: 6,
+            penetration: 'full',
+            layerIndex: 0,
+          },
+        ],
+      }),
+    );
+    const R1 = 0.1 / 0.035;
+    const expected = ((0.8 * 50 * ((Math.PI * 0.006 ** 2) / 4) * 6) / 0.1) * (R1 / r.R0) ** 2;
+    expect(r.bridges[0]!.deltaU).toBeCloseTo(expected, 12);
+    expect(fastenerDeltaU(0.8, 50, 1e-5, 4, 0.1, 2, 4)).toBeCloseTo(((0.8 * 50 * 1e-5 * 4) / 0.1) * 0.25, 12);
+  });
+
+  it('recessed fastener: α = 0.8·d₁/d₀ with d₁ = d₀ − recess', () => {
+    expect(fastenerAlpha(0.1, 0.08)).toBeCloseTo(0.64, 12);
+    const layers = [board(0.1, 0.035, 'Insulation'), board(0.2, 2.3, 'Concrete')];
+    const full = calculateThermal(
+      wall(layers, {
+        bridges: [
+          {
+            kind: 'fastener',
+            name: 'Screw',
+            conductivity: 50,
+            diameter: 0.006,
+            countPerArea: 6,
+            penetration: 'full',
+            layerIndex: 0,
+          },
+        ],
+      }),
+    );
+    const recessed = calculateThermal(
+      wall(layers, {
+        bridges: [
+          {
+            kind: 'fastener',
+            name: 'Screw',
+            conductivity: 50,
+            diameter: 0.006,
+            countPerArea: 6,
+            penetration: 'recessed',
+            recessDepth: 0.02,
+            layerIndex: 0,
+          },
+        ],
+      }),
+    );
+    expect(recessed.bridges[0]!.deltaU).toBeCloseTo(full.bridges[0]!.deltaU * 0.8, 12);
+  });
+
+  it('fasteners with λ_f < 1 W/(m·K) add nothing and the trace says why', () => {
+    const r = calculateThermal(
+      wall([board(0.1, 0.035)], {
+        bridges: [
+          {
+            kind: 'fastener',
+            name: 'Basalt tie',
+            conductivity: 0.7,
+            diameter: 0.006,
+            countPerArea: 4,
+            penetration: 'full',
+            layerIndex: 0,
+          },
+        ],
+      }),
+    );
+    expect(r.bridges[0]!.deltaU).toBe(0);
+    expect(r.trace.find((s) => s.id === 'thermal.bridge.0.deltaU')?.note).toMatch(/λ_f < 1/);
+  });
+
+  it('shares of U_eff sum to 1 and U_eff = U₀ + ΣΔU', () => {
+    const r = calculateThermal(metalPanelWall());
+    const sumDeltaU = r.bridges.reduce((s, b) => s + b.deltaU, 0);
+    expect(r.Ueff).toBeCloseTo(r.U0 + sumDeltaU, 12);
+    expect(r.sharesSum).toBeCloseTo(1, 12);
+    expect(r.clearFieldShare + r.bridges.reduce((s, b) => s + b.share, 0)).toBeCloseTo(1, 12);
+    expect(r.Reff).toBeCloseTo(1 / r.Ueff, 12);
+  });
+});
+
+describe('input errors carry the dotted field path', () => {
+  const cases: [string, () => unknown, string][] = [
+    [
+      'zero thickness',
+      () => calculateThermal(wall([board(0.1, 1), board(0.1, 1), board(0, 1)])),
+      'layers.2.thickness',
+    ],
+    ['negative conductivity', () => calculateThermal(wall([board(0.1, -1)])), 'layers.0.conductivity'],
+    ['NaN thickness', () => calculateThermal(wall([board(Number.NaN, 1)])), 'layers.0.thickness'],
+    [
+      'NaN declared resistance',
+      () => calculateThermal(wall([{ kind: 'resistance', name: 'R', resistance: Number.NaN }])),
+      'layers.0.resistance',
+    ],
+    [
+      'fractions that do not sum to 1',
+      () =>
+        calculateThermal(
+          wall([
+            board(0.1, 1),
+            {
+              ...woodStuds,
+              sections: [
+                { name: 'Batt', conductivity: 0.04, fraction: 0.8 },
+                { name: 'Timber', conductivity: 0.13, fraction: 0.15 },
+              ],
+            },
+          ]),
+        ),
+      'layers.1.sections',
+    ],
+    [
+      'zero section conductivity',
+      () =>
+        calculateThermal(
+          wall([
+            {
+              ...woodStuds,
+              sections: [
+                { name: 'Batt', conductivity: 0, fraction: 0.85 },
+                { name: 'Timber', conductivity: 0.13, fraction: 0.15 },
+              ],
+            },
+          ]),
+        ),
+      'layers.0.sections.0.conductivity',
+    ],
+    [
+      'unknown material',
+      () => calculateThermal(wall([{ ...board(0.1, 1), materialId: 'unobtainium' } as Layer])),
+      'layers.0.materialId',
+    ],
+    [
+      'air layer deeper than Table 8',
+      () =>
+        calculateThermal(
+          wall([{ kind: 'air', name: 'Plenum', thickness: 0.5, ventilation: 'unventilated' }]),
+        ),
+      'layers.0.thickness',
+    ],
+    [
+      'metal framing without a flange width',
+      () => calculateThermal(wall([{ ...woodStuds, metal: true, spacing: 0.4 }])),
+      'layers.0.flangeWidth',
+    ],
+    [
+      'two metal-framed layers',
+      () => {
+        const studs = metalPanelWall().layers[6]!;
+        return calculateThermal(wall([studs, studs]));
+      },
+      'layers.1.metal',
+    ],
+    [
+      'zero linear spacing',
+      () =>
+        calculateThermal(
+          wall([board(0.1, 1)], { bridges: [{ kind: 'linear', name: 'Girt', psi: 0.05, spacing: 0 }] }),
+        ),
+      'bridges.0.spacing',
+    ],
+    [
+      'negative point spacing',
+      () =>
+        calculateThermal(
+          wall([board(0.1, 1)], {
+            bridges: [
+              { kind: 'point', name: 'Clip', chi: 0.02, spacingHorizontal: 0.4, spacingVertical: -1 },
+            ],
+          }),
+        ),
+      'bridges.0.spacingVertical',
+    ],
+    [
+      'NaN χ',
+      () =>
+        calculateThermal(
+          wall([board(0.1, 1)], {
+            bridges: [{ kind: 'point', name: 'Clip', chi: Number.NaN, countPerArea: 2 }],
+          }),
+        ),
+      'bridges.0.chi',
+    ],
+    [
+      'fastener touching metal at both ends',
+      () =>
+        calculateThermal(
+          wall([board(0.1, 0.035)], {
+            bridges: [
+              {
+                kind: 'fastener',
+                name: 'Screw',
+                conductivity: 50,
+                diameter: 0.005,
+                countPerArea: 4,
+                penetration: 'full',
+                layerIndex: 0,
+                bothEndsMetal: true,
+              },
+            ],
+          }),
+        ),
+      'bridges.0.bothEndsMetal',
+    ],
+    [
+      'fastener crossing an air layer',
+      () =>
+        calculateThermal(
+          wall([{ kind: 'air', name: 'Gap', thickness: 0.02, ventilation: 'unventilated' }], {
+            bridges: [
+              {
+                kind: 'fastener',
+                name: 'Screw',
+                conductivity: 50,
+                diameter: 0.005,
+                countPerArea: 4,
+                penetration: 'full',
+                layerIndex: 0,
+              },
+            ],
+          }),
+        ),
+      'bridges.0.layerIndex',
+    ],
+    [
+      'recessed fastener without a recess depth',
+      () =>
+        calculateThermal(
+          wall([board(0.1, 0.035)], {
+            bridges: [
+              {
+                kind: 'fastener',
+                name: 'Screw',
+                conductivity: 50,
+                diameter: 0.005,
+                countPerArea: 4,
+                penetration: 'recessed',
+                layerIndex: 0,
+              },
+            ],
+          }),
+        ),
+      'bridges.0.recessDepth',
+    ],
+  ];
+  it.each(cases)('%s', (_label, fn, field) => {
+    expect(inputError(fn).field).toBe(field);
+  });
+
+  it('the fastener refusal tells the user to enter a χ value instead', () => {
+    const e = inputError(() =>
+      calculateThermal(
+        wall([board(0.1, 0.035)], {
+          bridges: [
+            {
+              kind: 'fastener',
+              name: 'Screw',
+              conductivity: 50,
+              diameter: 0.005,
+              countPerArea: 4,
+              penetration: 'full',
+              layerIndex: 0,
+              bothEndsMetal: true,
+            },
+          ],
+        }),
+      ),
+    );
+    expect(e.reason).toMatch(/χ value/);
+  });
+});
+
+describe('result shape, units and trace', () => {
+  it('the result satisfies the result schema', () => {
+    expect(() => thermalResultSchema.parse(calculateThermal(metalPanelWall()))).not.toThrow();
+  });
+
+  it('the fixture satisfies the input schema', () => {
+    expect(thermalInputSchema.safeParse(metalPanelWall()).success).toBe(true);
+  });
+
+  it('the input schema refuses a fraction above 1 and a negative thickness', () => {
+    const bad = metalPanelWall();
+    bad.layers[0] = board(-0.1, 50);
+    expect(thermalInputSchema.safeParse(bad).success).toBe(false);
+  });
+
+  it('every number field of the schema states its unit', () => {
+    const described = thermalInputSchema.shape.layers.element.options.flatMap((o) =>
+      Object.values(o.shape).filter((f) => f.def.type === 'number'),
+    );
+    expect(described.length).toBeGreaterThan(3);
+    for (const f of described) expect(f.description).toMatch(/,/);
+  });
+
+  it('IP figures are the SI figures divided by the NIST SP 811 factors', () => {
+    const r = calculateThermal(metalPanelWall());
+    expect(r.ip.R0 * R_IP_TO_SI).toBeCloseTo(r.R0, 12);
+    expect(r.ip.Ueff * U_IP_TO_SI).toBeCloseTo(r.Ueff, 12);
+  });
+
+  it('every trace step is finite, sourced and uniquely identified', () => {
+    const r = calculateThermal(metalPanelWall());
+    const ids = new Set(r.trace.map((s) => s.id));
+    expect(ids.size).toBe(r.trace.length);
+    for (const s of r.trace) {
+      expect(Number.isFinite(s.value)).toBe(true);
+      expect(s.source.length).toBeGreaterThan(5);
+      expect(s.formula.length).toBeGreaterThan(2);
+    }
+  });
+});
+
+describe('materials library', () => {
+  it('loads about twenty rows, each naming its table and provenance', () => {
+    expect(materials.length).toBeGreaterThanOrEqual(20);
+    for (const m of materials) {
+      expect(m.source).toMatch(/ISO 10456:2007|ASHRAE Handbook—Fundamentals \(2021\)/);
+      expect(m.provenance).toMatch(/^(seen|memory — verify against)/);
+    }
+  });
+
+  it('finds a material by id', () => {
+    expect(findMaterial('steel')?.conductivity).toBe(50);
+    expect(findMaterial('nope')).toBeUndefined();
+  });
+});

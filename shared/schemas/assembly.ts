@@ -1,0 +1,105 @@
+import { z } from 'zod';
+import { thermalInputSchema, thermalResultSchema } from '../calc/thermal/schema';
+
+/**
+ * Wall categories a code table may key on. The list is deliberately short and generic; criteria sets
+ * (code tables) refer to these keys.
+ */
+export const WALL_CATEGORIES = ['metal_building', 'steel_framed', 'mass', 'wood_framed', 'other'] as const;
+export const wallCategorySchema = z.enum(WALL_CATEGORIES);
+export const WALL_CATEGORY_LABELS: Record<z.infer<typeof wallCategorySchema>, string> = {
+  metal_building: 'Metal building wall',
+  steel_framed: 'Steel-framed wall',
+  mass: 'Mass wall',
+  wood_framed: 'Wood-framed wall',
+  other: 'Other',
+};
+
+/** How the cladding is held: descriptive data the drawings and the wind check read; the thermal effect sits in `thermal.bridges`. */
+export const attachmentSchema = z.object({
+  girtOrientation: z
+    .enum(['horizontal', 'vertical'])
+    .describe('Girts run horizontally (panels span vertically) or vertically'),
+  clipType: z.string().trim().max(200).default('').describe('Clip or bracket product / description'),
+  fastenerType: z
+    .string()
+    .trim()
+    .max(200)
+    .default('')
+    .describe('Fastener description, e.g. "#14 self-drilling screw"'),
+});
+
+export const assemblyInputSchema = z.object({
+  name: z.string().trim().min(1, 'an assembly needs a name').max(200),
+  description: z.string().trim().max(4000).default(''),
+  wallCategory: wallCategorySchema,
+  attachment: attachmentSchema,
+  thermal: thermalInputSchema,
+});
+export type AssemblyInput = z.infer<typeof assemblyInputSchema>;
+
+export const assemblyCreateSchema = assemblyInputSchema;
+/** A save names the version it was based on; a stale one gets 409. */
+export const assemblyUpdateSchema = z.object({
+  version: z.number().int().positive(),
+  note: z.string().trim().max(500).default(''),
+  input: assemblyInputSchema,
+});
+
+export const assemblySummarySchema = z.object({
+  id: z.uuid(),
+  projectId: z.uuid(),
+  name: z.string(),
+  wallCategory: wallCategorySchema,
+  revision: z.number().int(),
+  version: z.number().int(),
+  updatedAt: z.string(),
+  Ueff: z.number().nullable(),
+  Reff: z.number().nullable(),
+});
+export type AssemblySummary = z.infer<typeof assemblySummarySchema>;
+
+export const assemblyRevisionSchema = z.object({
+  revision: z.number().int(),
+  note: z.string(),
+  input: assemblyInputSchema,
+  thermalResult: thermalResultSchema.nullable(),
+  engineVersion: z.string(),
+  createdBy: z.string().nullable(),
+  createdAt: z.string(),
+});
+export type AssemblyRevision = z.infer<typeof assemblyRevisionSchema>;
+
+export const assemblySchema = assemblySummarySchema.extend({ current: assemblyRevisionSchema });
+export type Assembly = z.infer<typeof assemblySchema>;
+
+export const revisionListSchema = z.object({
+  revisions: z.array(
+    assemblyRevisionSchema
+      .pick({ revision: true, note: true, engineVersion: true, createdBy: true, createdAt: true })
+      .extend({ Ueff: z.number().nullable() }),
+  ),
+});
+
+/** An organisation's own material (SI). */
+export const orgMaterialInputSchema = z.object({
+  name: z.string().trim().min(1).max(200),
+  conductivity: z.number().positive().max(1000).describe('λ, W/(m·K)'),
+  density: z.number().positive().max(25000).optional().describe('ρ, kg/m³'),
+  vapourResistanceFactor: z.number().min(1).max(1e7).optional().describe('μ, dimensionless'),
+  source: z.string().trim().min(1, 'name the source of the value (data sheet, test report, table)').max(500),
+});
+export const orgMaterialSchema = orgMaterialInputSchema.extend({ id: z.uuid(), createdAt: z.string() });
+export type OrgMaterial = z.infer<typeof orgMaterialSchema>;
+
+/** An organisation's own χ or ψ value with where it came from. */
+export const bridgeValueInputSchema = z.object({
+  name: z.string().trim().min(1).max(200),
+  kind: z.enum(['point', 'linear']).describe('point → χ in W/K; linear → ψ in W/(m·K)'),
+  value: z.number().min(0).max(10).describe('χ (W/K) or ψ (W/(m·K))'),
+  sourceType: z.enum(['test_report', 'catalogue', 'calculation']),
+  source: z.string().trim().min(1, 'name the source of the value').max(500),
+  notes: z.string().trim().max(2000).default(''),
+});
+export const bridgeValueSchema = bridgeValueInputSchema.extend({ id: z.uuid(), createdAt: z.string() });
+export type BridgeValue = z.infer<typeof bridgeValueSchema>;

@@ -1,0 +1,288 @@
+/**
+ * Thermal engine vs published sources. Each check names its source (standard or handbook, edition,
+ * clause/table/example) and a tolerance. Tags: [seen] read in the named source; [third-party] seen only in a
+ * public transcription (named); [memory] recalled, not re-read — verify before relying on it; "derived" =
+ * computed here from exact definitions or formulas, which tests arithmetic, not the standard.
+ */
+
+import type { Layer, ThermalInput } from '@shared/calc/thermal/schema';
+import { airLayerResistance, calculateThermal, surfaceResistances } from '@shared/calc/thermal/thermal';
+import { CHI_IP_TO_SI, FOOT, INCH, K_IP_TO_SI, PSI_IP_TO_SI, R_IP_TO_SI, U_IP_TO_SI } from '@shared/units';
+import { describe, expect, it } from 'vitest';
+
+const wall = (layers: Layer[], heatFlow: ThermalInput['heatFlow'] = 'horizontal'): ThermalInput => ({
+  layers,
+  heatFlow,
+  bridges: [],
+});
+const declared = (name: string, resistance: number): Layer => ({ kind: 'resistance', name, resistance });
+/** R-value in h·ft²·°F/Btu → m²·K/W. */
+const rIP = (r: number) => r * R_IP_TO_SI;
+
+describe('ISO 6946:2017 §6.8 Table 7 — conventional surface resistances', () => {
+  // Source: ISO 6946:2017 Table 7 [memory]; the same four values are tabulated in Spain's "DA DB-HE/1 Cálculo
+  // de parámetros característicos de la envolvente" (2018) Tabla 1, after UNE EN ISO 6946 [third-party].
+  // Tolerance: exact — the table gives two decimals and the engine stores them as given.
+  it('Rsi, horizontal heat flow = 0.13 m²·K/W', () => {
+    expect(surfaceResistances('horizontal').Rsi).toBe(0.13);
+  });
+  it('Rsi, upward heat flow = 0.10 m²·K/W', () => {
+    expect(surfaceResistances('upward').Rsi).toBe(0.1);
+  });
+  it('Rsi, downward heat flow = 0.17 m²·K/W', () => {
+    expect(surfaceResistances('downward').Rsi).toBe(0.17);
+  });
+  it('Rse = 0.04 m²·K/W in every direction', () => {
+    for (const flow of ['horizontal', 'upward', 'downward'] as const)
+      expect(surfaceResistances(flow).Rse).toBe(0.04);
+  });
+});
+
+describe('ISO 6946:2017 §6.9 Table 8 — unventilated air layers, high-emissivity faces', () => {
+  // Source: a 50 mm wall cavity (horizontal heat flow) taken as 0.18 m²·K/W in the Scottish Building
+  // Standards Technical Handbook, annex 6.B "Worked examples of U-value calculations using the combined
+  // method", 6.B.2 timber framed wall example (after BS EN ISO 6946) [third-party].
+  // Tolerance ±0.005 m²·K/W (the table's rounding).
+  it('50 mm, horizontal heat flow: 0.18 m²·K/W', () => {
+    expect(airLayerResistance(0.05, 'horizontal', 'unventilated')).toBeCloseTo(0.18, 2);
+  });
+
+  // Source: ISO 6946:2017 Table 8 [memory — verify against the standard]. The cells agree with the Annex D
+  // formula at E = 0.82 to ±0.006 (derived cross-check in thermal.test.ts). Tolerance ±0.005 m²·K/W.
+  it.each([
+    [0.005, 'horizontal', 0.11],
+    [0.01, 'upward', 0.15],
+    [0.015, 'horizontal', 0.17],
+    [0.05, 'upward', 0.16],
+    [0.025, 'downward', 0.19],
+    [0.1, 'downward', 0.22],
+    [0.3, 'downward', 0.23],
+  ] as const)('[memory] %s m, %s heat flow: %s m²·K/W', (d, flow, R) => {
+    expect(Math.abs(airLayerResistance(d, flow, 'unventilated') - R)).toBeLessThanOrEqual(0.005);
+  });
+});
+
+describe('Scottish Technical Handbook annex 6.B.2 — timber framed wall by the combined method', () => {
+  // Source: Scottish Building Standards Technical Handbook, annex 6.B "Worked examples of U-value
+  // calculations using the combined method" (BS EN ISO 6946), 6.B.2 timber framed wall example: brick
+  // 0.132, cavity 0.180, sheathing 0.069, mineral wool 3.500 (85 %) / timber studs 1.167 (15 %) over 140 mm,
+  // plasterboard 0.060, Rse 0.04, Rsi 0.13; published R_upper 3.435, R_lower 3.304, U = 0.30 W/(m²·K)
+  // [third-party: transcribed in a public repository's "The Combined Method…" note; the annex's own text is
+  // in the pages corpus at scotland.gov.uk]. Layer resistances are entered exactly as tabulated.
+  const example = calculateThermal(
+    wall([
+      declared('Outer leaf brick', 0.132),
+      { kind: 'air', name: 'Air cavity', thickness: 0.05, ventilation: 'unventilated' },
+      declared('Sheathing', 0.069),
+      {
+        kind: 'framed',
+        name: 'Mineral wool between timber studs',
+        thickness: 0.14,
+        metal: false,
+        sections: [
+          { name: 'Mineral wool quilt', conductivity: 0.14 / 3.5, fraction: 0.85 },
+          { name: 'Timber framing', conductivity: 0.14 / 1.167, fraction: 0.15 },
+        ],
+      },
+      declared('Plasterboard', 0.06),
+    ]),
+  );
+  // Tolerance ±0.001 m²·K/W (published to 3 decimals).
+  it('upper limit R′T = 3.435 m²·K/W', () => {
+    expect(Math.abs(example.methods.isoUpper! - 3.435)).toBeLessThanOrEqual(0.001);
+  });
+  it('lower limit R″T = 3.304 m²·K/W', () => {
+    expect(Math.abs(example.methods.isoLower! - 3.304)).toBeLessThanOrEqual(0.001);
+  });
+  // Tolerance ±0.005 W/(m²·K) (published to 2 decimals).
+  it('U = 0.30 W/(m²·K)', () => {
+    expect(example.defaultMethod).toBe('isoCombined');
+    expect(Math.abs(example.U0 - 0.3)).toBeLessThanOrEqual(0.005);
+  });
+});
+
+describe('ANSI/ASHRAE/IES Standard 90.1-2016 Normative Appendix A', () => {
+  // Source: Table A2.2.3 "Assembly U-Factors for Roofs with Insulation Entirely Above Deck"; base assembly
+  // R-0.17 exterior film, R-0 metal deck, R-0.61 interior film, heat flow up [third-party: the standard's
+  // text as published in the up.codes viewer, Oregon adoption of 90.1-2016]. The engine uses the ISO 6946
+  // Table 7 upward surfaces (0.14 m²·K/W = R-0.795) instead of R-0.78, so the tolerance is
+  // |ΔU| ≤ 0.001 Btu/(h·ft²·°F): table rounding (0.0005) plus the film difference.
+  it.each([
+    [5, 0.173],
+    [10, 0.093],
+    [20, 0.048],
+    [30, 0.032],
+  ])('R-%s continuous insulation above deck → U-%s', (R, U) => {
+    const r = calculateThermal(wall([declared('Continuous insulation', rIP(R))], 'upward'));
+    expect(Math.abs(r.ip.U0 - U)).toBeLessThanOrEqual(0.001);
+  });
+
+  // Source: Table A9.2-2 "Effective Insulation/Framing Layer R-Values for Wall Insulation Installed Between
+  // Steel Framing": R-13 in 3.5 in studs at 16 in o.c. → R-6.0, R-19 in 6 in studs at 16 in o.c. → R-7.1
+  // [seen via secondary sources: the 0.46 factor for 16 in o.c. quoted in "Energy code math for commercial
+  // walls" (Construction Specifier) gives 13 × 0.46 = 5.98; R-7.1 per the project's domain primer].
+  // Base assembly per §A3.3 (90.1-2016 text quoted in an Unmet Hours answer): R-0.17 exterior film, R-0.08
+  // stucco, R-0.56 5/8 in gypsum each side, R-0.68 interior film; studs at least 0.043 in uncoated steel.
+  // Assumptions not from the source: 1-5/8 in flange, steel λ = 50 W/(m·K) (ISO 10456 [memory]), stucco as a
+  // declared R (its thickness is not given), so d = 5/8 in. The engine applies ISO surfaces, not the films.
+  const steelStudWall = (cavityR: number, depthIn: number): ThermalInput => {
+    const gypsum: Layer = {
+      kind: 'homogeneous',
+      name: '5/8 in gypsum',
+      thickness: 0.625 * INCH,
+      conductivity: (0.625 * INCH) / rIP(0.56),
+    };
+    return wall([
+      declared('Stucco', rIP(0.08)),
+      gypsum,
+      {
+        kind: 'framed',
+        name: 'Steel studs with batts',
+        thickness: depthIn * INCH,
+        metal: true,
+        flangeWidth: 1.625 * INCH,
+        spacing: 16 * INCH,
+        sections: [
+          { name: 'Batt', conductivity: (depthIn * INCH) / rIP(cavityR), fraction: 1 - 0.043 / 16 },
+          { name: 'Steel web', conductivity: 50, fraction: 0.043 / 16 },
+        ],
+      },
+      gypsum,
+    ]);
+  };
+  /** Effective R of the insulation/framing layer: zone-method R_T less every other layer and surface. */
+  const effectiveLayerR = (input: ThermalInput): number => {
+    const r = calculateThermal(input);
+    return (r.R0 - (r.Rsi + r.Rse + rIP(0.08 + 2 * 0.56))) / R_IP_TO_SI;
+  };
+
+  // Tolerance ±10 %: the zone method is a hand method; the tabulated value comes from tests and detailed models.
+  it('R-13 in 3.5 in steel studs at 16 in o.c. → effective R-6.0 (zone method within ±10 %)', () => {
+    expect(Math.abs(effectiveLayerR(steelStudWall(13, 3.5)) / 6.0 - 1)).toBeLessThanOrEqual(0.1);
+  });
+  // The ASHRAE zone method over-predicts for deep studs (about +19 % here); the check pins the sign and
+  // bounds the size: R-7.1 ≤ zone ≤ 1.25 × R-7.1.
+  it('R-19 in 6 in steel studs at 16 in o.c. → effective R-7.1 (zone method 0 to +25 % high)', () => {
+    const R = effectiveLayerR(steelStudWall(19, 6));
+    expect(R).toBeGreaterThanOrEqual(7.1);
+    expect(R).toBeLessThanOrEqual(7.1 * 1.25);
+  });
+});
+
+describe('NIST SP 811 (2008) Appendix B.9 — conversion factors used for the IP results', () => {
+  // Expected: the factors tabulated in NIST SP 811 B.9 (Btu_IT), 7 significant digits [memory, per the
+  // domain primer], checked against values derived here from the exact definitions: 1 Btu_IT =
+  // 1055.05585262 J, 1 ft = 0.3048 m, 1 in = 0.0254 m, 1 h = 3600 s, 1 °F (difference) = 5/9 K.
+  // Tolerance: half a unit in the 7th significant digit.
+  const BTU = 1055.05585262;
+  const HOUR = 3600;
+  const DEG_F = 5 / 9;
+  const sevenDigits = (tabulated: number, derived: number) =>
+    expect(Math.abs(tabulated - derived)).toBeLessThanOrEqual(
+      0.5 * 10 ** (Math.floor(Math.log10(derived)) - 6),
+    );
+
+  it('1 h·ft²·°F/Btu = 0.1761102 m²·K/W', () => {
+    expect(R_IP_TO_SI).toBe(0.1761102);
+    sevenDigits(R_IP_TO_SI, (HOUR * FOOT * FOOT * DEG_F) / BTU);
+  });
+  it('1 Btu/(h·ft²·°F) = 5.678263 W/(m²·K)', () => {
+    expect(U_IP_TO_SI).toBe(5.678263);
+    sevenDigits(U_IP_TO_SI, BTU / (HOUR * FOOT * FOOT * DEG_F));
+  });
+  it('1 Btu·in/(h·ft²·°F) = 0.1442279 W/(m·K)', () => {
+    expect(K_IP_TO_SI).toBe(0.1442279);
+    sevenDigits(K_IP_TO_SI, (BTU * INCH) / (HOUR * FOOT * FOOT * DEG_F));
+  });
+  it('1 Btu/(h·ft·°F) = 1.730735 W/(m·K) (ψ)', () => {
+    expect(PSI_IP_TO_SI).toBe(1.730735);
+    sevenDigits(PSI_IP_TO_SI, BTU / (HOUR * FOOT * DEG_F));
+  });
+  it('1 Btu/(h·°F) = 0.5275279 W/K (χ)', () => {
+    expect(CHI_IP_TO_SI).toBe(0.5275279);
+    sevenDigits(CHI_IP_TO_SI, BTU / (HOUR * DEG_F));
+  });
+});
+
+describe('ISO 6946:2017 scope and Annex F exclusions', () => {
+  // Source: ISO 6946:2017 Scope — "Other cases where insulation is bridged by metal are outside the scope of
+  // this document" [seen: the abstract of BS EN ISO 6946:2017 as listed by a standards retailer]. Exact.
+  it('metal framing: the ISO 6946 combined method is not offered', () => {
+    const r = calculateThermal(
+      wall([
+        {
+          kind: 'framed',
+          name: 'Steel studs',
+          thickness: 0.09,
+          metal: true,
+          flangeWidth: 0.041,
+          spacing: 0.406,
+          sections: [
+            { name: 'Batt', conductivity: 0.04, fraction: 0.997 },
+            { name: 'Steel', conductivity: 50, fraction: 0.003 },
+          ],
+        },
+      ]),
+    );
+    expect(r.methods.isoCombined).toBeNull();
+    expect(r.offeredMethods).not.toContain('isoCombined');
+  });
+
+  // Source: "Fixings with a lambda value of less than 1.0 W/mK are excluded from u-value calculations to
+  // BS EN ISO 6946" — Ancon, "Wall ties: U-value calculations" technical page [third-party]; ISO 6946:2017
+  // Annex F [memory]. Exact: ΔU = 0.
+  it('a basalt-fibre tie (λ = 0.7 W/(m·K)) adds nothing', () => {
+    const r = calculateThermal({
+      ...wall([{ kind: 'homogeneous', name: 'Cavity insulation', thickness: 0.1, conductivity: 0.035 }]),
+      bridges: [
+        {
+          kind: 'fastener',
+          name: 'Basalt tie',
+          conductivity: 0.7,
+          diameter: 0.006,
+          countPerArea: 2.5,
+          penetration: 'full',
+          layerIndex: 0,
+        },
+      ],
+    });
+    expect(r.bridges[0]!.deltaU).toBe(0);
+  });
+});
+
+describe('ASHRAE Handbook—Fundamentals (2021) ch. 26 Table 10 — surface films', () => {
+  // Source: indoor film, vertical surface, horizontal heat flow, ε = 0.90: R-0.68 h·ft²·°F/Btu [third-party:
+  // notes in a public repository quoting the table]. The engine uses ISO 6946 Table 7 (0.13 m²·K/W); the
+  // two sources agree within 0.011 m²·K/W (0.68 × 0.1761102 = 0.1198). Tolerance 0.011 m²·K/W.
+  it('ISO Rsi (horizontal) is within 0.011 m²·K/W of the ASHRAE R-0.68 indoor film', () => {
+    expect(Math.abs(surfaceResistances('horizontal').Rsi - rIP(0.68))).toBeLessThanOrEqual(0.011);
+  });
+});
+
+describe('Homogeneous wall — CTE DB-HE example (ISO 6946 series sum)', () => {
+  // Source: datos_ejemplo.py in the public repository pachi/condensaciones (a condensation checker for Spain's
+  // CTE): half-brick 0.11 m λ 0.69, mortar 0.01 m λ 0.41, EPS 0.03 m λ 0.037, hollow brick 0.03 m λ 0.44,
+  // gypsum plaster 0.01 m λ 0.57, Rse 0.04, Rsi 0.13 → R_T = 1.25 m²·K/W, U = 0.80 W/(m²·K) [third-party].
+  // Tolerance ±0.005 (published to 2 decimals).
+  const r = calculateThermal(
+    wall(
+      (
+        [
+          ['Half-brick', 0.11, 0.69],
+          ['Lightweight mortar', 0.01, 0.41],
+          ['EPS', 0.03, 0.037],
+          ['Hollow brick', 0.03, 0.44],
+          ['Gypsum plaster', 0.01, 0.57],
+        ] as const
+      ).map(
+        ([name, thickness, conductivity]): Layer => ({ kind: 'homogeneous', name, thickness, conductivity }),
+      ),
+    ),
+  );
+  it('R_T = 1.25 m²·K/W', () => {
+    expect(Math.abs(r.R0 - 1.25)).toBeLessThanOrEqual(0.005);
+  });
+  it('U = 0.80 W/(m²·K)', () => {
+    expect(Math.abs(r.U0 - 0.8)).toBeLessThanOrEqual(0.005);
+  });
+});

@@ -1,19 +1,24 @@
 // `npm run bench`: prints the speed figures of the calculation engine (not a pass/fail test).
 import { benchThermal } from './thermal.bench';
+import { benchWind } from './wind.bench';
 
-const targets: Record<string, number> = { 'thermal: 10 layers, 3 bridge types': 20 };
-const results = [benchThermal()];
+interface BenchResult {
+  name: string;
+  medianMicros: number;
+  perSecond: number;
+}
+/** Target median per calculation, µs (from the issues that introduced each module). */
+const benches: [() => BenchResult, number][] = [
+  [benchThermal, 20],
+  [benchWind, 50],
+];
 
 console.log(`Skinwright benchmarks — Node ${process.version}, ${new Date().toISOString()}`);
-for (const r of results) {
-  const target = targets[r.name];
+for (const [bench, target] of benches) {
+  const r = bench();
   const verdict =
-    target === undefined
-      ? ''
-      : r.medianMicros <= target
-        ? `meets target ≤ ${target} µs`
-        : `SLOWER than target ${target} µs`;
+    r.medianMicros <= target ? `meets target ≤ ${target} µs` : `SLOWER than target ${target} µs`;
   console.log(
-    `${r.name.padEnd(40)} median ${r.medianMicros.toFixed(2).padStart(8)} µs   ${Math.round(r.perSecond).toLocaleString('en-US').padStart(10)} /s   ${verdict}`,
+    `${r.name.padEnd(48)} median ${r.medianMicros.toFixed(2).padStart(8)} µs  ${Math.round(r.perSecond).toLocaleString('en-US').padStart(10)} /s   ${verdict}`,
   );
 }

@@ -1,0 +1,260 @@
+import { traceStepSchema } from '@shared/calc/trace';
+import { z } from 'zod';
+
+/**
+ * Wind components-and-cladding contract for walls — the single source of truth for the API, the forms and the
+ * engine. Everything is SI: m/s, metres, m², pascals, newtons. The engine converts to the standard's feet and
+ * square feet internally where the standard's figures are drawn in them.
+ */
+
+export const windEditionSchema = z
+  .enum(['ASCE 7-16', 'ASCE 7-22'])
+  .describe('Edition of ASCE/SEI 7 whose chapters 26 and 30 are applied');
+
+export const exposureSchema = z
+  .enum(['B', 'C', 'D'])
+  .describe('Exposure category from the surface roughness upwind (ASCE 7 §26.7)');
+
+export const enclosureSchema = z
+  .enum(['enclosed', 'partially_enclosed', 'open'])
+  .describe('Enclosure classification (ASCE 7 §26.12); walls of open buildings are refused');
+
+export const riskCategorySchema = z
+  .enum(['I', 'II', 'III', 'IV'])
+  .describe('Risk category (ASCE 7 Table 1.5-1); informational — V is already read from that category’s map');
+
+const metres = (what: string, max: number) =>
+  z.number().positive().max(max).describe(`${what}, m (greater than 0, at most ${max})`);
+
+export const windSiteSchema = z.object({
+  edition: windEditionSchema,
+  basicWindSpeed: z
+    .number()
+    .positive()
+    .max(150)
+    .describe(
+      'Basic wind speed V from the risk-category map (3-s gust, 10 m, exposure C), m/s (greater than 0, at most 150)',
+    ),
+  riskCategory: riskCategorySchema,
+  exposure: exposureSchema,
+  Kzt: z
+    .number()
+    .min(1)
+    .max(5)
+    .describe('Topographic factor K_zt (ASCE 7 §26.8), dimensionless (1 to 5; 1.0 on flat terrain)'),
+  groundElevation: z
+    .number()
+    .min(-150)
+    .max(3000)
+    .describe('Ground elevation above sea level z_e, m (−150 to 3000) — sets K_e'),
+  keEqualsOne: z
+    .boolean()
+    .optional()
+    .describe('Take the ground elevation factor K_e = 1.0, which ASCE 7 §26.9 always permits'),
+  enclosure: enclosureSchema,
+  meanRoofHeight: metres(
+    'Mean roof height h (eave height where the roof slope θ ≤ 10°) — at most 152.4 m = 500 ft',
+    152.4,
+  ),
+  planLength: metres('Plan length of the building', 2000),
+  planWidth: metres('Plan width of the building', 2000),
+  roofSlopeDeg: z.number().min(0).max(90).describe('Roof slope θ, degrees (0 to 90)'),
+  heightOfComponent: metres(
+    'Height z of the component above ground (at most h; default h)',
+    152.4,
+  ).optional(),
+});
+
+export const spanConditionSchema = z
+  .enum(['single', 'double', 'triple'])
+  .describe('Span condition of the load–span table: single, double (two-span) or triple (three-span)');
+
+const pascals = (what: string) =>
+  z.number().positive().max(100_000).describe(`${what}, Pa (greater than 0, at most 100 000)`);
+
+export const loadSpanRowSchema = z.object({
+  span: metres('Panel span (girt spacing)', 10),
+  allowableInward: pascals('Allowable ASD inward (positive) pressure at this span'),
+  allowableOutward: pascals('Allowable ASD outward (suction) pressure at this span'),
+  allowableDeflectionPressure: pascals(
+    'Pressure that produces the table’s deflection limit at this span (optional column)',
+  ).optional(),
+});
+
+export const loadSpanTableSchema = z.object({
+  spanCondition: spanConditionSchema,
+  deflectionLimit: z
+    .string()
+    .regex(/^L\/\d{2,4}$/)
+    .describe('Deflection limit of the deflection column, e.g. "L/180"'),
+  rows: z
+    .array(loadSpanRowSchema)
+    .min(2)
+    .max(100)
+    .describe('Rows in increasing span; allowables as published by the maker (ASD)'),
+});
+
+export const clipByRatingSchema = z.object({
+  allowableLoad: z
+    .number()
+    .positive()
+    .max(1_000_000)
+    .describe('Allowable ASD load of one clip (tested or published), N (greater than 0, at most 1 000 000)'),
+});
+
+export const clipByFastenersSchema = z.object({
+  fastenerCapacity: z
+    .number()
+    .positive()
+    .max(1_000_000)
+    .describe(
+      'Allowable ASD capacity of one fastener, lesser of pull-out and pull-over, N (greater than 0, at most 1 000 000)',
+    ),
+  fastenersPerClip: z.number().int().min(1).max(20).describe('Fasteners per clip, count (1 to 20)'),
+});
+
+export const clipSchema = z.union([clipByRatingSchema, clipByFastenersSchema]);
+
+export const panelSchema = z.object({
+  loadSpanTable: loadSpanTableSchema,
+  clip: clipSchema,
+  panelModuleWidth: metres('Panel module width — tributary width along the girt', 3),
+  girtOrientation: z
+    .enum(['horizontal', 'vertical'])
+    .describe(
+      'Girt direction: horizontal girts carry vertically spanning panels, vertical girts the reverse',
+    ),
+  continuityFactor: z
+    .number()
+    .min(1)
+    .max(1.5)
+    .optional()
+    .describe(
+      'Factor on the support reaction of a continuous panel, dimensionless (1 to 1.5); default single 1.0, double 1.25, triple 1.10 (beam theory)',
+    ),
+  deflectionWindFactor: z
+    .number()
+    .min(0.42)
+    .max(1)
+    .optional()
+    .describe(
+      'Factor on the strength-level pressure for the deflection check, dimensionless (0.42 to 1; default 0.6 = ASD)',
+    ),
+  designLevel: z.literal('ASD').describe('Allowable values of the table and clip are ASD (0.6 W)'),
+});
+
+export const windScheduleInputSchema = z.object({ site: windSiteSchema, panel: panelSchema });
+
+// ------------------------------------------------------------------------------------------------ result
+
+const pa = (what: string) => z.number().describe(`${what}, Pa`);
+
+export const velocityResultSchema = z.object({
+  edition: windEditionSchema,
+  Kh: z
+    .number()
+    .describe('Velocity pressure exposure coefficient at the mean roof height K_h, dimensionless'),
+  Kz: z
+    .number()
+    .describe('Velocity pressure exposure coefficient at the component height K_z, dimensionless'),
+  Kzt: z.number().describe('Topographic factor K_zt, dimensionless'),
+  Kd: z.number().describe('Wind directionality factor K_d, dimensionless'),
+  Ke: z.number().describe('Ground elevation factor K_e, dimensionless'),
+  qh: pa('Velocity pressure at the mean roof height q_h (7-16: includes K_d; 7-22: excludes it)'),
+  qhPsf: z.number().describe('q_h, lbf/ft²'),
+  qz: pa('Velocity pressure at the component height q_z (same convention as q_h)'),
+  qzPsf: z.number().describe('q_z, lbf/ft²'),
+  equation: z.string().describe('Velocity pressure equation of the edition with its number'),
+});
+
+export const spanCheckNameSchema = z.enum(['inward', 'outward', 'deflection']);
+export const tableStatusSchema = z.enum(['ok', 'table-end', 'outside-table']);
+
+export const iterationSchema = z.object({
+  converged: z.boolean(),
+  iterations: z.number().int().describe('Fixed-point iterations used'),
+  lastChange: z.number().describe('Change of the spacing in the last iteration, m'),
+});
+
+export const spanCheckSchema = z.object({
+  check: spanCheckNameSchema,
+  status: tableStatusSchema.describe(
+    'ok: found inside the table; table-end: the table’s longest span still carries the load (no extrapolation); outside-table: even the shortest span does not',
+  ),
+  maxSpan: z.number().nullable().describe('Largest allowed panel span (girt spacing) for this check, m'),
+  demand: z.number().nullable().describe('Pressure at that span, Pa (ASD, or deflection level)'),
+  allowable: z.number().nullable().describe('Table value at that span, Pa'),
+  utilisation: z.number().nullable().describe('demand / allowable, dimensionless'),
+  iteration: iterationSchema,
+});
+
+export const zonePressureSchema = z.object({
+  effectiveArea: z.number().describe('Effective wind area A = span × max(width, span/3), m²'),
+  GCpInward: z.number().describe('External pressure coefficient, positive (toward the surface)'),
+  GCpOutward: z.number().describe('External pressure coefficient, negative (away from the surface)'),
+  strength: z.object({
+    inward: pa('Strength-level inward pressure W'),
+    outward: pa('Strength-level outward'),
+  }),
+  asd: z.object({ inward: pa('ASD inward pressure 0.6 W'), outward: pa('ASD outward pressure 0.6 W') }),
+  minimumGoverns: z.boolean().describe('True when the 16 psf (0.77 kPa) minimum net pressure governs'),
+});
+
+export const clipResultSchema = z.object({
+  capacity: z.number().describe('Allowable ASD load per clip, N'),
+  continuityFactor: z.number().describe('Reaction factor of the panel at the clip, dimensionless'),
+  maxSpacing: z.number().describe('Largest clip spacing along the girt, m'),
+  effectiveArea: z.number().describe('Tributary (= effective) area of one clip at that spacing, m²'),
+  pressure: z.number().describe('ASD pressure magnitude at the clip’s effective area, Pa'),
+  demand: z.number().describe('ASD load on one clip at the maximum spacing, N'),
+  utilisation: z.number().describe('demand / capacity, dimensionless (1 at the maximum spacing)'),
+  iteration: iterationSchema,
+});
+
+export const zoneResultSchema = z.object({
+  zone: z.union([z.literal(4), z.literal(5)]),
+  name: z.string(),
+  status: tableStatusSchema,
+  governingCheck: spanCheckNameSchema.nullable(),
+  girtSpacing: z
+    .number()
+    .nullable()
+    .describe('Maximum girt spacing = panel span, m (null outside the table)'),
+  spanChecks: z.array(spanCheckSchema),
+  pressures: zonePressureSchema.nullable().describe('Pressures at the maximum girt spacing'),
+  clip: clipResultSchema.nullable(),
+});
+
+export const windScheduleResultSchema = z.object({
+  velocity: velocityResultSchema,
+  lowRise: z.boolean().describe('h ≤ 60 ft (18.3 m): Part 1 figures; otherwise the h > 60 ft figures'),
+  figure: z.string().describe('Wall figure applied'),
+  edgeWidth: z.number().describe('End-zone width a (zone 5 at each corner), m'),
+  GCpi: z.number().describe('Magnitude of the internal pressure coefficient (GC_pi), dimensionless'),
+  minimumPressure: z.number().describe('Minimum net C&C pressure (strength level), Pa'),
+  zones: z.array(zoneResultSchema),
+  trace: z.array(traceStepSchema),
+  warnings: z.array(z.string()),
+  cautions: z.array(z.string()),
+});
+
+export type WindEdition = z.infer<typeof windEditionSchema>;
+export type Exposure = z.infer<typeof exposureSchema>;
+export type Enclosure = z.infer<typeof enclosureSchema>;
+export type WindSite = z.infer<typeof windSiteSchema>;
+export type SpanCondition = z.infer<typeof spanConditionSchema>;
+export type LoadSpanRow = z.infer<typeof loadSpanRowSchema>;
+export type LoadSpanTable = z.infer<typeof loadSpanTableSchema>;
+export type Clip = z.infer<typeof clipSchema>;
+export type Panel = z.infer<typeof panelSchema>;
+export type WindScheduleInput = z.infer<typeof windScheduleInputSchema>;
+export type VelocityResult = z.infer<typeof velocityResultSchema>;
+export type SpanCheckName = z.infer<typeof spanCheckNameSchema>;
+export type TableStatus = z.infer<typeof tableStatusSchema>;
+export type Iteration = z.infer<typeof iterationSchema>;
+export type SpanCheck = z.infer<typeof spanCheckSchema>;
+export type ZonePressure = z.infer<typeof zonePressureSchema>;
+export type ClipResult = z.infer<typeof clipResultSchema>;
+export type ZoneResult = z.infer<typeof zoneResultSchema>;
+export type WindScheduleResult = z.infer<typeof windScheduleResultSchema>;
+export type WallZone = ZoneResult['zone'];

@@ -1,0 +1,30 @@
+import raw from '@data/reference/thermal-expansion.json';
+import { z } from 'zod';
+
+const alpha = (what: string) => z.number().positive().max(5e-4).describe(`${what}, 1/K`);
+
+/** One row of data/reference/thermal-expansion.json (sources in thermal-expansion.source.md). */
+export const expansionMaterialSchema = z.object({
+  id: z.string().regex(/^[a-z0-9-]+$/),
+  name: z.string().min(1),
+  alpha: alpha('Mean linear coefficient of thermal expansion α near room temperature'),
+  published: z.string().min(1).describe('The figure as the named table prints it'),
+  range: z.object({ low: alpha('Low end'), high: alpha('High end') }).nullable(),
+  source: z.string().min(1).describe('Table the value belongs to'),
+  provenance: z.string().min(1).describe('"seen — …", "third-party — …" or "memory — verify against …"'),
+});
+export type ExpansionMaterial = z.infer<typeof expansionMaterialSchema>;
+
+const tableSchema = z
+  .object({ version: z.literal(1), note: z.string(), materials: z.array(expansionMaterialSchema).min(1) })
+  .refine((t) => new Set(t.materials.map((r) => r.id)).size === t.materials.length, {
+    message: 'material ids must be unique',
+  });
+
+/** The parsed, validated table; importing this module throws if the JSON is malformed. */
+export const expansionMaterials: readonly ExpansionMaterial[] = tableSchema.parse(raw).materials;
+
+const byId = new Map(expansionMaterials.map((r) => [r.id, r]));
+
+/** Look a material up by id; undefined when unknown. */
+export const findExpansionMaterial = (id: string): ExpansionMaterial | undefined => byId.get(id);

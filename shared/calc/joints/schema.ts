@@ -1,0 +1,158 @@
+import { traceStepSchema } from '@shared/calc/trace';
+import { z } from 'zod';
+
+/**
+ * Sealant-joint contract — the single source of truth for the API, the forms and the engine.
+ * Everything is SI: metres, °C, 1/K. A joint is sized for movement by the ASTM C1193 approach with the
+ * installation-temperature split of ASTM C1472 and the movement classes of ASTM C920.
+ */
+
+const metres = (what: string, max: number) =>
+  z.number().positive().max(max).describe(`${what}, m (greater than 0, at most ${max} m)`);
+const metresOrZero = (what: string, max: number) =>
+  z.number().nonnegative().max(max).describe(`${what}, m (0 to ${max} m)`);
+const celsius = (what: string) => z.number().min(-80).max(120).describe(`${what}, °C (−80 to 120 °C)`);
+
+export const JOINT_TYPES = ['panel_vertical', 'panel_horizontal', 'perimeter', 'corner', 'other'] as const;
+export const jointTypeSchema = z.enum(JOINT_TYPES).describe('Where the joint sits in the wall');
+
+/** ASTM C920 movement classes; 100/50 = +100 % extension / −50 % compression, the others symmetric. */
+export const MOVEMENT_CLASSES = ['12.5', '25', '35', '50', '100/50'] as const;
+export const movementClassSchema = z
+  .enum(MOVEMENT_CLASSES)
+  .describe('ASTM C920 movement class: ±12.5, ±25, ±35, ±50 %, or 100/50 (+100 % / −50 %)');
+
+const sideLength = metres(
+  'Length L of material whose movement this side puts into the joint (the panel length for a panel fixed at its far end; half of it for a panel anchored at mid-length)',
+  100,
+);
+
+export const materialSideSchema = z.object({
+  material: z.string().min(1).describe('Id of a row in data/reference/thermal-expansion.json'),
+  length: sideLength,
+});
+export const customSideSchema = z.object({
+  alpha: z
+    .number()
+    .positive()
+    .max(5e-4)
+    .describe('Declared coefficient of linear thermal expansion α, 1/K (greater than 0, at most 5 × 10⁻⁴)'),
+  label: z.string().min(1).max(120).optional().describe('What the custom α belongs to, e.g. the product'),
+  length: sideLength,
+});
+export const jointSideSchema = z.union([materialSideSchema, customSideSchema]);
+
+export const temperatureRangeSchema = z.object({
+  min: celsius('Lowest surface temperature of the moving material'),
+  max: celsius('Highest surface temperature of the moving material (dark metal in sun runs far above air)'),
+});
+
+export const installationTemperatureSchema = z.union([
+  celsius('Surface temperature when the sealant is installed'),
+  z.object({
+    min: celsius('Coolest surface temperature expected during installation'),
+    max: celsius('Warmest surface temperature expected during installation'),
+  }),
+]);
+
+export const BACKER_CELLS = ['closed_cell', 'open_cell'] as const;
+
+export const jointInputSchema = z.object({
+  name: z.string().min(1).max(120).describe('Joint mark, e.g. "VJ-1 vertical panel joint, level 3"'),
+  type: jointTypeSchema,
+  designWidth: metres('Joint width as designed (at installation)', 0.2),
+  designDepth: metres('Sealant depth as designed', 0.1).optional(),
+  sides: z
+    .array(jointSideSchema)
+    .min(1)
+    .max(2)
+    .describe('One side (joint against fixed construction) or two sides (both substrates move)'),
+  surfaceTemperatureRange: temperatureRangeSchema,
+  installationTemperature: installationTemperatureSchema,
+  otherMovement: z
+    .object({
+      extension: metresOrZero('Non-thermal opening of the joint (moisture shrinkage, drift, seismic)', 0.2),
+      compression: metresOrZero('Non-thermal closing of the joint (moisture growth, creep, drift)', 0.2),
+    })
+    .optional()
+    .describe('Non-thermal movement entered by the designer; omitted = none'),
+  sealant: z.object({ movementClass: movementClassSchema }),
+  constructionTolerance: metresOrZero('Construction tolerance added to the width', 0.05),
+  minimumPracticalWidth: metres(
+    'Smallest joint that can be tooled (default 6 mm ≈ ¼ in — common trade practice)',
+    0.05,
+  ).optional(),
+  backer: z
+    .enum(BACKER_CELLS)
+    .optional()
+    .describe('Backer rod: closed-cell (default) or open-cell polyurethane'),
+  openingDepth: metres(
+    'Depth of the joint opening from the face to the back stop; needed to decide rod or bond-breaker tape',
+    0.5,
+  ).optional(),
+});
+
+export const jointScheduleInputSchema = z.object({ joints: z.array(jointInputSchema).min(1).max(500) });
+
+const m = (what: string) => z.number().describe(`${what}, m`);
+
+export const backerSchema = z.discriminatedUnion('kind', [
+  z.object({
+    kind: z.literal('rod'),
+    cell: z.enum(BACKER_CELLS),
+    minDiameter: m('Smallest rod diameter for the joint width'),
+    maxDiameter: m('Largest rod diameter for the joint width'),
+  }),
+  z.object({
+    kind: z.literal('bond_breaker_tape'),
+    width: m('Tape width = joint width'),
+  }),
+]);
+
+export const jointResultSchema = z.object({
+  name: z.string(),
+  type: jointTypeSchema,
+  sides: z.array(
+    z.object({
+      label: z.string(),
+      alpha: z.number().describe('α used, 1/K'),
+      length: m('Moving length L'),
+      extension: m('Thermal opening α·L·ΔT_ext'),
+      compression: m('Thermal closing α·L·ΔT_comp'),
+    }),
+  ),
+  deltaTExtension: z.number().describe('Installation (warmest) → coldest surface, K'),
+  deltaTCompression: z.number().describe('Coldest installation → hottest surface, K'),
+  movementExtension: m('Total opening movement'),
+  movementCompression: m('Total closing movement'),
+  widthForExtension: m('(100/X_ext)·movementExtension + tolerance'),
+  widthForCompression: m('(100/X_comp)·movementCompression + tolerance'),
+  requiredWidth: m('Largest of the two and the minimum practical width'),
+  governing: z.enum(['extension', 'compression', 'minimum']),
+  designWidth: m('Width as designed'),
+  requiredDepth: m('Sealant depth for the design width by the depth rule'),
+  backer: backerSchema,
+  verdict: z.enum(['pass', 'fail']),
+  margin: z.number().describe('(designWidth − requiredWidth)/requiredWidth, dimensionless'),
+  marginText: z.string().describe('"meets — margin 12 %" or "short by 3.2 mm"'),
+  warnings: z.array(z.string()),
+  trace: z.array(traceStepSchema),
+});
+
+export const jointScheduleResultSchema = z.object({
+  joints: z.array(jointResultSchema),
+  passCount: z.number().int(),
+  failCount: z.number().int(),
+});
+
+export type JointType = z.infer<typeof jointTypeSchema>;
+export type MovementClass = z.infer<typeof movementClassSchema>;
+export type JointSide = z.infer<typeof jointSideSchema>;
+export type TemperatureRange = z.infer<typeof temperatureRangeSchema>;
+export type InstallationTemperature = z.infer<typeof installationTemperatureSchema>;
+export type BackerCell = (typeof BACKER_CELLS)[number];
+export type JointInput = z.infer<typeof jointInputSchema>;
+export type JointScheduleInput = z.infer<typeof jointScheduleInputSchema>;
+export type Backer = z.infer<typeof backerSchema>;
+export type JointResult = z.infer<typeof jointResultSchema>;
+export type JointScheduleResult = z.infer<typeof jointScheduleResultSchema>;

@@ -1,7 +1,17 @@
+import { demoJointSchedule } from '@shared/calc/joints/fixtures';
+import { calculateJointSchedule } from '@shared/calc/joints/joints';
+import { jointScheduleInputSchema, jointScheduleResultSchema } from '@shared/calc/joints/schema';
+import { takeoffToCsv } from '@shared/calc/takeoff/csv';
+import { demoElevation } from '@shared/calc/takeoff/fixtures';
+import { takeoffInputSchema, takeoffResultSchema } from '@shared/calc/takeoff/schema';
+import { calculateTakeoff } from '@shared/calc/takeoff/takeoff';
 import { metalPanelWall } from '@shared/calc/thermal/fixtures';
 import { materialSchema, materials } from '@shared/calc/thermal/materials';
 import { thermalInputSchema, thermalResultSchema } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
+import { calculateWindSchedule } from '@shared/calc/wind/attachment';
+import { demoWindSchedule } from '@shared/calc/wind/fixtures';
+import { windScheduleInputSchema, windScheduleResultSchema } from '@shared/calc/wind/schema';
 import { apiErrorSchema } from '@shared/schemas/common';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
@@ -33,6 +43,59 @@ export const calcRoutes = [
       ...calcErrors,
     },
     handler: async ({ body }) => calculateThermal(body),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/v1/calc/wind',
+    summary:
+      'Wall components-and-cladding pressures (ASCE 7-16 / 7-22) and the girt and clip spacing per zone',
+    tag: 'Calculations',
+    access: { kind: 'public' },
+    body: windScheduleInputSchema,
+    example: demoWindSchedule(),
+    responses: {
+      200: { description: 'Spacing schedule per zone with a trace', schema: windScheduleResultSchema },
+      ...calcErrors,
+    },
+    handler: async ({ body }) => calculateWindSchedule(body),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/v1/calc/joints',
+    summary: 'Sealant joint schedule: movement, required width and depth, backer, verdict',
+    tag: 'Calculations',
+    access: { kind: 'public' },
+    body: jointScheduleInputSchema,
+    example: { joints: demoJointSchedule() },
+    responses: {
+      200: { description: 'Joint schedule with a trace per joint', schema: jointScheduleResultSchema },
+      ...calcErrors,
+    },
+    handler: async ({ body }) => calculateJointSchedule(body.joints),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/v1/calc/takeoff',
+    summary:
+      'Material takeoff from a simple elevation (joints, sealant packages, tape, trim, fasteners); `?format=csv` for CSV',
+    tag: 'Calculations',
+    access: { kind: 'public' },
+    query: z.object({ format: z.enum(['json', 'csv']).default('json') }),
+    body: takeoffInputSchema,
+    example: demoElevation(),
+    responses: {
+      200: {
+        description: 'Quantities with a trace (JSON), or the same lines as CSV',
+        schema: takeoffResultSchema,
+      },
+      ...calcErrors,
+    },
+    handler: async ({ body, query, res }) => {
+      const result = calculateTakeoff(body);
+      if (query.format === 'json') return result;
+      res.type('text/csv').attachment('takeoff.csv').send(takeoffToCsv(result));
+      return undefined;
+    },
   }),
   defineRoute({
     method: 'get',

@@ -1,0 +1,58 @@
+import { demoJointSchedule } from '@shared/calc/joints/fixtures';
+import { demoElevation } from '@shared/calc/takeoff/fixtures';
+import { demoWindSchedule } from '@shared/calc/wind/fixtures';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createTestApp, type TestApp } from '../setup/app';
+
+/** The public calculation API is stateless: one database is enough here. */
+describe('public calculation API', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp('pglite');
+  });
+  afterAll(async () => {
+    await t?.close();
+  });
+
+  it('computes the wind schedule per zone and refuses a negative speed with the field', async () => {
+    const ok = await t.anonymous().post('/api/v1/calc/wind').send(demoWindSchedule());
+    expect(ok.status).toBe(200);
+    expect(ok.body.zones.map((z: { zone: string }) => z.zone)).toEqual(expect.arrayContaining([4, 5]));
+    const bad = demoWindSchedule();
+    bad.site.basicWindSpeed = -40;
+    const res = await t.anonymous().post('/api/v1/calc/wind').send(bad);
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields['site.basicWindSpeed']).toBeDefined();
+  });
+
+  it('sizes sealant joints and refuses a minimum temperature above the maximum with 4xx naming the field', async () => {
+    const ok = await t.anonymous().post('/api/v1/calc/joints').send({ joints: demoJointSchedule() });
+    expect(ok.status).toBe(200);
+    expect(ok.body.joints[0].requiredWidth).toBeGreaterThan(0);
+    const joints = demoJointSchedule();
+    joints[0]!.surfaceTemperatureRange = { min: 60, max: -20 };
+    const res = await t.anonymous().post('/api/v1/calc/joints').send({ joints });
+    expect([400, 422]).toContain(res.status);
+    expect(Object.keys(res.body.error.fields)[0]).toMatch(/^joints\.0\.surfaceTemperatureRange/);
+  });
+
+  it('returns the takeoff as JSON or as CSV', async () => {
+    const json = await t.anonymous().post('/api/v1/calc/takeoff').send(demoElevation());
+    expect(json.status).toBe(200);
+    expect(json.body.lines.length).toBeGreaterThan(0);
+    const csv = await t.anonymous().post('/api/v1/calc/takeoff?format=csv').send(demoElevation());
+    expect(csv.status).toBe(200);
+    expect(csv.headers['content-type']).toMatch(/text\/csv/);
+    expect(csv.text.split('\r\n').length).toBeGreaterThan(3);
+  });
+
+  it('never answers NaN or a 5xx for absurd numbers', async () => {
+    for (const n of [1e308, -1e308, 0, -0]) {
+      const input = demoWindSchedule();
+      input.site.meanRoofHeight = n;
+      const res = await t.anonymous().post('/api/v1/calc/wind').send(input);
+      expect(res.status).toBeLessThan(500);
+      expect(res.text).not.toMatch(/NaN|Infinity/);
+    }
+  });
+});

@@ -1,0 +1,92 @@
+import { uuidParam } from '@shared/schemas/common';
+import type { QueryClient } from '@tanstack/react-query';
+import { createBrowserRouter, data, type LoaderFunctionArgs, redirect } from 'react-router';
+import { meQueryOptions } from '../features/me/api/get-me';
+import { projectQueryOptions } from '../features/projects/api/get-project';
+import { signInPath } from '../lib/safe-next';
+import { AppShell } from './layout/AppShell';
+import { ProjectLayout } from './layout/ProjectLayout';
+import { RequireSession } from './layout/RequireSession';
+import { AdminMailPage } from './routes/AdminMailPage';
+import { ForgotPasswordPage } from './routes/ForgotPasswordPage';
+import { InvitePage } from './routes/InvitePage';
+import { NewProjectPage } from './routes/NewProjectPage';
+import { NotFoundPage } from './routes/NotFoundPage';
+import { ProjectActivityPage } from './routes/ProjectActivityPage';
+import { ProjectMembersPage } from './routes/ProjectMembersPage';
+import { ProjectOverviewPage } from './routes/ProjectOverviewPage';
+import { ProjectsPage } from './routes/ProjectsPage';
+import { ResetPasswordPage } from './routes/ResetPasswordPage';
+import { RouteError } from './routes/RouteError';
+import { SettingsPage } from './routes/SettingsPage';
+import { SignInPage } from './routes/SignInPage';
+import { SignUpPage } from './routes/SignUpPage';
+
+/**
+ * Routes. Loaders use the same query options as the components (ensureQueryData), so a page renders
+ * from the cache the loader filled. Everything below `RequireSession` needs a signed-in person.
+ */
+export function createAppRouter(queryClient: QueryClient) {
+  const requireSession = async ({ request }: LoaderFunctionArgs) => {
+    const me = await queryClient.ensureQueryData(meQueryOptions());
+    if (!me) {
+      const url = new URL(request.url);
+      throw redirect(signInPath(url.pathname + url.search));
+    }
+    return null;
+  };
+
+  const requireSiteAdmin = async () => {
+    const me = await queryClient.ensureQueryData(meQueryOptions());
+    if (me?.siteRole !== 'admin') throw data('This page is for site administrators.', { status: 403 });
+    return null;
+  };
+
+  const loadProject = async ({ params }: LoaderFunctionArgs) => {
+    if (!uuidParam.safeParse({ id: params.id }).success) throw data('No such project.', { status: 404 });
+    await queryClient.ensureQueryData(projectQueryOptions(params.id as string));
+    return null;
+  };
+
+  return createBrowserRouter([
+    {
+      element: <AppShell />,
+      // Shown while the first loaders (the session check) run.
+      hydrateFallbackElement: <p className="p-8 font-serif text-2xl">Skinwright</p>,
+      children: [
+        {
+          errorElement: <RouteError />,
+          children: [
+            { path: '/sign-in', element: <SignInPage /> },
+            { path: '/sign-up', element: <SignUpPage /> },
+            { path: '/forgot-password', element: <ForgotPasswordPage /> },
+            { path: '/reset-password', element: <ResetPasswordPage /> },
+            { path: '/invite/:token', element: <InvitePage /> },
+            {
+              loader: requireSession,
+              element: <RequireSession />,
+              children: [
+                { path: '/', loader: () => redirect('/projects') },
+                { path: '/projects', element: <ProjectsPage /> },
+                { path: '/projects/new', element: <NewProjectPage /> },
+                {
+                  path: '/projects/:id',
+                  loader: loadProject,
+                  element: <ProjectLayout />,
+                  children: [
+                    { index: true, element: <ProjectOverviewPage /> },
+                    { path: 'members', element: <ProjectMembersPage /> },
+                    { path: 'activity', element: <ProjectActivityPage /> },
+                  ],
+                },
+                { path: '/settings', element: <SettingsPage /> },
+                { path: '/admin/mail', loader: requireSiteAdmin, element: <AdminMailPage /> },
+              ],
+            },
+            { path: '*', element: <NotFoundPage /> },
+          ],
+        },
+      ],
+    },
+  ]);
+}

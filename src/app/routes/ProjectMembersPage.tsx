@@ -1,0 +1,58 @@
+import { can } from '@shared/auth/permissions';
+import { useParams } from 'react-router';
+import { Loading } from '../../components/ui/Loading';
+import { Notice } from '../../components/ui/Notice';
+import { useMe } from '../../features/me/api/get-me';
+import { useMembers } from '../../features/members/api/get-members';
+import { InviteForm } from '../../features/members/components/InviteForm';
+import { MembersTable } from '../../features/members/components/MembersTable';
+import { PendingInvitations } from '../../features/members/components/PendingInvitations';
+import { useProject } from '../../features/projects/api/get-project';
+import { errorMessage } from '../../lib/api';
+
+export function ProjectMembersPage() {
+  const { id = '' } = useParams();
+  const { data: project } = useProject(id);
+  const me = useMe();
+  const members = useMembers(id);
+  if (!project) return null;
+
+  const mayInvite = can(project.myRole, 'members.invite') && project.archivedAt === null;
+
+  return (
+    <div className="flex flex-col gap-10">
+      <title>{`People · ${project.name} · Skinwright`}</title>
+      <section aria-labelledby="people-heading" className="flex flex-col gap-3">
+        <h2 id="people-heading" className="text-2xl">
+          People and roles
+        </h2>
+        {members.isPending ? (
+          <Loading what="Loading people" />
+        ) : members.isError ? (
+          <Notice tone="caution" title={errorMessage(members.error)} live />
+        ) : (
+          <MembersTable
+            projectId={id}
+            members={members.data.members}
+            myRole={project.myRole}
+            myUserId={me.data?.id}
+          />
+        )}
+      </section>
+
+      {mayInvite ? (
+        <>
+          <section className="border-t border-ink pt-6">
+            <InviteForm projectId={id} />
+          </section>
+          <section aria-labelledby="pending-heading" className="flex flex-col gap-3">
+            <h2 id="pending-heading" className="text-xl">
+              Waiting for an answer
+            </h2>
+            {members.data ? <PendingInvitations invitations={members.data.invitations} /> : null}
+          </section>
+        </>
+      ) : null}
+    </div>
+  );
+}

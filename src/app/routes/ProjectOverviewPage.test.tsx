@@ -1,0 +1,81 @@
+import type { ProjectRole } from '@shared/auth/permissions';
+import type { Project } from '@shared/schemas/project';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { cleanup, render, screen } from '@testing-library/react';
+import { createMemoryRouter, RouterProvider } from 'react-router';
+import { afterEach, describe, expect, it } from 'vitest';
+import { projectKeys } from '../../lib/query-keys';
+import { UnitSystemProvider } from '../../lib/unit-system';
+import { ProjectOverviewPage } from './ProjectOverviewPage';
+
+afterEach(cleanup);
+
+const id = '11111111-1111-4111-8111-111111111111';
+const base: Project = {
+  id,
+  organisationId: '22222222-2222-4222-8222-222222222222',
+  organisationName: 'Arch & Co',
+  name: 'Harbour Depot',
+  number: '24-017',
+  description: '',
+  siteAddress: '1 Quay Street',
+  climateZone: '5A',
+  elevationM: 12,
+  buildingHeightM: 9.144,
+  planLengthM: 60,
+  planWidthM: 30,
+  indoorTempC: 21,
+  indoorRh: 0.35,
+  winterDesignTempC: -20,
+  summerDesignTempC: 31,
+  archivedAt: null,
+  version: 3,
+  createdAt: '2025-01-01T00:00:00Z',
+  updatedAt: '2025-01-02T00:00:00Z',
+  myRole: 'owner',
+};
+
+function renderOverview(myRole: ProjectRole, system: 'SI' | 'IP' = 'SI') {
+  const qc = new QueryClient({ defaultOptions: { queries: { staleTime: Number.POSITIVE_INFINITY } } });
+  qc.setQueryData(projectKeys.detail(id), { ...base, myRole });
+  const router = createMemoryRouter([{ path: '/projects/:id', element: <ProjectOverviewPage /> }], {
+    initialEntries: [`/projects/${id}`],
+  });
+  return render(
+    <QueryClientProvider client={qc}>
+      <UnitSystemProvider value={system}>
+        <RouterProvider router={router} />
+      </UnitSystemProvider>
+    </QueryClientProvider>,
+  );
+}
+
+describe('Project overview permissions', () => {
+  it('shows editing and archiving to the owner', async () => {
+    renderOverview('owner');
+    expect(await screen.findByRole('button', { name: 'Edit site data' })).toBeTruthy();
+    expect(screen.getByRole('button', { name: 'Archive project…' })).toBeTruthy();
+  });
+
+  it('lets an architect edit but not archive', async () => {
+    renderOverview('architect');
+    expect(await screen.findByRole('button', { name: 'Edit site data' })).toBeTruthy();
+    expect(screen.queryByRole('button', { name: /Archive/ })).toBeNull();
+  });
+
+  it.each<ProjectRole>(['envelope_consultant', 'engineer', 'subcontractor', 'viewer'])(
+    'hides editing and archiving from a %s',
+    async (role) => {
+      renderOverview(role);
+      expect(await screen.findByText('1 Quay Street')).toBeTruthy();
+      expect(screen.queryByRole('button', { name: 'Edit site data' })).toBeNull();
+      expect(screen.queryByRole('button', { name: /Archive/ })).toBeNull();
+    },
+  );
+
+  it('sets the title block in the person’s units', async () => {
+    renderOverview('viewer', 'IP');
+    expect(await screen.findByText('30 ft')).toBeTruthy();
+    expect(screen.getByText('\u22124 °F')).toBeTruthy();
+  });
+});

@@ -1,0 +1,88 @@
+import type { UnitSystem } from '@shared/units';
+import { Loading } from '../../components/ui/Loading';
+import { Notice } from '../../components/ui/Notice';
+import { PageHeader } from '../../components/ui/PageHeader';
+import { useMe } from '../../features/me/api/get-me';
+import { useUpdatePreferences } from '../../features/me/api/update-preferences';
+import { errorMessage } from '../../lib/api';
+
+const CHOICES: { value: UnitSystem; title: string; example: string }[] = [
+  { value: 'SI', title: 'SI', example: 'lengths in m, temperatures in °C' },
+  { value: 'IP', title: 'Inch-pound (IP)', example: 'lengths in ft, temperatures in °F' },
+];
+
+export function SettingsPage() {
+  const me = useMe();
+  const update = useUpdatePreferences();
+  if (!me.data) return <Loading what="Loading your settings" />;
+  const current = me.data.unitSystem;
+
+  return (
+    <div className="max-w-form">
+      <title>Settings · Skinwright</title>
+      <PageHeader title="Settings" />
+
+      <fieldset className="flex flex-col gap-3">
+        <legend className="mb-2 font-serif text-xl font-semibold">Units shown</legend>
+        <p className="text-sm text-ink-muted">
+          Values are always stored in SI; this only changes what you see and type. Relative humidity is always
+          in %.
+        </p>
+        {CHOICES.map((c) => (
+          <label
+            key={c.value}
+            className={`flex cursor-pointer items-start gap-3 border px-4 py-3 ${current === c.value ? 'border-ink bg-paper-raised' : 'border-rule'}`}
+          >
+            <input
+              type="radio"
+              name="unitSystem"
+              value={c.value}
+              checked={current === c.value}
+              onChange={() => update.mutate(c.value)}
+              className="mt-1 accent-ink"
+            />
+            <span>
+              <span className="block font-semibold">{c.title}</span>
+              <span className="block text-sm text-ink-muted">{c.example}</span>
+            </span>
+          </label>
+        ))}
+        {update.isError ? (
+          <Notice tone="caution" title={`Not saved: ${errorMessage(update.error)}`} live />
+        ) : null}
+        {update.isSuccess ? (
+          <p role="status" className="text-sm">
+            Saved.
+          </p>
+        ) : null}
+      </fieldset>
+
+      <section aria-labelledby="account-heading" className="mt-10 flex flex-col gap-3">
+        <h2 id="account-heading" className="border-b border-ink pb-2 text-xl">
+          Account
+        </h2>
+        <dl className="grid grid-cols-[auto_1fr] gap-x-6 gap-y-2">
+          <dt className="label-caps pt-1">Name</dt>
+          <dd>{me.data.name}</dd>
+          <dt className="label-caps pt-1">E-mail</dt>
+          <dd className="break-all">{me.data.email}</dd>
+          <dt className="label-caps pt-1">Firms</dt>
+          <dd>
+            {me.data.organisations.length === 0 ? (
+              <span className="text-ink-muted">None</span>
+            ) : (
+              <ul>
+                {me.data.organisations.map((o) => (
+                  <li key={o.id}>
+                    {o.name}{' '}
+                    <span className="text-ink-muted">({o.role === 'admin' ? 'firm admin' : 'member'})</span>
+                  </li>
+                ))}
+              </ul>
+            )}
+          </dd>
+        </dl>
+      </section>
+    </div>
+  );
+}

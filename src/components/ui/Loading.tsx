@@ -1,0 +1,8 @@
+/** A quiet, announced loading line (no spinner: the sheet just says what it is waiting for). */
+export function Loading({ what = 'Loading' }: { what?: string }) {
+  return (
+    <p role="status" className="py-6 text-ink-muted">
+      {what}…
+    </p>
+  );
+}

@@ -1,0 +1,149 @@
+import { can, PROJECT_ROLE_LABELS, PROJECT_ROLES, type ProjectRole } from '@shared/auth/permissions';
+import type { Member } from '@shared/schemas/members';
+import { useId, useState } from 'react';
+import { Button } from '../../../components/ui/Button';
+import { Select } from '../../../components/ui/Select';
+import { Table, Td, Th } from '../../../components/ui/Table';
+import { errorMessage } from '../../../lib/api';
+import { useRemoveMember } from '../api/remove-member';
+import { useUpdateMemberRole } from '../api/update-member-role';
+
+interface MembersTableProps {
+  projectId: string;
+  members: Member[];
+  /** The signed-in person's role on this project: decides which actions are shown. */
+  myRole: ProjectRole;
+  myUserId: string | undefined;
+}
+
+/**
+ * Everyone on the project with their firm and role. People whose role allows `members.manage` can change
+ * another member's role or remove them (never their own row: that needs another owner).
+ */
+export function MembersTable({ projectId, members, myRole, myUserId }: MembersTableProps) {
+  const manage = can(myRole, 'members.manage');
+  return (
+    <Table caption="People on this project">
+      <thead>
+        <tr>
+          <Th>Name</Th>
+          <Th>E-mail</Th>
+          <Th>Firm</Th>
+          <Th>Role</Th>
+          {manage ? (
+            <Th>
+              <span className="sr-only">Remove</span>
+            </Th>
+          ) : null}
+        </tr>
+      </thead>
+      <tbody>
+        {members.map((m) => {
+          const isMe = m.userId === myUserId;
+          return manage && !isMe ? (
+            <ManagedRow key={m.id} projectId={projectId} member={m} />
+          ) : (
+            <tr key={m.id}>
+              <Td>
+                <span className="font-semibold">{m.name}</span>
+                {isMe ? <span className="ml-2 text-ink-muted">(you)</span> : null}
+              </Td>
+              <Td className="break-all">{m.email}</Td>
+              <Td>{m.organisationName ?? '—'}</Td>
+              <Td className="whitespace-nowrap">{PROJECT_ROLE_LABELS[m.role]}</Td>
+              {manage ? <Td /> : null}
+            </tr>
+          );
+        })}
+      </tbody>
+    </Table>
+  );
+}
+
+function ManagedRow({ projectId, member }: { projectId: string; member: Member }) {
+  const selectId = useId();
+  const [role, setRole] = useState<ProjectRole>(member.role);
+  const [confirmRemove, setConfirmRemove] = useState(false);
+  const updateRole = useUpdateMemberRole(projectId);
+  const remove = useRemoveMember(projectId);
+  const error = updateRole.error ?? remove.error;
+
+  return (
+    <tr>
+      <Td>
+        <span className="font-semibold">{member.name}</span>
+      </Td>
+      <Td className="break-all">{member.email}</Td>
+      <Td>{member.organisationName ?? '—'}</Td>
+      <Td>
+        <div className="flex flex-wrap items-center gap-2">
+          <label htmlFor={selectId} className="sr-only">
+            Role for {member.name}
+          </label>
+          <Select
+            id={selectId}
+            value={role}
+            onChange={(e) => setRole(e.target.value as ProjectRole)}
+            className="w-auto py-1 text-sm"
+          >
+            {PROJECT_ROLES.map((r) => (
+              <option key={r} value={r}>
+                {PROJECT_ROLE_LABELS[r]}
+              </option>
+            ))}
+          </Select>
+          {role !== member.role ? (
+            <>
+              <Button
+                variant="secondary"
+                className="px-3 py-1"
+                busy={updateRole.isPending}
+                busyLabel="Saving…"
+                onClick={() => updateRole.mutate({ memberId: member.id, role })}
+              >
+                Save role
+              </Button>
+              <Button variant="quiet" className="px-2 py-1" onClick={() => setRole(member.role)}>
+                Undo
+              </Button>
+            </>
+          ) : null}
+        </div>
+        {error ? (
+          <p role="alert" className="mt-1 text-sm text-caution">
+            {errorMessage(error)}
+          </p>
+        ) : null}
+      </Td>
+      <Td className="whitespace-nowrap">
+        {confirmRemove ? (
+          <fieldset className="flex flex-wrap items-center gap-2">
+            <legend className="mb-1 text-sm">Remove {member.name} from this project?</legend>
+            <Button
+              variant="danger"
+              className="px-3 py-1"
+              busy={remove.isPending}
+              busyLabel="Removing…"
+              onClick={() => remove.mutate(member.id)}
+            >
+              Remove
+            </Button>
+            <Button
+              variant="quiet"
+              className="px-2 py-1"
+              onClick={() => setConfirmRemove(false)}
+              disabled={remove.isPending}
+            >
+              Keep
+            </Button>
+          </fieldset>
+        ) : (
+          <Button variant="quiet" className="px-2 py-1" onClick={() => setConfirmRemove(true)}>
+            Remove…
+            <span className="sr-only"> {member.name}</span>
+          </Button>
+        )}
+      </Td>
+    </tr>
+  );
+}

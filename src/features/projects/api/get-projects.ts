@@ -1,0 +1,18 @@
+import { projectSchema } from '@shared/schemas/project';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { z } from 'zod';
+import { apiRequest } from '../../../lib/api';
+import { type ProjectListFilter, projectKeys } from '../../../lib/query-keys';
+
+const projectListSchema = z.object({ projects: z.array(projectSchema) });
+
+/** `GET /api/projects?archived=…` */
+export const getProjects = (filter: ProjectListFilter, signal?: AbortSignal) =>
+  apiRequest(`/api/projects?archived=${filter.archived}`, projectListSchema, { signal }).then(
+    (r) => r.projects,
+  );
+
+export const projectsQueryOptions = (filter: ProjectListFilter) =>
+  queryOptions({ queryKey: projectKeys.list(filter), queryFn: ({ signal }) => getProjects(filter, signal) });
+
+export const useProjects = (filter: ProjectListFilter) => useQuery(projectsQueryOptions(filter));

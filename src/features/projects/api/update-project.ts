@@ -1,0 +1,46 @@
+import { type Project, type ProjectInput, projectSchema } from '@shared/schemas/project';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { apiRequest, isApiRequestError } from '../../../lib/api';
+import { auditKeys, projectKeys } from '../../../lib/query-keys';
+
+/** `PUT /api/projects/:id` with the version the edit was based on. */
+export const updateProject = ({
+  id,
+  version,
+  changes,
+}: {
+  id: string;
+  version: number;
+  changes: ProjectInput;
+}) =>
+  apiRequest(`/api/projects/${encodeURIComponent(id)}`, projectSchema, {
+    method: 'PUT',
+    body: { version, changes },
+  });
+
+const conflictBodySchema = z.object({ current: projectSchema });
+
+/** On a 409 `version_conflict`, the server sends the project as it now stands; null for any other error. */
+export function conflictingProject(error: unknown): Project | null {
+  if (!isApiRequestError(error) || error.status !== 409 || error.code !== 'version_conflict') return null;
+  const parsed = conflictBodySchema.safeParse(error.body);
+  return parsed.success ? parsed.data.current : null;
+}
+
+export function useUpdateProject() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: updateProject,
+    onSuccess: (project) => {
+      qc.setQueryData(projectKeys.detail(project.id), project);
+      void qc.invalidateQueries({ queryKey: projectKeys.lists() });
+      void qc.invalidateQueries({ queryKey: auditKeys.list(project.id) });
+    },
+    onError: (error) => {
+      // Someone else saved first: show their version wherever the project is displayed.
+      const current = conflictingProject(error);
+      if (current) qc.setQueryData(projectKeys.detail(current.id), current);
+    },
+  });
+}

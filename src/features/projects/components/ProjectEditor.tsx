@@ -1,0 +1,170 @@
+import type { Project, ProjectInput } from '@shared/schemas/project';
+import { useState } from 'react';
+import { Button } from '../../../components/ui/Button';
+import { Notice } from '../../../components/ui/Notice';
+import { Table, Td, Th } from '../../../components/ui/Table';
+import { formatDateTime } from '../../../lib/format';
+import {
+  formatProjectFieldValue,
+  PROJECT_INPUT_FIELDS,
+  projectFieldLabel,
+} from '../../../lib/project-fields';
+import { useUnitSystem } from '../../../lib/unit-system';
+import { conflictingProject, useUpdateProject } from '../api/update-project';
+import { ProjectForm, type ProjectFormValues, projectToFormValues } from './ProjectForm';
+
+type Field = keyof ProjectInput;
+
+interface Conflict {
+  /** The revision the edit started from. */
+  base: Project;
+  /** What the other person saved. */
+  theirs: Project;
+  /** The values this person tried to save. */
+  mine: ProjectInput;
+}
+
+const same = (a: unknown, b: unknown) => String(a ?? '') === String(b ?? '');
+
+/** Keep every field this person changed; take the saved revision's value everywhere else. */
+export function mergeEdits({ base, theirs, mine }: Conflict): ProjectFormValues {
+  const merged = projectToFormValues(theirs) as Record<Field, unknown>;
+  for (const f of PROJECT_INPUT_FIELDS) if (!same(mine[f], base[f])) merged[f] = mine[f];
+  return merged as ProjectFormValues;
+}
+
+/**
+ * Edits a project's site data. Every save names the revision it started from. When someone else saved
+ * in between, nothing is lost silently: the form keeps the person's edits, a table shows the starting
+ * value, theirs and the saved one side by side, and the person chooses to carry their changes onto the
+ * saved revision or to load the saved revision instead.
+ */
+export function ProjectEditor({ project, onDone }: { project: Project; onDone: () => void }) {
+  const update = useUpdateProject();
+  const system = useUnitSystem();
+  const [base, setBase] = useState<Project>(project);
+  const [formValues, setFormValues] = useState<ProjectFormValues>(() => projectToFormValues(project));
+  const [formKey, setFormKey] = useState(0);
+  const [conflict, setConflict] = useState<Conflict | null>(null);
+  const [carriedOnto, setCarriedOnto] = useState<number | null>(null);
+
+  async function save(values: ProjectInput) {
+    try {
+      await update.mutateAsync({ id: project.id, version: base.version, changes: values });
+      onDone();
+    } catch (e) {
+      const theirs = conflictingProject(e);
+      if (!theirs) throw e;
+      setConflict({ base, theirs, mine: values });
+    }
+  }
+
+  function restart(next: Project, values: ProjectFormValues) {
+    setBase(next);
+    setFormValues(values);
+    setFormKey((k) => k + 1);
+    setConflict(null);
+  }
+
+  const rows = conflict
+    ? PROJECT_INPUT_FIELDS.filter((f) => !same(conflict.mine[f], conflict.theirs[f])).map((f) => ({
+        field: f,
+        mineChanged: !same(conflict.mine[f], conflict.base[f]),
+        theirsChanged: !same(conflict.theirs[f], conflict.base[f]),
+      }))
+    : [];
+  const bothChanged = rows.filter((r) => r.mineChanged && r.theirsChanged);
+
+  const show = (f: Field, v: unknown) => formatProjectFieldValue(f, v, system);
+
+  const banner = conflict ? (
+    <Notice tone="warning" title="Someone else saved this project first." live>
+      <p>
+        Revision <span className="num">{conflict.theirs.version}</span> was saved at{' '}
+        <span className="num">{formatDateTime(conflict.theirs.updatedAt)}</span> while you were editing
+        revision <span className="num">{conflict.base.version}</span>. Nothing of yours has been saved yet,
+        and your edits are still in the form above.
+      </p>
+      {rows.length > 0 ? (
+        <Table caption="Where your edits and the saved revision differ">
+          <thead>
+            <tr>
+              <Th>Field</Th>
+              <Th>You started from (rev. {conflict.base.version})</Th>
+              <Th>Yours, not saved</Th>
+              <Th>Saved (rev. {conflict.theirs.version})</Th>
+            </tr>
+          </thead>
+          <tbody>
+            {rows.map((r) => (
+              <tr key={r.field}>
+                <Th scope="row" className="border-b border-rule font-normal">
+                  {projectFieldLabel(r.field)}
+                  {r.mineChanged && r.theirsChanged ? (
+                    <span className="block text-xs font-semibold">changed by both</span>
+                  ) : null}
+                </Th>
+                <Td className="num">{show(r.field, conflict.base[r.field])}</Td>
+                <Td className={`num ${r.mineChanged ? 'font-semibold' : ''}`}>
+                  {show(r.field, conflict.mine[r.field])}
+                  {r.mineChanged ? <span className="sr-only"> (your change)</span> : null}
+                </Td>
+                <Td className={`num ${r.theirsChanged ? 'font-semibold' : ''}`}>
+                  {show(r.field, conflict.theirs[r.field])}
+                  {r.theirsChanged ? <span className="sr-only"> (their change)</span> : null}
+                </Td>
+              </tr>
+            ))}
+          </tbody>
+        </Table>
+      ) : (
+        <p>Your values and the saved revision are the same.</p>
+      )}
+      <p>
+        <strong>Carry my changes over</strong> puts your changes on top of the saved revision and keeps theirs
+        elsewhere
+        {bothChanged.length > 0
+          ? `; where you both changed a field (${bothChanged.map((r) => projectFieldLabel(r.field)).join(', ')}), yours is kept`
+          : ''}
+        . Nothing is saved until you press Save.
+      </p>
+      <div className="flex flex-wrap gap-3 pt-1">
+        <Button
+          variant="secondary"
+          onClick={() => {
+            setCarriedOnto(conflict.theirs.version);
+            restart(conflict.theirs, mergeEdits(conflict));
+          }}
+        >
+          Carry my changes over
+        </Button>
+        <Button
+          variant="secondary"
+          onClick={() => {
+            setCarriedOnto(null);
+            restart(conflict.theirs, projectToFormValues(conflict.theirs));
+          }}
+        >
+          Load the saved revision (discard my edits)
+        </Button>
+      </div>
+    </Notice>
+  ) : carriedOnto !== null ? (
+    <Notice
+      tone="info"
+      title={`Your changes are now on top of revision ${carriedOnto}. Check them, then save.`}
+    />
+  ) : null;
+
+  return (
+    <ProjectForm
+      key={formKey}
+      defaultValues={formValues}
+      submitLabel="Save site data"
+      onSubmit={save}
+      onCancel={onDone}
+      banner={banner}
+      submitDisabled={conflict !== null}
+    />
+  );
+}

@@ -1,0 +1,77 @@
+import { celsiusToFahrenheit, FOOT, fahrenheitToCelsius, type UnitSystem } from '@shared/units';
+
+/**
+ * The quantities a form or a title block shows, and how each crosses the SI/IP edge.
+ * Everything is stored in SI (m, °C, RH as a 0–1 fraction); only display text is converted.
+ */
+export type Quantity = 'length' | 'temperature' | 'relativeHumidity';
+
+interface QuantitySpec {
+  unit: Record<UnitSystem, string>;
+  /** Decimals shown (trailing zeros trimmed). */
+  decimals: Record<UnitSystem, number>;
+  toDisplay: (si: number, system: UnitSystem) => number;
+  fromDisplay: (shown: number, system: UnitSystem) => number;
+}
+
+export const QUANTITIES: Record<Quantity, QuantitySpec> = {
+  length: {
+    unit: { SI: 'm', IP: 'ft' },
+    decimals: { SI: 3, IP: 2 },
+    toDisplay: (m, s) => (s === 'IP' ? m / FOOT : m),
+    fromDisplay: (v, s) => (s === 'IP' ? v * FOOT : v),
+  },
+  temperature: {
+    unit: { SI: '°C', IP: '°F' },
+    decimals: { SI: 1, IP: 1 },
+    toDisplay: (c, s) => (s === 'IP' ? celsiusToFahrenheit(c) : c),
+    fromDisplay: (v, s) => (s === 'IP' ? fahrenheitToCelsius(v) : v),
+  },
+  relativeHumidity: {
+    unit: { SI: '%', IP: '%' },
+    decimals: { SI: 1, IP: 1 },
+    toDisplay: (fraction) => fraction * 100,
+    fromDisplay: (percent) => percent / 100,
+  },
+};
+
+export const unitOf = (q: Quantity, system: UnitSystem) => QUANTITIES[q].unit[system];
+
+/** Round to the quantity's decimals and trim trailing zeros; never returns "NaN" (returns "" instead). */
+export function formatNumber(value: number, decimals: number): string {
+  if (!Number.isFinite(value)) return '';
+  const fixed = value.toFixed(decimals);
+  const trimmed = fixed.includes('.') ? fixed.replace(/0+$/, '').replace(/\.$/, '') : fixed;
+  return trimmed === '-0' ? '0' : trimmed;
+}
+
+/** The number as it goes into an editable input (ASCII minus). */
+export function toInputText(si: number | null | undefined, q: Quantity, system: UnitSystem): string {
+  if (si == null || !Number.isFinite(si)) return '';
+  const spec = QUANTITIES[q];
+  return formatNumber(spec.toDisplay(si, system), spec.decimals[system]);
+}
+
+/** The number as it is read (typographic minus, thin space before the unit). */
+export function formatQuantity(si: number | null | undefined, q: Quantity, system: UnitSystem): string {
+  const text = toInputText(si, q, system);
+  if (text === '') return '—';
+  const unit = unitOf(q, system);
+  return `${text.replace(/^-/, '\u2212')}\u202f${unit}`;
+}
+
+export type ParseResult = { kind: 'empty' } | { kind: 'invalid' } | { kind: 'ok'; si: number };
+
+/**
+ * Read what someone typed. Accepts an optional sign (ASCII or typographic minus), digits and one decimal
+ * point; refuses anything else (thousands separators, units, letters) rather than guessing.
+ */
+export function parseInput(text: string, q: Quantity, system: UnitSystem): ParseResult {
+  const t = text.trim().replace(/\u2212/g, '-');
+  if (t === '') return { kind: 'empty' };
+  if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return { kind: 'invalid' };
+  const shown = Number(t);
+  if (!Number.isFinite(shown)) return { kind: 'invalid' };
+  const si = QUANTITIES[q].fromDisplay(shown, system);
+  return Number.isFinite(si) ? { kind: 'ok', si } : { kind: 'invalid' };
+}

@@ -1,0 +1,42 @@
+/**
+ * Query-key factories, one per resource ("effective query keys"): all → lists → list(filter) →
+ * details → detail(id). Mutations invalidate by prefix. They live here, not inside each feature, so a
+ * feature can invalidate another's cache (e.g. an edit invalidates the activity log) without importing it.
+ */
+export type ProjectListFilter = { archived: boolean };
+
+export const meKeys = {
+  all: ['me'] as const,
+  current: () => [...meKeys.all, 'current'] as const,
+};
+
+export const projectKeys = {
+  all: ['projects'] as const,
+  lists: () => [...projectKeys.all, 'list'] as const,
+  list: (filter: ProjectListFilter) => [...projectKeys.lists(), filter] as const,
+  details: () => [...projectKeys.all, 'detail'] as const,
+  detail: (id: string) => [...projectKeys.details(), id] as const,
+};
+
+export const memberKeys = {
+  all: ['members'] as const,
+  lists: () => [...memberKeys.all, 'list'] as const,
+  list: (projectId: string) => [...memberKeys.lists(), projectId] as const,
+};
+
+export const invitationKeys = {
+  all: ['invitations'] as const,
+  details: () => [...invitationKeys.all, 'detail'] as const,
+  detail: (token: string) => [...invitationKeys.details(), token] as const,
+};
+
+export const auditKeys = {
+  all: ['audit'] as const,
+  lists: () => [...auditKeys.all, 'list'] as const,
+  list: (projectId: string) => [...auditKeys.lists(), projectId] as const,
+};
+
+export const mailKeys = {
+  all: ['admin-mail'] as const,
+  lists: () => [...mailKeys.all, 'list'] as const,
+};

@@ -7,7 +7,7 @@ import {
   assemblyUpdateSchema,
   revisionListSchema,
 } from '@shared/schemas/assembly';
-import { apiErrorSchema, uuidParam } from '@shared/schemas/common';
+import { apiErrorSchema, uuidParam, versionConflictSchema } from '@shared/schemas/common';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
 
@@ -92,7 +92,10 @@ export const assemblyRoutes = [
     responses: {
       200: { description: 'The assembly at its new revision', schema: assemblySchema },
       ...errors,
-      409: { description: 'Someone saved first; `current` holds their revision', schema: apiErrorSchema },
+      409: {
+        description: 'Someone saved first; `current` holds their revision',
+        schema: versionConflictSchema(assemblySchema),
+      },
     },
     handler: ({ user, params, body, services }) =>
       services.assemblies.update(params.assemblyId, user!.id, body.version, body.input, body.note),

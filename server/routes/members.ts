@@ -1,3 +1,4 @@
+import { can } from '@shared/auth/permissions';
 import { apiErrorSchema, uuidParam } from '@shared/schemas/common';
 import {
   invitationInputSchema,
@@ -32,7 +33,11 @@ export const memberRoutes = [
       },
       ...errors,
     },
-    handler: ({ project, services }) => services.members.list(project!.id),
+    handler: async ({ project, services }) => {
+      const { members, invitations } = await services.members.list(project!.id);
+      // Pending invitations (addresses of people not yet on the project) only for those who may invite.
+      return { members, invitations: can(project!.role, 'members.invite') ? invitations : [] };
+    },
   }),
   defineRoute({
     method: 'post',

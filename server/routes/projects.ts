@@ -1,4 +1,4 @@
-import { apiErrorSchema, uuidParam } from '@shared/schemas/common';
+import { apiErrorSchema, uuidParam, versionConflictSchema } from '@shared/schemas/common';
 import { auditEntrySchema } from '@shared/schemas/me';
 import {
   projectInputSchema,
@@ -86,7 +86,10 @@ export const projectRoutes = [
       200: { description: 'The updated project', schema: projectSchema },
       400: { description: 'Invalid fields', schema: apiErrorSchema },
       ...errors,
-      409: { description: 'Someone saved first; `current` holds their version', schema: apiErrorSchema },
+      409: {
+        description: 'Someone saved first (or the project is archived); `current` holds their version',
+        schema: versionConflictSchema(projectSchema),
+      },
     },
     handler: ({ user, project, body, services }) =>
       services.projects.update(project!.id, user!.id, body.version, body.changes),

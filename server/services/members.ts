@@ -1,7 +1,7 @@
 import { createHash, randomBytes } from 'node:crypto';
 import { PROJECT_ROLE_LABELS, type ProjectRole } from '@shared/auth/permissions';
 import type { Invitation, InvitationInput, InvitationPreview, Member } from '@shared/schemas/members';
-import { and, asc, eq, ne } from 'drizzle-orm';
+import { and, asc, eq, isNull, ne } from 'drizzle-orm';
 import type { Config } from '../config';
 import type { Db } from '../db/client';
 import {
@@ -15,6 +15,7 @@ import {
 import { HttpError, notFound } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
 import { recordAudit } from './audit';
+import { archivedError } from './projects';
 
 const INVITATION_DAYS = 14;
 const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
@@ -103,11 +104,22 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
           email: 'already a member of this project',
         });
       const [project] = await db
-        .select({ name: projects.name })
+        .select({ name: projects.name, archivedAt: projects.archivedAt })
         .from(projects)
         .where(eq(projects.id, projectId));
+      if (project?.archivedAt) throw archivedError();
       const token = randomBytes(24).toString('base64url');
       const row = await db.transaction(async (tx) => {
+        // Inviting the same address again replaces the pending invitation: the old link stops working.
+        await tx
+          .delete(invitations)
+          .where(
+            and(
+              eq(invitations.projectId, projectId),
+              eq(invitations.email, input.email),
+              isNull(invitations.acceptedAt),
+            ),
+          );
         const [inv] = await tx
           .insert(invitations)
           .values({

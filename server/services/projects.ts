@@ -34,6 +34,10 @@ function toProject(row: ProjectRow, organisationName: string, myRole: ProjectRol
   };
 }
 
+/** Archived projects are read-only until restored. */
+export const archivedError = () =>
+  new HttpError(409, 'archived', 'this project is archived; restore it before changing it');
+
 export function createProjectService(db: Db) {
   async function roleOf(projectId: string, userId: string): Promise<ProjectRole | null> {
     const [m] = await db
@@ -113,6 +117,7 @@ export function createProjectService(db: Db) {
       changes: ProjectInput,
     ): Promise<Project> {
       const before = await get(projectId, userId);
+      if (before.archivedAt) throw archivedError();
       const updated = await db.transaction(async (tx) => {
         const rows = await tx
           .update(projects)

@@ -21,3 +21,6 @@ export const uuidParam = z.object({ id: z.uuid() });
 export const finite = () => z.number().refine(Number.isFinite, 'must be a finite number');
 
 export const unitSystemSchema = z.enum(['SI', 'IP']);
+
+/** A 409 for a stale save: the error plus the record as it is now, so the client can merge or reload. */
+export const versionConflictSchema = <T extends z.ZodType>(current: T) => apiErrorSchema.extend({ current });

@@ -1,4 +1,5 @@
 // `npm run bench`: prints the speed figures of the calculation engine (not a pass/fail test).
+import { benchMoisture } from './moisture.bench';
 import { benchThermal } from './thermal.bench';
 import { benchWind } from './wind.bench';
 
@@ -10,6 +11,7 @@ interface BenchResult {
 /** Target median per calculation, µs (from the issues that introduced each module). */
 const benches: [() => BenchResult, number][] = [
   [benchThermal, 20],
+  [benchMoisture, 50],
   [benchWind, 50],
 ];
 

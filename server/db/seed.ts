@@ -1,12 +1,15 @@
 import { projectRoleSchema } from '@shared/auth/permissions';
-import { projectInputSchema } from '@shared/schemas/project';
+import { assemblyInputSchema } from '@shared/schemas/assembly';
+import { projectClimateSchema, projectInputSchema, projectWindSchema } from '@shared/schemas/project';
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
 import demo from '../../data/seed/demo.json' with { type: 'json' };
+import demoAssembly from '../../data/seed/demo-assembly.json' with { type: 'json' };
 import type { Auth } from '../auth/auth';
+import { createAssemblyService } from '../services/assemblies';
 import { createProjectService } from '../services/projects';
 import type { Db } from './client';
-import { organisationMembers, organisations, projectMembers, user } from './schema';
+import { organisationMembers, organisations, projectMembers, projects as projectTable, user } from './schema';
 
 const demoSchema = z.object({
   password: z.string().min(10),
@@ -32,6 +35,10 @@ const demoSchema = z.object({
   ),
 });
 export const demoScenario = demoSchema.parse(demo);
+/** The demo project's wind data, monthly climate and first assembly (invented). */
+const demoContent = z
+  .object({ assembly: assemblyInputSchema, wind: projectWindSchema, climate: projectClimateSchema })
+  .parse(demoAssembly);
 
 /** The demo sign-in accounts, as `npm start` prints them and the README lists them. */
 export const demoAccounts = demoScenario.users.map((u) => ({
@@ -69,12 +76,20 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
       .values({ organisationId: firmIds.get(u.firm)!, userId: created.id, role: u.firmRole });
   }
   const projects = createProjectService(db);
-  for (const { owner, members, ...input } of demoScenario.projects) {
+  const assemblies = createAssemblyService(db);
+  for (const [index, { owner, members, ...input }] of demoScenario.projects.entries()) {
     const created = await projects.create(userIds.get(owner)!, input);
     for (const m of members)
       await db
         .insert(projectMembers)
         .values({ projectId: created.id, userId: userIds.get(m.email)!, role: m.role });
+    if (index > 0) continue;
+    // The demo project carries wind data, a monthly climate and one assembly with every module's data.
+    await db
+      .update(projectTable)
+      .set({ wind: demoContent.wind, climate: demoContent.climate })
+      .where(eq(projectTable.id, created.id));
+    await assemblies.create(created.id, userIds.get(owner)!, demoContent.assembly);
   }
   return true;
 }

@@ -1,10 +1,12 @@
 import { apiErrorSchema, uuidParam, versionConflictSchema } from '@shared/schemas/common';
 import { auditEntrySchema } from '@shared/schemas/me';
 import {
+  projectClimateUpdateSchema,
   projectInputSchema,
   projectListQuerySchema,
   projectSchema,
   projectUpdateSchema,
+  projectWindUpdateSchema,
 } from '@shared/schemas/project';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
@@ -93,6 +95,69 @@ export const projectRoutes = [
     },
     handler: ({ user, project, body, services }) =>
       services.projects.update(project!.id, user!.id, body.version, body.changes),
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/projects/:id/wind',
+    summary: 'Set the project’s wind data (ASCE 7 edition, basic wind speed, exposure, K_zt, enclosure…)',
+    tag: 'Projects',
+    access: { kind: 'project', action: 'project.wind.update' },
+    params: uuidParam,
+    body: projectWindUpdateSchema,
+    example: {
+      version: 1,
+      wind: {
+        edition: 'ASCE 7-16',
+        basicWindSpeed: 51,
+        riskCategory: 'II',
+        exposure: 'C',
+        Kzt: 1,
+        groundElevation: 185,
+        enclosure: 'enclosed',
+        roofSlopeDeg: 2,
+      },
+    },
+    responses: {
+      200: { description: 'The updated project', schema: projectSchema },
+      400: { description: 'Invalid fields', schema: apiErrorSchema },
+      ...errors,
+      409: { description: 'Someone saved first, or archived', schema: versionConflictSchema(projectSchema) },
+    },
+    handler: ({ user, project, body, services }) =>
+      services.projects.update(project!.id, user!.id, body.version, { wind: body.wind }, 'update_wind'),
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/projects/:id/climate',
+    summary: 'Set the project’s 12 monthly exterior climates (for the moisture check) with their source',
+    tag: 'Projects',
+    access: { kind: 'project', action: 'project.climate.update' },
+    params: uuidParam,
+    body: projectClimateUpdateSchema,
+    example: {
+      version: 1,
+      climate: {
+        source: 'Example values',
+        months: Array.from({ length: 12 }, (_, i) => ({
+          exteriorTemperature: -8 + 12 * Math.sin(((i - 3) * Math.PI) / 6),
+          exteriorRelativeHumidity: 0.8,
+        })),
+      },
+    },
+    responses: {
+      200: { description: 'The updated project', schema: projectSchema },
+      400: { description: 'Invalid fields', schema: apiErrorSchema },
+      ...errors,
+      409: { description: 'Someone saved first, or archived', schema: versionConflictSchema(projectSchema) },
+    },
+    handler: ({ user, project, body, services }) =>
+      services.projects.update(
+        project!.id,
+        user!.id,
+        body.version,
+        { climate: body.climate },
+        'update_climate',
+      ),
   }),
   defineRoute({
     method: 'post',

@@ -1,5 +1,5 @@
 import type { ProjectRole } from '@shared/auth/permissions';
-import type { Project, ProjectInput } from '@shared/schemas/project';
+import type { Project, ProjectClimate, ProjectInput, ProjectWind } from '@shared/schemas/project';
 import { and, asc, eq, isNotNull, isNull } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { organisationMembers, organisations, projectMembers, projects } from '../db/schema';
@@ -26,6 +26,8 @@ function toProject(row: ProjectRow, organisationName: string, myRole: ProjectRol
     indoorRh: row.indoorRh,
     winterDesignTempC: row.winterDesignTempC,
     summerDesignTempC: row.summerDesignTempC,
+    wind: (row.wind as ProjectWind | null) ?? null,
+    climate: (row.climate as ProjectClimate | null) ?? null,
     archivedAt: row.archivedAt?.toISOString() ?? null,
     version: row.version,
     createdAt: row.createdAt.toISOString(),
@@ -114,9 +116,12 @@ export function createProjectService(db: Db) {
       projectId: string,
       userId: string,
       version: number,
-      changes: ProjectInput,
+      changes: ProjectInput | { wind: ProjectWind } | { climate: ProjectClimate },
+      action: 'update' | 'update_wind' | 'update_climate' = 'update',
     ): Promise<Project> {
-      const before = await get(projectId, userId);
+      const current = await get(projectId, userId);
+      const before = Object.fromEntries(Object.keys(changes).map((k) => [k, current[k as keyof Project]]));
+      if (current.archivedAt) throw archivedError();
       if (before.archivedAt) throw archivedError();
       const updated = await db.transaction(async (tx) => {
         const rows = await tx
@@ -130,7 +135,7 @@ export function createProjectService(db: Db) {
           projectId,
           entity: 'project',
           entityId: projectId,
-          action: 'update',
+          action,
           before,
           after: changes,
         });

@@ -1,5 +1,9 @@
 import { z } from 'zod';
+import { jointInputSchema } from '../calc/joints/schema';
+import { vapourSchema } from '../calc/moisture/schema';
+import { takeoffInputSchema } from '../calc/takeoff/schema';
 import { thermalInputSchema, thermalResultSchema } from '../calc/thermal/schema';
+import { panelSchema } from '../calc/wind/schema';
 
 /**
  * Wall categories a code table may key on. The list is deliberately short and generic; criteria sets
@@ -29,13 +33,26 @@ export const attachmentSchema = z.object({
     .describe('Fastener description, e.g. "#14 self-drilling screw"'),
 });
 
-export const assemblyInputSchema = z.object({
-  name: z.string().trim().min(1, 'an assembly needs a name').max(200),
-  description: z.string().trim().max(4000).default(''),
-  wallCategory: wallCategorySchema,
-  attachment: attachmentSchema,
-  thermal: thermalInputSchema,
-});
+/** The panel's wind data for the attachment check; the girt orientation comes from `attachment`. */
+export const windPanelSchema = panelSchema.omit({ girtOrientation: true });
+
+export const assemblyInputSchema = z
+  .object({
+    name: z.string().trim().min(1, 'an assembly needs a name').max(200),
+    description: z.string().trim().max(4000).default(''),
+    wallCategory: wallCategorySchema,
+    attachment: attachmentSchema,
+    thermal: thermalInputSchema,
+    /** Vapour data per layer, aligned with `thermal.layers` (null = not entered yet). */
+    vapour: z.array(vapourSchema.nullable()).max(40).optional(),
+    windPanel: windPanelSchema.optional(),
+    joints: z.array(jointInputSchema).max(100).optional(),
+    takeoff: takeoffInputSchema.optional(),
+  })
+  .refine((a) => a.vapour === undefined || a.vapour.length === a.thermal.layers.length, {
+    path: ['vapour'],
+    message: 'vapour data must list one entry per layer (null where not entered)',
+  });
 export type AssemblyInput = z.infer<typeof assemblyInputSchema>;
 
 export const assemblyCreateSchema = assemblyInputSchema;

@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { projectRoleSchema } from '../auth/permissions';
+import { monthClimateSchema } from '../calc/moisture/schema';
+import { windSiteSchema } from '../calc/wind/schema';
 
 /** ASHRAE 169 climate zone designations: 0–8 with moisture regime A (moist), B (dry), C (marine) where used. */
 export const CLIMATE_ZONES = [
@@ -77,6 +79,46 @@ export const projectUpdateSchema = z.object({
 });
 export type ProjectUpdate = z.infer<typeof projectUpdateSchema>;
 
+/**
+ * The project's wind data (ASCE 7 site parameters). Height and plan dimensions come from the site fields,
+ * so they are not repeated here.
+ */
+export const projectWindSchema = windSiteSchema.pick({
+  edition: true,
+  basicWindSpeed: true,
+  riskCategory: true,
+  exposure: true,
+  Kzt: true,
+  groundElevation: true,
+  keEqualsOne: true,
+  enclosure: true,
+  roofSlopeDeg: true,
+});
+export type ProjectWind = z.infer<typeof projectWindSchema>;
+
+/** Twelve monthly mean exterior climates (January first) with where they come from, for the moisture check. */
+export const projectClimateSchema = z.object({
+  months: z.array(monthClimateSchema).length(12, 'enter all 12 months, January first'),
+  source: z.string().trim().min(1, 'name where the monthly values come from').max(500),
+  humidityClass: z
+    .number()
+    .int()
+    .min(1)
+    .max(5)
+    .optional()
+    .describe('ISO 13788 Annex A humidity class 1–5; omitted = the fixed indoor design temperature and RH'),
+});
+export type ProjectClimate = z.infer<typeof projectClimateSchema>;
+
+export const projectWindUpdateSchema = z.object({
+  version: z.number().int().positive(),
+  wind: projectWindSchema,
+});
+export const projectClimateUpdateSchema = z.object({
+  version: z.number().int().positive(),
+  climate: projectClimateSchema,
+});
+
 export const projectSchema = z.object({
   id: z.uuid(),
   organisationId: z.uuid(),
@@ -94,6 +136,8 @@ export const projectSchema = z.object({
   indoorRh: z.number(),
   winterDesignTempC: z.number(),
   summerDesignTempC: z.number(),
+  wind: projectWindSchema.nullable(),
+  climate: projectClimateSchema.nullable(),
   archivedAt: z.string().nullable(),
   version: z.number().int(),
   createdAt: z.string(),

@@ -40,3 +40,21 @@ export const mailKeys = {
   all: ['admin-mail'] as const,
   lists: () => [...mailKeys.all, 'list'] as const,
 };
+
+export const assemblyKeys = {
+  all: ['assemblies'] as const,
+  lists: () => [...assemblyKeys.all, 'list'] as const,
+  list: (projectId: string) => [...assemblyKeys.lists(), projectId] as const,
+  details: () => [...assemblyKeys.all, 'detail'] as const,
+  detail: (assemblyId: string) => [...assemblyKeys.details(), assemblyId] as const,
+  revisions: (assemblyId: string) => [...assemblyKeys.detail(assemblyId), 'revisions'] as const,
+  revision: (assemblyId: string, revision: number) =>
+    [...assemblyKeys.revisions(assemblyId), revision] as const,
+};
+
+export const libraryKeys = {
+  all: ['library'] as const,
+  reference: () => [...libraryKeys.all, 'reference-materials'] as const,
+  materials: (orgId: string) => [...libraryKeys.all, 'materials', orgId] as const,
+  bridgeValues: (orgId: string) => [...libraryKeys.all, 'bridge-values', orgId] as const,
+};

@@ -29,6 +29,8 @@ const EXPECTED: Record<string, Expectation> = {
   'POST /projects': 'user',
   'GET /projects/:id': ALL,
   'PUT /projects/:id': ['owner', 'architect'],
+  'PUT /projects/:id/wind': ['owner', 'architect', 'engineer'],
+  'PUT /projects/:id/climate': ['owner', 'architect', 'envelope_consultant'],
   'POST /projects/:id/archive': ['owner'],
   'POST /projects/:id/unarchive': ['owner'],
   'GET /projects/:id/audit': ['owner', 'architect', 'envelope_consultant', 'engineer'],

@@ -24,7 +24,8 @@ describe('foundation in the browser', () => {
     await page.getByRole('link', { name: 'New project' }).first().click();
     await page.waitForURL(/\/projects\/new/);
 
-    const fill = (label: string, value: string) => page.getByLabel(label, { exact: false }).first().fill(value);
+    const fill = (label: string, value: string) =>
+      page.getByLabel(label, { exact: false }).first().fill(value);
     await fill('Project name', 'Quarry Road Workshop');
     await fill('Site address', '2 Quarry Road (test)');
     await page.getByLabel('Climate zone', { exact: false }).selectOption('6A');

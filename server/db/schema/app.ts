@@ -65,6 +65,10 @@ export const projects = pgTable(
     indoorRh: doublePrecision('indoor_rh').notNull(),
     winterDesignTempC: doublePrecision('winter_design_temp_c').notNull(),
     summerDesignTempC: doublePrecision('summer_design_temp_c').notNull(),
+    /** ASCE 7 site parameters (shared/schemas/project.ts projectWindSchema), null until entered. */
+    wind: jsonb('wind'),
+    /** Twelve monthly exterior climates and their source (projectClimateSchema), null until entered. */
+    climate: jsonb('climate'),
     archivedAt: timestamp('archived_at', { withTimezone: true }),
     /** Optimistic-concurrency version: every update must name the version it read. */
     version: integer('version').notNull().default(1),

@@ -28,6 +28,8 @@ const base: Project = {
   indoorRh: 0.35,
   winterDesignTempC: -20,
   summerDesignTempC: 31,
+  wind: null,
+  climate: null,
   archivedAt: null,
   version: 3,
   createdAt: '2025-01-01T00:00:00Z',

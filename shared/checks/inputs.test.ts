@@ -1,0 +1,63 @@
+import { describe, expect, it } from 'vitest';
+import demo from '../../data/seed/demo-assembly.json' with { type: 'json' };
+import { calculateJointSchedule } from '../calc/joints/joints';
+import { calculateMoisture } from '../calc/moisture/monthly';
+import { calculateTakeoff } from '../calc/takeoff/takeoff';
+import { calculateThermal } from '../calc/thermal/thermal';
+import { calculateWindSchedule } from '../calc/wind/attachment';
+import { assemblyInputSchema } from '../schemas/assembly';
+import { projectClimateSchema, projectWindSchema } from '../schemas/project';
+import {
+  jointsInputFor,
+  moistureInputFor,
+  type ProjectForChecks,
+  takeoffInputFor,
+  thermalInputFor,
+  windInputFor,
+} from './inputs';
+
+const assembly = assemblyInputSchema.parse(demo.assembly);
+const project: ProjectForChecks = {
+  climateZone: '5A',
+  buildingHeightM: 11.5,
+  planLengthM: 96,
+  planWidthM: 54,
+  indoorTempC: 18,
+  indoorRh: 0.45,
+  winterDesignTempC: -19,
+  summerDesignTempC: 31,
+  wind: projectWindSchema.parse(demo.wind),
+  climate: projectClimateSchema.parse(demo.climate),
+};
+
+describe('check inputs from an assembly and its project', () => {
+  it('builds every module’s input from the demo assembly, and each module computes it', () => {
+    const ready = <T>(c: { status: string; input?: T }) => {
+      expect(c.status).toBe('ready');
+      return c.input as T;
+    };
+    expect(calculateThermal(ready(thermalInputFor(assembly))).Ueff).toBeGreaterThan(0);
+    expect(calculateMoisture(ready(moistureInputFor(assembly, project))).months).toHaveLength(12);
+    expect(calculateWindSchedule(ready(windInputFor(assembly, project))).zones.length).toBeGreaterThan(0);
+    expect(calculateJointSchedule(ready(jointsInputFor(assembly))).joints.length).toBeGreaterThan(0);
+    expect(calculateTakeoff(ready(takeoffInputFor(assembly))).lines.length).toBeGreaterThan(0);
+  });
+
+  it('names what is missing instead of guessing', () => {
+    const bare = { ...assembly, vapour: undefined, windPanel: undefined, joints: [], takeoff: undefined };
+    const noData = { ...project, wind: null, climate: null };
+    expect(moistureInputFor(bare, noData)).toEqual({
+      status: 'missing',
+      missing: [
+        ...assembly.thermal.layers.map((l, i) => `vapour data of layer ${i + 1} (${l.name})`),
+        'the project’s monthly climate',
+      ],
+    });
+    expect(windInputFor(bare, noData)).toEqual({
+      status: 'missing',
+      missing: ['the project’s wind data', 'the panel’s load–span table and clip capacity'],
+    });
+    expect(jointsInputFor(bare).status).toBe('missing');
+    expect(takeoffInputFor(bare).status).toBe('missing');
+  });
+});

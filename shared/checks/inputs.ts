@@ -1,0 +1,82 @@
+import type { JointInput } from '../calc/joints/schema';
+import type { MoistureInput } from '../calc/moisture/schema';
+import type { TakeoffInput } from '../calc/takeoff/schema';
+import type { ThermalInput } from '../calc/thermal/schema';
+import type { WindScheduleInput } from '../calc/wind/schema';
+import type { AssemblyInput } from '../schemas/assembly';
+import type { Project } from '../schemas/project';
+
+/** The project data every check reads (a stored project satisfies it; a check-run snapshot stores it). */
+export type ProjectForChecks = Pick<
+  Project,
+  | 'climateZone'
+  | 'buildingHeightM'
+  | 'planLengthM'
+  | 'planWidthM'
+  | 'indoorTempC'
+  | 'indoorRh'
+  | 'winterDesignTempC'
+  | 'summerDesignTempC'
+  | 'wind'
+  | 'climate'
+>;
+
+/** Either the calculation input, or the plain-word list of what is still missing to build it. */
+export type CheckInput<T> = { status: 'ready'; input: T } | { status: 'missing'; missing: string[] };
+
+const missing = <T>(...items: string[]): CheckInput<T> => ({ status: 'missing', missing: items });
+
+export const thermalInputFor = (a: AssemblyInput): CheckInput<ThermalInput> => ({
+  status: 'ready',
+  input: a.thermal,
+});
+
+/** Layers with their vapour data, the project's indoor conditions (or humidity class) and its 12 months. */
+export function moistureInputFor(a: AssemblyInput, p: ProjectForChecks): CheckInput<MoistureInput> {
+  const gaps: string[] = [];
+  const vapour = a.vapour ?? [];
+  a.thermal.layers.forEach((layer, i) => {
+    if (!vapour[i]) gaps.push(`vapour data of layer ${i + 1} (${layer.name})`);
+  });
+  if (!p.climate) gaps.push('the project’s monthly climate');
+  if (gaps.length > 0 || !p.climate) return missing(...gaps);
+  return {
+    status: 'ready',
+    input: {
+      layers: a.thermal.layers.map((layer, i) => ({ ...layer, vapour: vapour[i]! })),
+      heatFlow: a.thermal.heatFlow,
+      interior:
+        p.climate.humidityClass === undefined
+          ? { kind: 'fixed', temperature: p.indoorTempC, relativeHumidity: p.indoorRh }
+          : { kind: 'humidityClass', temperature: p.indoorTempC, humidityClass: p.climate.humidityClass },
+      months: p.climate.months,
+    },
+  };
+}
+
+/** The project's ASCE 7 site data with its height and plan, and the assembly's panel table and clip. */
+export function windInputFor(a: AssemblyInput, p: ProjectForChecks): CheckInput<WindScheduleInput> {
+  const gaps = [
+    ...(p.wind ? [] : ['the project’s wind data']),
+    ...(a.windPanel ? [] : ['the panel’s load–span table and clip capacity']),
+  ];
+  if (!p.wind || !a.windPanel) return missing(...gaps);
+  return {
+    status: 'ready',
+    input: {
+      site: {
+        ...p.wind,
+        meanRoofHeight: p.buildingHeightM,
+        planLength: p.planLengthM,
+        planWidth: p.planWidthM,
+      },
+      panel: { ...a.windPanel, girtOrientation: a.attachment.girtOrientation },
+    },
+  };
+}
+
+export const jointsInputFor = (a: AssemblyInput): CheckInput<JointInput[]> =>
+  a.joints && a.joints.length > 0 ? { status: 'ready', input: a.joints } : missing('the joint schedule');
+
+export const takeoffInputFor = (a: AssemblyInput): CheckInput<TakeoffInput> =>
+  a.takeoff ? { status: 'ready', input: a.takeoff } : missing('the elevation for the takeoff');

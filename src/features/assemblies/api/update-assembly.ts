@@ -1,0 +1,46 @@
+import { type Assembly, type AssemblyInput, assemblySchema } from '@shared/schemas/assembly';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { apiRequest, isApiRequestError } from '../../../lib/api';
+import { assemblyKeys, auditKeys } from '../../../lib/query-keys';
+
+/** `PUT /api/assemblies/:assemblyId` `{version, note, input}` → the assembly at its new revision. */
+export const updateAssembly = ({
+  assemblyId,
+  version,
+  note,
+  input,
+}: {
+  assemblyId: string;
+  version: number;
+  note: string;
+  input: AssemblyInput;
+}) =>
+  apiRequest(`/api/assemblies/${encodeURIComponent(assemblyId)}`, assemblySchema, {
+    method: 'PUT',
+    body: { version, note, input },
+  });
+
+const conflictBodySchema = z.object({ current: assemblySchema });
+
+/** On a 409 `version_conflict` the server sends the assembly as it now stands; null for any other error. */
+export function conflictingAssembly(error: unknown): Assembly | null {
+  if (!isApiRequestError(error) || error.status !== 409 || error.code !== 'version_conflict') return null;
+  const parsed = conflictBodySchema.safeParse(error.body);
+  return parsed.success ? parsed.data.current : null;
+}
+
+export function useUpdateAssembly() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: updateAssembly,
+    onSuccess: (assembly) => {
+      qc.setQueryData(assemblyKeys.detail(assembly.id), assembly);
+      void qc.invalidateQueries({ queryKey: assemblyKeys.revisions(assembly.id) });
+      void qc.invalidateQueries({ queryKey: assemblyKeys.list(assembly.projectId) });
+      void qc.invalidateQueries({ queryKey: auditKeys.list(assembly.projectId) });
+    },
+    // On a conflict the cached detail is NOT replaced here: the builder still holds the person's edits and
+    // decides with them whether to load the saved revision or carry the edits over.
+  });
+}

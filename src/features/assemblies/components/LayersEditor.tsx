@@ -1,0 +1,530 @@
+import { findMaterial, materials } from '@shared/calc/thermal/materials';
+import type { Bridge, Layer } from '@shared/calc/thermal/schema';
+import { useState } from 'react';
+import { type UseFieldArrayReturn, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
+import { Button } from '../../../components/ui/Button';
+import { Field } from '../../../components/ui/Field';
+import { Select } from '../../../components/ui/Select';
+import { useUnitSystem } from '../../../lib/unit-system';
+import { fieldDomId } from '../evaluate';
+import {
+  type AssemblyFormValues,
+  LAYER_KIND_LABELS,
+  type LayerKind,
+  layerFromFirm,
+  layerFromGeneric,
+  layerOfKind,
+  p,
+  remapAfterInsert,
+  remapAfterMove,
+  remapAfterRemove,
+  useBuilder,
+} from '../form';
+import { CATEGORY_LABELS } from '../layer-class';
+import { formatMeasure } from '../units';
+import { BlockError, MeasureField, TextField, useFieldError } from './FormFields';
+
+type LayersArray = UseFieldArrayReturn<AssemblyFormValues, 'thermal.layers', 'key'>;
+
+const VENTILATION = [
+  { value: 'unventilated', label: 'Unventilated' },
+  { value: 'slightly', label: 'Slightly ventilated (R halved)' },
+  { value: 'well', label: 'Well ventilated (layers outside it are disregarded)' },
+] as const;
+
+const iconButton =
+  'inline-flex h-8 min-w-8 items-center justify-center rounded-sm border border-rule-strong bg-paper-raised px-2 ' +
+  'text-sm text-ink hover:bg-paper-sunk disabled:cursor-not-allowed disabled:opacity-40';
+
+/** Layers outside → inside: add from a library or by hand, reorder with buttons, remove, edit by kind. */
+export function LayersEditor() {
+  const { control, getValues, setValue } = useFormContext<AssemblyFormValues>();
+  const array = useFieldArray({ control, name: 'thermal.layers', keyName: 'key' });
+  const { fields, move, remove, insert } = array;
+  const [announcement, setAnnouncement] = useState('');
+
+  /** Fasteners name the layer they cross by index: keep them pointing at the same layer. */
+  function remapFasteners(map: (index: number) => number) {
+    const bridges = (getValues('thermal.bridges') ?? []) as Bridge[];
+    bridges.forEach((b, j) => {
+      if (b.kind === 'fastener')
+        setValue(p(`thermal.bridges.${j}.layerIndex`), map(b.layerIndex), { shouldDirty: true });
+    });
+  }
+
+  const nameAt = (i: number) => (getValues(p(`thermal.layers.${i}.name`)) as string) || `layer ${i + 1}`;
+
+  function moveLayer(from: number, to: number, key: string, direction: 'out' | 'in') {
+    const name = nameAt(from);
+    move(from, to);
+    remapFasteners((k) => remapAfterMove(k, from, to));
+    setAnnouncement(`${name} moved to position ${to + 1} of ${fields.length}.`);
+    // Keep the keyboard where it was: on the same button of the moved layer (or its twin at the end).
+    requestAnimationFrame(() => {
+      const same = document.getElementById(`layer-${key}-${direction}`) as HTMLButtonElement | null;
+      const other = document.getElementById(`layer-${key}-${direction === 'out' ? 'in' : 'out'}`);
+      (same && !same.disabled ? same : other)?.focus();
+    });
+  }
+
+  function removeLayer(i: number) {
+    const name = nameAt(i);
+    remove(i);
+    remapFasteners((k) => remapAfterRemove(k, i));
+    setAnnouncement(`${name} removed.`);
+  }
+
+  function insertLayer(at: number, layer: Layer) {
+    insert(at, layer);
+    remapFasteners((k) => remapAfterInsert(k, at));
+    setAnnouncement(`${layer.name} added at position ${at + 1}.`);
+  }
+
+  return (
+    <div className="flex flex-col gap-3">
+      <div className="flex items-baseline justify-between gap-4 text-sm">
+        <p className="label-caps">
+          <span aria-hidden="true">◀ </span>Outside
+        </p>
+        <p className="text-ink-muted">Layers in order from the outside face to the inside face</p>
+        <p className="label-caps">
+          Inside<span aria-hidden="true"> ▶</span>
+        </p>
+      </div>
+      <BlockError path="thermal.layers" />
+      {fields.length === 0 ? (
+        <p className="border-y border-rule py-4 text-ink-muted">No layers yet. Add the outside face first.</p>
+      ) : (
+        <ol className="flex flex-col border-b border-rule" aria-label="Layers, outside to inside">
+          {fields.map((f, i) => (
+            <LayerRow
+              key={f.key}
+              index={i}
+              rowKey={f.key}
+              count={fields.length}
+              array={array}
+              onMove={(to, dir) => moveLayer(i, to, f.key, dir)}
+              onRemove={() => removeLayer(i)}
+            />
+          ))}
+        </ol>
+      )}
+      <p role="status" className="sr-only">
+        {announcement}
+      </p>
+      <AddLayer count={fields.length} names={fields.map((_, i) => nameAt(i))} onAdd={insertLayer} />
+    </div>
+  );
+}
+
+function LayerRow({
+  index: i,
+  rowKey,
+  count,
+  array,
+  onMove,
+  onRemove,
+}: {
+  index: number;
+  rowKey: string;
+  count: number;
+  array: LayersArray;
+  onMove: (to: number, direction: 'out' | 'in') => void;
+  onRemove: () => void;
+}) {
+  const { control } = useFormContext<AssemblyFormValues>();
+  const system = useUnitSystem();
+  const { layerR } = useBuilder();
+  const layer = useWatch({ control, name: p(`thermal.layers.${i}`) }) as Layer | undefined;
+  if (!layer) return null;
+  const base = `thermal.layers.${i}`;
+  const R = layerR(i);
+  const label = layer.name || `Layer ${i + 1}`;
+
+  return (
+    <li className="grid grid-cols-[2rem_1fr] gap-x-3 border-t border-rule py-3" aria-label={`Layer ${i + 1}: ${label}`}>
+      <span className="num pt-6 text-right text-lg font-medium text-ink" aria-hidden="true">
+        {i + 1}
+      </span>
+      <div className="flex min-w-0 flex-col gap-3">
+        <div className="flex flex-wrap items-end gap-x-4 gap-y-2">
+          <TextField path={`${base}.name`} label="Layer" className="min-w-56 flex-[2]" maxLength={120} />
+          <Field label="Kind" className="min-w-44 flex-1">
+            {(c) => (
+              <Select
+                {...c}
+                value={layer.kind}
+                className="py-1.5 text-sm"
+                onChange={(e) => array.update(i, layerOfKind(e.target.value as LayerKind, layer))}
+              >
+                {(Object.keys(LAYER_KIND_LABELS) as LayerKind[]).map((k) => (
+                  <option key={k} value={k}>
+                    {LAYER_KIND_LABELS[k]}
+                  </option>
+                ))}
+              </Select>
+            )}
+          </Field>
+          <p className="min-w-28 text-right text-sm">
+            <span className="label-caps block">R of layer</span>
+            <span className="num">{R === undefined ? '—' : formatMeasure(R, 'resistance', system)}</span>
+          </p>
+          <div className="flex gap-1" role="group" aria-label={`Move or remove ${label}`}>
+            <button
+              type="button"
+              id={`layer-${rowKey}-out`}
+              className={iconButton}
+              disabled={i === 0}
+              aria-label={`Move ${label} outward (up)`}
+              title="Move outward"
+              onClick={() => onMove(i - 1, 'out')}
+            >
+              <span aria-hidden="true">↑</span>
+            </button>
+            <button
+              type="button"
+              id={`layer-${rowKey}-in`}
+              className={iconButton}
+              disabled={i === count - 1}
+              aria-label={`Move ${label} inward (down)`}
+              title="Move inward"
+              onClick={() => onMove(i + 1, 'in')}
+            >
+              <span aria-hidden="true">↓</span>
+            </button>
+            <button
+              type="button"
+              className={`${iconButton} text-caution`}
+              aria-label={`Remove ${label}`}
+              title="Remove"
+              onClick={onRemove}
+            >
+              <span aria-hidden="true">✕</span>
+            </button>
+          </div>
+        </div>
+
+        {layer.kind === 'homogeneous' ? (
+          <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+            <MeasureField path={`${base}.thickness`} measure="thickness" label="Thickness d" className="w-36" />
+            <MeasureField path={`${base}.conductivity`} measure="conductivity" label="λ" className="w-52" />
+            <MaterialSource materialId={layer.materialId} conductivity={layer.conductivity} />
+          </div>
+        ) : null}
+
+        {layer.kind === 'resistance' ? (
+          <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+            <MeasureField
+              path={`${base}.resistance`}
+              measure="resistance"
+              label="Declared R"
+              className="w-48"
+              hint="From the maker's declaration; no thickness is drawn."
+            />
+          </div>
+        ) : null}
+
+        {layer.kind === 'air' ? <AirFields index={i} layer={layer} array={array} /> : null}
+        {layer.kind === 'framed' ? <FramedFields index={i} layer={layer} array={array} /> : null}
+
+        <BlockError path={base} />
+        <BlockError path={`${base}.kind`} />
+        <BlockError path={`${base}.metal`} />
+        <BlockError path={`${base}.materialId`} />
+      </div>
+    </li>
+  );
+}
+
+function MaterialSource({ materialId, conductivity }: { materialId?: string; conductivity: number }) {
+  const system = useUnitSystem();
+  const m = materialId ? findMaterial(materialId) : undefined;
+  if (!m) return <p className="max-w-md self-center text-xs text-ink-muted">λ entered by hand.</p>;
+  const changed = Number.isFinite(conductivity) && Math.abs(conductivity - m.conductivity) > 1e-9;
+  return (
+    <p className="max-w-md self-center text-xs text-ink-muted">
+      Generic library: {m.name}. {m.source}{' '}
+      <span className="italic">({m.provenance})</span>
+      {changed ? (
+        <span className="block font-semibold text-ink">
+          λ changed from the library's {formatMeasure(m.conductivity, 'conductivity', system)}.
+        </span>
+      ) : null}
+    </p>
+  );
+}
+
+function AirFields({
+  index: i,
+  layer,
+  array,
+}: {
+  index: number;
+  layer: Extract<Layer, { kind: 'air' }>;
+  array: LayersArray;
+}) {
+  const base = `thermal.layers.${i}`;
+  const lowE = layer.emissivityFactor !== undefined;
+  return (
+    <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+      <MeasureField
+        path={`${base}.thickness`}
+        measure="thickness"
+        label="Depth in the heat-flow direction"
+        className="w-48"
+      />
+      <Field label="Ventilation" className="min-w-64">
+        {(c) => (
+          <Select
+            {...c}
+            value={layer.ventilation}
+            className="py-1.5 text-sm"
+            onChange={(e) =>
+              array.update(i, { ...layer, ventilation: e.target.value as (typeof VENTILATION)[number]['value'] })
+            }
+          >
+            {VENTILATION.map((v) => (
+              <option key={v.value} value={v.value}>
+                {v.label}
+              </option>
+            ))}
+          </Select>
+        )}
+      </Field>
+      <div className="flex flex-col gap-2">
+        <label className="flex items-center gap-2 pt-6 text-sm">
+          <input
+            type="checkbox"
+            className="accent-ink"
+            checked={lowE}
+            onChange={(e) => {
+              const { emissivityFactor: _drop, ...rest } = layer;
+              array.update(i, e.target.checked ? { ...rest, emissivityFactor: 0.05 } : rest);
+            }}
+          />
+          Low-emissivity face (give E)
+        </label>
+      </div>
+      {lowE ? (
+        <MeasureField
+          path={`${base}.emissivityFactor`}
+          measure="emittance"
+          label="Intersurface emittance E"
+          hint="E = 1/(1/ε₁ + 1/ε₂ − 1)"
+          className="w-52"
+        />
+      ) : null}
+    </div>
+  );
+}
+
+function FramedFields({
+  index: i,
+  layer,
+  array,
+}: {
+  index: number;
+  layer: Extract<Layer, { kind: 'framed' }>;
+  array: LayersArray;
+}) {
+  const base = `thermal.layers.${i}`;
+  const { control, setValue } = useFormContext<AssemblyFormValues>();
+  const sections = useFieldArray({ control, name: p(`${base}.sections`) as 'thermal.layers.0.sections', keyName: 'key' });
+  const sectionsErrorPath = `${base}.sections`;
+  const sectionsError = useFieldError(sectionsErrorPath);
+  const describedBy = sectionsError ? `${fieldDomId(sectionsErrorPath)}-error` : undefined;
+  const sum = layer.sections.reduce((a, s) => a + (Number.isFinite(s.fraction) ? s.fraction : 0), 0);
+  const last = layer.sections.length - 1;
+  const rest = last >= 0 ? 1 - (sum - (Number.isFinite(layer.sections[last]!.fraction) ? layer.sections[last]!.fraction : 0)) : 0;
+
+  return (
+    <div className="flex flex-col gap-3">
+      <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+        <MeasureField path={`${base}.thickness`} measure="thickness" label="Depth d" className="w-36" />
+        <label className="flex items-center gap-2 pt-6 text-sm">
+          <input
+            type="checkbox"
+            className="accent-ink"
+            checked={layer.metal}
+            onChange={(e) => {
+              const { flangeWidth, spacing, ...restOf } = layer;
+              array.update(
+                i,
+                e.target.checked
+                  ? {
+                      ...restOf,
+                      metal: true,
+                      flangeWidth: Number.isFinite(flangeWidth) ? flangeWidth : 0.041,
+                      spacing: Number.isFinite(spacing) ? spacing : 0.406,
+                    }
+                  : { ...restOf, metal: false },
+              );
+            }}
+          />
+          Metal framing (zone method)
+        </label>
+        {layer.metal ? (
+          <>
+            <MeasureField path={`${base}.flangeWidth`} measure="spacing" label="Flange width m" className="w-40" />
+            <MeasureField path={`${base}.spacing`} measure="spacing" label="Spacing s (on centre)" className="w-44" />
+          </>
+        ) : null}
+      </div>
+
+      <fieldset className="border-l-2 border-rule pl-3">
+        <legend className="label-caps">Sections across the layer (area fractions sum to 100 %)</legend>
+        <ul className="mt-2 flex flex-col gap-2">
+          {sections.fields.map((s, q) => (
+            <li key={s.key} className="flex flex-wrap items-start gap-x-3 gap-y-1">
+              <TextField path={`${base}.sections.${q}.name`} label={`Section ${q + 1}`} className="min-w-48 flex-1" />
+              <MeasureField path={`${base}.sections.${q}.conductivity`} measure="conductivity" label="λ" className="w-48" />
+              <MeasureField
+                path={`${base}.sections.${q}.fraction`}
+                measure="fraction"
+                label="Area fraction"
+                className="w-36"
+                invalid={Boolean(sectionsError)}
+                describedBy={describedBy}
+              />
+              <button
+                type="button"
+                className={`${iconButton} mt-6 text-caution`}
+                aria-label={`Remove section ${q + 1}`}
+                disabled={sections.fields.length <= 1}
+                onClick={() => sections.remove(q)}
+              >
+                <span aria-hidden="true">✕</span>
+              </button>
+            </li>
+          ))}
+        </ul>
+        <div className="mt-2 flex flex-wrap items-center gap-x-4 gap-y-2 text-sm">
+          <Button
+            variant="quiet"
+            className="px-2 py-1"
+            disabled={sections.fields.length >= 8}
+            onClick={() => sections.append({ name: 'Section', conductivity: 0.04, fraction: Math.max(0, 1 - sum) || 0.1 })}
+          >
+            + Add section
+          </Button>
+          {Math.abs(sum - 1) > 1e-9 && last >= 0 && rest > 0 ? (
+            <Button
+              variant="quiet"
+              className="px-2 py-1"
+              onClick={() => setValue(p(`${base}.sections.${last}.fraction`), rest, { shouldDirty: true })}
+            >
+              Give the rest ({formatMeasure(rest, 'fraction', 'SI', 4)}) to “{layer.sections[last]!.name}”
+            </Button>
+          ) : null}
+          <span className="num ml-auto text-ink-muted">Σ = {formatMeasure(sum, 'fraction', 'SI', 4)}</span>
+        </div>
+        {sectionsError ? (
+          <p
+            id={`${fieldDomId(sectionsErrorPath)}-error`}
+            className="mt-1 flex items-start gap-1 text-sm font-medium text-caution"
+          >
+            <span aria-hidden="true">✕</span>
+            <span>{sectionsError}</span>
+          </p>
+        ) : null}
+        <span id={fieldDomId(sectionsErrorPath)} />
+      </fieldset>
+      <BlockError path={`${base}.flangeWidth`} />
+    </div>
+  );
+}
+
+/** Pick what to add (a generic material, a firm material, or a layer by kind) and where to put it. */
+function AddLayer({
+  count,
+  names,
+  onAdd,
+}: {
+  count: number;
+  names: string[];
+  onAdd: (at: number, layer: Layer) => void;
+}) {
+  const { firmName, firmMaterials } = useBuilder();
+  const [choice, setChoice] = useState('generic:mineral-wool-board');
+  const [position, setPosition] = useState('end');
+
+  const byCategory = Object.entries(CATEGORY_LABELS).map(([cat, label]) => ({
+    label,
+    items: materials.filter((m) => m.category === cat),
+  }));
+
+  function add() {
+    const [source, id] = choice.split(':') as [string, string];
+    let layer: Layer | undefined;
+    if (source === 'generic') {
+      const m = findMaterial(id);
+      if (m) layer = layerFromGeneric(m);
+    } else if (source === 'firm') {
+      const m = firmMaterials.find((x) => x.id === id);
+      if (m) layer = layerFromFirm(m);
+    } else layer = layerOfKind(id as LayerKind, { name: LAYER_KIND_LABELS[id as LayerKind] });
+    if (!layer) return;
+    const at = position === 'end' ? count : position === 'start' ? 0 : Number(position) + 1;
+    onAdd(at, layer);
+  }
+
+  return (
+    <fieldset className="flex flex-wrap items-end gap-x-4 gap-y-2 bg-paper-sunk px-3 py-3">
+      <legend className="sr-only">Add a layer</legend>
+      <Field label="Add a layer" className="min-w-72 flex-[2]">
+        {(c) => (
+          <Select {...c} value={choice} onChange={(e) => setChoice(e.target.value)} className="py-1.5 text-sm">
+            {byCategory.map((g) =>
+              g.items.length ? (
+                <optgroup key={g.label} label={`Generic library — ${g.label}`}>
+                  {g.items.map((m) => (
+                    <option key={m.id} value={`generic:${m.id}`}>
+                      {m.name} (λ {m.conductivity})
+                    </option>
+                  ))}
+                </optgroup>
+              ) : null,
+            )}
+            <optgroup label={firmName ? `${firmName} — firm materials` : 'Firm materials'}>
+              {firmMaterials.length === 0 ? (
+                <option value="none:" disabled>
+                  None yet — add them on the Library page
+                </option>
+              ) : (
+                firmMaterials.map((m) => (
+                  <option key={m.id} value={`firm:${m.id}`}>
+                    {m.name} (λ {m.conductivity}) — {m.source}
+                  </option>
+                ))
+              )}
+            </optgroup>
+            <optgroup label="By kind, values entered by hand">
+              {(Object.keys(LAYER_KIND_LABELS) as LayerKind[]).map((k) => (
+                <option key={k} value={`kind:${k}`}>
+                  {LAYER_KIND_LABELS[k]}
+                </option>
+              ))}
+            </optgroup>
+          </Select>
+        )}
+      </Field>
+      <Field label="Where" className="min-w-56 flex-1">
+        {(c) => (
+          <Select {...c} value={position} onChange={(e) => setPosition(e.target.value)} className="py-1.5 text-sm">
+            <option value="end">At the inside face (last)</option>
+            <option value="start">At the outside face (first)</option>
+            {names.map((n, i) => (
+              // biome-ignore lint/suspicious/noArrayIndexKey: positions are indexes by nature
+              <option key={i} value={String(i)}>
+                After {i + 1} {n}
+              </option>
+            ))}
+          </Select>
+        )}
+      </Field>
+      <Button variant="secondary" onClick={add} className="py-1.5">
+        Add layer
+      </Button>
+    </fieldset>
+  );
+}

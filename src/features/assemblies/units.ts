@@ -1,0 +1,156 @@
+import {
+  CHI_IP_TO_SI,
+  FOOT,
+  INCH,
+  K_IP_TO_SI,
+  PSI_IP_TO_SI,
+  R_IP_TO_SI,
+  U_IP_TO_SI,
+  type UnitSystem,
+} from '@shared/units';
+
+/**
+ * The quantities of an assembly and how each crosses the SI/IP edge. Stored values are SI (m, W/(m·K),
+ * m²·K/W, W/K, 1/m², area fractions 0–1); only what is shown and typed is converted.
+ * `factor` is the SI value of one shown unit: shown = SI / factor.
+ */
+export type Measure =
+  | 'thickness'
+  | 'spacing'
+  | 'diameter'
+  | 'conductivity'
+  | 'resistance'
+  | 'transmittance'
+  | 'chi'
+  | 'psi'
+  | 'countPerArea'
+  | 'lengthPerArea'
+  | 'fraction'
+  | 'emittance';
+
+interface MeasureSpec {
+  unit: Record<UnitSystem, string>;
+  /** Spoken form for screen readers where the symbol reads badly. */
+  spoken?: Record<UnitSystem, string>;
+  factor: Record<UnitSystem, number>;
+  /** Most decimals shown (trailing zeros trimmed). */
+  decimals: Record<UnitSystem, number>;
+}
+
+export const MEASURES: Record<Measure, MeasureSpec> = {
+  thickness: { unit: { SI: 'mm', IP: 'in' }, factor: { SI: 0.001, IP: INCH }, decimals: { SI: 2, IP: 3 } },
+  spacing: { unit: { SI: 'mm', IP: 'in' }, factor: { SI: 0.001, IP: INCH }, decimals: { SI: 1, IP: 2 } },
+  diameter: { unit: { SI: 'mm', IP: 'in' }, factor: { SI: 0.001, IP: INCH }, decimals: { SI: 2, IP: 3 } },
+  conductivity: {
+    unit: { SI: 'W/(m·K)', IP: 'Btu·in/(h·ft²·°F)' },
+    factor: { SI: 1, IP: K_IP_TO_SI },
+    decimals: { SI: 4, IP: 4 },
+  },
+  resistance: {
+    unit: { SI: 'm²·K/W', IP: 'h·ft²·°F/Btu' },
+    factor: { SI: 1, IP: R_IP_TO_SI },
+    decimals: { SI: 3, IP: 2 },
+  },
+  transmittance: {
+    unit: { SI: 'W/(m²·K)', IP: 'Btu/(h·ft²·°F)' },
+    factor: { SI: 1, IP: U_IP_TO_SI },
+    decimals: { SI: 3, IP: 4 },
+  },
+  chi: {
+    unit: { SI: 'W/K', IP: 'Btu/(h·°F)' },
+    factor: { SI: 1, IP: CHI_IP_TO_SI },
+    decimals: { SI: 4, IP: 4 },
+  },
+  psi: {
+    unit: { SI: 'W/(m·K)', IP: 'Btu/(h·ft·°F)' },
+    factor: { SI: 1, IP: PSI_IP_TO_SI },
+    decimals: { SI: 4, IP: 4 },
+  },
+  countPerArea: {
+    unit: { SI: 'per m²', IP: 'per ft²' },
+    factor: { SI: 1, IP: 1 / (FOOT * FOOT) },
+    decimals: { SI: 3, IP: 4 },
+  },
+  lengthPerArea: {
+    unit: { SI: 'm/m²', IP: 'ft/ft²' },
+    factor: { SI: 1, IP: 1 / FOOT },
+    decimals: { SI: 3, IP: 4 },
+  },
+  fraction: { unit: { SI: '%', IP: '%' }, factor: { SI: 0.01, IP: 0.01 }, decimals: { SI: 4, IP: 4 } },
+  emittance: { unit: { SI: '–', IP: '–' }, factor: { SI: 1, IP: 1 }, decimals: { SI: 3, IP: 3 } },
+};
+
+export const measureUnit = (m: Measure, system: UnitSystem) => MEASURES[m].unit[system];
+
+/** Round to at most `decimals` places and trim trailing zeros; "" (never "NaN") for a non-number. */
+export function trimmed(value: number, decimals: number): string {
+  if (!Number.isFinite(value)) return '';
+  const fixed = value.toFixed(decimals);
+  const t = fixed.includes('.') ? fixed.replace(/0+$/, '').replace(/\.$/, '') : fixed;
+  return t === '-0' ? '0' : t;
+}
+
+export const toShown = (si: number, m: Measure, system: UnitSystem) => si / MEASURES[m].factor[system];
+export const fromShown = (shown: number, m: Measure, system: UnitSystem) =>
+  shown * MEASURES[m].factor[system];
+
+/** The number as it goes into an editable box. */
+export function measureInputText(si: number | null | undefined, m: Measure, system: UnitSystem): string {
+  if (si == null || !Number.isFinite(si)) return '';
+  return trimmed(toShown(si, m, system), MEASURES[m].decimals[system]);
+}
+
+/** The number as it is read: typographic minus, narrow space, unit. "—" when there is no number. */
+export function formatMeasure(
+  si: number | null | undefined,
+  m: Measure,
+  system: UnitSystem,
+  decimals?: number,
+): string {
+  if (si == null || !Number.isFinite(si)) return '—';
+  const text = trimmed(toShown(si, m, system), decimals ?? MEASURES[m].decimals[system]);
+  const unit = MEASURES[m].unit[system];
+  return `${text.replace(/^-/, '\u2212')}${unit === '%' ? '\u202f%' : `\u202f${unit}`}`;
+}
+
+export type ParsedMeasure = { kind: 'empty' } | { kind: 'invalid' } | { kind: 'ok'; si: number };
+
+/** Read what was typed: digits, one point, optional sign (ASCII or typographic); nothing else is guessed. */
+export function parseMeasure(text: string, m: Measure, system: UnitSystem): ParsedMeasure {
+  const t = text.trim().replace(/\u2212/g, '-');
+  if (t === '') return { kind: 'empty' };
+  if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return { kind: 'invalid' };
+  const si = fromShown(Number(t), m, system);
+  return Number.isFinite(si) ? { kind: 'ok', si } : { kind: 'invalid' };
+}
+
+/** Thermal resistance as practitioners read it: "2.31 m²·K/W" in SI, "R-13.1" in IP. */
+export function formatR(si: number | null | undefined, system: UnitSystem): string {
+  if (si == null || !Number.isFinite(si)) return '—';
+  return system === 'IP' ? `R-${rNumber(si, system)}` : `${rNumber(si, system)}\u202fm²·K/W`;
+}
+
+/** Unit of an R figure for a column head ("R-value" in IP carries its unit in the name). */
+export const rUnit = (system: UnitSystem) => (system === 'IP' ? 'h·ft²·°F/Btu' : 'm²·K/W');
+export const uUnit = (system: UnitSystem) => (system === 'IP' ? 'Btu/(h·ft²·°F)' : 'W/(m²·K)');
+
+/** Thermal transmittance: "0.433 W/(m²·K)" in SI, "0.0763 Btu/(h·ft²·°F)" in IP. */
+export function formatU(si: number | null | undefined, system: UnitSystem): string {
+  if (si == null || !Number.isFinite(si)) return '—';
+  return `${uNumber(si, system)}\u202f${uUnit(system)}`;
+}
+
+/** The bare R number (no unit) for tables whose head carries the unit. */
+export function rNumber(si: number | null | undefined, system: UnitSystem): string {
+  if (si == null || !Number.isFinite(si)) return '—';
+  return system === 'IP' ? (si / R_IP_TO_SI).toFixed(1) : si.toFixed(2);
+}
+
+export function uNumber(si: number | null | undefined, system: UnitSystem): string {
+  if (si == null || !Number.isFinite(si)) return '—';
+  return system === 'IP' ? (si / U_IP_TO_SI).toFixed(3) : si.toFixed(3);
+}
+
+/** A share 0–1 as "12.3 %". */
+export const formatShare = (share: number) =>
+  Number.isFinite(share) ? `${(share * 100).toFixed(1)}\u202f%` : '—';

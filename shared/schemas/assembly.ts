@@ -31,6 +31,8 @@ export const attachmentSchema = z.object({
     .max(200)
     .default('')
     .describe('Fastener description, e.g. "#14 self-drilling screw"'),
+  girtSpacing: z.number().positive().max(10).optional().describe('Design girt spacing (panel span), m'),
+  clipSpacing: z.number().positive().max(10).optional().describe('Design clip spacing along a girt, m'),
 });
 
 /** The panel's wind data for the attachment check; the girt orientation comes from `attachment`. */

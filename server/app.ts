@@ -27,6 +27,29 @@ export interface AppDeps {
   clientMiddleware?: RequestHandler[];
 }
 
+/** Finds the first string (value or key) holding a NUL character, which PostgreSQL text cannot store. */
+function nulPath(value: unknown, path: string[] = []): string | null {
+  if (typeof value === 'string') return value.includes('\u0000') ? path.join('.') || '(body)' : null;
+  if (value && typeof value === 'object')
+    for (const [k, v] of Object.entries(value)) {
+      if (k.includes('\u0000')) return [...path, '(key)'].join('.');
+      const found = nulPath(v, [...path, k]);
+      if (found) return found;
+    }
+  return null;
+}
+
+const refuseNul: RequestHandler = (req, _res, next) => {
+  const field = nulPath(req.body);
+  next(
+    field
+      ? new HttpError(400, 'validation_failed', 'the request is not valid', {
+          [field]: 'text must not contain NUL characters',
+        })
+      : undefined,
+  );
+};
+
 /** Refuses cookie-authenticated writes whose Origin is not ours (CSRF); requests without Origin are not from a browser form. */
 function originCheck(trusted: string[]): RequestHandler {
   return (req, _res, next) => {
@@ -89,7 +112,10 @@ export function createApp({ database, config, mailer, clientDir, clientMiddlewar
   // better-auth must see the raw body: mount it before express.json().
   app.all('/api/auth/*splat', toNodeHandler(auth));
 
-  app.use(express.json({ limit: '1mb' }));
+  app.use(express.json({ limit: '1mb', strict: false }));
+  // Code-table imports may send CSV as text/csv.
+  app.use(express.text({ type: 'text/csv', limit: '1mb' }));
+  app.use('/api', refuseNul);
   app.use('/api', originCheck(trusted));
 
   const openapi = buildOpenApi(apiRoutes);

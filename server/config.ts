@@ -6,7 +6,7 @@ const envSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(5180),
   HOST: z.string().default('127.0.0.1'),
   /** Public URL of the app (origin used in e-mail links and the auth origin check). */
-  BASE_URL: z.url().optional(),
+  APP_URL: z.url().optional(),
   /** PostgreSQL server; when unset the embedded PGlite database in PGLITE_DIR is used. */
   DATABASE_URL: z.string().optional(),
   PGLITE_DIR: z.string().default('data/local/pglite'),
@@ -46,7 +46,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     env: e.NODE_ENV,
     port: e.PORT,
     host: e.HOST,
-    baseUrl: e.BASE_URL ?? `http://localhost:${e.PORT}`,
+    baseUrl: e.APP_URL ?? `http://localhost:${e.PORT}`,
     databaseUrl: e.DATABASE_URL || undefined,
     pgliteDir: e.PGLITE_DIR,
     smtpUrl: e.SMTP_URL || undefined,

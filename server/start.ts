@@ -1,4 +1,4 @@
-import { createServer } from 'node:http';
+import { createServer, type RequestListener } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { fileURLToPath } from 'node:url';
 import type { RequestHandler } from 'express';
@@ -21,7 +21,17 @@ export async function startServer(config: Config, opts: { dev?: boolean } = {}) 
   const capture = config.smtpUrl ? null : await startMailCapture(database.db);
   const mailer = createSmtpMailer(config.smtpUrl ?? capture!.url, config.mailFrom);
 
-  const httpServer = createServer();
+  // Listen first (a random port is known only then); answer 503 until the app is ready.
+  let app: RequestListener | undefined;
+  const httpServer = createServer((req, res) => {
+    if (app) return app(req, res);
+    res.writeHead(503, { 'content-type': 'application/json', 'retry-after': '1' });
+    res.end(
+      JSON.stringify({
+        error: { code: 'starting', message: 'the server is starting; try again in a moment' },
+      }),
+    );
+  });
   await new Promise<void>((resolve) => httpServer.listen(config.port, config.host, resolve));
   const { port } = httpServer.address() as AddressInfo;
   // A random port (tests) is known only now; links and the origin check must use it.
@@ -37,15 +47,16 @@ export async function startServer(config: Config, opts: { dev?: boolean } = {}) 
     });
     clientMiddleware = [vite.middlewares];
   }
-  const { app, auth, logger } = createApp({
+  const created = createApp({
     database,
     config: effective,
     mailer,
     clientDir: opts.dev ? undefined : clientDir,
     clientMiddleware,
   });
-  const seeded = effective.seedDemo ? await seedDemo(database.db, auth) : false;
-  httpServer.on('request', app);
+  const seeded = effective.seedDemo ? await seedDemo(database.db, created.auth) : false;
+  app = created.app;
+  const { logger } = created;
 
   async function stop() {
     httpServer.closeAllConnections();

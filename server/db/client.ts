@@ -17,6 +17,8 @@ export interface Database {
   db: Db;
   kind: 'pglite' | 'postgres';
   close(): Promise<void>;
+  /** PGlite only: a consistent gzip tarball of the data folder, taken while the server runs. */
+  dumpDataDir?: () => Promise<Blob>;
 }
 
 const migrationsFolder = fileURLToPath(new URL('../../drizzle', import.meta.url));
@@ -26,7 +28,12 @@ const migrationsFolder = fileURLToPath(new URL('../../drizzle', import.meta.url)
  * `databaseUrl` → PostgreSQL server through node-postgres; otherwise embedded PGlite in `pgliteDir`
  * (`memory://` for tests).
  */
-export async function openDatabase(opts: { databaseUrl?: string; pgliteDir: string }): Promise<Database> {
+export async function openDatabase(opts: {
+  databaseUrl?: string;
+  pgliteDir: string;
+  /** Restore: start a new PGlite data folder from this tarball (see server/db/backup-cli.ts). */
+  loadDataDir?: Blob;
+}): Promise<Database> {
   if (opts.databaseUrl) {
     const pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 10 });
     const db = drizzleNodePg({ client: pool, schema });
@@ -34,8 +41,13 @@ export async function openDatabase(opts: { databaseUrl?: string; pgliteDir: stri
     return { db: db as unknown as Db, kind: 'postgres', close: () => pool.end() };
   }
   if (!opts.pgliteDir.startsWith('memory://')) mkdirSync(opts.pgliteDir, { recursive: true });
-  const client = new PGlite(opts.pgliteDir);
+  const client = new PGlite(opts.pgliteDir, opts.loadDataDir ? { loadDataDir: opts.loadDataDir } : {});
   const db = drizzlePglite({ client, schema });
   await migratePglite(db, { migrationsFolder });
-  return { db: db as unknown as Db, kind: 'pglite', close: () => client.close() };
+  return {
+    db: db as unknown as Db,
+    kind: 'pglite',
+    close: () => client.close(),
+    dumpDataDir: () => client.dumpDataDir('gzip'),
+  };
 }

@@ -13,8 +13,15 @@ const accessText: Record<AnyRoute['access']['kind'], string> = {
   user: 'Any signed-in user.',
   siteAdmin: 'Site administrators only.',
   organisation: 'Members of the firm',
+  criteria: 'Code tables of the firm:',
   project: 'Project members whose role allows',
 };
+
+const CRITERIA_ACCESS_TEXT = {
+  read: 'members of the firm and of its projects.',
+  write: 'members of the firm, and project members whose role allows `criteria.write`.',
+  admin: 'firm administrators.',
+} as const;
 
 /** The OpenAPI 3.1 document, generated from the same route registry and zod schemas that validate requests. */
 export function buildOpenApi(routes: AnyRoute[]) {
@@ -40,7 +47,9 @@ export function buildOpenApi(routes: AnyRoute[]) {
         ? `${accessText.project} \`${r.access.action}\`.`
         : r.access.kind === 'organisation'
           ? `${accessText.organisation}${r.access.role === 'admin' ? ' (administrators)' : ''}.`
-          : accessText[r.access.kind];
+          : r.access.kind === 'criteria'
+            ? `${accessText.criteria} ${CRITERIA_ACCESS_TEXT[r.access.need]}`
+            : accessText[r.access.kind];
     const op: Record<string, unknown> = {
       tags: [r.tag],
       summary: r.summary,

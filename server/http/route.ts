@@ -1,4 +1,5 @@
 import { can, type ProjectAction, type ProjectRole } from '@shared/auth/permissions';
+import { type CriteriaAccess, criteriaAllows } from '@shared/schemas/criteria';
 import type { Request, Response, Router } from 'express';
 import type { z } from 'zod';
 import type { Services } from '../services';
@@ -13,12 +14,17 @@ import { forbidden, HttpError, notFound, unauthorised, zodFields } from './error
  *   Non-members get 404 so that a project's existence is not revealed to other firms.
  * - `organisation`: a member (or, with `role: 'admin'`, an administrator) of the firm named by `:orgId`;
  *   non-members get 404.
+ * - `criteria`: the firm's code tables, named by `:orgId` or by `:setId` (a table of the firm). `read`: firm
+ *   members and members of any of the firm's projects; `write`: firm members, and project members whose
+ *   role on one of the firm's (unarchived) projects allows `criteria.write`; `admin`: firm administrators.
+ *   Anyone else gets 404.
  */
 export type Access =
   | { kind: 'public' }
   | { kind: 'user' }
   | { kind: 'siteAdmin' }
   | { kind: 'organisation'; role: 'member' | 'admin' }
+  | { kind: 'criteria'; need: CriteriaAccess }
   | {
       kind: 'project';
       action: ProjectAction;
@@ -41,6 +47,8 @@ export interface RouteContext<P, Q, B> {
   user: SessionUser | null;
   /** Set for `project` access: the project and the caller's role on it. */
   project: { id: string; role: ProjectRole } | null;
+  /** Set for `criteria` access: the firm whose code tables these are and what the caller may do. */
+  criteria: { organisationId: string; access: CriteriaAccess } | null;
   services: Services;
 }
 
@@ -104,9 +112,34 @@ export function mountRoutes(router: Router, routes: AnyRoute[], services: Servic
         if (!role) throw notFound('organisation');
         if (access.role === 'admin' && role !== 'admin') throw forbidden('firm administrators only');
       }
+      let criteria: RouteContext<unknown, unknown, unknown>['criteria'] = null;
+      if (access.kind === 'criteria') {
+        const p = req.params as Record<string, string>;
+        const uuid = (x: string | undefined) => x !== undefined && /^[0-9a-f-]{36}$/i.test(x);
+        const orgId = p.orgId ?? (uuid(p.setId) ? await services.criteria.organisationOf(p.setId!) : null);
+        const held = uuid(orgId ?? undefined) ? await services.criteria.accessIn(orgId!, user!.id) : null;
+        if (!held) throw notFound(p.orgId ? 'organisation' : 'code table');
+        if (!criteriaAllows(held, access.need))
+          throw forbidden(
+            access.need === 'admin'
+              ? 'firm administrators only'
+              : 'editing this firm’s code tables needs firm membership or a project role that allows it',
+          );
+        criteria = { organisationId: orgId!, access: held };
+      }
       const query = parsePart(route.query, req.query, 'query');
       const body = parsePart(route.body, req.body ?? {}, 'body');
-      const result = await route.handler({ req, res, params, query, body, user, project, services });
+      const result = await route.handler({
+        req,
+        res,
+        params,
+        query,
+        body,
+        user,
+        project,
+        criteria,
+        services,
+      });
       if (result === undefined) {
         if (!res.headersSent) res.status(204).end();
         return;

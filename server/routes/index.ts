@@ -1,6 +1,8 @@
 import type { AnyRoute } from '../http/route';
 import { assemblyRoutes } from './assemblies';
 import { calcRoutes } from './calc';
+import { checkRunRoutes } from './check-runs';
+import { criteriaRoutes } from './criteria';
 import { healthRoutes } from './health';
 import { libraryRoutes } from './library';
 import { meRoutes } from './me';
@@ -15,5 +17,7 @@ export const apiRoutes: AnyRoute[] = [
   ...memberRoutes,
   ...assemblyRoutes,
   ...libraryRoutes,
+  ...criteriaRoutes,
+  ...checkRunRoutes,
   ...calcRoutes,
 ];

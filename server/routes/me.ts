@@ -37,6 +37,30 @@ export const meRoutes = [
   }),
   defineRoute({
     method: 'get',
+    path: '/admin/backup',
+    summary: 'Download a consistent backup of the embedded database (gzip tarball; site administrators)',
+    tag: 'Administration',
+    access: { kind: 'siteAdmin' },
+    responses: {
+      200: {
+        description: 'PGlite data folder as .tar.gz (restore with `npm run db:restore -- file`)',
+        contentType: 'application/gzip',
+      },
+      ...unauth,
+      403: { description: 'Not a site administrator', schema: apiErrorSchema },
+      409: { description: 'Running on a PostgreSQL server: use pg_dump', schema: apiErrorSchema },
+    },
+    handler: async ({ res, services }) => {
+      const tarball = await services.backup();
+      res
+        .type('application/gzip')
+        .attachment(`skinwright-${new Date().toISOString().slice(0, 10)}.tar.gz`)
+        .send(tarball);
+      return undefined;
+    },
+  }),
+  defineRoute({
+    method: 'get',
     path: '/admin/mail',
     summary: 'Messages captured by the local mail server (site administrators)',
     tag: 'Administration',

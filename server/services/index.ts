@@ -2,9 +2,12 @@ import type { Request } from 'express';
 import { type Auth, sessionUser } from '../auth/auth';
 import type { Config } from '../config';
 import type { Database } from '../db/client';
+import { HttpError } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
 import { createAssemblyService } from './assemblies';
 import { createAuditService } from './audit';
+import { createCheckRunService } from './check-runs';
+import { createCriteriaService } from './criteria';
 import { createLibraryService } from './library';
 import { createMeService } from './me';
 import { createMemberService } from './members';
@@ -13,8 +16,19 @@ import { createProjectService } from './projects';
 /** Everything a route may use; routes never touch the database directly. */
 export function createServices(database: Database, config: Config, mailer: Mailer, auth: Auth) {
   const { db } = database;
+  const criteria = createCriteriaService(db);
   return {
     databaseKind: database.kind,
+    /** Hot backup of the embedded database (PGlite); a PostgreSQL server is backed up with pg_dump. */
+    async backup(): Promise<Buffer> {
+      if (!database.dumpDataDir)
+        throw new HttpError(
+          409,
+          'not_supported',
+          'the database is a PostgreSQL server: back it up with pg_dump',
+        );
+      return Buffer.from(await (await database.dumpDataDir()).arrayBuffer());
+    },
     auth: { instance: auth, currentUser: (req: Request) => sessionUser(auth, req) },
     audit: createAuditService(db),
     me: createMeService(db),
@@ -22,6 +36,8 @@ export function createServices(database: Database, config: Config, mailer: Maile
     members: createMemberService(db, config, mailer),
     assemblies: createAssemblyService(db),
     library: createLibraryService(db),
+    criteria,
+    checkRuns: createCheckRunService(db, criteria),
   };
 }
 

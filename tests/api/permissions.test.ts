@@ -25,6 +25,7 @@ const EXPECTED: Record<string, Expectation> = {
   'PUT /me/preferences': 'user',
   'POST /organisations': 'user',
   'GET /admin/mail': 'siteAdmin',
+  'GET /admin/backup': 'siteAdmin',
   'GET /projects': 'user',
   'POST /projects': 'user',
   'GET /projects/:id': ALL,

@@ -1,5 +1,7 @@
 import {
+  type AnyPgColumn,
   bigserial,
+  date,
   doublePrecision,
   index,
   integer,
@@ -222,4 +224,102 @@ export const orgBridgeValues = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index('org_bridge_values_org_idx').on(t.organisationId)],
+);
+
+/**
+ * A firm's code table ("criteria set"), one row per version. Versions of one table share `lineageId` (the
+ * id of version 1). A version used by a stored check run is frozen (`frozenAt`) and never changes again:
+ * editing it creates version + 1 with `previousVersionId` pointing back. `revision` counts in-place edits
+ * of an unfrozen version (optimistic concurrency).
+ */
+export const criteriaSets = pgTable(
+  'criteria_sets',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    organisationId: uuid('organisation_id')
+      .notNull()
+      .references(() => organisations.id, { onDelete: 'cascade' }),
+    lineageId: uuid('lineage_id').notNull(),
+    version: integer('version').notNull().default(1),
+    previousVersionId: uuid('previous_version_id').references((): AnyPgColumn => criteriaSets.id),
+    revision: integer('revision').notNull().default(1),
+    name: text('name').notNull(),
+    jurisdiction: text('jurisdiction').notNull().default(''),
+    edition: text('edition').notNull().default(''),
+    effectiveDate: date('effective_date', { mode: 'string' }),
+    notes: text('notes').notNull().default(''),
+    sourceReference: text('source_reference').notNull().default(''),
+    /** The table's own names of the wall categories (shared/checks/criteria.ts categoryLabelsSchema). */
+    categoryLabels: jsonb('category_labels').notNull().default({}),
+    frozenAt: timestamp('frozen_at', { withTimezone: true }),
+    createdBy: text('created_by').references(() => user.id),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    uniqueIndex('criteria_sets_lineage_version').on(t.lineageId, t.version),
+    index('criteria_sets_org_idx').on(t.organisationId),
+  ],
+);
+
+/** One criterion of a code table version: zone (or `*`) × wall category × criterion type, SI value. */
+export const criteriaRows = pgTable(
+  'criteria_rows',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    setId: uuid('set_id')
+      .notNull()
+      .references(() => criteriaSets.id, { onDelete: 'cascade' }),
+    position: integer('position').notNull(),
+    climateZone: text('climate_zone').notNull(),
+    wallCategory: text('wall_category').notNull(),
+    criterion: text('criterion').notNull(),
+    /** SI value; yes/no criteria store 1/0. */
+    value: doublePrecision('value').notNull(),
+    note: text('note').notNull().default(''),
+  },
+  (t) => [uniqueIndex('criteria_rows_key').on(t.setId, t.climateZone, t.wallCategory, t.criterion)],
+);
+
+/**
+ * An issued compliance run, immutable: what it read (assembly revision and input, the project's site, wind
+ * and climate data, the code table version and rows), what it found (module results with traces, checks,
+ * verdict), the engine version, who and when, and SHA-256 hashes of the canonical JSON.
+ */
+export const checkRuns = pgTable(
+  'check_runs',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    assemblyId: uuid('assembly_id')
+      .notNull()
+      .references(() => assemblies.id, { onDelete: 'cascade' }),
+    assemblyRevision: integer('assembly_revision').notNull(),
+    assemblyName: text('assembly_name').notNull(),
+    criteriaSetId: uuid('criteria_set_id')
+      .notNull()
+      .references(() => criteriaSets.id),
+    criteriaSetVersion: integer('criteria_set_version').notNull(),
+    criteriaSetName: text('criteria_set_name').notNull(),
+    verdict: text('verdict').notNull(),
+    criteriaVerdict: text('criteria_verdict').notNull(),
+    moduleVerdict: text('module_verdict').notNull(),
+    passCount: integer('pass_count').notNull(),
+    failCount: integer('fail_count').notNull(),
+    notEvaluatedCount: integer('not_evaluated_count').notNull(),
+    engineVersion: text('engine_version').notNull(),
+    inputs: jsonb('inputs').notNull(),
+    outputs: jsonb('outputs').notNull(),
+    inputsHash: text('inputs_hash').notNull(),
+    outputsHash: text('outputs_hash').notNull(),
+    hash: text('hash').notNull(),
+    createdBy: text('created_by').references(() => user.id),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index('check_runs_project_idx').on(t.projectId, t.createdAt),
+    index('check_runs_assembly_idx').on(t.assemblyId),
+  ],
 );

@@ -1,0 +1,114 @@
+import { apiErrorSchema } from '@shared/schemas/common';
+import fc from 'fast-check';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { AnyRoute } from '../../server/http/route';
+import { apiRoutes } from '../../server/routes';
+import { createTestApp, demoEmail, type TestApp } from '../setup/app';
+
+/**
+ * Fuzzing every route that takes a body (calculations and forms), signed in as the demo owner: arbitrary
+ * JSON, and the documented example with one leaf replaced by something hostile. Never a 5xx; a success
+ * body always matches the documented response schema (so no NaN/Infinity smuggled in as null); every
+ * error has the documented shape. The case count is printed at the end.
+ */
+const CASES_PER_ROUTE = Number(process.env.FUZZ_CASES_PER_ROUTE ?? 150);
+
+const deep = (depth: number): unknown => (depth === 0 ? 1 : { a: deep(depth - 1) });
+const HOSTILE: unknown[] = [
+  1e308,
+  -1e308,
+  0,
+  -0,
+  -1,
+  5e-324,
+  Number.MAX_SAFE_INTEGER + 2,
+  '1e308',
+  'NaN',
+  'Infinity',
+  '',
+  'x'.repeat(200_000),
+  '../../etc/passwd',
+  '\u0000\u001f',
+  '<script>alert(1)</script>',
+  null,
+  true,
+  [],
+  {},
+  [[[[]]]],
+  deep(1000),
+];
+
+function leafPaths(value: unknown, prefix: (string | number)[] = []): (string | number)[][] {
+  if (Array.isArray(value)) return [prefix, ...value.flatMap((v, i) => leafPaths(v, [...prefix, i]))];
+  if (value && typeof value === 'object')
+    return [prefix, ...Object.entries(value).flatMap(([k, v]) => leafPaths(v, [...prefix, k]))];
+  return [prefix];
+}
+
+function replaceAt(value: unknown, path: (string | number)[], replacement: unknown): unknown {
+  if (path.length === 0) return replacement;
+  const [head, ...rest] = path;
+  const copy = (Array.isArray(value) ? [...value] : { ...(value as object) }) as Record<
+    string | number,
+    unknown
+  >;
+  copy[head!] = replaceAt(copy[head!], rest, replacement);
+  return copy;
+}
+
+let totalCases = 0;
+
+describe('fuzzing every route with a body', () => {
+  let t: TestApp;
+  const params: Record<string, string> = {};
+  beforeAll(async () => {
+    t = await createTestApp('pglite');
+    const owner = await t.as(demoEmail('admin'));
+    params.id = await t.demoProjectId();
+    params.orgId = (await owner.get('/api/me')).body.organisations[0].id;
+    params.assemblyId = (await owner.get(`/api/projects/${params.id}/assemblies`)).body.assemblies[0].id;
+  });
+  afterAll(async () => {
+    console.log(`fuzz: ${totalCases} HTTP cases run`);
+    await t?.close();
+  });
+
+  const bodyRoutes = apiRoutes.filter(
+    (r) => r.body && !r.path.includes(':token') && !r.path.includes(':memberId'),
+  );
+  it.each(bodyRoutes.map((r) => [`${r.method.toUpperCase()} ${r.path}`, r] as const))(
+    '%s',
+    async (_n, route: AnyRoute) => {
+      const agent = await t.as(demoEmail('admin'));
+      const path = `/api${route.path.replace(/:(\w+)/g, (_m, p: string) => params[p] ?? 'x')}`;
+      const success = Object.entries(route.responses).find(([s]) => Number(s) < 300)?.[1]?.schema;
+      const example = route.example ?? {};
+      const paths = leafPaths(example);
+      const payload = fc.oneof(
+        { weight: 1, arbitrary: fc.jsonValue({ maxDepth: 4 }) },
+        {
+          weight: 3,
+          arbitrary: fc
+            .tuple(fc.nat({ max: paths.length - 1 }), fc.constantFrom(...HOSTILE))
+            .map(([i, hostile]) => replaceAt(example, paths[i]!, hostile)),
+        },
+      );
+      await fc.assert(
+        fc.asyncProperty(payload, async (body) => {
+          totalCases++;
+          const res = await (agent as unknown as Record<string, (p: string) => import('supertest').Test>)[
+            route.method
+          ]!(path)
+            .set('content-type', 'application/json')
+            .send(JSON.stringify(body));
+          expect(res.status, res.text.slice(0, 300)).toBeLessThan(500);
+          if (res.status < 300 && success && res.headers['content-type']?.includes('json'))
+            expect(success.safeParse(res.body).success, 'success body matches its schema').toBe(true);
+          if (res.status >= 400)
+            expect(apiErrorSchema.safeParse(res.body).success, res.text.slice(0, 300)).toBe(true);
+        }),
+        { numRuns: CASES_PER_ROUTE },
+      );
+    },
+  );
+});

@@ -90,8 +90,9 @@ function parsePart<T>(schema: z.ZodType<T> | undefined, value: unknown, where: s
 export function mountRoutes(router: Router, routes: AnyRoute[], services: Services): void {
   for (const route of routes) {
     router[route.method](route.path, async (req, res) => {
-      const user = await services.auth.currentUser(req);
       const { access } = route;
+      // Public routes never need the session: skip its lookup.
+      const user = access.kind === 'public' ? null : await services.auth.currentUser(req);
       if (access.kind !== 'public' && !user) throw unauthorised();
       if (access.kind === 'siteAdmin' && user?.role !== 'admin') throw forbidden('site administrators only');
       const params = parsePart(route.params, req.params, 'params');

@@ -8,11 +8,17 @@ import { AppShell } from './layout/AppShell';
 import { ProjectLayout } from './layout/ProjectLayout';
 import { RequireSession } from './layout/RequireSession';
 import { AdminMailPage } from './routes/AdminMailPage';
+import { AssemblyBuilderPage } from './routes/AssemblyBuilderPage';
+import { AssemblyRevisionPage } from './routes/AssemblyRevisionPage';
+import { CompareAssembliesPage } from './routes/CompareAssembliesPage';
 import { ForgotPasswordPage } from './routes/ForgotPasswordPage';
 import { InvitePage } from './routes/InvitePage';
+import { LibraryPage } from './routes/LibraryPage';
+import { NewAssemblyPage } from './routes/NewAssemblyPage';
 import { NewProjectPage } from './routes/NewProjectPage';
 import { NotFoundPage } from './routes/NotFoundPage';
 import { ProjectActivityPage } from './routes/ProjectActivityPage';
+import { ProjectAssembliesPage } from './routes/ProjectAssembliesPage';
 import { ProjectMembersPage } from './routes/ProjectMembersPage';
 import { ProjectOverviewPage } from './routes/ProjectOverviewPage';
 import { ProjectsPage } from './routes/ProjectsPage';
@@ -48,6 +54,12 @@ export function createAppRouter(queryClient: QueryClient) {
     return null;
   };
 
+  const checkAssemblyId = ({ params }: LoaderFunctionArgs) => {
+    if (!uuidParam.safeParse({ id: params.assemblyId }).success)
+      throw data('No such assembly.', { status: 404 });
+    return null;
+  };
+
   return createBrowserRouter([
     {
       element: <AppShell />,
@@ -75,10 +87,24 @@ export function createAppRouter(queryClient: QueryClient) {
                   element: <ProjectLayout />,
                   children: [
                     { index: true, element: <ProjectOverviewPage /> },
+                    { path: 'assemblies', element: <ProjectAssembliesPage /> },
+                    { path: 'assemblies/new', element: <NewAssemblyPage /> },
+                    { path: 'assemblies/compare', element: <CompareAssembliesPage /> },
+                    {
+                      path: 'assemblies/:assemblyId',
+                      loader: checkAssemblyId,
+                      element: <AssemblyBuilderPage />,
+                    },
+                    {
+                      path: 'assemblies/:assemblyId/revisions/:revision',
+                      loader: checkAssemblyId,
+                      element: <AssemblyRevisionPage />,
+                    },
                     { path: 'members', element: <ProjectMembersPage /> },
                     { path: 'activity', element: <ProjectActivityPage /> },
                   ],
                 },
+                { path: '/library', element: <LibraryPage /> },
                 { path: '/settings', element: <SettingsPage /> },
                 { path: '/admin/mail', loader: requireSiteAdmin, element: <AdminMailPage /> },
               ],

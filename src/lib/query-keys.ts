@@ -58,3 +58,23 @@ export const libraryKeys = {
   materials: (orgId: string) => [...libraryKeys.all, 'materials', orgId] as const,
   bridgeValues: (orgId: string) => [...libraryKeys.all, 'bridge-values', orgId] as const,
 };
+
+export const criteriaKeys = {
+  all: ['criteria-sets'] as const,
+  lists: () => [...criteriaKeys.all, 'list'] as const,
+  list: (orgId: string) => [...criteriaKeys.lists(), 'firm', orgId] as const,
+  forProject: (projectId: string) => [...criteriaKeys.lists(), 'project', projectId] as const,
+  details: () => [...criteriaKeys.all, 'detail'] as const,
+  detail: (setId: string) => [...criteriaKeys.details(), setId] as const,
+  versions: (setId: string) => [...criteriaKeys.all, 'versions', setId] as const,
+  diff: (setId: string, from: number, to: number) => [...criteriaKeys.all, 'diff', setId, from, to] as const,
+};
+
+export const checkRunKeys = {
+  all: ['check-runs'] as const,
+  lists: () => [...checkRunKeys.all, 'list'] as const,
+  list: (projectId: string, assemblyId: string | null) =>
+    [...checkRunKeys.lists(), projectId, assemblyId] as const,
+  details: () => [...checkRunKeys.all, 'detail'] as const,
+  detail: (runId: string) => [...checkRunKeys.details(), runId] as const,
+};

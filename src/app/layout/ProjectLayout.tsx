@@ -10,7 +10,7 @@ import { formatDate } from '../../lib/format';
 const tabClass = ({ isActive }: { isActive: boolean }) =>
   `-mb-px border-b-2 px-1 pb-2 text-sm font-semibold no-underline ${isActive ? 'border-ink text-ink' : 'border-transparent text-ink-muted hover:text-ink'}`;
 
-/** The frame around every project page: its name, the sheet index (overview / people / activity). */
+/** The frame around every project page: its name, the sheet index (overview / assemblies / people / activity). */
 export function ProjectLayout() {
   const { id = '' } = useParams();
   const project = useProject(id);
@@ -27,6 +27,9 @@ export function ProjectLayout() {
       <nav aria-label="Project pages" className="-mt-2 mb-6 flex gap-6 border-b border-rule">
         <NavLink to={`/projects/${p.id}`} end className={tabClass}>
           Overview
+        </NavLink>
+        <NavLink to={`/projects/${p.id}/assemblies`} className={tabClass}>
+          Assemblies
         </NavLink>
         <NavLink to={`/projects/${p.id}/members`} className={tabClass}>
           People

@@ -26,6 +26,9 @@ export function SiteHeader() {
             <NavLink to="/projects" className={navClass}>
               Projects
             </NavLink>
+            <NavLink to="/library" className={navClass}>
+              Library
+            </NavLink>
             {user.siteRole === 'admin' ? (
               <NavLink to="/admin/mail" className={navClass}>
                 Outbox

@@ -1,6 +1,7 @@
 import { can } from '@shared/auth/permissions';
 import { useParams, useSearchParams } from 'react-router';
 import { Button } from '../../components/ui/Button';
+import { AssembliesOverview } from '../../features/assemblies/components/AssembliesOverview';
 import { useProject } from '../../features/projects/api/get-project';
 import { ArchiveControl } from '../../features/projects/components/ArchiveControl';
 import { ProjectEditor } from '../../features/projects/components/ProjectEditor';
@@ -43,10 +44,10 @@ export function ProjectOverviewPage() {
         <h2 id="assemblies-heading" className="border-b border-ink pb-2 text-2xl">
           Assemblies
         </h2>
-        <p className="text-ink-muted">
-          The wall build-ups for this project will be listed here — layers, girts and clips, and the checks
-          run on each. None yet.
-        </p>
+        <AssembliesOverview
+          projectId={project.id}
+          mayWrite={can(project.myRole, 'assembly.write') && !archived}
+        />
       </section>
 
       {can(project.myRole, 'project.archive') && !editing ? (

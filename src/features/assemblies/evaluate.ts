@@ -2,7 +2,7 @@ import { CalcInputError } from '@shared/calc/errors';
 import { type ThermalResult, thermalInputSchema } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
 import type { UnitSystem } from '@shared/units';
-import { formatMeasure, type Measure } from './units';
+import { type Measure, measureUnit, toShown } from './units';
 
 /**
  * Runs the shared engine in the browser on what the form holds right now. Either a result, or the reasons
@@ -48,8 +48,14 @@ interface Issue {
 
 function issueMessage(issue: Issue, key: string, system: UnitSystem): string {
   const m = FIELD_MEASURES[key];
-  const bound = (b: number | bigint | undefined) =>
-    m ? formatMeasure(Number(b), m, system) : String(Number(b));
+  // Bounds can be tiny (0.000001 m): four significant figures in the person's unit, never a rounded 0.
+  const bound = (b: number | bigint | undefined) => {
+    const si = Number(b);
+    if (!m) return String(si);
+    const shown = Number(toShown(si, m, system).toPrecision(4));
+    const unit = measureUnit(m, system);
+    return unit === '–' ? String(shown) : `${shown}\u202f${unit}`;
+  };
   switch (issue.code) {
     case 'invalid_type':
       return typeof issue.input === 'number' || issue.input === undefined || issue.input === null
@@ -116,7 +122,11 @@ export function evaluateThermal(thermal: unknown, system: UnitSystem): Evaluatio
   }
 }
 
-const sentence = (t: string) => {
+/** Engine reasons carry raw floats ("got 0.5027093596059113"); six significant figures are plenty to read. */
+const tidyNumbers = (t: string) => t.replace(/\d+\.\d{7,}/g, (x) => String(Number(Number(x).toPrecision(6))));
+
+const sentence = (raw: string) => {
+  const t = tidyNumbers(raw);
   const s = t.charAt(0).toUpperCase() + t.slice(1);
   return /[.!?]$/.test(s) ? s : `${s}.`;
 };
@@ -132,3 +142,15 @@ export function toFormPath(serverPath: string): string {
 
 /** The DOM id of the control (or the block) that shows a form path's error. */
 export const fieldDomId = (path: string) => `f-${path.replace(/\./g, '-')}`;
+
+/**
+ * A zod error map for `zodResolver(assemblyInputSchema, { error })`: the same plain words as the live
+ * check. Messages written into the shared schema (e.g. "an assembly needs a name") take precedence.
+ */
+export function assemblyErrorMap(system: UnitSystem) {
+  return (issue: Issue): string | undefined => {
+    const key = String(issue.path?.[issue.path.length - 1] ?? '');
+    if (issue.code === 'invalid_union') return 'Check the values of this attachment.';
+    return issueMessage(issue, key, system);
+  };
+}

@@ -135,6 +135,8 @@ export interface BuilderContextValue {
   bridgeValues: readonly BridgeValue[];
   /** Per layer, its R (m²·K/W) from the live result's trace, when there is one. */
   layerR: (index: number) => number | undefined;
+  /** Layers outside a well-ventilated air layer (and that layer) do not count (ISO 6946 §6.9). */
+  disregarded: (index: number) => boolean;
 }
 
 export const BuilderContext = createContext<BuilderContextValue>({
@@ -144,6 +146,18 @@ export const BuilderContext = createContext<BuilderContextValue>({
   firmMaterials: [],
   bridgeValues: [],
   layerR: () => undefined,
+  disregarded: () => false,
 });
+
+/** Index of the first layer that counts: everything up to the innermost well-ventilated air layer is discarded. */
+export function firstCountedLayer(
+  layers: readonly { kind?: string; ventilation?: string }[] | undefined,
+): number {
+  let start = 0;
+  (layers ?? []).forEach((l, i) => {
+    if (l?.kind === 'air' && l.ventilation === 'well') start = i + 1;
+  });
+  return start;
+}
 
 export const useBuilder = () => useContext(BuilderContext);

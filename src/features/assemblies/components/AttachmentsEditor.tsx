@@ -37,7 +37,7 @@ export function AttachmentsEditor() {
   function add(role: BridgeRole) {
     const layers = (getValues('thermal.layers') ?? []) as Layer[];
     const ins = layers.findIndex((l) => isInsulation(l));
-    array.append(newBridge(role, ins >= 0 ? ins : 0));
+    array.append(newBridge(role, Math.max(ins, 0)));
   }
 
   return (
@@ -47,23 +47,43 @@ export function AttachmentsEditor() {
           <legend className="text-sm font-semibold">Girts run</legend>
           <div className="flex gap-4 pt-1 text-sm">
             <label className="flex items-center gap-2">
-              <input type="radio" value="horizontal" className="accent-ink" {...register('attachment.girtOrientation')} />
+              <input
+                type="radio"
+                value="horizontal"
+                className="accent-ink"
+                {...register('attachment.girtOrientation')}
+              />
               horizontally (panels span vertically)
             </label>
             <label className="flex items-center gap-2">
-              <input type="radio" value="vertical" className="accent-ink" {...register('attachment.girtOrientation')} />
+              <input
+                type="radio"
+                value="vertical"
+                className="accent-ink"
+                {...register('attachment.girtOrientation')}
+              />
               vertically
             </label>
           </div>
         </fieldset>
-        <TextField path="attachment.clipType" label="Clip or bracket" hint="Product or description" className="min-w-56 flex-1" />
-        <TextField path="attachment.fastenerType" label="Fastener" hint="e.g. #14 self-drilling screw" className="min-w-56 flex-1" />
+        <TextField
+          path="attachment.clipType"
+          label="Clip or bracket"
+          hint="Product or description"
+          className="min-w-56 flex-1"
+        />
+        <TextField
+          path="attachment.fastenerType"
+          label="Fastener"
+          hint="e.g. #14 self-drilling screw"
+          className="min-w-56 flex-1"
+        />
       </div>
 
       {array.fields.length === 0 ? (
         <p className="border-y border-rule py-3 text-ink-muted">
-          No bridges: the result is the clear-field value only. Add the clips, girts and fasteners that cross the
-          insulation.
+          No bridges: the result is the clear-field value only. Add the clips, girts and fasteners that cross
+          the insulation.
         </p>
       ) : (
         <ol className="flex flex-col border-b border-rule" aria-label="Bridges through the insulation">
@@ -97,13 +117,21 @@ function BridgeRow({ index: j, array }: { index: number; array: BridgesArray }) 
   const label = bridge.name || `Bridge ${j + 1}`;
 
   return (
-    <li className="grid grid-cols-[2rem_1fr] gap-x-3 border-t border-rule py-3" aria-label={`Bridge ${j + 1}: ${label}`}>
+    <li
+      className="grid grid-cols-[2rem_1fr] gap-x-3 border-t border-rule py-3"
+      aria-label={`Bridge ${j + 1}: ${label}`}
+    >
       <span className="num pt-6 text-right text-lg font-medium" aria-hidden="true">
         {String.fromCharCode(65 + (j % 26))}
       </span>
       <div className="flex min-w-0 flex-col gap-3">
         <div className="flex flex-wrap items-end gap-x-4 gap-y-2">
-          <TextField path={`${base}.name`} label={ROLE_TITLES[bridge.kind]} className="min-w-64 flex-[2]" maxLength={120} />
+          <TextField
+            path={`${base}.name`}
+            label={ROLE_TITLES[bridge.kind]}
+            className="min-w-64 flex-[2]"
+            maxLength={120}
+          />
           <button
             type="button"
             className={`${iconButton} text-caution`}
@@ -127,7 +155,15 @@ type PointBridge = Extract<Bridge, { kind: 'point' }>;
 type LinearBridge = Extract<Bridge, { kind: 'linear' }>;
 type FastenerBridge = Extract<Bridge, { kind: 'fastener' }>;
 
-function PointFields({ index: j, bridge, array }: { index: number; bridge: PointBridge; array: BridgesArray }) {
+function PointFields({
+  index: j,
+  bridge,
+  array,
+}: {
+  index: number;
+  bridge: PointBridge;
+  array: BridgesArray;
+}) {
   const base = `thermal.bridges.${j}`;
   const bySpacing = 'spacingHorizontal' in bridge;
   return (
@@ -144,7 +180,13 @@ function PointFields({ index: j, bridge, array }: { index: number; bridge: Point
                 array.update(
                   j,
                   e.target.value === 'spacing'
-                    ? { kind: 'point', name: bridge.name, chi: bridge.chi, spacingHorizontal: 0.406, spacingVertical: 0.6 }
+                    ? {
+                        kind: 'point',
+                        name: bridge.name,
+                        chi: bridge.chi,
+                        spacingHorizontal: 0.406,
+                        spacingVertical: 0.6,
+                      }
                     : { kind: 'point', name: bridge.name, chi: bridge.chi, countPerArea: 4 },
                 )
               }
@@ -156,22 +198,47 @@ function PointFields({ index: j, bridge, array }: { index: number; bridge: Point
         </Field>
         {bySpacing ? (
           <>
-            <MeasureField path={`${base}.spacingHorizontal`} measure="spacing" label="Horizontal spacing" className="w-40" />
+            <MeasureField
+              path={`${base}.spacingHorizontal`}
+              measure="spacing"
+              label="Horizontal spacing"
+              className="w-40"
+            />
             <span aria-hidden="true" className="pt-7 text-ink-muted">
               ×
             </span>
-            <MeasureField path={`${base}.spacingVertical`} measure="spacing" label="Vertical spacing" className="w-40" />
+            <MeasureField
+              path={`${base}.spacingVertical`}
+              measure="spacing"
+              label="Vertical spacing"
+              className="w-40"
+            />
           </>
         ) : (
           <MeasureField path={`${base}.countPerArea`} measure="countPerArea" label="Clips" className="w-40" />
         )}
       </div>
-      <LibraryPick index={j} kind="point" value={bridge.chi} name={bridge.name} array={array} bridge={bridge} />
+      <LibraryPick
+        index={j}
+        kind="point"
+        value={bridge.chi}
+        name={bridge.name}
+        array={array}
+        bridge={bridge}
+      />
     </div>
   );
 }
 
-function LinearFields({ index: j, bridge, array }: { index: number; bridge: LinearBridge; array: BridgesArray }) {
+function LinearFields({
+  index: j,
+  bridge,
+  array,
+}: {
+  index: number;
+  bridge: LinearBridge;
+  array: BridgesArray;
+}) {
   const base = `thermal.bridges.${j}`;
   const bySpacing = 'spacing' in bridge;
   return (
@@ -199,12 +266,29 @@ function LinearFields({ index: j, bridge, array }: { index: number; bridge: Line
           )}
         </Field>
         {bySpacing ? (
-          <MeasureField path={`${base}.spacing`} measure="spacing" label="Spacing on centre" className="w-44" />
+          <MeasureField
+            path={`${base}.spacing`}
+            measure="spacing"
+            label="Spacing on centre"
+            className="w-44"
+          />
         ) : (
-          <MeasureField path={`${base}.lengthPerArea`} measure="lengthPerArea" label="Length per area" className="w-44" />
+          <MeasureField
+            path={`${base}.lengthPerArea`}
+            measure="lengthPerArea"
+            label="Length per area"
+            className="w-44"
+          />
         )}
       </div>
-      <LibraryPick index={j} kind="linear" value={bridge.psi} name={bridge.name} array={array} bridge={bridge} />
+      <LibraryPick
+        index={j}
+        kind="linear"
+        value={bridge.psi}
+        name={bridge.name}
+        array={array}
+        bridge={bridge}
+      />
     </div>
   );
 }
@@ -245,15 +329,23 @@ function LibraryPick({
               const pick = offered.find((b) => b.id === e.target.value);
               if (!pick) return;
               const n = pick.name.slice(0, 120);
-              array.update(j, kind === 'point' ? { ...(bridge as PointBridge), name: n, chi: pick.value } : { ...(bridge as LinearBridge), name: n, psi: pick.value });
+              array.update(
+                j,
+                kind === 'point'
+                  ? { ...(bridge as PointBridge), name: n, chi: pick.value }
+                  : { ...(bridge as LinearBridge), name: n, psi: pick.value },
+              );
             }}
           >
             <option value="">
-              {offered.length === 0 ? `No ${symbol} values in the library yet` : 'Entered by hand — choose a library value…'}
+              {offered.length === 0
+                ? `No ${symbol} values in the library yet`
+                : 'Entered by hand — choose a library value…'}
             </option>
             {offered.map((b) => (
               <option key={b.id} value={b.id}>
-                {b.name} — {symbol} {formatMeasure(b.value, measure, system)} — {SOURCE_TYPE_LABELS[b.sourceType]}: {b.source}
+                {b.name} — {symbol} {formatMeasure(b.value, measure, system)} —{' '}
+                {SOURCE_TYPE_LABELS[b.sourceType]}: {b.source}
               </option>
             ))}
           </Select>
@@ -268,8 +360,8 @@ function LibraryPick({
           </>
         ) : (
           <>
-            {symbol} entered by hand. The manufacturer's tested {symbol} value governs; record where this one came
-            from in the revision note.
+            {symbol} entered by hand. The manufacturer's tested {symbol} value governs; record where this one
+            came from in the revision note.
           </>
         )}
       </p>
@@ -277,17 +369,35 @@ function LibraryPick({
   );
 }
 
-function FastenerFields({ index: j, bridge, array }: { index: number; bridge: FastenerBridge; array: BridgesArray }) {
+function FastenerFields({
+  index: j,
+  bridge,
+  array,
+}: {
+  index: number;
+  bridge: FastenerBridge;
+  array: BridgesArray;
+}) {
   const base = `thermal.bridges.${j}`;
   const { control } = useFormContext<AssemblyFormValues>();
   const layers = (useWatch({ control, name: 'thermal.layers' }) ?? []) as Layer[];
   const layerError = useFieldError(`${base}.layerIndex`);
   return (
     <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-      <MeasureField path={`${base}.conductivity`} measure="conductivity" label="λ_f of the fastener" className="w-48" />
+      <MeasureField
+        path={`${base}.conductivity`}
+        measure="conductivity"
+        label="λ_f of the fastener"
+        className="w-48"
+      />
       <MeasureField path={`${base}.diameter`} measure="diameter" label="Shank diameter" className="w-36" />
       <MeasureField path={`${base}.countPerArea`} measure="countPerArea" label="Fasteners" className="w-36" />
-      <Field label="Layer crossed" error={layerError} className="min-w-56 flex-1" id={fieldDomId(`${base}.layerIndex`)}>
+      <Field
+        label="Layer crossed"
+        error={layerError}
+        className="min-w-56 flex-1"
+        id={fieldDomId(`${base}.layerIndex`)}
+      >
         {(c) => (
           <Select
             {...c}
@@ -320,7 +430,11 @@ function FastenerFields({ index: j, bridge, array }: { index: number; bridge: Fa
               array.update(
                 j,
                 e.target.value === 'recessed'
-                  ? { ...rest, penetration: 'recessed', recessDepth: Number.isFinite(recessDepth) ? recessDepth : 0.01 }
+                  ? {
+                      ...rest,
+                      penetration: 'recessed',
+                      recessDepth: Number.isFinite(recessDepth) ? recessDepth : 0.01,
+                    }
                   : { ...rest, penetration: 'full' },
               );
             }}
@@ -331,7 +445,12 @@ function FastenerFields({ index: j, bridge, array }: { index: number; bridge: Fa
         )}
       </Field>
       {bridge.penetration === 'recessed' ? (
-        <MeasureField path={`${base}.recessDepth`} measure="thickness" label="Recess depth" className="w-36" />
+        <MeasureField
+          path={`${base}.recessDepth`}
+          measure="thickness"
+          label="Recess depth"
+          className="w-36"
+        />
       ) : null}
       <label className="flex items-center gap-2 pt-6 text-sm">
         <input

@@ -52,12 +52,22 @@ export function LayersEditor() {
     });
   }
 
+  /** Vapour data (moisture check) is kept one entry per layer: move, drop or add its entry alongside. */
+  function alignVapour(edit: (list: unknown[]) => void) {
+    const vapour = getValues('vapour');
+    if (!Array.isArray(vapour)) return;
+    const next = [...vapour];
+    edit(next);
+    setValue('vapour', next as AssemblyFormValues['vapour'], { shouldDirty: true });
+  }
+
   const nameAt = (i: number) => (getValues(p(`thermal.layers.${i}.name`)) as string) || `layer ${i + 1}`;
 
   function moveLayer(from: number, to: number, key: string, direction: 'out' | 'in') {
     const name = nameAt(from);
     move(from, to);
     remapFasteners((k) => remapAfterMove(k, from, to));
+    alignVapour((list) => list.splice(to, 0, ...list.splice(from, 1)));
     setAnnouncement(`${name} moved to position ${to + 1} of ${fields.length}.`);
     // Keep the keyboard where it was: on the same button of the moved layer (or its twin at the end).
     requestAnimationFrame(() => {
@@ -71,12 +81,14 @@ export function LayersEditor() {
     const name = nameAt(i);
     remove(i);
     remapFasteners((k) => remapAfterRemove(k, i));
+    alignVapour((list) => list.splice(i, 1));
     setAnnouncement(`${name} removed.`);
   }
 
   function insertLayer(at: number, layer: Layer) {
     insert(at, layer);
     remapFasteners((k) => remapAfterInsert(k, at));
+    alignVapour((list) => list.splice(at, 0, null));
     setAnnouncement(`${layer.name} added at position ${at + 1}.`);
   }
 
@@ -134,7 +146,7 @@ function LayerRow({
 }) {
   const { control } = useFormContext<AssemblyFormValues>();
   const system = useUnitSystem();
-  const { layerR } = useBuilder();
+  const { layerR, disregarded } = useBuilder();
   const layer = useWatch({ control, name: p(`thermal.layers.${i}`) }) as Layer | undefined;
   if (!layer) return null;
   const base = `thermal.layers.${i}`;
@@ -142,7 +154,10 @@ function LayerRow({
   const label = layer.name || `Layer ${i + 1}`;
 
   return (
-    <li className="grid grid-cols-[2rem_1fr] gap-x-3 border-t border-rule py-3" aria-label={`Layer ${i + 1}: ${label}`}>
+    <li
+      className="grid grid-cols-[2rem_1fr] gap-x-3 border-t border-rule py-3"
+      aria-label={`Layer ${i + 1}: ${label}`}
+    >
       <span className="num pt-6 text-right text-lg font-medium text-ink" aria-hidden="true">
         {i + 1}
       </span>
@@ -165,11 +180,29 @@ function LayerRow({
               </Select>
             )}
           </Field>
-          <p className="min-w-28 text-right text-sm">
+          <p className="w-40 shrink-0 text-right text-sm">
             <span className="label-caps block">R of layer</span>
-            <span className="num">{R === undefined ? '—' : formatMeasure(R, 'resistance', system)}</span>
+            <span className="num">
+              {R !== undefined ? (
+                R > 0 && R < 0.001 ? (
+                  `< ${formatMeasure(0.001, 'resistance', system)}`
+                ) : (
+                  formatMeasure(R, 'resistance', system)
+                )
+              ) : disregarded(i) ? (
+                <span
+                  className="font-sans text-xs"
+                  title="Outside a well-ventilated air layer: not counted (ISO 6946 §6.9)"
+                >
+                  not counted
+                </span>
+              ) : (
+                '—'
+              )}
+            </span>
           </p>
-          <div className="flex gap-1" role="group" aria-label={`Move or remove ${label}`}>
+          <fieldset className="flex gap-1">
+            <legend className="sr-only">Move or remove {label}</legend>
             <button
               type="button"
               id={`layer-${rowKey}-out`}
@@ -201,12 +234,17 @@ function LayerRow({
             >
               <span aria-hidden="true">✕</span>
             </button>
-          </div>
+          </fieldset>
         </div>
 
         {layer.kind === 'homogeneous' ? (
           <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-            <MeasureField path={`${base}.thickness`} measure="thickness" label="Thickness d" className="w-36" />
+            <MeasureField
+              path={`${base}.thickness`}
+              measure="thickness"
+              label="Thickness d"
+              className="w-36"
+            />
             <MeasureField path={`${base}.conductivity`} measure="conductivity" label="λ" className="w-52" />
             <MaterialSource materialId={layer.materialId} conductivity={layer.conductivity} />
           </div>
@@ -243,8 +281,7 @@ function MaterialSource({ materialId, conductivity }: { materialId?: string; con
   const changed = Number.isFinite(conductivity) && Math.abs(conductivity - m.conductivity) > 1e-9;
   return (
     <p className="max-w-md self-center text-xs text-ink-muted">
-      Generic library: {m.name}. {m.source}{' '}
-      <span className="italic">({m.provenance})</span>
+      Generic library: {m.name}. {m.source} <span className="italic">({m.provenance})</span>
       {changed ? (
         <span className="block font-semibold text-ink">
           λ changed from the library's {formatMeasure(m.conductivity, 'conductivity', system)}.
@@ -280,7 +317,10 @@ function AirFields({
             value={layer.ventilation}
             className="py-1.5 text-sm"
             onChange={(e) =>
-              array.update(i, { ...layer, ventilation: e.target.value as (typeof VENTILATION)[number]['value'] })
+              array.update(i, {
+                ...layer,
+                ventilation: e.target.value as (typeof VENTILATION)[number]['value'],
+              })
             }
           >
             {VENTILATION.map((v) => (
@@ -329,13 +369,15 @@ function FramedFields({
 }) {
   const base = `thermal.layers.${i}`;
   const { control, setValue } = useFormContext<AssemblyFormValues>();
-  const sections = useFieldArray({ control, name: p(`${base}.sections`) as 'thermal.layers.0.sections', keyName: 'key' });
+  const sections = useFieldArray({
+    control,
+    name: p(`${base}.sections`) as 'thermal.layers.0.sections',
+    keyName: 'key',
+  });
   const sectionsErrorPath = `${base}.sections`;
   const sectionsError = useFieldError(sectionsErrorPath);
   const describedBy = sectionsError ? `${fieldDomId(sectionsErrorPath)}-error` : undefined;
   const sum = layer.sections.reduce((a, s) => a + (Number.isFinite(s.fraction) ? s.fraction : 0), 0);
-  const last = layer.sections.length - 1;
-  const rest = last >= 0 ? 1 - (sum - (Number.isFinite(layer.sections[last]!.fraction) ? layer.sections[last]!.fraction : 0)) : 0;
 
   return (
     <div className="flex flex-col gap-3">
@@ -365,8 +407,18 @@ function FramedFields({
         </label>
         {layer.metal ? (
           <>
-            <MeasureField path={`${base}.flangeWidth`} measure="spacing" label="Flange width m" className="w-40" />
-            <MeasureField path={`${base}.spacing`} measure="spacing" label="Spacing s (on centre)" className="w-44" />
+            <MeasureField
+              path={`${base}.flangeWidth`}
+              measure="spacing"
+              label="Flange width m"
+              className="w-40"
+            />
+            <MeasureField
+              path={`${base}.spacing`}
+              measure="spacing"
+              label="Spacing s (on centre)"
+              className="w-44"
+            />
           </>
         ) : null}
       </div>
@@ -376,8 +428,17 @@ function FramedFields({
         <ul className="mt-2 flex flex-col gap-2">
           {sections.fields.map((s, q) => (
             <li key={s.key} className="flex flex-wrap items-start gap-x-3 gap-y-1">
-              <TextField path={`${base}.sections.${q}.name`} label={`Section ${q + 1}`} className="min-w-48 flex-1" />
-              <MeasureField path={`${base}.sections.${q}.conductivity`} measure="conductivity" label="λ" className="w-48" />
+              <TextField
+                path={`${base}.sections.${q}.name`}
+                label={`Section ${q + 1}`}
+                className="min-w-48 flex-1"
+              />
+              <MeasureField
+                path={`${base}.sections.${q}.conductivity`}
+                measure="conductivity"
+                label="λ"
+                className="w-48"
+              />
               <MeasureField
                 path={`${base}.sections.${q}.fraction`}
                 measure="fraction"
@@ -403,19 +464,32 @@ function FramedFields({
             variant="quiet"
             className="px-2 py-1"
             disabled={sections.fields.length >= 8}
-            onClick={() => sections.append({ name: 'Section', conductivity: 0.04, fraction: Math.max(0, 1 - sum) || 0.1 })}
+            onClick={() =>
+              sections.append({ name: 'Section', conductivity: 0.04, fraction: Math.max(0, 1 - sum) || 0.1 })
+            }
           >
             + Add section
           </Button>
-          {Math.abs(sum - 1) > 1e-9 && last >= 0 && rest > 0 ? (
-            <Button
-              variant="quiet"
-              className="px-2 py-1"
-              onClick={() => setValue(p(`${base}.sections.${last}.fraction`), rest, { shouldDirty: true })}
-            >
-              Give the rest ({formatMeasure(rest, 'fraction', 'SI', 4)}) to “{layer.sections[last]!.name}”
-            </Button>
-          ) : null}
+          {Math.abs(sum - 1) > 1e-9
+            ? layer.sections.map((sec, q) => {
+                const own = Number.isFinite(sec.fraction) ? sec.fraction : 0;
+                const remainder = 1 - (sum - own);
+                return remainder > 0 && remainder <= 1 ? (
+                  <Button
+                    // biome-ignore lint/suspicious/noArrayIndexKey: sections are positional
+                    key={q}
+                    variant="quiet"
+                    className="px-2 py-1"
+                    onClick={() =>
+                      setValue(p(`${base}.sections.${q}.fraction`), remainder, { shouldDirty: true })
+                    }
+                  >
+                    Give the rest to “{sec.name || `section ${q + 1}`}” (
+                    {formatMeasure(remainder, 'fraction', 'SI', 4)})
+                  </Button>
+                ) : null;
+              })
+            : null}
           <span className="num ml-auto text-ink-muted">Σ = {formatMeasure(sum, 'fraction', 'SI', 4)}</span>
         </div>
         {sectionsError ? (
@@ -473,7 +547,12 @@ function AddLayer({
       <legend className="sr-only">Add a layer</legend>
       <Field label="Add a layer" className="min-w-72 flex-[2]">
         {(c) => (
-          <Select {...c} value={choice} onChange={(e) => setChoice(e.target.value)} className="py-1.5 text-sm">
+          <Select
+            {...c}
+            value={choice}
+            onChange={(e) => setChoice(e.target.value)}
+            className="py-1.5 text-sm"
+          >
             {byCategory.map((g) =>
               g.items.length ? (
                 <optgroup key={g.label} label={`Generic library — ${g.label}`}>
@@ -510,7 +589,12 @@ function AddLayer({
       </Field>
       <Field label="Where" className="min-w-56 flex-1">
         {(c) => (
-          <Select {...c} value={position} onChange={(e) => setPosition(e.target.value)} className="py-1.5 text-sm">
+          <Select
+            {...c}
+            value={position}
+            onChange={(e) => setPosition(e.target.value)}
+            className="py-1.5 text-sm"
+          >
             <option value="end">At the inside face (last)</option>
             <option value="start">At the outside face (first)</option>
             {names.map((n, i) => (

@@ -96,6 +96,8 @@ export function MeasureInput({
         ? `Enter a value in ${unit}.`
         : undefined;
   const shown = (touched || error ? local : undefined) ?? error;
+  // Long units (Btu·in/(h·ft²·°F)) do not fit beside a narrow box: the label carries them alone.
+  const suffix = unit.length <= 8 && unit !== '–';
 
   return (
     <Field
@@ -128,17 +130,19 @@ export function MeasureInput({
               onBlur?.();
             }}
             className={
-              'num block w-full min-w-0 rounded-l-sm border border-rule-strong bg-paper-raised px-2 py-1.5 ' +
+              `num block w-full min-w-0 ${suffix ? 'rounded-l-sm' : 'rounded-sm'} border border-rule-strong bg-paper-raised px-2 py-1.5 ` +
               'text-right text-sm text-ink aria-[invalid=true]:border-2 aria-[invalid=true]:border-caution ' +
               'disabled:bg-paper-sunk disabled:text-ink-muted'
             }
           />
-          <span
-            aria-hidden="true"
-            className="num flex min-w-10 items-center justify-center whitespace-nowrap rounded-r-sm border border-l-0 border-rule-strong bg-paper-sunk px-1.5 text-xs text-ink-muted"
-          >
-            {unit}
-          </span>
+          {suffix ? (
+            <span
+              aria-hidden="true"
+              className="num flex min-w-10 items-center justify-center whitespace-nowrap rounded-r-sm border border-l-0 border-rule-strong bg-paper-sunk px-1.5 text-xs text-ink-muted"
+            >
+              {unit}
+            </span>
+          ) : null}
         </div>
       )}
     </Field>

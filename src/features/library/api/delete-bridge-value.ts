@@ -13,6 +13,6 @@ export function useDeleteBridgeValue() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: deleteBridgeValue,
-    onSuccess: (_: void, { orgId }) => qc.invalidateQueries({ queryKey: libraryKeys.bridgeValues(orgId) }),
+    onSuccess: (_data, { orgId }) => qc.invalidateQueries({ queryKey: libraryKeys.bridgeValues(orgId) }),
   });
 }

@@ -12,6 +12,6 @@ export function useDeleteFirmMaterial() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: deleteFirmMaterial,
-    onSuccess: (_: void, { orgId }) => qc.invalidateQueries({ queryKey: libraryKeys.materials(orgId) }),
+    onSuccess: (_data, { orgId }) => qc.invalidateQueries({ queryKey: libraryKeys.materials(orgId) }),
   });
 }

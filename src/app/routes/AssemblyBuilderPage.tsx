@@ -1,0 +1,96 @@
+import { can } from '@shared/auth/permissions';
+import type { Project } from '@shared/schemas/project';
+import { Link, useParams } from 'react-router';
+import { Loading } from '../../components/ui/Loading';
+import { Notice } from '../../components/ui/Notice';
+import { useAssembly } from '../../features/assemblies/api/get-assembly';
+import { AssemblyBuilder } from '../../features/assemblies/components/AssemblyBuilder';
+import { AssemblySheet } from '../../features/assemblies/components/AssemblySheet';
+import { RevisionHistory } from '../../features/assemblies/components/RevisionHistory';
+import { useBridgeValues } from '../../features/library/api/get-bridge-values';
+import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
+import { useMe } from '../../features/me/api/get-me';
+import { useProject } from '../../features/projects/api/get-project';
+import { errorMessage } from '../../lib/api';
+import { formatDateTime } from '../../lib/format';
+
+/**
+ * The firm library offered in the builder: the person's firm that owns the project if they belong to it,
+ * else their first firm. (Composed here so that the assemblies and library features stay apart.)
+ */
+export function useBuilderLibrary(project: Project | undefined) {
+  const me = useMe();
+  const orgs = me.data?.organisations ?? [];
+  const org = orgs.find((o) => o.id === project?.organisationId) ?? orgs[0];
+  const materials = useFirmMaterials(org?.id);
+  const bridgeValues = useBridgeValues(org?.id);
+  return {
+    firmName: org?.name ?? null,
+    firmMaterials: materials.data ?? [],
+    bridgeValues: bridgeValues.data ?? [],
+  };
+}
+
+export function AssemblyBuilderPage() {
+  const { id = '', assemblyId = '' } = useParams();
+  const { data: project } = useProject(id);
+  const assembly = useAssembly(assemblyId);
+  const library = useBuilderLibrary(project);
+
+  if (!project) return null;
+  if (assembly.isPending) return <Loading what="Loading the assembly" />;
+  if (assembly.isError) return <Notice tone="caution" title={errorMessage(assembly.error)} live />;
+
+  const a = assembly.data;
+  if (a.projectId !== project.id)
+    return <Notice tone="caution" title="This assembly belongs to another project." />;
+  const mayWrite = can(project.myRole, 'assembly.write') && project.archivedAt === null;
+  const base = `/projects/${project.id}/assemblies`;
+
+  return (
+    <div className="flex flex-col gap-10">
+      <title>{`${a.name} · ${project.name} · Skinwright`}</title>
+      <nav aria-label="Breadcrumb" className="-mt-2 text-sm">
+        <Link to={base}>Assemblies</Link> <span aria-hidden="true">/</span> {a.name}
+      </nav>
+      {mayWrite ? (
+        <AssemblyBuilder
+          key={a.id}
+          projectId={project.id}
+          initial={a.current.input}
+          assembly={a}
+          firmName={library.firmName}
+          firmMaterials={library.firmMaterials}
+          bridgeValues={library.bridgeValues}
+        />
+      ) : (
+        <AssemblySheet
+          input={a.current.input}
+          storedResult={a.current.thermalResult}
+          engineVersion={a.current.engineVersion}
+          bridgeValues={library.bridgeValues}
+          heading={
+            <header className="flex flex-col gap-1">
+              <p className="label-caps">
+                Assembly · revision {a.revision} saved {formatDateTime(a.current.createdAt)}
+                {a.current.createdBy ? ` by ${a.current.createdBy}` : ''} · read-only
+              </p>
+              <h2 className="text-3xl">{a.name}</h2>
+              <p className="text-sm text-ink-muted">
+                {project.archivedAt
+                  ? 'The project is archived, so its assemblies are shown read-only.'
+                  : 'Your role on this project shows assemblies read-only.'}
+              </p>
+            </header>
+          }
+        />
+      )}
+      <RevisionHistory
+        projectId={project.id}
+        assemblyId={a.id}
+        currentRevision={a.revision}
+        openRevision={a.revision}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,119 @@
+import { useState } from 'react';
+import { Field } from '../../components/ui/Field';
+import { Loading } from '../../components/ui/Loading';
+import { Notice } from '../../components/ui/Notice';
+import { PageHeader } from '../../components/ui/PageHeader';
+import { Select } from '../../components/ui/Select';
+import { useBridgeValues } from '../../features/library/api/get-bridge-values';
+import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
+import { useReferenceMaterials } from '../../features/library/api/get-reference-materials';
+import { AddBridgeValueForm } from '../../features/library/components/AddBridgeValueForm';
+import { AddFirmMaterialForm } from '../../features/library/components/AddFirmMaterialForm';
+import {
+  BridgeValuesTable,
+  FirmMaterialsTable,
+  GenericMaterialsTable,
+} from '../../features/library/components/LibraryTables';
+import { useMe } from '../../features/me/api/get-me';
+import { errorMessage } from '../../lib/api';
+
+export function LibraryPage() {
+  const me = useMe();
+  const reference = useReferenceMaterials();
+  const orgs = me.data?.organisations ?? [];
+  const [chosen, setChosen] = useState<string | undefined>(undefined);
+  const org = orgs.find((o) => o.id === chosen) ?? orgs[0];
+  const materials = useFirmMaterials(org?.id);
+  const bridgeValues = useBridgeValues(org?.id);
+  const isAdmin = org?.role === 'admin';
+
+  return (
+    <div className="flex flex-col gap-10">
+      <title>Library · Skinwright</title>
+      <PageHeader
+        eyebrow="Reference"
+        title="Library"
+        description="The values the assemblies draw on: generic materials shipped with Skinwright, and your firm's own materials and χ/ψ values — each with where it came from."
+      />
+
+      {orgs.length === 0 ? (
+        <Notice tone="info" title="You are not a member of a firm, so there is no firm library to show." />
+      ) : (
+        <>
+          {orgs.length > 1 ? (
+            <Field label="Firm" className="max-w-sm">
+              {(c) => (
+                <Select {...c} value={org?.id} onChange={(e) => setChosen(e.target.value)}>
+                  {orgs.map((o) => (
+                    <option key={o.id} value={o.id}>
+                      {o.name}
+                    </option>
+                  ))}
+                </Select>
+              )}
+            </Field>
+          ) : null}
+
+          <section aria-labelledby="firm-bridges-heading" className="flex flex-col gap-4">
+            <div className="border-b border-ink pb-1">
+              <h2 id="firm-bridges-heading" className="text-2xl">
+                χ and ψ values — {org?.name}
+              </h2>
+              <p className="text-sm text-ink-muted">
+                Clips and brackets (point bridges χ) and girts and rails (linear bridges ψ), as tested or
+                published. The builder offers them on every clip and girt.
+                {isAdmin ? '' : ' Firm administrators can remove entries.'}
+              </p>
+            </div>
+            {bridgeValues.isPending ? (
+              <Loading what="Loading the firm's χ and ψ values" />
+            ) : bridgeValues.isError ? (
+              <Notice tone="caution" title={errorMessage(bridgeValues.error)} />
+            ) : (
+              <BridgeValuesTable orgId={org!.id} values={bridgeValues.data} isAdmin={isAdmin} />
+            )}
+            {org ? <AddBridgeValueForm orgId={org.id} /> : null}
+          </section>
+
+          <section aria-labelledby="firm-materials-heading" className="flex flex-col gap-4">
+            <div className="border-b border-ink pb-1">
+              <h2 id="firm-materials-heading" className="text-2xl">
+                Materials — {org?.name}
+              </h2>
+              <p className="text-sm text-ink-muted">
+                Product values from data sheets and test reports; they override the generic values below.
+              </p>
+            </div>
+            {materials.isPending ? (
+              <Loading what="Loading the firm's materials" />
+            ) : materials.isError ? (
+              <Notice tone="caution" title={errorMessage(materials.error)} />
+            ) : (
+              <FirmMaterialsTable orgId={org!.id} materials={materials.data} isAdmin={isAdmin} />
+            )}
+            {org ? <AddFirmMaterialForm orgId={org.id} /> : null}
+          </section>
+        </>
+      )}
+
+      <section aria-labelledby="generic-heading" className="flex flex-col gap-4">
+        <div className="border-b border-ink pb-1">
+          <h2 id="generic-heading" className="text-2xl">
+            Generic materials
+          </h2>
+          <p className="text-sm text-ink-muted">
+            Design values for early checks only; a product's declared value overrides them. Each row names the
+            table it belongs to and whether it has been checked against that table.
+          </p>
+        </div>
+        {reference.isPending ? (
+          <Loading what="Loading the generic materials" />
+        ) : reference.isError ? (
+          <Notice tone="caution" title={errorMessage(reference.error)} />
+        ) : (
+          <GenericMaterialsTable materials={reference.data} />
+        )}
+      </section>
+    </div>
+  );
+}

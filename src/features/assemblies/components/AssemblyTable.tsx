@@ -1,0 +1,64 @@
+import { type AssemblySummary, WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
+import { Link } from 'react-router';
+import { Table, Td, Th } from '../../../components/ui/Table';
+import { formatDate } from '../../../lib/format';
+import { useUnitSystem } from '../../../lib/unit-system';
+import { rNumber, rUnit, uNumber, uUnit } from '../units';
+
+/** The project's assemblies with their effective R and U in the person's units. */
+export function AssemblyTable({
+  projectId,
+  assemblies,
+  caption = 'Assemblies of this project',
+}: {
+  projectId: string;
+  assemblies: readonly AssemblySummary[];
+  caption?: string;
+}) {
+  const system = useUnitSystem();
+  return (
+    <Table caption={caption} captionHidden>
+      <thead>
+        <tr>
+          <Th>Assembly</Th>
+          <Th>Wall category</Th>
+          <Th numeric>Rev.</Th>
+          <Th numeric>
+            Effective R
+            <span className="block text-xs font-normal text-ink-muted">
+              {system === 'IP' ? 'R-value' : rUnit(system)}
+            </span>
+          </Th>
+          <Th numeric>
+            Effective U<span className="block text-xs font-normal text-ink-muted">{uUnit(system)}</span>
+          </Th>
+          <Th numeric>Updated</Th>
+        </tr>
+      </thead>
+      <tbody>
+        {assemblies.map((a) => (
+          <tr key={a.id} className="hover:bg-paper-sunk">
+            <Td>
+              <Link to={`/projects/${projectId}/assemblies/${a.id}`} className="font-semibold">
+                {a.name}
+              </Link>
+            </Td>
+            <Td>{WALL_CATEGORY_LABELS[a.wallCategory]}</Td>
+            <Td numeric>{a.revision}</Td>
+            <Td numeric>
+              {a.Reff == null
+                ? '—'
+                : system === 'IP'
+                  ? `R-${rNumber(a.Reff, system)}`
+                  : rNumber(a.Reff, system)}
+            </Td>
+            <Td numeric>{uNumber(a.Ueff, system)}</Td>
+            <Td numeric className="whitespace-nowrap">
+              {formatDate(a.updatedAt)}
+            </Td>
+          </tr>
+        ))}
+      </tbody>
+    </Table>
+  );
+}

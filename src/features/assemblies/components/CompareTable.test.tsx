@@ -1,0 +1,48 @@
+import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import { calculateThermal } from '@shared/calc/thermal/thermal';
+import type { AssemblyInput } from '@shared/schemas/assembly';
+import { cleanup, render, screen, within } from '@testing-library/react';
+import { afterEach, describe, expect, it } from 'vitest';
+import { UnitSystemProvider } from '../../../lib/unit-system';
+import { type CompareColumn, CompareTable } from './CompareTable';
+
+afterEach(cleanup);
+
+function column(key: string, title: string, clipSpacing: number): CompareColumn {
+  const thermal = metalPanelWall();
+  const clips = thermal.bridges[0];
+  if (clips?.kind === 'point' && 'spacingHorizontal' in clips) clips.spacingHorizontal = clipSpacing;
+  const input: AssemblyInput = {
+    name: title,
+    description: '',
+    wallCategory: 'steel_framed',
+    attachment: { girtOrientation: 'horizontal', clipType: '', fastenerType: '' },
+    thermal,
+  };
+  return { key, title, subtitle: 'rev. 1 (current)', input, result: calculateThermal(thermal) };
+}
+
+describe('Compare table', () => {
+  it('names a difference from the baseline in words and with a glyph, and marks equal figures as same', () => {
+    render(
+      <UnitSystemProvider value="SI">
+        <CompareTable
+          columns={[column('a', 'Clips at 406 mm', 0.406), column('b', 'Clips at 203 mm', 0.203)]}
+        />
+      </UnitSystemProvider>,
+    );
+    const reffRow = screen.getByRole('rowheader', { name: /Effective R_eff/ }).closest('tr') as HTMLElement;
+    const cells = within(reffRow).getAllByRole('cell');
+    // Column B: more clips, lower effective R — said in words, with ▼, and marked as worse.
+    expect(cells[1]?.textContent).toMatch(/▼.*lower than A — worse/);
+    expect(cells[1]?.className).toContain('border-l-4');
+
+    const r0Row = screen.getByRole('rowheader', { name: /Clear-field R₀/ }).closest('tr') as HTMLElement;
+    const r0Cells = within(r0Row).getAllByRole('cell');
+    expect(r0Cells[1]?.textContent).toMatch(/=.*same as A/);
+    expect(r0Cells[1]?.className).not.toContain('border-l-4');
+
+    const ueffRow = screen.getByRole('rowheader', { name: /Effective U_eff/ }).closest('tr') as HTMLElement;
+    expect(within(ueffRow).getAllByRole('cell')[1]?.textContent).toMatch(/▲.*higher than A — worse/);
+  });
+});

@@ -1,0 +1,81 @@
+import type { ThermalResult } from '@shared/calc/thermal/schema';
+import type { ReactNode } from 'react';
+import { useUnitSystem } from '../../../lib/unit-system';
+import { formatR, formatU } from '../units';
+
+function Figure({
+  label,
+  symbol,
+  primary,
+  secondary,
+  testId,
+  strong = false,
+}: {
+  label: string;
+  symbol: ReactNode;
+  primary: string;
+  secondary: string;
+  testId: string;
+  strong?: boolean;
+}) {
+  return (
+    <div className={`flex flex-col gap-0.5 px-4 py-3 ${strong ? 'bg-paper-raised' : 'bg-paper'}`}>
+      <dt className="label-caps">
+        {label}{' '}
+        <span className="font-serif text-sm normal-case italic tracking-normal text-ink">{symbol}</span>
+      </dt>
+      <dd className={`num ${strong ? 'text-2xl font-medium' : 'text-xl'} text-ink`} data-testid={testId}>
+        {primary}
+      </dd>
+      <dd className="num text-sm text-ink-muted">{secondary}</dd>
+    </div>
+  );
+}
+
+/** Clear-field and effective R and U, the person's units first, the other system beneath. */
+export function ResultFigures({ result }: { result: ThermalResult }) {
+  const system = useUnitSystem();
+  const other = system === 'SI' ? 'IP' : 'SI';
+  const drop = result.Reff / result.R0 - 1;
+  return (
+    <div className="flex flex-col gap-2">
+      <dl className="grid grid-cols-1 gap-px border border-ink bg-rule sm:grid-cols-2 lg:grid-cols-4">
+        <Figure
+          label="Clear field"
+          symbol="R₀"
+          primary={formatR(result.R0, system)}
+          secondary={formatR(result.R0, other)}
+          testId="result-R0"
+        />
+        <Figure
+          label="Clear field"
+          symbol="U₀"
+          primary={formatU(result.U0, system)}
+          secondary={formatU(result.U0, other)}
+          testId="result-U0"
+        />
+        <Figure
+          label="Effective"
+          symbol="R_eff"
+          primary={formatR(result.Reff, system)}
+          secondary={formatR(result.Reff, other)}
+          testId="result-Reff"
+          strong
+        />
+        <Figure
+          label="Effective"
+          symbol="U_eff"
+          primary={formatU(result.Ueff, system)}
+          secondary={formatU(result.Ueff, other)}
+          testId="result-Ueff"
+          strong
+        />
+      </dl>
+      <p className="text-sm">
+        {result.bridges.length === 0
+          ? 'No bridges entered: the effective value equals the clear-field value.'
+          : `The ${result.bridges.length === 1 ? 'bridge lowers' : `${result.bridges.length} bridges lower`} R by ${Math.abs(drop * 100).toFixed(1)} % (R_eff against R₀); they carry ${((1 - result.clearFieldShare) * 100).toFixed(1)} % of the heat lost through the wall.`}
+      </p>
+    </div>
+  );
+}

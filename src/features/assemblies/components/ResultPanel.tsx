@@ -1,0 +1,169 @@
+import type { ThermalInput, ThermalResult } from '@shared/calc/thermal/schema';
+import type { ReactNode } from 'react';
+import { Notice } from '../../../components/ui/Notice';
+import { fieldDomId } from '../evaluate';
+import { Cautions } from './Cautions';
+import { MethodSection } from './MethodSection';
+import { ResultFigures } from './ResultFigures';
+import { SectionSketch } from './SectionSketch';
+import { ShareChart } from './ShareChart';
+import { ShowTheWork } from './ShowTheWork';
+
+export function SheetSection({
+  n,
+  title,
+  id,
+  children,
+  aside,
+}: {
+  n: number;
+  title: string;
+  id: string;
+  children: ReactNode;
+  aside?: ReactNode;
+}) {
+  return (
+    <section aria-labelledby={id} className="flex flex-col gap-4">
+      <div className="flex flex-wrap items-baseline justify-between gap-3 border-b border-ink pb-1">
+        <h3 id={id} className="flex items-baseline gap-3 text-xl">
+          <span className="num text-base font-normal text-ink-muted">{n}</span>
+          {title}
+        </h3>
+        {aside}
+      </div>
+      {children}
+    </section>
+  );
+}
+
+/** Plain words for a form path, for the list of what the result is waiting for. */
+export function describePath(path: string, thermal: Partial<ThermalInput> | undefined): string {
+  const parts = path.split('.');
+  const FIELD: Record<string, string> = {
+    thickness: 'thickness',
+    conductivity: 'λ',
+    resistance: 'declared R',
+    sections: 'sections',
+    fraction: 'area fraction',
+    flangeWidth: 'flange width',
+    spacing: 'spacing',
+    spacingHorizontal: 'horizontal spacing',
+    spacingVertical: 'vertical spacing',
+    chi: 'χ',
+    psi: 'ψ',
+    countPerArea: 'count per area',
+    lengthPerArea: 'length per area',
+    diameter: 'diameter',
+    recessDepth: 'recess depth',
+    layerIndex: 'layer crossed',
+    emissivityFactor: 'emittance E',
+    name: 'name',
+    metal: 'metal framing',
+    bothEndsMetal: 'both ends on metal',
+    materialId: 'library material',
+  };
+  if (parts[1] === 'layers' && parts[2] !== undefined) {
+    const i = Number(parts[2]);
+    const layer = thermal?.layers?.[i];
+    const where = `Layer ${i + 1}${layer?.name ? ` (${layer.name})` : ''}`;
+    if (parts[3] === 'sections' && parts[4] !== undefined)
+      return `${where}, section ${Number(parts[4]) + 1}: ${FIELD[parts[5] ?? ''] ?? parts[5] ?? ''}`;
+    return parts[3] ? `${where}: ${FIELD[parts[3]] ?? parts[3]}` : where;
+  }
+  if (parts[1] === 'bridges' && parts[2] !== undefined) {
+    const j = Number(parts[2]);
+    const b = thermal?.bridges?.[j];
+    const where = `Attachment ${String.fromCharCode(65 + (j % 26))}${b?.name ? ` (${b.name})` : ''}`;
+    return parts[3] ? `${where}: ${FIELD[parts[3]] ?? parts[3]}` : where;
+  }
+  if (parts[1] === 'layers') return 'Layers';
+  if (parts[1] === 'heatFlow') return 'Heat-flow direction';
+  return FIELD[parts[parts.length - 1] ?? ''] ?? path;
+}
+
+/** What stands between the input and a result, each linked to its field. */
+export function WaitingFor({
+  errors,
+  thermal,
+}: {
+  errors: Record<string, string>;
+  thermal: Partial<ThermalInput> | undefined;
+}) {
+  const entries = Object.entries(errors).filter(([k]) => k.startsWith('thermal'));
+  if (entries.length === 0) return null;
+  return (
+    <Notice tone="caution" title="No result yet — the calculation needs:" live>
+      <ul className="list-disc pl-5">
+        {entries.map(([path, message]) => (
+          <li key={path}>
+            <a
+              href={`#${fieldDomId(path)}`}
+              onClick={(e) => {
+                const el = document.getElementById(fieldDomId(path));
+                if (!el) return;
+                e.preventDefault();
+                el.scrollIntoView({ block: 'center' });
+                el.focus?.();
+              }}
+            >
+              {describePath(path, thermal)}
+            </a>
+            : {message}
+          </li>
+        ))}
+      </ul>
+    </Notice>
+  );
+}
+
+interface ResultPanelProps {
+  thermal: ThermalInput | undefined;
+  girtOrientation: 'horizontal' | 'vertical';
+  result: ThermalResult | null;
+  errors: Record<string, string>;
+  engineVersion?: string;
+  /** Shown above the figures (e.g. "stored result" or "updates as you type"). */
+  resultNote?: ReactNode;
+  startAt?: number;
+}
+
+/** Method, result (figures, section, shares, the work) and cautions — the lower half of every sheet. */
+export function ResultPanel({
+  thermal,
+  girtOrientation,
+  result,
+  errors,
+  engineVersion,
+  resultNote,
+  startAt = 3,
+}: ResultPanelProps) {
+  return (
+    <>
+      <SheetSection n={startAt} title="Method" id="method-heading">
+        {result ? (
+          <MethodSection result={result} />
+        ) : (
+          <p className="text-ink-muted">The method is chosen once the build-up can be computed.</p>
+        )}
+      </SheetSection>
+
+      <SheetSection n={startAt + 1} title="Result" id="result-heading" aside={resultNote}>
+        <div aria-live="polite" className="flex flex-col gap-4">
+          {result ? <ResultFigures result={result} /> : <WaitingFor errors={errors} thermal={thermal} />}
+        </div>
+        {thermal ? <SectionSketch thermal={thermal} girtOrientation={girtOrientation} /> : null}
+        {result ? (
+          <>
+            <div className="flex flex-col gap-2">
+              <h4 className="font-serif text-lg">Where the heat goes</h4>
+              <ShareChart result={result} />
+            </div>
+            <ShowTheWork result={result} />
+          </>
+        ) : null}
+      </SheetSection>
+
+      <Cautions engineVersion={engineVersion} />
+    </>
+  );
+}

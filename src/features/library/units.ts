@@ -1,0 +1,43 @@
+import { CHI_IP_TO_SI, K_IP_TO_SI, PSI_IP_TO_SI, type UnitSystem } from '@shared/units';
+
+/** 1 lb/ft³ = 16.018 46 kg/m³ (NIST SP 811 B.9). */
+const LB_FT3_TO_SI = 16.01846;
+
+/** The library's quantities; shown = SI / factor. Stored values stay SI. */
+export type LibraryMeasure = 'conductivity' | 'density' | 'chi' | 'psi';
+
+const SPECS: Record<
+  LibraryMeasure,
+  { unit: Record<UnitSystem, string>; factor: Record<UnitSystem, number>; decimals: number }
+> = {
+  conductivity: {
+    unit: { SI: 'W/(m·K)', IP: 'Btu·in/(h·ft²·°F)' },
+    factor: { SI: 1, IP: K_IP_TO_SI },
+    decimals: 4,
+  },
+  density: { unit: { SI: 'kg/m³', IP: 'lb/ft³' }, factor: { SI: 1, IP: LB_FT3_TO_SI }, decimals: 2 },
+  chi: { unit: { SI: 'W/K', IP: 'Btu/(h·°F)' }, factor: { SI: 1, IP: CHI_IP_TO_SI }, decimals: 4 },
+  psi: { unit: { SI: 'W/(m·K)', IP: 'Btu/(h·ft·°F)' }, factor: { SI: 1, IP: PSI_IP_TO_SI }, decimals: 4 },
+};
+
+export const libraryUnit = (m: LibraryMeasure, system: UnitSystem) => SPECS[m].unit[system];
+
+function trimmed(value: number, decimals: number): string {
+  const fixed = value.toFixed(decimals);
+  const t = fixed.includes('.') ? fixed.replace(/0+$/, '').replace(/\.$/, '') : fixed;
+  return t === '-0' ? '0' : t;
+}
+
+/** The number alone, in the person's units ("—" when absent). */
+export function libraryNumber(si: number | null | undefined, m: LibraryMeasure, system: UnitSystem): string {
+  if (si == null || !Number.isFinite(si)) return '—';
+  return trimmed(si / SPECS[m].factor[system], SPECS[m].decimals);
+}
+
+/** Read a typed number in the person's units; undefined when empty, NaN when unreadable. */
+export function parseLibraryNumber(text: string, m: LibraryMeasure, system: UnitSystem): number | undefined {
+  const t = text.trim().replace(/\u2212/g, '-');
+  if (t === '') return undefined;
+  if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return Number.NaN;
+  return Number(t) * SPECS[m].factor[system];
+}

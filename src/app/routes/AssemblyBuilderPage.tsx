@@ -1,6 +1,6 @@
 import { can } from '@shared/auth/permissions';
 import type { Project } from '@shared/schemas/project';
-import { Link, useParams } from 'react-router';
+import { useParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { useAssembly } from '../../features/assemblies/api/get-assembly';
@@ -13,6 +13,7 @@ import { useMe } from '../../features/me/api/get-me';
 import { useProject } from '../../features/projects/api/get-project';
 import { errorMessage } from '../../lib/api';
 import { formatDateTime } from '../../lib/format';
+import { AssemblyTabs } from '../layout/AssemblyTabs';
 
 /**
  * The firm library offered in the builder: the person's firm that owns the project if they belong to it,
@@ -45,14 +46,11 @@ export function AssemblyBuilderPage() {
   if (a.projectId !== project.id)
     return <Notice tone="caution" title="This assembly belongs to another project." />;
   const mayWrite = can(project.myRole, 'assembly.write') && project.archivedAt === null;
-  const base = `/projects/${project.id}/assemblies`;
 
   return (
     <div className="flex flex-col gap-10">
       <title>{`${a.name} · ${project.name} · Skinwright`}</title>
-      <nav aria-label="Breadcrumb" className="-mt-2 text-sm">
-        <Link to={base}>Assemblies</Link> <span aria-hidden="true">/</span> {a.name}
-      </nav>
+      <AssemblyTabs projectId={project.id} assemblyId={a.id} name={a.name} />
       {mayWrite ? (
         <AssemblyBuilder
           key={a.id}

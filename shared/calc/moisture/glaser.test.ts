@@ -6,6 +6,7 @@ import {
   type DiffusionPath,
   glaserProfile,
   glaserWork,
+  MAX_SUBLAYERS,
   nodeTemperatures,
   type PathLayer,
   saturationPressures,
@@ -52,6 +53,30 @@ describe('assemblePath', () => {
   it('refuses a layer without vapour resistance, naming the layer', () => {
     expect(() => assemblePath([layer(0.1, 0, 3)], 0.13, 0.04)).toThrow(CalcInputError);
     expect(() => assemblePath([layer(0.1, 0, 3)], 0.13, 0.04)).toThrow(/layers\.3\.vapour/);
+  });
+  it('refuses more than MAX_SUBLAYERS sub-layers in all, naming the most resistive layer', () => {
+    // 249 + 1 m²·K/W → 996 + 4 = 1000 sub-layers: allowed.
+    expect(assemblePath([layer(249, 1, 0), layer(1, 1, 1)], 0.13, 0.04).nodeCount).toBe(MAX_SUBLAYERS + 1);
+    // R = 2000 m²·K/W (2 m of λ 0.001) would need 8000 — the fuzz test's runaway allocation.
+    const e = (() => {
+      try {
+        assemblePath([layer(1, 1, 0), layer(2000, 1, 1), layer(0.1, 1, 2)], 0.13, 0.04);
+      } catch (err) {
+        return err as CalcInputError;
+      }
+      throw new Error('expected a CalcInputError');
+    })();
+    expect(e).toBeInstanceOf(CalcInputError);
+    expect(e.field).toBe('layers.1');
+    expect(e.reason).toMatch(/8000 sub-layers/);
+    expect(() => assemblePath([layer(Number.POSITIVE_INFINITY, 1, 4)], 0.13, 0.04)).toThrow(/layers\.4/);
+  });
+  it('refuses a sub-layer whose s_d is lost in rounding beside a large s_d (the vapour line would be vertical)', () => {
+    // 1e-6 m in 200 sub-layers adds 5e-9 m to 1e8 m: below half an ulp, so two nodes would share s_d.
+    expect(() => assemblePath([layer(0.1, 1e8, 0), layer(50, 1e-6, 1)], 0.13, 0.04)).toThrow(
+      /layers\.1\.vapour/,
+    );
+    expect(assemblePath([layer(0.1, 1e4, 0), layer(50, 1e-6, 1)], 0.13, 0.04).nodeCount).toBe(202);
   });
 });
 

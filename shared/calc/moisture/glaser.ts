@@ -21,6 +21,13 @@ export const DELTA_0 = 2e-10;
  */
 export const SUBLAYER_MAX_R = 0.25;
 
+/**
+ * Most sub-layers the whole path may be split into. At 0.25 m²·K/W each that is R ≈ 250 m²·K/W of divisible
+ * layers — some twenty times the most insulated real wall; a layer needing more is a slip in d or λ, and the
+ * result (12 months × every node) would otherwise grow without bound.
+ */
+export const MAX_SUBLAYERS = 1000;
+
 /** One layer as the Glaser profile sees it. */
 export interface PathLayer {
   /** Thermal resistance R, m²·K/W (0 allowed: a membrane). */
@@ -65,8 +72,25 @@ export function assemblePath(
   const sublayers = layers.map((l) => {
     if (!(l.sd > 0 && Number.isFinite(l.sd)))
       throw new CalcInputError(`layers.${l.layer}.vapour`, `s_d must be greater than 0 (got ${l.sd})`);
+    if (!(l.resistance >= 0 && Number.isFinite(l.resistance)))
+      throw new CalcInputError(
+        `layers.${l.layer}`,
+        `thermal resistance must be a finite number of 0 or more (got ${l.resistance} m²·K/W)`,
+      );
     return sublayerCount(l.resistance, l.divisible, maxSublayerR);
   });
+  const total = sublayers.reduce((a, b) => a + b, 0);
+  if (total > MAX_SUBLAYERS) {
+    let j = 0;
+    sublayers.forEach((n, k) => {
+      if (n > sublayers[j]!) j = k;
+    });
+    const l = layers[j]!;
+    throw new CalcInputError(
+      `layers.${l.layer}`,
+      `R = ${l.resistance.toPrecision(4)} m²·K/W needs ${sublayers[j]} sub-layers of at most ${maxSublayerR} m²·K/W; the profile allows ${MAX_SUBLAYERS} in all (${total} asked) — no real wall is that resistive: check the layer's thickness and λ`,
+    );
+  }
   const resistance = [Rse];
   const sd = [0];
   const outerLayer = [-1];
@@ -78,7 +102,14 @@ export function assemblePath(
     innerLayer.push(l.layer);
     for (let q = 1; q <= n; q++) {
       R += l.resistance / n;
-      s += l.sd / n;
+      const next = s + l.sd / n;
+      // Two nodes at the same s_d would make the vapour line vertical (p′ = Δp/0).
+      if (!(next > s))
+        throw new CalcInputError(
+          `layers.${l.layer}.vapour`,
+          `s_d ${l.sd} m${n > 1 ? ` (in ${n} sub-layers)` : ''} is too small beside the ${s} m of s_d outside it to be resolved`,
+        );
+      s = next;
       resistance.push(R);
       sd.push(s);
       outerLayer.push(l.layer);

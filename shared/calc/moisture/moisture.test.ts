@@ -296,6 +296,16 @@ describe('calculateMoisture — impossible input throws CalcInputError with the 
       'layers.3.thickness',
     ],
     ['nothing inside the ventilated cavity', (i) => ({ ...i, layers: i.layers.slice(0, 2) }), 'layers.1'],
+    [
+      'a layer of R = 2000 m²·K/W (more sub-layers than the profile allows)',
+      (i) => ({
+        ...i,
+        layers: i.layers.map((l, k) =>
+          k === 3 ? { ...l, thickness: 2, conductivity: 0.001 } : l,
+        ) as MoistureLayer[],
+      }),
+      'layers.3',
+    ],
   ];
   it.each(cases)('%s → %s', (_label, mutate, field) => {
     expect(errorOf(() => calculateMoisture(mutate(base()))).field).toBe(field);
@@ -317,6 +327,26 @@ describe('moistureInputSchema', () => {
     expect(moistureInputSchema.safeParse({ ...input, layers: [bare] }).success).toBe(false);
     const badPerm = { ...input.layers[2]!, vapour: { kind: 'usPerm', perm: 1, reference: '20C' } };
     expect(moistureInputSchema.safeParse({ ...input, layers: [badPerm] }).success).toBe(false);
+  });
+  it('refuses absurd λ, thickness and vapour data (μ below still air, s_d beyond 100 000 m)', () => {
+    const input = metalPanelMoistureWall({ vapourRetarder: false });
+    const withLayer3 = (patch: object) => ({
+      ...input,
+      layers: input.layers.map((l, k) => (k === 3 ? { ...l, ...patch } : l)),
+    });
+    const ok = (patch: object) => moistureInputSchema.safeParse(withLayer3(patch)).success;
+    expect(ok({})).toBe(true);
+    expect(ok({ conductivity: 1e-300 })).toBe(false);
+    expect(ok({ thickness: 5e-324 })).toBe(false);
+    expect(ok({ vapour: { kind: 'mu', mu: 0.5 } })).toBe(false);
+    expect(ok({ vapour: { kind: 'mu', mu: 1 } })).toBe(true);
+    expect(ok({ vapour: { kind: 'sd', sd: 1e-300 } })).toBe(false);
+    expect(ok({ vapour: { kind: 'permeance', permeance: 0.001 } })).toBe(false);
+    expect(ok({ vapour: { kind: 'permeance', permeance: 0.002 } })).toBe(true);
+    expect(ok({ vapour: { kind: 'usPerm', perm: 1e-6, reference: '23C' } })).toBe(false);
+    // The permeance bounds keep s_d = δ₀/W within the s_d bound of 100 000 m.
+    expect(layerSd({ kind: 'permeance', permeance: 0.002 }, undefined, 'v')).toBeCloseTo(1e5, 6);
+    expect(layerSd({ kind: 'usPerm', perm: 0.00004, reference: '0C' }, undefined, 'v')).toBeLessThan(1e5);
   });
   it('knows the month lengths of a 365-day year', () => {
     expect(MONTH_DAYS.reduce((a, b) => a + b, 0)).toBe(365);

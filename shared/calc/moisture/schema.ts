@@ -9,7 +9,12 @@ import { z } from 'zod';
  * outside → inside, exactly as in the thermal contract, each with its vapour data.
  */
 
-const sdRange = 'greater than 0, at most 100 000 m';
+/*
+ * Lower bounds: μ < 1 would make a layer more open than still air; the s_d and permeance bounds keep every
+ * layer's s_d between 0.000001 m and 100 000 m (a film of 0.001 mm of still air; well above the 1500 m of a
+ * "vapour-tight" layer), the range the Glaser profile resolves.
+ */
+const sdRange = 'at least 0.000001 m, at most 100 000 m';
 
 export const vapourSchema = z
   .discriminatedUnion('kind', [
@@ -17,17 +22,17 @@ export const vapourSchema = z
       kind: z.literal('mu'),
       mu: z
         .number()
-        .positive()
+        .min(1)
         .max(1e7)
         .describe(
-          'Water vapour resistance factor μ, dimensionless (greater than 0, at most 10 000 000; still air = 1); s_d = μ·d, so the layer needs a thickness',
+          'Water vapour resistance factor μ, dimensionless (at least 1 = still air, at most 10 000 000); s_d = μ·d, so the layer needs a thickness',
         ),
     }),
     z.object({
       kind: z.literal('sd'),
       sd: z
         .number()
-        .positive()
+        .min(1e-6)
         .max(1e5)
         .describe(`Water vapour diffusion-equivalent air layer thickness s_d, m (${sdRange})`),
     }),
@@ -35,19 +40,21 @@ export const vapourSchema = z
       kind: z.literal('permeance'),
       permeance: z
         .number()
-        .positive()
+        .min(0.002)
         .max(1e6)
         .describe(
-          'Water vapour permeance W, ng/(Pa·s·m²) (greater than 0, at most 1 000 000); s_d = δ₀/W with δ₀ = 2×10⁻¹⁰ kg/(m·s·Pa)',
+          'Water vapour permeance W, ng/(Pa·s·m²) (at least 0.002, i.e. s_d at most 100 000 m; at most 1 000 000); s_d = δ₀/W with δ₀ = 2×10⁻¹⁰ kg/(m·s·Pa)',
         ),
     }),
     z.object({
       kind: z.literal('usPerm'),
       perm: z
         .number()
-        .positive()
+        .min(0.00004)
         .max(1e4)
-        .describe('Water vapour permeance in US perms, grain/(h·ft²·inHg) (greater than 0, at most 10 000)'),
+        .describe(
+          'Water vapour permeance in US perms, grain/(h·ft²·inHg) (at least 0.00004, i.e. s_d at most about 87 000 m; at most 10 000)',
+        ),
       reference: z
         .enum(['23C', '0C'])
         .describe(

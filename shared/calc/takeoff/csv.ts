@@ -1,10 +1,10 @@
+import { csvField } from '../../csv';
 import type { TakeoffResult } from './schema';
 
-const HEADER = ['Item', 'Quantity', 'Unit', 'Formula', 'Source', 'Note'];
+/** The RFC 4180 field writer lives in shared/csv.ts; re-exported here for the takeoff's callers. */
+export { csvField };
 
-/** RFC 4180 §2: a field holding a comma, a double quote, CR or LF is quoted, inner quotes doubled. */
-export const csvField = (field: string): string =>
-  /[",\r\n]/.test(field) ? `"${field.replaceAll('"', '""')}"` : field;
+const HEADER = ['Item', 'Quantity', 'Unit', 'Formula', 'Source', 'Note'];
 
 /** 12 significant digits: drops floating-point noise (0.30000000000000004 → 0.3), keeps every real digit. */
 const quantity = (x: number): string => String(Number(x.toPrecision(12)));

@@ -6,8 +6,12 @@ import { z } from 'zod';
  * from a simple elevation list. Everything is SI (m, m², m³); package counts are whole numbers.
  */
 
-const metres = (what: string, max: number) =>
-  z.number().positive().max(max).describe(`${what}, m (greater than 0, at most ${max} m)`);
+/**
+ * A length between `min` and `max`, m. Each lower bound is far below practice (a slip of units, not a real
+ * wall) and keeps the counts — columns, rows, pieces, fasteners — finite and exact whole numbers.
+ */
+const metres = (what: string, min: number, max: number) =>
+  z.number().min(min).max(max).describe(`${what}, m (at least ${min} m, at most ${max} m)`);
 const name = z.string().min(1).max(120);
 
 export const TAKEOFF_JOINT_TYPES = [
@@ -24,8 +28,8 @@ export const takeoffJointTypeSchema = z
 
 export const openingSchema = z.object({
   name: name.optional(),
-  width: metres('Opening width', 50),
-  height: metres('Opening height', 50),
+  width: metres('Opening width', 0.001, 50),
+  height: metres('Opening height', 0.001, 50),
   count: z.number().int().min(1).max(10000).describe('How many identical openings, integer ≥ 1'),
   kind: z
     .enum(['window', 'door'])
@@ -35,8 +39,8 @@ export const openingSchema = z.object({
 
 export const wallSchema = z.object({
   name,
-  length: metres('Wall length along the elevation', 1000),
-  height: metres('Wall height', 500),
+  length: metres('Wall length along the elevation', 0.1, 1000),
+  height: metres('Wall height', 0.1, 500),
   openings: z.array(openingSchema).max(200),
   corners: z
     .number()
@@ -55,20 +59,20 @@ export const wallSchema = z.object({
 });
 
 export const moduleSchema = z.object({
-  width: metres('Panel module width (joint spacing across the panels)', 10),
-  length: metres('Largest panel length (end joints occur where a run exceeds it)', 30),
+  width: metres('Panel module width (joint spacing across the panels)', 0.05, 10),
+  length: metres('Largest panel length (end joints occur where a run exceeds it)', 0.05, 30),
   orientation: z
     .enum(['vertical', 'horizontal'])
     .describe('Panels span vertically (width runs along the wall) or horizontally (width runs up the wall)'),
 });
 
 export const beadProfileSchema = z.discriminatedUnion('shape', [
-  z.object({ shape: z.literal('round'), diameter: metres('Round bead diameter d', 0.1) }),
-  z.object({ shape: z.literal('fillet'), leg: metres('Triangular fillet leg', 0.1) }),
+  z.object({ shape: z.literal('round'), diameter: metres('Round bead diameter d', 0.001, 0.1) }),
+  z.object({ shape: z.literal('fillet'), leg: metres('Triangular fillet leg', 0.001, 0.1) }),
   z.object({
     shape: z.literal('rectangular'),
-    width: metres('Joint width W', 0.2),
-    depth: metres('Sealant depth D', 0.1),
+    width: metres('Joint width W', 0.001, 0.2),
+    depth: metres('Sealant depth D', 0.001, 0.1),
   }),
 ]);
 
@@ -84,7 +88,7 @@ export const beadsSchema = z
 export const trimSchema = z.object({
   name,
   appliesTo: takeoffJointTypeSchema,
-  stockLength: metres('Stock length of one trim piece', 20),
+  stockLength: metres('Stock length of one trim piece', 0.1, 20),
   lapAllowance: z
     .number()
     .nonnegative()
@@ -104,15 +108,15 @@ export const takeoffInputSchema = z.object({
   trims: z.array(trimSchema).max(40),
   fasteners: z
     .object({
-      spacingAlongGirt: metres('Fastener spacing along each girt', 5),
-      girtSpacing: metres('Girt spacing up the wall', 10),
+      spacingAlongGirt: metres('Fastener spacing along each girt', 0.01, 5),
+      girtSpacing: metres('Girt spacing up the wall', 0.05, 10),
     })
     .optional(),
   tape: z
     .object({
-      width: metres('Tape width', 1),
+      width: metres('Tape width', 0.001, 1),
       appliesTo: z.array(takeoffJointTypeSchema).min(1).describe('Joint lines that get tape'),
-      rollLength: metres('Length of one roll', 1000).optional(),
+      rollLength: metres('Length of one roll', 0.1, 1000).optional(),
     })
     .optional(),
 });

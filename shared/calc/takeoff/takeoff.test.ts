@@ -8,6 +8,7 @@ import {
   calculateTakeoff,
   fastenerGrid,
   fastenersInsideOpening,
+  MAX_PIECES,
   modulesToCover,
   PACKAGES,
   trimPieces,
@@ -186,6 +187,52 @@ describe('refuses impossible input with the field path', () => {
     [{ walls: [] }, {}, 'walls'],
   ] as [Partial<TakeoffInput>, Partial<Wall>, string][])('%o %o → %s', (extra, wall, path) => {
     expect(field(extra, wall)).toBe(path);
+  });
+});
+
+describe('counts stay finite whole numbers: absurd values refused', () => {
+  const error = (extra: Partial<TakeoffInput>, wall: Partial<Wall> = {}) =>
+    inputError(() => calculateTakeoff(input(extra, wall)));
+  it('the schema refuses the fuzz counterexample (fastener spacings of 5e-324 m) and other slips', () => {
+    const demo = demoElevation();
+    const parses = (patch: Partial<TakeoffInput>) =>
+      takeoffInputSchema.safeParse({ ...demo, ...patch }).success;
+    expect(parses({ fasteners: { spacingAlongGirt: 5e-324, girtSpacing: 5e-324 } })).toBe(false);
+    expect(parses({ fasteners: { spacingAlongGirt: 0.01, girtSpacing: 0.05 } })).toBe(true);
+    expect(parses({ module: { width: 5.4e-323, length: 6, orientation: 'vertical' } })).toBe(false);
+    expect(parses({ tape: { width: 0.025, appliesTo: ['opening'], rollLength: 1e-300 } })).toBe(false);
+    expect(parses({ trims: [{ name: 'T', appliesTo: 'base', stockLength: 1e-156, lapAllowance: 0 }] })).toBe(
+      false,
+    );
+  });
+  it('more than MAX_PIECES fasteners: refused on the fastener spacing', () => {
+    // 1000 m × 500 m at 10 mm × 50 mm: 100 001 × 10 001 points, just over a billion.
+    const e = error(
+      { fasteners: { spacingAlongGirt: 0.01, girtSpacing: 0.05 } },
+      { length: 1000, height: 500 },
+    );
+    expect(e.field).toBe('fasteners.spacingAlongGirt');
+    expect(e.reason).toMatch(/Fasteners/);
+    const r = calculateTakeoff(
+      input({ fasteners: { spacingAlongGirt: 0.02, girtSpacing: 0.05 } }, { length: 1000, height: 500 }),
+    );
+    expect(r.fasteners).toBe(50_001 * 10_001);
+    expect(r.fasteners).toBeLessThanOrEqual(MAX_PIECES);
+  });
+  it('a lap all but the stock length: refused on the lap', () => {
+    const trims: TakeoffInput['trims'] = [
+      { name: 'Base', appliesTo: 'base', stockLength: 3, lapAllowance: 3 - 1e-12 },
+    ];
+    expect(error({ trims }).field).toBe('trims.0.lapAllowance');
+  });
+  it('packages and rolls beyond MAX_PIECES: refused on the bead and the roll length', () => {
+    const bead = { shape: 'rectangular' as const, width: 1e6, depth: 1 };
+    expect(error({ beads: { corner: { shape: 'fillet', leg: 0.01 }, panel_vertical: bead } }).field).toBe(
+      'beads.panel_vertical',
+    );
+    expect(error({ tape: { width: 0.02, appliesTo: ['perimeter'], rollLength: 1e-9 } }).field).toBe(
+      'tape.rollLength',
+    );
   });
 });
 

@@ -35,6 +35,12 @@ const SRC_FASTENER = 'Girt grid (derived): (⌊L/s_f⌋ + 1)·(⌊H/s_g⌋ + 1) 
 /** Relative slack so that a run of exactly n modules (to rounding) needs n, not n + 1. */
 const EPS = 1e-9;
 
+/**
+ * Most pieces (packages, trim pieces, rolls, fasteners) on one takeoff line. A billion is beyond any real
+ * project, and keeps every count an exact whole number (below 2⁵³).
+ */
+export const MAX_PIECES = 1e9;
+
 /** 1 US fluid ounce = 231/128 in³ = 29.573 529 562 5 ml exactly, in m³ (NIST Handbook 44 App. C). */
 export const US_FLUID_OUNCE = (231 / 128) * INCH ** 3;
 
@@ -79,6 +85,16 @@ export const fastenerGrid = (length: number, height: number, sf: number, sg: num
 /** Grid points inside a w × h opening wherever it sits: (⌈w/s_f⌉ − 1)·(⌈h/s_g⌉ − 1). */
 export const fastenersInsideOpening = (w: number, h: number, sf: number, sg: number): number =>
   Math.max(0, wholeUnits(w / sf) - 1) * Math.max(0, wholeUnits(h / sg) - 1);
+
+/** Refuse a count above MAX_PIECES: the input that drives it (`field`) is a slip of units, not a project. */
+function requireCount(n: number, field: string, what: string, check: string): number {
+  if (!(n <= MAX_PIECES))
+    throw new CalcInputError(
+      field,
+      `${what}: ${n.toPrecision(3)} is more than ${MAX_PIECES.toExponential()} pieces on one line — check ${check}`,
+    );
+  return n;
+}
 
 // -------------------------------------------------------------------------------------------- runs
 
@@ -364,8 +380,17 @@ export function calculateTakeoff(input: TakeoffInput): TakeoffResult {
     ['sausageUsFlOz20', 'Sausages, 20 US fl oz', 'n = ⌈V_w / (20 × 231/128 in³)⌉'],
     ['sausageMl600', 'Sausages, 600 ml', 'n = ⌈V_w / 600 ml⌉'],
   ] as const;
+  const largest = byJoint.reduce<(typeof byJoint)[number] | undefined>(
+    (a, b) => (a === undefined || b.volume > a.volume ? b : a),
+    undefined,
+  );
   const counts = packages.map(([key, label, formula]) => {
-    const n = wholeUnits(volumeWithWaste / PACKAGES[key]);
+    const n = requireCount(
+      wholeUnits(volumeWithWaste / PACKAGES[key]),
+      `beads.${largest?.joint ?? 'panel_vertical'}`,
+      label,
+      'the bead size and the wall dimensions',
+    );
     lines.push(
       step(
         `takeoff.sealant.${key}`,
@@ -386,7 +411,15 @@ export function calculateTakeoff(input: TakeoffInput): TakeoffResult {
     const net = types.reduce((sum, t) => sum + lengths[t], 0);
     const length = net * (1 + waste);
     const area = length * input.tape.width;
-    const rolls = input.tape.rollLength === undefined ? null : wholeUnits(length / input.tape.rollLength);
+    const rolls =
+      input.tape.rollLength === undefined
+        ? null
+        : requireCount(
+            wholeUnits(length / input.tape.rollLength),
+            'tape.rollLength',
+            'Tape rolls',
+            'the roll length',
+          );
     lines.push(
       step(
         'takeoff.tape.length',
@@ -432,6 +465,12 @@ export function calculateTakeoff(input: TakeoffInput): TakeoffResult {
         length += r.count * r.length;
         runCount += r.count;
       }
+    requireCount(
+      pieces,
+      `trims.${k}.${t.lapAllowance > t.stockLength / 2 ? 'lapAllowance' : 'stockLength'}`,
+      `Trim pieces (${t.name})`,
+      `the stock length (${t.stockLength} m) and the lap (${t.lapAllowance} m): each piece adds only ${(t.stockLength - t.lapAllowance).toPrecision(3)} m`,
+    );
     lines.push(
       step(
         `takeoff.trim.${k}`,
@@ -454,6 +493,12 @@ export function calculateTakeoff(input: TakeoffInput): TakeoffResult {
       fasteners += fastenerGrid(wall.length, wall.height, sf, sg);
       for (const o of wall.openings) fasteners -= o.count * fastenersInsideOpening(o.width, o.height, sf, sg);
     }
+    requireCount(
+      fasteners,
+      'fasteners.spacingAlongGirt',
+      'Fasteners',
+      `the fastener spacing (${sf} m) and the girt spacing (${sg} m)`,
+    );
     lines.push(
       step(
         'takeoff.fasteners',

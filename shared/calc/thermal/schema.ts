@@ -6,13 +6,37 @@ import { z } from 'zod';
  * Everything is SI: metres, W/(m·K), m²·K/W, W/(m²·K), W/K. Layers are ordered outside → inside.
  */
 
+/*
+ * Lower bounds: a value below them is a typing or unit slip, never a real wall, and would let d/λ, 1/s or
+ * the zone widths overflow or underflow to 0 or ∞. Each is far outside practice, so no real input is refused.
+ */
+
+/** Thinnest layer, m: 0.001 mm — thinner than any film, foil or coating that is modelled as a layer. */
+export const MIN_THICKNESS = 1e-6;
+/** Lowest design λ, W/(m·K): below vacuum insulation panels (about 0.004) and still air (0.025). */
+export const MIN_CONDUCTIVITY = 0.001;
+/** Smallest area fraction of a section: the tolerance to which the fractions must sum to 1. */
+export const MIN_FRACTION = 1e-6;
+/** Closest spacing of framing members or of bridges, m: 10 mm. */
+export const MIN_SPACING = 0.01;
+/** Narrowest metal flange, m: 1 mm. */
+export const MIN_FLANGE_WIDTH = 0.001;
+/** Thinnest fastener shank, m: 1 mm. */
+export const MIN_FASTENER_DIAMETER = 0.001;
+
 const name = z.string().min(1).max(120).describe('Name a practitioner recognises, e.g. "Mineral wool board"');
-const thickness = z.number().positive().max(2).describe('Layer thickness d, m (greater than 0, at most 2 m)');
+const thickness = z
+  .number()
+  .min(MIN_THICKNESS)
+  .max(2)
+  .describe('Layer thickness d, m (at least 0.000001 m = 0.001 mm, at most 2 m)');
 const conductivity = z
   .number()
-  .positive()
+  .min(MIN_CONDUCTIVITY)
   .max(1000)
-  .describe('Design thermal conductivity λ, W/(m·K) (greater than 0, at most 1000)');
+  .describe(
+    'Design thermal conductivity λ, W/(m·K) (at least 0.001 — below vacuum insulation panels — at most 1000)',
+  );
 
 export const homogeneousLayerSchema = z.object({
   kind: z.literal('homogeneous'),
@@ -37,10 +61,10 @@ export const airLayerSchema = z.object({
   name,
   thickness: z
     .number()
-    .positive()
+    .min(MIN_THICKNESS)
     .max(0.3)
     .describe(
-      'Air layer thickness in the heat-flow direction, m (greater than 0, at most 0.3 m — ISO 6946 Table 8)',
+      'Air layer thickness in the heat-flow direction, m (at least 0.000001 m, at most 0.3 m — ISO 6946 Table 8)',
     ),
   ventilation: z
     .enum(['unventilated', 'slightly', 'well'])
@@ -60,9 +84,11 @@ export const framedSectionSchema = z.object({
   conductivity,
   fraction: z
     .number()
-    .positive()
+    .min(MIN_FRACTION)
     .max(1)
-    .describe('Fraction of the wall area taken by this section, dimensionless (0–1]; fractions sum to 1'),
+    .describe(
+      'Fraction of the wall area taken by this section, dimensionless (0.000001–1, 0.000001 being the tolerance of the sum); fractions sum to 1',
+    ),
 });
 
 export const framedLayerSchema = z.object({
@@ -73,16 +99,18 @@ export const framedLayerSchema = z.object({
   metal: z.boolean().describe('True when the framing is metal (steel or aluminium studs, girts)'),
   flangeWidth: z
     .number()
-    .positive()
+    .min(MIN_FLANGE_WIDTH)
     .max(0.5)
     .optional()
-    .describe('Metal flange width m, m (greater than 0, at most 0.5) — needed by the zone method'),
+    .describe('Metal flange width m, m (at least 0.001 m = 1 mm, at most 0.5 m) — needed by the zone method'),
   spacing: z
     .number()
-    .positive()
+    .min(MIN_SPACING)
     .max(5)
     .optional()
-    .describe('Member spacing on centre s, m (greater than 0, at most 5) — needed by the zone method'),
+    .describe(
+      'Member spacing on centre s, m (at least 0.01 m = 10 mm, at most 5 m) — needed by the zone method',
+    ),
 });
 
 export const layerSchema = z.discriminatedUnion('kind', [
@@ -104,7 +132,11 @@ const countPerArea = z
   .max(10000)
   .describe('Number of items per square metre of wall, 1/m² (greater than 0, at most 10 000)');
 const spacing = (what: string) =>
-  z.number().positive().max(100).describe(`${what} spacing, m (greater than 0, at most 100)`);
+  z
+    .number()
+    .min(MIN_SPACING)
+    .max(100)
+    .describe(`${what} spacing, m (at least 0.01 m = 10 mm, at most 100 m)`);
 
 export const pointBridgeBySpacingSchema = z.object({
   kind: z.literal('point'),
@@ -140,9 +172,9 @@ export const fastenerBridgeSchema = z.object({
     .describe('Fastener thermal conductivity λ_f, W/(m·K) (0–1000]'),
   diameter: z
     .number()
-    .positive()
+    .min(MIN_FASTENER_DIAMETER)
     .max(0.05)
-    .describe('Fastener shank diameter, m (greater than 0, at most 0.05)'),
+    .describe('Fastener shank diameter, m (at least 0.001 m = 1 mm, at most 0.05 m)'),
   countPerArea,
   penetration: z
     .enum(['full', 'recessed'])

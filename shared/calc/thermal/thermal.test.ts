@@ -3,7 +3,19 @@ import { R_IP_TO_SI, U_IP_TO_SI } from '@shared/units';
 import { describe, expect, it } from 'vitest';
 import { metalPanelWall } from './fixtures';
 import { findMaterial, materials } from './materials';
-import { type Layer, type ThermalInput, thermalInputSchema, thermalResultSchema } from './schema';
+import {
+  type FramedLayer,
+  type Layer,
+  MIN_CONDUCTIVITY,
+  MIN_FASTENER_DIAMETER,
+  MIN_FLANGE_WIDTH,
+  MIN_FRACTION,
+  MIN_SPACING,
+  MIN_THICKNESS,
+  type ThermalInput,
+  thermalInputSchema,
+  thermalResultSchema,
+} from './schema';
 import {
   AIR_LAYER_TABLE,
   airLayerResistance,
@@ -16,6 +28,7 @@ import {
   iso6946Upper,
   isothermalPlanes,
   layerResistance,
+  MAX_PARALLEL_PATHS,
   parallelPath,
   surfaceResistances,
   zoneMethod,
@@ -558,6 +571,82 @@ describe('input errors carry the dotted field path', () => {
       ),
     );
     expect(e.reason).toMatch(/χ value/);
+  });
+});
+
+describe('bounds that keep every figure finite', () => {
+  const allFinite = (x: unknown): boolean =>
+    typeof x === 'number'
+      ? Number.isFinite(x)
+      : x !== null && typeof x === 'object'
+        ? Object.values(x).every(allFinite)
+        : true;
+  const parses = (mutate: (w: ThermalInput) => unknown): boolean => {
+    const w = metalPanelWall();
+    mutate(w);
+    return thermalInputSchema.safeParse(w).success;
+  };
+  const framedAt = (w: ThermalInput) => w.layers[6] as FramedLayer;
+
+  it('the schema refuses absurdly small thickness, λ, fractions, spacings, flanges and diameters', () => {
+    // Fuzz counterexample: a stud spacing of 5e-324 m made zone A's λ underflow to 0 and R₀ infinite.
+    expect(parses((w) => Object.assign(framedAt(w), { spacing: 5e-324 }))).toBe(false);
+    expect(parses((w) => Object.assign(framedAt(w), { spacing: MIN_SPACING }))).toBe(true);
+    expect(parses((w) => Object.assign(w.layers[3]!, { thickness: 5e-324 }))).toBe(false);
+    expect(parses((w) => Object.assign(w.layers[3]!, { conductivity: 1e-300 }))).toBe(false);
+    expect(parses((w) => Object.assign(framedAt(w).sections[1]!, { conductivity: 8e-323 }))).toBe(false);
+    expect(parses((w) => Object.assign(framedAt(w).sections[1]!, { fraction: 1e-300 }))).toBe(false);
+    expect(parses((w) => Object.assign(framedAt(w), { flangeWidth: 1e-300 }))).toBe(false);
+    expect(parses((w) => Object.assign(w.bridges[0]!, { spacingVertical: 2e-323 }))).toBe(false);
+    expect(parses((w) => Object.assign(w.bridges[2]!, { diameter: 1e-300 }))).toBe(false);
+  });
+
+  it('every value at its bound still gives a finite result that matches the result schema', () => {
+    const w = metalPanelWall();
+    const framed = framedAt(w);
+    framed.spacing = MIN_SPACING;
+    framed.flangeWidth = MIN_FLANGE_WIDTH;
+    framed.sections = [
+      { name: 'Cavity', conductivity: MIN_CONDUCTIVITY, fraction: 1 - MIN_FRACTION },
+      { name: 'Web', conductivity: 1000, fraction: MIN_FRACTION },
+    ];
+    w.layers[3] = { kind: 'homogeneous', name: 'Thin', thickness: MIN_THICKNESS, conductivity: 1000 };
+    w.layers[4] = { kind: 'homogeneous', name: 'Thick', thickness: 2, conductivity: MIN_CONDUCTIVITY };
+    w.bridges = [
+      { kind: 'point', name: 'Clips', chi: 10, spacingHorizontal: MIN_SPACING, spacingVertical: MIN_SPACING },
+      { kind: 'linear', name: 'Girts', psi: 10, spacing: MIN_SPACING },
+      {
+        kind: 'fastener',
+        name: 'Screws',
+        conductivity: 1000,
+        diameter: MIN_FASTENER_DIAMETER,
+        countPerArea: 10000,
+        penetration: 'full',
+        layerIndex: 3,
+      },
+    ];
+    const r = calculateThermal(thermalInputSchema.parse(w));
+    expect(allFinite(r)).toBe(true);
+    expect(thermalResultSchema.safeParse(r).success).toBe(true);
+  });
+
+  it('refuses framed layers whose sections combine into more parallel paths than it follows', () => {
+    const eight: FramedLayer = {
+      kind: 'framed',
+      name: 'Eight sections',
+      thickness: 0.05,
+      metal: false,
+      sections: Array.from({ length: 8 }, (_, q) => ({
+        name: `s${q}`,
+        conductivity: 0.04 + q / 100,
+        fraction: 0.125,
+      })),
+    };
+    // 8⁴ = 4096 paths are followed; the fifth layer would make 32 768.
+    expect(calculateThermal(wall([eight, eight, eight, eight])).methods.parallelPath).toBeGreaterThan(0);
+    const e = inputError(() => calculateThermal(wall([eight, eight, eight, eight, eight])));
+    expect(e.field).toBe('layers.4.sections');
+    expect(e.reason).toContain(String(MAX_PARALLEL_PATHS));
   });
 });
 

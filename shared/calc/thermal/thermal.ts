@@ -60,6 +60,11 @@ export const ISO_LIMIT_RATIO_MAX = 1.5;
 export const FASTENER_MIN_CONDUCTIVITY = 1;
 /** ISO 6946:2017 §6.9.3 — resistance between a slightly ventilated air layer and the outside, at most, m²·K/W. */
 const SLIGHTLY_VENTILATED_OUTSIDE_MAX = 0.15;
+/**
+ * The parallel-path method follows every combination of sections through the framed layers (Π n_sections
+ * paths); more than this many is no real wall and would take exponential time (8 sections × 40 layers).
+ */
+export const MAX_PARALLEL_PATHS = 10_000;
 /** ASHRAE zone method: d is taken as no less than 0.5 in (still-air film), m. */
 export const ZONE_MIN_DISTANCE = 0.0127;
 /** Radiative coefficient of a black body at 10 °C, h_r0 = 4σT_m³, W/(m²·K) (ISO 6946:2017 Annex C/D). */
@@ -566,11 +571,18 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
   let outside = Rse;
   const framed: FramedLayer[] = [];
   let metalIndex = -1;
+  let paths = 1;
   for (let i = start; i < layers.length; i++) {
     const layer = layers[i]!;
     let t: TraceStep;
     if (layer.kind === 'framed') {
       framed.push(layer);
+      paths *= layer.sections.length;
+      if (paths > MAX_PARALLEL_PATHS)
+        throw new CalcInputError(
+          `layers.${i}.sections`,
+          `the framed layers combine into ${paths} or more heat-flow paths (sections of one framed layer × sections of the next …); the parallel-path method is limited to ${MAX_PARALLEL_PATHS} — merge framed layers or sections`,
+        );
       if (layer.metal) {
         if (metalIndex >= 0)
           throw new CalcInputError(

@@ -47,6 +47,11 @@ function describe(entry: AuditEntry): string {
     created: 'created',
     update: 'changed',
     updated: 'changed',
+    update_wind: 'wind data changed',
+    update_climate: 'climate changed',
+    revise: 'revised',
+    join: 'joined',
+    change_role: 'role changed',
     archive: 'archived',
     archived: 'archived',
     unarchive: 'restored',
@@ -65,6 +70,7 @@ function describe(entry: AuditEntry): string {
 }
 
 function formatValue(field: string, value: unknown, system: UnitSystem): string {
+  if (typeof value === 'object' && value !== null) return 'entered (see its page)';
   if (field.endsWith('At') && typeof value === 'string') return formatDateTime(value);
   if (field === 'role' && typeof value === 'string' && value in PROJECT_ROLE_LABELS) {
     return PROJECT_ROLE_LABELS[value as keyof typeof PROJECT_ROLE_LABELS];
@@ -79,7 +85,16 @@ const EXTRA_LABELS: Record<string, string> = {
   acceptedAt: 'Accepted',
   expiresAt: 'Expires',
 };
-const label = (field: string) => EXTRA_LABELS[field] ?? projectFieldLabel(field);
+/** Project fields get their project labels; other records (assemblies, criteria…) their own plain names. */
+const label = (entity: string, field: string) =>
+  EXTRA_LABELS[field] ?? (entity === 'project' ? projectFieldLabel(field) : (OTHER_LABELS[field] ?? field));
+const OTHER_LABELS: Record<string, string> = {
+  name: 'Name',
+  revision: 'Revision',
+  note: 'Note',
+  wind: 'Wind data',
+  climate: 'Monthly climate',
+};
 
 function Changes({ entry, system }: { entry: AuditEntry; system: UnitSystem }) {
   const changes = changedFields(entry.before, entry.after);
@@ -88,7 +103,7 @@ function Changes({ entry, system }: { entry: AuditEntry; system: UnitSystem }) {
     <ul className="space-y-1">
       {changes.map((c) => (
         <li key={c.field}>
-          <span className="text-ink-muted">{label(c.field)}: </span>
+          <span className="text-ink-muted">{label(entry.entity, c.field)}: </span>
           <span className={typeof c.before === 'number' ? 'num' : ''}>
             {formatValue(c.field, c.before, system)}
           </span>

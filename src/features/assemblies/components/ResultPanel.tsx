@@ -1,6 +1,7 @@
 import type { ThermalInput, ThermalResult } from '@shared/calc/thermal/schema';
 import type { ReactNode } from 'react';
 import { Notice } from '../../../components/ui/Notice';
+import { SheetSection } from '../../../components/ui/SheetSection';
 import { fieldDomId } from '../evaluate';
 import { Cautions } from './Cautions';
 import { MethodSection } from './MethodSection';
@@ -9,32 +10,8 @@ import { SectionSketch } from './SectionSketch';
 import { ShareChart } from './ShareChart';
 import { ShowTheWork } from './ShowTheWork';
 
-export function SheetSection({
-  n,
-  title,
-  id,
-  children,
-  aside,
-}: {
-  n: number;
-  title: string;
-  id: string;
-  children: ReactNode;
-  aside?: ReactNode;
-}) {
-  return (
-    <section aria-labelledby={id} className="flex flex-col gap-4">
-      <div className="flex flex-wrap items-baseline justify-between gap-3 border-b border-ink pb-1">
-        <h3 id={id} className="flex items-baseline gap-3 text-xl">
-          <span className="num text-base font-normal text-ink-muted">{n}</span>
-          {title}
-        </h3>
-        {aside}
-      </div>
-      {children}
-    </section>
-  );
-}
+/** Re-exported for the builder and the sheet; the primitive lives in components/ui. */
+export { SheetSection };
 
 /** Plain words for a form path, for the list of what the result is waiting for. */
 export function describePath(path: string, thermal: Partial<ThermalInput> | undefined): string {

@@ -1,0 +1,470 @@
+import { expansionMaterials, findExpansionMaterial } from '@shared/calc/joints/expansion';
+import { DEFAULT_MINIMUM_WIDTH } from '@shared/calc/joints/joints';
+import {
+  BACKER_CELLS,
+  type BackerCell,
+  JOINT_TYPES,
+  type JointInput,
+  type JointSide,
+  type JointType,
+  MOVEMENT_CLASSES,
+  type MovementClass,
+} from '@shared/calc/joints/schema';
+import type { ReactNode } from 'react';
+import { Button } from '../../../components/ui/Button';
+import { Field } from '../../../components/ui/Field';
+import { QuantityInput } from '../../../components/ui/QuantityInput';
+import { Select } from '../../../components/ui/Select';
+import { TextInput } from '../../../components/ui/TextInput';
+import { type FieldProblem, type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
+import { formatJointDimension, formatSheet } from '../../../lib/sheet-units';
+import { useUnitSystem } from '../../../lib/unit-system';
+import { type AirDesign, newSide, removeAt, replaceAt } from '../draft';
+import { BACKER_LABELS, JOINT_TYPE_LABELS, MOVEMENT_CLASS_LABELS } from '../labels';
+import { SurfaceSuggest } from './SurfaceSuggest';
+
+const CUSTOM = '__custom';
+
+/** A problem on a group of boxes (a range, a union) rather than on one box. */
+function GroupProblem({ path, problem }: { path: string; problem: FieldProblem | undefined }) {
+  const system = useUnitSystem();
+  if (!problem) return null;
+  return (
+    <p
+      id={fieldDomId(path)}
+      tabIndex={-1}
+      className="flex items-start gap-1 text-sm font-medium text-caution"
+    >
+      <span aria-hidden="true">✕</span>
+      <span>{problemText(problem, undefined, system)}</span>
+    </p>
+  );
+}
+
+function Group({ legend, children, note }: { legend: string; children: ReactNode; note?: ReactNode }) {
+  return (
+    <fieldset className="flex flex-col gap-3 border-t border-rule pt-3">
+      <legend className="label-caps pr-2">{legend}</legend>
+      {note ? <p className="-mt-1 text-xs text-ink-muted">{note}</p> : null}
+      {children}
+    </fieldset>
+  );
+}
+
+interface JointEditorProps {
+  joint: JointInput;
+  index: number;
+  onChange: (joint: JointInput) => void;
+  problems: FieldProblems;
+  air: AirDesign | null;
+}
+
+/** Every input of one joint, each box with its unit and its problem beside it. */
+export function JointEditor({ joint, index, onChange, problems, air }: JointEditorProps) {
+  const system = useUnitSystem();
+  const base = `joints.${index}`;
+  const path = (k: string) => `${base}.${k}`;
+  const pr = (k: string) => problems[path(k)];
+  const set = (changes: Partial<JointInput>) => onChange({ ...joint, ...changes });
+  const install = joint.installationTemperature;
+  const ranged = typeof install !== 'number';
+
+  function setSide(k: number, side: JointSide) {
+    set({ sides: replaceAt(joint.sides, k, side) });
+  }
+
+  function setOther(key: 'extension' | 'compression', v: number | undefined) {
+    const other = {
+      extension: joint.otherMovement?.extension,
+      compression: joint.otherMovement?.compression,
+    };
+    other[key] = v;
+    const otherKey = key === 'extension' ? 'compression' : 'extension';
+    if (other[key] === undefined && other[otherKey] === undefined) {
+      const { otherMovement: _, ...rest } = joint;
+      onChange(rest);
+      return;
+    }
+    set({ otherMovement: { extension: other.extension ?? 0, compression: other.compression ?? 0 } });
+  }
+
+  function setOptional<K extends 'designDepth' | 'minimumPracticalWidth' | 'openingDepth'>(
+    key: K,
+    v: number | undefined,
+  ) {
+    if (v === undefined) {
+      const next = { ...joint };
+      delete next[key];
+      onChange(next);
+    } else set({ [key]: v } as Partial<JointInput>);
+  }
+
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2 lg:grid-cols-4">
+        <Field
+          label="Joint mark"
+          required
+          error={pr('name') && problemText(pr('name')!, undefined, system)}
+          id={fieldDomId(path('name'))}
+          className="sm:col-span-2"
+        >
+          {(c) => (
+            <TextInput
+              {...c}
+              value={joint.name}
+              maxLength={120}
+              onChange={(e) => set({ name: e.target.value })}
+              className="py-1.5 text-sm"
+            />
+          )}
+        </Field>
+        <Field label="Where it sits" id={fieldDomId(path('type'))}>
+          {(c) => (
+            <Select
+              {...c}
+              value={joint.type}
+              onChange={(e) => set({ type: e.target.value as JointType })}
+              className="py-1.5 text-sm"
+            >
+              {JOINT_TYPES.map((t) => (
+                <option key={t} value={t}>
+                  {JOINT_TYPE_LABELS[t]}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <Field
+          label="Sealant movement class"
+          id={fieldDomId(path('sealant.movementClass'))}
+          hint="ASTM C920 class declared by the maker."
+          error={pr('sealant.movementClass') && problemText(pr('sealant.movementClass')!, undefined, system)}
+        >
+          {(c) => (
+            <Select
+              {...c}
+              value={joint.sealant.movementClass}
+              onChange={(e) => set({ sealant: { movementClass: e.target.value as MovementClass } })}
+              className="py-1.5 text-sm"
+            >
+              {MOVEMENT_CLASSES.map((m) => (
+                <option key={m} value={m}>
+                  {MOVEMENT_CLASS_LABELS[m]}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <QuantityInput
+          id={fieldDomId(path('designWidth'))}
+          label="Design width"
+          measure="joint"
+          value={joint.designWidth}
+          onChange={(v) => set({ designWidth: v ?? Number.NaN })}
+          problem={pr('designWidth')}
+          hint="Width as drawn, at installation."
+        />
+        <QuantityInput
+          id={fieldDomId(path('designDepth'))}
+          label="Design depth"
+          measure="joint"
+          required={false}
+          value={joint.designDepth}
+          onChange={(v) => setOptional('designDepth', v)}
+          problem={pr('designDepth')}
+          hint="Optional: checked against the depth rule."
+        />
+        <QuantityInput
+          id={fieldDomId(path('constructionTolerance'))}
+          label="Construction tolerance"
+          measure="joint"
+          value={joint.constructionTolerance}
+          onChange={(v) => set({ constructionTolerance: v ?? Number.NaN })}
+          problem={pr('constructionTolerance')}
+          hint="Added to the width needed for movement."
+        />
+      </div>
+
+      <Group
+        legend="Moving sides"
+        note="One side when the joint meets fixed construction; two when both substrates move. Length L is the run of material that feeds movement into this joint."
+      >
+        <GroupProblem path={path('sides')} problem={pr('sides')} />
+        {joint.sides.map((side, k) => {
+          const row = 'material' in side ? findExpansionMaterial(side.material) : undefined;
+          const sp = (key: string) => pr(`sides.${k}.${key}`);
+          return (
+            <div
+              // biome-ignore lint/suspicious/noArrayIndexKey: at most two sides, addressed by position
+              key={k}
+              className="grid gap-x-4 gap-y-2 border-l-2 border-rule pl-3 sm:grid-cols-[2fr_1fr_auto]"
+            >
+              <div className="flex flex-col gap-2">
+                <Field
+                  label={`Side ${k + 1} material`}
+                  id={fieldDomId(path(`sides.${k}.material`))}
+                  error={sp('material') && problemText(sp('material')!, undefined, system)}
+                >
+                  {(c) => (
+                    <Select
+                      {...c}
+                      className="py-1.5 text-sm"
+                      value={'material' in side ? side.material : CUSTOM}
+                      onChange={(e) => {
+                        const v = e.target.value;
+                        if (v === CUSTOM)
+                          setSide(k, {
+                            alpha: 'alpha' in side ? side.alpha : 12e-6,
+                            label: 'Declared product value',
+                            length: side.length,
+                          });
+                        else setSide(k, { material: v, length: side.length });
+                      }}
+                    >
+                      {expansionMaterials.map((m) => (
+                        <option key={m.id} value={m.id}>
+                          {m.name}
+                        </option>
+                      ))}
+                      <option value={CUSTOM}>Custom α (the product's declared value)</option>
+                    </Select>
+                  )}
+                </Field>
+                {'material' in side ? (
+                  row ? (
+                    <p className="text-xs text-ink-muted">
+                      <span className="num text-ink">α = {formatSheet(row.alpha, 'alpha', system)}</span> ·{' '}
+                      {row.source}
+                      <span className="block">
+                        {row.provenance.startsWith('memory') ? (
+                          <span className="font-semibold text-warning">▲ recalled, not yet checked: </span>
+                        ) : null}
+                        {row.provenance}
+                      </span>
+                    </p>
+                  ) : null
+                ) : (
+                  <div className="grid gap-2 sm:grid-cols-2">
+                    <QuantityInput
+                      id={fieldDomId(path(`sides.${k}.alpha`))}
+                      label="Declared α"
+                      measure="alpha"
+                      value={side.alpha}
+                      onChange={(v) => setSide(k, { ...side, alpha: v ?? Number.NaN })}
+                      problem={sp('alpha')}
+                    />
+                    <Field
+                      label="Whose α"
+                      id={fieldDomId(path(`sides.${k}.label`))}
+                      hint="Product and data sheet."
+                    >
+                      {(c) => (
+                        <TextInput
+                          {...c}
+                          className="py-1.5 text-sm"
+                          maxLength={120}
+                          value={side.label ?? ''}
+                          onChange={(e) => setSide(k, { ...side, label: e.target.value || undefined })}
+                        />
+                      )}
+                    </Field>
+                  </div>
+                )}
+              </div>
+              <QuantityInput
+                id={fieldDomId(path(`sides.${k}.length`))}
+                label="Moving length L"
+                measure="length"
+                value={side.length}
+                onChange={(v) => setSide(k, { ...side, length: v ?? Number.NaN })}
+                problem={sp('length')}
+                hint="Panel length if fixed at its far end; half if anchored mid-length."
+              />
+              <div className="flex items-start pt-6">
+                {joint.sides.length > 1 ? (
+                  <Button
+                    variant="quiet"
+                    onClick={() => set({ sides: removeAt(joint.sides, k) })}
+                    aria-label={`Remove side ${k + 1}`}
+                  >
+                    Remove
+                  </Button>
+                ) : null}
+              </div>
+            </div>
+          );
+        })}
+        {joint.sides.length < 2 ? (
+          <div>
+            <Button
+              variant="secondary"
+              onClick={() => set({ sides: [...joint.sides, newSide(joint.sides[0])] })}
+            >
+              Add a second moving side
+            </Button>
+          </div>
+        ) : null}
+      </Group>
+
+      <Group
+        legend="Temperatures"
+        note="The sealant follows the surface temperature of the moving material, not the air: dark metal in sun runs far above the air."
+      >
+        <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2 lg:grid-cols-4">
+          <QuantityInput
+            id={fieldDomId(path('surfaceTemperatureRange.min'))}
+            label="Lowest surface temperature"
+            measure="temperature"
+            value={joint.surfaceTemperatureRange.min}
+            onChange={(v) =>
+              set({ surfaceTemperatureRange: { ...joint.surfaceTemperatureRange, min: v ?? Number.NaN } })
+            }
+            problem={pr('surfaceTemperatureRange.min')}
+          />
+          <QuantityInput
+            id={fieldDomId(path('surfaceTemperatureRange.max'))}
+            label="Highest surface temperature"
+            measure="temperature"
+            value={joint.surfaceTemperatureRange.max}
+            onChange={(v) =>
+              set({ surfaceTemperatureRange: { ...joint.surfaceTemperatureRange, max: v ?? Number.NaN } })
+            }
+            problem={pr('surfaceTemperatureRange.max')}
+          />
+          <fieldset className="flex flex-col gap-1 sm:col-span-2">
+            <legend className="text-sm font-semibold">Installation temperature</legend>
+            <div className="flex gap-4 text-sm">
+              <label className="flex items-center gap-1">
+                <input
+                  type="radio"
+                  name={`${base}-install`}
+                  checked={!ranged}
+                  onChange={() =>
+                    set({ installationTemperature: ranged ? (install.min + install.max) / 2 : install })
+                  }
+                />
+                one temperature
+              </label>
+              <label className="flex items-center gap-1">
+                <input
+                  type="radio"
+                  name={`${base}-install`}
+                  checked={ranged}
+                  onChange={() =>
+                    set({
+                      installationTemperature: ranged ? install : { min: install - 10, max: install + 10 },
+                    })
+                  }
+                />
+                a range (season unknown)
+              </label>
+            </div>
+            {ranged ? (
+              <div className="grid gap-3 sm:grid-cols-2">
+                <QuantityInput
+                  id={fieldDomId(path('installationTemperature.min'))}
+                  label="Coolest at installation"
+                  measure="temperature"
+                  value={install.min}
+                  onChange={(v) => set({ installationTemperature: { ...install, min: v ?? Number.NaN } })}
+                  problem={pr('installationTemperature.min')}
+                />
+                <QuantityInput
+                  id={fieldDomId(path('installationTemperature.max'))}
+                  label="Warmest at installation"
+                  measure="temperature"
+                  value={install.max}
+                  onChange={(v) => set({ installationTemperature: { ...install, max: v ?? Number.NaN } })}
+                  problem={pr('installationTemperature.max')}
+                />
+              </div>
+            ) : (
+              <QuantityInput
+                id={fieldDomId(path('installationTemperature'))}
+                label="Surface temperature at installation"
+                measure="temperature"
+                value={install}
+                onChange={(v) => set({ installationTemperature: v ?? Number.NaN })}
+                problem={pr('installationTemperature')}
+              />
+            )}
+          </fieldset>
+        </div>
+        <GroupProblem path={path('surfaceTemperatureRange')} problem={pr('surfaceTemperatureRange')} />
+        {ranged ? (
+          <GroupProblem path={path('installationTemperature')} problem={pr('installationTemperature')} />
+        ) : null}
+        <SurfaceSuggest air={air} onUse={(range) => set({ surfaceTemperatureRange: range })} />
+      </Group>
+
+      <Group
+        legend="Other movement"
+        note="Non-thermal movement you expect (moisture, creep, storey drift, seismic); leave blank for none."
+      >
+        <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2 lg:grid-cols-4">
+          <QuantityInput
+            id={fieldDomId(path('otherMovement.extension'))}
+            label="Other opening"
+            measure="joint"
+            required={false}
+            value={joint.otherMovement?.extension}
+            onChange={(v) => setOther('extension', v)}
+            problem={pr('otherMovement.extension')}
+          />
+          <QuantityInput
+            id={fieldDomId(path('otherMovement.compression'))}
+            label="Other closing"
+            measure="joint"
+            required={false}
+            value={joint.otherMovement?.compression}
+            onChange={(v) => setOther('compression', v)}
+            problem={pr('otherMovement.compression')}
+          />
+        </div>
+      </Group>
+
+      <Group legend="Backer and opening">
+        <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2 lg:grid-cols-4">
+          <Field label="Backer rod" id={fieldDomId(path('backer'))}>
+            {(c) => (
+              <Select
+                {...c}
+                className="py-1.5 text-sm"
+                value={joint.backer ?? 'closed_cell'}
+                onChange={(e) => set({ backer: e.target.value as BackerCell })}
+              >
+                {BACKER_CELLS.map((b) => (
+                  <option key={b} value={b}>
+                    {BACKER_LABELS[b]}
+                  </option>
+                ))}
+              </Select>
+            )}
+          </Field>
+          <QuantityInput
+            id={fieldDomId(path('openingDepth'))}
+            label="Opening depth"
+            measure="joint"
+            required={false}
+            value={joint.openingDepth}
+            onChange={(v) => setOptional('openingDepth', v)}
+            problem={pr('openingDepth')}
+            hint="Face to back stop; decides rod or bond-breaker tape."
+          />
+          <QuantityInput
+            id={fieldDomId(path('minimumPracticalWidth'))}
+            label="Smallest workable width"
+            measure="joint"
+            required={false}
+            value={joint.minimumPracticalWidth}
+            onChange={(v) => setOptional('minimumPracticalWidth', v)}
+            problem={pr('minimumPracticalWidth')}
+            placeholder={formatJointDimension(DEFAULT_MINIMUM_WIDTH, system).replace(/\s*(mm|in)$/, '')}
+            hint={`Blank = ${formatJointDimension(DEFAULT_MINIMUM_WIDTH, system)} (common trade practice).`}
+          />
+        </div>
+      </Group>
+    </div>
+  );
+}

@@ -1,0 +1,125 @@
+import type { TemperatureRange } from '@shared/calc/joints/schema';
+import {
+  defaultSurfaceTemperatureRange,
+  EXPOSURES,
+  type Exposure,
+  NIGHT_SKY_DROP,
+  SURFACE_FINISHES,
+  SURFACE_RISE_ABOVE_AIR,
+  type SurfaceFinish,
+} from '@shared/calc/joints/surface-temperature';
+import { useId, useState } from 'react';
+import { Button } from '../../../components/ui/Button';
+import { Field } from '../../../components/ui/Field';
+import { QuantityInput } from '../../../components/ui/QuantityInput';
+import { Select } from '../../../components/ui/Select';
+import { calcProblem, type FieldProblem } from '../../../lib/field-problems';
+import { formatSheetRange } from '../../../lib/sheet-units';
+import { useUnitSystem } from '../../../lib/unit-system';
+import type { AirDesign } from '../draft';
+import { EXPOSURE_LABELS, FINISH_LABELS } from '../labels';
+
+/** A temperature difference: "40 K" in SI, "72 °F" in IP. */
+const delta = (k: number, system: 'SI' | 'IP') => (system === 'IP' ? `${Math.round(k * 1.8)} °F` : `${k} K`);
+
+/**
+ * "Suggest from finish & exposure": the surface range from the air design range by the trade-practice
+ * allowances in shared/calc/joints/surface-temperature.ts. Offered, never applied without a click.
+ */
+export function SurfaceSuggest({
+  air,
+  onUse,
+}: {
+  air: AirDesign | null;
+  onUse: (range: TemperatureRange) => void;
+}) {
+  const system = useUnitSystem();
+  const id = useId();
+  const [airMin, setAirMin] = useState<number>(air?.min ?? -20);
+  const [airMax, setAirMax] = useState<number>(air?.max ?? 35);
+  const [finish, setFinish] = useState<SurfaceFinish>('medium');
+  const [exposure, setExposure] = useState<Exposure>('sun');
+
+  let suggestion: TemperatureRange | null = null;
+  let problem: FieldProblem | undefined;
+  try {
+    suggestion = defaultSurfaceTemperatureRange({ min: airMin, max: airMax }, finish, exposure);
+  } catch (e) {
+    problem = calcProblem(e)[1];
+  }
+  const rise = SURFACE_RISE_ABOVE_AIR[exposure][finish];
+
+  return (
+    <details className="border border-rule bg-paper-raised px-3 py-2 text-sm">
+      <summary className="cursor-pointer font-semibold">
+        Suggest from finish &amp; exposure{' '}
+        <span className="font-normal text-ink-muted">— trade-practice default, not a project analysis</span>
+      </summary>
+      <div className="mt-3 flex flex-col gap-3">
+        <div className="grid gap-3 sm:grid-cols-4">
+          <QuantityInput
+            label="Coldest air"
+            measure="temperature"
+            value={airMin}
+            onChange={(v) => setAirMin(v ?? Number.NaN)}
+            hint={air ? 'Project winter design temperature.' : undefined}
+            problem={problem}
+          />
+          <QuantityInput
+            label="Hottest air"
+            measure="temperature"
+            value={airMax}
+            onChange={(v) => setAirMax(v ?? Number.NaN)}
+            hint={air ? 'Project summer design temperature.' : undefined}
+          />
+          <Field label="Finish">
+            {(c) => (
+              <Select {...c} value={finish} onChange={(e) => setFinish(e.target.value as SurfaceFinish)}>
+                {SURFACE_FINISHES.map((f) => (
+                  <option key={f} value={f}>
+                    {FINISH_LABELS[f]}
+                  </option>
+                ))}
+              </Select>
+            )}
+          </Field>
+          <Field label="Exposure">
+            {(c) => (
+              <Select {...c} value={exposure} onChange={(e) => setExposure(e.target.value as Exposure)}>
+                {EXPOSURES.map((x) => (
+                  <option key={x} value={x}>
+                    {EXPOSURE_LABELS[x]}
+                  </option>
+                ))}
+              </Select>
+            )}
+          </Field>
+        </div>
+        <p id={`${id}-basis`} className="text-xs text-ink-muted">
+          Hottest surface = hottest air + {delta(rise, system)} ({finish} finish,{' '}
+          {EXPOSURE_LABELS[exposure].toLowerCase()}
+          ); coldest surface = coldest air − {delta(NIGHT_SKY_DROP, system)} (radiation to a clear night sky).
+          Common trade practice for lightweight insulated cladding — a project surface-temperature analysis
+          replaces it.
+        </p>
+        {suggestion ? (
+          <div className="flex flex-wrap items-center gap-3">
+            <p>
+              Suggested surface range:{' '}
+              <span className="num font-semibold">
+                {formatSheetRange(suggestion.min, suggestion.max, 'temperature', system)}
+              </span>
+            </p>
+            <Button
+              variant="secondary"
+              aria-describedby={`${id}-basis`}
+              onClick={() => suggestion && onUse(suggestion)}
+            >
+              Use this range for the joint
+            </Button>
+          </div>
+        ) : null}
+      </div>
+    </details>
+  );
+}

@@ -1,0 +1,70 @@
+import { INCH } from '@shared/units';
+import { describe, expect, it } from 'vitest';
+import {
+  formatJointDimension,
+  formatSheet,
+  formatSheetRange,
+  inchFraction,
+  nextSixteenth,
+  parseInches,
+  parseSheetInput,
+  sheetInputText,
+} from './sheet-units';
+
+describe('inch fractions', () => {
+  it('reads the ways the trade writes inches', () => {
+    expect(parseInches('3/4')).toBe(0.75);
+    expect(parseInches('1 1/4')).toBe(1.25);
+    expect(parseInches('1-1/4')).toBe(1.25);
+    expect(parseInches('1¼')).toBe(1.25);
+    expect(parseInches('¾"')).toBe(0.75);
+    expect(parseInches('.5 in')).toBe(0.5);
+    expect(parseInches('13/16″')).toBe(13 / 16);
+    expect(parseInches('1/0')).toBeNull();
+    expect(parseInches('3/4/5')).toBeNull();
+    expect(parseInches('abc')).toBeNull();
+  });
+
+  it('writes fractions, reduced, nearest or next up', () => {
+    expect(inchFraction(0.75)).toBe('3/4');
+    expect(inchFraction(1.25)).toBe('1 1/4');
+    expect(inchFraction(2)).toBe('2');
+    expect(inchFraction(0.682, 16, 'up')).toBe('11/16');
+    expect(inchFraction(0.787)).toBe('13/16');
+  });
+
+  it('a joint box takes fractions in IP and stores metres; SI stays in mm', () => {
+    const ip = parseSheetInput('3/4', 'joint', 'IP');
+    expect(ip.kind).toBe('ok');
+    expect(ip.kind === 'ok' && ip.si).toBeCloseTo(0.75 * INCH, 12);
+    expect(parseSheetInput('3/4', 'joint', 'SI').kind).toBe('invalid');
+    expect(parseSheetInput('', 'joint', 'SI').kind).toBe('empty');
+    const mm = parseSheetInput('12.5', 'joint', 'SI');
+    expect(mm.kind === 'ok' && mm.si).toBeCloseTo(0.0125, 12);
+    expect(sheetInputText(0.75 * INCH, 'joint', 'IP')).toBe('3/4');
+    expect(sheetInputText(0.02, 'joint', 'IP')).toBe('0.7874');
+    expect(sheetInputText(0.02, 'joint', 'SI')).toBe('20');
+  });
+});
+
+describe('figures', () => {
+  it('never prints NaN, and uses the typographic minus', () => {
+    expect(formatSheet(Number.NaN, 'joint', 'SI')).toBe('—');
+    expect(formatSheet(-25, 'temperature', 'SI')).toBe('\u221225\u202f°C');
+    expect(formatSheet(-25, 'temperature', 'IP')).toBe('\u221213\u202f°F');
+    expect(formatSheetRange(-25, 80, 'temperature', 'SI')).toBe('\u221225 to 80\u202f°C');
+  });
+
+  it('joint dimensions: mm with one decimal; inches as an exact fraction or decimals', () => {
+    expect(formatJointDimension(0.02, 'SI')).toBe('20.0\u202fmm');
+    expect(formatJointDimension(0.75 * INCH, 'IP')).toBe('3/4\u202fin');
+    expect(formatJointDimension(0.02, 'IP')).toBe('0.787\u202fin');
+    expect(nextSixteenth(0.0137, 'IP')).toBe('9/16\u202fin');
+    expect(nextSixteenth(0.0137, 'SI')).toBeNull();
+  });
+
+  it('α per kelvin ⇄ per degree Fahrenheit', () => {
+    expect(formatSheet(23.76e-6, 'alpha', 'SI')).toBe('23.76 × 10⁻⁶/K');
+    expect(formatSheet(23.76e-6, 'alpha', 'IP')).toBe('13.2 × 10⁻⁶/°F');
+  });
+});

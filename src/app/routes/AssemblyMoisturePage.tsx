@@ -1,0 +1,212 @@
+import { can } from '@shared/auth/permissions';
+import { ENGINE_VERSION } from '@shared/calc/trace';
+import type { Assembly } from '@shared/schemas/assembly';
+import type { Project } from '@shared/schemas/project';
+import { useQueryClient } from '@tanstack/react-query';
+import { useMemo, useState } from 'react';
+import { Link, useParams } from 'react-router';
+import { Loading } from '../../components/ui/Loading';
+import { Notice } from '../../components/ui/Notice';
+import { SheetSection } from '../../components/ui/SheetSection';
+import { ShowTheWork } from '../../components/ui/ShowTheWork';
+import { useAssembly } from '../../features/assemblies/api/get-assembly';
+import { conflictingAssembly, useUpdateAssembly } from '../../features/assemblies/api/update-assembly';
+import { drawClass } from '../../features/assemblies/layer-class';
+import { ClimateSummary } from '../../features/climate/components/ClimateSummary';
+import { MoistureCautions } from '../../features/moisture/components/MoistureCautions';
+import { MoistureMethod } from '../../features/moisture/components/MoistureMethod';
+import { MoistureResults } from '../../features/moisture/components/MoistureResults';
+import { NeedsList } from '../../features/moisture/components/NeedsList';
+import type { ProfileLayer, ProfileMode } from '../../features/moisture/components/ProfileChart';
+import { VapourSaveBar } from '../../features/moisture/components/VapourSaveBar';
+import { VapourTable } from '../../features/moisture/components/VapourTable';
+import { evaluateMoisture } from '../../features/moisture/evaluate';
+import { useVapourEditing } from '../../features/moisture/use-vapour-editing';
+import { layerThickness } from '../../features/moisture/vapour-draft';
+import { useProject } from '../../features/projects/api/get-project';
+import { errorMessage } from '../../lib/api';
+import { formatDateTime } from '../../lib/format';
+import { assemblyKeys } from '../../lib/query-keys';
+import { useUnitSystem } from '../../lib/unit-system';
+import { AssemblyTabs } from '../layout/AssemblyTabs';
+
+/** The moisture (condensation) sheet of one assembly: inputs, conditions, method, result, cautions. */
+export function AssemblyMoisturePage() {
+  const { id = '', assemblyId = '' } = useParams();
+  const { data: project } = useProject(id);
+  const assembly = useAssembly(assemblyId);
+
+  if (!project) return null;
+  if (assembly.isPending) return <Loading what="Loading the assembly" />;
+  if (assembly.isError) return <Notice tone="caution" title={errorMessage(assembly.error)} live />;
+  const a = assembly.data;
+  if (a.projectId !== project.id)
+    return <Notice tone="caution" title="This assembly belongs to another project." />;
+
+  return (
+    <div className="flex flex-col gap-10">
+      <title>{`Moisture · ${a.name} · ${project.name} · Skinwright`}</title>
+      <AssemblyTabs projectId={project.id} assemblyId={a.id} name={a.name} />
+      <MoistureSheet key={a.id} project={project} assembly={a} />
+    </div>
+  );
+}
+
+function MoistureSheet({ project, assembly }: { project: Project; assembly: Assembly }) {
+  const system = useUnitSystem();
+  const qc = useQueryClient();
+  const update = useUpdateAssembly();
+  const archived = project.archivedAt !== null;
+  const mayWrite = can(project.myRole, 'assembly.write') && !archived;
+  const editing = useVapourEditing({
+    assembly,
+    save: (args) => update.mutateAsync(args),
+    conflictOf: conflictingAssembly,
+    onLoadTheirs: (theirs) => {
+      qc.setQueryData(assemblyKeys.detail(theirs.id), theirs);
+      void qc.invalidateQueries({ queryKey: assemblyKeys.revisions(theirs.id) });
+    },
+    errorText: errorMessage,
+  });
+  const [month, setMonth] = useState<number | null>(null);
+  const [mode, setMode] = useState<ProfileMode>('temperature');
+
+  const input = editing.base.current.input;
+  const vapourKey = JSON.stringify(editing.vapour);
+  const rowErrorsKey = JSON.stringify(editing.rowErrors);
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the keys stand for vapour and rowErrors (deep)
+  const evaluation = useMemo(
+    () => evaluateMoisture(input, editing.vapour, editing.rowErrors, project),
+    [input, vapourKey, rowErrorsKey, project],
+  );
+  const result = evaluation.status === 'ready' ? evaluation.result : null;
+  const problems = evaluation.status === 'blocked' ? evaluation.problems : [];
+
+  // The engine's reasons about a vapour row are shown on that row, beside its box.
+  const rowErrors: Record<number, string> = { ...editing.rowErrors };
+  for (const p of problems)
+    if (
+      p.where.kind === 'vapour' &&
+      rowErrors[p.where.layer] === undefined &&
+      !/^Vapour data of layer/i.test(p.text)
+    )
+      rowErrors[p.where.layer] = p.text;
+
+  const layers: ProfileLayer[] = input.thermal.layers.map((l) => ({
+    name: l.name,
+    thickness: layerThickness(l),
+    hatch: drawClass(l),
+  }));
+  const base = `/projects/${project.id}`;
+  const builderHref = `${base}/assemblies/${assembly.id}`;
+  const climateHref = `${base}/climate`;
+  const mayEditClimate = can(project.myRole, 'project.climate.update') && !archived;
+
+  return (
+    <div className="flex flex-col gap-10 pb-4">
+      <header className="flex flex-col gap-1">
+        <p className="label-caps">
+          Moisture sheet · revision {editing.base.revision} saved{' '}
+          {formatDateTime(editing.base.current.createdAt)}
+          {editing.base.current.createdBy ? ` by ${editing.base.current.createdBy}` : ''}
+          {mayWrite ? '' : ' · read-only'}
+        </p>
+        <h2 className="text-3xl">{editing.base.name}</h2>
+        <p className="text-sm text-ink-muted">
+          Condensation inside the wall and mould risk at its inner face, month by month
+          {mayWrite ? ' — recomputed in your browser as you type.' : '.'}
+        </p>
+      </header>
+
+      <SheetSection n={1} title="Inputs — layers and their vapour data" id="moisture-inputs-heading">
+        <VapourTable
+          layers={input.thermal.layers}
+          drafts={editing.drafts}
+          onChange={mayWrite ? editing.setDraft : undefined}
+          rowErrors={rowErrors}
+          buildupProblems={problems}
+          result={result}
+          builderHref={builderHref}
+          readOnly={!mayWrite}
+        />
+      </SheetSection>
+
+      <SheetSection
+        n={2}
+        title="Conditions inside and outside"
+        id="moisture-conditions-heading"
+        aside={
+          <Link to={mayEditClimate ? `${climateHref}?edit=1` : climateHref} className="text-sm">
+            {mayEditClimate ? 'Edit the climate' : 'Open the climate page'}
+          </Link>
+        }
+      >
+        {project.climate ? (
+          <ClimateSummary project={project} />
+        ) : (
+          <p className="text-ink-muted">The project has no monthly climate yet.</p>
+        )}
+      </SheetSection>
+
+      <SheetSection n={3} title="Method" id="moisture-method-heading">
+        {evaluation.status === 'ready' ? (
+          <MoistureMethod result={evaluation.result} input={evaluation.input} system={system} />
+        ) : (
+          <p className="text-ink-muted">
+            ISO 13788:2012 monthly method (Glaser, tangent construction); the details follow once the sheet
+            can be computed.
+          </p>
+        )}
+      </SheetSection>
+
+      <SheetSection
+        n={4}
+        title="Result"
+        id="moisture-result-heading"
+        aside={
+          mayWrite ? (
+            <span className="text-xs text-ink-muted">computed in your browser as you type</span>
+          ) : null
+        }
+      >
+        <div aria-live="polite" className="flex flex-col gap-4">
+          {result ? (
+            <MoistureResults
+              result={result}
+              layers={layers}
+              system={system}
+              month={month}
+              onMonth={setMonth}
+              mode={mode}
+              onMode={setMode}
+            />
+          ) : (
+            <NeedsList
+              problems={problems}
+              links={{
+                climate: climateHref,
+                indoor: base,
+                buildup: builderHref,
+                mayEditClimate,
+                mayEditIndoor: can(project.myRole, 'project.update') && !archived,
+                mayEditVapour: mayWrite,
+              }}
+            />
+          )}
+        </div>
+        {result ? <ShowTheWork steps={result.trace} /> : null}
+      </SheetSection>
+
+      <MoistureCautions engineVersion={ENGINE_VERSION} />
+
+      {mayWrite ? <VapourSaveBar editing={editing} resultReady={result !== null} /> : null}
+      {archived ? (
+        <p className="text-sm text-ink-muted">
+          The project is archived, so its assemblies are shown read-only.
+        </p>
+      ) : !mayWrite ? (
+        <p className="text-sm text-ink-muted">Your role on this project shows the vapour data read-only.</p>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,117 @@
+import type { Project, ProjectClimate } from '@shared/schemas/project';
+import { useState } from 'react';
+import { Button } from '../../../components/ui/Button';
+import { Notice } from '../../../components/ui/Notice';
+import { formatDateTime } from '../../../lib/format';
+import { conflictingProject, useUpdateClimate } from '../api/update-climate';
+import { type ClimateFormValues, climateToForm, mergeClimate } from '../climate-form';
+import { ClimateForm } from './ClimateForm';
+
+interface Conflict {
+  base: Project;
+  theirs: Project;
+  mine: ProjectClimate;
+}
+
+/**
+ * Edits the project's climate. Every save names the project version it started from; when someone saved in
+ * between (the climate or any other project data), nothing is overwritten silently: the person carries their
+ * changed values onto the saved version, or loads it.
+ */
+export function ClimateEditor({
+  project,
+  onDone,
+  indoorHref,
+}: {
+  project: Project;
+  onDone: () => void;
+  indoorHref?: string;
+}) {
+  const update = useUpdateClimate();
+  const [base, setBase] = useState<Project>(project);
+  const [values, setValues] = useState<ClimateFormValues>(() => climateToForm(project.climate));
+  const [formKey, setFormKey] = useState(0);
+  const [conflict, setConflict] = useState<Conflict | null>(null);
+  const [carried, setCarried] = useState<{ onto: number; bothChanged: string[] } | null>(null);
+
+  async function save(climate: ProjectClimate) {
+    try {
+      await update.mutateAsync({ id: project.id, version: base.version, climate });
+      onDone();
+    } catch (e) {
+      const theirs = conflictingProject(e);
+      if (!theirs) throw e;
+      setConflict({ base, theirs, mine: climate });
+    }
+  }
+
+  function restart(next: Project, form: ClimateFormValues) {
+    setBase(next);
+    setValues(form);
+    setFormKey((k) => k + 1);
+    setConflict(null);
+  }
+
+  const merge = conflict ? mergeClimate(conflict.base.climate, conflict.mine, conflict.theirs.climate) : null;
+
+  const banner =
+    conflict && merge ? (
+      <Notice tone="warning" title="Someone else saved this project first." live>
+        <p>
+          Version <span className="num">{conflict.theirs.version}</span> was saved at{' '}
+          <span className="num">{formatDateTime(conflict.theirs.updatedAt)}</span> while you were editing
+          version <span className="num">{conflict.base.version}</span>.{' '}
+          {merge.theirsChanged.length === 0
+            ? 'They changed other project data, not the climate.'
+            : `They changed the climate: ${merge.theirsChanged.slice(0, 6).join(', ')}${merge.theirsChanged.length > 6 ? ` and ${merge.theirsChanged.length - 6} more` : ''}.`}{' '}
+          Nothing of yours has been saved, and your entries are still in the form.
+        </p>
+        <p>
+          <strong>Carry my changes over</strong> puts every value you changed on top of version{' '}
+          {conflict.theirs.version} and keeps theirs elsewhere
+          {merge.bothChanged.length > 0
+            ? `; where you both changed a value (${merge.bothChanged.join(', ')}), yours is kept`
+            : ''}
+          . Nothing is saved until you press Save.
+        </p>
+        <div className="flex flex-wrap gap-3 pt-1">
+          <Button
+            variant="secondary"
+            onClick={() => {
+              setCarried({ onto: conflict.theirs.version, bothChanged: merge.bothChanged });
+              restart(conflict.theirs, climateToForm(merge.merged));
+            }}
+          >
+            Carry my changes over
+          </Button>
+          <Button
+            variant="secondary"
+            onClick={() => {
+              setCarried(null);
+              restart(conflict.theirs, climateToForm(conflict.theirs.climate));
+            }}
+          >
+            Load the saved climate (discard my edits)
+          </Button>
+        </div>
+      </Notice>
+    ) : carried ? (
+      <Notice
+        tone="info"
+        title={`Your changes are now on top of version ${carried.onto}. Check them, then save.`}
+      />
+    ) : null;
+
+  return (
+    <ClimateForm
+      key={formKey}
+      project={base}
+      defaultValues={values}
+      onSubmit={save}
+      onCancel={onDone}
+      banner={banner}
+      submitDisabled={conflict !== null}
+      indoorHref={indoorHref}
+    />
+  );
+}

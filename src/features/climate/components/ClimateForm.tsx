@@ -1,0 +1,297 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { saturationPressureIso13788 } from '@shared/calc/moisture/psychrometrics';
+import type { Project, ProjectClimate } from '@shared/schemas/project';
+import { type ReactNode, useState } from 'react';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import { Link } from 'react-router';
+import { Button } from '../../../components/ui/Button';
+import { Field } from '../../../components/ui/Field';
+import { Notice } from '../../../components/ui/Notice';
+import { Select } from '../../../components/ui/Select';
+import { TextInput } from '../../../components/ui/TextInput';
+import { errorMessage, isApiRequestError } from '../../../lib/api';
+import { formatQuantity, parseInput, type Quantity, unitOf } from '../../../lib/quantities';
+import { useUnitSystem } from '../../../lib/unit-system';
+import { type ClimateFormValues, climateErrorMap, climateFormSchema, MONTH_NAMES } from '../climate-form';
+import { HUMIDITY_CLASSES, isInventedClimate } from '../humidity-classes';
+import { ClimateCell } from './ClimateCell';
+
+type Column = 'exteriorTemperature' | 'exteriorRelativeHumidity';
+const COLUMNS: { field: Column; quantity: Quantity; words: string }[] = [
+  { field: 'exteriorTemperature', quantity: 'temperature', words: 'mean exterior temperature' },
+  {
+    field: 'exteriorRelativeHumidity',
+    quantity: 'relativeHumidity',
+    words: 'mean exterior relative humidity',
+  },
+];
+
+export const cellId = (month: number, field: Column) => `climate-${month}-${field}`;
+
+interface ClimateFormProps {
+  project: Project;
+  defaultValues: ClimateFormValues;
+  onSubmit: (climate: ProjectClimate) => Promise<void>;
+  onCancel?: () => void;
+  banner?: ReactNode;
+  submitDisabled?: boolean;
+  /** Where the project's indoor design conditions are edited, when this person may. */
+  indoorHref?: string;
+}
+
+/**
+ * The project's monthly climate for the moisture check: a 12-row table (January first) of mean exterior
+ * temperature and RH in the person's units, where the values come from, and the interior — an ISO 13788
+ * humidity class or the project's fixed indoor design conditions. A column pasted from a spreadsheet fills
+ * the rows below the box it is pasted into.
+ */
+export function ClimateForm({
+  project,
+  defaultValues,
+  onSubmit,
+  onCancel,
+  banner,
+  submitDisabled = false,
+  indoorHref,
+}: ClimateFormProps) {
+  const system = useUnitSystem();
+  const [formError, setFormError] = useState<string[] | null>(null);
+  const [pasted, setPasted] = useState<string | null>(null);
+  const {
+    control,
+    register,
+    handleSubmit,
+    setValue,
+    formState: { errors, isSubmitting, isSubmitted },
+  } = useForm<ClimateFormValues, unknown, ProjectClimate>({
+    resolver: zodResolver(climateFormSchema, { error: climateErrorMap(system) }),
+    defaultValues,
+    mode: 'onTouched',
+  });
+  const values = useWatch({ control }) as ClimateFormValues;
+
+  const submit = handleSubmit(async (climate) => {
+    setFormError(null);
+    try {
+      await onSubmit(climate);
+    } catch (e) {
+      const fields =
+        isApiRequestError(e) && e.fields ? Object.entries(e.fields).map(([k, v]) => `${k}: ${v}`) : [];
+      setFormError([errorMessage(e), ...fields]);
+    }
+  });
+
+  /** Spread pasted rows (values per line, tab between columns) from this box downwards. */
+  function pasteFrom(month: number, column: number, text: string) {
+    const lines = text
+      .replace(/\r/g, '')
+      .split('\n')
+      .filter((l) => l.trim() !== '');
+    let count = 0;
+    let unreadable = 0;
+    lines.forEach((line, r) => {
+      const row = month + r;
+      if (row > 11) return;
+      line.split('\t').forEach((cell, j) => {
+        const col = COLUMNS[column + j];
+        if (!col) return;
+        const t = cell.trim().replace(/\s*(%|°\s*[CF])$/i, '');
+        const parsed = parseInput(t, col.quantity, system);
+        if (parsed.kind !== 'ok') unreadable++;
+        setValue(`months.${row}.${col.field}`, parsed.kind === 'ok' ? parsed.si : Number.NaN, {
+          shouldDirty: true,
+          shouldValidate: isSubmitted,
+        });
+        count++;
+      });
+    });
+    setPasted(
+      `Pasted ${count} value${count === 1 ? '' : 's'} from ${MONTH_NAMES[month]} down${unreadable > 0 ? `; ${unreadable} could not be read and are marked ✕` : ''}.`,
+    );
+  }
+
+  const monthErrors = errors.months;
+  const errorCount =
+    (Array.isArray(monthErrors)
+      ? monthErrors.filter(Boolean).reduce((n, m) => n + Object.keys(m ?? {}).length, 0)
+      : 0) +
+    (errors.source ? 1 : 0) +
+    (errors.humidityClass ? 1 : 0);
+
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-8" aria-label="Monthly climate">
+      {formError ? (
+        <Notice tone="caution" title="Not saved." live>
+          {formError.map((m) => (
+            <p key={m}>{m}</p>
+          ))}
+        </Notice>
+      ) : null}
+
+      <fieldset className="border-t border-ink pt-3">
+        <legend className="pr-3 font-serif text-lg font-semibold">Where the values come from</legend>
+        <Field
+          label="Source"
+          required
+          error={errors.source?.message}
+          hint="The weather file, station and period, or the published table the monthly means come from."
+          className="mt-3"
+        >
+          {(c) => <TextInput {...c} {...register('source')} maxLength={500} autoComplete="off" />}
+        </Field>
+        {isInventedClimate(values.source ?? '') ? (
+          <Notice tone="warning" title="These are invented demo values, not a real place." className="mt-3">
+            <p>Replace them with the project’s own monthly means before relying on the result.</p>
+          </Notice>
+        ) : null}
+      </fieldset>
+
+      <fieldset className="border-t border-ink pt-3">
+        <legend className="pr-3 font-serif text-lg font-semibold">Monthly means outside</legend>
+        <p className="mt-2 text-sm text-ink-muted">
+          Mean air temperature and relative humidity of each month. To fill a column, paste the 12 values from
+          a spreadsheet into its January box (two columns side by side fill both).
+        </p>
+        <div className="mt-3 overflow-x-auto">
+          <table className="border-collapse text-left text-sm">
+            <caption className="sr-only">Monthly mean exterior temperature and relative humidity</caption>
+            <thead>
+              <tr>
+                <th scope="col" className="border-b-2 border-ink px-2 py-2 font-semibold">
+                  Month
+                </th>
+                <th scope="col" className="border-b-2 border-ink px-2 py-2 font-semibold">
+                  θ_e, mean temperature ({unitOf('temperature', system)})
+                </th>
+                <th scope="col" className="border-b-2 border-ink px-2 py-2 font-semibold">
+                  φ_e, mean RH (%)
+                </th>
+                <th scope="col" className="border-b-2 border-ink px-2 py-2 text-right font-semibold">
+                  p_e (Pa)
+                </th>
+              </tr>
+            </thead>
+            <tbody>
+              {MONTH_NAMES.map((name, k) => {
+                const m = values.months?.[k];
+                const pe =
+                  m && Number.isFinite(m.exteriorTemperature) && Number.isFinite(m.exteriorRelativeHumidity)
+                    ? (m.exteriorRelativeHumidity ?? 0) *
+                      saturationPressureIso13788(m.exteriorTemperature ?? 0)
+                    : null;
+                return (
+                  <tr key={name} className="align-top">
+                    <th scope="row" className="border-b border-rule px-2 py-1.5 text-left font-normal">
+                      {name}
+                    </th>
+                    {COLUMNS.map((col, j) => (
+                      <td key={col.field} className="border-b border-rule px-2 py-1.5">
+                        <Controller
+                          control={control}
+                          name={`months.${k}.${col.field}`}
+                          render={({ field, fieldState }) => (
+                            <ClimateCell
+                              id={cellId(k, col.field)}
+                              label={`${name} ${col.words}`}
+                              quantity={col.quantity}
+                              value={typeof field.value === 'number' ? field.value : undefined}
+                              system={system}
+                              onChange={(si) => field.onChange(si ?? Number.NaN)}
+                              onBlur={field.onBlur}
+                              inputRef={field.ref}
+                              error={fieldState.error?.message}
+                              onPasteMany={(text) => pasteFrom(k, j, text)}
+                            />
+                          )}
+                        />
+                      </td>
+                    ))}
+                    <td className="num border-b border-rule px-2 py-1.5 text-right text-ink-muted">
+                      {pe === null || !Number.isFinite(pe) ? '—' : pe.toFixed(0)}
+                    </td>
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+        </div>
+        {pasted ? (
+          <p role="status" className="mt-2 text-sm">
+            {pasted}
+          </p>
+        ) : null}
+      </fieldset>
+
+      <fieldset className="border-t border-ink pt-3">
+        <legend className="pr-3 font-serif text-lg font-semibold">Inside</legend>
+        <div className="mt-3 flex flex-col gap-4">
+          <label className="flex items-start gap-2">
+            <input type="radio" value="class" {...register('interior')} className="mt-1" />
+            <span>
+              <span className="font-semibold">An ISO 13788 humidity class</span> (Annex A): the indoor vapour
+              pressure follows the outside plus an excess set by the use of the building, largest in cold
+              months. The indoor temperature is the project’s,{' '}
+              {formatQuantity(project.indoorTempC, 'temperature', system)}.
+            </span>
+          </label>
+          {values.interior === 'class' ? (
+            <Field label="Humidity class" error={errors.humidityClass?.message} className="ml-6 max-w-xl">
+              {(c) => (
+                <Select {...c} {...register('humidityClass', { valueAsNumber: true })}>
+                  {HUMIDITY_CLASSES.map((h) => (
+                    <option key={h.value} value={h.value}>
+                      {`Class ${h.value} — ${h.words} (Δp ${h.excess} Pa at θ_e ≤ 0 °C)`}
+                    </option>
+                  ))}
+                </Select>
+              )}
+            </Field>
+          ) : null}
+          <label className="flex items-start gap-2">
+            <input type="radio" value="fixed" {...register('interior')} className="mt-1" />
+            <span>
+              <span className="font-semibold">The project’s fixed indoor design conditions</span>:{' '}
+              <span className="num">
+                {formatQuantity(project.indoorTempC, 'temperature', system)},{' '}
+                {formatQuantity(project.indoorRh, 'relativeHumidity', system)} RH
+              </span>{' '}
+              in every month (from the site data
+              {indoorHref ? (
+                <>
+                  {' — '}
+                  <Link to={indoorHref}>edit them there</Link>
+                </>
+              ) : null}
+              ).
+            </span>
+          </label>
+        </div>
+      </fieldset>
+
+      {banner}
+
+      <div className="flex flex-wrap items-center gap-4 border-t border-ink pt-4">
+        <Button
+          type="submit"
+          variant="primary"
+          busy={isSubmitting}
+          busyLabel="Saving…"
+          disabled={submitDisabled}
+        >
+          Save the climate
+        </Button>
+        {onCancel ? (
+          <Button variant="secondary" onClick={onCancel} disabled={isSubmitting}>
+            Cancel
+          </Button>
+        ) : null}
+        {errorCount > 0 ? (
+          <p className="text-sm text-caution" role="status">
+            <span aria-hidden="true">✕ </span>
+            {errorCount === 1 ? 'One value needs attention.' : `${errorCount} values need attention.`}
+          </p>
+        ) : null}
+      </div>
+    </form>
+  );
+}

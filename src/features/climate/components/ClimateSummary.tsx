@@ -1,0 +1,130 @@
+import { saturationPressureIso13788 } from '@shared/calc/moisture/psychrometrics';
+import type { Project } from '@shared/schemas/project';
+import type { ReactNode } from 'react';
+import { Notice } from '../../../components/ui/Notice';
+import { formatQuantity, unitOf } from '../../../lib/quantities';
+import { useUnitSystem } from '../../../lib/unit-system';
+import { MONTH_NAMES } from '../climate-form';
+import { HUMIDITY_CLASSES, isInventedClimate } from '../humidity-classes';
+
+/**
+ * The project's climate as read on a sheet: the interior conditions in words, then the 12 monthly means
+ * (months across), where they come from, and a warning when they are invented demo values.
+ */
+export function ClimateSummary({ project, actions }: { project: Project; actions?: ReactNode }) {
+  const system = useUnitSystem();
+  const c = project.climate;
+  const t = (v: number) => formatQuantity(v, 'temperature', system).replace(/\u202f.*$/, '');
+  const cls = c?.humidityClass;
+  const klass = cls === undefined ? undefined : HUMIDITY_CLASSES.find((h) => h.value === cls);
+
+  return (
+    <div className="flex flex-col gap-3">
+      <dl className="grid gap-px border border-ink bg-rule text-sm sm:grid-cols-[12rem_1fr]">
+        <dt className="label-caps bg-paper-raised px-3 py-2">Inside</dt>
+        <dd className="bg-paper-raised px-3 py-2" data-testid="climate-interior">
+          {!c ? (
+            <span className="text-ink-muted">—</span>
+          ) : klass ? (
+            <>
+              ISO 13788 humidity class {klass.value} — {klass.words}: vapour pressure excess{' '}
+              <span className="num">{klass.excess}&#x202f;Pa</span> at θ_e ≤ 0 °C, falling to 0 at 20 °C; θ_i
+              = <span className="num">{formatQuantity(project.indoorTempC, 'temperature', system)}</span> (the
+              project’s indoor design temperature).
+            </>
+          ) : (
+            <>
+              The project’s fixed indoor design conditions:{' '}
+              <span className="num">
+                {formatQuantity(project.indoorTempC, 'temperature', system)},{' '}
+                {formatQuantity(project.indoorRh, 'relativeHumidity', system)}
+              </span>{' '}
+              RH in every month.
+            </>
+          )}
+        </dd>
+        <dt className="label-caps bg-paper-raised px-3 py-2">Outside — source</dt>
+        <dd className="bg-paper-raised px-3 py-2">
+          {c ? c.source : <span className="text-ink-muted">not entered</span>}
+        </dd>
+      </dl>
+      {c && isInventedClimate(c.source) ? (
+        <Notice tone="warning" title="The monthly climate is invented demo data, not a real place.">
+          <p>Enter the project’s own monthly means before relying on any moisture result.</p>
+        </Notice>
+      ) : null}
+      {c ? (
+        <div className="overflow-x-auto">
+          <table className="w-full border-collapse text-sm">
+            <caption className="label-caps pb-2 text-left">Monthly means outside</caption>
+            <thead>
+              <tr>
+                <th scope="col" className="border-b-2 border-ink px-2 py-1.5 text-left font-semibold">
+                  <span className="sr-only">Quantity</span>
+                </th>
+                {MONTH_NAMES.map((m) => (
+                  <th
+                    key={m}
+                    scope="col"
+                    className="border-b-2 border-ink px-2 py-1.5 text-right font-semibold"
+                  >
+                    <abbr title={m} className="no-underline">
+                      {m.slice(0, 3)}
+                    </abbr>
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody className="num">
+              <tr>
+                <th
+                  scope="row"
+                  className="border-b border-rule px-2 py-1.5 text-left font-sans font-normal whitespace-nowrap"
+                >
+                  θ_e ({unitOf('temperature', system)})
+                </th>
+                {c.months.map((m, k) => (
+                  <td key={MONTH_NAMES[k]} className="border-b border-rule px-2 py-1.5 text-right">
+                    {t(m.exteriorTemperature)}
+                  </td>
+                ))}
+              </tr>
+              <tr>
+                <th
+                  scope="row"
+                  className="border-b border-rule px-2 py-1.5 text-left font-sans font-normal whitespace-nowrap"
+                >
+                  φ_e (%)
+                </th>
+                {c.months.map((m, k) => (
+                  <td key={MONTH_NAMES[k]} className="border-b border-rule px-2 py-1.5 text-right">
+                    {Math.round(m.exteriorRelativeHumidity * 100)}
+                  </td>
+                ))}
+              </tr>
+              <tr>
+                <th
+                  scope="row"
+                  className="border-b border-rule px-2 py-1.5 text-left font-sans font-normal whitespace-nowrap"
+                >
+                  p_e (Pa)
+                </th>
+                {c.months.map((m, k) => (
+                  <td
+                    key={MONTH_NAMES[k]}
+                    className="border-b border-rule px-2 py-1.5 text-right text-ink-muted"
+                  >
+                    {(m.exteriorRelativeHumidity * saturationPressureIso13788(m.exteriorTemperature)).toFixed(
+                      0,
+                    )}
+                  </td>
+                ))}
+              </tr>
+            </tbody>
+          </table>
+        </div>
+      ) : null}
+      {actions ? <div className="flex flex-wrap items-center gap-3">{actions}</div> : null}
+    </div>
+  );
+}

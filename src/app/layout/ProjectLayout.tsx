@@ -34,6 +34,9 @@ export function ProjectLayout() {
         <NavLink to={`/projects/${p.id}/climate`} className={tabClass}>
           Climate
         </NavLink>
+        <NavLink to={`/projects/${p.id}/wind`} className={tabClass}>
+          Wind
+        </NavLink>
         <NavLink to={`/projects/${p.id}/members`} className={tabClass}>
           People
         </NavLink>

@@ -1,0 +1,163 @@
+import { FOOT, INCH, MPH_TO_MS, PSF_TO_PA, type UnitSystem } from '@shared/units';
+
+/**
+ * 1 lbf = 4.448 221 615 260 5 N exactly (NIST SP 811 B.9, pound-force). Kept here because `shared/units` has no
+ * force factor yet.
+ */
+export const LBF_TO_N = 4.4482216152605;
+
+/**
+ * The quantities of the wind sheet and how each crosses the SI/IP edge. Stored values are SI (m/s, m, Pa, N, m²);
+ * only what is shown and typed is converted. `factor` is the SI value of one shown unit: shown = SI / factor.
+ * Longer lengths (heights, spans, girt spacing, end-zone width) read in m / ft; shorter ones (clip spacing,
+ * module width) in mm / in.
+ */
+export type WindMeasure =
+  | 'speed'
+  | 'length'
+  | 'span'
+  | 'spacing'
+  | 'pressure'
+  | 'force'
+  | 'area'
+  | 'angle'
+  | 'ratio'
+  | 'count';
+
+interface Spec {
+  unit: Record<UnitSystem, string>;
+  factor: Record<UnitSystem, number>;
+  /** Decimals shown in results (trailing zeros kept, tabular). */
+  decimals: Record<UnitSystem, number>;
+  /** Decimals shown in an editable box (trailing zeros trimmed). */
+  inputDecimals: Record<UnitSystem, number>;
+}
+
+export const WIND_MEASURES: Record<WindMeasure, Spec> = {
+  speed: {
+    unit: { SI: 'm/s', IP: 'mph' },
+    factor: { SI: 1, IP: MPH_TO_MS },
+    decimals: { SI: 1, IP: 0 },
+    inputDecimals: { SI: 2, IP: 1 },
+  },
+  length: {
+    unit: { SI: 'm', IP: 'ft' },
+    factor: { SI: 1, IP: FOOT },
+    decimals: { SI: 2, IP: 1 },
+    inputDecimals: { SI: 3, IP: 2 },
+  },
+  span: {
+    unit: { SI: 'm', IP: 'ft' },
+    factor: { SI: 1, IP: FOOT },
+    decimals: { SI: 3, IP: 2 },
+    inputDecimals: { SI: 3, IP: 3 },
+  },
+  spacing: {
+    unit: { SI: 'mm', IP: 'in' },
+    factor: { SI: 0.001, IP: INCH },
+    decimals: { SI: 0, IP: 1 },
+    inputDecimals: { SI: 1, IP: 2 },
+  },
+  pressure: {
+    unit: { SI: 'kPa', IP: 'psf' },
+    factor: { SI: 1000, IP: PSF_TO_PA },
+    decimals: { SI: 3, IP: 1 },
+    inputDecimals: { SI: 4, IP: 2 },
+  },
+  force: {
+    unit: { SI: 'N', IP: 'lbf' },
+    factor: { SI: 1, IP: LBF_TO_N },
+    decimals: { SI: 0, IP: 1 },
+    inputDecimals: { SI: 1, IP: 2 },
+  },
+  area: {
+    unit: { SI: 'm²', IP: 'ft²' },
+    factor: { SI: 1, IP: FOOT * FOOT },
+    decimals: { SI: 3, IP: 2 },
+    inputDecimals: { SI: 3, IP: 2 },
+  },
+  angle: {
+    unit: { SI: '°', IP: '°' },
+    factor: { SI: 1, IP: 1 },
+    decimals: { SI: 1, IP: 1 },
+    inputDecimals: { SI: 2, IP: 2 },
+  },
+  ratio: {
+    unit: { SI: '', IP: '' },
+    factor: { SI: 1, IP: 1 },
+    decimals: { SI: 3, IP: 3 },
+    inputDecimals: { SI: 3, IP: 3 },
+  },
+  count: {
+    unit: { SI: '', IP: '' },
+    factor: { SI: 1, IP: 1 },
+    decimals: { SI: 0, IP: 0 },
+    inputDecimals: { SI: 0, IP: 0 },
+  },
+};
+
+export const windUnit = (m: WindMeasure, system: UnitSystem) => WIND_MEASURES[m].unit[system];
+export const toShownWind = (si: number, m: WindMeasure, system: UnitSystem) =>
+  si / WIND_MEASURES[m].factor[system];
+
+const minus = (text: string) => text.replace(/^-/, '\u2212');
+
+/** Trim trailing zeros; "" for a non-number (never "NaN"). */
+export function trimNumber(value: number, decimals: number): string {
+  if (!Number.isFinite(value)) return '';
+  const fixed = value.toFixed(decimals);
+  const t = fixed.includes('.') ? fixed.replace(/0+$/, '').replace(/\.$/, '') : fixed;
+  return t === '-0' ? '0' : t;
+}
+
+/** The number as it goes into an editable box. */
+export function windInputText(si: number | null | undefined, m: WindMeasure, system: UnitSystem): string {
+  if (si == null || !Number.isFinite(si)) return '';
+  return trimNumber(toShownWind(si, m, system), WIND_MEASURES[m].inputDecimals[system]);
+}
+
+export type WindRounding = 'nearest' | 'down';
+
+/**
+ * The number as it is read in a result: fixed decimals (columns line up), typographic minus, narrow space, unit;
+ * "—" when there is no number. `down` rounds toward zero — for maximum spacings, so a shown maximum is never
+ * more than the computed one.
+ */
+export function formatWind(
+  si: number | null | undefined,
+  m: WindMeasure,
+  system: UnitSystem,
+  {
+    decimals,
+    rounding = 'nearest',
+    unit = true,
+  }: { decimals?: number; rounding?: WindRounding; unit?: boolean } = {},
+): string {
+  if (si == null || !Number.isFinite(si)) return '—';
+  const d = decimals ?? WIND_MEASURES[m].decimals[system];
+  let shown = toShownWind(si, m, system);
+  if (rounding === 'down') {
+    const k = 10 ** d;
+    // A hair of tolerance so that 1.2 m shown in m stays 1.200, not 1.199.
+    shown = Math.trunc(shown * k + (shown >= 0 ? 1e-9 : -1e-9)) / k;
+  }
+  const text = minus(shown.toFixed(d) === `-${(0).toFixed(d)}` ? (0).toFixed(d) : shown.toFixed(d));
+  const u = WIND_MEASURES[m].unit[system];
+  if (!unit || u === '') return text;
+  return u === '°' ? `${text}°` : `${text}\u202f${u}`;
+}
+
+export type ParsedWind = { kind: 'empty' } | { kind: 'invalid' } | { kind: 'ok'; si: number };
+
+/** Read what was typed: digits, one point, optional sign (ASCII or typographic); nothing else is guessed. */
+export function parseWind(text: string, m: WindMeasure, system: UnitSystem): ParsedWind {
+  const t = text.trim().replace(/\u2212/g, '-');
+  if (t === '') return { kind: 'empty' };
+  if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return { kind: 'invalid' };
+  const si = Number(t) * WIND_MEASURES[m].factor[system];
+  return Number.isFinite(si) ? { kind: 'ok', si } : { kind: 'invalid' };
+}
+
+/** A ratio 0–∞ as a whole percentage: "68 %". */
+export const formatPercent = (ratio: number | null | undefined) =>
+  ratio == null || !Number.isFinite(ratio) ? '—' : `${Math.round(ratio * 100)}\u202f%`;

@@ -1,0 +1,66 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { launchChromium, screenshot, signIn, startTestServer } from '../setup/browser';
+
+/**
+ * The engineer opens the demo assembly's attachment sheet, reads the maximum girt spacing of zones 4 and 5, raises
+ * the design girt spacing beyond it and sees the failure in words.
+ */
+describe('attachment & wind sheet in the browser', () => {
+  let server: Awaited<ReturnType<typeof startTestServer>>;
+  let browser: Browser;
+  beforeAll(async () => {
+    server = await startTestServer();
+    browser = await launchChromium();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await server?.stop();
+  });
+
+  it('shows the schedule per zone and fails a girt spacing beyond the maximum, in words', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
+    const problems: string[] = [];
+    page.on('pageerror', (e) => problems.push(e.message));
+    await signIn(page, server.baseUrl, 'engineer@skinwright.demo');
+    await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
+    await page.getByRole('link', { name: 'Assemblies', exact: true }).click();
+    await page
+      .getByRole('link', { name: /Metal rainscreen on clips and girts/ })
+      .first()
+      .click();
+    await page.getByRole('link', { name: 'Attachment & wind' }).click();
+    await page.waitForURL(/\/assemblies\/[0-9a-f-]{36}\/attachment$/);
+
+    const zone4 = page.getByTestId('schedule-zone-4');
+    const zone5 = page.getByTestId('schedule-zone-5');
+    await zone4.waitFor();
+    await zone5.waitFor();
+    expect(await zone4.textContent()).toContain('Zone 4');
+    expect(await zone5.textContent()).toContain('Zone 5');
+    const metres = (s: string | null) => Number.parseFloat((s ?? '').replace(/[^\d.]/g, ''));
+    const max4 = metres(await page.getByTestId('max-girt-4').locator('span').first().textContent());
+    const max5 = metres(await page.getByTestId('max-girt-5').locator('span').first().textContent());
+    expect(max4).toBeGreaterThan(0.9);
+    expect(max5).toBeGreaterThan(0.9);
+    expect(await page.getByTestId('status-zone-4').textContent()).toMatch(/meets/);
+
+    // Raise the design girt spacing past the larger of the two maximums (still inside the table's spans).
+    const beyond = (Math.max(max4, max5) + 0.3).toFixed(2);
+    const girt = page.getByLabel('Design girt spacing', { exact: false });
+    await girt.fill(beyond);
+    await girt.blur();
+    await expect
+      .poll(() => page.getByTestId('status-zone-4').textContent(), { timeout: 10_000 })
+      .toMatch(/exceeds/);
+    const status4 = await page.getByTestId('status-zone-4').textContent();
+    expect(status4).toMatch(
+      new RegExp(`girt spacing ${beyond}0\\s*m is more than the ${max4.toFixed(3)}\\s*m allowed`),
+    );
+    expect(await page.getByTestId('status-zone-5').textContent()).toMatch(/exceeds/);
+    expect(await page.locator('body').textContent()).not.toContain('NaN');
+    await page.getByTestId('schedule-zone-4').scrollIntoViewIfNeeded();
+    await screenshot(page, 'wind-attachment');
+    expect(problems).toEqual([]);
+  });
+});

@@ -16,11 +16,14 @@ import { mountRoutes } from './http/route';
 import type { Mailer } from './mail/mailer';
 import { apiRoutes } from './routes';
 import { createServices } from './services';
+import { type ObjectStore, unavailableStore } from './storage/object-store';
 
 export interface AppDeps {
   database: Database;
   config: Config;
   mailer: Mailer;
+  /** Where uploaded files are stored (S3 API); omitted = uploads answer 503. */
+  storage?: ObjectStore;
   /** Serve the built client from this folder (production); omitted for API-only tests and dev mode. */
   clientDir?: string;
   /** Dev mode: Vite's middleware serving the client with hot reload. */
@@ -62,9 +65,9 @@ function originCheck(trusted: string[]): RequestHandler {
 }
 
 /** Builds the Express app without listening, so tests can drive it with supertest. */
-export function createApp({ database, config, mailer, clientDir, clientMiddleware }: AppDeps) {
+export function createApp({ database, config, mailer, storage, clientDir, clientMiddleware }: AppDeps) {
   const auth = createAuth(database.db, config, mailer);
-  const services = createServices(database, config, mailer, auth);
+  const services = createServices(database, config, mailer, auth, storage ?? unavailableStore());
   const logger = pino({ level: config.env === 'test' ? 'silent' : config.logLevel });
   const app = express();
   app.disable('x-powered-by');
@@ -83,6 +86,8 @@ export function createApp({ database, config, mailer, clientDir, clientMiddlewar
               fontSrc: ["'self'", 'data:'],
               connectSrc: ["'self'"],
               objectSrc: ["'none'"],
+              // The compliance sheet preview: a PDF blob shown in a frame of the run's page.
+              frameSrc: ["'self'", 'blob:'],
               frameAncestors: ["'none'"],
               upgradeInsecureRequests: null,
             },

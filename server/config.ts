@@ -19,6 +19,18 @@ const envSchema = z.object({
   AUTH_RATE_LIMIT: z.coerce.number().int().positive().default(30),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   SEED_DEMO: z.enum(['true', 'false']).default('true'),
+  /** Object storage of uploaded files (S3 API). When S3_BUCKET is unset a local fake (s3rver) runs instead. */
+  S3_BUCKET: z.string().optional(),
+  /** Endpoint of an S3-compatible service; unset = AWS S3 in S3_REGION. */
+  S3_ENDPOINT: z.url().optional(),
+  S3_REGION: z.string().default('us-east-1'),
+  /** Keys; when unset the AWS SDK's default credential chain is used. */
+  S3_ACCESS_KEY_ID: z.string().optional(),
+  S3_SECRET_ACCESS_KEY: z.string().optional(),
+  /** Path-style URLs (bucket in the path), which most S3-compatible services need; default true with S3_ENDPOINT. */
+  S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).optional(),
+  /** Folder of the local fake S3 server (used only when S3_BUCKET is unset). */
+  S3_LOCAL_DIR: z.string().optional(),
 });
 
 export type Config = {
@@ -34,7 +46,20 @@ export type Config = {
   authRateLimit: number;
   logLevel: string;
   seedDemo: boolean;
+  storage: StorageConfig;
 };
+
+/** Where uploaded files go: a real S3 service (`bucket` set) or the local fake in `localDir`. */
+export interface StorageConfig {
+  bucket?: string;
+  endpoint?: string;
+  region: string;
+  accessKeyId?: string;
+  secretAccessKey?: string;
+  forcePathStyle: boolean;
+  /** Local fake's folder; unset = `data/local/s3`, or a temporary folder when the database is in memory. */
+  localDir?: string;
+}
 
 const DEV_SECRET = 'skinwright-development-secret-not-for-production-use';
 
@@ -55,6 +80,15 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     authRateLimit: e.AUTH_RATE_LIMIT,
     logLevel: e.LOG_LEVEL,
     seedDemo: e.SEED_DEMO === 'true',
+    storage: {
+      bucket: e.S3_BUCKET || undefined,
+      endpoint: e.S3_ENDPOINT || undefined,
+      region: e.S3_REGION,
+      accessKeyId: e.S3_ACCESS_KEY_ID || undefined,
+      secretAccessKey: e.S3_SECRET_ACCESS_KEY || undefined,
+      forcePathStyle: e.S3_FORCE_PATH_STYLE ? e.S3_FORCE_PATH_STYLE === 'true' : Boolean(e.S3_ENDPOINT),
+      localDir: e.S3_LOCAL_DIR || undefined,
+    },
     ...overrides,
   };
 }

@@ -9,17 +9,28 @@ import { openDatabase } from './db/client';
 import { demoAccounts, seedDemo } from './db/seed';
 import { startMailCapture } from './mail/capture';
 import { createSmtpMailer } from './mail/mailer';
+import { startLocalS3 } from './storage/local-s3';
+import { createS3Store, storageTarget } from './storage/object-store';
 
 const clientDir = fileURLToPath(new URL('../dist/client', import.meta.url));
 
 /**
- * Opens the database (migrating it), starts the local mail capture when no SMTP_URL is set, seeds the demo
- * on first start, and listens. Returns a stopper that closes everything in order.
+ * Opens the database (migrating it), starts the local mail capture when no SMTP_URL is set and the local
+ * fake S3 server when no S3_BUCKET is set, seeds the demo on first start, and listens. Returns a stopper
+ * that closes everything in order.
  */
 export async function startServer(config: Config, opts: { dev?: boolean } = {}) {
   const database = await openDatabase(config);
   const capture = config.smtpUrl ? null : await startMailCapture(database.db);
   const mailer = createSmtpMailer(config.smtpUrl ?? capture!.url, config.mailFrom);
+  const real = storageTarget(config.storage);
+  // An in-memory database gets a throw-away file store too; otherwise S3_LOCAL_DIR or data/local/s3.
+  const localS3 = real
+    ? null
+    : await startLocalS3(
+        config.storage.localDir ?? (config.pgliteDir.startsWith('memory://') ? undefined : 'data/local/s3'),
+      );
+  const storage = createS3Store(real ?? localS3!.target);
 
   // Listen first (a random port is known only then); answer 503 until the app is ready.
   let app: RequestListener | undefined;
@@ -51,6 +62,7 @@ export async function startServer(config: Config, opts: { dev?: boolean } = {}) 
     database,
     config: effective,
     mailer,
+    storage,
     clientDir: opts.dev ? undefined : clientDir,
     clientMiddleware,
   });
@@ -63,6 +75,7 @@ export async function startServer(config: Config, opts: { dev?: boolean } = {}) 
     await new Promise<void>((resolve) => httpServer.close(() => resolve()));
     await vite?.close();
     await capture?.close();
+    await localS3?.close();
     await database.close();
   }
   return {

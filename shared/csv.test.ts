@@ -7,7 +7,12 @@ describe('RFC 4180 CSV', () => {
     expect(csvField('plain')).toBe('plain');
     expect(csvField('a,b')).toBe('"a,b"');
     expect(csvField('say "hi"')).toBe('"say ""hi"""');
-    expect(toCsv([['a', 'b'], ['1', '']])).toBe('a,b\r\n1,\r\n');
+    expect(
+      toCsv([
+        ['a', 'b'],
+        ['1', ''],
+      ]),
+    ).toBe('a,b\r\n1,\r\n');
   });
 
   it('parses quoted fields across lines and reports the line each record starts on', () => {
@@ -23,7 +28,11 @@ describe('RFC 4180 CSV', () => {
   });
 
   it('refuses an unclosed quote and text after a closing quote, with the line', () => {
-    expect(parseCsv('a\nb,"open\nstill')).toEqual({ ok: false, line: 2, reason: 'a quoted field is never closed' });
+    expect(parseCsv('a\nb,"open\nstill')).toEqual({
+      ok: false,
+      line: 2,
+      reason: 'a quoted field is never closed',
+    });
     expect(parseCsv('a\n"x"y,z')).toMatchObject({ ok: false, line: 2 });
   });
 

@@ -1,12 +1,15 @@
 import { projectRoleSchema } from '@shared/auth/permissions';
 import { assemblyInputSchema } from '@shared/schemas/assembly';
+import { criteriaSetCreateSchema } from '@shared/schemas/criteria';
 import { projectClimateSchema, projectInputSchema, projectWindSchema } from '@shared/schemas/project';
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
 import demo from '../../data/seed/demo.json' with { type: 'json' };
 import demoAssembly from '../../data/seed/demo-assembly.json' with { type: 'json' };
+import demoCriteria from '../../data/seed/demo-criteria.json' with { type: 'json' };
 import type { Auth } from '../auth/auth';
 import { createAssemblyService } from '../services/assemblies';
+import { createCriteriaService } from '../services/criteria';
 import { createProjectService } from '../services/projects';
 import type { Db } from './client';
 import { organisationMembers, organisations, projectMembers, projects as projectTable, user } from './schema';
@@ -39,6 +42,10 @@ export const demoScenario = demoSchema.parse(demo);
 const demoContent = z
   .object({ assembly: assemblyInputSchema, wind: projectWindSchema, climate: projectClimateSchema })
   .parse(demoAssembly);
+/** The demo firm's illustrative code table (invented values, titled as such). */
+const demoCodeTable = z
+  .object({ firm: z.string(), createdBy: z.email(), set: criteriaSetCreateSchema })
+  .parse(demoCriteria);
 
 /** The demo sign-in accounts, as `npm start` prints them and the README lists them. */
 export const demoAccounts = demoScenario.users.map((u) => ({
@@ -91,5 +98,11 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
       .where(eq(projectTable.id, created.id));
     await assemblies.create(created.id, userIds.get(owner)!, demoContent.assembly);
   }
+  await createCriteriaService(db).create(
+    firmIds.get(demoCodeTable.firm)!,
+    userIds.get(demoCodeTable.createdBy)!,
+    demoCodeTable.set,
+    'admin',
+  );
   return true;
 }

@@ -8,6 +8,8 @@ import { libraryRoutes } from './library';
 import { meRoutes } from './me';
 import { memberRoutes } from './members';
 import { projectRoutes } from './projects';
+import { sheetRoutes } from './sheets';
+import { submittalRoutes } from './submittals';
 
 /** Every API route, in one registry: it mounts the routes, generates the OpenAPI document and drives the permission tests. */
 export const apiRoutes: AnyRoute[] = [
@@ -19,5 +21,7 @@ export const apiRoutes: AnyRoute[] = [
   ...libraryRoutes,
   ...criteriaRoutes,
   ...checkRunRoutes,
+  ...sheetRoutes,
+  ...submittalRoutes,
   ...calcRoutes,
 ];

@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { ENGINE_VERSION } from '@shared/calc/trace';
 import { canonicalJson } from '@shared/checks/canonical';
 import type { CategoryLabels } from '@shared/checks/criteria';
+import type { ProjectForChecks } from '@shared/checks/inputs';
 import type { CheckReport } from '@shared/checks/report';
 import { runChecks } from '@shared/checks/runner';
 import type { AssemblyInput } from '@shared/schemas/assembly';
@@ -128,28 +129,25 @@ export function createCheckRunService(db: Db, criteria: ReturnType<typeof create
 
       const id = await db.transaction(async (tx) => {
         const { set, rows } = await criteria.freezeForRun(tx, criteriaSetId, userId);
+        const assemblyInput = a.input as AssemblyInput;
+        const project: ProjectForChecks & { id: string; name: string } = {
+          id: a.p.id,
+          name: a.p.name,
+          climateZone: a.p.climateZone as ProjectForChecks['climateZone'],
+          buildingHeightM: a.p.buildingHeightM,
+          planLengthM: a.p.planLengthM,
+          planWidthM: a.p.planWidthM,
+          indoorTempC: a.p.indoorTempC,
+          indoorRh: a.p.indoorRh,
+          winterDesignTempC: a.p.winterDesignTempC,
+          summerDesignTempC: a.p.summerDesignTempC,
+          wind: (a.p.wind as ProjectWind | null) ?? null,
+          climate: (a.p.climate as ProjectClimate | null) ?? null,
+        };
         const inputs: CheckRunInputs = {
           engineVersion: ENGINE_VERSION,
-          assembly: {
-            id: a.a.id,
-            revision: a.a.currentRevision,
-            name: a.a.name,
-            input: a.input as AssemblyInput,
-          },
-          project: {
-            id: a.p.id,
-            name: a.p.name,
-            climateZone: a.p.climateZone as CheckRunInputs['project']['climateZone'],
-            buildingHeightM: a.p.buildingHeightM,
-            planLengthM: a.p.planLengthM,
-            planWidthM: a.p.planWidthM,
-            indoorTempC: a.p.indoorTempC,
-            indoorRh: a.p.indoorRh,
-            winterDesignTempC: a.p.winterDesignTempC,
-            summerDesignTempC: a.p.summerDesignTempC,
-            wind: (a.p.wind as ProjectWind | null) ?? null,
-            climate: (a.p.climate as ProjectClimate | null) ?? null,
-          },
+          assembly: { id: a.a.id, revision: a.a.currentRevision, name: a.a.name, input: assemblyInput },
+          project,
           criteriaSet: {
             id: set.id,
             lineageId: set.lineageId,
@@ -165,7 +163,7 @@ export function createCheckRunService(db: Db, criteria: ReturnType<typeof create
           },
         };
         // The run reads only the snapshot, so that anyone can recompute it from the stored inputs.
-        const outputs = runChecks(inputs.assembly.input, inputs.project, inputs.criteriaSet.rows);
+        const outputs = runChecks(assemblyInput, project, inputs.criteriaSet.rows);
         const hashes = checkRunHashes(ENGINE_VERSION, inputs, outputs);
         const count = (s: string) => outputs.checks.filter((c) => c.status === s).length;
         const [run] = await tx

@@ -12,11 +12,22 @@ import { createLibraryService } from './library';
 import { createMeService } from './me';
 import { createMemberService } from './members';
 import { createProjectService } from './projects';
+import { createSheetService } from './sheets';
+import { createSubmittalService } from './submittals';
+import type { ObjectStore } from '../storage/object-store';
 
 /** Everything a route may use; routes never touch the database directly. */
-export function createServices(database: Database, config: Config, mailer: Mailer, auth: Auth) {
+export function createServices(
+  database: Database,
+  config: Config,
+  mailer: Mailer,
+  auth: Auth,
+  storage: ObjectStore,
+) {
   const { db } = database;
   const criteria = createCriteriaService(db);
+  const checkRuns = createCheckRunService(db, criteria);
+  const sheets = createSheetService(db, config, checkRuns);
   return {
     databaseKind: database.kind,
     /** Hot backup of the embedded database (PGlite); a PostgreSQL server is backed up with pg_dump. */
@@ -37,7 +48,10 @@ export function createServices(database: Database, config: Config, mailer: Maile
     assemblies: createAssemblyService(db),
     library: createLibraryService(db),
     criteria,
-    checkRuns: createCheckRunService(db, criteria),
+    checkRuns,
+    sheets,
+    submittals: createSubmittalService(db, config, mailer, storage, sheets),
+    storage,
   };
 }
 

@@ -42,6 +42,8 @@ export const PROJECT_ACTIONS = [
   'submittal.create',
   'submittal.submit',
   'submittal.review',
+  'submittal.read',
+  'submittal.comment',
 ] as const;
 export type ProjectAction = (typeof PROJECT_ACTIONS)[number];
 
@@ -70,6 +72,8 @@ export const PERMISSIONS: Record<ProjectAction, readonly ProjectRole[]> = {
   'submittal.create': ['owner', 'subcontractor'],
   'submittal.submit': ['owner', 'subcontractor'],
   'submittal.review': REVIEWERS,
+  'submittal.read': ALL,
+  'submittal.comment': [...DESIGNERS, 'subcontractor'],
 };
 
 export function can(role: ProjectRole | null | undefined, action: ProjectAction): boolean {

@@ -39,6 +39,8 @@ export const INCH = 0.0254;
 export const FOOT = 0.3048;
 /** 1 lbf/ft² = 47.880 26 Pa (NIST SP 811 B.9). */
 export const PSF_TO_PA = 47.88026;
+/** 1 lb/ft² = 4.882 428 kg/m² (NIST SP 811 B.9, pound avoirdupois per square foot). */
+export const LB_PER_FT2_TO_KG_PER_M2 = 4.882428;
 /** 1 mph = 0.447 04 m/s exactly. */
 export const MPH_TO_MS = 0.44704;
 /** 1 US perm (23 °C) = 57.452 5 ng/(Pa·s·m²); 1 perm (0 °C) = 57.2135 ng/(Pa·s·m²) (NIST SP 811 B.9). */

@@ -8,25 +8,39 @@ import { AppShell } from './layout/AppShell';
 import { ProjectLayout } from './layout/ProjectLayout';
 import { RequireSession } from './layout/RequireSession';
 import { AdminMailPage } from './routes/AdminMailPage';
+import { AssemblyAttachmentPage } from './routes/AssemblyAttachmentPage';
 import { AssemblyBuilderPage } from './routes/AssemblyBuilderPage';
+import { AssemblyChecksPage } from './routes/AssemblyChecksPage';
+import { AssemblyJointsPage } from './routes/AssemblyJointsPage';
+import { AssemblyMoisturePage } from './routes/AssemblyMoisturePage';
 import { AssemblyRevisionPage } from './routes/AssemblyRevisionPage';
+import { CheckRunSheetPage } from './routes/CheckRunSheetPage';
+import { CodeTablesPage } from './routes/CodeTablesPage';
 import { CompareAssembliesPage } from './routes/CompareAssembliesPage';
+import { CriteriaDiffPage } from './routes/CriteriaDiffPage';
+import { CriteriaSetPage } from './routes/CriteriaSetPage';
 import { ForgotPasswordPage } from './routes/ForgotPasswordPage';
 import { InvitePage } from './routes/InvitePage';
 import { LibraryPage } from './routes/LibraryPage';
 import { NewAssemblyPage } from './routes/NewAssemblyPage';
 import { NewProjectPage } from './routes/NewProjectPage';
+import { NewSubmittalPage } from './routes/NewSubmittalPage';
 import { NotFoundPage } from './routes/NotFoundPage';
 import { ProjectActivityPage } from './routes/ProjectActivityPage';
 import { ProjectAssembliesPage } from './routes/ProjectAssembliesPage';
+import { ProjectClimatePage } from './routes/ProjectClimatePage';
 import { ProjectMembersPage } from './routes/ProjectMembersPage';
 import { ProjectOverviewPage } from './routes/ProjectOverviewPage';
+import { ProjectSubmittalsPage } from './routes/ProjectSubmittalsPage';
 import { ProjectsPage } from './routes/ProjectsPage';
+import { ProjectWindPage } from './routes/ProjectWindPage';
 import { ResetPasswordPage } from './routes/ResetPasswordPage';
 import { RouteError } from './routes/RouteError';
 import { SettingsPage } from './routes/SettingsPage';
 import { SignInPage } from './routes/SignInPage';
 import { SignUpPage } from './routes/SignUpPage';
+import { SubmittalPage } from './routes/SubmittalPage';
+import { VerifyPage } from './routes/VerifyPage';
 
 /**
  * Routes. Loaders use the same query options as the components (ensureQueryData), so a page renders
@@ -54,9 +68,26 @@ export function createAppRouter(queryClient: QueryClient) {
     return null;
   };
 
+  const checkSetId = ({ params }: LoaderFunctionArgs) => {
+    if (!uuidParam.safeParse({ id: params.setId }).success)
+      throw data('No such code table.', { status: 404 });
+    return null;
+  };
+
   const checkAssemblyId = ({ params }: LoaderFunctionArgs) => {
     if (!uuidParam.safeParse({ id: params.assemblyId }).success)
       throw data('No such assembly.', { status: 404 });
+    return null;
+  };
+
+  const checkSubmittalId = ({ params }: LoaderFunctionArgs) => {
+    if (!uuidParam.safeParse({ id: params.submittalId }).success)
+      throw data('No such submittal.', { status: 404 });
+    return null;
+  };
+
+  const checkRunId = ({ params }: LoaderFunctionArgs) => {
+    if (!uuidParam.safeParse({ id: params.runId }).success) throw data('No such check run.', { status: 404 });
     return null;
   };
 
@@ -74,6 +105,8 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: '/forgot-password', element: <ForgotPasswordPage /> },
             { path: '/reset-password', element: <ResetPasswordPage /> },
             { path: '/invite/:token', element: <InvitePage /> },
+            // Public: anyone holding a compliance sheet confirms it here without signing in.
+            { path: '/verify/:code', element: <VerifyPage /> },
             {
               loader: requireSession,
               element: <RequireSession />,
@@ -96,15 +129,52 @@ export function createAppRouter(queryClient: QueryClient) {
                       element: <AssemblyBuilderPage />,
                     },
                     {
+                      path: 'assemblies/:assemblyId/attachment',
+                      loader: checkAssemblyId,
+                      element: <AssemblyAttachmentPage />,
+                    },
+                    {
+                      path: 'assemblies/:assemblyId/moisture',
+                      loader: checkAssemblyId,
+                      element: <AssemblyMoisturePage />,
+                    },
+                    {
+                      path: 'assemblies/:assemblyId/joints',
+                      loader: checkAssemblyId,
+                      element: <AssemblyJointsPage />,
+                    },
+                    {
+                      path: 'assemblies/:assemblyId/checks',
+                      loader: checkAssemblyId,
+                      element: <AssemblyChecksPage />,
+                    },
+                    {
                       path: 'assemblies/:assemblyId/revisions/:revision',
                       loader: checkAssemblyId,
                       element: <AssemblyRevisionPage />,
                     },
+                    {
+                      path: 'check-runs/:runId/sheet',
+                      loader: checkRunId,
+                      element: <CheckRunSheetPage />,
+                    },
+                    { path: 'submittals', element: <ProjectSubmittalsPage /> },
+                    { path: 'submittals/new', element: <NewSubmittalPage /> },
+                    {
+                      path: 'submittals/:submittalId',
+                      loader: checkSubmittalId,
+                      element: <SubmittalPage />,
+                    },
+                    { path: 'climate', element: <ProjectClimatePage /> },
+                    { path: 'wind', element: <ProjectWindPage /> },
                     { path: 'members', element: <ProjectMembersPage /> },
                     { path: 'activity', element: <ProjectActivityPage /> },
                   ],
                 },
                 { path: '/library', element: <LibraryPage /> },
+                { path: '/code-tables', element: <CodeTablesPage /> },
+                { path: '/code-tables/:setId', loader: checkSetId, element: <CriteriaSetPage /> },
+                { path: '/code-tables/:setId/diff', loader: checkSetId, element: <CriteriaDiffPage /> },
                 { path: '/settings', element: <SettingsPage /> },
                 { path: '/admin/mail', loader: requireSiteAdmin, element: <AdminMailPage /> },
               ],

@@ -78,3 +78,18 @@ export const checkRunKeys = {
   details: () => [...checkRunKeys.all, 'detail'] as const,
   detail: (runId: string) => [...checkRunKeys.details(), runId] as const,
 };
+
+export type SubmittalListFilter = { status: string | null };
+
+export const submittalKeys = {
+  all: ['submittals'] as const,
+  lists: () => [...submittalKeys.all, 'list'] as const,
+  list: (projectId: string, filter: SubmittalListFilter) => [...submittalKeys.lists(), projectId, filter] as const,
+  details: () => [...submittalKeys.all, 'detail'] as const,
+  detail: (submittalId: string) => [...submittalKeys.details(), submittalId] as const,
+};
+
+export const verificationKeys = {
+  all: ['sheet-verification'] as const,
+  detail: (code: string) => [...verificationKeys.all, code] as const,
+};

@@ -67,6 +67,17 @@ describe('fuzzing every route with a body', () => {
     params.id = await t.demoProjectId();
     params.orgId = (await owner.get('/api/me')).body.organisations[0].id;
     params.assemblyId = (await owner.get(`/api/projects/${params.id}/assemblies`)).body.assemblies[0].id;
+    params.setId = (
+      await owner.post(`/api/organisations/${params.orgId}/criteria-sets`).send({ name: 'Fuzzed code table' })
+    ).body.id;
+    params.runId = (
+      await owner.post(`/api/assemblies/${params.assemblyId}/check-runs`).send({ criteriaSetId: params.setId })
+    ).body.id;
+    params.submittalId = (
+      await owner
+        .post(`/api/projects/${params.id}/submittals`)
+        .send({ title: 'Fuzzed submittal', specSection: '07 42 13', specTitle: 'Metal Wall Panels' })
+    ).body.id;
   });
   afterAll(async () => {
     console.log(`fuzz: ${totalCases} HTTP cases run`);

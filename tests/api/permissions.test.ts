@@ -18,7 +18,24 @@ const PROJECT_ROLES = [
 ] as const;
 type Role = (typeof PROJECT_ROLES)[number];
 const ALL: Role[] = [...PROJECT_ROLES];
-type Expectation = 'public' | 'user' | 'siteAdmin' | 'firmMember' | 'firmAdmin' | Role[];
+/** The submitting side of submittals, and the reviewing side (reviewers must also be named on the submittal). */
+const SUBMITTING: Role[] = ['owner', 'subcontractor'];
+const REVIEWING: Role[] = ['architect', 'envelope_consultant', 'engineer'];
+/**
+ * `criteriaRead` / `criteriaWrite` / `criteriaAdmin`: the firm's code tables (see server/http/route.ts):
+ * read = firm members and members of the firm's projects; write = firm members and project members whose
+ * role allows `criteria.write`; admin = firm administrators. Everyone else gets 404.
+ */
+type Expectation =
+  | 'public'
+  | 'user'
+  | 'siteAdmin'
+  | 'firmMember'
+  | 'firmAdmin'
+  | 'criteriaRead'
+  | 'criteriaWrite'
+  | 'criteriaAdmin'
+  | Role[];
 const EXPECTED: Record<string, Expectation> = {
   'GET /health': 'public',
   'GET /me': 'user',
@@ -58,11 +75,47 @@ const EXPECTED: Record<string, Expectation> = {
   'POST /v1/calc/joints': 'public',
   'POST /v1/calc/takeoff': 'public',
   'GET /reference/materials': 'public',
+  'GET /organisations/:orgId/criteria-sets': 'criteriaRead',
+  'POST /organisations/:orgId/criteria-sets': 'criteriaWrite',
+  'GET /criteria-sets/:setId': 'criteriaRead',
+  'PUT /criteria-sets/:setId': 'criteriaWrite',
+  'DELETE /criteria-sets/:setId': 'criteriaAdmin',
+  'PUT /criteria-sets/:setId/rows': 'criteriaWrite',
+  'POST /criteria-sets/:setId/import': 'criteriaWrite',
+  'GET /criteria-sets/:setId/export.csv': 'criteriaRead',
+  'GET /criteria-sets/:setId/versions': 'criteriaRead',
+  'GET /criteria-sets/:setId/diff': 'criteriaRead',
+  'GET /projects/:id/criteria-sets': ALL,
+  'POST /assemblies/:assemblyId/check-runs': [
+    'owner',
+    'architect',
+    'envelope_consultant',
+    'engineer',
+    'subcontractor',
+  ],
+  'GET /projects/:id/check-runs': ALL,
+  'GET /check-runs/:runId': ALL,
+  'GET /check-runs/:runId/sheet.pdf': ALL,
+  'GET /verify/:code': 'public',
+  'GET /projects/:id/submittals': ALL,
+  'POST /projects/:id/submittals': SUBMITTING,
+  'GET /submittals/:submittalId': ALL,
+  'PUT /submittals/:submittalId': SUBMITTING,
+  'POST /submittals/:submittalId/sheets': SUBMITTING,
+  'POST /submittals/:submittalId/files': SUBMITTING,
+  'DELETE /submittals/:submittalId/items/:submittalItemId': SUBMITTING,
+  'GET /submittals/:submittalId/items/:submittalItemId/file': ALL,
+  'POST /submittals/:submittalId/submit': SUBMITTING,
+  'POST /submittals/:submittalId/review': REVIEWING,
+  'POST /submittals/:submittalId/decision': REVIEWING,
+  'POST /submittals/:submittalId/comments': ['owner', 'architect', 'envelope_consultant', 'engineer', 'subcontractor'],
 };
 
 /** The firm whose libraries the matrix exercises (Larchmere: owner is its admin; architect and viewer are members). */
 const FIRM_ADMINS: string[] = ['owner'];
 const FIRM_MEMBERS: string[] = ['owner', 'architect', 'viewer'];
+/** Outside the firm but on its demo project with a role that allows `criteria.write`. */
+const CRITERIA_WRITERS: string[] = [...FIRM_MEMBERS, 'envelope_consultant'];
 
 /** Demo account per project role; `owner` is also the site administrator. */
 const emailOf: Record<Role | 'outsider', string> = {
@@ -76,10 +129,12 @@ const emailOf: Record<Role | 'outsider', string> = {
 };
 
 /** Bodies for routes that document no example. */
-const BODIES: Record<string, () => unknown> = {
+const BODIES: Record<string, (params: Record<string, string>) => unknown> = {
   'PUT /me/preferences': () => ({ unitSystem: 'SI' }),
   'POST /organisations': () => ({ name: `Firm ${Math.random().toString(36).slice(2)}` }),
   'PUT /projects/:id/members/:memberId': () => ({ role: 'viewer' }),
+  'POST /assemblies/:assemblyId/check-runs': (p) => ({ criteriaSetId: p.setId }),
+  'POST /submittals/:submittalId/sheets': (p) => ({ checkRunId: p.runId }),
 };
 
 const key = (r: { method: string; path: string }) => `${r.method.toUpperCase()} ${r.path}`;
@@ -131,11 +186,40 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
         .post(`/api/organisations/${params.orgId}/materials`)
         .send(example('POST /organisations/:orgId/materials'))
     ).body.id;
+    params.setId = (
+      await owner
+        .post(`/api/organisations/${params.orgId}/criteria-sets`)
+        .send(example('POST /organisations/:orgId/criteria-sets'))
+    ).body.id;
+    params.runId = (
+      await owner
+        .post(`/api/assemblies/${params.assemblyId}/check-runs`)
+        .send({ criteriaSetId: params.setId })
+    ).body.id;
     params.bridgeId = (
       await owner
         .post(`/api/organisations/${params.orgId}/bridge-values`)
         .send(example('POST /organisations/:orgId/bridge-values'))
     ).body.id;
+    // A submittal naming every reviewing role (only named reviewers review), with a sheet and a file.
+    const people = (await owner.get(`/api/projects/${params.id}/members`)).body.members as {
+      userId: string;
+      role: string;
+    }[];
+    params.submittalId = (
+      await owner.post(`/api/projects/${params.id}/submittals`).send({
+        ...example('POST /projects/:id/submittals'),
+        reviewerIds: people.filter((m) => (REVIEWING as string[]).includes(m.role)).map((m) => m.userId),
+      })
+    ).body.id;
+    // Attaching the run's sheet issues its verification code.
+    const attached = await owner.post(`/api/submittals/${params.submittalId}/sheets`).send({ checkRunId: params.runId });
+    params.code = attached.body.items[0].sheet.verificationCode;
+    params.submittalItemId = (
+      await owner
+        .post(`/api/submittals/${params.submittalId}/files`)
+        .attach('files', Buffer.from('%PDF-1.4\n%%EOF\n'), 'specification.pdf')
+    ).body.items[0].id;
   });
   afterAll(async () => {
     await t?.close();
@@ -149,7 +233,7 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
     const expected = EXPECTED[key(route)]!;
     const itemId = route.path.includes('/materials/') ? params.materialId : params.bridgeId;
     const path = `/api${route.path.replace(/:(\w+)/g, (_m, p: string) => (p === 'itemId' ? itemId : params[p])!)}`;
-    const body = BODIES[key(route)]?.() ?? route.example ?? {};
+    const body = BODIES[key(route)]?.(params) ?? route.example ?? {};
     const call = async (agent: { [m: string]: (p: string) => request.Test } | null) => {
       const req = (agent ?? (t.anonymous() as unknown as { [m: string]: (p: string) => request.Test }))[
         route.method
@@ -169,10 +253,13 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
       if (expected === 'siteAdmin') return c === 'owner';
       if (expected === 'firmMember') return FIRM_MEMBERS.includes(c);
       if (expected === 'firmAdmin') return FIRM_ADMINS.includes(c);
+      if (expected === 'criteriaRead') return c !== 'outsider';
+      if (expected === 'criteriaWrite') return CRITERIA_WRITERS.includes(c);
+      if (expected === 'criteriaAdmin') return FIRM_ADMINS.includes(c);
       return c !== 'outsider' && expected.includes(c);
     };
     const hiddenFrom = (c: (typeof callers)[number]) =>
-      (Array.isArray(expected) && c === 'outsider') ||
+      ((Array.isArray(expected) || expected.startsWith('criteria')) && c === 'outsider') ||
       ((expected === 'firmMember' || expected === 'firmAdmin') && !FIRM_MEMBERS.includes(c));
     for (const caller of [...callers].sort((a, b) => Number(isAllowed(a)) - Number(isAllowed(b)))) {
       const status = await call((await t.as(emailOf[caller])) as never);

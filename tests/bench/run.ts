@@ -1,5 +1,6 @@
 // `npm run bench`: prints the speed figures of the calculation engine (not a pass/fail test).
 import { benchMoisture } from './moisture.bench';
+import { benchSheet } from './sheet.bench';
 import { benchThermal } from './thermal.bench';
 import { benchWind } from './wind.bench';
 
@@ -13,6 +14,8 @@ const benches: [() => BenchResult, number][] = [
   [benchThermal, 20],
   [benchMoisture, 50],
   [benchWind, 50],
+  // The compliance sheet: 250 ms.
+  [benchSheet, 250_000],
 ];
 
 console.log(`Skinwright benchmarks — Node ${process.version}, ${new Date().toISOString()}`);

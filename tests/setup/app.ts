@@ -8,6 +8,8 @@ import { openDatabase } from '../../server/db/client';
 import { demoScenario, seedDemo } from '../../server/db/seed';
 import { startMailCapture } from '../../server/mail/capture';
 import { createSmtpMailer } from '../../server/mail/mailer';
+import { startLocalS3 } from '../../server/storage/local-s3';
+import { createS3Store } from '../../server/storage/object-store';
 
 export type DatabaseKind = 'pglite' | 'postgres';
 
@@ -52,7 +54,10 @@ export async function createTestApp(kind: DatabaseKind = 'pglite', opts: { authR
   const database = await openDatabase(config);
   const capture = await startMailCapture(database.db);
   const mailer = createSmtpMailer(capture.url, config.mailFrom);
-  const { app, auth, services } = createApp({ database, config, mailer });
+  // The local fake S3 server in a temporary folder, removed on close (like the mail capture).
+  const s3 = await startLocalS3();
+  const storage = createS3Store(s3.target);
+  const { app, auth, services } = createApp({ database, config, mailer, storage });
   await seedDemo(database.db, auth);
 
   const agents = new Map<string, ReturnType<typeof request.agent>>();
@@ -78,8 +83,12 @@ export async function createTestApp(kind: DatabaseKind = 'pglite', opts: { authR
     demoProjectId,
     anonymous: () => request(app),
     mail: () => services.me.capturedMail(),
+    /** Object storage of uploads and the folder the local fake keeps it in. */
+    storage,
+    storageDir: s3.directory,
     async close() {
       await capture.close();
+      await s3.close();
       await database.close();
       await dropDatabase();
     },

@@ -323,3 +323,128 @@ export const checkRuns = pgTable(
     index('check_runs_assembly_idx').on(t.assemblyId),
   ],
 );
+
+/**
+ * A compliance sheet's verification code (shared/sheets/verification.ts: the first 10 base32 characters of
+ * the run's SHA-256 hash), recorded when a sheet is first issued (rendered or attached to a submittal),
+ * with the issuing firm as it was named then. The hash covers the run's content, not its time, so runs of
+ * identical inputs share a code: the row keeps the first run issued with it. The public /verify page looks
+ * codes up here (primary key).
+ */
+export const sheetVerifications = pgTable(
+  'sheet_verifications',
+  {
+    code: text('code').primaryKey(),
+    runId: uuid('run_id')
+      .notNull()
+      .references(() => checkRuns.id, { onDelete: 'cascade' }),
+    issuerOrganisationId: uuid('issuer_organisation_id').references(() => organisations.id, {
+      onDelete: 'set null',
+    }),
+    issuerName: text('issuer_name').notNull(),
+    issuedAt: timestamp('issued_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('sheet_verifications_run').on(t.runId)],
+);
+
+/**
+ * One revision of a submittal. Revisions of one submittal share `lineageId` (the id of revision 1) and its
+ * number; "revise and resubmit" closes a revision and opens `revision + 1` (`previousRevisionId`). A
+ * decided revision never changes again. `version` counts edits (optimistic concurrency).
+ */
+export const submittals = pgTable(
+  'submittals',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    lineageId: uuid('lineage_id').notNull(),
+    previousRevisionId: uuid('previous_revision_id').references((): AnyPgColumn => submittals.id),
+    revision: integer('revision').notNull().default(1),
+    number: text('number').notNull(),
+    title: text('title').notNull(),
+    description: text('description').notNull().default(''),
+    /** CSI MasterFormat section number and title, e.g. `07 42 13` "Metal Wall Panels". */
+    specSection: text('spec_section').notNull(),
+    specTitle: text('spec_title').notNull(),
+    dueDate: date('due_date', { mode: 'string' }),
+    /** draft | submitted | under_review | approved | approved_as_noted | revise_and_resubmit | rejected */
+    status: text('status').notNull().default('draft'),
+    /** The person on the submitting side (creator of revision 1; carried to later revisions). */
+    submitterId: text('submitter_id').references(() => user.id),
+    submittedAt: timestamp('submitted_at', { withTimezone: true }),
+    submittedBy: text('submitted_by').references(() => user.id),
+    decision: text('decision'),
+    decisionNote: text('decision_note'),
+    decidedAt: timestamp('decided_at', { withTimezone: true }),
+    decidedBy: text('decided_by').references(() => user.id),
+    version: integer('version').notNull().default(1),
+    createdBy: text('created_by').references(() => user.id),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    index('submittals_project_idx').on(t.projectId, t.status),
+    uniqueIndex('submittals_lineage_revision').on(t.lineageId, t.revision),
+    uniqueIndex('submittals_project_number_revision').on(t.projectId, t.number, t.revision),
+  ],
+);
+
+/** Reviewers named on a submittal revision (project members whose role allows reviewing). */
+export const submittalReviewers = pgTable(
+  'submittal_reviewers',
+  {
+    submittalId: uuid('submittal_id')
+      .notNull()
+      .references(() => submittals.id, { onDelete: 'cascade' }),
+    userId: text('user_id')
+      .notNull()
+      .references(() => user.id, { onDelete: 'cascade' }),
+  },
+  (t) => [primaryKey({ columns: [t.submittalId, t.userId] })],
+);
+
+/**
+ * An item of a submittal revision: a compliance sheet (a stored check run) or an uploaded file. A file's
+ * bytes live in object storage under `storageKey` (a uuid path of ours); its display name is sanitised and
+ * its content type detected from the bytes. Revisions opened by "revise and resubmit" start with copies of
+ * the items, which point at the same stored objects (never changed, so they can be shared).
+ */
+export const submittalItems = pgTable(
+  'submittal_items',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    submittalId: uuid('submittal_id')
+      .notNull()
+      .references(() => submittals.id, { onDelete: 'cascade' }),
+    position: integer('position').notNull(),
+    /** sheet | file */
+    kind: text('kind').notNull(),
+    checkRunId: uuid('check_run_id').references(() => checkRuns.id, { onDelete: 'cascade' }),
+    storageKey: text('storage_key'),
+    fileName: text('file_name'),
+    contentType: text('content_type'),
+    size: integer('size'),
+    sha256: text('sha256'),
+    addedBy: text('added_by').references(() => user.id),
+    createdAt: createdAt(),
+  },
+  (t) => [index('submittal_items_submittal_idx').on(t.submittalId, t.position)],
+);
+
+/** Review comments on a submittal revision or on one of its items. */
+export const submittalComments = pgTable(
+  'submittal_comments',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    submittalId: uuid('submittal_id')
+      .notNull()
+      .references(() => submittals.id, { onDelete: 'cascade' }),
+    itemId: uuid('item_id').references(() => submittalItems.id, { onDelete: 'cascade' }),
+    authorId: text('author_id').references(() => user.id),
+    body: text('body').notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index('submittal_comments_submittal_idx').on(t.submittalId, t.createdAt)],
+);

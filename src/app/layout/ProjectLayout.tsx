@@ -31,6 +31,9 @@ export function ProjectLayout() {
         <NavLink to={`/projects/${p.id}/assemblies`} className={tabClass}>
           Assemblies
         </NavLink>
+        <NavLink to={`/projects/${p.id}/submittals`} className={tabClass}>
+          Submittals
+        </NavLink>
         <NavLink to={`/projects/${p.id}/climate`} className={tabClass}>
           Climate
         </NavLink>

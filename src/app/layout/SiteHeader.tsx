@@ -29,6 +29,9 @@ export function SiteHeader() {
             <NavLink to="/library" className={navClass}>
               Library
             </NavLink>
+            <NavLink to="/code-tables" className={navClass}>
+              Code tables
+            </NavLink>
             {user.siteRole === 'admin' ? (
               <NavLink to="/admin/mail" className={navClass}>
                 Outbox

@@ -1,0 +1,196 @@
+import type { TraceStep } from '@shared/calc/trace';
+import { drawAccumulationChart, drawProfileChart, drawSpacingChart } from './charts';
+import { type Formatter, MONTHS, num } from './format';
+import { INK, type SheetWriter } from './layout';
+import { moduleOutcome, moduleResult, type SheetData } from './sheet-data';
+
+/*
+ * The results of every module as the run stored them, each with the formulas that govern its figures
+ * (from the trace: label, formula, source). A module that could not run says why.
+ */
+
+const METHOD_NAMES: Record<string, string> = {
+  parallelPath: 'ASHRAE parallel path',
+  isothermalPlanes: 'ASHRAE isothermal planes',
+  isoCombined: 'ISO 6946 combined method',
+  zone: 'ASHRAE zone method',
+};
+
+function notRun(w: SheetWriter, data: SheetData, id: string): boolean {
+  const m = moduleOutcome(data.run, id);
+  if (!m || m.status === 'ran') return false;
+  w.paragraph(
+    m.status === 'missing'
+      ? `Not run — missing: ${m.missing.join('; ')}. Every criterion that reads this module is reported “not evaluated”.`
+      : `Not run — the calculation refused the input: ${m.error ?? 'unknown reason'}.`,
+    { size: 8, color: INK.warning },
+  );
+  return true;
+}
+
+/** The governing formulas of a module: the trace steps the checks and metrics refer to. */
+function formulas(w: SheetWriter, steps: TraceStep[], fmt: Formatter): void {
+  if (steps.length === 0) return;
+  w.caption('Governing formulas');
+  w.table(
+    [
+      { header: 'Figure', width: 50 },
+      { header: 'Formula', width: 52 },
+      { header: 'Source' },
+      { header: 'Value', width: 24, align: 'right' },
+    ],
+    steps.map((s) => [
+      s.label,
+      { text: s.formula, font: 'serif' as const },
+      s.source,
+      fmt.siValue(s.value, s.unit),
+    ]),
+    { size: 6.9 },
+  );
+}
+
+const stepsOf = (data: SheetData, prefix: string) =>
+  data.run.outputs.steps.filter((s) => s.id.startsWith(prefix));
+
+function thermal(w: SheetWriter, data: SheetData, fmt: Formatter): void {
+  w.heading('3.1', 'Thermal: effective R-value and U-factor', 40);
+  const r = moduleResult(data.run, 'thermal');
+  if (notRun(w, data, 'thermal') || !r) return;
+  w.fields(
+    [
+      ['Clear field R₀ · U₀', `${fmt.rValue(r.R0)} · ${fmt.uValue(r.U0)}`],
+      ['Effective R_eff · U_eff', `${fmt.rValue(r.Reff)} · ${fmt.uValue(r.Ueff)}`],
+      [
+        'Method used',
+        `${METHOD_NAMES[r.defaultMethod] ?? r.defaultMethod} (spread of the offered methods ${num(r.methodSpread * 100, 1)} %)`,
+      ],
+      ['Surface resistances', `R_si ${fmt.rValue(r.Rsi)} · R_se ${fmt.rValue(r.Rse)}`],
+    ],
+    2,
+  );
+  if (r.bridges.length > 0) {
+    w.caption('What the heat loss goes through');
+    w.table(
+      [
+        { header: 'Path' },
+        { header: 'Kind', width: 24 },
+        { header: 'ΔU', width: 36, align: 'right' },
+        { header: 'Share of U_eff', width: 26, align: 'right' },
+      ],
+      [
+        ['Clear field', '—', fmt.uValue(r.U0), `${num(r.clearFieldShare * 100, 1)} %`],
+        ...r.bridges.map((b) => [b.name, b.kind, fmt.uValue(b.deltaU), `${num(b.share * 100, 1)} %`]),
+      ],
+      { size: 7.2 },
+    );
+  }
+  formulas(w, stepsOf(data, 'thermal.'), fmt);
+}
+
+function moisture(w: SheetWriter, data: SheetData, fmt: Formatter): void {
+  w.heading('3.2', 'Moisture: condensation and surface humidity', 60);
+  const r = moduleResult(data.run, 'moisture');
+  if (notRun(w, data, 'moisture') || !r) return;
+  const s = r.surface;
+  w.fields(
+    [
+      ['Result', r.verdict],
+      [
+        'Interstitial condensation',
+        r.interstitial.condensationOccurs
+          ? `yes — largest ${fmt.accumulation(r.interstitial.maxAccumulation)}${r.interstitial.maxAccumulationMonth ? ` (${MONTHS[r.interstitial.maxAccumulationMonth - 1]})` : ''}; ${r.interstitial.driesOut ? 'dries out within the year' : 'does not dry out within the year'}`
+          : 'none in any month',
+      ],
+      [
+        'Surface (mould) check',
+        `f_Rsi ${num(s.fRsi, 3)} ${s.fRsiMax === null ? '(no month colder outside than in)' : `${s.pass ? '≥' : '<'} f_Rsi,max ${num(s.fRsiMax, 3)}${s.criticalMonth ? ` (${MONTHS[s.criticalMonth - 1]})` : ''}`}`,
+      ],
+      [
+        'Balance',
+        `starts in ${MONTHS[r.startMonth - 1]}; safety factor on Δp ${num(r.safetyFactor, 2)}; s_d,T ${num(r.totalSd, 2)} m`,
+      ],
+    ],
+    2,
+  );
+  drawProfileChart(w, data, r, fmt);
+  drawAccumulationChart(w, data, r, fmt);
+  formulas(w, stepsOf(data, 'moisture.'), fmt);
+}
+
+function wind(w: SheetWriter, data: SheetData, fmt: Formatter): void {
+  w.heading('3.3', 'Wind: girt and clip spacing per zone', 50);
+  const r = moduleResult(data.run, 'wind');
+  if (notRun(w, data, 'wind') || !r) return;
+  w.fields(
+    [
+      ['Velocity pressure', `q_h ${fmt.pressure(r.velocity.qh)} (${r.velocity.equation})`],
+      ['Figure', `${r.figure}; end-zone width a = ${fmt.length(r.edgeWidth)}`],
+    ],
+    2,
+  );
+  w.table(
+    [
+      { header: 'Zone', width: 56 },
+      { header: 'Table', width: 18 },
+      { header: 'Governs', width: 20 },
+      { header: 'Max girt spacing', align: 'right' },
+      { header: 'Max clip spacing', align: 'right' },
+      { header: 'ASD suction', align: 'right' },
+    ],
+    r.zones.map((z) => [
+      z.name,
+      z.status === 'ok' ? 'in table' : z.status === 'table-end' ? 'table end' : 'outside',
+      z.governingCheck ?? '—',
+      z.girtSpacing === null ? '—' : fmt.length(z.girtSpacing),
+      z.clip ? fmt.length(z.clip.maxSpacing) : '—',
+      z.pressures ? fmt.pressure(Math.abs(z.pressures.asd.outward)) : '—',
+    ]),
+    { size: 7.2 },
+  );
+  drawSpacingChart(w, data, r, fmt);
+  formulas(w, stepsOf(data, 'wind.'), fmt);
+}
+
+function joints(w: SheetWriter, data: SheetData, fmt: Formatter): void {
+  w.heading('3.4', 'Sealant joints', 40);
+  const r = moduleResult(data.run, 'joints');
+  if (notRun(w, data, 'joints') || !r) return;
+  w.table(
+    [
+      { header: 'Joint', width: 58 },
+      { header: 'Movement ext. / comp.', align: 'right' },
+      { header: 'Required width', align: 'right' },
+      { header: 'Design width', align: 'right' },
+      { header: 'Governs', width: 20 },
+      { header: 'Result', width: 34 },
+    ],
+    r.joints.map((j) => [
+      j.name,
+      `${fmt.length(j.movementExtension)} / ${fmt.length(j.movementCompression)}`,
+      fmt.length(j.requiredWidth),
+      fmt.length(j.designWidth),
+      j.governing,
+      {
+        text:
+          j.verdict === 'pass'
+            ? `meets — margin ${fmt.percent(j.margin)}`
+            : `fails — short by ${fmt.length(j.requiredWidth - j.designWidth)}`,
+        glyph: j.verdict === 'pass' ? ('pass' as const) : ('fail' as const),
+      },
+    ]),
+    { size: 7.2 },
+  );
+  formulas(w, stepsOf(data, 'joints.'), fmt);
+}
+
+export function drawResults(w: SheetWriter, data: SheetData, fmt: Formatter): void {
+  w.heading('3', 'Results of every module', 80);
+  w.paragraph(
+    'As stored with the run: figures are the engine’s own, converted to the units of this sheet only for printing.',
+    { size: 7.6, color: INK.muted },
+  );
+  thermal(w, data, fmt);
+  moisture(w, data, fmt);
+  wind(w, data, fmt);
+  joints(w, data, fmt);
+}

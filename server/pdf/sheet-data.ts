@@ -1,0 +1,47 @@
+import type { JointScheduleResult } from '@shared/calc/joints/schema';
+import type { MoistureResult } from '@shared/calc/moisture/schema';
+import type { ThermalResult } from '@shared/calc/thermal/schema';
+import type { TraceStep } from '@shared/calc/trace';
+import type { WindScheduleResult } from '@shared/calc/wind/schema';
+import type { ModuleOutcome } from '@shared/checks/report';
+import type { CheckRun } from '@shared/schemas/check-runs';
+import type { UnitSystem } from '@shared/units';
+
+/** Everything one sheet prints: the stored run as it is, plus who issued it and how to verify it. */
+export interface SheetData {
+  run: CheckRun;
+  /** Labels of the project that the run's snapshot does not carry. */
+  project: { number: string; siteAddress: string };
+  preparedBy: string | null;
+  /** The issuing firm. */
+  issuer: string;
+  /** Verification code (10 base32 characters) and the public address that confirms it. */
+  code: string;
+  verifyUrl: string;
+  units: UnitSystem;
+}
+
+/** The result a module stored in the run, typed by its id; null when the module did not run. */
+export function moduleResult(run: CheckRun, id: 'thermal'): ThermalResult | null;
+export function moduleResult(run: CheckRun, id: 'moisture'): MoistureResult | null;
+export function moduleResult(run: CheckRun, id: 'wind'): WindScheduleResult | null;
+export function moduleResult(run: CheckRun, id: 'joints'): JointScheduleResult | null;
+export function moduleResult(run: CheckRun, id: string): unknown {
+  const m = run.outputs.modules.find((x) => x.id === id);
+  return m && m.status === 'ran' ? m.result : null;
+}
+
+export const moduleOutcome = (run: CheckRun, id: string): ModuleOutcome | undefined =>
+  run.outputs.modules.find((x) => x.id === id);
+
+/** A trace step of the run by id (report steps first, then the module's own trace). */
+export function stepOf(run: CheckRun, id: string): TraceStep | undefined {
+  const inReport = run.outputs.steps.find((s) => s.id === id);
+  if (inReport) return inReport;
+  for (const m of run.outputs.modules) {
+    const trace = (m.result as { trace?: TraceStep[] } | null)?.trace;
+    const found = trace?.find((s) => s.id === id);
+    if (found) return found;
+  }
+  return undefined;
+}

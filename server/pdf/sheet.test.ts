@@ -1,0 +1,85 @@
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { jsPDF } from 'jspdf';
+import { describe, expect, it } from 'vitest';
+import { niceTicks, nodePositions } from './charts';
+import { formatter } from './format';
+import { spread } from './section-sketch';
+
+/** jsPDF's own parser, kept before server/pdf/fonts.ts replaces it with the caching one. */
+type Open = (file: Uint8Array) => { directory: object };
+const TTF = (jsPDF as unknown as { API: { TTFFont: { open: Open } } }).API.TTFFont;
+const originalOpen = TTF.open;
+const sample = createRequire(import.meta.url).resolve(
+  '@expo-google-fonts/public-sans/400Regular/PublicSans_400Regular.ttf',
+);
+const directoryProto = Object.getPrototypeOf(
+  originalOpen.call(TTF, new Uint8Array(readFileSync(sample))).directory,
+);
+const originalEncode = directoryProto.encode;
+
+describe('the compliance sheet renderer', () => {
+  it('gives the same bytes every time, and the same bytes as jsPDF without its speed-ups', async () => {
+    const { renderComplianceSheet } = await import('./sheet');
+    const { demoSheetData } = await import('./fixtures');
+    const data = demoSheetData('SI');
+    const first = renderComplianceSheet(data);
+    renderComplianceSheet(demoSheetData('IP'));
+    expect(Buffer.compare(renderComplianceSheet(data), first)).toBe(0);
+    const cachedOpen = TTF.open;
+    const fastEncode = directoryProto.encode;
+    try {
+      TTF.open = originalOpen;
+      directoryProto.encode = originalEncode;
+      expect(Buffer.compare(renderComplianceSheet(data), first)).toBe(0);
+    } finally {
+      TTF.open = cachedOpen;
+      directoryProto.encode = fastEncode;
+    }
+    expect(first.length).toBeLessThan(500 * 1024);
+  });
+
+  it('keeps every character as selectable text: none is dropped for want of a glyph', async () => {
+    const { renderComplianceSheet } = await import('./sheet');
+    const { demoSheetData } = await import('./fixtures');
+    const { readPdf } = await import('../../tests/setup/pdf');
+    const { text } = await readPdf(renderComplianceSheet(demoSheetData('SI')));
+    // Outside Latin-1 (a face without the glyph used to drop them silently), and from the serif fallback.
+    for (const ch of ['—', '’', '–', '≤', '≥', '−', 'θ', 'χ', 'ψ', 'λ', 'Σ', 'Δ', '²', '·', '°', '₀', '×'])
+      expect(text, ch).toContain(ch);
+    expect(text).toContain('aid to — never a substitute for — the licensed professional of record');
+  });
+});
+
+describe('sheet helpers', () => {
+  it('spreads labels at least a gap apart, inside the bounds', () => {
+    expect(spread([10, 10.5, 11, 40], 3, 0, 100)).toEqual([10, 13, 16, 40]);
+    expect(spread([95, 96, 97], 3, 0, 97)).toEqual([91, 94, 97]);
+  });
+
+  it('picks round axis ticks', () => {
+    expect(niceTicks(0, 1.75, 5)).toEqual([0, 0.5, 1, 1.5, 2]);
+    expect(niceTicks(-12.3, 18.2, 6)).toEqual([-20, -10, 0, 10, 20]);
+    expect(niceTicks(-12.3, 18.2, 7)).toEqual([-15, -10, -5, 0, 5, 10, 15, 20]);
+  });
+
+  it('places moisture nodes through the wall in proportion to resistance within a layer', () => {
+    const nodes = [
+      { kind: 'exteriorSurface', label: '', outerLayer: null, innerLayer: 1, resistance: 0.04, sd: 0 },
+      { kind: 'withinLayer', label: '', outerLayer: 1, innerLayer: 1, resistance: 1.04, sd: 0 },
+      { kind: 'interface', label: '', outerLayer: 1, innerLayer: 2, resistance: 2.04, sd: 0 },
+      { kind: 'interiorSurface', label: '', outerLayer: 2, innerLayer: null, resistance: 2.2, sd: 0 },
+    ] as const;
+    expect(nodePositions([...nodes], [0.01, 0.1, 0.02])).toEqual([0.01, 0.060000000000000005, 0.11, 0.13]);
+  });
+
+  it('formats in SI or IP with a true minus sign', () => {
+    const si = formatter('SI');
+    const ip = formatter('IP');
+    expect(si.temperature(-19)).toBe('\u221219\u202f°C');
+    expect(ip.temperature(-19)).toBe('\u22122.2\u202f°F');
+    expect(si.thickness(0.1)).toBe('100\u202fmm');
+    expect(ip.rValue(3.26)).toBe('18.5\u202fh·ft²·°F/Btu');
+    expect(si.siValue(180, 'L/x')).toBe('L/180');
+  });
+});

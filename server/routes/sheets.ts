@@ -1,0 +1,69 @@
+import { apiErrorSchema } from '@shared/schemas/common';
+import { sheetQuerySchema, sheetVerificationSchema, verifyParamsSchema } from '@shared/schemas/sheets';
+import { z } from 'zod';
+import { defineRoute } from '../http/route';
+import type { Services } from '../services';
+
+type Ctx = { params: Record<string, string>; services: Services };
+const viaRun = {
+  projectId: ({ params, services }: Ctx) =>
+    z.uuid().safeParse(params.runId).success
+      ? services.checkRuns.projectOf(params.runId!)
+      : Promise.resolve(null),
+};
+
+export const sheetRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/check-runs/:runId/sheet.pdf',
+    summary:
+      'The compliance sheet of a stored check run (PDF: title block, inputs, section to scale, results, charts, checks, cautions, verification code)',
+    tag: 'Compliance sheets',
+    access: { kind: 'project', action: 'assembly.read', ...viaRun },
+    params: z.object({ runId: z.uuid() }),
+    query: sheetQuerySchema,
+    responses: {
+      200: {
+        description: 'The sheet',
+        contentType: 'application/pdf',
+        schema: z.string().describe('PDF bytes'),
+      },
+      400: { description: 'Invalid query', schema: apiErrorSchema },
+      401: { description: 'Not signed in', schema: apiErrorSchema },
+      403: { description: 'Your role does not allow this', schema: apiErrorSchema },
+      404: { description: 'No such run, or you are not a member of its project', schema: apiErrorSchema },
+    },
+    handler: async ({ params, query, user, res, services }) => {
+      const { pdf, filename, code } = await services.sheets.render(params.runId, user!.id, query.units);
+      res
+        .status(200)
+        .type('application/pdf')
+        .set({
+          'Content-Disposition': `${query.disposition}; filename="${filename}"`,
+          'Cache-Control': 'private, no-cache',
+          'X-Verification-Code': code,
+          // The browser's PDF viewer may show it in a frame of our own pages.
+          'Content-Security-Policy': "default-src 'none'; style-src 'unsafe-inline'; frame-ancestors 'self'",
+        })
+        .send(pdf);
+      return undefined;
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/verify/:code',
+    summary:
+      'Confirm a compliance sheet by its verification code (no sign-in): issuer, project, assembly, date, verdict',
+    tag: 'Compliance sheets',
+    access: { kind: 'public' },
+    params: verifyParamsSchema,
+    responses: {
+      200: { description: 'The sheet is genuine: what it states', schema: sheetVerificationSchema },
+      404: { description: 'No such sheet (unknown, mistyped or altered code)', schema: apiErrorSchema },
+    },
+    handler: ({ params, res, services }) => {
+      res.set('Cache-Control', 'no-store');
+      return services.sheets.verify(params.code);
+    },
+  }),
+];

@@ -1,0 +1,278 @@
+import { apiErrorSchema, uuidParam, versionConflictSchema } from '@shared/schemas/common';
+import {
+  attachSheetSchema,
+  commentCreateSchema,
+  submittalCreateSchema,
+  submittalDecisionInputSchema,
+  submittalListQuerySchema,
+  submittalListSchema,
+  submittalSchema,
+  submittalStepSchema,
+  submittalUpdateSchema,
+  UPLOAD_LIMITS,
+  uploadResultSchema,
+} from '@shared/schemas/submittals';
+import { z } from 'zod';
+import { defineRoute } from '../http/route';
+import { readUpload } from '../http/upload';
+import type { Services } from '../services';
+
+const errors = {
+  400: { description: 'Invalid fields', schema: apiErrorSchema },
+  401: { description: 'Not signed in', schema: apiErrorSchema },
+  403: {
+    description: 'Your role (or not being a named reviewer) does not allow this',
+    schema: apiErrorSchema,
+  },
+  404: { description: 'No such project, submittal or item, or you are not a member', schema: apiErrorSchema },
+};
+const stateErrors = {
+  409: {
+    description:
+      'Archived project, a status that does not allow this step (a decided revision is read-only), or a stale version (`current` is the submittal as it is now)',
+    schema: versionConflictSchema(submittalSchema),
+  },
+};
+
+type Ctx = { params: Record<string, string>; services: Services };
+const viaSubmittal = {
+  projectId: ({ params, services }: Ctx) =>
+    z.uuid().safeParse(params.submittalId).success
+      ? services.submittals.projectOf(params.submittalId!)
+      : Promise.resolve(null),
+};
+const submittalParams = z.object({ submittalId: z.uuid() });
+const itemParams = submittalParams.extend({ submittalItemId: z.uuid() });
+const actor = (u: { id: string; name: string } | null) => ({ id: u!.id, name: u!.name });
+
+const exampleFields = {
+  title: 'Insulated metal wall panels — product data and compliance sheet',
+  description: '',
+  specSection: '07 42 13',
+  specTitle: 'Metal Wall Panels',
+  dueDate: '2027-01-15',
+  reviewerIds: [],
+};
+
+export const submittalRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/projects/:id/submittals',
+    summary: 'Submittals of a project, latest revision of each (`?status=` to filter)',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.read' },
+    params: uuidParam,
+    query: submittalListQuerySchema,
+    responses: { 200: { description: 'Submittals', schema: submittalListSchema }, ...errors },
+    handler: async ({ project, query, services }) => ({
+      submittals: await services.submittals.list(project!.id, query.status),
+    }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/projects/:id/submittals',
+    summary: 'Start a submittal (revision 1, draft); the number defaults to "<section>-<next>"',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.create' },
+    params: uuidParam,
+    body: submittalCreateSchema,
+    example: exampleFields,
+    responses: {
+      201: { description: 'The new draft', schema: submittalSchema },
+      ...errors,
+      409: { description: 'Archived project or number already used', schema: apiErrorSchema },
+      422: {
+        description: 'A reviewer is not a project member who reviews submittals',
+        schema: apiErrorSchema,
+      },
+    },
+    handler: ({ project, user, body, services }) =>
+      services.submittals.create(project!.id, actor(user), body),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/submittals/:submittalId',
+    summary: 'One submittal revision: items, reviewers, comments, decision and the revision chain',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.read', ...viaSubmittal },
+    params: submittalParams,
+    responses: { 200: { description: 'The submittal', schema: submittalSchema }, ...errors },
+    handler: ({ params, services }) => services.submittals.get(params.submittalId),
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/submittals/:submittalId',
+    summary: 'Edit a draft (title, section, due date, reviewers) naming the version it was based on',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.create', ...viaSubmittal },
+    params: submittalParams,
+    body: submittalUpdateSchema,
+    example: { version: 1, changes: exampleFields },
+    responses: {
+      200: { description: 'The edited draft', schema: submittalSchema },
+      ...errors,
+      ...stateErrors,
+      422: {
+        description: 'A reviewer is not a project member who reviews submittals',
+        schema: apiErrorSchema,
+      },
+    },
+    handler: ({ params, user, body, services }) =>
+      services.submittals.update(params.submittalId, actor(user), body.version, body.changes),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/submittals/:submittalId/sheets',
+    summary: 'Attach the compliance sheet of a stored check run of the same project',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.create', ...viaSubmittal },
+    params: submittalParams,
+    body: attachSheetSchema,
+    example: { checkRunId: '00000000-0000-4000-8000-000000000000' },
+    responses: {
+      201: { description: 'The submittal with the sheet', schema: submittalSchema },
+      ...errors,
+      ...stateErrors,
+    },
+    handler: ({ params, user, body, services }) =>
+      services.submittals.attachSheet(params.submittalId, actor(user), body.checkRunId),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/submittals/:submittalId/files',
+    summary: `Upload files (multipart/form-data, field "files"): PDF, PNG, JPEG or DWG by content, at most ${UPLOAD_LIMITS.maxFiles} files of ${UPLOAD_LIMITS.maxFileBytes / 1024 / 1024} MB each; all or nothing`,
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.create', ...viaSubmittal },
+    params: submittalParams,
+    responses: {
+      201: { description: 'The stored files and the submittal', schema: uploadResultSchema },
+      ...errors,
+      ...stateErrors,
+      413: { description: 'A file too large, or too many files', schema: apiErrorSchema },
+      415: {
+        description: 'Not multipart, or a file whose content is not an accepted type',
+        schema: apiErrorSchema,
+      },
+    },
+    handler: async ({ req, res, params, user, services }) => {
+      const files = await readUpload(req, res);
+      return services.submittals.upload(params.submittalId, actor(user), files);
+    },
+  }),
+  defineRoute({
+    method: 'delete',
+    path: '/submittals/:submittalId/items/:submittalItemId',
+    summary: 'Remove an item from a draft',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.create', ...viaSubmittal },
+    params: itemParams,
+    responses: {
+      200: { description: 'The submittal without the item', schema: submittalSchema },
+      ...errors,
+      ...stateErrors,
+    },
+    handler: ({ params, user, services }) =>
+      services.submittals.removeItem(params.submittalId, actor(user), params.submittalItemId),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/submittals/:submittalId/items/:submittalItemId/file',
+    summary: 'Download an uploaded file, byte for byte, with its detected type',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.read', ...viaSubmittal },
+    params: itemParams,
+    responses: {
+      200: { description: 'The file', contentType: 'application/octet-stream', schema: z.string() },
+      ...errors,
+    },
+    handler: async ({ params, res, services }) => {
+      const f = await services.submittals.file(params.submittalId, params.submittalItemId);
+      res.attachment(f.name);
+      res.status(200).set({
+        'Content-Type': f.contentType,
+        'Cache-Control': 'private, no-store',
+        // Never rendered as a page of ours, whatever it contains.
+        'Content-Security-Policy': "default-src 'none'; sandbox",
+        ...(f.size !== undefined ? { 'Content-Length': String(f.size) } : {}),
+      });
+      await new Promise<void>((resolve, reject) => {
+        f.body.on('error', (err) => {
+          res.destroy(err);
+          reject(err);
+        });
+        res.on('close', resolve);
+        f.body.pipe(res);
+      });
+      return undefined;
+    },
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/submittals/:submittalId/submit',
+    summary: 'Submit a draft to its reviewers (e-mails them)',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.submit', ...viaSubmittal },
+    params: submittalParams,
+    body: submittalStepSchema,
+    example: {},
+    responses: {
+      200: { description: 'The submitted revision', schema: submittalSchema },
+      ...errors,
+      ...stateErrors,
+      422: { description: 'No item or no reviewer yet', schema: apiErrorSchema },
+    },
+    handler: ({ params, user, body, services }) =>
+      services.submittals.submit(params.submittalId, actor(user), body.version),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/submittals/:submittalId/review',
+    summary: 'Take a submitted revision under review (a named reviewer)',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.review', ...viaSubmittal },
+    params: submittalParams,
+    body: submittalStepSchema,
+    example: {},
+    responses: { 200: { description: 'Under review', schema: submittalSchema }, ...errors, ...stateErrors },
+    handler: ({ params, user, body, services }) =>
+      services.submittals.startReview(params.submittalId, actor(user), body.version),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/submittals/:submittalId/decision',
+    summary:
+      'Decide (a named reviewer): approved, approved as noted, revise and resubmit (opens the next revision) or rejected; e-mails the submitter',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.review', ...viaSubmittal },
+    params: submittalParams,
+    body: submittalDecisionInputSchema,
+    example: {
+      decision: 'approved_as_noted',
+      note: 'Confirm the clip spacing at the corners on the shop drawings.',
+    },
+    responses: {
+      200: { description: 'The decided revision', schema: submittalSchema },
+      ...errors,
+      ...stateErrors,
+    },
+    handler: ({ params, user, body, services }) =>
+      services.submittals.decide(params.submittalId, actor(user), body),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/submittals/:submittalId/comments',
+    summary: 'Comment on the submittal or on one of its items (while it is undecided)',
+    tag: 'Submittals',
+    access: { kind: 'project', action: 'submittal.comment', ...viaSubmittal },
+    params: submittalParams,
+    body: commentCreateSchema,
+    example: { body: 'Please add the clip test report.', itemId: null },
+    responses: {
+      201: { description: 'The submittal with the comment', schema: submittalSchema },
+      ...errors,
+      ...stateErrors,
+    },
+    handler: ({ params, user, body, services }) =>
+      services.submittals.comment(params.submittalId, actor(user), body.body, body.itemId),
+  }),
+];

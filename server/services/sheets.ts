@@ -1,0 +1,145 @@
+import type { Verdict } from '@shared/checks/report';
+import type { SheetVerification } from '@shared/schemas/sheets';
+import { normaliseVerificationCode, verificationCode, verificationUrl } from '@shared/sheets/verification';
+import type { UnitSystem } from '@shared/units';
+import { and, asc, eq } from 'drizzle-orm';
+import type { Config } from '../config';
+import type { Db } from '../db/client';
+import {
+  checkRuns,
+  organisationMembers,
+  organisations,
+  projects,
+  sheetVerifications,
+  user,
+} from '../db/schema';
+import { HttpError, notFound } from '../http/errors';
+import { renderComplianceSheet } from '../pdf/sheet';
+import type { createCheckRunService } from './check-runs';
+
+/** Rendered sheets, by run and units: the same run always gives the same bytes, so a few are kept. */
+const CACHE_SIZE = 16;
+
+export const noSuchSheet = () =>
+  new HttpError(404, 'no_such_sheet', 'no such sheet: the code is unknown, mistyped or altered');
+
+/**
+ * Compliance sheets: the PDF of a stored check run, and the verification codes printed on them. A code is
+ * recorded (with the issuing firm) the first time a run's sheet is issued — rendered or attached to a
+ * submittal — and from then on the public verification page confirms it.
+ */
+export function createSheetService(db: Db, config: Config, runs: ReturnType<typeof createCheckRunService>) {
+  const cache = new Map<string, Buffer>();
+
+  /** The firm that issues a run's sheet: the preparer's firm (the project's firm when they belong to it). */
+  async function issuerOf(runId: string): Promise<{ organisationId: string | null; name: string }> {
+    const [r] = await db
+      .select({
+        createdBy: checkRuns.createdBy,
+        projectOrg: projects.organisationId,
+        projectOrgName: organisations.name,
+      })
+      .from(checkRuns)
+      .innerJoin(projects, eq(projects.id, checkRuns.projectId))
+      .innerJoin(organisations, eq(organisations.id, projects.organisationId))
+      .where(eq(checkRuns.id, runId));
+    if (!r) throw notFound('check run');
+    const firms = r.createdBy
+      ? await db
+          .select({ id: organisations.id, name: organisations.name })
+          .from(organisationMembers)
+          .innerJoin(organisations, eq(organisations.id, organisationMembers.organisationId))
+          .where(eq(organisationMembers.userId, r.createdBy))
+          .orderBy(asc(organisationMembers.createdAt), asc(organisations.name))
+      : [];
+    const firm = firms.find((f) => f.id === r.projectOrg) ?? firms[0];
+    return firm
+      ? { organisationId: firm.id, name: firm.name }
+      : { organisationId: r.projectOrg, name: r.projectOrgName };
+  }
+
+  /**
+   * Records the verification code of a run's content (once). The hash leaves out when and by whom a run
+   * was made, so runs of identical inputs share one code: the record keeps the first run issued with it,
+   * and later ones print (and verify as) that record.
+   */
+  async function issue(runId: string, hash: string): Promise<{ code: string; issuer: string }> {
+    const code = verificationCode(hash);
+    const byCode = () => db.select().from(sheetVerifications).where(eq(sheetVerifications.code, code));
+    const [existing] = await byCode();
+    if (existing) return { code, issuer: existing.issuerName };
+    const issuer = await issuerOf(runId);
+    await db
+      .insert(sheetVerifications)
+      .values({ code, runId, issuerOrganisationId: issuer.organisationId, issuerName: issuer.name })
+      .onConflictDoNothing();
+    const [row] = await byCode();
+    return { code, issuer: row?.issuerName ?? issuer.name };
+  }
+
+  return {
+    issue: async (runId: string) => {
+      const run = await runs.get(runId);
+      return issue(run.id, run.hash);
+    },
+
+    /** The sheet of a run as PDF bytes, in the units asked for (default: the caller's preference). */
+    async render(runId: string, userId: string, units?: UnitSystem) {
+      const run = await runs.get(runId);
+      const [p] = await db
+        .select({ number: projects.number, siteAddress: projects.siteAddress })
+        .from(projects)
+        .where(eq(projects.id, run.projectId));
+      const [me] = await db.select({ unitSystem: user.unitSystem }).from(user).where(eq(user.id, userId));
+      const system: UnitSystem = units ?? (me?.unitSystem === 'IP' ? 'IP' : 'SI');
+      const { code, issuer } = await issue(run.id, run.hash);
+      const key = `${run.id}:${system}:${p?.number ?? ''}:${p?.siteAddress ?? ''}:${issuer}`;
+      let pdf = cache.get(key);
+      if (!pdf) {
+        pdf = renderComplianceSheet({
+          run,
+          project: { number: p?.number ?? '', siteAddress: p?.siteAddress ?? '' },
+          preparedBy: run.createdBy,
+          issuer,
+          code,
+          verifyUrl: verificationUrl(config.baseUrl, code),
+          units: system,
+        });
+        if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value!);
+        cache.set(key, pdf);
+      }
+      const slug = run.assemblyName
+        .toLowerCase()
+        .replace(/[^a-z0-9]+/g, '-')
+        .replace(/^-|-$/g, '')
+        .slice(0, 50);
+      return { pdf, code, filename: `compliance-sheet-${slug || 'assembly'}-${code}.pdf` };
+    },
+
+    /** Public: what a verification code confirms, or 404 "no such sheet". */
+    async verify(input: string): Promise<SheetVerification> {
+      const code = normaliseVerificationCode(input);
+      if (!code) throw noSuchSheet();
+      const [r] = await db
+        .select({ v: sheetVerifications, run: checkRuns, projectNumber: projects.number })
+        .from(sheetVerifications)
+        .innerJoin(checkRuns, eq(checkRuns.id, sheetVerifications.runId))
+        .innerJoin(projects, eq(projects.id, checkRuns.projectId))
+        .where(and(eq(sheetVerifications.code, code)));
+      // The code must still be the one derived from the stored hash (a run is immutable; this is a guard).
+      if (!r || verificationCode(r.run.hash) !== code) throw noSuchSheet();
+      const inputs = r.run.inputs as { project: { name: string } };
+      return {
+        code,
+        issuer: r.v.issuerName,
+        project: { name: inputs.project.name, number: r.projectNumber },
+        assembly: { name: r.run.assemblyName, revision: r.run.assemblyRevision },
+        criteriaSet: { name: r.run.criteriaSetName, version: r.run.criteriaSetVersion },
+        runAt: r.run.createdAt.toISOString(),
+        verdict: r.run.verdict as Verdict,
+        engineVersion: r.run.engineVersion,
+        hashPrefix: r.run.hash.slice(0, 16),
+      };
+    },
+  };
+}

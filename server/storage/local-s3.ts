@@ -1,0 +1,47 @@
+import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import S3rver from 's3rver';
+import type { S3Target } from './object-store';
+
+export const LOCAL_BUCKET = 'skinwright-local';
+/** s3rver's built-in development key pair. */
+const LOCAL_KEY = 'S3RVER';
+
+/**
+ * Local fake S3 server for demo, development and tests (like the mail capture): s3rver on loopback, a
+ * random port, files in `dir` (or a temporary folder that is removed on close). Never used when S3_BUCKET
+ * names a real service.
+ */
+export async function startLocalS3(dir?: string): Promise<{
+  target: S3Target;
+  directory: string;
+  close(): Promise<void>;
+}> {
+  const temporary = !dir;
+  const directory = dir ? path.resolve(dir) : mkdtempSync(path.join(tmpdir(), 'skinwright-s3-'));
+  mkdirSync(directory, { recursive: true });
+  const server = new S3rver({
+    address: '127.0.0.1',
+    port: 0,
+    directory,
+    silent: true,
+    configureBuckets: [{ name: LOCAL_BUCKET }],
+  });
+  const { port } = await server.run();
+  return {
+    directory,
+    target: {
+      bucket: LOCAL_BUCKET,
+      endpoint: `http://127.0.0.1:${port}`,
+      region: 'us-east-1',
+      accessKeyId: LOCAL_KEY,
+      secretAccessKey: LOCAL_KEY,
+      forcePathStyle: true,
+    },
+    async close() {
+      await server.close();
+      if (temporary) rmSync(directory, { recursive: true, force: true });
+    },
+  };
+}

@@ -1,0 +1,92 @@
+import { z } from 'zod';
+import { traceStepSchema } from '../calc/trace';
+import { wallCategorySchema } from '../schemas/assembly';
+import { climateZoneSchema } from '../schemas/project';
+import { criteriaZoneSchema } from './criteria';
+
+/** The outcome of a compliance run, as stored in a check run and sent to the client. */
+
+export const checkStatusSchema = z
+  .enum(['pass', 'fail', 'not_evaluated'])
+  .describe('pass: meets; fail: does not; not_evaluated: could not be checked (the reason says why)');
+export type CheckStatus = z.infer<typeof checkStatusSchema>;
+
+export const verdictSchema = z
+  .enum(['pass', 'fail', 'incomplete'])
+  .describe('fail if any check fails; incomplete if any is not evaluated and none fails; pass otherwise');
+export type Verdict = z.infer<typeof verdictSchema>;
+
+const checkValueSchema = z.union([z.number(), z.boolean()]).nullable();
+
+export const checkSchema = z.object({
+  /** Stable within a run: `criterion.max_u_factor`, `wind.zone4.girtSpacing`, `joints.2`, `thermal.run`. */
+  id: z.string(),
+  source: z.enum(['criteria', 'module']).describe('A row of the code table, or a module’s own verdict'),
+  /** The criterion type (criteria) or the module check's key. */
+  criterion: z.string(),
+  label: z.string(),
+  required: checkValueSchema.describe('The limit, SI (null when there is none to show)'),
+  provided: checkValueSchema.describe('What the assembly achieves, SI (null when not evaluated)'),
+  unit: z.string().describe('SI unit of required/provided/margin'),
+  direction: z.enum(['max', 'min', 'required']).nullable(),
+  margin: z
+    .number()
+    .nullable()
+    .describe('Signed, in the criterion’s direction: ≥ 0 meets, < 0 short by |margin| (SI unit)'),
+  marginRatio: z.number().nullable().describe('margin / |required|, dimensionless (null when required is 0)'),
+  status: checkStatusSchema,
+  reason: z.string().describe('Plain words: why not evaluated, what governs, what was compared'),
+  module: z.string(),
+  traceStepIds: z.array(z.string()),
+  row: z.object({ climateZone: criteriaZoneSchema, wallCategory: wallCategorySchema }).optional(),
+});
+export type Check = z.infer<typeof checkSchema>;
+
+export const metricSchema = z.object({
+  value: z.union([z.number(), z.boolean()]),
+  unit: z.string(),
+  traceStepIds: z.array(z.string()),
+  note: z.string().optional(),
+});
+export type Metric = z.infer<typeof metricSchema>;
+export const metricOutcomeSchema = z.union([metricSchema, z.object({ value: z.null(), reason: z.string() })]);
+export type MetricOutcome = z.infer<typeof metricOutcomeSchema>;
+
+export const moduleOutcomeSchema = z.object({
+  id: z.string(),
+  label: z.string(),
+  status: z.enum(['ran', 'missing', 'error']),
+  /** What is missing to build the module's input (status missing). */
+  missing: z.array(z.string()),
+  /** The calculation's refusal, "field: reason" (status error). */
+  error: z.string().nullable(),
+  /** The module's full result with its trace (status ran). */
+  result: z.unknown(),
+});
+export type ModuleOutcome = z.infer<typeof moduleOutcomeSchema>;
+
+export const checkReportSchema = z.object({
+  climateZone: climateZoneSchema,
+  wallCategory: wallCategorySchema,
+  /** Rows of the criteria set that apply to this zone and category. */
+  matchedRows: z.number().int(),
+  modules: z.array(moduleOutcomeSchema),
+  metrics: z.record(z.string(), metricOutcomeSchema),
+  checks: z.array(checkSchema),
+  verdict: verdictSchema,
+  /** The verdict of the code-table rows alone. */
+  criteriaVerdict: verdictSchema,
+  /** The verdict of the modules' own checks alone (wind spacing, joints, surface humidity). */
+  moduleVerdict: verdictSchema,
+  /** Every trace step a check or metric refers to, in order of first reference. */
+  steps: z.array(traceStepSchema),
+  cautions: z.array(z.string()),
+});
+export type CheckReport = z.infer<typeof checkReportSchema>;
+
+/** fail if any check fails; incomplete if any is not evaluated and none fails; pass otherwise (and for none). */
+export function verdictOf(checks: readonly Pick<Check, 'status'>[]): Verdict {
+  if (checks.some((c) => c.status === 'fail')) return 'fail';
+  if (checks.some((c) => c.status === 'not_evaluated')) return 'incomplete';
+  return 'pass';
+}

@@ -1,0 +1,225 @@
+import { describe, expect, it } from 'vitest';
+import { canonicalJson } from './canonical';
+import { CRITERION_TYPE_KEYS, CRITERION_TYPES } from './criteria';
+import { demoAssembly, demoProject, criteriaRow as row } from './fixtures';
+import { continuousInsulationR, INSULATION_MAX_CONDUCTIVITY } from './metrics';
+import { defineCheckModule } from './module';
+import { CHECK_MODULES, thermalModule } from './modules';
+import { runChecks } from './runner';
+
+const check = (report: ReturnType<typeof runChecks>, id: string) => report.checks.find((c) => c.id === id)!;
+
+describe('the compliance runner on the demo assembly', () => {
+  const all = [
+    row('max_u_factor', 0.35),
+    row('min_effective_r', 3),
+    row('min_continuous_insulation_r', 1.5),
+    row('min_cavity_insulation_r', 1.5),
+    row('max_condensation_accumulation', 0.5),
+    row('must_dry_within_year', true),
+    row('max_surface_rh', 0.8),
+    row('min_deflection_limit', 180),
+    row('min_sealant_movement_class', 25),
+  ];
+  const report = runChecks(demoAssembly(), demoProject(), all);
+
+  it('evaluates every criterion type from the metric it declares', () => {
+    expect(report.matchedRows).toBe(CRITERION_TYPE_KEYS.length);
+    for (const type of CRITERION_TYPE_KEYS) {
+      const c = check(report, `criterion.${type}`);
+      expect(c.status, type).toBe('pass');
+      expect(report.metrics[CRITERION_TYPES[type].metric]!.value).toEqual(c.provided);
+    }
+    expect(report.criteriaVerdict).toBe('pass');
+  });
+
+  it('reads U_eff and R_eff from the thermal result, with their trace steps', () => {
+    const u = check(report, 'criterion.max_u_factor');
+    expect(u.provided).toBeCloseTo(0.30704, 4);
+    expect(u.margin).toBeCloseTo(0.35 - (u.provided as number), 12);
+    expect(u.marginRatio).toBeCloseTo((u.margin as number) / 0.35, 12);
+    expect(u.traceStepIds).toEqual(['thermal.Ueff']);
+    expect(report.steps.find((s) => s.id === 'thermal.Ueff')!.value).toBe(u.provided);
+    expect(check(report, 'criterion.min_effective_r').provided).toBeCloseTo(1 / (u.provided as number), 12);
+  });
+
+  it('counts continuous insulation by its convention: homogeneous, λ ≤ 0.065, inside the ventilated cavity', () => {
+    // Mineral wool board 100 mm at 0.035 W/(m·K); the steel face outside the cavity and the gypsum are not insulation.
+    expect(check(report, 'criterion.min_continuous_insulation_r').provided).toBeCloseTo(0.1 / 0.035, 12);
+    // Glass-fibre batt 92 mm at 0.040 W/(m·K) between the studs.
+    expect(check(report, 'criterion.min_cavity_insulation_r').provided).toBeCloseTo(0.092 / 0.04, 12);
+    const outside = continuousInsulationR([
+      { kind: 'homogeneous', name: 'Foam outside the vented cavity', thickness: 0.05, conductivity: 0.03 },
+      { kind: 'air', name: 'Vented cavity', thickness: 0.025, ventilation: 'well' },
+      {
+        kind: 'homogeneous',
+        name: 'Board at the threshold',
+        thickness: 0.065,
+        conductivity: INSULATION_MAX_CONDUCTIVITY,
+      },
+      { kind: 'resistance', name: 'Declared panel', resistance: 2 },
+    ]);
+    expect(outside.value).toBeCloseTo(1, 12);
+    expect(outside.note).toMatch(/Declared-resistance layers not counted: Declared panel/);
+  });
+
+  it('takes the highest interior surface RH over the months (p_i/p_sat(θ_si)) and the lowest sealant class', () => {
+    const rh = check(report, 'criterion.max_surface_rh');
+    expect(rh.provided).toBeGreaterThan(0.7);
+    expect(rh.provided).toBeLessThan(0.8);
+    // HJ-1 uses a class 25 sealant; 50 and 100/50 are higher.
+    expect(check(report, 'criterion.min_sealant_movement_class')).toMatchObject({ provided: 25, margin: 0 });
+    expect(check(report, 'criterion.min_deflection_limit')).toMatchObject({ provided: 180, status: 'pass' });
+  });
+
+  it('gives the modules’ own verdicts: wind spacing per zone, every joint, the surface check', () => {
+    expect(check(report, 'wind.zone4.girtSpacing')).toMatchObject({
+      provided: 1.2,
+      status: 'pass',
+      unit: 'm',
+    });
+    expect(check(report, 'wind.zone5.clipSpacing')).toMatchObject({ provided: 0.8, status: 'pass' });
+    expect(check(report, 'wind.zone5.table').status).toBe('pass');
+    expect(check(report, 'moisture.surface').status).toBe('pass');
+    // The demo's HJ-1 and PJ-1 joints are too narrow for their movement.
+    expect(['joints.0', 'joints.1', 'joints.2'].map((id) => check(report, id).status)).toEqual([
+      'pass',
+      'fail',
+      'fail',
+    ]);
+    expect(check(report, 'joints.1').margin).toBeLessThan(0);
+    expect(report.moduleVerdict).toBe('fail');
+    expect(report.verdict).toBe('fail');
+    expect(report.cautions.some((c) => /licensed professional/.test(c))).toBe(true);
+  });
+
+  it('fails a tightened maximum and says by how much', () => {
+    const tight = runChecks(demoAssembly(), demoProject(), [row('max_u_factor', 0.3)]);
+    const u = check(tight, 'criterion.max_u_factor');
+    expect(u.status).toBe('fail');
+    expect(u.margin).toBeCloseTo(0.3 - (u.provided as number), 12);
+    expect(tight.criteriaVerdict).toBe('fail');
+  });
+});
+
+describe('what cannot be evaluated is reported, never passed', () => {
+  it('names the missing project climate and wind data', () => {
+    const r = runChecks(demoAssembly(), { ...demoProject(), climate: null, wind: null }, [
+      row('max_surface_rh', 0.8),
+      row('must_dry_within_year', true),
+      row('min_deflection_limit', 180),
+      row('max_u_factor', 0.35),
+    ]);
+    expect(check(r, 'criterion.max_surface_rh')).toMatchObject({
+      status: 'not_evaluated',
+      provided: null,
+      reason: 'the project’s monthly climate is missing',
+    });
+    expect(check(r, 'criterion.must_dry_within_year').status).toBe('not_evaluated');
+    expect(check(r, 'criterion.min_deflection_limit').reason).toBe('the project’s wind data is missing');
+    expect(check(r, 'moisture.run').status).toBe('not_evaluated');
+    expect(check(r, 'wind.run').status).toBe('not_evaluated');
+    expect(r.criteriaVerdict).toBe('incomplete');
+    expect(r.modules.map((m) => m.status)).toEqual(['ran', 'missing', 'missing', 'ran']);
+  });
+
+  it('does not check the design spacing that was not entered, and says so', () => {
+    const a = demoAssembly();
+    const r = runChecks({ ...a, attachment: { ...a.attachment, girtSpacing: undefined } }, demoProject(), []);
+    expect(check(r, 'wind.zone4.girtSpacing')).toMatchObject({
+      status: 'not_evaluated',
+      reason: 'the design girt spacing is not entered on the assembly',
+    });
+  });
+
+  it('says when the code table has no row for the zone and category', () => {
+    const r = runChecks(demoAssembly(), demoProject(), [
+      row('max_u_factor', 0.35, '7'),
+      row('max_u_factor', 0.35, '5A', 'mass'),
+    ]);
+    expect(r.matchedRows).toBe(0);
+    expect(check(r, 'criteria.none')).toMatchObject({ status: 'not_evaluated' });
+    expect(check(r, 'criteria.none').reason).toMatch(/no row for climate zone 5A .* steel-framed wall/);
+    expect(r.criteriaVerdict).toBe('incomplete');
+  });
+
+  it('reports a criterion whose module is not registered as not evaluated', () => {
+    const r = runChecks(
+      demoAssembly(),
+      demoProject(),
+      [row('max_u_factor', 0.35), row('max_surface_rh', 0.8)],
+      [thermalModule],
+    );
+    expect(check(r, 'criterion.max_u_factor').status).toBe('pass');
+    expect(check(r, 'criterion.max_surface_rh')).toMatchObject({ status: 'not_evaluated', module: '—' });
+  });
+
+  it('reports a calculation that refuses its input, with the field', () => {
+    const a = demoAssembly();
+    const bad = { ...a, thermal: { ...a.thermal, bridges: [{ ...a.thermal.bridges[2]!, layerIndex: 40 }] } };
+    const r = runChecks(bad as typeof a, demoProject(), [row('max_u_factor', 0.35)]);
+    expect(r.modules[0]!.status).toBe('error');
+    expect(check(r, 'criterion.max_u_factor').status).toBe('not_evaluated');
+    expect(check(r, 'criterion.max_u_factor').reason).toMatch(/refused the input \(bridges\.0/);
+  });
+});
+
+describe('rows, wildcards and the module registry', () => {
+  it('prefers a row naming the zone over an all-zones row for the same criterion', () => {
+    const r = runChecks(demoAssembly(), demoProject(), [
+      row('max_u_factor', 0.2, '*'),
+      row('max_u_factor', 0.35, '5A'),
+    ]);
+    expect(check(r, 'criterion.max_u_factor')).toMatchObject({
+      required: 0.35,
+      status: 'pass',
+      row: { climateZone: '5A' },
+    });
+    const wild = runChecks(demoAssembly(), demoProject(), [row('max_u_factor', 0.2, '*')]);
+    expect(check(wild, 'criterion.max_u_factor')).toMatchObject({ required: 0.2, status: 'fail' });
+  });
+
+  it('takes a module that lands later without changing the runner', () => {
+    const acoustic = defineCheckModule({
+      id: 'acoustic',
+      label: 'Acoustic check',
+      provides: [],
+      build: (a) => ({ status: 'ready', input: a.thermal.layers.length }),
+      run: (layers: number) => ({ layers }),
+      metrics: () => ({}),
+      verdicts: (r) => [
+        {
+          id: 'acoustic.layers',
+          criterion: 'layers',
+          label: 'At least three layers',
+          required: 3,
+          provided: r.layers,
+          unit: '',
+          direction: 'min',
+          margin: r.layers - 3,
+          marginRatio: null,
+          status: r.layers >= 3 ? 'pass' : 'fail',
+          reason: '',
+          traceStepIds: [],
+        },
+      ],
+      trace: () => [],
+      cautions: () => ['Acoustic caution'],
+    });
+    const r = runChecks(demoAssembly(), demoProject(), [], [...CHECK_MODULES, acoustic]);
+    expect(check(r, 'acoustic.layers')).toMatchObject({
+      status: 'pass',
+      module: 'acoustic',
+      source: 'module',
+    });
+    expect(r.modules.at(-1)).toMatchObject({ id: 'acoustic', status: 'ran' });
+    expect(r.cautions).toContain('Acoustic caution');
+  });
+
+  it('gives the same report, byte for byte, for the same inputs', () => {
+    const rows = [row('max_u_factor', 0.35), row('max_surface_rh', 0.8, '*')];
+    expect(canonicalJson(runChecks(demoAssembly(), demoProject(), rows))).toBe(
+      canonicalJson(runChecks(demoAssembly(), demoProject(), rows)),
+    );
+  });
+});

@@ -1,0 +1,101 @@
+import { can } from '@shared/auth/permissions';
+import { Link, useParams, useSearchParams } from 'react-router';
+import { Loading } from '../../components/ui/Loading';
+import { Notice } from '../../components/ui/Notice';
+import { useAssembly } from '../../features/assemblies/api/get-assembly';
+import { useCheckRun } from '../../features/checks/api/get-check-run';
+import { useCheckRuns } from '../../features/checks/api/get-check-runs';
+import { CheckReportView } from '../../features/checks/components/CheckReportView';
+import { PastRuns } from '../../features/checks/components/PastRuns';
+import { RunCheckForm } from '../../features/checks/components/RunCheckForm';
+import { useProjectCriteriaSets } from '../../features/criteria/api/get-project-criteria-sets';
+import { useProject } from '../../features/projects/api/get-project';
+import { errorMessage } from '../../lib/api';
+import { useUnitSystem } from '../../lib/unit-system';
+import { AssemblyTabs } from '../layout/AssemblyTabs';
+
+/** Checks of one assembly: run it against a code table, read the stored run, see the runs before. */
+export function AssemblyChecksPage() {
+  const { id = '', assemblyId = '' } = useParams();
+  const [params, setParams] = useSearchParams();
+  const { data: project } = useProject(id);
+  const assembly = useAssembly(assemblyId);
+  const sets = useProjectCriteriaSets(id);
+  const runs = useCheckRuns(id, assemblyId);
+  const shownId = params.get('run') ?? runs.data?.[0]?.id ?? null;
+  const run = useCheckRun(shownId);
+  const system = useUnitSystem();
+
+  if (!project) return null;
+  if (assembly.isPending) return <Loading what="Loading the assembly" />;
+  if (assembly.isError) return <Notice tone="caution" title={errorMessage(assembly.error)} live />;
+  const a = assembly.data;
+  if (a.projectId !== project.id)
+    return <Notice tone="caution" title="This assembly belongs to another project." />;
+  const mayRun = can(project.myRole, 'checkrun.create') && project.archivedAt === null;
+
+  return (
+    <div className="flex flex-col gap-10">
+      <title>{`Checks · ${a.name} · Skinwright`}</title>
+      <AssemblyTabs projectId={project.id} assemblyId={a.id} name={a.name} />
+
+      <section aria-labelledby="run-heading" className="flex flex-col gap-3">
+        <h2 id="run-heading" className="border-b border-ink pb-2 text-2xl">
+          Checks of “{a.name}”
+        </h2>
+        <p className="max-w-prose text-sm text-ink-muted">
+          A run checks revision {a.revision} of the assembly with every module — thermal, moisture, wind
+          attachment, sealant joints — against one version of a code table, and is stored as issued: its
+          inputs, results and a verification code. The version of the table it used is frozen from then on.
+        </p>
+        {mayRun ? (
+          sets.isPending ? (
+            <Loading what="Loading the code tables" />
+          ) : sets.isError ? (
+            <Notice tone="caution" title={errorMessage(sets.error)} live />
+          ) : sets.data.length === 0 ? (
+            <Notice tone="info" title="There is no code table to check against yet.">
+              <p>
+                The project’s firm enters the values of its adopted code under{' '}
+                <Link to="/code-tables">Code tables</Link>.
+              </p>
+            </Notice>
+          ) : (
+            <RunCheckForm assemblyId={a.id} sets={sets.data} onRun={(runId) => setParams({ run: runId })} />
+          )
+        ) : (
+          <p className="text-sm">
+            {project.archivedAt
+              ? 'The project is archived: its stored runs are shown, and no new run can be made.'
+              : 'Your role on this project shows the stored runs; it does not run new checks.'}
+          </p>
+        )}
+      </section>
+
+      <section aria-label="Check run" className="flex flex-col gap-3">
+        {shownId === null ? (
+          runs.isPending ? (
+            <Loading what="Loading the runs" />
+          ) : (
+            <p className="text-ink-muted">No check has been run on this assembly yet.</p>
+          )
+        ) : run.isPending ? (
+          <Loading what="Loading the run" />
+        ) : run.isError ? (
+          <Notice tone="caution" title={errorMessage(run.error)} live />
+        ) : (
+          <CheckReportView run={run.data} system={system} />
+        )}
+      </section>
+
+      {runs.data && runs.data.length > 0 ? (
+        <section aria-labelledby="past-heading" className="flex flex-col gap-3">
+          <h2 id="past-heading" className="border-b border-ink pb-2 text-2xl">
+            Runs of this assembly
+          </h2>
+          <PastRuns runs={runs.data} shownId={shownId} hrefFor={(runId) => `?run=${runId}`} />
+        </section>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,88 @@
+import { useState } from 'react';
+import { Button } from '../../components/ui/Button';
+import { Field } from '../../components/ui/Field';
+import { Loading } from '../../components/ui/Loading';
+import { Notice } from '../../components/ui/Notice';
+import { PageHeader } from '../../components/ui/PageHeader';
+import { Select } from '../../components/ui/Select';
+import { useCriteriaSets } from '../../features/criteria/api/get-criteria-sets';
+import { CriteriaSetTable } from '../../features/criteria/components/CriteriaSetTable';
+import { NewCriteriaSetForm } from '../../features/criteria/components/NewCriteriaSetForm';
+import { useMe } from '../../features/me/api/get-me';
+import { errorMessage } from '../../lib/api';
+
+/** The firm's code tables: the criteria its adopted code sets, entered by the firm, one table per code. */
+export function CodeTablesPage() {
+  const me = useMe();
+  const orgs = me.data?.organisations ?? [];
+  const [chosen, setChosen] = useState<string | undefined>(undefined);
+  const [adding, setAdding] = useState(false);
+  const org = orgs.find((o) => o.id === chosen) ?? orgs[0];
+  const sets = useCriteriaSets(org?.id);
+
+  return (
+    <div className="flex flex-col gap-8">
+      <title>Code tables · Skinwright</title>
+      <PageHeader
+        eyebrow="Criteria"
+        title="Code tables"
+        description="Jurisdictions adopt different editions and amendments, so Skinwright does not supply “the code”: your firm enters the values its adopted code requires, by climate zone and wall category, and every check run compares an assembly with them."
+        actions={
+          org && !adding ? (
+            <Button variant="primary" onClick={() => setAdding(true)}>
+              New code table
+            </Button>
+          ) : null
+        }
+      />
+      {orgs.length === 0 ? (
+        <Notice
+          tone="info"
+          title="You are not a member of a firm, so there are no code tables of yours to show."
+        >
+          <p>Tables of a firm whose project you work on open from that project’s check pages.</p>
+        </Notice>
+      ) : (
+        <>
+          {orgs.length > 1 ? (
+            <Field label="Firm" className="max-w-sm">
+              {(c) => (
+                <Select {...c} value={org?.id} onChange={(e) => setChosen(e.target.value)}>
+                  {orgs.map((o) => (
+                    <option key={o.id} value={o.id}>
+                      {o.name}
+                    </option>
+                  ))}
+                </Select>
+              )}
+            </Field>
+          ) : null}
+          {adding && org ? (
+            <section aria-labelledby="new-table" className="flex flex-col gap-3 border-b border-rule pb-8">
+              <h2 id="new-table" className="text-2xl">
+                New code table for {org.name}
+              </h2>
+              <NewCriteriaSetForm orgId={org.id} />
+              <div>
+                <Button variant="quiet" onClick={() => setAdding(false)}>
+                  Cancel
+                </Button>
+              </div>
+            </section>
+          ) : null}
+          {sets.isPending ? (
+            <Loading what="Loading the code tables" />
+          ) : sets.isError ? (
+            <Notice tone="caution" title={errorMessage(sets.error)} live />
+          ) : sets.data.length === 0 ? (
+            <p className="text-ink-muted">
+              No code table yet. Create one and enter the values your adopted code sets.
+            </p>
+          ) : (
+            <CriteriaSetTable sets={sets.data} caption={`Code tables of ${org?.name}`} />
+          )}
+        </>
+      )}
+    </div>
+  );
+}

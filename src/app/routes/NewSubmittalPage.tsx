@@ -1,0 +1,49 @@
+import { can } from '@shared/auth/permissions';
+import { Link, useNavigate, useParams } from 'react-router';
+import { Loading } from '../../components/ui/Loading';
+import { Notice } from '../../components/ui/Notice';
+import { useMembers } from '../../features/members/api/get-members';
+import { useProject } from '../../features/projects/api/get-project';
+import { useCreateSubmittal } from '../../features/submittals/api/mutations';
+import { SubmittalForm } from '../../features/submittals/components/SubmittalForm';
+import { errorMessage } from '../../lib/api';
+
+/** Start a submittal: its details and reviewers; items are added on its page. */
+export function NewSubmittalPage() {
+  const { id = '' } = useParams();
+  const navigate = useNavigate();
+  const { data: project } = useProject(id);
+  const members = useMembers(id);
+  const create = useCreateSubmittal(id);
+  if (!project) return null;
+  if (!can(project.myRole, 'submittal.create') || project.archivedAt)
+    return <Notice tone="caution" title="Your role on this project does not start submittals." />;
+
+  return (
+    <div className="flex flex-col gap-6">
+      <title>{`New submittal · ${project.name} · Skinwright`}</title>
+      <nav aria-label="Breadcrumb" className="-mt-2 text-sm">
+        <Link to={`/projects/${project.id}/submittals`}>Submittals</Link> <span aria-hidden="true">/</span>{' '}
+        New
+      </nav>
+      <h2 className="border-b border-ink pb-2 text-2xl">New submittal</h2>
+      {members.isPending ? (
+        <Loading what="Loading the people of the project" />
+      ) : members.isError ? (
+        <Notice tone="caution" title={errorMessage(members.error)} live />
+      ) : (
+        <SubmittalForm
+          members={members.data.members}
+          withNumber
+          submitLabel="Create the draft"
+          busyLabel="Creating…"
+          onSubmit={async (values) => {
+            const s = await create.mutateAsync(values);
+            navigate(`/projects/${project.id}/submittals/${s.id}`);
+          }}
+          onCancel={() => navigate(`/projects/${project.id}/submittals`)}
+        />
+      )}
+    </div>
+  );
+}

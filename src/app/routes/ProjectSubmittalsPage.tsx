@@ -1,0 +1,78 @@
+import { can } from '@shared/auth/permissions';
+import { SUBMITTAL_STATUS_TEXT, SUBMITTAL_STATUSES, type SubmittalStatus } from '@shared/schemas/submittals';
+import { useId } from 'react';
+import { useParams, useSearchParams } from 'react-router';
+import { ButtonLink } from '../../components/ui/Button';
+import { Loading } from '../../components/ui/Loading';
+import { Notice } from '../../components/ui/Notice';
+import { Select } from '../../components/ui/Select';
+import { useProject } from '../../features/projects/api/get-project';
+import { useSubmittals } from '../../features/submittals/api/get-submittals';
+import { SubmittalTable } from '../../features/submittals/components/SubmittalTable';
+import { errorMessage } from '../../lib/api';
+
+const isStatus = (s: string | null): s is SubmittalStatus =>
+  (SUBMITTAL_STATUSES as readonly string[]).includes(s ?? '');
+
+/** The project's submittals, filtered by status (kept in the address so it can be shared). */
+export function ProjectSubmittalsPage() {
+  const { id = '' } = useParams();
+  const filterId = useId();
+  const [params, setParams] = useSearchParams();
+  const status = isStatus(params.get('status')) ? (params.get('status') as SubmittalStatus) : null;
+  const { data: project } = useProject(id);
+  const list = useSubmittals(id, status);
+  if (!project) return null;
+  const mayCreate = can(project.myRole, 'submittal.create') && project.archivedAt === null;
+
+  return (
+    <div className="flex flex-col gap-6">
+      <title>{`Submittals · ${project.name} · Skinwright`}</title>
+      <div className="flex flex-wrap items-end justify-between gap-4 border-b border-ink pb-2">
+        <h2 className="text-2xl">Submittals</h2>
+        {mayCreate ? (
+          <ButtonLink variant="primary" to={`/projects/${project.id}/submittals/new`}>
+            New submittal
+          </ButtonLink>
+        ) : null}
+      </div>
+      <p className="max-w-prose text-sm text-ink-muted">
+        Packages sent by the cladding subcontractor for the design team’s review: compliance sheets of stored
+        check runs and uploaded product data, test reports and shop drawings, each under a specification
+        section and a revision.
+      </p>
+      <div className="flex items-center gap-3">
+        <label htmlFor={filterId} className="text-sm font-semibold">
+          Show
+        </label>
+        <div className="w-64">
+          <Select
+            id={filterId}
+            value={status ?? ''}
+            onChange={(e) => setParams(e.target.value ? { status: e.target.value } : {})}
+          >
+            <option value="">Every status</option>
+            {SUBMITTAL_STATUSES.map((s) => (
+              <option key={s} value={s}>
+                {SUBMITTAL_STATUS_TEXT[s].label}
+              </option>
+            ))}
+          </Select>
+        </div>
+      </div>
+      {list.isPending ? (
+        <Loading what="Loading the submittals" />
+      ) : list.isError ? (
+        <Notice tone="caution" title={errorMessage(list.error)} live />
+      ) : list.data.length === 0 ? (
+        <p className="text-ink-muted">
+          {status
+            ? `No submittal is ${SUBMITTAL_STATUS_TEXT[status].label.toLowerCase()}.`
+            : 'No submittal yet.'}
+        </p>
+      ) : (
+        <SubmittalTable projectId={project.id} submittals={list.data} />
+      )}
+    </div>
+  );
+}

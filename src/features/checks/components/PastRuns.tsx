@@ -1,0 +1,62 @@
+import type { CheckRunSummary } from '@shared/schemas/check-runs';
+import { Link } from 'react-router';
+import { Table, Td, Th } from '../../../components/ui/Table';
+import { VERDICT_TEXT } from '../../../lib/check-format';
+import { formatDateTime } from '../../../lib/format';
+
+/** Stored runs of one assembly, newest first; each opens on the same page. */
+export function PastRuns({
+  runs,
+  shownId,
+  hrefFor,
+}: {
+  runs: CheckRunSummary[];
+  shownId: string | null;
+  hrefFor: (runId: string) => string;
+}) {
+  return (
+    <Table caption="Past runs (each is stored as issued)">
+      <thead>
+        <tr>
+          <Th>When</Th>
+          <Th>By</Th>
+          <Th>Code table</Th>
+          <Th numeric>Assembly rev.</Th>
+          <Th>Verdict</Th>
+          <Th>Verification code</Th>
+        </tr>
+      </thead>
+      <tbody>
+        {runs.map((r) => {
+          const v = VERDICT_TEXT[r.verdict];
+          return (
+            <tr key={r.id} className={r.id === shownId ? 'bg-paper-sunk' : undefined}>
+              <Td className="whitespace-nowrap">
+                {r.id === shownId ? (
+                  <span aria-current="true" className="font-semibold">
+                    {formatDateTime(r.createdAt)} (shown)
+                  </span>
+                ) : (
+                  <Link to={hrefFor(r.id)}>{formatDateTime(r.createdAt)}</Link>
+                )}
+              </Td>
+              <Td>{r.createdBy ?? '—'}</Td>
+              <Td>
+                {r.criteriaSetName}, v{r.criteriaSetVersion}
+              </Td>
+              <Td numeric>{r.assemblyRevision}</Td>
+              <Td className={`font-semibold ${v.cls.split(' ')[0]}`}>
+                <span aria-hidden="true">{v.glyph} </span>
+                <span className="text-ink">{v.word}</span>
+                <span className="block text-xs font-normal text-ink-muted">
+                  {r.counts.pass} met · {r.counts.fail} failed · {r.counts.notEvaluated} not evaluated
+                </span>
+              </Td>
+              <Td className="num text-xs">{r.hash.slice(0, 12)}</Td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </Table>
+  );
+}

@@ -1,0 +1,17 @@
+import { sheetVerificationSchema } from '@shared/schemas/sheets';
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiRequest, isApiRequestError } from '../../../lib/api';
+import { verificationKeys } from '../../../lib/query-keys';
+
+/** `GET /api/verify/:code` (public) → what the sheet states; 404 = no such sheet. */
+export const getVerification = (code: string, signal?: AbortSignal) =>
+  apiRequest(`/api/verify/${encodeURIComponent(code)}`, sheetVerificationSchema, { signal });
+
+export const verificationQueryOptions = (code: string) =>
+  queryOptions({
+    queryKey: verificationKeys.detail(code),
+    queryFn: ({ signal }) => getVerification(code, signal),
+    retry: (count, e) => !(isApiRequestError(e) && e.status === 404) && count < 2,
+  });
+
+export const useVerification = (code: string) => useQuery(verificationQueryOptions(code));

@@ -1,0 +1,102 @@
+import {
+  type Submittal,
+  type SubmittalCreate,
+  type SubmittalDecisionInput,
+  type SubmittalFields,
+  submittalSchema,
+} from '@shared/schemas/submittals';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+import { apiRequest, isApiRequestError } from '../../../lib/api';
+import { auditKeys, submittalKeys } from '../../../lib/query-keys';
+
+const base = (id: string) => `/api/submittals/${encodeURIComponent(id)}`;
+
+/** After any change: the revision as the server now has it, the lists and the activity log refreshed. */
+function useSettle() {
+  const qc = useQueryClient();
+  return (s: Submittal) => {
+    qc.setQueryData(submittalKeys.detail(s.id), s);
+    void qc.invalidateQueries({ queryKey: submittalKeys.lists() });
+    // A decision may open the next revision; other revisions show the new chain.
+    void qc.invalidateQueries({
+      queryKey: submittalKeys.details(),
+      predicate: (q) => q.queryKey[2] !== s.id,
+    });
+    void qc.invalidateQueries({ queryKey: auditKeys.list(s.projectId) });
+  };
+}
+
+const conflictSchema = z.object({ current: submittalSchema });
+/** On 409 `version_conflict` the server sends the submittal as it is now; null for any other error. */
+export function conflictingSubmittal(error: unknown): Submittal | null {
+  if (!isApiRequestError(error) || error.status !== 409 || error.code !== 'version_conflict') return null;
+  const parsed = conflictSchema.safeParse(error.body);
+  return parsed.success ? parsed.data.current : null;
+}
+
+export function useCreateSubmittal(projectId: string) {
+  const settle = useSettle();
+  return useMutation({
+    mutationFn: (input: SubmittalCreate) =>
+      apiRequest(`/api/projects/${encodeURIComponent(projectId)}/submittals`, submittalSchema, {
+        method: 'POST',
+        body: input,
+      }),
+    onSuccess: settle,
+  });
+}
+
+export function useUpdateSubmittal(id: string) {
+  const settle = useSettle();
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ version, changes }: { version: number; changes: SubmittalFields }) =>
+      apiRequest(base(id), submittalSchema, { method: 'PUT', body: { version, changes } }),
+    onSuccess: settle,
+    onError: (e) => {
+      const current = conflictingSubmittal(e);
+      if (current) qc.setQueryData(submittalKeys.detail(current.id), current);
+    },
+  });
+}
+
+type Step =
+  | { kind: 'submit'; version: number }
+  | { kind: 'review'; version: number }
+  | ({ kind: 'decision' } & SubmittalDecisionInput)
+  | { kind: 'comment'; body: string; itemId: string | null }
+  | { kind: 'sheet'; checkRunId: string }
+  | { kind: 'remove'; itemId: string };
+
+/** Every workflow step of one revision. */
+export function useSubmittalStep(id: string) {
+  const settle = useSettle();
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ kind, ...body }: Step) => {
+      switch (kind) {
+        case 'submit':
+        case 'review':
+          return apiRequest(`${base(id)}/${kind}`, submittalSchema, { method: 'POST', body });
+        case 'decision':
+          return apiRequest(`${base(id)}/decision`, submittalSchema, { method: 'POST', body });
+        case 'comment':
+          return apiRequest(`${base(id)}/comments`, submittalSchema, { method: 'POST', body });
+        case 'sheet':
+          return apiRequest(`${base(id)}/sheets`, submittalSchema, { method: 'POST', body });
+        case 'remove':
+          return apiRequest(
+            `${base(id)}/items/${encodeURIComponent((body as { itemId: string }).itemId)}`,
+            submittalSchema,
+            { method: 'DELETE' },
+          );
+      }
+    },
+    onSuccess: settle,
+    onError: (e) => {
+      const current = conflictingSubmittal(e);
+      if (current) qc.setQueryData(submittalKeys.detail(current.id), current);
+    },
+  });
+}

@@ -20,7 +20,12 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: 'unit',
-          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'tests/verification/**/*.test.ts', 'tests/architecture/**/*.test.ts'],
+          include: [
+            'shared/**/*.test.ts',
+            'server/**/*.test.ts',
+            'tests/verification/**/*.test.ts',
+            'tests/architecture/**/*.test.ts',
+          ],
           environment: 'node',
         },
       },

@@ -47,7 +47,11 @@ export function createAuth(db: Db, config: Config, mailer: Mailer) {
     },
     // The signed cookie cache spares a database read per request; a revoked session stays usable for at
     // most cookieCache.maxAge seconds.
-    session: { expiresIn: 60 * 60 * 24 * 7, updateAge: 60 * 60 * 24, cookieCache: { enabled: true, maxAge: 60 } },
+    session: {
+      expiresIn: 60 * 60 * 24 * 7,
+      updateAge: 60 * 60 * 24,
+      cookieCache: { enabled: true, maxAge: 60 },
+    },
     advanced: {
       useSecureCookies: config.baseUrl.startsWith('https://'),
       defaultCookieAttributes: { httpOnly: true, sameSite: 'lax' },

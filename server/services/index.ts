@@ -4,6 +4,7 @@ import type { Config } from '../config';
 import type { Database } from '../db/client';
 import { HttpError } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
+import type { ObjectStore } from '../storage/object-store';
 import { createAssemblyService } from './assemblies';
 import { createAuditService } from './audit';
 import { createCheckRunService } from './check-runs';
@@ -14,7 +15,6 @@ import { createMemberService } from './members';
 import { createProjectService } from './projects';
 import { createSheetService } from './sheets';
 import { createSubmittalService } from './submittals';
-import type { ObjectStore } from '../storage/object-store';
 
 /** Everything a route may use; routes never touch the database directly. */
 export function createServices(

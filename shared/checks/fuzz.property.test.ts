@@ -30,13 +30,17 @@ let cases = 0;
 function numericPaths(value: unknown, prefix: (string | number)[] = []): (string | number)[][] {
   if (typeof value === 'number') return [prefix];
   if (Array.isArray(value)) return value.flatMap((v, i) => numericPaths(v, [...prefix, i]));
-  if (value && typeof value === 'object') return Object.entries(value).flatMap(([k, v]) => numericPaths(v, [...prefix, k]));
+  if (value && typeof value === 'object')
+    return Object.entries(value).flatMap(([k, v]) => numericPaths(v, [...prefix, k]));
   return [];
 }
 function setAt(value: unknown, path: (string | number)[], n: number): unknown {
   if (path.length === 0) return n;
   const [head, ...rest] = path;
-  const copy = (Array.isArray(value) ? [...value] : { ...(value as object) }) as Record<string | number, unknown>;
+  const copy = (Array.isArray(value) ? [...value] : { ...(value as object) }) as Record<
+    string | number,
+    unknown
+  >;
   copy[head!] = setAt(copy[head!], rest, n);
   return copy;
 }
@@ -49,38 +53,65 @@ function allFinite(value: unknown): boolean {
 
 const modules: [string, unknown, z.ZodType, (input: never) => unknown, z.ZodType][] = [
   ['thermal', metalPanelWall(), thermalInputSchema, calculateThermal as never, thermalResultSchema],
-  ['moisture', metalPanelMoistureWall({ vapourRetarder: false }), moistureInputSchema, calculateMoisture as never, moistureResultSchema],
-  ['wind', demoWindSchedule(), windScheduleInputSchema, calculateWindSchedule as never, windScheduleResultSchema],
-  ['joints', { joints: demoJointSchedule() }, jointScheduleInputSchema, ((i: { joints: never }) => calculateJointSchedule(i.joints)) as never, jointScheduleResultSchema],
+  [
+    'moisture',
+    metalPanelMoistureWall({ vapourRetarder: false }),
+    moistureInputSchema,
+    calculateMoisture as never,
+    moistureResultSchema,
+  ],
+  [
+    'wind',
+    demoWindSchedule(),
+    windScheduleInputSchema,
+    calculateWindSchedule as never,
+    windScheduleResultSchema,
+  ],
+  [
+    'joints',
+    { joints: demoJointSchedule() },
+    jointScheduleInputSchema,
+    ((i: { joints: never }) => calculateJointSchedule(i.joints)) as never,
+    jointScheduleResultSchema,
+  ],
   ['takeoff', demoElevation(), takeoffInputSchema, calculateTakeoff as never, takeoffResultSchema],
 ];
 
 describe('pure calculations under fuzzed numbers', () => {
   afterAll(() => console.log(`fuzz: ${cases} pure calculation cases run`));
-  it.each(modules)('%s never lets anything but a CalcInputError or a finite result out', (_name, fixture, inputSchema, calculate, resultSchema) => {
-    const paths = numericPaths(fixture);
-    const mutation = fc.array(
-      fc.tuple(fc.nat({ max: paths.length - 1 }), fc.oneof(fc.double({ noNaN: true, noDefaultInfinity: true }), fc.double({ min: -10, max: 10, noNaN: true }))),
-      { minLength: 1, maxLength: 3 },
-    );
-    fc.assert(
-      fc.property(mutation, (changes) => {
-        cases++;
-        const mutated = changes.reduce<unknown>((acc, [i, n]) => setAt(acc, paths[i]!, n), fixture);
-        const parsed = inputSchema.safeParse(mutated);
-        if (!parsed.success) return;
-        let result: unknown;
-        try {
-          result = calculate(parsed.data as never);
-        } catch (err) {
-          expect(err).toBeInstanceOf(CalcInputError);
-          expect((err as CalcInputError).field.length).toBeGreaterThan(0);
-          return;
-        }
-        expect(allFinite(result), 'every number in the result is finite').toBe(true);
-        expect(resultSchema.safeParse(result).success).toBe(true);
-      }),
-      { numRuns: RUNS },
-    );
-  });
+  it.each(modules)(
+    '%s never lets anything but a CalcInputError or a finite result out',
+    (_name, fixture, inputSchema, calculate, resultSchema) => {
+      const paths = numericPaths(fixture);
+      const mutation = fc.array(
+        fc.tuple(
+          fc.nat({ max: paths.length - 1 }),
+          fc.oneof(
+            fc.double({ noNaN: true, noDefaultInfinity: true }),
+            fc.double({ min: -10, max: 10, noNaN: true }),
+          ),
+        ),
+        { minLength: 1, maxLength: 3 },
+      );
+      fc.assert(
+        fc.property(mutation, (changes) => {
+          cases++;
+          const mutated = changes.reduce<unknown>((acc, [i, n]) => setAt(acc, paths[i]!, n), fixture);
+          const parsed = inputSchema.safeParse(mutated);
+          if (!parsed.success) return;
+          let result: unknown;
+          try {
+            result = calculate(parsed.data as never);
+          } catch (err) {
+            expect(err).toBeInstanceOf(CalcInputError);
+            expect((err as CalcInputError).field.length).toBeGreaterThan(0);
+            return;
+          }
+          expect(allFinite(result), 'every number in the result is finite').toBe(true);
+          expect(resultSchema.safeParse(result).success).toBe(true);
+        }),
+        { numRuns: RUNS },
+      );
+    },
+  );
 });

@@ -84,7 +84,8 @@ export type SubmittalListFilter = { status: string | null };
 export const submittalKeys = {
   all: ['submittals'] as const,
   lists: () => [...submittalKeys.all, 'list'] as const,
-  list: (projectId: string, filter: SubmittalListFilter) => [...submittalKeys.lists(), projectId, filter] as const,
+  list: (projectId: string, filter: SubmittalListFilter) =>
+    [...submittalKeys.lists(), projectId, filter] as const,
   details: () => [...submittalKeys.all, 'detail'] as const,
   detail: (submittalId: string) => [...submittalKeys.details(), submittalId] as const,
 };

@@ -71,7 +71,9 @@ describe('fuzzing every route with a body', () => {
       await owner.post(`/api/organisations/${params.orgId}/criteria-sets`).send({ name: 'Fuzzed code table' })
     ).body.id;
     params.runId = (
-      await owner.post(`/api/assemblies/${params.assemblyId}/check-runs`).send({ criteriaSetId: params.setId })
+      await owner
+        .post(`/api/assemblies/${params.assemblyId}/check-runs`)
+        .send({ criteriaSetId: params.setId })
     ).body.id;
     params.submittalId = (
       await owner

@@ -108,7 +108,13 @@ const EXPECTED: Record<string, Expectation> = {
   'POST /submittals/:submittalId/submit': SUBMITTING,
   'POST /submittals/:submittalId/review': REVIEWING,
   'POST /submittals/:submittalId/decision': REVIEWING,
-  'POST /submittals/:submittalId/comments': ['owner', 'architect', 'envelope_consultant', 'engineer', 'subcontractor'],
+  'POST /submittals/:submittalId/comments': [
+    'owner',
+    'architect',
+    'envelope_consultant',
+    'engineer',
+    'subcontractor',
+  ],
 };
 
 /** The firm whose libraries the matrix exercises (Larchmere: owner is its admin; architect and viewer are members). */
@@ -213,7 +219,9 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
       })
     ).body.id;
     // Attaching the run's sheet issues its verification code.
-    const attached = await owner.post(`/api/submittals/${params.submittalId}/sheets`).send({ checkRunId: params.runId });
+    const attached = await owner
+      .post(`/api/submittals/${params.submittalId}/sheets`)
+      .send({ checkRunId: params.runId });
     params.code = attached.body.items[0].sheet.verificationCode;
     params.submittalItemId = (
       await owner

@@ -7,8 +7,8 @@ import { type ChildProcess, spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import autocannon from 'autocannon';
 import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import autocannon from 'autocannon';
 
 const DURATION = Number(process.env.BENCH_SECONDS ?? 20);
 const CONNECTIONS = 50;
@@ -45,7 +45,10 @@ start(['--import', 'tsx', 'server/index.ts'], {
   ...(databaseUrl ? { DATABASE_URL: databaseUrl } : {}),
 });
 start(
-  ['-e', "const e=require('express');const a=e();a.get('/empty',(q,s)=>s.json({}));a.listen(5402,'127.0.0.1')"],
+  [
+    '-e',
+    "const e=require('express');const a=e();a.get('/empty',(q,s)=>s.json({}));a.listen(5402,'127.0.0.1')",
+  ],
   {},
 );
 const base = 'http://127.0.0.1:5401';
@@ -57,23 +60,43 @@ try {
     body: JSON.stringify({ email: 'architect@skinwright.demo', password: 'skinwright-demo' }),
   });
   if (!signIn.ok) throw new Error(`sign-in failed: ${signIn.status} ${await signIn.text()}`);
-  const cookie = signIn.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
-  const projects = (await (await fetch(`${base}/api/projects`, { headers: { cookie } })).json()) as { projects: { id: string }[] };
+  const cookie = signIn.headers
+    .getSetCookie()
+    .map((c) => c.split(';')[0])
+    .join('; ');
+  const projects = (await (await fetch(`${base}/api/projects`, { headers: { cookie } })).json()) as {
+    projects: { id: string }[];
+  };
   const projectId = projects.projects[0]!.id;
 
   const scenarios: { name: string; opts: autocannon.Options }[] = [
     { name: 'empty Express route', opts: { url: 'http://127.0.0.1:5402/empty' } },
-    { name: 'read: GET /api/projects/:id', opts: { url: `${base}/api/projects/${projectId}`, headers: { cookie } } },
+    {
+      name: 'read: GET /api/projects/:id',
+      opts: { url: `${base}/api/projects/${projectId}`, headers: { cookie } },
+    },
     {
       name: 'calculation: POST /api/v1/calc/thermal',
-      opts: { url: `${base}/api/v1/calc/thermal`, method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(metalPanelWall()) },
+      opts: {
+        url: `${base}/api/v1/calc/thermal`,
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify(metalPanelWall()),
+      },
     },
     {
       name: 'write: PUT /api/me/preferences',
-      opts: { url: `${base}/api/me/preferences`, method: 'PUT', headers: { cookie, 'content-type': 'application/json' }, body: '{"unitSystem":"SI"}' },
+      opts: {
+        url: `${base}/api/me/preferences`,
+        method: 'PUT',
+        headers: { cookie, 'content-type': 'application/json' },
+        body: '{"unitSystem":"SI"}',
+      },
     },
   ];
-  console.log(`Skinwright API load — ${postgres ? 'PostgreSQL server' : 'PGlite'}, ${CONNECTIONS} connections, ${DURATION} s each, Node ${process.version}`);
+  console.log(
+    `Skinwright API load — ${postgres ? 'PostgreSQL server' : 'PGlite'}, ${CONNECTIONS} connections, ${DURATION} s each, Node ${process.version}`,
+  );
   let emptyRps = 0;
   for (const s of scenarios) {
     const r = await autocannon({ ...s.opts, connections: CONNECTIONS, duration: DURATION });
@@ -81,7 +104,7 @@ try {
     if (s.name.startsWith('empty')) emptyRps = rps;
     const errors = r.errors + r.non2xx + r.timeouts;
     console.log(
-      `${s.name.padEnd(42)} ${rps.toFixed(0).padStart(7)} req/s  p50 ${r.latency.p50} ms  p95 ${(r.latency as unknown as Record<string, number>).p97_5 ?? '-'}* ms  p99 ${r.latency.p99} ms  ${(rps / emptyRps * 100).toFixed(0).padStart(4)} % of empty  errors ${errors}`,
+      `${s.name.padEnd(42)} ${rps.toFixed(0).padStart(7)} req/s  p50 ${r.latency.p50} ms  p95 ${(r.latency as unknown as Record<string, number>).p97_5 ?? '-'}* ms  p99 ${r.latency.p99} ms  ${((rps / emptyRps) * 100).toFixed(0).padStart(4)} % of empty  errors ${errors}`,
     );
   }
   console.log('* autocannon reports p97.5 in place of p95.');

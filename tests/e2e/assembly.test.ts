@@ -22,11 +22,17 @@ describe('assembly builder in the browser', () => {
     await signIn(page, server.baseUrl, 'architect@skinwright.demo');
     await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
     await page.getByRole('link', { name: 'Assemblies', exact: true }).click();
-    await page.getByRole('link', { name: /Metal rainscreen on clips and girts/ }).first().click();
+    await page
+      .getByRole('link', { name: /Metal rainscreen on clips and girts/ })
+      .first()
+      .click();
     const live = page.getByTestId('live-Reff');
     await live.waitFor();
     const before = await live.textContent();
-    const clips = page.getByRole('group', { name: /Bridge 1/ }).or(page.getByLabel(/Bridge 1/)).first();
+    const clips = page
+      .getByRole('group', { name: /Bridge 1/ })
+      .or(page.getByLabel(/Bridge 1/))
+      .first();
     const spacing = clips.getByLabel('Horizontal spacing');
     await spacing.fill('400');
     await spacing.blur();

@@ -1,6 +1,9 @@
 import { demoJointSchedule } from '@shared/calc/joints/fixtures';
 import { calculateJointSchedule } from '@shared/calc/joints/joints';
 import { jointScheduleInputSchema, jointScheduleResultSchema } from '@shared/calc/joints/schema';
+import { metalPanelMoistureWall } from '@shared/calc/moisture/fixtures';
+import { calculateMoisture } from '@shared/calc/moisture/monthly';
+import { moistureInputSchema, moistureResultSchema } from '@shared/calc/moisture/schema';
 import { takeoffToCsv } from '@shared/calc/takeoff/csv';
 import { demoElevation } from '@shared/calc/takeoff/fixtures';
 import { takeoffInputSchema, takeoffResultSchema } from '@shared/calc/takeoff/schema';
@@ -43,6 +46,24 @@ export const calcRoutes = [
       ...calcErrors,
     },
     handler: async ({ body }) => calculateThermal(body),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/v1/calc/moisture',
+    summary:
+      'Interstitial condensation by month (ISO 13788 Glaser method) and the interior-surface (mould) check',
+    tag: 'Calculations',
+    access: { kind: 'public' },
+    body: moistureInputSchema,
+    example: metalPanelMoistureWall({ vapourRetarder: false }),
+    responses: {
+      200: {
+        description: 'Month-by-month profile, accumulation, verdict and a trace',
+        schema: moistureResultSchema,
+      },
+      ...calcErrors,
+    },
+    handler: async ({ body }) => calculateMoisture(body),
   }),
   defineRoute({
     method: 'post',

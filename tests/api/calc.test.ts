@@ -1,4 +1,5 @@
 import { demoJointSchedule } from '@shared/calc/joints/fixtures';
+import { metalPanelMoistureWall } from '@shared/calc/moisture/fixtures';
 import { demoElevation } from '@shared/calc/takeoff/fixtures';
 import { demoWindSchedule } from '@shared/calc/wind/fixtures';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -12,6 +13,20 @@ describe('public calculation API', () => {
   });
   afterAll(async () => {
     await t?.close();
+  });
+
+  it('computes the monthly moisture balance and refuses 11 months with the field', async () => {
+    const ok = await t
+      .anonymous()
+      .post('/api/v1/calc/moisture')
+      .send(metalPanelMoistureWall({ vapourRetarder: false }));
+    expect(ok.status).toBe(200);
+    expect(ok.body.interstitial.condensationOccurs).toBe(true);
+    const input = metalPanelMoistureWall();
+    input.months = input.months.slice(0, 11);
+    const bad = await t.anonymous().post('/api/v1/calc/moisture').send(input);
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.months).toBeDefined();
   });
 
   it('computes the wind schedule per zone and refuses a negative speed with the field', async () => {

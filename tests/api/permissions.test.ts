@@ -71,6 +71,7 @@ const EXPECTED: Record<string, Expectation> = {
   'POST /organisations/:orgId/bridge-values': 'firmMember',
   'DELETE /organisations/:orgId/bridge-values/:itemId': 'firmAdmin',
   'POST /v1/calc/thermal': 'public',
+  'POST /v1/calc/moisture': 'public',
   'POST /v1/calc/wind': 'public',
   'POST /v1/calc/joints': 'public',
   'POST /v1/calc/takeoff': 'public',

@@ -258,7 +258,8 @@ export function drawSectionSketch(w: SheetWriter, data: SheetData, fmt: Formatte
     const thickness = b.layer.kind === 'resistance' ? 'declared R' : fmt.thickness(layerThickness(b.layer));
     const text = `${i + 1}   ${thickness}   ${b.layer.name}`;
     let shown = text;
-    while (w.measure(shown, 'sans', 6.6) > w.right - labelX && shown.length > 8) shown = `${shown.slice(0, -2)}…`;
+    while (w.measure(shown, 'sans', 6.6) > w.right - labelX && shown.length > 8)
+      shown = `${shown.slice(0, -2)}…`;
     w.text(shown, labelX, ys[i]!, { size: 6.6 });
   });
 

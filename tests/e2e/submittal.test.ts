@@ -33,10 +33,12 @@ describe('submittals in the browser', () => {
 
     // Setup through the API: a check run of the demo assembly against the demo firm's code table.
     const api = sub.request;
-    const projectId = ((await (await api.get(`${server.baseUrl}/api/projects`)).json()).projects[0] as { id: string })
-      .id;
-    const assemblyId = (await (await api.get(`${server.baseUrl}/api/projects/${projectId}/assemblies`)).json())
-      .assemblies[0].id as string;
+    const projectId = (
+      (await (await api.get(`${server.baseUrl}/api/projects`)).json()).projects[0] as { id: string }
+    ).id;
+    const assemblyId = (
+      await (await api.get(`${server.baseUrl}/api/projects/${projectId}/assemblies`)).json()
+    ).assemblies[0].id as string;
     const sets = (await (await api.get(`${server.baseUrl}/api/projects/${projectId}/criteria-sets`)).json())
       .criteriaSets as { id: string; name: string }[];
     const setId = sets.find((s) => s.name.startsWith('Illustrative example'))!.id;
@@ -50,7 +52,9 @@ describe('submittals in the browser', () => {
     await sub.goto(`${server.baseUrl}/projects/${projectId}`);
     await sub.getByRole('link', { name: 'Submittals', exact: true }).click();
     await sub.getByRole('link', { name: 'New submittal' }).click();
-    await sub.getByRole('textbox', { name: 'Title', exact: true }).fill('Insulated metal wall panels — product data');
+    await sub
+      .getByRole('textbox', { name: 'Title', exact: true })
+      .fill('Insulated metal wall panels — product data');
     await sub.getByLabel(/Marguerite Oyelaran/).check();
     await sub.getByRole('button', { name: 'Create the draft' }).click();
     await sub.waitForURL(/\/submittals\/[0-9a-f-]{36}$/);
@@ -83,7 +87,9 @@ describe('submittals in the browser', () => {
     // Give the browser's PDF viewer a moment to draw the first page in the preview frame.
     await sub.waitForTimeout(1500);
     await screenshot(sub, 'compliance-sheet-page');
-    const verifyHref = await sub.getByRole('link', { name: 'check it as a recipient would' }).getAttribute('href');
+    const verifyHref = await sub
+      .getByRole('link', { name: 'check it as a recipient would' })
+      .getAttribute('href');
 
     // Anyone can verify the code without signing in.
     const anon = await browser.newPage({ viewport: { width: 1100, height: 900 } });
@@ -105,7 +111,10 @@ describe('submittals in the browser', () => {
     await arch.getByLabel(/^✓ Approved — Proceed as submitted/).check();
     await arch.getByRole('button', { name: 'Record the decision' }).click();
     await arch.getByTestId('submittal-status').locator('[data-status="approved"]').waitFor();
-    await arch.getByTestId('decision').getByText(/Marguerite Oyelaran/).waitFor();
+    await arch
+      .getByTestId('decision')
+      .getByText(/Marguerite Oyelaran/)
+      .waitFor();
     await screenshot(arch, 'submittal-approved');
 
     // The subcontractor sees it approved, in the list filtered by status too.

@@ -68,7 +68,7 @@ export function formatter(system: UnitSystem) {
     rValue: (v: number) =>
       ip
         ? withUnit(num(v / R_IP_TO_SI, v / R_IP_TO_SI < 1 ? sig3(v / R_IP_TO_SI) : 1), 'h·ft²·°F/Btu')
-        : withUnit(num(v, v < 0.1 ? sig3(v) : 2), 'm²·K/W'),
+        : withUnit(num(v, v < 0.1 ? Math.min(4, sig3(v)) : 2), 'm²·K/W'),
     uValue: (v: number) =>
       ip ? withUnit(num(v / U_IP_TO_SI, 3), 'Btu/(h·ft²·°F)') : withUnit(num(v, 3), 'W/(m²·K)'),
     lambda: (v: number) =>

@@ -87,7 +87,7 @@ export function drawLayers(w: SheetWriter, data: SheetData, fmt: Formatter): voi
       return [
         String(i + 1),
         layer.name,
-        `${KIND[layer.kind]}, ${drawClass(layer)}`,
+        `${KIND[layer.kind]}\n${drawClass(layer)}`,
         layer.kind === 'resistance' ? '—' : fmt.thickness(layer.thickness),
         layerDetail(layer, fmt),
         r ? fmt.rValue(r.value) : 'not counted',

@@ -201,7 +201,9 @@ export function SubmittalPage() {
 
       <SheetSection n={4} title="Comments" id="comments">
         <CommentList comments={s.comments.filter((c) => c.itemId === null)} />
-        {s.comments.length === 0 ? <p className="text-sm text-ink-muted">No comment yet.</p> : null}
+        {s.comments.every((c) => c.itemId !== null) ? (
+          <p className="text-sm text-ink-muted">No comment on the whole submittal yet.</p>
+        ) : null}
         {mayComment ? (
           <CommentForm submittalId={s.id} itemId={null} label="Comment on the submittal" />
         ) : null}

@@ -91,7 +91,7 @@ export function SubmittalForm({
       <Field label="Title" error={errors.title?.message} required>
         {(c) => <TextInput {...c} {...register('title')} />}
       </Field>
-      <div className="grid gap-4 sm:grid-cols-[10rem_1fr]">
+      <div className="grid gap-4 sm:grid-cols-[13rem_1fr]">
         <Field
           label="Section number"
           hint="MasterFormat, e.g. 07 42 13"

@@ -1,4 +1,5 @@
 import type { CheckRunSummary } from '@shared/schemas/check-runs';
+import { formatVerificationCode, verificationCode } from '@shared/sheets/verification';
 import { Link } from 'react-router';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { VERDICT_TEXT } from '../../../lib/check-format';
@@ -52,7 +53,7 @@ export function PastRuns({
                   {r.counts.pass} met · {r.counts.fail} failed · {r.counts.notEvaluated} not evaluated
                 </span>
               </Td>
-              <Td className="num text-xs">{r.hash.slice(0, 12)}</Td>
+              <Td className="num text-xs">{formatVerificationCode(verificationCode(r.hash))}</Td>
             </tr>
           );
         })}

@@ -1,5 +1,6 @@
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import type { BridgeValue } from '@shared/schemas/assembly';
+import { isInsulation } from '@shared/sheets/layer-class';
 import { type UseFieldArrayReturn, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
@@ -7,7 +8,6 @@ import { Select } from '../../../components/ui/Select';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { fieldDomId } from '../evaluate';
 import { type AssemblyFormValues, type BridgeRole, newBridge, p, useBuilder } from '../form';
-import { isInsulation } from '../layer-class';
 import { formatMeasure } from '../units';
 import { BlockError, MeasureField, TextField, useFieldError } from './FormFields';
 

@@ -1,9 +1,9 @@
 import type { Bridge, Layer, ThermalInput } from '@shared/calc/thermal/schema';
+import { type DrawClass, drawClass, isInsulation } from '@shared/sheets/layer-class';
 import type { UnitSystem } from '@shared/units';
 import { INCH } from '@shared/units';
 import { type ReactNode, useId } from 'react';
 import { useUnitSystem } from '../../../lib/unit-system';
-import { type DrawClass, drawClass, isInsulation } from '../layer-class';
 import { formatMeasure } from '../units';
 
 const INK = '#1e1c19';

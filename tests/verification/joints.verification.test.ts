@@ -1,7 +1,7 @@
 /**
  * Sealant-joint engine vs published sources. Each check names its source (document, edition, page or
  * section) and a tolerance. Tags: [seen] read in the named source; [third-party] seen only in a public
- * transcription (named); [memory] recalled, not re-read — verify before relying on it; "derived" =
+ * reproduction (named); [memory] recalled, not re-read — verify before relying on it; "derived" =
  * computed here from the formula, which tests arithmetic, not the source; "trade practice" = a
  * manufacturer's or handbook's rule of thumb, not a standard.
  */
@@ -65,7 +65,7 @@ describe('Cornell ARCH 262/562 (Ochshorn), fall 2007, Assignment #3 solutions �
 });
 
 describe('Allen, Fundamentals of Building Construction, ch. 10 "Movement Joints in Buildings" exercise', () => {
-  // Source: worked exercise after the chapter 10 sidebar, as transcribed on transtutors.com [third-party]:
+  // Source: worked exercise after the chapter 10 sidebar, as reproduced on transtutors.com [third-party]:
   // brick veneer, vertical expansion joints 24 ft (288 in) o.c., brick temperature change 120 °F,
   // α = 0.0000036 in/in/°F → ΔL = 0.124 in, "or 1/8 in"; class 25 → W = 100(1/8 in)/25 = 1/2 in.
   // The exercise applies the whole range in one direction, which the engine reproduces with installation
@@ -208,7 +208,7 @@ describe('data/reference/thermal-expansion.json against its named tables', () =>
   });
 
   // Source: Aluminum Association, Aluminum Standards and Data, typical average coefficients 68–212 °F
-  // [third-party: tubingchina.com transcription for 3003 and 5005; data-sheet transcriptions citing the AA
+  // [third-party: tubingchina.com reproduction for 3003 and 5005; data-sheet reproductions citing the AA
   // for 6063]. Tolerance ±0.05 × 10⁻⁶/°F (one decimal printed).
   it.each([
     ['aluminium-3003', 12.9],

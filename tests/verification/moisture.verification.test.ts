@@ -1,7 +1,7 @@
 /**
  * Moisture engine vs published sources. Each check names its source (book or handbook, edition,
  * example/table) and a tolerance. Tags: [seen] read in the named source; [third-party] seen only in a public
- * transcription (named); [memory] recalled, not re-read — verify before relying on it; "derived" = computed
+ * reproduction (named); [memory] recalled, not re-read — verify before relying on it; "derived" = computed
  * here from exact definitions or formulas, which tests arithmetic, not the standard.
  */
 
@@ -95,7 +95,7 @@ describe('ASHRAE Handbook—Fundamentals (2017) ch. 1 Table 3, saturation pressu
 
 /*
  * Source for both examples: "Lehrbuch der Bauphysik" (Fischer et al. [memory for the authors]), ch. 13.2.5
- * "Berechnungsbeispiele Tauwassernachweis" — [third-party]: a public GitHub markdown transcription of the
+ * "Berechnungsbeispiele Tauwassernachweis" — [third-party]: a public GitHub markdown reproduction of the
  * chapter ("Lehrbuch der Bauphysik — Teil 8", pp. 321–360). The edition is not stated there; its boundary
  * conditions (θ_i 20 °C/50 %, θ_e −5 °C/80 %, 90-day periods, δ₀ = 2×10⁻¹⁰ kg/(m·s·Pa), Rsi 0.25, Rse 0.04,
  * evaporation at p = 1200 Pa with p_sat,c 1700 Pa for walls, 2000 Pa for roofs) are those of DIN 4108-3:2018,
@@ -142,9 +142,9 @@ function evaporationRate(path: DiffusionPath, plane: number, psatPlane: number):
 }
 
 describe('Lehrbuch der Bauphysik ch. 13.2.5 Beispiel a — light wall, Tab. 13.5 (after the DIN 4108-3 example "leichte Außenwand")', () => {
-  // Layers outside → inside. The vapour retarder's s_d = 2.0 m: the transcription's table shifts its columns
+  // Layers outside → inside. The vapour retarder's s_d = 2.0 m: the reproduction's table shifts its columns
   // (μ 5·10⁵, s_d 40 000) but its s_d,T = 5.01 m fixes it at 5.01 − 1.90 − 0.16 − 0.95 = 2.0 m, which is also
-  // d = 0.05 mm × μ 40 000 in a public R package's transcription of the same DIN example [third-party].
+  // d = 0.05 mm × μ 40 000 in a public R package's reproduction of the same DIN example [third-party].
   const a = winterCase([
     { resistance: 0.019 / 0.127, sd: 0.019 * 100, layer: 0, divisible: true }, // chipboard V100
     { resistance: 0.16 / 0.04, sd: 0.16 * 1, layer: 1, divisible: true }, // mineral wool

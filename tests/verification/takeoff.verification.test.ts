@@ -1,6 +1,6 @@
 /**
  * Takeoff arithmetic vs published definitions. Each check names its source and a tolerance. Tags: [seen]
- * read in the named source; [third-party] seen only in a public transcription (named); [memory] recalled;
+ * read in the named source; [third-party] seen only in a public reproduction (named); [memory] recalled;
  * "derived" = computed here from exact definitions or plane geometry, which tests arithmetic, not a source.
  */
 

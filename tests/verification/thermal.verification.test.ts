@@ -1,7 +1,7 @@
 /**
  * Thermal engine vs published sources. Each check names its source (standard or handbook, edition,
  * clause/table/example) and a tolerance. Tags: [seen] read in the named source; [third-party] seen only in a
- * public transcription (named); [memory] recalled, not re-read — verify before relying on it; "derived" =
+ * public reproduction (named); [memory] recalled, not re-read — verify before relying on it; "derived" =
  * computed here from exact definitions or formulas, which tests arithmetic, not the standard.
  */
 
@@ -67,7 +67,7 @@ describe('Scottish Technical Handbook annex 6.B.2 — timber framed wall by the 
   // calculations using the combined method" (BS EN ISO 6946), 6.B.2 timber framed wall example: brick
   // 0.132, cavity 0.180, sheathing 0.069, mineral wool 3.500 (85 %) / timber studs 1.167 (15 %) over 140 mm,
   // plasterboard 0.060, Rse 0.04, Rsi 0.13; published R_upper 3.435, R_lower 3.304, U = 0.30 W/(m²·K)
-  // [third-party: transcribed in a public repository's "The Combined Method…" note; the annex's own text is
+  // [third-party: reproduced in a public repository's "The Combined Method…" note; the annex's own text is
   // in the pages corpus at scotland.gov.uk]. Layer resistances are entered exactly as tabulated.
   const example = calculateThermal(
     wall([

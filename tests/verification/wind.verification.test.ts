@@ -1,7 +1,7 @@
 /**
  * Wind (components and cladding, walls) vs published sources. Each check names its source (standard, edition,
  * table/figure/example) and a tolerance. Tags: [seen] read in the named source; [third-party] seen only in a
- * public transcription (named); [memory] recalled, not re-read — verify before relying on it; "derived" =
+ * public reproduction (named); [memory] recalled, not re-read — verify before relying on it; "derived" =
  * computed here from exact definitions or formulas, which tests arithmetic, not the standard.
  */
 
@@ -15,7 +15,7 @@ import { describe, expect, it } from 'vitest';
 const FT2 = FOOT * FOOT;
 
 describe('ASCE 7-16 Table 26.10-1 — velocity pressure exposure coefficients K_z', () => {
-  // Source: ASCE/SEI 7-16 Table 26.10-1 [memory]; the same 66 cells are transcribed identically in two public
+  // Source: ASCE/SEI 7-16 Table 26.10-1 [memory]; the same 66 cells are reproduced identically in two public
   // repositories (a TypeScript wind-load module citing "ASCE 7-16 Table 26.10-1" and a Python wind module)
   // [third-party]. The engine evaluates the table's note-1 formula, which differs from the printed cells by at
   // most 0.008 over all 66 cells (the table is not a plain rounding of the formula). Tolerance ±0.01.
@@ -44,7 +44,7 @@ describe('ASCE 7-16 Table 26.10-1 — velocity pressure exposure coefficients K_
     ).toBeLessThanOrEqual(0.01);
   });
 
-  // Source: ASCE/SEI 7-16 Table 26.10-1, row "0–15 ft" [memory + the same transcriptions]. Tolerance ±0.01.
+  // Source: ASCE/SEI 7-16 Table 26.10-1, row "0–15 ft" [memory + the same reproductions]. Tolerance ±0.01.
   it('below 15 ft K_z keeps its 15 ft value (exposure C, 10 ft → 0.85)', () => {
     expect(
       Math.abs(velocityPressureExposureCoefficient('ASCE 7-16', 'C', 10 * FOOT) - 0.85),
@@ -69,7 +69,7 @@ describe('ASCE 7-16 Table 26.9-1 — ground elevation factor K_e', () => {
 });
 
 describe('ASCE 7-16/7-22 Figure 30.3-1 — wall GC_p, h ≤ 60 ft', () => {
-  // Source: ASCE/SEI 7-16 Figure 30.3-1 [memory + third-party: the same breakpoints are transcribed in three public
+  // Source: ASCE/SEI 7-16 Figure 30.3-1 [memory + third-party: the same breakpoints are reproduced in three public
   // repositories — a C# ASCE 7-10 Figure 30.4-1 module, a Python ASCE 7-22 coefficient file (as log-linear
   // equations) and a Python ASCE 7-22 test harness]. Exact as printed (one decimal), tolerance 1e-12.
   it.each([
@@ -85,7 +85,7 @@ describe('ASCE 7-16/7-22 Figure 30.3-1 — wall GC_p, h ≤ 60 ft', () => {
 });
 
 describe('ASCE 7-16 Figure 30.5-1 / 7-22 Figure 30.4-1 — wall GC_p, h > 60 ft', () => {
-  // Source: recalled [memory — conflicting transcriptions; verify]. One public C# module (ASCE 7-10 Figure 30.6-1)
+  // Source: recalled [memory — conflicting reproductions; verify]. One public C# module (ASCE 7-10 Figure 30.6-1)
   // has the same six values but 10/500 ft² breakpoints on a linear area scale; one public ASCE 7-22 harness has
   // zone 4 −1.0 at 10 ft². These checks pin the recalled values only; they do not confirm the standard.
   it.each([
@@ -119,7 +119,7 @@ const pnet30Site = (Vmph: number): WindSite => ({
 describe('ASCE 7-16 Figure 30.4-1 — published net wall pressures p_net30, end to end', () => {
   // Source: ASCE/SEI 7-16 Figure 30.4-1 (chapter 30, part 2), table "Net design wind pressure p_net30 (psf),
   // exposure B, h = 30 ft, K_zt = 1.0", wall zones 4 and 5, effective areas 10/20/50/100 ft², V = 95–130 mph
-  // [third-party: cells transcribed "from the physical book" in a public repository's regression test of an
+  // [third-party: cells reproduced "from the physical book" in a public repository's regression test of an
   // ASCE 7-22 windows-and-doors engine]. These tabulated pressures are the part 1 method worked out by ASCE:
   // q_h (Eq. 26.10-1) × [(GC_p of Figure 30.3-1) ∓ 0.18]. The printed wall rows carry no 10 % low-slope
   // reduction (the numbers show it), so the site here has θ = 20°. The table prints the computed pressure; the
@@ -245,7 +245,7 @@ describe('ASCE 7-16 Figure 30.4-1 — published net wall pressures p_net30, end 
 describe('ASCE 7-22 — velocity pressure from published worked examples', () => {
   // Source: "Wind Loads: Guide to the Wind Load Provisions of ASCE 7-22" (Stafford & Reinhold, ASCE Press),
   // Example 6.1 "Commercial Building with a Flat Roof": h = 15 ft, exposure C, V = 148 mph, K_zt = 1.0,
-  // K_e = 1.0, K_h = 0.85, q_h = 47.7 psf without K_d [third-party: inputs and results transcribed in a public
+  // K_e = 1.0, K_h = 0.85, q_h = 47.7 psf without K_d [third-party: inputs and results reproduced in a public
   // repository's validation report]. Tolerance: K_h ±0.005 (two decimals), q_h ±0.1 psf (printed to 0.1 psf).
   const guide: WindSite = {
     edition: 'ASCE 7-22',

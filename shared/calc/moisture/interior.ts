@@ -5,7 +5,7 @@ import type { Interior } from './schema';
 /*
  * Interior design conditions of ISO 13788:2012 Annex A: a humidity class gives the vapour pressure excess
  * Δp over the exterior as a function of the monthly exterior temperature; a factor (1.10) is put on Δp.
- * Values recalled from the standard [memory]; classes 1–4 also match a public transcription of the 2001
+ * Values recalled from the standard [memory]; classes 1–4 also match a public reproduction of the 2001
  * edition's Annex A (pachi/condensaciones, psicrom.py) [third-party].
  */
 

@@ -7,9 +7,9 @@ import type { Enclosure, WallZone, WindEdition } from './schema';
  * ASCE/SEI 7-16 and 7-22 chapter 30. The figures are drawn against the effective wind area in ft², straight lines
  * in log₁₀A between two breakpoints and flat outside them.
  *
- * Provenance: h ≤ 60 ft curves [memory + third-party: three public transcriptions agree, and the values reproduce
+ * Provenance: h ≤ 60 ft curves [memory + third-party: three public reproductions agree, and the values reproduce
  * the published ASCE 7-16 Figure 30.4-1 pressure table — see the verification suite]. h > 60 ft curves [memory;
- * conflicting public transcriptions: one gives zone 4 −1.0 at 10 ft² for 7-22, another uses 10/500 ft²
+ * conflicting public reproductions: one gives zone 4 −1.0 at 10 ft² for 7-22, another uses 10/500 ft²
  * breakpoints for all curves] — verify against Figure 30.5-1 (7-16) / 30.4-1 (7-22) before relying on them.
  */
 

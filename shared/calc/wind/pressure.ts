@@ -167,11 +167,11 @@ export function analyseSite(site: WindSite): SiteAnalysis {
     warnings.push('The mean roof height lies above the gradient height z_g; K_z is held at its value at z_g');
   if (!lowRise)
     warnings.push(
-      `h > 60 ft: the wall coefficients of ${figure} are recalled, and public transcriptions of that figure conflict — verify the GC_p breakpoints against the standard before issuing`,
+      `h > 60 ft: the wall coefficients of ${figure} are recalled, and public reproductions of that figure conflict — verify the GC_p breakpoints against the standard before issuing`,
     );
   if (edition === 'ASCE 7-22' && exposure === 'B' && Math.min(z, h) < 30 * FOOT)
     warnings.push(
-      'ASCE 7-22, exposure B below 30 ft: K_z is floored at 15 ft here; one public transcription of Table 26.10-1 floors it at 30 ft (K_z ≈ 0.70), which gives higher pressures — check the table notes',
+      'ASCE 7-22, exposure B below 30 ft: K_z is floored at 15 ft here; one public reproduction of Table 26.10-1 floors it at 30 ft (K_z ≈ 0.70), which gives higher pressures — check the table notes',
     );
   if (site.roofSlopeDeg <= LOW_SLOPE_LIMIT_DEG && lowRise)
     warnings.push(

@@ -6,8 +6,8 @@ import type { Exposure, WindEdition } from './schema';
  * K_z and K_e formulas are evaluated in feet, as the standard writes them.
  *
  * Provenance (tags as in the verification suite): 7-16 exposure constants and the K_z footnote formula [memory;
- * two public transcriptions of Table 26.10-1 reproduce within 0.008]; 7-22 constants α/z_g [third-party: two
- * independent public transcriptions of Table 26.11-1 agree; a third gives α = 7.0 for B]; 7-22 K_z coefficient
+ * two public reproductions of Table 26.10-1 reproduce within 0.008]; 7-22 constants α/z_g [third-party: two
+ * independent public reproductions of Table 26.11-1 agree; a third gives α = 7.0 for B]; 7-22 K_z coefficient
  * 2.41 and the 15 ft floor [third-party]; K_e footnote formula [third-party]; K_d = 0.85 [memory + third-party].
  */
 

@@ -93,10 +93,11 @@ function dewPointIso13788(p: number): number {
 
 /** Newton iteration on ln p_ws(θ) = ln p, started from the ISO inverse (converges in 2–3 steps). */
 function dewPointHylandWexler(p: number): number {
+  // A relative slack of 1e-12 absorbs floating-point rounding at the ends of the range.
   if (
     !(
-      p >= saturationPressureHylandWexler(HYLAND_WEXLER_MIN) &&
-      p <= saturationPressureHylandWexler(HYLAND_WEXLER_MAX)
+      p >= saturationPressureHylandWexler(HYLAND_WEXLER_MIN) * (1 - 1e-12) &&
+      p <= saturationPressureHylandWexler(HYLAND_WEXLER_MAX) * (1 + 1e-12)
     )
   )
     throw new CalcInputError(

@@ -1,18 +1,28 @@
 import { projectRoleSchema } from '@shared/auth/permissions';
 import { assemblyInputSchema } from '@shared/schemas/assembly';
+import { attachmentProductInputSchema } from '@shared/schemas/attachment-library';
 import { criteriaSetCreateSchema } from '@shared/schemas/criteria';
 import { projectClimateSchema, projectInputSchema, projectWindSchema } from '@shared/schemas/project';
 import { eq } from 'drizzle-orm';
 import { z } from 'zod';
 import demo from '../../data/seed/demo.json' with { type: 'json' };
 import demoAssembly from '../../data/seed/demo-assembly.json' with { type: 'json' };
+import demoAttachmentLibrary from '../../data/seed/demo-attachment-library.json' with { type: 'json' };
 import demoCriteria from '../../data/seed/demo-criteria.json' with { type: 'json' };
 import type { Auth } from '../auth/auth';
 import { createAssemblyService } from '../services/assemblies';
 import { createCriteriaService } from '../services/criteria';
+import { attachmentProductRow } from '../services/library';
 import { createProjectService } from '../services/projects';
 import type { Db } from './client';
-import { organisationMembers, organisations, projectMembers, projects as projectTable, user } from './schema';
+import {
+  organisationMembers,
+  organisations,
+  orgAttachmentProducts,
+  projectMembers,
+  projects as projectTable,
+  user,
+} from './schema';
 
 const demoSchema = z.object({
   password: z.string().min(10),
@@ -46,6 +56,11 @@ const demoContent = z
 const demoCodeTable = z
   .object({ firm: z.string(), createdBy: z.email(), set: criteriaSetCreateSchema })
   .parse(demoCriteria);
+
+/** The engineer's firm's panel tables and clips (invented, named as such). */
+const demoLibrary = z
+  .object({ firm: z.string(), createdBy: z.email(), products: z.array(attachmentProductInputSchema) })
+  .parse(demoAttachmentLibrary);
 
 /** The demo sign-in accounts, as `npm start` prints them and the README lists them. */
 export const demoAccounts = demoScenario.users.map((u) => ({
@@ -103,6 +118,11 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
     userIds.get(demoCodeTable.createdBy)!,
     demoCodeTable.set,
     'admin',
+  );
+  await db.insert(orgAttachmentProducts).values(
+    demoLibrary.products.map((p) =>
+      attachmentProductRow(firmIds.get(demoLibrary.firm)!, userIds.get(demoLibrary.createdBy)!, p),
+    ),
   );
   return true;
 }

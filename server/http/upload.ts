@@ -1,3 +1,4 @@
+import type { Readable } from 'node:stream';
 import { UPLOAD_LIMITS } from '@shared/schemas/submittals';
 import type { Request, Response } from 'express';
 import multer from 'multer';
@@ -71,4 +72,34 @@ export function readUpload(req: Request, res: Response): Promise<UploadedFile[]>
       resolve(files.map((f) => ({ originalName: f.originalname, bytes: f.buffer })));
     });
   });
+}
+
+export interface StoredFile {
+  body: Readable;
+  name: string;
+  contentType: string;
+  size: number | undefined;
+}
+
+/**
+ * Streams a stored file back byte for byte as a download: its detected type, its sanitised name, never
+ * cached and never rendered as a page of ours, whatever it contains.
+ */
+export async function sendStoredFile(res: Response, f: StoredFile): Promise<undefined> {
+  res.attachment(f.name);
+  res.status(200).set({
+    'Content-Type': f.contentType,
+    'Cache-Control': 'private, no-store',
+    'Content-Security-Policy': "default-src 'none'; sandbox",
+    ...(f.size !== undefined ? { 'Content-Length': String(f.size) } : {}),
+  });
+  await new Promise<void>((resolve, reject) => {
+    f.body.on('error', (err) => {
+      res.destroy(err);
+      reject(err);
+    });
+    res.on('close', resolve);
+    f.body.pipe(res);
+  });
+  return undefined;
 }

@@ -4,9 +4,14 @@ import {
   orgMaterialInputSchema,
   orgMaterialSchema,
 } from '@shared/schemas/assembly';
+import {
+  attachmentProductInputSchema,
+  attachmentProductSchema,
+} from '@shared/schemas/attachment-library';
 import { apiErrorSchema } from '@shared/schemas/common';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
+import { readUpload, sendStoredFile } from '../http/upload';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const itemParams = orgParams.extend({ itemId: z.uuid() });
@@ -106,6 +111,96 @@ export const libraryRoutes = [
     responses: { 204: { description: 'Removed' }, ...errors },
     handler: async ({ params, services }) => {
       await services.library.remove('bridge', params.orgId, params.itemId);
+      return undefined;
+    },
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/organisations/:orgId/attachment-products',
+    summary: 'The firm’s panel load–span tables and clip capacities for the wind check',
+    tag: 'Libraries',
+    access: { kind: 'organisation', role: 'member' },
+    params: orgParams,
+    responses: {
+      200: {
+        description: 'Panel tables and clips',
+        schema: z.object({ products: z.array(attachmentProductSchema) }),
+      },
+      ...errors,
+    },
+    handler: async ({ params, services }) => ({
+      products: await services.library.attachmentProducts(params.orgId),
+    }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/organisations/:orgId/attachment-products',
+    summary:
+      'Add a panel load–span table (kind "panel") or a clip capacity (kind "clip") with its source; ASD values in SI',
+    tag: 'Libraries',
+    access: { kind: 'organisation', role: 'member' },
+    params: orgParams,
+    body: attachmentProductInputSchema,
+    example: {
+      kind: 'panel',
+      name: 'Example 75 mm insulated panel, 0.5 mm skins',
+      source: 'Maker data sheet, rev. 2 (example)',
+      notes: '',
+      panelModuleWidth: 1.0,
+      loadSpanTable: {
+        spanCondition: 'double',
+        deflectionLimit: 'L/180',
+        rows: [
+          { span: 1.5, allowableInward: 3000, allowableOutward: 2600 },
+          { span: 2.5, allowableInward: 1800, allowableOutward: 1500 },
+        ],
+      },
+    },
+    responses: { 201: { description: 'The entry', schema: attachmentProductSchema }, ...errors },
+    handler: ({ params, body, user, services }) =>
+      services.library.addAttachmentProduct(params.orgId, user!.id, body),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/organisations/:orgId/attachment-products/:itemId/data-sheet',
+    summary:
+      'Upload the maker’s data sheet of an entry (multipart/form-data, field "files", one PDF, PNG or JPEG by content); replaces the one before',
+    tag: 'Libraries',
+    access: { kind: 'organisation', role: 'member' },
+    params: itemParams,
+    responses: {
+      201: { description: 'The entry with its data sheet', schema: attachmentProductSchema },
+      ...errors,
+      413: { description: 'The file is too large', schema: apiErrorSchema },
+      415: { description: 'Not multipart, or not a PDF, PNG or JPEG by content', schema: apiErrorSchema },
+    },
+    handler: async ({ req, res, params, services }) =>
+      services.library.uploadDataSheet(params.orgId, params.itemId, await readUpload(req, res)),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/organisations/:orgId/attachment-products/:itemId/data-sheet',
+    summary: 'Download the data sheet of an entry, byte for byte',
+    tag: 'Libraries',
+    access: { kind: 'organisation', role: 'member' },
+    params: itemParams,
+    responses: {
+      200: { description: 'The file', contentType: 'application/octet-stream', schema: z.string() },
+      ...errors,
+    },
+    handler: async ({ params, res, services }) =>
+      sendStoredFile(res, await services.library.dataSheet(params.orgId, params.itemId)),
+  }),
+  defineRoute({
+    method: 'delete',
+    path: '/organisations/:orgId/attachment-products/:itemId',
+    summary: 'Remove an entry and its data sheet (assemblies keep the values they took from it)',
+    tag: 'Libraries',
+    access: { kind: 'organisation', role: 'admin' },
+    params: itemParams,
+    responses: { 204: { description: 'Removed' }, ...errors },
+    handler: async ({ params, services }) => {
+      await services.library.removeAttachmentProduct(params.orgId, params.itemId);
       return undefined;
     },
   }),

@@ -14,7 +14,7 @@ import {
 } from '@shared/schemas/submittals';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
-import { readUpload } from '../http/upload';
+import { readUpload, sendStoredFile } from '../http/upload';
 import type { Services } from '../services';
 
 const errors = {
@@ -185,26 +185,8 @@ export const submittalRoutes = [
       200: { description: 'The file', contentType: 'application/octet-stream', schema: z.string() },
       ...errors,
     },
-    handler: async ({ params, res, services }) => {
-      const f = await services.submittals.file(params.submittalId, params.submittalItemId);
-      res.attachment(f.name);
-      res.status(200).set({
-        'Content-Type': f.contentType,
-        'Cache-Control': 'private, no-store',
-        // Never rendered as a page of ours, whatever it contains.
-        'Content-Security-Policy': "default-src 'none'; sandbox",
-        ...(f.size !== undefined ? { 'Content-Length': String(f.size) } : {}),
-      });
-      await new Promise<void>((resolve, reject) => {
-        f.body.on('error', (err) => {
-          res.destroy(err);
-          reject(err);
-        });
-        res.on('close', resolve);
-        f.body.pipe(res);
-      });
-      return undefined;
-    },
+    handler: async ({ params, res, services }) =>
+      sendStoredFile(res, await services.submittals.file(params.submittalId, params.submittalItemId)),
   }),
   defineRoute({
     method: 'post',

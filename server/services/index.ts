@@ -46,7 +46,7 @@ export function createServices(
     projects: createProjectService(db),
     members: createMemberService(db, config, mailer),
     assemblies: createAssemblyService(db),
-    library: createLibraryService(db),
+    library: createLibraryService(db, storage),
     criteria,
     checkRuns,
     sheets,

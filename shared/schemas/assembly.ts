@@ -4,6 +4,7 @@ import { vapourSchema } from '../calc/moisture/schema';
 import { takeoffInputSchema } from '../calc/takeoff/schema';
 import { thermalInputSchema, thermalResultSchema } from '../calc/thermal/schema';
 import { panelSchema } from '../calc/wind/schema';
+import { valueSourceSchema } from './attachment-library';
 
 /**
  * Wall categories a code table may key on. The list is deliberately short and generic; criteria sets
@@ -35,8 +36,16 @@ export const attachmentSchema = z.object({
   clipSpacing: z.number().positive().max(10).optional().describe('Design clip spacing along a girt, m'),
 });
 
-/** The panel's wind data for the attachment check; the girt orientation comes from `attachment`. */
-export const windPanelSchema = panelSchema.omit({ girtOrientation: true });
+/**
+ * The panel's wind data for the attachment check; the girt orientation comes from `attachment`. `sources`
+ * says where the load–span table and the clip value came from (shown beside them on the sheet).
+ */
+export const windPanelSchema = panelSchema.omit({ girtOrientation: true }).extend({
+  sources: z
+    .object({ loadSpanTable: valueSourceSchema.optional(), clip: valueSourceSchema.optional() })
+    .optional()
+    .describe('Source of the load–span table and of the clip capacity'),
+});
 
 export const assemblyInputSchema = z
   .object({

@@ -70,6 +70,11 @@ const EXPECTED: Record<string, Expectation> = {
   'GET /organisations/:orgId/bridge-values': 'firmMember',
   'POST /organisations/:orgId/bridge-values': 'firmMember',
   'DELETE /organisations/:orgId/bridge-values/:itemId': 'firmAdmin',
+  'GET /organisations/:orgId/attachment-products': 'firmMember',
+  'POST /organisations/:orgId/attachment-products': 'firmMember',
+  'POST /organisations/:orgId/attachment-products/:itemId/data-sheet': 'firmMember',
+  'GET /organisations/:orgId/attachment-products/:itemId/data-sheet': 'firmMember',
+  'DELETE /organisations/:orgId/attachment-products/:itemId': 'firmAdmin',
   'POST /v1/calc/thermal': 'public',
   'POST /v1/calc/moisture': 'public',
   'POST /v1/calc/wind': 'public',
@@ -208,6 +213,14 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
         .post(`/api/organisations/${params.orgId}/bridge-values`)
         .send(example('POST /organisations/:orgId/bridge-values'))
     ).body.id;
+    params.productId = (
+      await owner
+        .post(`/api/organisations/${params.orgId}/attachment-products`)
+        .send(example('POST /organisations/:orgId/attachment-products'))
+    ).body.id;
+    await owner
+      .post(`/api/organisations/${params.orgId}/attachment-products/${params.productId}/data-sheet`)
+      .attach('files', Buffer.from('%PDF-1.4\n%%EOF\n'), 'data-sheet.pdf');
     // A submittal naming every reviewing role (only named reviewers review), with a sheet and a file.
     const people = (await owner.get(`/api/projects/${params.id}/members`)).body.members as {
       userId: string;
@@ -240,7 +253,11 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
   );
   it.each(ordered.map((r) => [key(r), r] as const))('%s', async (_name, route) => {
     const expected = EXPECTED[key(route)]!;
-    const itemId = route.path.includes('/materials/') ? params.materialId : params.bridgeId;
+    const itemId = route.path.includes('/materials/')
+      ? params.materialId
+      : route.path.includes('/attachment-products/')
+        ? params.productId
+        : params.bridgeId;
     const path = `/api${route.path.replace(/:(\w+)/g, (_m, p: string) => (p === 'itemId' ? itemId : params[p])!)}`;
     const body = BODIES[key(route)]?.(params) ?? route.example ?? {};
     const call = async (agent: { [m: string]: (p: string) => request.Test } | null) => {

@@ -227,6 +227,35 @@ export const orgBridgeValues = pgTable(
 );
 
 /**
+ * A firm's attachment data for the wind check: a panel's load–span table (`kind` panel) or a clip's
+ * allowable load (`kind` clip), the values in `data` (validated by shared/schemas/attachment-library.ts),
+ * with their source and, once uploaded, the maker's data sheet in object storage under `dataSheetKey`.
+ */
+export const orgAttachmentProducts = pgTable(
+  'org_attachment_products',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    organisationId: uuid('organisation_id')
+      .notNull()
+      .references(() => organisations.id, { onDelete: 'cascade' }),
+    kind: text('kind').notNull(),
+    name: text('name').notNull(),
+    source: text('source').notNull(),
+    notes: text('notes').notNull().default(''),
+    data: jsonb('data').notNull(),
+    dataSheetKey: text('data_sheet_key'),
+    dataSheetName: text('data_sheet_name'),
+    dataSheetType: text('data_sheet_type'),
+    dataSheetSize: integer('data_sheet_size'),
+    dataSheetSha256: text('data_sheet_sha256'),
+    dataSheetUploadedAt: timestamp('data_sheet_uploaded_at', { withTimezone: true }),
+    createdBy: text('created_by').references(() => user.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('org_attachment_products_org_idx').on(t.organisationId, t.kind)],
+);
+
+/**
  * A firm's code table ("criteria set"), one row per version. Versions of one table share `lineageId` (the
  * id of version 1). A version used by a stored check run is frozen (`frozenAt`) and never changes again:
  * editing it creates version + 1 with `previousVersionId` pointing back. `revision` counts in-place edits

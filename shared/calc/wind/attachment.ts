@@ -105,7 +105,7 @@ function nonIncreasing(values: readonly number[], column: string): void {
 }
 
 /** Refuse a table that is not a load–span table: fewer than 2 rows, spans not increasing, allowables rising. */
-function tableColumns(table: LoadSpanTable): Columns {
+export function tableColumns(table: LoadSpanTable): Columns {
   const rows = table.rows;
   if (rows.length < 2) throw new CalcInputError('panel.loadSpanTable.rows', 'needs at least two rows');
   const withDeflection = rows.filter((r) => r.allowableDeflectionPressure !== undefined).length;

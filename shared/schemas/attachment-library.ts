@@ -1,0 +1,97 @@
+import { z } from 'zod';
+import { tableColumns } from '../calc/wind/attachment';
+import { CalcInputError } from '../calc/errors';
+import { clipSchema, loadSpanTableSchema } from '../calc/wind/schema';
+
+/**
+ * A firm's library of attachment data for the wind check: panel load–span tables and clip capacities, each
+ * with where the values came from (the maker's data sheet or test report, named and dated) and, once
+ * uploaded, the data sheet itself. The attachment sheet of an assembly copies an entry's values and its
+ * source into the assembly (`windPanel.sources`), so a later change to the library never changes a saved
+ * revision.
+ */
+
+const nameSchema = z
+  .string()
+  .trim()
+  .min(1, 'name the product')
+  .max(200)
+  .describe('Product, e.g. "80 mm insulated panel, 0.6 mm skins"');
+const sourceSchema = z
+  .string()
+  .trim()
+  .min(1, 'name the source of the values (data sheet or test report, with its date or revision)')
+  .max(500)
+  .describe('Where the values come from: data sheet or test report, with its date or revision');
+const notesSchema = z.string().trim().max(2000).default('');
+
+/** The engine's own rules for a load–span table (rows, increasing spans, allowables not rising), as zod issues. */
+const checkedTable = loadSpanTableSchema.superRefine((table, ctx) => {
+  try {
+    tableColumns(table);
+  } catch (e) {
+    if (!(e instanceof CalcInputError)) throw e;
+    ctx.addIssue({
+      code: 'custom',
+      path: e.field.replace(/^panel\.loadSpanTable\.?/, '').split('.').filter(Boolean),
+      message: e.reason,
+    });
+  }
+});
+
+export const panelProductInputSchema = z.object({
+  kind: z.literal('panel'),
+  name: nameSchema,
+  source: sourceSchema,
+  notes: notesSchema,
+  loadSpanTable: checkedTable,
+  panelModuleWidth: z
+    .number()
+    .positive()
+    .max(3)
+    .optional()
+    .describe('Panel module width (cover width), m (greater than 0, at most 3)'),
+});
+
+export const clipProductInputSchema = z.object({
+  kind: z.literal('clip'),
+  name: nameSchema,
+  source: sourceSchema,
+  notes: notesSchema,
+  clip: clipSchema,
+});
+
+export const attachmentProductInputSchema = z.discriminatedUnion('kind', [
+  panelProductInputSchema,
+  clipProductInputSchema,
+]);
+
+export const dataSheetSchema = z.object({
+  name: z.string().describe('File name as shown and offered for download'),
+  contentType: z.string().describe('Type detected from the content'),
+  size: z.number().int().describe('Bytes'),
+  sha256: z.string().describe('SHA-256 of the stored bytes, hex'),
+  uploadedAt: z.string(),
+});
+
+const stored = { id: z.uuid(), createdAt: z.string(), dataSheet: dataSheetSchema.nullable() };
+export const attachmentProductSchema = z.discriminatedUnion('kind', [
+  panelProductInputSchema.extend(stored),
+  clipProductInputSchema.extend(stored),
+]);
+
+export type AttachmentProductInput = z.infer<typeof attachmentProductInputSchema>;
+export type AttachmentProduct = z.infer<typeof attachmentProductSchema>;
+export type PanelProduct = Extract<AttachmentProduct, { kind: 'panel' }>;
+export type ClipProduct = Extract<AttachmentProduct, { kind: 'clip' }>;
+export type DataSheet = z.infer<typeof dataSheetSchema>;
+
+/**
+ * Where an assembly's load–span table or clip value came from: the words (always) and the library entry it
+ * was taken from (when it was).
+ */
+export const valueSourceSchema = z.object({
+  text: sourceSchema,
+  productId: z.uuid().optional().describe('The firm library entry the values were taken from'),
+});
+export type ValueSource = z.infer<typeof valueSourceSchema>;

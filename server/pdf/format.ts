@@ -6,6 +6,7 @@ import {
   FOOT,
   INCH,
   K_IP_TO_SI,
+  LBF_TO_N,
   LB_PER_FT2_TO_KG_PER_M2,
   MPH_TO_MS,
   PSF_TO_PA,
@@ -79,6 +80,7 @@ export function formatter(system: UnitSystem) {
     psi: (v: number) =>
       ip ? withUnit(num(v / PSI_IP_TO_SI, 4), 'Btu/(h·ft·°F)') : withUnit(num(v, 4), 'W/(m·K)'),
     pressure: (pa: number) => (ip ? withUnit(num(pa / PSF_TO_PA, 1), 'psf') : withUnit(num(pa, 0), 'Pa')),
+    force: (n: number) => (ip ? withUnit(num(n / LBF_TO_N, 0), 'lbf') : withUnit(num(n, 0), 'N')),
     speed: (ms: number) => (ip ? withUnit(num(ms / MPH_TO_MS, 0), 'mph') : withUnit(num(ms, 1), 'm/s')),
     accumulation: (kg: number) =>
       ip ? withUnit(num(kg / LB_PER_FT2_TO_KG_PER_M2, 4), 'lb/ft²') : withUnit(num(kg, 3), 'kg/m²'),

@@ -1,5 +1,6 @@
 import type { Vapour } from '@shared/calc/moisture/schema';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
+import { SPAN_CONDITION_WORDS } from '@shared/calc/wind/attachment';
 import { drawClass } from '@shared/sheets/layer-class';
 import { type Formatter, MONTHS, num } from './format';
 import type { Cell, SheetWriter } from './layout';
@@ -121,6 +122,49 @@ export function drawLayers(w: SheetWriter, data: SheetData, fmt: Formatter): voi
     ],
     4,
     7.6,
+  );
+  drawWindPanel(w, data, fmt);
+}
+
+/** The panel's load–span table and the clip capacity the wind check read, each with its source. */
+function drawWindPanel(w: SheetWriter, data: SheetData, fmt: Formatter): void {
+  const panel = data.run.inputs.assembly.input.windPanel;
+  if (!panel) return;
+  const table = panel.loadSpanTable;
+  const clip = panel.clip;
+  const hasDeflection = table.rows.every((r) => r.allowableDeflectionPressure !== undefined);
+  w.caption('Panel load–span table (ASD allowables) and clip capacity');
+  w.fields(
+    [
+      ['Span condition', SPAN_CONDITION_WORDS[table.spanCondition]],
+      ['Deflection column', hasDeflection ? table.deflectionLimit : 'none'],
+      ['Module width', fmt.length(panel.panelModuleWidth)],
+      [
+        'Clip capacity P',
+        'allowableLoad' in clip
+          ? `${fmt.force(clip.allowableLoad)} (rated)`
+          : `${clip.fastenersPerClip} × ${fmt.force(clip.fastenerCapacity)} = ${fmt.force(clip.fastenersPerClip * clip.fastenerCapacity)}`,
+      ],
+      ['Source of the table', panel.sources?.loadSpanTable?.text ?? 'not named'],
+      ['Source of the clip value', panel.sources?.clip?.text ?? 'not named'],
+    ],
+    2,
+    7.6,
+  );
+  w.table(
+    [
+      { header: 'Span', align: 'right' },
+      { header: 'Allowable inward', align: 'right' },
+      { header: 'Allowable outward', align: 'right' },
+      ...(hasDeflection ? [{ header: `Pressure at ${table.deflectionLimit}`, align: 'right' as const }] : []),
+    ],
+    table.rows.map((r) => [
+      fmt.length(r.span),
+      fmt.pressure(r.allowableInward),
+      fmt.pressure(r.allowableOutward),
+      ...(r.allowableDeflectionPressure !== undefined ? [fmt.pressure(r.allowableDeflectionPressure)] : []),
+    ]),
+    { size: 7.2 },
   );
 }
 

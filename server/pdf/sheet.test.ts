@@ -49,6 +49,21 @@ describe('the compliance sheet renderer', () => {
       expect(text, ch).toContain(ch);
     expect(text).toContain('aid to — never a substitute for — the licensed professional of record');
   });
+
+  it('prints the panel’s load–span table and clip capacity with their sources', async () => {
+    const { renderComplianceSheet } = await import('./sheet');
+    const { demoSheetData } = await import('./fixtures');
+    const { readPdf } = await import('../../tests/setup/pdf');
+    const data = demoSheetData('SI');
+    const panel = data.run.inputs.assembly.input.windPanel!;
+    const { text } = await readPdf(renderComplianceSheet(data));
+    const flat = text.replace(/\s+/g, ' ');
+    expect(flat).toContain('PANEL LOAD–SPAN TABLE (ASD ALLOWABLES) AND CLIP CAPACITY');
+    expect(flat).toContain(panel.sources!.loadSpanTable!.text);
+    expect(flat).toContain(panel.sources!.clip!.text);
+    expect(flat).toContain('2 × 1150 N = 2300 N');
+    expect(flat).toContain('0.9 m 4690 Pa 4070 Pa 6940 Pa');
+  });
 });
 
 describe('sheet helpers', () => {

@@ -57,6 +57,7 @@ export const libraryKeys = {
   reference: () => [...libraryKeys.all, 'reference-materials'] as const,
   materials: (orgId: string) => [...libraryKeys.all, 'materials', orgId] as const,
   bridgeValues: (orgId: string) => [...libraryKeys.all, 'bridge-values', orgId] as const,
+  attachmentProducts: (orgId: string) => [...libraryKeys.all, 'attachment-products', orgId] as const,
 };
 
 export const criteriaKeys = {

@@ -41,6 +41,13 @@ export const CONTINUITY_FACTOR: Readonly<Record<SpanCondition, number>> = {
   triple: 1.1,
 };
 
+/** The span condition in words, as sheets and libraries print it. */
+export const SPAN_CONDITION_WORDS: Readonly<Record<SpanCondition, string>> = {
+  single: 'single span',
+  double: 'two-span',
+  triple: 'three-span',
+};
+
 const M = 'm';
 const PA = 'Pa';
 const N = 'N';

@@ -4,11 +4,38 @@ import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { useAssembly } from '../../features/assemblies/api/get-assembly';
 import { conflictingAssembly, useUpdateAssembly } from '../../features/assemblies/api/update-assembly';
+import {
+  dataSheetHref,
+  useAddAttachmentProduct,
+  useAttachmentProducts,
+} from '../../features/library/api/attachment-products';
+import { useMe } from '../../features/me/api/get-me';
 import { useProject } from '../../features/projects/api/get-project';
 import { AttachmentSheet } from '../../features/wind/components/AttachmentSheet';
+import type { AttachmentLibrary } from '../../features/wind/components/LibraryPick';
 import { errorMessage } from '../../lib/api';
 import { assemblyKeys } from '../../lib/query-keys';
 import { AssemblyTabs } from '../layout/AssemblyTabs';
+
+/**
+ * The firm library of panel tables and clips offered on the sheet: the person's firm that owns the project if
+ * they belong to it, else their first firm (composed here so that the wind and library features stay apart).
+ */
+function useAttachmentLibrary(organisationId: string | undefined): AttachmentLibrary | null {
+  const orgs = useMe().data?.organisations ?? [];
+  const org = orgs.find((o) => o.id === organisationId) ?? orgs[0];
+  const products = useAttachmentProducts(org?.id);
+  const add = useAddAttachmentProduct();
+  if (!org) return null;
+  return {
+    orgId: org.id,
+    firmName: org.name,
+    products: products.data ?? [],
+    dataSheetHref: (productId) => dataSheetHref(org.id, productId),
+    save: (input) => add.mutateAsync({ orgId: org.id, input }),
+    errorText: errorMessage,
+  };
+}
 
 /** The attachment (wind) sheet of one assembly: girt and clip spacing per wall zone from the panel's table. */
 export function AssemblyAttachmentPage() {
@@ -17,6 +44,7 @@ export function AssemblyAttachmentPage() {
   const assembly = useAssembly(assemblyId);
   const qc = useQueryClient();
   const update = useUpdateAssembly();
+  const library = useAttachmentLibrary(project?.organisationId);
 
   if (!project) return null;
   if (assembly.isPending) return <Loading what="Loading the assembly" />;
@@ -33,6 +61,7 @@ export function AssemblyAttachmentPage() {
         key={a.id}
         project={project}
         assembly={a}
+        library={library}
         save={(args) => update.mutateAsync(args)}
         conflictOf={conflictingAssembly}
         onLoadTheirs={(theirs) => {

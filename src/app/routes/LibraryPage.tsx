@@ -4,11 +4,13 @@ import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
 import { Select } from '../../components/ui/Select';
+import { useAttachmentProducts } from '../../features/library/api/attachment-products';
 import { useBridgeValues } from '../../features/library/api/get-bridge-values';
 import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
 import { useReferenceMaterials } from '../../features/library/api/get-reference-materials';
 import { AddBridgeValueForm } from '../../features/library/components/AddBridgeValueForm';
 import { AddFirmMaterialForm } from '../../features/library/components/AddFirmMaterialForm';
+import { AttachmentProductsTable } from '../../features/library/components/AttachmentProductsTable';
 import {
   BridgeValuesTable,
   FirmMaterialsTable,
@@ -25,6 +27,7 @@ export function LibraryPage() {
   const org = orgs.find((o) => o.id === chosen) ?? orgs[0];
   const materials = useFirmMaterials(org?.id);
   const bridgeValues = useBridgeValues(org?.id);
+  const products = useAttachmentProducts(org?.id);
   const isAdmin = org?.role === 'admin';
 
   return (
@@ -33,7 +36,7 @@ export function LibraryPage() {
       <PageHeader
         eyebrow="Reference"
         title="Library"
-        description="The values the assemblies draw on: generic materials shipped with Skinwright, and your firm's own materials and χ/ψ values — each with where it came from."
+        description="The values the assemblies draw on: generic materials shipped with Skinwright, and your firm's own materials, χ/ψ values, panel load–span tables and clip capacities — each with where it came from."
       />
 
       {orgs.length === 0 ? (
@@ -73,6 +76,26 @@ export function LibraryPage() {
               <BridgeValuesTable orgId={org!.id} values={bridgeValues.data} isAdmin={isAdmin} />
             )}
             {org ? <AddBridgeValueForm orgId={org.id} /> : null}
+          </section>
+
+          <section aria-labelledby="firm-attachment-heading" className="flex flex-col gap-4">
+            <div className="border-b border-ink pb-1">
+              <h2 id="firm-attachment-heading" className="text-2xl">
+                Panel tables and clips — {org?.name}
+              </h2>
+              <p className="text-sm text-ink-muted">
+                The makers’ load–span tables and clip capacities (ASD) for the wind attachment check, each
+                with its source and, once uploaded, the data sheet itself. The Attachment &amp; wind sheet of
+                every assembly offers them. The manufacturer’s current tested values govern.
+              </p>
+            </div>
+            {products.isPending ? (
+              <Loading what="Loading the firm's panel tables and clips" />
+            ) : products.isError ? (
+              <Notice tone="caution" title={errorMessage(products.error)} />
+            ) : (
+              <AttachmentProductsTable orgId={org!.id} products={products.data} isAdmin={isAdmin} />
+            )}
           </section>
 
           <section aria-labelledby="firm-materials-heading" className="flex flex-col gap-4">

@@ -1,10 +1,27 @@
-import { CHI_IP_TO_SI, K_IP_TO_SI, PSI_IP_TO_SI, type UnitSystem } from '@shared/units';
+import {
+  CHI_IP_TO_SI,
+  FOOT,
+  INCH,
+  K_IP_TO_SI,
+  LBF_TO_N,
+  PSF_TO_PA,
+  PSI_IP_TO_SI,
+  type UnitSystem,
+} from '@shared/units';
 
 /** 1 lb/ft³ = 16.018 46 kg/m³ (NIST SP 811 B.9). */
 const LB_FT3_TO_SI = 16.01846;
 
 /** The library's quantities; shown = SI / factor. Stored values stay SI. */
-export type LibraryMeasure = 'conductivity' | 'density' | 'chi' | 'psi';
+export type LibraryMeasure =
+  | 'conductivity'
+  | 'density'
+  | 'chi'
+  | 'psi'
+  | 'pressure'
+  | 'force'
+  | 'span'
+  | 'width';
 
 const SPECS: Record<
   LibraryMeasure,
@@ -18,6 +35,10 @@ const SPECS: Record<
   density: { unit: { SI: 'kg/m³', IP: 'lb/ft³' }, factor: { SI: 1, IP: LB_FT3_TO_SI }, decimals: 2 },
   chi: { unit: { SI: 'W/K', IP: 'Btu/(h·°F)' }, factor: { SI: 1, IP: CHI_IP_TO_SI }, decimals: 4 },
   psi: { unit: { SI: 'W/(m·K)', IP: 'Btu/(h·ft·°F)' }, factor: { SI: 1, IP: PSI_IP_TO_SI }, decimals: 4 },
+  pressure: { unit: { SI: 'kPa', IP: 'psf' }, factor: { SI: 1000, IP: PSF_TO_PA }, decimals: 2 },
+  force: { unit: { SI: 'N', IP: 'lbf' }, factor: { SI: 1, IP: LBF_TO_N }, decimals: 0 },
+  span: { unit: { SI: 'm', IP: 'ft' }, factor: { SI: 1, IP: FOOT }, decimals: 2 },
+  width: { unit: { SI: 'mm', IP: 'in' }, factor: { SI: 0.001, IP: INCH }, decimals: 1 },
 };
 
 export const libraryUnit = (m: LibraryMeasure, system: UnitSystem) => SPECS[m].unit[system];

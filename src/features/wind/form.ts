@@ -1,5 +1,11 @@
 import { clipByFastenersSchema, clipByRatingSchema, type SpanCondition } from '@shared/calc/wind/schema';
 import { type AssemblyInput, windPanelSchema } from '@shared/schemas/assembly';
+import type {
+  AttachmentProductInput,
+  ClipProduct,
+  PanelProduct,
+  ValueSource,
+} from '@shared/schemas/attachment-library';
 import type { z } from 'zod';
 
 /*
@@ -33,6 +39,12 @@ export interface AttachmentFormValues {
   panelModuleWidth: number;
   continuityFactor: number | null;
   deflectionWindFactor: number | null;
+  /** Where the load–span table came from (data sheet, test report); the firm library entry it was taken from. */
+  tableSource: string;
+  tableProductId: string | null;
+  /** Where the clip capacity came from; the firm library entry it was taken from. */
+  clipSource: string;
+  clipProductId: string | null;
 }
 
 export type WindPanel = z.infer<typeof windPanelSchema>;
@@ -71,8 +83,69 @@ export function attachmentFormValues(input: AssemblyInput): AttachmentFormValues
     panelModuleWidth: panel?.panelModuleWidth ?? Number.NaN,
     continuityFactor: panel?.continuityFactor ?? null,
     deflectionWindFactor: panel?.deflectionWindFactor ?? null,
+    tableSource: panel?.sources?.loadSpanTable?.text ?? '',
+    tableProductId: panel?.sources?.loadSpanTable?.productId ?? null,
+    clipSource: panel?.sources?.clip?.text ?? '',
+    clipProductId: panel?.sources?.clip?.productId ?? null,
   };
 }
+
+/** The form's values with a library panel's table (and module width, where the entry gives one) put in. */
+export function withPanelProduct(v: AttachmentFormValues, p: PanelProduct): AttachmentFormValues {
+  const rows = p.loadSpanTable.rows;
+  const hasDeflection = rows.every((r) => r.allowableDeflectionPressure !== undefined);
+  return {
+    ...v,
+    spanCondition: p.loadSpanTable.spanCondition,
+    deflectionLimit: p.loadSpanTable.deflectionLimit,
+    hasDeflection,
+    rows: rows.map((r) => ({
+      ...r,
+      allowableDeflectionPressure: r.allowableDeflectionPressure ?? Number.NaN,
+    })),
+    panelModuleWidth: p.panelModuleWidth ?? v.panelModuleWidth,
+    tableSource: p.source,
+    tableProductId: p.id,
+  };
+}
+
+/** The form's values with a library clip's capacity put in. */
+export function withClipProduct(v: AttachmentFormValues, p: ClipProduct): AttachmentFormValues {
+  const byRating = 'allowableLoad' in p.clip;
+  return {
+    ...v,
+    clipKind: byRating ? 'rating' : 'fasteners',
+    allowableLoad: 'allowableLoad' in p.clip ? p.clip.allowableLoad : v.allowableLoad,
+    fastenerCapacity: 'fastenerCapacity' in p.clip ? p.clip.fastenerCapacity : v.fastenerCapacity,
+    fastenersPerClip: 'fastenersPerClip' in p.clip ? p.clip.fastenersPerClip : v.fastenersPerClip,
+    clipSource: p.source,
+    clipProductId: p.id,
+  };
+}
+
+/**
+ * The table or the clip as a new firm library entry (not yet validated: the server and the schema say what
+ * is missing). `name` is the product's name as the person typed it.
+ */
+export function libraryEntryFrom(
+  v: AttachmentFormValues,
+  kind: 'panel' | 'clip',
+  name: string,
+): Record<string, unknown> & Pick<AttachmentProductInput, 'kind'> {
+  const candidate = panelCandidate(v);
+  return kind === 'panel'
+    ? {
+        kind,
+        name,
+        source: v.tableSource,
+        loadSpanTable: candidate.loadSpanTable,
+        ...(Number.isFinite(v.panelModuleWidth) ? { panelModuleWidth: v.panelModuleWidth } : {}),
+      }
+    : { kind, name, source: v.clipSource, clip: candidate.clip };
+}
+
+const sourceOf = (text: string, productId: string | null): ValueSource | undefined =>
+  text.trim() === '' ? undefined : { text: text.trim(), ...(productId ? { productId } : {}) };
 
 const blank = (v: number | null | undefined) => v == null || Number.isNaN(v);
 
@@ -107,7 +180,17 @@ export function panelCandidate(v: AttachmentFormValues): Record<string, unknown>
     ...(v.continuityFactor === null ? {} : { continuityFactor: v.continuityFactor }),
     ...(v.deflectionWindFactor === null ? {} : { deflectionWindFactor: v.deflectionWindFactor }),
     designLevel: 'ASD',
+    ...sourcesOf(v),
   };
+}
+
+/** `sources` of the saved panel, only for what has a source. */
+function sourcesOf(v: AttachmentFormValues): { sources?: Record<string, ValueSource> } {
+  const table = sourceOf(v.tableSource, v.tableProductId);
+  const clip = sourceOf(v.clipSource, v.clipProductId);
+  return table || clip
+    ? { sources: { ...(table ? { loadSpanTable: table } : {}), ...(clip ? { clip } : {}) } }
+    : {};
 }
 
 /** The panel schema with the clip branch the person chose, so errors name that branch's fields only. */

@@ -84,7 +84,15 @@ export function GenericMaterialsTable({ materials }: { materials: readonly Mater
 }
 
 /** A two-step remove (firm administrators only). */
-function RemoveButton({ what, onRemove, busy }: { what: string; onRemove: () => void; busy: boolean }) {
+export function RemoveButton({
+  what,
+  onRemove,
+  busy,
+}: {
+  what: string;
+  onRemove: () => void;
+  busy: boolean;
+}) {
   const [confirming, setConfirming] = useState(false);
   if (!confirming)
     return (

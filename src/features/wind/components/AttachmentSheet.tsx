@@ -12,6 +12,7 @@ import { formatDateTime } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AttachmentEditingOptions, useAttachmentEditing } from '../use-attachment-editing';
 import { AttachmentSaveBar } from './AttachmentSaveBar';
+import type { AttachmentLibrary } from './LibraryPick';
 import { MissingData } from './MissingData';
 import { DesignSpacingInputs, PanelInputs } from './PanelInputs';
 import { BuildingDimensions, ProjectWindSummary } from './ProjectWindSummary';
@@ -32,6 +33,8 @@ const LEAD_CAUTION = (
 type Props = Omit<AttachmentEditingOptions, 'system' | 'project' | 'assembly'> & {
   project: Project;
   assembly: Assembly;
+  /** The firm library of panel tables and clips offered here (null when the person has no firm). */
+  library: AttachmentLibrary | null;
 };
 
 /**
@@ -40,7 +43,7 @@ type Props = Omit<AttachmentEditingOptions, 'system' | 'project' | 'assembly'> &
  * elevation, the checks at the design spacing and the velocity pressure; the work; the cautions. It recomputes in
  * the browser with the shared engine on every keystroke.
  */
-export function AttachmentSheet({ project, assembly, ...io }: Props) {
+export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
   const system = useUnitSystem();
   const editing = useAttachmentEditing({ project, assembly, system, ...io });
   const { form, values, evaluation, errors, base } = editing;
@@ -100,11 +103,11 @@ export function AttachmentSheet({ project, assembly, ...io }: Props) {
 
       <SheetSection n={3} title="Inputs — panel and clip" id="panel-heading">
         <p className="max-w-prose text-sm text-ink-muted">
-          Enter the maker’s published, tested values of the actual product, gauge and fastener pattern, and
-          check that the table’s span condition matches the girt layout. Name the table you used in the
-          revision note.
+          Enter the maker’s published, tested values of the actual product, gauge and fastener pattern — or
+          take them from your firm’s library — and check that the table’s span condition matches the girt
+          layout. Name the source of each: it is printed beside the values on the compliance sheet.
         </p>
-        <PanelInputs form={form} values={values} errors={errors} disabled={!mayWrite} />
+        <PanelInputs form={form} values={values} errors={errors} disabled={!mayWrite} library={library} />
       </SheetSection>
 
       <SheetSection n={4} title="Method" id="wind-method-heading">

@@ -15,6 +15,7 @@ import { useUnitSystem } from '../../../lib/unit-system';
 import { type AttachmentFormValues, blankRow, windFieldId } from '../form';
 import { SPAN_CONDITION_LABELS } from '../labels';
 import { formatWind, type WindMeasure, windUnit } from '../units';
+import { type AttachmentLibrary, LibraryPick } from './LibraryPick';
 import { WindNumberInput } from './WindNumberInput';
 
 type Path = FieldPath<AttachmentFormValues>;
@@ -114,7 +115,14 @@ export function DesignSpacingInputs({ form, errors, disabled }: Omit<Props, 'val
  * the optional deflection column), span condition and deflection limit, the clip capacity (a rated load, or a
  * fastener capacity × fasteners per clip), the module width and the optional factors.
  */
-export function PanelInputs({ form, values, errors, disabled }: Props) {
+export function PanelInputs({
+  form,
+  values,
+  errors,
+  disabled,
+  library,
+}: Props & { library: AttachmentLibrary | null }) {
+  const pick = { form, values, errors, disabled, library };
   const system = useUnitSystem();
   const rows = useFieldArray({ control: form.control, name: 'rows' });
   const pressureUnit = windUnit('pressure', system);
@@ -194,6 +202,7 @@ export function PanelInputs({ form, values, errors, disabled }: Props) {
 
       <fieldset className="flex flex-col gap-3">
         <legend className="font-serif text-lg font-semibold">Load–span table (ASD allowables)</legend>
+        <LibraryPick kind="panel" {...pick} />
         <div className="flex flex-wrap items-end gap-x-6 gap-y-3">
           <label className="flex items-center gap-2 text-sm">
             <input type="checkbox" {...form.register('hasDeflection')} disabled={disabled} />
@@ -311,6 +320,7 @@ export function PanelInputs({ form, values, errors, disabled }: Props) {
 
       <fieldset className="flex flex-col gap-3">
         <legend className="font-serif text-lg font-semibold">Clip capacity (ASD)</legend>
+        <LibraryPick kind="clip" {...pick} />
         <div className="flex flex-wrap gap-6 text-sm">
           <label className="flex items-center gap-2">
             <input type="radio" value="rating" {...form.register('clipKind')} disabled={disabled} />

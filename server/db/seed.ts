@@ -16,9 +16,9 @@ import { attachmentProductRow } from '../services/library';
 import { createProjectService } from '../services/projects';
 import type { Db } from './client';
 import {
+  orgAttachmentProducts,
   organisationMembers,
   organisations,
-  orgAttachmentProducts,
   projectMembers,
   projects as projectTable,
   user,
@@ -119,10 +119,12 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
     demoCodeTable.set,
     'admin',
   );
-  await db.insert(orgAttachmentProducts).values(
-    demoLibrary.products.map((p) =>
-      attachmentProductRow(firmIds.get(demoLibrary.firm)!, userIds.get(demoLibrary.createdBy)!, p),
-    ),
-  );
+  await db
+    .insert(orgAttachmentProducts)
+    .values(
+      demoLibrary.products.map((p) =>
+        attachmentProductRow(firmIds.get(demoLibrary.firm)!, userIds.get(demoLibrary.createdBy)!, p),
+      ),
+    );
   return true;
 }

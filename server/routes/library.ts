@@ -4,10 +4,7 @@ import {
   orgMaterialInputSchema,
   orgMaterialSchema,
 } from '@shared/schemas/assembly';
-import {
-  attachmentProductInputSchema,
-  attachmentProductSchema,
-} from '@shared/schemas/attachment-library';
+import { attachmentProductInputSchema, attachmentProductSchema } from '@shared/schemas/attachment-library';
 import { apiErrorSchema } from '@shared/schemas/common';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';

@@ -1,10 +1,10 @@
+import { createHash, randomUUID } from 'node:crypto';
 import type {
   BridgeValue,
   bridgeValueInputSchema,
   OrgMaterial,
   orgMaterialInputSchema,
 } from '@shared/schemas/assembly';
-import { createHash, randomUUID } from 'node:crypto';
 import {
   type AttachmentProduct,
   type AttachmentProductInput,
@@ -13,7 +13,7 @@ import {
 import { and, asc, eq } from 'drizzle-orm';
 import type { z } from 'zod';
 import type { Db } from '../db/client';
-import { organisationMembers, orgAttachmentProducts, orgBridgeValues, orgMaterials } from '../db/schema';
+import { orgAttachmentProducts, organisationMembers, orgBridgeValues, orgMaterials } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
 import type { UploadedFile } from '../http/upload';
 import { detectAllowedType, displayName, withTypeExtension } from '../storage/files';

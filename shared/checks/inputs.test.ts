@@ -13,6 +13,7 @@ import {
   type ProjectForChecks,
   takeoffInputFor,
   thermalInputFor,
+  windDesignInputFor,
   windInputFor,
 } from './inputs';
 
@@ -43,6 +44,22 @@ describe('check inputs from an assembly and its project', () => {
     expect(calculateTakeoff(ready(takeoffInputFor(assembly))).lines.length).toBeGreaterThan(0);
   });
 
+  it('adds the assembly’s design spacings to the wind input, leaving out the ones not entered', () => {
+    const ready = (c: ReturnType<typeof windDesignInputFor>) => {
+      if (c.status !== 'ready') throw new Error('expected a ready input');
+      return c.input;
+    };
+    const schedule = windInputFor(assembly, project);
+    expect(ready(windDesignInputFor(assembly, project))).toEqual({
+      ...(schedule.status === 'ready' ? schedule.input : {}),
+      design: { girtSpacing: assembly.attachment.girtSpacing, clipSpacing: assembly.attachment.clipSpacing },
+    });
+    const noClip = { ...assembly, attachment: { ...assembly.attachment, clipSpacing: undefined } };
+    expect(ready(windDesignInputFor(noClip, project)).design).toEqual({
+      girtSpacing: assembly.attachment.girtSpacing,
+    });
+  });
+
   it('names what is missing instead of guessing', () => {
     const bare = { ...assembly, vapour: undefined, windPanel: undefined, joints: [], takeoff: undefined };
     const noData = { ...project, wind: null, climate: null };
@@ -57,6 +74,7 @@ describe('check inputs from an assembly and its project', () => {
       status: 'missing',
       missing: ['the project’s wind data', 'the panel’s load–span table and clip capacity'],
     });
+    expect(windDesignInputFor(bare, noData)).toEqual(windInputFor(bare, noData));
     expect(jointsInputFor(bare).status).toBe('missing');
     expect(takeoffInputFor(bare).status).toBe('missing');
   });

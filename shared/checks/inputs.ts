@@ -2,7 +2,7 @@ import type { JointInput } from '../calc/joints/schema';
 import type { MoistureInput } from '../calc/moisture/schema';
 import type { TakeoffInput } from '../calc/takeoff/schema';
 import type { ThermalInput } from '../calc/thermal/schema';
-import type { WindScheduleInput } from '../calc/wind/schema';
+import type { WindDesignInput, WindScheduleInput } from '../calc/wind/schema';
 import type { AssemblyInput } from '../schemas/assembly';
 import type { Project } from '../schemas/project';
 
@@ -71,6 +71,23 @@ export function windInputFor(a: AssemblyInput, p: ProjectForChecks): CheckInput<
         planWidth: p.planWidthM,
       },
       panel: { ...a.windPanel, girtOrientation: a.attachment.girtOrientation },
+    },
+  };
+}
+
+/** The wind schedule input with the assembly's design girt and clip spacing (absent ones are left out). */
+export function windDesignInputFor(a: AssemblyInput, p: ProjectForChecks): CheckInput<WindDesignInput> {
+  const schedule = windInputFor(a, p);
+  if (schedule.status === 'missing') return schedule;
+  const { girtSpacing, clipSpacing } = a.attachment;
+  return {
+    status: 'ready',
+    input: {
+      ...schedule.input,
+      design: {
+        ...(girtSpacing === undefined ? {} : { girtSpacing }),
+        ...(clipSpacing === undefined ? {} : { clipSpacing }),
+      },
     },
   };
 }

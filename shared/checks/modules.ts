@@ -2,8 +2,16 @@ import { calculateJointSchedule } from '../calc/joints/joints';
 import { calculateMoisture } from '../calc/moisture/monthly';
 import { calculateThermal } from '../calc/thermal/thermal';
 import { calculateWindSchedule } from '../calc/wind/attachment';
-import type { ZoneResult } from '../calc/wind/schema';
-import { jointsInputFor, moistureInputFor, thermalInputFor, windInputFor } from './inputs';
+import { checkDesignSpacing } from '../calc/wind/design';
+import type {
+  DesignSpacingResult,
+  DesignStatus,
+  WindDesignInput,
+  WindScheduleResult,
+  ZoneDesign,
+  ZoneResult,
+} from '../calc/wind/schema';
+import { jointsInputFor, moistureInputFor, thermalInputFor, windDesignInputFor } from './inputs';
 import {
   cavityInsulationR,
   continuousInsulationR,
@@ -93,9 +101,61 @@ export const moistureModule = defineCheckModule({
   cautions: (r) => r.warnings,
 });
 
-function zoneChecks(z: ZoneResult, girtSpacing?: number, clipSpacing?: number): ModuleCheck[] {
+interface SpacingVerdict {
+  key: 'girtSpacing' | 'clipSpacing';
+  label: string;
+  status: DesignStatus;
+  design: number | undefined;
+  max: number | null;
+  /** Why it is not evaluated (missing, outside the table), why it fails without a maximum, what governs. */
+  reasons: { missing: string; outside: string; none: string; note: string };
+  traceStepIds: string[];
+}
+
+/** One design-spacing verdict of `checkDesignSpacing` as a check: its status, and the margin against the maximum. */
+function spacingCheck(z: ZoneResult, v: SpacingVerdict): ModuleCheck {
+  const base = {
+    id: `wind.zone${z.zone}.${v.key}`,
+    criterion: v.key,
+    label: `${z.name}: ${v.label}`,
+    required: v.max,
+    provided: v.design ?? null,
+    unit: 'm',
+    direction: 'max' as const,
+    traceStepIds: v.traceStepIds,
+  };
+  const open = { margin: null, marginRatio: null };
+  if (v.status === 'missing') return { ...base, ...open, status: 'not_evaluated', reason: v.reasons.missing };
+  if (v.status === 'outside-table')
+    return { ...base, ...open, status: 'not_evaluated', reason: v.reasons.outside };
+  if (v.max === null || v.design === undefined)
+    return { ...base, ...open, status: 'fail', reason: v.reasons.none };
+  const { margin, marginRatio } = compare('max', v.max, v.design);
+  return {
+    ...base,
+    margin,
+    marginRatio,
+    status: v.status === 'meets' ? 'pass' : 'fail',
+    reason: v.reasons.note,
+  };
+}
+
+/** "Not met at the design spacing: outward (utilisation 1.042)." for the checks of `d` that fail. */
+function failures(d: ZoneDesign, clip: boolean): string {
+  const failed = d.checks
+    .filter((c) => (c.check === 'clip') === clip && c.status === 'fails')
+    .map((c) => `${c.check} (utilisation ${c.utilisation!.toFixed(3)})`);
+  return failed.length > 0 ? ` Not met at the design spacing: ${failed.join(', ')}.` : '';
+}
+
+/**
+ * The wind module's own verdicts per zone: the table carries the pressure, and the design girt and clip spacing as
+ * `checkDesignSpacing` judged them, with the margin against the maximum it compared each with.
+ */
+function zoneChecks(z: ZoneResult, d: ZoneDesign): ModuleCheck[] {
   const at = `wind.zone${z.zone}`;
-  const out: ModuleCheck[] = [
+  const capped = d.maxGirtSpacing !== null && z.girtSpacing !== null && d.maxGirtSpacing < z.girtSpacing;
+  return [
     {
       id: `${at}.table`,
       criterion: 'table',
@@ -115,71 +175,61 @@ function zoneChecks(z: ZoneResult, girtSpacing?: number, clipSpacing?: number): 
             : 'Found inside the table.',
       traceStepIds: z.status === 'outside-table' ? [] : [`${at}.girtSpacing`],
     },
+    spacingCheck(z, {
+      key: 'girtSpacing',
+      label: 'design girt spacing ≤ maximum',
+      status: d.girt,
+      design: d.girtSpacing,
+      max: d.maxGirtSpacing,
+      reasons: {
+        missing: 'the design girt spacing is not entered on the assembly',
+        outside: `the table cannot say — ${d.checks.find((c) => c.status === 'outside-table')?.reason ?? 'the design span is outside the table'} (tables are never extrapolated)`,
+        none: 'no girt spacing works: the panel table does not carry this zone’s pressure',
+        note: `${z.governingCheck ? `The maximum is governed by the ${z.governingCheck} check.` : ''}${failures(d, false)}`.trim(),
+      },
+      traceStepIds: [
+        ...(d.maxGirtSpacing === null ? [] : [`${at}.girtSpacing`]),
+        ...(capped ? [`${at}.design.maxGirtSpacing`] : []),
+        ...d.checks
+          .filter((c) => c.check !== 'clip' && c.utilisation !== null)
+          .map((c) => `${at}.design.${c.check}`),
+      ],
+    }),
+    spacingCheck(z, {
+      key: 'clipSpacing',
+      label: 'design clip spacing ≤ maximum at the design girt spacing',
+      status: d.clip,
+      design: d.clipSpacing,
+      max: d.maxClipAtDesignGirt,
+      reasons: {
+        missing:
+          d.clipSpacing === undefined
+            ? 'the design clip spacing is not entered on the assembly'
+            : 'the design girt spacing is not entered on the assembly, and the clip spacing is checked at it',
+        outside: 'the clip cannot be checked at a design girt spacing outside the table',
+        none: 'no clip spacing works at this girt spacing',
+        note: `The maximum clip spacing is found at the design girt spacing.${failures(d, true)}`,
+      },
+      traceStepIds: [
+        ...(d.maxClipAtDesignGirt === null ? [] : [`${at}.design.maxClipSpacing`]),
+        ...(d.checks.some((c) => c.check === 'clip' && c.utilisation !== null) ? [`${at}.design.clip`] : []),
+      ],
+    }),
   ];
-  const spacing = (
-    key: 'girtSpacing' | 'clipSpacing',
-    label: string,
-    design: number | undefined,
-    max: number | null | undefined,
-    what: string,
-    note: string,
-  ): ModuleCheck => {
-    const base = {
-      id: `${at}.${key}`,
-      criterion: key,
-      label: `${z.name}: ${label}`,
-      required: max ?? null,
-      unit: 'm',
-      direction: 'max' as const,
-      traceStepIds: max == null ? [] : [`${at}.${key}`],
-    };
-    if (design === undefined)
-      return {
-        ...base,
-        provided: null,
-        margin: null,
-        marginRatio: null,
-        status: 'not_evaluated',
-        reason: `the design ${what} is not entered on the assembly`,
-      };
-    if (max == null)
-      return {
-        ...base,
-        provided: design,
-        margin: null,
-        marginRatio: null,
-        status: 'fail',
-        reason: `no ${what} works: the panel table does not carry this zone’s pressure`,
-      };
-    return { ...base, provided: design, ...compare('max', max, design), reason: note };
-  };
-  out.push(
-    spacing(
-      'girtSpacing',
-      'design girt spacing ≤ maximum',
-      girtSpacing,
-      z.girtSpacing,
-      'girt spacing',
-      z.governingCheck ? `The maximum is governed by the ${z.governingCheck} check.` : '',
-    ),
-    spacing(
-      'clipSpacing',
-      'design clip spacing ≤ maximum',
-      clipSpacing,
-      z.clip?.maxSpacing,
-      'clip spacing',
-      'The maximum clip spacing is found at the zone’s maximum girt spacing; it is conservative for a closer girt spacing.',
-    ),
-  );
-  return out;
+}
+
+/** The wind schedule with the check of the assembly's design spacings beside it (`design`). */
+export function runWind(input: WindDesignInput): WindScheduleResult & { design: DesignSpacingResult } {
+  const schedule = calculateWindSchedule(input);
+  return { ...schedule, design: checkDesignSpacing(input, schedule) };
 }
 
 export const windModule = defineCheckModule({
   id: 'wind',
   label: 'Wind attachment schedule',
   provides: ['deflectionLimit'],
-  build: windInputFor,
-  run: calculateWindSchedule,
+  build: windDesignInputFor,
+  run: runWind,
   metrics: (r, a) => {
     const checked = r.zones.some((z) => z.spanChecks.some((c) => c.check === 'deflection'));
     const limit = a.windPanel?.loadSpanTable.deflectionLimit;
@@ -199,9 +249,8 @@ export const windModule = defineCheckModule({
             },
     };
   },
-  verdicts: (r, a) =>
-    r.zones.flatMap((z) => zoneChecks(z, a.attachment.girtSpacing, a.attachment.clipSpacing)),
-  trace: (r) => r.trace,
+  verdicts: (r) => r.zones.flatMap((z) => zoneChecks(z, r.design.zones.find((d) => d.zone === z.zone)!)),
+  trace: (r) => [...r.trace, ...r.design.trace],
   cautions: (r) => [...r.warnings, ...r.cautions],
 });
 

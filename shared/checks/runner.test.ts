@@ -1,7 +1,10 @@
 import { describe, expect, it } from 'vitest';
+import { calculateWindSchedule } from '../calc/wind/attachment';
+import { checkDesignSpacing } from '../calc/wind/design';
 import { canonicalJson } from './canonical';
 import { CRITERION_TYPE_KEYS, CRITERION_TYPES } from './criteria';
 import { demoAssembly, demoProject, criteriaRow as row } from './fixtures';
+import { windDesignInputFor } from './inputs';
 import { continuousInsulationR, INSULATION_MAX_CONDUCTIVITY } from './metrics';
 import { defineCheckModule } from './module';
 import { CHECK_MODULES, thermalModule } from './modules';
@@ -91,6 +94,40 @@ describe('the compliance runner on the demo assembly', () => {
     expect(report.moduleVerdict).toBe('fail');
     expect(report.verdict).toBe('fail');
     expect(report.cautions.some((c) => /licensed professional/.test(c))).toBe(true);
+  });
+
+  it('judges the design girt and clip spacing with the engine’s checkDesignSpacing, and refers to its steps', () => {
+    const ready = windDesignInputFor(demoAssembly(), demoProject());
+    if (ready.status !== 'ready') throw new Error('the demo wind input is incomplete');
+    const design = checkDesignSpacing(ready.input, calculateWindSchedule(ready.input));
+    for (const d of design.zones) {
+      const girt = check(report, `wind.zone${d.zone}.girtSpacing`);
+      const clip = check(report, `wind.zone${d.zone}.clipSpacing`);
+      expect(girt).toMatchObject({ required: d.maxGirtSpacing, provided: d.girtSpacing });
+      expect(girt.status).toBe(d.girt === 'meets' ? 'pass' : 'fail');
+      // The clip spacing is compared with the maximum at the design girt spacing, not at the maximum girt spacing.
+      expect(clip).toMatchObject({ required: d.maxClipAtDesignGirt, provided: d.clipSpacing });
+      expect(clip.status).toBe(d.clip === 'meets' ? 'pass' : 'fail');
+      expect(clip.margin).toBeCloseTo(d.maxClipAtDesignGirt! - d.clipSpacing!, 12);
+      for (const id of [...girt.traceStepIds, ...clip.traceStepIds])
+        expect(report.steps.some((s) => s.id === id)).toBe(true);
+      expect(clip.traceStepIds).toContain(`wind.zone${d.zone}.design.clip`);
+    }
+    const wind = report.modules.find((m) => m.id === 'wind')!.result as { design: unknown };
+    expect(wind.design).toEqual(design);
+  });
+
+  it('fails a design girt spacing beyond the maximum, and one the table cannot reach is not evaluated', () => {
+    const a = demoAssembly();
+    const beyond = runChecks({ ...a, attachment: { ...a.attachment, girtSpacing: 2.9 } }, demoProject(), []);
+    const girt = check(beyond, 'wind.zone4.girtSpacing');
+    expect(girt.status).toBe('fail');
+    expect(girt.margin).toBeLessThan(0);
+    const short = runChecks({ ...a, attachment: { ...a.attachment, girtSpacing: 0.5 } }, demoProject(), []);
+    expect(check(short, 'wind.zone4.girtSpacing')).toMatchObject({
+      status: 'not_evaluated',
+      reason: expect.stringMatching(/shorter than the table’s shortest span/),
+    });
   });
 
   it('fails a tightened maximum and says by how much', () => {

@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { tableColumns } from '../calc/wind/attachment';
 import { CalcInputError } from '../calc/errors';
+import { tableColumns } from '../calc/wind/attachment';
 import { clipSchema, loadSpanTableSchema } from '../calc/wind/schema';
 
 /**
@@ -33,7 +33,10 @@ const checkedTable = loadSpanTableSchema.superRefine((table, ctx) => {
     if (!(e instanceof CalcInputError)) throw e;
     ctx.addIssue({
       code: 'custom',
-      path: e.field.replace(/^panel\.loadSpanTable\.?/, '').split('.').filter(Boolean),
+      path: e.field
+        .replace(/^panel\.loadSpanTable\.?/, '')
+        .split('.')
+        .filter(Boolean),
       message: e.reason,
     });
   }

@@ -37,6 +37,11 @@ export const CHI_IP_TO_SI = 0.5275279;
 export const INCH = 0.0254;
 /** 1 ft = 0.3048 m exactly. */
 export const FOOT = 0.3048;
+/**
+ * 1 lbf = 4.448 221 615 260 5 N exactly: 0.453 592 37 kg × 9.806 65 m/s², the avoirdupois pound times standard
+ * gravity, both exact by definition (NIST SP 811 (2008) Appendix B.8/B.9, pound-force; tabulated 4.448 222 E+00).
+ */
+export const LBF_TO_N = 4.4482216152605;
 /** 1 lbf/ft² = 47.880 26 Pa (NIST SP 811 B.9). */
 export const PSF_TO_PA = 47.88026;
 /** 1 lb/ft² = 4.882 428 kg/m² (NIST SP 811 B.9, pound avoirdupois per square foot). */

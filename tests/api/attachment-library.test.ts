@@ -14,7 +14,10 @@ const binary = (res: Response, cb: (err: Error | null, body: Buffer) => void) =>
   res.on('data', (c: Buffer) => chunks.push(c));
   res.on('end', () => cb(null, Buffer.concat(chunks)));
 };
-const PDF = Buffer.from('%PDF-1.4\n1 0 obj<</Type/Catalog>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n', 'latin1');
+const PDF = Buffer.from(
+  '%PDF-1.4\n1 0 obj<</Type/Catalog>>endobj\ntrailer<</Root 1 0 R>>\n%%EOF\n',
+  'latin1',
+);
 
 const panel = {
   kind: 'panel',
@@ -70,7 +73,9 @@ describe.each(testDatabases())('firm attachment library on %s', (kind) => {
   it('refuses a table the engine would refuse, naming the row and the reason', async () => {
     const engineer = await t.as(demoEmail('engineer'));
     const rows = [panel.loadSpanTable.rows[1], panel.loadSpanTable.rows[0]];
-    const res = await engineer.post(url()).send({ ...panel, loadSpanTable: { ...panel.loadSpanTable, rows } });
+    const res = await engineer
+      .post(url())
+      .send({ ...panel, loadSpanTable: { ...panel.loadSpanTable, rows } });
     expect(res.status).toBe(400);
     const body = apiErrorSchema.parse(res.body);
     expect(body.error.fields?.['loadSpanTable.rows.1.span']).toMatch(/spans must increase/);
@@ -94,7 +99,10 @@ describe.each(testDatabases())('firm attachment library on %s', (kind) => {
     const up = await engineer.post(url(`/${id}/data-sheet`)).attach('files', PDF, 'DS-80 rev B.pdf');
     expect(up.status).toBe(201);
     expect(up.body.dataSheet).toMatchObject({ name: 'DS-80 rev B.pdf', contentType: 'application/pdf' });
-    const down = await engineer.get(url(`/${id}/data-sheet`)).buffer(true).parse(binary);
+    const down = await engineer
+      .get(url(`/${id}/data-sheet`))
+      .buffer(true)
+      .parse(binary);
     expect(down.status).toBe(200);
     expect(Buffer.compare(down.body as Buffer, PDF)).toBe(0);
     expect(down.headers['content-disposition']).toContain('DS-80 rev B.pdf');

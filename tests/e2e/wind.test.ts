@@ -63,4 +63,43 @@ describe('attachment & wind sheet in the browser', () => {
     await screenshot(page, 'wind-attachment');
     expect(problems).toEqual([]);
   });
+
+  it('takes a clip from the firm library with its source, and keeps the data sheet in the library', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
+    const problems: string[] = [];
+    page.on('pageerror', (e) => problems.push(e.message));
+    await signIn(page, server.baseUrl, 'engineer@skinwright.demo');
+    await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
+    await page.getByRole('link', { name: 'Assemblies', exact: true }).click();
+    await page
+      .getByRole('link', { name: /Metal rainscreen on clips and girts/ })
+      .first()
+      .click();
+    await page.getByRole('link', { name: 'Attachment & wind' }).click();
+    await page.getByTestId('schedule-zone-4').waitFor();
+
+    const pickers = page.getByLabel(/Take from Okonkwo & Brandt Structural \(demo\)’s library/);
+    await expect.poll(() => pickers.count()).toBe(2);
+    await pickers.nth(1).selectOption({ label: 'Demo heavy clip, rated (invented)' });
+    await expect
+      .poll(() => page.getByLabel('Source of the clip capacity').inputValue())
+      .toBe('Demo data sheet HC-1 (invented for the Skinwright demo)');
+    expect(await page.getByLabel('Allowable load per clip').inputValue()).toBe('3200');
+    expect(await page.locator('body').textContent()).not.toContain('NaN');
+
+    await page.goto(`${server.baseUrl}/library`);
+    const section = page.locator('section', {
+      has: page.getByRole('heading', { name: /Panel tables and clips/ }),
+    });
+    await section.getByText('Demo 80 mm insulated panel, 600 mm module (invented)').waitFor();
+    await section.getByLabel('Data sheet file for Demo heavy clip, rated (invented)').setInputFiles({
+      name: 'HC-1.pdf',
+      mimeType: 'application/pdf',
+      buffer: Buffer.from('%PDF-1.4\n%%EOF\n'),
+    });
+    await section.getByRole('link', { name: 'HC-1.pdf' }).waitFor();
+    await section.scrollIntoViewIfNeeded();
+    await screenshot(page, 'library-attachment-products');
+    expect(problems).toEqual([]);
+  });
 });

@@ -258,3 +258,97 @@ export type ClipResult = z.infer<typeof clipResultSchema>;
 export type ZoneResult = z.infer<typeof zoneResultSchema>;
 export type WindScheduleResult = z.infer<typeof windScheduleResultSchema>;
 export type WallZone = ZoneResult['zone'];
+
+// ================================================================================================================
+// Design spacing — the girt and clip spacing the designer chose, checked per wall zone (checkDesignSpacing in
+// design.ts). Appended as one block; nothing above depends on it.
+// ================================================================================================================
+
+export const designSpacingsSchema = z.object({
+  girtSpacing: z
+    .number()
+    .positive()
+    .max(10)
+    .optional()
+    .describe(
+      'Girt spacing the designer chose (= panel span), m (greater than 0, at most 10); absent: not checked',
+    ),
+  clipSpacing: z
+    .number()
+    .positive()
+    .max(10)
+    .optional()
+    .describe(
+      'Clip spacing along a girt the designer chose, m (greater than 0, at most 10); absent: not checked',
+    ),
+});
+
+export const windDesignInputSchema = windScheduleInputSchema.extend({
+  design: designSpacingsSchema.describe(
+    'The design spacings to check against the schedule of site and panel',
+  ),
+});
+
+export const designStatusSchema = z
+  .enum(['meets', 'fails', 'outside-table', 'missing'])
+  .describe(
+    'meets / fails on a number; outside-table: the table has no value at the design span (never extrapolated); missing: a design spacing is not given',
+  );
+
+export const designCheckNameSchema = z.enum(['inward', 'outward', 'deflection', 'clip']);
+
+export const designCheckSchema = z.object({
+  check: designCheckNameSchema,
+  status: designStatusSchema,
+  required: z
+    .number()
+    .nullable()
+    .describe(
+      'Demand at the design spacing: ASD pressure (inward, outward), deflection-level pressure (deflection), Pa; ASD load on one clip, N',
+    ),
+  allowable: z
+    .number()
+    .nullable()
+    .describe('Table value at the design span, Pa (interpolated linearly), or the clip capacity, N'),
+  utilisation: z.number().nullable().describe('required / allowable, dimensionless'),
+  unit: z.enum(['Pa', 'N']),
+  reason: z.string().optional().describe('Why there is no number (outside the table, no design spacing)'),
+});
+
+export const zoneDesignSchema = z.object({
+  zone: z.union([z.literal(4), z.literal(5)]),
+  girtSpacing: z.number().optional().describe('The design girt spacing, m (absent when not given)'),
+  clipSpacing: z.number().optional().describe('The design clip spacing, m (absent when not given)'),
+  maxGirtSpacing: z
+    .number()
+    .nullable()
+    .describe(
+      'Maximum girt spacing the design is compared with: the schedule’s, zone 5 never above zone 4’s, m (null outside the table)',
+    ),
+  maxClipAtDesignGirt: z
+    .number()
+    .nullable()
+    .describe(
+      'Largest clip spacing at the design girt spacing, zone 5 never above zone 4’s, m (null without one)',
+    ),
+  girt: designStatusSchema.describe('Design girt spacing ≤ maximum and every span check met'),
+  clip: designStatusSchema.describe(
+    'Design clip spacing ≤ maximum at the design girt spacing and the clip load met',
+  ),
+  status: designStatusSchema.describe('Zone verdict: fails if any fails, then outside-table, then missing'),
+  checks: z.array(designCheckSchema).describe('inward, outward, deflection (when tabulated), clip'),
+  worst: designCheckSchema.nullable().describe('The check with the highest utilisation'),
+});
+
+export const designSpacingResultSchema = z.object({
+  zones: z.array(zoneDesignSchema),
+  trace: z.array(traceStepSchema),
+});
+
+export type DesignSpacings = z.infer<typeof designSpacingsSchema>;
+export type WindDesignInput = z.infer<typeof windDesignInputSchema>;
+export type DesignStatus = z.infer<typeof designStatusSchema>;
+export type DesignCheckName = z.infer<typeof designCheckNameSchema>;
+export type DesignCheck = z.infer<typeof designCheckSchema>;
+export type ZoneDesign = z.infer<typeof zoneDesignSchema>;
+export type DesignSpacingResult = z.infer<typeof designSpacingResultSchema>;

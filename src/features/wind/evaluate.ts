@@ -1,10 +1,16 @@
 import { CalcInputError } from '@shared/calc/errors';
 import { calculateWindSchedule } from '@shared/calc/wind/attachment';
-import { type WindScheduleInput, type WindScheduleResult, windSiteSchema } from '@shared/calc/wind/schema';
-import { type ProjectForChecks, windInputFor } from '@shared/checks/inputs';
+import { checkDesignSpacing } from '@shared/calc/wind/design';
+import {
+  type DesignSpacings,
+  type WindScheduleInput,
+  type WindScheduleResult,
+  windSiteSchema,
+  type ZoneDesign,
+} from '@shared/calc/wind/schema';
+import { type ProjectForChecks, windDesignInputFor } from '@shared/checks/inputs';
 import { type AssemblyInput, attachmentSchema } from '@shared/schemas/assembly';
 import type { UnitSystem } from '@shared/units';
-import { designChecks, type ZoneDesign } from './design-check';
 import {
   type AttachmentFormValues,
   panelCandidate,
@@ -27,14 +33,16 @@ export interface SiteProblem {
 export interface AttachmentEvaluation {
   /** The engine input, when everything needed is there and valid. */
   input: WindScheduleInput | null;
+  /** The engine's schedule; its trace is followed by the steps of the design-spacing check. */
   result: WindScheduleResult | null;
+  /** The engine's check of the design spacings, zone by zone (`checkDesignSpacing`). */
   zones: ZoneDesign[];
   /** The panel as it would be saved (undefined while blank or invalid). */
   panel: WindPanel | undefined;
-  design: { girtSpacing?: number; clipSpacing?: number };
+  design: DesignSpacings;
   /** Form path → reason, shown beside its field. */
   errors: Record<string, string>;
-  /** What `windInputFor` says is missing, in its own words. */
+  /** What `windDesignInputFor` says is missing, in its own words. */
   missing: string[];
   site: SiteProblem[];
 }
@@ -192,12 +200,12 @@ export function evaluateAttachment(
   // Ask the shared builder what is missing; a panel that is entered but not yet valid is not "missing" —
   // its fields say what is wrong.
   const placeholder = !blank && !panel ? (panelCandidate(values) as WindPanel) : panel;
-  const ready = windInputFor(withAttachment(assembly, placeholder, design), project);
+  const ready = windDesignInputFor(withAttachment(assembly, placeholder, design), project);
   if (ready.status === 'missing') return { ...empty, missing: ready.missing };
   // The schedule needs a valid panel; a design spacing that is not accepted only leaves its own check out.
   if (!panel || Object.keys(errors).some((k) => k !== 'girtSpacing' && k !== 'clipSpacing')) return empty;
 
-  const input: WindScheduleInput = ready.input;
+  const { design: _design, ...input } = ready.input;
   const siteCheck = windSiteSchema.safeParse(input.site);
   if (!siteCheck.success) {
     const site = siteCheck.error.issues.map((issue) => {
@@ -213,7 +221,13 @@ export function evaluateAttachment(
 
   try {
     const result = calculateWindSchedule(input);
-    return { ...empty, input, result, zones: designChecks(input, result, design) };
+    const checked = checkDesignSpacing(ready.input, result);
+    return {
+      ...empty,
+      input,
+      result: { ...result, trace: [...result.trace, ...checked.trace] },
+      zones: checked.zones,
+    };
   } catch (e) {
     if (!(e instanceof CalcInputError)) throw e;
     if (e.field.startsWith('site.')) {

@@ -1,6 +1,5 @@
-import type { ZoneResult } from '@shared/calc/wind/schema';
+import type { DesignCheck, ZoneDesign, ZoneResult } from '@shared/calc/wind/schema';
 import type { UnitSystem } from '@shared/units';
-import type { DesignCheck, ZoneDesign } from './design-check';
 import { CHECK_LABELS } from './labels';
 import { formatWind } from './units';
 
@@ -71,9 +70,9 @@ export function zoneStatusText(
     };
   if (design.status === 'fails') {
     const reasons: string[] = [];
-    if (design.girt === 'fails' && design.girtSpacing !== undefined && zone.girtSpacing !== null)
+    if (design.girt === 'fails' && design.girtSpacing !== undefined && design.maxGirtSpacing !== null)
       reasons.push(
-        `girt spacing ${formatWind(design.girtSpacing, 'span', system)} is more than the ${formatWind(zone.girtSpacing, 'span', system, { rounding: 'down' })} allowed`,
+        `girt spacing ${formatWind(design.girtSpacing, 'span', system)} is more than the ${formatWind(design.maxGirtSpacing, 'span', system, { rounding: 'down' })} allowed`,
       );
     if (design.clip === 'fails' && design.clipSpacing !== undefined)
       reasons.push(
@@ -81,12 +80,13 @@ export function zoneStatusText(
           ? `clip spacing ${formatWind(design.clipSpacing, 'spacing', system)} is more than the ${formatWind(design.maxClipAtDesignGirt, 'spacing', system, { rounding: 'down' })} allowed at this girt spacing`
           : `clip spacing ${formatWind(design.clipSpacing, 'spacing', system)} overloads the clip`,
       );
-    return { glyph: '✕', word: 'exceeds', detail: reasons.join('; '), tone: 'fails' };
+    const detail = reasons.length > 0 ? reasons.join('; ') : 'a check at the design spacing is not met';
+    return { glyph: '✕', word: 'exceeds', detail, tone: 'fails' };
   }
   const parts: string[] = [];
-  if (design.girtSpacing !== undefined && zone.girtSpacing !== null)
+  if (design.girtSpacing !== undefined && design.maxGirtSpacing !== null)
     parts.push(
-      `girts ${formatWind(design.girtSpacing, 'span', system)} ≤ ${formatWind(zone.girtSpacing, 'span', system, { rounding: 'down' })}`,
+      `girts ${formatWind(design.girtSpacing, 'span', system)} ≤ ${formatWind(design.maxGirtSpacing, 'span', system, { rounding: 'down' })}`,
     );
   if (design.clipSpacing !== undefined && design.maxClipAtDesignGirt !== null)
     parts.push(

@@ -1,10 +1,4 @@
-import { FOOT, INCH, MPH_TO_MS, PSF_TO_PA, type UnitSystem } from '@shared/units';
-
-/**
- * 1 lbf = 4.448 221 615 260 5 N exactly (NIST SP 811 B.9, pound-force). Kept here because `shared/units` has no
- * force factor yet.
- */
-export const LBF_TO_N = 4.4482216152605;
+import { FOOT, INCH, LBF_TO_N, MPH_TO_MS, PSF_TO_PA, type UnitSystem } from '@shared/units';
 
 /**
  * The quantities of the wind sheet and how each crosses the SI/IP edge. Stored values are SI (m/s, m, Pa, N, m²);

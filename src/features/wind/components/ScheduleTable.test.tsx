@@ -1,22 +1,19 @@
 import { calculateWindSchedule } from '@shared/calc/wind/attachment';
-import { windInputFor } from '@shared/checks/inputs';
+import { checkDesignSpacing } from '@shared/calc/wind/design';
+import { windDesignInputFor } from '@shared/checks/inputs';
 import type { AssemblyInput } from '@shared/schemas/assembly';
 import { cleanup, render, screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
-import { designChecks } from '../design-check';
 import { demoAssembly, demoProject } from '../test-fixtures';
 import { DesignChecksTable, ScheduleTable } from './ScheduleTable';
 
 afterEach(cleanup);
 
 function renderSchedule(assembly: AssemblyInput) {
-  const ready = windInputFor(assembly, demoProject());
+  const ready = windDesignInputFor(assembly, demoProject());
   if (ready.status !== 'ready') throw new Error('demo input is incomplete');
   const result = calculateWindSchedule(ready.input);
-  const zones = designChecks(ready.input, result, {
-    girtSpacing: assembly.attachment.girtSpacing,
-    clipSpacing: assembly.attachment.clipSpacing,
-  });
+  const { zones } = checkDesignSpacing(ready.input, result);
   render(
     <>
       <ScheduleTable result={result} zones={zones} deflectionLimit="L/180" />

@@ -1,9 +1,8 @@
-import type { WindScheduleResult, ZoneResult } from '@shared/calc/wind/schema';
+import type { DesignCheck, WindScheduleResult, ZoneDesign, ZoneResult } from '@shared/calc/wind/schema';
 import type { UnitSystem } from '@shared/units';
 import type { ReactNode } from 'react';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
-import type { DesignCheck, ZoneDesign } from '../design-check';
 import { CHECK_LABELS, ZONE_SHORT } from '../labels';
 import { checkStatusText, type StatusText, zoneStatusText } from '../status';
 import { formatWind } from '../units';

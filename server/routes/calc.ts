@@ -13,8 +13,14 @@ import { materialSchema, materials } from '@shared/calc/thermal/materials';
 import { thermalInputSchema, thermalResultSchema } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
 import { calculateWindSchedule } from '@shared/calc/wind/attachment';
+import { checkDesignSpacing } from '@shared/calc/wind/design';
 import { demoWindSchedule } from '@shared/calc/wind/fixtures';
-import { windScheduleInputSchema, windScheduleResultSchema } from '@shared/calc/wind/schema';
+import {
+  designSpacingResultSchema,
+  designSpacingsSchema,
+  windScheduleInputSchema,
+  windScheduleResultSchema,
+} from '@shared/calc/wind/schema';
 import { apiErrorSchema } from '@shared/schemas/common';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
@@ -72,13 +78,25 @@ export const calcRoutes = [
       'Wall components-and-cladding pressures (ASCE 7-16 / 7-22) and the girt and clip spacing per zone',
     tag: 'Calculations',
     access: { kind: 'public' },
-    body: windScheduleInputSchema,
-    example: demoWindSchedule(),
+    body: windScheduleInputSchema.extend({
+      design: designSpacingsSchema
+        .optional()
+        .describe('Design girt and clip spacing to check per zone against the schedule (optional)'),
+    }),
+    example: { ...demoWindSchedule(), design: { girtSpacing: 1.2, clipSpacing: 0.6 } },
     responses: {
-      200: { description: 'Spacing schedule per zone with a trace', schema: windScheduleResultSchema },
+      200: {
+        description:
+          'Spacing schedule per zone with a trace; with `design`, the check of the design spacings per zone',
+        schema: windScheduleResultSchema.extend({ design: designSpacingResultSchema.nullable() }),
+      },
       ...calcErrors,
     },
-    handler: async ({ body }) => calculateWindSchedule(body),
+    handler: async ({ body }) => {
+      const schedule = calculateWindSchedule(body);
+      const { design } = body;
+      return { ...schedule, design: design ? checkDesignSpacing({ ...body, design }, schedule) : null };
+    },
   }),
   defineRoute({
     method: 'post',

@@ -1,6 +1,7 @@
 import { demoJointSchedule } from '@shared/calc/joints/fixtures';
 import { metalPanelMoistureWall } from '@shared/calc/moisture/fixtures';
 import { demoElevation } from '@shared/calc/takeoff/fixtures';
+import { checkDesignSpacing } from '@shared/calc/wind/design';
 import { demoWindSchedule } from '@shared/calc/wind/fixtures';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../setup/app';
@@ -38,6 +39,22 @@ describe('public calculation API', () => {
     const res = await t.anonymous().post('/api/v1/calc/wind').send(bad);
     expect(res.status).toBe(400);
     expect(res.body.error.fields['site.basicWindSpeed']).toBeDefined();
+  });
+
+  it('checks design spacings per zone when given, with the same verdict as the engine', async () => {
+    const input = { ...demoWindSchedule(), design: { girtSpacing: 1.2, clipSpacing: 0.6 } };
+    const res = await t.anonymous().post('/api/v1/calc/wind').send(input);
+    expect(res.status).toBe(200);
+    expect(res.body.design).toEqual(JSON.parse(JSON.stringify(checkDesignSpacing(input))));
+    expect(res.body.design.zones.map((z: { zone: number }) => z.zone)).toEqual([4, 5]);
+    const none = await t.anonymous().post('/api/v1/calc/wind').send(demoWindSchedule());
+    expect(none.body.design).toBeNull();
+    const bad = await t
+      .anonymous()
+      .post('/api/v1/calc/wind')
+      .send({ ...demoWindSchedule(), design: { girtSpacing: -1 } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields['design.girtSpacing']).toBeDefined();
   });
 
   it('sizes sealant joints and refuses a minimum temperature above the maximum with 4xx naming the field', async () => {

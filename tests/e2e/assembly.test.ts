@@ -1,6 +1,6 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, screenshot, signIn, startTestServer } from '../setup/browser';
+import { launchChromium, openDemoAssembly, screenshot, signIn, startTestServer } from '../setup/browser';
 
 /** The architect opens the demo assembly, halves the clip spacing, and sees the effective R drop live. */
 describe('assembly builder in the browser', () => {
@@ -20,12 +20,7 @@ describe('assembly builder in the browser', () => {
     const problems: string[] = [];
     page.on('pageerror', (e) => problems.push(e.message));
     await signIn(page, server.baseUrl, 'architect@skinwright.demo');
-    await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
-    await page.getByRole('link', { name: 'Assemblies', exact: true }).click();
-    await page
-      .getByRole('link', { name: /Metal rainscreen on clips and girts/ })
-      .first()
-      .click();
+    await openDemoAssembly(page);
     const live = page.getByTestId('live-Reff');
     await live.waitFor();
     const before = await live.textContent();

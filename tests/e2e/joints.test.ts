@@ -1,16 +1,11 @@
 import { readFile } from 'node:fs/promises';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, screenshot, signIn, startTestServer } from '../setup/browser';
+import { launchChromium, openDemoAssembly, screenshot, signIn, startTestServer } from '../setup/browser';
 
 /** Open the demo assembly's "Joints & quantities" sheet from the project list, as a person would. */
 async function openJointsSheet(page: Page) {
-  await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
-  await page.getByRole('link', { name: 'Assemblies', exact: true }).click();
-  await page
-    .getByRole('link', { name: /Metal rainscreen on clips and girts/ })
-    .first()
-    .click();
+  await openDemoAssembly(page);
   await page.getByRole('link', { name: 'Joints & quantities' }).click();
   await page.waitForURL(/\/assemblies\/[0-9a-f-]{36}\/joints$/);
   await page.getByRole('heading', { name: 'Joints & quantities' }).waitFor();

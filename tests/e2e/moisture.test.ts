@@ -1,6 +1,6 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, screenshot, signIn, startTestServer } from '../setup/browser';
+import { launchChromium, openDemoAssembly, screenshot, signIn, startTestServer } from '../setup/browser';
 
 /**
  * The envelope consultant opens the demo assembly's moisture sheet: no condensation with the polyethylene
@@ -23,12 +23,7 @@ describe('moisture sheet in the browser', () => {
     const problems: string[] = [];
     page.on('pageerror', (e) => problems.push(e.message));
     await signIn(page, server.baseUrl, 'consultant@skinwright.demo');
-    await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
-    await page.getByRole('link', { name: 'Assemblies', exact: true }).click();
-    await page
-      .getByRole('link', { name: /Metal rainscreen on clips and girts/ })
-      .first()
-      .click();
+    await openDemoAssembly(page);
     await page
       .getByRole('navigation', { name: 'Assembly sheets' })
       .getByRole('link', { name: 'Moisture' })

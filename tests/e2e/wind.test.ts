@@ -1,6 +1,6 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, screenshot, signIn, startTestServer } from '../setup/browser';
+import { launchChromium, openDemoAssembly, screenshot, signIn, startTestServer } from '../setup/browser';
 
 /**
  * The engineer opens the demo assembly's attachment sheet, reads the maximum girt spacing of zones 4 and 5, raises
@@ -23,12 +23,7 @@ describe('attachment & wind sheet in the browser', () => {
     const problems: string[] = [];
     page.on('pageerror', (e) => problems.push(e.message));
     await signIn(page, server.baseUrl, 'engineer@skinwright.demo');
-    await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
-    await page.getByRole('link', { name: 'Assemblies', exact: true }).click();
-    await page
-      .getByRole('link', { name: /Metal rainscreen on clips and girts/ })
-      .first()
-      .click();
+    await openDemoAssembly(page);
     await page.getByRole('link', { name: 'Attachment & wind' }).click();
     await page.waitForURL(/\/assemblies\/[0-9a-f-]{36}\/attachment$/);
 
@@ -69,12 +64,7 @@ describe('attachment & wind sheet in the browser', () => {
     const problems: string[] = [];
     page.on('pageerror', (e) => problems.push(e.message));
     await signIn(page, server.baseUrl, 'engineer@skinwright.demo');
-    await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
-    await page.getByRole('link', { name: 'Assemblies', exact: true }).click();
-    await page
-      .getByRole('link', { name: /Metal rainscreen on clips and girts/ })
-      .first()
-      .click();
+    await openDemoAssembly(page);
     await page.getByRole('link', { name: 'Attachment & wind' }).click();
     await page.getByTestId('schedule-zone-4').waitFor();
 

@@ -37,6 +37,16 @@ export async function signIn(page: Page, baseUrl: string, email: string, passwor
   await page.waitForURL(/\/projects/);
 }
 
+/** From the project list, open the demo project's demo assembly (its build-up sheet), as a person would. */
+export async function openDemoAssembly(page: Page) {
+  await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
+  await page.getByRole('link', { name: 'Assemblies', exact: true }).click();
+  await page
+    .getByRole('link', { name: /Metal rainscreen on clips and girts/ })
+    .first()
+    .click();
+}
+
 export async function screenshot(page: Page, name: string) {
   mkdirSync(ARTIFACTS, { recursive: true });
   await page.screenshot({ path: path.join(ARTIFACTS, `${name}.png`), fullPage: true });

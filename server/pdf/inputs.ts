@@ -55,16 +55,17 @@ function bridgeText(b: Bridge, fmt: Formatter): [string, string, string] {
       'fastener',
       `λ_f ${fmt.lambda(b.conductivity)}, ⌀ ${fmt.thickness(b.diameter)}, ${num(b.countPerArea, 2)} per m², ${b.penetration === 'full' ? 'through' : 'recessed into'} layer ${b.layerIndex + 1}`,
     ];
+  const source = `\nSource: ${b.source?.text ?? 'entered by hand'}`;
   if (b.kind === 'point')
     return [
       b.name,
       'point χ',
-      `χ = ${fmt.chi(b.chi)}, ${'spacingHorizontal' in b ? `@ ${fmt.length(b.spacingHorizontal)} × ${fmt.length(b.spacingVertical)}` : `${num(b.countPerArea, 2)} per m²`}`,
+      `χ = ${fmt.chi(b.chi)}, ${'spacingHorizontal' in b ? `@ ${fmt.length(b.spacingHorizontal)} × ${fmt.length(b.spacingVertical)}` : `${num(b.countPerArea, 2)} per m²`}${source}`,
     ];
   return [
     b.name,
     'linear ψ',
-    `ψ = ${fmt.psi(b.psi)}, ${'spacing' in b ? `@ ${fmt.length(b.spacing)}` : `${num(b.lengthPerArea, 2)} m per m²`}`,
+    `ψ = ${fmt.psi(b.psi)}, ${'spacing' in b ? `@ ${fmt.length(b.spacing)}` : `${num(b.lengthPerArea, 2)} m per m²`}${source}`,
   ];
 }
 

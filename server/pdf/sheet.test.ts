@@ -50,7 +50,7 @@ describe('the compliance sheet renderer', () => {
     expect(text).toContain('aid to — never a substitute for — the licensed professional of record');
   });
 
-  it('prints the panel’s load–span table and clip capacity with their sources', async () => {
+  it('prints the sources of χ/ψ, the panel’s load–span table and the clip capacity', async () => {
     const { renderComplianceSheet } = await import('./sheet');
     const { demoSheetData } = await import('./fixtures');
     const { readPdf } = await import('../../tests/setup/pdf');
@@ -63,6 +63,7 @@ describe('the compliance sheet renderer', () => {
     expect(flat).toContain(panel.sources!.clip!.text);
     expect(flat).toContain('2 × 1150 N = 2300 N');
     expect(flat).toContain('0.9 m 4690 Pa 4070 Pa 6940 Pa');
+    expect(flat).toContain('Source: Demo χ — invented for the Skinwright demo');
   });
 });
 

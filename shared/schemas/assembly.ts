@@ -1,10 +1,10 @@
 import { z } from 'zod';
 import { jointInputSchema } from '../calc/joints/schema';
 import { vapourSchema } from '../calc/moisture/schema';
+import { valueSourceSchema } from '../calc/source';
 import { takeoffInputSchema } from '../calc/takeoff/schema';
 import { thermalInputSchema, thermalResultSchema } from '../calc/thermal/schema';
 import { panelSchema } from '../calc/wind/schema';
-import { valueSourceSchema } from './attachment-library';
 
 /**
  * Wall categories a code table may key on. The list is deliberately short and generic; criteria sets

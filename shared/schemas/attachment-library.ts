@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { CalcInputError } from '../calc/errors';
+import { valueSourceSchema } from '../calc/source';
 import { tableColumns } from '../calc/wind/attachment';
 import { clipSchema, loadSpanTableSchema } from '../calc/wind/schema';
 
@@ -7,7 +8,7 @@ import { clipSchema, loadSpanTableSchema } from '../calc/wind/schema';
  * A firm's library of attachment data for the wind check: panel load–span tables and clip capacities, each
  * with where the values came from (the maker's data sheet or test report, named and dated) and, once
  * uploaded, the data sheet itself. The attachment sheet of an assembly copies an entry's values and its
- * source into the assembly (`windPanel.sources`), so a later change to the library never changes a saved
+ * source into the assembly (`windPanel.sources`, see calc/source.ts), so a later change to the library never changes a saved
  * revision.
  */
 
@@ -17,12 +18,7 @@ const nameSchema = z
   .min(1, 'name the product')
   .max(200)
   .describe('Product, e.g. "80 mm insulated panel, 0.6 mm skins"');
-const sourceSchema = z
-  .string()
-  .trim()
-  .min(1, 'name the source of the values (data sheet or test report, with its date or revision)')
-  .max(500)
-  .describe('Where the values come from: data sheet or test report, with its date or revision');
+const sourceSchema = valueSourceSchema.shape.text;
 const notesSchema = z.string().trim().max(2000).default('');
 
 /** The engine's own rules for a load–span table (rows, increasing spans, allowables not rising), as zod issues. */
@@ -88,13 +84,3 @@ export type AttachmentProduct = z.infer<typeof attachmentProductSchema>;
 export type PanelProduct = Extract<AttachmentProduct, { kind: 'panel' }>;
 export type ClipProduct = Extract<AttachmentProduct, { kind: 'clip' }>;
 export type DataSheet = z.infer<typeof dataSheetSchema>;
-
-/**
- * Where an assembly's load–span table or clip value came from: the words (always) and the library entry it
- * was taken from (when it was).
- */
-export const valueSourceSchema = z.object({
-  text: sourceSchema,
-  productId: z.uuid().optional().describe('The firm library entry the values were taken from'),
-});
-export type ValueSource = z.infer<typeof valueSourceSchema>;

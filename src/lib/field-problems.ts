@@ -1,5 +1,6 @@
 import { CalcInputError } from '@shared/calc/errors';
 import type { UnitSystem } from '@shared/units';
+import type { InputMeasure } from './input-measure';
 import { formatSheetBound, type SheetMeasure } from './sheet-units';
 
 /*
@@ -95,9 +96,16 @@ export function calcProblem(e: unknown, prefix = ''): [string, FieldProblem] {
 }
 
 /** The problem in words; a bound is worded in the box's measure and the person's units. */
-export function problemText(p: FieldProblem, measure: SheetMeasure | undefined, system: UnitSystem): string {
+export function problemText(
+  p: FieldProblem,
+  measure: SheetMeasure | InputMeasure | undefined,
+  system: UnitSystem,
+): string {
   if (p.kind === 'text') return p.text;
-  const bound = measure ? formatSheetBound(p.bound, measure, system) : String(p.bound);
+  const bound =
+    typeof measure === 'string'
+      ? formatSheetBound(p.bound, measure, system)
+      : (measure?.bound?.(p.bound, system) ?? String(p.bound));
   if (p.side === 'min') {
     if (p.bound === 0) return p.inclusive ? 'Must be 0 or more.' : 'Must be more than 0.';
     return p.inclusive ? `Must be at least ${bound}.` : `Must be more than ${bound}.`;

@@ -1,4 +1,5 @@
 import { celsiusToFahrenheit, FOOT, fahrenheitToCelsius, type UnitSystem } from '@shared/units';
+import type { InputMeasure, ParsedEntry } from './input-measure';
 
 /**
  * The quantities a form or a title block shows, and how each crosses the SI/IP edge.
@@ -60,7 +61,7 @@ export function formatQuantity(si: number | null | undefined, q: Quantity, syste
   return `${text.replace(/^-/, '\u2212')}\u202f${unit}`;
 }
 
-export type ParseResult = { kind: 'empty' } | { kind: 'invalid' } | { kind: 'ok'; si: number };
+export type ParseResult = ParsedEntry;
 
 /**
  * Read what someone typed. Accepts an optional sign (ASCII or typographic minus), digits and one decimal
@@ -75,3 +76,10 @@ export function parseInput(text: string, q: Quantity, system: UnitSystem): Parse
   const si = QUANTITIES[q].fromDisplay(shown, system);
   return Number.isFinite(si) ? { kind: 'ok', si } : { kind: 'invalid' };
 }
+
+/** A quantity as a number box (`QuantityInput`) shows and reads it. */
+export const quantityInput = (q: Quantity): InputMeasure => ({
+  unit: (system) => unitOf(q, system),
+  toText: (si, system) => toInputText(si, q, system),
+  parse: (text, system) => parseInput(text, q, system),
+});

@@ -1,4 +1,5 @@
 import { celsiusToFahrenheit, FOOT, fahrenheitToCelsius, INCH, type UnitSystem } from '@shared/units';
+import type { InputMeasure, ParsedEntry } from './input-measure';
 
 /*
  * The quantities of the joint schedule and the takeoff, and how each crosses the SI/IP edge. Stored values
@@ -156,7 +157,7 @@ export function sheetInputText(si: number | null | undefined, m: SheetMeasure, s
   return trim(shown, spec.decimals[system] + 1);
 }
 
-export type SheetParse = { kind: 'empty' } | { kind: 'invalid' } | { kind: 'ok'; si: number };
+export type SheetParse = ParsedEntry;
 
 /** Read what was typed: a plain number (sign, one point, exponent), or inch fractions where they apply. */
 export function parseSheetInput(text: string, m: SheetMeasure, system: UnitSystem): SheetParse {
@@ -220,3 +221,16 @@ export function formatSheetBound(si: number, m: SheetMeasure, system: UnitSystem
   const shown = Number(spec.toShown(si, system).toPrecision(4));
   return `${minus(String(shown))}\u202f${spec.unit[system]}`;
 }
+
+/**
+ * A sheet measure as a number box (`QuantityInput`) shows and reads it: range problems worded in its units,
+ * inch fractions typed where they apply (a keyboard with space and slash).
+ */
+export const sheetInput = (m: SheetMeasure): InputMeasure => ({
+  unit: (system) => sheetUnit(m, system),
+  toText: (si, system) => sheetInputText(si, m, system),
+  parse: (text, system) => parseSheetInput(text, m, system),
+  bound: (si, system) => formatSheetBound(si, m, system),
+  example: (system) => (m === 'joint' && system === 'IP' ? '3/4 or 0.75' : '12.5'),
+  inputMode: SHEET_MEASURES[m].fractions ? 'text' : 'decimal',
+});

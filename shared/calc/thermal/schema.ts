@@ -1,3 +1,4 @@
+import { valueSourceSchema } from '@shared/calc/source';
 import { traceStepSchema } from '@shared/calc/trace';
 import { z } from 'zod';
 
@@ -138,24 +139,36 @@ const spacing = (what: string) =>
     .max(100)
     .describe(`${what} spacing, m (at least 0.01 m = 10 mm, at most 100 m)`);
 
+/** Where χ or ψ came from (test report, catalogue, calculation), when it was taken from a firm library. */
+const source = valueSourceSchema.optional();
+
 export const pointBridgeBySpacingSchema = z.object({
   kind: z.literal('point'),
   name,
   chi,
+  source,
   spacingHorizontal: spacing('Horizontal'),
   spacingVertical: spacing('Vertical'),
 });
-export const pointBridgeByCountSchema = z.object({ kind: z.literal('point'), name, chi, countPerArea });
+export const pointBridgeByCountSchema = z.object({
+  kind: z.literal('point'),
+  name,
+  chi,
+  source,
+  countPerArea,
+});
 export const linearBridgeBySpacingSchema = z.object({
   kind: z.literal('linear'),
   name,
   psi,
+  source,
   spacing: spacing('Member'),
 });
 export const linearBridgeByLengthSchema = z.object({
   kind: z.literal('linear'),
   name,
   psi,
+  source,
   lengthPerArea: z
     .number()
     .positive()

@@ -8,6 +8,7 @@ import {
   U_IP_TO_SI,
   type UnitSystem,
 } from '@shared/units';
+import type { InputMeasure, ParsedEntry } from '../../lib/input-measure';
 
 /**
  * The quantities of an assembly and how each crosses the SI/IP edge. Stored values are SI (m, W/(m·K),
@@ -113,7 +114,7 @@ export function formatMeasure(
   return `${text.replace(/^-/, '\u2212')}${unit === '%' ? '\u202f%' : `\u202f${unit}`}`;
 }
 
-export type ParsedMeasure = { kind: 'empty' } | { kind: 'invalid' } | { kind: 'ok'; si: number };
+export type ParsedMeasure = ParsedEntry;
 
 /** Read what was typed: digits, one point, optional sign (ASCII or typographic); nothing else is guessed. */
 export function parseMeasure(text: string, m: Measure, system: UnitSystem): ParsedMeasure {
@@ -123,6 +124,13 @@ export function parseMeasure(text: string, m: Measure, system: UnitSystem): Pars
   const si = fromShown(Number(t), m, system);
   return Number.isFinite(si) ? { kind: 'ok', si } : { kind: 'invalid' };
 }
+
+/** An assembly measure as a number box (`QuantityInput`) shows and reads it; '–' (no unit) is left out. */
+export const measureInput = (m: Measure): InputMeasure => ({
+  unit: (system) => (MEASURES[m].unit[system] === '–' ? '' : MEASURES[m].unit[system]),
+  toText: (si, system) => measureInputText(si, m, system),
+  parse: (text, system) => parseMeasure(text, m, system),
+});
 
 /** Thermal resistance as practitioners read it: "2.31 m²·K/W" in SI, "R-13.1" in IP. */
 export function formatR(si: number | null | undefined, system: UnitSystem): string {

@@ -1,11 +1,7 @@
+import type { ValueSource } from '@shared/calc/source';
 import { clipByFastenersSchema, clipByRatingSchema, type SpanCondition } from '@shared/calc/wind/schema';
 import { type AssemblyInput, windPanelSchema } from '@shared/schemas/assembly';
-import type {
-  AttachmentProductInput,
-  ClipProduct,
-  PanelProduct,
-  ValueSource,
-} from '@shared/schemas/attachment-library';
+import type { AttachmentProductInput, ClipProduct, PanelProduct } from '@shared/schemas/attachment-library';
 import type { z } from 'zod';
 
 /*
@@ -84,9 +80,9 @@ export function attachmentFormValues(input: AssemblyInput): AttachmentFormValues
     continuityFactor: panel?.continuityFactor ?? null,
     deflectionWindFactor: panel?.deflectionWindFactor ?? null,
     tableSource: panel?.sources?.loadSpanTable?.text ?? '',
-    tableProductId: panel?.sources?.loadSpanTable?.productId ?? null,
+    tableProductId: panel?.sources?.loadSpanTable?.libraryEntryId ?? null,
     clipSource: panel?.sources?.clip?.text ?? '',
-    clipProductId: panel?.sources?.clip?.productId ?? null,
+    clipProductId: panel?.sources?.clip?.libraryEntryId ?? null,
   };
 }
 
@@ -144,8 +140,8 @@ export function libraryEntryFrom(
     : { kind, name, source: v.clipSource, clip: candidate.clip };
 }
 
-const sourceOf = (text: string, productId: string | null): ValueSource | undefined =>
-  text.trim() === '' ? undefined : { text: text.trim(), ...(productId ? { productId } : {}) };
+const sourceOf = (text: string, libraryEntryId: string | null): ValueSource | undefined =>
+  text.trim() === '' ? undefined : { text: text.trim(), ...(libraryEntryId ? { libraryEntryId } : {}) };
 
 const blank = (v: number | null | undefined) => v == null || Number.isNaN(v);
 

@@ -1,4 +1,5 @@
 import { FOOT, INCH, LBF_TO_N, MPH_TO_MS, PSF_TO_PA, type UnitSystem } from '@shared/units';
+import type { InputMeasure, ParsedEntry } from '../../lib/input-measure';
 
 /**
  * The quantities of the wind sheet and how each crosses the SI/IP edge. Stored values are SI (m/s, m, Pa, N, m²);
@@ -141,7 +142,7 @@ export function formatWind(
   return u === '°' ? `${text}°` : `${text}\u202f${u}`;
 }
 
-export type ParsedWind = { kind: 'empty' } | { kind: 'invalid' } | { kind: 'ok'; si: number };
+export type ParsedWind = ParsedEntry;
 
 /** Read what was typed: digits, one point, optional sign (ASCII or typographic); nothing else is guessed. */
 export function parseWind(text: string, m: WindMeasure, system: UnitSystem): ParsedWind {
@@ -151,6 +152,13 @@ export function parseWind(text: string, m: WindMeasure, system: UnitSystem): Par
   const si = Number(t) * WIND_MEASURES[m].factor[system];
   return Number.isFinite(si) ? { kind: 'ok', si } : { kind: 'invalid' };
 }
+
+/** A wind measure as a number box (`QuantityInput`) shows and reads it. */
+export const windInput = (m: WindMeasure): InputMeasure => ({
+  unit: (system) => windUnit(m, system),
+  toText: (si, system) => windInputText(si, m, system),
+  parse: (text, system) => parseWind(text, m, system),
+});
 
 /** A ratio 0–∞ as a whole percentage: "68 %". */
 export const formatPercent = (ratio: number | null | undefined) =>

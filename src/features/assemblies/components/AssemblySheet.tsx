@@ -196,8 +196,9 @@ export function AssemblySheet({
             <tbody>
               {thermal.bridges.map((b, j) => {
                 const v = b.kind === 'point' ? b.chi : b.kind === 'linear' ? b.psi : null;
+                // Revisions saved before sources were stored: the library entry of the same name and value.
                 const lib =
-                  v === null
+                  v === null || (b.kind !== 'fastener' && b.source)
                     ? undefined
                     : bridgeValues.find(
                         (x) =>
@@ -214,9 +215,11 @@ export function AssemblySheet({
                     <Td className="text-xs">
                       {b.kind === 'fastener'
                         ? 'ISO 6946:2017 Annex F'
-                        : lib
-                          ? `${SOURCE_TYPE_LABELS[lib.sourceType]} — ${lib.source}`
-                          : 'entered by hand'}
+                        : b.source
+                          ? b.source.text
+                          : lib
+                            ? `${SOURCE_TYPE_LABELS[lib.sourceType]} — ${lib.source}`
+                            : 'entered by hand'}
                     </Td>
                   </tr>
                 );

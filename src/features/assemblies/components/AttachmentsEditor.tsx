@@ -293,7 +293,10 @@ function LinearFields({
   );
 }
 
-/** Take χ or ψ from the firm's library; show where the value in use came from. */
+/** A library value's source in words, as stored with the bridge and printed on the sheet. */
+const bridgeSourceText = (b: BridgeValue) => `${SOURCE_TYPE_LABELS[b.sourceType]} — ${b.source}`;
+
+/** Take χ or ψ from the firm's library (its source is stored with the bridge); show where the value in use came from. */
 function LibraryPick({
   index: j,
   kind,
@@ -312,7 +315,12 @@ function LibraryPick({
   const system = useUnitSystem();
   const { bridgeValues, firmName } = useBuilder();
   const offered = bridgeValues.filter((b) => b.kind === kind);
-  const matched = offered.find((b) => b.name.slice(0, 120) === name && Math.abs(b.value - value) < 1e-12);
+  const source = bridge.source;
+  // The entry the stored source names; for revisions saved before sources were stored, the entry of the same name and value.
+  const matched = source
+    ? offered.find((b) => b.id === source.libraryEntryId)
+    : offered.find((b) => b.name.slice(0, 120) === name && Math.abs(b.value - value) < 1e-12);
+  const changedSince = matched !== undefined && Math.abs(matched.value - value) >= 1e-12;
   const measure = kind === 'point' ? 'chi' : 'psi';
   const symbol = kind === 'point' ? 'χ' : 'ψ';
 
@@ -329,11 +337,12 @@ function LibraryPick({
               const pick = offered.find((b) => b.id === e.target.value);
               if (!pick) return;
               const n = pick.name.slice(0, 120);
+              const from = { text: bridgeSourceText(pick), libraryEntryId: pick.id };
               array.update(
                 j,
                 kind === 'point'
-                  ? { ...(bridge as PointBridge), name: n, chi: pick.value }
-                  : { ...(bridge as LinearBridge), name: n, psi: pick.value },
+                  ? { ...(bridge as PointBridge), name: n, chi: pick.value, source: from }
+                  : { ...(bridge as LinearBridge), name: n, psi: pick.value, source: from },
               );
             }}
           >
@@ -352,11 +361,19 @@ function LibraryPick({
         )}
       </Field>
       <p className="max-w-md pb-1 text-xs text-ink-muted">
-        {matched ? (
+        {source || matched ? (
           <>
-            <span className="font-semibold text-ink">Source:</span> {SOURCE_TYPE_LABELS[matched.sourceType]} —{' '}
-            {matched.source}
-            {matched.notes ? ` (${matched.notes})` : ''}
+            <span className="font-semibold text-ink">Source:</span>{' '}
+            {source?.text ?? bridgeSourceText(matched!)}
+            {matched?.notes ? ` (${matched.notes})` : ''}
+            {source?.libraryEntryId && !matched ? ' — since removed from the library' : ''}
+            {changedSince ? (
+              <span className="block font-semibold text-caution">
+                ▲ {symbol} was changed after it was taken from the library (
+                {formatMeasure(matched.value, measure, system)}
+                there): the source may no longer apply.
+              </span>
+            ) : null}
           </>
         ) : (
           <>

@@ -1,12 +1,12 @@
 import type { ReactNode } from 'react';
 import { Controller, useFormContext } from 'react-hook-form';
 import { Field } from '../../../components/ui/Field';
+import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { fieldDomId } from '../evaluate';
 import { type AssemblyFormValues, p, useBuilder } from '../form';
-import type { Measure } from '../units';
-import { MeasureInput } from './MeasureInput';
+import { type Measure, measureInput } from '../units';
 
 /** The reason to show for a path: the form's own (on submit, from the server) or the live check's. */
 export function useFieldError(path: string): string | undefined {
@@ -44,10 +44,10 @@ export function MeasureField({
       control={control}
       name={p(path)}
       render={({ field }) => (
-        <MeasureInput
+        <QuantityInput
           id={fieldDomId(path)}
           label={label}
-          measure={measure}
+          measure={measureInput(measure)}
           name={field.name}
           value={typeof field.value === 'number' ? field.value : undefined}
           // react-hook-form restores the default value when a field is set to undefined; NaN keeps

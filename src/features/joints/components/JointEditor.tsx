@@ -17,7 +17,7 @@ import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { type FieldProblem, type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
-import { formatJointDimension, formatSheet } from '../../../lib/sheet-units';
+import { formatJointDimension, formatSheet, sheetInput } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AirDesign, newSide, removeAt, replaceAt } from '../draft';
 import { BACKER_LABELS, JOINT_TYPE_LABELS, MOVEMENT_CLASS_LABELS } from '../labels';
@@ -159,7 +159,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
         <QuantityInput
           id={fieldDomId(path('designWidth'))}
           label="Design width"
-          measure="joint"
+          measure={sheetInput('joint')}
           value={joint.designWidth}
           onChange={(v) => set({ designWidth: v ?? Number.NaN })}
           problem={pr('designWidth')}
@@ -168,17 +168,17 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
         <QuantityInput
           id={fieldDomId(path('designDepth'))}
           label="Design depth"
-          measure="joint"
+          measure={sheetInput('joint')}
           required={false}
           value={joint.designDepth}
-          onChange={(v) => setOptional('designDepth', v)}
+          onChange={(v, entry) => setOptional('designDepth', entry === 'invalid' ? Number.NaN : v)}
           problem={pr('designDepth')}
           hint="Optional: checked against the depth rule."
         />
         <QuantityInput
           id={fieldDomId(path('constructionTolerance'))}
           label="Construction tolerance"
-          measure="joint"
+          measure={sheetInput('joint')}
           value={joint.constructionTolerance}
           onChange={(v) => set({ constructionTolerance: v ?? Number.NaN })}
           problem={pr('constructionTolerance')}
@@ -249,7 +249,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                     <QuantityInput
                       id={fieldDomId(path(`sides.${k}.alpha`))}
                       label="Declared α"
-                      measure="alpha"
+                      measure={sheetInput('alpha')}
                       value={side.alpha}
                       onChange={(v) => setSide(k, { ...side, alpha: v ?? Number.NaN })}
                       problem={sp('alpha')}
@@ -275,7 +275,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
               <QuantityInput
                 id={fieldDomId(path(`sides.${k}.length`))}
                 label="Moving length L"
-                measure="length"
+                measure={sheetInput('length')}
                 value={side.length}
                 onChange={(v) => setSide(k, { ...side, length: v ?? Number.NaN })}
                 problem={sp('length')}
@@ -315,7 +315,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <QuantityInput
             id={fieldDomId(path('surfaceTemperatureRange.min'))}
             label="Lowest surface temperature"
-            measure="temperature"
+            measure={sheetInput('temperature')}
             value={joint.surfaceTemperatureRange.min}
             onChange={(v) =>
               set({ surfaceTemperatureRange: { ...joint.surfaceTemperatureRange, min: v ?? Number.NaN } })
@@ -325,7 +325,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <QuantityInput
             id={fieldDomId(path('surfaceTemperatureRange.max'))}
             label="Highest surface temperature"
-            measure="temperature"
+            measure={sheetInput('temperature')}
             value={joint.surfaceTemperatureRange.max}
             onChange={(v) =>
               set({ surfaceTemperatureRange: { ...joint.surfaceTemperatureRange, max: v ?? Number.NaN } })
@@ -365,7 +365,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                 <QuantityInput
                   id={fieldDomId(path('installationTemperature.min'))}
                   label="Coolest at installation"
-                  measure="temperature"
+                  measure={sheetInput('temperature')}
                   value={install.min}
                   onChange={(v) => set({ installationTemperature: { ...install, min: v ?? Number.NaN } })}
                   problem={pr('installationTemperature.min')}
@@ -373,7 +373,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                 <QuantityInput
                   id={fieldDomId(path('installationTemperature.max'))}
                   label="Warmest at installation"
-                  measure="temperature"
+                  measure={sheetInput('temperature')}
                   value={install.max}
                   onChange={(v) => set({ installationTemperature: { ...install, max: v ?? Number.NaN } })}
                   problem={pr('installationTemperature.max')}
@@ -383,7 +383,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
               <QuantityInput
                 id={fieldDomId(path('installationTemperature'))}
                 label="Surface temperature at installation"
-                measure="temperature"
+                measure={sheetInput('temperature')}
                 value={install}
                 onChange={(v) => set({ installationTemperature: v ?? Number.NaN })}
                 problem={pr('installationTemperature')}
@@ -406,19 +406,19 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <QuantityInput
             id={fieldDomId(path('otherMovement.extension'))}
             label="Other opening"
-            measure="joint"
+            measure={sheetInput('joint')}
             required={false}
             value={joint.otherMovement?.extension}
-            onChange={(v) => setOther('extension', v)}
+            onChange={(v, entry) => setOther('extension', entry === 'invalid' ? Number.NaN : v)}
             problem={pr('otherMovement.extension')}
           />
           <QuantityInput
             id={fieldDomId(path('otherMovement.compression'))}
             label="Other closing"
-            measure="joint"
+            measure={sheetInput('joint')}
             required={false}
             value={joint.otherMovement?.compression}
-            onChange={(v) => setOther('compression', v)}
+            onChange={(v, entry) => setOther('compression', entry === 'invalid' ? Number.NaN : v)}
             problem={pr('otherMovement.compression')}
           />
         </div>
@@ -445,20 +445,22 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <QuantityInput
             id={fieldDomId(path('openingDepth'))}
             label="Opening depth"
-            measure="joint"
+            measure={sheetInput('joint')}
             required={false}
             value={joint.openingDepth}
-            onChange={(v) => setOptional('openingDepth', v)}
+            onChange={(v, entry) => setOptional('openingDepth', entry === 'invalid' ? Number.NaN : v)}
             problem={pr('openingDepth')}
             hint="Face to back stop; decides rod or bond-breaker tape."
           />
           <QuantityInput
             id={fieldDomId(path('minimumPracticalWidth'))}
             label="Smallest workable width"
-            measure="joint"
+            measure={sheetInput('joint')}
             required={false}
             value={joint.minimumPracticalWidth}
-            onChange={(v) => setOptional('minimumPracticalWidth', v)}
+            onChange={(v, entry) =>
+              setOptional('minimumPracticalWidth', entry === 'invalid' ? Number.NaN : v)
+            }
             problem={pr('minimumPracticalWidth')}
             placeholder={formatJointDimension(DEFAULT_MINIMUM_WIDTH, system).replace(/\s*(mm|in)$/, '')}
             hint={`Blank = ${formatJointDimension(DEFAULT_MINIMUM_WIDTH, system)} (common trade practice).`}

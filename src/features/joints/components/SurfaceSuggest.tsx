@@ -14,7 +14,7 @@ import { Field } from '../../../components/ui/Field';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { calcProblem, type FieldProblem } from '../../../lib/field-problems';
-import { formatSheetRange } from '../../../lib/sheet-units';
+import { formatSheetRange, sheetInput } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import type { AirDesign } from '../draft';
 import { EXPOSURE_LABELS, FINISH_LABELS } from '../labels';
@@ -59,7 +59,7 @@ export function SurfaceSuggest({
         <div className="grid gap-3 sm:grid-cols-4">
           <QuantityInput
             label="Coldest air"
-            measure="temperature"
+            measure={sheetInput('temperature')}
             value={airMin}
             onChange={(v) => setAirMin(v ?? Number.NaN)}
             hint={air ? 'Project winter design temperature.' : undefined}
@@ -67,7 +67,7 @@ export function SurfaceSuggest({
           />
           <QuantityInput
             label="Hottest air"
-            measure="temperature"
+            measure={sheetInput('temperature')}
             value={airMax}
             onChange={(v) => setAirMax(v ?? Number.NaN)}
             hint={air ? 'Project summer design temperature.' : undefined}

@@ -6,9 +6,9 @@ import type { z } from 'zod';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
+import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextArea, TextInput } from '../../../components/ui/TextInput';
-import { UnitNumberInput } from '../../../components/ui/UnitNumberInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
 import { applyServerFieldErrors, unitAwareErrorMap } from '../../../lib/form-errors';
 import {
@@ -17,6 +17,7 @@ import {
   PROJECT_INPUT_FIELDS,
   type ProjectQuantityField,
 } from '../../../lib/project-fields';
+import { quantityInput as quantityMeasure } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
 
 export type ProjectFormValues = z.input<typeof projectInputSchema>;
@@ -98,9 +99,9 @@ export function ProjectForm({
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <UnitNumberInput
+        <QuantityInput
           label={L[name]}
-          quantity={PROJECT_FIELD_QUANTITIES[name]}
+          measure={quantityMeasure(PROJECT_FIELD_QUANTITIES[name])}
           name={field.name}
           value={field.value}
           // react-hook-form falls back to the default value when a field is set to `undefined`, which would
@@ -111,6 +112,8 @@ export function ProjectForm({
           error={fieldState.error?.message}
           hint={HINTS[name]}
           required
+          markRequired
+          size="form"
         />
       )}
     />

@@ -12,6 +12,7 @@ import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { type FieldProblem, type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
+import { sheetInput } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { newOpening, newTrim, newWall, removeAt, replaceAt } from '../draft';
 import { BEAD_SHAPE_LABELS, TAKEOFF_TYPE_LABELS } from '../labels';
@@ -155,7 +156,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
               <QuantityInput
                 id={id(`walls.${i}.length`)}
                 label="Length"
-                measure="length"
+                measure={sheetInput('length')}
                 value={w.length}
                 onChange={(v) => setWall(i, { ...w, length: v ?? Number.NaN })}
                 problem={pr(`walls.${i}.length`)}
@@ -163,7 +164,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
               <QuantityInput
                 id={id(`walls.${i}.height`)}
                 label="Height"
-                measure="length"
+                measure={sheetInput('length')}
                 value={w.height}
                 onChange={(v) => setWall(i, { ...w, height: v ?? Number.NaN })}
                 problem={pr(`walls.${i}.height`)}
@@ -242,7 +243,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                   <QuantityInput
                     id={id(`walls.${i}.openings.${j}.width`)}
                     label="Width"
-                    measure="length"
+                    measure={sheetInput('length')}
                     value={o.width}
                     onChange={(v) => setO({ width: v ?? Number.NaN })}
                     problem={op('width')}
@@ -250,7 +251,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                   <QuantityInput
                     id={id(`walls.${i}.openings.${j}.height`)}
                     label="Height"
-                    measure="length"
+                    measure={sheetInput('length')}
                     value={o.height}
                     onChange={(v) => setO({ height: v ?? Number.NaN })}
                     problem={op('height')}
@@ -300,7 +301,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
           <QuantityInput
             id={id('module.width')}
             label="Module width"
-            measure="length"
+            measure={sheetInput('length')}
             value={input.module.width}
             onChange={(v) => set({ module: { ...input.module, width: v ?? Number.NaN } })}
             problem={pr('module.width')}
@@ -309,7 +310,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
           <QuantityInput
             id={id('module.length')}
             label="Longest panel"
-            measure="length"
+            measure={sheetInput('length')}
             value={input.module.length}
             onChange={(v) => set({ module: { ...input.module, length: v ?? Number.NaN } })}
             problem={pr('module.length')}
@@ -373,7 +374,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                     <QuantityInput
                       id={id(`beads.${t}.width`)}
                       label="Width W"
-                      measure="joint"
+                      measure={sheetInput('joint')}
                       value={bead.width}
                       onChange={(v) => setB({ ...bead, width: v ?? Number.NaN })}
                       problem={bp('width')}
@@ -381,7 +382,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                     <QuantityInput
                       id={id(`beads.${t}.depth`)}
                       label="Depth D"
-                      measure="joint"
+                      measure={sheetInput('joint')}
                       value={bead.depth}
                       onChange={(v) => setB({ ...bead, depth: v ?? Number.NaN })}
                       problem={bp('depth')}
@@ -391,7 +392,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                   <QuantityInput
                     id={id(`beads.${t}.diameter`)}
                     label="Diameter d"
-                    measure="joint"
+                    measure={sheetInput('joint')}
                     value={bead.diameter}
                     onChange={(v) => setB({ ...bead, diameter: v ?? Number.NaN })}
                     problem={bp('diameter')}
@@ -400,7 +401,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                   <QuantityInput
                     id={id(`beads.${t}.leg`)}
                     label="Leg"
-                    measure="joint"
+                    measure={sheetInput('joint')}
                     value={bead.leg}
                     onChange={(v) => setB({ ...bead, leg: v ?? Number.NaN })}
                     problem={bp('leg')}
@@ -417,7 +418,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
           <QuantityInput
             id={id('wasteFactor')}
             label="Waste on sealant and tape"
-            measure="percent"
+            measure={sheetInput('percent')}
             value={input.wasteFactor}
             onChange={(v) => set({ wasteFactor: v ?? Number.NaN })}
             problem={pr('wasteFactor')}
@@ -474,7 +475,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             <QuantityInput
               id={id(`trims.${k}.stockLength`)}
               label="Stock length"
-              measure="length"
+              measure={sheetInput('length')}
               value={t.stockLength}
               onChange={(v) =>
                 set({ trims: replaceAt(input.trims, k, { ...t, stockLength: v ?? Number.NaN }) })
@@ -484,7 +485,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             <QuantityInput
               id={id(`trims.${k}.lapAllowance`)}
               label="Lap"
-              measure="spacing"
+              measure={sheetInput('spacing')}
               value={t.lapAllowance}
               onChange={(v) =>
                 set({ trims: replaceAt(input.trims, k, { ...t, lapAllowance: v ?? Number.NaN }) })
@@ -533,7 +534,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             <QuantityInput
               id={id('fasteners.spacingAlongGirt')}
               label="Spacing along each girt"
-              measure="spacing"
+              measure={sheetInput('spacing')}
               value={input.fasteners.spacingAlongGirt}
               onChange={(v) =>
                 input.fasteners &&
@@ -544,7 +545,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             <QuantityInput
               id={id('fasteners.girtSpacing')}
               label="Girt spacing up the wall"
-              measure="length"
+              measure={sheetInput('length')}
               value={input.fasteners.girtSpacing}
               onChange={(v) =>
                 input.fasteners && set({ fasteners: { ...input.fasteners, girtSpacing: v ?? Number.NaN } })
@@ -575,7 +576,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             <QuantityInput
               id={id('tape.width')}
               label="Tape width"
-              measure="joint"
+              measure={sheetInput('joint')}
               value={input.tape.width}
               onChange={(v) => input.tape && set({ tape: { ...input.tape, width: v ?? Number.NaN } })}
               problem={pr('tape.width')}
@@ -583,13 +584,13 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             <QuantityInput
               id={id('tape.rollLength')}
               label="Roll length"
-              measure="length"
+              measure={sheetInput('length')}
               required={false}
               value={input.tape.rollLength}
-              onChange={(v) => {
+              onChange={(v, entry) => {
                 if (!input.tape) return;
                 const { rollLength: _, ...rest } = input.tape;
-                set({ tape: v === undefined ? rest : { ...rest, rollLength: v } });
+                set({ tape: entry === 'empty' ? rest : { ...rest, rollLength: v ?? Number.NaN } });
               }}
               problem={pr('tape.rollLength')}
               hint="Optional: counts rolls."

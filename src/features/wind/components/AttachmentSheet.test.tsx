@@ -171,8 +171,8 @@ describe('the firm library on the sheet', () => {
     expect(panel.clip).toEqual({ allowableLoad: 2500 });
     expect(panel.panelModuleWidth).toBe(0.9);
     expect(panel.sources).toEqual({
-      loadSpanTable: { text: 'Library data sheet, rev. 4', productId: products[0]!.id },
-      clip: { text: 'Test report 12', productId: products[1]!.id },
+      loadSpanTable: { text: 'Library data sheet, rev. 4', libraryEntryId: products[0]!.id },
+      clip: { text: 'Test report 12', libraryEntryId: products[1]!.id },
     });
   });
 

@@ -8,15 +8,15 @@ import type { ReactNode } from 'react';
 import { Controller, type FieldPath, type UseFormReturn, useFieldArray } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { Th } from '../../../components/ui/Table';
 import { TextInput } from '../../../components/ui/TextInput';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AttachmentFormValues, blankRow, windFieldId } from '../form';
 import { SPAN_CONDITION_LABELS } from '../labels';
-import { formatWind, type WindMeasure, windUnit } from '../units';
+import { formatWind, type WindMeasure, windInput, windUnit } from '../units';
 import { type AttachmentLibrary, LibraryPick } from './LibraryPick';
-import { WindNumberInput } from './WindNumberInput';
 
 type Path = FieldPath<AttachmentFormValues>;
 
@@ -59,10 +59,10 @@ export function WindField({
       control={form.control}
       name={path}
       render={({ field }) => (
-        <WindNumberInput
+        <QuantityInput
           id={windFieldId(path)}
           label={label}
-          measure={measure}
+          measure={windInput(measure)}
           name={field.name}
           value={typeof field.value === 'number' ? field.value : null}
           // react-hook-form restores the default when a field is set to undefined: NaN keeps "nothing valid here"
@@ -72,6 +72,7 @@ export function WindField({
           error={errors[path]}
           hint={hint}
           required={!optional}
+          markRequired
           disabled={disabled}
           labelHidden={labelHidden}
           placeholder={placeholder}

@@ -10,6 +10,7 @@ import type { z } from 'zod';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
+import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
@@ -18,10 +19,9 @@ import { useUnitSystem } from '../../../lib/unit-system';
 import { conflictingProjectWind, useUpdateProjectWind } from '../api/update-project-wind';
 import { issueText } from '../evaluate';
 import { EDITIONS, ENCLOSURE_LABELS, EXPOSURE_LABELS, RISK_CATEGORIES } from '../labels';
-import { formatWind, type WindMeasure } from '../units';
+import { formatWind, type WindMeasure, windInput } from '../units';
 import { BuildingDimensions } from './ProjectWindSummary';
 import { Sym } from './Sym';
-import { WindNumberInput } from './WindNumberInput';
 
 type WindFormValues = z.input<typeof projectWindSchema>;
 type Key = keyof ProjectWind;
@@ -204,9 +204,9 @@ export function ProjectWindForm({ project, onDone }: { project: Project; onDone:
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <WindNumberInput
+        <QuantityInput
           label={labelOf(name)}
-          measure={MEASURES[name]!}
+          measure={windInput(MEASURES[name]!)}
           name={field.name}
           value={typeof field.value === 'number' ? field.value : undefined}
           onChange={(si) => field.onChange(si ?? Number.NaN)}
@@ -214,6 +214,7 @@ export function ProjectWindForm({ project, onDone }: { project: Project; onDone:
           inputRef={field.ref}
           error={fieldState.error?.message}
           hint={hint}
+          markRequired
         />
       )}
     />

@@ -1,9 +1,8 @@
-import { useQueryClient } from '@tanstack/react-query';
 import { useParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { useAssembly } from '../../features/assemblies/api/get-assembly';
-import { conflictingAssembly, useUpdateAssembly } from '../../features/assemblies/api/update-assembly';
+import { useAssemblyRevisionApi } from '../../features/assemblies/api/update-assembly';
 import {
   dataSheetHref,
   useAddAttachmentProduct,
@@ -14,7 +13,6 @@ import { useProject } from '../../features/projects/api/get-project';
 import { AttachmentSheet } from '../../features/wind/components/AttachmentSheet';
 import type { AttachmentLibrary } from '../../features/wind/components/LibraryPick';
 import { errorMessage } from '../../lib/api';
-import { assemblyKeys } from '../../lib/query-keys';
 import { AssemblyTabs } from '../layout/AssemblyTabs';
 
 /**
@@ -42,8 +40,7 @@ export function AssemblyAttachmentPage() {
   const { id = '', assemblyId = '' } = useParams();
   const { data: project } = useProject(id);
   const assembly = useAssembly(assemblyId);
-  const qc = useQueryClient();
-  const update = useUpdateAssembly();
+  const revisionApi = useAssemblyRevisionApi();
   const library = useAttachmentLibrary(project?.organisationId);
 
   if (!project) return null;
@@ -57,19 +54,7 @@ export function AssemblyAttachmentPage() {
     <div className="flex flex-col gap-10">
       <title>{`Attachment & wind · ${a.name} · ${project.name} · Skinwright`}</title>
       <AssemblyTabs projectId={project.id} assemblyId={a.id} name={a.name} />
-      <AttachmentSheet
-        key={a.id}
-        project={project}
-        assembly={a}
-        library={library}
-        save={(args) => update.mutateAsync(args)}
-        conflictOf={conflictingAssembly}
-        onLoadTheirs={(theirs) => {
-          qc.setQueryData(assemblyKeys.detail(theirs.id), theirs);
-          void qc.invalidateQueries({ queryKey: assemblyKeys.revisions(theirs.id) });
-        }}
-        errorText={errorMessage}
-      />
+      <AttachmentSheet key={a.id} project={project} assembly={a} library={library} {...revisionApi} />
     </div>
   );
 }

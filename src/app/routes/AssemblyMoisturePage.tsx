@@ -3,30 +3,28 @@ import { ENGINE_VERSION } from '@shared/calc/trace';
 import type { Assembly } from '@shared/schemas/assembly';
 import type { Project } from '@shared/schemas/project';
 import { drawClass } from '@shared/sheets/layer-class';
-import { useQueryClient } from '@tanstack/react-query';
 import { useMemo, useState } from 'react';
 import { Link, useParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
+import { RevisionSaveBar } from '../../components/ui/RevisionSaveBar';
 import { SheetSection } from '../../components/ui/SheetSection';
 import { ShowTheWork } from '../../components/ui/ShowTheWork';
 import { useAssembly } from '../../features/assemblies/api/get-assembly';
-import { conflictingAssembly, useUpdateAssembly } from '../../features/assemblies/api/update-assembly';
+import { useAssemblyRevisionApi } from '../../features/assemblies/api/update-assembly';
 import { ClimateSummary } from '../../features/climate/components/ClimateSummary';
 import { MoistureCautions } from '../../features/moisture/components/MoistureCautions';
 import { MoistureMethod } from '../../features/moisture/components/MoistureMethod';
 import { MoistureResults } from '../../features/moisture/components/MoistureResults';
 import { NeedsList } from '../../features/moisture/components/NeedsList';
 import type { ProfileLayer, ProfileMode } from '../../features/moisture/components/ProfileChart';
-import { VapourSaveBar } from '../../features/moisture/components/VapourSaveBar';
 import { VapourTable } from '../../features/moisture/components/VapourTable';
 import { evaluateMoisture } from '../../features/moisture/evaluate';
-import { useVapourEditing } from '../../features/moisture/use-vapour-editing';
-import { layerThickness } from '../../features/moisture/vapour-draft';
+import { useVapourEditing, type VapourEditing } from '../../features/moisture/use-vapour-editing';
+import { draftOf, KIND_SYMBOLS, KIND_UNITS, layerThickness } from '../../features/moisture/vapour-draft';
 import { useProject } from '../../features/projects/api/get-project';
 import { errorMessage } from '../../lib/api';
 import { formatDateTime } from '../../lib/format';
-import { assemblyKeys } from '../../lib/query-keys';
 import { useUnitSystem } from '../../lib/unit-system';
 import { AssemblyTabs } from '../layout/AssemblyTabs';
 
@@ -54,20 +52,9 @@ export function AssemblyMoisturePage() {
 
 function MoistureSheet({ project, assembly }: { project: Project; assembly: Assembly }) {
   const system = useUnitSystem();
-  const qc = useQueryClient();
-  const update = useUpdateAssembly();
   const archived = project.archivedAt !== null;
   const mayWrite = can(project.myRole, 'assembly.write') && !archived;
-  const editing = useVapourEditing({
-    assembly,
-    save: (args) => update.mutateAsync(args),
-    conflictOf: conflictingAssembly,
-    onLoadTheirs: (theirs) => {
-      qc.setQueryData(assemblyKeys.detail(theirs.id), theirs);
-      void qc.invalidateQueries({ queryKey: assemblyKeys.revisions(theirs.id) });
-    },
-    errorText: errorMessage,
-  });
+  const editing = useVapourEditing({ assembly, ...useAssemblyRevisionApi() });
   const [month, setMonth] = useState<number | null>(null);
   const [mode, setMode] = useState<ProfileMode>('temperature');
 
@@ -199,7 +186,27 @@ function MoistureSheet({ project, assembly }: { project: Project; assembly: Asse
 
       <MoistureCautions engineVersion={ENGINE_VERSION} />
 
-      {mayWrite ? <VapourSaveBar editing={editing} resultReady={result !== null} /> : null}
+      {mayWrite ? (
+        <RevisionSaveBar
+          editing={editing}
+          words={{
+            yours: 'entries',
+            carry: 'Carry my entries over',
+            unsaved: 'The vapour data have edits that are not saved.',
+            part: 'vapour data',
+            formLabel: 'Save the vapour data',
+            notePlaceholder: 'e.g. vapour retarder from the maker’s test report',
+            stillOnPage: false,
+          }}
+          undo
+          conflictDetail={<VapourConflictDetail editing={editing} />}
+          dirtyHint={
+            result
+              ? null
+              : 'Saving is allowed while the result waits for other data (the climate, other layers).'
+          }
+        />
+      ) : null}
       {archived ? (
         <p className="text-sm text-ink-muted">
           The project is archived, so its assemblies are shown read-only.
@@ -208,5 +215,47 @@ function MoistureSheet({ project, assembly }: { project: Project; assembly: Asse
         <p className="text-sm text-ink-muted">Your role on this project shows the vapour data read-only.</p>
       ) : null}
     </div>
+  );
+}
+
+const vapourWords = (v: Parameters<typeof draftOf>[0]) => {
+  const d = draftOf(v);
+  if (d.kind === 'none') return 'not entered';
+  const unit = KIND_UNITS[d.kind];
+  return `${KIND_SYMBOLS[d.kind]} ${d.text}${unit === '–' ? '' : ` ${unit}`}`;
+};
+
+/** What carrying the vapour entries over does after a stale save, or why they cannot be, with the entries. */
+function VapourConflictDetail({ editing: { conflict, layers } }: { editing: VapourEditing }) {
+  if (!conflict) return null;
+  return conflict.carry ? (
+    <p>
+      <strong>Carry my entries over</strong> starts from revision {conflict.theirs.revision} and puts back
+      every vapour value you changed
+      {conflict.carry.detail.bothChanged.length > 0
+        ? ` — where you both changed a layer (${conflict.carry.detail.bothChanged.map((i) => layers[i]?.name ?? `layer ${i + 1}`).join(', ')}), yours is kept`
+        : ''}
+      . Nothing is saved until you save again.
+    </p>
+  ) : (
+    <>
+      <p>
+        The layers themselves changed in revision {conflict.theirs.revision} (added, removed or moved), so
+        your vapour entries cannot be matched to layers. Load their revision and enter them again; yours were:
+      </p>
+      <ul className="num list-disc pl-5">
+        {layers
+          .map((l, i) => ({
+            name: l.name,
+            key: `${i}:${l.name}`,
+            words: vapourWords(conflict.mine.vapour?.[i]),
+          }))
+          .map((row) => (
+            <li key={row.key}>
+              <span className="font-sans">{row.name}</span>: {row.words}
+            </li>
+          ))}
+      </ul>
+    </>
   );
 }

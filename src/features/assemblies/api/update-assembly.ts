@@ -1,8 +1,9 @@
 import { type Assembly, type AssemblyInput, assemblySchema } from '@shared/schemas/assembly';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { apiRequest, isApiRequestError } from '../../../lib/api';
+import { apiRequest, errorMessage, isApiRequestError } from '../../../lib/api';
 import { assemblyKeys, auditKeys } from '../../../lib/query-keys';
+import type { RevisionApi } from '../../../lib/use-revision-editing';
 
 /** `PUT /api/assemblies/:assemblyId` `{version, note, input}` → the assembly at its new revision. */
 export const updateAssembly = ({
@@ -43,4 +44,19 @@ export function useUpdateAssembly() {
     // On a conflict the cached detail is NOT replaced here: the builder still holds the person's edits and
     // decides with them whether to load the saved revision or carry the edits over.
   });
+}
+
+/** What every assembly sheet hands to the shared revision editing (src/lib/use-revision-editing.ts) to save. */
+export function useAssemblyRevisionApi(): RevisionApi {
+  const qc = useQueryClient();
+  const update = useUpdateAssembly();
+  return {
+    save: (args) => update.mutateAsync(args),
+    conflictOf: conflictingAssembly,
+    onLoadTheirs: (theirs) => {
+      qc.setQueryData(assemblyKeys.detail(theirs.id), theirs);
+      void qc.invalidateQueries({ queryKey: assemblyKeys.revisions(theirs.id) });
+    },
+    errorText: errorMessage,
+  };
 }

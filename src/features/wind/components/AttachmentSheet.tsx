@@ -6,12 +6,12 @@ import type { Project } from '@shared/schemas/project';
 import { Link } from 'react-router';
 import { Cautions } from '../../../components/ui/Cautions';
 import { Notice } from '../../../components/ui/Notice';
+import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { SheetSection } from '../../../components/ui/SheetSection';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
 import { formatDateTime } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AttachmentEditingOptions, useAttachmentEditing } from '../use-attachment-editing';
-import { AttachmentSaveBar } from './AttachmentSaveBar';
 import type { AttachmentLibrary } from './LibraryPick';
 import { MissingData } from './MissingData';
 import { DesignSpacingInputs, PanelInputs } from './PanelInputs';
@@ -178,7 +178,34 @@ export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
 
       <Cautions items={[LEAD_CAUTION, ...CAUTIONS]} engineVersion={ENGINE_VERSION} />
 
-      {mayWrite ? <AttachmentSaveBar editing={editing} /> : null}
+      {mayWrite ? (
+        <RevisionSaveBar
+          editing={editing}
+          words={{
+            yours: 'values',
+            carry: 'Carry my values over',
+            unsaved: 'The attachment sheet has edits that are not saved.',
+            formLabel: 'Save the attachment inputs',
+            noteHint: 'What changed and why; name the maker’s table and clip test you used.',
+            notePlaceholder:
+              'e.g. girts at 1.2 m; load–span table of the 0.7 mm panel, maker’s 2024 catalogue',
+          }}
+          undo
+          conflictDetail={
+            editing.conflict ? (
+              <p>
+                <strong>Carry my values over</strong> starts from revision {editing.conflict.theirs.revision}{' '}
+                and puts your design spacings, panel table and clip on top of it; their other changes
+                (build-up, vapour, joints) stay.
+                {editing.conflict.carry?.detail.theyChangedWind
+                  ? ' They also changed the wind inputs of this sheet — yours replace theirs, so compare first.'
+                  : ''}{' '}
+                Nothing is saved until you save again.
+              </p>
+            ) : null
+          }
+        />
+      ) : null}
       {archived ? (
         <p className="text-sm text-ink-muted">
           The project is archived, so its assemblies are shown read-only.

@@ -1,0 +1,255 @@
+import type { Assembly } from '@shared/schemas/assembly';
+import { type ReactNode, useEffect, useRef } from 'react';
+import { useBlocker } from 'react-router';
+import { formatDateTime } from '../../lib/format';
+import type { RevisionSaving } from '../../lib/use-revision-editing';
+import { Button } from './Button';
+import { Field } from './Field';
+import { Notice } from './Notice';
+import { TextInput } from './TextInput';
+
+/** The words of one sheet in its save bar and notices. */
+export interface RevisionSaveWords {
+  /** What the person's unsaved work is called: “Your entries are kept”, “Load theirs (discard my entries)”. */
+  yours: string;
+  /** The carry-over button, e.g. “Carry my values over”. */
+  carry: string;
+  /** How the notice after carrying over names the work (“Your changes are now on top of …”; default `yours`). */
+  carried?: string;
+  /** The title of the notice that asks before leaving with unsaved edits. */
+  unsaved: string;
+  /** The part of the assembly the sheet saves, named in the button (“Save vapour data as revision 4”). */
+  part?: string;
+  /** Form name of the bar when it is a form of its own (“Save the vapour data”). */
+  formLabel?: string;
+  noteHint?: string;
+  notePlaceholder: string;
+  /** The conflict notice adds “, and your … are still on this page” (default true). */
+  stillOnPage?: boolean;
+}
+
+interface RevisionSaveBarProps {
+  editing: RevisionSaving;
+  words: RevisionSaveWords;
+  /** Save submits the form the bar stands in (the builder); otherwise it submits the bar's own form when
+   * `words.formLabel` names one, else it is a button of its own. */
+  inForm?: boolean;
+  /** Figures shown live at the left of the bar. */
+  live?: ReactNode;
+  /** The sheet's own paragraphs in the conflict notice, after who saved when. */
+  conflictDetail?: ReactNode;
+  /** More in the notice after carrying over (e.g. the values both changed). */
+  carriedDetail?: ReactNode;
+  /** A line under Save while there are edits. */
+  dirtyHint?: ReactNode;
+  /** Offer “Undo my edits”. */
+  undo?: boolean;
+  /** Show the “newer revision elsewhere” notice here (false: the sheet shows `NewerRevisionNotice` itself). */
+  showNewer?: boolean;
+  /** Bring the conflict notice into view when it appears. */
+  scrollToConflict?: boolean;
+  /** Of the wrapper: `contents` lets the notices stand in the sheet's own column. */
+  className?: string;
+}
+
+/** Someone saved a newer revision while this person has edits. */
+export function NewerRevisionNotice({ newer, yours }: { newer: Assembly | null; yours: string }) {
+  if (!newer) return null;
+  return (
+    <Notice
+      tone="warning"
+      title={`Revision ${newer.revision} was saved by someone else while you were editing.`}
+    >
+      <p>
+        Your {yours} are kept. When you save, you will be asked whether to carry them over or load theirs.
+      </p>
+    </Notice>
+  );
+}
+
+/**
+ * Saving a sheet's edits as a new revision of the assembly, with a revision note: asks before leaving with unsaved
+ * edits; a stale save shows who saved first and lets the person carry their edits over or load the saved revision;
+ * the server's refusals are listed. The same on every assembly sheet; the sheet brings its words.
+ */
+export function RevisionSaveBar({
+  editing,
+  words,
+  inForm = false,
+  live,
+  conflictDetail,
+  carriedDetail,
+  dirtyHint,
+  undo = false,
+  showNewer = true,
+  scrollToConflict = false,
+  className = 'flex flex-col gap-4',
+}: RevisionSaveBarProps) {
+  const { base, conflict, carried, dirty, canSave, saving, savedAs, problem, note, setNote, leaving } =
+    editing;
+  const conflictRef = useRef<HTMLDivElement>(null);
+
+  // Unsaved edits: ask before leaving the page (in-app links and the browser alike).
+  const blocker = useBlocker(
+    ({ currentLocation, nextLocation }) =>
+      dirty &&
+      !leaving.current &&
+      (currentLocation.pathname !== nextLocation.pathname || currentLocation.search !== nextLocation.search),
+  );
+  useEffect(() => {
+    if (!dirty) return;
+    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [dirty]);
+
+  useEffect(() => {
+    if (conflict && scrollToConflict)
+      requestAnimationFrame(() => conflictRef.current?.scrollIntoView({ block: 'center' }));
+  }, [conflict, scrollToConflict]);
+
+  const row = 'flex flex-wrap items-end gap-x-6 gap-y-3';
+  const saveButton = (
+    <Button
+      type={inForm || words.formLabel ? 'submit' : 'button'}
+      variant="primary"
+      busy={saving}
+      busyLabel="Saving…"
+      disabled={conflict !== null || !canSave}
+      onClick={inForm || words.formLabel ? undefined : () => void editing.saveNow()}
+    >
+      {base ? `Save ${words.part ? `${words.part} ` : ''}as revision ${base.version + 1}` : 'Create assembly'}
+    </Button>
+  );
+  const content = (
+    <>
+      {live}
+      {base ? (
+        <Field
+          label="Revision note"
+          hint={words.noteHint ?? 'What changed, and why (kept with the revision).'}
+          className="min-w-64 flex-1"
+        >
+          {(c) => (
+            <TextInput
+              {...c}
+              value={note}
+              maxLength={500}
+              onChange={(e) => setNote(e.target.value)}
+              placeholder={words.notePlaceholder}
+              className="py-1.5 text-sm"
+            />
+          )}
+        </Field>
+      ) : (
+        <p className="flex-1 text-sm text-ink-muted">The first save creates revision 1.</p>
+      )}
+      <div className="flex flex-col items-end gap-1">
+        {undo ? (
+          <div className="flex gap-3">
+            {dirty ? (
+              <Button variant="quiet" onClick={editing.discard} disabled={saving}>
+                Undo my edits
+              </Button>
+            ) : null}
+            {saveButton}
+          </div>
+        ) : (
+          saveButton
+        )}
+        {savedAs !== null && !dirty ? (
+          <p role="status" className="text-xs">
+            <span aria-hidden="true">✓ </span>Saved as revision {savedAs}.
+          </p>
+        ) : base && !dirty ? (
+          <p className="text-xs text-ink-muted">No changes to save.</p>
+        ) : dirtyHint ? (
+          <p className="text-xs text-ink-muted">{dirtyHint}</p>
+        ) : null}
+      </div>
+    </>
+  );
+
+  return (
+    <div className={className}>
+      {showNewer ? <NewerRevisionNotice newer={editing.newerElsewhere} yours={words.yours} /> : null}
+
+      {conflict ? (
+        <div ref={conflictRef}>
+          <Notice tone="warning" title="Someone else saved this assembly first." live>
+            <p>
+              Revision <span className="num">{conflict.theirs.revision}</span> was saved
+              {conflict.theirs.current.createdBy ? ` by ${conflict.theirs.current.createdBy}` : ''} at{' '}
+              <span className="num">{formatDateTime(conflict.theirs.current.createdAt)}</span>
+              {conflict.theirs.current.note ? ` (“${conflict.theirs.current.note}”)` : ''} while you were
+              editing revision <span className="num">{base?.version}</span>. Nothing of yours has been saved
+              {words.stillOnPage === false ? '' : `, and your ${words.yours} are still on this page`}.
+            </p>
+            {conflictDetail}
+            <div className="flex flex-wrap gap-3 pt-1">
+              {conflict.carry ? (
+                <Button variant="secondary" onClick={editing.carryOver}>
+                  {words.carry}
+                </Button>
+              ) : null}
+              <Button variant="secondary" onClick={editing.loadTheirs}>
+                Load theirs (discard my {words.yours})
+              </Button>
+            </div>
+          </Notice>
+        </div>
+      ) : carried ? (
+        <Notice
+          tone="info"
+          title={`Your ${words.carried ?? words.yours} are now on top of revision ${carried.onto}. Check them, then save as revision ${carried.onto + 1}.`}
+        >
+          {carriedDetail}
+        </Notice>
+      ) : null}
+
+      {blocker.state === 'blocked' ? (
+        <Notice tone="warning" title={words.unsaved} live>
+          <div className="flex flex-wrap gap-3 pt-1">
+            <Button variant="secondary" onClick={() => blocker.reset?.()}>
+              Stay and keep editing
+            </Button>
+            <Button
+              variant="danger"
+              onClick={() => {
+                leaving.current = true;
+                blocker.proceed?.();
+              }}
+            >
+              Leave without saving
+            </Button>
+          </div>
+        </Notice>
+      ) : null}
+
+      {problem ? (
+        <Notice tone="caution" title="Not saved." live>
+          {problem.map((m) => (
+            <p key={m}>{m}</p>
+          ))}
+        </Notice>
+      ) : null}
+
+      <div className="sticky bottom-0 z-10 -mx-4 border-t-2 border-ink bg-paper px-4 py-3 sm:-mx-6 sm:px-6">
+        {words.formLabel ? (
+          <form
+            className={row}
+            aria-label={words.formLabel}
+            onSubmit={(e) => {
+              e.preventDefault();
+              void editing.saveNow();
+            }}
+          >
+            {content}
+          </form>
+        ) : (
+          <div className={row}>{content}</div>
+        )}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,289 @@
+import type { Assembly, AssemblyInput } from '@shared/schemas/assembly';
+import { useEffect, useRef, useState } from 'react';
+import { isApiRequestError } from './api';
+
+/*
+ * One assembly sheet's edits while they are made, and saving them as a new revision of the assembly — the same
+ * for every sheet (build-up, moisture, attachment, joints), which differ only in the parameters below. A stale
+ * save (409) never overwrites: the person carries their edits onto the revision someone else saved, or loads
+ * it. Nothing is saved without a click. The sheet keeps its values where it likes (react-hook-form or state)
+ * and hands them in with a way to replace them; the API calls are handed in too (src/lib imports no feature).
+ */
+
+export interface SaveArgs {
+  assemblyId: string;
+  version: number;
+  note: string;
+  input: AssemblyInput;
+}
+
+/** Why the sheet's values are replaced: after a save, a create, a newer revision taken in, theirs loaded, a carry-over, an undo. */
+export type ResetReason = 'saved' | 'created' | 'newer' | 'theirs' | 'carried' | 'discard';
+
+/**
+ * Whether a revision note typed on an otherwise unchanged sheet counts: `saves` — it is an edit (kept from
+ * leaving, and it may be saved as a revision on its own); `guards` — it is kept from leaving, but Save needs an
+ * edited value; `ignored` — only the values count (undo keeps the note).
+ */
+export type NoteAlone = 'saves' | 'guards' | 'ignored';
+
+/** How this person's edits go onto the revision someone else saved. */
+export interface Carry<V, D> {
+  /** The values to go on with; absent: the sheet's values stay as they are. */
+  values?: V;
+  /** What the sheet tells about it (e.g. the values both changed). */
+  detail: D;
+}
+
+export interface RevisionConflict<V, D> {
+  /** The assembly as someone else saved it. */
+  theirs: Assembly;
+  /** The input this person tried to save. */
+  mine: AssemblyInput;
+  /** How to carry the edits over; null when they cannot be matched to their revision (only loading it is offered). */
+  carry: Carry<V, D> | null;
+}
+
+/** The API calls a sheet hands in (src/lib imports no feature): `useAssemblyRevisionApi` in features/assemblies. */
+export interface RevisionApi {
+  save: (args: SaveArgs) => Promise<Assembly>;
+  /** The assembly as saved by someone else, from a 409 error; null for any other error. */
+  conflictOf: (error: unknown) => Assembly | null;
+  /** Put their revision in the cache when the person loads it. */
+  onLoadTheirs: (theirs: Assembly) => void;
+  errorText: (error: unknown) => string;
+}
+
+export interface RevisionEditingOptions<V, D, A extends Assembly | undefined> extends RevisionApi {
+  /** The assembly as the cache holds it now (it may move on when someone else saves); undefined while creating one. */
+  assembly: A;
+  /** The sheet's values now. */
+  values: V;
+  /** Whether the values differ from those of the base revision (`base` is undefined while creating). */
+  isEdited: (values: V, base: A) => boolean;
+  /** Put values on the sheet. */
+  reset: (values: V, why: ResetReason) => void;
+  /** The sheet's values for a saved input. */
+  formValues: (input: AssemblyInput) => V;
+  /**
+   * The input to save — the base revision's input with the edits put in — or the reasons it cannot be saved yet.
+   * `submitted` is what the form's resolver parsed, when the sheet submits through react-hook-form.
+   */
+  toInput: (
+    values: V,
+    base: A,
+    submitted?: AssemblyInput,
+  ) => { input: AssemblyInput; problem?: undefined } | { problem: string[] };
+  /** After a 409: how the edits go onto their revision (`mine` is what was sent, `values` the sheet's then). */
+  carryOver: (c: { base: Assembly; mine: AssemblyInput; values: V; theirs: Assembly }) => Carry<V, D> | null;
+  /** After carrying over, the sheet counts as edited and says so until saved (default true). */
+  markCarried?: boolean;
+  noteAlone?: NoteAlone;
+  /**
+   * A server reason (400 `fields`, keyed by the request's dotted path, e.g. `input.vapour.3`): the form path it
+   * is shown at on this sheet, or null when this sheet has no field for it (default: none has).
+   */
+  fieldPath?: (serverPath: string) => string | null;
+  /** The lines of “Not saved.” after the server refused values (default: see the fields marked ✕, then the rest by path). */
+  notAccepted?: (unmapped: [path: string, message: string][], mapped: Record<string, string>) => string[];
+  /** The part of the values the server's reasons stay shown for: they go when it changes (default: all the values). */
+  snapshot?: (values: V) => unknown;
+  /** Creating the assembly, when `assembly` is undefined. */
+  create?: (input: AssemblyInput) => Promise<Assembly>;
+  onCreated?: (created: Assembly) => void;
+}
+
+/** What the save bar reads (any sheet's editing state). */
+export interface RevisionSaving {
+  base: Assembly | undefined;
+  note: string;
+  setNote: (note: string) => void;
+  saving: boolean;
+  savedAs: number | null;
+  problem: string[] | null;
+  conflict: RevisionConflict<unknown, unknown> | null;
+  carried: { onto: number; detail: unknown } | null;
+  /** A newer revision saved elsewhere while this sheet has edits. */
+  newerElsewhere: Assembly | null;
+  /** Unsaved work on the sheet (asked about before leaving). */
+  dirty: boolean;
+  canSave: boolean;
+  /** Set when the sheet is left on purpose (no more asking). */
+  leaving: { current: boolean };
+  saveNow: (submitted?: AssemblyInput) => Promise<void>;
+  carryOver: () => void;
+  loadTheirs: () => void;
+  discard: () => void;
+}
+
+export interface RevisionEditing<V, D, A extends Assembly | undefined> extends RevisionSaving {
+  /** The revision the edits started from (undefined while creating). */
+  base: A;
+  conflict: RevisionConflict<V, D> | null;
+  carried: { onto: number; detail: D } | null;
+  /** The values differ from the base revision's. */
+  edited: boolean;
+  /** The server's reasons by form path, while the values it judged are on the sheet. */
+  serverErrors: Record<string, string>;
+  setSavedAs: (revision: number | null) => void;
+  setProblem: (problem: string[] | null) => void;
+}
+
+const notAcceptedByPath = (unmapped: [string, string][]) => [
+  'The server did not accept some values — see the fields marked ✕.',
+  ...unmapped.map(([path, message]) => `${path.replace(/^input\./, '')}: ${message}`),
+];
+
+export function useRevisionEditing<V, D = undefined, A extends Assembly | undefined = Assembly>(
+  options: RevisionEditingOptions<V, D, A>,
+): RevisionEditing<V, D, A> {
+  const {
+    assembly,
+    values,
+    reset,
+    formValues,
+    markCarried = true,
+    noteAlone = 'saves',
+    fieldPath = () => null,
+    notAccepted = notAcceptedByPath,
+    snapshot = (v: V) => v,
+  } = options;
+  const [base, setBase] = useState<A>(assembly);
+  const [note, setNote] = useState('');
+  const [saving, setSaving] = useState(false);
+  const [savedAs, setSavedAs] = useState<number | null>(null);
+  const [problem, setProblem] = useState<string[] | null>(null);
+  const [conflict, setConflict] = useState<RevisionConflict<V, D> | null>(null);
+  const [carried, setCarried] = useState<{ onto: number; detail: D } | null>(null);
+  const [server, setServer] = useState<{ snapshot: string; errors: Record<string, string> } | null>(null);
+  /** True from the moment a save is sent until its answer has been taken in. */
+  const savingRef = useRef(false);
+  const leaving = useRef(false);
+
+  const keyOf = (v: V) => JSON.stringify(snapshot(v));
+  const serverErrors = server && server.snapshot === keyOf(values) ? server.errors : {};
+  const edited = options.isEdited(values, base);
+  const dirty = edited || (noteAlone !== 'ignored' && note.trim() !== '') || carried !== null;
+  const canSave = base === undefined || (noteAlone === 'guards' ? edited || carried !== null : dirty);
+
+  // Someone saved a newer revision while this sheet was open: take it if nothing here is edited.
+  // biome-ignore lint/correctness/useExhaustiveDependencies: reset and formValues are the sheet's (new each render)
+  useEffect(() => {
+    if (!assembly || !base || savingRef.current || conflict || assembly.version <= base.version || dirty)
+      return;
+    setBase(assembly);
+    reset(formValues(assembly.current.input), 'newer');
+  }, [assembly, base, conflict, dirty]);
+  const newerElsewhere =
+    assembly && base && !conflict && !savingRef.current && dirty && assembly.version > base.version
+      ? assembly
+      : null;
+
+  async function saveNow(submitted?: AssemblyInput) {
+    setProblem(null);
+    setSavedAs(null);
+    const made = options.toInput(values, base, submitted);
+    if (made.problem) {
+      setProblem(made.problem);
+      return;
+    }
+    const { input } = made;
+    savingRef.current = true;
+    setSaving(true);
+    try {
+      if (!base) {
+        if (!options.create) throw new Error('Nothing to create the assembly with.');
+        const created = await options.create(input);
+        leaving.current = true;
+        reset(formValues(input), 'created');
+        options.onCreated?.(created);
+        return;
+      }
+      const saved = await options.save({
+        assemblyId: base.id,
+        version: base.version,
+        note: note.trim(),
+        input,
+      });
+      setBase(saved as A);
+      reset(formValues(saved.current.input), 'saved');
+      setNote('');
+      setCarried(null);
+      setSavedAs(saved.revision);
+    } catch (e) {
+      const theirs = base ? options.conflictOf(e) : null;
+      if (base && theirs) {
+        setConflict({ theirs, mine: input, carry: options.carryOver({ base, mine: input, values, theirs }) });
+        return;
+      }
+      if (isApiRequestError(e) && e.fields) {
+        const mapped: Record<string, string> = {};
+        const unmapped: [string, string][] = [];
+        for (const [path, message] of Object.entries(e.fields)) {
+          const at = fieldPath(path);
+          if (at === null) unmapped.push([path, message]);
+          else mapped[at] = message;
+        }
+        setServer({ snapshot: keyOf(values), errors: mapped });
+        setProblem(notAccepted(unmapped, mapped));
+        return;
+      }
+      setProblem([options.errorText(e)]);
+    } finally {
+      savingRef.current = false;
+      setSaving(false);
+    }
+  }
+
+  function carryOver() {
+    if (!conflict?.carry) return;
+    const { theirs, carry } = conflict;
+    setBase(theirs as A);
+    if (carry.values !== undefined) reset(carry.values, 'carried');
+    if (markCarried) setCarried({ onto: theirs.revision, detail: carry.detail });
+    setConflict(null);
+  }
+
+  function loadTheirs() {
+    if (!conflict) return;
+    const { theirs } = conflict;
+    options.onLoadTheirs(theirs);
+    setBase(theirs as A);
+    reset(formValues(theirs.current.input), 'theirs');
+    setCarried(null);
+    setConflict(null);
+    setNote('');
+  }
+
+  function discard() {
+    if (!base) return;
+    reset(formValues(base.current.input), 'discard');
+    setCarried(null);
+    setProblem(null);
+    setServer(null);
+    if (noteAlone !== 'ignored') setNote('');
+  }
+
+  return {
+    base,
+    note,
+    setNote,
+    saving,
+    savedAs,
+    setSavedAs,
+    problem,
+    setProblem,
+    conflict,
+    carried,
+    newerElsewhere,
+    edited,
+    dirty,
+    canSave,
+    serverErrors,
+    leaving,
+    saveNow,
+    carryOver,
+    loadTheirs,
+    discard,
+  };
+}

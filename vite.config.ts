@@ -27,13 +27,19 @@ export default defineConfig({
             'tests/architecture/**/*.test.ts',
           ],
           environment: 'node',
+          setupFiles: ['tests/setup/fast-check.ts'],
         },
       },
       {
         plugins: [react()],
         resolve: { alias },
         define: { global: 'globalThis' },
-        test: { name: 'client', include: ['src/**/*.test.tsx', 'src/**/*.test.ts'], environment: 'jsdom' },
+        test: {
+          name: 'client',
+          include: ['src/**/*.test.tsx', 'src/**/*.test.ts'],
+          environment: 'jsdom',
+          setupFiles: ['tests/setup/fast-check.ts'],
+        },
       },
       {
         resolve: { alias },
@@ -42,6 +48,7 @@ export default defineConfig({
           include: ['tests/api/**/*.test.ts'],
           environment: 'node',
           globalSetup: ['tests/setup/postgres.ts'],
+          setupFiles: ['tests/setup/fast-check.ts'],
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },

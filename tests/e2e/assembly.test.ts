@@ -1,25 +1,13 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, openDemoAssembly, screenshot, signIn, startTestServer } from '../setup/browser';
+import { describe, expect, it } from 'vitest';
+import { browserSuite, openDemoAssembly, screenshot, signIn } from '../setup/browser';
 
 /** The architect opens the demo assembly, halves the clip spacing, and sees the effective R drop live. */
 describe('assembly builder in the browser', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
-  beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchChromium();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const suite = browserSuite();
 
   it('effective R changes when the clip spacing changes', async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
-    const problems: string[] = [];
-    page.on('pageerror', (e) => problems.push(e.message));
-    await signIn(page, server.baseUrl, 'architect@skinwright.demo');
+    const { page, problems } = await suite.openPage({ viewport: { width: 1280, height: 1000 } });
+    await signIn(page, suite.baseUrl, 'architect@skinwright.demo');
     await openDemoAssembly(page);
     const live = page.getByTestId('live-Reff');
     await live.waitFor();

@@ -1,6 +1,6 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, screenshot, signIn, startTestServer } from '../setup/browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { browserSuite, screenshot, signIn } from '../setup/browser';
 
 /**
  * Code tables and the compliance runner in real Chromium: the demo architect enters a maximum U-factor for
@@ -8,16 +8,7 @@ import { launchChromium, screenshot, signIn, startTestServer } from '../setup/br
  * criterion — the used version is frozen, so the edit becomes version 2 — and checks again (fail).
  */
 describe('code tables and check runs in the browser', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
-  beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchChromium();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const suite = browserSuite();
 
   async function runOn(page: Page, checksUrl: string, tableLabel: RegExp) {
     await page.goto(checksUrl);
@@ -37,20 +28,18 @@ describe('code tables and check runs in the browser', () => {
   }
 
   it('enters a criterion, checks the demo assembly (pass), tightens it and checks again (fail)', async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-    const problems: string[] = [];
-    page.on('pageerror', (e) => problems.push(e.message));
-    await signIn(page, server.baseUrl, 'architect@skinwright.demo');
+    const { page, problems } = await suite.openPage();
+    await signIn(page, suite.baseUrl, 'architect@skinwright.demo');
 
     // The demo project and its assembly (steel-framed wall, climate zone 5A).
-    const projects = await (await page.request.get(`${server.baseUrl}/api/projects`)).json();
+    const projects = await (await page.request.get(`${suite.baseUrl}/api/projects`)).json();
     const projectId = projects.projects[0].id as string;
     const assemblies = await (
-      await page.request.get(`${server.baseUrl}/api/projects/${projectId}/assemblies`)
+      await page.request.get(`${suite.baseUrl}/api/projects/${projectId}/assemblies`)
     ).json();
     const assembly = assemblies.assemblies[0] as { id: string; wallCategory: string };
     expect(assembly.wallCategory).toBe('steel_framed');
-    const checksUrl = `${server.baseUrl}/projects/${projectId}/assemblies/${assembly.id}/checks`;
+    const checksUrl = `${suite.baseUrl}/projects/${projectId}/assemblies/${assembly.id}/checks`;
 
     // A new code table with one row: maximum U-factor, 5A × steel-framed wall.
     await page.getByRole('link', { name: 'Code tables' }).click();

@@ -1,25 +1,13 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, screenshot, signIn, startTestServer } from '../setup/browser';
+import { describe, expect, it } from 'vitest';
+import { browserSuite, screenshot, signIn } from '../setup/browser';
 
 /** A person's path through the foundation in real Chromium against the real server (built client, fresh PGlite). */
 describe('foundation in the browser', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
-  beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchChromium();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const suite = browserSuite();
 
   it('the demo architect signs in, creates a project and sees it listed', async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-    const problems: string[] = [];
-    page.on('pageerror', (e) => problems.push(e.message));
-    await signIn(page, server.baseUrl, 'architect@skinwright.demo');
+    const { page, problems } = await suite.openPage();
+    await signIn(page, suite.baseUrl, 'architect@skinwright.demo');
     await expect(page.getByRole('link', { name: 'Corvid Lane Cold Store' })).toBeTruthy();
     await page.getByRole('link', { name: 'New project' }).first().click();
     await page.waitForURL(/\/projects\/new/);
@@ -41,16 +29,16 @@ describe('foundation in the browser', () => {
     await page.waitForURL(/\/projects\/[0-9a-f-]{36}$/);
     await page.getByRole('heading', { name: 'Quarry Road Workshop' }).first().waitFor();
 
-    await page.goto(`${server.baseUrl}/projects`);
+    await page.goto(`${suite.baseUrl}/projects`);
     await page.getByRole('link', { name: 'Quarry Road Workshop' }).waitFor();
     await screenshot(page, 'foundation-projects-list');
     expect(problems).toEqual([]);
   });
 
   it('a viewer sees the project but no edit or invite actions', async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const context = await suite.browser.newContext({ viewport: { width: 1280, height: 900 } });
     const page = await context.newPage();
-    await signIn(page, server.baseUrl, 'viewer@skinwright.demo');
+    await signIn(page, suite.baseUrl, 'viewer@skinwright.demo');
     await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
     await page.waitForURL(/\/projects\/[0-9a-f-]{36}$/);
     await page.getByRole('heading', { name: 'Corvid Lane Cold Store' }).first().waitFor();

@@ -1,7 +1,7 @@
 import { readFile } from 'node:fs/promises';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, openDemoAssembly, screenshot, signIn, startTestServer } from '../setup/browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { browserSuite, openDemoAssembly, openPage, screenshot, signIn } from '../setup/browser';
 
 /** Open the demo assembly's "Joints & quantities" sheet from the project list, as a person would. */
 async function openJointsSheet(page: Page) {
@@ -13,26 +13,15 @@ async function openJointsSheet(page: Page) {
 
 /** The joint schedule and the takeoff in real Chromium against the real server (built client, fresh PGlite). */
 describe('joints & quantities in the browser', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
-  beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchChromium();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const suite = browserSuite();
 
   it('the subcontractor reads the schedule and the takeoff and downloads the CSV', async () => {
-    const context = await browser.newContext({
+    const context = await suite.browser.newContext({
       viewport: { width: 1280, height: 1000 },
       acceptDownloads: true,
     });
-    const page = await context.newPage();
-    const problems: string[] = [];
-    page.on('pageerror', (e) => problems.push(e.message));
-    await signIn(page, server.baseUrl, 'subcontractor@skinwright.demo');
+    const { page, problems } = await openPage(context);
+    await signIn(page, suite.baseUrl, 'subcontractor@skinwright.demo');
     await openJointsSheet(page);
 
     const schedule = page.getByRole('table', { name: /Joint schedule/ });
@@ -71,11 +60,9 @@ describe('joints & quantities in the browser', () => {
   });
 
   it('the architect narrows a joint below its required width and sees "short by", then saves a revision', async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 1000 } });
-    const page = await context.newPage();
-    const problems: string[] = [];
-    page.on('pageerror', (e) => problems.push(e.message));
-    await signIn(page, server.baseUrl, 'architect@skinwright.demo');
+    const context = await suite.browser.newContext({ viewport: { width: 1280, height: 1000 } });
+    const { page, problems } = await openPage(context);
+    await signIn(page, suite.baseUrl, 'architect@skinwright.demo');
     await openJointsSheet(page);
 
     const live = page.getByTestId('joint-live');

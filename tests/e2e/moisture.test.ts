@@ -1,28 +1,16 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, openDemoAssembly, screenshot, signIn, startTestServer } from '../setup/browser';
+import { describe, expect, it } from 'vitest';
+import { browserSuite, openDemoAssembly, screenshot, signIn } from '../setup/browser';
 
 /**
  * The envelope consultant opens the demo assembly's moisture sheet: no condensation with the polyethylene
  * vapour retarder; with its vapour resistance taken away (μ = 1) the sheet predicts condensation live.
  */
 describe('moisture sheet in the browser', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
-  beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchChromium();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const suite = browserSuite();
 
   it('shows no condensation for the demo wall, and condensation once the film is taken out', async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
-    const problems: string[] = [];
-    page.on('pageerror', (e) => problems.push(e.message));
-    await signIn(page, server.baseUrl, 'consultant@skinwright.demo');
+    const { page, problems } = await suite.openPage({ viewport: { width: 1280, height: 1000 } });
+    await signIn(page, suite.baseUrl, 'consultant@skinwright.demo');
     await openDemoAssembly(page);
     await page
       .getByRole('navigation', { name: 'Assembly sheets' })

@@ -1,6 +1,5 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, screenshot, signIn, startTestServer } from '../setup/browser';
+import { describe, expect, it } from 'vitest';
+import { browserSuite, screenshot, signIn } from '../setup/browser';
 
 /** A small real PDF to upload (product data). */
 const PRODUCT_DATA = Buffer.from(
@@ -14,42 +13,30 @@ const PRODUCT_DATA = Buffer.from(
  * approves it; both see the status. The sheet page and the public verification page are visited on the way.
  */
 describe('submittals in the browser', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
-  beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchChromium();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const suite = browserSuite();
 
   it('subcontractor submits a sheet and a file; the architect approves', async () => {
-    const sub = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-    const problems: string[] = [];
-    sub.on('pageerror', (e) => problems.push(e.message));
-    await signIn(sub, server.baseUrl, 'subcontractor@skinwright.demo');
+    const { page: sub, problems } = await suite.openPage();
+    await signIn(sub, suite.baseUrl, 'subcontractor@skinwright.demo');
 
     // Setup through the API: a check run of the demo assembly against the demo firm's code table.
     const api = sub.request;
     const projectId = (
-      (await (await api.get(`${server.baseUrl}/api/projects`)).json()).projects[0] as { id: string }
+      (await (await api.get(`${suite.baseUrl}/api/projects`)).json()).projects[0] as { id: string }
     ).id;
-    const assemblyId = (
-      await (await api.get(`${server.baseUrl}/api/projects/${projectId}/assemblies`)).json()
-    ).assemblies[0].id as string;
-    const sets = (await (await api.get(`${server.baseUrl}/api/projects/${projectId}/criteria-sets`)).json())
+    const assemblyId = (await (await api.get(`${suite.baseUrl}/api/projects/${projectId}/assemblies`)).json())
+      .assemblies[0].id as string;
+    const sets = (await (await api.get(`${suite.baseUrl}/api/projects/${projectId}/criteria-sets`)).json())
       .criteriaSets as { id: string; name: string }[];
     const setId = sets.find((s) => s.name.startsWith('Illustrative example'))!.id;
-    const runRes = await api.post(`${server.baseUrl}/api/assemblies/${assemblyId}/check-runs`, {
+    const runRes = await api.post(`${suite.baseUrl}/api/assemblies/${assemblyId}/check-runs`, {
       data: { criteriaSetId: setId },
     });
     expect(runRes.status()).toBe(201);
     const runId = (await runRes.json()).id as string;
 
     // The project's Submittals tab → a new submittal naming the architect as reviewer.
-    await sub.goto(`${server.baseUrl}/projects/${projectId}`);
+    await sub.goto(`${suite.baseUrl}/projects/${projectId}`);
     await sub.getByRole('link', { name: 'Submittals', exact: true }).click();
     await sub.getByRole('link', { name: 'New submittal' }).click();
     await sub
@@ -92,19 +79,18 @@ describe('submittals in the browser', () => {
       .getAttribute('href');
 
     // Anyone can verify the code without signing in.
-    const anon = await browser.newPage({ viewport: { width: 1100, height: 900 } });
-    await anon.goto(`${server.baseUrl}${verifyHref}`);
+    const anon = await suite.browser.newPage({ viewport: { width: 1100, height: 900 } });
+    await anon.goto(`${suite.baseUrl}${verifyHref}`);
     await anon.getByTestId('verified').waitFor();
     expect(await anon.getByTestId('verified').textContent()).toMatch(/Ridgeline Cladding Co\. \(demo\)/);
     await screenshot(anon, 'sheet-verification');
-    await anon.goto(`${server.baseUrl}/verify/AAAAAAAAAA`);
+    await anon.goto(`${suite.baseUrl}/verify/AAAAAAAAAA`);
     await anon.getByText('No such sheet.').waitFor();
     await anon.close();
 
     // The architect, a named reviewer, approves.
-    const arch = await browser.newPage({ viewport: { width: 1280, height: 900 } });
-    arch.on('pageerror', (e) => problems.push(e.message));
-    await signIn(arch, server.baseUrl, 'architect@skinwright.demo');
+    const { page: arch } = await suite.openPage({ problems });
+    await signIn(arch, suite.baseUrl, 'architect@skinwright.demo');
     await arch.goto(submittalUrl);
     await arch.getByRole('button', { name: 'Start the review' }).click();
     await arch.getByTestId('submittal-status').locator('[data-status="under_review"]').waitFor();
@@ -118,7 +104,7 @@ describe('submittals in the browser', () => {
     await screenshot(arch, 'submittal-approved');
 
     // The subcontractor sees it approved, in the list filtered by status too.
-    await sub.goto(`${server.baseUrl}/projects/${projectId}/submittals?status=approved`);
+    await sub.goto(`${suite.baseUrl}/projects/${projectId}/submittals?status=approved`);
     const row = sub.locator('tr[data-submittal="07 42 13-001"]');
     await row.waitFor();
     expect(await row.locator('[data-status]').getAttribute('data-status')).toBe('approved');

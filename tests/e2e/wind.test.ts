@@ -1,28 +1,16 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchChromium, openDemoAssembly, screenshot, signIn, startTestServer } from '../setup/browser';
+import { describe, expect, it } from 'vitest';
+import { browserSuite, openDemoAssembly, screenshot, signIn } from '../setup/browser';
 
 /**
  * The engineer opens the demo assembly's attachment sheet, reads the maximum girt spacing of zones 4 and 5, raises
  * the design girt spacing beyond it and sees the failure in words.
  */
 describe('attachment & wind sheet in the browser', () => {
-  let server: Awaited<ReturnType<typeof startTestServer>>;
-  let browser: Browser;
-  beforeAll(async () => {
-    server = await startTestServer();
-    browser = await launchChromium();
-  });
-  afterAll(async () => {
-    await browser?.close();
-    await server?.stop();
-  });
+  const suite = browserSuite();
 
   it('shows the schedule per zone and fails a girt spacing beyond the maximum, in words', async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
-    const problems: string[] = [];
-    page.on('pageerror', (e) => problems.push(e.message));
-    await signIn(page, server.baseUrl, 'engineer@skinwright.demo');
+    const { page, problems } = await suite.openPage({ viewport: { width: 1280, height: 1000 } });
+    await signIn(page, suite.baseUrl, 'engineer@skinwright.demo');
     await openDemoAssembly(page);
     await page.getByRole('link', { name: 'Attachment & wind' }).click();
     await page.waitForURL(/\/assemblies\/[0-9a-f-]{36}\/attachment$/);
@@ -60,10 +48,8 @@ describe('attachment & wind sheet in the browser', () => {
   });
 
   it('takes a clip from the firm library with its source, and keeps the data sheet in the library', async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 1000 } });
-    const problems: string[] = [];
-    page.on('pageerror', (e) => problems.push(e.message));
-    await signIn(page, server.baseUrl, 'engineer@skinwright.demo');
+    const { page, problems } = await suite.openPage({ viewport: { width: 1280, height: 1000 } });
+    await signIn(page, suite.baseUrl, 'engineer@skinwright.demo');
     await openDemoAssembly(page);
     await page.getByRole('link', { name: 'Attachment & wind' }).click();
     await page.getByTestId('schedule-zone-4').waitFor();
@@ -77,7 +63,7 @@ describe('attachment & wind sheet in the browser', () => {
     expect(await page.getByLabel('Allowable load per clip').inputValue()).toBe('3200');
     expect(await page.locator('body').textContent()).not.toContain('NaN');
 
-    await page.goto(`${server.baseUrl}/library`);
+    await page.goto(`${suite.baseUrl}/library`);
     const section = page.locator('section', {
       has: page.getByRole('heading', { name: /Panel tables and clips/ }),
     });

@@ -3,14 +3,11 @@ import type { AttachmentProduct } from '@shared/schemas/attachment-library';
 import type { UnitSystem } from '@shared/units';
 import { useRef } from 'react';
 import { Button } from '../../../components/ui/Button';
-import { Notice } from '../../../components/ui/Notice';
-import { Table, Td, Th } from '../../../components/ui/Table';
 import { errorMessage } from '../../../lib/api';
-import { formatDate } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { dataSheetHref, useDeleteAttachmentProduct, useUploadDataSheet } from '../api/attachment-products';
 import { type LibraryMeasure, libraryNumber, libraryUnit } from '../units';
-import { RemoveButton } from './LibraryTables';
+import { addedColumn, type Column, FirmTable, nameColumn, removalOf } from './LibraryTable';
 
 const q = (si: number, m: LibraryMeasure, system: UnitSystem) =>
   `${libraryNumber(si, m, system)} ${libraryUnit(m, system)}`;
@@ -91,61 +88,23 @@ export function AttachmentProductsTable({
 }) {
   const system = useUnitSystem();
   const del = useDeleteAttachmentProduct();
-  if (products.length === 0)
-    return (
-      <p className="text-ink-muted">
-        No panel tables or clips yet. Enter them on an assembly’s Attachment &amp; wind sheet and save them to
-        the library from there.
-      </p>
-    );
+  const columns: Column<AttachmentProduct>[] = [
+    nameColumn('Product'),
+    { header: 'Kind', cell: (p) => (p.kind === 'panel' ? 'load–span table' : 'clip') },
+    { header: 'Values', className: 'text-xs', cell: (p) => productSummary(p, system) },
+    { header: 'Source', className: 'text-xs', cell: (p) => p.source },
+    { header: 'Data sheet', className: 'text-sm', cell: (p) => <DataSheetCell orgId={orgId} product={p} /> },
+    addedColumn(),
+  ];
   return (
-    <>
-      <Table caption="The firm's panel tables and clips" captionHidden>
-        <thead>
-          <tr>
-            <Th>Product</Th>
-            <Th>Kind</Th>
-            <Th>Values</Th>
-            <Th>Source</Th>
-            <Th>Data sheet</Th>
-            <Th numeric>Added</Th>
-            {isAdmin ? (
-              <Th>
-                <span className="sr-only">Actions</span>
-              </Th>
-            ) : null}
-          </tr>
-        </thead>
-        <tbody>
-          {products.map((p) => (
-            <tr key={p.id} className="align-top">
-              <Td className="font-semibold">
-                {p.name}
-                {p.notes ? <span className="block text-xs font-normal text-ink-muted">{p.notes}</span> : null}
-              </Td>
-              <Td>{p.kind === 'panel' ? 'load–span table' : 'clip'}</Td>
-              <Td className="text-xs">{productSummary(p, system)}</Td>
-              <Td className="text-xs">{p.source}</Td>
-              <Td className="text-sm">
-                <DataSheetCell orgId={orgId} product={p} />
-              </Td>
-              <Td numeric className="whitespace-nowrap">
-                {formatDate(p.createdAt)}
-              </Td>
-              {isAdmin ? (
-                <Td>
-                  <RemoveButton
-                    what={p.name}
-                    busy={del.isPending && del.variables?.productId === p.id}
-                    onRemove={() => del.mutate({ orgId, productId: p.id })}
-                  />
-                </Td>
-              ) : null}
-            </tr>
-          ))}
-        </tbody>
-      </Table>
-      {del.isError ? <Notice tone="caution" title={errorMessage(del.error)} live /> : null}
-    </>
+    <FirmTable
+      caption="The firm's panel tables and clips"
+      columns={columns}
+      rows={products}
+      rowClassName="align-top"
+      empty="No panel tables or clips yet. Enter them on an assembly’s Attachment & wind sheet and save them to the library from there."
+      isAdmin={isAdmin}
+      removal={removalOf(del, orgId, 'productId')}
+    />
   );
 }

@@ -26,7 +26,7 @@ export function libraryResolver<Values extends FieldValues, Output>(
   reason: (issue: SchemaIssue, field: string, values: Values) => string,
 ): Resolver<Values, unknown, Output> {
   return async (values) => {
-    const parsed = schema.safeParse(candidate(values));
+    const parsed = schema.safeParse(candidate(values), { reportInput: true });
     if (parsed.success) return { values: parsed.data, errors: {} };
     const errors: Record<string, { type: string; message: string }> = {};
     for (const issue of parsed.error.issues) {

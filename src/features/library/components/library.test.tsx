@@ -155,6 +155,17 @@ describe('the add forms', () => {
     expect(fetch).not.toHaveBeenCalled();
   });
 
+  it('tell an unreadable number from an empty box', async () => {
+    stubFetch(() => json({}, 500));
+    renderIn('SI', <AddFirmMaterialForm orgId="o1" />);
+    fireEvent.change(screen.getByLabelText(/^λ/), { target: { value: 'abc' } });
+    await act(async () => fireEvent.submit(screen.getByRole('form', { name: 'Add a firm material' })));
+    expect(screen.getByText('Enter a number (for example 0.035).')).toBeTruthy();
+    fireEvent.change(screen.getByLabelText(/^λ/), { target: { value: '' } });
+    await act(async () => fireEvent.submit(screen.getByRole('form', { name: 'Add a firm material' })));
+    expect(screen.getByText('Enter a value.')).toBeTruthy();
+  });
+
   it('send SI values, name the added entry and empty the form', async () => {
     const fetch = stubFetch((_url, init) =>
       json(

@@ -30,7 +30,17 @@ export interface AppDeps {
   clientMiddleware?: RequestHandler[];
 }
 
-/** Finds the first string (value or key) holding a NUL character, which PostgreSQL text cannot store. */
+/** Whether any string (value or key) holds a NUL character, which PostgreSQL text cannot store. */
+function hasNul(value: unknown): boolean {
+  if (typeof value === 'string') return value.includes('\u0000');
+  if (Array.isArray(value)) return value.some(hasNul);
+  if (value && typeof value === 'object')
+    for (const k in value)
+      if (k.includes('\u0000') || hasNul((value as Record<string, unknown>)[k])) return true;
+  return false;
+}
+
+/** The path of the first string (value or key) holding a NUL character. */
 function nulPath(value: unknown, path: string[] = []): string | null {
   if (typeof value === 'string') return value.includes('\u0000') ? path.join('.') || '(body)' : null;
   if (value && typeof value === 'object')
@@ -43,7 +53,8 @@ function nulPath(value: unknown, path: string[] = []): string | null {
 }
 
 const refuseNul: RequestHandler = (req, _res, next) => {
-  const field = nulPath(req.body);
+  // The common case (no NUL anywhere) is one walk without allocations; the path is found only for a refusal.
+  const field = hasNul(req.body) ? nulPath(req.body) : null;
   next(
     field
       ? new HttpError(400, 'validation_failed', 'the request is not valid', {
@@ -94,7 +105,15 @@ export function createApp({ database, config, mailer, storage, clientDir, client
           },
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+  // pino-http logs each API request at info; below that level it would only build per-request child loggers
+  // that never write, so the app logger itself serves as `req.log` (500s are still logged by the error handler).
+  if (logger.isLevelEnabled('info'))
+    app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+  else
+    app.use((req, _res, next) => {
+      req.log = logger;
+      next();
+    });
 
   const trusted = (auth.options.trustedOrigins as string[]) ?? [];
   const authLimiter = rateLimit({
@@ -107,13 +126,15 @@ export function createApp({ database, config, mailer, storage, clientDir, client
         .status(429)
         .json({ error: { code: 'rate_limited', message: 'too many attempts; wait a minute and try again' } }),
   });
-  for (const p of [
-    '/api/auth/sign-in/*splat',
-    '/api/auth/sign-up/*splat',
-    '/api/auth/request-password-reset',
-    '/api/auth/reset-password',
-  ])
-    app.use(p, authLimiter);
+  app.use(
+    [
+      '/api/auth/sign-in/*splat',
+      '/api/auth/sign-up/*splat',
+      '/api/auth/request-password-reset',
+      '/api/auth/reset-password',
+    ],
+    authLimiter,
+  );
   // better-auth must see the raw body: mount it before express.json().
   app.all('/api/auth/*splat', toNodeHandler(auth));
 
@@ -123,6 +144,8 @@ export function createApp({ database, config, mailer, storage, clientDir, client
   app.use('/api', refuseNul);
   app.use('/api', originCheck(trusted));
 
+  // The API routes first (the reference pages share no path with them), then the reference.
+  mountRoutes(app, apiRoutes, services, '/api');
   const openapi = buildOpenApi(apiRoutes);
   app.get('/api/openapi.json', (_req, res) => {
     res.json(openapi);
@@ -132,10 +155,6 @@ export function createApp({ database, config, mailer, storage, clientDir, client
     swaggerUi.serve,
     swaggerUi.setup(openapi, { customSiteTitle: 'Skinwright API reference' }),
   );
-
-  const api = express.Router();
-  mountRoutes(api, apiRoutes, services);
-  app.use('/api', api);
   app.use('/api', apiNotFound);
 
   if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {

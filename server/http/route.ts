@@ -1,6 +1,7 @@
 import { can, type ProjectAction, type ProjectRole } from '@shared/auth/permissions';
 import { type CriteriaAccess, criteriaAllows } from '@shared/schemas/criteria';
-import type { Request, Response, Router } from 'express';
+import type { Project } from '@shared/schemas/project';
+import { type Request, type Response, Router } from 'express';
 import type { z } from 'zod';
 import type { Services } from '../services';
 import { forbidden, HttpError, notFound, unauthorised, zodFields } from './errors';
@@ -45,8 +46,11 @@ export interface RouteContext<P, Q, B> {
   query: Q;
   body: B;
   user: SessionUser | null;
-  /** Set for `project` access: the project and the caller's role on it. */
-  project: { id: string; role: ProjectRole } | null;
+  /**
+   * Set for `project` access: the project, the caller's role on it and the project record (read by the same
+   * query as the role, so a handler that needs the project need not read it again).
+   */
+  project: { id: string; role: ProjectRole; record: Project } | null;
   /** Set for `criteria` access: the firm whose code tables these are and what the caller may do. */
   criteria: { organisationId: string; access: CriteriaAccess } | null;
   services: Services;
@@ -86,13 +90,67 @@ function parsePart<T>(schema: z.ZodType<T> | undefined, value: unknown, where: s
   return r.data;
 }
 
-/** Mounts every route on the router: session → validation → permission → handler. */
-export function mountRoutes(router: Router, routes: AnyRoute[], services: Services): void {
+const JSON_TYPE = 'application/json; charset=utf-8';
+
+/** JSON and ETag of deep-frozen response bodies (cached records): they cannot change, so serialise them once. */
+const frozenBodies = new WeakMap<object, { json: Buffer; etag: string | undefined }>();
+
+/**
+ * Sends a JSON body. Only GET (and HEAD) responses get an ETag, so that a conditional GET can answer 304 (a
+ * POST, PUT, PATCH or DELETE response is never revalidated: it is written without hashing the body). A
+ * frozen body — a record shared from the read cache — is serialised and hashed once, not on every request.
+ */
+function sendJson(req: Request, res: Response, status: number, body: unknown): void {
+  if (req.method !== 'GET' && req.method !== 'HEAD') {
+    res.status(status).setHeader('content-type', JSON_TYPE).end(JSON.stringify(body));
+    return;
+  }
+  if (!body || typeof body !== 'object' || !Object.isFrozen(body)) {
+    res.status(status).json(body);
+    return;
+  }
+  let sent = frozenBodies.get(body);
+  if (!sent) {
+    const json = Buffer.from(JSON.stringify(body));
+    const etagOf = req.app.get('etag fn') as ((body: Buffer, encoding: string) => string) | undefined;
+    sent = { json, etag: etagOf?.(json, 'utf8') };
+    frozenBodies.set(body, sent);
+  }
+  // express keeps an ETag that is already set, and still answers a matching If-None-Match with 304.
+  if (sent.etag) res.setHeader('ETag', sent.etag);
+  res.status(status).setHeader('content-type', JSON_TYPE).send(sent.json);
+}
+
+/**
+ * Mounts every route under `base` (e.g. `/api`): session → validation → permission → handler. Routes are
+ * grouped by their first path segment (`/projects`, `/v1`, …), each group on a router of its own mounted at
+ * `base/segment`, so a request is matched against its group's routes only, not against the whole registry.
+ */
+export function mountRoutes(
+  router: Pick<Router, 'use'>,
+  routes: AnyRoute[],
+  services: Services,
+  base = '',
+): void {
+  const groups = new Map<string, Router>();
+  const groupOf = (first: string) => {
+    let group = groups.get(first);
+    if (!group) {
+      group = Router();
+      groups.set(first, group);
+      router.use(`${base}/${first}`, group);
+    }
+    return group;
+  };
   for (const route of routes) {
-    router[route.method](route.path, async (req, res) => {
+    const status = Number(Object.keys(route.responses)[0] ?? 200);
+    const [, first = '', ...rest] = route.path.split('/');
+    if (!/^[\w.-]+$/.test(first))
+      throw new Error(`${route.path}: an API route path must start with a fixed segment`);
+    groupOf(first)[route.method](`/${rest.join('/')}`, async (req, res) => {
       const { access } = route;
       // Public routes never need the session: skip its lookup.
-      const user = access.kind === 'public' ? null : await services.auth.currentUser(req);
+      const user = access.kind === 'public' ? null : await services.auth.currentUser(req, res);
       if (access.kind !== 'public' && !user) throw unauthorised();
       if (access.kind === 'siteAdmin' && user?.role !== 'admin') throw forbidden('site administrators only');
       const params = parsePart(route.params, req.params, 'params');
@@ -101,10 +159,11 @@ export function mountRoutes(router: Router, routes: AnyRoute[], services: Servic
         const projectId = access.projectId
           ? await access.projectId({ params: req.params as Record<string, string>, services })
           : (req.params as Record<string, string>).id;
-        const role = projectId ? await services.projects.roleOf(projectId, user!.id) : null;
-        if (!projectId || !role) throw notFound('project');
-        if (!can(role, access.action)) throw forbidden();
-        project = { id: projectId, role };
+        // One query for membership, role and record (no cross-request cache on a PostgreSQL server).
+        const record = projectId ? await services.projects.access(projectId, user!.id) : null;
+        if (!projectId || !record) throw notFound('project');
+        if (!can(record.myRole, access.action)) throw forbidden();
+        project = { id: projectId, role: record.myRole, record };
       }
       if (access.kind === 'organisation') {
         const orgId = (req.params as Record<string, string>).orgId;
@@ -145,8 +204,7 @@ export function mountRoutes(router: Router, routes: AnyRoute[], services: Servic
         if (!res.headersSent) res.status(204).end();
         return;
       }
-      const status = Number(Object.keys(route.responses)[0] ?? 200);
-      res.status(status).json(result);
+      sendJson(req, res, status, result);
     });
   }
 }

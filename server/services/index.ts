@@ -1,5 +1,4 @@
-import type { Request } from 'express';
-import { type Auth, sessionUser } from '../auth/auth';
+import { type Auth, createSessionReader } from '../auth/auth';
 import type { Config } from '../config';
 import type { Database } from '../db/client';
 import { HttpError } from '../http/errors';
@@ -40,10 +39,10 @@ export function createServices(
         );
       return Buffer.from(await (await database.dumpDataDir()).arrayBuffer());
     },
-    auth: { instance: auth, currentUser: (req: Request) => sessionUser(auth, req) },
+    auth: { instance: auth, currentUser: createSessionReader(auth) },
     audit: createAuditService(db),
     me: createMeService(db),
-    projects: createProjectService(db),
+    projects: createProjectService(db, database.readCache),
     members: createMemberService(db, config, mailer),
     assemblies: createAssemblyService(db),
     library: createLibraryService(db, storage),

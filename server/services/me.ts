@@ -1,5 +1,5 @@
 import type { CapturedMail, Me } from '@shared/schemas/me';
-import { desc, eq } from 'drizzle-orm';
+import { asc, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { capturedMail, organisationMembers, organisations, user } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
@@ -11,34 +11,90 @@ const slugify = (name: string) =>
     .replace(/^-|-$/g, '')
     .slice(0, 40)}-${Math.random().toString(36).slice(2, 8)}`;
 
+/** One row per firm of the user (one row with null firm fields when they belong to none). */
+interface MeRow {
+  id: string;
+  name: string;
+  email: string;
+  role: string;
+  unitSystem: string;
+  orgId: string | null;
+  orgName: string | null;
+  orgRole: string | null;
+}
+
+function toMe(rows: MeRow[]): Me {
+  const u = rows[0];
+  if (!u) throw notFound('user');
+  return {
+    id: u.id,
+    name: u.name,
+    email: u.email,
+    siteRole: u.role === 'admin' ? 'admin' : 'user',
+    unitSystem: u.unitSystem === 'IP' ? 'IP' : 'SI',
+    organisations: rows
+      .filter((r) => r.orgId !== null)
+      .map((r) => ({ id: r.orgId!, name: r.orgName!, role: r.orgRole === 'admin' ? 'admin' : 'member' })),
+  };
+}
+
 export function createMeService(db: Db) {
-  async function me(userId: string): Promise<Me> {
-    const [u] = await db.select().from(user).where(eq(user.id, userId));
-    if (!u) throw notFound('user');
-    const orgs = await db
-      .select({ id: organisations.id, name: organisations.name, role: organisationMembers.role })
-      .from(organisationMembers)
-      .innerJoin(organisations, eq(organisations.id, organisationMembers.organisationId))
-      .where(eq(organisationMembers.userId, userId));
-    return {
-      id: u.id,
-      name: u.name,
-      email: u.email,
-      siteRole: u.role === 'admin' ? 'admin' : 'user',
-      unitSystem: u.unitSystem === 'IP' ? 'IP' : 'SI',
-      organisations: orgs.map((o) => ({
-        id: o.id,
-        name: o.name,
-        role: o.role === 'admin' ? 'admin' : 'member',
-      })),
-    };
-  }
+  // Prepared once (no query building per request; a PostgreSQL server plans them once per connection), and
+  // one statement each: the user with their firms, and the preference write returning the same rows.
+  const meQuery = db
+    .select({
+      id: user.id,
+      name: user.name,
+      email: user.email,
+      role: user.role,
+      unitSystem: user.unitSystem,
+      orgId: organisations.id,
+      orgName: organisations.name,
+      orgRole: organisationMembers.role,
+    })
+    .from(user)
+    .leftJoin(organisationMembers, eq(organisationMembers.userId, user.id))
+    .leftJoin(organisations, eq(organisations.id, organisationMembers.organisationId))
+    .where(eq(user.id, sql.placeholder('userId')))
+    .orderBy(asc(organisationMembers.createdAt))
+    .prepare('sw_me');
+  const updated = db.$with('updated').as(
+    db
+      .update(user)
+      .set({ unitSystem: sql`${sql.placeholder('unitSystem')}`, updatedAt: sql`now()` })
+      .where(eq(user.id, sql.placeholder('userId')))
+      .returning({
+        id: user.id,
+        name: user.name,
+        email: user.email,
+        role: user.role,
+        unitSystem: user.unitSystem,
+      }),
+  );
+  const setUnitSystemQuery = db
+    .with(updated)
+    .select({
+      id: updated.id,
+      name: updated.name,
+      email: updated.email,
+      role: updated.role,
+      unitSystem: updated.unitSystem,
+      orgId: organisations.id,
+      orgName: organisations.name,
+      orgRole: organisationMembers.role,
+    })
+    .from(updated)
+    .leftJoin(organisationMembers, eq(organisationMembers.userId, updated.id))
+    .leftJoin(organisations, eq(organisations.id, organisationMembers.organisationId))
+    .orderBy(asc(organisationMembers.createdAt))
+    .prepare('sw_me_set_unit_system');
+
+  const me = async (userId: string): Promise<Me> => toMe(await meQuery.execute({ userId }));
 
   return {
     me,
     async setUnitSystem(userId: string, unitSystem: 'SI' | 'IP'): Promise<Me> {
-      await db.update(user).set({ unitSystem, updatedAt: new Date() }).where(eq(user.id, userId));
-      return me(userId);
+      return toMe(await setUnitSystemQuery.execute({ userId, unitSystem }));
     },
     /** A new firm with the caller as its administrator. */
     async createOrganisation(userId: string, name: string): Promise<Me> {

@@ -1,7 +1,7 @@
 import type { ProjectRole } from '@shared/auth/permissions';
 import type { Project, ProjectClimate, ProjectInput, ProjectWind } from '@shared/schemas/project';
-import { and, asc, eq, isNotNull, isNull } from 'drizzle-orm';
-import type { Db } from '../db/client';
+import { and, asc, eq, isNotNull, isNull, sql } from 'drizzle-orm';
+import type { Db, ReadCache } from '../db/client';
 import { organisationMembers, organisations, projectMembers, projects } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
 import { recordAudit } from './audit';
@@ -40,30 +40,60 @@ function toProject(row: ProjectRow, organisationName: string, myRole: ProjectRol
 export const archivedError = () =>
   new HttpError(409, 'archived', 'this project is archived; restore it before changing it');
 
-export function createProjectService(db: Db) {
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+function deepFreeze<T>(value: T): T {
+  if (value && typeof value === 'object' && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const v of Object.values(value)) deepFreeze(v);
+  }
+  return value;
+}
+
+/**
+ * `readCache`: the database's cross-request cache (PGlite only — it is emptied by every write, see
+ * server/db/client.ts); null for a PostgreSQL server, where every call reads the database.
+ */
+export function createProjectService(db: Db, readCache: ReadCache | null = null) {
+  // One prepared statement answers both "may this user see the project, with which role" and "the project":
+  // the membership is an inner join, so a non-member gets no row.
+  const accessQuery = db
+    .select({ p: projects, orgName: organisations.name, role: projectMembers.role })
+    .from(projects)
+    .innerJoin(organisations, eq(organisations.id, projects.organisationId))
+    .innerJoin(
+      projectMembers,
+      and(eq(projectMembers.projectId, projects.id), eq(projectMembers.userId, sql.placeholder('userId'))),
+    )
+    .where(eq(projects.id, sql.placeholder('projectId')))
+    .prepare('sw_project_access');
+
+  async function load(projectId: string, userId: string): Promise<Project | null> {
+    if (!UUID.test(projectId)) return null;
+    const [row] = await accessQuery.execute({ projectId, userId });
+    // Frozen: a cached record is shared by every request that reads it.
+    return row ? deepFreeze(toProject(row.p, row.orgName, row.role as ProjectRole)) : null;
+  }
+
+  /** The project with the caller's role (`myRole`), or null when it does not exist or they are not a member. */
+  function access(projectId: string, userId: string): Promise<Project | null> {
+    return readCache
+      ? readCache.get(`project:${projectId}:${userId}`, () => load(projectId, userId))
+      : load(projectId, userId);
+  }
+
   async function roleOf(projectId: string, userId: string): Promise<ProjectRole | null> {
-    const [m] = await db
-      .select({ role: projectMembers.role })
-      .from(projectMembers)
-      .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.userId, userId)));
-    return (m?.role as ProjectRole | undefined) ?? null;
+    return (await access(projectId, userId))?.myRole ?? null;
   }
 
   async function get(projectId: string, userId: string): Promise<Project> {
-    const [row] = await db
-      .select({ p: projects, orgName: organisations.name, role: projectMembers.role })
-      .from(projects)
-      .innerJoin(organisations, eq(organisations.id, projects.organisationId))
-      .innerJoin(
-        projectMembers,
-        and(eq(projectMembers.projectId, projects.id), eq(projectMembers.userId, userId)),
-      )
-      .where(eq(projects.id, projectId));
-    if (!row) throw notFound('project');
-    return toProject(row.p, row.orgName, row.role as ProjectRole);
+    const project = await access(projectId, userId);
+    if (!project) throw notFound('project');
+    return project;
   }
 
   return {
+    access,
     roleOf,
     get,
 

@@ -97,9 +97,11 @@ describe('durability of acknowledged writes on PGlite', () => {
     });
     while (acknowledged.length < 60 && !burstDone) await new Promise((r) => setTimeout(r, 5));
     expect(cookie, 'signed in').toContain('session_token');
+    // Listen before killing: the exit can be reported while the burst's failed requests settle.
+    const exited = new Promise((r) => child!.once('exit', r));
     child!.kill('SIGKILL');
     await burst;
-    await new Promise((r) => child!.once('exit', r));
+    await exited;
     expect(acknowledged.length).toBeGreaterThanOrEqual(60);
 
     base = await startChild(port);

@@ -78,6 +78,9 @@ export async function createTestApp(kind: DatabaseKind = 'pglite', opts: { authR
   return {
     app,
     database,
+    /** The PostgreSQL database of this app (undefined on PGlite), for a second app on the same data. */
+    databaseUrl,
+    config,
     services,
     as,
     demoProjectId,

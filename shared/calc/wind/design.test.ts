@@ -1,6 +1,7 @@
 import { CalcInputError } from '@shared/calc/errors';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { windSite } from '../../../tests/setup/wind-arbitraries';
 import {
   CONTINUITY_FACTOR,
   calculateWindSchedule,
@@ -18,7 +19,6 @@ import {
   designSpacingResultSchema,
   type Panel,
   type WindDesignInput,
-  type WindSite,
   windDesignInputSchema,
   type ZoneDesign,
 } from './schema';
@@ -196,23 +196,7 @@ describe('design spacing of the demo wall', () => {
 
 // ------------------------------------------------------------------------------------------------ properties
 
-const site: fc.Arbitrary<WindSite> = fc
-  .record({
-    edition: fc.constantFrom('ASCE 7-16' as const, 'ASCE 7-22' as const),
-    basicWindSpeed: fc.double({ min: 20, max: 80, noNaN: true }),
-    riskCategory: fc.constantFrom('I' as const, 'II' as const, 'III' as const, 'IV' as const),
-    exposure: fc.constantFrom('B' as const, 'C' as const, 'D' as const),
-    Kzt: fc.double({ min: 1, max: 1.6, noNaN: true }),
-    groundElevation: fc.double({ min: 0, max: 2000, noNaN: true }),
-    keEqualsOne: fc.boolean(),
-    enclosure: fc.constantFrom('enclosed' as const, 'partially_enclosed' as const),
-    meanRoofHeight: fc.double({ min: 3, max: 150, noNaN: true }),
-    planLength: fc.double({ min: 5, max: 300, noNaN: true }),
-    planWidth: fc.double({ min: 5, max: 300, noNaN: true }),
-    roofSlopeDeg: fc.double({ min: 0, max: 45, noNaN: true }),
-    zShare: fc.double({ min: 0.05, max: 1, noNaN: true }),
-  })
-  .map(({ zShare, ...s }) => ({ ...s, heightOfComponent: zShare * s.meanRoofHeight }));
+const site = windSite;
 
 /**
  * Panels shaped like real ones: the demo table with each column scaled on its own, so strong, weak and

@@ -1,4 +1,5 @@
 import { existsSync } from 'node:fs';
+import type { RequestListener } from 'node:http';
 import path from 'node:path';
 import { toNodeHandler } from 'better-auth/node';
 import express, { type RequestHandler } from 'express';
@@ -10,9 +11,11 @@ import swaggerUi from 'swagger-ui-express';
 import { createAuth } from './auth/auth';
 import type { Config } from './config';
 import type { Database } from './db/client';
-import { apiNotFound, errorHandler, HttpError } from './http/errors';
+import { apiNotFound, errorHandler } from './http/errors';
+import { originCheck, refuseNul } from './http/guards';
 import { buildOpenApi } from './http/openapi';
 import { mountRoutes } from './http/route';
+import { statelessPath } from './http/stateless';
 import type { Mailer } from './mail/mailer';
 import { apiRoutes } from './routes';
 import { createServices } from './services';
@@ -30,52 +33,13 @@ export interface AppDeps {
   clientMiddleware?: RequestHandler[];
 }
 
-/** Whether any string (value or key) holds a NUL character, which PostgreSQL text cannot store. */
-function hasNul(value: unknown): boolean {
-  if (typeof value === 'string') return value.includes('\u0000');
-  if (Array.isArray(value)) return value.some(hasNul);
-  if (value && typeof value === 'object')
-    for (const k in value)
-      if (k.includes('\u0000') || hasNul((value as Record<string, unknown>)[k])) return true;
-  return false;
-}
+/** The largest JSON (or CSV) body accepted: 1 MiB. */
+const JSON_LIMIT_BYTES = 1024 * 1024;
 
-/** The path of the first string (value or key) holding a NUL character. */
-function nulPath(value: unknown, path: string[] = []): string | null {
-  if (typeof value === 'string') return value.includes('\u0000') ? path.join('.') || '(body)' : null;
-  if (value && typeof value === 'object')
-    for (const [k, v] of Object.entries(value)) {
-      if (k.includes('\u0000')) return [...path, '(key)'].join('.');
-      const found = nulPath(v, [...path, k]);
-      if (found) return found;
-    }
-  return null;
-}
-
-const refuseNul: RequestHandler = (req, _res, next) => {
-  // The common case (no NUL anywhere) is one walk without allocations; the path is found only for a refusal.
-  const field = hasNul(req.body) ? nulPath(req.body) : null;
-  next(
-    field
-      ? new HttpError(400, 'validation_failed', 'the request is not valid', {
-          [field]: 'text must not contain NUL characters',
-        })
-      : undefined,
-  );
-};
-
-/** Refuses cookie-authenticated writes whose Origin is not ours (CSRF); requests without Origin are not from a browser form. */
-function originCheck(trusted: string[]): RequestHandler {
-  return (req, _res, next) => {
-    if (req.method === 'GET' || req.method === 'HEAD' || req.method === 'OPTIONS') return next();
-    const origin = req.get('origin');
-    if (origin && !trusted.includes(origin))
-      return next(new HttpError(403, 'bad_origin', 'cross-site request refused'));
-    next();
-  };
-}
-
-/** Builds the Express app without listening, so tests can drive it with supertest. */
+/**
+ * Builds the request listener without listening, so tests can drive it with supertest: the Express app, with
+ * the lean path for the calculations in front of it.
+ */
 export function createApp({ database, config, mailer, storage, clientDir, clientMiddleware }: AppDeps) {
   const auth = createAuth(database.db, config, mailer);
   const services = createServices(database, config, mailer, auth, storage ?? unavailableStore());
@@ -83,37 +47,35 @@ export function createApp({ database, config, mailer, storage, clientDir, client
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  app.use(
-    helmet({
-      // Vite's dev middleware injects inline scripts for hot reload; the CSP applies to the built client.
-      contentSecurityPolicy: clientMiddleware
-        ? false
-        : {
-            directives: {
-              defaultSrc: ["'self'"],
-              scriptSrc: ["'self'"],
-              styleSrc: ["'self'", "'unsafe-inline'"],
-              imgSrc: ["'self'", 'data:', 'blob:'],
-              fontSrc: ["'self'", 'data:'],
-              connectSrc: ["'self'"],
-              objectSrc: ["'none'"],
-              // The compliance sheet preview: a PDF blob shown in a frame of the run's page.
-              frameSrc: ["'self'", 'blob:'],
-              frameAncestors: ["'none'"],
-              upgradeInsecureRequests: null,
-            },
+  const securityHeaders = helmet({
+    // Vite's dev middleware injects inline scripts for hot reload; the CSP applies to the built client.
+    contentSecurityPolicy: clientMiddleware
+      ? false
+      : {
+          directives: {
+            defaultSrc: ["'self'"],
+            scriptSrc: ["'self'"],
+            styleSrc: ["'self'", "'unsafe-inline'"],
+            imgSrc: ["'self'", 'data:', 'blob:'],
+            fontSrc: ["'self'", 'data:'],
+            connectSrc: ["'self'"],
+            objectSrc: ["'none'"],
+            // The compliance sheet preview: a PDF blob shown in a frame of the run's page.
+            frameSrc: ["'self'", 'blob:'],
+            frameAncestors: ["'none'"],
+            upgradeInsecureRequests: null,
           },
-    }),
-  );
+        },
+  });
   // pino-http logs each API request at info; below that level it would only build per-request child loggers
   // that never write, so the app logger itself serves as `req.log` (500s are still logged by the error handler).
-  if (logger.isLevelEnabled('info'))
-    app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
-  else
-    app.use((req, _res, next) => {
-      req.log = logger;
-      next();
-    });
+  const requestLog: RequestHandler = logger.isLevelEnabled('info')
+    ? pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } })
+    : (req, _res, next) => {
+        req.log = logger;
+        next();
+      };
+  app.use(securityHeaders, requestLog);
 
   const trusted = (auth.options.trustedOrigins as string[]) ?? [];
   const authLimiter = rateLimit({
@@ -138,9 +100,9 @@ export function createApp({ database, config, mailer, storage, clientDir, client
   // better-auth must see the raw body: mount it before express.json().
   app.all('/api/auth/*splat', toNodeHandler(auth));
 
-  app.use(express.json({ limit: '1mb', strict: false }));
+  app.use(express.json({ limit: JSON_LIMIT_BYTES, strict: false }));
   // Code-table imports may send CSV as text/csv.
-  app.use(express.text({ type: 'text/csv', limit: '1mb' }));
+  app.use(express.text({ type: 'text/csv', limit: JSON_LIMIT_BYTES }));
   app.use('/api', refuseNul);
   app.use('/api', originCheck(trusted));
 
@@ -163,5 +125,18 @@ export function createApp({ database, config, mailer, storage, clientDir, client
   }
   for (const m of clientMiddleware ?? []) app.use(m);
   app.use(errorHandler);
-  return { app, services, auth, logger };
+
+  // The calculations are answered before Express when the request is plain (see server/http/stateless.ts).
+  const lean = statelessPath(apiRoutes, {
+    base: '/api',
+    services,
+    trusted,
+    limitBytes: JSON_LIMIT_BYTES,
+    middleware: [securityHeaders, requestLog],
+    logger,
+  });
+  const listener: RequestListener = (req, res) => {
+    if (!lean(req, res)) app(req, res);
+  };
+  return { app: listener, services, auth, logger };
 }

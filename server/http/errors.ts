@@ -19,6 +19,7 @@ export class HttpError extends Error {
 export const notFound = (what = 'resource') => new HttpError(404, 'not_found', `${what} not found`);
 export const forbidden = (message = 'your role on this project does not allow this') =>
   new HttpError(403, 'forbidden', message);
+export const invalidJson = () => new HttpError(400, 'invalid_json', 'the body is not valid JSON');
 export const unauthorised = () => new HttpError(401, 'unauthenticated', 'sign in first');
 
 /** Zod issues → `{ "layers.2.thickness": "Too small: expected number to be >0" }`. */
@@ -53,8 +54,7 @@ export function toApiError(err: unknown): { status: number; body: ApiError & Rec
       body: { error: { code: 'invalid_input', message: err.message, fields: { [err.field]: err.reason } } },
     };
   const e = err as { type?: string; status?: number; code?: string };
-  if (e?.type === 'entity.parse.failed')
-    return { status: 400, body: { error: { code: 'invalid_json', message: 'the body is not valid JSON' } } };
+  if (e?.type === 'entity.parse.failed') return toApiError(invalidJson());
   if (e?.type === 'entity.too.large')
     return { status: 413, body: { error: { code: 'too_large', message: 'the body is too large' } } };
   if (e?.status && e.status >= 400 && e.status < 500)

@@ -1,3 +1,4 @@
+import type { IncomingMessage, ServerResponse } from 'node:http';
 import { can, type ProjectAction, type ProjectRole } from '@shared/auth/permissions';
 import { type CriteriaAccess, criteriaAllows } from '@shared/schemas/criteria';
 import type { Project } from '@shared/schemas/project';
@@ -70,6 +71,13 @@ export interface RouteDef<P = unknown, Q = unknown, B = unknown> {
   responses: Record<number, { description: string; schema?: z.ZodType; contentType?: string }>;
   /** Example request body for the reference page. */
   example?: unknown;
+  /**
+   * The answer follows from the request alone — a public POST with no path parameters that reads no session
+   * and no database (the calculations). Such a route is also served by the lean path before Express (see
+   * `server/http/stateless.ts`); its handler then gets Node's bare request and response, so it uses only
+   * `query` and `body` and returns its answer (JSON, or a `FileAnswer`).
+   */
+  stateless?: true;
   /** Returns the JSON body (status = first documented response) or handles `res` itself and returns undefined. */
   handler: (ctx: RouteContext<P, Q, B>) => Promise<unknown>;
 }
@@ -92,33 +100,80 @@ function parsePart<T>(schema: z.ZodType<T> | undefined, value: unknown, where: s
 
 const JSON_TYPE = 'application/json; charset=utf-8';
 
+/** A non-JSON answer a handler returns instead of writing `res` itself (e.g. a CSV download). */
+export class FileAnswer {
+  constructor(
+    readonly contentType: string,
+    readonly body: string,
+    /** Offered as a download under this (plain ASCII) name. */
+    readonly filename?: string,
+  ) {}
+}
+
 /** JSON and ETag of deep-frozen response bodies (cached records): they cannot change, so serialise them once. */
 const frozenBodies = new WeakMap<object, { json: Buffer; etag: string | undefined }>();
 
+/** Writes a whole answer with Node's own response API (it serves Express's response and a bare one alike). */
+function writeAnswer(res: ServerResponse, status: number, contentType: string, body: string | Buffer) {
+  res.statusCode = status;
+  res.setHeader('content-type', contentType);
+  res.end(body);
+}
+
 /**
- * Sends a JSON body. Only GET (and HEAD) responses get an ETag, so that a conditional GET can answer 304 (a
- * POST, PUT, PATCH or DELETE response is never revalidated: it is written without hashing the body). A
- * frozen body — a record shared from the read cache — is serialised and hashed once, not on every request.
+ * Sends a handler's result. Only GET (and HEAD) JSON responses get an ETag, so that a conditional GET can
+ * answer 304 (a POST, PUT, PATCH or DELETE response is never revalidated: it is written without hashing the
+ * body). A frozen body — a record shared from the read cache — is serialised and hashed once, not on every
+ * request.
  */
-function sendJson(req: Request, res: Response, status: number, body: unknown): void {
-  if (req.method !== 'GET' && req.method !== 'HEAD') {
-    res.status(status).setHeader('content-type', JSON_TYPE).end(JSON.stringify(body));
+export function sendResult(req: IncomingMessage, res: ServerResponse, status: number, body: unknown): void {
+  if (body instanceof FileAnswer) {
+    if (body.filename) res.setHeader('content-disposition', `attachment; filename="${body.filename}"`);
+    writeAnswer(res, status, body.contentType, body.body);
     return;
   }
+  if (req.method !== 'GET' && req.method !== 'HEAD') {
+    writeAnswer(res, status, JSON_TYPE, JSON.stringify(body));
+    return;
+  }
+  const express = req as Request;
   if (!body || typeof body !== 'object' || !Object.isFrozen(body)) {
-    res.status(status).json(body);
+    express.res!.status(status).json(body);
     return;
   }
   let sent = frozenBodies.get(body);
   if (!sent) {
     const json = Buffer.from(JSON.stringify(body));
-    const etagOf = req.app.get('etag fn') as ((body: Buffer, encoding: string) => string) | undefined;
+    const etagOf = express.app.get('etag fn') as ((body: Buffer, encoding: string) => string) | undefined;
     sent = { json, etag: etagOf?.(json, 'utf8') };
     frozenBodies.set(body, sent);
   }
   // express keeps an ETag that is already set, and still answers a matching If-None-Match with 304.
   if (sent.etag) res.setHeader('ETag', sent.etag);
-  res.status(status).setHeader('content-type', JSON_TYPE).send(sent.json);
+  express.res!.status(status).setHeader('content-type', JSON_TYPE).send(sent.json);
+}
+
+/**
+ * The part of serving a route that follows access: validates the query and body, runs the handler and sends
+ * its result (status = the first documented response; undefined = the handler answered itself, else 204).
+ */
+export async function answer(
+  route: AnyRoute,
+  ctx: Omit<RouteContext<unknown, unknown, unknown>, 'query' | 'body'>,
+  sent: { query: unknown; body: unknown },
+) {
+  const { req, res } = ctx;
+  const query = parsePart(route.query, sent.query, 'query');
+  const body = parsePart(route.body, sent.body, 'body');
+  const result = await route.handler({ ...ctx, query, body });
+  if (result === undefined) {
+    if (!res.headersSent) {
+      res.statusCode = 204;
+      res.end();
+    }
+    return;
+  }
+  sendResult(req, res, Number(Object.keys(route.responses)[0] ?? 200), result);
 }
 
 /**
@@ -143,10 +198,14 @@ export function mountRoutes(
     return group;
   };
   for (const route of routes) {
-    const status = Number(Object.keys(route.responses)[0] ?? 200);
     const [, first = '', ...rest] = route.path.split('/');
     if (!/^[\w.-]+$/.test(first))
       throw new Error(`${route.path}: an API route path must start with a fixed segment`);
+    if (
+      route.stateless &&
+      (route.access.kind !== 'public' || route.method !== 'post' || route.path.includes(':'))
+    )
+      throw new Error(`${route.path}: a stateless route is a public POST without path parameters`);
     groupOf(first)[route.method](`/${rest.join('/')}`, async (req, res) => {
       const { access } = route;
       // Public routes never need the session: skip its lookup.
@@ -187,24 +246,11 @@ export function mountRoutes(
           );
         criteria = { organisationId: orgId!, access: held };
       }
-      const query = parsePart(route.query, req.query, 'query');
-      const body = parsePart(route.body, req.body ?? {}, 'body');
-      const result = await route.handler({
-        req,
-        res,
-        params,
-        query,
-        body,
-        user,
-        project,
-        criteria,
-        services,
-      });
-      if (result === undefined) {
-        if (!res.headersSent) res.status(204).end();
-        return;
-      }
-      sendJson(req, res, status, result);
+      await answer(
+        route,
+        { req, res, params, user, project, criteria, services },
+        { query: req.query, body: req.body ?? {} },
+      );
     });
   }
 }

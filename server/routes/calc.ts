@@ -23,7 +23,7 @@ import {
 } from '@shared/calc/wind/schema';
 import { apiErrorSchema } from '@shared/schemas/common';
 import { z } from 'zod';
-import { defineRoute } from '../http/route';
+import { defineRoute, FileAnswer } from '../http/route';
 
 const calcErrors = {
   400: {
@@ -45,6 +45,7 @@ export const calcRoutes = [
       'Clear-field and effective R-value / U-factor of a wall with its clip, girt and fastener bridges',
     tag: 'Calculations',
     access: { kind: 'public' },
+    stateless: true,
     body: thermalInputSchema,
     example: metalPanelWall(),
     responses: {
@@ -60,6 +61,7 @@ export const calcRoutes = [
       'Interstitial condensation by month (ISO 13788 Glaser method) and the interior-surface (mould) check',
     tag: 'Calculations',
     access: { kind: 'public' },
+    stateless: true,
     body: moistureInputSchema,
     example: metalPanelMoistureWall({ vapourRetarder: false }),
     responses: {
@@ -78,6 +80,7 @@ export const calcRoutes = [
       'Wall components-and-cladding pressures (ASCE 7-16 / 7-22) and the girt and clip spacing per zone',
     tag: 'Calculations',
     access: { kind: 'public' },
+    stateless: true,
     body: windScheduleInputSchema.extend({
       design: designSpacingsSchema
         .optional()
@@ -104,6 +107,7 @@ export const calcRoutes = [
     summary: 'Sealant joint schedule: movement, required width and depth, backer, verdict',
     tag: 'Calculations',
     access: { kind: 'public' },
+    stateless: true,
     body: jointScheduleInputSchema,
     example: { joints: demoJointSchedule() },
     responses: {
@@ -119,6 +123,7 @@ export const calcRoutes = [
       'Material takeoff from a simple elevation (joints, sealant packages, tape, trim, fasteners); `?format=csv` for CSV',
     tag: 'Calculations',
     access: { kind: 'public' },
+    stateless: true,
     query: z.object({ format: z.enum(['json', 'csv']).default('json') }),
     body: takeoffInputSchema,
     example: demoElevation(),
@@ -129,11 +134,11 @@ export const calcRoutes = [
       },
       ...calcErrors,
     },
-    handler: async ({ body, query, res }) => {
+    handler: async ({ body, query }) => {
       const result = calculateTakeoff(body);
-      if (query.format === 'json') return result;
-      res.type('text/csv').attachment('takeoff.csv').send(takeoffToCsv(result));
-      return undefined;
+      return query.format === 'json'
+        ? result
+        : new FileAnswer('text/csv; charset=utf-8', takeoffToCsv(result), 'takeoff.csv');
     },
   }),
   defineRoute({

@@ -14,7 +14,7 @@ import { createAssemblyService } from '../services/assemblies';
 import { createCriteriaService } from '../services/criteria';
 import { attachmentProductRow } from '../services/library';
 import { createProjectService } from '../services/projects';
-import type { Db } from './client';
+import { type Db, noReadCache } from './client';
 import {
   orgAttachmentProducts,
   organisationMembers,
@@ -97,7 +97,7 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
       .insert(organisationMembers)
       .values({ organisationId: firmIds.get(u.firm)!, userId: created.id, role: u.firmRole });
   }
-  const projects = createProjectService(db);
+  const projects = createProjectService(db, noReadCache);
   const assemblies = createAssemblyService(db);
   for (const [index, { owner, members, ...input }] of demoScenario.projects.entries()) {
     const created = await projects.create(userIds.get(owner)!, input);

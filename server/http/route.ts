@@ -218,7 +218,7 @@ export function mountRoutes(
         const projectId = access.projectId
           ? await access.projectId({ params: req.params as Record<string, string>, services })
           : (req.params as Record<string, string>).id;
-        // One query for membership, role and record (no cross-request cache on a PostgreSQL server).
+        // One query for membership, role and record (remembered until the next write).
         const record = projectId ? await services.projects.access(projectId, user!.id) : null;
         if (!projectId || !record) throw notFound('project');
         if (!can(record.myRole, access.action)) throw forbidden();

@@ -50,11 +50,8 @@ function deepFreeze<T>(value: T): T {
   return value;
 }
 
-/**
- * `readCache`: the database's cross-request cache (PGlite only — it is emptied by every write, see
- * server/db/client.ts); null for a PostgreSQL server, where every call reads the database.
- */
-export function createProjectService(db: Db, readCache: ReadCache | null = null) {
+/** `readCache`: the database's cross-request cache, emptied by every write (see server/db/client.ts). */
+export function createProjectService(db: Db, readCache: ReadCache) {
   // One prepared statement answers both "may this user see the project, with which role" and "the project":
   // the membership is an inner join, so a non-member gets no row.
   const accessQuery = db
@@ -77,9 +74,7 @@ export function createProjectService(db: Db, readCache: ReadCache | null = null)
 
   /** The project with the caller's role (`myRole`), or null when it does not exist or they are not a member. */
   function access(projectId: string, userId: string): Promise<Project | null> {
-    return readCache
-      ? readCache.get(`project:${projectId}:${userId}`, () => load(projectId, userId))
-      : load(projectId, userId);
+    return readCache.get(`project:${projectId}:${userId}`, () => load(projectId, userId));
   }
 
   async function roleOf(projectId: string, userId: string): Promise<ProjectRole | null> {

@@ -5,9 +5,13 @@ import { openDatabase } from '../../server/db/client';
 import { createTestApp, DEMO_PASSWORD, demoEmail, type TestApp, testDatabases } from '../setup/app';
 
 /**
- * Membership and role changes take effect on the very next request — also when reads are cached (PGlite) and
- * when a second server process shares the PostgreSQL database (its own pool, nothing shared in memory).
+ * Membership and role changes take effect on the very next request in the process that made them, although
+ * reads are cached; a second server process sharing the PostgreSQL database (its own pool and cache) sees
+ * them as soon as PostgreSQL's write notice reaches it (polled here for up to two seconds).
  */
+/** How long another process may take to see a change: the arrival of PostgreSQL's write notice. */
+const NOTICE = { timeout: 2000 };
+
 describe.each(testDatabases())('membership changes on %s', (kind) => {
   let t: TestApp;
   let projectId: string;
@@ -52,11 +56,12 @@ describe.each(testDatabases())('membership changes on %s', (kind) => {
       .put(`/api/projects/${projectId}/members/${memberId}`)
       .send({ role: 'viewer' });
     expect(changed.status).toBe(200);
-    for (const agent of [here, there]) {
-      const res = await agent.get(`/api/projects/${projectId}`);
-      expect(res.body.myRole).toBe('viewer');
+    expect((await here.get(`/api/projects/${projectId}`)).body.myRole).toBe('viewer');
+    await expect
+      .poll(async () => (await there.get(`/api/projects/${projectId}`)).body.myRole, NOTICE)
+      .toBe('viewer');
+    for (const agent of [here, there])
       expect((await agent.get(`/api/projects/${projectId}/audit`)).status).toBe(403);
-    }
 
     const read = await owner.get(`/api/projects/${projectId}`);
     const project = read.body;
@@ -84,13 +89,16 @@ describe.each(testDatabases())('membership changes on %s', (kind) => {
     const fresh = await owner.get(`/api/projects/${projectId}`).set('if-none-match', etag);
     expect(fresh.status).toBe(200);
     expect(fresh.body.name).toBe(`${input.name} (renamed)`);
-    for (const agent of [here, there]) {
-      const res = await agent.get(`/api/projects/${projectId}`);
-      expect(res.body.name).toBe(`${input.name} (renamed)`);
-      expect(res.body.version).toBe(version + 1);
-    }
+    expect((await here.get(`/api/projects/${projectId}`)).body.version).toBe(version + 1);
+    await expect
+      .poll(async () => (await there.get(`/api/projects/${projectId}`)).body.version, NOTICE)
+      .toBe(version + 1);
+    for (const agent of [here, there])
+      expect((await agent.get(`/api/projects/${projectId}`)).body.name).toBe(`${input.name} (renamed)`);
 
     expect((await owner.delete(`/api/projects/${projectId}/members/${memberId}`)).status).toBe(204);
+    expect((await here.get(`/api/projects/${projectId}`)).status).toBe(404);
+    await expect.poll(async () => (await there.get(`/api/projects/${projectId}`)).status, NOTICE).toBe(404);
     for (const agent of [here, there]) {
       expect((await agent.get(`/api/projects/${projectId}`)).status).toBe(404);
       expect((await agent.get('/api/projects')).body.projects).toEqual([]);

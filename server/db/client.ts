@@ -122,7 +122,8 @@ function pgliteReadCache(client: PGlite): ReadCache {
 /**
  * PostgreSQL server: this process's own writes empty the cache as on PGlite (every non-SELECT through the
  * pool, every checked-out client — drizzle's transactions — on checkout and release), and writes by any other
- * process arrive as notices on `WRITES_CHANNEL`, sent at commit by a trigger on every table. The cache serves
+ * process arrive as notices on `WRITES_CHANNEL`, sent at commit by a trigger on every table (the notices of
+ * this pool's own connections are ignored: those writes were seen as they ran). The cache serves
  * only while the notice connection is listening; when it drops, every read goes to the database until it is
  * back. A change committed by another process is seen here when its notice arrives — normally within a
  * millisecond of the commit (as a read that started just before the commit would also have missed it).
@@ -130,6 +131,14 @@ function pgliteReadCache(client: PGlite): ReadCache {
 function postgresReadCache(pool: pg.Pool, connectionString: string) {
   const { cache, invalidate, setLive } = createReadCache(false);
   invalidateAround(pool, 'query', mayWrite, invalidate);
+  // This pool's own writes were already seen as they ran: their notices (backend process ids of its
+  // connections) are ignored, so the cache is not emptied twice per write.
+  const ownBackends = new Set<number>();
+  pool.on('connect', (client) => {
+    const pid = (client as unknown as { processID: number }).processID;
+    ownBackends.add(pid);
+    client.once('end', () => ownBackends.delete(pid));
+  });
   // A checked-out client (drizzle's transactions) may write anything until it is released. (`pool.query`
   // checks out with a callback of its own: that statement is judged by the `query` wrapper above.)
   const connect = pool.connect.bind(pool) as (...args: unknown[]) => Promise<pg.PoolClient>;
@@ -164,7 +173,9 @@ function postgresReadCache(pool: pg.Pool, connectionString: string) {
           void listen();
         }, 1000);
     };
-    client.on('notification', invalidate);
+    client.on('notification', (notice) => {
+      if (!ownBackends.has(notice.processId)) invalidate();
+    });
     client.on('error', lost);
     client.on('end', lost);
     try {
@@ -204,9 +215,10 @@ export async function openDatabase(opts: {
 }): Promise<Database> {
   if (opts.databaseUrl) {
     const pool = new pg.Pool({ connectionString: opts.databaseUrl, max: 10 });
+    // Before the first statement, so that the cache knows every connection of the pool as its own.
+    const reads = postgresReadCache(pool, opts.databaseUrl);
     const db = drizzleNodePg({ client: pool, schema });
     await migrateNodePg(db, { migrationsFolder });
-    const reads = postgresReadCache(pool, opts.databaseUrl);
     await reads.listen();
     return {
       db: db as unknown as Db,

@@ -79,7 +79,8 @@ export const projectRoutes = [
   defineRoute({
     method: 'put',
     path: '/projects/:id',
-    summary: 'Update a project (name the version you read; a stale version gets 409)',
+    summary:
+      'Update the project’s site data (name the version you read; 409 if someone saved the site data after it)',
     tag: 'Projects',
     access: { kind: 'project', action: 'project.update' },
     params: uuidParam,
@@ -90,12 +91,13 @@ export const projectRoutes = [
       400: { description: 'Invalid fields', schema: apiErrorSchema },
       ...errors,
       409: {
-        description: 'Someone saved first (or the project is archived); `current` holds their version',
+        description:
+          'Someone saved the site data after the version you read (or the project is archived); `current` holds their version',
         schema: versionConflictSchema(projectSchema),
       },
     },
     handler: ({ user, project, body, services }) =>
-      services.projects.update(project!.id, user!.id, body.version, body.changes),
+      services.projects.update(project!.id, user!.id, body.version, { part: 'site', changes: body.changes }),
   }),
   defineRoute({
     method: 'put',
@@ -122,10 +124,13 @@ export const projectRoutes = [
       200: { description: 'The updated project', schema: projectSchema },
       400: { description: 'Invalid fields', schema: apiErrorSchema },
       ...errors,
-      409: { description: 'Someone saved first, or archived', schema: versionConflictSchema(projectSchema) },
+      409: {
+        description: 'Someone saved the same part first, or archived',
+        schema: versionConflictSchema(projectSchema),
+      },
     },
     handler: ({ user, project, body, services }) =>
-      services.projects.update(project!.id, user!.id, body.version, { wind: body.wind }, 'update_wind'),
+      services.projects.update(project!.id, user!.id, body.version, { part: 'wind', wind: body.wind }),
   }),
   defineRoute({
     method: 'put',
@@ -149,16 +154,16 @@ export const projectRoutes = [
       200: { description: 'The updated project', schema: projectSchema },
       400: { description: 'Invalid fields', schema: apiErrorSchema },
       ...errors,
-      409: { description: 'Someone saved first, or archived', schema: versionConflictSchema(projectSchema) },
+      409: {
+        description: 'Someone saved the same part first, or archived',
+        schema: versionConflictSchema(projectSchema),
+      },
     },
     handler: ({ user, project, body, services }) =>
-      services.projects.update(
-        project!.id,
-        user!.id,
-        body.version,
-        { climate: body.climate },
-        'update_climate',
-      ),
+      services.projects.update(project!.id, user!.id, body.version, {
+        part: 'climate',
+        climate: body.climate,
+      }),
   }),
   defineRoute({
     method: 'post',

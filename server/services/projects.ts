@@ -1,6 +1,6 @@
 import type { ProjectRole } from '@shared/auth/permissions';
 import type { Project, ProjectClimate, ProjectInput, ProjectWind } from '@shared/schemas/project';
-import { and, asc, eq, isNotNull, isNull, sql } from 'drizzle-orm';
+import { and, asc, eq, gte, isNotNull, isNull, lte, sql } from 'drizzle-orm';
 import type { Db, ReadCache } from '../db/client';
 import { organisationMembers, organisations, projectMembers, projects } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
@@ -34,6 +34,23 @@ function toProject(row: ProjectRow, organisationName: string, myRole: ProjectRol
     updatedAt: row.updatedAt.toISOString(),
     myRole,
   };
+}
+
+/** A save of one part of a project: its site data, its wind data or its climate. */
+export type ProjectPartChange =
+  | { part: 'site'; changes: ProjectInput }
+  | { part: 'wind'; wind: ProjectWind }
+  | { part: 'climate'; climate: ProjectClimate };
+
+/** The column holding the version each part was last saved at, the audit action and the part's name. */
+const SAVED_IN = { site: 'siteSavedIn', wind: 'windSavedIn', climate: 'climateSavedIn' } as const;
+const PART_ACTION = { site: 'update', wind: 'update_wind', climate: 'update_climate' } as const;
+const PART_NAME = { site: 'site data', wind: 'wind data', climate: 'climate' } as const;
+
+function partChanges(change: ProjectPartChange) {
+  const { part } = change;
+  if (change.part === 'site') return { part, changes: change.changes };
+  return { part, changes: change.part === 'wind' ? { wind: change.wind } : { climate: change.climate } };
 }
 
 /** Archived projects are read-only until restored. */
@@ -136,23 +153,34 @@ export function createProjectService(db: Db, readCache: ReadCache) {
       return get(id, userId);
     },
 
-    /** Optimistic concurrency: the update applies only to the version the caller read, else 409 with the current record. */
+    /**
+     * Saves one part of the project — its site data, its wind data or its climate — with optimistic
+     * concurrency per part: the save applies when nobody saved the same part after the version the caller
+     * read (a colleague's save of another part does not stand in the way), else 409 with the current record.
+     * Every save makes a new project version.
+     */
     async update(
       projectId: string,
       userId: string,
-      version: number,
-      changes: ProjectInput | { wind: ProjectWind } | { climate: ProjectClimate },
-      action: 'update' | 'update_wind' | 'update_climate' = 'update',
+      baseVersion: number,
+      change: ProjectPartChange,
     ): Promise<Project> {
       const current = await get(projectId, userId);
-      const before = Object.fromEntries(Object.keys(changes).map((k) => [k, current[k as keyof Project]]));
       if (current.archivedAt) throw archivedError();
-      if (before.archivedAt) throw archivedError();
+      const { part, changes } = partChanges(change);
+      const before = Object.fromEntries(Object.keys(changes).map((k) => [k, current[k as keyof Project]]));
+      const next = sql`${projects.version} + 1`;
       const updated = await db.transaction(async (tx) => {
         const rows = await tx
           .update(projects)
-          .set({ ...changes, version: version + 1, updatedAt: new Date() })
-          .where(and(eq(projects.id, projectId), eq(projects.version, version)))
+          .set({ ...changes, version: next, [SAVED_IN[part]]: next, updatedAt: new Date() })
+          .where(
+            and(
+              eq(projects.id, projectId),
+              lte(projects[SAVED_IN[part]], baseVersion),
+              gte(projects.version, baseVersion),
+            ),
+          )
           .returning({ id: projects.id });
         if (rows.length === 0) return false;
         await recordAudit(tx, {
@@ -160,7 +188,7 @@ export function createProjectService(db: Db, readCache: ReadCache) {
           projectId,
           entity: 'project',
           entityId: projectId,
-          action,
+          action: PART_ACTION[part],
           before,
           after: changes,
         });
@@ -170,11 +198,9 @@ export function createProjectService(db: Db, readCache: ReadCache) {
         throw new HttpError(
           409,
           'version_conflict',
-          'someone else saved this project after you opened it',
+          `someone else saved this project’s ${PART_NAME[part]} after you opened it`,
           undefined,
-          {
-            current: await get(projectId, userId),
-          },
+          { current: await get(projectId, userId) },
         );
       return get(projectId, userId);
     },

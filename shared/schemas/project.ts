@@ -72,9 +72,17 @@ export const projectInputSchema = projectSiteSchema
   });
 export type ProjectInput = z.infer<typeof projectInputSchema>;
 
-/** An update names the version it was based on (optimistic concurrency). */
+/**
+ * A save of one part of a project (site data, wind data, climate) names the project version it was based on;
+ * it conflicts only with a later save of the same part (optimistic concurrency per part).
+ */
+const baseVersion = z
+  .number()
+  .int()
+  .positive()
+  .describe('The project version this save is based on; 409 if the same part was saved after it');
 export const projectUpdateSchema = z.object({
-  version: z.number().int().positive(),
+  version: baseVersion,
   changes: projectInputSchema,
 });
 export type ProjectUpdate = z.infer<typeof projectUpdateSchema>;
@@ -111,11 +119,11 @@ export const projectClimateSchema = z.object({
 export type ProjectClimate = z.infer<typeof projectClimateSchema>;
 
 export const projectWindUpdateSchema = z.object({
-  version: z.number().int().positive(),
+  version: baseVersion,
   wind: projectWindSchema,
 });
 export const projectClimateUpdateSchema = z.object({
-  version: z.number().int().positive(),
+  version: baseVersion,
   climate: projectClimateSchema,
 });
 

@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { seedDemo } from '../../server/db/seed';
+import { apiRoutes } from '../../server/routes';
 import { createTestApp, demoEmail, type TestApp, testDatabases } from '../setup/app';
 
 const newProject = {
@@ -121,6 +122,52 @@ describe.each(testDatabases())('foundation API on %s', (kind) => {
     expect(stale.status).toBe(409);
     expect(stale.body.error.code).toBe('version_conflict');
     expect(stale.body.current.number).toBe('LA-2611-R1');
+  });
+
+  it('lets colleagues save different parts of a project from the same version; the same part conflicts', async () => {
+    const id = await t.demoProjectId();
+    const [architect, engineer, consultant] = await Promise.all(
+      ['architect', 'engineer', 'consultant'].map((r) => t.as(demoEmail(r))),
+    );
+    const current = (await architect.get(`/api/projects/${id}`)).body;
+    const { version } = current;
+    const example = (path: string) =>
+      apiRoutes.find((r) => r.method === 'put' && r.path === path)!.example as object;
+    const wind = { ...(example('/projects/:id/wind') as { wind: object }).wind, basicWindSpeed: 53 };
+    const { climate } = example('/projects/:id/climate') as { climate: object };
+    const { changes } = example('/projects/:id') as { changes: object };
+
+    const site = await architect.put(`/api/projects/${id}`).send({ version, changes });
+    expect(site.status).toBe(200);
+    const windSaved = await engineer.put(`/api/projects/${id}/wind`).send({ version, wind });
+    expect(windSaved.status).toBe(200);
+    expect(windSaved.body.version).toBe(version + 2);
+    const climateSaved = await consultant.put(`/api/projects/${id}/climate`).send({ version, climate });
+    expect(climateSaved.status).toBe(200);
+    expect(climateSaved.body).toMatchObject({ version: version + 3, wind: { basicWindSpeed: 53 } });
+
+    // The same part, saved again from the version read before the engineer's save: 409 with their record.
+    const stale = await engineer
+      .put(`/api/projects/${id}/wind`)
+      .send({ version, wind: { ...wind, basicWindSpeed: 60 } });
+    expect(stale.status).toBe(409);
+    expect(stale.body.error.message).toMatch(/wind data/);
+    expect(stale.body.current).toMatchObject({ version: version + 3, wind: { basicWindSpeed: 53 } });
+    // From the version that saved it, it applies; a version that does not exist yet never does.
+    const again = await engineer
+      .put(`/api/projects/${id}/wind`)
+      .send({ version: version + 2, wind: { ...wind, basicWindSpeed: 60 } });
+    expect(again.status).toBe(200);
+    expect((await architect.put(`/api/projects/${id}`).send({ version: version + 99, changes })).status).toBe(
+      409,
+    );
+    const audit = (await architect.get(`/api/projects/${id}/audit`)).body.entries as { action: string }[];
+    expect(audit.slice(0, 4).map((e) => e.action)).toEqual([
+      'update_wind',
+      'update_climate',
+      'update_wind',
+      'update',
+    ]);
   });
 
   it('invites by e-mail; the invitee signs up and accepts; the accept link works once', async () => {

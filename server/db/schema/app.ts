@@ -74,6 +74,13 @@ export const projects = pgTable(
     archivedAt: timestamp('archived_at', { withTimezone: true }),
     /** Optimistic-concurrency version: every update must name the version it read. */
     version: integer('version').notNull().default(1),
+    /**
+     * The `version` each part — site data, wind data, climate — was last saved at: a save of one part conflicts
+     * only with a later save of the same part, not with a colleague's save of another (projects.update).
+     */
+    siteSavedIn: integer('site_saved_in').notNull().default(1),
+    windSavedIn: integer('wind_saved_in').notNull().default(1),
+    climateSavedIn: integer('climate_saved_in').notNull().default(1),
     createdBy: text('created_by').references(() => user.id),
     createdAt: createdAt(),
     updatedAt: updatedAt(),

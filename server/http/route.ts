@@ -136,21 +136,22 @@ export function sendResult(req: IncomingMessage, res: ServerResponse, status: nu
     writeAnswer(res, status, JSON_TYPE, JSON.stringify(body));
     return;
   }
-  const express = req as Request;
+  // A GET is always served by Express (stateless routes are POSTs): its response API is there.
+  const express = { req: req as Request, res: res as Response };
   if (!body || typeof body !== 'object' || !Object.isFrozen(body)) {
-    express.res!.status(status).json(body);
+    express.res.status(status).json(body);
     return;
   }
   let sent = frozenBodies.get(body);
   if (!sent) {
     const json = Buffer.from(JSON.stringify(body));
-    const etagOf = express.app.get('etag fn') as ((body: Buffer, encoding: string) => string) | undefined;
+    const etagOf = express.req.app.get('etag fn') as ((body: Buffer, encoding: string) => string) | undefined;
     sent = { json, etag: etagOf?.(json, 'utf8') };
     frozenBodies.set(body, sent);
   }
   // express keeps an ETag that is already set, and still answers a matching If-None-Match with 304.
   if (sent.etag) res.setHeader('ETag', sent.etag);
-  express.res!.status(status).setHeader('content-type', JSON_TYPE).send(sent.json);
+  express.res.status(status).setHeader('content-type', JSON_TYPE).send(sent.json);
 }
 
 /**

@@ -14,9 +14,9 @@ interface Conflict {
 }
 
 /**
- * Edits the project's climate. Every save names the project version it started from; when someone saved in
- * between (the climate or any other project data), nothing is overwritten silently: the person carries their
- * changed values onto the saved version, or loads it.
+ * Edits the project's climate. Every save names the project version it started from; when someone saved the
+ * climate in between (a save of other project data does not stand in the way), nothing is overwritten
+ * silently: the person carries their changed values onto the saved version, or loads it.
  */
 export function ClimateEditor({
   project,
@@ -56,13 +56,13 @@ export function ClimateEditor({
 
   const banner =
     conflict && merge ? (
-      <Notice tone="warning" title="Someone else saved this project first." live>
+      <Notice tone="warning" title="Someone else saved the climate first." live>
         <p>
           Version <span className="num">{conflict.theirs.version}</span> was saved at{' '}
           <span className="num">{formatDateTime(conflict.theirs.updatedAt)}</span> while you were editing
           version <span className="num">{conflict.base.version}</span>.{' '}
           {merge.theirsChanged.length === 0
-            ? 'They changed other project data, not the climate.'
+            ? 'They saved the climate without changing a value.'
             : `They changed the climate: ${merge.theirsChanged.slice(0, 6).join(', ')}${merge.theirsChanged.length > 6 ? ` and ${merge.theirsChanged.length - 6} more` : ''}.`}{' '}
           Nothing of yours has been saved, and your entries are still in the form.
         </p>

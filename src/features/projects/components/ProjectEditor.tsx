@@ -34,8 +34,8 @@ export function mergeEdits({ base, theirs, mine }: Conflict): ProjectFormValues 
 }
 
 /**
- * Edits a project's site data. Every save names the revision it started from. When someone else saved
- * in between, nothing is lost silently: the form keeps the person's edits, a table shows the starting
+ * Edits a project's site data. Every save names the revision it started from. When someone else saved the
+ * site data in between (a wind or climate save does not stand in the way), nothing is lost silently: the form keeps the person's edits, a table shows the starting
  * value, theirs and the saved one side by side, and the person chooses to carry their changes onto the
  * saved revision or to load the saved revision instead.
  */
@@ -78,7 +78,7 @@ export function ProjectEditor({ project, onDone }: { project: Project; onDone: (
   const show = (f: Field, v: unknown) => formatProjectFieldValue(f, v, system);
 
   const banner = conflict ? (
-    <Notice tone="warning" title="Someone else saved this project first." live>
+    <Notice tone="warning" title="Someone else saved the site data first." live>
       <p>
         Revision <span className="num">{conflict.theirs.version}</span> was saved at{' '}
         <span className="num">{formatDateTime(conflict.theirs.updatedAt)}</span> while you were editing

@@ -138,7 +138,7 @@ interface Conflict {
 /**
  * The project's ASCE 7 wind data: edition, V, risk category, exposure, K_zt, ground elevation (or K_e = 1.0),
  * enclosure and roof slope. Height and plan come from the site data. A save names the project version it
- * started from; when someone saved in between, nothing is overwritten — the person chooses.
+ * started from; when someone saved the wind data in between, nothing is overwritten — the person chooses.
  */
 export function ProjectWindForm({ project, onDone }: { project: Project; onDone: () => void }) {
   const system = useUnitSystem();
@@ -319,12 +319,13 @@ export function ProjectWindForm({ project, onDone }: { project: Project; onDone:
       ) : null}
 
       {conflict ? (
-        <Notice tone="warning" title="Someone else saved this project first." live>
+        <Notice tone="warning" title="Someone else saved the wind data first." live>
           <p>
-            The project was saved at <span className="num">{formatDateTime(conflict.theirs.updatedAt)}</span>{' '}
-            (now revision <span className="num">{conflict.theirs.version}</span>) while you were editing
-            revision <span className="num">{baseVersion}</span>. Nothing of yours has been saved, and your
-            values are still in the form.
+            The wind data was saved at{' '}
+            <span className="num">{formatDateTime(conflict.theirs.updatedAt)}</span> (now revision{' '}
+            <span className="num">{conflict.theirs.version}</span>) while you were editing revision{' '}
+            <span className="num">{baseVersion}</span>. Nothing of yours has been saved, and your values are
+            still in the form.
           </p>
           {differing.length > 0 ? (
             <Table caption="Where your wind data and the saved wind data differ">

@@ -1,5 +1,5 @@
 import type { UnitSystem } from '@shared/units';
-import { type ReactNode, type Ref, useState } from 'react';
+import { type ClipboardEventHandler, type ReactNode, type Ref, useState } from 'react';
 import { type FieldProblem, problemText } from '../../lib/field-problems';
 import type { InputMeasure, ParsedEntry } from '../../lib/input-measure';
 import { useUnitSystem } from '../../lib/unit-system';
@@ -54,6 +54,8 @@ interface QuantityInputProps {
   inputRef?: Ref<HTMLInputElement>;
   className?: string;
   placeholder?: string;
+  /** E.g. spreading a column pasted from a spreadsheet over several boxes (the month table). */
+  onPaste?: ClipboardEventHandler<HTMLInputElement>;
 }
 
 interface InputState {
@@ -90,6 +92,7 @@ export function QuantityInput({
   inputRef,
   className,
   placeholder,
+  onPaste,
 }: QuantityInputProps) {
   const preferred = useUnitSystem();
   const system = override ?? preferred;
@@ -175,6 +178,7 @@ export function QuantityInput({
             placeholder={placeholder}
             value={state.text}
             onChange={(e) => handleChange(e.target.value)}
+            onPaste={onPaste}
             onBlur={() => {
               setTouched(true);
               onBlur?.();

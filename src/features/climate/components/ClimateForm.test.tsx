@@ -39,8 +39,8 @@ const box = (label: RegExp) => screen.getByLabelText(label) as HTMLInputElement;
 describe('ClimateForm', () => {
   it('shows the months in °F and % for IP, and says the demo climate is invented', () => {
     renderForm(demoClimate, 'IP');
-    expect(box(/^January mean exterior temperature, °F/).value).toBe('10.4');
-    expect(box(/^January mean exterior relative humidity, %/).value).toBe('84');
+    expect(box(/^January mean exterior temperature, in °F/).value).toBe('10.4');
+    expect(box(/^January mean exterior relative humidity, in %/).value).toBe('84');
     expect(screen.getByText('These are invented demo values, not a real place.')).toBeTruthy();
     expect((screen.getByLabelText('Humidity class') as HTMLSelectElement).value).toBe('3');
   });
@@ -67,7 +67,8 @@ describe('ClimateForm', () => {
   it('names an unreadable or missing month in words and does not save', async () => {
     const onSubmit = renderForm(demoClimate, 'SI');
     fireEvent.change(box(/^March mean exterior temperature/), { target: { value: '4,5' } });
-    expect(screen.getByText('Enter a number in °C; “4,5” is not one.')).toBeTruthy();
+    fireEvent.blur(box(/^March mean exterior temperature/));
+    expect(screen.getByText('Enter a number in °C (for example 12.5); “4,5” is not one.')).toBeTruthy();
     fireEvent.click(screen.getByRole('button', { name: 'Save the climate' }));
     expect(await screen.findByText('One value needs attention.')).toBeTruthy();
     expect(onSubmit).not.toHaveBeenCalled();

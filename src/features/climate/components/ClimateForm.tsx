@@ -7,14 +7,14 @@ import { Link } from 'react-router';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
+import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
-import { formatQuantity, parseInput, type Quantity, unitOf } from '../../../lib/quantities';
+import { formatQuantity, parseInput, type Quantity, quantityInput, unitOf } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type ClimateFormValues, climateErrorMap, climateFormSchema, MONTH_NAMES } from '../climate-form';
 import { HUMIDITY_CLASSES, isInventedClimate } from '../humidity-classes';
-import { ClimateCell } from './ClimateCell';
 
 type Column = 'exteriorTemperature' | 'exteriorRelativeHumidity';
 const COLUMNS: { field: Column; quantity: Quantity; words: string }[] = [
@@ -190,17 +190,25 @@ export function ClimateForm({
                           control={control}
                           name={`months.${k}.${col.field}`}
                           render={({ field, fieldState }) => (
-                            <ClimateCell
+                            <QuantityInput
                               id={cellId(k, col.field)}
                               label={`${name} ${col.words}`}
-                              quantity={col.quantity}
+                              labelHidden
+                              measure={quantityInput(col.quantity)}
                               value={typeof field.value === 'number' ? field.value : undefined}
                               system={system}
                               onChange={(si) => field.onChange(si ?? Number.NaN)}
                               onBlur={field.onBlur}
                               inputRef={field.ref}
                               error={fieldState.error?.message}
-                              onPasteMany={(text) => pasteFrom(k, j, text)}
+                              onPaste={(e) => {
+                                // A column pasted from a spreadsheet: spread it over the rows below.
+                                const text = e.clipboardData.getData('text');
+                                if (!/[\n\t]/.test(text.trim())) return;
+                                e.preventDefault();
+                                pasteFrom(k, j, text);
+                              }}
+                              className="w-28"
                             />
                           )}
                         />

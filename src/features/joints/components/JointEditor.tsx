@@ -10,13 +10,13 @@ import {
   MOVEMENT_CLASSES,
   type MovementClass,
 } from '@shared/calc/joints/schema';
-import type { ReactNode } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { FieldGroup, GroupProblem } from '../../../components/ui/FieldGroup';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
-import { type FieldProblem, type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
+import { type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
 import { formatJointDimension, formatSheet, sheetInput } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AirDesign, newSide, removeAt, replaceAt } from '../draft';
@@ -24,32 +24,6 @@ import { BACKER_LABELS, JOINT_TYPE_LABELS, MOVEMENT_CLASS_LABELS } from '../labe
 import { SurfaceSuggest } from './SurfaceSuggest';
 
 const CUSTOM = '__custom';
-
-/** A problem on a group of boxes (a range, a union) rather than on one box. */
-function GroupProblem({ path, problem }: { path: string; problem: FieldProblem | undefined }) {
-  const system = useUnitSystem();
-  if (!problem) return null;
-  return (
-    <p
-      id={fieldDomId(path)}
-      tabIndex={-1}
-      className="flex items-start gap-1 text-sm font-medium text-caution"
-    >
-      <span aria-hidden="true">✕</span>
-      <span>{problemText(problem, undefined, system)}</span>
-    </p>
-  );
-}
-
-function Group({ legend, children, note }: { legend: string; children: ReactNode; note?: ReactNode }) {
-  return (
-    <fieldset className="flex flex-col gap-3 border-t border-rule pt-3">
-      <legend className="label-caps pr-2">{legend}</legend>
-      {note ? <p className="-mt-1 text-xs text-ink-muted">{note}</p> : null}
-      {children}
-    </fieldset>
-  );
-}
 
 interface JointEditorProps {
   joint: JointInput;
@@ -186,7 +160,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
         />
       </div>
 
-      <Group
+      <FieldGroup
         legend="Moving sides"
         note="One side when the joint meets fixed construction; two when both substrates move. Length L is the run of material that feeds movement into this joint."
       >
@@ -305,9 +279,9 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
             </Button>
           </div>
         ) : null}
-      </Group>
+      </FieldGroup>
 
-      <Group
+      <FieldGroup
         legend="Temperatures"
         note="The sealant follows the surface temperature of the moving material, not the air: dark metal in sun runs far above the air."
       >
@@ -396,9 +370,9 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <GroupProblem path={path('installationTemperature')} problem={pr('installationTemperature')} />
         ) : null}
         <SurfaceSuggest air={air} onUse={(range) => set({ surfaceTemperatureRange: range })} />
-      </Group>
+      </FieldGroup>
 
-      <Group
+      <FieldGroup
         legend="Other movement"
         note="Non-thermal movement you expect (moisture, creep, storey drift, seismic); leave blank for none."
       >
@@ -422,9 +396,9 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
             problem={pr('otherMovement.compression')}
           />
         </div>
-      </Group>
+      </FieldGroup>
 
-      <Group legend="Backer and opening">
+      <FieldGroup legend="Backer and opening">
         <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2 lg:grid-cols-4">
           <Field label="Backer rod" id={fieldDomId(path('backer'))}>
             {(c) => (
@@ -466,7 +440,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
             hint={`Blank = ${formatJointDimension(DEFAULT_MINIMUM_WIDTH, system)} (common trade practice).`}
           />
         </div>
-      </Group>
+      </FieldGroup>
     </div>
   );
 }

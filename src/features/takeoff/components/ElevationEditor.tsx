@@ -3,36 +3,24 @@ import {
   TAKEOFF_JOINT_TYPES,
   type TakeoffInput,
   type TakeoffJointType,
+  type Trim,
   type Wall,
 } from '@shared/calc/takeoff/schema';
-import { type ReactNode, useState } from 'react';
+import { type ComponentProps, type ReactNode, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { FieldGroup, GroupProblem } from '../../../components/ui/FieldGroup';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { type FieldProblem, type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
-import { sheetInput } from '../../../lib/sheet-units';
+import type { ParsedEntry } from '../../../lib/input-measure';
+import { type SheetMeasure, sheetInput } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { newOpening, newTrim, newWall, removeAt, replaceAt } from '../draft';
 import { BEAD_SHAPE_LABELS, TAKEOFF_TYPE_LABELS } from '../labels';
 
 const small = 'py-1.5 text-sm';
-
-function Problem({ path, problem }: { path: string; problem: FieldProblem | undefined }) {
-  const system = useUnitSystem();
-  if (!problem) return null;
-  return (
-    <p
-      id={fieldDomId(path)}
-      tabIndex={-1}
-      className="flex items-start gap-1 text-sm font-medium text-caution"
-    >
-      <span aria-hidden="true">✕</span>
-      <span>{problemText(problem, undefined, system)}</span>
-    </p>
-  );
-}
 
 /** A whole-number box: hands up NaN while it does not hold a whole number (the schema then names it). */
 function CountInput({
@@ -77,16 +65,6 @@ function CountInput({
   );
 }
 
-function Part({ title, children, note }: { title: string; children: ReactNode; note?: ReactNode }) {
-  return (
-    <fieldset className="flex flex-col gap-3 border-t border-rule pt-3">
-      <legend className="label-caps pr-2">{title}</legend>
-      {note ? <p className="-mt-1 text-xs text-ink-muted">{note}</p> : null}
-      {children}
-    </fieldset>
-  );
-}
-
 interface ElevationEditorProps {
   input: TakeoffInput;
   onChange: (input: TakeoffInput) => void;
@@ -99,6 +77,45 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
   const id = (k: string) => fieldDomId(`takeoff.${k}`);
   const set = (changes: Partial<TakeoffInput>) => onChange({ ...input, ...changes });
   const setWall = (i: number, w: Wall) => set({ walls: replaceAt(input.walls, i, w) });
+  const setTrim = (k: number, t: Trim) => set({ trims: replaceAt(input.trims, k, t) });
+
+  /** The sheet box for the quantity at `path`: its id, its problem, NaN handed on while it holds no number. */
+  const quantity = (
+    path: string,
+    label: string,
+    kind: SheetMeasure,
+    value: number | undefined,
+    apply: (v: number, entry: ParsedEntry['kind']) => void,
+    extra?: Pick<ComponentProps<typeof QuantityInput>, 'hint' | 'required'>,
+  ) => (
+    <QuantityInput
+      id={id(path)}
+      label={label}
+      measure={sheetInput(kind)}
+      value={value}
+      onChange={(v, entry) => apply(v ?? Number.NaN, entry)}
+      problem={pr(path)}
+      {...extra}
+    />
+  );
+
+  /** The name box of a wall, an opening or a trim, with the name's problem under it. */
+  const nameField = (path: string, label: string, value: string, apply: (text: string) => void) => {
+    const problem = pr(path);
+    return (
+      <Field label={label} id={id(path)} error={problem && problemText(problem, undefined, 'SI')}>
+        {(c) => (
+          <TextInput
+            {...c}
+            className={small}
+            maxLength={120}
+            value={value}
+            onChange={(e) => apply(e.target.value)}
+          />
+        )}
+      </Field>
+    );
+  };
 
   function setBead(t: TakeoffJointType, bead: BeadProfile | undefined) {
     const beads = { ...input.beads };
@@ -125,11 +142,11 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
 
   return (
     <div className="flex flex-col gap-5">
-      <Part
-        title="Walls (elevations)"
+      <FieldGroup
+        legend="Walls (elevations)"
         note="Count each building corner on one wall only; an abutment is a wall end that butts other construction."
       >
-        <Problem path="takeoff.walls" problem={pr('walls')} />
+        <GroupProblem path="takeoff.walls" problem={pr('walls')} />
         {input.walls.map((w, i) => (
           <fieldset
             // biome-ignore lint/suspicious/noArrayIndexKey: walls are addressed by position
@@ -138,37 +155,13 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             aria-label={`Wall ${i + 1}`}
           >
             <div className="grid gap-x-4 gap-y-2 sm:grid-cols-2 lg:grid-cols-[2fr_1fr_1fr_1fr_1fr_auto]">
-              <Field
-                label="Wall"
-                id={id(`walls.${i}.name`)}
-                error={pr(`walls.${i}.name`) && problemText(pr(`walls.${i}.name`)!, undefined, 'SI')}
-              >
-                {(c) => (
-                  <TextInput
-                    {...c}
-                    className={small}
-                    maxLength={120}
-                    value={w.name}
-                    onChange={(e) => setWall(i, { ...w, name: e.target.value })}
-                  />
-                )}
-              </Field>
-              <QuantityInput
-                id={id(`walls.${i}.length`)}
-                label="Length"
-                measure={sheetInput('length')}
-                value={w.length}
-                onChange={(v) => setWall(i, { ...w, length: v ?? Number.NaN })}
-                problem={pr(`walls.${i}.length`)}
-              />
-              <QuantityInput
-                id={id(`walls.${i}.height`)}
-                label="Height"
-                measure={sheetInput('length')}
-                value={w.height}
-                onChange={(v) => setWall(i, { ...w, height: v ?? Number.NaN })}
-                problem={pr(`walls.${i}.height`)}
-              />
+              {nameField(`walls.${i}.name`, 'Wall', w.name, (name) => setWall(i, { ...w, name }))}
+              {quantity(`walls.${i}.length`, 'Length', 'length', w.length, (length) =>
+                setWall(i, { ...w, length }),
+              )}
+              {quantity(`walls.${i}.height`, 'Height', 'length', w.height, (height) =>
+                setWall(i, { ...w, height }),
+              )}
               {(['corners', 'abutments'] as const).map((k) => (
                 <Field
                   key={k}
@@ -204,9 +197,9 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                 ) : null}
               </div>
             </div>
-            <Problem path={`takeoff.walls.${i}.openings`} problem={pr(`walls.${i}.openings`)} />
+            <GroupProblem path={`takeoff.walls.${i}.openings`} problem={pr(`walls.${i}.openings`)} />
             {w.openings.map((o, j) => {
-              const op = (k: string) => pr(`walls.${i}.openings.${j}.${k}`);
+              const at = `walls.${i}.openings.${j}`;
               const setO = (changes: Partial<typeof o>) =>
                 setWall(i, { ...w, openings: replaceAt(w.openings, j, { ...o, ...changes }) });
               return (
@@ -216,18 +209,10 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                   className="ml-4 grid gap-x-4 gap-y-2 sm:grid-cols-3 lg:grid-cols-[2fr_1fr_1fr_1fr_1fr_auto]"
                   aria-label={`${w.name || `Wall ${i + 1}`}, opening ${j + 1}`}
                 >
-                  <Field label="Opening" id={id(`walls.${i}.openings.${j}.name`)}>
-                    {(c) => (
-                      <TextInput
-                        {...c}
-                        className={small}
-                        maxLength={120}
-                        value={o.name ?? ''}
-                        onChange={(e) => setO({ name: e.target.value || undefined })}
-                      />
-                    )}
-                  </Field>
-                  <Field label="Kind" id={id(`walls.${i}.openings.${j}.kind`)}>
+                  {nameField(`${at}.name`, 'Opening', o.name ?? '', (name) =>
+                    setO({ name: name || undefined }),
+                  )}
+                  <Field label="Kind" id={id(`${at}.kind`)}>
                     {(c) => (
                       <Select
                         {...c}
@@ -240,28 +225,14 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                       </Select>
                     )}
                   </Field>
-                  <QuantityInput
-                    id={id(`walls.${i}.openings.${j}.width`)}
-                    label="Width"
-                    measure={sheetInput('length')}
-                    value={o.width}
-                    onChange={(v) => setO({ width: v ?? Number.NaN })}
-                    problem={op('width')}
-                  />
-                  <QuantityInput
-                    id={id(`walls.${i}.openings.${j}.height`)}
-                    label="Height"
-                    measure={sheetInput('length')}
-                    value={o.height}
-                    onChange={(v) => setO({ height: v ?? Number.NaN })}
-                    problem={op('height')}
-                  />
+                  {quantity(`${at}.width`, 'Width', 'length', o.width, (width) => setO({ width }))}
+                  {quantity(`${at}.height`, 'Height', 'length', o.height, (height) => setO({ height }))}
                   <CountInput
-                    id={id(`walls.${i}.openings.${j}.count`)}
+                    id={id(`${at}.count`)}
                     label="How many"
                     value={o.count}
                     onChange={(n) => setO({ count: n })}
-                    problem={op('count')}
+                    problem={pr(`${at}.count`)}
                   />
                   <div className="flex items-start pt-6">
                     <Button
@@ -294,28 +265,26 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             Add a wall
           </Button>
         </div>
-      </Part>
+      </FieldGroup>
 
-      <Part title="Panel module">
+      <FieldGroup legend="Panel module">
         <div className="grid gap-x-4 gap-y-3 sm:grid-cols-3">
-          <QuantityInput
-            id={id('module.width')}
-            label="Module width"
-            measure={sheetInput('length')}
-            value={input.module.width}
-            onChange={(v) => set({ module: { ...input.module, width: v ?? Number.NaN } })}
-            problem={pr('module.width')}
-            hint="Joint spacing across the panels."
-          />
-          <QuantityInput
-            id={id('module.length')}
-            label="Longest panel"
-            measure={sheetInput('length')}
-            value={input.module.length}
-            onChange={(v) => set({ module: { ...input.module, length: v ?? Number.NaN } })}
-            problem={pr('module.length')}
-            hint="End joints occur where a run is longer."
-          />
+          {quantity(
+            'module.width',
+            'Module width',
+            'length',
+            input.module.width,
+            (width) => set({ module: { ...input.module, width } }),
+            { hint: 'Joint spacing across the panels.' },
+          )}
+          {quantity(
+            'module.length',
+            'Longest panel',
+            'length',
+            input.module.length,
+            (length) => set({ module: { ...input.module, length } }),
+            { hint: 'End joints occur where a run is longer.' },
+          )}
           <Field label="Panels span" id={id('module.orientation')}>
             {(c) => (
               <Select
@@ -334,16 +303,15 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             )}
           </Field>
         </div>
-      </Part>
+      </FieldGroup>
 
-      <Part
-        title="Sealant beads"
+      <FieldGroup
+        legend="Sealant beads"
         note="The bead cross-section per joint line; a line with no bead takes no sealant."
       >
         <div className="flex flex-col gap-2">
           {TAKEOFF_JOINT_TYPES.map((t) => {
             const bead = input.beads[t];
-            const bp = (k: string) => pr(`beads.${t}.${k}`);
             const setB = (b: BeadProfile) => setBead(t, b);
             return (
               <fieldset
@@ -371,62 +339,35 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                 </Field>
                 {bead?.shape === 'rectangular' ? (
                   <>
-                    <QuantityInput
-                      id={id(`beads.${t}.width`)}
-                      label="Width W"
-                      measure={sheetInput('joint')}
-                      value={bead.width}
-                      onChange={(v) => setB({ ...bead, width: v ?? Number.NaN })}
-                      problem={bp('width')}
-                    />
-                    <QuantityInput
-                      id={id(`beads.${t}.depth`)}
-                      label="Depth D"
-                      measure={sheetInput('joint')}
-                      value={bead.depth}
-                      onChange={(v) => setB({ ...bead, depth: v ?? Number.NaN })}
-                      problem={bp('depth')}
-                    />
+                    {quantity(`beads.${t}.width`, 'Width W', 'joint', bead.width, (width) =>
+                      setB({ ...bead, width }),
+                    )}
+                    {quantity(`beads.${t}.depth`, 'Depth D', 'joint', bead.depth, (depth) =>
+                      setB({ ...bead, depth }),
+                    )}
                   </>
                 ) : bead?.shape === 'round' ? (
-                  <QuantityInput
-                    id={id(`beads.${t}.diameter`)}
-                    label="Diameter d"
-                    measure={sheetInput('joint')}
-                    value={bead.diameter}
-                    onChange={(v) => setB({ ...bead, diameter: v ?? Number.NaN })}
-                    problem={bp('diameter')}
-                  />
+                  quantity(`beads.${t}.diameter`, 'Diameter d', 'joint', bead.diameter, (diameter) =>
+                    setB({ ...bead, diameter }),
+                  )
                 ) : bead?.shape === 'fillet' ? (
-                  <QuantityInput
-                    id={id(`beads.${t}.leg`)}
-                    label="Leg"
-                    measure={sheetInput('joint')}
-                    value={bead.leg}
-                    onChange={(v) => setB({ ...bead, leg: v ?? Number.NaN })}
-                    problem={bp('leg')}
-                  />
+                  quantity(`beads.${t}.leg`, 'Leg', 'joint', bead.leg, (leg) => setB({ ...bead, leg }))
                 ) : null}
                 <div className="sm:col-span-4">
-                  <Problem path={`takeoff.beads.${t}`} problem={pr(`beads.${t}`)} />
+                  <GroupProblem path={`takeoff.beads.${t}`} problem={pr(`beads.${t}`)} />
                 </div>
               </fieldset>
             );
           })}
         </div>
         <div className="max-w-48">
-          <QuantityInput
-            id={id('wasteFactor')}
-            label="Waste on sealant and tape"
-            measure={sheetInput('percent')}
-            value={input.wasteFactor}
-            onChange={(v) => set({ wasteFactor: v ?? Number.NaN })}
-            problem={pr('wasteFactor')}
-          />
+          {quantity('wasteFactor', 'Waste on sealant and tape', 'percent', input.wasteFactor, (wasteFactor) =>
+            set({ wasteFactor }),
+          )}
         </div>
-      </Part>
+      </FieldGroup>
 
-      <Part title="Trims" note="Stock lengths lapped along each continuous run of a joint line.">
+      <FieldGroup legend="Trims" note="Stock lengths lapped along each continuous run of a joint line.">
         {input.trims.map((t, k) => (
           <fieldset
             // biome-ignore lint/suspicious/noArrayIndexKey: trims are addressed by position
@@ -434,35 +375,14 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             className="grid gap-x-4 gap-y-2 sm:grid-cols-2 lg:grid-cols-[2fr_2fr_1fr_1fr_auto]"
             aria-label={`Trim ${k + 1}`}
           >
-            <Field
-              label="Trim"
-              id={id(`trims.${k}.name`)}
-              error={pr(`trims.${k}.name`) && problemText(pr(`trims.${k}.name`)!, undefined, 'SI')}
-            >
-              {(c) => (
-                <TextInput
-                  {...c}
-                  className={small}
-                  maxLength={120}
-                  value={t.name}
-                  onChange={(e) => set({ trims: replaceAt(input.trims, k, { ...t, name: e.target.value }) })}
-                />
-              )}
-            </Field>
+            {nameField(`trims.${k}.name`, 'Trim', t.name, (name) => setTrim(k, { ...t, name }))}
             <Field label="Along" id={id(`trims.${k}.appliesTo`)}>
               {(c) => (
                 <Select
                   {...c}
                   className={small}
                   value={t.appliesTo}
-                  onChange={(e) =>
-                    set({
-                      trims: replaceAt(input.trims, k, {
-                        ...t,
-                        appliesTo: e.target.value as TakeoffJointType,
-                      }),
-                    })
-                  }
+                  onChange={(e) => setTrim(k, { ...t, appliesTo: e.target.value as TakeoffJointType })}
                 >
                   {TAKEOFF_JOINT_TYPES.map((j) => (
                     <option key={j} value={j}>
@@ -472,26 +392,12 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                 </Select>
               )}
             </Field>
-            <QuantityInput
-              id={id(`trims.${k}.stockLength`)}
-              label="Stock length"
-              measure={sheetInput('length')}
-              value={t.stockLength}
-              onChange={(v) =>
-                set({ trims: replaceAt(input.trims, k, { ...t, stockLength: v ?? Number.NaN }) })
-              }
-              problem={pr(`trims.${k}.stockLength`)}
-            />
-            <QuantityInput
-              id={id(`trims.${k}.lapAllowance`)}
-              label="Lap"
-              measure={sheetInput('spacing')}
-              value={t.lapAllowance}
-              onChange={(v) =>
-                set({ trims: replaceAt(input.trims, k, { ...t, lapAllowance: v ?? Number.NaN }) })
-              }
-              problem={pr(`trims.${k}.lapAllowance`)}
-            />
+            {quantity(`trims.${k}.stockLength`, 'Stock length', 'length', t.stockLength, (stockLength) =>
+              setTrim(k, { ...t, stockLength }),
+            )}
+            {quantity(`trims.${k}.lapAllowance`, 'Lap', 'spacing', t.lapAllowance, (lapAllowance) =>
+              setTrim(k, { ...t, lapAllowance }),
+            )}
             <div className="flex items-start pt-6">
               <Button
                 variant="quiet"
@@ -512,9 +418,9 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             Add a trim
           </Button>
         </div>
-      </Part>
+      </FieldGroup>
 
-      <Part title="Fasteners">
+      <FieldGroup legend="Fasteners">
         <label className="flex items-center gap-2 text-sm">
           <input
             type="checkbox"
@@ -531,32 +437,26 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
         </label>
         {input.fasteners ? (
           <div className="grid gap-x-4 gap-y-3 sm:grid-cols-3">
-            <QuantityInput
-              id={id('fasteners.spacingAlongGirt')}
-              label="Spacing along each girt"
-              measure={sheetInput('spacing')}
-              value={input.fasteners.spacingAlongGirt}
-              onChange={(v) =>
-                input.fasteners &&
-                set({ fasteners: { ...input.fasteners, spacingAlongGirt: v ?? Number.NaN } })
-              }
-              problem={pr('fasteners.spacingAlongGirt')}
-            />
-            <QuantityInput
-              id={id('fasteners.girtSpacing')}
-              label="Girt spacing up the wall"
-              measure={sheetInput('length')}
-              value={input.fasteners.girtSpacing}
-              onChange={(v) =>
-                input.fasteners && set({ fasteners: { ...input.fasteners, girtSpacing: v ?? Number.NaN } })
-              }
-              problem={pr('fasteners.girtSpacing')}
-            />
+            {quantity(
+              'fasteners.spacingAlongGirt',
+              'Spacing along each girt',
+              'spacing',
+              input.fasteners.spacingAlongGirt,
+              (spacingAlongGirt) =>
+                input.fasteners && set({ fasteners: { ...input.fasteners, spacingAlongGirt } }),
+            )}
+            {quantity(
+              'fasteners.girtSpacing',
+              'Girt spacing up the wall',
+              'length',
+              input.fasteners.girtSpacing,
+              (girtSpacing) => input.fasteners && set({ fasteners: { ...input.fasteners, girtSpacing } }),
+            )}
           </div>
         ) : null}
-      </Part>
+      </FieldGroup>
 
-      <Part title="Tape">
+      <FieldGroup legend="Tape">
         <label className="flex items-center gap-2 text-sm">
           <input
             type="checkbox"
@@ -573,28 +473,25 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
         </label>
         {input.tape ? (
           <div className="grid gap-x-4 gap-y-3 sm:grid-cols-[1fr_1fr_2fr]">
-            <QuantityInput
-              id={id('tape.width')}
-              label="Tape width"
-              measure={sheetInput('joint')}
-              value={input.tape.width}
-              onChange={(v) => input.tape && set({ tape: { ...input.tape, width: v ?? Number.NaN } })}
-              problem={pr('tape.width')}
-            />
-            <QuantityInput
-              id={id('tape.rollLength')}
-              label="Roll length"
-              measure={sheetInput('length')}
-              required={false}
-              value={input.tape.rollLength}
-              onChange={(v, entry) => {
+            {quantity(
+              'tape.width',
+              'Tape width',
+              'joint',
+              input.tape.width,
+              (width) => input.tape && set({ tape: { ...input.tape, width } }),
+            )}
+            {quantity(
+              'tape.rollLength',
+              'Roll length',
+              'length',
+              input.tape.rollLength,
+              (rollLength, entry) => {
                 if (!input.tape) return;
                 const { rollLength: _, ...rest } = input.tape;
-                set({ tape: entry === 'empty' ? rest : { ...rest, rollLength: v ?? Number.NaN } });
-              }}
-              problem={pr('tape.rollLength')}
-              hint="Optional: counts rolls."
-            />
+                set({ tape: entry === 'empty' ? rest : { ...rest, rollLength } });
+              },
+              { required: false, hint: 'Optional: counts rolls.' },
+            )}
             <fieldset id={id('tape.appliesTo')} className="flex flex-col gap-1">
               <legend className="text-sm font-semibold">Along</legend>
               <div className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
@@ -620,11 +517,11 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                   </label>
                 ))}
               </div>
-              <Problem path="takeoff.tape.appliesTo.problem" problem={pr('tape.appliesTo')} />
+              <GroupProblem path="takeoff.tape.appliesTo.problem" problem={pr('tape.appliesTo')} />
             </fieldset>
           </div>
         ) : null}
-      </Part>
+      </FieldGroup>
     </div>
   );
 }

@@ -78,4 +78,36 @@ describe('attachment & wind sheet in the browser', () => {
     await screenshot(page, 'library-attachment-products');
     expect(problems).toEqual([]);
   });
+
+  it('saves the engineer’s wind data although the consultant saved the climate meanwhile', async () => {
+    const problems: string[] = [];
+    const { page: engineer } = await suite.openPage({ problems });
+    const { page: consultant } = await suite.openPage({ problems });
+    await signIn(engineer, suite.baseUrl, 'engineer@skinwright.demo');
+    await signIn(consultant, suite.baseUrl, 'consultant@skinwright.demo');
+
+    // Both open their part of the same project version.
+    await engineer.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
+    await engineer.getByRole('link', { name: 'Wind', exact: true }).click();
+    await engineer.getByRole('button', { name: /the wind data/ }).click();
+    await consultant.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
+    await consultant.getByRole('link', { name: 'Climate', exact: true }).click();
+    await consultant.getByRole('button', { name: /the climate/ }).click();
+
+    // The consultant saves first; the engineer, still on the version read before, saves the wind data.
+    await consultant.getByLabel(/^Source/).fill('Station C, 1991–2020 (demo)');
+    await consultant.getByRole('button', { name: 'Save the climate' }).click();
+    await consultant.getByText('Station C, 1991–2020 (demo)').waitFor();
+    const speed = engineer.getByLabel(/^Basic wind speed V/);
+    await speed.fill('52');
+    await speed.blur();
+    await engineer.getByRole('button', { name: 'Save wind data' }).click();
+    await engineer.getByRole('button', { name: /Edit the wind data/ }).waitFor();
+    expect(await engineer.getByText('Someone else saved the wind data first.').count()).toBe(0);
+
+    // Both saves stand.
+    await engineer.goto(`${engineer.url().replace(/\/wind.*$/, '')}/climate`);
+    await engineer.getByText('Station C, 1991–2020 (demo)').waitFor();
+    expect(problems).toEqual([]);
+  });
 });

@@ -130,7 +130,10 @@ export const projectRoutes = [
       },
     },
     handler: ({ user, project, body, services }) =>
-      services.projects.update(project!.id, user!.id, body.version, { part: 'wind', wind: body.wind }),
+      services.projects.update(project!.id, user!.id, body.version, {
+        part: 'wind',
+        changes: { wind: body.wind },
+      }),
   }),
   defineRoute({
     method: 'put',
@@ -162,7 +165,7 @@ export const projectRoutes = [
     handler: ({ user, project, body, services }) =>
       services.projects.update(project!.id, user!.id, body.version, {
         part: 'climate',
-        climate: body.climate,
+        changes: { climate: body.climate },
       }),
   }),
   defineRoute({

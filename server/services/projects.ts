@@ -39,19 +39,13 @@ function toProject(row: ProjectRow, organisationName: string, myRole: ProjectRol
 /** A save of one part of a project: its site data, its wind data or its climate. */
 export type ProjectPartChange =
   | { part: 'site'; changes: ProjectInput }
-  | { part: 'wind'; wind: ProjectWind }
-  | { part: 'climate'; climate: ProjectClimate };
+  | { part: 'wind'; changes: { wind: ProjectWind } }
+  | { part: 'climate'; changes: { climate: ProjectClimate } };
 
 /** The column holding the version each part was last saved at, the audit action and the part's name. */
 const SAVED_IN = { site: 'siteSavedIn', wind: 'windSavedIn', climate: 'climateSavedIn' } as const;
 const PART_ACTION = { site: 'update', wind: 'update_wind', climate: 'update_climate' } as const;
 const PART_NAME = { site: 'site data', wind: 'wind data', climate: 'climate' } as const;
-
-function partChanges(change: ProjectPartChange) {
-  const { part } = change;
-  if (change.part === 'site') return { part, changes: change.changes };
-  return { part, changes: change.part === 'wind' ? { wind: change.wind } : { climate: change.climate } };
-}
 
 /** Archived projects are read-only until restored. */
 export const archivedError = () =>
@@ -167,7 +161,7 @@ export function createProjectService(db: Db, readCache: ReadCache) {
     ): Promise<Project> {
       const current = await get(projectId, userId);
       if (current.archivedAt) throw archivedError();
-      const { part, changes } = partChanges(change);
+      const { part, changes } = change;
       const before = Object.fromEntries(Object.keys(changes).map((k) => [k, current[k as keyof Project]]));
       const next = sql`${projects.version} + 1`;
       const updated = await db.transaction(async (tx) => {

@@ -427,7 +427,10 @@ export const submittals = pgTable(
   ],
 );
 
-/** Reviewers named on a submittal revision (project members whose role allows reviewing). */
+/**
+ * Reviewers named on a submittal revision (project members whose role allows reviewing), each with their own
+ * decision and note once they have decided (null before). The revision closes when every one has decided.
+ */
 export const submittalReviewers = pgTable(
   'submittal_reviewers',
   {
@@ -437,6 +440,10 @@ export const submittalReviewers = pgTable(
     userId: text('user_id')
       .notNull()
       .references(() => user.id, { onDelete: 'cascade' }),
+    /** approved | approved_as_noted | revise_and_resubmit | rejected */
+    decision: text('decision'),
+    decisionNote: text('decision_note'),
+    decidedAt: timestamp('decided_at', { withTimezone: true }),
   },
   (t) => [primaryKey({ columns: [t.submittalId, t.userId] })],
 );

@@ -22,8 +22,12 @@ const updatedAt = () => timestamp('updated_at', { withTimezone: true }).notNull(
 export const organisations = pgTable('organisations', {
   id: uuid('id').primaryKey().defaultRandom(),
   name: text('name').notNull(),
+  /** The firm's handle (`@slug`): unique, never changed; names are not unique, so sheets print this too. */
   slug: text('slug').notNull().unique(),
   createdAt: createdAt(),
+  /** When and by which site administrator the firm was confirmed to be who its name says (null: not verified). */
+  verifiedAt: timestamp('verified_at', { withTimezone: true }),
+  verifiedBy: text('verified_by').references(() => user.id, { onDelete: 'set null' }),
 });
 
 export const organisationMembers = pgTable(

@@ -477,7 +477,8 @@ export const submittalItems = pgTable(
     addedBy: text('added_by').references(() => user.id),
     createdAt: createdAt(),
   },
-  (t) => [index('submittal_items_submittal_idx').on(t.submittalId, t.position)],
+  // One item per place: racing additions cannot share a position (they are also serialised by a row lock).
+  (t) => [uniqueIndex('submittal_items_position_unique').on(t.submittalId, t.position)],
 );
 
 /** Review comments on a submittal revision or on one of its items. */

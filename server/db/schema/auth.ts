@@ -1,4 +1,4 @@
-import { boolean, index, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { boolean, index, integer, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
 
 // better-auth core tables (user, session, account, verification), written by hand to match
 // better-auth 1.7's core schema, plus our additional user fields (`role`, `unitSystem`).
@@ -68,3 +68,15 @@ export const verification = pgTable(
   },
   (t) => [index('verification_identifier_idx').on(t.identifier)],
 );
+
+/**
+ * Wrong passwords per e-mail address — registered or not, so that a lock tells nothing about who has an
+ * account — for the lock of password sign-in (server/auth/sign-in-lock.ts). A row whose window and lock have
+ * passed is removed by the next failure.
+ */
+export const signInFailures = pgTable('sign_in_failures', {
+  email: text('email').primaryKey(),
+  failures: integer('failures').notNull(),
+  windowStartedAt: timestamp('window_started_at', { withTimezone: true }).notNull(),
+  lockedUntil: timestamp('locked_until', { withTimezone: true }),
+});

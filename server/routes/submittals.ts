@@ -223,7 +223,7 @@ export const submittalRoutes = [
     method: 'post',
     path: '/submittals/:submittalId/decision',
     summary:
-      'Decide (a named reviewer): approved, approved as noted, revise and resubmit (opens the next revision) or rejected; e-mails the submitter',
+      'Record a named reviewer’s decision: approved, approved as noted, revise and resubmit or rejected. Every named reviewer decides; the last one closes the revision with the most severe decision (revise and resubmit opens the next revision) and the submitter is e-mailed',
     tag: 'Submittals',
     access: { kind: 'project', action: 'submittal.review', ...viaSubmittal },
     params: submittalParams,
@@ -233,9 +233,17 @@ export const submittalRoutes = [
       note: 'Confirm the clip spacing at the corners on the shop drawings.',
     },
     responses: {
-      200: { description: 'The decided revision', schema: submittalSchema },
+      200: {
+        description: 'The revision with the decision (closed once every reviewer has decided)',
+        schema: submittalSchema,
+      },
       ...errors,
       ...stateErrors,
+      422: {
+        description:
+          'Approving a package whose attached compliance sheet fails without `failingSheetConfirmation`',
+        schema: apiErrorSchema,
+      },
     },
     handler: ({ params, user, body, services }) =>
       services.submittals.decide(params.submittalId, actor(user), body),

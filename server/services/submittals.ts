@@ -2,16 +2,22 @@ import { createHash, randomUUID } from 'node:crypto';
 import { can, PROJECT_ROLE_LABELS, type ProjectRole } from '@shared/auth/permissions';
 import type { Verdict } from '@shared/checks/report';
 import {
+  combinedDecision,
+  confirmsFailingSheet,
+  FAILING_SHEET_CONFIRMATION,
+  isApproval,
   isDecided,
   SUBMITTAL_STATUS_TEXT,
   type Submittal,
   type SubmittalComment,
   type SubmittalCreate,
+  type SubmittalDecision,
   type SubmittalDecisionInput,
   type SubmittalFields,
   type SubmittalItem,
   type SubmittalStatus,
   type SubmittalSummary,
+  sheetsWithVerdict,
 } from '@shared/schemas/submittals';
 import { verificationCode } from '@shared/sheets/verification';
 import { and, asc, count, eq, inArray, sql } from 'drizzle-orm';
@@ -145,7 +151,7 @@ export function createSubmittalService(
     const [itemList, reviewerRows, commentRows, revisionRows] = await Promise.all([
       items(id),
       db
-        .select({ id: user.id, name: user.name, role: projectMembers.role })
+        .select({ id: user.id, name: user.name, role: projectMembers.role, reviewer: submittalReviewers })
         .from(submittalReviewers)
         .innerJoin(user, eq(user.id, submittalReviewers.userId))
         .leftJoin(
@@ -190,6 +196,14 @@ export function createSubmittalService(
         id: x.id,
         name: x.name,
         role: (x.role as ProjectRole | null) ?? null,
+        decision:
+          x.reviewer.decision && x.reviewer.decidedAt
+            ? {
+                decision: x.reviewer.decision as SubmittalDecision,
+                note: x.reviewer.decisionNote ?? '',
+                at: x.reviewer.decidedAt.toISOString(),
+              }
+            : null,
       })),
       items: itemList,
       comments: commentRows.map(
@@ -207,7 +221,11 @@ export function createSubmittalService(
           ? {
               decision: r.decision as NonNullable<Submittal['decision']>['decision'],
               note: r.decisionNote ?? '',
-              by: r.decidedBy ? (who.get(r.decidedBy) ?? null) : null,
+              by:
+                reviewerRows
+                  .filter((x) => x.reviewer.decision)
+                  .map((x) => x.name)
+                  .join(', ') || (r.decidedBy ? (who.get(r.decidedBy) ?? null) : null),
               at: r.decidedAt.toISOString(),
             }
           : null,
@@ -671,34 +689,69 @@ export function createSubmittalService(
     },
 
     /**
-     * A named reviewer decides. "Revise and resubmit" opens the next revision as a draft, with the same
-     * reviewers and copies of the items. The submitter is e-mailed every decision.
+     * A named reviewer records their decision (and may change it while the revision is open). Every named
+     * reviewer decides: the last one closes the revision with the most severe of their decisions
+     * (`combinedDecision`), and only then is the submitter e-mailed. Approving a package whose attached
+     * compliance sheet fails needs `failingSheetConfirmation` (422 without it). A "revise and resubmit"
+     * outcome opens the next revision as a draft, with the same reviewers (undecided) and copies of the items.
      */
     async decide(id: string, actor: Actor, input: SubmittalDecisionInput): Promise<Submittal> {
       const r = await writable(id, ['submitted', 'under_review'], input.version);
       await assertReviewer(r, actor);
+      const failing = sheetsWithVerdict(await items(id), 'fail');
+      if (
+        isApproval(input.decision) &&
+        failing.length > 0 &&
+        !confirmsFailingSheet(input.failingSheetConfirmation)
+      )
+        throw new HttpError(
+          422,
+          'confirmation_required',
+          `an attached compliance sheet fails (${failing.map((f) => f.sheet.assemblyName).join(', ')}): approving it needs a confirmation`,
+          {
+            failingSheetConfirmation: `type ${FAILING_SHEET_CONFIRMATION} to approve a package whose attached compliance sheet fails`,
+          },
+        );
       const now = new Date();
-      let next: string | null = null;
-      await db.transaction(async (tx) => {
-        const rows = await tx
+      const outcome = await db.transaction(async (tx) => {
+        // Taking the revision row first (still open, the version the caller read if named) serialises the
+        // reviewers' decisions, so exactly one of them sees the last decision and closes the revision.
+        const [open] = await tx
           .update(submittals)
-          .set({
-            status: input.decision,
-            decision: input.decision,
-            decisionNote: input.note,
-            decidedAt: now,
-            decidedBy: actor.id,
-            version: r.version + 1,
-            updatedAt: now,
-          })
-          .where(and(eq(submittals.id, id), eq(submittals.version, r.version)))
-          .returning({ id: submittals.id });
-        if (rows.length === 0)
+          .set({ status: 'under_review', version: sql`${submittals.version} + 1`, updatedAt: now })
+          .where(
+            and(
+              eq(submittals.id, id),
+              inArray(submittals.status, ['submitted', 'under_review']),
+              input.version === undefined ? undefined : eq(submittals.version, input.version),
+            ),
+          )
+          .returning({ version: submittals.version });
+        if (!open)
           throw new HttpError(
             409,
             'version_conflict',
             'someone changed this submittal a moment ago; reload it',
           );
+        await tx
+          .update(submittalReviewers)
+          .set({ decision: input.decision, decisionNote: input.note, decidedAt: now })
+          .where(and(eq(submittalReviewers.submittalId, id), eq(submittalReviewers.userId, actor.id)));
+        const decisions = await tx
+          .select({
+            decision: submittalReviewers.decision,
+            note: submittalReviewers.decisionNote,
+            name: user.name,
+          })
+          .from(submittalReviewers)
+          .innerJoin(user, eq(user.id, submittalReviewers.userId))
+          .where(eq(submittalReviewers.submittalId, id))
+          .orderBy(asc(user.name));
+        const made = decisions.flatMap((d) =>
+          d.decision ? [{ ...d, decision: d.decision as SubmittalDecision, note: d.note ?? '' }] : [],
+        );
+        const closing =
+          made.length === decisions.length ? combinedDecision(made.map((d) => d.decision)) : null;
         await recordAudit(tx, {
           actorId: actor.id,
           projectId: r.projectId,
@@ -706,70 +759,42 @@ export function createSubmittalService(
           entityId: id,
           action: 'decide',
           before: { status: r.status },
-          after: { status: input.decision, note: input.note },
+          after: { status: closing ?? 'under_review', decision: input.decision, note: input.note },
         });
-        if (input.decision !== 'revise_and_resubmit') return;
-        next = randomUUID();
-        await tx.insert(submittals).values({
-          id: next,
-          projectId: r.projectId,
-          lineageId: r.lineageId,
-          previousRevisionId: r.id,
-          revision: r.revision + 1,
-          number: r.number,
-          title: r.title,
-          description: r.description,
-          specSection: r.specSection,
-          specTitle: r.specTitle,
-          dueDate: null,
-          status: 'draft',
-          submitterId: r.submitterId,
-          createdBy: actor.id,
-        });
-        const reviewers = await tx
-          .select({ userId: submittalReviewers.userId })
-          .from(submittalReviewers)
-          .where(eq(submittalReviewers.submittalId, id));
-        if (reviewers.length > 0)
-          await tx
-            .insert(submittalReviewers)
-            .values(reviewers.map((x) => ({ submittalId: next!, userId: x.userId })));
-        const old = await tx.select().from(submittalItems).where(eq(submittalItems.submittalId, id));
-        if (old.length > 0)
-          await tx.insert(submittalItems).values(
-            old.map(({ id: _id, submittalId: _s, createdAt: _c, ...rest }) => ({
-              ...rest,
-              submittalId: next!,
-            })),
-          );
+        if (!closing) return null;
+        const note =
+          made.length === 1
+            ? made[0]!.note
+            : made
+                .filter((d) => d.note)
+                .map((d) => `${d.name} (${SUBMITTAL_STATUS_TEXT[d.decision].label.toLowerCase()}): ${d.note}`)
+                .join('\n\n');
+        await tx
+          .update(submittals)
+          .set({
+            status: closing,
+            decision: closing,
+            decisionNote: note,
+            decidedAt: now,
+            decidedBy: actor.id,
+          })
+          .where(eq(submittals.id, id));
         await recordAudit(tx, {
           actorId: actor.id,
           projectId: r.projectId,
           entity: 'submittal',
-          entityId: next,
-          action: 'open_revision',
-          after: { number: r.number, revision: r.revision + 1, previous: r.id },
+          entityId: id,
+          action: 'close_review',
+          before: { status: 'under_review' },
+          after: {
+            status: closing,
+            decisions: made.map((d) => ({ reviewer: d.name, decision: d.decision })),
+          },
         });
+        const next = closing === 'revise_and_resubmit' ? await openNextRevision(tx, r, actor) : null;
+        return { decision: closing, made, next };
       });
-      const notify = r.submittedBy ?? r.submitterId;
-      const people = notify ? await emailsOf([notify]) : [];
-      const label = SUBMITTAL_STATUS_TEXT[input.decision].label;
-      await send(
-        people.map((p) => ({
-          to: p.email,
-          subject: `Submittal ${r.number} rev ${r.revision}: ${label}`,
-          text: [
-            `${actor.name} reviewed ${r.number} revision ${r.revision}, “${r.title}”: ${label}.`,
-            input.note ? `Reviewer’s note:\n${input.note}` : '',
-            next
-              ? `Revision ${r.revision + 1} is open as a draft for you to revise and resubmit: ${link({ projectId: r.projectId, id: next })}`
-              : '',
-            `Open the decided revision: ${link(r)}`,
-          ]
-            .filter(Boolean)
-            .join('\n\n'),
-        })),
-      );
+      if (outcome) await mailOutcome(r, outcome);
       return get(id);
     },
 
@@ -830,6 +855,86 @@ export function createSubmittalService(
         after: { status },
       });
     });
+  }
+
+  /** "Revise and resubmit": revision n + 1 as a draft, with the same reviewers (undecided) and copies of the items. */
+  async function openNextRevision(tx: Db, r: Row, actor: Actor): Promise<string> {
+    const next = randomUUID();
+    await tx.insert(submittals).values({
+      id: next,
+      projectId: r.projectId,
+      lineageId: r.lineageId,
+      previousRevisionId: r.id,
+      revision: r.revision + 1,
+      number: r.number,
+      title: r.title,
+      description: r.description,
+      specSection: r.specSection,
+      specTitle: r.specTitle,
+      dueDate: null,
+      status: 'draft',
+      submitterId: r.submitterId,
+      createdBy: actor.id,
+    });
+    const reviewers = await tx
+      .select({ userId: submittalReviewers.userId })
+      .from(submittalReviewers)
+      .where(eq(submittalReviewers.submittalId, r.id));
+    if (reviewers.length > 0)
+      await tx
+        .insert(submittalReviewers)
+        .values(reviewers.map((x) => ({ submittalId: next, userId: x.userId })));
+    const old = await tx.select().from(submittalItems).where(eq(submittalItems.submittalId, r.id));
+    if (old.length > 0)
+      await tx
+        .insert(submittalItems)
+        .values(
+          old.map(({ id: _id, submittalId: _s, createdAt: _c, ...rest }) => ({ ...rest, submittalId: next })),
+        );
+    await recordAudit(tx, {
+      actorId: actor.id,
+      projectId: r.projectId,
+      entity: 'submittal',
+      entityId: next,
+      action: 'open_revision',
+      after: { number: r.number, revision: r.revision + 1, previous: r.id },
+    });
+    return next;
+  }
+
+  /** The submitter hears once, when the revision closes: the outcome and every reviewer's decision and note. */
+  async function mailOutcome(
+    r: Row,
+    outcome: {
+      decision: SubmittalDecision;
+      made: { name: string; decision: SubmittalDecision; note: string }[];
+      next: string | null;
+    },
+  ) {
+    const notify = r.submittedBy ?? r.submitterId;
+    const people = notify ? await emailsOf([notify]) : [];
+    const label = SUBMITTAL_STATUS_TEXT[outcome.decision].label;
+    const each = outcome.made.map(
+      (d) => `${d.name}: ${SUBMITTAL_STATUS_TEXT[d.decision].label}${d.note ? `\n${d.note}` : ''}`,
+    );
+    await send(
+      people.map((p) => ({
+        to: p.email,
+        subject: `Submittal ${r.number} rev ${r.revision}: ${label}`,
+        text: [
+          `The review of ${r.number} revision ${r.revision}, “${r.title}”, is closed: ${label}.`,
+          outcome.made.length > 1
+            ? `Every reviewer decided; the outcome is the most severe of their decisions.\n\n${each.join('\n\n')}`
+            : `Reviewer’s decision:\n${each[0] ?? ''}`,
+          outcome.next
+            ? `Revision ${r.revision + 1} is open as a draft for you to revise and resubmit: ${link({ projectId: r.projectId, id: outcome.next })}`
+            : '',
+          `Open the decided revision: ${link(r)}`,
+        ]
+          .filter(Boolean)
+          .join('\n\n'),
+      })),
+    );
   }
 
   /** Item changes count as edits of the revision (its version goes up). */

@@ -52,6 +52,33 @@ export const DECISIONS_NEEDING_A_NOTE: readonly SubmittalDecision[] = [
   'rejected',
 ];
 
+/**
+ * Several reviewers: every named reviewer decides (architect, envelope consultant and engineer each sign their
+ * part); the revision closes when the last one has, and its outcome is the most severe of their decisions.
+ * Most severe first.
+ */
+export const DECISIONS_BY_SEVERITY: readonly SubmittalDecision[] = [
+  'rejected',
+  'revise_and_resubmit',
+  'approved_as_noted',
+  'approved',
+];
+
+/** The outcome of a revision from its reviewers' decisions: the most severe one (null when there are none). */
+export const combinedDecision = (decisions: readonly SubmittalDecision[]): SubmittalDecision | null =>
+  DECISIONS_BY_SEVERITY.find((d) => decisions.includes(d)) ?? null;
+
+/** Decisions that let the work proceed. */
+export const isApproval = (d: SubmittalDecision) => d === 'approved' || d === 'approved_as_noted';
+
+/**
+ * Approving a package whose attached compliance sheet fails needs this word typed (`failingSheetConfirmation`).
+ * An incomplete sheet (a check not evaluated, none failing) is warned about but needs no confirmation.
+ */
+export const FAILING_SHEET_CONFIRMATION = 'APPROVE';
+export const confirmsFailingSheet = (typed: string | undefined) =>
+  (typed ?? '').trim().toUpperCase() === FAILING_SHEET_CONFIRMATION;
+
 /** Reviewers are named as project members by their user id. */
 const reviewerIds = z
   .array(z.string().trim().min(1).max(100))
@@ -107,6 +134,13 @@ export const submittalDecisionInputSchema = z
   .object({
     decision: submittalDecisionSchema,
     note: z.string().trim().max(4000).default(''),
+    failingSheetConfirmation: z
+      .string()
+      .max(100)
+      .optional()
+      .describe(
+        `Required (the word ${FAILING_SHEET_CONFIRMATION}) to approve a package whose attached compliance sheet fails`,
+      ),
     version: z.number().int().positive().optional(),
   })
   .refine((d) => !DECISIONS_NEEDING_A_NOTE.includes(d.decision) || d.note.length > 0, {
@@ -160,6 +194,11 @@ export const submittalItemSchema = z.discriminatedUnion('kind', [
   }),
 ]);
 export type SubmittalItem = z.infer<typeof submittalItemSchema>;
+type SheetItem = Extract<SubmittalItem, { kind: 'sheet' }>;
+
+/** The attached compliance sheets with this verdict. */
+export const sheetsWithVerdict = (items: readonly SubmittalItem[], verdict: SheetItem['sheet']['verdict']) =>
+  items.filter((i): i is SheetItem => i.kind === 'sheet' && i.sheet.verdict === verdict);
 
 export const submittalCommentSchema = z.object({
   id: z.uuid(),
@@ -194,14 +233,21 @@ export type SubmittalSummary = z.infer<typeof submittalSummarySchema>;
 
 export const submittalSchema = submittalSummarySchema.extend({
   description: z.string(),
-  reviewers: z.array(person.extend({ role: projectRoleSchema.nullable() })),
+  /** The named reviewers, each with their own decision once made (null: still to decide). */
+  reviewers: z.array(
+    person.extend({
+      role: projectRoleSchema.nullable(),
+      decision: z.object({ decision: submittalDecisionSchema, note: z.string(), at: z.string() }).nullable(),
+    }),
+  ),
   items: z.array(submittalItemSchema),
   comments: z.array(submittalCommentSchema),
+  /** The revision's outcome once closed (the most severe of its reviewers' decisions). */
   decision: z
     .object({
       decision: submittalDecisionSchema,
-      note: z.string(),
-      by: z.string().nullable(),
+      note: z.string().describe('The reviewers’ notes (each named when there are several)'),
+      by: z.string().nullable().describe('Who decided (the names of every reviewer who did)'),
       at: z.string(),
     })
     .nullable(),

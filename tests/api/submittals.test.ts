@@ -48,6 +48,8 @@ describe.each(testDatabases())('submittals on %s', (kind) => {
   let t: TestApp;
   let projectId: string;
   let runId: string;
+  /** A run of the demo assembly against a code table it cannot meet (U ≤ 0.01 W/(m²·K)): its sheet fails. */
+  let failingRunId: string;
   const users: Record<string, string> = {};
 
   const as = (who: string) => t.as(demoEmail(who));
@@ -85,6 +87,19 @@ describe.each(testDatabases())('submittals on %s', (kind) => {
     }[];
     runId = (await sub.post(`/api/assemblies/${assemblyId}/check-runs`).send({ criteriaSetId: sets[0]!.id }))
       .body.id;
+    const admin = await as('admin');
+    const orgId = (await admin.get('/api/me')).body.organisations[0].id as string;
+    const wallCategory = (await sub.get(`/api/assemblies/${assemblyId}`)).body.wallCategory as string;
+    const strict = await admin.post(`/api/organisations/${orgId}/criteria-sets`).send({
+      name: 'Unmeetable table (invented values)',
+      rows: [{ climateZone: '*', wallCategory, criterion: 'max_u_factor', value: 0.01, note: 'invented' }],
+    });
+    expect(strict.status, strict.text).toBe(201);
+    const failing = await sub
+      .post(`/api/assemblies/${assemblyId}/check-runs`)
+      .send({ criteriaSetId: strict.body.id });
+    expect(failing.body.verdict).toBe('fail');
+    failingRunId = failing.body.id;
   });
   afterAll(async () => {
     await t?.close();
@@ -158,21 +173,26 @@ describe.each(testDatabases())('submittals on %s', (kind) => {
     const viewer = await as('viewer');
     expect((await viewer.post(`/api/submittals/${s.id}/comments`).send({ body: 'hello' })).status).toBe(403);
 
-    // Revise and resubmit needs a note, then opens revision 2 as a draft with the items.
+    // Revise and resubmit needs a note. Every named reviewer decides: the architect's decision alone leaves
+    // the revision under review; the engineer's closes it with the more severe of the two, which opens
+    // revision 2 as a draft with the items.
     expect(
       (await architect.post(`/api/submittals/${s.id}/decision`).send({ decision: 'revise_and_resubmit' }))
         .status,
     ).toBe(400);
-    const decided = await architect
+    const first = await architect
       .post(`/api/submittals/${s.id}/decision`)
       .send({ decision: 'revise_and_resubmit', note: 'Add the clip test report.' });
+    expect(first.status, first.text).toBe(200);
+    expect(first.body).toMatchObject({ status: 'under_review', decision: null, readOnly: false });
+    const decided = await engineer
+      .post(`/api/submittals/${s.id}/decision`)
+      .send({ decision: 'approved', failingSheetConfirmation: 'APPROVE' });
     expect(decided.status, decided.text).toBe(200);
     const rev1 = submittalSchema.parse(decided.body);
     expect(rev1).toMatchObject({ status: 'revise_and_resubmit', readOnly: true });
-    expect(rev1.decision).toMatchObject({
-      decision: 'revise_and_resubmit',
-      note: 'Add the clip test report.',
-    });
+    expect(rev1.decision?.decision).toBe('revise_and_resubmit');
+    expect(rev1.decision?.note).toContain('Add the clip test report.');
     expect(rev1.revisions.map((r) => [r.revision, r.status])).toEqual([
       [1, 'revise_and_resubmit'],
       [2, 'draft'],
@@ -202,9 +222,21 @@ describe.each(testDatabases())('submittals on %s', (kind) => {
     expect(rev2.reviewers.map((r) => r.role).sort()).toEqual(['architect', 'engineer']);
     expect((await upload(rev2Id, [[JPEG, 'clip test report scan.jpg']])).status).toBe(201);
     expect((await sub.post(`/api/submittals/${rev2Id}/submit`).send({})).status).toBe(200);
-    const approved = await architect
-      .post(`/api/submittals/${rev2Id}/decision`)
-      .send({ decision: 'approved' });
+    // Revision 2's reviewers start undecided.
+    expect(
+      submittalSchema
+        .parse((await sub.get(`/api/submittals/${rev2Id}`)).body)
+        .reviewers.map((r) => r.decision),
+    ).toEqual([null, null]);
+    for (const reviewer of [architect, engineer])
+      expect(
+        (
+          await reviewer
+            .post(`/api/submittals/${rev2Id}/decision`)
+            .send({ decision: 'approved', failingSheetConfirmation: 'APPROVE' })
+        ).status,
+      ).toBe(200);
+    const approved = await sub.get(`/api/submittals/${rev2Id}`);
     expect(approved.body.status).toBe('approved');
     expect((await t.mail()).some((m) => m.subject === 'Submittal 07 42 13-001 rev 2: Approved')).toBe(true);
 
@@ -232,6 +264,7 @@ describe.each(testDatabases())('submittals on %s', (kind) => {
       'start_review',
       'comment',
       'decide',
+      'close_review',
       'open_revision',
     ])
       expect(actions).toContain(a);
@@ -288,6 +321,114 @@ describe.each(testDatabases())('submittals on %s', (kind) => {
     ).toBe(404);
     // Steps on a stale version are refused too.
     expect((await sub.post(`/api/submittals/${bare.id}/submit`).send({ version: 99 })).status).toBe(409);
+  });
+
+  // The rule for several reviewers (DEVELOPERS.md "Submittal workflow"): every named reviewer decides; the
+  // revision closes on the last decision, with the most severe one (rejected > revise and resubmit >
+  // approved as noted > approved); the submitter is e-mailed once, when it closes.
+  it('waits for every named reviewer and closes with the most severe decision', async () => {
+    const sub = await as('subcontractor');
+    const architect = await as('architect');
+    const engineer = await as('engineer');
+    const s = await create('subcontractor', { specSection: '07 42 16', specTitle: 'Metal Composite Panels' });
+    expect((await upload(s.id, [[PDF, 'Product data.pdf']])).status).toBe(201);
+    expect((await sub.post(`/api/submittals/${s.id}/submit`).send({})).status).toBe(200);
+    const subject = `Submittal ${s.number} rev 1:`;
+    const closingMail = async () => (await t.mail()).filter((m) => m.subject.startsWith(subject));
+
+    // One of two decides (without starting the review first): still under review, nobody e-mailed.
+    const one = await architect.post(`/api/submittals/${s.id}/decision`).send({ decision: 'approved' });
+    expect(one.status, one.text).toBe(200);
+    const half = submittalSchema.parse(one.body);
+    expect(half).toMatchObject({ status: 'under_review', decision: null, readOnly: false });
+    expect(half.reviewers.map((r) => [r.role, r.decision?.decision ?? null])).toEqual([
+      ['architect', 'approved'],
+      ['engineer', null],
+    ]);
+    expect(await closingMail()).toEqual([]);
+    // A reviewer may change their own decision while the others have not decided.
+    const changed = await architect
+      .post(`/api/submittals/${s.id}/decision`)
+      .send({ decision: 'approved_as_noted', note: 'Seal the panel joints at the parapet.' });
+    expect(changed.body.status).toBe('under_review');
+    // Comments are still open.
+    expect((await engineer.post(`/api/submittals/${s.id}/comments`).send({ body: 'Looking.' })).status).toBe(
+      201,
+    );
+
+    // The second closes it: rejected is more severe than approved as noted.
+    const two = await engineer
+      .post(`/api/submittals/${s.id}/decision`)
+      .send({ decision: 'rejected', note: 'The clip capacity is not shown.' });
+    expect(two.status, two.text).toBe(200);
+    const closed = submittalSchema.parse(two.body);
+    expect(closed).toMatchObject({ status: 'rejected', readOnly: true });
+    expect(closed.decision?.decision).toBe('rejected');
+    expect(closed.decision?.by).toBe(closed.reviewers.map((r) => r.name).join(', '));
+    expect(closed.decision?.note).toContain('Seal the panel joints at the parapet.');
+    expect(closed.decision?.note).toContain('The clip capacity is not shown.');
+    expect(closed.reviewers.map((r) => [r.role, r.decision?.decision, r.decision?.note])).toEqual([
+      ['architect', 'approved_as_noted', 'Seal the panel joints at the parapet.'],
+      ['engineer', 'rejected', 'The clip capacity is not shown.'],
+    ]);
+    // One e-mail to the submitter, with each reviewer's decision and note.
+    const mail = await closingMail();
+    expect(mail.map((m) => [m.to, m.subject])).toEqual([[demoEmail('subcontractor'), `${subject} Rejected`]]);
+    expect(mail[0]!.text).toContain('Approved as noted\nSeal the panel joints at the parapet.');
+    expect(mail[0]!.text).toContain('Rejected\nThe clip capacity is not shown.');
+    // Closed: nobody decides again.
+    const late = await architect.post(`/api/submittals/${s.id}/decision`).send({ decision: 'approved' });
+    expect(late.status).toBe(409);
+    expect(late.body.error.code).toBe('read_only');
+  });
+
+  it('approves a package whose sheet fails only with a typed confirmation', async () => {
+    const sub = await as('subcontractor');
+    const architect = await as('architect');
+    const s = await create('subcontractor', {
+      specSection: '07 42 43',
+      specTitle: 'Composite Wall Panels',
+      reviewerIds: [users.architect],
+    });
+    expect((await sub.post(`/api/submittals/${s.id}/sheets`).send({ checkRunId: failingRunId })).status).toBe(
+      201,
+    );
+    expect((await sub.post(`/api/submittals/${s.id}/submit`).send({})).status).toBe(200);
+    for (const body of [
+      { decision: 'approved' },
+      { decision: 'approved_as_noted', note: 'Fine.' },
+      { decision: 'approved', failingSheetConfirmation: 'yes' },
+    ]) {
+      const refused = await architect.post(`/api/submittals/${s.id}/decision`).send(body);
+      expect(refused.status, JSON.stringify(body)).toBe(422);
+      expect(refused.body.error.code).toBe('confirmation_required');
+      expect(Object.keys(refused.body.error.fields)).toEqual(['failingSheetConfirmation']);
+    }
+    // Nothing was recorded by the refusals.
+    const still = submittalSchema.parse((await architect.get(`/api/submittals/${s.id}`)).body);
+    expect(still.reviewers[0]!.decision).toBeNull();
+    expect(still.status).toBe('submitted');
+    const ok = await architect
+      .post(`/api/submittals/${s.id}/decision`)
+      .send({ decision: 'approved', failingSheetConfirmation: 'APPROVE' });
+    expect(ok.status, ok.text).toBe(200);
+    expect(ok.body.status).toBe('approved');
+  });
+
+  it('needs no confirmation to send a failing sheet back', async () => {
+    const sub = await as('subcontractor');
+    const s = await create('subcontractor', {
+      specSection: '07 42 46',
+      specTitle: 'Fiber-Cement Siding',
+      reviewerIds: [users.architect],
+    });
+    await sub.post(`/api/submittals/${s.id}/sheets`).send({ checkRunId: failingRunId });
+    await sub.post(`/api/submittals/${s.id}/submit`).send({});
+    const back = await (await as('architect'))
+      .post(`/api/submittals/${s.id}/decision`)
+      .send({ decision: 'revise_and_resubmit', note: 'The U-factor fails the table.' });
+    expect(back.status, back.text).toBe(200);
+    expect(back.body.status).toBe('revise_and_resubmit');
   });
 
   describe('uploads', () => {

@@ -5,6 +5,7 @@ import type { Project } from '@shared/schemas/project';
 import { type Request, type Response, Router } from 'express';
 import type { z } from 'zod';
 import type { Services } from '../services';
+import { archivedError } from '../services/projects';
 import { forbidden, HttpError, notFound, unauthorised, zodFields } from './errors';
 
 /**
@@ -13,7 +14,8 @@ import { forbidden, HttpError, notFound, unauthorised, zodFields } from './error
  * - `user`: any signed-in user;
  * - `siteAdmin`: a site administrator;
  * - `project`: a member of the project whose role allows `action` (the permission table in shared/auth).
- *   Non-members get 404 so that a project's existence is not revealed to other firms.
+ *   Non-members get 404 so that a project's existence is not revealed to other firms. A write (any method
+ *   but GET) to an archived project gets 409 `archived` unless the route says `whenArchived: 'allow'`.
  * - `organisation`: a member (or, with `role: 'admin'`, an administrator) of the firm named by `:orgId`;
  *   non-members get 404.
  * - `criteria`: the firm's code tables, named by `:orgId` or by `:setId` (a table of the firm). `read`: firm
@@ -31,6 +33,11 @@ export type Access =
       kind: 'project';
       action: ProjectAction;
       projectId?: (ctx: { params: Record<string, string>; services: Services }) => Promise<string | null>;
+      /**
+       * An archived project is read-only: every call but a GET answers 409 `archived` — unless the route says
+       * `allow` (restoring the project; taking someone's access away).
+       */
+      whenArchived?: 'allow';
     };
 
 export interface SessionUser {
@@ -78,8 +85,36 @@ export interface RouteDef<P = unknown, Q = unknown, B = unknown> {
    * `query` and `body` and returns its answer (JSON, or a `FileAnswer`).
    */
   stateless?: true;
+  /**
+   * Caps on the work one request may ask for, counted on the body as sent — before validation, which for a
+   * long list costs as much as the calculation. Over a cap: 413 `too_much_work` naming the field and the cap.
+   */
+  workLimits?: WorkLimit[];
   /** Returns the JSON body (status = first documented response) or handles `res` itself and returns undefined. */
   handler: (ctx: RouteContext<P, Q, B>) => Promise<unknown>;
+}
+
+/** A cap on what one request may ask to compute: at most `max` of `what` (counted by `count`) under `field`. */
+export interface WorkLimit {
+  /** Dotted path of the field the refusal names, e.g. `joints`. */
+  field: string;
+  /** What is counted, plural, e.g. `joints` or `openings in all walls together`. */
+  what: string;
+  max: number;
+  /** The count in a body not validated yet (anything else than the expected shape counts 0). */
+  count: (body: unknown) => number;
+}
+
+/** The refusal of a body over one of the work limits (the first exceeded); undefined within all of them. */
+export function workRefusal(limits: WorkLimit[] | undefined, body: unknown): HttpError | undefined {
+  for (const { field, what, max, count } of limits ?? []) {
+    const n = count(body);
+    if (n > max)
+      return new HttpError(413, 'too_much_work', 'the request asks for more work than one calculation may do', {
+        [field]: `at most ${max} ${what} in one request (got ${n}); split the work into several requests`,
+      });
+  }
+  return undefined;
 }
 
 /** Identity helper that keeps the param/query/body types inferred from the zod schemas. */
@@ -164,6 +199,8 @@ export async function answer(
   sent: { query: unknown; body: unknown },
 ) {
   const { req, res } = ctx;
+  const overWork = workRefusal(route.workLimits, sent.body);
+  if (overWork) throw overWork;
   const query = parsePart(route.query, sent.query, 'query');
   const body = parsePart(route.body, sent.body, 'body');
   const result = await route.handler({ ...ctx, query, body });
@@ -223,6 +260,8 @@ export function mountRoutes(
         const record = projectId ? await services.projects.access(projectId, user!.id) : null;
         if (!projectId || !record) throw notFound('project');
         if (!can(record.myRole, access.action)) throw forbidden();
+        if (record.archivedAt && route.method !== 'get' && access.whenArchived !== 'allow')
+          throw archivedError();
         project = { id: projectId, role: record.myRole, record };
       }
       if (access.kind === 'organisation') {

@@ -7,7 +7,7 @@ import {
   assemblyUpdateSchema,
   revisionListSchema,
 } from '@shared/schemas/assembly';
-import { apiErrorSchema, uuidParam, versionConflictSchema } from '@shared/schemas/common';
+import { apiErrorSchema, int4Param, uuidParam, versionConflictSchema } from '@shared/schemas/common';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
 
@@ -66,7 +66,11 @@ export const assemblyRoutes = [
     params: uuidParam,
     body: assemblyCreateSchema,
     example,
-    responses: { 201: { description: 'The new assembly', schema: assemblySchema }, ...errors },
+    responses: {
+      201: { description: 'The new assembly', schema: assemblySchema },
+      ...errors,
+      409: { description: 'The project is archived', schema: apiErrorSchema },
+    },
     handler: ({ user, project, body, services }) => services.assemblies.create(project!.id, user!.id, body),
   }),
   defineRoute({
@@ -93,7 +97,8 @@ export const assemblyRoutes = [
       200: { description: 'The assembly at its new revision', schema: assemblySchema },
       ...errors,
       409: {
-        description: 'Someone saved first; `current` holds their revision',
+        description:
+          'Someone saved first (`current` holds their revision), or the project is archived (`archived`)',
         schema: versionConflictSchema(assemblySchema),
       },
     },
@@ -118,7 +123,7 @@ export const assemblyRoutes = [
     summary: 'One stored revision with its input and result',
     tag: 'Assemblies',
     access: { kind: 'project', action: 'assembly.read', ...viaAssembly },
-    params: assemblyParams.extend({ revision: z.coerce.number().int().positive() }),
+    params: assemblyParams.extend({ revision: int4Param() }),
     responses: { 200: { description: 'The revision', schema: assemblyRevisionSchema }, ...errors },
     handler: ({ params, services }) => services.assemblies.revision(params.assemblyId, params.revision),
   }),

@@ -63,7 +63,8 @@ export const memberRoutes = [
     path: '/projects/:id/members/:memberId',
     summary: 'Change a member’s role',
     tag: 'Members',
-    access: { kind: 'project', action: 'members.manage' },
+    // Taking someone's access away (or narrowing it) stays possible on an archived project.
+    access: { kind: 'project', action: 'members.manage', whenArchived: 'allow' },
     params: memberParams,
     body: memberRoleUpdateSchema,
     responses: {
@@ -79,7 +80,8 @@ export const memberRoutes = [
     path: '/projects/:id/members/:memberId',
     summary: 'Remove a member from the project',
     tag: 'Members',
-    access: { kind: 'project', action: 'members.manage' },
+    // Taking someone's access away (or narrowing it) stays possible on an archived project.
+    access: { kind: 'project', action: 'members.manage', whenArchived: 'allow' },
     params: memberParams,
     responses: {
       204: { description: 'Removed' },

@@ -184,6 +184,11 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
           'wrong_account',
           `this invitation is for ${inv.email}; sign in with that address`,
         );
+      const [project] = await db
+        .select({ archivedAt: projects.archivedAt })
+        .from(projects)
+        .where(eq(projects.id, inv.projectId));
+      if (project?.archivedAt) throw archivedError();
       await db.transaction(async (tx) => {
         await tx
           .insert(projectMembers)

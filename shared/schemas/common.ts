@@ -17,6 +17,59 @@ export type ApiError = z.infer<typeof apiErrorSchema>;
 
 export const uuidParam = z.object({ id: z.uuid() });
 
+/*
+ * Limits of what a request may carry (DEVELOPERS.md "API conventions"). Text is trimmed and held to a length
+ * that fits its use; a whole number that reaches an `integer` column (versions, revisions, positions, counts)
+ * fits it. Lone UTF-16 surrogates and NUL characters are refused for every string by the request guard
+ * (server/http/guards.ts), so the schemas need not repeat it.
+ */
+
+/** Text limits in characters (UTF-16 code units, as zod and JavaScript count them). */
+export const TEXT_MAX = {
+  /** A name or title: person, firm, project, assembly, submittal, code table, library entry. */
+  name: 200,
+  /** One line: an address, a source reference, a revision or row note. */
+  line: 500,
+  /** Free text: descriptions, notes, comments, review decisions. */
+  note: 5000,
+} as const;
+
+/**
+ * Why a string cannot be stored as text, or undefined: a NUL character (PostgreSQL text cannot hold one) or a
+ * lone UTF-16 surrogate (half of a character: it has no UTF-8 form, and JSON columns refuse its escape). The
+ * request guard (server/http/guards.ts) refuses both in every string and key of a body.
+ */
+export function textFault(s: string): string | undefined {
+  if (s.includes('\u0000')) return 'text must not contain NUL characters';
+  // With the u flag a well-formed pair is one code point; only a lone surrogate matches \p{Cs}.
+  if (/\p{Cs}/u.test(s)) return 'text must not contain a lone UTF-16 surrogate (half of a character)';
+  return undefined;
+}
+
+/** Trimmed text of at most `max` characters, with the limit in the message. */
+export const text = (max: number) => z.string().trim().max(max, `at most ${max} characters`);
+
+/** The largest value of a PostgreSQL `integer` column: 2³¹ − 1. */
+export const INT4_MAX = 2_147_483_647;
+
+/** A whole number min … 2³¹ − 1 that fits an `integer` column (a version, revision, position or count). */
+export const int4 = (min = 1) =>
+  z.number().int().min(min).max(INT4_MAX, `must be at most ${INT4_MAX} (a database integer)`);
+
+/** The same, written in a path or query string. */
+export const int4Param = (min = 1) =>
+  z.coerce.number().int().min(min).max(INT4_MAX, `must be at most ${INT4_MAX} (a database integer)`);
+
+/**
+ * A calendar date YYYY-MM-DD in 1900 … 2199: any date a project, a code edition or a review can have, and one
+ * the database can store (it has no year 0).
+ */
+export const calendarDate = () =>
+  z.iso
+    .date()
+    .refine((d) => d >= '1900-01-01' && d <= '2199-12-31', 'a date between 1900-01-01 and 2199-12-31')
+    .describe('Calendar date, YYYY-MM-DD');
+
 /** A finite number (NaN, ±Infinity and numbers written as strings are refused). */
 export const finite = () => z.number().refine(Number.isFinite, 'must be a finite number');
 

@@ -14,6 +14,7 @@ import { conflictingSubmittal, useUpdateSubmittal } from '../../features/submitt
 import { AttachSheet } from '../../features/submittals/components/AttachSheet';
 import { CommentForm, CommentList } from '../../features/submittals/components/Comments';
 import { ItemList } from '../../features/submittals/components/ItemList';
+import { ReviewerDecisions } from '../../features/submittals/components/ReviewerDecisions';
 import { ReviewPanel } from '../../features/submittals/components/ReviewPanel';
 import { StatusBadge } from '../../features/submittals/components/StatusBadge';
 import { SubmittalForm } from '../../features/submittals/components/SubmittalForm';
@@ -109,8 +110,10 @@ export function SubmittalPage() {
   const isDraft = s.status === 'draft';
   const mayEdit = open && isDraft && can(project.myRole, 'submittal.create');
   const mayComment = open && !s.readOnly && can(project.myRole, 'submittal.comment');
-  const isReviewer =
-    open && can(project.myRole, 'submittal.review') && s.reviewers.some((r) => r.id === me.data?.id);
+  const myReview =
+    open && can(project.myRole, 'submittal.review')
+      ? (s.reviewers.find((r) => r.id === me.data?.id) ?? null)
+      : null;
   const latest = s.revisions[s.revisions.length - 1];
 
   return (
@@ -182,20 +185,15 @@ export function SubmittalPage() {
 
       <SheetSection n={3} title="Review" id="review">
         {s.decision ? (
-          <div className="flex flex-col gap-1" data-testid="decision">
-            <p className="font-semibold">
-              <span aria-hidden="true">{SUBMITTAL_STATUS_TEXT[s.decision.decision].glyph} </span>
-              {SUBMITTAL_STATUS_TEXT[s.decision.decision].label}
-              <span className="font-normal">
-                {' '}
-                — {s.decision.by ?? 'a reviewer'}, {formatDateTime(s.decision.at)}
-              </span>
-            </p>
-            {s.decision.note ? <p className="whitespace-pre-wrap text-sm">{s.decision.note}</p> : null}
-          </div>
+          <p className="font-semibold" data-testid="decision">
+            <span aria-hidden="true">{SUBMITTAL_STATUS_TEXT[s.decision.decision].glyph} </span>
+            {SUBMITTAL_STATUS_TEXT[s.decision.decision].label}
+            <span className="font-normal"> — closed {formatDateTime(s.decision.at)}</span>
+          </p>
         ) : null}
+        <ReviewerDecisions s={s} />
         {open ? (
-          <ReviewPanel s={s} maySubmit={can(project.myRole, 'submittal.submit')} isReviewer={isReviewer} />
+          <ReviewPanel s={s} maySubmit={can(project.myRole, 'submittal.submit')} me={myReview} />
         ) : null}
       </SheetSection>
 

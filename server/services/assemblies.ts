@@ -2,7 +2,7 @@ import type { ThermalResult } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
 import { ENGINE_VERSION } from '@shared/calc/trace';
 import type { Assembly, AssemblyInput, AssemblyRevision, AssemblySummary } from '@shared/schemas/assembly';
-import { and, asc, desc, eq } from 'drizzle-orm';
+import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { assemblies, assemblyRevisions, user } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
@@ -23,7 +23,10 @@ function toRevision(r: RevisionRow, createdBy: string | null): AssemblyRevision 
   };
 }
 
-function toSummary(a: AssemblyRow, result: ThermalResult | null): AssemblySummary {
+function toSummary(
+  a: AssemblyRow,
+  result: { Ueff: number | null; Reff: number | null } | null,
+): AssemblySummary {
   return {
     id: a.id,
     projectId: a.projectId,
@@ -65,8 +68,14 @@ export function createAssemblyService(db: Db) {
     },
 
     async list(projectId: string): Promise<AssemblySummary[]> {
+      // Only the two headline figures of each current result: the stored result carries its whole trace
+      // (kilobytes per assembly), which the list would otherwise read, parse and drop.
       const rows = await db
-        .select({ a: assemblies, result: assemblyRevisions.thermalResult })
+        .select({
+          a: assemblies,
+          Ueff: sql<number | null>`(${assemblyRevisions.thermalResult} ->> 'Ueff')::float8`,
+          Reff: sql<number | null>`(${assemblyRevisions.thermalResult} ->> 'Reff')::float8`,
+        })
         .from(assemblies)
         .innerJoin(
           assemblyRevisions,
@@ -77,7 +86,7 @@ export function createAssemblyService(db: Db) {
         )
         .where(eq(assemblies.projectId, projectId))
         .orderBy(asc(assemblies.name));
-      return rows.map((r) => toSummary(r.a, r.result as ThermalResult | null));
+      return rows.map((r) => toSummary(r.a, r));
     },
 
     async create(projectId: string, userId: string, input: AssemblyInput): Promise<Assembly> {

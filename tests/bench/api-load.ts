@@ -112,6 +112,11 @@ try {
       opts: (cookie) => ({ url: `${base}/api/projects/${projectId}`, headers: { cookie } }),
     },
     {
+      name: 'read: GET /api/projects/:id/assemblies',
+      kind: 'read',
+      opts: (cookie) => ({ url: `${base}/api/projects/${projectId}/assemblies`, headers: { cookie } }),
+    },
+    {
       name: 'calculation: POST /api/v1/calc/thermal',
       kind: 'calc',
       opts: () => ({

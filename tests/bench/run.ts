@@ -1,6 +1,7 @@
 // `npm run bench`: prints the speed figures of the calculation engine (not a pass/fail test).
 import { benchMoisture } from './moisture.bench';
 import { benchSheet } from './sheet.bench';
+import { initialJsLine } from './size';
 import { benchThermal } from './thermal.bench';
 import { benchWind } from './wind.bench';
 
@@ -27,3 +28,4 @@ for (const [bench, target] of benches) {
     `${r.name.padEnd(48)} median ${r.medianMicros.toFixed(2).padStart(8)} µs  ${Math.round(r.perSecond).toLocaleString('en-US').padStart(10)} /s   ${verdict}`,
   );
 }
+console.log(initialJsLine());

@@ -13,7 +13,11 @@ import { defineRoute } from '../http/route';
 
 const errors = {
   401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: { description: 'Your role does not allow this', schema: apiErrorSchema },
+  403: {
+    description:
+      'Your role does not allow this, or does not allow granting that role (`role_not_grantable`: see `mayGrant` in shared/auth)',
+    schema: apiErrorSchema,
+  },
   404: { description: 'No such project or member', schema: apiErrorSchema },
 };
 const memberParams = uuidParam.extend({ memberId: z.uuid() });
@@ -54,9 +58,10 @@ export const memberRoutes = [
         schema: invitationSchema,
       },
       ...errors,
-      409: { description: 'Already a member', schema: apiErrorSchema },
+      409: { description: 'Already a member, or the project is archived', schema: apiErrorSchema },
     },
-    handler: ({ user, project, body, services }) => services.members.invite(project!.id, user!, body),
+    handler: ({ user, project, body, services }) =>
+      services.members.invite(project!.id, { ...user!, role: project!.role }, body),
   }),
   defineRoute({
     method: 'put',
@@ -73,7 +78,10 @@ export const memberRoutes = [
       409: { description: 'Would leave the project without an owner', schema: apiErrorSchema },
     },
     handler: ({ user, project, params, body, services }) =>
-      services.members.setRole(project!.id, params.memberId, body.role, user!.id),
+      services.members.setRole(project!.id, params.memberId, body.role, {
+        id: user!.id,
+        role: project!.role,
+      }),
   }),
   defineRoute({
     method: 'delete',
@@ -89,7 +97,7 @@ export const memberRoutes = [
       409: { description: 'Last owner', schema: apiErrorSchema },
     },
     handler: async ({ user, project, params, services }) => {
-      await services.members.remove(project!.id, params.memberId, user!.id);
+      await services.members.remove(project!.id, params.memberId, { id: user!.id, role: project!.role });
       return undefined;
     },
   }),
@@ -116,9 +124,16 @@ export const memberRoutes = [
     responses: {
       200: { description: 'Joined', schema: z.object({ projectId: z.uuid() }) },
       401: errors[401],
-      403: { description: 'Signed in with another address', schema: apiErrorSchema },
+      403: {
+        description:
+          'Signed in with another address, or the sender may no longer grant the role (`inviter_not_allowed`)',
+        schema: apiErrorSchema,
+      },
       404: errors[404],
-      409: { description: 'Already accepted', schema: apiErrorSchema },
+      409: {
+        description: 'Already accepted, already a member, or the project is archived',
+        schema: apiErrorSchema,
+      },
       410: { description: 'Expired', schema: apiErrorSchema },
     },
     handler: ({ user, params, services }) => services.members.accept(params.token, user!),

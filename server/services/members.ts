@@ -1,5 +1,5 @@
 import { createHash, randomBytes } from 'node:crypto';
-import { PROJECT_ROLE_LABELS, type ProjectRole } from '@shared/auth/permissions';
+import { mayGrant, mayRemove, PROJECT_ROLE_LABELS, type ProjectRole } from '@shared/auth/permissions';
 import type { Invitation, InvitationInput, InvitationPreview, Member } from '@shared/schemas/members';
 import { and, asc, eq, isNull, ne } from 'drizzle-orm';
 import type { Config } from '../config';
@@ -19,6 +19,22 @@ import { archivedError } from './projects';
 
 const INVITATION_DAYS = 14;
 const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
+
+/** Someone acting on the project's membership, with their role on it. */
+interface Actor {
+  id: string;
+  role: ProjectRole;
+}
+
+/** 403 unless `actor` may give `role` to someone whose role is `current` (the rule in shared/auth). */
+function assertMayGrant(actor: Actor, role: ProjectRole, current: ProjectRole | null) {
+  if (mayGrant(actor.role, role, current)) return;
+  const what =
+    current === 'owner'
+      ? 'only an owner may change an owner’s role'
+      : `as ${PROJECT_ROLE_LABELS[actor.role]} you may not grant the role ${PROJECT_ROLE_LABELS[role]}`;
+  throw new HttpError(403, 'role_not_grantable', what, { role: what });
+}
 
 function toInvitation(r: typeof invitations.$inferSelect): Invitation {
   return {
@@ -62,18 +78,29 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
     };
   }
 
-  async function memberRow(projectId: string, memberId: string) {
-    const [m] = await db
-      .select()
-      .from(projectMembers)
-      .where(and(eq(projectMembers.id, memberId), eq(projectMembers.projectId, projectId)));
-    if (!m) throw notFound('member');
-    return m;
+  /**
+   * One change to a member, in a transaction that first locks the project row: changes to one project's
+   * members happen one after the other, so two owners demoting each other at once cannot leave it ownerless.
+   */
+  function changeMember<T>(
+    projectId: string,
+    memberId: string,
+    change: (tx: Db, m: typeof projectMembers.$inferSelect) => Promise<T>,
+  ): Promise<T> {
+    return db.transaction(async (tx) => {
+      await tx.select({ id: projects.id }).from(projects).where(eq(projects.id, projectId)).for('update');
+      const [m] = await tx
+        .select()
+        .from(projectMembers)
+        .where(and(eq(projectMembers.id, memberId), eq(projectMembers.projectId, projectId)));
+      if (!m) throw notFound('member');
+      return change(tx, m);
+    });
   }
 
   /** A project must always keep at least one owner. */
-  async function assertNotLastOwner(projectId: string, memberId: string) {
-    const others = await db
+  async function assertNotLastOwner(tx: Db, projectId: string, memberId: string) {
+    const others = await tx
       .select({ id: projectMembers.id })
       .from(projectMembers)
       .where(
@@ -91,9 +118,10 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
 
     async invite(
       projectId: string,
-      inviter: { id: string; name: string },
+      inviter: Actor & { name: string },
       input: InvitationInput,
     ): Promise<Invitation> {
+      assertMayGrant(inviter, input.role, null);
       const [existing] = await db
         .select({ id: projectMembers.id })
         .from(projectMembers)
@@ -189,14 +217,27 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
         .from(projects)
         .where(eq(projects.id, inv.projectId));
       if (project?.archivedAt) throw archivedError();
+      // The rule holds when the invitation is used too: its sender must still be on the project with a role
+      // that may grant it (an invitation sent before a demotion, or before the rule, grants no more).
+      const [sender] = await db
+        .select({ role: projectMembers.role })
+        .from(projectMembers)
+        .where(and(eq(projectMembers.projectId, inv.projectId), eq(projectMembers.userId, inv.invitedBy)));
+      if (!mayGrant(sender?.role as ProjectRole | undefined, inv.role as ProjectRole))
+        throw new HttpError(
+          403,
+          'inviter_not_allowed',
+          'the person who invited you can no longer grant this role; ask an owner of the project for a new invitation',
+        );
       await db.transaction(async (tx) => {
-        await tx
+        // Joining never changes the role of someone already on the project (that is a role change).
+        const joined = await tx
           .insert(projectMembers)
           .values({ projectId: inv.projectId, userId: invitee.id, role: inv.role })
-          .onConflictDoUpdate({
-            target: [projectMembers.projectId, projectMembers.userId],
-            set: { role: inv.role },
-          });
+          .onConflictDoNothing({ target: [projectMembers.projectId, projectMembers.userId] })
+          .returning({ id: projectMembers.id });
+        if (joined.length === 0)
+          throw new HttpError(409, 'already_member', 'you are already a member of this project');
         await tx
           .update(invitations)
           .set({ acceptedAt: new Date(), acceptedBy: invitee.id })
@@ -213,13 +254,13 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
       return { projectId: inv.projectId };
     },
 
-    async setRole(projectId: string, memberId: string, role: ProjectRole, actorId: string): Promise<Member> {
-      const m = await memberRow(projectId, memberId);
-      if (m.role === 'owner' && role !== 'owner') await assertNotLastOwner(projectId, memberId);
-      await db.transaction(async (tx) => {
+    async setRole(projectId: string, memberId: string, role: ProjectRole, actor: Actor): Promise<Member> {
+      await changeMember(projectId, memberId, async (tx, m) => {
+        assertMayGrant(actor, role, m.role as ProjectRole);
+        if (m.role === 'owner' && role !== 'owner') await assertNotLastOwner(tx, projectId, memberId);
         await tx.update(projectMembers).set({ role }).where(eq(projectMembers.id, memberId));
         await recordAudit(tx, {
-          actorId,
+          actorId: actor.id,
           projectId,
           entity: 'member',
           entityId: m.userId,
@@ -232,13 +273,14 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
       return members.find((x) => x.id === memberId)!;
     },
 
-    async remove(projectId: string, memberId: string, actorId: string): Promise<void> {
-      const m = await memberRow(projectId, memberId);
-      if (m.role === 'owner') await assertNotLastOwner(projectId, memberId);
-      await db.transaction(async (tx) => {
+    async remove(projectId: string, memberId: string, actor: Actor): Promise<void> {
+      await changeMember(projectId, memberId, async (tx, m) => {
+        if (!mayRemove(actor.role, m.role as ProjectRole))
+          throw new HttpError(403, 'role_not_grantable', 'only an owner may remove an owner');
+        if (m.role === 'owner') await assertNotLastOwner(tx, projectId, memberId);
         await tx.delete(projectMembers).where(eq(projectMembers.id, memberId));
         await recordAudit(tx, {
-          actorId,
+          actorId: actor.id,
           projectId,
           entity: 'member',
           entityId: m.userId,

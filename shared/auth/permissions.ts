@@ -80,6 +80,37 @@ export function can(role: ProjectRole | null | undefined, action: ProjectAction)
   return role != null && PERMISSIONS[action].includes(role);
 }
 
+/**
+ * Who may hand out which project role — invite someone with it, or change a member to it (`current`: the
+ * member's role now; null for an invitation). The one rule, used by the server and by the forms:
+ * - an owner may grant every role, to anyone;
+ * - anyone else may grant only a role that can do nothing their own role cannot (each of its actions is one
+ *   of theirs) — so never owner — and may not change an owner.
+ * So an architect may invite architects, envelope consultants, engineers and viewers, but neither an owner
+ * nor a cladding subcontractor (who submits the submittals the architect reviews: the reviewing side does not
+ * create the submitting side).
+ */
+export function mayGrant(
+  granter: ProjectRole | null | undefined,
+  role: ProjectRole,
+  current: ProjectRole | null = null,
+): boolean {
+  if (granter == null) return false;
+  if (granter === 'owner') return true;
+  if (current === 'owner') return false;
+  return PROJECT_ACTIONS.every((action) => !can(role, action) || can(granter, action));
+}
+
+/** The roles `granter` may give someone whose role is `current` (null: a new invitation), in table order. */
+export const grantableRoles = (
+  granter: ProjectRole | null | undefined,
+  current: ProjectRole | null = null,
+): ProjectRole[] => PROJECT_ROLES.filter((role) => mayGrant(granter, role, current));
+
+/** Whether `remover` may take a member whose role is `current` off the project: only an owner removes an owner. */
+export const mayRemove = (remover: ProjectRole | null | undefined, current: ProjectRole): boolean =>
+  remover != null && (remover === 'owner' || current !== 'owner');
+
 /** Site-wide roles: `admin` runs the installation (mail outbox, every firm); `user` otherwise. */
 export const SITE_ROLES = ['admin', 'user'] as const;
 export type SiteRole = (typeof SITE_ROLES)[number];

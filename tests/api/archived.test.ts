@@ -108,10 +108,11 @@ describe.each(testDatabases())('writes to an archived project on %s', (kind) => 
   });
 
   it('does not let a pending invitation add anyone to an archived project', async () => {
-    const invitee = request.agent(t.app);
-    await invitee
-      .post('/api/auth/sign-up/email')
-      .send({ name: 'Late Joiner', email: 'late.joiner@example.com', password: 'late-joiner-password' });
+    const invitee = await t.signUp(request.agent(t.app), {
+      name: 'Late Joiner',
+      email: 'late.joiner@example.com',
+      password: 'late-joiner-password',
+    });
     const accept = await invitee.post(`/api/invitations/${token}/accept`);
     expect(accept.status).toBe(409);
     expect(accept.body.error.code).toBe('archived');

@@ -43,7 +43,7 @@ export function ProjectMembersPage() {
       {mayInvite ? (
         <>
           <section className="border-t border-ink pt-6">
-            <InviteForm projectId={id} />
+            <InviteForm projectId={id} myRole={project.myRole} />
           </section>
           <section aria-labelledby="pending-heading" className="flex flex-col gap-3">
             <h2 id="pending-heading" className="text-xl">

@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { PROJECT_ROLE_LABELS, PROJECT_ROLES } from '@shared/auth/permissions';
+import { grantableRoles, PROJECT_ROLE_LABELS, type ProjectRole } from '@shared/auth/permissions';
 import { type InvitationInput, invitationInputSchema } from '@shared/schemas/members';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
@@ -15,8 +15,11 @@ import { useInviteMember } from '../api/invite-member';
 
 type Values = z.input<typeof invitationInputSchema>;
 
-/** Invite someone by e-mail with a role; they get a link that works once they sign in with that address. */
-export function InviteForm({ projectId }: { projectId: string }) {
+/**
+ * Invite someone by e-mail with a role; they get a link that works once they sign in with that address. Only
+ * the roles the inviter may grant are offered (`grantableRoles`, the rule the server enforces).
+ */
+export function InviteForm({ projectId, myRole }: { projectId: string; myRole: ProjectRole }) {
   const invite = useInviteMember(projectId);
   const [sent, setSent] = useState<string | null>(null);
   const [failure, setFailure] = useState<string | null>(null);
@@ -61,7 +64,7 @@ export function InviteForm({ projectId }: { projectId: string }) {
         <Field label="Role on this project" error={errors.role?.message} required>
           {(c) => (
             <Select {...c} {...register('role')}>
-              {PROJECT_ROLES.map((r) => (
+              {grantableRoles(myRole).map((r) => (
                 <option key={r} value={r}>
                   {PROJECT_ROLE_LABELS[r]}
                 </option>

@@ -42,6 +42,12 @@ describe('MembersTable permissions', () => {
     expect(screen.queryByLabelText('Role for Olive Owner')).toBeNull();
   });
 
+  it('offers an owner every role in a member’s role select', () => {
+    renderAs('owner', 'u-owner');
+    const options = screen.getByLabelText('Role for Ernest Engineer').querySelectorAll('option');
+    expect(options).toHaveLength(6);
+  });
+
   it.each<ProjectRole>(['architect', 'engineer', 'subcontractor', 'viewer'])(
     'hides member management from a %s',
     (role) => {

@@ -1,4 +1,10 @@
-import { can, PROJECT_ROLE_LABELS, PROJECT_ROLES, type ProjectRole } from '@shared/auth/permissions';
+import {
+  can,
+  grantableRoles,
+  mayRemove,
+  PROJECT_ROLE_LABELS,
+  type ProjectRole,
+} from '@shared/auth/permissions';
 import type { Member } from '@shared/schemas/members';
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
@@ -18,7 +24,8 @@ interface MembersTableProps {
 
 /**
  * Everyone on the project with their firm and role. People whose role allows `members.manage` can change
- * another member's role or remove them (never their own row: that needs another owner).
+ * another member's role to one they may grant, or remove them (never their own row: that needs another owner;
+ * an owner's row only when they are an owner themselves — the rules of shared/auth).
  */
 export function MembersTable({ projectId, members, myRole, myUserId }: MembersTableProps) {
   const manage = can(myRole, 'members.manage');
@@ -40,8 +47,8 @@ export function MembersTable({ projectId, members, myRole, myUserId }: MembersTa
       <tbody>
         {members.map((m) => {
           const isMe = m.userId === myUserId;
-          return manage && !isMe ? (
-            <ManagedRow key={m.id} projectId={projectId} member={m} />
+          return manage && !isMe && mayRemove(myRole, m.role) ? (
+            <ManagedRow key={m.id} projectId={projectId} member={m} myRole={myRole} />
           ) : (
             <tr key={m.id}>
               <Td>
@@ -60,9 +67,20 @@ export function MembersTable({ projectId, members, myRole, myUserId }: MembersTa
   );
 }
 
-function ManagedRow({ projectId, member }: { projectId: string; member: Member }) {
+function ManagedRow({
+  projectId,
+  member,
+  myRole,
+}: {
+  projectId: string;
+  member: Member;
+  myRole: ProjectRole;
+}) {
   const selectId = useId();
   const [role, setRole] = useState<ProjectRole>(member.role);
+  // The roles this person may give the member; the member's own role stays shown even when it is not one.
+  const grantable = grantableRoles(myRole, member.role);
+  const options = grantable.includes(member.role) ? grantable : [member.role, ...grantable];
   const [confirmRemove, setConfirmRemove] = useState(false);
   const updateRole = useUpdateMemberRole(projectId);
   const remove = useRemoveMember(projectId);
@@ -86,7 +104,7 @@ function ManagedRow({ projectId, member }: { projectId: string; member: Member }
             onChange={(e) => setRole(e.target.value as ProjectRole)}
             className="w-auto py-1 text-sm"
           >
-            {PROJECT_ROLES.map((r) => (
+            {options.map((r) => (
               <option key={r} value={r}>
                 {PROJECT_ROLE_LABELS[r]}
               </option>

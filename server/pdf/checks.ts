@@ -1,5 +1,5 @@
 import { zoneLabel } from '@shared/checks/criteria';
-import type { Check } from '@shared/checks/report';
+import { type Check, methodText } from '@shared/checks/report';
 import { WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
 import { type Formatter, STATUS_WORD, VERDICT_WORDS } from './format';
 import { type Cell, INK, type SheetWriter } from './layout';
@@ -41,7 +41,13 @@ export function drawCheckList(w: SheetWriter, data: SheetData, fmt: Formatter): 
       { text: `${c.label}\n${basis(c, data)}` },
       c.direction === 'required' && c.required !== null ? 'yes' : fmt.siValue(c.required, c.unit),
       fmt.siValue(c.provided, c.unit),
-      [fmt.checkResult(c), c.status !== 'not_evaluated' ? c.reason : ''].filter(Boolean).join('. '),
+      [
+        fmt.checkResult(c),
+        c.status !== 'not_evaluated' ? c.reason : '',
+        c.method ? methodText(c.method, fmt.rValue) : '',
+      ]
+        .filter(Boolean)
+        .join('. '),
     ]),
     { size: 7 },
   );

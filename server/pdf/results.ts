@@ -1,3 +1,4 @@
+import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
 import type { TraceStep } from '@shared/calc/trace';
 import { drawAccumulationChart, drawProfileChart, drawSpacingChart } from './charts';
 import { type Formatter, MONTHS, num } from './format';
@@ -8,13 +9,6 @@ import { moduleOutcome, moduleResult, type SheetData } from './sheet-data';
  * The results of every module as the run stored them, each with the formulas that govern its figures
  * (from the trace: label, formula, source). A module that could not run says why.
  */
-
-const METHOD_NAMES: Record<string, string> = {
-  parallelPath: 'ASHRAE parallel path',
-  isothermalPlanes: 'ASHRAE isothermal planes',
-  isoCombined: 'ISO 6946 combined method',
-  zone: 'ASHRAE zone method',
-};
 
 function notRun(w: SheetWriter, data: SheetData, id: string): boolean {
   const m = moduleOutcome(data.run, id);
@@ -62,12 +56,14 @@ function thermal(w: SheetWriter, data: SheetData, fmt: Formatter): void {
       ['Effective R_eff · U_eff', `${fmt.rValue(r.Reff)} · ${fmt.uValue(r.Ueff)}`],
       [
         'Method used',
-        `${METHOD_NAMES[r.defaultMethod] ?? r.defaultMethod} (spread of the offered methods ${num(r.methodSpread * 100, 1)} %)`,
+        `${METHOD_LABELS[r.defaultMethod] ?? r.defaultMethod} (spread of the offered methods ${num(r.methodSpread * 100, 1)} %)`,
       ],
       ['Surface resistances', `R_si ${fmt.rValue(r.Rsi)} · R_se ${fmt.rValue(r.Rse)}`],
     ],
     2,
   );
+  // A run stored by an engine before 0.3.0 has no basis sentence; its method name above stands alone.
+  if (r.basis) w.paragraph(r.basis.text, { size: 7.6 });
   if (r.bridges.length > 0) {
     w.caption('What the heat loss goes through');
     w.table(

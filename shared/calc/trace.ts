@@ -44,4 +44,4 @@ export function step(
 export const v = (value: number, unit: string): TraceInput => ({ value, unit });
 
 /** Version of the shared calculation engine; stored with every result and printed on every sheet. */
-export const ENGINE_VERSION = '0.2.0';
+export const ENGINE_VERSION = '0.3.0';

@@ -1,6 +1,7 @@
 import { calculateJointSchedule } from '../calc/joints/joints';
 import { calculateMoisture } from '../calc/moisture/monthly';
-import { calculateThermal } from '../calc/thermal/thermal';
+import type { ThermalResult } from '../calc/thermal/schema';
+import { calculateThermal, METHOD_LABELS } from '../calc/thermal/thermal';
 import { calculateWindSchedule } from '../calc/wind/attachment';
 import { checkDesignSpacing } from '../calc/wind/design';
 import type {
@@ -20,12 +21,31 @@ import {
   minSealantMovementClass,
 } from './metrics';
 import { type CheckModule, compare, defineCheckModule, type ModuleCheck } from './module';
+import type { CheckMethod } from './report';
 
 /*
  * The registry of check modules. Each wraps one calculation of shared/calc: how its input is built from the
  * assembly and project (shared/checks/inputs.ts), which metrics it reports for code tables, and its own
  * verdicts that hold whatever the code table says (the wind schedule, the joints, the surface humidity).
  */
+
+/**
+ * The method that decides a thermal criterion (DEVELOPERS.md D-101): the thermal result's own R₀ method —
+ * the energy-code path for a steel-framed wall the table covers, ISO 6946 where no metal bridges the layers,
+ * otherwise the lowest R offered — with the other methods and their spread.
+ */
+export function thermalMethod(r: ThermalResult): CheckMethod {
+  return {
+    method: r.defaultMethod,
+    label: METHOD_LABELS[r.defaultMethod],
+    kind: r.basis.kind,
+    text: r.basis.text,
+    others: r.offeredMethods
+      .filter((m) => m !== r.defaultMethod)
+      .map((m) => ({ method: m, label: METHOD_LABELS[m], R: r.methods[m]! })),
+    spread: r.methodSpread,
+  };
+}
 
 export const thermalModule = defineCheckModule({
   id: 'thermal',
@@ -34,8 +54,18 @@ export const thermalModule = defineCheckModule({
   build: (a) => thermalInputFor(a),
   run: calculateThermal,
   metrics: (r, a) => ({
-    Ueff: { value: r.Ueff, unit: 'W/(m²·K)', traceStepIds: ['thermal.Ueff'] },
-    Reff: { value: r.Reff, unit: 'm²·K/W', traceStepIds: ['thermal.Reff'] },
+    Ueff: {
+      value: r.Ueff,
+      unit: 'W/(m²·K)',
+      traceStepIds: ['thermal.Ueff', 'thermal.R0'],
+      method: thermalMethod(r),
+    },
+    Reff: {
+      value: r.Reff,
+      unit: 'm²·K/W',
+      traceStepIds: ['thermal.Reff', 'thermal.R0'],
+      method: thermalMethod(r),
+    },
     continuousInsulationR: continuousInsulationR(a.thermal.layers),
     cavityInsulationR: cavityInsulationR(a.thermal.layers),
   }),

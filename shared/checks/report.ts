@@ -18,6 +18,31 @@ export type Verdict = z.infer<typeof verdictSchema>;
 
 const checkValueSchema = z.union([z.number(), z.boolean()]).nullable();
 
+/** Which calculation method the provided value comes from, why, and what the other methods give. */
+export const checkMethodSchema = z.object({
+  method: z.string().describe('The deciding method, e.g. energyCode, isoCombined, isothermalPlanes'),
+  label: z.string(),
+  kind: z
+    .enum(['energyCode', 'standard', 'mostConservative'])
+    .describe('The energy code’s own method, the standard that applies, or the lowest R offered'),
+  text: z.string().describe('Why this method decides, in a sentence'),
+  others: z
+    .array(z.object({ method: z.string(), label: z.string(), R: z.number().describe('R_T, m²·K/W') }))
+    .describe('The other methods offered, beside the deciding one'),
+  spread: z.number().describe('(max − min)/mean of every method offered, dimensionless'),
+});
+export type CheckMethod = z.infer<typeof checkMethodSchema>;
+
+/**
+ * The deciding method as the checks page and the sheet print it: "Method: …. Why. Beside it: … (spread …)."
+ * `rValue` formats an R in m²·K/W in the reader's units.
+ */
+export function methodText(m: CheckMethod, rValue: (R: number) => string): string {
+  const others = m.others.map((o) => `${o.label} ${rValue(o.R)}`).join('; ');
+  const spread = `${(m.spread * 100).toFixed(1)} %`;
+  return `Method: ${m.label}. ${m.text}${others ? ` Beside it: ${others} (spread of the methods ${spread}).` : ''}`;
+}
+
 export const checkSchema = z.object({
   /** Stable within a run: `criterion.max_u_factor`, `wind.zone4.girtSpacing`, `joints.2`, `thermal.run`. */
   id: z.string(),
@@ -39,6 +64,7 @@ export const checkSchema = z.object({
   module: z.string(),
   traceStepIds: z.array(z.string()),
   row: z.object({ climateZone: criteriaZoneSchema, wallCategory: wallCategorySchema }).optional(),
+  method: checkMethodSchema.optional(),
 });
 export type Check = z.infer<typeof checkSchema>;
 
@@ -47,6 +73,7 @@ export const metricSchema = z.object({
   unit: z.string(),
   traceStepIds: z.array(z.string()),
   note: z.string().optional(),
+  method: checkMethodSchema.optional(),
 });
 export type Metric = z.infer<typeof metricSchema>;
 export const metricOutcomeSchema = z.union([metricSchema, z.object({ value: z.null(), reason: z.string() })]);

@@ -38,12 +38,36 @@ describe('the compliance runner on the demo assembly', () => {
 
   it('reads U_eff and R_eff from the thermal result, with their trace steps', () => {
     const u = check(report, 'criterion.max_u_factor');
-    expect(u.provided).toBeCloseTo(0.30704, 4);
+    // The demo's 92 mm steel studs at 406 mm are in ASHRAE 90.1 Table A9.2-2: the energy-code path decides.
+    expect(u.provided).toBeCloseTo(0.300343, 5);
     expect(u.margin).toBeCloseTo(0.35 - (u.provided as number), 12);
     expect(u.marginRatio).toBeCloseTo((u.margin as number) / 0.35, 12);
-    expect(u.traceStepIds).toEqual(['thermal.Ueff']);
+    expect(u.traceStepIds).toEqual(['thermal.Ueff', 'thermal.R0']);
     expect(report.steps.find((s) => s.id === 'thermal.Ueff')!.value).toBe(u.provided);
     expect(check(report, 'criterion.min_effective_r').provided).toBeCloseTo(1 / (u.provided as number), 12);
+  });
+
+  it('names the method that decides the thermal rows, with the other methods beside it', () => {
+    for (const id of ['criterion.max_u_factor', 'criterion.min_effective_r']) {
+      const m = check(report, id).method!;
+      expect(m.method).toBe('energyCode');
+      expect(m.kind).toBe('energyCode');
+      expect(m.others.map((o) => o.method)).toEqual(['parallelPath', 'isothermalPlanes', 'zone']);
+      expect(m.text).toMatch(/Table A9\.2-2/);
+    }
+    expect(check(report, 'criterion.min_continuous_insulation_r').method).toBeUndefined();
+  });
+
+  it('uses the lowest R of the methods offered when no energy-code path applies, and says so', () => {
+    const a = demoAssembly();
+    const studs = a.thermal.layers[5];
+    if (studs?.kind !== 'framed') throw new Error('the demo wall has changed');
+    a.thermal.layers[5] = { ...studs, spacing: 0.6 };
+    const r = runChecks(a, demoProject(), [row('min_effective_r', 1)]);
+    const c = check(r, 'criterion.min_effective_r');
+    expect(c.method!.kind).toBe('mostConservative');
+    expect(c.method!.text).toMatch(/lowest of the methods offered/);
+    expect(c.method!.others.every((o) => o.R >= (c.provided as number))).toBe(true);
   });
 
   it('counts continuous insulation by its convention: homogeneous, λ ≤ 0.065, inside the ventilated cavity', () => {

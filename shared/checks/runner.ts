@@ -106,7 +106,12 @@ function criterionCheck(
   const { outcome, run } = found;
   if (outcome.value === null)
     return notEvaluated(run.module.id, run.outcome.status === 'ran' ? outcome.reason : whyNot(run));
-  const common = { module: run.module.id, traceStepIds: outcome.traceStepIds, provided: outcome.value };
+  const common = {
+    module: run.module.id,
+    traceStepIds: outcome.traceStepIds,
+    provided: outcome.value,
+    ...('method' in outcome && outcome.method ? { method: outcome.method } : {}),
+  };
   const note = 'note' in outcome && outcome.note ? outcome.note : '';
   if (spec.direction === 'required') {
     if (typeof row.value !== 'boolean' || typeof outcome.value !== 'boolean')

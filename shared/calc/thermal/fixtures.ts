@@ -15,7 +15,7 @@ export const metalPanelWall = (): ThermalInput => ({
       materialId: 'steel',
     },
     { kind: 'air', name: 'Drained cavity', thickness: 0.025, ventilation: 'slightly' },
-    { kind: 'resistance', name: 'Water-resistive barrier', resistance: 0.01 },
+    { kind: 'resistance', name: 'Water-resistive barrier', resistance: 0.01, thickness: 0.0005 },
     {
       kind: 'homogeneous',
       name: 'Mineral wool board',

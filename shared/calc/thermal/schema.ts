@@ -55,6 +55,11 @@ export const resistanceLayerSchema = z.object({
     .positive()
     .max(50)
     .describe('Declared thermal resistance R, m²·K/W (greater than 0, at most 50)'),
+  thickness: thickness
+    .optional()
+    .describe(
+      'Layer thickness d, m (at least 0.000001 m, at most 2 m) — needed in a wall with metal framing: the zone method measures the distance from the metal to the surface through every layer',
+    ),
 });
 
 export const airLayerSchema = z.object({
@@ -227,7 +232,13 @@ export const thermalInputSchema = z.object({
   bridges: z.array(bridgeSchema).max(40).describe('Bridges crossing the continuous insulation'),
 });
 
-export const methodNameSchema = z.enum(['parallelPath', 'isothermalPlanes', 'isoCombined', 'zone']);
+export const methodNameSchema = z.enum([
+  'parallelPath',
+  'isothermalPlanes',
+  'isoCombined',
+  'zone',
+  'energyCode',
+]);
 
 const rSI = (what: string) => z.number().describe(`${what}, m²·K/W (greater than 0)`);
 const uSI = (what: string) => z.number().describe(`${what}, W/(m²·K) (0 or more)`);
@@ -258,6 +269,26 @@ export const thermalResultSchema = z.object({
       .describe('ISO 6946 maximum relative error e = (R′T − R″T)/(2R_T), dimensionless')
       .nullable(),
     zone: rSI('ASHRAE zone-method total resistance').nullable(),
+    energyCode: rSI(
+      'Energy-code path: ASHRAE 90.1 Appendix A steel-framing table in series with the other layers and the code’s air films',
+    ).nullable(),
+  }),
+  energyCode: z
+    .object({
+      status: z.enum(['applied', 'refused']),
+      text: z.string().describe('The table row used, or why the table does not apply'),
+      source: z.string(),
+      framingR: rSI('Effective framing/cavity R of the steel-framed layer from the table').nullable(),
+    })
+    .nullable()
+    .describe('The energy-code path for a steel-framed wall; null when no layer is metal-framed'),
+  basis: z.object({
+    kind: z
+      .enum(['energyCode', 'standard', 'mostConservative'])
+      .describe(
+        'energyCode: the energy standard’s own method for steel framing; standard: ISO 6946 applies; mostConservative: no code path applies, the lowest R of the methods offered is used',
+      ),
+    text: z.string().describe('Which method gives R₀ and why, in a sentence printed on the sheet'),
   }),
   offeredMethods: z.array(methodNameSchema),
   defaultMethod: methodNameSchema,

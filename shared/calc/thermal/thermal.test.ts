@@ -221,15 +221,57 @@ describe('methods', () => {
     expect(r.trace.find((s) => s.id === 'thermal.R0')?.note).toMatch(/no metal bridges the layers/);
   });
 
-  it('metal framing: ISO 6946 is not offered, the zone method is the default and the trace says why', () => {
+  it('steel framing the energy-code table covers: ISO 6946 is not offered, the energy-code path decides and the trace says why', () => {
     const r = calculateThermal(metalPanelWall());
-    expect(r.defaultMethod).toBe('zone');
-    expect(r.offeredMethods).toEqual(['parallelPath', 'isothermalPlanes', 'zone']);
+    expect(r.defaultMethod).toBe('energyCode');
+    expect(r.basis.kind).toBe('energyCode');
+    expect(r.offeredMethods).toEqual(['parallelPath', 'isothermalPlanes', 'zone', 'energyCode']);
     expect(r.methods.isoCombined).toBeNull();
     expect(r.methods.isoUpper).toBeNull();
-    expect(r.R0).toBe(r.methods.zone);
-    expect(r.trace.find((s) => s.id === 'thermal.R0')?.note).toBe(
-      'ISO 6946:2017 excludes insulation bridged by metal other than fasteners (Scope); the ASHRAE zone method is used',
+    expect(r.R0).toBe(r.methods.energyCode);
+    expect(r.energyCode?.status).toBe('applied');
+    const note = r.trace.find((s) => s.id === 'thermal.R0')?.note ?? '';
+    expect(note).toMatch(/energy-code path for steel framing/);
+    expect(note).toMatch(/ISO 6946:2017 excludes insulation bridged by metal/);
+  });
+
+  it('metal framing outside the table: the lowest R of the methods offered decides, and the reason is given', () => {
+    const input = metalPanelWall();
+    const studs = input.layers[6] as FramedLayer;
+    input.layers[6] = { ...studs, spacing: 0.6 };
+    const r = calculateThermal(input);
+    expect(r.energyCode?.status).toBe('refused');
+    expect(r.energyCode?.text).toMatch(/16 in and 24 in on centre; these are at 23\.62 in \(600 mm\)/);
+    expect(r.methods.energyCode).toBeNull();
+    expect(r.offeredMethods).toEqual(['parallelPath', 'isothermalPlanes', 'zone']);
+    expect(r.basis.kind).toBe('mostConservative');
+    expect(r.R0).toBe(Math.min(r.methods.parallelPath, r.methods.isothermalPlanes, r.methods.zone!));
+    expect(r.basis.text).toMatch(/lowest of the methods offered/);
+  });
+
+  it('energy-code path: films, other layers and the table value in series (derived)', () => {
+    const r = calculateThermal(metalPanelWall());
+    const s = r.trace.find((t) => t.id === 'thermal.R.energyCode')!;
+    const sum =
+      s.inputs['R_film,e']!.value +
+      s.inputs['ΣR_other layers']!.value +
+      s.inputs['R_framing,eff']!.value +
+      s.inputs['R_film,i']!.value;
+    expect(s.value).toBeCloseTo(sum, 12);
+    // ASHRAE 90.1 §A9.4.1 films and R-0.68 (IP) → SI.
+    expect(s.inputs['R_film,e']!.value).toBeCloseTo(0.17 * R_IP_TO_SI, 12);
+    expect(s.inputs['R_film,i']!.value).toBeCloseTo(0.68 * R_IP_TO_SI, 12);
+    // 92 mm studs with λ 0.04 batts: rated, between the R-13 (6.0) and R-15 (6.4) rows at 16 in.
+    const rated = 0.092 / 0.04 / R_IP_TO_SI;
+    expect(s.inputs['R_framing,eff']!.value / R_IP_TO_SI).toBeCloseTo(6.0 + ((rated - 13) * 0.4) / 2, 9);
+  });
+
+  it('a second framed layer, or heat flowing up, leaves the energy-code path out with the reason', () => {
+    const input = metalPanelWall();
+    input.layers.splice(9, 0, { ...woodStuds, name: 'Service battens' });
+    expect(calculateThermal(input).energyCode?.text).toMatch(/Service battens is framed too/);
+    expect(calculateThermal({ ...metalPanelWall(), heatFlow: 'upward' }).energyCode?.text).toMatch(
+      /for walls; heat flows upward/,
     );
   });
 
@@ -242,8 +284,13 @@ describe('methods', () => {
 
   it('method spread is (max − min)/mean of the offered methods', () => {
     const r = calculateThermal(metalPanelWall());
-    const offered = [r.methods.parallelPath, r.methods.isothermalPlanes, r.methods.zone!];
-    const mean = (offered[0]! + offered[1]! + offered[2]!) / 3;
+    const offered = [
+      r.methods.parallelPath,
+      r.methods.isothermalPlanes,
+      r.methods.zone!,
+      r.methods.energyCode!,
+    ];
+    const mean = offered.reduce((a, b) => a + b, 0) / offered.length;
     expect(r.methodSpread).toBeCloseTo((Math.max(...offered) - Math.min(...offered)) / mean, 12);
   });
 
@@ -395,6 +442,15 @@ describe('input errors carry the dotted field path', () => {
       'NaN declared resistance',
       () => calculateThermal(wall([{ kind: 'resistance', name: 'R', resistance: Number.NaN }])),
       'layers.0.resistance',
+    ],
+    [
+      'a declared-R layer without its thickness in a wall with metal framing',
+      () => {
+        const input = metalPanelWall();
+        input.layers[2] = { kind: 'resistance', name: 'Water-resistive barrier', resistance: 0.01 };
+        return calculateThermal(input);
+      },
+      'layers.2.thickness',
     ],
     [
       'fractions that do not sum to 1',

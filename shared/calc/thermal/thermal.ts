@@ -1,6 +1,12 @@
 import { CalcInputError } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
 import { R_IP_TO_SI, U_IP_TO_SI } from '@shared/units';
+import {
+  ENERGY_CODE_FILMS_SOURCE,
+  ENERGY_CODE_SOURCE,
+  energyCodeFilms,
+  steelFramingEffectiveR,
+} from './energy-code';
 import { findMaterial } from './materials';
 import type {
   Bridge,
@@ -19,7 +25,10 @@ import type {
 /*
  * Clear-field and effective thermal resistance of a layered wall (outside → inside), SI throughout.
  * ISO 6946:2017 for layers, surfaces, air layers, the combined method and Annex F fasteners; ASHRAE
- * Handbook—Fundamentals (2021) ch. 27 for parallel path, isothermal planes and the zone method for metal.
+ * Handbook—Fundamentals (2021) ch. 27 for parallel path, isothermal planes and the zone method for metal;
+ * ASHRAE 90.1-2016 Appendix A (energy-code.ts) for the energy-code path of steel-framed walls. Which method
+ * gives R₀ (DEVELOPERS.md D-101): a steel-framed wall the table covers → the energy-code path; other metal
+ * framing → the lowest R of the methods offered; no metal → ISO 6946 combined.
  *
  * Provenance of the constants below: Table 7, the R′T/R″T ≤ 1.5 limit, the Annex F rules and the
  * slightly-ventilated 0.15 m²·K/W cap are recalled from ISO 6946:2017, not re-read; Table 8 is recalled and
@@ -43,14 +52,15 @@ const SRC_FASTENER = 'ISO 6946:2017 Annex F';
 const SRC_PARALLEL = 'ASHRAE Handbook—Fundamentals (2021) ch. 27, parallel-path method';
 const SRC_ISOTHERMAL = 'ASHRAE Handbook—Fundamentals (2021) ch. 27, isothermal-planes method';
 const SRC_ZONE = 'ASHRAE Handbook—Fundamentals (2021) ch. 27, zone method for metal sections';
+const SRC_ENERGY_CODE = `${ENERGY_CODE_SOURCE}; ${ENERGY_CODE_FILMS_SOURCE}`;
 const SRC_BRIDGE = 'ISO 14683:2017 / ISO 10211:2017, U = U₀ + (Σψ·L + Σχ)/A';
 const SRC_U = 'ISO 6946:2017, U = 1/R_T';
 
 const NOTE_METAL_SCOPE =
-  'ISO 6946:2017 excludes insulation bridged by metal other than fasteners (Scope); the ASHRAE zone method is used';
+  'ISO 6946:2017 excludes insulation bridged by metal other than fasteners (Scope), so its combined method is not offered';
 const NOTE_ISO_DEFAULT =
-  'ISO 6946:2017 combined method is the default: no metal bridges the layers, so the standard applies; it brackets R_T between its upper and lower limits and states the maximum error';
-const NOTE_HOMOGENEOUS = 'All layers are homogeneous: every method gives the same R_T';
+  'ISO 6946:2017 combined method: no metal bridges the layers, so the standard applies; it brackets R_T between its upper and lower limits and states the maximum error.';
+const NOTE_HOMOGENEOUS = 'All layers are homogeneous: every method gives the same R_T.';
 
 /** Fractions of a framed layer must sum to 1 within this tolerance. */
 export const FRACTION_TOLERANCE = 1e-6;
@@ -65,10 +75,19 @@ const SLIGHTLY_VENTILATED_OUTSIDE_MAX = 0.15;
  * paths); more than this many is no real wall and would take exponential time (8 sections × 40 layers).
  */
 export const MAX_PARALLEL_PATHS = 10_000;
-/** ASHRAE zone method: d is taken as no less than 0.5 in (still-air film), m. */
+/** ASHRAE zone method: d is taken as no less than 0.5 in (still-air film), m (Fundamentals ch. 27). */
 export const ZONE_MIN_DISTANCE = 0.0127;
 /** Radiative coefficient of a black body at 10 °C, h_r0 = 4σT_m³, W/(m²·K) (ISO 6946:2017 Annex C/D). */
 const H_R0 = 5.1;
+
+/** What a practitioner calls each method (screens, sheet and the sentence saying which method decides). */
+export const METHOD_LABELS: Readonly<Record<MethodName, string>> = {
+  parallelPath: 'Parallel path (ASHRAE)',
+  isothermalPlanes: 'Isothermal planes (ASHRAE)',
+  isoCombined: 'ISO 6946 combined, (R′T + R″T)/2',
+  zone: 'Zone method for metal framing (ASHRAE)',
+  energyCode: 'Energy-code path for steel framing (ASHRAE 90.1 Appendix A)',
+};
 
 /** ISO 6946:2017 Table 7 — conventional surface resistances, m²·K/W. */
 export const SURFACE_RESISTANCES: Readonly<Record<HeatFlow, { Rsi: number; Rse: number }>> = {
@@ -203,13 +222,18 @@ export interface ZoneMethodInput {
   flangeWidth: number;
   /** Member spacing s, m. */
   spacing: number;
-  /** Distance d from the flange to the wall surface, m (raised to 0.5 in if smaller). */
+  /**
+   * Distance d from the metal flange to the panel surface, m: the thickness of every layer between them on
+   * the deeper side, insulation and declared-R layers included (raised to 0.5 in if smaller).
+   */
   distance: number;
 }
 
 /**
- * Zone method: W = m + 2d (d ≥ 0.5 in); zone A by isothermal planes across W, zone B the cavity path,
- * U = (W/s)/R_A + (1 − W/s)/R_B (ASHRAE Handbook—Fundamentals 2021 ch. 27, zone method).
+ * Zone method: W = m + 2d, m the width of the metal heat-path terminal (flange), d the distance from the
+ * panel surface to the metal, not less than 0.5 in; zone A by isothermal planes across W, zone B the cavity
+ * path, U = (W/s)/R_A + (1 − W/s)/R_B (ASHRAE Handbook—Fundamentals 2021 ch. 27, zone method; d measured on
+ * the thicker side, as the ORNL modified-zone-method notes describe the ASHRAE zone method).
  */
 export function zoneMethod(p: ZoneMethodInput): { R: number; zoneWidth: number; RA: number; RB: number } {
   const web = p.memberFraction * p.spacing;
@@ -296,6 +320,7 @@ function validateLayer(layer: Layer, i: number): void {
       return;
     case 'resistance':
       positiveAt(layer.resistance, 'layers', i, 'resistance', 'declared resistance');
+      if (layer.thickness !== undefined) positiveAt(layer.thickness, 'layers', i, 'thickness', 'thickness');
       return;
     case 'air':
       positiveAt(layer.thickness, 'layers', i, 'thickness', 'thickness');
@@ -519,14 +544,112 @@ function splitMember(sections: readonly FramedSection[]): {
   return { member, cavityConductivity: fl / f };
 }
 
-/** Thickness of the layers from `from` to `to` (exclusive); declared resistances count as 0. */
+/** Thickness of the layers from `from` to `to` (exclusive), declared-R layers by their own thickness. */
 function depth(layers: readonly Layer[], from: number, to: number): number {
   let d = 0;
-  for (let i = from; i < to; i++) {
-    const l = layers[i]!;
-    if (l.kind !== 'resistance') d += l.thickness;
-  }
+  for (let i = from; i < to; i++) d += layers[i]!.thickness ?? 0;
   return d;
+}
+
+/**
+ * In a wall with metal framing every declared-R layer must say how thick it is: the zone method's d runs
+ * through it, and counting it as 0 would narrow zone A and overstate R (a 100 mm board entered as R gave
+ * R₀ 17 % higher than the same board entered as d/λ).
+ */
+function requireDeclaredThickness(layers: readonly Layer[], start: number): void {
+  for (let i = start; i < layers.length; i++) {
+    const l = layers[i]!;
+    if (l.kind === 'resistance' && l.thickness === undefined)
+      throw new CalcInputError(
+        `layers.${i}.thickness`,
+        'a declared-R layer in a wall with metal framing needs its thickness: the zone method measures the distance from the metal flange to the surface through it',
+      );
+  }
+}
+
+/**
+ * Energy-code path of a steel-framed wall: R_T = R_film,e + ΣR of the other layers + R_framing,eff (table) +
+ * R_film,i (ASHRAE 90.1-2016 Appendix A, Table A9.2-2 and §A9.4.1). `otherLayersR` is every kept layer but
+ * the framed ones, surfaces excluded. Refused (with the reason) where the table does not reach.
+ */
+function energyCodePath(
+  layers: readonly Layer[],
+  start: number,
+  metalIndex: number,
+  cavityConductivity: number,
+  heatFlow: HeatFlow,
+  otherLayersR: number,
+): { info: NonNullable<ThermalResult['energyCode']>; step: TraceStep | null } {
+  const layer = layers[metalIndex] as FramedLayer;
+  const refused = (text: string) => ({
+    info: { status: 'refused' as const, text, source: ENERGY_CODE_SOURCE, framingR: null },
+    step: null,
+  });
+  const otherFramed = layers.findIndex((l, i) => i >= start && i !== metalIndex && l.kind === 'framed');
+  if (otherFramed >= 0)
+    return refused(
+      `the table's series sum takes one framed layer, and ${layers[otherFramed]!.name} is framed too`,
+    );
+  const ratedR = layer.thickness / cavityConductivity;
+  const lookup = steelFramingEffectiveR(layer.thickness, layer.spacing!, ratedR, heatFlow);
+  if (lookup.status === 'refused') return refused(lookup.reason);
+  const films = energyCodeFilms(heatFlow);
+  const R = films.exterior + otherLayersR + lookup.framingR + films.interior;
+  return {
+    info: { status: 'applied', text: lookup.row, source: ENERGY_CODE_SOURCE, framingR: lookup.framingR },
+    step: step(
+      'thermal.R.energyCode',
+      `Total resistance, energy-code path (${layer.name})`,
+      'R_T = R_film,e + ΣR_other layers + R_framing,eff + R_film,i',
+      SRC_ENERGY_CODE,
+      {
+        'R_film,e': v(films.exterior, RK),
+        'ΣR_other layers': v(otherLayersR, RK),
+        'R_cavity,rated': v(ratedR, RK),
+        'R_framing,eff': v(lookup.framingR, RK),
+        'R_film,i': v(films.interior, RK),
+      },
+      R,
+      RK,
+      `Effective framing/cavity R from the table: ${lookup.row}; rated cavity R = d/λ of the cavity fill; the standard's air films replace Rse and Rsi`,
+    ),
+  };
+}
+
+/**
+ * Which method gives R₀ (DEVELOPERS.md D-101): the energy-code path where it applies to a steel-framed wall;
+ * other metal framing → the lowest R of the methods offered (never the least conservative); no metal → ISO
+ * 6946 combined, the standard's own method.
+ */
+function decidingMethod(
+  byMethod: Partial<Record<MethodName, number>>,
+  offered: readonly MethodName[],
+  metal: boolean,
+  energyCode: ThermalResult['energyCode'],
+  framed: boolean,
+): { method: MethodName; basis: ThermalResult['basis'] } {
+  if (!metal)
+    return {
+      method: 'isoCombined',
+      basis: { kind: 'standard', text: framed ? NOTE_ISO_DEFAULT : NOTE_HOMOGENEOUS },
+    };
+  if (energyCode?.status === 'applied')
+    return {
+      method: 'energyCode',
+      basis: {
+        kind: 'energyCode',
+        text: `R₀ is taken by the energy-code path for steel framing — the effective framing/cavity R of ${energyCode.source} (${energyCode.text}) in series with the other layers — the method the energy standard prescribes for this wall; the other methods are shown beside it.`,
+      },
+    };
+  let lowest = offered[0]!;
+  for (const m of offered) if (byMethod[m]! < byMethod[lowest]!) lowest = m;
+  return {
+    method: lowest,
+    basis: {
+      kind: 'mostConservative',
+      text: `No energy-code path applies (${energyCode?.text ?? 'no steel framing table'}), so R₀ is the lowest of the methods offered — ${METHOD_LABELS[lowest]} — and never rests on the least conservative one.`,
+    },
+  };
 }
 
 /** Clear-field and effective thermal performance of a wall; `input` is already parsed by thermalInputSchema. */
@@ -644,10 +767,13 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
   let isoCombined: number | null = null;
   let isoError: number | null = null;
   let zone: number | null = null;
-  let defaultMethod: MethodName;
-  let note: string;
+  let energyCodeR: number | null = null;
+  let energyCode: ThermalResult['energyCode'] = null;
+  const offeredMethods: MethodName[] = ['parallelPath', 'isothermalPlanes'];
+  const byMethod: Partial<Record<MethodName, number>> = { parallelPath: pp, isothermalPlanes: ip };
 
   if (metalIndex >= 0) {
+    requireDeclaredThickness(layers, start);
     const layer = layers[metalIndex] as FramedLayer;
     const { member, cavityConductivity } = splitMember(layer.sections);
     const restResistance = ip - framedLayerIsothermalResistance(layer.thickness, layer.sections);
@@ -663,8 +789,8 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
       distance,
     });
     zone = z.R;
-    defaultMethod = 'zone';
-    note = NOTE_METAL_SCOPE;
+    offeredMethods.push('zone');
+    byMethod.zone = zone;
     trace.push(
       step(
         'thermal.R.zone',
@@ -681,17 +807,25 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
         },
         z.R,
         RK,
-        'd is the larger distance from the flange to either surface, at least 0.5 in; the member is the section with the highest λ',
+        'd is the distance from the flange to the surface on the deeper side — every layer between them, declared-R layers by their thickness — at least 0.5 in; the member is the section with the highest λ',
       ),
     );
+    const code = energyCodePath(layers, start, metalIndex, cavityConductivity, heatFlow, seriesR - Rsi - Rse);
+    energyCode = code.info;
+    if (code.step) {
+      energyCodeR = code.step.value;
+      offeredMethods.push('energyCode');
+      byMethod.energyCode = energyCodeR;
+      trace.push(code.step);
+    }
   } else {
     const c = iso6946Combined(pp, ip);
     isoUpper = pp;
     isoLower = ip;
     isoCombined = c.R;
     isoError = c.error;
-    defaultMethod = 'isoCombined';
-    note = framed.length > 0 ? NOTE_ISO_DEFAULT : NOTE_HOMOGENEOUS;
+    offeredMethods.push('isoCombined');
+    byMethod.isoCombined = c.R;
     trace.push(
       step(
         'thermal.R.isoUpper',
@@ -737,23 +871,28 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
       );
   }
 
-  const offeredMethods: MethodName[] =
-    metalIndex >= 0
-      ? ['parallelPath', 'isothermalPlanes', 'zone']
-      : ['parallelPath', 'isothermalPlanes', 'isoCombined'];
-  const R0 = (metalIndex >= 0 ? zone : isoCombined)!;
-  const methodSpread = ((Math.max(pp, ip, R0) - Math.min(pp, ip, R0)) * 3) / (pp + ip + R0);
+  const { method: defaultMethod, basis } = decidingMethod(
+    byMethod,
+    offeredMethods,
+    metalIndex >= 0,
+    energyCode,
+    framed.length > 0,
+  );
+  const R0 = byMethod[defaultMethod]!;
+  const offered = offeredMethods.map((m) => byMethod[m]!);
+  const mean = offered.reduce((a, b) => a + b, 0) / offered.length;
+  const methodSpread = (Math.max(...offered) - Math.min(...offered)) / mean;
   const U0 = 1 / R0;
   trace.push(
     step(
       'thermal.R0',
       'Clear-field total resistance R₀',
-      `R₀ = R_T by the ${defaultMethod} method`,
-      metalIndex >= 0 ? SRC_SCOPE_ZONE : SRC_ISO_LIMITS,
+      `R₀ = R_T by the ${METHOD_LABELS[defaultMethod]}`,
+      defaultMethod === 'energyCode' ? SRC_ENERGY_CODE : metalIndex >= 0 ? SRC_SCOPE_ZONE : SRC_ISO_LIMITS,
       {},
       R0,
       RK,
-      note,
+      metalIndex >= 0 ? `${basis.text} ${NOTE_METAL_SCOPE}.` : basis.text,
     ),
     step(
       'thermal.U0',
@@ -819,7 +958,18 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
     ip: { R0: R0 / R_IP_TO_SI, Reff: Reff / R_IP_TO_SI, U0: U0 / U_IP_TO_SI, Ueff: Ueff / U_IP_TO_SI },
     Rsi,
     Rse,
-    methods: { parallelPath: pp, isothermalPlanes: ip, isoUpper, isoLower, isoCombined, isoError, zone },
+    methods: {
+      parallelPath: pp,
+      isothermalPlanes: ip,
+      isoUpper,
+      isoLower,
+      isoCombined,
+      isoError,
+      zone,
+      energyCode: energyCodeR,
+    },
+    energyCode,
+    basis,
     offeredMethods,
     defaultMethod,
     methodSpread,

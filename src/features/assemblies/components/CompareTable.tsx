@@ -1,11 +1,11 @@
 import type { ThermalResult } from '@shared/calc/thermal/schema';
+import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
 import type { AssemblyInput } from '@shared/schemas/assembly';
 import type { UnitSystem } from '@shared/units';
 import type { ReactNode } from 'react';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { formatMeasure, formatR, formatShare, formatU } from '../units';
-import { METHOD_LABELS } from './MethodSection';
 
 export interface CompareColumn {
   key: string;

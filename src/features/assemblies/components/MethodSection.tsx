@@ -1,59 +1,41 @@
 import type { MethodName, ThermalResult } from '@shared/calc/thermal/schema';
+import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
 import { Notice } from '../../../components/ui/Notice';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { formatR } from '../units';
 
-export const METHOD_LABELS: Record<MethodName, string> = {
-  parallelPath: 'Parallel path (ASHRAE)',
-  isothermalPlanes: 'Isothermal planes (ASHRAE)',
-  isoCombined: 'ISO 6946 combined, (R′T + R″T)/2',
-  zone: 'Zone method for metal framing (ASHRAE)',
+const METHOD_NOTES: Record<MethodName, (r: ThermalResult) => string | undefined> = {
+  parallelPath: () => 'heat flows straight through each path',
+  isothermalPlanes: () => 'each bridged layer averaged across its sections',
+  isoCombined: (r) =>
+    r.methods.isoError != null
+      ? `maximum relative error e = ${(r.methods.isoError * 100).toFixed(1)} %`
+      : undefined,
+  zone: () => 'zone around each metal member taken by isothermal planes',
+  energyCode: (r) => r.energyCode?.text,
 };
 
-/** Which method gave R₀, why (from the engine's own trace note), and how far the methods spread. */
+/** Which method gave R₀ and why (the engine's own sentence), every method offered, and how far they spread. */
 export function MethodSection({ result }: { result: ThermalResult }) {
-  const why = result.trace.find((s) => s.id === 'thermal.R0')?.note;
-  const m = result.methods;
-  const rows: { key: string; label: string; value: number | null; used: boolean; note?: string }[] = [
-    {
-      key: 'pp',
-      label: METHOD_LABELS.parallelPath,
-      value: m.parallelPath,
-      used: false,
-      note: 'heat flows straight through each path',
-    },
-    {
-      key: 'ip',
-      label: METHOD_LABELS.isothermalPlanes,
-      value: m.isothermalPlanes,
-      used: false,
-      note: 'each bridged layer averaged across its sections',
-    },
-  ];
-  if (result.offeredMethods.includes('isoCombined'))
-    rows.push({
-      key: 'iso',
-      label: METHOD_LABELS.isoCombined,
-      value: m.isoCombined,
-      used: result.defaultMethod === 'isoCombined',
-      note: m.isoError != null ? `maximum relative error e = ${(m.isoError * 100).toFixed(1)} %` : undefined,
-    });
-  if (result.offeredMethods.includes('zone'))
-    rows.push({
-      key: 'zone',
-      label: METHOD_LABELS.zone,
-      value: m.zone,
-      used: result.defaultMethod === 'zone',
-      note: 'zone around each metal member taken by isothermal planes',
-    });
+  const rows = result.offeredMethods.map((m) => ({
+    key: m,
+    label: METHOD_LABELS[m],
+    value: result.methods[m],
+    used: result.defaultMethod === m,
+    note: METHOD_NOTES[m](result),
+  }));
+  const refused = result.energyCode?.status === 'refused' ? result.energyCode : null;
 
-  const metal = result.defaultMethod === 'zone';
+  const metal = result.methods.zone !== null;
   return (
     <div className="flex flex-col gap-4">
       <p>
         <span className="font-semibold">Used: {METHOD_LABELS[result.defaultMethod]}.</span>{' '}
-        {why ? <span>{sentence(why)}</span> : null}
+        <span>{sentence(result.basis.text)}</span>
       </p>
+      {refused ? (
+        <p className="text-sm text-ink-muted">Energy-code path not applied: {sentence(refused.text)}</p>
+      ) : null}
       <Table caption="Clear-field total resistance R_T by each method offered">
         <thead>
           <tr>
@@ -99,9 +81,10 @@ export function MethodSection({ result }: { result: ThermalResult }) {
         <Notice tone="info" title="ISO 6946 and metal framing.">
           <p>
             ISO 6946:2017 does not cover layers bridged by metal other than fasteners, so its combined method
-            is not offered here. Parallel path and isothermal planes are listed for comparison only: across
-            metal framing they bracket the answer loosely. Where a certified figure is needed, use a
-            three-dimensional numerical calculation (ISO 10211) or a guarded hot-box test of the wall.
+            is not offered here. A code check of this wall uses the method named above: the energy code’s own
+            table where it covers the studs, otherwise the lowest R of the methods shown. Where a certified
+            figure is needed, use a three-dimensional numerical calculation (ISO 10211) or a guarded hot-box
+            test of the wall.
           </p>
         </Notice>
       ) : null}

@@ -1,6 +1,6 @@
 import type { TraceStep } from '@shared/calc/trace';
 import { categoryLabel, zoneLabel } from '@shared/checks/criteria';
-import type { Check, Verdict } from '@shared/checks/report';
+import { type Check, methodText, type Verdict } from '@shared/checks/report';
 import type { CheckRun } from '@shared/schemas/check-runs';
 import type { UnitSystem } from '@shared/units';
 import { Table, Td, Th } from '../../../components/ui/Table';
@@ -104,6 +104,11 @@ function CheckTable({
                 ) : null}
                 {c.status !== 'not_evaluated' && c.reason ? (
                   <span className="block text-xs text-ink-muted">{c.reason}</span>
+                ) : null}
+                {c.method ? (
+                  <span className="block text-xs" data-testid="check-method">
+                    {methodText(c.method, (R) => formatSiValue(R, 'm²·K/W', system))}
+                  </span>
                 ) : null}
                 <Steps ids={c.traceStepIds} steps={steps} system={system} />
               </Td>

@@ -13,7 +13,7 @@ export default defineConfig({
   resolve: { alias },
   // convert-units reads `global`; the browser has only globalThis.
   define: { global: 'globalThis' },
-  build: { outDir: 'dist/client', emptyOutDir: true, manifest: true, chunkSizeWarningLimit: 1500 },
+  build: { outDir: 'dist/client', emptyOutDir: true, manifest: true },
   test: {
     projects: [
       {

@@ -1,12 +1,23 @@
-import '@fontsource/source-serif-4/400.css';
-import '@fontsource/source-serif-4/600.css';
-import '@fontsource/public-sans/400.css';
-import '@fontsource/public-sans/500.css';
-import '@fontsource/public-sans/600.css';
-import '@fontsource/public-sans/700.css';
-import '@fontsource/public-sans/400-italic.css';
-import '@fontsource/ibm-plex-mono/400.css';
-import '@fontsource/ibm-plex-mono/500.css';
+// Only the Latin subsets (basic and extended) of the three faces ship; a character outside them (Greek
+// symbols such as λ, χ, ψ) falls back to the next font of the stack in styles.css.
+import '@fontsource/source-serif-4/latin-400.css';
+import '@fontsource/source-serif-4/latin-ext-400.css';
+import '@fontsource/source-serif-4/latin-600.css';
+import '@fontsource/source-serif-4/latin-ext-600.css';
+import '@fontsource/public-sans/latin-400.css';
+import '@fontsource/public-sans/latin-ext-400.css';
+import '@fontsource/public-sans/latin-500.css';
+import '@fontsource/public-sans/latin-ext-500.css';
+import '@fontsource/public-sans/latin-600.css';
+import '@fontsource/public-sans/latin-ext-600.css';
+import '@fontsource/public-sans/latin-700.css';
+import '@fontsource/public-sans/latin-ext-700.css';
+import '@fontsource/public-sans/latin-400-italic.css';
+import '@fontsource/public-sans/latin-ext-400-italic.css';
+import '@fontsource/ibm-plex-mono/latin-400.css';
+import '@fontsource/ibm-plex-mono/latin-ext-400.css';
+import '@fontsource/ibm-plex-mono/latin-500.css';
+import '@fontsource/ibm-plex-mono/latin-ext-500.css';
 import './styles.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';

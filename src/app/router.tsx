@@ -1,5 +1,6 @@
 import { uuidParam } from '@shared/schemas/common';
 import type { QueryClient } from '@tanstack/react-query';
+import type { ComponentType } from 'react';
 import { createBrowserRouter, data, type LoaderFunctionArgs, redirect } from 'react-router';
 import { meQueryOptions } from '../features/me/api/get-me';
 import { projectQueryOptions } from '../features/projects/api/get-project';
@@ -7,40 +8,16 @@ import { signInPath } from '../lib/safe-next';
 import { AppShell } from './layout/AppShell';
 import { ProjectLayout } from './layout/ProjectLayout';
 import { RequireSession } from './layout/RequireSession';
-import { AdminMailPage } from './routes/AdminMailPage';
-import { AssemblyAttachmentPage } from './routes/AssemblyAttachmentPage';
-import { AssemblyBuilderPage } from './routes/AssemblyBuilderPage';
-import { AssemblyChecksPage } from './routes/AssemblyChecksPage';
-import { AssemblyJointsPage } from './routes/AssemblyJointsPage';
-import { AssemblyMoisturePage } from './routes/AssemblyMoisturePage';
-import { AssemblyRevisionPage } from './routes/AssemblyRevisionPage';
-import { CheckRunSheetPage } from './routes/CheckRunSheetPage';
-import { CodeTablesPage } from './routes/CodeTablesPage';
-import { CompareAssembliesPage } from './routes/CompareAssembliesPage';
-import { CriteriaDiffPage } from './routes/CriteriaDiffPage';
-import { CriteriaSetPage } from './routes/CriteriaSetPage';
-import { ForgotPasswordPage } from './routes/ForgotPasswordPage';
-import { InvitePage } from './routes/InvitePage';
-import { LibraryPage } from './routes/LibraryPage';
-import { NewAssemblyPage } from './routes/NewAssemblyPage';
-import { NewProjectPage } from './routes/NewProjectPage';
-import { NewSubmittalPage } from './routes/NewSubmittalPage';
 import { NotFoundPage } from './routes/NotFoundPage';
-import { ProjectActivityPage } from './routes/ProjectActivityPage';
-import { ProjectAssembliesPage } from './routes/ProjectAssembliesPage';
-import { ProjectClimatePage } from './routes/ProjectClimatePage';
-import { ProjectMembersPage } from './routes/ProjectMembersPage';
-import { ProjectOverviewPage } from './routes/ProjectOverviewPage';
-import { ProjectSubmittalsPage } from './routes/ProjectSubmittalsPage';
-import { ProjectsPage } from './routes/ProjectsPage';
-import { ProjectWindPage } from './routes/ProjectWindPage';
-import { ResetPasswordPage } from './routes/ResetPasswordPage';
 import { RouteError } from './routes/RouteError';
-import { SettingsPage } from './routes/SettingsPage';
-import { SignInPage } from './routes/SignInPage';
-import { SignUpPage } from './routes/SignUpPage';
-import { SubmittalPage } from './routes/SubmittalPage';
-import { VerifyPage } from './routes/VerifyPage';
+
+/**
+ * A route whose page is a chunk of its own, loaded on the first visit: the first page a person opens
+ * downloads only what it draws (the charts, for one, come only with the pages that draw them).
+ */
+const page = (load: () => Promise<ComponentType>) => ({
+  lazy: async () => ({ Component: await load() }),
+});
 
 /**
  * Routes. Loaders use the same query options as the components (ensureQueryData), so a page renders
@@ -100,83 +77,174 @@ export function createAppRouter(queryClient: QueryClient) {
         {
           errorElement: <RouteError />,
           children: [
-            { path: '/sign-in', element: <SignInPage /> },
-            { path: '/sign-up', element: <SignUpPage /> },
-            { path: '/forgot-password', element: <ForgotPasswordPage /> },
-            { path: '/reset-password', element: <ResetPasswordPage /> },
-            { path: '/invite/:token', element: <InvitePage /> },
+            { path: '/sign-in', ...page(() => import('./routes/SignInPage').then((m) => m.SignInPage)) },
+            { path: '/sign-up', ...page(() => import('./routes/SignUpPage').then((m) => m.SignUpPage)) },
+            {
+              path: '/forgot-password',
+              ...page(() => import('./routes/ForgotPasswordPage').then((m) => m.ForgotPasswordPage)),
+            },
+            {
+              path: '/reset-password',
+              ...page(() => import('./routes/ResetPasswordPage').then((m) => m.ResetPasswordPage)),
+            },
+            {
+              path: '/invite/:token',
+              ...page(() => import('./routes/InvitePage').then((m) => m.InvitePage)),
+            },
             // Public: anyone holding a compliance sheet confirms it here without signing in.
-            { path: '/verify/:code', element: <VerifyPage /> },
+            { path: '/verify/:code', ...page(() => import('./routes/VerifyPage').then((m) => m.VerifyPage)) },
             {
               loader: requireSession,
               element: <RequireSession />,
               children: [
                 { path: '/', loader: () => redirect('/projects') },
-                { path: '/projects', element: <ProjectsPage /> },
-                { path: '/projects/new', element: <NewProjectPage /> },
+                {
+                  path: '/projects',
+                  ...page(() => import('./routes/ProjectsPage').then((m) => m.ProjectsPage)),
+                },
+                {
+                  path: '/projects/new',
+                  ...page(() => import('./routes/NewProjectPage').then((m) => m.NewProjectPage)),
+                },
                 {
                   path: '/projects/:id',
                   loader: loadProject,
                   element: <ProjectLayout />,
                   children: [
-                    { index: true, element: <ProjectOverviewPage /> },
-                    { path: 'assemblies', element: <ProjectAssembliesPage /> },
-                    { path: 'assemblies/new', element: <NewAssemblyPage /> },
-                    { path: 'assemblies/compare', element: <CompareAssembliesPage /> },
+                    {
+                      index: true,
+                      ...page(() =>
+                        import('./routes/ProjectOverviewPage').then((m) => m.ProjectOverviewPage),
+                      ),
+                    },
+                    {
+                      path: 'assemblies',
+                      ...page(() =>
+                        import('./routes/ProjectAssembliesPage').then((m) => m.ProjectAssembliesPage),
+                      ),
+                    },
+                    {
+                      path: 'assemblies/new',
+                      ...page(() => import('./routes/NewAssemblyPage').then((m) => m.NewAssemblyPage)),
+                    },
+                    {
+                      path: 'assemblies/compare',
+                      ...page(() =>
+                        import('./routes/CompareAssembliesPage').then((m) => m.CompareAssembliesPage),
+                      ),
+                    },
                     {
                       path: 'assemblies/:assemblyId',
                       loader: checkAssemblyId,
-                      element: <AssemblyBuilderPage />,
+                      ...page(() =>
+                        import('./routes/AssemblyBuilderPage').then((m) => m.AssemblyBuilderPage),
+                      ),
                     },
                     {
                       path: 'assemblies/:assemblyId/attachment',
                       loader: checkAssemblyId,
-                      element: <AssemblyAttachmentPage />,
+                      ...page(() =>
+                        import('./routes/AssemblyAttachmentPage').then((m) => m.AssemblyAttachmentPage),
+                      ),
                     },
                     {
                       path: 'assemblies/:assemblyId/moisture',
                       loader: checkAssemblyId,
-                      element: <AssemblyMoisturePage />,
+                      ...page(() =>
+                        import('./routes/AssemblyMoisturePage').then((m) => m.AssemblyMoisturePage),
+                      ),
                     },
                     {
                       path: 'assemblies/:assemblyId/joints',
                       loader: checkAssemblyId,
-                      element: <AssemblyJointsPage />,
+                      ...page(() => import('./routes/AssemblyJointsPage').then((m) => m.AssemblyJointsPage)),
                     },
                     {
                       path: 'assemblies/:assemblyId/checks',
                       loader: checkAssemblyId,
-                      element: <AssemblyChecksPage />,
+                      ...page(() => import('./routes/AssemblyChecksPage').then((m) => m.AssemblyChecksPage)),
                     },
                     {
                       path: 'assemblies/:assemblyId/revisions/:revision',
                       loader: checkAssemblyId,
-                      element: <AssemblyRevisionPage />,
+                      ...page(() =>
+                        import('./routes/AssemblyRevisionPage').then((m) => m.AssemblyRevisionPage),
+                      ),
                     },
                     {
                       path: 'check-runs/:runId/sheet',
                       loader: checkRunId,
-                      element: <CheckRunSheetPage />,
+                      ...page(() => import('./routes/CheckRunSheetPage').then((m) => m.CheckRunSheetPage)),
                     },
-                    { path: 'submittals', element: <ProjectSubmittalsPage /> },
-                    { path: 'submittals/new', element: <NewSubmittalPage /> },
+                    {
+                      path: 'submittals',
+                      ...page(() =>
+                        import('./routes/ProjectSubmittalsPage').then((m) => m.ProjectSubmittalsPage),
+                      ),
+                    },
+                    {
+                      path: 'submittals/new',
+                      ...page(() => import('./routes/NewSubmittalPage').then((m) => m.NewSubmittalPage)),
+                    },
                     {
                       path: 'submittals/:submittalId',
                       loader: checkSubmittalId,
-                      element: <SubmittalPage />,
+                      ...page(() => import('./routes/SubmittalPage').then((m) => m.SubmittalPage)),
                     },
-                    { path: 'climate', element: <ProjectClimatePage /> },
-                    { path: 'wind', element: <ProjectWindPage /> },
-                    { path: 'members', element: <ProjectMembersPage /> },
-                    { path: 'activity', element: <ProjectActivityPage /> },
+                    {
+                      path: 'climate',
+                      ...page(() => import('./routes/ProjectClimatePage').then((m) => m.ProjectClimatePage)),
+                    },
+                    {
+                      path: 'wind',
+                      ...page(() => import('./routes/ProjectWindPage').then((m) => m.ProjectWindPage)),
+                    },
+                    {
+                      path: 'members',
+                      ...page(() => import('./routes/ProjectMembersPage').then((m) => m.ProjectMembersPage)),
+                    },
+                    {
+                      path: 'activity',
+                      ...page(() =>
+                        import('./routes/ProjectActivityPage').then((m) => m.ProjectActivityPage),
+                      ),
+                    },
                   ],
                 },
-                { path: '/library', element: <LibraryPage /> },
-                { path: '/code-tables', element: <CodeTablesPage /> },
-                { path: '/code-tables/:setId', loader: checkSetId, element: <CriteriaSetPage /> },
-                { path: '/code-tables/:setId/diff', loader: checkSetId, element: <CriteriaDiffPage /> },
-                { path: '/settings', element: <SettingsPage /> },
-                { path: '/admin/mail', loader: requireSiteAdmin, element: <AdminMailPage /> },
+                {
+                  path: '/library',
+                  ...page(() => import('./routes/LibraryPage').then((m) => m.LibraryPage)),
+                },
+                {
+                  path: '/code-tables',
+                  ...page(() => import('./routes/CodeTablesPage').then((m) => m.CodeTablesPage)),
+                },
+                {
+                  path: '/code-tables/:setId',
+                  loader: checkSetId,
+                  ...page(() => import('./routes/CriteriaSetPage').then((m) => m.CriteriaSetPage)),
+                },
+                {
+                  path: '/code-tables/:setId/diff',
+                  loader: checkSetId,
+                  ...page(() => import('./routes/CriteriaDiffPage').then((m) => m.CriteriaDiffPage)),
+                },
+                {
+                  path: '/settings',
+                  ...page(() => import('./routes/SettingsPage').then((m) => m.SettingsPage)),
+                },
+                {
+                  path: '/admin/mail',
+                  loader: requireSiteAdmin,
+                  ...page(() => import('./routes/AdminMailPage').then((m) => m.AdminMailPage)),
+                },
+                {
+                  path: '/admin/organisations',
+                  loader: requireSiteAdmin,
+                  ...page(() =>
+                    import('./routes/AdminOrganisationsPage').then((m) => m.AdminOrganisationsPage),
+                  ),
+                },
               ],
             },
             { path: '*', element: <NotFoundPage /> },

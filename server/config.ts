@@ -31,6 +31,10 @@ const envSchema = z.object({
   S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).optional(),
   /** Folder of the local fake S3 server (used only when S3_BUCKET is unset). */
   S3_LOCAL_DIR: z.string().optional(),
+  /** Stored files of one project (submittal uploads), in MB of 1024 × 1024 bytes. */
+  PROJECT_STORAGE_QUOTA_MB: z.coerce.number().positive().default(500),
+  /** Stored data sheets of one firm's library, in MB of 1024 × 1024 bytes. */
+  FIRM_LIBRARY_QUOTA_MB: z.coerce.number().positive().default(200),
 });
 
 export type Config = {
@@ -59,8 +63,13 @@ export interface StorageConfig {
   forcePathStyle: boolean;
   /** Local fake's folder; unset = `data/local/s3`, or a temporary folder when the database is in memory. */
   localDir?: string;
+  /** Most bytes stored for one project's submittal files (each stored object counted once). */
+  projectQuotaBytes: number;
+  /** Most bytes of data sheets stored for one firm's library. */
+  firmQuotaBytes: number;
 }
 
+const MB = 1024 * 1024;
 const DEV_SECRET = 'skinwright-development-secret-not-for-production-use';
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Partial<Config> = {}): Config {
@@ -88,6 +97,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
       secretAccessKey: e.S3_SECRET_ACCESS_KEY || undefined,
       forcePathStyle: e.S3_FORCE_PATH_STYLE ? e.S3_FORCE_PATH_STYLE === 'true' : Boolean(e.S3_ENDPOINT),
       localDir: e.S3_LOCAL_DIR || undefined,
+      projectQuotaBytes: Math.round(e.PROJECT_STORAGE_QUOTA_MB * MB),
+      firmQuotaBytes: Math.round(e.FIRM_LIBRARY_QUOTA_MB * MB),
     },
     ...overrides,
   };

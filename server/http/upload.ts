@@ -1,77 +1,146 @@
-import type { Readable } from 'node:stream';
+import { PassThrough, type Readable } from 'node:stream';
 import { UPLOAD_LIMITS } from '@shared/schemas/submittals';
 import type { Request, Response } from 'express';
 import multer from 'multer';
 import { HttpError } from './errors';
 
-export interface UploadedFile {
+/** One file of an upload as it arrives: its name as sent, and its bytes as a stream. */
+export interface IncomingFile {
   originalName: string;
-  bytes: Buffer;
+  stream: Readable;
+}
+
+/** What a service does with each arriving file (`store`), and how it takes one back (`remove`). */
+export interface FileHandler<T> {
+  store(file: IncomingFile): Promise<T>;
+  remove(stored: T): Promise<void>;
 }
 
 /**
- * Reads a multipart/form-data upload (field `files`) into memory — nothing touches the disk — with limits
- * on the size of each file, the number of files and the other parts. Called by a route handler, i.e. after
- * the caller's permission has been checked, so that nobody unauthorised gets a body buffered.
+ * Receives the files of a multipart upload, handing each to `handler.store` as it arrives (all or nothing:
+ * when anything fails, what was stored is removed and the upload is refused). Built by the route after the
+ * permission check, called by the service once it knows where the files go.
  */
-const parser = multer({
-  storage: multer.memoryStorage(),
-  limits: {
-    fileSize: UPLOAD_LIMITS.maxFileBytes,
-    files: UPLOAD_LIMITS.maxFiles,
-    fields: 5,
-    fieldSize: 10_000,
-    parts: UPLOAD_LIMITS.maxFiles + 5,
-    headerPairs: 50,
-  },
-  // Names arrive as UTF-8 from browsers; they are only ever displayed (see server/storage/files.ts).
-  defParamCharset: 'utf8',
-}).array('files', UPLOAD_LIMITS.maxFiles);
+export type ReceiveFiles = <T>(handler: FileHandler<T>) => Promise<T[]>;
+
+/** Uploads received at the same time by this process; more are refused (503) until one ends. */
+export const CONCURRENT_UPLOADS = 4;
+let receiving = 0;
+/** How many uploads this process is receiving now (tests). */
+export const uploadsInProgress = () => receiving;
 
 const mb = UPLOAD_LIMITS.maxFileBytes / (1024 * 1024);
+const limits = {
+  fileSize: UPLOAD_LIMITS.maxFileBytes,
+  files: UPLOAD_LIMITS.maxFiles,
+  fields: 5,
+  fieldSize: 10_000,
+  parts: UPLOAD_LIMITS.maxFiles + 5,
+  headerPairs: 50,
+};
+const refusals: Record<string, [number, string]> = {
+  LIMIT_FILE_SIZE: [413, `a file is larger than ${mb} MB; nothing was stored`],
+  LIMIT_FILE_COUNT: [413, `at most ${UPLOAD_LIMITS.maxFiles} files at once; nothing was stored`],
+  LIMIT_PART_COUNT: [413, 'too many parts in the upload; nothing was stored'],
+  LIMIT_FIELD_COUNT: [400, 'too many form fields; nothing was stored'],
+  LIMIT_FIELD_KEY: [400, 'a form field name is too long; nothing was stored'],
+  LIMIT_FIELD_VALUE: [400, 'a form field is too long; nothing was stored'],
+  LIMIT_UNEXPECTED_FILE: [400, 'files go in the field “files”; nothing was stored'],
+};
 
-export function readUpload(req: Request, res: Response): Promise<UploadedFile[]> {
-  if (!req.is('multipart/form-data'))
-    return Promise.reject(
-      new HttpError(415, 'multipart_required', 'send the files as multipart/form-data in the field “files”'),
-    );
-  return new Promise((resolve, reject) => {
-    parser(req, res, (err: unknown) => {
-      if (err instanceof multer.MulterError) {
-        const refusals: Record<string, [number, string]> = {
-          LIMIT_FILE_SIZE: [413, `a file is larger than ${mb} MB; nothing was stored`],
-          LIMIT_FILE_COUNT: [413, `at most ${UPLOAD_LIMITS.maxFiles} files at once; nothing was stored`],
-          LIMIT_PART_COUNT: [413, 'too many parts in the upload; nothing was stored'],
-          LIMIT_FIELD_COUNT: [400, 'too many form fields; nothing was stored'],
-          LIMIT_FIELD_KEY: [400, 'a form field name is too long; nothing was stored'],
-          LIMIT_FIELD_VALUE: [400, 'a form field is too long; nothing was stored'],
-          LIMIT_UNEXPECTED_FILE: [400, 'files go in the field “files”; nothing was stored'],
-        };
-        const [status, message] = refusals[err.code] ?? [
-          400,
-          'the upload could not be read; nothing was stored',
-        ];
-        reject(new HttpError(status, err.code.toLowerCase(), message));
-        return;
-      }
-      if (err) {
-        reject(
-          new HttpError(
+/**
+ * A multer storage engine that streams each file to `handler.store` (multer keeps the limits, the order and
+ * the removal of what was stored when the upload fails). The handler reads a stream of its own: a file over
+ * the size limit fails it at once, and whatever the handler leaves unread is drained.
+ */
+function streamingEngine<T>(handler: FileHandler<T>, failures: Set<unknown>): multer.StorageEngine {
+  return {
+    _handleFile(_req, file, done) {
+      const stream = new PassThrough();
+      file.stream.on('limit', () =>
+        stream.destroy(new HttpError(413, 'limit_file_size', refusals.LIMIT_FILE_SIZE![1])),
+      );
+      file.stream.on('error', (err) => stream.destroy(err));
+      stream.on('close', () => {
+        file.stream.unpipe(stream);
+        file.stream.resume();
+      });
+      file.stream.pipe(stream);
+      handler.store({ originalName: file.originalname, stream }).then(
+        (stored) => done(null, { stored } as Partial<Express.Multer.File>),
+        (err: Error) => {
+          failures.add(err);
+          done(err);
+        },
+      );
+    },
+    _removeFile(_req, file, done) {
+      handler.remove((file as unknown as { stored: T }).stored).then(() => done(null), done);
+    },
+  };
+}
+
+/**
+ * The files of a multipart/form-data upload (field `files`), streamed to object storage by the service's
+ * handler — nothing is held whole in memory or written to disk — with limits on the size of each file, the
+ * number of files and the other parts, and on the uploads received at once. Called by a route handler, i.e.
+ * after the caller's permission has been checked.
+ */
+export function receiveUpload(req: Request, res: Response): ReceiveFiles {
+  return <T>(handler: FileHandler<T>) => {
+    if (!req.is('multipart/form-data'))
+      return Promise.reject(
+        new HttpError(
+          415,
+          'multipart_required',
+          'send the files as multipart/form-data in the field “files”',
+        ),
+      );
+    if (receiving >= CONCURRENT_UPLOADS) {
+      res.set('Retry-After', '10');
+      return Promise.reject(
+        new HttpError(
+          503,
+          'uploads_busy',
+          `the server is receiving ${CONCURRENT_UPLOADS} uploads already; try again in a few seconds. Nothing was stored`,
+        ),
+      );
+    }
+    receiving++;
+    const failures = new Set<unknown>();
+    const parser = multer({
+      storage: streamingEngine(handler, failures),
+      limits,
+      // Names arrive as UTF-8 from browsers; they are only ever displayed (see server/storage/files.ts).
+      defParamCharset: 'utf8',
+    }).array('files', UPLOAD_LIMITS.maxFiles);
+    return new Promise<T[]>((resolve, reject) => {
+      parser(req, res, (err: unknown) => {
+        receiving--;
+        // The handler's own refusals (type, room, storage) as they are; multer's limits in our words.
+        if (failures.has(err) || err instanceof HttpError) return reject(err);
+        if (err instanceof multer.MulterError) {
+          const [status, message] = refusals[err.code] ?? [
             400,
-            'bad_upload',
-            'the upload could not be read (a malformed part, e.g. a control character in a file name); nothing was stored',
-          ),
-        );
-        return;
-      }
-      const files = (req.files as Express.Multer.File[] | undefined) ?? [];
-      if (files.length === 0) {
-        reject(new HttpError(400, 'no_files', 'choose at least one file (field “files”)'));
-        return;
-      }
-      resolve(files.map((f) => ({ originalName: f.originalname, bytes: f.buffer })));
+            'the upload could not be read; nothing was stored',
+          ];
+          return reject(new HttpError(status, err.code.toLowerCase(), message));
+        }
+        if (err)
+          return reject(
+            new HttpError(
+              400,
+              'bad_upload',
+              'the upload could not be read (a malformed part, e.g. a control character in a file name); nothing was stored',
+            ),
+          );
+        const files = (req.files as (Express.Multer.File & { stored: T })[] | undefined) ?? [];
+        if (files.length === 0)
+          return reject(new HttpError(400, 'no_files', 'choose at least one file (field “files”)'));
+        resolve(files.map((f) => f.stored));
+      });
     });
-  });
+  };
 }
 
 export interface StoredFile {

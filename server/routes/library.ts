@@ -8,7 +8,7 @@ import { attachmentProductInputSchema, attachmentProductSchema } from '@shared/s
 import { apiErrorSchema } from '@shared/schemas/common';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
-import { readUpload, sendStoredFile } from '../http/upload';
+import { receiveUpload, sendStoredFile } from '../http/upload';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const itemParams = orgParams.extend({ itemId: z.uuid() });
@@ -168,11 +168,18 @@ export const libraryRoutes = [
     responses: {
       201: { description: 'The entry with its data sheet', schema: attachmentProductSchema },
       ...errors,
-      413: { description: 'The file is too large', schema: apiErrorSchema },
+      413: {
+        description: 'The file is too large, or the firm’s library storage is full',
+        schema: apiErrorSchema,
+      },
       415: { description: 'Not multipart, or not a PDF, PNG or JPEG by content', schema: apiErrorSchema },
+      503: {
+        description: 'Too many uploads at once: try again after `Retry-After` seconds',
+        schema: apiErrorSchema,
+      },
     },
     handler: async ({ req, res, params, services }) =>
-      services.library.uploadDataSheet(params.orgId, params.itemId, await readUpload(req, res)),
+      services.library.uploadDataSheet(params.orgId, params.itemId, receiveUpload(req, res)),
   }),
   defineRoute({
     method: 'get',

@@ -14,7 +14,7 @@ import {
 } from '@shared/schemas/submittals';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
-import { readUpload, sendStoredFile } from '../http/upload';
+import { receiveUpload, sendStoredFile } from '../http/upload';
 import type { Services } from '../services';
 
 const errors = {
@@ -148,16 +148,21 @@ export const submittalRoutes = [
       201: { description: 'The stored files and the submittal', schema: uploadResultSchema },
       ...errors,
       ...stateErrors,
-      413: { description: 'A file too large, or too many files', schema: apiErrorSchema },
+      413: {
+        description: 'A file too large, too many files, or the project’s storage quota reached',
+        schema: apiErrorSchema,
+      },
       415: {
         description: 'Not multipart, or a file whose content is not an accepted type',
         schema: apiErrorSchema,
       },
+      503: {
+        description: 'Too many uploads at once: try again after `Retry-After` seconds',
+        schema: apiErrorSchema,
+      },
     },
-    handler: async ({ req, res, params, user, services }) => {
-      const files = await readUpload(req, res);
-      return services.submittals.upload(params.submittalId, actor(user), files);
-    },
+    handler: ({ req, res, params, user, services }) =>
+      services.submittals.upload(params.submittalId, actor(user), receiveUpload(req, res)),
   }),
   defineRoute({
     method: 'delete',

@@ -45,7 +45,7 @@ export function createServices(
     projects: createProjectService(db, database.readCache),
     members: createMemberService(db, config, mailer),
     assemblies: createAssemblyService(db),
-    library: createLibraryService(db, storage),
+    library: createLibraryService(db, storage, config.storage),
     criteria,
     checkRuns,
     sheets,

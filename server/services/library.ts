@@ -1,4 +1,3 @@
-import { createHash, randomUUID } from 'node:crypto';
 import type {
   BridgeValue,
   bridgeValueInputSchema,
@@ -10,16 +9,24 @@ import {
   type AttachmentProductInput,
   attachmentProductSchema,
 } from '@shared/schemas/attachment-library';
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { z } from 'zod';
+import type { StorageConfig } from '../config';
 import type { Db } from '../db/client';
-import { orgAttachmentProducts, organisationMembers, orgBridgeValues, orgMaterials } from '../db/schema';
+import {
+  orgAttachmentProducts,
+  organisationMembers,
+  organisations,
+  orgBridgeValues,
+  orgMaterials,
+} from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
-import type { UploadedFile } from '../http/upload';
-import { detectAllowedType, displayName, withTypeExtension } from '../storage/files';
+import type { ReceiveFiles } from '../http/upload';
+import { fileIntake, type StoredUpload, skipFile } from '../storage/files';
 import type { ObjectStore } from '../storage/object-store';
 
 type ProductRow = typeof orgAttachmentProducts.$inferSelect;
+const MB = 1024 * 1024;
 
 /** A stored row as the API shows it; the values in `data` are checked against the schema on the way out too. */
 function toProduct(r: ProductRow): AttachmentProduct {
@@ -57,7 +64,11 @@ export function attachmentProductRow(
  * An organisation's own libraries, each entry with its source: materials, χ/ψ values, and the attachment
  * data of the wind check (panel load–span tables and clip capacities, with the maker's data sheet).
  */
-export function createLibraryService(db: Db, storage: ObjectStore) {
+export function createLibraryService(
+  db: Db,
+  storage: ObjectStore,
+  quota: Pick<StorageConfig, 'firmQuotaBytes'>,
+) {
   async function productRow(organisationId: string, id: string): Promise<ProductRow> {
     const [r] = await db
       .select()
@@ -66,6 +77,23 @@ export function createLibraryService(db: Db, storage: ObjectStore) {
     if (!r) throw notFound('library entry');
     return r;
   }
+  /** Bytes of the firm's stored data sheets, leaving out the entry whose sheet is being replaced. */
+  async function dataSheetBytes(q: Db, organisationId: string, except: string): Promise<number> {
+    const [r] = await q
+      .select({ bytes: sql<string>`coalesce(sum(${orgAttachmentProducts.dataSheetSize}), 0)` })
+      .from(orgAttachmentProducts)
+      .where(
+        and(eq(orgAttachmentProducts.organisationId, organisationId), ne(orgAttachmentProducts.id, except)),
+      );
+    return Number(r?.bytes ?? 0);
+  }
+  const libraryFull = (used: number) =>
+    new HttpError(
+      413,
+      'storage_quota_exceeded',
+      `the firm’s library storage is full (${(used / MB).toFixed(1)} of ${(quota.firmQuotaBytes / MB).toFixed(0)} MB of data sheets) and this one does not fit; remove entries that are no longer needed, or ask the site administrator to raise the quota. Nothing was stored`,
+      { files: 'firm library storage quota reached' },
+    );
   return {
     async roleIn(organisationId: string, userId: string): Promise<'admin' | 'member' | null> {
       const [m] = await db
@@ -158,50 +186,75 @@ export function createLibraryService(db: Db, storage: ObjectStore) {
       return toProduct(r!);
     },
     /**
-     * Stores the maker's data sheet of an entry (one PDF, PNG or JPEG, checked by its content), replacing
-     * the one before. The new object is stored before the row points at it; the old one goes afterwards.
+     * Stores the maker's data sheet of an entry (one PDF, PNG or JPEG, judged by its first bytes and streamed
+     * to object storage), replacing the one before. Data sheets count against the firm's library quota (the
+     * sheet being replaced does not). The new object is stored before the row points at it — in a
+     * transaction that takes its turn on the firm's row for the quota and on the entry's for the old key —
+     * and the old one goes afterwards.
      */
     async uploadDataSheet(
       organisationId: string,
       id: string,
-      files: UploadedFile[],
+      receive: ReceiveFiles,
     ): Promise<AttachmentProduct> {
-      const before = await productRow(organisationId, id);
-      if (files.length !== 1)
-        throw new HttpError(400, 'one_file', 'upload exactly one data sheet; nothing was stored', {
-          files: `${files.length} files sent`,
-        });
-      const file = files[0]!;
-      const name = displayName(file.originalName);
-      const contentType = await detectAllowedType(file.bytes, name);
-      const key = `organisations/${organisationId}/data-sheets/${randomUUID()}`;
-      await storage.put(key, file.bytes, contentType);
-      let r: ProductRow | undefined;
+      await productRow(organisationId, id);
+      const used = await dataSheetBytes(db, organisationId, id);
+      if (used >= quota.firmQuotaBytes) throw libraryFull(used);
+      const intake = fileIntake(storage, {
+        keyPrefix: `organisations/${organisationId}/data-sheets/`,
+        room: quota.firmQuotaBytes - used,
+        full: () => libraryFull(used),
+      });
+      // The first file is the data sheet; any more are read past (not stored) only to be counted.
+      let arrived = 0;
+      const files = await receive<StoredUpload | null>({
+        store: (file) => (arrived++ === 0 ? intake.store(file) : skipFile(file)),
+        remove: async (stored) => {
+          if (stored) await intake.remove(stored);
+        },
+      });
+      const [sheet] = files;
+      let old: string | null;
       try {
-        [r] = await db
-          .update(orgAttachmentProducts)
-          .set({
-            dataSheetKey: key,
-            dataSheetName: withTypeExtension(name, contentType),
-            dataSheetType: contentType,
-            dataSheetSize: file.bytes.length,
-            dataSheetSha256: createHash('sha256').update(file.bytes).digest('hex'),
-            dataSheetUploadedAt: new Date(),
-          })
-          .where(
-            and(eq(orgAttachmentProducts.id, id), eq(orgAttachmentProducts.organisationId, organisationId)),
-          )
-          .returning();
+        if (files.length !== 1 || !sheet)
+          throw new HttpError(400, 'one_file', 'upload exactly one data sheet; nothing was stored', {
+            files: `${files.length} files sent`,
+          });
+        old = await db.transaction(async (tx) => {
+          await tx
+            .select({ id: organisations.id })
+            .from(organisations)
+            .where(eq(organisations.id, organisationId))
+            .for('update');
+          const now = await dataSheetBytes(tx, organisationId, id);
+          if (now + sheet.size > quota.firmQuotaBytes) throw libraryFull(now);
+          const [entry] = await tx
+            .select({ key: orgAttachmentProducts.dataSheetKey })
+            .from(orgAttachmentProducts)
+            .where(
+              and(eq(orgAttachmentProducts.id, id), eq(orgAttachmentProducts.organisationId, organisationId)),
+            )
+            .for('update');
+          if (!entry) throw notFound('library entry');
+          await tx
+            .update(orgAttachmentProducts)
+            .set({
+              dataSheetKey: sheet.key,
+              dataSheetName: sheet.name,
+              dataSheetType: sheet.contentType,
+              dataSheetSize: sheet.size,
+              dataSheetSha256: sheet.sha256,
+              dataSheetUploadedAt: new Date(),
+            })
+            .where(eq(orgAttachmentProducts.id, id));
+          return entry.key;
+        });
       } catch (err) {
-        await storage.delete(key).catch(() => undefined);
+        await Promise.allSettled(files.map((f) => f && intake.remove(f)));
         throw err;
       }
-      if (!r) {
-        await storage.delete(key).catch(() => undefined);
-        throw notFound('library entry');
-      }
-      if (before.dataSheetKey) await storage.delete(before.dataSheetKey).catch(() => undefined);
-      return toProduct(r);
+      if (old) await storage.delete(old).catch(() => undefined);
+      return toProduct(await productRow(organisationId, id));
     },
     /** The stored data sheet of an entry, to stream back; 404 when none was uploaded. */
     async dataSheet(organisationId: string, id: string) {

@@ -1,4 +1,4 @@
-import { createHash, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import { can, PROJECT_ROLE_LABELS, type ProjectRole } from '@shared/auth/permissions';
 import type { Verdict } from '@shared/checks/report';
 import {
@@ -20,7 +20,7 @@ import {
   sheetsWithVerdict,
 } from '@shared/schemas/submittals';
 import { verificationCode } from '@shared/sheets/verification';
-import { and, asc, count, eq, inArray, sql } from 'drizzle-orm';
+import { and, asc, count, eq, inArray, isNotNull, max, sql } from 'drizzle-orm';
 import type { Config } from '../config';
 import type { Db } from '../db/client';
 import {
@@ -34,9 +34,9 @@ import {
   user,
 } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
-import type { UploadedFile } from '../http/upload';
+import type { ReceiveFiles } from '../http/upload';
 import type { Mailer } from '../mail/mailer';
-import { detectAllowedType, displayName, withTypeExtension } from '../storage/files';
+import { fileIntake, type StoredUpload } from '../storage/files';
 import type { ObjectStore } from '../storage/object-store';
 import { recordAudit } from './audit';
 import { archivedError } from './projects';
@@ -51,6 +51,24 @@ const MAX_ITEMS = 40;
 
 const conflict = (code: string, message: string) => new HttpError(409, code, message);
 const statusWords = (s: SubmittalStatus) => SUBMITTAL_STATUS_TEXT[s].label.toLowerCase();
+const MB = 1024 * 1024;
+
+/** The refusal of a step that needs another status (a decided revision is read-only). */
+function wrongStatus(r: Pick<Row, 'status' | 'revision'>, statuses: readonly SubmittalStatus[]) {
+  const status = r.status as SubmittalStatus;
+  return isDecided(status)
+    ? conflict('read_only', `revision ${r.revision} was decided (${statusWords(status)}) and is read-only`)
+    : conflict(
+        'wrong_status',
+        `revision ${r.revision} is ${statusWords(status)}; this step needs it to be ${statuses.map(statusWords).join(' or ')}`,
+      );
+}
+
+const tooManyItems = (has: number, adding: number) =>
+  conflict(
+    'too_many_items',
+    `a revision holds at most ${MAX_ITEMS} items: it has ${has}, so ${adding} more would be too many; nothing was added`,
+  );
 
 /**
  * Submittals and their workflow. A revision is edited while it is a draft; submitting sends it to its
@@ -262,15 +280,53 @@ export function createSubmittalService(
         undefined,
         { current: await get(id) },
       );
-    if (!statuses.includes(r.status as SubmittalStatus))
-      throw conflict(
-        isDecided(r.status as SubmittalStatus) ? 'read_only' : 'wrong_status',
-        isDecided(r.status as SubmittalStatus)
-          ? `revision ${r.revision} was decided (${statusWords(r.status as SubmittalStatus)}) and is read-only`
-          : `revision ${r.revision} is ${statusWords(r.status as SubmittalStatus)}; this step needs it to be ${statuses.map(statusWords).join(' or ')}`,
-      );
+    if (!statuses.includes(r.status as SubmittalStatus)) throw wrongStatus(r, statuses);
     return r;
   }
+
+  /**
+   * The first free position of a draft for `adding` new items. The revision's row is locked first
+   * (SELECT … FOR UPDATE, held to the end of the caller's transaction), so additions to one revision take
+   * turns: each sees the items of those before it, the item limit holds and positions follow on (a unique
+   * (revision, position) index is the backstop). The revision must still be a draft.
+   */
+  async function placesFor(tx: Db, id: string, adding: number): Promise<number> {
+    const [locked] = await tx
+      .select({ status: submittals.status, revision: submittals.revision })
+      .from(submittals)
+      .where(eq(submittals.id, id))
+      .for('update');
+    if (!locked) throw notFound('submittal');
+    if (locked.status !== 'draft') throw wrongStatus(locked, ['draft']);
+    const [{ n, last } = { n: 0, last: null }] = await tx
+      .select({ n: count(), last: max(submittalItems.position) })
+      .from(submittalItems)
+      .where(eq(submittalItems.submittalId, id));
+    if (Number(n) + adding > MAX_ITEMS) throw tooManyItems(Number(n), adding);
+    return last === null ? 0 : last + 1;
+  }
+
+  /** Bytes of the project's stored submittal files, each object once (revisions share their objects). */
+  async function storedBytes(q: Db, projectId: string): Promise<number> {
+    const objects = q
+      .selectDistinct({ key: submittalItems.storageKey, size: submittalItems.size })
+      .from(submittalItems)
+      .innerJoin(submittals, eq(submittals.id, submittalItems.submittalId))
+      .where(and(eq(submittals.projectId, projectId), isNotNull(submittalItems.storageKey)))
+      .as('objects');
+    const [r] = await q.select({ bytes: sql<string>`coalesce(sum(${objects.size}), 0)` }).from(objects);
+    return Number(r?.bytes ?? 0);
+  }
+
+  const quotaFull = (used: number) => {
+    const quota = config.storage.projectQuotaBytes;
+    return new HttpError(
+      413,
+      'storage_quota_exceeded',
+      `this project’s file storage is full (${(used / MB).toFixed(1)} of ${(quota / MB).toFixed(0)} MB used) and the upload does not fit; remove files that are no longer needed, or ask the site administrator to raise the quota. Nothing was stored`,
+      { files: 'project storage quota reached' },
+    );
+  };
 
   /** Reviewers must be members of the project whose role allows reviewing submittals. */
   async function checkReviewers(projectId: string, ids: string[]) {
@@ -486,19 +542,20 @@ export function createSubmittalService(
         .from(checkRuns)
         .where(eq(checkRuns.id, checkRunId));
       if (!run || run.projectId !== r.projectId) throw notFound('check run');
-      const existing = await db.select().from(submittalItems).where(eq(submittalItems.submittalId, id));
-      if (existing.some((i) => i.checkRunId === checkRunId))
-        throw conflict('already_attached', 'this compliance sheet is already in the submittal');
-      if (existing.length >= MAX_ITEMS)
-        throw conflict('too_many_items', `a revision holds at most ${MAX_ITEMS} items`);
       const { code } = await sheets.issue(checkRunId);
       await db.transaction(async (tx) => {
+        const position = await placesFor(tx, id, 1);
+        const [attached] = await tx
+          .select({ id: submittalItems.id })
+          .from(submittalItems)
+          .where(and(eq(submittalItems.submittalId, id), eq(submittalItems.checkRunId, checkRunId)));
+        if (attached) throw conflict('already_attached', 'this compliance sheet is already in the submittal');
         const [item] = await tx
           .insert(submittalItems)
           .values({
             submittalId: id,
             kind: 'sheet',
-            position: existing.length,
+            position,
             checkRunId,
             addedBy: actor.id,
           })
@@ -517,55 +574,63 @@ export function createSubmittalService(
     },
 
     /**
-     * Stores uploaded files: every file is checked first (type by content, not empty), then each is put in
-     * object storage under a new uuid key, then the items are written in one transaction. Anything that
-     * fails removes what was already stored: nothing is kept from a refused upload.
+     * Stores uploaded files as they arrive (`fileIntake`: each judged by its first bytes before anything is
+     * stored, streamed to object storage, within the project's storage quota), then writes the items in one
+     * transaction that takes its turn on the revision (item limit, positions) and on the project (quota).
+     * Anything that fails removes what was already stored: nothing is kept from a refused upload.
      */
     async upload(
       id: string,
       actor: Actor,
-      files: UploadedFile[],
+      receive: ReceiveFiles,
     ): Promise<{ items: SubmittalItem[]; submittal: Submittal }> {
       const r = await writable(id, ['draft']);
-      const [{ n } = { n: 0 }] = await db
-        .select({ n: count() })
-        .from(submittalItems)
-        .where(eq(submittalItems.submittalId, id));
-      if (Number(n) + files.length > MAX_ITEMS)
-        throw conflict('too_many_items', `a revision holds at most ${MAX_ITEMS} items; nothing was stored`);
-      const checked: { name: string; contentType: string; bytes: Buffer; sha256: string; key: string }[] = [];
-      for (const f of files) {
-        const name = displayName(f.originalName);
-        const contentType = await detectAllowedType(f.bytes, name);
-        checked.push({
-          name: withTypeExtension(name, contentType),
-          contentType,
-          bytes: f.bytes,
-          sha256: createHash('sha256').update(f.bytes).digest('hex'),
-          key: `projects/${r.projectId}/submittals/${randomUUID()}`,
-        });
-      }
-      const stored: string[] = [];
-      const removeStored = () => Promise.allSettled(stored.map((k) => storage.delete(k)));
+      const [[{ n } = { n: 0 }], used] = await Promise.all([
+        db.select({ n: count() }).from(submittalItems).where(eq(submittalItems.submittalId, id)),
+        storedBytes(db, r.projectId),
+      ]);
+      const has = Number(n);
+      if (has >= MAX_ITEMS) throw tooManyItems(has, 1);
+      const quota = config.storage.projectQuotaBytes;
+      if (used >= quota) throw quotaFull(used);
+      const intake = fileIntake(storage, {
+        keyPrefix: `projects/${r.projectId}/submittals/`,
+        room: quota - used,
+        full: () => quotaFull(used),
+      });
+      let arrived = 0;
+      const files = await receive<StoredUpload>({
+        // A file past the item limit is refused before it is stored.
+        store: async (file) => {
+          if (has + ++arrived > MAX_ITEMS) throw tooManyItems(has, arrived);
+          return intake.store(file);
+        },
+        remove: intake.remove,
+      });
       let ids: string[];
       try {
-        for (const c of checked) {
-          await storage.put(c.key, c.bytes, c.contentType);
-          stored.push(c.key);
-        }
         ids = await db.transaction(async (tx) => {
+          const first = await placesFor(tx, id, files.length);
+          // Uploads to the project's other submittals take their turn on its row for the quota.
+          await tx
+            .select({ id: projects.id })
+            .from(projects)
+            .where(eq(projects.id, r.projectId))
+            .for('update');
+          const now = await storedBytes(tx, r.projectId);
+          if (now + files.reduce((sum, f) => sum + f.size, 0) > quota) throw quotaFull(now);
           const inserted = await tx
             .insert(submittalItems)
             .values(
-              checked.map((c, i) => ({
+              files.map((f, i) => ({
                 submittalId: id,
                 kind: 'file',
-                position: Number(n) + i,
-                storageKey: c.key,
-                fileName: c.name,
-                contentType: c.contentType,
-                size: c.bytes.length,
-                sha256: c.sha256,
+                position: first + i,
+                storageKey: f.key,
+                fileName: f.name,
+                contentType: f.contentType,
+                size: f.size,
+                sha256: f.sha256,
                 addedBy: actor.id,
               })),
             )
@@ -578,18 +643,18 @@ export function createSubmittalService(
             entityId: id,
             action: 'upload',
             after: {
-              files: checked.map((c) => ({
-                name: c.name,
-                type: c.contentType,
-                size: c.bytes.length,
-                sha256: c.sha256,
+              files: files.map((f) => ({
+                name: f.name,
+                type: f.contentType,
+                size: f.size,
+                sha256: f.sha256,
               })),
             },
           });
           return inserted.map((x) => x.id);
         });
       } catch (err) {
-        await removeStored();
+        await Promise.allSettled(files.map(intake.remove));
         throw err;
       }
       const submittal = await get(id);

@@ -1,5 +1,9 @@
+import { createHash, randomUUID } from 'node:crypto';
+import { pipeline, Transform } from 'node:stream';
 import { fileTypeFromBuffer } from 'file-type';
 import { HttpError } from '../http/errors';
+import type { IncomingFile } from '../http/upload';
+import type { ObjectStore } from './object-store';
 
 /*
  * What an upload may be, judged by its bytes (magic numbers, via file-type), never by its name or the
@@ -70,4 +74,102 @@ export async function detectAllowedType(bytes: Buffer, name: string): Promise<st
       { files: `${name}: type not accepted` },
     );
   return detected.mime;
+}
+
+/** Bytes enough for file-type to judge any of the accepted types (its own sample size). */
+const SNIFF_BYTES = 4100;
+
+/** An upload as stored: our key, the name to show, the detected type, its size and SHA-256. */
+export interface StoredUpload {
+  key: string;
+  name: string;
+  contentType: string;
+  size: number;
+  sha256: string;
+}
+
+/**
+ * Puts the files of one upload into object storage as they arrive, never holding a whole file: the first
+ * bytes are held back until their type is judged (`detectAllowedType`; nothing is stored when it is refused),
+ * then everything streams on to the store, counted and hashed on the way. The files of the upload together
+ * may take at most `room` bytes: more fails the file with `full()` (its stored part is aborted).
+ */
+export function fileIntake(
+  storage: ObjectStore,
+  opts: { keyPrefix: string; room: number; full: () => HttpError },
+) {
+  let taken = 0;
+  return {
+    async store({ originalName, stream }: IncomingFile): Promise<StoredUpload> {
+      const name = displayName(originalName);
+      const hash = createHash('sha256');
+      let size = 0;
+      let held: Buffer[] = [];
+      let checked = false;
+      let judged: (type: string) => void = () => {};
+      let refused: (err: unknown) => void = () => {};
+      const type = new Promise<string>((resolve, reject) => {
+        judged = resolve;
+        refused = reject;
+      });
+      /** Judges the held first bytes; only an accepted type lets them (and the rest) through. */
+      async function judge(self: Transform) {
+        const head = Buffer.concat(held);
+        held = [];
+        judged(await detectAllowedType(head, name));
+        checked = true;
+        self.push(head);
+      }
+      const body = new Transform({
+        async transform(chunk: Buffer, _encoding, done) {
+          try {
+            size += chunk.length;
+            taken += chunk.length;
+            hash.update(chunk);
+            if (taken > opts.room) throw opts.full();
+            if (checked) return done(null, chunk);
+            held.push(chunk);
+            if (size >= SNIFF_BYTES) await judge(this);
+            done();
+          } catch (err) {
+            done(err as Error);
+          }
+        },
+        async flush(done) {
+          try {
+            if (!checked) await judge(this);
+            done();
+          } catch (err) {
+            done(err as Error);
+          }
+        },
+      });
+      body.once('error', refused);
+      // An error either way ends both: a refused file stops reading its part (the upload drains the rest).
+      pipeline(stream, body, () => {});
+      const contentType = await type;
+      const key = `${opts.keyPrefix}${randomUUID()}`;
+      try {
+        await storage.put(key, body, contentType);
+      } catch (err) {
+        body.destroy();
+        throw err;
+      }
+      return {
+        key,
+        name: withTypeExtension(name, contentType),
+        contentType,
+        size,
+        sha256: hash.digest('hex'),
+      };
+    },
+    remove: (stored: StoredUpload) => storage.delete(stored.key),
+  };
+}
+
+/** Reads a file of an upload to its end without keeping it (a part that is not wanted). */
+export async function skipFile({ stream }: IncomingFile): Promise<null> {
+  stream.resume();
+  await new Promise((resolve, reject) => stream.on('end', resolve).on('error', reject));
+  return null;
 }

@@ -28,6 +28,18 @@ export async function startLocalS3(dir?: string): Promise<{
     silent: true,
     configureBuckets: [{ name: LOCAL_BUCKET }],
   });
+  // s3rver 3 lacks AbortMultipartUpload (DELETE …?uploadId=): answer it as S3 does, removing the parts, so
+  // an upload refused half-way leaves nothing behind here either.
+  server.middleware.unshift(async (ctx, next) => {
+    const uploadId = ctx.method === 'DELETE' ? ctx.query.uploadId : undefined;
+    if (typeof uploadId !== 'string') return next();
+    if (/^[0-9a-f]{32}$/.test(uploadId))
+      rmSync(path.join(server.store.getResourcePath(LOCAL_BUCKET, undefined, 'uploads'), uploadId), {
+        recursive: true,
+        force: true,
+      });
+    ctx.status = 204;
+  });
   const { port } = await server.run();
   return {
     directory,

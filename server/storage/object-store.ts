@@ -4,9 +4,9 @@ import {
   GetObjectCommand,
   ListObjectsV2Command,
   NoSuchKey,
-  PutObjectCommand,
   S3Client,
 } from '@aws-sdk/client-s3';
+import { Upload } from '@aws-sdk/lib-storage';
 import type { StorageConfig } from '../config';
 import { HttpError } from '../http/errors';
 
@@ -16,13 +16,17 @@ import { HttpError } from '../http/errors';
  * content types are kept in the database, never taken from the key.
  */
 export interface ObjectStore {
-  put(key: string, body: Buffer, contentType: string): Promise<void>;
+  /** Stores a stream of unknown length as it arrives (never the whole object in memory). */
+  put(key: string, body: Readable, contentType: string): Promise<void>;
   /** The object as a stream; 404 when it is missing. */
   get(key: string): Promise<{ body: Readable; size: number | undefined }>;
   delete(key: string): Promise<void>;
   /** Keys under a prefix (tests and housekeeping). */
   list(prefix?: string): Promise<string[]>;
 }
+
+/** S3's smallest part of a multipart upload (5 MiB): the most an upload holds at a time. */
+const PART_BYTES = 5 * 1024 * 1024;
 
 export interface S3Target {
   bucket: string;
@@ -48,16 +52,15 @@ export function createS3Store(target: S3Target): ObjectStore {
   });
   const Bucket = target.bucket;
   return {
+    // One part of S3's minimum size is held at a time, one in flight: ≈ 10 MiB per upload whatever its
+    // size; a body shorter than a part goes up as one plain PUT. A failed upload aborts its parts.
     async put(key, body, contentType) {
-      await client.send(
-        new PutObjectCommand({
-          Bucket,
-          Key: key,
-          Body: body,
-          ContentType: contentType,
-          ContentLength: body.length,
-        }),
-      );
+      await new Upload({
+        client,
+        params: { Bucket, Key: key, Body: body, ContentType: contentType },
+        partSize: PART_BYTES,
+        queueSize: 1,
+      }).done();
     },
     async get(key) {
       try {

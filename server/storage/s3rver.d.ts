@@ -11,8 +11,18 @@ declare module 's3rver' {
     configureBuckets?: { name: string; configs?: (string | Buffer)[] }[];
   }
 
+  /** The little of Koa's context that the abort handler in local-s3.ts reads and sets. */
+  interface Context {
+    method: string;
+    query: Record<string, string | string[] | undefined>;
+    status: number;
+  }
+
   export default class S3rver {
     constructor(options: S3rverOptions);
+    /** Koa's middleware list (composed when the server starts listening). */
+    middleware: ((ctx: Context, next: () => Promise<void>) => Promise<void>)[];
+    store: { getResourcePath(bucket: string, key: string | undefined, resource: string): string };
     run(): Promise<AddressInfo>;
     close(): Promise<void>;
   }

@@ -78,16 +78,16 @@ export function createApp({ database, config, mailer, storage, clientDir, client
   app.use(securityHeaders, requestLog);
 
   const trusted = (auth.options.trustedOrigins as string[]) ?? [];
-  const authLimiter = rateLimit({
-    windowMs: 60_000,
-    limit: config.authRateLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, res) =>
-      res
-        .status(429)
-        .json({ error: { code: 'rate_limited', message: 'too many attempts; wait a minute and try again' } }),
-  });
+  /** Per address and minute; over the limit: 429 with Retry-After (seconds until the window ends). */
+  const limiter = (limit: number, message: string) =>
+    rateLimit({
+      windowMs: 60_000,
+      limit,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      handler: (_req, res) => res.status(429).json({ error: { code: 'rate_limited', message } }),
+    });
+  const authLimiter = limiter(config.authRateLimit, 'too many attempts; wait a minute and try again');
   app.use(
     [
       '/api/auth/sign-in/*splat',
@@ -96,6 +96,14 @@ export function createApp({ database, config, mailer, storage, clientDir, client
       '/api/auth/reset-password',
     ],
     authLimiter,
+  );
+  // Verification codes are public: guessing them is throttled per address.
+  app.use(
+    '/api/verify',
+    limiter(
+      config.verifyRateLimit,
+      'too many verification checks from this address; wait a minute and try again',
+    ),
   );
   // better-auth must see the raw body: mount it before express.json().
   app.all('/api/auth/*splat', toNodeHandler(auth));

@@ -17,6 +17,8 @@ const envSchema = z.object({
   BETTER_AUTH_SECRET: z.string().min(32).optional(),
   /** Requests per minute per address on sign-in, sign-up and password reset. */
   AUTH_RATE_LIMIT: z.coerce.number().int().positive().default(30),
+  /** Requests per minute per address on the public sheet verification (`GET /api/verify/:code`). */
+  VERIFY_RATE_LIMIT: z.coerce.number().int().positive().default(30),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   SEED_DEMO: z.enum(['true', 'false']).default('true'),
   /** Object storage of uploaded files (S3 API). When S3_BUCKET is unset a local fake (s3rver) runs instead. */
@@ -48,6 +50,7 @@ export type Config = {
   mailFrom: string;
   authSecret: string;
   authRateLimit: number;
+  verifyRateLimit: number;
   logLevel: string;
   seedDemo: boolean;
   storage: StorageConfig;
@@ -87,6 +90,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     mailFrom: e.MAIL_FROM,
     authSecret: e.BETTER_AUTH_SECRET ?? DEV_SECRET,
     authRateLimit: e.AUTH_RATE_LIMIT,
+    verifyRateLimit: e.VERIFY_RATE_LIMIT,
     logLevel: e.LOG_LEVEL,
     seedDemo: e.SEED_DEMO === 'true',
     storage: {

@@ -3,7 +3,7 @@ import { assemblyInputSchema } from '@shared/schemas/assembly';
 import { attachmentProductInputSchema } from '@shared/schemas/attachment-library';
 import { criteriaSetCreateSchema } from '@shared/schemas/criteria';
 import { projectClimateSchema, projectInputSchema, projectWindSchema } from '@shared/schemas/project';
-import { eq } from 'drizzle-orm';
+import { eq, inArray, sql } from 'drizzle-orm';
 import { z } from 'zod';
 import demo from '../../data/seed/demo.json' with { type: 'json' };
 import demoAssembly from '../../data/seed/demo-assembly.json' with { type: 'json' };
@@ -26,7 +26,8 @@ import {
 
 const demoSchema = z.object({
   password: z.string().min(10),
-  firms: z.array(z.object({ key: z.string(), name: z.string() })),
+  /** `verified`: the demo site administrator has verified the firm (its sheets say so). */
+  firms: z.array(z.object({ key: z.string(), name: z.string(), verified: z.boolean().default(false) })),
   users: z.array(
     z.object({
       email: z.email(),
@@ -97,6 +98,13 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
       .insert(organisationMembers)
       .values({ organisationId: firmIds.get(u.firm)!, userId: created.id, role: u.firmRole });
   }
+  const siteAdmin = demoScenario.users.find((u) => u.siteRole === 'admin');
+  const verified = demoScenario.firms.filter((f) => f.verified).map((f) => firmIds.get(f.key)!);
+  if (siteAdmin && verified.length > 0)
+    await db
+      .update(organisations)
+      .set({ verifiedAt: sql`now()`, verifiedBy: userIds.get(siteAdmin.email)! })
+      .where(inArray(organisations.id, verified));
   const projects = createProjectService(db, noReadCache);
   const assemblies = createAssemblyService(db);
   for (const [index, { owner, members, ...input }] of demoScenario.projects.entries()) {

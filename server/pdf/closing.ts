@@ -1,7 +1,7 @@
 import { formatVerificationCode } from '@shared/sheets/verification';
 import { INK, PAGE, type SheetWriter } from './layout';
 import type { SheetData } from './sheet-data';
-import { PRODUCT } from './title-block';
+import { issuerLine, PRODUCT } from './title-block';
 
 /** The cautions every sheet ends with, before the module's own. */
 export const SHEET_CAUTIONS = [
@@ -63,6 +63,7 @@ export function drawStampAndVerification(w: SheetWriter, data: SheetData): void 
   const lines = [
     `Verification code ${data.code} — derived from the SHA-256 hash of the stored run.`,
     `Open ${data.verifyUrl} (no sign-in needed) to confirm the issuer, project, assembly, date and verdict.`,
+    `Issued by ${issuerLine(data.issuer)} (when printed; the page shows it now). Firm names are not unique: check the handle.`,
     `Run hash (SHA-256): ${data.run.hash}`,
   ];
   let y = top + 19;

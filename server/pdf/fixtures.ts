@@ -88,7 +88,11 @@ export function demoSheetData(units: 'SI' | 'IP' = 'SI'): SheetData {
     run,
     project: { number: p.number, siteAddress: p.siteAddress },
     preparedBy: 'Rafael Ducharme',
-    issuer: 'Ridgeline Cladding Co. (demo)',
+    issuer: {
+      name: 'Ridgeline Cladding Co. (demo)',
+      handle: '@demo-ridgeline',
+      verifiedAt: '2026-11-30T08:00:00.000Z',
+    },
     code,
     verifyUrl: verificationUrl('http://localhost:5180', code),
     units,

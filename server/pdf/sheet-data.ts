@@ -5,6 +5,7 @@ import type { TraceStep } from '@shared/calc/trace';
 import type { WindScheduleResult } from '@shared/calc/wind/schema';
 import type { ModuleOutcome } from '@shared/checks/report';
 import type { CheckRun } from '@shared/schemas/check-runs';
+import type { SheetIssuer } from '@shared/schemas/sheets';
 import type { UnitSystem } from '@shared/units';
 
 /** Everything one sheet prints: the stored run as it is, plus who issued it and how to verify it. */
@@ -13,8 +14,8 @@ export interface SheetData {
   /** Labels of the project that the run's snapshot does not carry. */
   project: { number: string; siteAddress: string };
   preparedBy: string | null;
-  /** The issuing firm. */
-  issuer: string;
+  /** The issuing firm: its name, unique handle and whether it is verified as the sheet is printed. */
+  issuer: SheetIssuer;
   /** Verification code (10 base32 characters) and the public address that confirms it. */
   code: string;
   verifyUrl: string;

@@ -68,14 +68,14 @@ function metadata(doc: jsPDF, data: SheetData): void {
     `verification ${data.code}`,
   ].join(', ');
   const creator = `${PRODUCT} ${run.engineVersion}`;
-  doc.setProperties({ title, subject, author: data.preparedBy ?? data.issuer, creator, keywords });
+  doc.setProperties({ title, subject, author: data.preparedBy ?? data.issuer.name, creator, keywords });
   doc.setLanguage('en-GB');
   doc.setCreationDate(new Date(run.createdAt));
   doc.setFileId(run.hash.slice(0, 32).toUpperCase());
   const esc = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
   const created = new Date(run.createdAt).toISOString();
   doc.addMetadata(
-    `<?xpacket begin="\u{feff}" id="W5M0MpCehiHzreSzNTczkc9d"?><x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description rdf:about="" xmlns:dc="http://purl.org/dc/elements/1.1/" xmlns:xmp="http://ns.adobe.com/xap/1.0/" xmlns:pdf="http://ns.adobe.com/pdf/1.3/"><dc:format>application/pdf</dc:format><dc:title><rdf:Alt><rdf:li xml:lang="x-default">${esc(title)}</rdf:li></rdf:Alt></dc:title><dc:description><rdf:Alt><rdf:li xml:lang="x-default">${esc(subject)}</rdf:li></rdf:Alt></dc:description><dc:creator><rdf:Seq><rdf:li>${esc(data.preparedBy ?? data.issuer)}</rdf:li></rdf:Seq></dc:creator><dc:language><rdf:Bag><rdf:li>en-GB</rdf:li></rdf:Bag></dc:language><pdf:Keywords>${esc(keywords)}</pdf:Keywords><pdf:Producer>jsPDF</pdf:Producer><xmp:CreatorTool>${esc(creator)}</xmp:CreatorTool><xmp:CreateDate>${created}</xmp:CreateDate><xmp:ModifyDate>${created}</xmp:ModifyDate></rdf:Description></rdf:RDF></x:xmpmeta><?xpacket end="r"?>`,
+    `<?xpacket begin="\u{feff}" id="W5M0MpCehiHzreSzNTczkc9d"?><x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description rdf:about="" xmlns:dc="http://purl.org/dc/elements/1.1/" xmlns:xmp="http://ns.adobe.com/xap/1.0/" xmlns:pdf="http://ns.adobe.com/pdf/1.3/"><dc:format>application/pdf</dc:format><dc:title><rdf:Alt><rdf:li xml:lang="x-default">${esc(title)}</rdf:li></rdf:Alt></dc:title><dc:description><rdf:Alt><rdf:li xml:lang="x-default">${esc(subject)}</rdf:li></rdf:Alt></dc:description><dc:creator><rdf:Seq><rdf:li>${esc(data.preparedBy ?? data.issuer.name)}</rdf:li></rdf:Seq></dc:creator><dc:language><rdf:Bag><rdf:li>en-GB</rdf:li></rdf:Bag></dc:language><pdf:Keywords>${esc(keywords)}</pdf:Keywords><pdf:Producer>jsPDF</pdf:Producer><xmp:CreatorTool>${esc(creator)}</xmp:CreatorTool><xmp:CreateDate>${created}</xmp:CreateDate><xmp:ModifyDate>${created}</xmp:ModifyDate></rdf:Description></rdf:RDF></x:xmpmeta><?xpacket end="r"?>`,
     true,
   );
 }

@@ -1,11 +1,21 @@
 import { zoneLabel } from '@shared/checks/criteria';
 import { WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
-import { formatVerificationCode } from '@shared/sheets/verification';
-import { type Formatter, sheetDateTime, VERDICT_WORDS } from './format';
+import type { SheetIssuer } from '@shared/schemas/sheets';
+import { formatVerificationCode, ISSUER_NOT_VERIFIED, ISSUER_VERIFIED } from '@shared/sheets/verification';
+import { type Formatter, sheetDate, sheetDateTime, VERDICT_WORDS } from './format';
 import { type Glyph, INK, type SheetWriter } from './layout';
 import type { SheetData } from './sheet-data';
 
 export const PRODUCT = 'Skinwright';
+
+/**
+ * The issuer as the sheet names it: the name (not unique), the firm's unique handle, and whether a site
+ * administrator had verified the firm when the sheet was printed.
+ */
+export function issuerLine({ name, handle, verifiedAt }: SheetIssuer): string {
+  const standing = verifiedAt ? `${ISSUER_VERIFIED} on ${sheetDate(verifiedAt)}` : ISSUER_NOT_VERIFIED;
+  return `${name} · ${handle ?? 'firm since removed'} — ${standing}`;
+}
 
 /** The sheet's name, what it is of, and the title block of who, what and when. */
 export function drawTitleBlock(w: SheetWriter, data: SheetData, fmt: Formatter): void {
@@ -43,7 +53,7 @@ export function drawTitleBlock(w: SheetWriter, data: SheetData, fmt: Formatter):
       ['Jurisdiction · edition', [set.jurisdiction, set.edition].filter(Boolean).join(' · ') || '—'],
       ['Date of the run', sheetDateTime(run.createdAt)],
       ['Prepared by', data.preparedBy ?? '—'],
-      ['Issued by', data.issuer],
+      ['Issued by', issuerLine(data.issuer)],
       ['Made with', `${PRODUCT}, calculation engine ${run.engineVersion}`],
       ['Units on this sheet', fmt.system === 'SI' ? 'SI (metric)' : 'IP (inch-pound)'],
       ['Run', `${run.id} · SHA-256 ${run.hash.slice(0, 16)}…`],
@@ -98,6 +108,13 @@ export function drawVerdict(w: SheetWriter, data: SheetData): void {
   doc.setLineWidth(0.2);
   doc.line(x - 3, top + 3, x - 3, top + h - 3);
   w.text('VERIFICATION CODE', x, top + 6.5, { font: 'sansBold', size: 6.6, color: INK.muted });
+  // The issuer's standing beside the code, where a reader looks first (the title block says it in full).
+  w.text(data.issuer.verifiedAt ? 'ISSUER VERIFIED' : 'ISSUER NOT VERIFIED', w.right - 3, top + 6.5, {
+    font: 'sansBold',
+    size: 6.6,
+    color: data.issuer.verifiedAt ? INK.meets : INK.caution,
+    align: 'right',
+  });
   w.text(formatVerificationCode(data.code), x, top + 13.5, { font: 'sansBold', size: 15 });
   const lines = w.wrap(`Confirm this sheet at ${data.verifyUrl}`, 60, 'sans', 6.6);
   lines.forEach((line, i) => {

@@ -7,6 +7,7 @@ import { healthRoutes } from './health';
 import { libraryRoutes } from './library';
 import { meRoutes } from './me';
 import { memberRoutes } from './members';
+import { organisationAdminRoutes } from './organisations';
 import { projectRoutes } from './projects';
 import { sheetRoutes } from './sheets';
 import { submittalRoutes } from './submittals';
@@ -15,6 +16,7 @@ import { submittalRoutes } from './submittals';
 export const apiRoutes: AnyRoute[] = [
   ...healthRoutes,
   ...meRoutes,
+  ...organisationAdminRoutes,
   ...projectRoutes,
   ...memberRoutes,
   ...assemblyRoutes,

@@ -11,6 +11,7 @@ import { createCriteriaService } from './criteria';
 import { createLibraryService } from './library';
 import { createMeService } from './me';
 import { createMemberService } from './members';
+import { createOrganisationService } from './organisations';
 import { createProjectService } from './projects';
 import { createSheetService } from './sheets';
 import { createSubmittalService } from './submittals';
@@ -42,6 +43,7 @@ export function createServices(
     auth: { instance: auth, currentUser: createSessionReader(auth) },
     audit: createAuditService(db),
     me: createMeService(db),
+    organisations: createOrganisationService(db),
     projects: createProjectService(db, database.readCache),
     members: createMemberService(db, config, mailer),
     assemblies: createAssemblyService(db),

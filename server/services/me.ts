@@ -1,15 +1,26 @@
+import { randomBytes } from 'node:crypto';
 import type { CapturedMail, Me } from '@shared/schemas/me';
 import { asc, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { capturedMail, organisationMembers, organisations, user } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
+import { firmHandle } from './organisations';
 
-const slugify = (name: string) =>
-  `${name
+/**
+ * A new firm's slug — its handle for good (nothing changes it): the name in lower-case ASCII words, then 8
+ * random characters (40 bits), e.g. `corvid-architects-0k3x9qa1`. Names are not unique; the random part
+ * keeps a firm of the same name from getting (or choosing) another firm's handle.
+ */
+export const newSlug = (name: string): string => {
+  const words = name
+    .normalize('NFKD')
+    .replace(/\p{M}/gu, '')
     .toLowerCase()
     .replace(/[^a-z0-9]+/g, '-')
-    .replace(/^-|-$/g, '')
-    .slice(0, 40)}-${Math.random().toString(36).slice(2, 8)}`;
+    .slice(0, 40)
+    .replace(/^-+|-+$/g, '');
+  return `${words || 'firm'}-${randomBytes(5).readUIntBE(0, 5).toString(36).padStart(8, '0')}`;
+};
 
 /** One row per firm of the user (one row with null firm fields when they belong to none). */
 interface MeRow {
@@ -20,6 +31,8 @@ interface MeRow {
   unitSystem: string;
   orgId: string | null;
   orgName: string | null;
+  orgSlug: string | null;
+  orgVerifiedAt: Date | null;
   orgRole: string | null;
 }
 
@@ -34,7 +47,13 @@ function toMe(rows: MeRow[]): Me {
     unitSystem: u.unitSystem === 'IP' ? 'IP' : 'SI',
     organisations: rows
       .filter((r) => r.orgId !== null)
-      .map((r) => ({ id: r.orgId!, name: r.orgName!, role: r.orgRole === 'admin' ? 'admin' : 'member' })),
+      .map((r) => ({
+        id: r.orgId!,
+        name: r.orgName!,
+        handle: firmHandle(r.orgSlug!),
+        verified: r.orgVerifiedAt !== null,
+        role: r.orgRole === 'admin' ? 'admin' : 'member',
+      })),
   };
 }
 
@@ -50,6 +69,8 @@ export function createMeService(db: Db) {
       unitSystem: user.unitSystem,
       orgId: organisations.id,
       orgName: organisations.name,
+      orgSlug: organisations.slug,
+      orgVerifiedAt: organisations.verifiedAt,
       orgRole: organisationMembers.role,
     })
     .from(user)
@@ -81,6 +102,8 @@ export function createMeService(db: Db) {
       unitSystem: updated.unitSystem,
       orgId: organisations.id,
       orgName: organisations.name,
+      orgSlug: organisations.slug,
+      orgVerifiedAt: organisations.verifiedAt,
       orgRole: organisationMembers.role,
     })
     .from(updated)
@@ -104,11 +127,19 @@ export function createMeService(db: Db) {
           name: 'already exists',
         });
       await db.transaction(async (tx) => {
-        const [org] = await tx
-          .insert(organisations)
-          .values({ name, slug: slugify(name) })
-          .returning();
-        await tx.insert(organisationMembers).values({ organisationId: org!.id, userId, role: 'admin' });
+        // A slug already taken (40 random bits: hardly ever) is drawn again.
+        for (let attempt = 0; attempt < 5; attempt++) {
+          const [org] = await tx
+            .insert(organisations)
+            .values({ name, slug: newSlug(name) })
+            .onConflictDoNothing({ target: organisations.slug })
+            .returning({ id: organisations.id });
+          if (org) {
+            await tx.insert(organisationMembers).values({ organisationId: org.id, userId, role: 'admin' });
+            return;
+          }
+        }
+        throw new Error('no free slug for a new firm');
       });
       return me(userId);
     },

@@ -1,8 +1,8 @@
 import type { Verdict } from '@shared/checks/report';
-import type { SheetVerification } from '@shared/schemas/sheets';
+import type { SheetIssuer, SheetVerification } from '@shared/schemas/sheets';
 import { normaliseVerificationCode, verificationCode, verificationUrl } from '@shared/sheets/verification';
 import type { UnitSystem } from '@shared/units';
-import { and, asc, eq } from 'drizzle-orm';
+import { asc, eq } from 'drizzle-orm';
 import type { Config } from '../config';
 import type { Db } from '../db/client';
 import {
@@ -16,9 +16,16 @@ import {
 import { HttpError, notFound } from '../http/errors';
 import { renderComplianceSheet } from '../pdf/sheet';
 import type { createCheckRunService } from './check-runs';
+import { firmHandle } from './organisations';
 
-/** Rendered sheets, by run and units: the same run always gives the same bytes, so a few are kept. */
+/** Rendered sheets, by run, units and issuer's standing: the same key always gives the same bytes, so a few are kept. */
 const CACHE_SIZE = 16;
+
+const issuerOf = (r: { name: string; slug: string | null; verifiedAt: Date | null }): SheetIssuer => ({
+  name: r.name,
+  handle: r.slug === null ? null : firmHandle(r.slug),
+  verifiedAt: r.verifiedAt?.toISOString() ?? null,
+});
 
 export const noSuchSheet = () =>
   new HttpError(404, 'no_such_sheet', 'no such sheet: the code is unknown, mistyped or altered');
@@ -32,7 +39,7 @@ export function createSheetService(db: Db, config: Config, runs: ReturnType<type
   const cache = new Map<string, Buffer>();
 
   /** The firm that issues a run's sheet: the preparer's firm (the project's firm when they belong to it). */
-  async function issuerOf(runId: string): Promise<{ organisationId: string | null; name: string }> {
+  async function issuingFirm(runId: string): Promise<{ organisationId: string | null; name: string }> {
     const [r] = await db
       .select({
         createdBy: checkRuns.createdBy,
@@ -58,23 +65,37 @@ export function createSheetService(db: Db, config: Config, runs: ReturnType<type
       : { organisationId: r.projectOrg, name: r.projectOrgName };
   }
 
+  /** The issuer recorded with a code: the name it was issued under, the firm's handle and standing now. */
+  async function issuerByCode(code: string): Promise<SheetIssuer | undefined> {
+    const [r] = await db
+      .select({
+        name: sheetVerifications.issuerName,
+        slug: organisations.slug,
+        verifiedAt: organisations.verifiedAt,
+      })
+      .from(sheetVerifications)
+      .leftJoin(organisations, eq(organisations.id, sheetVerifications.issuerOrganisationId))
+      .where(eq(sheetVerifications.code, code));
+    return r && issuerOf(r);
+  }
+
   /**
    * Records the verification code of a run's content (once). The hash leaves out when and by whom a run
    * was made, so runs of identical inputs share one code: the record keeps the first run issued with it,
    * and later ones print (and verify as) that record.
    */
-  async function issue(runId: string, hash: string): Promise<{ code: string; issuer: string }> {
+  async function issue(runId: string, hash: string): Promise<{ code: string; issuer: SheetIssuer }> {
     const code = verificationCode(hash);
-    const byCode = () => db.select().from(sheetVerifications).where(eq(sheetVerifications.code, code));
-    const [existing] = await byCode();
-    if (existing) return { code, issuer: existing.issuerName };
-    const issuer = await issuerOf(runId);
+    const existing = await issuerByCode(code);
+    if (existing) return { code, issuer: existing };
+    const firm = await issuingFirm(runId);
     await db
       .insert(sheetVerifications)
-      .values({ code, runId, issuerOrganisationId: issuer.organisationId, issuerName: issuer.name })
+      .values({ code, runId, issuerOrganisationId: firm.organisationId, issuerName: firm.name })
       .onConflictDoNothing();
-    const [row] = await byCode();
-    return { code, issuer: row?.issuerName ?? issuer.name };
+    const issuer = await issuerByCode(code);
+    if (!issuer) throw new Error(`the verification code ${code} was not recorded`);
+    return { code, issuer };
   }
 
   return {
@@ -93,7 +114,9 @@ export function createSheetService(db: Db, config: Config, runs: ReturnType<type
       const [me] = await db.select({ unitSystem: user.unitSystem }).from(user).where(eq(user.id, userId));
       const system: UnitSystem = units ?? (me?.unitSystem === 'IP' ? 'IP' : 'SI');
       const { code, issuer } = await issue(run.id, run.hash);
-      const key = `${run.id}:${system}:${p?.number ?? ''}:${p?.siteAddress ?? ''}:${issuer}`;
+      // The issuer's standing is printed as it is now, so it is part of the key: verifying the firm (or
+      // withdrawing that) gives a new sheet, the same standing the same bytes.
+      const key = JSON.stringify([run.id, system, p?.number ?? '', p?.siteAddress ?? '', issuer]);
       let pdf = cache.get(key);
       if (!pdf) {
         pdf = renderComplianceSheet({
@@ -121,24 +144,38 @@ export function createSheetService(db: Db, config: Config, runs: ReturnType<type
       const code = normaliseVerificationCode(input);
       if (!code) throw noSuchSheet();
       const [r] = await db
-        .select({ v: sheetVerifications, run: checkRuns, projectNumber: projects.number })
+        .select({
+          v: sheetVerifications,
+          run: checkRuns,
+          projectNumber: projects.number,
+          slug: organisations.slug,
+          verifiedAt: organisations.verifiedAt,
+          ranBy: { name: user.name, email: user.email },
+        })
         .from(sheetVerifications)
         .innerJoin(checkRuns, eq(checkRuns.id, sheetVerifications.runId))
         .innerJoin(projects, eq(projects.id, checkRuns.projectId))
-        .where(and(eq(sheetVerifications.code, code)));
+        .leftJoin(organisations, eq(organisations.id, sheetVerifications.issuerOrganisationId))
+        .leftJoin(user, eq(user.id, checkRuns.createdBy))
+        .where(eq(sheetVerifications.code, code));
       // The code must still be the one derived from the stored hash (a run is immutable; this is a guard).
       if (!r || verificationCode(r.run.hash) !== code) throw noSuchSheet();
       const inputs = r.run.inputs as { project: { name: string } };
       return {
         code,
-        issuer: r.v.issuerName,
+        issuer: issuerOf({ name: r.v.issuerName, slug: r.slug, verifiedAt: r.verifiedAt }),
+        // The name and the e-mail's domain are enough to tell who ran it; the whole address is not given out.
+        ranBy: r.ranBy && {
+          name: r.ranBy.name,
+          emailDomain: r.ranBy.email.slice(r.ranBy.email.lastIndexOf('@') + 1),
+        },
         project: { name: inputs.project.name, number: r.projectNumber },
         assembly: { name: r.run.assemblyName, revision: r.run.assemblyRevision },
         criteriaSet: { name: r.run.criteriaSetName, version: r.run.criteriaSetVersion },
         runAt: r.run.createdAt.toISOString(),
         verdict: r.run.verdict as Verdict,
         engineVersion: r.run.engineVersion,
-        hashPrefix: r.run.hash.slice(0, 16),
+        hash: r.run.hash,
       };
     },
   };

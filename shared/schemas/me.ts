@@ -7,7 +7,17 @@ export const meSchema = z.object({
   email: z.string(),
   siteRole: z.enum(['admin', 'user']),
   unitSystem: unitSystemSchema,
-  organisations: z.array(z.object({ id: z.uuid(), name: z.string(), role: z.enum(['admin', 'member']) })),
+  organisations: z.array(
+    z.object({
+      id: z.uuid(),
+      name: z.string(),
+      handle: z
+        .string()
+        .describe('The firm’s unique handle, printed on its sheets, e.g. `@corvid-architects-0k3x9qa1`'),
+      verified: z.boolean().describe('Whether a site administrator has verified the firm'),
+      role: z.enum(['admin', 'member']),
+    }),
+  ),
 });
 export type Me = z.infer<typeof meSchema>;
 

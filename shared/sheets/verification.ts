@@ -49,3 +49,7 @@ export function normaliseVerificationCode(input: string): string | null {
 /** The public page that confirms a sheet: `<APP_URL>/verify/<code>`. */
 export const verificationUrl = (appUrl: string, code: string): string =>
   `${appUrl.replace(/\/+$/, '')}/verify/${code}`;
+
+/** How a sheet and the verification page word the issuer's standing (a firm's name alone proves nothing). */
+export const ISSUER_VERIFIED = 'verified by Skinwright’s site administrator';
+export const ISSUER_NOT_VERIFIED = 'issuer not verified by Skinwright’s site administrator';

@@ -41,6 +41,11 @@ export const mailKeys = {
   lists: () => [...mailKeys.all, 'list'] as const,
 };
 
+export const adminOrganisationKeys = {
+  all: ['admin-organisations'] as const,
+  lists: () => [...adminOrganisationKeys.all, 'list'] as const,
+};
+
 export const assemblyKeys = {
   all: ['assemblies'] as const,
   lists: () => [...assemblyKeys.all, 'list'] as const,

@@ -124,4 +124,25 @@ describe('fuzzing every route with a body', () => {
       );
     },
   );
+
+  // Routes whose path carries what a stranger types: a verification code, a firm's id.
+  it('GET /verify/:code and PUT /admin/organisations/:orgId/verification with hostile path parameters', async () => {
+    const admin = await t.as(demoEmail('admin'));
+    const typed = HOSTILE.filter((h): h is string => typeof h === 'string' && h.length < 1000);
+    await fc.assert(
+      fc.asyncProperty(fc.oneof(fc.string(), fc.uuid(), fc.constantFrom(...typed)), async (raw) => {
+        totalCases += 2;
+        const segment = encodeURIComponent(raw);
+        for (const res of [
+          await t.anonymous().get(`/api/verify/${segment}`),
+          await admin.put(`/api/admin/organisations/${segment}/verification`).send({ verified: false }),
+        ]) {
+          expect(res.status, res.text.slice(0, 300)).toBeLessThan(500);
+          if (res.status >= 400)
+            expect(apiErrorSchema.safeParse(res.body).success, res.text.slice(0, 300)).toBe(true);
+        }
+      }),
+      { numRuns: CASES_PER_ROUTE },
+    );
+  });
 });

@@ -43,6 +43,8 @@ const EXPECTED: Record<string, Expectation> = {
   'POST /organisations': 'user',
   'GET /admin/mail': 'siteAdmin',
   'GET /admin/backup': 'siteAdmin',
+  'GET /admin/organisations': 'siteAdmin',
+  'PUT /admin/organisations/:orgId/verification': 'siteAdmin',
   'GET /projects': 'user',
   'POST /projects': 'user',
   'GET /projects/:id': ALL,

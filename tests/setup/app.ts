@@ -22,7 +22,10 @@ export const DEMO_PASSWORD = demoScenario.password;
 export const demoEmail = (role: string) => `${role}@skinwright.demo`;
 
 /** A fresh app on a fresh database (in-memory PGlite, or a new database on the PostgreSQL server), seeded with the demo. */
-export async function createTestApp(kind: DatabaseKind = 'pglite', opts: { authRateLimit?: number } = {}) {
+export async function createTestApp(
+  kind: DatabaseKind = 'pglite',
+  opts: { authRateLimit?: number; verifyRateLimit?: number } = {},
+) {
   let databaseUrl: string | undefined;
   let dropDatabase = async () => {};
   if (kind === 'postgres') {
@@ -49,6 +52,7 @@ export async function createTestApp(kind: DatabaseKind = 'pglite', opts: { authR
       pgliteDir: 'memory://',
       baseUrl: 'http://localhost:5180',
       authRateLimit: opts.authRateLimit ?? 10_000,
+      verifyRateLimit: opts.verifyRateLimit ?? 10_000,
     },
   );
   const database = await openDatabase(config);

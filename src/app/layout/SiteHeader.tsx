@@ -33,9 +33,14 @@ export function SiteHeader() {
               Code tables
             </NavLink>
             {user.siteRole === 'admin' ? (
-              <NavLink to="/admin/mail" className={navClass}>
-                Outbox
-              </NavLink>
+              <>
+                <NavLink to="/admin/organisations" className={navClass}>
+                  Firms
+                </NavLink>
+                <NavLink to="/admin/mail" className={navClass}>
+                  Outbox
+                </NavLink>
+              </>
             ) : null}
             <NavLink to="/settings" className={navClass}>
               Settings

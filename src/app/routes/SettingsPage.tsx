@@ -76,6 +76,16 @@ export function SettingsPage() {
                   <li key={o.id}>
                     {o.name}{' '}
                     <span className="text-ink-muted">({o.role === 'admin' ? 'firm admin' : 'member'})</span>
+                    <span className="block text-sm">
+                      <span className="num break-all">{o.handle}</span>
+                      <span className="text-ink-muted">
+                        {' '}
+                        ·{' '}
+                        {o.verified
+                          ? 'verified by the site administrator'
+                          : 'not verified: your sheets say “issuer not verified” until the site administrator verifies the firm'}
+                      </span>
+                    </span>
                   </li>
                 ))}
               </ul>

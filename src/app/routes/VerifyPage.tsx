@@ -7,9 +7,8 @@ import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { TextInput } from '../../components/ui/TextInput';
 import { useVerification } from '../../features/sheets/api/get-verification';
+import { SheetVerificationDetails } from '../../features/sheets/components/SheetVerificationDetails';
 import { errorMessage, isApiRequestError } from '../../lib/api';
-import { VERDICT_TEXT } from '../../lib/check-format';
-import { formatDateTime } from '../../lib/format';
 import { AuthPageFrame } from './AuthPageFrame';
 
 function CodeForm({ initial }: { initial: string }) {
@@ -43,7 +42,10 @@ function CodeForm({ initial }: { initial: string }) {
   );
 }
 
-/** Public: confirms a compliance sheet by its code — who issued it, for what, when, with what verdict. */
+/**
+ * Public: confirms a compliance sheet by its code — who issued it (name, unique handle, verified or not), for
+ * what, when, with what verdict.
+ */
 export function VerifyPage() {
   const { code = '' } = useParams();
   const canonical = normaliseVerificationCode(code);
@@ -52,7 +54,7 @@ export function VerifyPage() {
   return (
     <AuthPageFrame
       title="Check a compliance sheet"
-      intro="Every Skinwright compliance sheet carries a verification code. The details below are what the sheet with this code states; compare them with the paper or file you were given."
+      intro="Every Skinwright compliance sheet carries a verification code. The details below are what the sheet with this code states, and who issued it; compare them with the paper or file you were given."
     >
       <div className="flex flex-col gap-6">
         {!canonical || (result.isError && isApiRequestError(result.error) && result.error.status === 404) ? (
@@ -67,46 +69,7 @@ export function VerifyPage() {
         ) : result.isError ? (
           <Notice tone="caution" title={errorMessage(result.error)} live />
         ) : (
-          <section aria-labelledby="genuine" className="flex flex-col gap-3" data-testid="verified">
-            <h2 id="genuine" className="flex items-baseline gap-2 text-xl text-meets">
-              <span aria-hidden="true">✓</span> Issued by Skinwright
-            </h2>
-            <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[10rem_1fr]">
-              <dt className="font-semibold">Code</dt>
-              <dd className="num">{formatVerificationCode(result.data.code)}</dd>
-              <dt className="font-semibold">Issued by</dt>
-              <dd>{result.data.issuer}</dd>
-              <dt className="font-semibold">Project</dt>
-              <dd>
-                {result.data.project.name}
-                {result.data.project.number ? ` · No. ${result.data.project.number}` : ''}
-              </dd>
-              <dt className="font-semibold">Assembly</dt>
-              <dd>
-                {result.data.assembly.name}, revision{' '}
-                <span className="num">{result.data.assembly.revision}</span>
-              </dd>
-              <dt className="font-semibold">Code table</dt>
-              <dd>
-                {result.data.criteriaSet.name}, version{' '}
-                <span className="num">{result.data.criteriaSet.version}</span>
-              </dd>
-              <dt className="font-semibold">Date of the run</dt>
-              <dd>{formatDateTime(result.data.runAt)}</dd>
-              <dt className="font-semibold">Verdict</dt>
-              <dd className={`font-semibold ${VERDICT_TEXT[result.data.verdict].cls.split(' ')[0]}`}>
-                <span aria-hidden="true">{VERDICT_TEXT[result.data.verdict].glyph} </span>
-                <span className="uppercase tracking-wide">{VERDICT_TEXT[result.data.verdict].word}</span>
-                <span className="font-normal text-ink"> — {VERDICT_TEXT[result.data.verdict].sentence}</span>
-              </dd>
-              <dt className="font-semibold">Run hash</dt>
-              <dd className="num break-all text-xs">{result.data.hashPrefix}…</dd>
-            </dl>
-            <p className="text-xs text-ink-muted">
-              This confirms that a sheet with this content was issued; it does not approve the design. The
-              licensed professional of record, the local code and the authority having jurisdiction govern.
-            </p>
-          </section>
+          <SheetVerificationDetails sheet={result.data} />
         )}
         <CodeForm initial={canonical ? formatVerificationCode(canonical) : ''} />
       </div>

@@ -3,7 +3,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest, isApiRequestError } from '../../../lib/api';
 import { verificationKeys } from '../../../lib/query-keys';
 
-/** `GET /api/verify/:code` (public) → what the sheet states; 404 = no such sheet. */
+/** `GET /api/verify/:code` (public) → what the sheet states; 404 = no such sheet; 429 = too many checks. */
 export const getVerification = (code: string, signal?: AbortSignal) =>
   apiRequest(`/api/verify/${encodeURIComponent(code)}`, sheetVerificationSchema, { signal });
 
@@ -11,7 +11,8 @@ export const verificationQueryOptions = (code: string) =>
   queryOptions({
     queryKey: verificationKeys.detail(code),
     queryFn: ({ signal }) => getVerification(code, signal),
-    retry: (count, e) => !(isApiRequestError(e) && e.status === 404) && count < 2,
+    // No retry for "no such sheet", nor when this address has used up its checks for the minute (429).
+    retry: (count, e) => !(isApiRequestError(e) && (e.status === 404 || e.status === 429)) && count < 2,
   });
 
 export const useVerification = (code: string) => useQuery(verificationQueryOptions(code));

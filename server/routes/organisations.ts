@@ -1,0 +1,45 @@
+import { apiErrorSchema } from '@shared/schemas/common';
+import {
+  adminOrganisationListSchema,
+  adminOrganisationSchema,
+  organisationVerificationSchema,
+} from '@shared/schemas/organisations';
+import { z } from 'zod';
+import { defineRoute } from '../http/route';
+
+const refused = {
+  401: { description: 'Not signed in', schema: apiErrorSchema },
+  403: { description: 'Not a site administrator', schema: apiErrorSchema },
+};
+
+/** Site administration of firms: the list, and verifying who a firm is (its sheets show it). */
+export const organisationAdminRoutes = [
+  defineRoute({
+    method: 'get',
+    path: '/admin/organisations',
+    summary: 'Every firm with its handle, members and whether it is verified (site administrators)',
+    tag: 'Administration',
+    access: { kind: 'siteAdmin' },
+    responses: { 200: { description: 'Firms, by name', schema: adminOrganisationListSchema }, ...refused },
+    handler: async ({ services }) => ({ organisations: await services.organisations.list() }),
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/admin/organisations/:orgId/verification',
+    summary:
+      'Verify a firm (you have confirmed it is who its name says) or withdraw that; its sheets and the verification page show it (site administrators)',
+    tag: 'Administration',
+    access: { kind: 'siteAdmin' },
+    params: z.object({ orgId: z.uuid() }),
+    body: organisationVerificationSchema,
+    example: { verified: true },
+    responses: {
+      200: { description: 'The firm as it now stands', schema: adminOrganisationSchema },
+      400: { description: 'Invalid id or body', schema: apiErrorSchema },
+      ...refused,
+      404: { description: 'No such firm', schema: apiErrorSchema },
+    },
+    handler: ({ params, body, user, services }) =>
+      services.organisations.setVerified(params.orgId, user!.id, body.verified),
+  }),
+];

@@ -1,0 +1,112 @@
+import type { AdminOrganisation } from '@shared/schemas/organisations';
+import { useState } from 'react';
+import { Button } from '../../../components/ui/Button';
+import { Table, Td, Th } from '../../../components/ui/Table';
+import { errorMessage } from '../../../lib/api';
+import { formatDate } from '../../../lib/format';
+import { useSetVerification } from '../api/set-verification';
+
+/**
+ * Every firm with its handle and standing. Firms of one name come side by side and are marked, since a
+ * copy takes an existing firm's name; verifying (or withdrawing it) asks to be confirmed first.
+ */
+export function OrganisationsTable({ organisations }: { organisations: AdminOrganisation[] }) {
+  const count = new Map<string, number>();
+  for (const o of organisations) count.set(o.name.toLowerCase(), (count.get(o.name.toLowerCase()) ?? 0) + 1);
+  return (
+    <Table caption={`${organisations.length} firm${organisations.length === 1 ? '' : 's'}`}>
+      <thead>
+        <tr>
+          <Th>Firm</Th>
+          <Th>Handle</Th>
+          <Th numeric>People</Th>
+          <Th>Created</Th>
+          <Th>Standing</Th>
+          <Th>
+            <span className="sr-only">Verify or withdraw</span>
+          </Th>
+        </tr>
+      </thead>
+      <tbody>
+        {organisations.map((o) => (
+          <OrganisationRow key={o.id} firm={o} sameName={(count.get(o.name.toLowerCase()) ?? 0) > 1} />
+        ))}
+      </tbody>
+    </Table>
+  );
+}
+
+function OrganisationRow({ firm, sameName }: { firm: AdminOrganisation; sameName: boolean }) {
+  const [confirming, setConfirming] = useState(false);
+  const mutation = useSetVerification();
+  const verified = firm.verifiedAt !== null;
+  const change = () =>
+    mutation.mutate({ orgId: firm.id, verified: !verified }, { onSuccess: () => setConfirming(false) });
+
+  return (
+    <tr data-firm={firm.handle}>
+      <Td className="min-w-44">
+        <span className="font-semibold">{firm.name}</span>
+        {sameName ? (
+          <span className="block text-xs text-warning">
+            <span aria-hidden="true">▲ </span>another firm has this name
+          </span>
+        ) : null}
+      </Td>
+      <Td className="num whitespace-nowrap">{firm.handle}</Td>
+      <Td numeric>{firm.members}</Td>
+      <Td className="whitespace-nowrap">{formatDate(firm.createdAt)}</Td>
+      <Td className="min-w-40">
+        {verified ? (
+          <span className="text-meets">
+            <span aria-hidden="true">✓ </span>verified {formatDate(firm.verifiedAt!)}
+            {firm.verifiedBy ? ` by ${firm.verifiedBy}` : ''}
+          </span>
+        ) : (
+          <span className="text-ink-muted">not verified</span>
+        )}
+      </Td>
+      <Td className="min-w-56">
+        {confirming ? (
+          <fieldset className="flex flex-col items-start gap-2">
+            <legend className="mb-1 text-sm">
+              {verified
+                ? `Withdraw the verification of ${firm.handle}? Its sheets, those already handed out too, will show “issuer not verified”.`
+                : `Verify ${firm.handle}? Only when you have confirmed, outside Skinwright, that it is “${firm.name}”. Its sheets will show it as verified.`}
+            </legend>
+            <div className="flex flex-wrap gap-2">
+              <Button
+                variant={verified ? 'danger' : 'primary'}
+                className="px-3 py-1"
+                busy={mutation.isPending}
+                busyLabel={verified ? 'Withdrawing…' : 'Verifying…'}
+                onClick={change}
+              >
+                {verified ? 'Withdraw' : 'Verify'}
+                <span className="sr-only"> {firm.handle}</span>
+              </Button>
+              <Button
+                variant="quiet"
+                className="px-2 py-1"
+                onClick={() => setConfirming(false)}
+                disabled={mutation.isPending}
+              >
+                Cancel
+              </Button>
+            </div>
+          </fieldset>
+        ) : (
+          <Button variant="quiet" className="px-2 py-1" onClick={() => setConfirming(true)}>
+            {verified ? 'Withdraw…' : 'Verify…'}
+            <span className="sr-only"> {firm.handle}</span>
+          </Button>
+        )}
+        {mutation.isError ? (
+          <p role="alert" className="mt-1 text-xs text-caution">
+            {errorMessage(mutation.error)}
+          </p>
+        ) : null}
+      </Td>
+    </tr>
+  );
+}

@@ -90,7 +90,7 @@ export function drawLayers(w: SheetWriter, data: SheetData, fmt: Formatter): voi
         String(i + 1),
         layer.name,
         `${KIND[layer.kind]}\n${drawClass(layer)}`,
-        layer.kind === 'resistance' ? '—' : fmt.thickness(layer.thickness),
+        layer.thickness === undefined ? '—' : fmt.thickness(layer.thickness),
         layerDetail(layer, fmt),
         r ? fmt.rValue(r.value) : 'not counted',
         vapourText(input.vapour?.[i]),

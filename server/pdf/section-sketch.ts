@@ -182,7 +182,7 @@ export function drawSectionSketch(w: SheetWriter, data: SheetData, fmt: Formatte
     }
     hatch(doc, cls, x0, b.y, width, b.h);
   }
-  // Declared-resistance layers (membranes without a thickness) as dashed lines at their face.
+  // Declared-resistance layers (membranes, boards entered by their R) as dashed lines at their face.
   for (const b of bands.filter((x) => x.layer.kind === 'resistance')) {
     doc.setDrawColor(INK.caution);
     doc.setLineWidth(0.3);
@@ -255,7 +255,10 @@ export function drawSectionSketch(w: SheetWriter, data: SheetData, fmt: Formatte
     doc.setDrawColor(INK.ruleStrong);
     doc.setLineWidth(0.1);
     doc.line(x0 + width, b.y + b.h / 2, labelX - 1.2, ys[i]! - 1);
-    const thickness = b.layer.kind === 'resistance' ? 'declared R' : fmt.thickness(layerThickness(b.layer));
+    const thickness =
+      b.layer.kind === 'resistance'
+        ? `${b.layer.thickness === undefined ? '' : `${fmt.thickness(b.layer.thickness)} `}declared R`
+        : fmt.thickness(layerThickness(b.layer));
     const text = `${i + 1}   ${thickness}   ${b.layer.name}`;
     let shown = text;
     while (w.measure(shown, 'sans', 6.6) > w.right - labelX && shown.length > 8)
@@ -287,7 +290,7 @@ export function drawSectionSketch(w: SheetWriter, data: SheetData, fmt: Formatte
   if (hairlines.length > 0)
     notes.push(`Layers ${hairlines.join(', ')} are thinner than a line at this scale and are drawn as one.`);
   if (bands.some((b) => b.layer.kind === 'resistance'))
-    notes.push('Declared-resistance layers (no thickness) are drawn as a dashed line at their face.');
+    notes.push('Declared-resistance layers are drawn as a dashed line at their outer face.');
   if (attachment.girtSpacing)
     notes.push(`Girts ${attachment.girtOrientation} at ${fmt.length(attachment.girtSpacing)} (design).`);
   for (const n of notes) w.paragraph(`· ${n}`, { size: 6.8, color: INK.muted, after: 0.2 });

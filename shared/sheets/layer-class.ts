@@ -76,5 +76,5 @@ export const isInsulation = (layer: Layer) => {
   return layer.kind === 'homogeneous' && (c === 'batt' || c === 'rigid');
 };
 
-/** Physical thickness of a layer, m (a declared-resistance layer has none). */
-export const layerThickness = (layer: Layer): number => (layer.kind === 'resistance' ? 0 : layer.thickness);
+/** Physical thickness of a layer, m (a declared-resistance layer entered without one has none). */
+export const layerThickness = (layer: Layer): number => layer.thickness ?? 0;

@@ -57,7 +57,7 @@ export function layerOfKind(kind: LayerKind, from?: Partial<Layer>): Layer {
     case 'homogeneous':
       return { kind, name, thickness, conductivity: 0.035 };
     case 'resistance':
-      return { kind, name, resistance: 0.1 };
+      return { kind, name, resistance: 0.1, thickness };
     case 'air':
       return { kind, name, thickness: Math.min(thickness, 0.3), ventilation: 'unventilated' };
     case 'framed':

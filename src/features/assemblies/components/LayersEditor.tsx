@@ -257,7 +257,14 @@ function LayerRow({
               measure="resistance"
               label="Declared R"
               className="w-48"
-              hint="From the maker's declaration; no thickness is drawn."
+              hint="From the maker's declaration."
+            />
+            <MeasureField
+              path={`${base}.thickness`}
+              measure="thickness"
+              label="Thickness d"
+              className="w-36"
+              hint="Needed with metal framing: the zone method measures through every layer."
             />
           </div>
         ) : null}

@@ -21,7 +21,7 @@ const RIGHT = 330;
 const BOTTOM = 96;
 
 const thicknessOf = (l: Layer) =>
-  l.kind === 'resistance' ? 0 : Number.isFinite(l.thickness) ? l.thickness : 0;
+  l.thickness !== undefined && Number.isFinite(l.thickness) ? l.thickness : 0;
 
 interface Placed {
   index: number;

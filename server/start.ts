@@ -2,6 +2,8 @@ import { createServer, type RequestListener } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { fileURLToPath } from 'node:url';
 import type { RequestHandler } from 'express';
+import { type Logger, pino } from 'pino';
+import pretty from 'pino-pretty';
 import type { ViteDevServer } from 'vite';
 import { createApp } from './app';
 import type { Config } from './config';
@@ -13,6 +15,31 @@ import { startLocalS3 } from './storage/local-s3';
 import { createS3Store, storageTarget } from './storage/object-store';
 
 const clientDir = fileURLToPath(new URL('../dist/client', import.meta.url));
+
+/** Readable log lines for a person at a terminal; JSON lines (one object each) for a log collector. */
+function serverLogger(config: Config): Logger | undefined {
+  if (config.env === 'test' || !process.stdout.isTTY) return undefined;
+  return pino(
+    { level: config.logLevel },
+    pretty({
+      colorize: true,
+      translateTime: 'SYS:HH:MM:ss',
+      sync: true,
+      // A request is one line (method, path, status, time); anything else keeps its fields (an error's stack).
+      ignore: 'pid,hostname,req,res,responseTime',
+      messageFormat: (log, messageKey) => {
+        const { req, res, responseTime } = log as {
+          req?: { method: string; url: string };
+          res?: { statusCode: number };
+          responseTime?: number;
+        };
+        return req && res
+          ? `${req.method} ${req.url} → ${res.statusCode} (${responseTime} ms)`
+          : String(log[messageKey]);
+      },
+    }),
+  );
+}
 
 /**
  * Opens the database (migrating it), starts the local mail capture when no SMTP_URL is set and the local
@@ -65,6 +92,7 @@ export async function startServer(config: Config, opts: { dev?: boolean } = {}) 
     storage,
     clientDir: opts.dev ? undefined : clientDir,
     clientMiddleware,
+    logger: serverLogger(effective),
   });
   const seeded = effective.seedDemo ? await seedDemo(database.db, created.auth) : false;
   app = created.app;

@@ -14,6 +14,26 @@ const importsOf = (file: string) =>
     (m) => m[1]!,
   );
 
+/** The feature (src/features/<name>) a client file belongs to, or the layer it is in (components, lib, app). */
+function clientPart(file: string): string {
+  const parts = file.split(path.sep);
+  return parts[1] === 'features' ? `features/${parts[2]}` : (parts[1] ?? '');
+}
+/** The client files a file imports by a relative path (the client imports its own files only that way). */
+const clientImportsOf = (file: string) =>
+  importsOf(file)
+    .filter((i) => i.startsWith('.'))
+    .map((i) => path.normalize(path.join(path.dirname(file), i)));
+
+/**
+ * Features that may use another feature, and why. Any other feature-to-feature import fails: a feature is
+ * changed without reading the others.
+ */
+const FEATURE_USES: Record<string, string[]> = {
+  // A submittal lists check runs and links their compliance sheets.
+  'features/submittals': ['features/checks', 'features/sheets'],
+};
+
 const SHARED_ALLOWED = /^(zod|mathjs|convert-units|@shared\/|@data\/reference\/|\.{1,2}\/)/;
 
 describe('import rules', () => {
@@ -46,6 +66,23 @@ describe('import rules', () => {
         .filter((i) => /db\/|drizzle-orm/.test(i))
         .map((i) => `${f}: ${i}`),
     );
+    expect(offenders).toEqual([]);
+  });
+  it('a feature imports another feature only as FEATURE_USES states; components/ and lib/ import no feature', () => {
+    const offenders = files('src')
+      .filter((f) => !/\.test\.tsx?$/.test(f))
+      .flatMap((f) => {
+        const from = clientPart(f);
+        return clientImportsOf(f)
+          .map(clientPart)
+          .filter((to) => to.startsWith('features/') && to !== from)
+          .filter((to) =>
+            from.startsWith('features/')
+              ? !FEATURE_USES[from]?.includes(to)
+              : ['components', 'lib'].includes(from),
+          )
+          .map((to) => `${f} → ${to}`);
+      });
     expect(offenders).toEqual([]);
   });
 });

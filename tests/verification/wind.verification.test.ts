@@ -5,7 +5,9 @@
  * computed here from exact definitions or formulas, which tests arithmetic, not the standard.
  */
 
+import { calculateWindSchedule } from '@shared/calc/wind/attachment';
 import { HIGH_RISE_WALL, LOW_RISE_WALL, logLinear } from '@shared/calc/wind/coefficients';
+import { demoWindSchedule } from '@shared/calc/wind/fixtures';
 import { analyseSite, MINIMUM_PRESSURE, wallPressures } from '@shared/calc/wind/pressure';
 import type { WindSite } from '@shared/calc/wind/schema';
 import { groundElevationFactor, velocityPressureExposureCoefficient } from '@shared/calc/wind/velocity';
@@ -66,6 +68,42 @@ describe('ASCE 7-16 Table 26.9-1 — ground elevation factor K_e', () => {
   ] as const)('%s ft: K_e = %s', (zeFt, Ke) => {
     expect(Math.abs(groundElevationFactor(zeFt * FOOT) - Ke)).toBeLessThanOrEqual(0.01);
   });
+  // Source: the same Table 26.9-1, row "< 0": K_e = 1.00 below sea level [memory; the formula alone would give
+  // 1.012 at −100 m]. Exact.
+  it('[memory] below sea level (row “< 0”): K_e = 1.00, not the formula’s 1.012', () => {
+    expect(groundElevationFactor(-100)).toBe(1);
+    expect(groundElevationFactor(-1000 * FOOT)).toBe(1);
+  });
+});
+
+describe('ASCE 7-16/7-22 Table 26.10-1 — exposure B below 30 ft for components and cladding', () => {
+  // Source: ASCE/SEI 7-16 and 7-22 Table 26.10-1, exposure B, 0–15 ft: K_z = 0.57; the footnote's 0.70 below
+  // 30 ft applies to Chapter 28 (envelope procedure) only [memory + third-party: a public ASCE 7 wind
+  // calculator's source notes "7-16/7-22: zm = 15 per Table 26.10-1 (asterisk footnote zm = 30 applies to Ch.28
+  // LR only)" and "7-05/7-10: zm = 30 per Table 30.3-1 Note 1 ('z shall not be taken less than 30 ft in
+  // Exposure B')"; a public Python reimplementation of ASCE 7-98 applies the same 30 ft rule to Case 1, all
+  // components and cladding]. Tolerance ±0.01 (two decimals).
+  it.each(['ASCE 7-16', 'ASCE 7-22'] as const)(
+    '%s: K_h at 15 ft = 0.57 for components and cladding',
+    (edition) => {
+      expect(
+        Math.abs(velocityPressureExposureCoefficient(edition, 'B', 15 * FOOT) - 0.57),
+      ).toBeLessThanOrEqual(0.01);
+    },
+  );
+  it.each(['ASCE 7-16', 'ASCE 7-22'] as const)(
+    '%s: the schedule says so in the same words, with the ASCE 7-10 floor of 0.70 and how much higher it is',
+    (edition) => {
+      const r = calculateWindSchedule({
+        ...demoWindSchedule(),
+        site: { ...demoWindSchedule().site, edition, exposure: 'B', meanRoofHeight: 15 * FOOT },
+      });
+      const w = r.warnings.find((x) => x.startsWith('Exposure B below 30 ft'))!;
+      expect(w).toContain(`${edition} Table 26.10-1 gives K_z = 0.57`);
+      expect(w).toContain('Chapter 28');
+      expect(w).toMatch(/0\.70 below 30 ft .* (22|23) % higher/);
+    },
+  );
 });
 
 describe('ASCE 7-16/7-22 Figure 30.3-1 — wall GC_p, h ≤ 60 ft', () => {

@@ -172,13 +172,13 @@ describe('calculateWindSchedule — editions, heights and table limits', () => {
     expect(s22.velocity.equation).toContain('K_d enters p');
   });
 
-  it('h > 60 ft: h > 60 figure, q_z for inward pressure, and a warning to verify the coefficients', () => {
+  it('h > 60 ft: h > 60 figure, q_z for inward pressure, and a caution to confirm the coefficients', () => {
     const tall = { ...demoSite(), meanRoofHeight: 40, roofSlopeDeg: 0 };
     const top = analyseSite(tall);
     const low = analyseSite({ ...tall, heightOfComponent: 5 });
     expect(top.lowRise).toBe(false);
     expect(top.figure).toContain('30.5-1');
-    expect(top.warnings.join(' ')).toContain('verify the GC_p breakpoints');
+    expect(top.warnings.join(' ')).toContain('confirm the wall GC_p values');
     expect(wallPressures(low, 4, 2).strength.inward).toBeLessThan(wallPressures(top, 4, 2).strength.inward);
     expect(wallPressures(low, 4, 2).strength.outward).toBe(wallPressures(top, 4, 2).strength.outward);
   });

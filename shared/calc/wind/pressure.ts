@@ -1,6 +1,6 @@
 import { CalcInputError, requireInRange, requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
-import { FOOT, PSF_TO_PA } from '@shared/units';
+import { PSF_TO_PA } from '@shared/units';
 import {
   edgeWidth,
   internalPressureCoefficient,
@@ -12,6 +12,8 @@ import {
 import type { VelocityResult, WallZone, WindSite, ZonePressure } from './schema';
 import {
   aboveGradientHeight,
+  EXPOSURE_B_CHAPTER_28_KZ,
+  EXPOSURE_B_FLOOR_HEIGHT,
   groundElevationFactor,
   KD_BUILDINGS,
   pressureDirectionality,
@@ -102,7 +104,11 @@ export function analyseSite(site: WindSite): SiteAnalysis {
     step(
       'wind.Ke',
       'Ground elevation factor K_e',
-      site.keEqualsOne === true ? 'K_e = 1.0 (always permitted)' : 'K_e = e^(−0.0000362·z_e[ft])',
+      site.keEqualsOne === true
+        ? 'K_e = 1.0 (always permitted)'
+        : site.groundElevation <= 0
+          ? 'K_e = 1.00 at and below sea level (Table 26.9-1, row < 0)'
+          : 'K_e = e^(−0.0000362·z_e[ft])',
       `${edition} §26.9, Table 26.9-1`,
       { z_e: v(site.groundElevation, M) },
       Ke,
@@ -167,12 +173,14 @@ export function analyseSite(site: WindSite): SiteAnalysis {
     warnings.push('The mean roof height lies above the gradient height z_g; K_z is held at its value at z_g');
   if (!lowRise)
     warnings.push(
-      `h > 60 ft: the wall coefficients of ${figure} are recalled, and public reproductions of that figure conflict — verify the GC_p breakpoints against the standard before issuing`,
+      `h > 60 ft: confirm the wall GC_p values of ${figure} against the adopted edition before issuing the schedule`,
     );
-  if (edition === 'ASCE 7-22' && exposure === 'B' && Math.min(z, h) < 30 * FOOT)
+  if (exposure === 'B' && Math.min(z, h) < EXPOSURE_B_FLOOR_HEIGHT) {
+    const k = Math.min(Kh, Kz);
     warnings.push(
-      'ASCE 7-22, exposure B below 30 ft: K_z is floored at 15 ft here; one public reproduction of Table 26.10-1 floors it at 30 ft (K_z ≈ 0.70), which gives higher pressures — check the table notes',
+      `Exposure B below 30 ft: ${edition} Table 26.10-1 gives K_z = ${k.toFixed(2)} here for components and cladding; its 0.70 footnote is for Chapter 28 (main wind-force resisting system, envelope procedure) only. ASCE 7-10 held K_z at 0.70 below 30 ft for components and cladding (Table 30.3-1), which gives pressures ${Math.round((EXPOSURE_B_CHAPTER_28_KZ / k - 1) * 100)} % higher — where the adopted code or the building official keeps that floor, design for it`,
     );
+  }
   if (site.roofSlopeDeg <= LOW_SLOPE_LIMIT_DEG && lowRise)
     warnings.push(
       'Roof slope θ ≤ 10°: wall GC_p reduced by 10 % (Figure 30.3-1 note), and h must be the eave height',

@@ -69,8 +69,17 @@ export function aboveGradientHeight(edition: WindEdition, exposure: Exposure, z:
   return z / FOOT > EXPOSURE_CONSTANTS[edition][exposure].zgFt;
 }
 
-/** K_e = e^(−0.0000362·z_e), z_e ground elevation in ft (ASCE 7-16/7-22 Table 26.9-1, note 2). `ze` in metres. */
-export const groundElevationFactor = (ze: number): number => Math.exp(-0.0000362 * (ze / FOOT));
+/**
+ * K_e = e^(−0.0000362·z_e), z_e ground elevation in ft (ASCE 7-16/7-22 Table 26.9-1, note 2); 1.00 at and below
+ * sea level (the table's "< 0" row — the formula would exceed 1 there). `ze` in metres.
+ */
+export const groundElevationFactor = (ze: number): number =>
+  ze <= 0 ? 1 : Math.exp(-0.0000362 * (ze / FOOT));
+
+/** ASCE 7-16/7-22 Table 26.10-1 footnote: K_z = 0.70 for exposure B below 30 ft — in Chapter 28 only. */
+export const EXPOSURE_B_CHAPTER_28_KZ = 0.7;
+/** The height below which that footnote (and ASCE 7-10's C&C Table 30.3-1 note) held K_z at 0.70, m. */
+export const EXPOSURE_B_FLOOR_HEIGHT = 30 * FOOT;
 
 /**
  * Velocity pressure, Pa (V in m/s): 7-16 q = 0.00256·K_z·K_zt·K_d·K_e·V²; 7-22 q = 0.00256·K_z·K_zt·K_e·V²

@@ -24,7 +24,10 @@ export function ProjectLayout() {
     <>
       <title>{`${p.name} · Skinwright`}</title>
       <PageHeader eyebrow={eyebrow} title={p.name} />
-      <nav aria-label="Project pages" className="-mt-2 mb-6 flex gap-6 border-b border-rule">
+      <nav
+        aria-label="Project pages"
+        className="-mt-2 mb-6 flex flex-wrap gap-x-6 gap-y-2 border-b border-rule"
+      >
         <NavLink to={`/projects/${p.id}`} end className={tabClass}>
           Overview
         </NavLink>

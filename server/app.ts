@@ -1,14 +1,13 @@
 import { existsSync } from 'node:fs';
 import type { RequestListener } from 'node:http';
 import path from 'node:path';
-import { toNodeHandler } from 'better-auth/node';
 import express, { type RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
 import { pino } from 'pino';
 import { pinoHttp } from 'pino-http';
 import swaggerUi from 'swagger-ui-express';
-import { createAuth } from './auth/auth';
+import { authHandler, createAuth } from './auth/auth';
 import type { Config } from './config';
 import type { Database } from './db/client';
 import { apiNotFound, errorHandler } from './http/errors';
@@ -41,12 +40,13 @@ const JSON_LIMIT_BYTES = 1024 * 1024;
  * the lean path for the calculations in front of it.
  */
 export function createApp({ database, config, mailer, storage, clientDir, clientMiddleware }: AppDeps) {
-  const auth = createAuth(database.db, config, mailer);
+  const auth = createAuth(database, config, mailer);
   const services = createServices(database, config, mailer, auth, storage ?? unavailableStore());
   const logger = pino({ level: config.env === 'test' ? 'silent' : config.logLevel });
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // Forwarded client addresses are believed only from the proxies TRUST_PROXY names (default: none).
+  app.set('trust proxy', config.trustProxy);
   const securityHeaders = helmet({
     // Vite's dev middleware injects inline scripts for hot reload; the CSP applies to the built client.
     contentSecurityPolicy: clientMiddleware
@@ -94,6 +94,8 @@ export function createApp({ database, config, mailer, storage, clientDir, client
       '/api/auth/sign-up/*splat',
       '/api/auth/request-password-reset',
       '/api/auth/reset-password',
+      '/api/auth/change-password',
+      '/api/auth/send-verification-email',
     ],
     authLimiter,
   );
@@ -106,7 +108,7 @@ export function createApp({ database, config, mailer, storage, clientDir, client
     ),
   );
   // better-auth must see the raw body: mount it before express.json().
-  app.all('/api/auth/*splat', toNodeHandler(auth));
+  app.all('/api/auth/*splat', authHandler(auth));
 
   app.use(express.json({ limit: JSON_LIMIT_BYTES, strict: false }));
   // Code-table imports may send CSV as text/csv.

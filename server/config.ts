@@ -1,3 +1,4 @@
+import { isIP } from 'node:net';
 import { z } from 'zod';
 
 /** Every setting comes from the environment (secrets never live in the repo). */
@@ -19,6 +20,15 @@ const envSchema = z.object({
   AUTH_RATE_LIMIT: z.coerce.number().int().positive().default(30),
   /** Requests per minute per address on the public sheet verification (`GET /api/verify/:code`). */
   VERIFY_RATE_LIMIT: z.coerce.number().int().positive().default(30),
+  /**
+   * Which proxies may tell the client's address in X-Forwarded-For (Express `trust proxy`): unset = none (the
+   * socket's address counts), a number of hops, or a comma list of `loopback` / `linklocal` / `uniquelocal`,
+   * addresses and CIDR ranges.
+   */
+  TRUST_PROXY: z.string().optional(),
+  /** Wrong passwords for one address within ACCOUNT_LOCK_MINUTES that pause its password sign-in as long. */
+  ACCOUNT_LOCK_FAILURES: z.coerce.number().int().positive().default(10),
+  ACCOUNT_LOCK_MINUTES: z.coerce.number().positive().default(15),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   SEED_DEMO: z.enum(['true', 'false']).default('true'),
   /** Object storage of uploaded files (S3 API). When S3_BUCKET is unset a local fake (s3rver) runs instead. */
@@ -51,6 +61,10 @@ export type Config = {
   authSecret: string;
   authRateLimit: number;
   verifyRateLimit: number;
+  /** Express `trust proxy`: false (trust no forwarded address), a hop count, or a list of trusted proxies. */
+  trustProxy: TrustProxy;
+  /** Per-address lock of password sign-in: `failures` wrong passwords within `durationMs` lock it that long. */
+  accountLock: { failures: number; durationMs: number };
   logLevel: string;
   seedDemo: boolean;
   storage: StorageConfig;
@@ -73,6 +87,36 @@ export interface StorageConfig {
 }
 
 const MB = 1024 * 1024;
+export type TrustProxy = false | number | string;
+
+const NAMED_RANGES = new Set(['loopback', 'linklocal', 'uniquelocal']);
+/** An address, or an address with a prefix length or netmask (`10.0.0.0/8`, `10.0.0.0/255.0.0.0`, `fd00::/8`). */
+function isAddressOrRange(entry: string): boolean {
+  const [address = '', mask, ...rest] = entry.split('/');
+  const family = isIP(address);
+  if (!family || rest.length > 0) return false;
+  if (mask === undefined) return true;
+  if (/^\d+$/.test(mask)) return Number(mask) <= (family === 4 ? 32 : 128);
+  return isIP(mask) === family;
+}
+
+/**
+ * TRUST_PROXY → Express's `trust proxy`. Unset or `false`: no forwarded address is believed. `true` (trust
+ * whatever any client sends) is refused: name the hop count or the proxies instead.
+ */
+export function parseTrustProxy(value: string | undefined): TrustProxy {
+  const text = value?.trim() ?? '';
+  if (text === '' || text === 'false') return false;
+  if (/^\d+$/.test(text)) return Number(text);
+  const entries = text.split(',').map((entry) => entry.trim());
+  const bad = entries.filter((entry) => !NAMED_RANGES.has(entry) && !isAddressOrRange(entry));
+  if (bad.length > 0)
+    throw new Error(
+      `TRUST_PROXY: ${bad.map((b) => JSON.stringify(b)).join(', ')} is not a hop count, loopback, linklocal, uniquelocal, an address or a CIDR range${text === 'true' ? ' (true would believe any client; give the number of proxies in front instead)' : ''}`,
+    );
+  return entries.join(', ');
+}
+
 const DEV_SECRET = 'skinwright-development-secret-not-for-production-use';
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Partial<Config> = {}): Config {
@@ -91,6 +135,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     authSecret: e.BETTER_AUTH_SECRET ?? DEV_SECRET,
     authRateLimit: e.AUTH_RATE_LIMIT,
     verifyRateLimit: e.VERIFY_RATE_LIMIT,
+    trustProxy: parseTrustProxy(e.TRUST_PROXY),
+    accountLock: { failures: e.ACCOUNT_LOCK_FAILURES, durationMs: e.ACCOUNT_LOCK_MINUTES * 60_000 },
     logLevel: e.LOG_LEVEL,
     seedDemo: e.SEED_DEMO === 'true',
     storage: {

@@ -7,7 +7,7 @@ import { seedDemo } from './seed';
 
 const config = loadConfig();
 const database = await openDatabase(config);
-const auth = createAuth(database.db, config, { send: async () => {} });
+const auth = createAuth(database, config, { send: async () => {} });
 const seeded = await seedDemo(database.db, auth);
 console.log(seeded ? 'Demo scenario seeded.' : 'Demo scenario already present; nothing changed.');
 await database.close();

@@ -85,15 +85,26 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
     firmIds.set(f.key, row!.id);
   }
   const userIds = new Map<string, string>();
+  // Accounts made as a confirmed sign-up would make them (better-auth's own records), without its e-mails.
+  const { internalAdapter, password } = await auth.$context;
+  const hash = await password.hash(demoScenario.password);
   for (const u of demoScenario.users) {
-    const { user: created } = await auth.api.signUpEmail({
-      body: { name: u.name, email: u.email, password: demoScenario.password },
+    const created = await internalAdapter.createUser(
+      {
+        name: u.name,
+        email: u.email,
+        emailVerified: true,
+        role: u.siteRole ?? 'user',
+      },
+      { method: 'email-password' },
+    );
+    await internalAdapter.linkAccount({
+      userId: created.id,
+      providerId: 'credential',
+      accountId: created.id,
+      password: hash,
     });
     userIds.set(u.email, created.id);
-    await db
-      .update(user)
-      .set({ role: u.siteRole ?? 'user', emailVerified: true })
-      .where(eq(user.id, created.id));
     await db
       .insert(organisationMembers)
       .values({ organisationId: firmIds.get(u.firm)!, userId: created.id, role: u.firmRole });

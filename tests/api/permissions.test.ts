@@ -173,10 +173,11 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
     const token = (await t.mail())
       .find((m) => m.to.includes('spare@example.com'))!
       .text.match(/\/invite\/([\w-]+)/)![1]!;
-    const spare = request.agent(t.app);
-    await spare
-      .post('/api/auth/sign-up/email')
-      .send({ name: 'Spare', email: 'spare@example.com', password: 'spare-password-1' });
+    const spare = await t.signUp(request.agent(t.app), {
+      name: 'Spare',
+      email: 'spare@example.com',
+      password: 'spare-password-1',
+    });
     await spare.post(`/api/invitations/${token}/accept`);
     const members = (await owner.get(`/api/projects/${params.id}/members`)).body.members as {
       id: string;

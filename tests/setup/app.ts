@@ -65,6 +65,20 @@ export async function createTestApp(
   await seedDemo(database.db, auth);
 
   const agents = new Map<string, ReturnType<typeof request.agent>>();
+  /**
+   * The latest e-mail to `address` whose subject contains `subject`, waited for: better-auth sends its e-mails
+   * (confirmation, reset) after answering.
+   */
+  async function mailTo(address: string, subject: string) {
+    for (let waited = 0; ; waited += 25) {
+      const found = (await services.me.capturedMail()).find(
+        (m) => m.to.includes(address) && m.subject.includes(subject),
+      );
+      if (found) return found;
+      if (waited > 5000) throw new Error(`no e-mail "${subject}…" to ${address}`);
+      await new Promise((resolve) => setTimeout(resolve, 25));
+    }
+  }
   /** A supertest agent signed in as the demo user with this e-mail (cached per app). */
   async function as(email: string) {
     const cached = agents.get(email);
@@ -90,6 +104,17 @@ export async function createTestApp(
     demoProjectId,
     anonymous: () => request(app),
     mail: () => services.me.capturedMail(),
+    mailTo,
+    /** Signs `agent` up and opens the e-mailed confirmation link, which signs it in (as a person would). */
+    async signUp(agent: Agent, body: { name: string; email: string; password: string }) {
+      const res = await agent.post('/api/auth/sign-up/email').send(body);
+      if (res.status !== 200) throw new Error(`sign-up of ${body.email} failed: ${res.status} ${res.text}`);
+      const mail = await mailTo(body.email, 'Confirm your address');
+      const link = new URL(mail.text.match(/https?:\/\/\S+/)![0]);
+      const confirmed = await agent.get(link.pathname + link.search);
+      if (confirmed.status !== 302) throw new Error(`confirming ${body.email} failed: ${confirmed.status}`);
+      return agent;
+    },
     /** Object storage of uploads and the folder the local fake keeps it in. */
     storage,
     storageDir: s3.directory,
@@ -102,3 +127,4 @@ export async function createTestApp(
   };
 }
 export type TestApp = Awaited<ReturnType<typeof createTestApp>>;
+type Agent = ReturnType<typeof request.agent>;

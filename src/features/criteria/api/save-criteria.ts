@@ -8,7 +8,7 @@ import {
 } from '@shared/schemas/criteria';
 import { type QueryClient, useMutation, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { apiRequest, isApiRequestError } from '../../../lib/api';
+import { apiRequest, currentOnConflict, isApiRequestError } from '../../../lib/api';
 import { criteriaKeys } from '../../../lib/query-keys';
 
 /*
@@ -55,13 +55,9 @@ export const importCriteriaCsv = ({
     body: { csv },
   });
 
-const conflictBody = z.object({ current: criteriaSetSchema });
 /** On a 409, the table as it now stands (someone saved first, or a newer version exists); else null. */
-export function conflictingSet(error: unknown): CriteriaSet | null {
-  if (!isApiRequestError(error) || error.status !== 409) return null;
-  const parsed = conflictBody.safeParse(error.body);
-  return parsed.success ? parsed.data.current : null;
-}
+export const conflictingSet = (error: unknown): CriteriaSet | null =>
+  currentOnConflict(error, criteriaSetSchema, null);
 
 const csvErrorBody = z.object({
   errors: z.array(z.object({ line: z.number(), field: z.string(), reason: z.string() })),

@@ -1,7 +1,6 @@
 import { type Project, type ProjectInput, projectSchema } from '@shared/schemas/project';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
-import { apiRequest, isApiRequestError } from '../../../lib/api';
+import { apiRequest, currentOnConflict } from '../../../lib/api';
 import { auditKeys, projectKeys } from '../../../lib/query-keys';
 
 /** `PUT /api/projects/:id` with the version the edit was based on. */
@@ -19,14 +18,8 @@ export const updateProject = ({
     body: { version, changes },
   });
 
-const conflictBodySchema = z.object({ current: projectSchema });
-
 /** On a 409 `version_conflict`, the server sends the project as it now stands; null for any other error. */
-export function conflictingProject(error: unknown): Project | null {
-  if (!isApiRequestError(error) || error.status !== 409 || error.code !== 'version_conflict') return null;
-  const parsed = conflictBodySchema.safeParse(error.body);
-  return parsed.success ? parsed.data.current : null;
-}
+export const conflictingProject = (error: unknown): Project | null => currentOnConflict(error, projectSchema);
 
 export function useUpdateProject() {
   const qc = useQueryClient();

@@ -6,8 +6,7 @@ import {
   submittalSchema,
 } from '@shared/schemas/submittals';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
-import { apiRequest, isApiRequestError } from '../../../lib/api';
+import { apiRequest, currentOnConflict } from '../../../lib/api';
 import { auditKeys, submittalKeys } from '../../../lib/query-keys';
 
 const base = (id: string) => `/api/submittals/${encodeURIComponent(id)}`;
@@ -27,13 +26,9 @@ function useSettle() {
   };
 }
 
-const conflictSchema = z.object({ current: submittalSchema });
 /** On 409 `version_conflict` the server sends the submittal as it is now; null for any other error. */
-export function conflictingSubmittal(error: unknown): Submittal | null {
-  if (!isApiRequestError(error) || error.status !== 409 || error.code !== 'version_conflict') return null;
-  const parsed = conflictSchema.safeParse(error.body);
-  return parsed.success ? parsed.data.current : null;
-}
+export const conflictingSubmittal = (error: unknown): Submittal | null =>
+  currentOnConflict(error, submittalSchema);
 
 export function useCreateSubmittal(projectId: string) {
   const settle = useSettle();

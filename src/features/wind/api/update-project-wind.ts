@@ -1,7 +1,6 @@
 import { type Project, type ProjectWind, projectSchema } from '@shared/schemas/project';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
-import { apiRequest, isApiRequestError } from '../../../lib/api';
+import { apiRequest, currentOnConflict } from '../../../lib/api';
 import { auditKeys, projectKeys } from '../../../lib/query-keys';
 
 /** `PUT /api/projects/:id/wind` `{version, wind}` → the project at its new version. */
@@ -19,14 +18,9 @@ export const updateProjectWind = ({
     body: { version, wind },
   });
 
-const conflictBodySchema = z.object({ current: projectSchema });
-
 /** On a 409 `version_conflict` the server sends the project as it now stands; null for any other error. */
-export function conflictingProjectWind(error: unknown): Project | null {
-  if (!isApiRequestError(error) || error.status !== 409 || error.code !== 'version_conflict') return null;
-  const parsed = conflictBodySchema.safeParse(error.body);
-  return parsed.success ? parsed.data.current : null;
-}
+export const conflictingProjectWind = (error: unknown): Project | null =>
+  currentOnConflict(error, projectSchema);
 
 export function useUpdateProjectWind() {
   const qc = useQueryClient();

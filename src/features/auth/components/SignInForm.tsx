@@ -29,7 +29,9 @@ export function SignInForm({ next, defaultEmail = '' }: { next: string; defaultE
     const { error } = await authClient.signIn.email({ email: values.email, password: values.password });
     if (error) {
       setFailure(
-        error.status === 401 ? 'That e-mail and password do not match an account.' : authErrorMessage(error),
+        error.status === 401
+          ? 'That e-mail and password do not match an account we can sign in. A new account needs the link we e-mailed first; after repeated wrong passwords, sign-in pauses for a while (choosing a new password ends the pause).'
+          : authErrorMessage(error),
       );
       return;
     }

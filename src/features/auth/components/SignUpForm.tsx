@@ -1,20 +1,22 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
-import { Link, useNavigate } from 'react-router';
+import { Link } from 'react-router';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
 import { TextInput } from '../../../components/ui/TextInput';
 import { authClient, authErrorMessage, MIN_PASSWORD_LENGTH } from '../../../lib/auth-client';
-import { startSessionCache } from '../../../lib/session-cache';
 import { signUpFormSchema, type SignUpForm as Values } from '../schemas';
 
+/**
+ * Sign-up answers alike whether or not the address already has an account (it must not tell), so the page
+ * always says the same: look in your e-mail. A new account's message holds the link that confirms the address
+ * and signs in (landing on `next`); an existing account's owner is told someone tried.
+ */
 export function SignUpForm({ next, defaultEmail = '' }: { next: string; defaultEmail?: string }) {
-  const navigate = useNavigate();
-  const qc = useQueryClient();
   const [failure, setFailure] = useState<string | null>(null);
+  const [sentTo, setSentTo] = useState<string | null>(null);
   const {
     register,
     handleSubmit,
@@ -31,9 +33,10 @@ export function SignUpForm({ next, defaultEmail = '' }: { next: string; defaultE
       name: values.name,
       email: values.email,
       password: values.password,
+      callbackURL: next,
     });
     if (error) {
-      if (error.status === 422 || error.code === 'USER_ALREADY_EXISTS') {
+      if (error.code === 'INVALID_EMAIL') {
         setError('email', { type: 'server', message: authErrorMessage(error) });
       } else if (error.code === 'PASSWORD_TOO_SHORT' || error.code === 'PASSWORD_TOO_LONG') {
         setError('password', { type: 'server', message: authErrorMessage(error) });
@@ -42,9 +45,25 @@ export function SignUpForm({ next, defaultEmail = '' }: { next: string; defaultE
       }
       return;
     }
-    await startSessionCache(qc);
-    navigate(next, { replace: true });
+    setSentTo(values.email);
   });
+
+  if (sentTo)
+    return (
+      <div className="flex flex-col gap-5">
+        <Notice title="Check your e-mail" live>
+          <p>
+            We have sent a message to <strong className="break-all">{sentTo}</strong>. If this is a new
+            account, open the link in it within an hour to confirm the address — that signs you in. If the
+            address already has an account, the message says so; sign in or choose a new password instead.
+          </p>
+        </Notice>
+        <p className="border-t border-rule pt-4 text-sm">
+          <Link to={`/sign-in?next=${encodeURIComponent(next)}`}>Sign in</Link> ·{' '}
+          <Link to="/forgot-password">Forgotten your password?</Link>
+        </p>
+      </div>
+    );
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">

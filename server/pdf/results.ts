@@ -99,7 +99,9 @@ function moisture(w: SheetWriter, data: SheetData, fmt: Formatter): void {
       ],
       [
         'Surface (mould) check',
-        `f_Rsi ${num(s.fRsi, 3)} ${s.fRsiMax === null ? '(no month colder outside than in)' : `${s.pass ? '≥' : '<'} f_Rsi,max ${num(s.fRsiMax, 3)}${s.criticalMonth ? ` (${MONTHS[s.criticalMonth - 1]})` : ''}`}`,
+        s.fRsiMax === null
+          ? 'not applicable — in no month is the outside cold enough for the surface to reach 80 % RH'
+          : `f_Rsi ${num(s.fRsi, 3)} ${s.pass ? '≥' : '<'} f_Rsi,max ${num(s.fRsiMax, 3)}${s.criticalMonth ? ` (${MONTHS[s.criticalMonth - 1]})` : ''}`,
       ],
       [
         'Balance',

@@ -115,7 +115,8 @@ export const moistureModule = defineCheckModule({
           margin: null,
           marginRatio: null,
           status: 'pass',
-          reason: 'No month is colder outside than inside: no surface condensation risk to design against.',
+          reason:
+            'Not applicable: in no month is the outside cold enough for the interior surface to reach 80 % RH (f_Rsi,max would be 0 or negative).',
         },
       ];
     return [

@@ -245,6 +245,27 @@ describe('surface check helpers (ISO 13788:2012 §5)', () => {
     expect(minSurfaceTemperature(1000)).toBeCloseTo(dewPoint(1250), 12);
     expect(minTemperatureFactor(12, 20, -10)).toBeCloseTo(22 / 30, 12);
     expect(minTemperatureFactor(12, 20, 25)).toBeNull();
+    // Cooling climate: outside 22 °C, inside 24 °C, θ_si,min 15 °C — the formula gives −3.5; not applicable.
+    expect(minTemperatureFactor(15, 24, 22)).toBeNull();
+  });
+
+  it('a cooling climate says "not applicable" and never prints a negative f_Rsi,max', () => {
+    const input = metalPanelMoistureWall({ vapourRetarder: false });
+    const hot = {
+      ...input,
+      interior: { kind: 'fixed' as const, temperature: 24, relativeHumidity: 0.5 },
+      // Outside 23–29 °C at 70 % RH: warmer than the coldest safe surface (about 16 °C) every month.
+      months: input.months.map((m, i) => ({
+        ...m,
+        exteriorTemperature: 23 + (i % 3) * 3,
+        exteriorRelativeHumidity: 0.7,
+      })),
+    };
+    const r = calculateMoisture(hot);
+    expect(r.surface.fRsiMax).toBeNull();
+    for (const m of r.months) expect(m.surface.fRsiMin === null || m.surface.fRsiMin > 0).toBe(true);
+    expect(r.verdict).toContain('Surface humidity check not applicable');
+    expect(r.verdict).not.toMatch(/−|-\d/);
   });
 });
 

@@ -297,7 +297,9 @@ function verdict(
       : `Interstitial condensation builds up: it peaks at ${grams(interstitial.maxAccumulation)} in ${MONTH_NAMES[(interstitial.maxAccumulationMonth ?? 1) - 1]} and ${grams(interstitial.finalAccumulation)} remain after the 12 months, so water accumulates year on year — the wall fails the ISO 13788 balance.`;
   const failing = months.filter((month) => !month.surface.pass).map((month) => MONTH_NAMES[month.month - 1]);
   const onSurface = surface.pass
-    ? `The clear-field interior surface stays at or below 80 % RH in every month (f_Rsi ${surface.fRsi.toFixed(3)}${surface.fRsiMax === null ? '' : ` ≥ f_Rsi,max ${surface.fRsiMax.toFixed(3)}`}).`
+    ? surface.fRsiMax === null
+      ? 'Surface humidity check not applicable: in no month is the outside cold enough for the interior surface to reach 80 % RH.'
+      : `The clear-field interior surface stays at or below 80 % RH in every month (f_Rsi ${surface.fRsi.toFixed(3)} ≥ f_Rsi,max ${surface.fRsiMax.toFixed(3)}).`
     : `Mould risk: the clear-field interior surface exceeds 80 % RH in ${failing.join(', ')} (f_Rsi ${surface.fRsi.toFixed(3)}).`;
   return `${inside} ${onSurface}`;
 }

@@ -188,7 +188,9 @@ export const monthResultSchema = z.object({
     fRsiMin: z
       .number()
       .nullable()
-      .describe('f_Rsi,min = (θ_si,min − θ_e)/(θ_i − θ_e), dimensionless; null when θ_e ≥ θ_i'),
+      .describe(
+        'f_Rsi,min = (θ_si,min − θ_e)/(θ_i − θ_e), dimensionless; null (not applicable) when θ_e ≥ θ_i or when it would be 0 or less',
+      ),
     pass: z.boolean().describe('θ_si ≥ θ_si,min (equivalently f_Rsi ≥ f_Rsi,min)'),
   }),
 });

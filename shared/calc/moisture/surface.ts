@@ -24,6 +24,13 @@ export const surfaceTemperature = (fRsi: number, thetaI: number, thetaE: number)
 export const minSurfaceTemperature = (pi: number, criticalRh = CRITICAL_SURFACE_RH): number =>
   dewPoint(Math.max(pi, DRY_AIR_PRESSURE) / criticalRh);
 
-/** f_Rsi,min = (θ_si,min − θ_e)/(θ_i − θ_e); null when θ_e ≥ θ_i (no outward heat flow to design against). */
-export const minTemperatureFactor = (thetaSiMin: number, thetaI: number, thetaE: number): number | null =>
-  thetaI > thetaE ? (thetaSiMin - thetaE) / (thetaI - thetaE) : null;
+/**
+ * f_Rsi,min = (θ_si,min − θ_e)/(θ_i − θ_e) (ISO 13788:2012 §5); null — not applicable — when θ_e ≥ θ_i (no
+ * outward heat flow, as in a cooling season) or when θ_e itself is at or above θ_si,min, so no surface
+ * between the two air temperatures can reach 80 % RH and the factor would be 0 or negative.
+ */
+export function minTemperatureFactor(thetaSiMin: number, thetaI: number, thetaE: number): number | null {
+  if (!(thetaI > thetaE)) return null;
+  const f = (thetaSiMin - thetaE) / (thetaI - thetaE);
+  return f > 0 ? f : null;
+}

@@ -88,7 +88,7 @@ export function surfaceStatement(result: MoistureResult): Statement {
       tone: 'meets',
       text:
         surface.fRsiMax === null
-          ? 'The interior surface stays at or below 80 % RH in every month (the outside is never colder than the inside).'
+          ? 'Surface humidity check not applicable: in no month is the outside cold enough for the interior surface to reach 80 % RH.'
           : `The interior surface stays at or below 80 % RH in every month: f_Rsi ${formatFactor(surface.fRsi)} ≥ f_Rsi,min ${formatFactor(surface.fRsiMax)} of the critical month, ${monthName(surface.criticalMonth ?? 1)}.`,
     };
   const failing = [...months]

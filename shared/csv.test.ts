@@ -36,6 +36,26 @@ describe('RFC 4180 CSV', () => {
     expect(parseCsv('a\n"x"y,z')).toMatchObject({ ok: false, line: 2 });
   });
 
+  it('neutralises text a spreadsheet would run as a formula, leaves numbers alone and reads both back', () => {
+    // OWASP "CSV Injection": cells starting with = + - @, tab or CR.
+    const cells = [
+      '=1+1',
+      '+SUM(A1)',
+      '-2+3',
+      '@cmd',
+      '\tx',
+      '\rx',
+      "'=already",
+      '-3.5',
+      '+2',
+      '1e-7',
+      'a=b',
+    ];
+    const text = toCsv([cells]);
+    expect(text).toBe(`'=1+1,'+SUM(A1),'-2+3,'@cmd,'\tx,"'\rx",''=already,-3.5,+2,1e-7,a=b\r\n`);
+    expect(parseCsv(text)).toEqual({ ok: true, records: [{ line: 1, fields: cells }] });
+  });
+
   it('reads back what it writes (any text, any shape)', () => {
     fc.assert(
       fc.property(

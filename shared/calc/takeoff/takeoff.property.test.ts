@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { parseCsv } from '../../csv';
 import { takeoffToCsv } from './csv';
 import { TAKEOFF_JOINT_TYPES, type TakeoffInput, type TakeoffResult, type Wall } from './schema';
 import { calculateTakeoff, PACKAGES, US_FLUID_OUNCE } from './takeoff';
@@ -183,41 +184,13 @@ describe('takeoff properties', () => {
   });
 });
 
-/** Minimal RFC 4180 reader for the round trip: quoted fields, doubled quotes, CRLF records. */
-function parseCsv(text: string): string[][] {
-  const rows: string[][] = [];
-  let row: string[] = [];
-  let field = '';
-  let quoted = false;
-  for (let i = 0; i < text.length; i++) {
-    const c = text[i]!;
-    if (quoted) {
-      if (c === '"' && text[i + 1] === '"') {
-        field += '"';
-        i++;
-      } else if (c === '"') quoted = false;
-      else field += c;
-    } else if (c === '"') quoted = true;
-    else if (c === ',') {
-      row.push(field);
-      field = '';
-    } else if (c === '\r' && text[i + 1] === '\n') {
-      row.push(field);
-      rows.push(row);
-      row = [];
-      field = '';
-      i++;
-    } else field += c;
-  }
-  return rows;
-}
-
 describe('CSV', () => {
   it('any wall name survives the RFC 4180 round trip; quantities read back within 12 digits', () => {
     fc.assert(
       fc.property(anyTakeoff, (input) => {
         const r = calculateTakeoff(input);
-        const rows = parseCsv(takeoffToCsv(r));
+        const parsed = parseCsv(takeoffToCsv(r));
+        const rows = parsed.ok ? parsed.records.map((rec) => rec.fields) : [];
         expect(rows).toHaveLength(r.trace.length + 1);
         r.trace.forEach((s, k) => {
           const [label, value, unit, formula] = rows[k + 1]!;

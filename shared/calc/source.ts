@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { TEXT_MAX, text } from '../schemas/common';
 
 /**
  * Where an entered value came from — a maker's data sheet, a test report, a published catalogue — in words,
@@ -6,11 +7,8 @@ import { z } from 'zod';
  * library never changes a saved revision, and printed beside the value on the compliance sheet.
  */
 export const valueSourceSchema = z.object({
-  text: z
-    .string()
-    .trim()
+  text: text(TEXT_MAX.line)
     .min(1, 'name the source of the values (data sheet or test report, with its date or revision)')
-    .max(500)
     .describe('Where the value comes from: data sheet or test report, with its date or revision'),
   libraryEntryId: z.uuid().optional().describe('The firm library entry the value was copied from'),
 });

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { WALL_CATEGORY_LABELS, wallCategorySchema } from '../schemas/assembly';
+import { TEXT_MAX, text } from '../schemas/common';
 import { CLIMATE_ZONES, climateZoneSchema } from '../schemas/project';
 import { LB_PER_FT2_TO_KG_PER_M2, R_IP_TO_SI, U_IP_TO_SI, type UnitSystem } from '../units';
 
@@ -188,7 +189,7 @@ export const criteriaRowInputSchema = z.object({
   value: z
     .union([z.number().refine(Number.isFinite, 'must be a finite number'), z.boolean()])
     .describe('SI value (see the criterion’s unit); yes/no for must_dry_within_year'),
-  note: z.string().trim().max(500).default(''),
+  note: text(TEXT_MAX.line).default(''),
 });
 export type CriteriaRowInput = z.infer<typeof criteriaRowInputSchema>;
 

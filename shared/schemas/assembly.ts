@@ -3,8 +3,9 @@ import { jointInputSchema } from '../calc/joints/schema';
 import { vapourSchema } from '../calc/moisture/schema';
 import { valueSourceSchema } from '../calc/source';
 import { takeoffInputSchema } from '../calc/takeoff/schema';
-import { thermalInputSchema, thermalResultSchema } from '../calc/thermal/schema';
-import { panelSchema } from '../calc/wind/schema';
+import { MIN_CONDUCTIVITY, thermalInputSchema, thermalResultSchema } from '../calc/thermal/schema';
+import { MIN_CLIP_SPACING, MIN_SPAN, panelSchema } from '../calc/wind/schema';
+import { int4, TEXT_MAX, text } from './common';
 
 /**
  * Wall categories a code table may key on. The list is deliberately short and generic; criteria sets
@@ -25,15 +26,22 @@ export const attachmentSchema = z.object({
   girtOrientation: z
     .enum(['horizontal', 'vertical'])
     .describe('Girts run horizontally (panels span vertically) or vertically'),
-  clipType: z.string().trim().max(200).default('').describe('Clip or bracket product / description'),
-  fastenerType: z
-    .string()
-    .trim()
-    .max(200)
+  clipType: text(TEXT_MAX.name).default('').describe('Clip or bracket product / description'),
+  fastenerType: text(TEXT_MAX.name)
     .default('')
     .describe('Fastener description, e.g. "#14 self-drilling screw"'),
-  girtSpacing: z.number().positive().max(10).optional().describe('Design girt spacing (panel span), m'),
-  clipSpacing: z.number().positive().max(10).optional().describe('Design clip spacing along a girt, m'),
+  girtSpacing: z
+    .number()
+    .min(MIN_SPAN, `at least ${MIN_SPAN} m — a closer girt spacing is a typing or unit slip`)
+    .max(10)
+    .optional()
+    .describe(`Design girt spacing (panel span), m (at least ${MIN_SPAN}, at most 10)`),
+  clipSpacing: z
+    .number()
+    .min(MIN_CLIP_SPACING, `at least ${MIN_CLIP_SPACING} m — a closer clip spacing is a typing or unit slip`)
+    .max(10)
+    .optional()
+    .describe(`Design clip spacing along a girt, m (at least ${MIN_CLIP_SPACING}, at most 10)`),
 });
 
 /**
@@ -49,8 +57,8 @@ export const windPanelSchema = panelSchema.omit({ girtOrientation: true }).exten
 
 export const assemblyInputSchema = z
   .object({
-    name: z.string().trim().min(1, 'an assembly needs a name').max(200),
-    description: z.string().trim().max(4000).default(''),
+    name: text(TEXT_MAX.name).min(1, 'an assembly needs a name'),
+    description: text(TEXT_MAX.note).default(''),
     wallCategory: wallCategorySchema,
     attachment: attachmentSchema,
     thermal: thermalInputSchema,
@@ -69,8 +77,8 @@ export type AssemblyInput = z.infer<typeof assemblyInputSchema>;
 export const assemblyCreateSchema = assemblyInputSchema;
 /** A save names the version it was based on; a stale one gets 409. */
 export const assemblyUpdateSchema = z.object({
-  version: z.number().int().positive(),
-  note: z.string().trim().max(500).default(''),
+  version: int4(),
+  note: text(TEXT_MAX.line).default(''),
   input: assemblyInputSchema,
 });
 
@@ -111,23 +119,32 @@ export const revisionListSchema = z.object({
 
 /** An organisation's own material (SI). */
 export const orgMaterialInputSchema = z.object({
-  name: z.string().trim().min(1).max(200),
-  conductivity: z.number().positive().max(1000).describe('λ, W/(m·K)'),
-  density: z.number().positive().max(25000).optional().describe('ρ, kg/m³'),
+  name: text(TEXT_MAX.name).min(1),
+  conductivity: z
+    .number()
+    .min(MIN_CONDUCTIVITY, `at least ${MIN_CONDUCTIVITY} W/(m·K) — below vacuum insulation panels`)
+    .max(1000)
+    .describe(`λ, W/(m·K) (at least ${MIN_CONDUCTIVITY}, at most 1000)`),
+  density: z
+    .number()
+    .min(1, 'at least 1 kg/m³ — lighter than any aerogel is a typing or unit slip')
+    .max(25000)
+    .optional()
+    .describe('ρ, kg/m³ (at least 1, at most 25 000)'),
   vapourResistanceFactor: z.number().min(1).max(1e7).optional().describe('μ, dimensionless'),
-  source: z.string().trim().min(1, 'name the source of the value (data sheet, test report, table)').max(500),
+  source: text(TEXT_MAX.line).min(1, 'name the source of the value (data sheet, test report, table)'),
 });
 export const orgMaterialSchema = orgMaterialInputSchema.extend({ id: z.uuid(), createdAt: z.string() });
 export type OrgMaterial = z.infer<typeof orgMaterialSchema>;
 
 /** An organisation's own χ or ψ value with where it came from. */
 export const bridgeValueInputSchema = z.object({
-  name: z.string().trim().min(1).max(200),
+  name: text(TEXT_MAX.name).min(1),
   kind: z.enum(['point', 'linear']).describe('point → χ in W/K; linear → ψ in W/(m·K)'),
   value: z.number().min(0).max(10).describe('χ (W/K) or ψ (W/(m·K))'),
   sourceType: z.enum(['test_report', 'catalogue', 'calculation']),
-  source: z.string().trim().min(1, 'name the source of the value').max(500),
-  notes: z.string().trim().max(2000).default(''),
+  source: text(TEXT_MAX.line).min(1, 'name the source of the value'),
+  notes: text(TEXT_MAX.note).default(''),
 });
 export const bridgeValueSchema = bridgeValueInputSchema.extend({ id: z.uuid(), createdAt: z.string() });
 export type BridgeValue = z.infer<typeof bridgeValueSchema>;

@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { CalcInputError } from '../calc/errors';
 import { valueSourceSchema } from '../calc/source';
 import { tableColumns } from '../calc/wind/attachment';
-import { clipSchema, loadSpanTableSchema } from '../calc/wind/schema';
+import { clipSchema, loadSpanTableSchema, panelSchema } from '../calc/wind/schema';
+import { TEXT_MAX, text } from './common';
 
 /**
  * A firm's library of attachment data for the wind check: panel load–span tables and clip capacities, each
@@ -12,14 +13,11 @@ import { clipSchema, loadSpanTableSchema } from '../calc/wind/schema';
  * revision.
  */
 
-const nameSchema = z
-  .string()
-  .trim()
+const nameSchema = text(TEXT_MAX.name)
   .min(1, 'name the product')
-  .max(200)
   .describe('Product, e.g. "80 mm insulated panel, 0.6 mm skins"');
 const sourceSchema = valueSourceSchema.shape.text;
-const notesSchema = z.string().trim().max(2000).default('');
+const notesSchema = text(TEXT_MAX.note).default('');
 
 /** The engine's own rules for a load–span table (rows, increasing spans, allowables not rising), as zod issues. */
 const checkedTable = loadSpanTableSchema.superRefine((table, ctx) => {
@@ -44,12 +42,9 @@ export const panelProductInputSchema = z.object({
   source: sourceSchema,
   notes: notesSchema,
   loadSpanTable: checkedTable,
-  panelModuleWidth: z
-    .number()
-    .positive()
-    .max(3)
+  panelModuleWidth: panelSchema.shape.panelModuleWidth
     .optional()
-    .describe('Panel module width (cover width), m (greater than 0, at most 3)'),
+    .describe('Panel module width (cover width), m (at least 0.1, at most 3)'),
 });
 
 export const clipProductInputSchema = z.object({

@@ -1,18 +1,16 @@
 import { z } from 'zod';
 import { categoryLabelsSchema, criteriaRowInputSchema, criteriaRowsSchema } from '../checks/criteria';
 import { CSV_COLUMNS } from '../checks/criteria-csv';
-import { unitSystemSchema } from './common';
+import { calendarDate, int4, int4Param, TEXT_MAX, text, unitSystemSchema } from './common';
 
 /** API contracts of code tables (criteria sets). Values in rows are SI; see shared/checks/criteria.ts. */
 
-const text = (max: number) => z.string().trim().max(max);
-
 export const criteriaSetMetaSchema = z.object({
-  name: text(200).min(1, 'a code table needs a name'),
-  jurisdiction: text(200).default('').describe('Where the table applies, as the firm names it'),
-  edition: text(200).default('').describe('Code edition and the amendments adopted'),
-  effectiveDate: z.iso.date().nullable().default(null).describe('Date the adopted edition takes effect'),
-  notes: text(4000).default(''),
+  name: text(TEXT_MAX.name).min(1, 'a code table needs a name'),
+  jurisdiction: text(TEXT_MAX.name).default('').describe('Where the table applies, as the firm names it'),
+  edition: text(TEXT_MAX.name).default('').describe('Code edition and the amendments adopted'),
+  effectiveDate: calendarDate().nullable().default(null).describe('Date the adopted edition takes effect'),
+  notes: text(TEXT_MAX.note).default(''),
   sourceReference: text(1000).default('').describe('Where the values come from (code section, table)'),
   categoryLabels: categoryLabelsSchema.default({}),
 });
@@ -26,11 +24,11 @@ export type CriteriaSetCreate = z.infer<typeof criteriaSetCreateSchema>;
  * frozen version (used by a stored check run) creates the next version instead.
  */
 export const criteriaSetMetaUpdateSchema = z.object({
-  revision: z.number().int().positive(),
+  revision: int4(),
   changes: criteriaSetMetaSchema,
 });
 export const criteriaRowsUpdateSchema = z.object({
-  revision: z.number().int().positive(),
+  revision: int4(),
   rows: criteriaRowsSchema,
 });
 
@@ -39,10 +37,7 @@ export const criteriaImportBodySchema = z.union([
   z.object({ csv: z.string().max(1_000_000) }),
 ]);
 export const criteriaImportQuerySchema = z.object({
-  revision: z.coerce
-    .number()
-    .int()
-    .positive()
+  revision: int4Param()
     .optional()
     .describe('Revision the import replaces (409 if stale)'),
 });
@@ -114,8 +109,8 @@ export const csvImportErrorSchema = z.object({
 });
 
 export const criteriaDiffQuerySchema = z.object({
-  from: z.coerce.number().int().positive().describe('Version number to compare from'),
-  to: z.coerce.number().int().positive().describe('Version number to compare to'),
+  from: int4Param().describe('Version number to compare from'),
+  to: int4Param().describe('Version number to compare to'),
 });
 
 const rowValue = criteriaRowInputSchema.pick({ value: true, note: true });

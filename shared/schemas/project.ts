@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { projectRoleSchema } from '../auth/permissions';
 import { monthClimateSchema } from '../calc/moisture/schema';
 import { windSiteSchema } from '../calc/wind/schema';
+import { int4, TEXT_MAX, text } from './common';
 
 /** ASHRAE 169 climate zone designations: 0–8 with moisture regime A (moist), B (dry), C (marine) where used. */
 export const CLIMATE_ZONES = [
@@ -27,11 +28,9 @@ export const CLIMATE_ZONES = [
 ] as const;
 export const climateZoneSchema = z.enum(CLIMATE_ZONES);
 
-const text = (max: number) => z.string().trim().max(max);
-
 /** Site fields of a project, all SI. Ranges are sanity limits for buildings on Earth, not code limits. */
 export const projectSiteSchema = z.object({
-  siteAddress: text(500).default('').describe('Free-text site address.'),
+  siteAddress: text(TEXT_MAX.line).default('').describe('Free-text site address.'),
   climateZone: climateZoneSchema.describe('ASHRAE 169 climate zone designation.'),
   elevationM: z
     .number()
@@ -39,9 +38,21 @@ export const projectSiteSchema = z.object({
     .max(6000)
     .default(0)
     .describe('Ground elevation above sea level, m (−500…6000).'),
-  buildingHeightM: z.number().gt(0).max(600).describe('Mean roof height h, m (>0…600).'),
-  planLengthM: z.number().gt(0).max(2000).describe('Plan length (longer side), m (>0…2000).'),
-  planWidthM: z.number().gt(0).max(2000).describe('Plan width (shorter side), m (>0…2000).'),
+  buildingHeightM: z
+    .number()
+    .min(1, 'at least 1 m — a lower building is a typing or unit slip')
+    .max(600)
+    .describe('Mean roof height h, m (1…600).'),
+  planLengthM: z
+    .number()
+    .min(1, 'at least 1 m — a shorter side is a typing or unit slip')
+    .max(2000)
+    .describe('Plan length (longer side), m (1…2000).'),
+  planWidthM: z
+    .number()
+    .min(1, 'at least 1 m — a shorter side is a typing or unit slip')
+    .max(2000)
+    .describe('Plan width (shorter side), m (1…2000).'),
   indoorTempC: z.number().min(-40).max(60).describe('Indoor design temperature, °C (−40…60).'),
   indoorRh: z.number().min(0).max(1).describe('Indoor design relative humidity, fraction 0–1.'),
   winterDesignTempC: z
@@ -58,9 +69,9 @@ export const projectSiteSchema = z.object({
 
 export const projectInputSchema = projectSiteSchema
   .extend({
-    name: text(200).min(1, 'a project needs a name'),
+    name: text(TEXT_MAX.name).min(1, 'a project needs a name'),
     number: text(50).default(''),
-    description: text(4000).default(''),
+    description: text(TEXT_MAX.note).default(''),
   })
   .refine((p) => p.planWidthM <= p.planLengthM, {
     path: ['planWidthM'],
@@ -76,11 +87,7 @@ export type ProjectInput = z.infer<typeof projectInputSchema>;
  * A save of one part of a project (site data, wind data, climate) names the project version it was based on;
  * it conflicts only with a later save of the same part (optimistic concurrency per part).
  */
-const baseVersion = z
-  .number()
-  .int()
-  .positive()
-  .describe('The project version this save is based on; 409 if the same part was saved after it');
+const baseVersion = int4().describe('The project version this save is based on; 409 if the same part was saved after it');
 export const projectUpdateSchema = z.object({
   version: baseVersion,
   changes: projectInputSchema,
@@ -107,7 +114,7 @@ export type ProjectWind = z.infer<typeof projectWindSchema>;
 /** Twelve monthly mean exterior climates (January first) with where they come from, for the moisture check. */
 export const projectClimateSchema = z.object({
   months: z.array(monthClimateSchema).length(12, 'enter all 12 months, January first'),
-  source: z.string().trim().min(1, 'name where the monthly values come from').max(500),
+  source: text(TEXT_MAX.line).min(1, 'name where the monthly values come from'),
   humidityClass: z
     .number()
     .int()

@@ -7,8 +7,16 @@ import { z } from 'zod';
  * installation-temperature split of ASTM C1472 and the movement classes of ASTM C920.
  */
 
-const metres = (what: string, max: number) =>
-  z.number().positive().max(max).describe(`${what}, m (greater than 0, at most ${max} m)`);
+/**
+ * A length `min` … `max`, m. The default lower bound, 1 mm, is below any joint, bead or tolerance that can be
+ * built; less is a typing or unit slip (and would let the movement ratios overflow).
+ */
+const metres = (what: string, max: number, min = 0.001) =>
+  z
+    .number()
+    .min(min, `at least ${min} m — less is a typing or unit slip`)
+    .max(max)
+    .describe(`${what}, m (at least ${min} m, at most ${max} m)`);
 const metresOrZero = (what: string, max: number) =>
   z.number().nonnegative().max(max).describe(`${what}, m (0 to ${max} m)`);
 const celsius = (what: string) => z.number().min(-80).max(120).describe(`${what}, °C (−80 to 120 °C)`);
@@ -25,18 +33,21 @@ export const movementClassSchema = z
 const sideLength = metres(
   'Length L of material whose movement this side puts into the joint (the panel length for a panel fixed at its far end; half of it for a panel anchored at mid-length)',
   100,
+  0.01,
 );
 
 export const materialSideSchema = z.object({
-  material: z.string().min(1).describe('Id of a row in data/reference/thermal-expansion.json'),
+  material: z.string().min(1).max(100).describe('Id of a row in data/reference/thermal-expansion.json'),
   length: sideLength,
 });
 export const customSideSchema = z.object({
   alpha: z
     .number()
-    .positive()
+    .min(1e-7, 'at least 1 × 10⁻⁷ 1/K — below any building material (Invar is about 1.2 × 10⁻⁶)')
     .max(5e-4)
-    .describe('Declared coefficient of linear thermal expansion α, 1/K (greater than 0, at most 5 × 10⁻⁴)'),
+    .describe(
+      'Declared coefficient of linear thermal expansion α, 1/K (at least 1 × 10⁻⁷, at most 5 × 10⁻⁴)',
+    ),
   label: z.string().min(1).max(120).optional().describe('What the custom α belongs to, e.g. the product'),
   length: sideLength,
 });

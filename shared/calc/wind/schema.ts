@@ -23,17 +23,35 @@ export const riskCategorySchema = z
   .enum(['I', 'II', 'III', 'IV'])
   .describe('Risk category (ASCE 7 Table 1.5-1); informational — V is already read from that category’s map');
 
-const metres = (what: string, max: number) =>
-  z.number().positive().max(max).describe(`${what}, m (greater than 0, at most ${max})`);
+/*
+ * Lower bounds: a value below them is a typing or unit slip, never a real building or product, and would let a
+ * spacing, an area or a capacity underflow to 0 — a null result with no reason. Each is far outside practice.
+ */
+
+/** Shortest panel span (girt spacing), m: 100 mm. */
+export const MIN_SPAN = 0.1;
+/** Closest clip spacing along a girt, m: 50 mm. */
+export const MIN_CLIP_SPACING = 0.05;
+/** Smallest allowable pressure of a load–span table, Pa: 10 Pa ≈ 0.2 lbf/ft². */
+export const MIN_ALLOWABLE_PRESSURE = 10;
+/** Smallest allowable load of a clip or a fastener, N. */
+export const MIN_CAPACITY = 1;
+
+const metres = (what: string, min: number, max: number) =>
+  z
+    .number()
+    .min(min, `at least ${min} m — less is a typing or unit slip`)
+    .max(max)
+    .describe(`${what}, m (at least ${min}, at most ${max})`);
 
 export const windSiteSchema = z.object({
   edition: windEditionSchema,
   basicWindSpeed: z
     .number()
-    .positive()
+    .min(10, 'at least 10 m/s — no design wind map goes lower')
     .max(150)
     .describe(
-      'Basic wind speed V from the risk-category map (3-s gust, 10 m, exposure C), m/s (greater than 0, at most 150)',
+      'Basic wind speed V from the risk-category map (3-s gust, 10 m, exposure C), m/s (at least 10, at most 150)',
     ),
   riskCategory: riskCategorySchema,
   exposure: exposureSchema,
@@ -54,13 +72,15 @@ export const windSiteSchema = z.object({
   enclosure: enclosureSchema,
   meanRoofHeight: metres(
     'Mean roof height h (eave height where the roof slope θ ≤ 10°) — at most 152.4 m = 500 ft',
+    1,
     152.4,
   ),
-  planLength: metres('Plan length of the building', 2000),
-  planWidth: metres('Plan width of the building', 2000),
+  planLength: metres('Plan length of the building', 1, 2000),
+  planWidth: metres('Plan width of the building', 1, 2000),
   roofSlopeDeg: z.number().min(0).max(90).describe('Roof slope θ, degrees (0 to 90)'),
   heightOfComponent: metres(
     'Height z of the component above ground (at most h; default h)',
+    0.1,
     152.4,
   ).optional(),
 });
@@ -70,10 +90,14 @@ export const spanConditionSchema = z
   .describe('Span condition of the load–span table: single, double (two-span) or triple (three-span)');
 
 const pascals = (what: string) =>
-  z.number().positive().max(100_000).describe(`${what}, Pa (greater than 0, at most 100 000)`);
+  z
+    .number()
+    .min(MIN_ALLOWABLE_PRESSURE, `at least ${MIN_ALLOWABLE_PRESSURE} Pa — less is a typing or unit slip`)
+    .max(100_000)
+    .describe(`${what}, Pa (at least ${MIN_ALLOWABLE_PRESSURE}, at most 100 000)`);
 
 export const loadSpanRowSchema = z.object({
-  span: metres('Panel span (girt spacing)', 10),
+  span: metres('Panel span (girt spacing)', MIN_SPAN, 10),
   allowableInward: pascals('Allowable ASD inward (positive) pressure at this span'),
   allowableOutward: pascals('Allowable ASD outward (suction) pressure at this span'),
   allowableDeflectionPressure: pascals(
@@ -97,18 +121,18 @@ export const loadSpanTableSchema = z.object({
 export const clipByRatingSchema = z.object({
   allowableLoad: z
     .number()
-    .positive()
+    .min(MIN_CAPACITY, `at least ${MIN_CAPACITY} N — less is a typing or unit slip`)
     .max(1_000_000)
-    .describe('Allowable ASD load of one clip (tested or published), N (greater than 0, at most 1 000 000)'),
+    .describe('Allowable ASD load of one clip (tested or published), N (at least 1, at most 1 000 000)'),
 });
 
 export const clipByFastenersSchema = z.object({
   fastenerCapacity: z
     .number()
-    .positive()
+    .min(MIN_CAPACITY, `at least ${MIN_CAPACITY} N — less is a typing or unit slip`)
     .max(1_000_000)
     .describe(
-      'Allowable ASD capacity of one fastener, lesser of pull-out and pull-over, N (greater than 0, at most 1 000 000)',
+      'Allowable ASD capacity of one fastener, lesser of pull-out and pull-over, N (at least 1, at most 1 000 000)',
     ),
   fastenersPerClip: z.number().int().min(1).max(20).describe('Fasteners per clip, count (1 to 20)'),
 });
@@ -118,7 +142,7 @@ export const clipSchema = z.union([clipByRatingSchema, clipByFastenersSchema]);
 export const panelSchema = z.object({
   loadSpanTable: loadSpanTableSchema,
   clip: clipSchema,
-  panelModuleWidth: metres('Panel module width — tributary width along the girt', 3),
+  panelModuleWidth: metres('Panel module width — tributary width along the girt', 0.1, 3),
   girtOrientation: z
     .enum(['horizontal', 'vertical'])
     .describe(
@@ -265,22 +289,16 @@ export type WallZone = ZoneResult['zone'];
 // ================================================================================================================
 
 export const designSpacingsSchema = z.object({
-  girtSpacing: z
-    .number()
-    .positive()
-    .max(10)
-    .optional()
-    .describe(
-      'Girt spacing the designer chose (= panel span), m (greater than 0, at most 10); absent: not checked',
-    ),
-  clipSpacing: z
-    .number()
-    .positive()
-    .max(10)
-    .optional()
-    .describe(
-      'Clip spacing along a girt the designer chose, m (greater than 0, at most 10); absent: not checked',
-    ),
+  girtSpacing: metres(
+    'Girt spacing the designer chose (= panel span); absent: not checked',
+    MIN_SPAN,
+    10,
+  ).optional(),
+  clipSpacing: metres(
+    'Clip spacing along a girt the designer chose; absent: not checked',
+    MIN_CLIP_SPACING,
+    10,
+  ).optional(),
 });
 
 export const windDesignInputSchema = windScheduleInputSchema.extend({

@@ -26,7 +26,7 @@ describe('the attachment sheet computed in the browser', () => {
     const a = demoAssembly({ girtSpacing: 1.2, clipSpacing: 0.6 });
     const values = { ...attachmentFormValues(a), clipSpacing: -1 };
     const e = evaluateAttachment(values, a, demoProject(), 'SI');
-    expect(e.errors.clipSpacing).toMatch(/more than 0/);
+    expect(e.errors.clipSpacing).toMatch(/at least 50\u202fmm/);
     expect(e.result).not.toBeNull();
     expect(e.zones.map((z) => [z.girt, z.clip])).toEqual([
       ['meets', 'missing'],

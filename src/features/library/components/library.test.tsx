@@ -149,7 +149,7 @@ describe('the add forms', () => {
     fireEvent.change(screen.getByLabelText(/^Vapour/), { target: { value: '0.5' } });
     await act(async () => fireEvent.submit(form));
     expect(screen.getByText('Give the material a name.')).toBeTruthy();
-    expect(screen.getByText('Must be more than 0 Btu·in/(h·ft²·°F).')).toBeTruthy();
+    expect(screen.getByText('Must be at least 0.0069 Btu·in/(h·ft²·°F).')).toBeTruthy();
     expect(screen.getByText('Must be at most 1560.7 lb/ft³.')).toBeTruthy();
     expect(screen.getByText('Must be at least 1.')).toBeTruthy();
     expect(fetch).not.toHaveBeenCalled();

@@ -1,4 +1,4 @@
-import { projectRoleSchema } from '@shared/auth/permissions';
+import { firmRoleSchema, projectRoleSchema } from '@shared/auth/permissions';
 import { assemblyInputSchema } from '@shared/schemas/assembly';
 import { attachmentProductInputSchema } from '@shared/schemas/attachment-library';
 import { criteriaSetCreateSchema } from '@shared/schemas/criteria';
@@ -33,7 +33,7 @@ const demoSchema = z.object({
       email: z.email(),
       name: z.string(),
       firm: z.string(),
-      firmRole: z.enum(['admin', 'member']),
+      firmRole: firmRoleSchema,
       siteRole: z.enum(['admin', 'user']).optional(),
       /** What the account is for in the demo (its role on the demo project). */
       demoRole: z.string(),

@@ -19,7 +19,7 @@ const accessText: Record<AnyRoute['access']['kind'], string> = {
 
 const CRITERIA_ACCESS_TEXT = {
   read: 'members of the firm and of its projects.',
-  write: 'members of the firm, and project members whose role allows `criteria.write`.',
+  write: 'editors and administrators of the firm.',
   admin: 'firm administrators.',
 } as const;
 
@@ -46,7 +46,7 @@ export function buildOpenApi(routes: AnyRoute[]) {
       r.access.kind === 'project'
         ? `${accessText.project} \`${r.access.action}\`.`
         : r.access.kind === 'organisation'
-          ? `${accessText.organisation}${r.access.role === 'admin' ? ' (administrators)' : ''}.`
+          ? `${accessText.organisation} whose firm role allows \`${r.access.action}\`.`
           : r.access.kind === 'criteria'
             ? `${accessText.criteria} ${CRITERIA_ACCESS_TEXT[r.access.need]}`
             : accessText[r.access.kind];

@@ -1,5 +1,11 @@
 import type { IncomingMessage, ServerResponse } from 'node:http';
-import { can, type ProjectAction, type ProjectRole } from '@shared/auth/permissions';
+import {
+  can,
+  canInFirm,
+  type FirmAction,
+  type ProjectAction,
+  type ProjectRole,
+} from '@shared/auth/permissions';
 import { type CriteriaAccess, criteriaAllows } from '@shared/schemas/criteria';
 import type { Project } from '@shared/schemas/project';
 import { type Request, type Response, Router } from 'express';
@@ -16,18 +22,18 @@ import { forbidden, HttpError, notFound, unauthorised, zodFields } from './error
  * - `project`: a member of the project whose role allows `action` (the permission table in shared/auth).
  *   Non-members get 404 so that a project's existence is not revealed to other firms. A write (any method
  *   but GET) to an archived project gets 409 `archived` unless the route says `whenArchived: 'allow'`.
- * - `organisation`: a member (or, with `role: 'admin'`, an administrator) of the firm named by `:orgId`;
- *   non-members get 404.
+ * - `organisation`: a member of the firm named by `:orgId` whose firm role allows `action` (`FIRM_PERMISSIONS`
+ *   in shared/auth: `firm.read` every member, `firm.write` editors and administrators, `firm.admin`
+ *   administrators); non-members get 404.
  * - `criteria`: the firm's code tables, named by `:orgId` or by `:setId` (a table of the firm). `read`: firm
- *   members and members of any of the firm's projects; `write`: firm members, and project members whose
- *   role on one of the firm's (unarchived) projects allows `criteria.write`; `admin`: firm administrators.
- *   Anyone else gets 404.
+ *   members and members of any of the firm's projects; `write`: the firm's editors and administrators;
+ *   `admin`: firm administrators. Anyone else gets 404.
  */
 export type Access =
   | { kind: 'public' }
   | { kind: 'user' }
   | { kind: 'siteAdmin' }
-  | { kind: 'organisation'; role: 'member' | 'admin' }
+  | { kind: 'organisation'; action: FirmAction }
   | { kind: 'criteria'; need: CriteriaAccess }
   | {
       kind: 'project';
@@ -267,9 +273,14 @@ export function mountRoutes(
       if (access.kind === 'organisation') {
         const orgId = (req.params as Record<string, string>).orgId;
         const role =
-          orgId && /^[0-9a-f-]{36}$/i.test(orgId) ? await services.library.roleIn(orgId, user!.id) : null;
+          orgId && /^[0-9a-f-]{36}$/i.test(orgId) ? await services.firmMembers.roleIn(orgId, user!.id) : null;
         if (!role) throw notFound('organisation');
-        if (access.role === 'admin' && role !== 'admin') throw forbidden('firm administrators only');
+        if (!canInFirm(role, access.action))
+          throw forbidden(
+            access.action === 'firm.admin'
+              ? 'firm administrators only'
+              : 'your firm role is reader: an editor or administrator of the firm writes its data',
+          );
       }
       let criteria: RouteContext<unknown, unknown, unknown>['criteria'] = null;
       if (access.kind === 'criteria') {
@@ -282,7 +293,7 @@ export function mountRoutes(
           throw forbidden(
             access.need === 'admin'
               ? 'firm administrators only'
-              : 'editing this firm’s code tables needs firm membership or a project role that allows it',
+              : 'an editor or administrator of the firm edits its code tables',
           );
         criteria = { organisationId: orgId!, access: held };
       }

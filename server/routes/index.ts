@@ -3,6 +3,7 @@ import { assemblyRoutes } from './assemblies';
 import { calcRoutes } from './calc';
 import { checkRunRoutes } from './check-runs';
 import { criteriaRoutes } from './criteria';
+import { firmMemberRoutes } from './firm-members';
 import { healthRoutes } from './health';
 import { libraryRoutes } from './library';
 import { meRoutes } from './me';
@@ -21,6 +22,7 @@ export const apiRoutes: AnyRoute[] = [
   ...memberRoutes,
   ...assemblyRoutes,
   ...libraryRoutes,
+  ...firmMemberRoutes,
   ...criteriaRoutes,
   ...checkRunRoutes,
   ...sheetRoutes,

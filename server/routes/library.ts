@@ -15,7 +15,11 @@ const itemParams = orgParams.extend({ itemId: z.uuid() });
 const errors = {
   400: { description: 'Invalid fields', schema: apiErrorSchema },
   401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: { description: 'Firm administrators only', schema: apiErrorSchema },
+  403: {
+    description:
+      'Your firm role does not allow this (writing: editors and administrators; deleting: administrators)',
+    schema: apiErrorSchema,
+  },
   404: { description: 'No such firm or item, or you are not a member', schema: apiErrorSchema },
 };
 
@@ -25,7 +29,7 @@ export const libraryRoutes = [
     path: '/organisations/:orgId/materials',
     summary: 'The firm’s own materials',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'member' },
+    access: { kind: 'organisation', action: 'firm.read' },
     params: orgParams,
     responses: {
       200: { description: 'Materials', schema: z.object({ materials: z.array(orgMaterialSchema) }) },
@@ -38,7 +42,7 @@ export const libraryRoutes = [
     path: '/organisations/:orgId/materials',
     summary: 'Add a material to the firm’s library (with its source)',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'member' },
+    access: { kind: 'organisation', action: 'firm.write' },
     params: orgParams,
     body: orgMaterialInputSchema,
     example: {
@@ -56,7 +60,7 @@ export const libraryRoutes = [
     path: '/organisations/:orgId/materials/:itemId',
     summary: 'Remove a material from the firm’s library',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'admin' },
+    access: { kind: 'organisation', action: 'firm.admin' },
     params: itemParams,
     responses: { 204: { description: 'Removed' }, ...errors },
     handler: async ({ params, services }) => {
@@ -69,7 +73,7 @@ export const libraryRoutes = [
     path: '/organisations/:orgId/bridge-values',
     summary: 'The firm’s own χ and ψ values',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'member' },
+    access: { kind: 'organisation', action: 'firm.read' },
     params: orgParams,
     responses: {
       200: { description: 'Bridge values', schema: z.object({ bridgeValues: z.array(bridgeValueSchema) }) },
@@ -84,7 +88,7 @@ export const libraryRoutes = [
     path: '/organisations/:orgId/bridge-values',
     summary: 'Add a χ or ψ value with its source (test report, published catalogue, calculation)',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'member' },
+    access: { kind: 'organisation', action: 'firm.write' },
     params: orgParams,
     body: bridgeValueInputSchema,
     example: {
@@ -103,7 +107,7 @@ export const libraryRoutes = [
     path: '/organisations/:orgId/bridge-values/:itemId',
     summary: 'Remove a χ or ψ value from the firm’s library',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'admin' },
+    access: { kind: 'organisation', action: 'firm.admin' },
     params: itemParams,
     responses: { 204: { description: 'Removed' }, ...errors },
     handler: async ({ params, services }) => {
@@ -116,7 +120,7 @@ export const libraryRoutes = [
     path: '/organisations/:orgId/attachment-products',
     summary: 'The firm’s panel load–span tables and clip capacities for the wind check',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'member' },
+    access: { kind: 'organisation', action: 'firm.read' },
     params: orgParams,
     responses: {
       200: {
@@ -135,7 +139,7 @@ export const libraryRoutes = [
     summary:
       'Add a panel load–span table (kind "panel") or a clip capacity (kind "clip") with its source; ASD values in SI',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'member' },
+    access: { kind: 'organisation', action: 'firm.write' },
     params: orgParams,
     body: attachmentProductInputSchema,
     example: {
@@ -163,7 +167,7 @@ export const libraryRoutes = [
     summary:
       'Upload the maker’s data sheet of an entry (multipart/form-data, field "files", one PDF, PNG or JPEG by content); replaces the one before',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'member' },
+    access: { kind: 'organisation', action: 'firm.write' },
     params: itemParams,
     responses: {
       201: { description: 'The entry with its data sheet', schema: attachmentProductSchema },
@@ -186,7 +190,7 @@ export const libraryRoutes = [
     path: '/organisations/:orgId/attachment-products/:itemId/data-sheet',
     summary: 'Download the data sheet of an entry, byte for byte',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'member' },
+    access: { kind: 'organisation', action: 'firm.read' },
     params: itemParams,
     responses: {
       200: { description: 'The file', contentType: 'application/octet-stream', schema: z.string() },
@@ -200,7 +204,7 @@ export const libraryRoutes = [
     path: '/organisations/:orgId/attachment-products/:itemId',
     summary: 'Remove an entry and its data sheet (assemblies keep the values they took from it)',
     tag: 'Libraries',
-    access: { kind: 'organisation', role: 'admin' },
+    access: { kind: 'organisation', action: 'firm.admin' },
     params: itemParams,
     responses: { 204: { description: 'Removed' }, ...errors },
     handler: async ({ params, services }) => {

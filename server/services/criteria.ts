@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { can, type ProjectRole } from '@shared/auth/permissions';
+import { canInFirm, type FirmRole } from '@shared/auth/permissions';
 import {
   type CategoryLabels,
   type CriteriaRowInput,
@@ -315,9 +315,9 @@ export function createCriteriaService(db: Db) {
     },
 
     /**
-     * What a person may do with a firm's code tables. Firm admins: admin (edit, delete); firm members:
-     * write. Someone outside the firm who is on one of the firm's projects: read — and write when their
-     * role on a project of the firm that is not archived allows `criteria.write`. Anyone else: null (404).
+     * What a person may do with a firm's code tables: by their firm role — admin: admin (edit, delete);
+     * editor: write; reader: read. Someone outside the firm who is on one of the firm's projects: read (to
+     * see what their checks are run against; writing is the firm's alone). Anyone else: null (404).
      */
     async accessIn(organisationId: string, userId: string): Promise<CriteriaAccess | null> {
       const [m] = await db
@@ -326,16 +326,17 @@ export function createCriteriaService(db: Db) {
         .where(
           and(eq(organisationMembers.organisationId, organisationId), eq(organisationMembers.userId, userId)),
         );
-      if (m) return m.role === 'admin' ? 'admin' : 'write';
-      const roles = await db
-        .select({ role: projectMembers.role, archivedAt: projects.archivedAt })
+      if (m) {
+        const role = m.role as FirmRole;
+        return canInFirm(role, 'firm.admin') ? 'admin' : canInFirm(role, 'firm.write') ? 'write' : 'read';
+      }
+      const [onProject] = await db
+        .select({ id: projectMembers.id })
         .from(projectMembers)
         .innerJoin(projects, eq(projects.id, projectMembers.projectId))
-        .where(and(eq(projects.organisationId, organisationId), eq(projectMembers.userId, userId)));
-      if (roles.length === 0) return null;
-      return roles.some((r) => !r.archivedAt && can(r.role as ProjectRole, 'criteria.write'))
-        ? 'write'
-        : 'read';
+        .where(and(eq(projects.organisationId, organisationId), eq(projectMembers.userId, userId)))
+        .limit(1);
+      return onProject ? 'read' : null;
     },
 
     /** The latest version of each of the firm's tables. */

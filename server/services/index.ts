@@ -8,6 +8,7 @@ import { createAssemblyService } from './assemblies';
 import { createAuditService } from './audit';
 import { createCheckRunService } from './check-runs';
 import { createCriteriaService } from './criteria';
+import { createFirmMemberService } from './firm-members';
 import { createLibraryService } from './library';
 import { createMeService } from './me';
 import { createMemberService } from './members';
@@ -47,6 +48,7 @@ export function createServices(
     projects: createProjectService(db, database.readCache),
     members: createMemberService(db, config, mailer),
     assemblies: createAssemblyService(db),
+    firmMembers: createFirmMemberService(db, config, mailer),
     library: createLibraryService(db, storage, config.storage),
     criteria,
     checkRuns,

@@ -13,13 +13,7 @@ import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { z } from 'zod';
 import type { StorageConfig } from '../config';
 import type { Db } from '../db/client';
-import {
-  orgAttachmentProducts,
-  organisationMembers,
-  organisations,
-  orgBridgeValues,
-  orgMaterials,
-} from '../db/schema';
+import { orgAttachmentProducts, organisations, orgBridgeValues, orgMaterials } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
 import type { ReceiveFiles } from '../http/upload';
 import { fileIntake, type StoredUpload, skipFile } from '../storage/files';
@@ -95,15 +89,6 @@ export function createLibraryService(
       { files: 'firm library storage quota reached' },
     );
   return {
-    async roleIn(organisationId: string, userId: string): Promise<'admin' | 'member' | null> {
-      const [m] = await db
-        .select({ role: organisationMembers.role })
-        .from(organisationMembers)
-        .where(
-          and(eq(organisationMembers.organisationId, organisationId), eq(organisationMembers.userId, userId)),
-        );
-      return m ? (m.role === 'admin' ? 'admin' : 'member') : null;
-    },
     async materials(organisationId: string): Promise<OrgMaterial[]> {
       const rows = await db
         .select()

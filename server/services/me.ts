@@ -4,6 +4,7 @@ import { asc, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { capturedMail, organisationMembers, organisations, user } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
+import { firmRoleOf } from './firm-members';
 import { firmHandle } from './organisations';
 
 /**
@@ -52,7 +53,7 @@ function toMe(rows: MeRow[]): Me {
         name: r.orgName!,
         handle: firmHandle(r.orgSlug!),
         verified: r.orgVerifiedAt !== null,
-        role: r.orgRole === 'admin' ? 'admin' : 'member',
+        role: firmRoleOf(r.orgRole),
       })),
   };
 }

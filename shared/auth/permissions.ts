@@ -37,7 +37,6 @@ export const PROJECT_ACTIONS = [
   'audit.read',
   'assembly.read',
   'assembly.write',
-  'criteria.write',
   'checkrun.create',
   'submittal.create',
   'submittal.submit',
@@ -67,7 +66,6 @@ export const PERMISSIONS: Record<ProjectAction, readonly ProjectRole[]> = {
   'audit.read': ['owner', 'architect', 'envelope_consultant', 'engineer'],
   'assembly.read': ALL,
   'assembly.write': DESIGNERS,
-  'criteria.write': ['owner', 'architect', 'envelope_consultant'],
   'checkrun.create': [...DESIGNERS, 'subcontractor'],
   'submittal.create': ['owner', 'subcontractor'],
   'submittal.submit': ['owner', 'subcontractor'],
@@ -110,6 +108,38 @@ export const grantableRoles = (
 /** Whether `remover` may take a member whose role is `current` off the project: only an owner removes an owner. */
 export const mayRemove = (remover: ProjectRole | null | undefined, current: ProjectRole): boolean =>
   remover != null && (remover === 'owner' || current !== 'owner');
+
+/**
+ * Roles in a firm (`organisation_members.role`), separate from project roles: the firm's own data — its code
+ * tables, library entries (materials, χ/ψ values, panel tables and clips) and makers' data sheets — is shared
+ * by all its projects, so only the firm decides who writes it. `admin`: the firm administrator (members and
+ * their firm roles, deleting entries and tables); `editor`: writes code tables, library entries and data
+ * sheets; `reader`: reads them. A project role never writes a firm's data.
+ */
+export const FIRM_ROLES = ['admin', 'editor', 'reader'] as const;
+export const firmRoleSchema = z.enum(FIRM_ROLES);
+export type FirmRole = z.infer<typeof firmRoleSchema>;
+
+export const FIRM_ROLE_LABELS: Record<FirmRole, string> = {
+  admin: 'Firm administrator',
+  editor: 'Editor',
+  reader: 'Reader',
+};
+
+/** What a firm role allows, in the firm's own data. */
+export const FIRM_PERMISSIONS = {
+  /** Read the libraries, the code tables and the list of members. */
+  'firm.read': FIRM_ROLES,
+  /** Add library entries and upload data sheets; create and edit code tables. */
+  'firm.write': ['admin', 'editor'],
+  /** Delete library entries and code tables; add, change and remove members. */
+  'firm.admin': ['admin'],
+} as const satisfies Record<string, readonly FirmRole[]>;
+export type FirmAction = keyof typeof FIRM_PERMISSIONS;
+
+export function canInFirm(role: FirmRole | null | undefined, action: FirmAction): boolean {
+  return role != null && (FIRM_PERMISSIONS[action] as readonly FirmRole[]).includes(role);
+}
 
 /** Site-wide roles: `admin` runs the installation (mail outbox, every firm); `user` otherwise. */
 export const SITE_ROLES = ['admin', 'user'] as const;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { firmRoleSchema } from '../auth/permissions';
 import { unitSystemSchema } from './common';
 
 export const meSchema = z.object({
@@ -15,7 +16,7 @@ export const meSchema = z.object({
         .string()
         .describe('The firm’s unique handle, printed on its sheets, e.g. `@corvid-architects-0k3x9qa1`'),
       verified: z.boolean().describe('Whether a site administrator has verified the firm'),
-      role: z.enum(['admin', 'member']),
+      role: firmRoleSchema.describe('The caller’s role in the firm: admin, editor or reader'),
     }),
   ),
 });

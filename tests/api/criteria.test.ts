@@ -316,22 +316,22 @@ describe.each(testDatabases())('code tables and check runs on %s', (kind) => {
     expect(nothing.body.criteriaVerdict).toBe('incomplete');
   });
 
-  it('lets project members reach the project firm’s tables by the project rule, and hides other firms’ tables', async () => {
+  it('lets project members read the project firm’s tables (only the firm writes them), and hides other firms’ tables', async () => {
     const set = await newSet([row('max_u_factor', 0.35)], 'Shared table');
     const consultant = await t.as(demoEmail('consultant'));
     const picks = await consultant.get(`/api/projects/${projectId}/criteria-sets`);
     expect(picks.body.criteriaSets.map((s: { id: string }) => s.id)).toContain(set.id);
-    // criteria.write on a project of the firm: the envelope consultant may edit; the engineer may only read.
-    const read = await consultant.get(`/api/criteria-sets/${set.id}`);
-    expect(read.body.myAccess).toBe('write');
-    expect(
-      (await consultant.put(`/api/criteria-sets/${set.id}/rows`).send({ revision: 1, rows: [] })).status,
-    ).toBe(200);
-    const engineer = await t.as(demoEmail('engineer'));
-    expect((await engineer.get(`/api/criteria-sets/${set.id}`)).body.myAccess).toBe('read');
-    expect(
-      (await engineer.put(`/api/criteria-sets/${set.id}/rows`).send({ revision: 2, rows: [] })).status,
-    ).toBe(403);
+    // A project role never writes the firm's tables — not even one that edits the project's climate: the
+    // envelope consultant and the engineer (both outside the firm) may only read them.
+    for (const who of ['consultant', 'engineer']) {
+      const agent = await t.as(demoEmail(who));
+      expect((await agent.get(`/api/criteria-sets/${set.id}`)).body.myAccess).toBe('read');
+      expect(
+        (await agent.put(`/api/criteria-sets/${set.id}/rows`).send({ revision: 1, rows: [] })).status,
+      ).toBe(403);
+    }
+    const unchanged = await (await t.as(demoEmail('admin'))).get(`/api/criteria-sets/${set.id}`);
+    expect(unchanged.body).toMatchObject({ revision: 1, rows: [row('max_u_factor', 0.35)] });
     const outsider = await t.as(demoEmail('outsider'));
     expect((await outsider.get(`/api/criteria-sets/${set.id}`)).status).toBe(404);
     expect((await outsider.get(`/api/organisations/${orgId}/criteria-sets`)).status).toBe(404);

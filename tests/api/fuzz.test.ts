@@ -66,6 +66,8 @@ describe('fuzzing every route with a body', () => {
     const owner = await t.as(demoEmail('admin'));
     params.id = await t.demoProjectId();
     params.orgId = (await owner.get('/api/me')).body.organisations[0].id;
+    // A member of the owner's firm whose firm role the fuzzed role changes may change.
+    params.userId = (await (await t.as(demoEmail('viewer'))).get('/api/me')).body.id;
     params.assemblyId = (await owner.get(`/api/projects/${params.id}/assemblies`)).body.assemblies[0].id;
     params.setId = (
       await owner.post(`/api/organisations/${params.orgId}/criteria-sets`).send({ name: 'Fuzzed code table' })

@@ -22,15 +22,18 @@ const ALL: Role[] = [...PROJECT_ROLES];
 const SUBMITTING: Role[] = ['owner', 'subcontractor'];
 const REVIEWING: Role[] = ['architect', 'envelope_consultant', 'engineer'];
 /**
+ * `firmMember` / `firmEditor` / `firmAdmin`: the firm's own data by firm role (any role; editor or admin;
+ * admin); people outside the firm get 404.
  * `criteriaRead` / `criteriaWrite` / `criteriaAdmin`: the firm's code tables (see server/http/route.ts):
- * read = firm members and members of the firm's projects; write = firm members and project members whose
- * role allows `criteria.write`; admin = firm administrators. Everyone else gets 404.
+ * read = firm members and members of the firm's projects; write = the firm's editors and administrators (no
+ * project role writes them); admin = firm administrators. Everyone else gets 404.
  */
 type Expectation =
   | 'public'
   | 'user'
   | 'siteAdmin'
   | 'firmMember'
+  | 'firmEditor'
   | 'firmAdmin'
   | 'criteriaRead'
   | 'criteriaWrite'
@@ -67,16 +70,20 @@ const EXPECTED: Record<string, Expectation> = {
   'GET /assemblies/:assemblyId/revisions': ALL,
   'GET /assemblies/:assemblyId/revisions/:revision': ALL,
   'GET /organisations/:orgId/materials': 'firmMember',
-  'POST /organisations/:orgId/materials': 'firmMember',
+  'POST /organisations/:orgId/materials': 'firmEditor',
   'DELETE /organisations/:orgId/materials/:itemId': 'firmAdmin',
   'GET /organisations/:orgId/bridge-values': 'firmMember',
-  'POST /organisations/:orgId/bridge-values': 'firmMember',
+  'POST /organisations/:orgId/bridge-values': 'firmEditor',
   'DELETE /organisations/:orgId/bridge-values/:itemId': 'firmAdmin',
   'GET /organisations/:orgId/attachment-products': 'firmMember',
-  'POST /organisations/:orgId/attachment-products': 'firmMember',
-  'POST /organisations/:orgId/attachment-products/:itemId/data-sheet': 'firmMember',
+  'POST /organisations/:orgId/attachment-products': 'firmEditor',
+  'POST /organisations/:orgId/attachment-products/:itemId/data-sheet': 'firmEditor',
   'GET /organisations/:orgId/attachment-products/:itemId/data-sheet': 'firmMember',
   'DELETE /organisations/:orgId/attachment-products/:itemId': 'firmAdmin',
+  'GET /organisations/:orgId/members': 'firmMember',
+  'POST /organisations/:orgId/members': 'firmAdmin',
+  'PUT /organisations/:orgId/members/:userId': 'firmAdmin',
+  'DELETE /organisations/:orgId/members/:userId': 'firmAdmin',
   'POST /v1/calc/thermal': 'public',
   'POST /v1/calc/moisture': 'public',
   'POST /v1/calc/wind': 'public',
@@ -125,11 +132,15 @@ const EXPECTED: Record<string, Expectation> = {
   ],
 };
 
-/** The firm whose libraries the matrix exercises (Larchmere: owner is its admin; architect and viewer are members). */
+/**
+ * The firm whose libraries the matrix exercises (Larchmere: the owner's account is its administrator, the
+ * architect an editor, the viewer a reader).
+ */
 const FIRM_ADMINS: string[] = ['owner'];
+const FIRM_EDITORS: string[] = ['owner', 'architect'];
 const FIRM_MEMBERS: string[] = ['owner', 'architect', 'viewer'];
-/** Outside the firm but on its demo project with a role that allows `criteria.write`. */
-const CRITERIA_WRITERS: string[] = [...FIRM_MEMBERS, 'envelope_consultant'];
+/** Only the firm's editors and administrators write its code tables (a project role never does). */
+const CRITERIA_WRITERS: string[] = FIRM_EDITORS;
 
 /** Demo account per project role; `owner` is also the site administrator. */
 const emailOf: Record<Role | 'outsider', string> = {
@@ -196,6 +207,12 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
     ).body.id;
     params.revision = '1';
     params.orgId = (await owner.get('/api/me')).body.organisations[0].id;
+    // The spare account joins the firm too, so that the firm member routes may change and remove it.
+    params.userId = (
+      await owner
+        .post(`/api/organisations/${params.orgId}/members`)
+        .send({ email: 'spare@example.com', role: 'reader' })
+    ).body.userId;
     params.materialId = (
       await owner
         .post(`/api/organisations/${params.orgId}/materials`)
@@ -281,6 +298,7 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
       if (expected === 'public' || expected === 'user') return true;
       if (expected === 'siteAdmin') return c === 'owner';
       if (expected === 'firmMember') return FIRM_MEMBERS.includes(c);
+      if (expected === 'firmEditor') return FIRM_EDITORS.includes(c);
       if (expected === 'firmAdmin') return FIRM_ADMINS.includes(c);
       if (expected === 'criteriaRead') return c !== 'outsider';
       if (expected === 'criteriaWrite') return CRITERIA_WRITERS.includes(c);
@@ -289,7 +307,7 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
     };
     const hiddenFrom = (c: (typeof callers)[number]) =>
       ((Array.isArray(expected) || expected.startsWith('criteria')) && c === 'outsider') ||
-      ((expected === 'firmMember' || expected === 'firmAdmin') && !FIRM_MEMBERS.includes(c));
+      (!Array.isArray(expected) && expected.startsWith('firm') && !FIRM_MEMBERS.includes(c));
     for (const caller of [...callers].sort((a, b) => Number(isAllowed(a)) - Number(isAllowed(b)))) {
       const status = await call((await t.as(emailOf[caller])) as never);
       if (isAllowed(caller)) {

@@ -1,6 +1,8 @@
+import { sql } from 'drizzle-orm';
 import {
   type AnyPgColumn,
   bigserial,
+  check,
   date,
   doublePrecision,
   index,
@@ -39,11 +41,18 @@ export const organisationMembers = pgTable(
     userId: text('user_id')
       .notNull()
       .references(() => user.id, { onDelete: 'cascade' }),
-    /** `admin` manages the firm's libraries and members; `member` otherwise. */
-    role: text('role').notNull().default('member'),
+    /**
+     * The firm role (shared/auth/permissions.ts `FIRM_ROLES`): `admin` — members, roles, deletes; `editor` —
+     * writes code tables, library entries and data sheets; `reader` — reads them.
+     */
+    role: text('role').notNull().default('reader'),
     createdAt: createdAt(),
   },
-  (t) => [primaryKey({ columns: [t.organisationId, t.userId] }), index('org_members_user_idx').on(t.userId)],
+  (t) => [
+    primaryKey({ columns: [t.organisationId, t.userId] }),
+    index('org_members_user_idx').on(t.userId),
+    check('org_members_role_check', sql`${t.role} in ('admin', 'editor', 'reader')`),
+  ],
 );
 
 /** A building project; its site fields are what the later checks read. SI units in every column. */

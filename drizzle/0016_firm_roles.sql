@@ -1,0 +1,2 @@
+ALTER TABLE "organisation_members" ALTER COLUMN "role" SET DEFAULT 'reader';--> statement-breakpoint
+ALTER TABLE "organisation_members" ADD CONSTRAINT "org_members_role_check" CHECK ("organisation_members"."role" in ('admin', 'editor', 'reader'));

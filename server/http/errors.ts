@@ -1,6 +1,7 @@
 import { CalcInputError } from '@shared/calc/errors';
 import type { ApiError } from '@shared/schemas/common';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import type { Logger } from 'pino';
 import { ZodError } from 'zod';
 
 /** An error with an HTTP status and a stable code; everything the API refuses is one of these. */
@@ -70,9 +71,62 @@ export function toApiError(err: unknown): { status: number; body: ApiError & Rec
   };
 }
 
+type Fields = Record<string, unknown>;
+
+/** The names a database error gives of the things involved (never the data): PostgreSQL's error fields. */
+const DB_NAMES = [
+  'code',
+  'severity',
+  'routine',
+  'schema',
+  'table',
+  'column',
+  'dataType',
+  'constraint',
+] as const;
+const isDatabaseError = (e: Fields) => typeof e.code === 'string' && /^[0-9A-Z]{5}$/.test(e.code);
+
+/**
+ * What the log keeps of an unexpected error: its type, message, code and stack — but never the data it was
+ * about. A failed query (drizzle's error, or any error with `query`/`params`) carries the SQL and its
+ * parameters, user text included, in those fields and in its message and stack's first line; its driver error
+ * (the `cause`) the failing row in `detail` and quoted values in its message. Of those only the SQLSTATE code,
+ * the names of the constraint, table, column and type, the message with every quoted value replaced by "…"
+ * (a quoted name listed there stays) and the stack frames are kept.
+ */
+export function loggableError(err: unknown): Fields {
+  if (!(err instanceof Error)) return { type: typeof err };
+  const chain: (Error & Fields)[] = [];
+  for (let e: unknown = err; e instanceof Error && chain.length < 5; e = e.cause)
+    chain.push(e as Error & Fields);
+  const db = chain.find(isDatabaseError);
+  const type = err.constructor.name;
+  if (!db && !chain.some((e) => 'query' in e || 'params' in e))
+    return { type, message: err.message, code: chain[0]!.code, stack: err.stack };
+  const names = Object.fromEntries(
+    DB_NAMES.filter((k) => typeof db?.[k] === 'string').map((k) => [k, db![k]]),
+  );
+  const known = new Set(Object.values(names));
+  return {
+    type,
+    ...names,
+    message: db
+      ? String(db.message).replace(/"([^"]*)"/g, (q, inner: string) => (known.has(inner) ? q : '"…"'))
+      : 'a database query failed',
+    stack: err.stack
+      ?.split('\n')
+      .filter((line) => /^\s+at /.test(line))
+      .join('\n'),
+  };
+}
+
+/** Logs a 5xx: what `loggableError` keeps of it. */
+export const logFailure = (log: Logger | undefined, err: unknown) =>
+  log?.error({ err: loggableError(err) }, 'unhandled error');
+
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const { status, body } = toApiError(err);
-  if (status >= 500) req.log?.error({ err }, 'unhandled error');
+  if (status >= 500) logFailure(req.log, err);
   if (res.headersSent) return;
   res.status(status).json(body);
 };

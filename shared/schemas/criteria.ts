@@ -37,9 +37,7 @@ export const criteriaImportBodySchema = z.union([
   z.object({ csv: z.string().max(1_000_000) }),
 ]);
 export const criteriaImportQuerySchema = z.object({
-  revision: int4Param()
-    .optional()
-    .describe('Revision the import replaces (409 if stale)'),
+  revision: int4Param().optional().describe('Revision the import replaces (409 if stale)'),
 });
 export const criteriaExportQuerySchema = z.object({ units: unitSystemSchema.default('SI') });
 

@@ -87,7 +87,9 @@ export type ProjectInput = z.infer<typeof projectInputSchema>;
  * A save of one part of a project (site data, wind data, climate) names the project version it was based on;
  * it conflicts only with a later save of the same part (optimistic concurrency per part).
  */
-const baseVersion = int4().describe('The project version this save is based on; 409 if the same part was saved after it');
+const baseVersion = int4().describe(
+  'The project version this save is based on; 409 if the same part was saved after it',
+);
 export const projectUpdateSchema = z.object({
   version: baseVersion,
   changes: projectInputSchema,

@@ -22,7 +22,7 @@ export function SiteHeader() {
         </Link>
 
         {user ? (
-          <nav aria-label="Main" className="flex items-center gap-5">
+          <nav aria-label="Main" className="flex flex-wrap items-center gap-x-5 gap-y-1">
             <NavLink to="/projects" className={navClass}>
               Projects
             </NavLink>

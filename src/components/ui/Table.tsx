@@ -10,8 +10,9 @@ interface TableProps {
 
 /** Ruled table: a heavy rule under the head, hairlines between rows, no boxes. */
 export function Table({ caption, captionHidden = false, children, className = '' }: TableProps) {
+  // `relative`: text for screen readers only (absolutely placed) stays inside the scroller, not past the page.
   return (
-    <div className="overflow-x-auto">
+    <div className="relative overflow-x-auto">
       <table className={`w-full border-collapse text-left text-sm ${className}`}>
         <caption className={captionHidden ? 'sr-only' : 'label-caps pb-2 text-left'}>{caption}</caption>
         {children}

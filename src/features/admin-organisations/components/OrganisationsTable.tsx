@@ -17,14 +17,13 @@ export function OrganisationsTable({ organisations }: { organisations: AdminOrga
     <Table caption={`${organisations.length} firm${organisations.length === 1 ? '' : 's'}`}>
       <thead>
         <tr>
-          <Th>Firm</Th>
-          <Th>Handle</Th>
-          <Th numeric>People</Th>
-          <Th>Created</Th>
+          <Th>Firm and handle</Th>
           <Th>Standing</Th>
           <Th>
             <span className="sr-only">Verify or withdraw</span>
           </Th>
+          <Th numeric>People</Th>
+          <Th>Created</Th>
         </tr>
       </thead>
       <tbody>
@@ -47,16 +46,14 @@ function OrganisationRow({ firm, sameName }: { firm: AdminOrganisation; sameName
     <tr data-firm={firm.handle}>
       <Td className="min-w-44">
         <span className="font-semibold">{firm.name}</span>
+        <span className="num block break-all">{firm.handle}</span>
         {sameName ? (
           <span className="block text-xs text-warning">
             <span aria-hidden="true">▲ </span>another firm has this name
           </span>
         ) : null}
       </Td>
-      <Td className="num whitespace-nowrap">{firm.handle}</Td>
-      <Td numeric>{firm.members}</Td>
-      <Td className="whitespace-nowrap">{formatDate(firm.createdAt)}</Td>
-      <Td className="min-w-40">
+      <Td className="min-w-32">
         {verified ? (
           <span className="text-meets">
             <span aria-hidden="true">✓ </span>verified {formatDate(firm.verifiedAt!)}
@@ -107,6 +104,8 @@ function OrganisationRow({ firm, sameName }: { firm: AdminOrganisation; sameName
           </p>
         ) : null}
       </Td>
+      <Td numeric>{firm.members}</Td>
+      <Td className="whitespace-nowrap">{formatDate(firm.createdAt)}</Td>
     </tr>
   );
 }

@@ -66,7 +66,7 @@ export function SheetVerificationDetails({ sheet }: { sheet: SheetVerification }
         <dd>
           {ranBy ? (
             <>
-              {ranBy.name}, e-mail at <span className="break-all">{ranBy.emailDomain}</span>
+              {ranBy.name}, e-mail at <span className="break-words">{ranBy.emailDomain}</span>
             </>
           ) : (
             'an account since removed'

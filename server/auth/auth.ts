@@ -175,6 +175,15 @@ export const SIGN_UP_ANSWER = Object.freeze({ status: 'check_email' });
  */
 const SIGN_UP_ANSWER_MS = 500;
 
+/** The `code` of better-auth's error answer, if it is one. */
+async function errorCode(response: globalThis.Response): Promise<string | undefined> {
+  const body = (await response
+    .clone()
+    .json()
+    .catch(() => null)) as { code?: unknown } | null;
+  return typeof body?.code === 'string' ? body.code : undefined;
+}
+
 /**
  * better-auth's handler for Express, with two answers made uniform and the client's address passed on:
  * - every accepted sign-up (200) answers `SIGN_UP_ANSWER`, no earlier than `SIGN_UP_ANSWER_MS` (a refused
@@ -194,7 +203,12 @@ export function authHandler(auth: Auth): RequestHandler {
       if (wait > 0) await new Promise((resolve) => setTimeout(resolve, wait));
       return Response.json(SIGN_UP_ANSWER);
     }
-    if (path === '/api/auth/sign-in/email' && response.status === 403) {
+    // (Only that 403: a refused origin stays a 403 of its own.)
+    const unconfirmed =
+      path === '/api/auth/sign-in/email' &&
+      response.status === 403 &&
+      (await errorCode(response)) === BASE_ERROR_CODES.EMAIL_NOT_VERIFIED.code;
+    if (unconfirmed) {
       const { body } = APIError.from('UNAUTHORIZED', BASE_ERROR_CODES.INVALID_EMAIL_OR_PASSWORD);
       return Response.json(body, { status: 401 });
     }

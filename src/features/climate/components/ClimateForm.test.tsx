@@ -3,6 +3,7 @@ import { type Project, projectClimateSchema } from '@shared/schemas/project';
 import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { weatherFile } from '../../../../tests/setup/weather-file';
 import { UnitSystemProvider } from '../../../lib/unit-system';
 import { climateToForm } from '../climate-form';
 import { ClimateForm } from './ClimateForm';
@@ -73,5 +74,36 @@ describe('ClimateForm', () => {
     expect(await screen.findByText('One value needs attention.')).toBeTruthy();
     expect(onSubmit).not.toHaveBeenCalled();
     expect(document.body.textContent).not.toContain('NaN');
+  });
+
+  it('fills the months and names the station from an EnergyPlus weather file (invented station)', async () => {
+    const onSubmit = renderForm(null, 'SI', vi.fn().mockResolvedValue(undefined));
+    const text = weatherFile((m) => [m - 3, 75]);
+    const file = new File([text], 'gullhaven.epw', { type: '' });
+    fireEvent.change(screen.getByLabelText(/fill the months from a weather file/), {
+      target: { files: [file] },
+    });
+    expect(await screen.findByText(/Read 8760 hours of Gullhaven Point/)).toBeTruthy();
+    expect(box(/^January mean exterior temperature/).value).toBe('-3');
+    expect(box(/^December mean exterior relative humidity/).value).toBe('75');
+    expect((screen.getByLabelText(/Source/) as HTMLInputElement).value).toMatch(
+      /^Gullhaven Point, North Reach, XXA, WMO 990001/,
+    );
+    fireEvent.click(screen.getByRole('button', { name: 'Save the climate' }));
+    await waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    expect(onSubmit.mock.calls[0]![0].months[11].exteriorTemperature).toBeCloseTo(8, 10);
+  });
+
+  it('says why a file is not a weather file and changes nothing', async () => {
+    renderForm(demoClimate, 'SI');
+    const before = box(/^January mean exterior temperature/).value;
+    const file = new File(['month,theta\n1,2'], 'months.csv', { type: 'text/csv' });
+    fireEvent.change(screen.getByLabelText(/fill the months from a weather file/), {
+      target: { files: [file] },
+    });
+    expect(
+      await screen.findByText(/months\.csv could not be read: this is not an EnergyPlus weather file/),
+    ).toBeTruthy();
+    expect(box(/^January mean exterior temperature/).value).toBe(before);
   });
 });

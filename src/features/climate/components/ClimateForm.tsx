@@ -1,5 +1,8 @@
 import { zodResolver } from '@hookform/resolvers/zod';
+import { CalcInputError } from '@shared/calc/errors';
+import { monthlyClimateFromEpw, weatherFileSource } from '@shared/calc/moisture/epw';
 import { saturationPressureIso13788 } from '@shared/calc/moisture/psychrometrics';
+import { TEXT_MAX } from '@shared/schemas/common';
 import type { Project, ProjectClimate } from '@shared/schemas/project';
 import { type ReactNode, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
@@ -25,6 +28,9 @@ const COLUMNS: { field: Column; quantity: Quantity; words: string }[] = [
     words: 'mean exterior relative humidity',
   },
 ];
+
+/** A year of hourly EPW records is about 1.6 MB; anything far larger is not one. */
+const MAX_WEATHER_FILE_BYTES = 20 * 1024 * 1024;
 
 export const cellId = (month: number, field: Column) => `climate-${month}-${field}`;
 
@@ -57,6 +63,7 @@ export function ClimateForm({
   const system = useUnitSystem();
   const [formError, setFormError] = useState<string[] | null>(null);
   const [pasted, setPasted] = useState<string | null>(null);
+  const [imported, setImported] = useState<{ ok: boolean; text: string } | null>(null);
   const {
     control,
     register,
@@ -110,6 +117,34 @@ export function ClimateForm({
     );
   }
 
+  /** Fill the months and the source from an EnergyPlus weather file read in the browser. */
+  async function importWeatherFile(file: File) {
+    if (file.size > MAX_WEATHER_FILE_BYTES) {
+      setImported({ ok: false, text: `${file.name} is larger than a year of hourly weather (over 20 MB).` });
+      return;
+    }
+    try {
+      const r = monthlyClimateFromEpw(await file.text());
+      r.months.forEach((m, k) => {
+        for (const field of ['exteriorTemperature', 'exteriorRelativeHumidity'] as const)
+          setValue(`months.${k}.${field}`, m[field], { shouldDirty: true, shouldValidate: isSubmitted });
+      });
+      setValue('source', weatherFileSource(r, file.name).slice(0, TEXT_MAX.line), {
+        shouldDirty: true,
+        shouldValidate: isSubmitted,
+      });
+      setImported({
+        ok: true,
+        text: `Read ${r.hours} hours of ${r.station.city || 'the station'}${r.skipped ? ` (${r.skipped} with a missing value left out)` : ''}: the 12 monthly means and the source are filled in. Check them, then save.`,
+      });
+    } catch (e) {
+      setImported({
+        ok: false,
+        text: `${file.name} could not be read: ${e instanceof CalcInputError ? e.reason : 'it is not a text file in the EnergyPlus weather format'}. Nothing was changed.`,
+      });
+    }
+  }
+
   const monthErrors = errors.months;
   const errorCount =
     (Array.isArray(monthErrors)
@@ -139,6 +174,34 @@ export function ClimateForm({
         >
           {(c) => <TextInput {...c} {...register('source')} maxLength={500} autoComplete="off" />}
         </Field>
+        <div className="mt-4">
+          <label htmlFor="climate-weather-file" className="font-semibold">
+            Or fill the months from a weather file (.epw)
+          </label>
+          <p id="climate-weather-file-hint" className="text-sm text-ink-muted">
+            An EnergyPlus weather file of the site or the nearest station: the monthly mean temperature and
+            the humidity of the mean vapour pressure are computed from its hours, and the station is named as
+            the source.
+          </p>
+          <input
+            id="climate-weather-file"
+            type="file"
+            accept=".epw,text/plain"
+            aria-describedby="climate-weather-file-hint"
+            className="mt-2 block max-w-full text-sm"
+            onChange={(e) => {
+              const file = e.currentTarget.files?.[0];
+              e.currentTarget.value = '';
+              if (file) void importWeatherFile(file);
+            }}
+          />
+          {imported ? (
+            <p role="status" className={`mt-2 text-sm ${imported.ok ? '' : 'text-caution'}`}>
+              <span aria-hidden="true">{imported.ok ? '✓ ' : '✕ '}</span>
+              {imported.text}
+            </p>
+          ) : null}
+        </div>
         {isInventedClimate(values.source ?? '') ? (
           <Notice tone="warning" title="These are invented demo values, not a real place." className="mt-3">
             <p>Replace them with the project’s own monthly means before relying on the result.</p>

@@ -1,17 +1,18 @@
 import { existsSync } from 'node:fs';
-import type { RequestListener } from 'node:http';
+import type { IncomingMessage, RequestListener } from 'node:http';
 import path from 'node:path';
-import express, { type RequestHandler } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import express, { type Request, type RequestHandler } from 'express';
+import { ipKeyGenerator, type RateLimitInfo, rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
-import { pino } from 'pino';
+import { type Logger, pino } from 'pino';
 import { pinoHttp } from 'pino-http';
 import swaggerUi from 'swagger-ui-express';
 import { authHandler, createAuth } from './auth/auth';
 import type { Config } from './config';
 import type { Database } from './db/client';
-import { apiNotFound, errorHandler } from './http/errors';
-import { originCheck, refuseNul } from './http/guards';
+import { limitedBody } from './http/body-limit';
+import { apiNotFound, errorHandler, HttpError } from './http/errors';
+import { originCheck, refuseBadBody } from './http/guards';
 import { buildOpenApi } from './http/openapi';
 import { mountRoutes } from './http/route';
 import { statelessPath } from './http/stateless';
@@ -30,19 +31,32 @@ export interface AppDeps {
   clientDir?: string;
   /** Dev mode: Vite's middleware serving the client with hot reload. */
   clientMiddleware?: RequestHandler[];
+  /** The log (default: pino at `config.logLevel`, silent in tests); tests pass one to read what is written. */
+  logger?: Logger;
 }
 
 /** The largest JSON (or CSV) body accepted: 1 MiB. */
 const JSON_LIMIT_BYTES = 1024 * 1024;
+/** The largest body of the sign-in, sign-up, … routes (theirs are under 1 kB): 64 KiB. */
+const AUTH_BODY_LIMIT_BYTES = 64 * 1024;
+/** Express's `req.ip` (the client's address by the 'trust proxy' setting), read for bare requests too. */
+const requestIp = Object.getOwnPropertyDescriptor(express.request, 'ip')?.get;
 
 /**
  * Builds the request listener without listening, so tests can drive it with supertest: the Express app, with
  * the lean path for the calculations in front of it.
  */
-export function createApp({ database, config, mailer, storage, clientDir, clientMiddleware }: AppDeps) {
+export function createApp({
+  database,
+  config,
+  mailer,
+  storage,
+  clientDir,
+  clientMiddleware,
+  logger = pino({ level: config.env === 'test' ? 'silent' : config.logLevel }),
+}: AppDeps) {
   const auth = createAuth(database, config, mailer);
   const services = createServices(database, config, mailer, auth, storage ?? unavailableStore());
-  const logger = pino({ level: config.env === 'test' ? 'silent' : config.logLevel });
   const app = express();
   app.disable('x-powered-by');
   // Forwarded client addresses are believed only from the proxies TRUST_PROXY names (default: none).
@@ -78,6 +92,23 @@ export function createApp({ database, config, mailer, storage, clientDir, client
   app.use(securityHeaders, requestLog);
 
   const trusted = (auth.options.trustedOrigins as string[]) ?? [];
+  // The public calculations, by both paths (Express and the lean path's bare requests): per address — as
+  // Express computes `req.ip` — and minute; over the limit 429 with Retry-After, passed to `next` as an error.
+  const clientAddress = (req: IncomingMessage): string =>
+    requestIp?.call({ app, headers: req.headers, socket: req.socket }) ?? req.socket.remoteAddress ?? '';
+  const calcLimiter = rateLimit({
+    windowMs: 60_000,
+    limit: config.calcRateLimit,
+    standardHeaders: false,
+    legacyHeaders: false,
+    keyGenerator: (req) => ipKeyGenerator(clientAddress(req)),
+    handler: (req, res, next) => {
+      const reset = (req as Request & { rateLimit?: RateLimitInfo }).rateLimit?.resetTime;
+      const seconds = reset ? Math.ceil((reset.getTime() - Date.now()) / 1000) : 60;
+      res.setHeader('retry-after', String(Math.max(1, seconds)));
+      next(new HttpError(429, 'rate_limited', 'too many calculations from this address; wait a minute'));
+    },
+  });
   /** Per address and minute; over the limit: 429 with Retry-After (seconds until the window ends). */
   const limiter = (limit: number, message: string) =>
     rateLimit({
@@ -107,13 +138,14 @@ export function createApp({ database, config, mailer, storage, clientDir, client
       'too many verification checks from this address; wait a minute and try again',
     ),
   );
-  // better-auth must see the raw body: mount it before express.json().
-  app.all('/api/auth/*splat', authHandler(auth));
+  // better-auth reads the body itself (mounted before express.json()): it gets it as text, at most 64 KiB.
+  app.all('/api/auth/*splat', limitedBody(AUTH_BODY_LIMIT_BYTES), authHandler(auth));
+  app.use('/api/v1/calc', calcLimiter);
 
   app.use(express.json({ limit: JSON_LIMIT_BYTES, strict: false }));
   // Code-table imports may send CSV as text/csv.
   app.use(express.text({ type: 'text/csv', limit: JSON_LIMIT_BYTES }));
-  app.use('/api', refuseNul);
+  app.use('/api', refuseBadBody);
   app.use('/api', originCheck(trusted));
 
   // The API routes first (the reference pages share no path with them), then the reference.
@@ -143,6 +175,7 @@ export function createApp({ database, config, mailer, storage, clientDir, client
     trusted,
     limitBytes: JSON_LIMIT_BYTES,
     middleware: [securityHeaders, requestLog],
+    limiter: calcLimiter,
     logger,
   });
   const listener: RequestListener = (req, res) => {

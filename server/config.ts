@@ -18,6 +18,8 @@ const envSchema = z.object({
   BETTER_AUTH_SECRET: z.string().min(32).optional(),
   /** Requests per minute per address on sign-in, sign-up and password reset. */
   AUTH_RATE_LIMIT: z.coerce.number().int().positive().default(30),
+  /** Requests per minute per address on the public calculations (`/api/v1/calc/*`). */
+  CALC_RATE_LIMIT: z.coerce.number().int().positive().default(600),
   /** Requests per minute per address on the public sheet verification (`GET /api/verify/:code`). */
   VERIFY_RATE_LIMIT: z.coerce.number().int().positive().default(30),
   /**
@@ -60,6 +62,7 @@ export type Config = {
   mailFrom: string;
   authSecret: string;
   authRateLimit: number;
+  calcRateLimit: number;
   verifyRateLimit: number;
   /** Express `trust proxy`: false (trust no forwarded address), a hop count, or a list of trusted proxies. */
   trustProxy: TrustProxy;
@@ -134,6 +137,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     mailFrom: e.MAIL_FROM,
     authSecret: e.BETTER_AUTH_SECRET ?? DEV_SECRET,
     authRateLimit: e.AUTH_RATE_LIMIT,
+    calcRateLimit: e.CALC_RATE_LIMIT,
     verifyRateLimit: e.VERIFY_RATE_LIMIT,
     trustProxy: parseTrustProxy(e.TRUST_PROXY),
     accountLock: { failures: e.ACCOUNT_LOCK_FAILURES, durationMs: e.ACCOUNT_LOCK_MINUTES * 60_000 },

@@ -2,37 +2,79 @@ import type { IncomingMessage } from 'node:http';
 import type { RequestHandler } from 'express';
 import { HttpError } from './errors';
 
-/** Whether any string (value or key) holds a NUL character, which PostgreSQL text cannot store. */
-function hasNul(value: unknown): boolean {
-  if (typeof value === 'string') return value.includes('\u0000');
-  if (Array.isArray(value)) return value.some(hasNul);
-  if (value && typeof value === 'object')
-    for (const k in value)
-      if (k.includes('\u0000') || hasNul((value as Record<string, unknown>)[k])) return true;
-  return false;
+/**
+ * The deepest nesting of arrays and objects a JSON body may have. The deepest real body (an assembly's input)
+ * nests under 10 levels; a limit keeps every walk over a body short and its recursion (zod's too) shallow.
+ */
+export const MAX_JSON_DEPTH = 64;
+
+const hasNul = (text: string) => text.includes('\u0000');
+
+/**
+ * One iterative walk over a parsed body (a stack of its own, so no nesting can overflow the call stack):
+ * `deep` at the first array or object nested more than MAX_JSON_DEPTH levels, `nul` at the first string
+ * (value or key) holding a NUL character, which PostgreSQL text cannot store; undefined for a clean body.
+ */
+function scan(body: unknown): 'deep' | 'nul' | undefined {
+  if (typeof body === 'string') return hasNul(body) ? 'nul' : undefined;
+  if (!body || typeof body !== 'object') return undefined;
+  const open: object[] = [body];
+  const depths: number[] = [1];
+  /** Checks a string at once and stacks an array or object; true for a NUL. */
+  const visit = (value: unknown, depth: number) => {
+    if (typeof value === 'string') return hasNul(value);
+    if (value && typeof value === 'object') {
+      open.push(value);
+      depths.push(depth);
+    }
+    return false;
+  };
+  while (open.length > 0) {
+    const value = open.pop()!;
+    const depth = depths.pop()!;
+    if (depth > MAX_JSON_DEPTH) return 'deep';
+    if (Array.isArray(value)) {
+      for (const item of value) if (visit(item, depth + 1)) return 'nul';
+    } else
+      for (const k in value)
+        if (hasNul(k) || visit((value as Record<string, unknown>)[k], depth + 1)) return 'nul';
+  }
+  return undefined;
 }
 
-/** The path of the first string (value or key) holding a NUL character. */
+/**
+ * The path of the first string (value or key) holding a NUL character, not looking deeper than
+ * MAX_JSON_DEPTH (`scan` found one at most that deep), so the recursion stays shallow.
+ */
 function nulPath(value: unknown, path: string[] = []): string | null {
-  if (typeof value === 'string') return value.includes('\u0000') ? path.join('.') || '(body)' : null;
-  if (value && typeof value === 'object')
+  if (typeof value === 'string') return hasNul(value) ? path.join('.') || '(body)' : null;
+  if (value && typeof value === 'object' && path.length < MAX_JSON_DEPTH)
     for (const [k, v] of Object.entries(value)) {
-      if (k.includes('\u0000')) return [...path, '(key)'].join('.');
+      if (hasNul(k)) return [...path, '(key)'].join('.');
       const found = nulPath(v, [...path, k]);
       if (found) return found;
     }
   return null;
 }
 
-/** The refusal of a body holding a NUL character, naming its field; undefined for a clean body. */
-export function nulRefusal(body: unknown): HttpError | undefined {
-  // The common case (no NUL anywhere) is one walk without allocations; the path is found only for a refusal.
-  const field = hasNul(body) ? nulPath(body) : null;
-  return field
-    ? new HttpError(400, 'validation_failed', 'the request is not valid', {
-        [field]: 'text must not contain NUL characters',
-      })
-    : undefined;
+/**
+ * The refusal of a parsed body nested too deeply (400 `invalid_json`) or holding a NUL character (400
+ * `validation_failed` naming the field); undefined for a clean body. The common case (a clean body) is one
+ * walk; the path of a NUL is found only for a refusal.
+ */
+export function bodyRefusal(body: unknown): HttpError | undefined {
+  const found = scan(body);
+  if (found === 'deep')
+    return new HttpError(
+      400,
+      'invalid_json',
+      `the body nests arrays and objects more than ${MAX_JSON_DEPTH} levels deep`,
+    );
+  if (found === 'nul')
+    return new HttpError(400, 'validation_failed', 'the request is not valid', {
+      [nulPath(body) ?? '(body)']: 'text must not contain NUL characters',
+    });
+  return undefined;
 }
 
 /** The refusal of a write whose Origin is not ours (CSRF); requests without Origin are not from a browser form. */
@@ -44,7 +86,7 @@ export function originRefusal(req: IncomingMessage, trusted: string[]): HttpErro
     : undefined;
 }
 
-export const refuseNul: RequestHandler = (req, _res, next) => next(nulRefusal(req.body));
+export const refuseBadBody: RequestHandler = (req, _res, next) => next(bodyRefusal(req.body));
 
 export const originCheck =
   (trusted: string[]): RequestHandler =>

@@ -116,8 +116,8 @@ export function workRefusal(limits: WorkLimit[] | undefined, body: unknown): Htt
   for (const { field, what, max, count } of limits ?? []) {
     const n = count(body);
     if (n > max)
-      return new HttpError(413, 'too_much_work', 'the request asks for more work than one calculation may do', {
-        [field]: `at most ${max} ${what} in one request (got ${n}); split the work into several requests`,
+      return new HttpError(413, 'too_much_work', 'the request asks for more work than one request may do', {
+        [field]: `at most ${max} ${what} (got ${n}); split it into several requests`,
       });
   }
   return undefined;

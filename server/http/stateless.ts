@@ -3,21 +3,24 @@ import { parse as parseQuery } from 'node:querystring';
 import type { Request, RequestHandler, Response } from 'express';
 import type { Logger } from 'pino';
 import type { Services } from '../services';
-import { invalidJson, toApiError } from './errors';
-import { nulRefusal, originRefusal } from './guards';
+import { invalidJson, logFailure, toApiError } from './errors';
+import { bodyRefusal, originRefusal } from './guards';
 import { type AnyRoute, answer, sendResult } from './route';
 
 /** A request listener that answers a request and returns true, or leaves it untouched and returns false. */
 export type LeanPath = (req: IncomingMessage, res: ServerResponse) => boolean;
 
 const JSON_TYPES = new Set(['application/json', 'application/json; charset=utf-8']);
+const NO_REFUSAL = Promise.resolve(undefined);
 
 /**
  * The lean path for `stateless` routes (the calculations). Express's own work per request — swapping the
  * request and response prototypes, walking its middleware and router stacks, body-parser — costs more than a
  * whole calculation, so these routes are answered here first, in the same order and with the same parts as
  * the Express stack: the middleware that writes headers and logs (`middleware`: helmet, the request logger),
- * JSON parsing, the NUL refusal, the origin check, validation, the handler and the error shapes.
+ * the rate limit of the calculations (`limiter`), JSON parsing, the body refusal (nesting depth, NUL), the origin
+ * check, validation, the handler and the error shapes. Whatever is thrown while answering becomes an error
+ * answer: nothing a request sends can throw out of its event handlers and end the process.
  * Anything out of the ordinary — another spelling of the path, a content type other than plain JSON in UTF-8,
  * a compressed or chunked body, a body over the limit — is left untouched for Express, which serves the same
  * route the ordinary way (and answers 413, 415, … as it always does).
@@ -30,6 +33,11 @@ export function statelessPath(
     trusted: string[];
     limitBytes: number;
     middleware: RequestHandler[];
+    /**
+     * Express middleware that passes a refusal to `next` (the rate limit), possibly later: awaited before
+     * answering.
+     */
+    limiter?: RequestHandler;
     logger: Logger;
   },
 ): LeanPath {
@@ -51,9 +59,15 @@ export function statelessPath(
       return false;
 
     const fail = (err: unknown) => {
-      const { status, body } = toApiError(err);
-      if (status >= 500) opts.logger.error({ err }, 'unhandled error');
-      if (!res.headersSent) sendResult(req, res, status, body);
+      try {
+        const { status, body } = toApiError(err);
+        if (status >= 500) logFailure(opts.logger, err);
+        if (!res.headersSent) sendResult(req, res, status, body);
+      } catch (cause) {
+        // Not even the error could be answered: drop this connection, never the process.
+        opts.logger.error({ err: cause }, 'could not answer an error');
+        res.destroy();
+      }
     };
     let refused: unknown;
     for (const m of opts.middleware) {
@@ -66,10 +80,12 @@ export function statelessPath(
       fail(refused);
       return true;
     }
-    const chunks: Buffer[] = [];
-    req.on('data', (chunk: Buffer) => chunks.push(chunk));
-    req.on('end', () => {
-      const text = Buffer.concat(chunks).toString('utf8');
+    const { limiter } = opts;
+    // The limiter decides while the body arrives (a refusal is whatever it passes to `next`).
+    const admitted = limiter
+      ? new Promise<unknown>((resolve) => limiter(req as Request, res as Response, resolve))
+      : NO_REFUSAL;
+    const serve = (text: string) => {
       let body: unknown;
       try {
         // As body-parser: an empty body is `{}`, a byte-order mark is dropped.
@@ -77,11 +93,19 @@ export function statelessPath(
       } catch {
         return fail(invalidJson());
       }
-      const refusal = nulRefusal(body) ?? originRefusal(req, opts.trusted);
+      const refusal = bodyRefusal(body) ?? originRefusal(req, opts.trusted);
       if (refusal) return fail(refusal);
       const query = mark < 0 ? {} : parseQuery(url.slice(mark + 1));
       const ctx = { req: req as Request, res: res as Response, params: {}, services: opts.services };
-      answer(route, { ...ctx, user: null, project: null, criteria: null }, { query, body }).catch(fail);
+      return answer(route, { ...ctx, user: null, project: null, criteria: null }, { query, body });
+    };
+    const chunks: Buffer[] = [];
+    req.on('data', (chunk: Buffer) => chunks.push(chunk));
+    req.on('end', () => {
+      // Everything from here on is in the promise chain, so whatever throws is answered by `fail`.
+      admitted
+        .then((refused) => (refused ? fail(refused) : serve(Buffer.concat(chunks).toString('utf8'))))
+        .catch(fail);
     });
     return true;
   };

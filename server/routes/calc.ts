@@ -23,7 +23,7 @@ import {
 } from '@shared/calc/wind/schema';
 import { apiErrorSchema } from '@shared/schemas/common';
 import { z } from 'zod';
-import { defineRoute, FileAnswer } from '../http/route';
+import { defineRoute, FileAnswer, type WorkLimit } from '../http/route';
 
 const calcErrors = {
   400: {
@@ -34,7 +34,47 @@ const calcErrors = {
     description: 'Physically impossible input; `fields` names the field and the reason',
     schema: apiErrorSchema,
   },
+  429: {
+    description:
+      'Too many calculations from this address in the last minute (`CALC_RATE_LIMIT`); `Retry-After` gives the seconds to wait',
+    schema: apiErrorSchema,
+  },
 };
+
+/** The length of a list in a body not validated yet (anything else counts 0). */
+const lengthOf = (value: unknown) => (Array.isArray(value) ? value.length : 0);
+const member = (value: unknown, key: string) =>
+  value && typeof value === 'object' ? (value as Record<string, unknown>)[key] : undefined;
+
+/**
+ * Work limits of the public calculations beyond their schemas' own caps (DEVELOPERS.md "API conventions"
+ * lists every cap), each far above a real project and holding one request to a few tens of milliseconds:
+ * a schedule of 300 joints costs ≈ 30 ms, mostly validation (500, the schema's cap for the engine, ≈ 50 ms
+ * and a 2.5 MB answer); 2000 openings in all walls ≈ 5 ms (the 40 000 the schemas allow, ≈ 16 000 within the
+ * body limit, ≈ 50–100 ms).
+ */
+export const CALC_WORK_LIMITS = {
+  joints: { field: 'joints', what: 'joints', max: 300, count: (body) => lengthOf(member(body, 'joints')) },
+  openings: {
+    field: 'walls',
+    what: 'openings in all walls together',
+    max: 2000,
+    count: (body) => {
+      const walls = member(body, 'walls');
+      return Array.isArray(walls)
+        ? walls.reduce((n: number, w) => n + lengthOf(member(w, 'openings')), 0)
+        : 0;
+    },
+  },
+} satisfies Record<string, WorkLimit>;
+
+/** The documented 413 of a route with work limits. */
+const overWork = (...limits: WorkLimit[]) => ({
+  413: {
+    description: `Over a work limit (${limits.map((l) => `at most ${l.max} ${l.what}`).join('; ')}); \`fields\` names the field`,
+    schema: apiErrorSchema,
+  },
+});
 
 /** The public, stateless calculation API (versioned). */
 export const calcRoutes = [
@@ -109,10 +149,12 @@ export const calcRoutes = [
     access: { kind: 'public' },
     stateless: true,
     body: jointScheduleInputSchema,
+    workLimits: [CALC_WORK_LIMITS.joints],
     example: { joints: demoJointSchedule() },
     responses: {
       200: { description: 'Joint schedule with a trace per joint', schema: jointScheduleResultSchema },
       ...calcErrors,
+      ...overWork(CALC_WORK_LIMITS.joints),
     },
     handler: async ({ body }) => calculateJointSchedule(body.joints),
   }),
@@ -126,6 +168,7 @@ export const calcRoutes = [
     stateless: true,
     query: z.object({ format: z.enum(['json', 'csv']).default('json') }),
     body: takeoffInputSchema,
+    workLimits: [CALC_WORK_LIMITS.openings],
     example: demoElevation(),
     responses: {
       200: {
@@ -133,6 +176,7 @@ export const calcRoutes = [
         schema: takeoffResultSchema,
       },
       ...calcErrors,
+      ...overWork(CALC_WORK_LIMITS.openings),
     },
     handler: async ({ body, query }) => {
       const result = calculateTakeoff(body);

@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import pg from 'pg';
+import type { Logger } from 'pino';
 import request from 'supertest';
 import { inject } from 'vitest';
 import { createApp } from '../../server/app';
@@ -24,7 +25,7 @@ export const demoEmail = (role: string) => `${role}@skinwright.demo`;
 /** A fresh app on a fresh database (in-memory PGlite, or a new database on the PostgreSQL server), seeded with the demo. */
 export async function createTestApp(
   kind: DatabaseKind = 'pglite',
-  opts: { authRateLimit?: number; verifyRateLimit?: number } = {},
+  opts: { authRateLimit?: number; verifyRateLimit?: number; calcRateLimit?: number; logger?: Logger } = {},
 ) {
   let databaseUrl: string | undefined;
   let dropDatabase = async () => {};
@@ -53,6 +54,7 @@ export async function createTestApp(
       baseUrl: 'http://localhost:5180',
       authRateLimit: opts.authRateLimit ?? 10_000,
       verifyRateLimit: opts.verifyRateLimit ?? 10_000,
+      calcRateLimit: opts.calcRateLimit ?? 100_000,
     },
   );
   const database = await openDatabase(config);
@@ -61,7 +63,7 @@ export async function createTestApp(
   // The local fake S3 server in a temporary folder, removed on close (like the mail capture).
   const s3 = await startLocalS3();
   const storage = createS3Store(s3.target);
-  const { app, auth, services } = createApp({ database, config, mailer, storage });
+  const { app, auth, services } = createApp({ database, config, mailer, storage, logger: opts.logger });
   await seedDemo(database.db, auth);
 
   const agents = new Map<string, ReturnType<typeof request.agent>>();

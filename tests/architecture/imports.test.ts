@@ -32,6 +32,8 @@ const clientImportsOf = (file: string) =>
 const FEATURE_USES: Record<string, string[]> = {
   // A submittal lists check runs and links their compliance sheets.
   'features/submittals': ['features/checks', 'features/sheets'],
+  // Each stored run on the checks page opens and downloads its compliance sheet.
+  'features/checks': ['features/sheets'],
 };
 
 const SHARED_ALLOWED = /^(zod|mathjs|convert-units|@shared\/|@data\/reference\/|\.{1,2}\/)/;

@@ -10,6 +10,7 @@ import { PastRuns } from '../../features/checks/components/PastRuns';
 import { RunCheckForm } from '../../features/checks/components/RunCheckForm';
 import { useProjectCriteriaSets } from '../../features/criteria/api/get-project-criteria-sets';
 import { useProject } from '../../features/projects/api/get-project';
+import { SheetActions } from '../../features/sheets/components/SheetLink';
 import { errorMessage } from '../../lib/api';
 import { useUnitSystem } from '../../lib/unit-system';
 import { AssemblyTabs } from '../layout/AssemblyTabs';
@@ -84,7 +85,13 @@ export function AssemblyChecksPage() {
         ) : run.isError ? (
           <Notice tone="caution" title={errorMessage(run.error)} live />
         ) : (
-          <CheckReportView run={run.data} system={system} />
+          <>
+            <p className="flex flex-wrap items-baseline gap-x-4 gap-y-1 text-sm">
+              <span className="font-semibold">Compliance sheet of this run:</span>
+              <SheetActions projectId={project.id} runId={run.data.id} units={system} />
+            </p>
+            <CheckReportView run={run.data} system={system} />
+          </>
         )}
       </section>
 
@@ -93,7 +100,13 @@ export function AssemblyChecksPage() {
           <h2 id="past-heading" className="border-b border-ink pb-2 text-2xl">
             Runs of this assembly
           </h2>
-          <PastRuns runs={runs.data} shownId={shownId} hrefFor={(runId) => `?run=${runId}`} />
+          <PastRuns
+            projectId={project.id}
+            runs={runs.data}
+            shownId={shownId}
+            hrefFor={(runId) => `?run=${runId}`}
+            units={system}
+          />
         </section>
       ) : null}
     </div>

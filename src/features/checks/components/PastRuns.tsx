@@ -1,19 +1,26 @@
 import type { CheckRunSummary } from '@shared/schemas/check-runs';
 import { formatVerificationCode, verificationCode } from '@shared/sheets/verification';
+import type { UnitSystem } from '@shared/units';
 import { Link } from 'react-router';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { VERDICT_TEXT } from '../../../lib/check-format';
 import { formatDateTime } from '../../../lib/format';
+import { SheetActions } from '../../sheets/components/SheetLink';
 
-/** Stored runs of one assembly, newest first; each opens on the same page. */
+/** Stored runs of one assembly, newest first; each opens on the same page and links its sheet. */
 export function PastRuns({
+  projectId,
   runs,
   shownId,
   hrefFor,
+  units,
 }: {
+  projectId: string;
   runs: CheckRunSummary[];
   shownId: string | null;
   hrefFor: (runId: string) => string;
+  /** The person's unit system: the PDF is downloaded in it. */
+  units: UnitSystem;
 }) {
   return (
     <Table caption="Past runs (each is stored as issued)">
@@ -25,6 +32,7 @@ export function PastRuns({
           <Th numeric>Assembly rev.</Th>
           <Th>Verdict</Th>
           <Th>Verification code</Th>
+          <Th>Compliance sheet</Th>
         </tr>
       </thead>
       <tbody>
@@ -54,6 +62,14 @@ export function PastRuns({
                 </span>
               </Td>
               <Td className="num text-xs">{formatVerificationCode(verificationCode(r.hash))}</Td>
+              <Td className="whitespace-nowrap">
+                <SheetActions
+                  projectId={projectId}
+                  runId={r.id}
+                  units={units}
+                  label={formatDateTime(r.createdAt)}
+                />
+              </Td>
             </tr>
           );
         })}

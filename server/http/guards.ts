@@ -1,4 +1,5 @@
 import type { IncomingMessage } from 'node:http';
+import { textFault } from '@shared/schemas/common';
 import type { RequestHandler } from 'express';
 import { HttpError } from './errors';
 
@@ -8,7 +9,8 @@ import { HttpError } from './errors';
  */
 export const MAX_JSON_DEPTH = 64;
 
-const hasNul = (text: string) => text.includes('\u0000');
+/** Text the database cannot store: a NUL character or a lone UTF-16 surrogate (`nul` below means either). */
+const hasNul = (text: string) => textFault(text) !== undefined;
 
 /**
  * One iterative walk over a parsed body (a stack of its own, so no nesting can overflow the call stack):
@@ -46,11 +48,15 @@ function scan(body: unknown): 'deep' | 'nul' | undefined {
  * The path of the first string (value or key) holding a NUL character, not looking deeper than
  * MAX_JSON_DEPTH (`scan` found one at most that deep), so the recursion stays shallow.
  */
-function nulPath(value: unknown, path: string[] = []): string | null {
-  if (typeof value === 'string') return hasNul(value) ? path.join('.') || '(body)' : null;
+function nulPath(value: unknown, path: string[] = []): [field: string, reason: string] | null {
+  if (typeof value === 'string') {
+    const fault = textFault(value);
+    return fault ? [path.join('.') || '(body)', fault] : null;
+  }
   if (value && typeof value === 'object' && path.length < MAX_JSON_DEPTH)
     for (const [k, v] of Object.entries(value)) {
-      if (hasNul(k)) return [...path, '(key)'].join('.');
+      const fault = textFault(k);
+      if (fault) return [[...path, '(key)'].join('.'), fault];
       const found = nulPath(v, [...path, k]);
       if (found) return found;
     }
@@ -70,10 +76,10 @@ export function bodyRefusal(body: unknown): HttpError | undefined {
       'invalid_json',
       `the body nests arrays and objects more than ${MAX_JSON_DEPTH} levels deep`,
     );
-  if (found === 'nul')
-    return new HttpError(400, 'validation_failed', 'the request is not valid', {
-      [nulPath(body) ?? '(body)']: 'text must not contain NUL characters',
-    });
+  if (found === 'nul') {
+    const [field, reason] = nulPath(body) ?? ['(body)', 'text must not contain NUL characters'];
+    return new HttpError(400, 'validation_failed', 'the request is not valid', { [field]: reason });
+  }
   return undefined;
 }
 

@@ -12,7 +12,7 @@ export const sheetQuerySchema = z.object({
     .describe('attachment = download; inline = show in the browser'),
 });
 
-export const verifyParamsSchema = z.object({ code: z.string() });
+export const verifyParamsSchema = z.object({ code: z.string().max(100) });
 
 /**
  * The firm that issued a sheet. Firm names are not unique (anyone may make a firm of any name), so the

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { projectRoleSchema } from '../auth/permissions';
 import { verdictSchema } from '../checks/report';
+import { calendarDate, int4, TEXT_MAX, text } from './common';
 
 /**
  * Submittals: a package the cladding subcontractor (or the owner) sends to the design team for review —
@@ -86,8 +87,6 @@ const reviewerIds = z
   .refine((ids) => new Set(ids).size === ids.length, 'a reviewer is listed twice')
   .describe('User ids of project members whose role allows reviewing submittals');
 
-const isoDate = z.iso.date().describe('Calendar date, YYYY-MM-DD');
-
 /** CSI MasterFormat section number: "07 42 13", optionally with a level-4 suffix ("07 42 13.13"). */
 export const specSectionSchema = z
   .string()
@@ -95,16 +94,13 @@ export const specSectionSchema = z
   .regex(/^\d{2} \d{2} \d{2}(\.\d{2})?$/, 'a MasterFormat number such as "07 42 13"');
 
 export const submittalFieldsSchema = z.object({
-  title: z.string().trim().min(1, 'a submittal needs a title').max(200),
-  description: z.string().trim().max(4000).default(''),
+  title: text(TEXT_MAX.name).min(1, 'a submittal needs a title'),
+  description: text(TEXT_MAX.note).default(''),
   specSection: specSectionSchema,
-  specTitle: z
-    .string()
-    .trim()
+  specTitle: text(TEXT_MAX.name)
     .min(1, 'name the section, e.g. "Metal Wall Panels"')
-    .max(200)
     .describe('MasterFormat section title'),
-  dueDate: isoDate.nullable().default(null).describe('When the review is due (null = not set)'),
+  dueDate: calendarDate().nullable().default(null).describe('When the review is due (null = not set)'),
   reviewerIds: reviewerIds.default([]),
 });
 export type SubmittalFields = z.infer<typeof submittalFieldsSchema>;
@@ -122,18 +118,18 @@ export type SubmittalCreate = z.infer<typeof submittalCreateSchema>;
 
 /** An edit of a draft names the version it was based on (optimistic concurrency). */
 export const submittalUpdateSchema = z.object({
-  version: z.number().int().positive(),
+  version: int4(),
   changes: submittalFieldsSchema,
 });
 export type SubmittalUpdate = z.infer<typeof submittalUpdateSchema>;
 
 /** A workflow step; `version` (optional) refuses the step when the submittal changed since it was read. */
-export const submittalStepSchema = z.object({ version: z.number().int().positive().optional() });
+export const submittalStepSchema = z.object({ version: int4().optional() });
 
 export const submittalDecisionInputSchema = z
   .object({
     decision: submittalDecisionSchema,
-    note: z.string().trim().max(4000).default(''),
+    note: text(TEXT_MAX.note).default(''),
     failingSheetConfirmation: z
       .string()
       .max(100)
@@ -141,7 +137,7 @@ export const submittalDecisionInputSchema = z
       .describe(
         `Required (the word ${FAILING_SHEET_CONFIRMATION}) to approve a package whose attached compliance sheet fails`,
       ),
-    version: z.number().int().positive().optional(),
+    version: int4().optional(),
   })
   .refine((d) => !DECISIONS_NEEDING_A_NOTE.includes(d.decision) || d.note.length > 0, {
     path: ['note'],
@@ -154,7 +150,7 @@ export const attachSheetSchema = z.object({
 });
 
 export const commentCreateSchema = z.object({
-  body: z.string().trim().min(1, 'write a comment').max(4000),
+  body: text(TEXT_MAX.note).min(1, 'write a comment'),
   itemId: z.uuid().nullable().default(null).describe('The item commented on; null = the whole submittal'),
 });
 

@@ -22,11 +22,19 @@ const HOSTILE: unknown[] = [
   -1,
   5e-324,
   Number.MAX_SAFE_INTEGER + 2,
+  2 ** 31, // one past a database integer
+  -(2 ** 31) - 1,
+  Number.MAX_SAFE_INTEGER,
   '1e308',
   'NaN',
   'Infinity',
   '',
   'x'.repeat(200_000),
+  'x'.repeat(201), // one past a name
+  'x'.repeat(5001), // one past free text
+  '\ud800', // lone surrogates: half of a character
+  'ok \udfff',
+  '\ud83d\ude00\ud83d', // a whole emoji, then half of one
   '../../etc/passwd',
   '\u0000\u001f',
   '<script>alert(1)</script>',
@@ -130,7 +138,10 @@ describe('fuzzing every route with a body', () => {
   // Routes whose path carries what a stranger types: a verification code, a firm's id.
   it('GET /verify/:code and PUT /admin/organisations/:orgId/verification with hostile path parameters', async () => {
     const admin = await t.as(demoEmail('admin'));
-    const typed = HOSTILE.filter((h): h is string => typeof h === 'string' && h.length < 1000);
+    // A URL cannot carry a lone surrogate (encodeURIComponent refuses it), so those stay in the bodies.
+    const typed = HOSTILE.filter(
+      (h): h is string => typeof h === 'string' && h.length < 1000 && !/\p{Cs}/u.test(h),
+    );
     await fc.assert(
       fc.asyncProperty(fc.oneof(fc.string(), fc.uuid(), fc.constantFrom(...typed)), async (raw) => {
         totalCases += 2;

@@ -44,7 +44,12 @@ export const homogeneousLayerSchema = z.object({
   name,
   thickness,
   conductivity,
-  materialId: z.string().min(1).optional().describe('Id of the material in data/reference/materials.json'),
+  materialId: z
+    .string()
+    .min(1)
+    .max(100)
+    .optional()
+    .describe('Id of the material in data/reference/materials.json'),
 });
 
 export const resistanceLayerSchema = z.object({
@@ -52,9 +57,9 @@ export const resistanceLayerSchema = z.object({
   name,
   resistance: z
     .number()
-    .positive()
+    .min(0.001, 'at least 0.001 m²·K/W — a smaller declared R is a typing or unit slip')
     .max(50)
-    .describe('Declared thermal resistance R, m²·K/W (greater than 0, at most 50)'),
+    .describe('Declared thermal resistance R, m²·K/W (at least 0.001, at most 50)'),
   thickness: thickness
     .optional()
     .describe(
@@ -77,11 +82,11 @@ export const airLayerSchema = z.object({
     .describe('ISO 6946:2017 §6.9: unventilated, slightly ventilated, or well ventilated'),
   emissivityFactor: z
     .number()
-    .positive()
+    .min(0.01, 'at least 0.01 — below the lowest-emissivity foil faces')
     .max(1)
     .optional()
     .describe(
-      'Intersurface emittance E = 1/(1/ε₁ + 1/ε₂ − 1), dimensionless (0–1); omit for high-emissivity faces (Table 8)',
+      'Intersurface emittance E = 1/(1/ε₁ + 1/ε₂ − 1), dimensionless (0.01–1); omit for high-emissivity faces (Table 8)',
     ),
 });
 
@@ -134,9 +139,9 @@ const chi = z.number().nonnegative().max(10).describe('Point thermal transmittan
 const psi = z.number().nonnegative().max(10).describe('Linear thermal transmittance ψ, W/(m·K) (0–10)');
 const countPerArea = z
   .number()
-  .positive()
+  .min(0.001, 'at least 0.001 per m² (one in 1000 m²) — fewer is a typing or unit slip')
   .max(10000)
-  .describe('Number of items per square metre of wall, 1/m² (greater than 0, at most 10 000)');
+  .describe('Number of items per square metre of wall, 1/m² (at least 0.001, at most 10 000)');
 const spacing = (what: string) =>
   z
     .number()
@@ -176,18 +181,18 @@ export const linearBridgeByLengthSchema = z.object({
   source,
   lengthPerArea: z
     .number()
-    .positive()
+    .min(0.001, 'at least 0.001 m/m² — less is a typing or unit slip')
     .max(1000)
-    .describe('Length of the linear bridge per square metre of wall, m/m² (greater than 0, at most 1000)'),
+    .describe('Length of the linear bridge per square metre of wall, m/m² (at least 0.001, at most 1000)'),
 });
 export const fastenerBridgeSchema = z.object({
   kind: z.literal('fastener'),
   name,
   conductivity: z
     .number()
-    .positive()
+    .min(MIN_CONDUCTIVITY, `at least ${MIN_CONDUCTIVITY} W/(m·K) — below any fastener material`)
     .max(1000)
-    .describe('Fastener thermal conductivity λ_f, W/(m·K) (0–1000]'),
+    .describe(`Fastener thermal conductivity λ_f, W/(m·K) (at least ${MIN_CONDUCTIVITY}, at most 1000)`),
   diameter: z
     .number()
     .min(MIN_FASTENER_DIAMETER)
@@ -209,6 +214,7 @@ export const fastenerBridgeSchema = z.object({
     .number()
     .int()
     .nonnegative()
+    .max(39, 'an assembly has at most 40 layers (index 0 to 39)')
     .describe(
       'Index of the insulation layer crossed, dimensionless integer ≥ 0 (layers counted outside → inside from 0)',
     ),

@@ -66,6 +66,11 @@ export function formatter(system: UnitSystem) {
     temperatureValue: (c: number) => (ip ? celsiusToFahrenheit(c) : c),
     temperatureUnit: ip ? '°F' : '°C',
     rh: (fraction: number) => withUnit(num(fraction * 100, 1), '%'),
+    /** Vent area of an air layer (ISO 6946 §6.9.3), stored in mm²/m: mm²/m or in²/ft. */
+    ventArea: (mm2PerM: number) =>
+      ip
+        ? withUnit(num(mm2PerM / ((INCH * INCH * 1e6) / FOOT), 3), 'in²/ft')
+        : withUnit(num(mm2PerM, 0), 'mm²/m'),
     rValue: (v: number) =>
       ip
         ? withUnit(num(v / R_IP_TO_SI, v / R_IP_TO_SI < 1 ? sig3(v / R_IP_TO_SI) : 1), 'h·ft²·°F/Btu')

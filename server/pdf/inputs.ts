@@ -34,7 +34,11 @@ function layerDetail(layer: Layer, fmt: Formatter): string {
     case 'resistance':
       return `R = ${fmt.rValue(layer.resistance)} (declared)`;
     case 'air':
-      return `${layer.ventilation === 'well' ? 'well ventilated' : layer.ventilation === 'slightly' ? 'slightly ventilated' : 'unventilated'}`;
+      return layer.ventilation === 'well'
+        ? 'well ventilated'
+        : layer.ventilation === 'slightly'
+          ? `slightly ventilated, A_v ${layer.ventArea === undefined ? '—' : fmt.ventArea(layer.ventArea)}`
+          : 'unventilated';
     case 'framed':
       return [
         layer.sections

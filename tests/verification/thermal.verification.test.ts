@@ -62,6 +62,35 @@ describe('ISO 6946:2017 §6.9 Table 8 — unventilated air layers, high-emissivi
   });
 });
 
+describe('ISO 6946:2017 §6.9.3 — slightly ventilated air layers', () => {
+  // Source: ISO 6946:2017 §6.9.3 [memory]: A_v ≤ 500 mm²/m unventilated, > 1500 well ventilated, between them
+  // R_T = (1500 − A_v)/1000·R_T,u + (A_v − 500)/1000·R_T,v, R_T,v with the layers outside disregarded and
+  // Rse = Rsi. The 0.15 m²·K/W cap on the layers outside and the halved R_g belonged to the 2007 edition's rule
+  // [memory] and are no longer applied. Tolerance 1e-12 (the formula, derived from the two configurations).
+  const layers = (ventilation: 'unventilated' | 'slightly' | 'well', ventArea?: number): Layer[] => [
+    { kind: 'homogeneous', name: 'Brick veneer', thickness: 0.1, conductivity: 0.77 },
+    { kind: 'air', name: 'Cavity', thickness: 0.05, ventilation, ...(ventArea ? { ventArea } : {}) },
+    { kind: 'homogeneous', name: 'Mineral wool', thickness: 0.1, conductivity: 0.035 },
+    { kind: 'homogeneous', name: 'Blockwork', thickness: 0.1, conductivity: 0.51 },
+  ];
+  const R = (l: Layer[]) => calculateThermal(wall(l)).R0;
+  it.each([
+    [600, 0.9, 0.1],
+    [1000, 0.5, 0.5],
+    [1400, 0.1, 0.9],
+  ])('[memory] A_v = %s mm²/m → %s·R_T,u + %s·R_T,v', (Av, a, b) => {
+    const u = R(layers('unventilated'));
+    const v = R(layers('well'));
+    expect(R(layers('slightly', Av))).toBeCloseTo(a * u + b * v, 12);
+  });
+  it('[memory] the unventilated R_T,u: veneer, cavity 0.18 (Table 8), insulation, block and both surfaces', () => {
+    expect(R(layers('unventilated'))).toBeCloseTo(
+      0.13 + 0.1 / 0.77 + 0.18 + 0.1 / 0.035 + 0.1 / 0.51 + 0.04,
+      12,
+    );
+  });
+});
+
 describe('Scottish Technical Handbook annex 6.B.2 — timber framed wall by the combined method', () => {
   // Source: Scottish Building Standards Technical Handbook, annex 6.B "Worked examples of U-value
   // calculations using the combined method" (BS EN ISO 6946), 6.B.2 timber framed wall example: brick

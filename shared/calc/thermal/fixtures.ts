@@ -14,7 +14,7 @@ export const metalPanelWall = (): ThermalInput => ({
       conductivity: 50,
       materialId: 'steel',
     },
-    { kind: 'air', name: 'Drained cavity', thickness: 0.025, ventilation: 'slightly' },
+    { kind: 'air', name: 'Drained cavity', thickness: 0.025, ventilation: 'slightly', ventArea: 1000 },
     { kind: 'resistance', name: 'Water-resistive barrier', resistance: 0.01, thickness: 0.0005 },
     {
       kind: 'homogeneous',

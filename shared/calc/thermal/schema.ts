@@ -80,6 +80,14 @@ export const airLayerSchema = z.object({
   ventilation: z
     .enum(['unventilated', 'slightly', 'well'])
     .describe('ISO 6946:2017 §6.9: unventilated, slightly ventilated, or well ventilated'),
+  ventArea: z
+    .number()
+    .min(0)
+    .max(100000)
+    .optional()
+    .describe(
+      'Vent area A_v, mm² per m of length (vertical air layer) or per m² of surface (horizontal), 0–100 000 — ISO 6946:2017 §6.9.3: ≤ 500 unventilated, > 1500 well ventilated; needed for a slightly ventilated layer',
+    ),
   emissivityFactor: z
     .number()
     .min(0.01, 'at least 0.01 — below the lowest-emissivity foil faces')

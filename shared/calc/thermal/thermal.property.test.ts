@@ -17,12 +17,38 @@ const declared = fc.record({
   resistance: fc.double({ min: 0.001, max: 5, noNaN: true }),
   thickness,
 });
-const air = fc.record({
-  kind: fc.constant('air' as const),
-  name,
-  thickness: fc.double({ min: 0.001, max: 0.3, noNaN: true }),
-  ventilation: fc.constantFrom('unventilated' as const, 'slightly' as const),
-});
+const air = fc.oneof(
+  fc.record({
+    kind: fc.constant('air' as const),
+    name,
+    thickness: fc.double({ min: 0.001, max: 0.3, noNaN: true }),
+    ventilation: fc.constant('unventilated' as const),
+  }),
+  // ISO 6946:2017 §6.9.3: slightly ventilated means 500 < A_v ≤ 1500 mm²/m.
+  fc.record({
+    kind: fc.constant('air' as const),
+    name,
+    thickness: fc.double({ min: 0.001, max: 0.3, noNaN: true }),
+    ventilation: fc.constant('slightly' as const),
+    ventArea: fc.double({ min: 500.001, max: 1500, noNaN: true }),
+  }),
+);
+
+/**
+ * §6.9.3 blends one slightly ventilated layer, and not one outside metal framing: any other is entered as
+ * unventilated, as a designer would have to.
+ */
+function oneSlightLayer(layers: Layer[]): Layer[] {
+  const metal = layers.findIndex((l) => l.kind === 'framed' && l.metal);
+  let seen = false;
+  return layers.map((l, i) => {
+    if (l.kind !== 'air' || l.ventilation !== 'slightly') return l;
+    if (seen || (metal >= 0 && i > metal))
+      return { kind: 'air', name: l.name, thickness: l.thickness, ventilation: 'unventilated' };
+    seen = true;
+    return l;
+  });
+}
 
 /** Two-section framing (cavity + member), fractions summing to 1 exactly. */
 const framed = (metal: boolean) =>
@@ -108,7 +134,7 @@ const wallOf = (framing: fc.Arbitrary<FramedLayer | null>) =>
     .map(({ layers, framing, at, heatFlow, bridges }): ThermalInput => {
       const all: Layer[] = [...layers];
       if (framing) all.splice(at % (all.length + 1), 0, framing);
-      return { layers: all, heatFlow, bridges };
+      return { layers: oneSlightLayer(all), heatFlow, bridges };
     });
 
 const anyWall = wallOf(fc.option(fc.oneof(framed(false), framed(true), tableSteel), { nil: null }));

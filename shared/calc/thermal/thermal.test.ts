@@ -90,9 +90,9 @@ describe('air layers', () => {
     expect(airLayerResistance(0.0025, 'downward', 'unventilated')).toBeCloseTo(0.055, 12);
   });
 
-  it('halves the value for a slightly ventilated layer and drops a well-ventilated one', () => {
+  it('a slightly ventilated layer keeps its unventilated R (the blend is on R_T); a well-ventilated one is 0', () => {
     const full = airLayerResistance(0.05, 'downward', 'unventilated');
-    expect(airLayerResistance(0.05, 'downward', 'slightly')).toBeCloseTo(full / 2, 12);
+    expect(airLayerResistance(0.05, 'downward', 'slightly')).toBe(full);
     expect(airLayerResistance(0.05, 'downward', 'well')).toBe(0);
   });
 
@@ -128,23 +128,41 @@ describe('air layers', () => {
     expect(vented.trace.find((s) => s.id === 'thermal.Rse')?.note).toMatch(/Layers 0–1/);
   });
 
-  it('warns when the layers outside a slightly ventilated cavity exceed 0.15 m²·K/W', () => {
-    const r = calculateThermal(
-      wall([
-        board(0.1, 0.5, 'Masonry veneer'),
-        { kind: 'air', name: 'Cavity', thickness: 0.05, ventilation: 'slightly' },
-        board(0.1, 0.035),
-      ]),
-    );
-    expect(r.warnings.join(' ')).toMatch(/0\.15/);
-    const thin = calculateThermal(
-      wall([
-        board(0.0007, 50, 'Steel'),
-        { kind: 'air', name: 'Cavity', thickness: 0.05, ventilation: 'slightly' },
-        board(0.1, 0.035),
-      ]),
-    );
-    expect(thin.warnings).toEqual([]);
+  describe('slightly ventilated air layers (ISO 6946:2017 §6.9.3)', () => {
+    const veneer = board(0.1, 0.5, 'Masonry veneer');
+    const inner = [board(0.1, 0.035), board(0.0125, 0.25)];
+    const cavity = (ventilation: 'unventilated' | 'slightly' | 'well', ventArea?: number): Layer => ({
+      kind: 'air',
+      name: 'Cavity',
+      thickness: 0.05,
+      ventilation,
+      ...(ventArea === undefined ? {} : { ventArea }),
+    });
+    const R = (c: Layer) => calculateThermal(wall([veneer, c, ...inner])).R0;
+
+    it('R_T = (1500 − A_v)/1000·R_T,u + (A_v − 500)/1000·R_T,v (derived)', () => {
+      const u = R(cavity('unventilated'));
+      const w = R(cavity('well'));
+      expect(R(cavity('slightly', 1000))).toBeCloseTo(0.5 * u + 0.5 * w, 12);
+      expect(R(cavity('slightly', 800))).toBeCloseTo(0.7 * u + 0.3 * w, 12);
+      // At A_v = 1500 the slightly ventilated layer is the well-ventilated one.
+      expect(R(cavity('slightly', 1500))).toBeCloseTo(w, 12);
+    });
+
+    it('R falls as the vent area grows, and the trace shows the blend', () => {
+      expect(R(cavity('slightly', 700))).toBeGreaterThan(R(cavity('slightly', 1200)));
+      const r = calculateThermal(wall([veneer, cavity('slightly', 1000), ...inner]));
+      expect(r.trace.find((t) => t.id === 'thermal.slightVentilation')?.inputs.A_v?.value).toBe(1000);
+      expect(r.warnings).toEqual([]);
+    });
+
+    it('needs A_v, and A_v must match the class chosen', () => {
+      expect(inputError(() => R(cavity('slightly'))).field).toBe('layers.1.ventArea');
+      expect(inputError(() => R(cavity('slightly', 400))).reason).toMatch(/makes the layer unventilated/);
+      expect(inputError(() => R(cavity('unventilated', 900))).reason).toMatch(/slightly ventilated/);
+      expect(inputError(() => R(cavity('well', 1500))).reason).toMatch(/slightly ventilated/);
+      expect(R(cavity('unventilated', 500))).toBe(R(cavity('unventilated')));
+    });
   });
 });
 
@@ -250,7 +268,9 @@ describe('methods', () => {
   });
 
   it('energy-code path: films, other layers and the table value in series (derived)', () => {
-    const r = calculateThermal(metalPanelWall());
+    const input = metalPanelWall();
+    input.layers[1] = { kind: 'air', name: 'Drained cavity', thickness: 0.025, ventilation: 'unventilated' };
+    const r = calculateThermal(input);
     const s = r.trace.find((t) => t.id === 'thermal.R.energyCode')!;
     const sum =
       s.inputs['R_film,e']!.value +

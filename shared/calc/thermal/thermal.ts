@@ -9,6 +9,7 @@ import {
 } from './energy-code';
 import { findMaterial } from './materials';
 import type {
+  AirLayer,
   Bridge,
   BridgeResult,
   FastenerBridge,
@@ -30,10 +31,8 @@ import type {
  * gives R₀ (DEVELOPERS.md D-101): a steel-framed wall the table covers → the energy-code path; other metal
  * framing → the lowest R of the methods offered; no metal → ISO 6946 combined.
  *
- * Provenance of the constants below: Table 7, the R′T/R″T ≤ 1.5 limit, the Annex F rules and the
- * slightly-ventilated 0.15 m²·K/W cap are recalled from ISO 6946:2017, not re-read; Table 8 is recalled and
- * is reproduced by the Annex D formula (h_a, h_r0 = 5.1 also recalled) to its rounding. The verification
- * tests name which values a public source confirmed. Verify against the standard before certifying.
+ * Table 8 is reproduced by the Annex D formula (h_a, h_r0 = 5.1) to its rounding. The verification tests name
+ * the published source each constant was checked against, and how.
  */
 
 const RK = 'm²·K/W';
@@ -46,6 +45,7 @@ const SRC_LAYER = 'ISO 6946:2017, thermal resistance of homogeneous layers';
 const SRC_SURFACE = 'ISO 6946:2017 §6.8, Table 7';
 const SRC_AIR = 'ISO 6946:2017 §6.9, Table 8';
 const SRC_AIR_LOW_E = 'ISO 6946:2017 §6.9 and Annex D';
+const SRC_AIR_SLIGHT = 'ISO 6946:2017 §6.9.3, slightly ventilated air layers';
 const SRC_ISO_LIMITS = 'ISO 6946:2017 §6.7.2';
 const SRC_SCOPE_ZONE = 'ISO 6946:2017 Scope; ASHRAE Handbook—Fundamentals (2021) ch. 27, zone method';
 const SRC_FASTENER = 'ISO 6946:2017 Annex F';
@@ -68,8 +68,18 @@ export const FRACTION_TOLERANCE = 1e-6;
 export const ISO_LIMIT_RATIO_MAX = 1.5;
 /** Annex F is not applied below this fastener conductivity, W/(m·K). */
 export const FASTENER_MIN_CONDUCTIVITY = 1;
-/** ISO 6946:2017 §6.9.3 — resistance between a slightly ventilated air layer and the outside, at most, m²·K/W. */
-const SLIGHTLY_VENTILATED_OUTSIDE_MAX = 0.15;
+/** ISO 6946:2017 §6.9.3 — vent area A_v, mm² per m of length (vertical layers) or per m² (horizontal). */
+export const AIR_VENT_AREA_UNIT = 'mm²/m';
+/** §6.9.3 — at most this A_v the layer is unventilated, mm²/m. */
+export const UNVENTILATED_MAX_VENT_AREA = 500;
+/** §6.9.3 — above this A_v the layer is well ventilated, mm²/m. */
+export const WELL_VENTILATED_MIN_VENT_AREA = 1500;
+
+/** R_T = (1500 − A_v)/1000·R_T,u + (A_v − 500)/1000·R_T,v: the two weights (ISO 6946:2017 §6.9.3). */
+export const slightVentilationWeights = (ventArea: number): { a: number; b: number } => ({
+  a: (WELL_VENTILATED_MIN_VENT_AREA - ventArea) / 1000,
+  b: (ventArea - UNVENTILATED_MAX_VENT_AREA) / 1000,
+});
 /**
  * The parallel-path method follows every combination of sections through the framed layers (Π n_sections
  * paths); more than this many is no real wall and would take exponential time (8 sections × 40 layers).
@@ -135,8 +145,10 @@ function airLayerAnnexD(thickness: number, heatFlow: HeatFlow, emittance: number
 }
 
 /**
- * Air layer R (ISO 6946:2017 §6.9): unventilated from Table 8 (or Annex D when the emittance E is given),
- * slightly ventilated one half of that, well ventilated 0 (the caller discards it and the layers outside).
+ * Air layer R (ISO 6946:2017 §6.9): unventilated from Table 8 (or Annex D when the emittance E is given); a
+ * slightly ventilated layer also takes its unventilated R, the wall's R_T then being blended with the
+ * well-ventilated configuration (§6.9.3, in calculateThermal); well ventilated 0 (the caller discards it and
+ * the layers outside).
  */
 export function airLayerResistance(
   thickness: number,
@@ -149,7 +161,7 @@ export function airLayerResistance(
     emittance === undefined
       ? airLayerTable8(thickness, heatFlow)
       : airLayerAnnexD(thickness, heatFlow, emittance);
-  return ventilation === 'slightly' ? unventilated / 2 : unventilated;
+  return unventilated;
 }
 
 /** Bridged layer by isothermal planes: R″_j = d / Σ f_q·λ_q (ISO 6946:2017 §6.7.2, lower limit). */
@@ -310,6 +322,33 @@ function validateFramed(layer: FramedLayer, i: number): void {
   positiveAt(layer.spacing, 'layers', i, 'spacing', 'member spacing');
 }
 
+/** A_v must match the class chosen (ISO 6946:2017 §6.9.3); a slightly ventilated layer needs it. */
+function validateVentArea(layer: AirLayer, i: number): void {
+  const Av = layer.ventArea;
+  const field = `layers.${i}.ventArea`;
+  if (Av === undefined) {
+    if (layer.ventilation === 'slightly')
+      throw new CalcInputError(
+        field,
+        `a slightly ventilated air layer needs its vent area A_v (${AIR_VENT_AREA_UNIT}, more than ${UNVENTILATED_MAX_VENT_AREA} and at most ${WELL_VENTILATED_MIN_VENT_AREA}): ISO 6946:2017 §6.9.3 interpolates between unventilated and well ventilated by it`,
+      );
+    return;
+  }
+  if (!(Av >= 0 && Av < Number.POSITIVE_INFINITY))
+    throw new CalcInputError(field, `must be a finite number ≥ 0 (got ${Av})`);
+  const cls =
+    Av <= UNVENTILATED_MAX_VENT_AREA
+      ? 'unventilated'
+      : Av > WELL_VENTILATED_MIN_VENT_AREA
+        ? 'well'
+        : 'slightly';
+  if (cls !== layer.ventilation)
+    throw new CalcInputError(
+      field,
+      `A_v = ${Av} ${AIR_VENT_AREA_UNIT} makes the layer ${cls === 'well' ? 'well ventilated' : cls === 'slightly' ? 'slightly ventilated' : 'unventilated'} (ISO 6946:2017 §6.9.3: ≤ ${UNVENTILATED_MAX_VENT_AREA} unventilated, > ${WELL_VENTILATED_MIN_VENT_AREA} well ventilated) — choose that, or correct A_v`,
+    );
+}
+
 function validateLayer(layer: Layer, i: number): void {
   switch (layer.kind) {
     case 'homogeneous':
@@ -329,6 +368,7 @@ function validateLayer(layer: Layer, i: number): void {
           `layers.${i}.thickness`,
           `ISO 6946 Table 8 stops at 0.3 m (got ${layer.thickness}); treat a deeper space as an unheated space`,
         );
+      validateVentArea(layer, i);
       if (
         layer.emissivityFactor !== undefined &&
         !(layer.emissivityFactor > 0 && layer.emissivityFactor <= 1)
@@ -385,7 +425,7 @@ function traceLayer(layer: Exclude<Layer, FramedLayer>, i: number, heatFlow: Hea
     case 'air': {
       const E = layer.emissivityFactor;
       const R = airLayerResistance(layer.thickness, heatFlow, layer.ventilation, E);
-      const half = layer.ventilation === 'slightly' ? ' × 1/2 (slightly ventilated)' : '';
+      const half = layer.ventilation === 'slightly' ? ' (unventilated value; §6.9.3 blends R_T)' : '';
       return E === undefined
         ? step(
             `thermal.layer.${i}.R`,
@@ -652,6 +692,94 @@ function decidingMethod(
   };
 }
 
+/** The slightly ventilated air layer of a wall and its §6.9.3 weights, or null (one such layer at most). */
+function slightVentilation(
+  layers: readonly Layer[],
+  start: number,
+): { index: number; ventArea: number; unit: string; a: number; b: number } | null {
+  let found: { index: number; ventArea: number; unit: string; a: number; b: number } | null = null;
+  for (let i = start; i < layers.length; i++) {
+    const l = layers[i]!;
+    if (l.kind !== 'air' || l.ventilation !== 'slightly') continue;
+    if (found)
+      throw new CalcInputError(
+        `layers.${i}.ventilation`,
+        'ISO 6946 §6.9.3 blends one slightly ventilated air layer; enter the others as unventilated or well ventilated',
+      );
+    const w = slightVentilationWeights(l.ventArea!);
+    found = { index: i, ventArea: l.ventArea!, unit: AIR_VENT_AREA_UNIT, ...w };
+  }
+  return found;
+}
+
+interface ZoneValues {
+  R: number;
+  zoneWidth: number;
+  RA: number;
+  RB: number;
+  distance: number;
+}
+interface MethodValues {
+  pp: number;
+  ip: number;
+  zone: ZoneValues | null;
+  code: { R: number; info: NonNullable<ThermalResult['energyCode']>; step: TraceStep | null } | null;
+}
+
+/** Every method's R_T of one configuration of the wall (kept from `start`, with its Rse and series sum). */
+function methodValues(
+  layers: readonly Layer[],
+  heatFlow: HeatFlow,
+  start: number,
+  Rsi: number,
+  Rse: number,
+  seriesR: number,
+  framed: readonly FramedLayer[],
+  metalIndex: number,
+): MethodValues {
+  const pp = parallelPath(seriesR, framed);
+  const ip = isothermalPlanes(seriesR, framed);
+  if (metalIndex < 0) return { pp, ip, zone: null, code: null };
+  requireDeclaredThickness(layers, start);
+  const layer = layers[metalIndex] as FramedLayer;
+  const { member, cavityConductivity } = splitMember(layer.sections);
+  const restResistance = ip - framedLayerIsothermalResistance(layer.thickness, layer.sections);
+  const distance = Math.max(depth(layers, start, metalIndex), depth(layers, metalIndex + 1, layers.length));
+  const z = zoneMethod({
+    restResistance,
+    thickness: layer.thickness,
+    memberConductivity: member.conductivity,
+    memberFraction: member.fraction,
+    cavityConductivity,
+    flangeWidth: layer.flangeWidth!,
+    spacing: layer.spacing!,
+    distance,
+  });
+  const code = energyCodePath(layers, start, metalIndex, cavityConductivity, heatFlow, seriesR - Rsi - Rse);
+  return {
+    pp,
+    ip,
+    zone: { ...z, distance },
+    code: { R: code.step?.value ?? Number.NaN, info: code.info, step: code.step },
+  };
+}
+
+/** a·u + b·w for every method (ISO 6946:2017 §6.9.3); the zone geometry and table row stay u's. */
+function blendMethods(u: MethodValues, w: MethodValues, a: number, b: number): MethodValues {
+  const mix = (x: number, y: number) => a * x + b * y;
+  return {
+    pp: mix(u.pp, w.pp),
+    ip: mix(u.ip, w.ip),
+    zone: u.zone && w.zone ? { ...u.zone, R: mix(u.zone.R, w.zone.R) } : null,
+    code:
+      u.code?.step && w.code?.step
+        ? { ...u.code, R: mix(u.code.R, w.code.R) }
+        : u.code
+          ? { ...u.code, step: null }
+          : null,
+  };
+}
+
 /** Clear-field and effective thermal performance of a wall; `input` is already parsed by thermalInputSchema. */
 export function calculateThermal(input: ThermalInput): ThermalResult {
   const { layers, heatFlow, bridges } = input;
@@ -691,10 +819,12 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
   );
 
   let seriesR = Rsi + Rse;
-  let outside = Rse;
   const framed: FramedLayer[] = [];
+  /** R of each kept unbridged layer by index (for the well-ventilated configuration of §6.9.3). */
+  const layerR = new Map<number, number>();
   let metalIndex = -1;
   let paths = 1;
+  const vent = slightVentilation(layers, start);
   for (let i = start; i < layers.length; i++) {
     const layer = layers[i]!;
     let t: TraceStep;
@@ -726,21 +856,45 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
     } else {
       t = traceLayer(layer, i, heatFlow);
       seriesR += t.value;
-      if (
-        layer.kind === 'air' &&
-        layer.ventilation === 'slightly' &&
-        outside > SLIGHTLY_VENTILATED_OUTSIDE_MAX
-      )
-        warnings.push(
-          `${layer.name}: ISO 6946:2017 §6.9.3 limits the resistance between a slightly ventilated air layer and the outside to 0.15 m²·K/W; here it is ${outside.toFixed(3)} m²·K/W (Rse included) — check the layers outside`,
-        );
+      layerR.set(i, t.value);
     }
     trace.push(t);
-    outside += t.value;
   }
+  if (vent && metalIndex >= 0 && metalIndex < vent.index)
+    throw new CalcInputError(
+      `layers.${vent.index}.ventilation`,
+      'a slightly ventilated air layer inside the metal framing is not covered: ISO 6946 §6.9.3 blends the wall with and without the layers outside it, and the framing would be one of them',
+    );
 
-  const pp = parallelPath(seriesR, framed);
-  const ip = isothermalPlanes(seriesR, framed);
+  const u = methodValues(layers, heatFlow, start, Rsi, Rse, seriesR, framed, metalIndex);
+  let m = u;
+  if (vent) {
+    // ISO 6946:2017 §6.9.3: R_T = (1500 − A_v)/1000·R_T,u + (A_v − 500)/1000·R_T,v, R_T,v with the layers
+    // outside the air layer disregarded and Rse = Rsi (§6.9.4).
+    let seriesV = 2 * Rsi;
+    for (const [i, R] of layerR) if (i > vent.index) seriesV += R;
+    const framedV = framed.filter((l) => layers.indexOf(l) > vent.index);
+    const w = methodValues(layers, heatFlow, vent.index + 1, Rsi, Rsi, seriesV, framedV, metalIndex);
+    m = blendMethods(u, w, vent.a, vent.b);
+    trace.push(
+      step(
+        'thermal.slightVentilation',
+        `${layers[vent.index]!.name}: slightly ventilated air layer`,
+        'R_T = (1500 − A_v)/1000·R_T,u + (A_v − 500)/1000·R_T,v, for every method',
+        SRC_AIR_SLIGHT,
+        {
+          A_v: v(vent.ventArea, vent.unit),
+          'R_T,u (isothermal planes)': v(u.ip, RK),
+          'R_T,v (isothermal planes)': v(w.ip, RK),
+        },
+        m.ip,
+        RK,
+        'R_T,u with the air layer unventilated; R_T,v with it and the layers outside disregarded and Rse = Rsi. Each method below is blended the same way.',
+      ),
+    );
+  }
+  const { pp, ip } = m;
+  const blended = vent ? ' (blended for the slightly ventilated air layer, §6.9.3)' : '';
   trace.push(
     step(
       'thermal.R.parallelPath',
@@ -750,6 +904,7 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
       { 'Rsi + ΣR_unbridged + Rse': v(seriesR, RK) },
       pp,
       RK,
+      vent ? `Value${blended}` : undefined,
     ),
     step(
       'thermal.R.isothermalPlanes',
@@ -759,6 +914,7 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
       { 'Rsi + ΣR_unbridged + Rse': v(seriesR, RK) },
       ip,
       RK,
+      vent ? `Value${blended}` : undefined,
     ),
   );
 
@@ -773,22 +929,9 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
   const byMethod: Partial<Record<MethodName, number>> = { parallelPath: pp, isothermalPlanes: ip };
 
   if (metalIndex >= 0) {
-    requireDeclaredThickness(layers, start);
     const layer = layers[metalIndex] as FramedLayer;
-    const { member, cavityConductivity } = splitMember(layer.sections);
-    const restResistance = ip - framedLayerIsothermalResistance(layer.thickness, layer.sections);
-    const distance = Math.max(depth(layers, start, metalIndex), depth(layers, metalIndex + 1, layers.length));
-    const z = zoneMethod({
-      restResistance,
-      thickness: layer.thickness,
-      memberConductivity: member.conductivity,
-      memberFraction: member.fraction,
-      cavityConductivity,
-      flangeWidth: layer.flangeWidth!,
-      spacing: layer.spacing!,
-      distance,
-    });
-    zone = z.R;
+    const z = u.zone!;
+    zone = m.zone!.R;
     offeredMethods.push('zone');
     byMethod.zone = zone;
     trace.push(
@@ -799,24 +942,23 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
         SRC_ZONE,
         {
           m: v(layer.flangeWidth!, M),
-          d: v(Math.max(distance, ZONE_MIN_DISTANCE), M),
+          d: v(Math.max(z.distance, ZONE_MIN_DISTANCE), M),
           W: v(z.zoneWidth, M),
           s: v(layer.spacing!, M),
           R_A: v(z.RA, RK),
           R_B: v(z.RB, RK),
         },
-        z.R,
+        zone,
         RK,
-        'd is the distance from the flange to the surface on the deeper side — every layer between them, declared-R layers by their thickness — at least 0.5 in; the member is the section with the highest λ',
+        `d is the distance from the flange to the surface on the deeper side — every layer between them, declared-R layers by their thickness — at least 0.5 in; the member is the section with the highest λ${blended}`,
       ),
     );
-    const code = energyCodePath(layers, start, metalIndex, cavityConductivity, heatFlow, seriesR - Rsi - Rse);
-    energyCode = code.info;
-    if (code.step) {
-      energyCodeR = code.step.value;
+    energyCode = u.code!.info;
+    if (u.code?.step && m.code) {
+      energyCodeR = m.code.R;
       offeredMethods.push('energyCode');
       byMethod.energyCode = energyCodeR;
-      trace.push(code.step);
+      trace.push({ ...u.code.step, value: energyCodeR, note: `${u.code.step.note ?? ''}${blended}` });
     }
   } else {
     const c = iso6946Combined(pp, ip);

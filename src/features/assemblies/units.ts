@@ -27,7 +27,8 @@ export type Measure =
   | 'countPerArea'
   | 'lengthPerArea'
   | 'fraction'
-  | 'emittance';
+  | 'emittance'
+  | 'ventArea';
 
 interface MeasureSpec {
   unit: Record<UnitSystem, string>;
@@ -79,6 +80,12 @@ export const MEASURES: Record<Measure, MeasureSpec> = {
   },
   fraction: { unit: { SI: '%', IP: '%' }, factor: { SI: 0.01, IP: 0.01 }, decimals: { SI: 4, IP: 4 } },
   emittance: { unit: { SI: '–', IP: '–' }, factor: { SI: 1, IP: 1 }, decimals: { SI: 3, IP: 3 } },
+  /** Vent area per length of an air layer, stored in mm²/m as ISO 6946 §6.9.3 states it; 1 in²/ft = 2116.7 mm²/m. */
+  ventArea: {
+    unit: { SI: 'mm²/m', IP: 'in²/ft' },
+    factor: { SI: 1, IP: (INCH * INCH * 1e6) / FOOT },
+    decimals: { SI: 0, IP: 3 },
+  },
 };
 
 export const measureUnit = (m: Measure, system: UnitSystem) => MEASURES[m].unit[system];

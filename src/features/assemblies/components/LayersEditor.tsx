@@ -28,7 +28,7 @@ type LayersArray = UseFieldArrayReturn<AssemblyFormValues, 'thermal.layers', 'ke
 
 const VENTILATION = [
   { value: 'unventilated', label: 'Unventilated' },
-  { value: 'slightly', label: 'Slightly ventilated (R halved)' },
+  { value: 'slightly', label: 'Slightly ventilated (vent area 500–1500 mm² per m)' },
   { value: 'well', label: 'Well ventilated (layers outside it are disregarded)' },
 ] as const;
 
@@ -323,12 +323,17 @@ function AirFields({
             {...c}
             value={layer.ventilation}
             className="py-1.5 text-sm"
-            onChange={(e) =>
-              array.update(i, {
-                ...layer,
-                ventilation: e.target.value as (typeof VENTILATION)[number]['value'],
-              })
-            }
+            onChange={(e) => {
+              const ventilation = e.target.value as (typeof VENTILATION)[number]['value'];
+              const { ventArea: _drop, ...rest } = layer;
+              // ISO 6946 §6.9.3: a slightly ventilated layer is described by its vent area; the others need none.
+              array.update(
+                i,
+                ventilation === 'slightly'
+                  ? { ...rest, ventilation, ventArea: 1000 }
+                  : { ...rest, ventilation },
+              );
+            }}
           >
             {VENTILATION.map((v) => (
               <option key={v.value} value={v.value}>
@@ -338,6 +343,15 @@ function AirFields({
           </Select>
         )}
       </Field>
+      {layer.ventilation === 'slightly' ? (
+        <MeasureField
+          path={`${base}.ventArea`}
+          measure="ventArea"
+          label="Vent area A_v"
+          hint="Openings per m of length (vertical layer) or per m² (horizontal); ISO 6946 §6.9.3 blends R between unventilated and well ventilated."
+          className="w-56"
+        />
+      ) : null}
       <div className="flex flex-col gap-2">
         <label className="flex items-center gap-2 pt-6 text-sm">
           <input

@@ -17,8 +17,11 @@ export interface SaveArgs {
   input: AssemblyInput;
 }
 
-/** Why the sheet's values are replaced: after a save, a create, a newer revision taken in, theirs loaded, a carry-over, an undo. */
-export type ResetReason = 'saved' | 'created' | 'newer' | 'theirs' | 'carried' | 'discard';
+/**
+ * Why the sheet's values are replaced: after a save, a create, a newer revision taken in, theirs loaded, a carry-over,
+ * all edits discarded, a step of undo or redo (`history`: the base revision stays, so a form keeps its defaults).
+ */
+export type ResetReason = 'saved' | 'created' | 'newer' | 'theirs' | 'carried' | 'discard' | 'history';
 
 /**
  * Whether a revision note typed on an otherwise unchanged sheet counts: `saves` — it is an edit (kept from
@@ -114,6 +117,20 @@ export interface RevisionSaving {
   carryOver: () => void;
   loadTheirs: () => void;
   discard: () => void;
+  /** Undo and redo of the sheet's values since the last save (the note is not in the history). */
+  history: ValueHistory;
+}
+
+/** The steps of a sheet's values since the last save. */
+export interface ValueHistory {
+  canUndo: boolean;
+  canRedo: boolean;
+  undo: () => void;
+  redo: () => void;
+  /** What the latest step removed, while it is the latest step (“Removed layer 3 — Undo”). */
+  removed: string | null;
+  /** Name what the change being made removes (call it in the same handler as the change). */
+  markRemoval: (what: string) => void;
 }
 
 export interface RevisionEditing<V, D, A extends Assembly | undefined> extends RevisionSaving {
@@ -129,6 +146,113 @@ export interface RevisionEditing<V, D, A extends Assembly | undefined> extends R
   setProblem: (problem: string[] | null) => void;
 }
 
+/** A box whose own native undo works on its text: the sheet's undo leaves Ctrl+Z to it. */
+export function isTextField(el: EventTarget | null): boolean {
+  if (el instanceof HTMLTextAreaElement) return true;
+  if (el instanceof HTMLElement && el.isContentEditable) return true;
+  return (
+    el instanceof HTMLInputElement &&
+    !['checkbox', 'radio', 'button', 'submit', 'reset', 'range', 'color', 'file', 'image'].includes(el.type)
+  );
+}
+
+/** Typing in one text box counts as one step while the keystrokes come less than this apart. */
+const TYPING_STEP_MS = 2000;
+
+/**
+ * The history of a sheet's values: each change is a step (keystrokes in one text box, one step), `apply` puts a
+ * step's values back. `baseline` (a save, theirs loaded, …) starts it again; a change before the person has
+ * touched the sheet since then is taken as the starting point too (a form filling in its fields).
+ */
+function useValueHistory<V>(values: V, apply: (values: V) => void) {
+  const key = JSON.stringify(values);
+  const h = useRef({
+    past: [] as V[],
+    future: [] as V[],
+    last: structuredClone(values),
+    key,
+    typingIn: null as Element | null,
+    at: 0,
+    removing: null as string | null,
+    touched: false,
+  });
+  const [removal, setRemoval] = useState<{ what: string; depth: number } | null>(null);
+  const [, setSteps] = useState(0);
+  const changed = () => setSteps((n) => n + 1);
+
+  useEffect(() => {
+    const touch = () => {
+      h.current.touched = true;
+    };
+    const events = ['pointerdown', 'keydown', 'input', 'change'] as const;
+    for (const e of events) document.addEventListener(e, touch, true);
+    return () => {
+      for (const e of events) document.removeEventListener(e, touch, true);
+    };
+  }, []);
+
+  // biome-ignore lint/correctness/useExhaustiveDependencies: the key stands for the values (deep)
+  useEffect(() => {
+    const s = h.current;
+    if (key === s.key) return;
+    const typing = isTextField(document.activeElement) ? document.activeElement : null;
+    const now = Date.now();
+    if (!s.touched) {
+      s.future = [];
+    } else if (!(typing && typing === s.typingIn && now - s.at < TYPING_STEP_MS)) {
+      s.past.push(s.last);
+      s.future = [];
+    }
+    s.typingIn = typing;
+    s.at = now;
+    s.last = structuredClone(values);
+    s.key = key;
+    setRemoval(s.removing ? { what: s.removing, depth: s.past.length } : null);
+    s.removing = null;
+    changed();
+  }, [key]);
+
+  function travel(back: boolean) {
+    const s = h.current;
+    const to = back ? s.past.pop() : s.future.pop();
+    if (to === undefined) return;
+    (back ? s.future : s.past).push(s.last);
+    s.last = to;
+    s.key = JSON.stringify(to);
+    s.typingIn = null;
+    setRemoval(null);
+    apply(structuredClone(to));
+    changed();
+  }
+
+  function baseline(next: V) {
+    Object.assign(h.current, {
+      past: [],
+      future: [],
+      last: structuredClone(next),
+      key: JSON.stringify(next),
+      typingIn: null,
+      removing: null,
+      touched: false,
+    });
+    setRemoval(null);
+    changed();
+  }
+
+  const { past, future } = h.current;
+  const history: ValueHistory = {
+    canUndo: past.length > 0,
+    canRedo: future.length > 0,
+    undo: () => travel(true),
+    redo: () => travel(false),
+    removed: removal && removal.depth === past.length && future.length === 0 ? removal.what : null,
+    markRemoval: (what) => {
+      h.current.removing = what;
+    },
+  };
+  return { history, baseline };
+}
+
 const notAcceptedByPath = (unmapped: [string, string][]) => [
   'The server did not accept some values — see the fields marked ✕.',
   ...unmapped.map(([path, message]) => `${path.replace(/^input\./, '')}: ${message}`),
@@ -140,7 +264,7 @@ export function useRevisionEditing<V, D = undefined, A extends Assembly | undefi
   const {
     assembly,
     values,
-    reset,
+    reset: resetSheet,
     formValues,
     markCarried = true,
     noteAlone = 'saves',
@@ -165,6 +289,12 @@ export function useRevisionEditing<V, D = undefined, A extends Assembly | undefi
   const edited = options.isEdited(values, base);
   const dirty = edited || (noteAlone !== 'ignored' && note.trim() !== '') || carried !== null;
   const canSave = base === undefined || (noteAlone === 'guards' ? edited || carried !== null : dirty);
+  const { history, baseline } = useValueHistory(values, (v) => resetSheet(v, 'history'));
+  /** Values put on the sheet from outside its edits start the history again (discarding is a step of it). */
+  function reset(next: V, why: ResetReason) {
+    if (why !== 'discard') baseline(next);
+    resetSheet(next, why);
+  }
 
   // Someone saved a newer revision while this sheet was open: take it if nothing here is edited.
   // biome-ignore lint/correctness/useExhaustiveDependencies: reset and formValues are the sheet's (new each render)
@@ -285,5 +415,6 @@ export function useRevisionEditing<V, D = undefined, A extends Assembly | undefi
     carryOver,
     loadTheirs,
     discard,
+    history,
   };
 }

@@ -163,6 +163,7 @@ function JointsSheet({ project, assembly }: { project: Project; assembly: Assemb
               selected={selected}
               onSelect={setSelected}
               air={air}
+              onRemove={editing.history.markRemoval}
             />
           </div>
         ) : joints.length > 0 ? (
@@ -202,7 +203,13 @@ function JointsSheet({ project, assembly }: { project: Project; assembly: Assemb
         id="takeoff-inputs-heading"
         aside={
           mayWrite && takeoff ? (
-            <Button variant="quiet" onClick={() => setTakeoff(undefined)}>
+            <Button
+              variant="quiet"
+              onClick={() => {
+                editing.history.markRemoval('the takeoff');
+                setTakeoff(undefined);
+              }}
+            >
               Remove the takeoff
             </Button>
           ) : undefined

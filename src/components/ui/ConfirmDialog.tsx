@@ -6,6 +6,9 @@ interface ConfirmDialogProps {
   title: ReactNode;
   children?: ReactNode;
   confirmLabel: ReactNode;
+  /** Primary by default; `danger` when confirming loses work. */
+  confirmVariant?: 'primary' | 'danger';
+  cancelLabel?: ReactNode;
   busy?: boolean;
   busyLabel?: ReactNode;
   onConfirm: () => void;
@@ -21,6 +24,8 @@ export function ConfirmDialog({
   title,
   children,
   confirmLabel,
+  confirmVariant = 'primary',
+  cancelLabel = 'Cancel',
   busy = false,
   busyLabel,
   onConfirm,
@@ -51,11 +56,11 @@ export function ConfirmDialog({
       </h2>
       <div className="flex flex-col gap-3 text-sm">{children}</div>
       <div className="mt-5 flex flex-wrap gap-3">
-        <Button variant="primary" busy={busy} busyLabel={busyLabel} onClick={onConfirm}>
+        <Button variant={confirmVariant} busy={busy} busyLabel={busyLabel} onClick={onConfirm}>
           {confirmLabel}
         </Button>
         <Button data-cancel onClick={onCancel}>
-          Cancel
+          {cancelLabel}
         </Button>
       </div>
     </dialog>

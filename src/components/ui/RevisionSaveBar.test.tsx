@@ -2,7 +2,7 @@ import type { Assembly } from '@shared/schemas/assembly';
 import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { useState } from 'react';
 import { createMemoryRouter, Link, RouterProvider } from 'react-router';
-import { afterEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
 import {
   conflictError,
   conflictOf,
@@ -13,6 +13,16 @@ import { type SaveArgs, useRevisionEditing } from '../../lib/use-revision-editin
 import { RevisionSaveBar } from './RevisionSaveBar';
 
 afterEach(cleanup);
+
+// jsdom has no modal dialogs: open and close them as a browser would, without the top layer.
+beforeAll(() => {
+  HTMLDialogElement.prototype.showModal ??= function (this: HTMLDialogElement) {
+    this.setAttribute('open', '');
+  };
+  HTMLDialogElement.prototype.close ??= function (this: HTMLDialogElement) {
+    this.removeAttribute('open');
+  };
+});
 
 const first = revision(1, { ...demoInput, description: 'as built' });
 const theirs = revision(
@@ -117,16 +127,82 @@ describe('the revision save bar', () => {
     fireEvent.click(screen.getByRole('link', { name: 'Elsewhere' }));
     await screen.findByText('The description has edits that are not saved.');
     fireEvent.click(screen.getByRole('button', { name: 'Stay and keep editing' }));
-    await waitFor(() =>
-      expect(screen.queryByText('The description has edits that are not saved.')).toBeNull(),
-    );
+    await waitFor(() => expect(screen.queryByRole('dialog')).toBeNull());
     expect(description().value).toBe('mine');
 
-    fireEvent.click(screen.getByRole('button', { name: 'Undo my edits' }));
+    fireEvent.click(screen.getByRole('button', { name: 'Discard my edits' }));
     expect(description().value).toBe('as built');
     fireEvent.change(description(), { target: { value: 'mine again' } });
     fireEvent.click(screen.getByRole('link', { name: 'Elsewhere' }));
     fireEvent.click(await screen.findByRole('button', { name: 'Leave without saving' }));
     await screen.findByText('Somewhere else');
+  });
+
+  it('asks in a modal dialog, in view', async () => {
+    renderSheet(async (a) => revision(a.version + 1, a.input));
+    fireEvent.change(description(), { target: { value: 'mine' } });
+    fireEvent.click(screen.getByRole('link', { name: 'Elsewhere' }));
+    const dialog = await screen.findByRole('dialog', {
+      name: 'The description has edits that are not saved.',
+    });
+    expect((dialog as HTMLDialogElement).open).toBe(true);
+    expect(document.activeElement?.textContent).toBe('Stay and keep editing');
+  });
+});
+
+describe('revision save bar — undo and redo', () => {
+  const undoButton = () => screen.getByRole('button', { name: 'Undo' });
+  const redoButton = () => screen.getByRole('button', { name: 'Redo' });
+  const key = (init: KeyboardEventInit, target: Element = document.body) =>
+    fireEvent.keyDown(target, { ctrlKey: true, ...init });
+
+  it('steps back and forward through the edits since the last save, by button and by key', async () => {
+    renderSheet(async (a) => revision(a.version + 1, a.input));
+    expect(undoButton().hasAttribute('disabled')).toBe(true);
+    expect(undoButton().getAttribute('aria-keyshortcuts')).toContain('Control+Z');
+    expect(redoButton().getAttribute('title')).toContain('Ctrl+Y');
+
+    fireEvent.change(description(), { target: { value: 'one' } });
+    description().blur();
+    fireEvent.change(description(), { target: { value: 'two' } });
+    // Two edits typed in the same box in a row count as one step; blur between them to make two.
+    fireEvent.click(undoButton());
+    expect(description().value).toBe('one');
+    fireEvent.click(undoButton());
+    expect(description().value).toBe('as built');
+    expect(undoButton().hasAttribute('disabled')).toBe(true);
+    expect(screen.getByText('No changes to save.')).toBeTruthy();
+
+    key({ key: 'Z', shiftKey: true });
+    expect(description().value).toBe('one');
+    key({ key: 'y' });
+    expect(description().value).toBe('two');
+    key({ key: 'z' });
+    expect(description().value).toBe('one');
+
+    fireEvent.click(screen.getByRole('button', { name: 'Save the description as revision 2' }));
+    await screen.findByText('Saved as revision 2.');
+    expect(undoButton().hasAttribute('disabled')).toBe(true);
+    expect(redoButton().hasAttribute('disabled')).toBe(true);
+  });
+
+  it('leaves Ctrl+Z to a text box that has the focus', () => {
+    renderSheet(async (a) => revision(a.version + 1, a.input));
+    fireEvent.change(description(), { target: { value: 'one' } });
+    description().focus();
+    key({ key: 'z' }, description());
+    expect(description().value).toBe('one');
+    description().blur();
+    key({ key: 'z' });
+    expect(description().value).toBe('as built');
+  });
+
+  it('makes discarding all edits a step that can be undone', () => {
+    renderSheet(async (a) => revision(a.version + 1, a.input));
+    fireEvent.change(description(), { target: { value: 'mine' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Discard my edits' }));
+    expect(description().value).toBe('as built');
+    fireEvent.click(undoButton());
+    expect(description().value).toBe('mine');
   });
 });

@@ -2,8 +2,9 @@ import type { Assembly } from '@shared/schemas/assembly';
 import { type ReactNode, useEffect, useRef } from 'react';
 import { useBlocker } from 'react-router';
 import { formatDateTime } from '../../lib/format';
-import type { RevisionSaving } from '../../lib/use-revision-editing';
+import { isTextField, type RevisionSaving } from '../../lib/use-revision-editing';
 import { Button } from './Button';
+import { ConfirmDialog } from './ConfirmDialog';
 import { Field } from './Field';
 import { Notice } from './Notice';
 import { TextInput } from './TextInput';
@@ -42,7 +43,7 @@ interface RevisionSaveBarProps {
   carriedDetail?: ReactNode;
   /** A line under Save while there are edits. */
   dirtyHint?: ReactNode;
-  /** Offer “Undo my edits”. */
+  /** Offer “Discard my edits” (back to the saved revision at once). */
   undo?: boolean;
   /** Show the “newer revision elsewhere” notice here (false: the sheet shows `NewerRevisionNotice` itself). */
   showNewer?: boolean;
@@ -88,6 +89,26 @@ export function RevisionSaveBar({
   const { base, conflict, carried, dirty, canSave, saving, savedAs, problem, note, setNote, leaving } =
     editing;
   const conflictRef = useRef<HTMLDivElement>(null);
+  const { history } = editing;
+  const stepsOpen = !saving && conflict === null;
+  const canUndo = stepsOpen && history.canUndo;
+  const canRedo = stepsOpen && history.canRedo;
+
+  // Ctrl+Z / Ctrl+Shift+Z / Ctrl+Y (⌘ on a Mac) step through the sheet's values — except in a text box,
+  // whose own undo of its text stays native.
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      if (!(e.ctrlKey || e.metaKey) || e.altKey || isTextField(e.target)) return;
+      const k = e.key.toLowerCase();
+      const step = k === 'z' ? (e.shiftKey ? 'redo' : 'undo') : k === 'y' && !e.shiftKey ? 'redo' : null;
+      if (step === 'undo' && canUndo) history.undo();
+      else if (step === 'redo' && canRedo) history.redo();
+      else return;
+      e.preventDefault();
+    };
+    document.addEventListener('keydown', onKey);
+    return () => document.removeEventListener('keydown', onKey);
+  }, [canUndo, canRedo, history]);
 
   // Unsaved edits: ask before leaving the page (in-app links and the browser alike).
   const blocker = useBlocker(
@@ -121,6 +142,28 @@ export function RevisionSaveBar({
       {base ? `Save ${words.part ? `${words.part} ` : ''}as revision ${base.version + 1}` : 'Create assembly'}
     </Button>
   );
+  const steps = (
+    <div className="flex gap-2">
+      <Button
+        variant="quiet"
+        onClick={history.undo}
+        disabled={!canUndo}
+        title="Undo the last change (Ctrl+Z)"
+        aria-keyshortcuts="Control+Z Meta+Z"
+      >
+        Undo
+      </Button>
+      <Button
+        variant="quiet"
+        onClick={history.redo}
+        disabled={!canRedo}
+        title="Redo (Ctrl+Shift+Z or Ctrl+Y)"
+        aria-keyshortcuts="Control+Shift+Z Control+Y Meta+Shift+Z"
+      >
+        Redo
+      </Button>
+    </div>
+  );
   const content = (
     <>
       {live}
@@ -145,18 +188,23 @@ export function RevisionSaveBar({
         <p className="flex-1 text-sm text-ink-muted">The first save creates revision 1.</p>
       )}
       <div className="flex flex-col items-end gap-1">
-        {undo ? (
-          <div className="flex gap-3">
-            {dirty ? (
-              <Button variant="quiet" onClick={editing.discard} disabled={saving}>
-                Undo my edits
-              </Button>
-            ) : null}
-            {saveButton}
-          </div>
-        ) : (
-          saveButton
-        )}
+        <div className="flex flex-wrap justify-end gap-3">
+          {steps}
+          {undo && dirty ? (
+            <Button variant="quiet" onClick={editing.discard} disabled={saving}>
+              Discard my edits
+            </Button>
+          ) : null}
+          {saveButton}
+        </div>
+        {history.removed && canUndo ? (
+          <p role="status" className="flex items-center gap-2 text-xs">
+            Removed {history.removed} —
+            <button type="button" className="underline underline-offset-2" onClick={history.undo}>
+              Undo
+            </button>
+          </p>
+        ) : null}
         {savedAs !== null && !dirty ? (
           <p role="status" className="text-xs">
             <span aria-hidden="true">✓ </span>Saved as revision {savedAs}.
@@ -207,24 +255,20 @@ export function RevisionSaveBar({
         </Notice>
       ) : null}
 
-      {blocker.state === 'blocked' ? (
-        <Notice tone="warning" title={words.unsaved} live>
-          <div className="flex flex-wrap gap-3 pt-1">
-            <Button variant="secondary" onClick={() => blocker.reset?.()}>
-              Stay and keep editing
-            </Button>
-            <Button
-              variant="danger"
-              onClick={() => {
-                leaving.current = true;
-                blocker.proceed?.();
-              }}
-            >
-              Leave without saving
-            </Button>
-          </div>
-        </Notice>
-      ) : null}
+      <ConfirmDialog
+        open={blocker.state === 'blocked'}
+        title={words.unsaved}
+        confirmLabel="Leave without saving"
+        confirmVariant="danger"
+        cancelLabel="Stay and keep editing"
+        onConfirm={() => {
+          leaving.current = true;
+          blocker.proceed?.();
+        }}
+        onCancel={() => blocker.reset?.()}
+      >
+        <p>If you leave now they are lost. Stay to save them as a new revision first.</p>
+      </ConfirmDialog>
 
       {problem ? (
         <Notice tone="caution" title="Not saved." live>

@@ -137,6 +137,8 @@ export interface BuilderContextValue {
   layerR: (index: number) => number | undefined;
   /** Layers outside a well-ventilated air layer (and that layer) do not count (ISO 6946 §6.9). */
   disregarded: (index: number) => boolean;
+  /** Name what a removal removes, for the save bar's “Removed … — Undo”. */
+  markRemoval: (what: string) => void;
 }
 
 export const BuilderContext = createContext<BuilderContextValue>({
@@ -147,6 +149,7 @@ export const BuilderContext = createContext<BuilderContextValue>({
   bridgeValues: [],
   layerR: () => undefined,
   disregarded: () => false,
+  markRemoval: () => {},
 });
 
 /** Index of the first layer that counts: everything up to the innermost well-ventilated air layer is discarded. */

@@ -52,7 +52,7 @@ export function useAttachmentEditing({ project, system, ...io }: AttachmentEditi
     ...io,
     values,
     isEdited: () => formState.isDirty,
-    reset: (next) => reset(next),
+    reset: (next, why) => reset(next, why === 'history' ? { keepDefaultValues: true } : undefined),
     formValues: attachmentFormValues,
     toInput: (v, base) => {
       const evaluation = evaluateAttachment(v, base.current.input, project, system);

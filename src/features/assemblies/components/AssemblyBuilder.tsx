@@ -92,8 +92,9 @@ export function AssemblyBuilder({
     assembly,
     values,
     isEdited: () => formState.isDirty,
-    // Carried-over values keep the loaded ones as the defaults, so the page still counts as edited until saved.
-    reset: (next, why) => reset(next, why === 'carried' ? { keepDefaultValues: true } : undefined),
+    // Carried-over values and undo/redo keep the loaded ones as the defaults, so the page counts as edited until saved.
+    reset: (next, why) =>
+      reset(next, why === 'carried' || why === 'history' ? { keepDefaultValues: true } : undefined),
     formValues: (input) => input,
     toInput: (_values, _base, input) =>
       Object.keys(evaluation.errors).length > 0 || !input
@@ -134,6 +135,7 @@ export function AssemblyBuilder({
     bridgeValues,
     layerR: (i) => layerRs.get(i),
     disregarded: (i) => i < counted,
+    markRemoval: editing.history.markRemoval,
   };
 
   const save = handleSubmit(

@@ -111,6 +111,7 @@ export function AttachmentsEditor() {
 
 function BridgeRow({ index: j, array }: { index: number; array: BridgesArray }) {
   const { control } = useFormContext<AssemblyFormValues>();
+  const { markRemoval } = useBuilder();
   const bridge = useWatch({ control, name: p(`thermal.bridges.${j}`) }) as Bridge | undefined;
   if (!bridge) return null;
   const base = `thermal.bridges.${j}`;
@@ -137,7 +138,10 @@ function BridgeRow({ index: j, array }: { index: number; array: BridgesArray }) 
             className={`${iconButton} text-caution`}
             aria-label={`Remove ${label}`}
             title="Remove"
-            onClick={() => array.remove(j)}
+            onClick={() => {
+              markRemoval(label);
+              array.remove(j);
+            }}
           >
             <span aria-hidden="true">✕</span>
           </button>

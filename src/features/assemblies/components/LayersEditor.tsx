@@ -41,6 +41,7 @@ export function LayersEditor() {
   const { control, getValues, setValue } = useFormContext<AssemblyFormValues>();
   const array = useFieldArray({ control, name: 'thermal.layers', keyName: 'key' });
   const { fields, move, remove, insert } = array;
+  const { markRemoval } = useBuilder();
   const [announcement, setAnnouncement] = useState('');
 
   /** Fasteners name the layer they cross by index: keep them pointing at the same layer. */
@@ -79,6 +80,7 @@ export function LayersEditor() {
 
   function removeLayer(i: number) {
     const name = nameAt(i);
+    markRemoval(name);
     remove(i);
     remapFasteners((k) => remapAfterRemove(k, i));
     alignVapour((list) => list.splice(i, 1));

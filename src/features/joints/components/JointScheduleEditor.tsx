@@ -70,6 +70,8 @@ interface JointScheduleEditorProps {
   selected: number;
   onSelect: (index: number) => void;
   air: AirDesign | null;
+  /** Names what a removal removes (for “Removed … — Undo”). */
+  onRemove?: (what: string) => void;
 }
 
 /** The joint schedule's inputs: a list of joint marks, and every input of the joint picked from it. */
@@ -80,6 +82,7 @@ export function JointScheduleEditor({
   selected,
   onSelect,
   air,
+  onRemove,
 }: JointScheduleEditorProps) {
   const system = useUnitSystem();
   const i = Math.min(selected, joints.length - 1);
@@ -147,6 +150,7 @@ export function JointScheduleEditor({
               <Button
                 variant="danger"
                 onClick={() => {
+                  onRemove?.(`joint ${joint.name || i + 1}`);
                   onChange(removeAt(joints, i));
                   onSelect(Math.max(0, i - 1));
                 }}

@@ -234,6 +234,10 @@ export function createAppRouter(queryClient: QueryClient) {
                   ...page(() => import('./routes/SettingsPage').then((m) => m.SettingsPage)),
                 },
                 {
+                  path: '/settings/firm',
+                  ...page(() => import('./routes/FirmMembersPage').then((m) => m.FirmMembersPage)),
+                },
+                {
                   path: '/admin/mail',
                   loader: requireSiteAdmin,
                   ...page(() => import('./routes/AdminMailPage').then((m) => m.AdminMailPage)),

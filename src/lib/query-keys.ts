@@ -41,6 +41,12 @@ export const mailKeys = {
   lists: () => [...mailKeys.all, 'list'] as const,
 };
 
+export const firmMemberKeys = {
+  all: ['firm-members'] as const,
+  lists: () => [...firmMemberKeys.all, 'list'] as const,
+  list: (orgId: string) => [...firmMemberKeys.lists(), orgId] as const,
+};
+
 export const adminOrganisationKeys = {
   all: ['admin-organisations'] as const,
   lists: () => [...adminOrganisationKeys.all, 'list'] as const,

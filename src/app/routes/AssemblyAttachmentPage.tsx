@@ -1,3 +1,4 @@
+import { canInFirm } from '@shared/auth/permissions';
 import { useParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
@@ -30,7 +31,10 @@ function useAttachmentLibrary(organisationId: string | undefined): AttachmentLib
     firmName: org.name,
     products: products.data ?? [],
     dataSheetHref: (productId) => dataSheetHref(org.id, productId),
-    save: (input) => add.mutateAsync({ orgId: org.id, input }),
+    // Only the firm's editors and administrators add to its library.
+    save: canInFirm(org.role, 'firm.write')
+      ? (input) => add.mutateAsync({ orgId: org.id, input })
+      : undefined,
     errorText: errorMessage,
   };
 }

@@ -1,3 +1,4 @@
+import { canInFirm, FIRM_ROLE_LABELS } from '@shared/auth/permissions';
 import { useState } from 'react';
 import { Button } from '../../components/ui/Button';
 import { Field } from '../../components/ui/Field';
@@ -19,6 +20,8 @@ export function CodeTablesPage() {
   const [adding, setAdding] = useState(false);
   const org = orgs.find((o) => o.id === chosen) ?? orgs[0];
   const sets = useCriteriaSets(org?.id);
+  // The firm's editors and administrators write its tables (the server enforces the same).
+  const mayWrite = canInFirm(org?.role, 'firm.write');
 
   return (
     <div className="flex flex-col gap-8">
@@ -28,7 +31,7 @@ export function CodeTablesPage() {
         title="Code tables"
         description="Jurisdictions adopt different editions and amendments, so Skinwright does not supply “the code”: your firm enters the values its adopted code requires, by climate zone and wall category, and every check run compares an assembly with them."
         actions={
-          org && !adding ? (
+          org && mayWrite && !adding ? (
             <Button variant="primary" onClick={() => setAdding(true)}>
               New code table
             </Button>
@@ -57,7 +60,13 @@ export function CodeTablesPage() {
               )}
             </Field>
           ) : null}
-          {adding && org ? (
+          {org && !mayWrite ? (
+            <p className="text-sm text-ink-muted">
+              Your role in {org.name} is {FIRM_ROLE_LABELS[org.role]}: you read its code tables and check
+              against them; its editors and administrators write them.
+            </p>
+          ) : null}
+          {adding && mayWrite && org ? (
             <section aria-labelledby="new-table" className="flex flex-col gap-3 border-b border-rule pb-8">
               <h2 id="new-table" className="text-2xl">
                 New code table for {org.name}

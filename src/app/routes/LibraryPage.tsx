@@ -1,3 +1,4 @@
+import { canInFirm, FIRM_ROLE_LABELS } from '@shared/auth/permissions';
 import { useState } from 'react';
 import { Field } from '../../components/ui/Field';
 import { Loading } from '../../components/ui/Loading';
@@ -28,7 +29,9 @@ export function LibraryPage() {
   const materials = useFirmMaterials(org?.id);
   const bridgeValues = useBridgeValues(org?.id);
   const products = useAttachmentProducts(org?.id);
-  const isAdmin = org?.role === 'admin';
+  // What the firm role allows (the server enforces the same): readers read, editors add, administrators delete.
+  const isAdmin = canInFirm(org?.role, 'firm.admin');
+  const mayWrite = canInFirm(org?.role, 'firm.write');
 
   return (
     <div className="flex flex-col gap-10">
@@ -56,6 +59,12 @@ export function LibraryPage() {
               )}
             </Field>
           ) : null}
+          {org && !mayWrite ? (
+            <Notice
+              tone="info"
+              title={`Your role in ${org.name} is ${FIRM_ROLE_LABELS[org.role]}: you read the firm's library and use it in checks; its editors and administrators add to it.`}
+            />
+          ) : null}
 
           <section aria-labelledby="firm-bridges-heading" className="flex flex-col gap-4">
             <div className="border-b border-ink pb-1">
@@ -75,7 +84,7 @@ export function LibraryPage() {
             ) : (
               <BridgeValuesTable orgId={org!.id} values={bridgeValues.data} isAdmin={isAdmin} />
             )}
-            {org ? <AddBridgeValueForm orgId={org.id} /> : null}
+            {org && mayWrite ? <AddBridgeValueForm orgId={org.id} /> : null}
           </section>
 
           <section aria-labelledby="firm-attachment-heading" className="flex flex-col gap-4">
@@ -94,7 +103,12 @@ export function LibraryPage() {
             ) : products.isError ? (
               <Notice tone="caution" title={errorMessage(products.error)} />
             ) : (
-              <AttachmentProductsTable orgId={org!.id} products={products.data} isAdmin={isAdmin} />
+              <AttachmentProductsTable
+                orgId={org!.id}
+                products={products.data}
+                isAdmin={isAdmin}
+                mayWrite={mayWrite}
+              />
             )}
           </section>
 
@@ -114,7 +128,7 @@ export function LibraryPage() {
             ) : (
               <FirmMaterialsTable orgId={org!.id} materials={materials.data} isAdmin={isAdmin} />
             )}
-            {org ? <AddFirmMaterialForm orgId={org.id} /> : null}
+            {org && mayWrite ? <AddFirmMaterialForm orgId={org.id} /> : null}
           </section>
         </>
       )}

@@ -1,4 +1,6 @@
+import { FIRM_ROLE_LABELS } from '@shared/auth/permissions';
 import type { UnitSystem } from '@shared/units';
+import { Link } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
@@ -74,8 +76,10 @@ export function SettingsPage() {
               <ul>
                 {me.data.organisations.map((o) => (
                   <li key={o.id}>
-                    {o.name}{' '}
-                    <span className="text-ink-muted">({o.role === 'admin' ? 'firm admin' : 'member'})</span>
+                    {o.name} <span className="text-ink-muted">({FIRM_ROLE_LABELS[o.role]})</span> ·{' '}
+                    <Link to={`/settings/firm?org=${o.id}`}>
+                      people and firm roles<span className="sr-only"> of {o.name}</span>
+                    </Link>
                     <span className="block text-sm">
                       <span className="num break-all">{o.handle}</span>
                       <span className="text-ink-muted">

@@ -33,10 +33,19 @@ export function productSummary(p: AttachmentProduct, system: UnitSystem): string
     .join(' · ');
 }
 
-/** Upload (or replace) an entry's data sheet: one PDF, PNG or JPEG, checked by its content on the server. */
-function DataSheetCell({ orgId, product }: { orgId: string; product: AttachmentProduct }) {
-  const input = useRef<HTMLInputElement>(null);
-  const upload = useUploadDataSheet();
+/**
+ * An entry's data sheet, and — for the firm's editors and administrators — uploading or replacing it: one PDF,
+ * PNG or JPEG, checked by its content on the server.
+ */
+function DataSheetCell({
+  orgId,
+  product,
+  mayWrite,
+}: {
+  orgId: string;
+  product: AttachmentProduct;
+  mayWrite: boolean;
+}) {
   return (
     <div className="flex flex-col items-start gap-1">
       {product.dataSheet ? (
@@ -46,6 +55,16 @@ function DataSheetCell({ orgId, product }: { orgId: string; product: AttachmentP
       ) : (
         <span className="text-ink-muted">none yet</span>
       )}
+      {mayWrite ? <DataSheetUpload orgId={orgId} product={product} /> : null}
+    </div>
+  );
+}
+
+function DataSheetUpload({ orgId, product }: { orgId: string; product: AttachmentProduct }) {
+  const input = useRef<HTMLInputElement>(null);
+  const upload = useUploadDataSheet();
+  return (
+    <>
       <input
         ref={input}
         type="file"
@@ -72,7 +91,7 @@ function DataSheetCell({ orgId, product }: { orgId: string; product: AttachmentP
           ✕ {errorMessage(upload.error)}
         </span>
       ) : null}
-    </div>
+    </>
   );
 }
 
@@ -81,10 +100,13 @@ export function AttachmentProductsTable({
   orgId,
   products,
   isAdmin,
+  mayWrite,
 }: {
   orgId: string;
   products: readonly AttachmentProduct[];
   isAdmin: boolean;
+  /** Whether the firm role writes the library (editors, administrators): uploading data sheets. */
+  mayWrite: boolean;
 }) {
   const system = useUnitSystem();
   const del = useDeleteAttachmentProduct();
@@ -93,7 +115,11 @@ export function AttachmentProductsTable({
     { header: 'Kind', cell: (p) => (p.kind === 'panel' ? 'load–span table' : 'clip') },
     { header: 'Values', className: 'text-xs', cell: (p) => productSummary(p, system) },
     { header: 'Source', className: 'text-xs', cell: (p) => p.source },
-    { header: 'Data sheet', className: 'text-sm', cell: (p) => <DataSheetCell orgId={orgId} product={p} /> },
+    {
+      header: 'Data sheet',
+      className: 'text-sm',
+      cell: (p) => <DataSheetCell orgId={orgId} product={p} mayWrite={mayWrite} />,
+    },
     addedColumn(),
   ];
   return (

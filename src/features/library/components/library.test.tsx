@@ -121,8 +121,9 @@ describe('the firm tables', () => {
       dataSheet: null,
     };
     const fetch = stubFetch(() => new Response(null, { status: 204 }));
-    const view = renderIn('SI', <AttachmentProductsTable orgId="o1" products={[clip]} isAdmin />);
+    const view = renderIn('SI', <AttachmentProductsTable orgId="o1" products={[clip]} isAdmin mayWrite />);
     expect(screen.getByRole('row', { name: /Screw-fixed clip/ }).className).toBe('align-top');
+    expect(screen.getByRole('button', { name: 'Upload…' })).toBeTruthy();
     fireEvent.click(screen.getByRole('button', { name: 'Remove Screw-fixed clip…' }));
     fireEvent.click(screen.getByRole('button', { name: 'Remove Screw-fixed clip for the whole firm' }));
     await waitFor(() => expect(fetch).toHaveBeenCalledOnce());
@@ -130,12 +131,34 @@ describe('the firm tables', () => {
       '/api/organisations/o1/attachment-products/00000000-0000-4000-8000-0000000000c1',
     );
     view.unmount();
-    renderIn('SI', <AttachmentProductsTable orgId="o1" products={[]} isAdmin />);
+    renderIn('SI', <AttachmentProductsTable orgId="o1" products={[]} isAdmin mayWrite />);
     expect(
       screen.getByText(
         'No panel tables or clips yet. Enter them on an assembly’s Attachment & wind sheet and save them to the library from there.',
       ),
     ).toBeTruthy();
+  });
+
+  it('offer a reader the data sheet to read but no upload and no removal', () => {
+    const clip: AttachmentProduct = {
+      id: '00000000-0000-4000-8000-0000000000c2',
+      kind: 'clip',
+      name: 'Read-only clip',
+      source: 'Maker’s table 4',
+      notes: '',
+      createdAt: '2026-02-01T00:00:00.000Z',
+      clip: { fastenerCapacity: 900, fastenersPerClip: 2 },
+      dataSheet: {
+        name: 'clip.pdf',
+        contentType: 'application/pdf',
+        size: 10,
+        sha256: 'a'.repeat(64),
+        uploadedAt: '2026-02-01T00:00:00.000Z',
+      },
+    };
+    renderIn('SI', <AttachmentProductsTable orgId="o1" products={[clip]} isAdmin={false} mayWrite={false} />);
+    expect(screen.getByRole('link', { name: 'clip.pdf' })).toBeTruthy();
+    expect(screen.queryByRole('button')).toBeNull();
   });
 });
 

@@ -6,6 +6,7 @@ import { createMemoryRouter, MemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { demoAssembly, demoProject } from '../test-fixtures';
 import { AttachmentSheet } from './AttachmentSheet';
+import type { AttachmentLibrary } from './LibraryPick';
 
 afterEach(cleanup);
 
@@ -117,7 +118,8 @@ describe('the firm library on the sheet', () => {
     },
   ];
 
-  function renderEditor(save = vi.fn()) {
+  /** `save` null: the person's firm role only reads the library. */
+  function renderEditor(save: AttachmentLibrary['save'] | null = vi.fn()) {
     const saveAssembly = vi.fn(async (args: { input: unknown }) => ({
       ...assembly(),
       version: 2,
@@ -137,7 +139,7 @@ describe('the firm library on the sheet', () => {
           firmName: 'Test firm',
           products,
           dataSheetHref: (id) => `/sheet/${id}`,
-          save,
+          save: save ?? undefined,
           errorText: String,
         }}
       />
@@ -199,5 +201,11 @@ describe('the firm library on the sheet', () => {
     expect(input.name).toBe('Our panel');
     expect(input.source).toBe('Maker data sheet, 2026 edition');
     expect(await screen.findByText(/Saved to Test firm’s library as “Our panel”/)).toBeTruthy();
+  });
+
+  it('offers a reader of the firm library its entries but no saving to it', () => {
+    renderEditor(null);
+    expect(screen.getAllByLabelText(/Take from Test firm’s library/)).toHaveLength(2);
+    expect(screen.queryByRole('button', { name: /to Test firm’s library/ })).toBeNull();
   });
 });

@@ -28,7 +28,8 @@ export interface AttachmentLibrary {
   products: readonly AttachmentProduct[];
   /** Where an entry's data sheet downloads from. */
   dataSheetHref: (productId: string) => string;
-  save: (input: AttachmentProductInput) => Promise<AttachmentProduct>;
+  /** Saves an entry to the library; absent when the person's firm role only reads it. */
+  save?: (input: AttachmentProductInput) => Promise<AttachmentProduct>;
   errorText: (error: unknown) => string;
 }
 
@@ -72,7 +73,7 @@ export function LibraryPick({ kind, form, values, errors, disabled, library }: P
   }
 
   async function save() {
-    if (!library) return;
+    if (!library?.save) return;
     const parsed = attachmentProductInputSchema.safeParse(libraryEntryFrom(values, kind, name.trim()));
     if (!parsed.success) {
       setMessage({
@@ -107,7 +108,7 @@ export function LibraryPick({ kind, form, values, errors, disabled, library }: P
             label={`Take from ${library.firmName}’s library`}
             hint={
               offered.length === 0
-                ? `No ${w.what}s in the library yet — enter one below and save it there.`
+                ? `No ${w.what}s in the library yet${library.save ? ' — enter one below and save it there' : ''}.`
                 : 'Copies the values and their source into this sheet; the library entry may change later, this revision will not.'
             }
           >
@@ -163,7 +164,7 @@ export function LibraryPick({ kind, form, values, errors, disabled, library }: P
       ) : takenId ? (
         <p className="text-sm text-ink-muted">Taken from a library entry that has since been removed.</p>
       ) : null}
-      {library && !disabled ? (
+      {library?.save && !disabled ? (
         naming ? (
           <div className="flex flex-wrap items-end gap-3">
             <Field label="Product name for the library" className="min-w-64 flex-1">

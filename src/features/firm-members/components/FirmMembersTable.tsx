@@ -1,0 +1,143 @@
+import { FIRM_ROLE_LABELS, FIRM_ROLES, type FirmRole } from '@shared/auth/permissions';
+import type { FirmMember } from '@shared/schemas/firm-members';
+import { useId, useState } from 'react';
+import { Button } from '../../../components/ui/Button';
+import { Select } from '../../../components/ui/Select';
+import { Table, Td, Th } from '../../../components/ui/Table';
+import { errorMessage } from '../../../lib/api';
+import { useRemoveFirmMember } from '../api/remove-firm-member';
+import { useUpdateFirmMemberRole } from '../api/update-firm-member-role';
+
+interface Props {
+  orgId: string;
+  firmName: string;
+  members: FirmMember[];
+  /** Whether the signed-in person administers the firm: they change roles and remove people. */
+  isAdmin: boolean;
+  myUserId: string | undefined;
+}
+
+/**
+ * The people of a firm with their firm role. An administrator changes another person's role or takes them out
+ * of the firm (never on their own row: another administrator does that, so the firm keeps one).
+ */
+export function FirmMembersTable({ orgId, firmName, members, isAdmin, myUserId }: Props) {
+  return (
+    <Table caption={`People of ${firmName}`}>
+      <thead>
+        <tr>
+          <Th>Person</Th>
+          <Th>Firm role</Th>
+        </tr>
+      </thead>
+      <tbody>
+        {members.map((m) => {
+          const isMe = m.userId === myUserId;
+          return isAdmin && !isMe ? (
+            <ManagedRow key={m.userId} orgId={orgId} firmName={firmName} member={m} />
+          ) : (
+            <tr key={m.userId}>
+              <PersonCell member={m} isMe={isMe} />
+              <Td>{FIRM_ROLE_LABELS[m.role]}</Td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </Table>
+  );
+}
+
+/** Name above e-mail: two columns fit a phone's width. */
+function PersonCell({ member, isMe = false }: { member: FirmMember; isMe?: boolean }) {
+  return (
+    <Td>
+      <span className="font-semibold">{member.name}</span>
+      {isMe ? <span className="ml-2 text-ink-muted">(you)</span> : null}
+      <span className="block text-sm text-ink-muted [overflow-wrap:anywhere]">{member.email}</span>
+    </Td>
+  );
+}
+
+function ManagedRow({ orgId, firmName, member }: { orgId: string; firmName: string; member: FirmMember }) {
+  const selectId = useId();
+  const [role, setRole] = useState<FirmRole>(member.role);
+  const [confirmRemove, setConfirmRemove] = useState(false);
+  const updateRole = useUpdateFirmMemberRole(orgId);
+  const remove = useRemoveFirmMember(orgId);
+  const error = updateRole.error ?? remove.error;
+
+  return (
+    <tr className="align-top">
+      <PersonCell member={member} />
+      <Td>
+        <div className="flex flex-wrap items-center gap-2">
+          <label htmlFor={selectId} className="sr-only">
+            Firm role for {member.name}
+          </label>
+          <Select
+            id={selectId}
+            value={role}
+            onChange={(e) => setRole(e.target.value as FirmRole)}
+            className="w-auto py-1 text-sm"
+          >
+            {FIRM_ROLES.map((r) => (
+              <option key={r} value={r}>
+                {FIRM_ROLE_LABELS[r]}
+              </option>
+            ))}
+          </Select>
+          {role !== member.role ? (
+            <>
+              <Button
+                variant="secondary"
+                className="px-3 py-1"
+                busy={updateRole.isPending}
+                busyLabel="Saving…"
+                onClick={() => updateRole.mutate({ userId: member.userId, role })}
+              >
+                Save role
+              </Button>
+              <Button variant="quiet" className="px-2 py-1" onClick={() => setRole(member.role)}>
+                Undo
+              </Button>
+            </>
+          ) : null}
+        </div>
+        {error ? (
+          <p role="alert" className="mt-1 text-sm text-caution">
+            {errorMessage(error)}
+          </p>
+        ) : null}
+        {confirmRemove ? (
+          <fieldset className="mt-2 flex flex-wrap items-center gap-2">
+            <legend className="mb-1 text-sm">
+              Take {member.name} out of {firmName}? What they entered stays.
+            </legend>
+            <Button
+              variant="danger"
+              className="px-3 py-1"
+              busy={remove.isPending}
+              busyLabel="Removing…"
+              onClick={() => remove.mutate(member.userId)}
+            >
+              Remove
+            </Button>
+            <Button
+              variant="quiet"
+              className="px-2 py-1"
+              onClick={() => setConfirmRemove(false)}
+              disabled={remove.isPending}
+            >
+              Keep
+            </Button>
+          </fieldset>
+        ) : (
+          <Button variant="quiet" className="mt-1 px-0 py-1" onClick={() => setConfirmRemove(true)}>
+            Remove from the firm…
+            <span className="sr-only"> {member.name}</span>
+          </Button>
+        )}
+      </Td>
+    </tr>
+  );
+}

@@ -1,10 +1,16 @@
 import type { ThermalResult } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
 import { ENGINE_VERSION } from '@shared/calc/trace';
-import type { Assembly, AssemblyInput, AssemblyRevision, AssemblySummary } from '@shared/schemas/assembly';
+import type {
+  Assembly,
+  AssemblyHead,
+  AssemblyInput,
+  AssemblyRevision,
+  AssemblySummary,
+} from '@shared/schemas/assembly';
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { assemblies, assemblyRevisions, user } from '../db/schema';
+import { assemblies, assemblyRevisions, checkRuns, user } from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
 import { recordAudit } from './audit';
 
@@ -23,10 +29,7 @@ function toRevision(r: RevisionRow, createdBy: string | null): AssemblyRevision 
   };
 }
 
-function toSummary(
-  a: AssemblyRow,
-  result: { Ueff: number | null; Reff: number | null } | null,
-): AssemblySummary {
+function toHead(a: AssemblyRow, result: { Ueff: number | null; Reff: number | null } | null): AssemblyHead {
   return {
     id: a.id,
     projectId: a.projectId,
@@ -52,7 +55,7 @@ export function createAssemblyService(db: Db) {
         and(eq(assemblyRevisions.assemblyId, assemblyId), eq(assemblyRevisions.revision, a.currentRevision)),
       );
     const current = toRevision(r!.rev, r!.by);
-    return { ...toSummary(a, current.thermalResult), current };
+    return { ...toHead(a, current.thermalResult), current };
   }
 
   return {
@@ -69,12 +72,22 @@ export function createAssemblyService(db: Db) {
 
     async list(projectId: string): Promise<AssemblySummary[]> {
       // Only the two headline figures of each current result: the stored result carries its whole trace
-      // (kilobytes per assembly), which the list would otherwise read, parse and drop.
+      // (kilobytes per assembly), which the list would otherwise read, parse and drop. The last check run's
+      // verdict and time come from a lateral join (one index probe per assembly; never the run's JSON).
+      const lastRun = db
+        .select({ verdict: checkRuns.verdict, at: checkRuns.createdAt })
+        .from(checkRuns)
+        .where(eq(checkRuns.assemblyId, assemblies.id))
+        .orderBy(desc(checkRuns.createdAt))
+        .limit(1)
+        .as('last_run');
       const rows = await db
         .select({
           a: assemblies,
           Ueff: sql<number | null>`(${assemblyRevisions.thermalResult} ->> 'Ueff')::float8`,
           Reff: sql<number | null>`(${assemblyRevisions.thermalResult} ->> 'Reff')::float8`,
+          runVerdict: lastRun.verdict,
+          runAt: lastRun.at,
         })
         .from(assemblies)
         .innerJoin(
@@ -84,9 +97,21 @@ export function createAssemblyService(db: Db) {
             eq(assemblyRevisions.revision, assemblies.currentRevision),
           ),
         )
+        .leftJoinLateral(lastRun, sql`true`)
         .where(eq(assemblies.projectId, projectId))
         .orderBy(asc(assemblies.name));
-      return rows.map((r) => toSummary(r.a, r));
+      return rows.map(
+        (r): AssemblySummary => ({
+          ...toHead(r.a, r),
+          lastRun:
+            r.runVerdict && r.runAt
+              ? {
+                  verdict: r.runVerdict as NonNullable<AssemblySummary['lastRun']>['verdict'],
+                  at: r.runAt.toISOString(),
+                }
+              : null,
+        }),
+      );
     },
 
     async create(projectId: string, userId: string, input: AssemblyInput): Promise<Assembly> {

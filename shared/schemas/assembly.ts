@@ -82,7 +82,8 @@ export const assemblyUpdateSchema = z.object({
   input: assemblyInputSchema,
 });
 
-export const assemblySummarySchema = z.object({
+/** What an assembly and its list entry share. */
+const assemblyHeadSchema = z.object({
   id: z.uuid(),
   projectId: z.uuid(),
   name: z.string(),
@@ -92,6 +93,18 @@ export const assemblySummarySchema = z.object({
   updatedAt: z.string(),
   Ueff: z.number().nullable(),
   Reff: z.number().nullable(),
+});
+export type AssemblyHead = z.infer<typeof assemblyHeadSchema>;
+
+/** An assembly in its project's list, with the verdict of its last check run (null: never checked). */
+export const assemblySummarySchema = assemblyHeadSchema.extend({
+  lastRun: z
+    .object({
+      // The values of verdictSchema (shared/checks/report.ts, which imports this file).
+      verdict: z.enum(['pass', 'fail', 'incomplete']),
+      at: z.string(),
+    })
+    .nullable(),
 });
 export type AssemblySummary = z.infer<typeof assemblySummarySchema>;
 
@@ -106,7 +119,7 @@ export const assemblyRevisionSchema = z.object({
 });
 export type AssemblyRevision = z.infer<typeof assemblyRevisionSchema>;
 
-export const assemblySchema = assemblySummarySchema.extend({ current: assemblyRevisionSchema });
+export const assemblySchema = assemblyHeadSchema.extend({ current: assemblyRevisionSchema });
 export type Assembly = z.infer<typeof assemblySchema>;
 
 export const revisionListSchema = z.object({

@@ -220,6 +220,15 @@ describe.each(testDatabases())('code tables and check runs on %s', (kind) => {
       second.body.id,
       first.body.id,
     ]);
+    // The project's assembly list names each assembly's last run: its verdict and when (null: never checked).
+    const assembliesList = await architect.get(`/api/projects/${projectId}/assemblies`);
+    const listed = assembliesList.body.assemblies.find((x: { id: string }) => x.id === assemblyId);
+    expect(listed.lastRun).toEqual({ verdict: 'fail', at: second.body.createdAt });
+    const other = await architect
+      .post(`/api/projects/${projectId}/assemblies`)
+      .send({ ...demoAssembly.assembly, name: 'Never checked' });
+    const relisted = await architect.get(`/api/projects/${projectId}/assemblies`);
+    expect(relisted.body.assemblies.find((x: { id: string }) => x.id === other.body.id).lastRun).toBeNull();
 
     // Frozen: an edit creates version 2 and leaves version 1 as it was.
     const frozen = await architect.get(`/api/criteria-sets/${set.id}`);

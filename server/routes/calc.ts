@@ -21,7 +21,7 @@ import {
   windScheduleInputSchema,
   windScheduleResultSchema,
 } from '@shared/calc/wind/schema';
-import { apiErrorSchema } from '@shared/schemas/common';
+import { apiErrorSchema, unitSystemSchema } from '@shared/schemas/common';
 import { z } from 'zod';
 import { defineRoute, FileAnswer, type WorkLimit } from '../http/route';
 
@@ -162,11 +162,14 @@ export const calcRoutes = [
     method: 'post',
     path: '/v1/calc/takeoff',
     summary:
-      'Material takeoff from a simple elevation (joints, sealant packages, tape, trim, fasteners); `?format=csv` for CSV',
+      'Material takeoff from a simple elevation (joints, sealant packages, tape, trim, fasteners); `?format=csv` for CSV (`&units=IP`: ft, ft², US gal)',
     tag: 'Calculations',
     access: { kind: 'public' },
     stateless: true,
-    query: z.object({ format: z.enum(['json', 'csv']).default('json') }),
+    query: z.object({
+      format: z.enum(['json', 'csv']).default('json'),
+      units: unitSystemSchema.default('SI'),
+    }),
     body: takeoffInputSchema,
     workLimits: [CALC_WORK_LIMITS.openings],
     example: demoElevation(),
@@ -182,7 +185,7 @@ export const calcRoutes = [
       const result = calculateTakeoff(body);
       return query.format === 'json'
         ? result
-        : new FileAnswer('text/csv; charset=utf-8', takeoffToCsv(result), 'takeoff.csv');
+        : new FileAnswer('text/csv; charset=utf-8', takeoffToCsv(result, query.units), 'takeoff.csv');
     },
   }),
   defineRoute({

@@ -16,6 +16,19 @@ export const meRoutes = [
     handler: ({ user, services }) => services.me.me(user!.id),
   }),
   defineRoute({
+    method: 'get',
+    path: '/session',
+    summary:
+      'The signed-in user as `GET /me` gives it, or `null` when signed out (200 either way: for pages that may be seen signed out)',
+    tag: 'Account',
+    access: { kind: 'public' },
+    responses: { 200: { description: 'The signed-in user, or null', schema: meSchema.nullable() } },
+    handler: async ({ req, res, services }) => {
+      const user = await services.auth.currentUser(req, res);
+      return user ? services.me.me(user.id) : null;
+    },
+  }),
+  defineRoute({
     method: 'put',
     path: '/me/preferences',
     summary: 'Set the display unit system (SI or IP)',

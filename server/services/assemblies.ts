@@ -1,6 +1,7 @@
 import type { ThermalResult } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
 import { ENGINE_VERSION } from '@shared/calc/trace';
+import { canonicalJson } from '@shared/checks/canonical';
 import type {
   Assembly,
   AssemblyHead,
@@ -143,7 +144,11 @@ export function createAssemblyService(db: Db) {
       return get(id);
     },
 
-    /** Each save is a new revision; the save applies only to the version the caller read (409 otherwise). */
+    /**
+     * Each save with other values is a new revision; a save whose input is canonically the same as the
+     * current revision's (only the note differs) puts the note on that revision instead — no revision with
+     * identical values. Either applies only to the version the caller read (409 otherwise).
+     */
     async update(
       assemblyId: string,
       userId: string,
@@ -151,9 +156,36 @@ export function createAssemblyService(db: Db) {
       input: AssemblyInput,
       note: string,
     ): Promise<Assembly> {
-      const thermalResult = calculateThermal(input.thermal);
       const saved = await db.transaction(async (tx) => {
-        const rows = await tx
+        const [current] = await tx
+          .select({ projectId: assemblies.projectId, rev: assemblyRevisions })
+          .from(assemblies)
+          .innerJoin(
+            assemblyRevisions,
+            and(
+              eq(assemblyRevisions.assemblyId, assemblies.id),
+              eq(assemblyRevisions.revision, assemblies.currentRevision),
+            ),
+          )
+          .where(and(eq(assemblies.id, assemblyId), eq(assemblies.version, version)))
+          .for('update', { of: assemblies });
+        if (!current) return false;
+        if (canonicalJson(current.rev.input) === canonicalJson(input)) {
+          if (note === current.rev.note) return true;
+          await tx.update(assemblyRevisions).set({ note }).where(eq(assemblyRevisions.id, current.rev.id));
+          await recordAudit(tx, {
+            actorId: userId,
+            projectId: current.projectId,
+            entity: 'assembly',
+            entityId: assemblyId,
+            action: 'note',
+            before: { revision: current.rev.revision, note: current.rev.note },
+            after: { revision: current.rev.revision, note },
+          });
+          return true;
+        }
+        const thermalResult = calculateThermal(input.thermal);
+        const [a] = await tx
           .update(assemblies)
           .set({
             name: input.name,
@@ -162,13 +194,11 @@ export function createAssemblyService(db: Db) {
             currentRevision: version + 1,
             updatedAt: new Date(),
           })
-          .where(and(eq(assemblies.id, assemblyId), eq(assemblies.version, version)))
+          .where(eq(assemblies.id, assemblyId))
           .returning();
-        const a = rows[0];
-        if (!a) return false;
         await tx.insert(assemblyRevisions).values({
           assemblyId,
-          revision: a.currentRevision,
+          revision: a!.currentRevision,
           note,
           input,
           thermalResult,
@@ -177,11 +207,11 @@ export function createAssemblyService(db: Db) {
         });
         await recordAudit(tx, {
           actorId: userId,
-          projectId: a.projectId,
+          projectId: a!.projectId,
           entity: 'assembly',
           entityId: assemblyId,
           action: 'revise',
-          after: { revision: a.currentRevision, note },
+          after: { revision: a!.currentRevision, note },
         });
         return true;
       });

@@ -37,6 +37,8 @@ export const CHI_IP_TO_SI = 0.5275279;
 export const INCH = 0.0254;
 /** 1 ft = 0.3048 m exactly. */
 export const FOOT = 0.3048;
+/** 1 US gallon = 231 in³ exactly (NIST Handbook 44, Appendix C). */
+export const US_GALLON = 231 * INCH ** 3;
 /**
  * 1 lbf = 4.448 221 615 260 5 N exactly: 0.453 592 37 kg × 9.806 65 m/s², the avoirdupois pound times standard
  * gravity, both exact by definition (NIST SP 811 (2008) Appendix B.8/B.9, pound-force; tabulated 4.448 222 E+00).

@@ -1,4 +1,11 @@
-import { celsiusToFahrenheit, FOOT, fahrenheitToCelsius, INCH, type UnitSystem } from '@shared/units';
+import {
+  celsiusToFahrenheit,
+  FOOT,
+  fahrenheitToCelsius,
+  INCH,
+  type UnitSystem,
+  US_GALLON,
+} from '@shared/units';
 import type { InputMeasure, ParsedEntry } from './input-measure';
 
 /*
@@ -32,9 +39,6 @@ const scaled = (si: number, ip: number) => ({
   toShown: (v: number, s: UnitSystem) => v / (s === 'IP' ? ip : si),
   fromShown: (v: number, s: UnitSystem) => v * (s === 'IP' ? ip : si),
 });
-
-/** 1 US gallon = 231 in³ exactly (NIST Handbook 44, Appendix C). */
-export const US_GALLON = 231 * INCH ** 3;
 
 export const SHEET_MEASURES: Record<SheetMeasure, SheetMeasureSpec> = {
   joint: {

@@ -42,6 +42,7 @@ type Expectation =
 const EXPECTED: Record<string, Expectation> = {
   'GET /health': 'public',
   'GET /me': 'user',
+  'GET /session': 'public',
   'PUT /me/preferences': 'user',
   'POST /organisations': 'user',
   'GET /admin/mail': 'siteAdmin',

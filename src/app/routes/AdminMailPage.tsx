@@ -14,7 +14,7 @@ export function AdminMailPage() {
       <PageHeader
         eyebrow="Site administration"
         title="Outbox"
-        description="Every e-mail this installation has sent: invitations, password resets."
+        description="Every e-mail this installation has sent while no SMTP server is set (the newest 200): project and firm invitations, address confirmations, sign-up attempts on a registered address, password resets, and submittals sent for review and decided."
         actions={
           <Button
             variant="secondary"

@@ -83,6 +83,26 @@ describe('takeoff CSV export', () => {
     expect(fasteners?.[1]).toBe(String(result.fasteners));
   });
 
+  it('in IP the quantities are in ft, ft² and US gallons (exact factors), counts unchanged', () => {
+    const result = calculateTakeoff(demoElevation());
+    const si = parseCsv(takeoffToCsv(result));
+    const ip = parseCsv(takeoffToCsv(result, 'IP'));
+    expect(ip[0]).toEqual(si[0]);
+    // 1 ft = 0.3048 m exactly, 1 US gal = 231 in³ = 3.785411784 L exactly (NIST SP 811 and Handbook 44).
+    const factor: Record<string, [string, number]> = {
+      m: ['ft', 0.3048],
+      'm²': ['ft²', 0.3048 ** 2],
+      'm³': ['US gal', 0.003785411784],
+      pcs: ['pcs', 1],
+    };
+    for (const [i, row] of si.slice(1).entries()) {
+      const [unit, perUnit] = factor[row[2]!]!;
+      expect(ip[i + 1]![2]).toBe(unit);
+      expect(Number(ip[i + 1]![1])).toBeCloseTo(Number(row[1]) / perUnit, 6);
+    }
+    expect(si.find((r) => r[2] === 'm³')).toBeDefined();
+  });
+
   it('the download button hands that file to the browser, made in the page', async () => {
     const input = demoElevation();
     const { result } = evaluateTakeoff(input);
@@ -109,6 +129,29 @@ describe('takeoff CSV export', () => {
     expect(await readBlob(handed!)).toBe(takeoffToCsv(result));
     expect(fetchSpy).not.toHaveBeenCalled();
     expect(screen.getByText(/Saved as/).textContent).toContain('corvid-lane-wall-a-takeoff.csv');
+  });
+
+  it('the download follows the person’s unit choice', async () => {
+    const input = demoElevation();
+    const { result } = evaluateTakeoff(input);
+    if (!result) throw new Error('demo elevation did not compute');
+    let handed: Blob | null = null;
+    Object.assign(URL, {
+      createObjectURL: vi.fn((b: Blob) => {
+        handed = b;
+        return 'blob:takeoff';
+      }),
+      revokeObjectURL: vi.fn(),
+    });
+    vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => {});
+    render(
+      <UnitSystemProvider value="IP">
+        <TakeoffTable input={input} result={result} assemblyName="Wall A" />
+      </UnitSystemProvider>,
+    );
+    expect(screen.getByText(/in ft, ft² and US gallons/)).toBeDefined();
+    fireEvent.click(screen.getByRole('button', { name: /download the takeoff \(csv\)/i }));
+    expect(await readBlob(handed!)).toBe(takeoffToCsv(result, 'IP'));
   });
 
   it('the table shows the packages in both unit families and never NaN', () => {

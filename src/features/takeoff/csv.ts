@@ -1,5 +1,6 @@
 import { takeoffToCsv } from '@shared/calc/takeoff/csv';
 import type { TakeoffResult } from '@shared/calc/takeoff/schema';
+import type { UnitSystem } from '@shared/units';
 
 /** "Metal rainscreen — north" → "metal-rainscreen-north-takeoff.csv" (ASCII letters, digits and hyphens). */
 export function takeoffFileName(assemblyName: string): string {
@@ -14,17 +15,24 @@ export function takeoffFileName(assemblyName: string): string {
   return `${slug || 'assembly'}-takeoff.csv`;
 }
 
-/** The takeoff as an RFC 4180 CSV file (the same text as `POST /api/v1/calc/takeoff?format=csv`). */
-export function takeoffCsvFile(result: TakeoffResult, assemblyName: string): { name: string; blob: Blob } {
+/**
+ * The takeoff as an RFC 4180 CSV file in the person's units (the same text as
+ * `POST /api/v1/calc/takeoff?format=csv&units=…`).
+ */
+export function takeoffCsvFile(
+  result: TakeoffResult,
+  assemblyName: string,
+  units: UnitSystem = 'SI',
+): { name: string; blob: Blob } {
   return {
     name: takeoffFileName(assemblyName),
-    blob: new Blob([takeoffToCsv(result)], { type: 'text/csv;charset=utf-8' }),
+    blob: new Blob([takeoffToCsv(result, units)], { type: 'text/csv;charset=utf-8' }),
   };
 }
 
 /** Hand the file to the browser as a download, generated here (no request to the server). */
-export function downloadTakeoffCsv(result: TakeoffResult, assemblyName: string): string {
-  const { name, blob } = takeoffCsvFile(result, assemblyName);
+export function downloadTakeoffCsv(result: TakeoffResult, assemblyName: string, units: UnitSystem): string {
+  const { name, blob } = takeoffCsvFile(result, assemblyName, units);
   const url = URL.createObjectURL(blob);
   const a = document.createElement('a');
   a.href = url;

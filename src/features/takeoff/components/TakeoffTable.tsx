@@ -44,7 +44,7 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
       <div className="flex flex-wrap items-center gap-3">
         <Button
           variant="secondary"
-          onClick={() => setDownloaded(downloadTakeoffCsv(result, assemblyName))}
+          onClick={() => setDownloaded(downloadTakeoffCsv(result, assemblyName, system))}
           aria-describedby="takeoff-csv-note"
         >
           Download the takeoff (CSV)
@@ -53,10 +53,10 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
           {downloaded ? (
             <>
               <span aria-hidden="true">✓ </span>Saved as <span className="num">{downloaded}</span> — every
-              line with its formula and source, SI.
+              line with its formula and source, {system === 'IP' ? 'in ft, ft² and US gallons' : 'in SI'}.
             </>
           ) : (
-            'Every line with its formula and source, in SI; made in your browser from the figures below.'
+            `Every line with its formula and source, ${system === 'IP' ? 'in ft, ft² and US gallons' : 'in SI'}; made in your browser from the figures below.`
           )}
         </p>
       </div>

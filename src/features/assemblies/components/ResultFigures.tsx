@@ -18,16 +18,22 @@ function Figure({
   testId: string;
   strong?: boolean;
 }) {
+  // The figure large, its unit (a long one in IP) smaller beside it, wrapping inside the card if need be.
+  const [figure, unit] = primary.split('\u202f');
   return (
-    <div className={`flex flex-col gap-0.5 px-4 py-3 ${strong ? 'bg-paper-raised' : 'bg-paper'}`}>
+    <div className={`flex min-w-0 flex-col gap-0.5 px-4 py-3 ${strong ? 'bg-paper-raised' : 'bg-paper'}`}>
       <dt className="label-caps">
         {label}{' '}
         <span className="font-serif text-sm normal-case italic tracking-normal text-ink">{symbol}</span>
       </dt>
-      <dd className={`num ${strong ? 'text-2xl font-medium' : 'text-xl'} text-ink`} data-testid={testId}>
-        {primary}
+      <dd
+        className={`num ${strong ? 'text-2xl font-medium' : 'text-xl'} text-ink [overflow-wrap:anywhere]`}
+        data-testid={testId}
+      >
+        {figure}
+        {unit ? <span className="text-sm font-normal">{`\u202f${unit}`}</span> : null}
       </dd>
-      <dd className="num text-sm text-ink-muted">{secondary}</dd>
+      <dd className="num text-sm text-ink-muted [overflow-wrap:anywhere]">{secondary}</dd>
     </div>
   );
 }

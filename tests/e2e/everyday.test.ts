@@ -76,4 +76,19 @@ describe('everyday use in the browser', () => {
     await page.getByRole('heading', { name: 'Compliance sheet' }).waitFor();
     expect(problems).toEqual([]);
   });
+
+  it('a signed-out page logs no failed request to the console', async () => {
+    const { page, problems } = await suite.openPage();
+    const logged: string[] = [];
+    page.on('console', (m) => {
+      if (m.type() === 'error') logged.push(m.text());
+    });
+    await page.goto(`${suite.baseUrl}/sign-in`);
+    await page.getByRole('button', { name: /sign in/i }).waitFor();
+    await page.goto(`${suite.baseUrl}/projects`);
+    await page.waitForURL(/\/sign-in/);
+    await page.getByRole('button', { name: /sign in/i }).waitFor();
+    expect(logged).toEqual([]);
+    expect(problems).toEqual([]);
+  });
 });

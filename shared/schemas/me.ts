@@ -30,6 +30,8 @@ export const auditEntrySchema = z.object({
   actorName: z.string().nullable(),
   entity: z.string(),
   entityId: z.string(),
+  /** What the object is called now (a submittal: "S-003 rev 1 — title"); null when it is gone. */
+  entityName: z.string().nullable(),
   action: z.string(),
   before: z.unknown(),
   after: z.unknown(),

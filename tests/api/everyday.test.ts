@@ -46,7 +46,11 @@ describe.each(testDatabases())('everyday use of the API on %s', (kind) => {
     const entry = log.body.entries.find(
       (e: { entityId: string; action: string }) => e.entityId === id && e.action === 'note',
     );
-    expect(entry).toMatchObject({ before: { note: 'first issue' }, after: { note: 'issued for tender' } });
+    expect(entry).toMatchObject({
+      entityName: 'Note-only wall',
+      before: { note: 'first issue' },
+      after: { note: 'issued for tender' },
+    });
 
     // A stale version is still refused; a real change still makes revision 2.
     const stale = await architect

@@ -34,7 +34,7 @@ function AuditSection({ projectId }: { projectId: string }) {
   return (
     <>
       <p className="text-ink-muted">Every saved change on this project, who made it and what it changed.</p>
-      <AuditLog entries={audit.data} />
+      <AuditLog projectId={projectId} entries={audit.data} />
     </>
   );
 }

@@ -1,6 +1,7 @@
 import { PROJECT_ROLE_LABELS } from '@shared/auth/permissions';
 import type { AuditEntry } from '@shared/schemas/me';
 import type { UnitSystem } from '@shared/units';
+import { Link } from 'react-router';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format';
 import { formatProjectFieldValue, projectFieldLabel } from '../../../lib/project-fields';
@@ -19,6 +20,11 @@ const SKIP = new Set([
   'organisationId',
   'organisationName',
   'myRole',
+  // Ids of what an entry touched (the entry's own object is named and linked in "What").
+  'item',
+  'checkRun',
+  'comment',
+  'previous',
 ]);
 const blankToNull = (v: unknown) => (v === undefined || v === '' ? null : v);
 
@@ -40,33 +46,100 @@ export function changedFields(before: unknown, after: unknown): Change[] {
     .map((field) => ({ field, before: b[field], after: a[field] }));
 }
 
-/** "project · update" → "Project updated"-style plain words, falling back to the raw action. */
-function describe(entry: AuditEntry): string {
-  const verbs: Record<string, string> = {
-    create: 'created',
-    created: 'created',
-    update: 'changed',
-    updated: 'changed',
-    update_wind: 'wind data changed',
-    update_climate: 'climate changed',
-    revise: 'revised',
-    join: 'joined',
-    change_role: 'role changed',
-    archive: 'archived',
-    archived: 'archived',
-    unarchive: 'restored',
-    unarchived: 'restored',
-    delete: 'removed',
-    deleted: 'removed',
-    remove: 'removed',
-    invite: 'invited',
-    accept: 'accepted',
-    accepted: 'accepted',
-  };
+/** Each action as a verb phrase put before the object ("Decided submittal …"). */
+const VERBS: Record<string, string> = {
+  create: 'Created',
+  created: 'Created',
+  update: 'Changed',
+  updated: 'Changed',
+  update_wind: 'Changed the wind data of',
+  update_climate: 'Changed the climate of',
+  revise: 'Saved a new revision of',
+  note: 'Changed the revision note of',
+  join: 'Added',
+  change_role: 'Changed the role of',
+  archive: 'Archived',
+  archived: 'Archived',
+  unarchive: 'Restored',
+  unarchived: 'Restored',
+  delete: 'Removed',
+  deleted: 'Removed',
+  remove: 'Removed',
+  invite: 'Invited',
+  accept: 'Accepted',
+  accepted: 'Accepted',
+  submit: 'Submitted',
+  start_review: 'Started the review of',
+  decide: 'Decided',
+  close_review: 'Closed the review of',
+  open_revision: 'Opened the next revision of',
+  add_sheet: 'Attached a compliance sheet to',
+  upload: 'Uploaded files to',
+  remove_item: 'Removed an item from',
+  comment: 'Commented on',
+  freeze: 'Froze',
+  new_version: 'Made a new version of',
+};
+
+/** The object's kind in words: "check_run" → "check run", a member → "member". */
+const KIND: Record<string, string> = {
+  check_run: 'the check run of',
+  member: 'member',
+  invitation: 'the invitation of',
+};
+
+/** Where an entry's object is shown, when it has a page of its own. */
+function hrefOf(projectId: string, entry: AuditEntry): string | null {
+  const p = `/projects/${encodeURIComponent(projectId)}`;
+  const id = encodeURIComponent(entry.entityId);
+  switch (entry.entity) {
+    case 'project':
+      return p;
+    case 'assembly':
+      return `${p}/assemblies/${id}`;
+    case 'submittal':
+      return `${p}/submittals/${id}`;
+    case 'check_run':
+      return `${p}/check-runs/${id}/sheet`;
+    case 'member':
+      return `${p}/members`;
+    default:
+      return null;
+  }
+}
+
+const words = (key: string) => key.replace(/_/g, ' ');
+
+/** What a decision's or a status's key says in words ("approved_as_noted" → "approved as noted"). */
+function outcome(entry: AuditEntry): string | null {
+  const after = isRecord(entry.after) ? entry.after : {};
+  if (entry.action === 'decide' && typeof after.decision === 'string') return words(after.decision);
+  if (entry.action === 'close_review' && typeof after.status === 'string') return words(after.status);
+  if (entry.action === 'revise' && typeof after.revision === 'number') return `revision ${after.revision}`;
+  return null;
+}
+
+/** "Decided submittal S-003 rev 1 — Façade panels: approved as noted", the object linked to its page. */
+export function What({ projectId, entry }: { projectId: string; entry: AuditEntry }) {
   const action = entry.action.split('.').pop() ?? entry.action;
-  const thing = entry.entity.replace(/_/g, ' ');
-  const verb = verbs[action];
-  return verb ? `${thing.charAt(0).toUpperCase()}${thing.slice(1)} ${verb}` : `${thing}: ${entry.action}`;
+  const verb = VERBS[action] ?? `${words(action).charAt(0).toUpperCase()}${words(action).slice(1)}`;
+  const kind = KIND[entry.entity] ?? words(entry.entity);
+  const name = entry.entityName;
+  const href = name === null ? null : hrefOf(projectId, entry);
+  const result = outcome(entry);
+  return (
+    <>
+      {verb} {kind}{' '}
+      {name === null ? (
+        <span className="text-ink-muted">(no longer there)</span>
+      ) : href ? (
+        <Link to={href}>{name}</Link>
+      ) : (
+        name
+      )}
+      {result ? `: ${result}` : ''}
+    </>
+  );
 }
 
 function formatValue(field: string, value: unknown, system: UnitSystem): string {
@@ -118,7 +191,7 @@ function Changes({ entry, system }: { entry: AuditEntry; system: UnitSystem }) {
   );
 }
 
-export function AuditLog({ entries }: { entries: AuditEntry[] }) {
+export function AuditLog({ projectId, entries }: { projectId: string; entries: AuditEntry[] }) {
   const system = useUnitSystem();
   if (entries.length === 0)
     return <p className="text-ink-muted">Nothing has been recorded on this project yet.</p>;
@@ -138,7 +211,9 @@ export function AuditLog({ entries }: { entries: AuditEntry[] }) {
           <tr key={e.id}>
             <Td className="num whitespace-nowrap">{formatDateTime(e.at)}</Td>
             <Td>{e.actorName ?? <span className="text-ink-muted">system</span>}</Td>
-            <Td>{describe(e)}</Td>
+            <Td>
+              <What projectId={projectId} entry={e} />
+            </Td>
             <Td>
               <Changes entry={e} system={system} />
             </Td>

@@ -36,6 +36,7 @@ export function demoSheetData(units: 'SI' | 'IP' = 'SI'): SheetData {
       id: ids.project,
       name: p.name,
       climateZone: p.climateZone as CheckRunInputs['project']['climateZone'],
+      elevationM: p.elevationM,
       buildingHeightM: p.buildingHeightM,
       planLengthM: p.planLengthM,
       planWidthM: p.planWidthM,
@@ -60,7 +61,11 @@ export function demoSheetData(units: 'SI' | 'IP' = 'SI'): SheetData {
       rows: set.rows.map((r, i) => ({ ...r, id: `00000000-0000-4000-8001-${String(i).padStart(12, '0')}` })),
     },
   };
-  const outputs = runChecks(inputs.assembly.input, inputs.project, inputs.criteriaSet.rows);
+  const outputs = runChecks(
+    inputs.assembly.input,
+    { ...inputs.project, elevationM: p.elevationM },
+    inputs.criteriaSet.rows,
+  );
   const hashes = checkRunHashes(ENGINE_VERSION, inputs, outputs);
   const count = (s: string) => outputs.checks.filter((c) => c.status === s).length;
   const run: CheckRun = {

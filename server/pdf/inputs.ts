@@ -173,13 +173,23 @@ function drawWindPanel(w: SheetWriter, data: SheetData, fmt: Formatter): void {
   );
 }
 
+/**
+ * The one site elevation of the run: the z_e its K_e step used (what the figures rest on), else the snapshot's
+ * site field; a run stored before the wind data stopped keeping a copy has only the former.
+ */
+function siteElevation(data: SheetData): number | undefined {
+  return stepOf(data.run, 'wind.Ke')?.inputs.z_e?.value ?? data.run.inputs.project.elevationM;
+}
+
 /** Site, indoor conditions, monthly climate and wind data from the run's snapshot of the project. */
 export function drawSite(w: SheetWriter, data: SheetData, fmt: Formatter): void {
   const p = data.run.inputs.project;
+  const elevation = siteElevation(data);
   w.caption('Site and indoor design conditions');
   w.fields(
     [
       ['Climate zone', p.climateZone],
+      ['Ground elevation', elevation === undefined ? 'not recorded' : fmt.dimension(elevation)],
       ['Mean roof height', fmt.dimension(p.buildingHeightM)],
       ['Plan', `${fmt.dimension(p.planLengthM)} × ${fmt.dimension(p.planWidthM)}`],
       ['Indoor', `${fmt.temperature(p.indoorTempC)}, ${fmt.rh(p.indoorRh)} RH`],
@@ -223,8 +233,8 @@ export function drawSite(w: SheetWriter, data: SheetData, fmt: Formatter): void 
       ['Basic wind speed V', fmt.speed(wind.basicWindSpeed)],
       ['Risk category · exposure', `${wind.riskCategory} · ${wind.exposure}`],
       [
-        'K_zt · ground elevation',
-        `${num(wind.Kzt, 2)} · ${fmt.dimension(wind.groundElevation)}${wind.keEqualsOne ? ' (K_e = 1)' : ''}`,
+        'K_zt · K_e',
+        `${num(wind.Kzt, 2)} · ${wind.keEqualsOne ? '1 (taken as 1.0)' : 'from the site elevation'}`,
       ],
       ['Enclosure', wind.enclosure.replace('_', ' ')],
       ['Roof slope', `${num(wind.roofSlopeDeg, 1)}°`],

@@ -115,7 +115,6 @@ export const projectRoutes = [
         riskCategory: 'II',
         exposure: 'C',
         Kzt: 1,
-        groundElevation: 185,
         enclosure: 'enclosed',
         roofSlopeDeg: 2,
       },

@@ -134,6 +134,7 @@ export function createCheckRunService(db: Db, criteria: ReturnType<typeof create
           id: a.p.id,
           name: a.p.name,
           climateZone: a.p.climateZone as ProjectForChecks['climateZone'],
+          elevationM: a.p.elevationM,
           buildingHeightM: a.p.buildingHeightM,
           planLengthM: a.p.planLengthM,
           planWidthM: a.p.planWidthM,

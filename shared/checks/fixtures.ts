@@ -8,6 +8,7 @@ import type { ProjectForChecks } from './inputs';
 export const demoAssembly = (): AssemblyInput => assemblyInputSchema.parse(demo.assembly);
 export const demoProject = (): ProjectForChecks => ({
   climateZone: '5A',
+  elevationM: 185,
   buildingHeightM: 11.5,
   planLengthM: 96,
   planWidthM: 54,

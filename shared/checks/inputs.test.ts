@@ -20,6 +20,7 @@ import {
 const assembly = assemblyInputSchema.parse(demo.assembly);
 const project: ProjectForChecks = {
   climateZone: '5A',
+  elevationM: 185,
   buildingHeightM: 11.5,
   planLengthM: 96,
   planWidthM: 54,

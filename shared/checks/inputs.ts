@@ -10,6 +10,7 @@ import type { Project } from '../schemas/project';
 export type ProjectForChecks = Pick<
   Project,
   | 'climateZone'
+  | 'elevationM'
   | 'buildingHeightM'
   | 'planLengthM'
   | 'planWidthM'
@@ -66,6 +67,7 @@ export function windInputFor(a: AssemblyInput, p: ProjectForChecks): CheckInput<
     input: {
       site: {
         ...p.wind,
+        groundElevation: p.elevationM,
         meanRoofHeight: p.buildingHeightM,
         planLength: p.planLengthM,
         planWidth: p.planWidthM,

@@ -30,6 +30,8 @@ export const checkRunInputsSchema = z.object({
     id: z.uuid(),
     name: z.string(),
     climateZone: climateZoneSchema,
+    /** The site's ground elevation, m (absent from runs stored before the wind data stopped keeping its own). */
+    elevationM: z.number().optional(),
     buildingHeightM: z.number(),
     planLengthM: z.number(),
     planWidthM: z.number(),

@@ -97,8 +97,8 @@ export const projectUpdateSchema = z.object({
 export type ProjectUpdate = z.infer<typeof projectUpdateSchema>;
 
 /**
- * The project's wind data (ASCE 7 site parameters). Height and plan dimensions come from the site fields,
- * so they are not repeated here.
+ * The project's wind data (ASCE 7 site parameters). Height, plan dimensions and the ground elevation come from
+ * the site fields, so they are not repeated here: one site elevation serves K_e, the sheet and every screen.
  */
 export const projectWindSchema = windSiteSchema.pick({
   edition: true,
@@ -106,7 +106,6 @@ export const projectWindSchema = windSiteSchema.pick({
   riskCategory: true,
   exposure: true,
   Kzt: true,
-  groundElevation: true,
   keEqualsOne: true,
   enclosure: true,
   roofSlopeDeg: true,

@@ -69,7 +69,7 @@ const SITE_FIELDS: Record<string, { label: string; measure?: WindMeasure; where:
   riskCategory: { label: 'Risk category', where: 'wind' },
   exposure: { label: 'Exposure category', where: 'wind' },
   Kzt: { label: 'Topographic factor K_zt', measure: 'ratio', where: 'wind' },
-  groundElevation: { label: 'Ground elevation', measure: 'length', where: 'wind' },
+  groundElevation: { label: 'Ground elevation (site data)', measure: 'length', where: 'site' },
   enclosure: { label: 'Enclosure', where: 'wind' },
   roofSlopeDeg: { label: 'Roof slope θ', measure: 'angle', where: 'wind' },
   meanRoofHeight: { label: 'Mean roof height h', measure: 'length', where: 'site' },

@@ -16,9 +16,17 @@ export function demoAssembly(design: { girtSpacing?: number; clipSpacing?: numbe
 }
 
 export function demoProject(withWind = true): ProjectForChecks {
-  const { meanRoofHeight, planLength, planWidth, heightOfComponent: _z, ...wind } = demoSite();
+  const {
+    meanRoofHeight,
+    planLength,
+    planWidth,
+    heightOfComponent: _z,
+    groundElevation,
+    ...wind
+  } = demoSite();
   return {
     climateZone: '5A',
+    elevationM: groundElevation,
     buildingHeightM: meanRoofHeight,
     planLengthM: planLength,
     planWidthM: planWidth,

@@ -29,7 +29,6 @@ type Key = keyof ProjectWind;
 const MEASURES: Partial<Record<Key, WindMeasure>> = {
   basicWindSpeed: 'speed',
   Kzt: 'ratio',
-  groundElevation: 'length',
   roofSlopeDeg: 'angle',
 };
 
@@ -39,7 +38,6 @@ const LABELS: Record<Key, string> = {
   riskCategory: 'Risk category',
   exposure: 'Exposure category',
   Kzt: 'Topographic factor K_zt',
-  groundElevation: 'Ground elevation above sea level z_e',
   keEqualsOne: 'Take K_e = 1.0',
   enclosure: 'Enclosure classification',
   roofSlopeDeg: 'Roof slope θ',
@@ -58,11 +56,6 @@ const LABEL_NODES: Partial<Record<Key, ReactNode>> = {
       Topographic factor <Sym s="K_zt" />
     </>
   ),
-  groundElevation: (
-    <>
-      Ground elevation above sea level <Sym s="z_e" />
-    </>
-  ),
   roofSlopeDeg: (
     <>
       Roof slope <Sym s="θ" />
@@ -71,7 +64,7 @@ const LABEL_NODES: Partial<Record<Key, ReactNode>> = {
 };
 const labelOf = (k: Key): ReactNode => LABEL_NODES[k] ?? LABELS[k];
 
-/** The form's starting values: the saved wind data, or blanks (the ground elevation from the site data). */
+/** The form's starting values: the saved wind data, or blanks. */
 function startValues(p: Project): WindFormValues {
   if (p.wind) return { ...p.wind, keEqualsOne: p.wind.keEqualsOne ?? false };
   return {
@@ -80,7 +73,6 @@ function startValues(p: Project): WindFormValues {
     riskCategory: '' as WindFormValues['riskCategory'],
     exposure: '' as WindFormValues['exposure'],
     Kzt: 1,
-    groundElevation: p.elevationM,
     keEqualsOne: false,
     enclosure: '' as WindFormValues['enclosure'],
     roofSlopeDeg: Number.NaN,
@@ -136,7 +128,7 @@ interface Conflict {
 }
 
 /**
- * The project's ASCE 7 wind data: edition, V, risk category, exposure, K_zt, ground elevation (or K_e = 1.0),
+ * The project's ASCE 7 wind data: edition, V, risk category, exposure, K_zt, K_e = 1.0 or the site elevation,
  * enclosure and roof slope. Height and plan come from the site data. A save names the project version it
  * started from; when someone saved the wind data in between, nothing is overwritten — the person chooses.
  */
@@ -166,6 +158,7 @@ export function ProjectWindForm({ project, onDone }: { project: Project; onDone:
     try {
       return analyseSite({
         ...parsed.data,
+        groundElevation: project.elevationM,
         meanRoofHeight: project.buildingHeightM,
         planLength: project.planLengthM,
         planWidth: project.planWidthM,
@@ -199,7 +192,7 @@ export function ProjectWindForm({ project, onDone }: { project: Project; onDone:
     }
   });
 
-  const numberField = (name: 'basicWindSpeed' | 'Kzt' | 'groundElevation' | 'roofSlopeDeg', hint: string) => (
+  const numberField = (name: 'basicWindSpeed' | 'Kzt' | 'roofSlopeDeg', hint: string) => (
     <Controller
       control={control}
       name={name}
@@ -281,7 +274,11 @@ export function ProjectWindForm({ project, onDone }: { project: Project; onDone:
           )}
           {numberField('Kzt', '1.0 on flat terrain; hills, ridges and escarpments raise it (§26.8).')}
           <div className="flex flex-col gap-2">
-            {numberField('groundElevation', 'Sets the ground elevation factor K_e (§26.9).')}
+            <p className="text-sm" data-testid="wind-site-elevation">
+              Ground elevation <Sym s="z_e" />:{' '}
+              <span className="num font-semibold">{formatWind(project.elevationM, 'length', system)}</span>{' '}
+              from the site data — it sets <Sym s="K_e" /> (§26.9); change it with the site data.
+            </p>
             <label className="flex items-start gap-2 text-sm">
               <input type="checkbox" {...register('keEqualsOne')} className="mt-1" />
               <span>

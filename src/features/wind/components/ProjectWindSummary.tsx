@@ -84,8 +84,8 @@ export function ProjectWindSummary({ project: p }: { project: Project }) {
       >
         {w.Kzt.toFixed(2)}
       </Cell>
-      <Cell label="Ground elevation">
-        {formatWind(w.groundElevation, 'length', system)}
+      <Cell label="Ground elevation (site data)">
+        {formatWind(p.elevationM, 'length', system)}
         {w.keEqualsOne ? (
           <span className="font-sans text-sm">
             {' '}

@@ -32,7 +32,7 @@ const ACCOUNT: Record<ProjectRole, string> = {
 describe.each(testDatabases())('writes to an archived project on %s', (kind) => {
   let t: TestApp;
   const params: Record<string, string> = {};
-  let assembly: { id: string; version: number; current: { input: object } };
+  let assembly: { id: string; version: number; current: { input: { name: string } } };
   let token: string;
   beforeAll(async () => {
     t = await createTestApp(kind);
@@ -128,10 +128,12 @@ describe.each(testDatabases())('writes to an archived project on %s', (kind) => 
     const viewer = members.find((m) => m.email === demoEmail('viewer'))!;
     expect((await owner.delete(`/api/projects/${params.id}/members/${viewer.id}`)).status).toBe(204);
     expect((await owner.post(`/api/projects/${params.id}/unarchive`)).status).toBe(200);
-    const saved = await (await t.as(demoEmail('engineer')))
-      .put(`/api/assemblies/${assembly.id}`)
-      .send({ version: assembly.version, note: 'after restoring', input: assembly.current.input });
+    const saved = await (await t.as(demoEmail('engineer'))).put(`/api/assemblies/${assembly.id}`).send({
+      version: assembly.version,
+      note: 'after restoring',
+      input: { ...assembly.current.input, name: 'Renamed after restoring' },
+    });
     expect(saved.status).toBe(200);
-    expect(saved.body.version).toBe(assembly.version + 1);
+    expect(saved.body).toMatchObject({ version: assembly.version + 1, name: 'Renamed after restoring' });
   });
 });

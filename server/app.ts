@@ -4,7 +4,7 @@ import path from 'node:path';
 import express, { type Request, type RequestHandler } from 'express';
 import { ipKeyGenerator, type RateLimitInfo, rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
-import { type Logger, pino } from 'pino';
+import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import swaggerUi from 'swagger-ui-express';
 import { authHandler, createAuth } from './auth/auth';
@@ -16,6 +16,7 @@ import { originCheck, refuseBadBody } from './http/guards';
 import { buildOpenApi } from './http/openapi';
 import { mountRoutes } from './http/route';
 import { statelessPath } from './http/stateless';
+import { createLogger } from './logger';
 import type { Mailer } from './mail/mailer';
 import { apiRoutes } from './routes';
 import { createServices } from './services';
@@ -53,7 +54,7 @@ export function createApp({
   storage,
   clientDir,
   clientMiddleware,
-  logger = pino({ level: config.env === 'test' ? 'silent' : config.logLevel }),
+  logger = createLogger(config),
 }: AppDeps) {
   const auth = createAuth(database, config, mailer);
   const services = createServices(database, config, mailer, auth, storage ?? unavailableStore());

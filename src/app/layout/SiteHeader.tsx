@@ -14,7 +14,7 @@ export function SiteHeader() {
   const user = me.data;
 
   return (
-    <header className="border-b border-ink bg-paper">
+    <header className="border-b border-ink bg-paper print:hidden">
       <div className="mx-auto flex w-full max-w-sheet flex-wrap items-center gap-x-8 gap-y-3 px-4 py-3 sm:px-6">
         <Link to={user ? '/projects' : '/sign-in'} className="flex items-baseline gap-2 no-underline">
           <span className="font-serif text-2xl font-semibold tracking-tight">Skinwright</span>

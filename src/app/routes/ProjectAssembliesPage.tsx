@@ -15,7 +15,7 @@ export function ProjectAssembliesPage() {
       <h2 id="assemblies-heading" className="text-2xl">
         Assemblies
       </h2>
-      <AssembliesOverview projectId={project.id} mayWrite={mayWrite} />
+      <AssembliesOverview projectId={project.id} mayWrite={mayWrite} searchable />
     </section>
   );
 }

@@ -5,7 +5,7 @@ export type ButtonVariant = 'primary' | 'secondary' | 'quiet' | 'danger';
 
 const base =
   'inline-flex items-center justify-center gap-2 rounded-sm px-4 py-2 text-sm font-semibold leading-5 ' +
-  'border motion-safe:transition-colors disabled:cursor-not-allowed disabled:opacity-55 no-underline';
+  'border motion-safe:transition-colors disabled:cursor-not-allowed disabled:opacity-55 no-underline print:hidden';
 
 /** The copper accent is for primary actions only; everything else is drawn in ink. */
 const variants: Record<ButtonVariant, string> = {

@@ -193,7 +193,7 @@ export function QuantityInput({
           {suffix ? (
             <span
               aria-hidden="true"
-              className={`num flex ${sized.unit} items-center justify-center rounded-r-sm border border-l-0 border-rule-strong bg-paper-sunk text-ink-muted`}
+              className={`num flex ${sized.unit} items-center justify-center rounded-r-sm border border-l-0 border-rule-strong bg-paper-sunk text-ink-muted print:border-0`}
             >
               {unit}
             </span>

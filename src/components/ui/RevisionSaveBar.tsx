@@ -278,7 +278,7 @@ export function RevisionSaveBar({
         </Notice>
       ) : null}
 
-      <div className="sticky bottom-0 z-10 -mx-4 border-t-2 border-ink bg-paper px-4 py-3 sm:-mx-6 sm:px-6">
+      <div className="sticky bottom-0 z-10 -mx-4 border-t-2 border-ink bg-paper px-4 py-3 sm:-mx-6 sm:px-6 print:hidden">
         {words.formLabel ? (
           <form
             className={row}

@@ -1,15 +1,34 @@
-import { ButtonLink } from '../../../components/ui/Button';
+import { type AssemblySummary, WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
+import { Button, ButtonLink } from '../../../components/ui/Button';
+import { Field } from '../../../components/ui/Field';
 import { Loading } from '../../../components/ui/Loading';
 import { Notice } from '../../../components/ui/Notice';
+import { Select } from '../../../components/ui/Select';
+import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage } from '../../../lib/api';
+import { VERDICT_TEXT } from '../../../lib/check-format';
+import { matchesQuery, useListFilters } from '../../../lib/list-filter';
 import { useAssemblies } from '../api/get-assemblies';
 import { AssemblyTable } from './AssemblyTable';
 
+const FILTERS = ['q', 'category', 'verdict'] as const;
+/** The `verdict` filter's “never checked”. */
+const UNCHECKED = 'none';
+
 /**
  * The project's assemblies: the table, and for those who may write, the ways to start a new one
- * (from the sample metal-panel wall, or blank). Used on the overview and on the Assemblies tab.
+ * (from the sample metal-panel wall, or blank). Used on the overview and, `searchable` (name, wall category,
+ * last check's verdict, kept in the address), on the Assemblies tab.
  */
-export function AssembliesOverview({ projectId, mayWrite }: { projectId: string; mayWrite: boolean }) {
+export function AssembliesOverview({
+  projectId,
+  mayWrite,
+  searchable = false,
+}: {
+  projectId: string;
+  mayWrite: boolean;
+  searchable?: boolean;
+}) {
   const list = useAssemblies(projectId);
   const base = `/projects/${projectId}/assemblies`;
   const count = list.data?.length ?? 0;
@@ -25,6 +44,8 @@ export function AssembliesOverview({ projectId, mayWrite }: { projectId: string;
           No assemblies yet. An assembly is one wall build-up — its layers, girts, clips and fasteners — with
           its effective R-value worked out.
         </p>
+      ) : searchable ? (
+        <SearchableTable projectId={projectId} assemblies={list.data} />
       ) : (
         <AssemblyTable projectId={projectId} assemblies={list.data} />
       )}
@@ -58,5 +79,88 @@ export function AssembliesOverview({ projectId, mayWrite }: { projectId: string;
         </p>
       ) : null}
     </div>
+  );
+}
+
+function SearchableTable({
+  projectId,
+  assemblies,
+}: {
+  projectId: string;
+  assemblies: readonly AssemblySummary[];
+}) {
+  const filters = useListFilters(FILTERS);
+  const { q, category, verdict } = filters.values;
+  const categories = [...new Set(assemblies.map((a) => a.wallCategory))];
+  const shown = assemblies.filter(
+    (a) =>
+      (category === '' || a.wallCategory === category) &&
+      (verdict === '' || (a.lastRun?.verdict ?? UNCHECKED) === verdict) &&
+      matchesQuery(q, [a.name, WALL_CATEGORY_LABELS[a.wallCategory]]),
+  );
+  return (
+    <>
+      <search aria-label="Find assemblies" className="flex flex-wrap items-start gap-x-4 gap-y-3">
+        <Field label="Search" hint="Name or wall category." className="min-w-56 flex-1 sm:max-w-sm">
+          {(c) => (
+            <TextInput
+              {...c}
+              type="search"
+              value={q}
+              onChange={(e) => filters.set('q', e.target.value, true)}
+              className="py-1.5"
+            />
+          )}
+        </Field>
+        <Field label="Wall category" className="w-56">
+          {(c) => (
+            <Select
+              {...c}
+              value={category}
+              onChange={(e) => filters.set('category', e.target.value)}
+              className="py-1.5"
+            >
+              <option value="">Any</option>
+              {categories.map((k) => (
+                <option key={k} value={k}>
+                  {WALL_CATEGORY_LABELS[k]}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <Field label="Last check" className="w-44">
+          {(c) => (
+            <Select
+              {...c}
+              value={verdict}
+              onChange={(e) => filters.set('verdict', e.target.value)}
+              className="py-1.5"
+            >
+              <option value="">Any</option>
+              {(['pass', 'fail', 'incomplete'] as const).map((v) => (
+                <option key={v} value={v}>
+                  {VERDICT_TEXT[v].word}
+                </option>
+              ))}
+              <option value={UNCHECKED}>Not checked</option>
+            </Select>
+          )}
+        </Field>
+        {filters.active ? (
+          <Button variant="quiet" onClick={filters.clear} className="sm:mt-6">
+            Show all
+          </Button>
+        ) : null}
+      </search>
+      <p role="status" className="text-sm text-ink-muted">
+        {filters.active ? `${shown.length} of ${assemblies.length} assemblies match.` : ''}
+      </p>
+      {shown.length > 0 ? (
+        <AssemblyTable projectId={projectId} assemblies={shown} />
+      ) : (
+        <p className="border-y border-rule py-8 text-center">No assembly matches the search.</p>
+      )}
+    </>
   );
 }

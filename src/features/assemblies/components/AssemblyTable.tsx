@@ -1,11 +1,12 @@
 import { type AssemblySummary, WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
 import { Link } from 'react-router';
 import { Table, Td, Th } from '../../../components/ui/Table';
+import { VERDICT_TEXT } from '../../../lib/check-format';
 import { formatDate } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { rNumber, rUnit, uNumber, uUnit } from '../units';
 
-/** The project's assemblies with their effective R and U in the person's units. */
+/** The project's assemblies with their effective R and U in the person's units, and their last check's verdict. */
 export function AssemblyTable({
   projectId,
   assemblies,
@@ -32,6 +33,7 @@ export function AssemblyTable({
           <Th numeric>
             Effective U<span className="block text-xs font-normal text-ink-muted">{uUnit(system)}</span>
           </Th>
+          <Th>Last check</Th>
           <Th numeric>Updated</Th>
         </tr>
       </thead>
@@ -53,6 +55,17 @@ export function AssemblyTable({
                   : rNumber(a.Reff, system)}
             </Td>
             <Td numeric>{uNumber(a.Ueff, system)}</Td>
+            <Td className="whitespace-nowrap">
+              {a.lastRun ? (
+                <span className={VERDICT_TEXT[a.lastRun.verdict].cls}>
+                  <span aria-hidden="true">{VERDICT_TEXT[a.lastRun.verdict].glyph} </span>
+                  {VERDICT_TEXT[a.lastRun.verdict].word}
+                  <span className="block text-xs text-ink-muted">{formatDate(a.lastRun.at)}</span>
+                </span>
+              ) : (
+                <span className="text-ink-muted">not checked</span>
+              )}
+            </Td>
             <Td numeric className="whitespace-nowrap">
               {formatDate(a.updatedAt)}
             </Td>

@@ -1,8 +1,8 @@
 import { FIRM_ROLE_LABELS, FIRM_ROLES, type FirmRole } from '@shared/auth/permissions';
 import type { FirmMember } from '@shared/schemas/firm-members';
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { Button } from '../../../components/ui/Button';
-import { Select } from '../../../components/ui/Select';
+import { RoleSelect } from '../../../components/ui/RoleSelect';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { errorMessage } from '../../../lib/api';
 import { useRemoveFirmMember } from '../api/remove-firm-member';
@@ -59,7 +59,6 @@ function PersonCell({ member, isMe = false }: { member: FirmMember; isMe?: boole
 }
 
 function ManagedRow({ orgId, firmName, member }: { orgId: string; firmName: string; member: FirmMember }) {
-  const selectId = useId();
   const [role, setRole] = useState<FirmRole>(member.role);
   const [confirmRemove, setConfirmRemove] = useState(false);
   const updateRole = useUpdateFirmMemberRole(orgId);
@@ -70,39 +69,16 @@ function ManagedRow({ orgId, firmName, member }: { orgId: string; firmName: stri
     <tr className="align-top">
       <PersonCell member={member} />
       <Td>
-        <div className="flex flex-wrap items-center gap-2">
-          <label htmlFor={selectId} className="sr-only">
-            Firm role for {member.name}
-          </label>
-          <Select
-            id={selectId}
-            value={role}
-            onChange={(e) => setRole(e.target.value as FirmRole)}
-            className="w-auto py-1 text-sm"
-          >
-            {FIRM_ROLES.map((r) => (
-              <option key={r} value={r}>
-                {FIRM_ROLE_LABELS[r]}
-              </option>
-            ))}
-          </Select>
-          {role !== member.role ? (
-            <>
-              <Button
-                variant="secondary"
-                className="px-3 py-1"
-                busy={updateRole.isPending}
-                busyLabel="Saving…"
-                onClick={() => updateRole.mutate({ userId: member.userId, role })}
-              >
-                Save role
-              </Button>
-              <Button variant="quiet" className="px-2 py-1" onClick={() => setRole(member.role)}>
-                Undo
-              </Button>
-            </>
-          ) : null}
-        </div>
+        <RoleSelect
+          label={`Firm role for ${member.name}`}
+          saved={member.role}
+          value={role}
+          onChange={setRole}
+          roles={FIRM_ROLES}
+          labels={FIRM_ROLE_LABELS}
+          saving={updateRole.isPending}
+          onSave={(r) => updateRole.mutate({ userId: member.userId, role: r })}
+        />
         {error ? (
           <p role="alert" className="mt-1 text-sm text-caution">
             {errorMessage(error)}

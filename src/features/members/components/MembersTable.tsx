@@ -6,9 +6,9 @@ import {
   type ProjectRole,
 } from '@shared/auth/permissions';
 import type { Member } from '@shared/schemas/members';
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { Button } from '../../../components/ui/Button';
-import { Select } from '../../../components/ui/Select';
+import { RoleSelect } from '../../../components/ui/RoleSelect';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { errorMessage } from '../../../lib/api';
 import { useRemoveMember } from '../api/remove-member';
@@ -76,7 +76,6 @@ function ManagedRow({
   member: Member;
   myRole: ProjectRole;
 }) {
-  const selectId = useId();
   const [role, setRole] = useState<ProjectRole>(member.role);
   // The roles this person may give the member; the member's own role stays shown even when it is not one.
   const grantable = grantableRoles(myRole, member.role);
@@ -94,39 +93,16 @@ function ManagedRow({
       <Td className="break-all">{member.email}</Td>
       <Td>{member.organisationName ?? '—'}</Td>
       <Td>
-        <div className="flex flex-wrap items-center gap-2">
-          <label htmlFor={selectId} className="sr-only">
-            Role for {member.name}
-          </label>
-          <Select
-            id={selectId}
-            value={role}
-            onChange={(e) => setRole(e.target.value as ProjectRole)}
-            className="w-auto py-1 text-sm"
-          >
-            {options.map((r) => (
-              <option key={r} value={r}>
-                {PROJECT_ROLE_LABELS[r]}
-              </option>
-            ))}
-          </Select>
-          {role !== member.role ? (
-            <>
-              <Button
-                variant="secondary"
-                className="px-3 py-1"
-                busy={updateRole.isPending}
-                busyLabel="Saving…"
-                onClick={() => updateRole.mutate({ memberId: member.id, role })}
-              >
-                Save role
-              </Button>
-              <Button variant="quiet" className="px-2 py-1" onClick={() => setRole(member.role)}>
-                Undo
-              </Button>
-            </>
-          ) : null}
-        </div>
+        <RoleSelect
+          label={`Role for ${member.name}`}
+          saved={member.role}
+          value={role}
+          onChange={setRole}
+          roles={options}
+          labels={PROJECT_ROLE_LABELS}
+          saving={updateRole.isPending}
+          onSave={(r) => updateRole.mutate({ memberId: member.id, role: r })}
+        />
         {error ? (
           <p role="alert" className="mt-1 text-sm text-caution">
             {errorMessage(error)}

@@ -15,6 +15,7 @@ import {
   U_IP_TO_SI,
   type UnitSystem,
 } from '@shared/units';
+import { trimmedFixed } from '@shared/units/rounding';
 
 /*
  * How the figures of a stored run read on the sheet: SI values in, the chosen unit system out (conversion
@@ -27,10 +28,7 @@ const NNBSP = '\u202f';
 /** Rounded, trailing zeros trimmed, a true minus sign. */
 export function num(value: number, decimals: number): string {
   if (!Number.isFinite(value)) return '—';
-  const fixed = value.toFixed(decimals);
-  const trimmed = fixed.includes('.') ? fixed.replace(/0+$/, '').replace(/\.$/, '') : fixed;
-  const out = trimmed === '-0' ? '0' : trimmed;
-  return out.replace(/^-/, MINUS);
+  return trimmedFixed(value, decimals).replace(/^-/, MINUS);
 }
 
 /** Decimals that keep three significant figures for small numbers. */
@@ -48,8 +46,8 @@ export function formatter(system: UnitSystem) {
     system,
     num,
     /** Layer thickness: mm or in. */
-    thickness: (m: number) =>
-      ip ? withUnit(num(m / INCH, m < 0.01 ? 3 : 2), 'in') : withUnit(num(m * 1000, 1), 'mm'),
+    /** Layer thickness as the screen shows it: mm to 0.01 (a 0.15 mm film reads 0.15), in to 0.001. */
+    thickness: (m: number) => (ip ? withUnit(num(m / INCH, 3), 'in') : withUnit(num(m * 1000, 2), 'mm')),
     /** Spacing or span: mm below 0.1 m, else m; in IP in below 0.3 m, else ft. */
     length: (m: number) =>
       ip

@@ -1,5 +1,6 @@
 import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
 import type { TraceStep } from '@shared/calc/trace';
+import { fixed } from '@shared/units/rounding';
 import { drawAccumulationChart, drawProfileChart, drawSpacingChart } from './charts';
 import { type Formatter, MONTHS, num } from './format';
 import { INK, type SheetWriter } from './layout';
@@ -46,6 +47,9 @@ function formulas(w: SheetWriter, steps: TraceStep[], fmt: Formatter): void {
 const stepsOf = (data: SheetData, prefix: string) =>
   data.run.outputs.steps.filter((s) => s.id.startsWith(prefix));
 
+/** A share of U_eff as the build-up page prints it (formatShare: one decimal, kept even when 0). */
+const share = (x: number) => `${fixed(x * 100, 1)} %`;
+
 function thermal(w: SheetWriter, data: SheetData, fmt: Formatter): void {
   w.heading('3.1', 'Thermal: effective R-value and U-factor', 40);
   const r = moduleResult(data.run, 'thermal');
@@ -74,8 +78,8 @@ function thermal(w: SheetWriter, data: SheetData, fmt: Formatter): void {
         { header: 'Share of U_eff', width: 26, align: 'right' },
       ],
       [
-        ['Clear field', '—', fmt.uValue(r.U0), `${num(r.clearFieldShare * 100, 1)} %`],
-        ...r.bridges.map((b) => [b.name, b.kind, fmt.uValue(b.deltaU), `${num(b.share * 100, 1)} %`]),
+        ['Clear field', '—', fmt.uValue(r.U0), share(r.clearFieldShare)],
+        ...r.bridges.map((b) => [b.name, b.kind, fmt.uValue(b.deltaU), share(b.share)]),
       ],
       { size: 7.2 },
     );

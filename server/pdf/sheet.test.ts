@@ -65,6 +65,24 @@ describe('the compliance sheet renderer', () => {
     expect(flat).toContain('0.9 m 4690 Pa 4070 Pa 6940 Pa');
     expect(flat).toContain('Source: Demo χ — invented for the Skinwright demo');
   });
+
+  it('prints figures by the screen’s rounding: a 0.15 mm film, shares as the build-up page shows them, the deciding method', async () => {
+    const { renderComplianceSheet } = await import('./sheet');
+    const { demoSheetData } = await import('./fixtures');
+    const { readPdf } = await import('../../tests/setup/pdf');
+    const { fixed } = await import('@shared/units/rounding');
+    const data = demoSheetData('SI');
+    const { text } = await readPdf(renderComplianceSheet(data));
+    const flat = text.replace(/\s+/g, ' ');
+    expect(flat).toContain('0.15 mm');
+    expect(flat).not.toMatch(/\b0\.1 mm/);
+    const thermal = data.run.outputs.modules.find((m) => m.id === 'thermal')!.result as {
+      bridges: { share: number }[];
+    };
+    // The build-up page's share table prints fixed(share × 100, 1) too (formatShare): one rule, one text.
+    for (const b of thermal.bridges) expect(flat).toContain(`${fixed(b.share * 100, 1)} %`);
+    expect(flat).toContain('Method: Energy-code path for steel framing (ASHRAE 90.1 Appendix A)');
+  });
 });
 
 describe('sheet helpers', () => {
@@ -95,6 +113,9 @@ describe('sheet helpers', () => {
     expect(si.temperature(-19)).toBe('\u221219\u202f°C');
     expect(ip.temperature(-19)).toBe('\u22122.2\u202f°F');
     expect(si.thickness(0.1)).toBe('100\u202fmm');
+    expect(si.thickness(0.00015)).toBe('0.15\u202fmm');
+    expect(si.num(3.35, 1)).toBe('3.4');
+    expect(si.num(0.15, 1)).toBe('0.2');
     expect(ip.rValue(3.26)).toBe('18.5\u202fh·ft²·°F/Btu');
     expect(si.siValue(180, 'L/x')).toBe('L/180');
   });

@@ -1,4 +1,5 @@
 import { celsiusToFahrenheit, FOOT, fahrenheitToCelsius, type UnitSystem } from '@shared/units';
+import { trimmedFixed } from '@shared/units/rounding';
 import type { InputMeasure, ParsedEntry } from './input-measure';
 
 /**
@@ -40,10 +41,7 @@ export const unitOf = (q: Quantity, system: UnitSystem) => QUANTITIES[q].unit[sy
 
 /** Round to the quantity's decimals and trim trailing zeros; never returns "NaN" (returns "" instead). */
 export function formatNumber(value: number, decimals: number): string {
-  if (!Number.isFinite(value)) return '';
-  const fixed = value.toFixed(decimals);
-  const trimmed = fixed.includes('.') ? fixed.replace(/0+$/, '').replace(/\.$/, '') : fixed;
-  return trimmed === '-0' ? '0' : trimmed;
+  return trimmedFixed(value, decimals);
 }
 
 /** The number as it goes into an editable input (ASCII minus). */

@@ -6,6 +6,7 @@ import {
   type UnitSystem,
   US_GALLON,
 } from '@shared/units';
+import { fixed, trimmedFixed } from '@shared/units/rounding';
 import type { InputMeasure, ParsedEntry } from './input-measure';
 
 /*
@@ -79,15 +80,11 @@ const minus = (t: string) => t.replace(/^-/, '\u2212');
 
 /** Round to `decimals` and trim trailing zeros; "" (never "NaN") for a non-number. */
 function trim(value: number, decimals: number): string {
-  if (!Number.isFinite(value)) return '';
-  const fixed = value.toFixed(decimals);
-  const t = fixed.includes('.') ? fixed.replace(/0+$/, '').replace(/\.$/, '') : fixed;
-  return t === '-0' ? '0' : t;
+  return trimmedFixed(value, decimals);
 }
 
 function fixedText(value: number, decimals: number): string {
-  const t = value.toFixed(decimals);
-  return /^-0(\.0*)?$/.test(t) ? t.slice(1) : t;
+  return fixed(value, decimals);
 }
 
 // --------------------------------------------------------------------------------------- fractions

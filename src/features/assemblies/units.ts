@@ -8,6 +8,7 @@ import {
   U_IP_TO_SI,
   type UnitSystem,
 } from '@shared/units';
+import { fixed, roundDecimal, trimmedFixed } from '@shared/units/rounding';
 import type { InputMeasure, ParsedEntry } from '../../lib/input-measure';
 
 /**
@@ -92,10 +93,7 @@ export const measureUnit = (m: Measure, system: UnitSystem) => MEASURES[m].unit[
 
 /** Round to at most `decimals` places and trim trailing zeros; "" (never "NaN") for a non-number. */
 export function trimmed(value: number, decimals: number): string {
-  if (!Number.isFinite(value)) return '';
-  const fixed = value.toFixed(decimals);
-  const t = fixed.includes('.') ? fixed.replace(/0+$/, '').replace(/\.$/, '') : fixed;
-  return t === '-0' ? '0' : t;
+  return trimmedFixed(value, decimals);
 }
 
 export const toShown = (si: number, m: Measure, system: UnitSystem) => si / MEASURES[m].factor[system];
@@ -158,14 +156,18 @@ export function formatU(si: number | null | undefined, system: UnitSystem): stri
 /** The bare R number (no unit) for tables whose head carries the unit. */
 export function rNumber(si: number | null | undefined, system: UnitSystem): string {
   if (si == null || !Number.isFinite(si)) return '—';
-  return system === 'IP' ? (si / R_IP_TO_SI).toFixed(1) : si.toFixed(2);
+  return system === 'IP' ? fixed(si / R_IP_TO_SI, 1) : fixed(si, 2);
 }
 
 export function uNumber(si: number | null | undefined, system: UnitSystem): string {
   if (si == null || !Number.isFinite(si)) return '—';
-  return system === 'IP' ? (si / U_IP_TO_SI).toFixed(3) : si.toFixed(3);
+  return system === 'IP' ? fixed(si / U_IP_TO_SI, 3) : fixed(si, 3);
 }
 
+/** Decimals of a share in per cent, everywhere it is printed (screens and sheet): 12.3 %. */
+export const SHARE_DECIMALS = 1;
 /** A share 0–1 as "12.3 %". */
 export const formatShare = (share: number) =>
-  Number.isFinite(share) ? `${(share * 100).toFixed(1)}\u202f%` : '—';
+  Number.isFinite(share) ? `${fixed(share * 100, SHARE_DECIMALS)}\u202f%` : '—';
+/** A share as the number printed, in per cent (what a difference between two shown shares is taken from). */
+export const shownPercent = (share: number) => roundDecimal(share * 100, SHARE_DECIMALS);

@@ -1,4 +1,5 @@
 import { FOOT, INCH, LBF_TO_N, MPH_TO_MS, PSF_TO_PA, type UnitSystem } from '@shared/units';
+import { trimmedFixed } from '@shared/units/rounding';
 import type { InputMeasure, ParsedEntry } from '../../lib/input-measure';
 
 /**
@@ -99,10 +100,7 @@ const minus = (text: string) => text.replace(/^-/, '\u2212');
 
 /** Trim trailing zeros; "" for a non-number (never "NaN"). */
 export function trimNumber(value: number, decimals: number): string {
-  if (!Number.isFinite(value)) return '';
-  const fixed = value.toFixed(decimals);
-  const t = fixed.includes('.') ? fixed.replace(/0+$/, '').replace(/\.$/, '') : fixed;
-  return t === '-0' ? '0' : t;
+  return trimmedFixed(value, decimals);
 }
 
 /** The number as it goes into an editable box. */

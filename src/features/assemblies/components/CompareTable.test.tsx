@@ -4,7 +4,9 @@ import type { AssemblyInput } from '@shared/schemas/assembly';
 import { cleanup, render, screen, within } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
 import { UnitSystemProvider } from '../../../lib/unit-system';
-import { type CompareColumn, CompareTable } from './CompareTable';
+import { formatShare, shownPercent } from '../units';
+import { type CompareColumn, CompareTable, difference } from './CompareTable';
+import { shareBars } from './ShareChart';
 
 afterEach(cleanup);
 
@@ -44,5 +46,25 @@ describe('Compare table', () => {
 
     const ueffRow = screen.getByRole('rowheader', { name: /Effective U_eff/ }).closest('tr') as HTMLElement;
     expect(within(ueffRow).getAllByRole('cell')[1]?.textContent).toMatch(/▲.*higher than A — worse/);
+  });
+
+  it('takes a difference between the figures as shown: 3.3 % and 5.0 % are 1.7 points apart', () => {
+    // Unrounded 3.34 % and 4.99 % differ by 1.65 points; the reader sees 3.3 and 5.0.
+    const row = { show: formatShare, shown: shownPercent, better: null, points: true };
+    expect(formatShare(0.0334)).toBe('3.3\u202f%');
+    expect(formatShare(0.0499)).toBe('5.0\u202f%');
+    expect(difference(0.0334, 0.0499, row, 'SI')?.text).toBe('1.7 points higher than A');
+    // Two shares that print alike are "the same", whatever lies below the rounding.
+    expect(difference(0.03341, 0.03349, row, 'SI')?.text).toBe('same as A');
+  });
+
+  it('labels each bar of the share chart with the table’s own text', () => {
+    const rows = [
+      { name: 'Clear field', share: 0.93349999 },
+      { name: 'Clips', share: 0.03350001 },
+      { name: 'Girts', share: 0.0329999 },
+    ];
+    for (const [i, bar] of shareBars(rows).entries()) expect(bar.label).toBe(formatShare(rows[i]!.share));
+    expect(shareBars(rows)[1]!.label).toBe('3.4\u202f%');
   });
 });

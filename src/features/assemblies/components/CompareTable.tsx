@@ -1,11 +1,23 @@
 import type { ThermalResult } from '@shared/calc/thermal/schema';
 import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
 import type { AssemblyInput } from '@shared/schemas/assembly';
+import { layerThickness } from '@shared/sheets/layer-class';
 import type { UnitSystem } from '@shared/units';
+import { fixed, roundDecimal, trimmedFixed } from '@shared/units/rounding';
 import type { ReactNode } from 'react';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
-import { formatMeasure, formatR, formatShare, formatU } from '../units';
+import {
+  formatMeasure,
+  formatR,
+  formatShare,
+  formatU,
+  rNumber,
+  SHARE_DECIMALS,
+  shownPercent,
+  toShown,
+  uNumber,
+} from '../units';
 
 export interface CompareColumn {
   key: string;
@@ -22,29 +34,38 @@ interface Row {
   /** The figure per column (null = not present). */
   value: (c: CompareColumn) => number | null;
   show: (v: number, system: UnitSystem) => string;
+  /** The figure as printed, as a number: differences are taken between what the reader sees. */
+  shown: (v: number, system: UnitSystem) => number;
   /** Which way is better, when there is a better (R up, U down). */
   better: Better;
   /** Shares differ in percentage points, everything else in per cent. */
   points?: boolean;
 }
 
-/** Relative differences below this count as "the same" (rounding of the shown figures). */
-const SAME = 0.0005;
-
-function difference(base: number | null, v: number | null, row: Row, system: UnitSystem) {
+/**
+ * How a column differs from A, in words. Taken between the figures as shown, so the words agree with what the
+ * reader sees: shares 3.3 % and 5.0 % differ by 1.7 points, whatever the unrounded shares were.
+ */
+export function difference(
+  base: number | null,
+  v: number | null,
+  row: Pick<Row, 'show' | 'shown' | 'better' | 'points'>,
+  system: UnitSystem,
+) {
   if (base === null && v === null) return null;
   if (base === null) return { same: false as const, text: 'not in A', glyph: '+' };
   if (v === null) return { same: false as const, text: 'in A, not here', glyph: '−' };
-  const delta = v - base;
-  const rel = base === 0 ? (delta === 0 ? 0 : Number.POSITIVE_INFINITY) : delta / Math.abs(base);
-  const same = row.points ? Math.abs(delta) < 0.0005 : Math.abs(rel) < SAME;
-  if (same) return { same: true as const, text: 'same as A', glyph: '=' };
+  const a = row.shown(base, system);
+  const b = row.shown(v, system);
+  if (a === b) return { same: true as const, text: 'same as A', glyph: '=' };
+  const delta = b - a;
+  const rel = a === 0 ? Number.POSITIVE_INFINITY : delta / Math.abs(a);
   const up = delta > 0;
   const amount = row.points
-    ? `${Math.abs(delta * 100).toFixed(1)} points`
+    ? `${trimmedFixed(Math.abs(delta), SHARE_DECIMALS)} points`
     : Number.isFinite(rel)
-      ? `${Math.abs(rel * 100).toFixed(1)} %`
-      : row.show(Math.abs(delta), system);
+      ? `${fixed(Math.abs(rel * 100), 1)} %`
+      : row.show(Math.abs(v - base), system);
   const verdict = row.better === null ? '' : (row.better === 'higher') === up ? ' — better' : ' — worse';
   return {
     same: false as const,
@@ -54,7 +75,7 @@ function difference(base: number | null, v: number | null, row: Row, system: Uni
 }
 
 const totalThickness = (c: CompareColumn) =>
-  c.input.thermal.layers.reduce((a, l) => a + (l.kind === 'resistance' ? 0 : l.thickness), 0);
+  c.input.thermal.layers.reduce((a, l) => a + layerThickness(l), 0);
 
 /**
  * Two or more assemblies (or revisions) side by side. Column A is the baseline; every other cell that
@@ -68,30 +89,35 @@ export function CompareTable({ columns }: { columns: readonly CompareColumn[] })
       label: <>Clear-field R₀</>,
       value: (c) => c.result?.R0 ?? null,
       show: (v, s) => formatR(v, s),
+      shown: (v, s) => Number(rNumber(v, s)),
       better: 'higher',
     },
     {
       label: <>Effective R_eff</>,
       value: (c) => c.result?.Reff ?? null,
       show: (v, s) => formatR(v, s),
+      shown: (v, s) => Number(rNumber(v, s)),
       better: 'higher',
     },
     {
       label: <>Clear-field U₀</>,
       value: (c) => c.result?.U0 ?? null,
       show: (v, s) => formatU(v, s),
+      shown: (v, s) => Number(uNumber(v, s)),
       better: 'lower',
     },
     {
       label: <>Effective U_eff</>,
       value: (c) => c.result?.Ueff ?? null,
       show: (v, s) => formatU(v, s),
+      shown: (v, s) => Number(uNumber(v, s)),
       better: 'lower',
     },
     {
       label: 'Heat-loss share, clear field',
       value: (c) => c.result?.clearFieldShare ?? null,
       show: (v) => formatShare(v),
+      shown: (v) => shownPercent(v),
       better: null,
       points: true,
     },
@@ -103,6 +129,7 @@ export function CompareTable({ columns }: { columns: readonly CompareColumn[] })
           return list.length ? list.reduce((a, b) => a + b.share, 0) : null;
         },
         show: (v) => formatShare(v),
+        shown: (v) => shownPercent(v),
         better: null,
         points: true,
       }),
@@ -111,6 +138,7 @@ export function CompareTable({ columns }: { columns: readonly CompareColumn[] })
       label: 'Overall thickness',
       value: totalThickness,
       show: (v, s) => formatMeasure(v, 'thickness', s, 1),
+      shown: (v, s) => roundDecimal(toShown(v, 'thickness', s), 1),
       better: null,
     },
   ];

@@ -1,5 +1,6 @@
 import type { MethodName, ThermalResult } from '@shared/calc/thermal/schema';
 import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
+import { fixed } from '@shared/units/rounding';
 import { Notice } from '../../../components/ui/Notice';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { formatR } from '../units';
@@ -9,7 +10,7 @@ const METHOD_NOTES: Record<MethodName, (r: ThermalResult) => string | undefined>
   isothermalPlanes: () => 'each bridged layer averaged across its sections',
   isoCombined: (r) =>
     r.methods.isoError != null
-      ? `maximum relative error e = ${(r.methods.isoError * 100).toFixed(1)} %`
+      ? `maximum relative error e = ${fixed(r.methods.isoError * 100, 1)} %`
       : undefined,
   zone: () => 'zone around each metal member taken by isothermal planes',
   energyCode: (r) => r.energyCode?.text,
@@ -70,7 +71,7 @@ export function MethodSection({ result }: { result: ThermalResult }) {
       </Table>
       <p className="text-sm">
         The methods offered differ by{' '}
-        <span className="num font-semibold">{(result.methodSpread * 100).toFixed(1)} %</span> of their mean
+        <span className="num font-semibold">{fixed(result.methodSpread * 100, 1)} %</span> of their mean
         {result.methodSpread < 0.005
           ? ' — in effect they agree.'
           : result.methodSpread > 0.15

@@ -1,4 +1,5 @@
 import type { ThermalResult } from '@shared/calc/thermal/schema';
+import { fixed } from '@shared/units/rounding';
 import type { ReactNode } from 'react';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { formatR, formatU } from '../units';
@@ -80,7 +81,7 @@ export function ResultFigures({ result }: { result: ThermalResult }) {
       <p className="text-sm">
         {result.bridges.length === 0
           ? 'No bridges entered: the effective value equals the clear-field value.'
-          : `The ${result.bridges.length === 1 ? 'bridge lowers' : `${result.bridges.length} bridges lower`} R by ${Math.abs(drop * 100).toFixed(1)} % (R_eff against R₀); they carry ${((1 - result.clearFieldShare) * 100).toFixed(1)} % of the heat lost through the wall.`}
+          : `The ${result.bridges.length === 1 ? 'bridge lowers' : `${result.bridges.length} bridges lower`} R by ${fixed(Math.abs(drop * 100), 1)} % (R_eff against R₀); they carry ${fixed((1 - result.clearFieldShare) * 100, 1)} % of the heat lost through the wall.`}
       </p>
     </div>
   );

@@ -14,6 +14,10 @@ const KIND_WORDS = {
   fastener: 'fasteners (Annex F)',
 } as const;
 
+/** The bars: length in per cent, label exactly as the table prints the share (one rounding, one text). */
+export const shareBars = (rows: readonly { name: string; share: number }[]) =>
+  rows.map((r) => ({ name: r.name, percent: r.share * 100, label: formatShare(r.share) }));
+
 /** Where the heat goes: the clear field against each bridge, as shares of U_eff — a bar chart and its table. */
 export function ShareChart({ result }: { result: ThermalResult }) {
   const system = useUnitSystem();
@@ -26,7 +30,7 @@ export function ShareChart({ result }: { result: ThermalResult }) {
       deltaU: b.deltaU,
     })),
   ];
-  const data = rows.map((r) => ({ name: r.name, percent: Number((r.share * 100).toFixed(2)) }));
+  const data = shareBars(rows);
   const summary = rows.map((r) => `${r.name} ${formatShare(r.share)}`).join(', ');
 
   return (
@@ -62,9 +66,8 @@ export function ShareChart({ result }: { result: ThermalResult }) {
                 <Cell key={d.name + String(i)} fill={i === 0 ? RULE : INK} />
               ))}
               <LabelList
-                dataKey="percent"
+                dataKey="label"
                 position="right"
-                formatter={(v: unknown) => `${Number(v).toFixed(1)} %`}
                 style={{ fontSize: 11, fontFamily: 'IBM Plex Mono, monospace', fill: INK }}
               />
             </Bar>

@@ -28,6 +28,8 @@ export default defineConfig({
           ],
           environment: 'node',
           setupFiles: ['tests/setup/fast-check.ts'],
+          // Property tests and the PDF renders take seconds on a loaded 2-core machine; a hang still fails.
+          testTimeout: 30_000,
         },
       },
       {
@@ -38,6 +40,8 @@ export default defineConfig({
           name: 'client',
           include: ['src/**/*.test.tsx', 'src/**/*.test.ts'],
           environment: 'jsdom',
+          // jsdom renders of whole sheets take seconds on a loaded 2-core machine; a hang still fails.
+          testTimeout: 30_000,
           setupFiles: ['tests/setup/fast-check.ts'],
         },
       },

@@ -1,6 +1,8 @@
+import { can } from '@shared/auth/permissions';
 import { metalPanelWall } from '@shared/calc/thermal/fixtures';
 import {
   assemblyCreateSchema,
+  assemblyDuplicateSchema,
   assemblyRevisionSchema,
   assemblySchema,
   assemblySummarySchema,
@@ -9,7 +11,9 @@ import {
 } from '@shared/schemas/assembly';
 import { apiErrorSchema, int4Param, uuidParam, versionConflictSchema } from '@shared/schemas/common';
 import { z } from 'zod';
+import { forbidden, notFound } from '../http/errors';
 import { defineRoute } from '../http/route';
+import { archivedError } from '../services/projects';
 
 const errors = {
   400: { description: 'Invalid fields', schema: apiErrorSchema },
@@ -104,6 +108,34 @@ export const assemblyRoutes = [
     },
     handler: ({ user, params, body, services }) =>
       services.assemblies.update(params.assemblyId, user!.id, body.version, body.input, body.note),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/assemblies/:assemblyId/duplicate',
+    summary:
+      'Copy the current revision as revision 1 of a new assembly, in this project or another one you may edit (`projectId`)',
+    tag: 'Assemblies',
+    // Reading the assembly is enough here; writing is checked on the target project below.
+    access: { kind: 'project', action: 'assembly.read', ...viaAssembly },
+    params: assemblyParams,
+    body: assemblyDuplicateSchema,
+    example: { name: 'Insulated metal panel on girts — north' },
+    responses: {
+      201: { description: 'The copy', schema: assemblySchema },
+      ...errors,
+      409: { description: 'The source or the target project is archived', schema: apiErrorSchema },
+    },
+    handler: async ({ user, project, params, body, services }) => {
+      const target =
+        body.projectId === undefined || body.projectId === project!.id
+          ? project!.record
+          : await services.projects.access(body.projectId, user!.id);
+      if (!target) throw notFound('project');
+      if (!can(target.myRole, 'assembly.write'))
+        throw forbidden('your role on the target project does not edit assemblies');
+      if (target.archivedAt) throw archivedError();
+      return services.assemblies.duplicate(params.assemblyId, target.id, user!.id, body.name);
+    },
   }),
   defineRoute({
     method: 'get',

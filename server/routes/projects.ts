@@ -2,6 +2,7 @@ import { apiErrorSchema, uuidParam, versionConflictSchema } from '@shared/schema
 import { auditEntrySchema } from '@shared/schemas/me';
 import {
   projectClimateUpdateSchema,
+  projectDuplicateSchema,
   projectInputSchema,
   projectListQuerySchema,
   projectSchema,
@@ -166,6 +167,24 @@ export const projectRoutes = [
         part: 'climate',
         changes: { climate: body.climate },
       }),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/projects/:id/duplicate',
+    summary:
+      'Copy the project — site data, wind, climate and every assembly’s current revision as revision 1 — with you as its only member (owner)',
+    tag: 'Projects',
+    access: { kind: 'project', action: 'project.update' },
+    params: uuidParam,
+    body: projectDuplicateSchema,
+    example: { name: 'Example distribution centre, phase 2', number: 'EX-02' },
+    responses: {
+      201: { description: 'The copy', schema: projectSchema },
+      400: { description: 'Invalid fields', schema: apiErrorSchema },
+      ...errors,
+      409: { description: 'The project is archived', schema: apiErrorSchema },
+    },
+    handler: ({ user, project, body, services }) => services.projects.duplicate(project!.id, user!.id, body),
   }),
   defineRoute({
     method: 'post',

@@ -9,11 +9,12 @@ import type {
   AssemblyRevision,
   AssemblySummary,
 } from '@shared/schemas/assembly';
+import { TEXT_MAX } from '@shared/schemas/common';
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { assemblies, assemblyRevisions, checkRuns, user } from '../db/schema';
-import { HttpError, notFound } from '../http/errors';
+import { assemblies, assemblyRevisions, checkRuns, projects, user } from '../db/schema';
 import { recordAudit } from './audit';
+import { conflict, notFound } from './errors';
 
 type AssemblyRow = typeof assemblies.$inferSelect;
 type RevisionRow = typeof assemblyRevisions.$inferSelect;
@@ -44,6 +45,9 @@ function toHead(a: AssemblyRow, result: { Ueff: number | null; Reff: number | nu
   };
 }
 
+/** "Wall A" → "Wall A (copy)", kept within the name limit. */
+export const copyName = (name: string) => `${name.slice(0, TEXT_MAX.name - ' (copy)'.length)} (copy)`;
+
 export function createAssemblyService(db: Db) {
   async function get(assemblyId: string): Promise<Assembly> {
     const [a] = await db.select().from(assemblies).where(eq(assemblies.id, assemblyId));
@@ -57,6 +61,42 @@ export function createAssemblyService(db: Db) {
       );
     const current = toRevision(r!.rev, r!.by);
     return { ...toHead(a, current.thermalResult), current };
+  }
+
+  async function create(
+    projectId: string,
+    userId: string,
+    input: AssemblyInput,
+    note: string,
+    after: Record<string, unknown>,
+  ): Promise<Assembly> {
+    const thermalResult = calculateThermal(input.thermal);
+
+    const id = await db.transaction(async (tx) => {
+      const [a] = await tx
+        .insert(assemblies)
+        .values({ projectId, name: input.name, wallCategory: input.wallCategory, createdBy: userId })
+        .returning();
+      await tx.insert(assemblyRevisions).values({
+        assemblyId: a!.id,
+        revision: 1,
+        note,
+        input,
+        thermalResult,
+        engineVersion: ENGINE_VERSION,
+        createdBy: userId,
+      });
+      await recordAudit(tx, {
+        actorId: userId,
+        projectId,
+        entity: 'assembly',
+        entityId: a!.id,
+        action: 'create',
+        after,
+      });
+      return a!.id;
+    });
+    return get(id);
   }
 
   return {
@@ -115,33 +155,24 @@ export function createAssemblyService(db: Db) {
       );
     },
 
-    async create(projectId: string, userId: string, input: AssemblyInput): Promise<Assembly> {
-      const thermalResult = calculateThermal(input.thermal);
-      const id = await db.transaction(async (tx) => {
-        const [a] = await tx
-          .insert(assemblies)
-          .values({ projectId, name: input.name, wallCategory: input.wallCategory, createdBy: userId })
-          .returning();
-        await tx.insert(assemblyRevisions).values({
-          assemblyId: a!.id,
-          revision: 1,
-          note: 'first issue',
-          input,
-          thermalResult,
-          engineVersion: ENGINE_VERSION,
-          createdBy: userId,
-        });
-        await recordAudit(tx, {
-          actorId: userId,
-          projectId,
-          entity: 'assembly',
-          entityId: a!.id,
-          action: 'create',
-          after: { name: input.name },
-        });
-        return a!.id;
+    create: (projectId: string, userId: string, input: AssemblyInput) =>
+      create(projectId, userId, input, 'first issue', { name: input.name }),
+
+    /**
+     * A copy of the assembly's current revision as revision 1 of a new assembly in `projectId` (the route
+     * has checked the caller may write there), named "<name> (copy)" unless `name` is given.
+     */
+    async duplicate(assemblyId: string, projectId: string, userId: string, name?: string): Promise<Assembly> {
+      const source = await get(assemblyId);
+      const [from] = await db
+        .select({ name: projects.name })
+        .from(projects)
+        .where(eq(projects.id, source.projectId));
+      const input = { ...source.current.input, name: name ?? copyName(source.name) };
+      return create(projectId, userId, input, `copied from ${from!.name} rev ${source.revision}`, {
+        name: input.name,
+        copiedFrom: { assembly: source.name, project: from!.name, revision: source.revision },
       });
-      return get(id);
     },
 
     /**
@@ -216,14 +247,10 @@ export function createAssemblyService(db: Db) {
         return true;
       });
       if (!saved)
-        throw new HttpError(
-          409,
+        throw conflict(
           'version_conflict',
           'someone else saved this assembly after you opened it; your changes were not saved',
-          undefined,
-          {
-            current: await get(assemblyId),
-          },
+          await get(assemblyId),
         );
       return get(assemblyId);
     },

@@ -2,8 +2,16 @@ import type { ProjectRole } from '@shared/auth/permissions';
 import type { Project, ProjectClimate, ProjectInput, ProjectWind } from '@shared/schemas/project';
 import { and, asc, eq, gte, isNotNull, isNull, lte, sql } from 'drizzle-orm';
 import type { Db, ReadCache } from '../db/client';
-import { organisationMembers, organisations, projectMembers, projects } from '../db/schema';
+import {
+  assemblies,
+  assemblyRevisions,
+  organisationMembers,
+  organisations,
+  projectMembers,
+  projects,
+} from '../db/schema';
 import { HttpError, notFound } from '../http/errors';
+import { copyName } from './assemblies';
 import { recordAudit } from './audit';
 
 type ProjectRow = typeof projects.$inferSelect;
@@ -115,6 +123,89 @@ export function createProjectService(db: Db, readCache: ReadCache) {
         .where(archived ? isNotNull(projects.archivedAt) : isNull(projects.archivedAt))
         .orderBy(asc(projects.name));
       return rows.map((r) => toProject(r.p, r.orgName, r.role as ProjectRole));
+    },
+
+    /**
+     * A copy of the project — site data, wind and climate — with no members but the caller as owner, in the
+     * project's firm when the caller belongs to it (else the caller's first firm, or the project's if none),
+     * and every assembly's current revision as revision 1 of a copy ("copied from <project> rev n", its
+     * stored result kept).
+     */
+    async duplicate(
+      projectId: string,
+      userId: string,
+      input: { name?: string | undefined; number?: string | undefined },
+    ): Promise<Project> {
+      const [src] = await db.select().from(projects).where(eq(projects.id, projectId));
+      if (!src) throw notFound('project');
+      const firms = await db
+        .select({ id: organisationMembers.organisationId })
+        .from(organisationMembers)
+        .where(eq(organisationMembers.userId, userId));
+      const orgId = firms.find((f) => f.id === src.organisationId)?.id ?? firms[0]?.id ?? src.organisationId;
+      const current = await db
+        .select({ a: assemblies, r: assemblyRevisions })
+        .from(assemblies)
+        .innerJoin(
+          assemblyRevisions,
+          and(
+            eq(assemblyRevisions.assemblyId, assemblies.id),
+            eq(assemblyRevisions.revision, assemblies.currentRevision),
+          ),
+        )
+        .where(eq(assemblies.projectId, projectId))
+        .orderBy(asc(assemblies.name));
+      const {
+        id: _id,
+        organisationId: _org,
+        archivedAt: _archived,
+        version: _version,
+        siteSavedIn: _site,
+        windSavedIn: _wind,
+        climateSavedIn: _climate,
+        createdBy: _by,
+        createdAt: _at,
+        updatedAt: _updated,
+        ...data
+      } = src;
+      const id = await db.transaction(async (tx) => {
+        const [row] = await tx
+          .insert(projects)
+          .values({
+            ...data,
+            name: input.name ?? copyName(src.name),
+            number: input.number ?? src.number,
+            organisationId: orgId,
+            createdBy: userId,
+          })
+          .returning();
+        await tx.insert(projectMembers).values({ projectId: row!.id, userId, role: 'owner' });
+        for (const { a, r } of current) {
+          const [copy] = await tx
+            .insert(assemblies)
+            .values({ projectId: row!.id, name: a.name, wallCategory: a.wallCategory, createdBy: userId })
+            .returning({ id: assemblies.id });
+          await tx.insert(assemblyRevisions).values({
+            assemblyId: copy!.id,
+            revision: 1,
+            note: `copied from ${src.name} rev ${r.revision}`,
+            input: r.input,
+            thermalResult: r.thermalResult,
+            engineVersion: r.engineVersion,
+            createdBy: userId,
+          });
+        }
+        await recordAudit(tx, {
+          actorId: userId,
+          projectId: row!.id,
+          entity: 'project',
+          entityId: row!.id,
+          action: 'create',
+          after: { name: row!.name, copiedFrom: { project: src.name, assemblies: current.length } },
+        });
+        return row!.id;
+      });
+      return get(id, userId);
     },
 
     /** Creates a project owned by one of the caller's firms; the caller becomes its owner. */

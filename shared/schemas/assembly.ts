@@ -75,6 +75,11 @@ export const assemblyInputSchema = z
 export type AssemblyInput = z.infer<typeof assemblyInputSchema>;
 
 export const assemblyCreateSchema = assemblyInputSchema;
+/** A copy of an assembly's current revision, into this project or `projectId`; named "<name> (copy)" by default. */
+export const assemblyDuplicateSchema = z.object({
+  projectId: z.uuid().optional(),
+  name: text(TEXT_MAX.name).min(1, 'an assembly needs a name').optional(),
+});
 /** A save names the version it was based on; a stale one gets 409. */
 export const assemblyUpdateSchema = z.object({
   version: int4(),

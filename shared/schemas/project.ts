@@ -162,4 +162,10 @@ export const projectSchema = z.object({
 });
 export type Project = z.infer<typeof projectSchema>;
 
+/** A copy of a project (site data, wind, climate, assemblies), named "<name> (copy)" unless given. */
+export const projectDuplicateSchema = z.object({
+  name: text(TEXT_MAX.name).min(1, 'a project needs a name').optional(),
+  number: text(50).optional(),
+});
+
 export const projectListQuerySchema = z.object({ archived: z.enum(['true', 'false']).optional() });

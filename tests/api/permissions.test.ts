@@ -68,6 +68,9 @@ const EXPECTED: Record<string, Expectation> = {
   'POST /projects/:id/assemblies': ['owner', 'architect', 'envelope_consultant', 'engineer'],
   'GET /assemblies/:assemblyId': ALL,
   'PUT /assemblies/:assemblyId': ['owner', 'architect', 'envelope_consultant', 'engineer'],
+  'POST /projects/:id/duplicate': ['owner', 'architect'],
+  // Read on the source; a copy into the same project (the default) needs assembly.write there.
+  'POST /assemblies/:assemblyId/duplicate': ['owner', 'architect', 'envelope_consultant', 'engineer'],
   'GET /assemblies/:assemblyId/revisions': ALL,
   'GET /assemblies/:assemblyId/revisions/:revision': ALL,
   'GET /organisations/:orgId/materials': 'firmMember',

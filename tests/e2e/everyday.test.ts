@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { browserSuite, screenshot, signIn } from '../setup/browser';
+import { browserSuite, openDemoAssembly, screenshot, signIn } from '../setup/browser';
 
 const fitsWidth = (page: Page) =>
   page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth);
@@ -89,6 +89,58 @@ describe('everyday use in the browser', () => {
     await page.waitForURL(/\/sign-in/);
     await page.getByRole('button', { name: /sign in/i }).waitFor();
     expect(logged).toEqual([]);
+    expect(problems).toEqual([]);
+  });
+
+  it('duplicates the demo assembly from its page into a project the person edits, and opens the copy', async () => {
+    const { page, problems } = await suite.openPage();
+    await signIn(page, suite.baseUrl, 'engineer@skinwright.demo');
+    await openDemoAssembly(page);
+    await page.getByRole('button', { name: 'Duplicate…' }).click();
+    const form = page.getByRole('form', { name: 'Duplicate this assembly' });
+    const picker = form.getByLabel('Into project');
+    expect(await picker.locator('option').allTextContents()).toContain('Corvid Lane Cold Store');
+    await form.getByLabel(/Name of the copy/).fill('North wall, option B');
+    await screenshot(page, 'assembly-duplicate');
+    await page.setViewportSize({ width: 390, height: 844 });
+    expect(await fitsWidth(page)).toBe(true);
+    await form.screenshot({ path: 'tests/artifacts/assembly-duplicate-390.png' });
+    await page.setViewportSize({ width: 1280, height: 900 });
+    const before = page.url();
+    await form.getByRole('button', { name: 'Make the copy' }).click();
+    await page.waitForURL(
+      (u) => u.toString() !== before && /\/assemblies\/[0-9a-f-]{36}$/.test(u.toString()),
+    );
+    await page
+      .getByText(/copied from Corvid Lane Cold Store rev \d+/)
+      .first()
+      .waitFor();
+    expect(await page.getByRole('textbox', { name: /^Name/ }).first().inputValue()).toBe(
+      'North wall, option B',
+    );
+    expect(problems).toEqual([]);
+  });
+
+  it('duplicates the demo project from its overview, the person its only member', async () => {
+    const { page, problems } = await suite.openPage();
+    await signIn(page, suite.baseUrl, 'architect@skinwright.demo');
+    await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
+    await page.getByRole('button', { name: 'Duplicate…' }).click();
+    const form = page.getByRole('form', { name: 'Duplicate this project' });
+    await form.getByLabel(/Name of the copy/).fill('Corvid Lane Cold Store, phase 2');
+    await form.getByLabel('Project number').fill('LA-2612');
+    await page.setViewportSize({ width: 390, height: 844 });
+    expect(await fitsWidth(page)).toBe(true);
+    await form.screenshot({ path: 'tests/artifacts/project-duplicate-390.png' });
+    await page.setViewportSize({ width: 1280, height: 900 });
+    await screenshot(page, 'project-duplicate');
+    const before = page.url();
+    await form.getByRole('button', { name: 'Make the copy' }).click();
+    await page.waitForURL((u) => u.toString() !== before && /\/projects\/[0-9a-f-]{36}$/.test(u.toString()));
+    await page.getByRole('heading', { name: 'Corvid Lane Cold Store, phase 2' }).waitFor();
+    await page.getByRole('link', { name: 'People' }).click();
+    await page.getByText('Marguerite Oyelaran').first().waitFor();
+    expect(await page.getByText('Ngozi Okonkwo').count()).toBe(0);
     expect(problems).toEqual([]);
   });
 });

@@ -6,11 +6,13 @@ import { Notice } from '../../components/ui/Notice';
 import { useAssembly } from '../../features/assemblies/api/get-assembly';
 import { AssemblyBuilder } from '../../features/assemblies/components/AssemblyBuilder';
 import { AssemblySheet } from '../../features/assemblies/components/AssemblySheet';
+import { DuplicateAssembly } from '../../features/assemblies/components/DuplicateAssembly';
 import { RevisionHistory } from '../../features/assemblies/components/RevisionHistory';
 import { useBridgeValues } from '../../features/library/api/get-bridge-values';
 import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
 import { useMe } from '../../features/me/api/get-me';
 import { useProject } from '../../features/projects/api/get-project';
+import { useProjects } from '../../features/projects/api/get-projects';
 import { errorMessage } from '../../lib/api';
 import { formatDateTime } from '../../lib/format';
 import { AssemblyTabs } from '../layout/AssemblyTabs';
@@ -37,6 +39,10 @@ export function AssemblyBuilderPage() {
   const { data: project } = useProject(id);
   const assembly = useAssembly(assemblyId);
   const library = useBuilderLibrary(project);
+  // The projects a copy may go to: those the person edits assemblies on, not archived.
+  const targets = (useProjects({ archived: false }).data ?? []).filter(
+    (p) => can(p.myRole, 'assembly.write') && p.archivedAt === null,
+  );
 
   if (!project) return null;
   if (assembly.isPending) return <Loading what="Loading the assembly" />;
@@ -89,6 +95,14 @@ export function AssemblyBuilderPage() {
         currentRevision={a.revision}
         openRevision={a.revision}
       />
+      {project.archivedAt === null && targets.length > 0 ? (
+        <section aria-labelledby="duplicate-heading" className="flex flex-col items-start gap-3">
+          <h2 id="duplicate-heading" className="w-full border-b border-ink pb-2 text-2xl">
+            Duplicate
+          </h2>
+          <DuplicateAssembly key={a.id} assembly={a} projectId={project.id} targets={targets} />
+        </section>
+      ) : null}
     </div>
   );
 }

@@ -75,6 +75,17 @@ describe('Project overview permissions', () => {
     },
   );
 
+  it('offers duplicating the project to those who edit its site data only', async () => {
+    renderOverview('architect');
+    expect(await screen.findByRole('button', { name: 'Duplicate…' })).toBeTruthy();
+    for (const role of ['envelope_consultant', 'engineer', 'subcontractor', 'viewer'] as const) {
+      cleanup();
+      renderOverview(role);
+      expect(await screen.findByText('1 Quay Street')).toBeTruthy();
+      expect(screen.queryByRole('button', { name: 'Duplicate…' })).toBeNull();
+    }
+  });
+
   it('sets the title block in the person’s units', async () => {
     renderOverview('viewer', 'IP');
     expect(await screen.findByText('30 ft')).toBeTruthy();

@@ -4,6 +4,7 @@ import { Button } from '../../components/ui/Button';
 import { AssembliesOverview } from '../../features/assemblies/components/AssembliesOverview';
 import { useProject } from '../../features/projects/api/get-project';
 import { ArchiveControl } from '../../features/projects/components/ArchiveControl';
+import { DuplicateProject } from '../../features/projects/components/DuplicateProject';
 import { ProjectEditor } from '../../features/projects/components/ProjectEditor';
 import { ProjectTitleBlock } from '../../features/projects/components/ProjectTitleBlock';
 
@@ -49,6 +50,18 @@ export function ProjectOverviewPage() {
           mayWrite={can(project.myRole, 'assembly.write') && !archived}
         />
       </section>
+
+      {can(project.myRole, 'project.update') && !archived && !editing ? (
+        <section
+          aria-labelledby="duplicate-heading"
+          className="flex flex-col gap-3 border-t border-rule pt-6"
+        >
+          <h2 id="duplicate-heading" className="text-lg">
+            Duplicate
+          </h2>
+          <DuplicateProject project={project} />
+        </section>
+      ) : null}
 
       {can(project.myRole, 'project.archive') && !editing ? (
         <section aria-labelledby="archive-heading" className="flex flex-col gap-3 border-t border-rule pt-6">

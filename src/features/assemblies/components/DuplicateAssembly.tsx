@@ -1,0 +1,89 @@
+import { useId, useState } from 'react';
+import { useNavigate } from 'react-router';
+import { Button } from '../../../components/ui/Button';
+import { Field } from '../../../components/ui/Field';
+import { Notice } from '../../../components/ui/Notice';
+import { Select } from '../../../components/ui/Select';
+import { TextInput } from '../../../components/ui/TextInput';
+import { errorMessage } from '../../../lib/api';
+import { useDuplicateAssembly } from '../api/duplicate-assembly';
+
+/**
+ * "Duplicate…": a copy of the assembly's current revision as revision 1 of a new assembly, in this project
+ * or another one the person may edit (`targets`, already filtered by the page), then opens the copy.
+ */
+export function DuplicateAssembly({
+  assembly,
+  projectId,
+  targets,
+}: {
+  assembly: { id: string; name: string };
+  projectId: string;
+  targets: { id: string; name: string }[];
+}) {
+  const [open, setOpen] = useState(false);
+  const [target, setTarget] = useState(targets.some((p) => p.id === projectId) ? projectId : targets[0]?.id);
+  const [name, setName] = useState(`${assembly.name} (copy)`);
+  const duplicate = useDuplicateAssembly();
+  const navigate = useNavigate();
+  const formId = useId();
+  if (targets.length === 0 || target === undefined) return null;
+
+  if (!open)
+    return (
+      <Button variant="secondary" onClick={() => setOpen(true)} aria-expanded={false} aria-controls={formId}>
+        Duplicate…
+      </Button>
+    );
+  return (
+    <form
+      id={formId}
+      aria-label="Duplicate this assembly"
+      className="flex flex-col gap-3 border border-rule bg-paper-raised p-4"
+      onSubmit={(e) => {
+        e.preventDefault();
+        duplicate.mutate(
+          { assemblyId: assembly.id, projectId: target, name: name.trim() },
+          { onSuccess: (copy) => navigate(`/projects/${copy.projectId}/assemblies/${copy.id}`) },
+        );
+      }}
+    >
+      <p className="text-sm">
+        The copy starts at revision 1 with the current revision’s values and a note saying where it came from.
+      </p>
+      <div className="grid gap-3 sm:grid-cols-2">
+        <Field label="Into project">
+          {(c) => (
+            <Select {...c} value={target} onChange={(e) => setTarget(e.target.value)}>
+              {targets.map((p) => (
+                <option key={p.id} value={p.id}>
+                  {p.name}
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <Field label="Name of the copy" required>
+          {(c) => (
+            <TextInput
+              {...c}
+              value={name}
+              required
+              maxLength={200}
+              onChange={(e) => setName(e.target.value)}
+            />
+          )}
+        </Field>
+      </div>
+      {duplicate.isError ? <Notice tone="caution" title={errorMessage(duplicate.error)} live /> : null}
+      <div className="flex flex-wrap gap-3">
+        <Button type="submit" variant="primary" busy={duplicate.isPending} busyLabel="Copying…">
+          Make the copy
+        </Button>
+        <Button variant="secondary" onClick={() => setOpen(false)}>
+          Cancel
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -38,12 +38,25 @@ describe('the activity log', () => {
         after: { item: 'a1b2', checkRun: 'c3d4', assembly: 'Wall A', verificationCode: 'ABCDE-FGHIJ' },
       }),
       entry({ id: 3, entity: 'assembly', entityId: 'a9', entityName: null, action: 'revise', after: {} }),
+      entry({
+        id: 4,
+        entity: 'assembly',
+        entityId: 'b7',
+        entityName: 'Wall A (copy)',
+        action: 'create',
+        after: {
+          name: 'Wall A (copy)',
+          copiedFrom: { assembly: 'Wall A', project: 'Corvid Lane', revision: 3 },
+        },
+      }),
     ]);
     const decided = screen.getByText(/Decided submittal/).closest('td')!;
     expect(decided.textContent).toBe('Decided submittal S-003 rev 1 — Façade panels: approved as noted');
     const link = screen.getAllByRole('link', { name: 'S-003 rev 1 — Façade panels' })[0]!;
     expect(link.getAttribute('href')).toBe('/projects/p1/submittals/0b0e7b7e-2f55-4c4e-9d2a-3f4a1e0c9b11');
     expect(screen.getByText(/Saved a new revision of assembly/).textContent).toContain('(no longer there)');
+    expect(screen.getByText(/Created assembly/).closest('tr')!.textContent).toContain('Copied from: —');
+    expect(screen.getByText('Wall A in Corvid Lane rev 3')).toBeTruthy();
     const text = document.body.textContent ?? '';
     expect(text).not.toMatch(/submittal: decide|add_sheet|0b0e7b7e|a1b2|c3d4/);
   });

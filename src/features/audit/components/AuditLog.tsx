@@ -142,7 +142,14 @@ export function What({ projectId, entry }: { projectId: string; entry: AuditEntr
   );
 }
 
+/** Where a duplicate came from: "Wall A in Corvid Lane rev 3", or the project and its assembly count. */
+function copiedFrom(v: Record<string, unknown>): string {
+  if (typeof v.assembly === 'string') return `${v.assembly} in ${v.project} rev ${v.revision}`;
+  return `${v.project} (${v.assemblies} assemblies)`;
+}
+
 function formatValue(field: string, value: unknown, system: UnitSystem): string {
+  if (field === 'copiedFrom' && isRecord(value)) return copiedFrom(value);
   if (typeof value === 'object' && value !== null) return 'entered (see its page)';
   if (field.endsWith('At') && typeof value === 'string') return formatDateTime(value);
   if (field === 'role' && typeof value === 'string' && value in PROJECT_ROLE_LABELS) {
@@ -167,6 +174,7 @@ const OTHER_LABELS: Record<string, string> = {
   note: 'Note',
   wind: 'Wind data',
   climate: 'Monthly climate',
+  copiedFrom: 'Copied from',
 };
 
 function Changes({ entry, system }: { entry: AuditEntry; system: UnitSystem }) {

@@ -1,7 +1,7 @@
 import { TEXT_MAX, text, textFault } from '@shared/schemas/common';
 import { APIError } from 'better-auth/api';
 import { z } from 'zod';
-import { zodFields } from '../http/errors';
+import { zodFields } from '../services/errors';
 
 /** The better-auth endpoints that write what a caller typed into the user record. */
 export const ACCOUNT_FIELD_PATHS: readonly string[] = ['/sign-up/email', '/update-user'];

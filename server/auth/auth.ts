@@ -7,12 +7,19 @@ import type { Request, RequestHandler, Response } from 'express';
 import type { Config } from '../config';
 import type { Database, Db, ReadCache } from '../db/client';
 import { account, session, user, verification } from '../db/schema';
-import type { SessionUser } from '../http/route';
 import type { Mailer } from '../mail/mailer';
 import { ACCOUNT_FIELD_PATHS, checkAccountFields } from './account-fields';
 import { createSignInLock } from './sign-in-lock';
 
 export const MIN_PASSWORD_LENGTH = 10;
+
+/** The signed-in person as a request sees them (the session cookie's user). */
+export interface SessionUser {
+  id: string;
+  name: string;
+  email: string;
+  role: string;
+}
 
 /** The header through which better-auth learns the client's address: Express's `req.ip` (see `authHandler`). */
 const CLIENT_IP_HEADER = 'x-skinwright-client-ip';

@@ -3,8 +3,11 @@ import type { ApiError } from '@shared/schemas/common';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Logger } from 'pino';
 import { ZodError } from 'zod';
+import { DomainError, type ErrorKind, zodFields } from '../services/errors';
 
-/** An error with an HTTP status and a stable code; everything the API refuses is one of these. */
+export { notFound } from '../services/errors';
+
+/** A refusal of the HTTP layer itself (access, parsing, limits), with its status; services throw `DomainError`. */
 export class HttpError extends Error {
   constructor(
     readonly status: number,
@@ -17,26 +20,29 @@ export class HttpError extends Error {
   }
 }
 
-export const notFound = (what = 'resource') => new HttpError(404, 'not_found', `${what} not found`);
 export const forbidden = (message = 'your role on this project does not allow this') =>
   new HttpError(403, 'forbidden', message);
 export const invalidJson = () => new HttpError(400, 'invalid_json', 'the body is not valid JSON');
 export const unauthorised = () => new HttpError(401, 'unauthenticated', 'sign in first');
 
-/** Zod issues → `{ "layers.2.thickness": "Too small: expected number to be >0" }`. */
-export function zodFields(err: ZodError, prefix?: string): Record<string, string> {
-  const fields: Record<string, string> = {};
-  for (const issue of err.issues) {
-    const path = [prefix, ...issue.path.map(String)].filter(Boolean).join('.') || '(body)';
-    fields[path] ??= issue.message;
-  }
-  return fields;
-}
+/** The one map from a domain error's kind to the HTTP status it answers with. */
+const STATUS: Record<ErrorKind, number> = {
+  malformed: 400,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  archived: 409,
+  expired: 410,
+  too_large: 413,
+  unsupported: 415,
+  invalid: 422,
+  unavailable: 503,
+};
 
 export function toApiError(err: unknown): { status: number; body: ApiError & Record<string, unknown> } {
-  if (err instanceof HttpError)
+  if (err instanceof HttpError || err instanceof DomainError)
     return {
-      status: err.status,
+      status: err instanceof HttpError ? err.status : STATUS[err.kind],
       body: {
         error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) },
         ...err.extra,

@@ -10,9 +10,11 @@ import { type CriteriaAccess, criteriaAllows } from '@shared/schemas/criteria';
 import type { Project } from '@shared/schemas/project';
 import { type Request, type Response, Router } from 'express';
 import type { z } from 'zod';
+import type { SessionUser } from '../auth/auth';
 import type { Services } from '../services';
+import { zodFields } from '../services/errors';
 import { archivedError } from '../services/projects';
-import { forbidden, HttpError, notFound, unauthorised, zodFields } from './errors';
+import { forbidden, HttpError, notFound, unauthorised } from './errors';
 
 /**
  * Who may call a route:
@@ -45,13 +47,6 @@ export type Access =
        */
       whenArchived?: 'allow';
     };
-
-export interface SessionUser {
-  id: string;
-  name: string;
-  email: string;
-  role: string;
-}
 
 export interface RouteContext<P, Q, B> {
   req: Request;

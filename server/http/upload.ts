@@ -2,26 +2,9 @@ import { PassThrough, type Readable } from 'node:stream';
 import { UPLOAD_LIMITS } from '@shared/schemas/submittals';
 import type { Request, Response } from 'express';
 import multer from 'multer';
+import { DomainError } from '../services/errors';
+import type { FileHandler, ReceiveFiles } from '../storage/files';
 import { HttpError } from './errors';
-
-/** One file of an upload as it arrives: its name as sent, and its bytes as a stream. */
-export interface IncomingFile {
-  originalName: string;
-  stream: Readable;
-}
-
-/** What a service does with each arriving file (`store`), and how it takes one back (`remove`). */
-export interface FileHandler<T> {
-  store(file: IncomingFile): Promise<T>;
-  remove(stored: T): Promise<void>;
-}
-
-/**
- * Receives the files of a multipart upload, handing each to `handler.store` as it arrives (all or nothing:
- * when anything fails, what was stored is removed and the upload is refused). Built by the route after the
- * permission check, called by the service once it knows where the files go.
- */
-export type ReceiveFiles = <T>(handler: FileHandler<T>) => Promise<T[]>;
 
 /** Uploads received at the same time by this process; more are refused (503) until one ends. */
 export const CONCURRENT_UPLOADS = 4;
@@ -118,7 +101,7 @@ export function receiveUpload(req: Request, res: Response): ReceiveFiles {
       parser(req, res, (err: unknown) => {
         receiving--;
         // The handler's own refusals (type, room, storage) as they are; multer's limits in our words.
-        if (failures.has(err) || err instanceof HttpError) return reject(err);
+        if (failures.has(err) || err instanceof HttpError || err instanceof DomainError) return reject(err);
         if (err instanceof multer.MulterError) {
           const [status, message] = refusals[err.code] ?? [
             400,

@@ -11,9 +11,9 @@ import type { ProjectClimate, ProjectWind } from '@shared/schemas/project';
 import { and, desc, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { assemblies, assemblyRevisions, checkRuns, organisationMembers, projects, user } from '../db/schema';
-import { notFound } from '../http/errors';
 import { recordAudit } from './audit';
 import type { createCriteriaService } from './criteria';
+import { notFound } from './errors';
 import { archivedError } from './projects';
 
 type RunRow = typeof checkRuns.$inferSelect;

@@ -33,8 +33,8 @@ import {
   projects,
   user,
 } from '../db/schema';
-import { HttpError, notFound } from '../http/errors';
 import { recordAudit } from './audit';
+import { conflict, DomainError, notFound } from './errors';
 
 type SetRow = typeof criteriaSets.$inferSelect;
 type RowRow = typeof criteriaRows.$inferSelect;
@@ -276,12 +276,10 @@ export function createCriteriaService(db: Db) {
       result = 'not_latest';
     }
     if (result === 'stale')
-      throw new HttpError(
-        409,
+      throw conflict(
         'version_conflict',
         'someone else saved this code table after you opened it; your changes were not saved',
-        undefined,
-        { current: await get(setId, access) },
+        await get(setId, access),
       );
     if (result === 'not_latest') {
       const [latest] = await db
@@ -290,12 +288,10 @@ export function createCriteriaService(db: Db) {
         .where(eq(criteriaSets.lineageId, sql`(select lineage_id from criteria_sets where id = ${setId})`))
         .orderBy(desc(criteriaSets.version))
         .limit(1);
-      throw new HttpError(
-        409,
+      throw conflict(
         'version_conflict',
         'a newer version of this code table exists; open the latest version and edit that',
-        undefined,
-        { current: await get(latest!.id, access) },
+        await get(latest!.id, access),
       );
     }
     return { ...(await get(result.id, access)), versionCreated: result.versionCreated };
@@ -413,8 +409,8 @@ export function createCriteriaService(db: Db) {
       if (!s) throw notFound('code table');
       const parsed = criteriaFromCsv(csv, s.categoryLabels as CategoryLabels);
       if (!parsed.ok)
-        throw new HttpError(
-          422,
+        throw new DomainError(
+          'invalid',
           'invalid_csv',
           `the CSV was not imported: ${parsed.errors.length} problem${parsed.errors.length === 1 ? '' : 's'} (nothing was changed)`,
           undefined,
@@ -459,7 +455,7 @@ export function createCriteriaService(db: Db) {
         const [r] = await summaries().where(
           and(eq(criteriaSets.lineageId, s.lineage), eq(criteriaSets.version, v)),
         );
-        if (!r) throw new HttpError(404, 'not_found', `this code table has no version ${v}`);
+        if (!r) throw new DomainError('not_found', 'not_found', `this code table has no version ${v}`);
         return { summary: toSummary(r), meta: metaOf(r.s), rows: await rowsOf(r.s.id) };
       };
       const a = await version(from);
@@ -484,17 +480,13 @@ export function createCriteriaService(db: Db) {
           .where(eq(checkRuns.criteriaSetId, setId))
           .limit(1);
         if (s.frozenAt || used)
-          throw new HttpError(
-            409,
-            'frozen',
-            'this version was used by a stored check run; it is kept as issued',
-          );
+          throw conflict('frozen', 'this version was used by a stored check run; it is kept as issued');
         const [next] = await tx
           .select({ id: criteriaSets.id })
           .from(criteriaSets)
           .where(eq(criteriaSets.previousVersionId, setId))
           .limit(1);
-        if (next) throw new HttpError(409, 'has_newer_version', 'a newer version is based on this one');
+        if (next) throw conflict('has_newer_version', 'a newer version is based on this one');
         await tx.delete(criteriaSets).where(eq(criteriaSets.id, setId));
         await recordAudit(tx, {
           actorId: userId,

@@ -4,9 +4,9 @@ import { and, asc, eq, ne, sql } from 'drizzle-orm';
 import type { Config } from '../config';
 import type { Db } from '../db/client';
 import { organisationMembers, organisations, user } from '../db/schema';
-import { HttpError, notFound } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
 import { recordAudit } from './audit';
+import { DomainError, notFound } from './errors';
 
 interface Row {
   userId: string;
@@ -96,7 +96,7 @@ export function createFirmMemberService(db: Db, config: Config, mailer: Mailer) 
       )
       .limit(1);
     if (!other)
-      throw new HttpError(409, 'last_admin', 'a firm must keep at least one administrator', {
+      throw new DomainError('conflict', 'last_admin', 'a firm must keep at least one administrator', {
         role: 'the firm’s only administrator; make someone else administrator first',
       });
   }
@@ -132,9 +132,14 @@ export function createFirmMemberService(db: Db, config: Config, mailer: Mailer) 
         .from(user)
         .where(sql`lower(${user.email}) = ${input.email}`);
       if (!person)
-        throw new HttpError(422, 'no_account', `nobody has a Skinwright account with ${input.email}`, {
-          email: 'no account uses this address; ask them to sign up first, then add them',
-        });
+        throw new DomainError(
+          'invalid',
+          'no_account',
+          `nobody has a Skinwright account with ${input.email}`,
+          {
+            email: 'no account uses this address; ask them to sign up first, then add them',
+          },
+        );
       const firm = await db.transaction(async (tx) => {
         const added = await tx
           .insert(organisationMembers)
@@ -142,7 +147,7 @@ export function createFirmMemberService(db: Db, config: Config, mailer: Mailer) 
           .onConflictDoNothing()
           .returning({ userId: organisationMembers.userId });
         if (added.length === 0)
-          throw new HttpError(409, 'already_member', `${input.email} is already in this firm`, {
+          throw new DomainError('conflict', 'already_member', `${input.email} is already in this firm`, {
             email: 'already a member of this firm',
           });
         await recordAudit(tx, {

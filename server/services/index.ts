@@ -1,13 +1,13 @@
 import { type Auth, createSessionReader } from '../auth/auth';
 import type { Config } from '../config';
 import type { Database } from '../db/client';
-import { HttpError } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
 import type { ObjectStore } from '../storage/object-store';
 import { createAssemblyService } from './assemblies';
 import { createAuditService } from './audit';
 import { createCheckRunService } from './check-runs';
 import { createCriteriaService } from './criteria';
+import { conflict } from './errors';
 import { createFirmMemberService } from './firm-members';
 import { createLibraryService } from './library';
 import { createMeService } from './me';
@@ -34,11 +34,7 @@ export function createServices(
     /** Hot backup of the embedded database (PGlite); a PostgreSQL server is backed up with pg_dump. */
     async backup(): Promise<Buffer> {
       if (!database.dumpDataDir)
-        throw new HttpError(
-          409,
-          'not_supported',
-          'the database is a PostgreSQL server: back it up with pg_dump',
-        );
+        throw conflict('not_supported', 'the database is a PostgreSQL server: back it up with pg_dump');
       return Buffer.from(await (await database.dumpDataDir()).arrayBuffer());
     },
     auth: { instance: auth, currentUser: createSessionReader(auth) },

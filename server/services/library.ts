@@ -14,10 +14,10 @@ import type { z } from 'zod';
 import type { StorageConfig } from '../config';
 import type { Db } from '../db/client';
 import { orgAttachmentProducts, organisations, orgBridgeValues, orgMaterials } from '../db/schema';
-import { HttpError, notFound } from '../http/errors';
-import type { ReceiveFiles } from '../http/upload';
+import type { ReceiveFiles } from '../storage/files';
 import { fileIntake, type StoredUpload, skipFile } from '../storage/files';
 import type { ObjectStore } from '../storage/object-store';
+import { DomainError, notFound } from './errors';
 
 type ProductRow = typeof orgAttachmentProducts.$inferSelect;
 const MB = 1024 * 1024;
@@ -82,8 +82,8 @@ export function createLibraryService(
     return Number(r?.bytes ?? 0);
   }
   const libraryFull = (used: number) =>
-    new HttpError(
-      413,
+    new DomainError(
+      'too_large',
       'storage_quota_exceeded',
       `the firm’s library storage is full (${(used / MB).toFixed(1)} of ${(quota.firmQuotaBytes / MB).toFixed(0)} MB of data sheets) and this one does not fit; remove entries that are no longer needed, or ask the site administrator to raise the quota. Nothing was stored`,
       { files: 'firm library storage quota reached' },
@@ -202,9 +202,14 @@ export function createLibraryService(
       let old: string | null;
       try {
         if (files.length !== 1 || !sheet)
-          throw new HttpError(400, 'one_file', 'upload exactly one data sheet; nothing was stored', {
-            files: `${files.length} files sent`,
-          });
+          throw new DomainError(
+            'malformed',
+            'one_file',
+            'upload exactly one data sheet; nothing was stored',
+            {
+              files: `${files.length} files sent`,
+            },
+          );
         old = await db.transaction(async (tx) => {
           await tx
             .select({ id: organisations.id })

@@ -3,7 +3,7 @@ import type { CapturedMail, Me } from '@shared/schemas/me';
 import { asc, desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { capturedMail, organisationMembers, organisations, user } from '../db/schema';
-import { HttpError, notFound } from '../http/errors';
+import { DomainError, notFound } from './errors';
 import { firmRoleOf } from './firm-members';
 import { firmHandle } from './organisations';
 
@@ -124,7 +124,7 @@ export function createMeService(db: Db) {
     async createOrganisation(userId: string, name: string): Promise<Me> {
       const existing = await me(userId);
       if (existing.organisations.some((o) => o.name.toLowerCase() === name.toLowerCase()))
-        throw new HttpError(409, 'duplicate_firm', 'you already belong to a firm of that name', {
+        throw new DomainError('conflict', 'duplicate_firm', 'you already belong to a firm of that name', {
           name: 'already exists',
         });
       await db.transaction(async (tx) => {

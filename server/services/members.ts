@@ -12,9 +12,9 @@ import {
   projects,
   user,
 } from '../db/schema';
-import { HttpError, notFound } from '../http/errors';
 import type { Mailer } from '../mail/mailer';
 import { recordAudit } from './audit';
+import { conflict, DomainError, notFound } from './errors';
 import { archivedError } from './projects';
 
 const INVITATION_DAYS = 14;
@@ -33,7 +33,7 @@ function assertMayGrant(actor: Actor, role: ProjectRole, current: ProjectRole | 
     current === 'owner'
       ? 'only an owner may change an owner’s role'
       : `as ${PROJECT_ROLE_LABELS[actor.role]} you may not grant the role ${PROJECT_ROLE_LABELS[role]}`;
-  throw new HttpError(403, 'role_not_grantable', what, { role: what });
+  throw new DomainError('forbidden', 'role_not_grantable', what, { role: what });
 }
 
 function toInvitation(r: typeof invitations.$inferSelect): Invitation {
@@ -110,7 +110,7 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
           ne(projectMembers.id, memberId),
         ),
       );
-    if (others.length === 0) throw new HttpError(409, 'last_owner', 'a project must keep at least one owner');
+    if (others.length === 0) throw conflict('last_owner', 'a project must keep at least one owner');
   }
 
   return {
@@ -128,7 +128,7 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
         .innerJoin(user, eq(user.id, projectMembers.userId))
         .where(and(eq(projectMembers.projectId, projectId), eq(user.email, input.email)));
       if (existing)
-        throw new HttpError(409, 'already_member', `${input.email} is already a member`, {
+        throw new DomainError('conflict', 'already_member', `${input.email} is already a member`, {
           email: 'already a member of this project',
         });
       const [project] = await db
@@ -202,13 +202,12 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
         .from(invitations)
         .where(eq(invitations.tokenHash, hashToken(token)));
       if (!inv) throw notFound('invitation');
-      if (inv.acceptedAt)
-        throw new HttpError(409, 'already_accepted', 'this invitation has already been accepted');
+      if (inv.acceptedAt) throw conflict('already_accepted', 'this invitation has already been accepted');
       if (inv.expiresAt.getTime() < Date.now())
-        throw new HttpError(410, 'expired', 'this invitation has expired; ask for a new one');
+        throw new DomainError('expired', 'expired', 'this invitation has expired; ask for a new one');
       if (inv.email.toLowerCase() !== invitee.email.toLowerCase())
-        throw new HttpError(
-          403,
+        throw new DomainError(
+          'forbidden',
           'wrong_account',
           `this invitation is for ${inv.email}; sign in with that address`,
         );
@@ -224,8 +223,8 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
         .from(projectMembers)
         .where(and(eq(projectMembers.projectId, inv.projectId), eq(projectMembers.userId, inv.invitedBy)));
       if (!mayGrant(sender?.role as ProjectRole | undefined, inv.role as ProjectRole))
-        throw new HttpError(
-          403,
+        throw new DomainError(
+          'forbidden',
           'inviter_not_allowed',
           'the person who invited you can no longer grant this role; ask an owner of the project for a new invitation',
         );
@@ -236,8 +235,7 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
           .values({ projectId: inv.projectId, userId: invitee.id, role: inv.role })
           .onConflictDoNothing({ target: [projectMembers.projectId, projectMembers.userId] })
           .returning({ id: projectMembers.id });
-        if (joined.length === 0)
-          throw new HttpError(409, 'already_member', 'you are already a member of this project');
+        if (joined.length === 0) throw conflict('already_member', 'you are already a member of this project');
         await tx
           .update(invitations)
           .set({ acceptedAt: new Date(), acceptedBy: invitee.id })
@@ -276,7 +274,7 @@ export function createMemberService(db: Db, config: Config, mailer: Mailer) {
     async remove(projectId: string, memberId: string, actor: Actor): Promise<void> {
       await changeMember(projectId, memberId, async (tx, m) => {
         if (!mayRemove(actor.role, m.role as ProjectRole))
-          throw new HttpError(403, 'role_not_grantable', 'only an owner may remove an owner');
+          throw new DomainError('forbidden', 'role_not_grantable', 'only an owner may remove an owner');
         if (m.role === 'owner') await assertNotLastOwner(tx, projectId, memberId);
         await tx.delete(projectMembers).where(eq(projectMembers.id, memberId));
         await recordAudit(tx, {

@@ -3,8 +3,8 @@ import { and, asc, count, eq, isNotNull, isNull, type SQL, sql } from 'drizzle-o
 import { alias } from 'drizzle-orm/pg-core';
 import type { Db } from '../db/client';
 import { organisationMembers, organisations, user } from '../db/schema';
-import { notFound } from '../http/errors';
 import { recordAudit } from './audit';
+import { notFound } from './errors';
 
 /** A firm's handle as people see it: its slug (unique, never changed) after an @, e.g. `@demo-larchmere`. */
 export const firmHandle = (slug: string): string => `@${slug}`;

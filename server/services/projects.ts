@@ -10,9 +10,9 @@ import {
   projectMembers,
   projects,
 } from '../db/schema';
-import { HttpError, notFound } from '../http/errors';
 import { copyName } from './assemblies';
 import { recordAudit } from './audit';
+import { conflict, DomainError, notFound } from './errors';
 
 type ProjectRow = typeof projects.$inferSelect;
 
@@ -57,7 +57,7 @@ const PART_NAME = { site: 'site data', wind: 'wind data', climate: 'climate' } a
 
 /** Archived projects are read-only until restored. */
 export const archivedError = () =>
-  new HttpError(409, 'archived', 'this project is archived; restore it before changing it');
+  new DomainError('archived', 'archived', 'this project is archived; restore it before changing it');
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
@@ -216,9 +216,14 @@ export function createProjectService(db: Db, readCache: ReadCache) {
         .where(eq(organisationMembers.userId, userId));
       const orgId = organisationId ?? firms[0]?.id;
       if (!orgId || !firms.some((f) => f.id === orgId))
-        throw new HttpError(422, 'no_firm', 'a project belongs to a firm: create or join a firm first', {
-          organisationId: 'you are not a member of this firm',
-        });
+        throw new DomainError(
+          'invalid',
+          'no_firm',
+          'a project belongs to a firm: create or join a firm first',
+          {
+            organisationId: 'you are not a member of this firm',
+          },
+        );
       const id = await db.transaction(async (tx) => {
         const [row] = await tx
           .insert(projects)
@@ -280,12 +285,10 @@ export function createProjectService(db: Db, readCache: ReadCache) {
         return true;
       });
       if (!updated)
-        throw new HttpError(
-          409,
+        throw conflict(
           'version_conflict',
           `someone else saved this project’s ${PART_NAME[part]} after you opened it`,
-          undefined,
-          { current: await get(projectId, userId) },
+          await get(projectId, userId),
         );
       return get(projectId, userId);
     },

@@ -13,9 +13,9 @@ import {
   sheetVerifications,
   user,
 } from '../db/schema';
-import { HttpError, notFound } from '../http/errors';
 import { renderComplianceSheet } from '../pdf/sheet';
 import type { createCheckRunService } from './check-runs';
+import { DomainError, notFound } from './errors';
 import { firmHandle } from './organisations';
 
 /** Rendered sheets, by run, units and issuer's standing: the same key always gives the same bytes, so a few are kept. */
@@ -28,7 +28,7 @@ const issuerOf = (r: { name: string; slug: string | null; verifiedAt: Date | nul
 });
 
 export const noSuchSheet = () =>
-  new HttpError(404, 'no_such_sheet', 'no such sheet: the code is unknown, mistyped or altered');
+  new DomainError('not_found', 'no_such_sheet', 'no such sheet: the code is unknown, mistyped or altered');
 
 /**
  * Compliance sheets: the PDF of a stored check run, and the verification codes printed on them. A code is

@@ -33,12 +33,12 @@ import {
   submittals,
   user,
 } from '../db/schema';
-import { HttpError, notFound } from '../http/errors';
-import type { ReceiveFiles } from '../http/upload';
 import type { Mailer } from '../mail/mailer';
+import type { ReceiveFiles } from '../storage/files';
 import { fileIntake, type StoredUpload } from '../storage/files';
 import type { ObjectStore } from '../storage/object-store';
 import { recordAudit } from './audit';
+import { conflict, DomainError, notFound } from './errors';
 import { archivedError } from './projects';
 import type { createSheetService } from './sheets';
 
@@ -49,7 +49,6 @@ type Actor = { id: string; name: string };
 /** Items per revision (sheets and files together). */
 const MAX_ITEMS = 40;
 
-const conflict = (code: string, message: string) => new HttpError(409, code, message);
 const statusWords = (s: SubmittalStatus) => SUBMITTAL_STATUS_TEXT[s].label.toLowerCase();
 const MB = 1024 * 1024;
 
@@ -273,12 +272,10 @@ export function createSubmittalService(
     const r = await row(id);
     await assertOpenProject(r.projectId);
     if (version !== undefined && version !== r.version)
-      throw new HttpError(
-        409,
+      throw conflict(
         'version_conflict',
         'someone changed this submittal after you opened it; here it is as it is now',
-        undefined,
-        { current: await get(id) },
+        await get(id),
       );
     if (!statuses.includes(r.status as SubmittalStatus)) throw wrongStatus(r, statuses);
     return r;
@@ -320,8 +317,8 @@ export function createSubmittalService(
 
   const quotaFull = (used: number) => {
     const quota = config.storage.projectQuotaBytes;
-    return new HttpError(
-      413,
+    return new DomainError(
+      'too_large',
       'storage_quota_exceeded',
       `this project’s file storage is full (${(used / MB).toFixed(1)} of ${(quota / MB).toFixed(0)} MB used) and the upload does not fit; remove files that are no longer needed, or ask the site administrator to raise the quota. Nothing was stored`,
       { files: 'project storage quota reached' },
@@ -345,8 +342,8 @@ export function createSubmittalService(
           `a ${PROJECT_ROLE_LABELS[role].toLowerCase()} does not review submittals`;
     });
     if (Object.keys(fields).length > 0)
-      throw new HttpError(
-        422,
+      throw new DomainError(
+        'invalid',
         'invalid_reviewer',
         'reviewers must be project members who review submittals',
         fields,
@@ -363,7 +360,11 @@ export function createSubmittalService(
 
   async function assertReviewer(r: Row, actor: Actor) {
     if (!(await reviewerIdsOf(r.id)).includes(actor.id))
-      throw new HttpError(403, 'not_a_reviewer', 'only the reviewers named on this submittal review it');
+      throw new DomainError(
+        'forbidden',
+        'not_a_reviewer',
+        'only the reviewers named on this submittal review it',
+      );
   }
 
   /** "07 42 13-003": the section and the next free number of the project. */
@@ -449,9 +450,14 @@ export function createSubmittalService(
         .from(submittals)
         .where(and(eq(submittals.projectId, projectId), eq(submittals.number, number)));
       if (clash)
-        throw new HttpError(409, 'duplicate_number', `submittal ${number} already exists on this project`, {
-          number: 'already used on this project',
-        });
+        throw new DomainError(
+          'conflict',
+          'duplicate_number',
+          `submittal ${number} already exists on this project`,
+          {
+            number: 'already used on this project',
+          },
+        );
       const id = randomUUID();
       await db.transaction(async (tx) => {
         await tx.insert(submittals).values({
@@ -522,14 +528,10 @@ export function createSubmittalService(
         return true;
       });
       if (!updated)
-        throw new HttpError(
-          409,
+        throw conflict(
           'version_conflict',
           'someone changed this submittal after you opened it',
-          undefined,
-          {
-            current: await get(id),
-          },
+          await get(id),
         );
       return get(id);
     },
@@ -700,7 +702,11 @@ export function createSubmittalService(
         .where(and(eq(submittalItems.id, itemId), eq(submittalItems.submittalId, id)));
       if (!item) throw notFound('item');
       if (item.kind !== 'file' || !item.storageKey)
-        throw new HttpError(404, 'not_found', 'this item is a compliance sheet: download it from its run');
+        throw new DomainError(
+          'not_found',
+          'not_found',
+          'this item is a compliance sheet: download it from its run',
+        );
       const object = await storage.get(item.storageKey);
       return {
         body: object.body,
@@ -722,7 +728,7 @@ export function createSubmittalService(
       if (Number(n) === 0) fields.items = 'add a compliance sheet or a file first';
       if (reviewers.length === 0) fields.reviewerIds = 'name at least one reviewer first';
       if (Object.keys(fields).length > 0)
-        throw new HttpError(422, 'incomplete', 'the submittal is not ready to submit', fields);
+        throw new DomainError('invalid', 'incomplete', 'the submittal is not ready to submit', fields);
       await transition(r, actor, 'submitted', 'submit', { submittedAt: new Date(), submittedBy: actor.id });
       const [project] = await db
         .select({ name: projects.name })
@@ -770,8 +776,8 @@ export function createSubmittalService(
         failing.length > 0 &&
         !confirmsFailingSheet(input.failingSheetConfirmation)
       )
-        throw new HttpError(
-          422,
+        throw new DomainError(
+          'invalid',
           'confirmation_required',
           `an attached compliance sheet fails (${failing.map((f) => f.sheet.assemblyName).join(', ')}): approving it needs a confirmation`,
           {
@@ -794,11 +800,7 @@ export function createSubmittalService(
           )
           .returning({ version: submittals.version });
         if (!open)
-          throw new HttpError(
-            409,
-            'version_conflict',
-            'someone changed this submittal a moment ago; reload it',
-          );
+          throw conflict('version_conflict', 'someone changed this submittal a moment ago; reload it');
         await tx
           .update(submittalReviewers)
           .set({ decision: input.decision, decisionNote: input.note, decidedAt: now })
@@ -906,11 +908,7 @@ export function createSubmittalService(
         .where(and(eq(submittals.id, r.id), eq(submittals.version, r.version)))
         .returning({ id: submittals.id });
       if (rows.length === 0)
-        throw new HttpError(
-          409,
-          'version_conflict',
-          'someone changed this submittal a moment ago; reload it',
-        );
+        throw conflict('version_conflict', 'someone changed this submittal a moment ago; reload it');
       await recordAudit(tx, {
         actorId: actor.id,
         projectId: r.projectId,

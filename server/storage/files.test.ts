@@ -51,14 +51,14 @@ describe('upload types are judged by content', () => {
       'image/vnd.dwg',
     );
     await expect(detectAllowedType(Buffer.from('hello'), 'fake.pdf')).rejects.toMatchObject({
-      status: 415,
+      kind: 'unsupported',
       code: 'unsupported_type',
     });
     await expect(detectAllowedType(Buffer.from('504b030414000000', 'hex'), 'a.pdf')).rejects.toMatchObject({
-      status: 415,
+      kind: 'unsupported',
     });
     await expect(detectAllowedType(Buffer.alloc(0), 'empty.pdf')).rejects.toMatchObject({
-      status: 400,
+      kind: 'malformed',
       code: 'empty_file',
     });
   });

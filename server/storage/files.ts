@@ -1,9 +1,8 @@
 import { createHash, randomUUID } from 'node:crypto';
-import { pipeline, Transform } from 'node:stream';
+import { pipeline, type Readable, Transform } from 'node:stream';
 import { finished } from 'node:stream/promises';
 import { fileTypeFromBuffer } from 'file-type';
-import { HttpError } from '../http/errors';
-import type { IncomingFile } from '../http/upload';
+import { DomainError } from '../services/errors';
 import type { ObjectStore } from './object-store';
 
 /*
@@ -63,19 +62,38 @@ export function withTypeExtension(name: string, contentType: string): string {
 /** Detects the type of an upload from its bytes; refuses what is empty or not on the allow-list. */
 export async function detectAllowedType(bytes: Buffer, name: string): Promise<string> {
   if (bytes.length === 0)
-    throw new HttpError(400, 'empty_file', `“${name}” is empty (0 bytes): nothing was stored`, {
+    throw new DomainError('malformed', 'empty_file', `“${name}” is empty (0 bytes): nothing was stored`, {
       files: `${name}: empty file`,
     });
   const detected = await fileTypeFromBuffer(bytes);
   if (!detected || !ALLOWED_TYPES[detected.mime])
-    throw new HttpError(
-      415,
+    throw new DomainError(
+      'unsupported',
       'unsupported_type',
       `“${name}” is ${detected ? `a ${detected.ext.toUpperCase()} file` : 'not a recognised file'} by its content; accepted: PDF, PNG, JPEG or DWG. Nothing was stored.`,
       { files: `${name}: type not accepted` },
     );
   return detected.mime;
 }
+
+/** One file of an upload as it arrives: its name as sent, and its bytes as a stream. */
+export interface IncomingFile {
+  originalName: string;
+  stream: Readable;
+}
+
+/** What a service does with each arriving file (`store`), and how it takes one back (`remove`). */
+export interface FileHandler<T> {
+  store(file: IncomingFile): Promise<T>;
+  remove(stored: T): Promise<void>;
+}
+
+/**
+ * Receives the files of a multipart upload, handing each to `handler.store` as it arrives (all or nothing:
+ * when anything fails, what was stored is removed and the upload is refused). Built by the HTTP layer
+ * (server/http/upload.ts) after the permission check, called by the service once it knows where the files go.
+ */
+export type ReceiveFiles = <T>(handler: FileHandler<T>) => Promise<T[]>;
 
 /** Bytes enough for file-type to judge any of the accepted types (its own sample size). */
 const SNIFF_BYTES = 4100;
@@ -97,7 +115,7 @@ export interface StoredUpload {
  */
 export function fileIntake(
   storage: ObjectStore,
-  opts: { keyPrefix: string; room: number; full: () => HttpError },
+  opts: { keyPrefix: string; room: number; full: () => DomainError },
 ) {
   let taken = 0;
   return {

@@ -8,7 +8,7 @@ import {
 } from '@aws-sdk/client-s3';
 import { Upload } from '@aws-sdk/lib-storage';
 import type { StorageConfig } from '../config';
-import { HttpError } from '../http/errors';
+import { DomainError } from '../services/errors';
 
 /**
  * Stored files, through the S3 API: a real service (AWS S3 or any S3-compatible one) in production, the
@@ -68,7 +68,7 @@ export function createS3Store(target: S3Target): ObjectStore {
         return { body: out.Body as Readable, size: out.ContentLength };
       } catch (err) {
         if (err instanceof NoSuchKey || (err as { name?: string }).name === 'NoSuchKey')
-          throw new HttpError(404, 'not_found', 'the stored file is missing');
+          throw new DomainError('not_found', 'not_found', 'the stored file is missing');
         throw err;
       }
     },
@@ -93,7 +93,11 @@ export function createS3Store(target: S3Target): ObjectStore {
 /** Used when an app is built without storage (e.g. a bare API benchmark): uploads answer 503. */
 export const unavailableStore = (): ObjectStore => {
   const refuse = async (): Promise<never> => {
-    throw new HttpError(503, 'storage_unavailable', 'file storage is not configured on this server');
+    throw new DomainError(
+      'unavailable',
+      'storage_unavailable',
+      'file storage is not configured on this server',
+    );
   };
   return { put: refuse, get: refuse, delete: refuse, list: refuse };
 };

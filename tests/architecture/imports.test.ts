@@ -2,7 +2,10 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 
-/** Import rules of the layout (see DEVELOPERS.md): shared/ is pure; src/ and server/ never import each other; routes do not query the database. */
+/**
+ * Import rules of the layout (see DEVELOPERS.md): shared/ is pure; src/ and server/ never import each other;
+ * routes do not query the database; services, storage and auth never import the HTTP layer.
+ */
 function files(dir: string): string[] {
   return readdirSync(dir).flatMap((name) => {
     const p = path.join(dir, name);
@@ -66,6 +69,14 @@ describe('import rules', () => {
     const offenders = files('server/routes').flatMap((f) =>
       importsOf(f)
         .filter((i) => /db\/|drizzle-orm/.test(i))
+        .map((i) => `${f}: ${i}`),
+    );
+    expect(offenders).toEqual([]);
+  });
+  it('services, storage and auth import nothing from server/http or server/routes (they throw DomainError)', () => {
+    const offenders = ['server/services', 'server/storage', 'server/auth'].flatMap(files).flatMap((f) =>
+      importsOf(f)
+        .filter((i) => /(^|\/)(http|routes)(\/|$)/.test(i))
         .map((i) => `${f}: ${i}`),
     );
     expect(offenders).toEqual([]);

@@ -236,3 +236,14 @@ describe('Lehrbuch der Bauphysik ch. 13.2.5 Beispiel b — flat roof, Tab. 13.6'
     expect(Math.abs(gev * PERIOD - 0.036)).toBeLessThanOrEqual(0.0005);
   });
 });
+
+describe('ISO 13788:2012 Annex A — internal humidity classes', () => {
+  // Source: ISO 13788:2012 Annex A, Δp at θ_e ≤ 0 °C per class, falling linearly to 0 at 20 °C, and the 1.10
+  // factor on Δp [memory]; classes 1–4 also match a public reproduction of the 2001 edition's Annex A
+  // (pachi/condensaciones, psicrom.py) [third-party]. Exact.
+  it('[memory] Δp = 270, 540, 810, 1080, 1350 Pa for classes 1–5; factor 1.10', async () => {
+    const { HUMIDITY_CLASS_EXCESS, SAFETY_FACTOR_DEFAULT } = await import('@shared/calc/moisture/interior');
+    expect([...HUMIDITY_CLASS_EXCESS]).toEqual([270, 540, 810, 1080, 1350]);
+    expect(SAFETY_FACTOR_DEFAULT).toBe(1.1);
+  });
+});

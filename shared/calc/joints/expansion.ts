@@ -11,8 +11,10 @@ export const expansionMaterialSchema = z.object({
   published: z.string().min(1).describe('The figure as the named table prints it'),
   range: z.object({ low: alpha('Low end'), high: alpha('High end') }).nullable(),
   source: z.string().min(1).describe('Table the value belongs to'),
-  provenance: z.string().min(1).describe('"seen — …", "third-party — …" or "memory — verify against …"'),
 });
+
+/** How a table α is worded wherever it is shown (how each row was checked is in thermal-expansion.source.md). */
+export const GENERIC_EXPANSION_NOTE = 'Generic value — use the maker’s declared coefficient where it differs';
 export type ExpansionMaterial = z.infer<typeof expansionMaterialSchema>;
 
 const tableSchema = z

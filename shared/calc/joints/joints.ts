@@ -1,7 +1,7 @@
 import { CalcInputError, requireNonNegative, requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
 import { INCH } from '@shared/units';
-import { findExpansionMaterial } from './expansion';
+import { findExpansionMaterial, GENERIC_EXPANSION_NOTE } from './expansion';
 import type {
   Backer,
   BackerCell,
@@ -105,7 +105,8 @@ interface ResolvedSide {
   label: string;
   alpha: number;
   length: number;
-  provenance?: string;
+  /** True when α came from the generic table rather than the user's entry. */
+  generic: boolean;
 }
 
 function resolveSide(side: JointSide, path: string): ResolvedSide {
@@ -117,10 +118,10 @@ function resolveSide(side: JointSide, path: string): ResolvedSide {
         `${path}.material`,
         `unknown material "${side.material}" — pick a row of the expansion table or enter a custom α`,
       );
-    return { label: row.name, alpha: row.alpha, length: side.length, provenance: row.provenance };
+    return { label: row.name, alpha: row.alpha, length: side.length, generic: true };
   }
   requirePositive(side.alpha, `${path}.alpha`, 'coefficient of thermal expansion α');
-  return { label: side.label ?? 'custom α', alpha: side.alpha, length: side.length };
+  return { label: side.label ?? 'custom α', alpha: side.alpha, length: side.length, generic: false };
 }
 
 function installationRange(t: InstallationTemperature, path: string): TemperatureRange {
@@ -210,8 +211,8 @@ export function calculateJoint(joint: JointInput, path = 'joint'): JointResult {
         M,
       ),
     );
-    if (s.provenance?.startsWith('memory'))
-      warnings.push(`α for ${s.label} is recalled, not confirmed from a published table: ${s.provenance}`);
+    const generic = `α of ${s.label}: ${GENERIC_EXPANSION_NOTE.toLowerCase()}`;
+    if (s.generic && !warnings.includes(generic)) warnings.push(generic);
     return { label: s.label, alpha: s.alpha, length: s.length, extension, compression };
   });
 

@@ -6,9 +6,8 @@ import type { TemperatureRange } from './schema';
  * sees the temperature of the moving material's surface, not the air. Outer surfaces run above the air in
  * sun and below it on clear nights (radiation to the sky) — NRC Canadian Building Digest CBD-47
  * "Extreme Temperatures at the Outer Surfaces of Buildings" (Stephenson, 1963) and NBS BMS 64 "Solar
- * Heating of Various Surfaces" (1941) describe both effects [seen, abstracts]. The magnitudes below are
- * common trade practice for lightweight insulated cladding [memory] — a project surface-temperature
- * analysis replaces them.
+ * Heating of Various Surfaces" (1941) describe both effects. The magnitudes below are common trade practice
+ * for lightweight insulated cladding — a project surface-temperature analysis replaces them.
  */
 
 export const SURFACE_FINISHES = ['light', 'medium', 'dark'] as const;
@@ -16,13 +15,13 @@ export const EXPOSURES = ['sun', 'shade'] as const;
 export type SurfaceFinish = (typeof SURFACE_FINISHES)[number];
 export type Exposure = (typeof EXPOSURES)[number];
 
-/** Hottest surface above hottest air, K — common trade practice [memory]. */
+/** Hottest surface above hottest air, K — common trade practice. */
 export const SURFACE_RISE_ABOVE_AIR: Readonly<Record<Exposure, Readonly<Record<SurfaceFinish, number>>>> = {
   sun: { light: 10, medium: 25, dark: 40 },
   shade: { light: 0, medium: 0, dark: 0 },
 };
 
-/** Coldest surface below coldest air on a clear night, K — common trade practice [memory]. */
+/** Coldest surface below coldest air on a clear night, K — common trade practice. */
 export const NIGHT_SKY_DROP = 5;
 
 /** T_surface,max = T_air,max + rise(finish, exposure); T_surface,min = T_air,min − night-sky drop. */

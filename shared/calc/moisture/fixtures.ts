@@ -37,7 +37,7 @@ export function metalPanelMoistureWall({ vapourRetarder = true } = {}): Moisture
       thickness: 0.0007,
       conductivity: 50,
       materialId: 'steel',
-      // Vapour-tight; taken as s_d = 1500 m, the "diffusion-tight" threshold of DIN 4108-3 [memory].
+      // Vapour-tight; taken as s_d = 1500 m, the "diffusion-tight" threshold of DIN 4108-3.
       vapour: { kind: 'sd', sd: 1500 },
     },
     {

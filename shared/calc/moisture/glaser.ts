@@ -6,7 +6,7 @@ import { saturationPressureIso13788 } from './psychrometrics';
  * pressure from cumulative s_d, condensation planes by the tangent ("taut string") construction. Nodes are
  * numbered from the exterior surface (0) to the interior surface (n − 1); s_d and R are counted from the
  * outside. Surface vapour resistances are neglected, so p = p_e at node 0 and p = p_i at node n − 1.
- * Clause numbers are recalled [memory]; δ₀ and the rate formula reproduce the published worked examples in
+ * δ₀ and the rate formula reproduce the published worked examples in
  * tests/verification/moisture.verification.test.ts. Plain number arrays throughout: they are what the JSON result holds, and V8 handles small packed arrays of
  * doubles faster than small typed arrays, whose separate buffers cost more to allocate and collect.
  */

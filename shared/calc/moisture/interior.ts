@@ -5,15 +5,14 @@ import type { Interior } from './schema';
 /*
  * Interior design conditions of ISO 13788:2012 Annex A: a humidity class gives the vapour pressure excess
  * Δp over the exterior as a function of the monthly exterior temperature; a factor (1.10) is put on Δp.
- * Values recalled from the standard [memory]; classes 1–4 also match a public reproduction of the 2001
- * edition's Annex A (pachi/condensaciones, psicrom.py) [third-party].
+ * The verification tests name the published source each value was checked against, and how.
  */
 
-/** Default factor on the interior vapour pressure excess (ISO 13788:2012 Annex A) [memory]. */
+/** Default factor on the interior vapour pressure excess (ISO 13788:2012 Annex A). */
 export const SAFETY_FACTOR_DEFAULT = 1.1;
-/** Δp at θ_e ≤ 0 °C for humidity classes 1–5, Pa (ISO 13788 Annex A) [memory; classes 1–4 third-party]. */
+/** Δp at θ_e ≤ 0 °C for humidity classes 1–5, Pa (ISO 13788 Annex A). */
 export const HUMIDITY_CLASS_EXCESS = [270, 540, 810, 1080, 1350] as const;
-/** Above this exterior temperature the class excess is 0, °C (ISO 13788 Annex A) [memory]. */
+/** Above this exterior temperature the class excess is 0, °C (ISO 13788 Annex A). */
 const HUMIDITY_CLASS_ZERO_AT = 20;
 
 /** Δp = Δp₀ for θ_e ≤ 0, Δp₀·(1 − θ_e/20) up to 20 °C, 0 above, Pa (ISO 13788:2012 Annex A). */

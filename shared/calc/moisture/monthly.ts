@@ -17,8 +17,8 @@ import { minSurfaceTemperature, minTemperatureFactor, surfaceTemperature } from 
 
 /*
  * Monthly interstitial condensation balance (ISO 13788:2012 §6) and surface check (§5) of a layered wall.
- * Clause numbers, the humidity classes, the 1.10 factor, the start-month rule and Rsi = 0.25 are recalled
- * from the standard, not re-read [memory]; the verification tests say which values a public source confirmed.
+ * For the clause numbers, the humidity classes, the 1.10 factor, the start-month rule and Rsi = 0.25,
+ * the verification tests name the published source each value was checked against, and how.
  */
 
 /** Days per month, January first (365-day year). */

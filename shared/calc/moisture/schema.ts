@@ -87,7 +87,7 @@ export const interiorSchema = z
         .min(1)
         .max(5)
         .describe(
-          'ISO 13788:2012 Annex A internal humidity class, integer 1–5: 1 storage, 2 offices and shops, 3 dwellings with low occupancy, 4 dwellings with high occupancy, sports halls, kitchens, canteens, 5 special buildings (laundry, brewery, swimming pool). Δp at θ_e ≤ 0 °C = 270/540/810/1080/1350 Pa, falling linearly to 0 at θ_e = 20 °C [memory — verify against the standard]',
+          'ISO 13788:2012 Annex A internal humidity class, integer 1–5: 1 storage, 2 offices and shops, 3 dwellings with low occupancy, 4 dwellings with high occupancy, sports halls, kitchens, canteens, 5 special buildings (laundry, brewery, swimming pool). Δp at θ_e ≤ 0 °C = 270/540/810/1080/1350 Pa, falling linearly to 0 at θ_e = 20 °C',
         ),
     }),
   ])

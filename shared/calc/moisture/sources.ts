@@ -1,4 +1,4 @@
-/** Units and sources named in the moisture trace (ISO 13788:2012 clause numbers recalled [memory]). */
+/** Units and sources named in the moisture trace (ISO 13788:2012). */
 export const RK = 'm²·K/W';
 export const M = 'm';
 export const PA = 'Pa';

@@ -5,9 +5,9 @@ import { dewPoint } from './psychrometrics';
  * element. Thermal bridges (girts, clips, studs) need their own f_Rsi from ISO 10211 or a published value.
  */
 
-/** Internal surface resistance for the surface-humidity check on opaque elements, m²·K/W (ISO 13788:2012 §5) [memory]. */
+/** Internal surface resistance for the surface-humidity check on opaque elements, m²·K/W (ISO 13788:2012 §5). */
 export const RSI_SURFACE = 0.25;
-/** Surface relative humidity taken as critical for mould growth (ISO 13788:2012 §5) [memory]. */
+/** Surface relative humidity taken as critical for mould growth (ISO 13788:2012 §5). */
 export const CRITICAL_SURFACE_RH = 0.8;
 /** Dew point of (nearly) dry air is taken at this vapour pressure, Pa, so that φ = 0 stays finite. */
 const DRY_AIR_PRESSURE = 1e-3;

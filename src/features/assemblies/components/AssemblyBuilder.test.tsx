@@ -11,13 +11,13 @@ afterEach(cleanup);
 const projectId = '11111111-1111-4111-8111-111111111111';
 
 /** The builder for a new assembly from the sample wall: no server is needed until Save. */
-function renderBuilder(system: 'SI' | 'IP' = 'SI') {
+function renderBuilder(system: 'SI' | 'IP' = 'SI', initial = startingInput('sample')) {
   const qc = new QueryClient();
   const router = createMemoryRouter(
     [
       {
         path: '/projects/:id/assemblies/new',
-        element: <AssemblyBuilder projectId={projectId} initial={startingInput('sample')} />,
+        element: <AssemblyBuilder projectId={projectId} initial={initial} />,
       },
     ],
     { initialEntries: [`/projects/${projectId}/assemblies/new`] },
@@ -95,5 +95,21 @@ describe('Assembly builder', () => {
     expect(Number.parseFloat((screen.getByTestId('result-Reff').textContent ?? '').slice(2))).toBeGreaterThan(
       Number.parseFloat((before ?? '').slice(2)),
     );
+  });
+
+  it('a new layer takes the library μ, or says at once that its vapour data is needed', async () => {
+    const sample = startingInput('sample');
+    // Every sample layer has vapour data (μ 1 as a placeholder), so only a new layer can lack it.
+    renderBuilder('SI', { ...sample, vapour: sample.thermal.layers.map(() => ({ kind: 'mu', mu: 1 })) });
+    await screen.findByTestId('result-Reff');
+    const count = sample.thermal.layers.length;
+    const choose = screen.getByLabelText(/Add a layer/);
+    fireEvent.change(choose, { target: { value: 'generic:mineral-wool-board' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Add layer' }));
+    expect(screen.queryByTestId(`vapour-needed-${count}`)).toBeNull();
+    fireEvent.change(choose, { target: { value: 'kind:homogeneous' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Add layer' }));
+    const mark = await screen.findByTestId(`vapour-needed-${count + 1}`);
+    expect(mark.textContent).toMatch(/Vapour data needed for the moisture check/);
   });
 });

@@ -1,3 +1,4 @@
+import type { Vapour } from '@shared/calc/moisture/schema';
 import { findMaterial, GENERIC_MATERIAL_NOTE, materials } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import { useState } from 'react';
@@ -19,6 +20,8 @@ import {
   remapAfterMove,
   remapAfterRemove,
   useBuilder,
+  vapourFromFirm,
+  vapourFromGeneric,
 } from '../form';
 import { CATEGORY_LABELS } from '../layer-class';
 import { formatMeasure } from '../units';
@@ -54,10 +57,11 @@ export function LayersEditor() {
   }
 
   /** Vapour data (moisture check) is kept one entry per layer: move, drop or add its entry alongside. */
-  function alignVapour(edit: (list: unknown[]) => void) {
+  /** Keep the vapour list one entry per layer; `count` starts one (all "not entered") where there is none. */
+  function alignVapour(edit: (list: unknown[]) => void, count?: number) {
     const vapour = getValues('vapour');
-    if (!Array.isArray(vapour)) return;
-    const next = [...vapour];
+    if (!Array.isArray(vapour) && count === undefined) return;
+    const next = Array.isArray(vapour) ? [...vapour] : Array.from({ length: count! }, () => null);
     edit(next);
     setValue('vapour', next as AssemblyFormValues['vapour'], { shouldDirty: true });
   }
@@ -87,10 +91,11 @@ export function LayersEditor() {
     setAnnouncement(`${name} removed.`);
   }
 
-  function insertLayer(at: number, layer: Layer) {
+  function insertLayer(at: number, layer: Layer, vapour: Vapour | null) {
+    const before = fields.length;
     insert(at, layer);
     remapFasteners((k) => remapAfterInsert(k, at));
-    alignVapour((list) => list.splice(at, 0, null));
+    alignVapour((list) => list.splice(at, 0, vapour), vapour ? before : undefined);
     setAnnouncement(`${layer.name} added at position ${at + 1}.`);
   }
 
@@ -150,8 +155,11 @@ function LayerRow({
   const system = useUnitSystem();
   const { layerR, disregarded } = useBuilder();
   const layer = useWatch({ control, name: p(`thermal.layers.${i}`) }) as Layer | undefined;
+  const vapour = useWatch({ control, name: 'vapour' }) as unknown[] | undefined;
   if (!layer) return null;
   const base = `thermal.layers.${i}`;
+  // Said here at once, not found out as "not evaluated" at check time (the moisture page marks it too).
+  const vapourNeeded = Array.isArray(vapour) && !vapour[i];
   const R = layerR(i);
   const label = layer.name || `Layer ${i + 1}`;
 
@@ -271,6 +279,17 @@ function LayerRow({
           </div>
         ) : null}
 
+        {vapourNeeded ? (
+          <p
+            className="flex items-start gap-1 text-xs font-medium text-warning"
+            data-testid={`vapour-needed-${i}`}
+          >
+            <span aria-hidden="true">▲</span>
+            <span>
+              Vapour data needed for the moisture check — enter μ, s_d or permeance on the moisture sheet.
+            </span>
+          </p>
+        ) : null}
         {layer.kind === 'air' ? <AirFields index={i} layer={layer} array={array} /> : null}
         {layer.kind === 'framed' ? <FramedFields index={i} layer={layer} array={array} /> : null}
 
@@ -539,7 +558,7 @@ function AddLayer({
 }: {
   count: number;
   names: string[];
-  onAdd: (at: number, layer: Layer) => void;
+  onAdd: (at: number, layer: Layer, vapour: Vapour | null) => void;
 }) {
   const { firmName, firmMaterials } = useBuilder();
   const [choice, setChoice] = useState('generic:mineral-wool-board');
@@ -553,16 +572,17 @@ function AddLayer({
   function add() {
     const [source, id] = choice.split(':') as [string, string];
     let layer: Layer | undefined;
+    let vapour: Vapour | null = null;
     if (source === 'generic') {
       const m = findMaterial(id);
-      if (m) layer = layerFromGeneric(m);
+      if (m) [layer, vapour] = [layerFromGeneric(m), vapourFromGeneric(m)];
     } else if (source === 'firm') {
       const m = firmMaterials.find((x) => x.id === id);
-      if (m) layer = layerFromFirm(m);
+      if (m) [layer, vapour] = [layerFromFirm(m), vapourFromFirm(m)];
     } else layer = layerOfKind(id as LayerKind, { name: LAYER_KIND_LABELS[id as LayerKind] });
     if (!layer) return;
     const at = position === 'end' ? count : position === 'start' ? 0 : Number(position) + 1;
-    onAdd(at, layer);
+    onAdd(at, layer, vapour);
   }
 
   return (

@@ -148,6 +148,15 @@ export function VapourTable({
                       {LAYER_KIND_WORDS[layer.kind]}
                       {disregarded ? ' · outside the ventilated cavity: disregarded' : ''}
                     </span>
+                    {d.kind === 'none' ? (
+                      <p
+                        className="mt-1 flex gap-1 text-xs font-medium text-warning"
+                        data-testid={`vapour-needed-${i}`}
+                      >
+                        <span aria-hidden="true">▲</span>
+                        <span>Vapour data needed</span>
+                      </p>
+                    ) : null}
                     {buildup.map((p) => (
                       <p key={p.text} className="mt-1 flex gap-1 text-xs font-medium text-caution">
                         <span aria-hidden="true">✕</span>

@@ -9,6 +9,7 @@ import demo from '../../data/seed/demo.json' with { type: 'json' };
 import demoAssembly from '../../data/seed/demo-assembly.json' with { type: 'json' };
 import demoAttachmentLibrary from '../../data/seed/demo-attachment-library.json' with { type: 'json' };
 import demoCriteria from '../../data/seed/demo-criteria.json' with { type: 'json' };
+import demoPanelAssembly from '../../data/seed/demo-panel-assembly.json' with { type: 'json' };
 import type { Auth } from '../auth/auth';
 import { createAssemblyService } from '../services/assemblies';
 import { createCriteriaService } from '../services/criteria';
@@ -53,6 +54,8 @@ export const demoScenario = demoSchema.parse(demo);
 const demoContent = z
   .object({ assembly: assemblyInputSchema, wind: projectWindSchema, climate: projectClimateSchema })
   .parse(demoAssembly);
+/** The demo project's second assembly: an insulated metal panel wall (invented). */
+const demoPanel = z.object({ assembly: assemblyInputSchema }).parse(demoPanelAssembly).assembly;
 /** The demo firm's illustrative code table (invented values, titled as such). */
 const demoCodeTable = z
   .object({ firm: z.string(), createdBy: z.email(), set: criteriaSetCreateSchema })
@@ -125,12 +128,14 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
         .insert(projectMembers)
         .values({ projectId: created.id, userId: userIds.get(m.email)!, role: m.role });
     if (index > 0) continue;
-    // The demo project carries wind data, a monthly climate and one assembly with every module's data.
+    // The demo project carries wind data, a monthly climate, one assembly with every module's data and an
+    // insulated metal panel wall.
     await db
       .update(projectTable)
       .set({ wind: demoContent.wind, climate: demoContent.climate })
       .where(eq(projectTable.id, created.id));
     await assemblies.create(created.id, userIds.get(owner)!, demoContent.assembly);
+    await assemblies.create(created.id, userIds.get(owner)!, demoPanel);
   }
   await createCriteriaService(db).create(
     firmIds.get(demoCodeTable.firm)!,

@@ -1,3 +1,4 @@
+import demoPanel from '../../data/seed/demo-panel-assembly.json' with { type: 'json' };
 import { describe, expect, it } from 'vitest';
 import { calculateJointSchedule } from '../calc/joints/joints';
 import { calculateThermal } from '../calc/thermal/thermal';
@@ -25,5 +26,13 @@ describe('assembly templates', () => {
     const R = 0.13 + 0.0005 / 50 + 0.1 / 0.023 + 0.0004 / 50 + 0.04;
     const dU = 0.004 / (0.333 * 1.8) + 0.02 / 1;
     expect(calculateThermal(t.input.thermal).Ueff).toBeCloseTo(1 / R + dU, 4);
+  });
+
+  it('the demo insulated panel wall (invented values) parses, calculates and its joints size — derived', () => {
+    const input = assemblyInputSchema.parse(demoPanel.assembly);
+    const R = 0.13 + 0.0005 / 50 + 0.1 / 0.023 + 0.0005 / 50 + 0.04;
+    const dU = 0.004 / (0.333 * 1.8) + 0.015 / 1;
+    expect(calculateThermal(input.thermal).Ueff).toBeCloseTo(1 / R + dU, 4);
+    expect(calculateJointSchedule(input.joints!).joints).toHaveLength(3);
   });
 });

@@ -90,6 +90,7 @@ export interface StorageConfig {
 }
 
 const MB = 1024 * 1024;
+
 export type TrustProxy = false | number | string;
 
 const NAMED_RANGES = new Set(['loopback', 'linklocal', 'uniquelocal']);

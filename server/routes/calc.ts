@@ -161,32 +161,42 @@ export const calcRoutes = [
   defineRoute({
     method: 'post',
     path: '/v1/calc/takeoff',
-    summary:
-      'Material takeoff from a simple elevation (joints, sealant packages, tape, trim, fasteners); `?format=csv` for CSV (`&units=IP`: ft, ft², US gal)',
+    summary: 'Material takeoff from a simple elevation (joints, sealant packages, tape, trim, fasteners)',
     tag: 'Calculations',
     access: { kind: 'public' },
     stateless: true,
-    query: z.object({
-      format: z.enum(['json', 'csv']).default('json'),
-      units: unitSystemSchema.default('SI'),
-    }),
     body: takeoffInputSchema,
     workLimits: [CALC_WORK_LIMITS.openings],
     example: demoElevation(),
     responses: {
-      200: {
-        description: 'Quantities with a trace (JSON), or the same lines as CSV',
-        schema: takeoffResultSchema,
-      },
+      200: { description: 'Quantities with a trace', schema: takeoffResultSchema },
       ...calcErrors,
       ...overWork(CALC_WORK_LIMITS.openings),
     },
-    handler: async ({ body, query }) => {
-      const result = calculateTakeoff(body);
-      return query.format === 'json'
-        ? result
-        : new FileAnswer('text/csv; charset=utf-8', takeoffToCsv(result, query.units), 'takeoff.csv');
+    handler: async ({ body }) => calculateTakeoff(body),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/v1/calc/takeoff.csv',
+    summary: 'The same takeoff as a CSV download (`?units=IP`: ft, ft², US gal)',
+    tag: 'Calculations',
+    access: { kind: 'public' },
+    stateless: true,
+    query: z.object({ units: unitSystemSchema.default('SI') }),
+    body: takeoffInputSchema,
+    workLimits: [CALC_WORK_LIMITS.openings],
+    example: demoElevation(),
+    responses: {
+      200: { description: 'The takeoff lines as CSV', contentType: 'text/csv' },
+      ...calcErrors,
+      ...overWork(CALC_WORK_LIMITS.openings),
     },
+    handler: async ({ body, query }) =>
+      new FileAnswer(
+        'text/csv; charset=utf-8',
+        takeoffToCsv(calculateTakeoff(body), query.units),
+        'takeoff.csv',
+      ),
   }),
   defineRoute({
     method: 'get',

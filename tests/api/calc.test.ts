@@ -72,7 +72,7 @@ describe('public calculation API', () => {
     const json = await t.anonymous().post('/api/v1/calc/takeoff').send(demoElevation());
     expect(json.status).toBe(200);
     expect(json.body.lines.length).toBeGreaterThan(0);
-    const csv = await t.anonymous().post('/api/v1/calc/takeoff?format=csv').send(demoElevation());
+    const csv = await t.anonymous().post('/api/v1/calc/takeoff.csv').send(demoElevation());
     expect(csv.status).toBe(200);
     expect(csv.headers['content-type']).toMatch(/text\/csv/);
     expect(csv.text.split('\r\n').length).toBeGreaterThan(3);

@@ -72,17 +72,14 @@ describe.each(testDatabases())('everyday use of the API on %s', (kind) => {
   });
 
   it('the takeoff CSV follows the unit choice (`units=IP`: ft, ft², US gal) and refuses another with 400', async () => {
-    const ip = await t.anonymous().post('/api/v1/calc/takeoff?format=csv&units=IP').send(demoElevation());
+    const ip = await t.anonymous().post('/api/v1/calc/takeoff.csv?units=IP').send(demoElevation());
     expect(ip.status).toBe(200);
     expect(ip.text).toBe(takeoffToCsv(calculateTakeoff(demoElevation()), 'IP'));
     expect(ip.text).toMatch(/,ft,/);
     expect(ip.text).not.toMatch(/,m,/);
-    const si = await t.anonymous().post('/api/v1/calc/takeoff?format=csv').send(demoElevation());
+    const si = await t.anonymous().post('/api/v1/calc/takeoff.csv').send(demoElevation());
     expect(si.text).toBe(takeoffToCsv(calculateTakeoff(demoElevation())));
-    const bad = await t
-      .anonymous()
-      .post('/api/v1/calc/takeoff?format=csv&units=furlongs')
-      .send(demoElevation());
+    const bad = await t.anonymous().post('/api/v1/calc/takeoff.csv?units=furlongs').send(demoElevation());
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields ?? {}).join()).toMatch(/units/);
   });

@@ -275,7 +275,7 @@ describe.each(testDatabases())('CSV exports on %s', (kind) => {
       walls: { name: string }[];
     };
     const body = { ...example, walls: example.walls.map((w) => ({ ...w, name: '=cmd|" /C calc"!A0' })) };
-    const res = await t.anonymous().post('/api/v1/calc/takeoff?format=csv').send(body);
+    const res = await t.anonymous().post('/api/v1/calc/takeoff.csv').send(body);
     expect(res.status).toBe(200);
     const firstCells = res.text
       .split('\r\n')

@@ -93,6 +93,7 @@ const EXPECTED: Record<string, Expectation> = {
   'POST /v1/calc/wind': 'public',
   'POST /v1/calc/joints': 'public',
   'POST /v1/calc/takeoff': 'public',
+  'POST /v1/calc/takeoff.csv': 'public',
   'GET /reference/materials': 'public',
   'GET /organisations/:orgId/criteria-sets': 'criteriaRead',
   'POST /organisations/:orgId/criteria-sets': 'criteriaWrite',

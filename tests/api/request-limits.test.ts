@@ -276,7 +276,7 @@ describe('limits of one app', () => {
           fields: { joints: 'at most 300 joints (got 301); split it into several requests' },
         });
         expect((await post(t, '/api/v1/calc/takeoff', openings(10, 200), headers)).status).toBe(200);
-        const tooManyOpenings = await post(t, '/api/v1/calc/takeoff?format=csv', openings(11, 200), headers);
+        const tooManyOpenings = await post(t, '/api/v1/calc/takeoff.csv', openings(11, 200), headers);
         expect(tooManyOpenings.status).toBe(413);
         expect(tooManyOpenings.body.error.fields).toEqual({
           walls: 'at most 2000 openings in all walls together (got 2200); split it into several requests',

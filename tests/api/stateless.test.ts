@@ -23,6 +23,7 @@ describe('lean path for stateless routes', () => {
       '/v1/calc/joints',
       '/v1/calc/moisture',
       '/v1/calc/takeoff',
+      '/v1/calc/takeoff.csv',
       '/v1/calc/thermal',
       '/v1/calc/wind',
     ]);
@@ -136,13 +137,13 @@ describe('lean path for stateless routes', () => {
     );
 
     it('gives the takeoff as a CSV download by both paths, and a 422 for impossible input', async () => {
-      const takeoff = statelessRoutes.find((r) => r.path === '/v1/calc/takeoff')!;
-      const csv = await same('/api/v1/calc/takeoff?format=csv', JSON.stringify(takeoff.example));
+      const takeoff = statelessRoutes.find((r) => r.path === '/v1/calc/takeoff.csv')!;
+      const csv = await same('/api/v1/calc/takeoff.csv', JSON.stringify(takeoff.example));
       expect(csv.headers['content-type']).toBe('text/csv; charset=utf-8');
       expect(csv.headers['content-disposition']).toBe('attachment; filename="takeoff.csv"');
-      expect((await same('/api/v1/calc/takeoff?format=xml', JSON.stringify(takeoff.example))).status).toBe(
-        400,
-      );
+      expect(
+        (await same('/api/v1/calc/takeoff.csv?units=cubits', JSON.stringify(takeoff.example))).status,
+      ).toBe(400);
     });
 
     it('refuses a body over 1 MiB with 413 (Express serves it)', async () => {

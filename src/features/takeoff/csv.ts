@@ -17,7 +17,7 @@ export function takeoffFileName(assemblyName: string): string {
 
 /**
  * The takeoff as an RFC 4180 CSV file in the person's units (the same text as
- * `POST /api/v1/calc/takeoff?format=csv&units=…`).
+ * `POST /api/v1/calc/takeoff.csv?units=…`).
  */
 export function takeoffCsvFile(
   result: TakeoffResult,

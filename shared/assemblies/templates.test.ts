@@ -1,5 +1,5 @@
-import demoPanel from '../../data/seed/demo-panel-assembly.json' with { type: 'json' };
 import { describe, expect, it } from 'vitest';
+import demoPanel from '../../data/seed/demo-panel-assembly.json' with { type: 'json' };
 import { calculateJointSchedule } from '../calc/joints/joints';
 import { calculateThermal } from '../calc/thermal/thermal';
 import { assemblyInputSchema } from '../schemas/assembly';

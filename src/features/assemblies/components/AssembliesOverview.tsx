@@ -17,7 +17,7 @@ const UNCHECKED = 'none';
 
 /**
  * The project's assemblies: the table, and for those who may write, the ways to start a new one
- * (from the sample metal-panel wall, or blank). Used on the overview and, `searchable` (name, wall category,
+ * (from a template, or blank). Used on the overview and, `searchable` (name, wall category,
  * last check's verdict, kept in the address), on the Assemblies tab.
  */
 export function AssembliesOverview({
@@ -74,8 +74,9 @@ export function AssembliesOverview({
       </div>
       {mayWrite ? (
         <p className="text-xs text-ink-muted">
-          “New assembly” starts from a sample metal-panel rainscreen on steel studs with clips, girts and
-          fasteners; change every value to suit the project.
+          “New assembly” starts from a template — an insulated metal panel on girts, a metal rainscreen on
+          clips and girts, or a steel-stud backup with exterior insulation — with generic values; change every
+          value to suit the project.
         </p>
       ) : null}
     </div>

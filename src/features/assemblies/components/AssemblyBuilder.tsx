@@ -171,6 +171,8 @@ export function AssemblyBuilder({
               <SelectField
                 path="wallCategory"
                 label="Wall category"
+                required
+                placeholder="Choose…"
                 options={WALL_CATEGORIES.map((c) => ({ value: c, label: WALL_CATEGORY_LABELS[c] }))}
               />
               <SelectField

@@ -113,19 +113,32 @@ export function SelectField({
   options,
   hint,
   className,
+  placeholder,
+  required,
 }: {
   path: string;
   label: ReactNode;
   options: readonly { value: string; label: string }[];
   hint?: ReactNode;
   className?: string;
+  /** A first, empty choice ("Choose…") for a required choice with no default. */
+  placeholder?: string;
+  required?: boolean;
 }) {
   const { register } = useFormContext<AssemblyFormValues>();
   const error = useFieldError(path);
   return (
-    <Field label={label} hint={hint} error={error} id={fieldDomId(path)} className={className}>
+    <Field
+      label={label}
+      hint={hint}
+      error={error}
+      required={required}
+      id={fieldDomId(path)}
+      className={className}
+    >
       {(c) => (
         <Select {...c} {...register(p(path))} className="py-1.5 text-sm">
+          {placeholder === undefined ? null : <option value="">{placeholder}</option>}
           {options.map((o) => (
             <option key={o.value} value={o.value}>
               {o.label}

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { traceStepSchema } from '../calc/trace';
 import { wallCategorySchema } from '../schemas/assembly';
 import { climateZoneSchema } from '../schemas/project';
+import { fixed } from '../units/rounding';
 import { criteriaZoneSchema } from './criteria';
 
 /** The outcome of a compliance run, as stored in a check run and sent to the client. */
@@ -38,9 +39,14 @@ export type CheckMethod = z.infer<typeof checkMethodSchema>;
  * `rValue` formats an R in m²·K/W in the reader's units.
  */
 export function methodText(m: CheckMethod, rValue: (R: number) => string): string {
+  return `Method: ${m.label}. ${methodDetail(m, rValue)}`;
+}
+
+/** Why the method decides and what the others give — the body under "Method: …" on the checks page. */
+export function methodDetail(m: CheckMethod, rValue: (R: number) => string): string {
   const others = m.others.map((o) => `${o.label} ${rValue(o.R)}`).join('; ');
-  const spread = `${(m.spread * 100).toFixed(1)} %`;
-  return `Method: ${m.label}. ${m.text}${others ? ` Beside it: ${others} (spread of the methods ${spread}).` : ''}`;
+  const spread = `${fixed(m.spread * 100, 1)} %`;
+  return `${m.text}${others ? ` Beside it: ${others} (spread of the methods ${spread}).` : ''}`;
 }
 
 export const checkSchema = z.object({

@@ -1,6 +1,6 @@
 import type { TraceStep } from '@shared/calc/trace';
 import { categoryLabel, zoneLabel } from '@shared/checks/criteria';
-import { type Check, methodText, type Verdict } from '@shared/checks/report';
+import { type Check, methodDetail, type Verdict } from '@shared/checks/report';
 import type { CheckRun } from '@shared/schemas/check-runs';
 import type { UnitSystem } from '@shared/units';
 import { Table, Td, Th } from '../../../components/ui/Table';
@@ -95,7 +95,7 @@ function CheckTable({
           const dir = c.direction === 'max' ? '≤ ' : c.direction === 'min' ? '≥ ' : '';
           return (
             <tr key={c.id} data-check={c.id} data-status={c.status}>
-              <Td>
+              <Td className="min-w-60">
                 <span className="font-semibold">{c.label}</span>
                 {c.row ? (
                   <span className="block text-xs text-ink-muted">
@@ -106,9 +106,14 @@ function CheckTable({
                   <span className="block text-xs text-ink-muted">{c.reason}</span>
                 ) : null}
                 {c.method ? (
-                  <span className="block text-xs" data-testid="check-method">
-                    {methodText(c.method, (R) => formatSiValue(R, 'm²·K/W', system))}
-                  </span>
+                  <details className="mt-1 text-xs" data-testid="check-method">
+                    <summary className="cursor-pointer">
+                      <span className="font-semibold">Method:</span> {c.method.label}
+                    </summary>
+                    <span className="block text-ink-muted">
+                      {methodDetail(c.method, (R) => formatSiValue(R, 'm²·K/W', system))}
+                    </span>
+                  </details>
                 ) : null}
                 <Steps ids={c.traceStepIds} steps={steps} system={system} />
               </Td>

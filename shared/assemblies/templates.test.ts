@@ -12,7 +12,9 @@ describe('assembly templates', () => {
     const result = calculateThermal(input.thermal);
     expect(Number.isFinite(result.Ueff)).toBe(true);
     expect(result.Ueff).toBeGreaterThan(0);
-    if (input.joints) expect(() => calculateJointSchedule(input.joints!)).not.toThrow();
+    // A starting joint schedule is sized for its own movement (ASTM C1472 approach, shared/calc/joints).
+    for (const j of input.joints ? calculateJointSchedule(input.joints).joints : [])
+      expect(j.verdict).toBe('pass');
   });
 
   it('has unique ids and titles', () => {
@@ -28,11 +30,15 @@ describe('assembly templates', () => {
     expect(calculateThermal(t.input.thermal).Ueff).toBeCloseTo(1 / R + dU, 4);
   });
 
-  it('the demo insulated panel wall (invented values) parses, calculates and its joints size — derived', () => {
+  it('the demo insulated panel wall (invented values) parses, calculates and its joints are wide enough — derived', () => {
     const input = assemblyInputSchema.parse(demoPanel.assembly);
     const R = 0.13 + 0.0005 / 50 + 0.1 / 0.023 + 0.0005 / 50 + 0.04;
     const dU = 0.004 / (0.333 * 1.8) + 0.015 / 1;
     expect(calculateThermal(input.thermal).Ueff).toBeCloseTo(1 / R + dU, 4);
-    expect(calculateJointSchedule(input.joints!).joints).toHaveLength(3);
+    expect(calculateJointSchedule(input.joints!).joints.map((j) => j.verdict)).toEqual([
+      'pass',
+      'pass',
+      'pass',
+    ]);
   });
 });

@@ -69,6 +69,7 @@ const metalJoint = (
   material: string,
   panelLength: number,
   designWidth: number,
+  movementClass: JointInput['sealant']['movementClass'] = '50',
 ): JointInput => ({
   name,
   type,
@@ -79,7 +80,7 @@ const metalJoint = (
   ],
   surfaceTemperatureRange: { min: -30, max: 80 },
   installationTemperature: { min: 5, max: 25 },
-  sealant: { movementClass: '25' },
+  sealant: { movementClass },
   constructionTolerance: 0.003,
 });
 
@@ -125,8 +126,8 @@ export const ASSEMBLY_TEMPLATES: readonly AssemblyTemplate[] = [
         ],
       },
       joints: [
-        metalJoint('VJ-1 panel end joint', 'panel_vertical', 'carbon-steel', 6, 0.02),
-        metalJoint('HJ-1 panel side joint', 'panel_horizontal', 'carbon-steel', 6, 0.012),
+        metalJoint('VJ-1 panel side joint', 'panel_vertical', 'carbon-steel', 1, 0.012, '25'),
+        metalJoint('HJ-1 panel end joint', 'panel_horizontal', 'carbon-steel', 3.6, 0.025),
       ],
     },
   },
@@ -158,7 +159,7 @@ export const ASSEMBLY_TEMPLATES: readonly AssemblyTemplate[] = [
       },
       joints: [
         metalJoint('VJ-1 vertical panel joint', 'panel_vertical', 'aluminium-5005', 1.5, 0.02),
-        metalJoint('HJ-1 horizontal panel joint', 'panel_horizontal', 'aluminium-5005', 3.6, 0.012),
+        metalJoint('HJ-1 horizontal panel joint', 'panel_horizontal', 'aluminium-5005', 3.6, 0.035),
       ],
     },
   },

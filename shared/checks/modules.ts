@@ -30,7 +30,7 @@ import type { CheckMethod } from './report';
  */
 
 /**
- * The method that decides a thermal criterion (DEVELOPERS.md D-101): the thermal result's own R₀ method —
+ * The method that decides a thermal criterion (DEVELOPERS.md D-012): the thermal result's own R₀ method —
  * the energy-code path for a steel-framed wall the table covers, ISO 6946 where no metal bridges the layers,
  * otherwise the lowest R offered — with the other methods and their spread.
  */

@@ -243,7 +243,7 @@ describe('ANSI/ASHRAE/IES Standard 90.1-2016 Normative Appendix A', () => {
     expect(Math.abs(zoneLayerR(steelStudWall(13, 3.5)) / 6.0 - 1)).toBeLessThanOrEqual(0.1);
   });
   // The ASHRAE zone method over-predicts for deep studs; the check pins the sign and bounds the size, and
-  // is why the energy-code path, not the zone method, decides (DEVELOPERS.md D-101).
+  // is why the energy-code path, not the zone method, decides (DEVELOPERS.md D-012).
   it('R-19 in 6 in steel studs at 16 in o.c. → effective R-7.1 (zone method 0 to +15 % high)', () => {
     const R = zoneLayerR(steelStudWall(19, 6));
     expect(R).toBeGreaterThanOrEqual(7.1);

@@ -28,7 +28,7 @@ import type {
  * ISO 6946:2017 for layers, surfaces, air layers, the combined method and Annex F fasteners; ASHRAE
  * Handbook—Fundamentals (2021) ch. 27 for parallel path, isothermal planes and the zone method for metal;
  * ASHRAE 90.1-2016 Appendix A (energy-code.ts) for the energy-code path of steel-framed walls. Which method
- * gives R₀ (DEVELOPERS.md D-101): a steel-framed wall the table covers → the energy-code path; other metal
+ * gives R₀ (DEVELOPERS.md D-012): a steel-framed wall the table covers → the energy-code path; other metal
  * framing → the lowest R of the methods offered; no metal → ISO 6946 combined.
  *
  * Table 8 is reproduced by the Annex D formula (h_a, h_r0 = 5.1) to its rounding. The verification tests name
@@ -657,7 +657,7 @@ function energyCodePath(
 }
 
 /**
- * Which method gives R₀ (DEVELOPERS.md D-101): the energy-code path where it applies to a steel-framed wall;
+ * Which method gives R₀ (DEVELOPERS.md D-012): the energy-code path where it applies to a steel-framed wall;
  * other metal framing → the lowest R of the methods offered (never the least conservative); no metal → ISO
  * 6946 combined, the standard's own method.
  */

@@ -29,6 +29,14 @@ export interface ReadCache {
   get<T>(key: string, load: () => Promise<T>): Promise<T>;
 }
 
+/** Frozen through and through: a value kept in the read cache is shared by every request that reads it. */
+export function deepFreeze<T>(value: T): T {
+  if (value && typeof value === 'object' && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const v of Object.values(value)) deepFreeze(v);
+  }
+  return value;
+}
 /** No caching: every read goes to the database (one-off work such as seeding). */
 export const noReadCache: ReadCache = { get: (_key, load) => load() };
 

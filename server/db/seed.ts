@@ -120,7 +120,7 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
       .set({ verifiedAt: sql`now()`, verifiedBy: userIds.get(siteAdmin.email)! })
       .where(inArray(organisations.id, verified));
   const projects = createProjectService(db, noReadCache);
-  const assemblies = createAssemblyService(db);
+  const assemblies = createAssemblyService(db, noReadCache);
   for (const [index, { owner, members, ...input }] of demoScenario.projects.entries()) {
     const created = await projects.create(userIds.get(owner)!, input);
     for (const m of members)

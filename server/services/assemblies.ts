@@ -11,7 +11,7 @@ import type {
 } from '@shared/schemas/assembly';
 import { TEXT_MAX } from '@shared/schemas/common';
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
-import type { Db } from '../db/client';
+import { type Db, deepFreeze, type ReadCache } from '../db/client';
 import { assemblies, assemblyRevisions, checkRuns, projects, user } from '../db/schema';
 import { recordAudit } from './audit';
 import { conflict, notFound } from './errors';
@@ -48,7 +48,7 @@ function toHead(a: AssemblyRow, result: { Ueff: number | null; Reff: number | nu
 /** "Wall A" → "Wall A (copy)", kept within the name limit. */
 export const copyName = (name: string) => `${name.slice(0, TEXT_MAX.name - ' (copy)'.length)} (copy)`;
 
-export function createAssemblyService(db: Db) {
+export function createAssemblyService(db: Db, readCache: ReadCache) {
   async function get(assemblyId: string): Promise<Assembly> {
     const [a] = await db.select().from(assemblies).where(eq(assemblies.id, assemblyId));
     if (!a) throw notFound('assembly');
@@ -99,6 +99,52 @@ export function createAssemblyService(db: Db) {
     return get(id);
   }
 
+  async function loadList(projectId: string): Promise<readonly AssemblySummary[]> {
+    // Only the two headline figures of each current result: the stored result carries its whole trace
+    // (kilobytes per assembly), which the list would otherwise read, parse and drop. The last check run's
+    // verdict and time come from a lateral join (one index probe per assembly; never the run's JSON).
+    const lastRun = db
+      .select({ verdict: checkRuns.verdict, at: checkRuns.createdAt })
+      .from(checkRuns)
+      .where(eq(checkRuns.assemblyId, assemblies.id))
+      .orderBy(desc(checkRuns.createdAt))
+      .limit(1)
+      .as('last_run');
+    const rows = await db
+      .select({
+        a: assemblies,
+        Ueff: sql<number | null>`(${assemblyRevisions.thermalResult} ->> 'Ueff')::float8`,
+        Reff: sql<number | null>`(${assemblyRevisions.thermalResult} ->> 'Reff')::float8`,
+        runVerdict: lastRun.verdict,
+        runAt: lastRun.at,
+      })
+      .from(assemblies)
+      .innerJoin(
+        assemblyRevisions,
+        and(
+          eq(assemblyRevisions.assemblyId, assemblies.id),
+          eq(assemblyRevisions.revision, assemblies.currentRevision),
+        ),
+      )
+      .leftJoinLateral(lastRun, sql`true`)
+      .where(eq(assemblies.projectId, projectId))
+      .orderBy(asc(assemblies.name));
+    return deepFreeze(
+      rows.map(
+        (r): AssemblySummary => ({
+          ...toHead(r.a, r),
+          lastRun:
+            r.runVerdict && r.runAt
+              ? {
+                  verdict: r.runVerdict as NonNullable<AssemblySummary['lastRun']>['verdict'],
+                  at: r.runAt.toISOString(),
+                }
+              : null,
+        }),
+      ),
+    );
+  }
+
   return {
     get,
 
@@ -111,48 +157,9 @@ export function createAssemblyService(db: Db) {
       return a?.projectId ?? null;
     },
 
-    async list(projectId: string): Promise<AssemblySummary[]> {
-      // Only the two headline figures of each current result: the stored result carries its whole trace
-      // (kilobytes per assembly), which the list would otherwise read, parse and drop. The last check run's
-      // verdict and time come from a lateral join (one index probe per assembly; never the run's JSON).
-      const lastRun = db
-        .select({ verdict: checkRuns.verdict, at: checkRuns.createdAt })
-        .from(checkRuns)
-        .where(eq(checkRuns.assemblyId, assemblies.id))
-        .orderBy(desc(checkRuns.createdAt))
-        .limit(1)
-        .as('last_run');
-      const rows = await db
-        .select({
-          a: assemblies,
-          Ueff: sql<number | null>`(${assemblyRevisions.thermalResult} ->> 'Ueff')::float8`,
-          Reff: sql<number | null>`(${assemblyRevisions.thermalResult} ->> 'Reff')::float8`,
-          runVerdict: lastRun.verdict,
-          runAt: lastRun.at,
-        })
-        .from(assemblies)
-        .innerJoin(
-          assemblyRevisions,
-          and(
-            eq(assemblyRevisions.assemblyId, assemblies.id),
-            eq(assemblyRevisions.revision, assemblies.currentRevision),
-          ),
-        )
-        .leftJoinLateral(lastRun, sql`true`)
-        .where(eq(assemblies.projectId, projectId))
-        .orderBy(asc(assemblies.name));
-      return rows.map(
-        (r): AssemblySummary => ({
-          ...toHead(r.a, r),
-          lastRun:
-            r.runVerdict && r.runAt
-              ? {
-                  verdict: r.runVerdict as NonNullable<AssemblySummary['lastRun']>['verdict'],
-                  at: r.runAt.toISOString(),
-                }
-              : null,
-        }),
-      );
+    /** The project's assemblies, from the read cache (emptied by every write) once loaded. */
+    list(projectId: string): Promise<readonly AssemblySummary[]> {
+      return readCache.get(`assemblies:${projectId}`, () => loadList(projectId));
     },
 
     create: (projectId: string, userId: string, input: AssemblyInput) =>

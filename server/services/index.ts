@@ -43,7 +43,7 @@ export function createServices(
     organisations: createOrganisationService(db),
     projects: createProjectService(db, database.readCache),
     members: createMemberService(db, config, mailer),
-    assemblies: createAssemblyService(db),
+    assemblies: createAssemblyService(db, database.readCache),
     firmMembers: createFirmMemberService(db, config, mailer),
     library: createLibraryService(db, storage, config.storage),
     criteria,

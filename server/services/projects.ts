@@ -1,7 +1,7 @@
 import type { ProjectRole } from '@shared/auth/permissions';
 import type { Project, ProjectClimate, ProjectInput, ProjectWind } from '@shared/schemas/project';
 import { and, asc, eq, gte, isNotNull, isNull, lte, sql } from 'drizzle-orm';
-import type { Db, ReadCache } from '../db/client';
+import { type Db, deepFreeze, type ReadCache } from '../db/client';
 import {
   assemblies,
   assemblyRevisions,
@@ -60,14 +60,6 @@ export const archivedError = () =>
   new DomainError('archived', 'archived', 'this project is archived; restore it before changing it');
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
-function deepFreeze<T>(value: T): T {
-  if (value && typeof value === 'object' && !Object.isFrozen(value)) {
-    Object.freeze(value);
-    for (const v of Object.values(value)) deepFreeze(v);
-  }
-  return value;
-}
 
 /** `readCache`: the database's cross-request cache, emptied by every write (see server/db/client.ts). */
 export function createProjectService(db: Db, readCache: ReadCache) {

@@ -247,6 +247,8 @@ describe('surface check helpers (ISO 13788:2012 §5)', () => {
     expect(minTemperatureFactor(12, 20, 25)).toBeNull();
     // Cooling climate: outside 22 °C, inside 24 °C, θ_si,min 15 °C — the formula gives −3.5; not applicable.
     expect(minTemperatureFactor(15, 24, 22)).toBeNull();
+    // Found by fuzzing: θ_i 0 °C and θ_e −5e−324 °C differ by less than a double can divide by.
+    expect(minTemperatureFactor(-3, 0, -5e-324)).toBeNull();
   });
 
   it('a cooling climate says "not applicable" and never prints a negative f_Rsi,max', () => {

@@ -32,5 +32,6 @@ export const minSurfaceTemperature = (pi: number, criticalRh = CRITICAL_SURFACE_
 export function minTemperatureFactor(thetaSiMin: number, thetaI: number, thetaE: number): number | null {
   if (!(thetaI > thetaE)) return null;
   const f = (thetaSiMin - thetaE) / (thetaI - thetaE);
-  return f > 0 ? f : null;
+  // A difference of air temperatures too small to divide by (below ~1e-308 K) is no heat flow either.
+  return f > 0 && Number.isFinite(f) ? f : null;
 }

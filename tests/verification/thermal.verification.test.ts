@@ -73,18 +73,18 @@ describe('ISO 6946:2017 §6.9.3 — slightly ventilated air layers', () => {
     { kind: 'homogeneous', name: 'Mineral wool', thickness: 0.1, conductivity: 0.035 },
     { kind: 'homogeneous', name: 'Blockwork', thickness: 0.1, conductivity: 0.51 },
   ];
-  const R = (l: Layer[]) => calculateThermal(wall(l)).R0;
+  const r0Of = (l: Layer[]) => calculateThermal(wall(l)).R0;
   it.each([
     [600, 0.9, 0.1],
     [1000, 0.5, 0.5],
     [1400, 0.1, 0.9],
   ])('[memory] A_v = %s mm²/m → %s·R_T,u + %s·R_T,v', (Av, a, b) => {
-    const u = R(layers('unventilated'));
-    const v = R(layers('well'));
-    expect(R(layers('slightly', Av))).toBeCloseTo(a * u + b * v, 12);
+    const u = r0Of(layers('unventilated'));
+    const v = r0Of(layers('well'));
+    expect(r0Of(layers('slightly', Av))).toBeCloseTo(a * u + b * v, 12);
   });
   it('[memory] the unventilated R_T,u: veneer, cavity 0.18 (Table 8), insulation, block and both surfaces', () => {
-    expect(R(layers('unventilated'))).toBeCloseTo(
+    expect(r0Of(layers('unventilated'))).toBeCloseTo(
       0.13 + 0.1 / 0.77 + 0.18 + 0.1 / 0.035 + 0.1 / 0.51 + 0.04,
       12,
     );

@@ -138,30 +138,30 @@ describe('air layers', () => {
       ventilation,
       ...(ventArea === undefined ? {} : { ventArea }),
     });
-    const R = (c: Layer) => calculateThermal(wall([veneer, c, ...inner])).R0;
+    const r0Of = (c: Layer) => calculateThermal(wall([veneer, c, ...inner])).R0;
 
     it('R_T = (1500 − A_v)/1000·R_T,u + (A_v − 500)/1000·R_T,v (derived)', () => {
-      const u = R(cavity('unventilated'));
-      const w = R(cavity('well'));
-      expect(R(cavity('slightly', 1000))).toBeCloseTo(0.5 * u + 0.5 * w, 12);
-      expect(R(cavity('slightly', 800))).toBeCloseTo(0.7 * u + 0.3 * w, 12);
+      const u = r0Of(cavity('unventilated'));
+      const w = r0Of(cavity('well'));
+      expect(r0Of(cavity('slightly', 1000))).toBeCloseTo(0.5 * u + 0.5 * w, 12);
+      expect(r0Of(cavity('slightly', 800))).toBeCloseTo(0.7 * u + 0.3 * w, 12);
       // At A_v = 1500 the slightly ventilated layer is the well-ventilated one.
-      expect(R(cavity('slightly', 1500))).toBeCloseTo(w, 12);
+      expect(r0Of(cavity('slightly', 1500))).toBeCloseTo(w, 12);
     });
 
     it('R falls as the vent area grows, and the trace shows the blend', () => {
-      expect(R(cavity('slightly', 700))).toBeGreaterThan(R(cavity('slightly', 1200)));
+      expect(r0Of(cavity('slightly', 700))).toBeGreaterThan(r0Of(cavity('slightly', 1200)));
       const r = calculateThermal(wall([veneer, cavity('slightly', 1000), ...inner]));
       expect(r.trace.find((t) => t.id === 'thermal.slightVentilation')?.inputs.A_v?.value).toBe(1000);
       expect(r.warnings).toEqual([]);
     });
 
     it('needs A_v, and A_v must match the class chosen', () => {
-      expect(inputError(() => R(cavity('slightly'))).field).toBe('layers.1.ventArea');
-      expect(inputError(() => R(cavity('slightly', 400))).reason).toMatch(/makes the layer unventilated/);
-      expect(inputError(() => R(cavity('unventilated', 900))).reason).toMatch(/slightly ventilated/);
-      expect(inputError(() => R(cavity('well', 1500))).reason).toMatch(/slightly ventilated/);
-      expect(R(cavity('unventilated', 500))).toBe(R(cavity('unventilated')));
+      expect(inputError(() => r0Of(cavity('slightly'))).field).toBe('layers.1.ventArea');
+      expect(inputError(() => r0Of(cavity('slightly', 400))).reason).toMatch(/makes the layer unventilated/);
+      expect(inputError(() => r0Of(cavity('unventilated', 900))).reason).toMatch(/slightly ventilated/);
+      expect(inputError(() => r0Of(cavity('well', 1500))).reason).toMatch(/slightly ventilated/);
+      expect(r0Of(cavity('unventilated', 500))).toBe(r0Of(cavity('unventilated')));
     });
   });
 });
@@ -770,7 +770,8 @@ describe('result shape, units and trace', () => {
 describe('materials library', () => {
   it('loads about twenty rows, each naming its table (provenance: materials.source.md)', () => {
     expect(materials.length).toBeGreaterThanOrEqual(20);
-    for (const m of materials) expect(m.source).toMatch(/ISO 10456:2007|ASHRAE Handbook—Fundamentals \(2021\)/);
+    for (const m of materials)
+      expect(m.source).toMatch(/ISO 10456:2007|ASHRAE Handbook—Fundamentals \(2021\)/);
   });
 
   it('finds a material by id', () => {

@@ -237,7 +237,9 @@ function JointsSheet({ project, assembly }: { project: Project; assembly: Assemb
         n={5}
         title="Takeoff"
         id="takeoff-heading"
-        aside={<span className="text-xs text-ink-muted">estimates — check them against the shop drawings</span>}
+        aside={
+          <span className="text-xs text-ink-muted">estimates — check them against the shop drawings</span>
+        }
       >
         <div aria-live="polite">
           {takeoff && takeoffEval?.result ? (

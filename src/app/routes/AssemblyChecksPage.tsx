@@ -1,5 +1,5 @@
 import { can } from '@shared/auth/permissions';
-import { Link, useParams, useSearchParams } from 'react-router';
+import { useParams, useSearchParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { useAssembly } from '../../features/assemblies/api/get-assembly';
@@ -8,6 +8,7 @@ import { useCheckRuns } from '../../features/checks/api/get-check-runs';
 import { CheckReportView } from '../../features/checks/components/CheckReportView';
 import { PastRuns } from '../../features/checks/components/PastRuns';
 import { RunCheckForm } from '../../features/checks/components/RunCheckForm';
+import { StartCodeTableForm } from '../../features/checks/components/StartCodeTableForm';
 import { useProjectCriteriaSets } from '../../features/criteria/api/get-project-criteria-sets';
 import { useProject } from '../../features/projects/api/get-project';
 import { SheetActions } from '../../features/sheets/components/SheetLink';
@@ -55,12 +56,12 @@ export function AssemblyChecksPage() {
           ) : sets.isError ? (
             <Notice tone="caution" title={errorMessage(sets.error)} live />
           ) : sets.data.length === 0 ? (
-            <Notice tone="info" title="There is no code table to check against yet.">
-              <p>
-                The project’s firm enters the values of its adopted code under{' '}
-                <Link to="/code-tables">Code tables</Link>.
-              </p>
-            </Notice>
+            <StartCodeTableForm
+              zone={project.climateZone}
+              category={a.wallCategory}
+              system={system}
+              back={`/projects/${project.id}/assemblies/${a.id}/checks`}
+            />
           ) : (
             <RunCheckForm assemblyId={a.id} sets={sets.data} onRun={(runId) => setParams({ run: runId })} />
           )

@@ -1,6 +1,8 @@
+import { criteriaZoneSchema } from '@shared/checks/criteria';
+import { wallCategorySchema } from '@shared/schemas/assembly';
 import type { CriteriaSave } from '@shared/schemas/criteria';
 import { useState } from 'react';
-import { Link, useLocation, useNavigate, useParams } from 'react-router';
+import { Link, useLocation, useNavigate, useParams, useSearchParams } from 'react-router';
 import { Button } from '../../components/ui/Button';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
@@ -10,6 +12,7 @@ import { useCriteriaSet } from '../../features/criteria/api/get-criteria-set';
 import { useCriteriaVersions } from '../../features/criteria/api/get-criteria-versions';
 import { CriteriaMetaForm } from '../../features/criteria/components/CriteriaMetaForm';
 import { CriteriaRowsEditor } from '../../features/criteria/components/CriteriaRowsEditor';
+import { CriterionKinds } from '../../features/criteria/components/CriterionKinds';
 import { CsvImport } from '../../features/criteria/components/CsvImport';
 import { VersionList } from '../../features/criteria/components/VersionList';
 import { errorMessage } from '../../lib/api';
@@ -18,9 +21,17 @@ import { useUnitSystem } from '../../lib/unit-system';
 
 type Flash = { savedAs?: { version: number; from: number } };
 
+/** A `?back=` link only within the site (a path, never another origin). */
+const safeBack = (back: string | null) => (back?.startsWith('/') && !back.startsWith('//') ? back : null);
+
 /** One version of a code table: details, the editable grid, CSV import and export, versions. */
 export function CriteriaSetPage() {
   const { setId = '' } = useParams();
+  const [params] = useSearchParams();
+  const back = safeBack(params.get('back'));
+  const zone = criteriaZoneSchema.safeParse(params.get('zone'));
+  const category = wallCategorySchema.safeParse(params.get('category'));
+  const starter = zone.success && category.success ? { zone: zone.data, category: category.data } : null;
   const set = useCriteriaSet(setId);
   const versions = useCriteriaVersions(setId);
   const system = useUnitSystem();
@@ -51,6 +62,12 @@ export function CriteriaSetPage() {
       <title>{`${s.name} · Code tables · Skinwright`}</title>
       <nav aria-label="Breadcrumb" className="-mb-6 text-sm">
         <Link to="/code-tables">Code tables</Link> <span aria-hidden="true">/</span> {s.name}
+        {back ? (
+          <>
+            {' · '}
+            <Link to={back}>Back to the checks</Link>
+          </>
+        ) : null}
       </nav>
       <PageHeader
         eyebrow={`${s.organisationName} · version ${s.version}${s.frozenAt ? ' · frozen' : ''}`}
@@ -132,7 +149,21 @@ export function CriteriaSetPage() {
           wins over an all-zones row. Values are shown in {system === 'IP' ? 'IP' : 'SI'} units and stored in
           SI.
         </p>
-        <CriteriaRowsEditor set={s} system={system} onSaved={onSaved} />
+        {starter && s.rows.length === 0 && mayWrite ? (
+          <Notice tone="info" title="Fill in the values your code requires, then save the rows.">
+            <p>
+              One empty row per criterion a check reads, for climate zone {starter.zone}. Remove the rows your
+              code does not set: a check compares only the rows the table holds.
+            </p>
+            <details className="pt-2">
+              <summary className="cursor-pointer font-semibold">What each row limits</summary>
+              <div className="pt-3">
+                <CriterionKinds system={system} />
+              </div>
+            </details>
+          </Notice>
+        ) : null}
+        <CriteriaRowsEditor set={s} system={system} onSaved={onSaved} starter={starter} />
       </section>
 
       {mayWrite ? (

@@ -1,4 +1,5 @@
 import {
+  CRITERION_TYPE_KEYS,
   type CriteriaRowInput,
   type CriteriaZone,
   type CriterionType,
@@ -71,6 +72,10 @@ export function blankDraft(previous?: DraftRow): DraftRow {
     original: null,
   };
 }
+
+/** One blank row per criterion type the runner reads, for one zone and category: a new table's outline. */
+export const starterDrafts = (climateZone: CriteriaZone, wallCategory: WallCategory): DraftRow[] =>
+  CRITERION_TYPE_KEYS.map((criterion) => ({ ...blankDraft(), climateZone, wallCategory, criterion }));
 
 const NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i;
 

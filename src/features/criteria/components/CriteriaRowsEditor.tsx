@@ -1,3 +1,4 @@
+import type { CriteriaZone, WallCategory } from '@shared/checks/criteria';
 import type { CriteriaSave, CriteriaSet } from '@shared/schemas/criteria';
 import type { UnitSystem } from '@shared/units';
 import { useState } from 'react';
@@ -5,7 +6,7 @@ import { Button } from '../../../components/ui/Button';
 import { Notice } from '../../../components/ui/Notice';
 import { errorMessage } from '../../../lib/api';
 import { conflictingSet, useSaveCriteriaRows } from '../api/save-criteria';
-import { blankDraft, type DraftErrors, type DraftRow, fromDrafts, toDrafts } from '../draft';
+import { blankDraft, type DraftErrors, type DraftRow, fromDrafts, starterDrafts, toDrafts } from '../draft';
 import { CriteriaGrid } from './CriteriaGrid';
 
 interface Props {
@@ -13,6 +14,8 @@ interface Props {
   system: UnitSystem;
   /** Called after a save, with the table as saved (a new version when the edited one was frozen). */
   onSaved: (saved: CriteriaSave) => void;
+  /** An empty table opens with one blank row per criterion type for this zone and category. */
+  starter?: { zone: CriteriaZone; category: WallCategory } | null;
 }
 
 /**
@@ -20,11 +23,14 @@ interface Props {
  * opened in until saved (switching units mid-edit would re-read what was typed); a clean grid follows the
  * person's unit switch.
  */
-export function CriteriaRowsEditor({ set, system, onSaved }: Props) {
+export function CriteriaRowsEditor({ set, system, onSaved, starter }: Props) {
   const readOnly = set.myAccess === 'read' || !set.isLatest;
   const [opened, setOpened] = useState({ id: set.id, revision: set.revision, system });
-  const [drafts, setDrafts] = useState<DraftRow[]>(() => toDrafts(set.rows, system));
-  const [dirty, setDirty] = useState(false);
+  const outline = starter && set.rows.length === 0 && !readOnly;
+  const [drafts, setDrafts] = useState<DraftRow[]>(() =>
+    outline ? starterDrafts(starter.zone, starter.category) : toDrafts(set.rows, system),
+  );
+  const [dirty, setDirty] = useState(Boolean(outline));
   const [errors, setErrors] = useState<DraftErrors>({});
   const [conflict, setConflict] = useState<CriteriaSet | null>(null);
   const save = useSaveCriteriaRows();

@@ -45,10 +45,10 @@ export function CsvImport({ set, onSaved }: { set: CriteriaSet; onSaved: (saved:
   return (
     <div className="flex flex-col gap-4">
       <p className="max-w-prose text-sm">
-        Columns: <code className="num">{CSV_COLUMNS.join(',')}</code>. Zones are ASHRAE 169 designations or{' '}
-        <code className="num">*</code> for all zones; the unit column says whether a value is SI or IP (e.g.{' '}
-        <code className="num">W/(m²·K)</code> or <code className="num">Btu/(h·ft²·°F)</code>). The import
-        replaces every row
+        Columns: <code className="num break-all">{CSV_COLUMNS.join(',')}</code>. Zones are ASHRAE 169
+        designations or <code className="num">*</code> for all zones; the unit column says whether a value is
+        SI or IP (e.g. <code className="num">W/(m²·K)</code> or <code className="num">Btu/(h·ft²·°F)</code>).
+        The import replaces every row
         {set.frozenAt ? ` and, as this version is frozen, becomes version ${set.version + 1}` : ''}.
       </p>
       <div className="flex flex-col gap-1">

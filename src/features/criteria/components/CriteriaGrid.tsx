@@ -256,7 +256,7 @@ export function CriteriaGrid({
   };
   return (
     <GridContext.Provider value={state}>
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full border-collapse text-left text-sm">
           <caption className="label-caps pb-2 text-left">{caption}</caption>
           <thead>

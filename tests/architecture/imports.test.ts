@@ -35,8 +35,9 @@ const clientImportsOf = (file: string) =>
 const FEATURE_USES: Record<string, string[]> = {
   // A submittal lists check runs and links their compliance sheets.
   'features/submittals': ['features/checks', 'features/sheets'],
-  // Each stored run on the checks page opens and downloads its compliance sheet.
-  'features/checks': ['features/sheets'],
+  // Each stored run on the checks page opens and downloads its compliance sheet; with no code table yet, the
+  // page starts one (the code-table create call and row kinds) in a firm the person may write for (their firms).
+  'features/checks': ['features/sheets', 'features/criteria', 'features/me'],
 };
 
 const SHARED_ALLOWED = /^(zod|mathjs|convert-units|@shared\/|@data\/reference\/|\.{1,2}\/)/;

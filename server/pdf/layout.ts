@@ -1,3 +1,4 @@
+import { POINT_MM } from '@shared/units';
 import type { jsPDF } from 'jspdf';
 import { type FontKind, runsOf, setFace } from './fonts';
 
@@ -42,7 +43,6 @@ export interface Column {
   align?: 'left' | 'right';
 }
 
-const PT = 25.4 / 72;
 /** Text widths depend only on the text, face and size: every sheet shares them. */
 const widths = new Map<string, number>();
 
@@ -80,7 +80,7 @@ export class SheetWriter {
   // ----------------------------------------------------------------------------------------------- text
 
   lineHeight(size: number): number {
-    return size * PT * 1.28;
+    return size * POINT_MM * 1.28;
   }
 
   /** Width of text in mm, measured run by run in the faces it will be set in (remembered per process). */

@@ -37,6 +37,8 @@ export const CHI_IP_TO_SI = 0.5275279;
 export const INCH = 0.0254;
 /** 1 ft = 0.3048 m exactly. */
 export const FOOT = 0.3048;
+/** The typographic (PostScript) point, 1/72 in, in mm: type sizes are in points, the sheet's layout in mm. */
+export const POINT_MM = (INCH * 1000) / 72;
 /** 1 US gallon = 231 in³ exactly (NIST Handbook 44, Appendix C). */
 export const US_GALLON = 231 * INCH ** 3;
 /**

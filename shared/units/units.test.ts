@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { FOOT, LBF_TO_N, PSF_TO_PA } from './index';
+import { FOOT, LBF_TO_N, POINT_MM, PSF_TO_PA } from './index';
 
 describe('force conversion', () => {
   it('1 lbf = 0.453 592 37 kg × 9.806 65 m/s² exactly (NIST SP 811 (2008) Appendix B.8/B.9)', () => {
@@ -11,5 +11,11 @@ describe('force conversion', () => {
 
   it('agrees with the pressure factor: 1 lbf/ft² = LBF_TO_N / FOOT² (NIST SP 811 B.9 gives 47.880 26 Pa)', () => {
     expect(Math.abs(LBF_TO_N / (FOOT * FOOT) / PSF_TO_PA - 1)).toBeLessThan(1e-7);
+  });
+});
+
+describe('type size', () => {
+  it('1 point (computer) = 1/72 in = 3.527 778 E−04 m (NIST SP 811 (2008) Appendix B.8)', () => {
+    expect(POINT_MM / 1000).toBeCloseTo(3.527778e-4, 10);
   });
 });

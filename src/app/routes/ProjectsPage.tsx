@@ -1,11 +1,9 @@
 import { Link, useSearchParams } from 'react-router';
-import { Button, ButtonLink } from '../../components/ui/Button';
-import { Field } from '../../components/ui/Field';
+import { ButtonLink } from '../../components/ui/Button';
+import { FilterBar, FilterSelect, SearchBox } from '../../components/ui/FilterBar';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
-import { Select } from '../../components/ui/Select';
-import { TextInput } from '../../components/ui/TextInput';
 import { useProjects } from '../../features/projects/api/get-projects';
 import { ProjectTable } from '../../features/projects/components/ProjectTable';
 import { errorMessage } from '../../lib/api';
@@ -72,41 +70,16 @@ export function ProjectsPage() {
         </div>
       ) : (
         <>
-          <search aria-label="Find projects" className="mb-4 flex flex-wrap items-start gap-x-4 gap-y-3">
-            <Field label="Search" hint="Name, number or firm." className="min-w-56 flex-1 sm:max-w-sm">
-              {(c) => (
-                <TextInput
-                  {...c}
-                  type="search"
-                  value={q}
-                  onChange={(e) => filters.set('q', e.target.value, true)}
-                  className="py-1.5"
-                />
-              )}
-            </Field>
-            <Field label="Climate zone" className="w-40">
-              {(c) => (
-                <Select
-                  {...c}
-                  value={zone}
-                  onChange={(e) => filters.set('zone', e.target.value)}
-                  className="py-1.5"
-                >
-                  <option value="">Any</option>
-                  {zones.map((z) => (
-                    <option key={z} value={z}>
-                      {z}
-                    </option>
-                  ))}
-                </Select>
-              )}
-            </Field>
-            {filters.active ? (
-              <Button variant="quiet" onClick={filters.clear} className="sm:mt-6">
-                Show all
-              </Button>
-            ) : null}
-          </search>
+          <FilterBar label="Find projects" active={filters.active} onClear={filters.clear} className="mb-4">
+            <SearchBox hint="Name, number or firm." value={q} onChange={(t) => filters.set('q', t, true)} />
+            <FilterSelect
+              label="Climate zone"
+              className="w-40"
+              value={zone}
+              onChange={(z) => filters.set('zone', z)}
+              options={zones.map((z) => ({ value: z, label: z }))}
+            />
+          </FilterBar>
           <p role="status" className="mb-2 text-sm text-ink-muted">
             {filters.active ? `${shown.length} of ${all.length} projects match.` : ''}
           </p>

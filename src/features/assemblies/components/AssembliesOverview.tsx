@@ -1,10 +1,8 @@
 import { type AssemblySummary, WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
-import { Button, ButtonLink } from '../../../components/ui/Button';
-import { Field } from '../../../components/ui/Field';
+import { ButtonLink } from '../../../components/ui/Button';
+import { FilterBar, FilterSelect, SearchBox } from '../../../components/ui/FilterBar';
 import { Loading } from '../../../components/ui/Loading';
 import { Notice } from '../../../components/ui/Notice';
-import { Select } from '../../../components/ui/Select';
-import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage } from '../../../lib/api';
 import { VERDICT_TEXT } from '../../../lib/check-format';
 import { matchesQuery, useListFilters } from '../../../lib/list-filter';
@@ -101,59 +99,29 @@ function SearchableTable({
   );
   return (
     <>
-      <search aria-label="Find assemblies" className="flex flex-wrap items-start gap-x-4 gap-y-3">
-        <Field label="Search" hint="Name or wall category." className="min-w-56 flex-1 sm:max-w-sm">
-          {(c) => (
-            <TextInput
-              {...c}
-              type="search"
-              value={q}
-              onChange={(e) => filters.set('q', e.target.value, true)}
-              className="py-1.5"
-            />
-          )}
-        </Field>
-        <Field label="Wall category" className="w-56">
-          {(c) => (
-            <Select
-              {...c}
-              value={category}
-              onChange={(e) => filters.set('category', e.target.value)}
-              className="py-1.5"
-            >
-              <option value="">Any</option>
-              {categories.map((k) => (
-                <option key={k} value={k}>
-                  {WALL_CATEGORY_LABELS[k]}
-                </option>
-              ))}
-            </Select>
-          )}
-        </Field>
-        <Field label="Last check" className="w-44">
-          {(c) => (
-            <Select
-              {...c}
-              value={verdict}
-              onChange={(e) => filters.set('verdict', e.target.value)}
-              className="py-1.5"
-            >
-              <option value="">Any</option>
-              {(['pass', 'fail', 'incomplete'] as const).map((v) => (
-                <option key={v} value={v}>
-                  {VERDICT_TEXT[v].word}
-                </option>
-              ))}
-              <option value={UNCHECKED}>Not checked</option>
-            </Select>
-          )}
-        </Field>
-        {filters.active ? (
-          <Button variant="quiet" onClick={filters.clear} className="sm:mt-6">
-            Show all
-          </Button>
-        ) : null}
-      </search>
+      <FilterBar label="Find assemblies" active={filters.active} onClear={filters.clear}>
+        <SearchBox hint="Name or wall category." value={q} onChange={(t) => filters.set('q', t, true)} />
+        <FilterSelect
+          label="Wall category"
+          className="w-56"
+          value={category}
+          onChange={(k) => filters.set('category', k)}
+          options={categories.map((k) => ({ value: k, label: WALL_CATEGORY_LABELS[k] }))}
+        />
+        <FilterSelect
+          label="Last check"
+          className="w-44"
+          value={verdict}
+          onChange={(v) => filters.set('verdict', v)}
+          options={[
+            ...(['pass', 'fail', 'incomplete'] as const).map((v) => ({
+              value: v,
+              label: VERDICT_TEXT[v].word,
+            })),
+            { value: UNCHECKED, label: 'Not checked' },
+          ]}
+        />
+      </FilterBar>
       <p role="status" className="text-sm text-ink-muted">
         {filters.active ? `${shown.length} of ${assemblies.length} assemblies match.` : ''}
       </p>

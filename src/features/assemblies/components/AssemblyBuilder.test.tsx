@@ -112,4 +112,13 @@ describe('Assembly builder', () => {
     const mark = await screen.findByTestId(`vapour-needed-${count + 1}`);
     expect(mark.textContent).toMatch(/Vapour data needed for the moisture check/);
   });
+
+  it('an assembly with no vapour data at all marks every layer on the build-up page', async () => {
+    const sample = startingInput('sample');
+    renderBuilder('SI', { ...sample, vapour: undefined });
+    await screen.findByTestId('result-Reff');
+    for (const [i] of sample.thermal.layers.entries()) {
+      expect(screen.getByTestId(`vapour-needed-${i}`).textContent).toMatch(/Vapour data needed/);
+    }
+  });
 });

@@ -158,8 +158,9 @@ function LayerRow({
   const vapour = useWatch({ control, name: 'vapour' }) as unknown[] | undefined;
   if (!layer) return null;
   const base = `thermal.layers.${i}`;
-  // Said here at once, not found out as "not evaluated" at check time (the moisture page marks it too).
-  const vapourNeeded = Array.isArray(vapour) && !vapour[i];
+  // Said here at once, not found out as "not evaluated" at check time (the moisture page marks it too) —
+  // also when the assembly has no vapour data at all.
+  const vapourNeeded = !(Array.isArray(vapour) && vapour[i]);
   const R = layerR(i);
   const label = layer.name || `Layer ${i + 1}`;
 

@@ -184,6 +184,10 @@ export function assemble(input: MoistureInput, trace: TraceStep[], warnings: str
         included ? undefined : 'Outside a well-ventilated air layer: disregarded',
       ),
     );
+    if (layer.kind === 'air' && layer.ventilation === 'slightly' && included)
+      warnings.push(
+        `${layer.name}: a slightly ventilated air layer is taken as unventilated here (its unventilated R, no vapour exchange with the outside) — the cautious side for interstitial condensation; the thermal check blends R_T by its vent area (ISO 6946:2017 §6.9.3)`,
+      );
     if (layer.kind === 'framed' && included)
       warnings.push(
         `${layer.name}: the one-dimensional condensation calculation runs through the cavity between the members; the members themselves are thermal bridges — check their surface temperature and condensation risk with ISO 10211 or published ψ/χ and f_Rsi values`,

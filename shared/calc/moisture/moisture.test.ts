@@ -115,6 +115,25 @@ describe('calculateMoisture — demo metal-panel wall (invented climate)', () =>
     expect(r.months[0]!.month).toBe(7);
   });
 
+  it('a slightly ventilated cavity is taken as unventilated and says so (stated simplification, the cautious side)', () => {
+    const wall = metalPanelMoistureWall();
+    const layers = wall.layers.map((l) =>
+      l.kind === 'air' ? { ...l, ventilation: 'slightly' as const, ventArea: 1000 } : l,
+    );
+    const slight = calculateMoisture({ ...wall, layers });
+    const closed = calculateMoisture({
+      ...wall,
+      layers: layers.map((l) =>
+        l.kind === 'air' ? { ...l, ventilation: 'unventilated' as const, ventArea: undefined } : l,
+      ),
+    });
+    expect(slight.layers[1]!.resistance).toBe(closed.layers[1]!.resistance);
+    expect(
+      slight.warnings.some((w) => /slightly ventilated air layer is taken as unventilated/.test(w)),
+    ).toBe(true);
+    expect(closed.warnings.some((w) => /slightly ventilated/.test(w))).toBe(false);
+  });
+
   it('traces the steps with stable ids', () => {
     const r = calculateMoisture(metalPanelMoistureWall({ vapourRetarder: false }));
     const ids = r.trace.map((t) => t.id);

@@ -2,10 +2,12 @@ import { uuidParam } from '@shared/schemas/common';
 import type { QueryClient } from '@tanstack/react-query';
 import type { ComponentType } from 'react';
 import { createBrowserRouter, data, type LoaderFunctionArgs, redirect } from 'react-router';
+import { assemblyQueryOptions } from '../features/assemblies/api/get-assembly';
 import { meQueryOptions } from '../features/me/api/get-me';
 import { projectQueryOptions } from '../features/projects/api/get-project';
 import { signInPath } from '../lib/safe-next';
 import { AppShell } from './layout/AppShell';
+import { AssemblyLayout } from './layout/AssemblyLayout';
 import { ProjectLayout } from './layout/ProjectLayout';
 import { RequireSession } from './layout/RequireSession';
 import { NotFoundPage } from './routes/NotFoundPage';
@@ -51,9 +53,16 @@ export function createAppRouter(queryClient: QueryClient) {
     return null;
   };
 
-  const checkAssemblyId = ({ params }: LoaderFunctionArgs) => {
+  /** An assembly of this project (the same query options as its pages); one of another project is not found. */
+  const loadAssembly = async ({ params }: LoaderFunctionArgs) => {
+    if (!uuidParam.safeParse({ id: params.id }).success) throw data('No such project.', { status: 404 });
     if (!uuidParam.safeParse({ id: params.assemblyId }).success)
       throw data('No such assembly.', { status: 404 });
+    const [project, assembly] = await Promise.all([
+      queryClient.ensureQueryData(projectQueryOptions(params.id as string)),
+      queryClient.ensureQueryData(assemblyQueryOptions(params.assemblyId as string)),
+    ]);
+    if (assembly.projectId !== project.id) throw data('No such assembly in this project.', { status: 404 });
     return null;
   };
 
@@ -134,42 +143,48 @@ export function createAppRouter(queryClient: QueryClient) {
                       ),
                     },
                     {
+                      // The frame of one assembly: its loader loads it and refuses one of another project.
                       path: 'assemblies/:assemblyId',
-                      loader: checkAssemblyId,
-                      ...page(() =>
-                        import('./routes/AssemblyBuilderPage').then((m) => m.AssemblyBuilderPage),
-                      ),
-                    },
-                    {
-                      path: 'assemblies/:assemblyId/attachment',
-                      loader: checkAssemblyId,
-                      ...page(() =>
-                        import('./routes/AssemblyAttachmentPage').then((m) => m.AssemblyAttachmentPage),
-                      ),
-                    },
-                    {
-                      path: 'assemblies/:assemblyId/moisture',
-                      loader: checkAssemblyId,
-                      ...page(() =>
-                        import('./routes/AssemblyMoisturePage').then((m) => m.AssemblyMoisturePage),
-                      ),
-                    },
-                    {
-                      path: 'assemblies/:assemblyId/joints',
-                      loader: checkAssemblyId,
-                      ...page(() => import('./routes/AssemblyJointsPage').then((m) => m.AssemblyJointsPage)),
-                    },
-                    {
-                      path: 'assemblies/:assemblyId/checks',
-                      loader: checkAssemblyId,
-                      ...page(() => import('./routes/AssemblyChecksPage').then((m) => m.AssemblyChecksPage)),
-                    },
-                    {
-                      path: 'assemblies/:assemblyId/revisions/:revision',
-                      loader: checkAssemblyId,
-                      ...page(() =>
-                        import('./routes/AssemblyRevisionPage').then((m) => m.AssemblyRevisionPage),
-                      ),
+                      loader: loadAssembly,
+                      element: <AssemblyLayout />,
+                      children: [
+                        {
+                          index: true,
+                          ...page(() =>
+                            import('./routes/AssemblyBuilderPage').then((m) => m.AssemblyBuilderPage),
+                          ),
+                        },
+                        {
+                          path: 'attachment',
+                          ...page(() =>
+                            import('./routes/AssemblyAttachmentPage').then((m) => m.AssemblyAttachmentPage),
+                          ),
+                        },
+                        {
+                          path: 'moisture',
+                          ...page(() =>
+                            import('./routes/AssemblyMoisturePage').then((m) => m.AssemblyMoisturePage),
+                          ),
+                        },
+                        {
+                          path: 'joints',
+                          ...page(() =>
+                            import('./routes/AssemblyJointsPage').then((m) => m.AssemblyJointsPage),
+                          ),
+                        },
+                        {
+                          path: 'checks',
+                          ...page(() =>
+                            import('./routes/AssemblyChecksPage').then((m) => m.AssemblyChecksPage),
+                          ),
+                        },
+                        {
+                          path: 'revisions/:revision',
+                          ...page(() =>
+                            import('./routes/AssemblyRevisionPage').then((m) => m.AssemblyRevisionPage),
+                          ),
+                        },
+                      ],
                     },
                     {
                       path: 'check-runs/:runId/sheet',

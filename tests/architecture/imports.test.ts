@@ -38,6 +38,9 @@ const FEATURE_USES: Record<string, string[]> = {
   // Each stored run on the checks page opens and downloads its compliance sheet; with no code table yet, the
   // page starts one (the code-table create call and row kinds) in a firm the person may write for (their firms).
   'features/checks': ['features/sheets', 'features/criteria', 'features/me'],
+  // The joints & quantities sheet edits the joint schedule and the elevation takeoff together, saved as one
+  // revision of the assembly.
+  'features/joints': ['features/takeoff'],
 };
 
 const SHARED_ALLOWED = /^(zod|mathjs|convert-units|@shared\/|@data\/reference\/|\.{1,2}\/)/;

@@ -1,9 +1,5 @@
 import { can } from '@shared/auth/permissions';
 import type { Project } from '@shared/schemas/project';
-import { useParams } from 'react-router';
-import { Loading } from '../../components/ui/Loading';
-import { Notice } from '../../components/ui/Notice';
-import { useAssembly } from '../../features/assemblies/api/get-assembly';
 import { AssemblyBuilder } from '../../features/assemblies/components/AssemblyBuilder';
 import { AssemblySheet } from '../../features/assemblies/components/AssemblySheet';
 import { DuplicateAssembly } from '../../features/assemblies/components/DuplicateAssembly';
@@ -11,11 +7,9 @@ import { RevisionHistory } from '../../features/assemblies/components/RevisionHi
 import { useBridgeValues } from '../../features/library/api/get-bridge-values';
 import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
 import { useMe } from '../../features/me/api/get-me';
-import { useProject } from '../../features/projects/api/get-project';
 import { useProjects } from '../../features/projects/api/get-projects';
-import { errorMessage } from '../../lib/api';
 import { formatDateTime } from '../../lib/format';
-import { AssemblyTabs } from '../layout/AssemblyTabs';
+import { useAssemblyFrame } from '../layout/AssemblyLayout';
 
 /**
  * The firm library offered in the builder: the person's firm that owns the project if they belong to it,
@@ -35,28 +29,17 @@ export function useBuilderLibrary(project: Project | undefined) {
 }
 
 export function AssemblyBuilderPage() {
-  const { id = '', assemblyId = '' } = useParams();
-  const { data: project } = useProject(id);
-  const assembly = useAssembly(assemblyId);
+  const { project, assembly: a } = useAssemblyFrame();
   const library = useBuilderLibrary(project);
   // The projects a copy may go to: those the person edits assemblies on, not archived.
   const targets = (useProjects({ archived: false }).data ?? []).filter(
     (p) => can(p.myRole, 'assembly.write') && p.archivedAt === null,
   );
-
-  if (!project) return null;
-  if (assembly.isPending) return <Loading what="Loading the assembly" />;
-  if (assembly.isError) return <Notice tone="caution" title={errorMessage(assembly.error)} live />;
-
-  const a = assembly.data;
-  if (a.projectId !== project.id)
-    return <Notice tone="caution" title="This assembly belongs to another project." />;
   const mayWrite = can(project.myRole, 'assembly.write') && project.archivedAt === null;
 
   return (
-    <div className="flex flex-col gap-10">
+    <>
       <title>{`${a.name} · ${project.name} · Skinwright`}</title>
-      <AssemblyTabs projectId={project.id} assemblyId={a.id} name={a.name} />
       {mayWrite ? (
         <AssemblyBuilder
           key={a.id}
@@ -103,6 +86,6 @@ export function AssemblyBuilderPage() {
           <DuplicateAssembly key={a.id} assembly={a} projectId={project.id} targets={targets} />
         </section>
       ) : null}
-    </div>
+    </>
   );
 }

@@ -1,8 +1,7 @@
 import { can } from '@shared/auth/permissions';
-import { useParams, useSearchParams } from 'react-router';
+import { useSearchParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
-import { useAssembly } from '../../features/assemblies/api/get-assembly';
 import { useCheckRun } from '../../features/checks/api/get-check-run';
 import { useCheckRuns } from '../../features/checks/api/get-check-runs';
 import { CheckReportView } from '../../features/checks/components/CheckReportView';
@@ -10,36 +9,25 @@ import { PastRuns } from '../../features/checks/components/PastRuns';
 import { RunCheckForm } from '../../features/checks/components/RunCheckForm';
 import { StartCodeTableForm } from '../../features/checks/components/StartCodeTableForm';
 import { useProjectCriteriaSets } from '../../features/criteria/api/get-project-criteria-sets';
-import { useProject } from '../../features/projects/api/get-project';
 import { SheetActions } from '../../features/sheets/components/SheetLink';
 import { errorMessage } from '../../lib/api';
 import { useUnitSystem } from '../../lib/unit-system';
-import { AssemblyTabs } from '../layout/AssemblyTabs';
+import { useAssemblyFrame } from '../layout/AssemblyLayout';
 
 /** Checks of one assembly: run it against a code table, read the stored run, see the runs before. */
 export function AssemblyChecksPage() {
-  const { id = '', assemblyId = '' } = useParams();
+  const { project, assembly: a } = useAssemblyFrame();
   const [params, setParams] = useSearchParams();
-  const { data: project } = useProject(id);
-  const assembly = useAssembly(assemblyId);
-  const sets = useProjectCriteriaSets(id);
-  const runs = useCheckRuns(id, assemblyId);
+  const sets = useProjectCriteriaSets(project.id);
+  const runs = useCheckRuns(project.id, a.id);
   const shownId = params.get('run') ?? runs.data?.[0]?.id ?? null;
   const run = useCheckRun(shownId);
   const system = useUnitSystem();
-
-  if (!project) return null;
-  if (assembly.isPending) return <Loading what="Loading the assembly" />;
-  if (assembly.isError) return <Notice tone="caution" title={errorMessage(assembly.error)} live />;
-  const a = assembly.data;
-  if (a.projectId !== project.id)
-    return <Notice tone="caution" title="This assembly belongs to another project." />;
   const mayRun = can(project.myRole, 'checkrun.create') && project.archivedAt === null;
 
   return (
-    <div className="flex flex-col gap-10">
+    <>
       <title>{`Checks · ${a.name} · Skinwright`}</title>
-      <AssemblyTabs projectId={project.id} assemblyId={a.id} name={a.name} />
 
       <section aria-labelledby="run-heading" className="flex flex-col gap-3">
         <h2 id="run-heading" className="border-b border-ink pb-2 text-2xl">
@@ -110,6 +98,6 @@ export function AssemblyChecksPage() {
           />
         </section>
       ) : null}
-    </div>
+    </>
   );
 }

@@ -9,6 +9,7 @@ import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it } from 'vitest';
 import { assemblyKeys, projectKeys } from '../../lib/query-keys';
 import { UnitSystemProvider } from '../../lib/unit-system';
+import { AssemblyLayout } from '../layout/AssemblyLayout';
 import { AssemblyMoisturePage } from './AssemblyMoisturePage';
 
 afterEach(cleanup);
@@ -79,7 +80,13 @@ function renderPage({
   qc.setQueryData(projectKeys.detail(projectId), { ...baseProject, ...project });
   qc.setQueryData(assemblyKeys.detail(assemblyId), assemblyOf({ ...demoInput, vapour }));
   const router = createMemoryRouter(
-    [{ path: '/projects/:id/assemblies/:assemblyId/moisture', element: <AssemblyMoisturePage /> }],
+    [
+      {
+        path: '/projects/:id/assemblies/:assemblyId',
+        element: <AssemblyLayout />,
+        children: [{ path: 'moisture', element: <AssemblyMoisturePage /> }],
+      },
+    ],
     { initialEntries: [`/projects/${projectId}/assemblies/${assemblyId}/moisture`] },
   );
   return render(

@@ -1,42 +1,33 @@
 import { Link, useParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
-import { useAssembly } from '../../features/assemblies/api/get-assembly';
 import { useRevision } from '../../features/assemblies/api/get-revision';
 import { AssemblySheet } from '../../features/assemblies/components/AssemblySheet';
 import { RevisionHistory } from '../../features/assemblies/components/RevisionHistory';
-import { useProject } from '../../features/projects/api/get-project';
 import { errorMessage } from '../../lib/api';
 import { formatDateTime } from '../../lib/format';
+import { useAssemblyFrame } from '../layout/AssemblyLayout';
 import { useBuilderLibrary } from './AssemblyBuilderPage';
 
 /** An older revision, read-only, exactly as it was saved (input and stored result). */
 export function AssemblyRevisionPage() {
-  const { id = '', assemblyId = '', revision = '' } = useParams();
+  const { project, assembly: a } = useAssemblyFrame();
+  const { revision = '' } = useParams();
   const n = Number(revision);
-  const { data: project } = useProject(id);
-  const assembly = useAssembly(assemblyId);
-  const rev = useRevision(assemblyId, Number.isInteger(n) && n > 0 ? n : 1);
+  const rev = useRevision(a.id, Number.isInteger(n) && n > 0 ? n : 1);
   const library = useBuilderLibrary(project);
 
-  if (!project) return null;
   if (!Number.isInteger(n) || n < 1) return <Notice tone="caution" title="No such revision." />;
-  if (assembly.isPending || rev.isPending) return <Loading what={`Loading revision ${n}`} />;
-  if (assembly.isError) return <Notice tone="caution" title={errorMessage(assembly.error)} live />;
+  if (rev.isPending) return <Loading what={`Loading revision ${n}`} />;
   if (rev.isError) return <Notice tone="caution" title={errorMessage(rev.error)} live />;
 
-  const a = assembly.data;
   const r = rev.data;
   const base = `/projects/${project.id}/assemblies`;
   const isCurrent = r.revision === a.revision;
 
   return (
-    <div className="flex flex-col gap-10">
+    <>
       <title>{`${r.input.name}, rev. ${r.revision} · ${project.name} · Skinwright`}</title>
-      <nav aria-label="Breadcrumb" className="-mt-2 text-sm">
-        <Link to={base}>Assemblies</Link> <span aria-hidden="true">/</span>{' '}
-        <Link to={`${base}/${a.id}`}>{a.name}</Link> <span aria-hidden="true">/</span> Revision {r.revision}
-      </nav>
       <AssemblySheet
         input={r.input}
         storedResult={r.thermalResult}
@@ -72,6 +63,6 @@ export function AssemblyRevisionPage() {
         currentRevision={a.revision}
         openRevision={r.revision}
       />
-    </div>
+    </>
   );
 }

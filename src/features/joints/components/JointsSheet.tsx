@@ -1,0 +1,294 @@
+import { can } from '@shared/auth/permissions';
+import type { JointInput } from '@shared/calc/joints/schema';
+import type { TakeoffInput } from '@shared/calc/takeoff/schema';
+import { ENGINE_VERSION } from '@shared/calc/trace';
+import { type Assembly, type AssemblyInput, assemblyInputSchema } from '@shared/schemas/assembly';
+import type { Project } from '@shared/schemas/project';
+import { useMemo, useState } from 'react';
+import { Button } from '../../../components/ui/Button';
+import { NewerRevisionNotice, RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
+import { SheetSection } from '../../../components/ui/SheetSection';
+import { formatDateTime } from '../../../lib/format';
+import { type RevisionApi, useRevisionEditing } from '../../../lib/use-revision-editing';
+import { ElevationEditor } from '../../takeoff/components/ElevationEditor';
+import { ElevationTable } from '../../takeoff/components/ElevationTable';
+import { TakeoffCautions } from '../../takeoff/components/TakeoffCautions';
+import { TakeoffProblems } from '../../takeoff/components/TakeoffProblems';
+import { TakeoffTable } from '../../takeoff/components/TakeoffTable';
+import { blankTakeoff } from '../../takeoff/draft';
+import { evaluateTakeoff } from '../../takeoff/evaluate';
+import { evaluateJoints } from '../evaluate';
+import { JointCautions } from './JointCautions';
+import { JointInputsTable } from './JointInputsTable';
+import { JointMethod } from './JointMethod';
+import { JointScheduleEditor } from './JointScheduleEditor';
+import { ScheduleTable } from './ScheduleTable';
+
+const same = (x: unknown, y: unknown) => JSON.stringify(x) === JSON.stringify(y);
+
+/** What this sheet edits of the assembly. */
+interface JointsValues {
+  joints: JointInput[];
+  takeoff: TakeoffInput | undefined;
+}
+
+const jointsValues = (input: AssemblyInput): JointsValues => ({
+  joints: input.joints ?? [],
+  takeoff: input.takeoff,
+});
+
+type Props = RevisionApi & { project: Project; assembly: Assembly };
+
+/**
+ * The joints & quantities sheet of one assembly: the joint schedule (sealant joints sized for the panels'
+ * thermal movement) and the elevation takeoff, computed in the browser as you type and saved together as a
+ * new revision of the assembly.
+ */
+export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
+  const mayWrite = can(project.myRole, 'assembly.write') && project.archivedAt === null;
+
+  const [joints, setJoints] = useState<JointInput[]>(assembly.current.input.joints ?? []);
+  const [takeoff, setTakeoff] = useState<TakeoffInput | undefined>(assembly.current.input.takeoff);
+  const [selected, setSelected] = useState(0);
+
+  const jointsEval = useMemo(() => evaluateJoints(joints), [joints]);
+  const takeoffEval = useMemo(() => (takeoff ? evaluateTakeoff(takeoff) : null), [takeoff]);
+  const problemCount =
+    Object.keys(jointsEval.problems).length + Object.keys(takeoffEval?.problems ?? {}).length;
+
+  const air = { min: project.winterDesignTempC, max: project.summerDesignTempC };
+
+  // Saving writes a new revision; a stale save carries the joints and takeoff as they are onto theirs.
+  const editing = useRevisionEditing<JointsValues>({
+    ...revisionApi,
+    assembly,
+    values: { joints, takeoff },
+    isEdited: (v, base) =>
+      !same(v.joints, base.current.input.joints ?? []) || !same(v.takeoff, base.current.input.takeoff),
+    reset: (v, why) => {
+      setJoints(v.joints);
+      setTakeoff(v.takeoff);
+      if (why === 'theirs') setSelected(0);
+    },
+    formValues: jointsValues,
+    toInput: (v, base) => {
+      if (problemCount > 0)
+        return { problem: ['Some values cannot be used yet: put right the values marked ✕ first.'] };
+      const { joints: _j, takeoff: _t, ...rest } = base.current.input;
+      const input: AssemblyInput = {
+        ...rest,
+        ...(v.joints.length > 0 ? { joints: v.joints } : {}),
+        ...(v.takeoff ? { takeoff: v.takeoff } : {}),
+      };
+      const parsed = assemblyInputSchema.safeParse(input);
+      return parsed.success
+        ? { input: parsed.data }
+        : {
+            problem: [
+              'The assembly would not be accepted:',
+              ...parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`),
+            ],
+          };
+    },
+    carryOver: () => ({ detail: undefined }),
+    markCarried: false,
+    noteAlone: 'guards',
+    notAccepted: (unmapped) => [
+      'The server did not accept some values:',
+      ...unmapped.map(([k, v]) => `${k}: ${v}`),
+    ],
+  });
+
+  function editJoint(i: number) {
+    setSelected(i);
+    requestAnimationFrame(() =>
+      document.getElementById('joint-editor')?.scrollIntoView({ block: 'start', behavior: 'smooth' }),
+    );
+  }
+
+  const revisionLine = `Assembly · revision ${assembly.revision} saved ${formatDateTime(assembly.current.createdAt)}${assembly.current.createdBy ? ` by ${assembly.current.createdBy}` : ''}${mayWrite ? '' : ' · read-only'}`;
+
+  return (
+    <div className="flex flex-col gap-10 pb-4">
+      <header className="flex flex-col gap-1">
+        <p className="label-caps">{revisionLine}</p>
+        <h2 className="text-3xl">Joints &amp; quantities</h2>
+        <p className="max-w-prose text-sm text-ink-muted">
+          Sealant joints sized for the panels' thermal movement, and the sealant, tape, trim and fasteners of
+          the elevation. Everything is computed in your browser as you type
+          {mayWrite ? '; saving writes a new revision of the assembly.' : '.'}
+        </p>
+        {!mayWrite ? (
+          <p className="text-sm text-ink-muted">
+            {project.archivedAt
+              ? 'The project is archived, so its assemblies are shown read-only.'
+              : 'Your role on this project shows assemblies read-only.'}
+          </p>
+        ) : null}
+      </header>
+
+      {mayWrite ? <NewerRevisionNotice newer={editing.newerElsewhere} yours="edits" /> : null}
+
+      <SheetSection n={1} title="Joint schedule — inputs" id="joint-inputs-heading">
+        {mayWrite ? (
+          <div id="joint-editor" className="scroll-mt-4">
+            <JointScheduleEditor
+              joints={joints}
+              onChange={setJoints}
+              evaluation={jointsEval}
+              selected={selected}
+              onSelect={setSelected}
+              air={air}
+              onRemove={editing.history.markRemoval}
+            />
+          </div>
+        ) : joints.length > 0 ? (
+          <JointInputsTable joints={joints} />
+        ) : (
+          <p className="text-ink-muted">No joint schedule has been entered for this assembly.</p>
+        )}
+      </SheetSection>
+
+      <SheetSection n={2} title="Method" id="joint-method-heading">
+        <JointMethod results={jointsEval.results} />
+      </SheetSection>
+
+      <SheetSection
+        n={3}
+        title="Schedule"
+        id="joint-schedule-heading"
+        aside={<span className="text-xs text-ink-muted">computed in your browser as you type</span>}
+      >
+        <div aria-live="polite">
+          {joints.length > 0 ? (
+            <ScheduleTable
+              joints={joints}
+              evaluation={jointsEval}
+              onEdit={mayWrite ? editJoint : undefined}
+            />
+          ) : (
+            <p className="text-ink-muted">No joints in the schedule yet.</p>
+          )}
+        </div>
+      </SheetSection>
+      <JointCautions engineVersion={ENGINE_VERSION} />
+
+      <SheetSection
+        n={4}
+        title="Elevation — takeoff inputs"
+        id="takeoff-inputs-heading"
+        aside={
+          mayWrite && takeoff ? (
+            <Button
+              variant="quiet"
+              onClick={() => {
+                editing.history.markRemoval('the takeoff');
+                setTakeoff(undefined);
+              }}
+            >
+              Remove the takeoff
+            </Button>
+          ) : undefined
+        }
+      >
+        {takeoff ? (
+          mayWrite ? (
+            <ElevationEditor input={takeoff} onChange={setTakeoff} problems={takeoffEval?.problems ?? {}} />
+          ) : (
+            <ElevationTable input={takeoff} />
+          )
+        ) : mayWrite ? (
+          <div className="flex flex-wrap items-center gap-3">
+            <p className="text-ink-muted">No elevation yet for the takeoff.</p>
+            <Button variant="secondary" onClick={() => setTakeoff(blankTakeoff())}>
+              Start a takeoff
+            </Button>
+          </div>
+        ) : (
+          <p className="text-ink-muted">No takeoff has been entered for this assembly.</p>
+        )}
+      </SheetSection>
+
+      <SheetSection
+        n={5}
+        title="Takeoff"
+        id="takeoff-heading"
+        aside={
+          <span className="text-xs text-ink-muted">estimates — check them against the shop drawings</span>
+        }
+      >
+        <div aria-live="polite">
+          {takeoff && takeoffEval?.result ? (
+            <TakeoffTable input={takeoff} result={takeoffEval.result} assemblyName={assembly.name} />
+          ) : takeoff && takeoffEval ? (
+            <TakeoffProblems problems={takeoffEval.problems} input={takeoff} />
+          ) : (
+            <p className="text-ink-muted">Nothing to take off yet.</p>
+          )}
+        </div>
+      </SheetSection>
+      <TakeoffCautions engineVersion={ENGINE_VERSION} />
+
+      {mayWrite ? (
+        <RevisionSaveBar
+          editing={editing}
+          words={{
+            yours: 'edits',
+            carry: 'Carry my joints and takeoff over',
+            unsaved: 'The joints and takeoff have edits that are not saved.',
+            notePlaceholder: "e.g. VJ-1 widened to 25 mm after the maker's review",
+          }}
+          showNewer={false}
+          className="contents"
+          conflictDetail={
+            editing.conflict ? (
+              <p>
+                <strong>Carry my joints and takeoff over</strong> keeps your schedule and takeoff on top of
+                revision {editing.conflict.theirs.revision} (their changes elsewhere in the assembly stay);
+                nothing is saved until you save again. <strong>Load theirs</strong> replaces what is on this
+                page with revision {editing.conflict.theirs.revision}.
+              </p>
+            ) : null
+          }
+          live={
+            <div className="min-w-52" aria-live="polite" data-testid="joints-live-status">
+              <p className="label-caps">Live</p>
+              {problemCount > 0 ? (
+                <p className="text-sm text-caution">
+                  <span aria-hidden="true">✕ </span>
+                  {problemCount === 1 ? 'One value needs attention' : `${problemCount} values need attention`}
+                </p>
+              ) : (
+                <p className="text-sm">
+                  {joints.length === 0 ? (
+                    'No joints'
+                  ) : (
+                    <>
+                      <span className="text-meets">
+                        <span aria-hidden="true">✓ </span>
+                        {jointsEval.passCount} meet
+                      </span>
+                      {jointsEval.failCount > 0 ? (
+                        <span className="text-caution">
+                          {' '}
+                          · <span aria-hidden="true">✕ </span>
+                          {jointsEval.failCount} short
+                        </span>
+                      ) : null}
+                    </>
+                  )}
+                  {takeoffEval?.result ? (
+                    <span className="text-ink-muted">
+                      {' '}
+                      · {takeoffEval.result.sealant.cartridges.usFlOz10_1} cartridges (10.1 US fl oz)
+                    </span>
+                  ) : null}
+                </p>
+              )}
+            </div>
+          }
+        />
+      ) : null}
+    </div>
+  );
+}

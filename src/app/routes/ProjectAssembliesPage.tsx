@@ -2,10 +2,12 @@ import { can } from '@shared/auth/permissions';
 import { useParams } from 'react-router';
 import { AssembliesOverview } from '../../features/assemblies/components/AssembliesOverview';
 import { useProject } from '../../features/projects/api/get-project';
+import { useAssemblyCopyTargets } from '../../features/projects/api/get-projects';
 
 export function ProjectAssembliesPage() {
   const { id = '' } = useParams();
   const { data: project } = useProject(id);
+  const targets = useAssemblyCopyTargets();
   if (!project) return null;
   const mayWrite = can(project.myRole, 'assembly.write') && project.archivedAt === null;
 
@@ -15,7 +17,12 @@ export function ProjectAssembliesPage() {
       <h2 id="assemblies-heading" className="text-2xl">
         Assemblies
       </h2>
-      <AssembliesOverview projectId={project.id} mayWrite={mayWrite} searchable />
+      <AssembliesOverview
+        projectId={project.id}
+        mayWrite={mayWrite}
+        searchable
+        duplicateTargets={project.archivedAt === null ? targets : []}
+      />
     </section>
   );
 }

@@ -1,5 +1,6 @@
-import { type ReactNode, useEffect, useId, useRef } from 'react';
+import type { ReactNode } from 'react';
 import { Button } from './Button';
+import { Dialog } from './Dialog';
 
 interface ConfirmDialogProps {
   open: boolean;
@@ -16,8 +17,8 @@ interface ConfirmDialogProps {
 }
 
 /**
- * A question asked in view before an action that cannot be taken back: a native modal `<dialog>` (centred,
- * focus kept inside, Escape cancels). Focus starts on "Cancel", so Enter alone never confirms.
+ * A question asked in view before an action that cannot be taken back, in a modal `Dialog` (Escape
+ * cancels). Focus starts on "Cancel", so Enter alone never confirms.
  */
 export function ConfirmDialog({
   open,
@@ -31,38 +32,17 @@ export function ConfirmDialog({
   onConfirm,
   onCancel,
 }: ConfirmDialogProps) {
-  const ref = useRef<HTMLDialogElement>(null);
-  const titleId = useId();
-  useEffect(() => {
-    const d = ref.current;
-    if (open && d && !d.open) {
-      d.showModal();
-      d.querySelector<HTMLButtonElement>('[data-cancel]')?.focus();
-    }
-    if (!open && d?.open) d.close();
-  }, [open]);
   return (
-    <dialog
-      ref={ref}
-      aria-labelledby={titleId}
-      onCancel={(e) => {
-        e.preventDefault();
-        onCancel();
-      }}
-      className="m-auto w-[min(34rem,calc(100vw-2rem))] rounded-sm border border-ink bg-paper p-5 text-ink backdrop:bg-ink/50"
-    >
-      <h2 id={titleId} className="mb-3 text-xl">
-        {title}
-      </h2>
+    <Dialog open={open} title={title} onClose={onCancel}>
       <div className="flex flex-col gap-3 text-sm">{children}</div>
       <div className="mt-5 flex flex-wrap gap-3">
         <Button variant={confirmVariant} busy={busy} busyLabel={busyLabel} onClick={onConfirm}>
           {confirmLabel}
         </Button>
-        <Button data-cancel onClick={onCancel}>
+        <Button data-autofocus onClick={onCancel}>
           {cancelLabel}
         </Button>
       </div>
-    </dialog>
+    </Dialog>
   );
 }

@@ -1,5 +1,7 @@
 import { type AssemblySummary, WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
+import { useState } from 'react';
 import { ButtonLink } from '../../../components/ui/Button';
+import { Dialog } from '../../../components/ui/Dialog';
 import { FilterBar, FilterSelect, SearchBox } from '../../../components/ui/FilterBar';
 import { Loading } from '../../../components/ui/Loading';
 import { Notice } from '../../../components/ui/Notice';
@@ -8,6 +10,7 @@ import { VERDICT_TEXT } from '../../../lib/check-format';
 import { matchesQuery, useListFilters } from '../../../lib/list-filter';
 import { useAssemblies } from '../api/get-assemblies';
 import { AssemblyTable } from './AssemblyTable';
+import { DuplicateAssemblyForm } from './DuplicateAssembly';
 
 const FILTERS = ['q', 'category', 'verdict'] as const;
 /** The `verdict` filter's “never checked”. */
@@ -16,18 +19,23 @@ const UNCHECKED = 'none';
 /**
  * The project's assemblies: the table, and for those who may write, the ways to start a new one
  * (from a template, or blank). Used on the overview and, `searchable` (name, wall category,
- * last check's verdict, kept in the address), on the Assemblies tab.
+ * last check's verdict, kept in the address), on the Assemblies tab. Given the projects a copy may go to
+ * (`duplicateTargets`, filtered by the page), each row offers "Duplicate…" in a dialog.
  */
 export function AssembliesOverview({
   projectId,
   mayWrite,
   searchable = false,
+  duplicateTargets = [],
 }: {
   projectId: string;
   mayWrite: boolean;
   searchable?: boolean;
+  duplicateTargets?: { id: string; name: string }[];
 }) {
   const list = useAssemblies(projectId);
+  const [copying, setCopying] = useState<AssemblySummary | null>(null);
+  const onDuplicate = duplicateTargets.length > 0 ? setCopying : undefined;
   const base = `/projects/${projectId}/assemblies`;
   const count = list.data?.length ?? 0;
 
@@ -43,10 +51,25 @@ export function AssembliesOverview({
           its effective R-value worked out.
         </p>
       ) : searchable ? (
-        <SearchableTable projectId={projectId} assemblies={list.data} />
+        <SearchableTable projectId={projectId} assemblies={list.data} onDuplicate={onDuplicate} />
       ) : (
-        <AssemblyTable projectId={projectId} assemblies={list.data} />
+        <AssemblyTable projectId={projectId} assemblies={list.data} onDuplicate={onDuplicate} />
       )}
+      <Dialog
+        open={copying !== null}
+        title={copying ? `Duplicate “${copying.name}”` : ''}
+        onClose={() => setCopying(null)}
+      >
+        {copying ? (
+          <DuplicateAssemblyForm
+            key={copying.id}
+            assembly={copying}
+            projectId={projectId}
+            targets={duplicateTargets}
+            onCancel={() => setCopying(null)}
+          />
+        ) : null}
+      </Dialog>
       <div className="flex flex-wrap items-center gap-3">
         {mayWrite ? (
           <>
@@ -84,9 +107,11 @@ export function AssembliesOverview({
 function SearchableTable({
   projectId,
   assemblies,
+  onDuplicate,
 }: {
   projectId: string;
   assemblies: readonly AssemblySummary[];
+  onDuplicate?: (assembly: AssemblySummary) => void;
 }) {
   const filters = useListFilters(FILTERS);
   const { q, category, verdict } = filters.values;
@@ -126,7 +151,7 @@ function SearchableTable({
         {filters.active ? `${shown.length} of ${assemblies.length} assemblies match.` : ''}
       </p>
       {shown.length > 0 ? (
-        <AssemblyTable projectId={projectId} assemblies={shown} />
+        <AssemblyTable projectId={projectId} assemblies={shown} onDuplicate={onDuplicate} />
       ) : (
         <p className="border-y border-rule py-8 text-center">No assembly matches the search.</p>
       )}

@@ -1,20 +1,26 @@
 import { type AssemblySummary, WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
 import { Link } from 'react-router';
+import { Button } from '../../../components/ui/Button';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { VERDICT_TEXT } from '../../../lib/check-format';
 import { formatDate } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { rNumber, rUnit, uNumber, uUnit } from '../units';
 
-/** The project's assemblies with their effective R and U in the person's units, and their last check's verdict. */
+/**
+ * The project's assemblies with their effective R and U in the person's units, and their last check's verdict;
+ * with `onDuplicate`, a "Duplicate…" button on each row.
+ */
 export function AssemblyTable({
   projectId,
   assemblies,
   caption = 'Assemblies of this project',
+  onDuplicate,
 }: {
   projectId: string;
   assemblies: readonly AssemblySummary[];
   caption?: string;
+  onDuplicate?: (assembly: AssemblySummary) => void;
 }) {
   const system = useUnitSystem();
   return (
@@ -35,6 +41,11 @@ export function AssemblyTable({
           </Th>
           <Th>Last check</Th>
           <Th numeric>Updated</Th>
+          {onDuplicate ? (
+            <Th>
+              <span className="sr-only">Actions</span>
+            </Th>
+          ) : null}
         </tr>
       </thead>
       <tbody>
@@ -69,6 +80,13 @@ export function AssemblyTable({
             <Td numeric className="whitespace-nowrap">
               {formatDate(a.updatedAt)}
             </Td>
+            {onDuplicate ? (
+              <Td>
+                <Button variant="quiet" aria-label={`Duplicate ${a.name}…`} onClick={() => onDuplicate(a)}>
+                  Duplicate…
+                </Button>
+              </Td>
+            ) : null}
           </tr>
         ))}
       </tbody>

@@ -8,6 +8,8 @@ import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage } from '../../../lib/api';
 import { useDuplicateAssembly } from '../api/duplicate-assembly';
 
+type Targets = { id: string; name: string }[];
+
 /**
  * "Duplicate…": a copy of the assembly's current revision as revision 1 of a new assembly, in this project
  * or another one the person may edit (`targets`, already filtered by the page), then opens the copy.
@@ -19,16 +21,11 @@ export function DuplicateAssembly({
 }: {
   assembly: { id: string; name: string };
   projectId: string;
-  targets: { id: string; name: string }[];
+  targets: Targets;
 }) {
   const [open, setOpen] = useState(false);
-  const [target, setTarget] = useState(targets.some((p) => p.id === projectId) ? projectId : targets[0]?.id);
-  const [name, setName] = useState(`${assembly.name} (copy)`);
-  const duplicate = useDuplicateAssembly();
-  const navigate = useNavigate();
   const formId = useId();
-  if (targets.length === 0 || target === undefined) return null;
-
+  if (targets.length === 0) return null;
   if (!open)
     return (
       <Button variant="secondary" onClick={() => setOpen(true)} aria-expanded={false} aria-controls={formId}>
@@ -36,10 +33,47 @@ export function DuplicateAssembly({
       </Button>
     );
   return (
-    <form
+    <DuplicateAssemblyForm
       id={formId}
+      assembly={assembly}
+      projectId={projectId}
+      targets={targets}
+      onCancel={() => setOpen(false)}
+      className="border border-rule bg-paper-raised p-4"
+    />
+  );
+}
+
+/**
+ * The duplicate form: into which project (this one first), the copy's name; "Make the copy" opens it. On the
+ * assembly page below its button, on the assembly list in a dialog.
+ */
+export function DuplicateAssemblyForm({
+  id,
+  assembly,
+  projectId,
+  targets,
+  onCancel,
+  className = '',
+}: {
+  id?: string;
+  assembly: { id: string; name: string };
+  projectId: string;
+  targets: Targets;
+  onCancel: () => void;
+  className?: string;
+}) {
+  const [target, setTarget] = useState(targets.some((p) => p.id === projectId) ? projectId : targets[0]?.id);
+  const [name, setName] = useState(`${assembly.name} (copy)`);
+  const duplicate = useDuplicateAssembly();
+  const navigate = useNavigate();
+  if (target === undefined) return null;
+
+  return (
+    <form
+      id={id}
       aria-label="Duplicate this assembly"
-      className="flex flex-col gap-3 border border-rule bg-paper-raised p-4"
+      className={`flex flex-col gap-3 ${className}`}
       onSubmit={(e) => {
         e.preventDefault();
         duplicate.mutate(
@@ -67,6 +101,7 @@ export function DuplicateAssembly({
           {(c) => (
             <TextInput
               {...c}
+              data-autofocus
               value={name}
               required
               maxLength={200}
@@ -80,7 +115,7 @@ export function DuplicateAssembly({
         <Button type="submit" variant="primary" busy={duplicate.isPending} busyLabel="Copying…">
           Make the copy
         </Button>
-        <Button variant="secondary" onClick={() => setOpen(false)}>
+        <Button variant="secondary" onClick={onCancel}>
           Cancel
         </Button>
       </div>

@@ -1,3 +1,4 @@
+import { can } from '@shared/auth/permissions';
 import { projectSchema } from '@shared/schemas/project';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
@@ -16,3 +17,9 @@ export const projectsQueryOptions = (filter: ProjectListFilter) =>
   queryOptions({ queryKey: projectKeys.list(filter), queryFn: ({ signal }) => getProjects(filter, signal) });
 
 export const useProjects = (filter: ProjectListFilter) => useQuery(projectsQueryOptions(filter));
+
+/** The projects a copy of an assembly may go to: unarchived ones whose role allows `assembly.write`. */
+export function useAssemblyCopyTargets() {
+  const projects = useProjects({ archived: false }).data ?? [];
+  return projects.filter((p) => can(p.myRole, 'assembly.write') && p.archivedAt === null);
+}

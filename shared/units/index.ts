@@ -2,9 +2,14 @@
  * Units. Everything inside Skinwright is SI; conversion happens only at the edges (forms, tables, sheet).
  * Branded number types keep quantities from being mixed by accident.
  *
- * Conversion factors are the exact-definition values tabulated in NIST SP 811 (2008), Appendix B.8/B.9,
- * and in ASHRAE Handbook—Fundamentals (2021) ch. 38 "Units and conversions".
+ * The quantities, their SI and IP units, display precision and conversion factors live in one registry
+ * (`registry.ts`, factors derived from mathjs's unit system at load); this module re-exports it with the names
+ * the rest of the code multiplies by.
  */
+import { QUANTITIES, type Quantity, shownToStored, storedToShown } from './registry';
+
+export * from './registry';
+
 declare const brand: unique symbol;
 export type Brand<T, B extends string> = T & { readonly [brand]: B };
 
@@ -23,42 +28,47 @@ export type PsiValue = Brand<number, 'ψ W/(m·K)'>;
 /** Point thermal transmittance χ, W/K. */
 export type ChiValue = Brand<number, 'W/K'>;
 
-/** 1 h·ft²·°F/Btu = 0.176 110 2 m²·K/W (NIST SP 811 B.9, Btu_IT). */
-export const R_IP_TO_SI = 0.1761102;
-/** 1 Btu/(h·ft²·°F) = 5.678 263 W/(m²·K) (NIST SP 811 B.9, Btu_IT). */
-export const U_IP_TO_SI = 5.678263;
-/** 1 Btu·in/(h·ft²·°F) = 0.144 227 9 W/(m·K) (NIST SP 811 B.9, Btu_IT). */
-export const K_IP_TO_SI = 0.1442279;
-/** 1 Btu/(h·ft·°F) = 1.730 735 W/(m·K) (NIST SP 811 B.9, Btu_IT) — ψ in IP. */
-export const PSI_IP_TO_SI = 1.730735;
-/** 1 Btu/(h·°F) = 0.527 527 9 W/K (NIST SP 811 B.9, Btu_IT) — χ in IP. */
-export const CHI_IP_TO_SI = 0.5275279;
-/** 1 in = 0.0254 m exactly. */
-export const INCH = 0.0254;
-/** 1 ft = 0.3048 m exactly. */
-export const FOOT = 0.3048;
-/** The typographic (PostScript) point, 1/72 in, in mm: type sizes are in points, the sheet's layout in mm. */
-export const POINT_MM = (INCH * 1000) / 72;
-/** 1 US gallon = 231 in³ exactly (NIST Handbook 44, Appendix C). */
-export const US_GALLON = 231 * INCH ** 3;
-/**
- * 1 lbf = 4.448 221 615 260 5 N exactly: 0.453 592 37 kg × 9.806 65 m/s², the avoirdupois pound times standard
- * gravity, both exact by definition (NIST SP 811 (2008) Appendix B.8/B.9, pound-force; tabulated 4.448 222 E+00).
+/*
+ * The factors other code multiplies by, each read from the registry (derived from mathjs at load; checked
+ * against NIST SP 811 (2008) Appendix B.8/B.9 in units.test.ts). `X_TO_SI` is the SI value of one IP unit.
  */
-export const LBF_TO_N = 4.4482216152605;
-/** 1 lbf/ft² = 47.880 26 Pa (NIST SP 811 B.9). */
-export const PSF_TO_PA = 47.88026;
-/** 1 lb/ft² = 4.882 428 kg/m² (NIST SP 811 B.9, pound avoirdupois per square foot). */
-export const LB_PER_FT2_TO_KG_PER_M2 = 4.882428;
-/** 1 mph = 0.447 04 m/s exactly. */
-export const MPH_TO_MS = 0.44704;
-/** 1 US perm (23 °C) = 57.452 5 ng/(Pa·s·m²); 1 perm (0 °C) = 57.2135 ng/(Pa·s·m²) (NIST SP 811 B.9). */
-export const PERM_23C_TO_SI = 57.4525e-12;
-export const PERM_0C_TO_SI = 57.2135e-12;
+const ip = (q: Quantity) => QUANTITIES[q].IP.scale;
+/** 1 h·ft²·°F/Btu_IT in m²·K/W (thermal resistance R). */
+export const R_IP_TO_SI = ip('resistance');
+/** 1 Btu_IT/(h·ft²·°F) in W/(m²·K) (thermal transmittance U). */
+export const U_IP_TO_SI = ip('transmittance');
+/** 1 Btu_IT·in/(h·ft²·°F) in W/(m·K) (thermal conductivity λ). */
+export const K_IP_TO_SI = ip('conductivity');
+/** 1 Btu_IT/(h·ft·°F) in W/(m·K) — ψ in IP. */
+export const PSI_IP_TO_SI = ip('psi');
+/** 1 Btu_IT/(h·°F) in W/K — χ in IP. */
+export const CHI_IP_TO_SI = ip('chi');
+/** 1 in in m (0.0254 exactly). */
+export const INCH = ip('shortLength');
+/** 1 ft in m (0.3048 exactly). */
+export const FOOT = ip('length');
+/** The typographic (PostScript) point, 1/72 in, in mm: type sizes are in points, the sheet's layout in mm. */
+export const POINT_MM = QUANTITIES.shortLength.IP.scale / QUANTITIES.shortLength.SI.scale / 72;
+/** 1 US gallon (231 in³ exactly) in m³. */
+export const US_GALLON = ip('volume');
+/** 1 lbf in N: 0.453 592 37 kg × 9.806 65 m/s², both exact by definition. */
+export const LBF_TO_N = ip('force');
+/** 1 lbf/ft² in Pa. */
+export const PSF_TO_PA = ip('pressure');
+/** 1 lb/ft² in kg/m² (pound avoirdupois per square foot). */
+export const LB_PER_FT2_TO_KG_PER_M2 = ip('massPerArea');
+/** 1 lb/ft³ in kg/m³. */
+export const LB_PER_FT3_TO_KG_PER_M3 = ip('density');
+/** 1 mph in m/s (0.447 04 exactly). */
+export const MPH_TO_MS = ip('speed');
+/** 1 perm (23 °C) and 1 perm (0 °C) in kg/(Pa·s·m²). */
+export const PERM_23C_TO_SI = ip('vapourPermeance');
+export const PERM_0C_TO_SI = QUANTITIES.vapourPermeance.also.perm0C!.scale;
+/** A degree Fahrenheit as a temperature difference, in kelvins (5/9). */
+export const FAHRENHEIT_DEGREE_K = ip('temperatureDifference');
 
-export const fahrenheitToCelsius = (f: number): Celsius => (((f - 32) * 5) / 9) as Celsius;
-export const celsiusToFahrenheit = (c: number): number => (c * 9) / 5 + 32;
-/** A temperature difference: 1 °F = 5/9 K. */
-export const deltaFahrenheitToKelvin = (df: number): Kelvin => ((df * 5) / 9) as Kelvin;
-
-export type UnitSystem = 'SI' | 'IP';
+const fahrenheit = QUANTITIES.temperature.IP;
+export const fahrenheitToCelsius = (f: number): Celsius => shownToStored(f, fahrenheit) as Celsius;
+export const celsiusToFahrenheit = (c: number): number => storedToShown(c, fahrenheit);
+/** A temperature difference in °F → K. */
+export const deltaFahrenheitToKelvin = (df: number): Kelvin => (df * FAHRENHEIT_DEGREE_K) as Kelvin;

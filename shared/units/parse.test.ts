@@ -114,7 +114,7 @@ describe('refusals name the reason', () => {
 
   it('an unknown unit, text, a zero denominator, an overflow', () => {
     expect(reasonOf(parseTypedQuantity('3 inchs', 'mm'))).toMatch(
-      /“inchs” is not a unit this box reads; it takes a length \(mm\)/,
+      '“3 inchs”: “inchs” is not a unit this box reads; type a length such as 12.5 mm',
     );
     expect(reasonOf(parseTypedQuantity('abc', 'mm'))).toMatch(/is not a number/);
     expect(reasonOf(parseTypedQuantity('5/0 in', 'mm'))).toMatch(/divides by zero/);

@@ -190,7 +190,7 @@ export function parseTypedQuantity(text: string, symbol: string): TypedQuantity 
   } catch {
     return refuse(
       'unknown_unit',
-      `: ${quoted(typedUnit)} is not a unit this box reads; it takes ${takes} (${example})`,
+      `: ${quoted(typedUnit)} is not a unit this box reads; type ${dimensionName(box.unit)} such as 12.5 ${symbol}`,
     );
   }
   if (!typed.equalBase(box.unit)) return wrongKind(typed);

@@ -2,6 +2,7 @@ import { INCH, type UnitSystem } from '@shared/units';
 import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { useState } from 'react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { measureInput } from '../../features/assemblies/units';
 import type { InputMeasure } from '../../lib/input-measure';
 import { type Quantity, quantityInput } from '../../lib/quantities';
 import { sheetInput } from '../../lib/sheet-units';
@@ -86,19 +87,19 @@ describe('QuantityInput with the form quantities (lib/quantities)', () => {
   it('shows an error in words, not a number, for input that is not a number', () => {
     const onSi = vi.fn();
     const { rerender } = render(<Harness initial={12} quantity="length" system="SI" onSi={onSi} />);
-    fireEvent.change(box(), { target: { value: '12,5m' } });
+    fireEvent.change(box(), { target: { value: 'about 12' } });
     fireEvent.blur(box());
 
     expect(onSi).toHaveBeenLastCalledWith(undefined, 'invalid');
     expect(box().getAttribute('aria-invalid')).toBe('true');
     const message = screen.getByText(/Enter a number in m/);
     expect(box().getAttribute('aria-describedby')).toContain(message.parentElement?.id ?? 'missing');
-    expect(box().value).toBe('12,5m');
+    expect(box().value).toBe('about 12');
     expect(document.body.textContent).not.toContain('NaN');
 
     // Switching units keeps what was typed rather than inventing a number.
     rerender(<Harness initial={12} quantity="length" system="IP" onSi={onSi} />);
-    expect(box().value).toBe('12,5m');
+    expect(box().value).toBe('about 12');
     expect(screen.getByText(/Enter a number in ft/)).toBeTruthy();
   });
 
@@ -194,10 +195,10 @@ describe('QuantityInput with the sheet measures (lib/sheet-units)', () => {
     fireEvent.change(box(), { target: { value: '1 1/4' } });
     expect(onSi.mock.lastCall?.[0]).toBeCloseTo(1.25 * INCH, 12);
 
-    fireEvent.change(box(), { target: { value: '3/4 in wide' } });
+    fireEvent.change(box(), { target: { value: 'wide' } });
     fireEvent.blur(box());
     expect(
-      screen.getByText('Enter a number in in (for example 3/4 or 0.75); “3/4 in wide” is not one.'),
+      screen.getByText('Enter a number in in (for example 3/4 or 0.75); “wide” is not one.'),
     ).toBeTruthy();
   });
 
@@ -243,5 +244,92 @@ describe('QuantityInput with the sheet measures (lib/sheet-units)', () => {
     fireEvent.change(box(), { target: { value: 'abc' } });
     expect(onSi).toHaveBeenLastCalledWith(undefined, 'invalid');
     expect(screen.getByText(/Enter a number in mm/)).toBeTruthy();
+  });
+});
+
+describe('QuantityInput reads a number typed with its unit (factors: NIST SP 811 (2008) B.8, 1 in = 25.4 mm exactly)', () => {
+  const note = () =>
+    document.getElementById(
+      box()
+        .getAttribute('aria-describedby')
+        ?.split(' ')
+        .find((id) => id.endsWith('-conversion')) ?? 'none',
+    );
+
+  it('3.5 in in a mm box: SI at once, 88.9 mm in the box on blur, the conversion announced under it', () => {
+    const onSi = vi.fn();
+    render(<Harness initial={0.1} measure={measureInput('thickness')} system="SI" onSi={onSi} />);
+    fireEvent.change(box(), { target: { value: '3.5 in' } });
+    expect(onSi.mock.lastCall?.[0]).toBeCloseTo(0.0889, 12);
+    expect(onSi.mock.lastCall?.[1]).toBe('ok');
+    expect(box().value).toBe('3.5 in');
+    fireEvent.blur(box());
+    expect(box().value).toBe('88.9');
+    expect(box().getAttribute('aria-invalid')).toBe('false');
+    expect(note()?.textContent).toBe('3.5 in → 88.9\u202fmm');
+    expect(note()?.getAttribute('aria-live')).toBe('polite');
+    // The next edit clears the note.
+    fireEvent.change(box(), { target: { value: '90' } });
+    expect(onSi).toHaveBeenLastCalledWith(0.09, 'ok');
+    expect(note()).toBeNull();
+    expect(document.body.textContent).not.toContain('→');
+  });
+
+  it('1 5/8 in converts on Enter to 41.28 mm (41.275 mm kept inside)', () => {
+    const onSi = vi.fn();
+    render(<Harness initial={undefined} measure={measureInput('thickness')} system="SI" onSi={onSi} />);
+    fireEvent.change(box(), { target: { value: '1 5/8 in' } });
+    fireEvent.keyDown(box(), { key: 'Enter' });
+    expect(onSi.mock.lastCall?.[0]).toBeCloseTo(0.041275, 12);
+    expect(box().value).toBe('41.28');
+    expect(screen.getByText('1 5/8 in → 41.28 mm')).toBeTruthy();
+  });
+
+  it('89 mm in an inch box (IP) reads 3.504 in; a joint box takes 1-5/8" as typed', () => {
+    const onSi = vi.fn();
+    render(<Harness initial={undefined} measure={measureInput('thickness')} system="IP" onSi={onSi} />);
+    fireEvent.change(box(), { target: { value: '89 mm' } });
+    fireEvent.blur(box());
+    expect(onSi.mock.lastCall?.[0]).toBeCloseTo(0.089, 12);
+    expect(box().value).toBe('3.504');
+    expect(screen.getByText('89 mm → 3.504 in')).toBeTruthy();
+    cleanup();
+
+    render(<Harness initial={undefined} measure={sheetInput('joint')} system="IP" onSi={onSi} />);
+    fireEvent.change(box(), { target: { value: '1-5/8"' } });
+    fireEvent.blur(box());
+    expect(onSi.mock.lastCall?.[0]).toBeCloseTo(1.625 * INCH, 12);
+    // The joint box reads trade fractions itself, so the entry stays as typed.
+    expect(box().value).toBe('1-5/8"');
+  });
+
+  it('a plain number keeps today’s behaviour: no conversion, no note, the text as typed', () => {
+    const onSi = vi.fn();
+    render(<Harness initial={undefined} measure={measureInput('thickness')} system="SI" onSi={onSi} />);
+    fireEvent.change(box(), { target: { value: '89' } });
+    fireEvent.blur(box());
+    expect(onSi).toHaveBeenLastCalledWith(0.089, 'ok');
+    expect(box().value).toBe('89');
+    expect(document.body.textContent).not.toContain('→');
+  });
+
+  it('a quantity of another kind is the field error in words, nothing is handed up, never NaN', () => {
+    const onSi = vi.fn();
+    render(<Harness initial={0.1} measure={measureInput('thickness')} system="SI" onSi={onSi} />);
+    fireEvent.change(box(), { target: { value: '3.5 kg' } });
+    fireEvent.blur(box());
+    expect(onSi).toHaveBeenLastCalledWith(undefined, 'invalid');
+    expect(box().value).toBe('3.5 kg');
+    expect(box().getAttribute('aria-invalid')).toBe('true');
+    const message = screen.getByText('“3.5 kg” is a mass; this box takes a length (mm)');
+    expect(box().getAttribute('aria-describedby')).toContain(message.parentElement?.id ?? 'missing');
+    expect(document.body.textContent).not.toContain('NaN');
+  });
+
+  it('a decimal comma is refused with the reason rather than guessed', () => {
+    render(<Harness initial={12} quantity="length" system="SI" />);
+    fireEvent.change(box(), { target: { value: '12,5m' } });
+    fireEvent.blur(box());
+    expect(screen.getByText(/write decimals with a point and no thousands separators/)).toBeTruthy();
   });
 });

@@ -1,5 +1,6 @@
 import type { UnitSystem } from '@shared/units';
-import { type ClipboardEventHandler, type ReactNode, type Ref, useState } from 'react';
+import { parseTypedQuantity } from '@shared/units/parse';
+import { type ClipboardEventHandler, type ReactNode, type Ref, useId, useState } from 'react';
 import { type FieldProblem, problemText } from '../../lib/field-problems';
 import type { InputMeasure, ParsedEntry } from '../../lib/input-measure';
 import { useUnitSystem } from '../../lib/unit-system';
@@ -63,12 +64,39 @@ interface InputState {
   value: number | null | undefined;
   system: UnitSystem;
   problem: 'empty' | 'invalid' | null;
+  /** Why a number typed with a unit cannot be used ("“3.5 kg” is a mass; …"), in the parser's words. */
+  reason?: string;
+  /** The entry was read through its unit: on blur or Enter the box shows the number in its own unit. */
+  viaUnit?: { converted: boolean };
+  /** The conversion last made ("3.5 in → 88.9 mm"), shown under the box until the next edit. */
+  note?: string;
+}
+
+/**
+ * What was typed: the measure's own reading (a plain number, inch fractions) or, failing that, a number with a
+ * unit converted to the box's unit by the units layer and read by the measure from there (so the SI value comes
+ * from the same adapter as a plain number's).
+ */
+function readEntry(text: string, measure: InputMeasure, system: UnitSystem) {
+  const parsed = measure.parse(text, system);
+  if (parsed.kind !== 'invalid') return { parsed };
+  const typed = parseTypedQuantity(text, measure.unit(system));
+  if (typed.kind === 'invalid')
+    return { parsed, reason: typed.why === 'not_a_number' ? undefined : typed.reason };
+  if (typed.kind === 'ok') {
+    const inBox = measure.parse(String(typed.value), system);
+    if (inBox.kind === 'ok') return { parsed: inBox, viaUnit: { converted: typed.converted } };
+  }
+  return { parsed };
 }
 
 /**
  * The one number box for a quantity with a unit: stores SI, shows the person's unit system through the
  * `measure` it is given (m ↔ ft, °C ↔ °F, mm ↔ in with fractions, kPa ↔ psf, W/(m·K) ↔ Btu·in/(h·ft²·°F), …).
  * It never shows "NaN": an empty or unreadable entry is named in words beside the box and `undefined` is handed up.
+ * A number typed with a unit ("3.5 in" in a mm box, "1 5/8 in", "2' 6\"", "50 °F") is handed up as SI at once
+ * and, on blur or Enter, rewritten in the box's unit with the conversion under the box ("3.5 in → 88.9 mm");
+ * a unit of another kind is refused with the reason ("“3.5 kg” is a mass; this box takes a length (mm)").
  */
 export function QuantityInput({
   label,
@@ -98,6 +126,7 @@ export function QuantityInput({
   const system = override ?? preferred;
   const unit = measure.unit(system);
   const [touched, setTouched] = useState(false);
+  const noteId = `${useId()}-conversion`;
   const [state, setState] = useState<InputState>(() => ({
     text: measure.toText(value, system),
     value,
@@ -115,23 +144,37 @@ export function QuantityInput({
       value,
       system,
       problem: keepTyped ? state.problem : null,
+      // The reason, in this system's units, for an unreadable entry that is kept.
+      reason: keepTyped ? readEntry(state.text, measure, system).reason : undefined,
     });
   }
 
   function handleChange(text: string) {
-    const parsed = measure.parse(text, system);
+    const { parsed, reason, viaUnit } = readEntry(text, measure, system);
     const si = parsed.kind === 'ok' ? parsed.si : undefined;
     const local =
       parsed.kind === 'invalid' ? 'invalid' : parsed.kind === 'empty' && required ? 'empty' : null;
-    setState({ text, value: si ?? Number.NaN, system, problem: local });
+    setState({ text, value: si ?? Number.NaN, system, problem: local, reason, viaUnit });
     onChange(si, parsed.kind);
+  }
+
+  /** Blur or Enter: an entry read through its unit is rewritten in the box's unit, the conversion shown. */
+  function commit() {
+    const { viaUnit, value: si } = state;
+    if (!viaUnit || si == null || Number.isNaN(si)) return;
+    const text = measure.toText(si, system);
+    const note = viaUnit.converted
+      ? `${state.text.trim()} → ${text}${unit ? `\u202f${unit}` : ''}`
+      : undefined;
+    setState({ ...state, text, viaUnit: undefined, note });
   }
 
   const inUnit = unit ? ` in ${unit}` : '';
   const example = measure.example?.(system) ?? '12.5';
   const localMessage =
     state.problem === 'invalid'
-      ? `Enter a number${inUnit} (for example ${example}); “${state.text.trim()}” is not one.`
+      ? (state.reason ??
+        `Enter a number${inUnit} (for example ${example}); “${state.text.trim()}” is not one.`)
       : state.problem === 'empty'
         ? `Enter a value${inUnit}.`
         : undefined;
@@ -160,45 +203,57 @@ export function QuantityInput({
       className={className}
     >
       {(control) => (
-        <div className="flex items-stretch">
-          <input
-            {...control}
-            aria-invalid={control['aria-invalid'] || invalid}
-            aria-describedby={
-              [control['aria-describedby'], describedBy].filter(Boolean).join(' ') || undefined
-            }
-            aria-required={required || undefined}
-            ref={inputRef}
-            name={name}
-            type="text"
-            inputMode={measure.inputMode ?? 'decimal'}
-            autoComplete="off"
-            spellCheck={false}
-            disabled={disabled}
-            placeholder={placeholder}
-            value={state.text}
-            onChange={(e) => handleChange(e.target.value)}
-            onPaste={onPaste}
-            onBlur={() => {
-              setTouched(true);
-              onBlur?.();
-            }}
-            className={
-              `num block w-full min-w-0 ${suffix ? 'rounded-l-sm' : 'rounded-sm'} border border-rule-strong ` +
-              `bg-paper-raised ${sized.box} text-right text-ink placeholder:text-ink-muted ` +
-              'aria-[invalid=true]:border-2 aria-[invalid=true]:border-caution ' +
-              'disabled:bg-paper-sunk disabled:text-ink-muted'
-            }
-          />
-          {suffix ? (
-            <span
-              aria-hidden="true"
-              className={`num flex ${sized.unit} items-center justify-center rounded-r-sm border border-l-0 border-rule-strong bg-paper-sunk text-ink-muted print:border-0`}
-            >
-              {unit}
-            </span>
-          ) : null}
-        </div>
+        <>
+          <div className="flex items-stretch">
+            <input
+              {...control}
+              aria-invalid={control['aria-invalid'] || invalid}
+              aria-describedby={
+                [control['aria-describedby'], describedBy, state.note ? noteId : undefined]
+                  .filter(Boolean)
+                  .join(' ') || undefined
+              }
+              aria-required={required || undefined}
+              ref={inputRef}
+              name={name}
+              type="text"
+              inputMode={measure.inputMode ?? 'decimal'}
+              autoComplete="off"
+              spellCheck={false}
+              disabled={disabled}
+              placeholder={placeholder}
+              value={state.text}
+              onChange={(e) => handleChange(e.target.value)}
+              onPaste={onPaste}
+              onKeyDown={(e) => {
+                if (e.key === 'Enter') commit();
+              }}
+              onBlur={() => {
+                commit();
+                setTouched(true);
+                onBlur?.();
+              }}
+              className={
+                `num block w-full min-w-0 ${suffix ? 'rounded-l-sm' : 'rounded-sm'} border border-rule-strong ` +
+                `bg-paper-raised ${sized.box} text-right text-ink placeholder:text-ink-muted ` +
+                'aria-[invalid=true]:border-2 aria-[invalid=true]:border-caution ' +
+                'disabled:bg-paper-sunk disabled:text-ink-muted'
+              }
+            />
+            {suffix ? (
+              <span
+                aria-hidden="true"
+                className={`num flex ${sized.unit} items-center justify-center rounded-r-sm border border-l-0 border-rule-strong bg-paper-sunk text-ink-muted print:border-0`}
+              >
+                {unit}
+              </span>
+            ) : null}
+          </div>
+          {/* Always in the page, so that a screen reader announces the conversion when it appears. */}
+          <p id={noteId} aria-live="polite" className={state.note ? 'num text-xs text-ink-muted' : 'sr-only'}>
+            {state.note}
+          </p>
+        </>
       )}
     </Field>
   );

@@ -69,7 +69,11 @@ describe('ClimateForm', () => {
     const onSubmit = renderForm(demoClimate, 'SI');
     fireEvent.change(box(/^March mean exterior temperature/), { target: { value: '4,5' } });
     fireEvent.blur(box(/^March mean exterior temperature/));
-    expect(screen.getByText('Enter a number in °C (for example 12.5); “4,5” is not one.')).toBeTruthy();
+    expect(
+      screen.getByText(
+        '“4,5”: write decimals with a point and no thousands separators (for example 12.5 °C)',
+      ),
+    ).toBeTruthy();
     fireEvent.click(screen.getByRole('button', { name: 'Save the climate' }));
     expect(await screen.findByText('One value needs attention.')).toBeTruthy();
     expect(onSubmit).not.toHaveBeenCalled();

@@ -19,7 +19,9 @@
  *   agrees with them).
  */
 import { solveBridge, temperatureAt } from '@shared/calc/bridge/bridge';
+import { demoGirtModel } from '@shared/calc/bridge/fixtures';
 import { type BridgeModelInput, bridgeModelSchema } from '@shared/calc/bridge/schema';
+import { calculateThermal } from '@shared/calc/thermal/thermal';
 import { describe, expect, it } from 'vitest';
 
 const model = (m: BridgeModelInput) => bridgeModelSchema.parse(m);
@@ -157,5 +159,139 @@ describe('ISO 10211 case 4 — steel bar through an insulation layer (3-D)', () 
   });
   it('highest outside surface temperature 0.805 °C within 0.005 K', () => {
     expect(Math.abs(result.boundaries[0]!.maxSurfaceTemperature - 0.805)).toBeLessThanOrEqual(0.005);
+  });
+});
+
+describe('ISO 10211 case 3 — wall, floor slab and balcony at an outside corner, three environments (3-D)', () => {
+  // Geometry in metres from the Feel++ case3.geo [third-party]: outside wall 0.1 m (λ 1) on the two outer
+  // faces x = −0.1 and y = −0.1, insulation 0.05 m (λ 0.04), inner wall leaf 0.15 m (λ 0.7), slab
+  // 0.15 m (λ 2.5) at z 1.0–1.15 running through the wall into a balcony to y = −0.7, floor finish 0.05 m
+  // (λ 1); room α below (20 °C), room β above (15 °C), both Rs 0.2; outside γ 0 °C, Rs 0.05; the cut planes
+  // x = 1.2, y = 1.2, z = 0 and z = 2.15 adiabatic. At the default-like mesh here (262 080 cells, 10 mm at
+  // the edges): Φα 46.03, Φβ 13.88, Σγ −59.91 W; θmin α 11.32, β 11.10 °C (2026-12-04).
+  const m = model({
+    dimension: '3d',
+    boxes: [
+      box('outside wall', 1, [-0.1, -0.1, 0], [0, 1.2, 2.15]),
+      box('outside wall', 1, [0, -0.1, 0], [1.2, 0, 1]),
+      box('outside wall', 1, [0, -0.1, 1.15], [1.2, 0, 2.15]),
+      box('outside wall', 1, [0, -0.1, 1], [0.05, 0, 1.15]),
+      box('insulation', 0.04, [0, 0, 0], [0.05, 1.2, 2.15]),
+      box('insulation', 0.04, [0.05, 0, 0], [1.2, 0.05, 1]),
+      box('insulation', 0.04, [0.05, 0, 1.15], [1.2, 0.05, 2.15]),
+      box('slab and balcony', 2.5, [0.05, -0.7, 1], [1.2, 1.2, 1.15]),
+      box('inner leaf, lower', 0.7, [0.05, 0.05, 0], [0.2, 1.2, 1]),
+      box('inner leaf, lower', 0.7, [0.2, 0.05, 0], [1.2, 0.2, 1]),
+      box('inner leaf, upper', 0.7, [0.05, 0.05, 1.15], [0.2, 1.2, 2.15]),
+      box('inner leaf, upper', 0.7, [0.2, 0.05, 1.15], [1.2, 0.2, 2.15]),
+      box('floor finish', 1, [0.2, 0.2, 1.15], [1.2, 1.2, 1.2]),
+    ],
+    boundaries: [
+      env('room α', 'inside', 20, 0.2, [0.2, 0.2, 0], [1.2, 1.2, 1]),
+      env('room β', 'inside', 15, 0.2, [0.2, 0.2, 1.2], [1.2, 1.2, 2.15]),
+      env('outside, x face', 'outside', 0, 0.05, [-0.1, -0.1, 0], [-0.1, 1.2, 2.15]),
+      env('outside, y face', 'outside', 0, 0.05, [-0.1, -0.1, 0], [1.2, -0.1, 2.15]),
+      env('balcony side', 'outside', 0, 0.05, [0.05, -0.7, 1], [0.05, -0.1, 1.15]),
+      env('balcony top', 'outside', 0, 0.05, [0.05, -0.7, 1.15], [1.2, -0.1, 1.15]),
+      env('balcony soffit', 'outside', 0, 0.05, [0.05, -0.7, 1], [1.2, -0.1, 1]),
+      env('balcony end', 'outside', 0, 0.05, [0.05, -0.7, 1], [1.2, -0.7, 1.15]),
+    ],
+    mesh: { interfaceCell: 0.01, maxCell: 0.05, growth: 1.3 },
+  });
+  const result = solveBridge(m, 3_000_000);
+  const flow = (side: 'α' | 'β') => result.boundaries.find((b) => b.name === `room ${side}`)!;
+  const outside = result.boundaries.filter((b) => b.side === 'outside').reduce((s, b) => s + b.heatFlow, 0);
+  it('heat flows α 46.09 W, β 13.89 W, γ −59.98 W, each within 1 %', () => {
+    expect(Math.abs(flow('α').heatFlow / 46.09 - 1)).toBeLessThanOrEqual(0.01);
+    expect(Math.abs(flow('β').heatFlow / 13.89 - 1)).toBeLessThanOrEqual(0.01);
+    expect(Math.abs(outside / -59.98 - 1)).toBeLessThanOrEqual(0.01);
+    expect(result.solver.energyBalance).toBeLessThan(1e-3);
+  });
+  it('lowest surface temperatures α 11.32 °C and β 11.11 °C within 0.1 K', () => {
+    expect(Math.abs(flow('α').minSurfaceTemperature - 11.32)).toBeLessThanOrEqual(0.1);
+    expect(Math.abs(flow('β').minSurfaceTemperature - 11.11)).toBeLessThanOrEqual(0.1);
+  });
+});
+
+describe('cross-check with the 1-D engine: a wall without a bridge (derived)', () => {
+  // Steel sheet 0.6 mm (λ 50), mineral wool 100 mm (λ 0.035), gypsum 12.5 mm (λ 0.25); Rse 0.04, Rsi 0.13
+  // (ISO 6946:2017 Table 7, as the thermal engine uses). With no bridge, L = U·A exactly, so ψ and χ are 0
+  // and L / A is the clear-field U of calculateThermal.
+  const layers = [
+    { name: 'steel sheet', d: 0.0006, lambda: 50 },
+    { name: 'mineral wool', d: 0.1, lambda: 0.035 },
+    { name: 'gypsum board', d: 0.0125, lambda: 0.25 },
+  ];
+  const u1d = 1 / (0.04 + layers.reduce((s, l) => s + l.d / l.lambda, 0) + 0.13);
+  const thermalU = calculateThermal({
+    layers: layers.map((l) => ({
+      kind: 'homogeneous',
+      name: l.name,
+      thickness: l.d,
+      conductivity: l.lambda,
+    })),
+    heatFlow: 'horizontal',
+    bridges: [],
+  }).U0;
+  const depth = layers.reduce((s, l) => s + l.d, 0);
+  const stack = (dim: 2 | 3) => {
+    let y = 0;
+    return layers.map((l) => {
+      const b = box(
+        l.name,
+        l.lambda,
+        dim === 2 ? [0, y] : [0, y, 0],
+        dim === 2 ? [0.6, y + l.d] : [0.6, y + l.d, 0.4],
+      );
+      y += l.d;
+      return b;
+    });
+  };
+  const faces = (dim: 2 | 3) => [
+    env('outside', 'outside', 0, 0.04, dim === 2 ? [0, 0] : [0, 0, 0], dim === 2 ? [0.6, 0] : [0.6, 0, 0.4]),
+    env(
+      'inside',
+      'inside',
+      20,
+      0.13,
+      dim === 2 ? [0, depth] : [0, depth, 0],
+      dim === 2 ? [0.6, depth] : [0.6, depth, 0.4],
+    ),
+  ];
+  it('2-D: ψ = 0 within 1e-4 W/(m·K); L/l = U of the thermal engine within 0.5 %', () => {
+    const r = solveBridge(
+      model({
+        dimension: '2d',
+        boxes: stack(2),
+        boundaries: faces(2),
+        reference: { elements: [{ name: 'wall', u: u1d, size: 0.6 }] },
+      }),
+    );
+    expect(Math.abs(r.psi!)).toBeLessThan(1e-4);
+    expect(Math.abs(r.coupling! / 0.6 / thermalU - 1)).toBeLessThan(0.005);
+  });
+  it('3-D: χ = 0 within 1e-4 W/K; L/A = U of the thermal engine within 0.5 %', () => {
+    const r = solveBridge(
+      model({
+        dimension: '3d',
+        boxes: stack(3),
+        boundaries: faces(3),
+        reference: { elements: [{ name: 'wall', u: u1d, size: 0.24 }], lines: [] },
+        mesh: { maxCell: 0.1 },
+      }),
+    );
+    expect(Math.abs(r.chi!)).toBeLessThan(1e-4);
+    expect(Math.abs(r.coupling! / 0.24 / thermalU - 1)).toBeLessThan(0.005);
+  });
+});
+
+describe('grid convergence: the demo girt through insulation (derived)', () => {
+  // Every cell split in two along each axis: ψ moves by less than 1 % (default mesh 1606 cells, ψ ≈ 0.347
+  // W/(m·K); 6424 cells, ψ ≈ 0.348 — 0.5 %, 2026-12-04).
+  it('ψ changes by < 1 % when the mesh is refined 2×', () => {
+    const coarse = solveBridge(model(demoGirtModel()));
+    const fine = solveBridge(model(demoGirtModel({ subdivide: 2 })));
+    expect(fine.cells).toBe(4 * coarse.cells);
+    expect(Math.abs(fine.psi! / coarse.psi! - 1)).toBeLessThan(0.01);
   });
 });

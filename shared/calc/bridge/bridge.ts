@@ -107,6 +107,9 @@ interface SurfaceFace {
   g: number;
   area: number;
   centre: Vec3;
+  /** Axis of the face's normal (0 x, 1 y, 2 z) and its side of the cell (−1 low, +1 high). */
+  axis: number;
+  dir: number;
 }
 
 /** Boundary regions as 3-D boxes (2-D: the whole slice depth). */
@@ -138,6 +141,10 @@ function surfaceFaces(model: BridgeModel, grid: BridgeGrid, lambda: Float64Array
   const stride = [1, nx, nx * ny];
   const axes = model.dimension === '2d' ? [0, 1] : [0, 1, 2];
   const faces: SurfaceFace[] = [];
+  const exposed = (p: number, idx: number[], a: number, dir: number) => {
+    const nb = idx[a]! + dir;
+    return nb < 0 || nb >= n[a]! || lambda[p + dir * stride[a]!] === 0;
+  };
   for (let k = 0; k < nz; k++)
     for (let j = 0; j < ny; j++)
       for (let i = 0; i < nx; i++) {
@@ -145,19 +152,25 @@ function surfaceFaces(model: BridgeModel, grid: BridgeGrid, lambda: Float64Array
         const lp = lambda[p]!;
         if (lp === 0) continue;
         const idx = [i, j, k];
-        const size = idx.map((c, a) => pts[a]![c + 1]! - pts[a]![c]!);
-        const centre = idx.map((c, a) => (pts[a]![c]! + pts[a]![c + 1]!) / 2) as Vec3;
         for (const a of axes)
           for (const dir of [-1, 1]) {
-            const nb = idx[a]! + dir;
-            if (nb >= 0 && nb < n[a]! && lambda[p + dir * stride[a]!]! > 0) continue;
-            const at = centre.slice() as Vec3;
+            if (!exposed(p, idx, a, dir)) continue;
+            const size = idx.map((c, b) => pts[b]![c + 1]! - pts[b]![c]!);
+            const at = idx.map((c, b) => (pts[b]![c]! + pts[b]![c + 1]!) / 2) as Vec3;
             at[a] = pts[a]![dir < 0 ? idx[a]! : idx[a]! + 1]!;
             const boundary = regions.findIndex((r) => inRegion(r, at));
             if (boundary < 0) continue;
             const area = size.reduce((s, v, b) => (b === a ? s : s * v), 1);
             const rs = model.boundaries[boundary]!.resistance;
-            faces.push({ cell: p, boundary, g: area / (size[a]! / (2 * lp) + rs), area, centre: at });
+            faces.push({
+              cell: p,
+              boundary,
+              g: area / (size[a]! / (2 * lp) + rs),
+              area,
+              centre: at,
+              axis: a,
+              dir,
+            });
           }
       }
   return faces;
@@ -266,8 +279,50 @@ interface BoundaryTotals {
   minAt: Vec3;
 }
 
+/**
+ * Lowest surface temperature a face gives, with where: its centre's, or — where the surface turns a corner
+ * into the material beside it — the value linearly extrapolated from the face beyond to the face's edge, so
+ * the coldest point of an inside corner is not missed by half a cell (derived; the surface field is smooth
+ * there). Edges on the grid's bounds are cut-off or symmetry planes (no heat crosses): no extrapolation.
+ */
+function coldestOfFace(
+  f: SurfaceFace,
+  ts: number,
+  surfaceAt: (cell: number, f: SurfaceFace) => number | undefined,
+  grid: BridgeGrid,
+  axes: number[],
+): { t: number; at: Vec3 } {
+  const pts = [grid.x, grid.y, grid.z];
+  const n = pts.map((p) => p.length - 1);
+  const stride = [1, n[0]!, n[0]! * n[1]!];
+  const idx = [f.cell % n[0]!, Math.floor(f.cell / n[0]!) % n[1]!, Math.floor(f.cell / stride[2]!)];
+  let t = ts;
+  const at = f.centre.slice() as Vec3;
+  for (const b of axes) {
+    if (b === f.axis) continue;
+    for (const s of [-1, 1]) {
+      const beside = idx[b]! + s;
+      const beyond = idx[b]! - s;
+      if (beside < 0 || beside >= n[b]! || beyond < 0 || beyond >= n[b]!) continue;
+      if (surfaceAt(f.cell + s * stride[b]!, f) !== undefined) continue;
+      const other = surfaceAt(f.cell - s * stride[b]!, f);
+      if (other === undefined) continue;
+      const h = pts[b]![idx[b]! + 1]! - pts[b]![idx[b]!]!;
+      const hOther = pts[b]![beyond + 1]! - pts[b]![beyond]!;
+      t += ((ts - other) * (h / 2)) / ((h + hOther) / 2);
+      at[b] = pts[b]![s < 0 ? idx[b]! : idx[b]! + 1]!;
+    }
+  }
+  return t < ts ? { t, at } : { t: ts, at: f.centre };
+}
+
 /** Heat flow into the model through each boundary, Φ = Σ g·(θenv − θcell), and its surface temperature range. */
-function boundaryTotals(model: BridgeModel, faces: SurfaceFace[], theta: Float64Array): BoundaryTotals[] {
+function boundaryTotals(
+  model: BridgeModel,
+  grid: BridgeGrid,
+  faces: SurfaceFace[],
+  theta: Float64Array,
+): BoundaryTotals[] {
   const totals: BoundaryTotals[] = model.boundaries.map(() => ({
     heatFlow: 0,
     area: 0,
@@ -275,15 +330,25 @@ function boundaryTotals(model: BridgeModel, faces: SurfaceFace[], theta: Float64
     max: Number.NEGATIVE_INFINITY,
     minAt: [0, 0, 0],
   }));
+  const key = (cell: number, axis: number, dir: number) => cell * 6 + axis * 2 + (dir > 0 ? 1 : 0);
+  const surface = new Map<number, number>();
+  for (const f of faces)
+    surface.set(
+      key(f.cell, f.axis, f.dir),
+      surfaceTemperature(f, model.boundaries[f.boundary]!, theta[f.cell]!),
+    );
+  const surfaceAt = (cell: number, f: SurfaceFace) => surface.get(key(cell, f.axis, f.dir));
+  const axes = model.dimension === '2d' ? [0, 1] : [0, 1, 2];
   for (const f of faces) {
     const env = model.boundaries[f.boundary]!;
     const t = totals[f.boundary]!;
     t.heatFlow += f.g * (env.temperature - theta[f.cell]!);
     t.area += f.area;
-    const ts = surfaceTemperature(f, env, theta[f.cell]!);
-    if (ts < t.min) {
-      t.min = ts;
-      t.minAt = f.centre;
+    const ts = surface.get(key(f.cell, f.axis, f.dir))!;
+    const coldest = coldestOfFace(f, ts, surfaceAt, grid, axes);
+    if (coldest.t < t.min) {
+      t.min = coldest.t;
+      t.minAt = coldest.at;
     }
     if (ts > t.max) t.max = ts;
   }
@@ -328,7 +393,7 @@ export function requireWithinBudget(grid: BridgeGrid, maxCells: number): void {
 
 /**
  * Steady-state conduction through the model by finite volumes on its rectilinear grid (ISO 10211:2017 §5–§7,
- * annex A: a method that passes the reference cases), solved by IC(0)-preconditioned conjugate gradient.
+ * annex A: a method that passes the reference cases), solved by conjugate gradient with a relaxed incomplete Cholesky preconditioner.
  * Impossible input is refused before solving; `maxCells` is the work budget.
  */
 export function solveBridge(model: BridgeModel, maxCells = DEFAULT_MAX_CELLS): BridgeResult {
@@ -361,7 +426,7 @@ function results(
   theta: Float64Array,
   outcome: { iterations: number; residual: number },
 ): BridgeResult {
-  const totals = boundaryTotals(model, faces, theta);
+  const totals = boundaryTotals(model, grid, faces, theta);
   const heatIn = totals.reduce((s, t) => s + Math.max(t.heatFlow, 0), 0);
   const heatOut = totals.reduce((s, t) => s + Math.max(-t.heatFlow, 0), 0);
   const coupling = couplingOf(model, heatIn);
@@ -379,7 +444,7 @@ function results(
     cells: grid.cells,
     grid: { x: grid.x, y: grid.y, z: grid.z },
     solver: {
-      method: 'finite volume, IC(0)-preconditioned conjugate gradient',
+      method: 'finite volume, conjugate gradient with relaxed incomplete Cholesky preconditioning',
       iterations: outcome.iterations,
       residual: outcome.residual,
       energyBalance: heatIn > 0 ? Math.abs(heatIn - heatOut) / heatIn : 0,

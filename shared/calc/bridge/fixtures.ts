@@ -1,0 +1,101 @@
+import type { BridgeModelInput } from './schema';
+
+/*
+ * Invented demo details (not from any product): a steel Z girt through 100 mm of mineral wool between a
+ * steel cladding sheet and a steel liner (2-D), and a steel clip through the same insulation onto a concrete
+ * backup wall (3-D). Used by the API example, the benchmarks and the grid-convergence test.
+ */
+
+const STEEL = 50;
+const WOOL = 0.035;
+type Pt = number[];
+const box = (name: string, lambda: number, min: Pt, max: Pt) => ({ name, lambda, min, max });
+
+/** Girt every 0.6 m: web 1.5 mm, flanges 50 mm; cut at mid-span on both sides (x = 0 and 0.6, adiabatic). */
+export function demoGirtModel(mesh: BridgeModelInput['mesh'] = {}): BridgeModelInput {
+  const sheet = 0.0006;
+  const t = 0.0015;
+  const inner = sheet + 0.1;
+  return {
+    dimension: '2d',
+    boxes: [
+      box('cladding sheet', STEEL, [0, 0], [0.6, sheet]),
+      box('liner', STEEL, [0, inner], [0.6, inner + sheet]),
+      box('girt, outer flange', STEEL, [0.3, sheet], [0.35, sheet + t]),
+      box('girt, web', STEEL, [0.3, sheet + t], [0.3 + t, inner - t]),
+      box('girt, inner flange', STEEL, [0.25 + t, inner - t], [0.3 + t, inner]),
+      box('mineral wool', WOOL, [0, sheet], [0.25 + t, inner]),
+      box('mineral wool', WOOL, [0.25 + t, sheet], [0.3, inner - t]),
+      box('mineral wool', WOOL, [0.3 + t, sheet + t], [0.6, inner]),
+      box('mineral wool', WOOL, [0.35, sheet], [0.6, sheet + t]),
+    ],
+    boundaries: [
+      { name: 'outside', side: 'outside', temperature: 0, resistance: 0.04, min: [0, 0], max: [0.6, 0] },
+      {
+        name: 'inside',
+        side: 'inside',
+        temperature: 20,
+        resistance: 0.13,
+        min: [0, inner + sheet],
+        max: [0.6, inner + sheet],
+      },
+    ],
+    reference: {
+      elements: [{ name: 'wall without the girt', u: demoGirtWallU(), size: 0.6 }],
+    },
+    mesh,
+  };
+}
+
+/** U of the girt wall's layers without the girt: 1 / (Rse + Σ d/λ + Rsi) (ISO 6946:2017 eq. 7). */
+export function demoGirtWallU(): number {
+  return 1 / (0.04 + 0.0006 / STEEL + 0.1 / WOOL + 0.0006 / STEEL + 0.13);
+}
+
+/** Clip every 0.6 × 0.6 m: a 3 mm plate 80 mm wide through 100 mm of wool onto 150 mm of concrete. */
+export function demoClipModel(mesh: BridgeModelInput['mesh'] = {}): BridgeModelInput {
+  const sheet = 0.0007;
+  const inner = sheet + 0.1;
+  const back = inner + 0.15;
+  return {
+    dimension: '3d',
+    boxes: [
+      box('cladding sheet', STEEL, [0, 0, 0], [0.6, sheet, 0.6]),
+      box('clip', STEEL, [0.26, sheet, 0.3], [0.34, inner, 0.303]),
+      box('mineral wool', WOOL, [0, sheet, 0], [0.6, inner, 0.3]),
+      box('mineral wool', WOOL, [0, sheet, 0.303], [0.6, inner, 0.6]),
+      box('mineral wool', WOOL, [0, sheet, 0.3], [0.26, inner, 0.303]),
+      box('mineral wool', WOOL, [0.34, sheet, 0.3], [0.6, inner, 0.303]),
+      box('concrete', 2, [0, inner, 0], [0.6, back, 0.6]),
+    ],
+    boundaries: [
+      {
+        name: 'outside',
+        side: 'outside',
+        temperature: 0,
+        resistance: 0.04,
+        min: [0, 0, 0],
+        max: [0.6, 0, 0.6],
+      },
+      {
+        name: 'inside',
+        side: 'inside',
+        temperature: 20,
+        resistance: 0.13,
+        min: [0, back, 0],
+        max: [0.6, back, 0.6],
+      },
+    ],
+    reference: {
+      elements: [
+        {
+          name: 'wall without the clip',
+          u: 1 / (0.04 + sheet / STEEL + 0.1 / WOOL + 0.15 / 2 + 0.13),
+          size: 0.36,
+        },
+      ],
+      lines: [],
+    },
+    mesh,
+  };
+}

@@ -1,8 +1,8 @@
 import type { Assembly, AssemblyInput } from '@shared/schemas/assembly';
 import type { Project } from '@shared/schemas/project';
 import type { UnitSystem } from '@shared/units';
-import { useMemo } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
+import { useDeferredCalculation } from '../../lib/deferred-calculation';
 import { type RevisionApi, useRevisionEditing } from '../../lib/use-revision-editing';
 import { evaluateAttachment } from './evaluate';
 import { type AttachmentFormValues, attachmentFormValues, toFormPath, withAttachment } from './form';
@@ -74,11 +74,11 @@ export function useAttachmentEditing({ project, system, ...io }: AttachmentEditi
   });
 
   const { base } = editing;
-  const snapshot = JSON.stringify(values);
-  // biome-ignore lint/correctness/useExhaustiveDependencies: the snapshot stands for the values (deep)
-  const evaluation = useMemo(
-    () => evaluateAttachment(values, base.current.input, project, system),
-    [snapshot, base, project, system],
+  // Every figure of the sheet comes from this one, possibly deferred, evaluation (`stale` while it lags).
+  const { result: evaluation, stale } = useDeferredCalculation(
+    values,
+    (v) => evaluateAttachment(v, base.current.input, project, system),
+    [base, project, system],
   );
 
   return {
@@ -86,6 +86,7 @@ export function useAttachmentEditing({ project, system, ...io }: AttachmentEditi
     form,
     values,
     evaluation,
+    stale,
     errors: { ...editing.serverErrors, ...evaluation.errors },
   };
 }

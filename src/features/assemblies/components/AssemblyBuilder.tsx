@@ -13,8 +13,10 @@ import {
 import { useMemo } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import { Field } from '../../../components/ui/Field';
+import { staleProps } from '../../../components/ui/ResultSummary';
 import { NewerRevisionNotice, RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { TextArea } from '../../../components/ui/TextInput';
+import { useDeferredCalculation } from '../../../lib/deferred-calculation';
 import { formatDateTime } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { useRevisionEditing } from '../../../lib/use-revision-editing';
@@ -32,6 +34,7 @@ import { formatR, formatU } from '../units';
 import { AttachmentsEditor } from './AttachmentsEditor';
 import { SelectField, TextField } from './FormFields';
 import { LayersEditor } from './LayersEditor';
+import { ThermalSummary } from './ResultFigures';
 import { describePath, ResultPanel, SheetSection } from './ResultPanel';
 
 const HEAT_FLOW = [
@@ -82,9 +85,12 @@ export function AssemblyBuilder({
   const { control, handleSubmit, reset, register, formState } = form;
   const values = useWatch({ control }) as AssemblyFormValues;
 
-  const thermalSnapshot = JSON.stringify(values.thermal);
-  // biome-ignore lint/correctness/useExhaustiveDependencies: the snapshot stands for values.thermal (deep)
-  const evaluation = useMemo(() => evaluateThermal(values.thermal, system), [thermalSnapshot, system]);
+  // Every figure on the page (summary, result, charts, the bar) comes from this one, possibly deferred, result.
+  const { result: evaluation, stale } = useDeferredCalculation(
+    values.thermal,
+    (thermal) => evaluateThermal(thermal, system),
+    [system],
+  );
 
   // Saving writes a new revision (the first save creates the assembly); a stale save never overwrites silently.
   const editing = useRevisionEditing<AssemblyFormValues, BuilderCarry, Assembly | undefined>({
@@ -96,8 +102,8 @@ export function AssemblyBuilder({
     reset: (next, why) =>
       reset(next, why === 'carried' || why === 'history' ? { keepDefaultValues: true } : undefined),
     formValues: (input) => input,
-    toInput: (_values, _base, input) =>
-      Object.keys(evaluation.errors).length > 0 || !input
+    toInput: (v, _base, input) =>
+      Object.keys(evaluateThermal(v.thermal, system).errors).length > 0 || !input
         ? { problem: ['The result cannot be computed yet: put right the values marked ✕ first.'] }
         : { input },
     carryOver: ({ base, mine, theirs }) => {
@@ -165,6 +171,8 @@ export function AssemblyBuilder({
 
           <NewerRevisionNotice newer={editing.newerElsewhere} yours="edits" />
 
+          <ThermalSummary result={result} problems={Object.keys(evaluation.errors).length} stale={stale} />
+
           <SheetSection n={1} title="Build-up" id="buildup-heading">
             <div className="grid gap-x-6 gap-y-4 sm:grid-cols-2 lg:grid-cols-4">
               <TextField path="name" label="Name" required className="sm:col-span-2" maxLength={200} />
@@ -198,6 +206,7 @@ export function AssemblyBuilder({
             result={result}
             errors={errors}
             engineVersion={ENGINE_VERSION}
+            stale={stale}
             resultNote={<span className="text-xs text-ink-muted">computed in your browser as you type</span>}
           />
 
@@ -256,7 +265,7 @@ export function AssemblyBuilder({
               ) : null
             }
             live={
-              <div className="min-w-52" aria-live="polite">
+              <div aria-live="polite" {...staleProps(stale, 'min-w-52')}>
                 <p className="label-caps">Effective, live</p>
                 {result ? (
                   <p className="num text-lg" data-testid="live-Reff">

@@ -9,6 +9,7 @@ import { evaluateThermal } from '../evaluate';
 import { firstCountedLayer, LAYER_KIND_LABELS } from '../form';
 import { formatMeasure } from '../units';
 import { SOURCE_TYPE_LABELS } from './AttachmentsEditor';
+import { ThermalSummary } from './ResultFigures';
 import { ResultPanel, SheetSection } from './ResultPanel';
 
 const HEAT_FLOW_WORDS = { horizontal: 'horizontal (walls)', upward: 'upward', downward: 'downward' } as const;
@@ -111,6 +112,7 @@ export function AssemblySheet({
   return (
     <article className="flex flex-col gap-10" aria-label={`Assembly ${input.name}, read-only`}>
       {heading}
+      <ThermalSummary result={result} problems={Object.keys(computed?.errors ?? {}).length} stale={false} />
       <SheetSection n={1} title="Build-up" id="buildup-heading">
         <dl className="grid grid-cols-1 gap-px border border-ink bg-rule sm:grid-cols-4">
           <Meta label="Wall category">{WALL_CATEGORY_LABELS[input.wallCategory]}</Meta>

@@ -1,6 +1,8 @@
 import type { ThermalResult } from '@shared/calc/thermal/schema';
+import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
 import { fixed } from '@shared/units/rounding';
 import type { ReactNode } from 'react';
+import { ResultSummary, type SummaryFigure, type SummaryVerdict } from '../../../components/ui/ResultSummary';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { formatR, formatU } from '../units';
 
@@ -85,4 +87,43 @@ export function ResultFigures({ result }: { result: ThermalResult }) {
       </p>
     </div>
   );
+}
+
+/**
+ * The build-up sheet's result first: computed (and by which method) or what it waits for, with effective R and
+ * U, the clear-field R₀ and the bridges' share of the heat.
+ */
+export function ThermalSummary({
+  result,
+  problems,
+  stale,
+}: {
+  result: ThermalResult | null;
+  /** How many values keep the result from being computed. */
+  problems: number;
+  stale: boolean;
+}) {
+  const system = useUnitSystem();
+  const verdict: SummaryVerdict = result
+    ? {
+        glyph: '✓',
+        word: 'computed',
+        detail: `R₀ by the ${METHOD_LABELS[result.defaultMethod]}`,
+        tone: 'meets',
+      }
+    : {
+        glyph: '?',
+        word: 'no result yet',
+        detail: `${problems === 1 ? 'one value needs' : `${problems} values need`} attention (listed under Result)`,
+        tone: 'open',
+      };
+  const figures: SummaryFigure[] = result
+    ? [
+        { label: 'Effective R_eff', value: formatR(result.Reff, system), testId: 'summary-Reff' },
+        { label: 'Effective U_eff', value: formatU(result.Ueff, system), testId: 'summary-Ueff' },
+        { label: 'Clear field R₀', value: formatR(result.R0, system) },
+        { label: 'Heat through bridges', value: `${fixed((1 - result.clearFieldShare) * 100, 1)} %` },
+      ]
+    : [];
+  return <ResultSummary verdict={verdict} figures={figures} stale={stale} resultId="result-heading" />;
 }

@@ -1,6 +1,7 @@
 import type { ThermalInput, ThermalResult } from '@shared/calc/thermal/schema';
 import type { ReactNode } from 'react';
 import { Notice } from '../../../components/ui/Notice';
+import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
 import { SheetSection } from '../../../components/ui/SheetSection';
 import { fieldDomId } from '../evaluate';
 import { Cautions } from './Cautions';
@@ -102,6 +103,8 @@ interface ResultPanelProps {
   /** Shown above the figures (e.g. "stored result" or "updates as you type"). */
   resultNote?: ReactNode;
   startAt?: number;
+  /** The result is of an older input while a newer one is computed: marked "updating…" and dimmed. */
+  stale?: boolean;
 }
 
 /** Method, result (figures, section, shares, the work) and cautions — the lower half of every sheet. */
@@ -113,6 +116,7 @@ export function ResultPanel({
   engineVersion,
   resultNote,
   startAt = 3,
+  stale = false,
 }: ResultPanelProps) {
   return (
     <>
@@ -124,20 +128,34 @@ export function ResultPanel({
         )}
       </SheetSection>
 
-      <SheetSection n={startAt + 1} title="Result" id="result-heading" aside={resultNote}>
-        <div aria-live="polite" className="flex flex-col gap-4">
-          {result ? <ResultFigures result={result} /> : <WaitingFor errors={errors} thermal={thermal} />}
-        </div>
-        {thermal ? <SectionSketch thermal={thermal} girtOrientation={girtOrientation} /> : null}
-        {result ? (
-          <>
-            <div className="flex flex-col gap-2">
-              <h4 className="font-serif text-lg">Where the heat goes</h4>
-              <ShareChart result={result} />
+      <SheetSection
+        n={startAt + 1}
+        title="Result"
+        id="result-heading"
+        aside={
+          <span className="flex items-baseline gap-3">
+            <UpdatingMark stale={stale} />
+            {resultNote}
+          </span>
+        }
+      >
+        <div {...staleProps(stale)}>
+          <div className="flex flex-col gap-4">
+            <div aria-live="polite" className="flex flex-col gap-4">
+              {result ? <ResultFigures result={result} /> : <WaitingFor errors={errors} thermal={thermal} />}
             </div>
-            <ShowTheWork result={result} />
-          </>
-        ) : null}
+            {thermal ? <SectionSketch thermal={thermal} girtOrientation={girtOrientation} /> : null}
+            {result ? (
+              <>
+                <div className="flex flex-col gap-2">
+                  <h4 className="font-serif text-lg">Where the heat goes</h4>
+                  <ShareChart result={result} />
+                </div>
+                <ShowTheWork result={result} />
+              </>
+            ) : null}
+          </div>
+        </div>
       </SheetSection>
 
       <Cautions engineVersion={engineVersion} />

@@ -6,12 +6,14 @@ import type { Project } from '@shared/schemas/project';
 import { Link } from 'react-router';
 import { Cautions } from '../../../components/ui/Cautions';
 import { Notice } from '../../../components/ui/Notice';
+import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
 import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { SheetSection } from '../../../components/ui/SheetSection';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
 import { formatDateTime } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AttachmentEditingOptions, useAttachmentEditing } from '../use-attachment-editing';
+import { AttachmentSummary } from './AttachmentSummary';
 import type { AttachmentLibrary } from './LibraryPick';
 import { MissingData } from './MissingData';
 import { DesignSpacingInputs, PanelInputs } from './PanelInputs';
@@ -46,7 +48,7 @@ type Props = Omit<AttachmentEditingOptions, 'system' | 'project' | 'assembly'> &
 export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
   const system = useUnitSystem();
   const editing = useAttachmentEditing({ project, assembly, system, ...io });
-  const { form, values, evaluation, errors, base } = editing;
+  const { form, values, evaluation, errors, base, stale } = editing;
   const archived = project.archivedAt !== null;
   const mayWrite = can(project.myRole, 'assembly.write') && !archived;
   const mayEditWind = can(project.myRole, 'project.wind.update') && !archived;
@@ -71,6 +73,8 @@ export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
           {mayWrite ? ' — recomputed in your browser as you type.' : '.'}
         </p>
       </header>
+
+      <AttachmentSummary result={result} zones={zones} stale={stale} system={system} />
 
       <SheetSection
         n={1}
@@ -126,12 +130,15 @@ export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
         title="Result"
         id="wind-result-heading"
         aside={
-          mayWrite ? (
-            <span className="text-xs text-ink-muted">computed in your browser as you type</span>
-          ) : null
+          <span className="flex items-baseline gap-3">
+            <UpdatingMark stale={stale} />
+            {mayWrite ? (
+              <span className="text-xs text-ink-muted">computed in your browser as you type</span>
+            ) : null}
+          </span>
         }
       >
-        <div aria-live="polite" className="flex flex-col gap-6">
+        <div aria-live="polite" {...staleProps(stale, 'flex flex-col gap-6')}>
           {result && input ? (
             <>
               <WallElevation
@@ -173,7 +180,11 @@ export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
             />
           )}
         </div>
-        {result ? <ShowTheWork steps={result.trace} /> : null}
+        {result ? (
+          <div {...staleProps(stale)}>
+            <ShowTheWork steps={result.trace} />
+          </div>
+        ) : null}
       </SheetSection>
 
       <Cautions items={[LEAD_CAUTION, ...CAUTIONS]} engineVersion={ENGINE_VERSION} />

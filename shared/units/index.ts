@@ -57,6 +57,8 @@ export const LBF_TO_N = ip('force');
 export const PSF_TO_PA = ip('pressure');
 /** 1 lb/ft² in kg/m² (pound avoirdupois per square foot). */
 export const LB_PER_FT2_TO_KG_PER_M2 = ip('massPerArea');
+/** 1 oz/ft² (avoirdupois ounce) in kg/m². */
+export const OZ_PER_FT2_TO_KG_PER_M2 = QUANTITIES.massPerArea.also.ozPerFt2!.scale;
 /** 1 lb/ft³ in kg/m³. */
 export const LB_PER_FT3_TO_KG_PER_M3 = ip('density');
 /** 1 mph in m/s (0.447 04 exactly). */

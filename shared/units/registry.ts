@@ -29,6 +29,9 @@ math.createUnit('perm23C', math.unit(5.74525e-11, 'kg / (Pa s m^2)'));
 
 export type UnitSystem = 'SI' | 'IP';
 
+/** 0 °C in kelvins: 273.15 exactly (the SI definition of the Celsius scale). */
+export const ICE_POINT_K = math.unit(0, 'degC').toNumber('K');
+
 /**
  * One unit as shown: stored = (shown − origin) × scale, shown = stored / scale + origin. `origin` (the shown
  * reading of a stored zero) is 0 but for temperatures: 32 for °F against °C.

@@ -3,6 +3,7 @@ import {
   FOOT,
   fahrenheitToCelsius,
   INCH,
+  QUANTITIES,
   type UnitSystem,
   US_GALLON,
 } from '@shared/units';
@@ -63,7 +64,11 @@ export const SHEET_MEASURES: Record<SheetMeasure, SheetMeasureSpec> = {
     fromShown: (v, s) => (s === 'IP' ? fahrenheitToCelsius(v) : v),
   },
   // α per kelvin ⇄ per degree Fahrenheit: 1/°F = (5/9)/K, so 1 × 10⁻⁶/°F = 1.8 × 10⁻⁶/K.
-  alpha: { unit: { SI: '10⁻⁶/K', IP: '10⁻⁶/°F' }, decimals: { SI: 2, IP: 2 }, ...scaled(1e-6, 1.8e-6) },
+  alpha: {
+    unit: { SI: '10⁻⁶/K', IP: '10⁻⁶/°F' },
+    decimals: { SI: 2, IP: 2 },
+    ...scaled(1e-6, 1e-6 * QUANTITIES.expansion.IP.scale),
+  },
   percent: { unit: { SI: '%', IP: '%' }, decimals: { SI: 1, IP: 1 }, ...scaled(0.01, 0.01) },
   volume: {
     unit: { SI: 'L', IP: 'US gal' },

@@ -1,4 +1,5 @@
 import { CalcInputError } from '@shared/calc/errors';
+import { ICE_POINT_K } from '@shared/units';
 
 /*
  * Saturation vapour pressure, dew point, partial pressure and relative humidity. Temperatures in °C,
@@ -20,7 +21,7 @@ export type SaturationFormula = 'iso13788' | 'hylandWexler';
 /** ISO 13788 reference pressure at 0 °C, Pa. */
 const ISO_P0 = 610.5;
 /** 0 °C in K (exact). */
-const KELVIN = 273.15;
+const KELVIN = ICE_POINT_K;
 /** ASHRAE's domain of validity for eq. 5–6, °C. */
 export const HYLAND_WEXLER_MIN = -100;
 export const HYLAND_WEXLER_MAX = 200;

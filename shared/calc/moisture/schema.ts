@@ -1,5 +1,7 @@
 import { heatFlowSchema, layerSchema } from '@shared/calc/thermal/schema';
 import { traceStepSchema } from '@shared/calc/trace';
+import { PERM_0C_TO_SI, PERM_23C_TO_SI, QUANTITIES } from '@shared/units';
+import { trimmedFixed } from '@shared/units/rounding';
 import { z } from 'zod';
 
 /**
@@ -15,6 +17,8 @@ import { z } from 'zod';
  * "vapour-tight" layer), the range the Glaser profile resolves.
  */
 const sdRange = 'at least 0.000001 m, at most 100 000 m';
+/** A perm in ng/(Pa·s·m²), as NIST SP 811 prints it (57.4525). */
+const permInNg = (perm: number) => trimmedFixed(perm / QUANTITIES.vapourPermeance.SI.scale, 4);
 
 export const vapourSchema = z
   .discriminatedUnion('kind', [
@@ -58,7 +62,7 @@ export const vapourSchema = z
       reference: z
         .enum(['23C', '0C'])
         .describe(
-          'Which perm: "23C" = perm (23 °C), 57.4525 ng/(Pa·s·m²); "0C" = perm (0 °C), 57.2135 ng/(Pa·s·m²) (NIST SP 811 B.9). ASTM E96 reports are at 23 °C.',
+          `Which perm: "23C" = perm (23 °C), ${permInNg(PERM_23C_TO_SI)} ng/(Pa·s·m²); "0C" = perm (0 °C), ${permInNg(PERM_0C_TO_SI)} ng/(Pa·s·m²) (NIST SP 811 B.9). ASTM E96 reports are at 23 °C.`,
         ),
     }),
   ])

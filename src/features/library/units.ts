@@ -3,14 +3,12 @@ import {
   FOOT,
   INCH,
   K_IP_TO_SI,
+  LB_PER_FT3_TO_KG_PER_M3,
   LBF_TO_N,
   PSF_TO_PA,
   PSI_IP_TO_SI,
   type UnitSystem,
 } from '@shared/units';
-
-/** 1 lb/ft³ = 16.018 46 kg/m³ (NIST SP 811 B.9). */
-const LB_FT3_TO_SI = 16.01846;
 
 /** The library's quantities; shown = SI / factor. Stored values stay SI. */
 export type LibraryMeasure =
@@ -32,7 +30,11 @@ const SPECS: Record<
     factor: { SI: 1, IP: K_IP_TO_SI },
     decimals: 4,
   },
-  density: { unit: { SI: 'kg/m³', IP: 'lb/ft³' }, factor: { SI: 1, IP: LB_FT3_TO_SI }, decimals: 2 },
+  density: {
+    unit: { SI: 'kg/m³', IP: 'lb/ft³' },
+    factor: { SI: 1, IP: LB_PER_FT3_TO_KG_PER_M3 },
+    decimals: 2,
+  },
   chi: { unit: { SI: 'W/K', IP: 'Btu/(h·°F)' }, factor: { SI: 1, IP: CHI_IP_TO_SI }, decimals: 4 },
   psi: { unit: { SI: 'W/(m·K)', IP: 'Btu/(h·ft·°F)' }, factor: { SI: 1, IP: PSI_IP_TO_SI }, decimals: 4 },
   pressure: { unit: { SI: 'kPa', IP: 'psf' }, factor: { SI: 1000, IP: PSF_TO_PA }, decimals: 2 },

@@ -1,5 +1,13 @@
 import { DELTA_0 } from '@shared/calc/moisture/glaser';
-import { INCH, LB_PER_FT2_TO_KG_PER_M2, PERM_23C_TO_SI, type UnitSystem } from '@shared/units';
+import {
+  INCH,
+  OZ_PER_FT2_TO_KG_PER_M2,
+  PERM_0C_TO_SI,
+  PERM_23C_TO_SI,
+  QUANTITIES,
+  toShown,
+  type UnitSystem,
+} from '@shared/units';
 import { formatNumber, formatQuantity } from '../../lib/quantities';
 
 /*
@@ -9,9 +17,6 @@ import { formatNumber, formatQuantity } from '../../lib/quantities';
  */
 
 const minus = (text: string) => text.replace(/^-/, '\u2212');
-
-/** 1 oz/ft² in kg/m²: a sixteenth of 1 lb/ft² (NIST SP 811 B.9). */
-export const OZ_PER_FT2_TO_KG_PER_M2 = LB_PER_FT2_TO_KG_PER_M2 / 16;
 
 /** Layer thickness: "100 mm", "0.15 mm" (SI) or "3.937 in" (IP); "—" for a layer without one. */
 export function formatThickness(m: number | undefined, system: UnitSystem): string {
@@ -34,7 +39,7 @@ export const formatTemperature = (c: number, system: UnitSystem) => formatQuanti
 export function formatTemperatureDifference(k: number, system: UnitSystem): string {
   if (!Number.isFinite(k)) return '—';
   return system === 'IP'
-    ? `${minus(formatNumber((k * 9) / 5, 1))}\u202f°F`
+    ? `${minus(formatNumber(toShown(k, 'temperatureDifference', 'IP'), 1))}\u202f°F`
     : `${minus(formatNumber(k, 1))}\u202fK`;
 }
 
@@ -78,6 +83,12 @@ export function formatSd(m: number): string {
 
 /** The US perm (23 °C) that a given s_d amounts to: W = δ₀/s_d. */
 export const sdToPerm = (sd: number) => DELTA_0 / sd / PERM_23C_TO_SI;
+
+/** A perm in ng/(Pa·s·m²) as NIST SP 811 prints it: 57.4525 (23 °C), 57.2135 (0 °C). */
+export const PERM_IN_NG = {
+  '23C': formatNumber(PERM_23C_TO_SI / QUANTITIES.vapourPermeance.SI.scale, 4),
+  '0C': formatNumber(PERM_0C_TO_SI / QUANTITIES.vapourPermeance.SI.scale, 4),
+};
 
 /** "≈ 50 perm" for the IP reader, to two or three significant figures. */
 export function formatPerm(sd: number): string {

@@ -8,6 +8,7 @@ import {
   SURFACE_RISE_ABOVE_AIR,
   type SurfaceFinish,
 } from '@shared/calc/joints/surface-temperature';
+import { toShown } from '@shared/units';
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
@@ -20,7 +21,8 @@ import type { AirDesign } from '../draft';
 import { EXPOSURE_LABELS, FINISH_LABELS } from '../labels';
 
 /** A temperature difference: "40 K" in SI, "72 °F" in IP. */
-const delta = (k: number, system: 'SI' | 'IP') => (system === 'IP' ? `${Math.round(k * 1.8)} °F` : `${k} K`);
+const delta = (k: number, system: 'SI' | 'IP') =>
+  system === 'IP' ? `${Math.round(toShown(k, 'temperatureDifference', 'IP'))} °F` : `${k} K`;
 
 /**
  * "Suggest from finish & exposure": the surface range from the air design range by the trade-practice

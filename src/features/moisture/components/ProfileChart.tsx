@@ -3,7 +3,7 @@ import type { MoistureResult, MonthResult } from '@shared/calc/moisture/schema';
 import { celsiusToFahrenheit, type UnitSystem } from '@shared/units';
 import { useId } from 'react';
 import { formatNumber } from '../../../lib/quantities';
-import { lengthUnit, monthName, toShownLength } from '../units';
+import { fromShownLength, lengthUnit, monthName, toShownLength } from '../units';
 import { nodePlace } from '../verdict';
 
 const INK = '#1e1c19';
@@ -411,7 +411,7 @@ export function ProfileChart({
             strokeWidth="0.8"
           />
           {xTicks.map((t) => {
-            const x = xOf(system === 'IP' ? t * 0.0254 : t / 1000);
+            const x = xOf(fromShownLength(t, system));
             return (
               <g key={`x${t}`}>
                 <line x1={x} x2={x} y1={TOP + PLOT_H} y2={TOP + PLOT_H + 5} stroke={INK} strokeWidth="0.8" />

@@ -6,7 +6,7 @@ import { Link } from 'react-router';
 import { Select } from '../../../components/ui/Select';
 import { useUnitSystem } from '../../../lib/unit-system';
 import type { Problem } from '../evaluate';
-import { formatPerm, formatSd, formatThickness } from '../units';
+import { formatPerm, formatSd, formatThickness, PERM_IN_NG } from '../units';
 import {
   type DraftKind,
   KIND_LABELS,
@@ -273,8 +273,8 @@ export function VapourTable({
         </tbody>
       </table>
       <p className="mt-2 text-xs text-ink-muted">
-        s_d = μ·d for μ; s_d = δ₀/W for a permeance W (1 perm at 23 °C = 57.4525 ng/(Pa·s·m²), at 0 °C =
-        57.2135 ng/(Pa·s·m²)). Layers, thicknesses and λ are edited on the{' '}
+        s_d = μ·d for μ; s_d = δ₀/W for a permeance W (1 perm at 23 °C = {PERM_IN_NG['23C']} ng/(Pa·s·m²), at
+        0 °C = {PERM_IN_NG['0C']} ng/(Pa·s·m²)). Layers, thicknesses and λ are edited on the{' '}
         <Link to={builderHref}>build-up sheet</Link>.
       </p>
     </div>

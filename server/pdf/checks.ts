@@ -1,5 +1,6 @@
 import { zoneLabel } from '@shared/checks/criteria';
 import { type Check, methodText } from '@shared/checks/report';
+import { checkFigures } from '@shared/format';
 import { WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
 import { type Formatter, STATUS_WORD, VERDICT_WORDS } from './format';
 import { type Cell, INK, type SheetWriter } from './layout';
@@ -31,24 +32,27 @@ export function drawCheckList(w: SheetWriter, data: SheetData, fmt: Formatter): 
       { header: 'Provided', width: 24, align: 'right' },
       { header: 'Margin and reason' },
     ],
-    run.outputs.checks.map((c): (string | Cell)[] => [
-      {
-        text: STATUS_WORD[c.status],
-        glyph: c.status,
-        font: 'sansBold',
-        color: STATUS_COLOUR[c.status],
-      },
-      { text: `${c.label}\n${basis(c, data)}` },
-      c.direction === 'required' && c.required !== null ? 'yes' : fmt.siValue(c.required, c.unit),
-      fmt.siValue(c.provided, c.unit),
-      [
-        fmt.checkResult(c),
-        c.status !== 'not_evaluated' ? c.reason : '',
-        c.method ? methodText(c.method, fmt.rValue) : '',
-      ]
-        .filter(Boolean)
-        .join('. '),
-    ]),
+    run.outputs.checks.map((c): (string | Cell)[] => {
+      const figures = checkFigures(c, fmt.system);
+      return [
+        {
+          text: STATUS_WORD(c.status),
+          glyph: c.status,
+          font: 'sansBold',
+          color: STATUS_COLOUR[c.status],
+        },
+        { text: `${c.label}\n${basis(c, data)}` },
+        figures.required,
+        figures.provided,
+        [
+          figures.result,
+          c.status !== 'not_evaluated' ? c.reason : '',
+          c.method ? methodText(c.method, fmt.rValue) : '',
+        ]
+          .filter(Boolean)
+          .join('. '),
+      ];
+    }),
     { size: 7 },
   );
   const v = VERDICT_WORDS[run.verdict];

@@ -1,6 +1,6 @@
 import { ENGINE_VERSION } from '@shared/calc/trace';
 import { runChecks } from '@shared/checks/runner';
-import { assemblyInputSchema } from '@shared/schemas/assembly';
+import { type AssemblyInput, assemblyInputSchema } from '@shared/schemas/assembly';
 import type { CheckRun, CheckRunInputs } from '@shared/schemas/check-runs';
 import { criteriaSetCreateSchema } from '@shared/schemas/criteria';
 import { projectClimateSchema, projectWindSchema } from '@shared/schemas/project';
@@ -13,13 +13,15 @@ import { checkRunHashes } from '../services/check-runs';
 import type { SheetData } from './sheet-data';
 
 /**
- * The demo sheet without a database: the invented demo assembly and project checked against the demo
- * firm's illustrative code table, shaped exactly as a stored run (for the sheet's unit test and bench).
+ * The demo sheet without a database: the invented demo assembly (or `assembly`, e.g. the demo panel wall) and
+ * project checked against the demo firm's illustrative code table, shaped exactly as a stored run (for the
+ * sheet's unit test, the screen-and-sheet test and the bench).
  */
-export function demoSheetData(units: 'SI' | 'IP' = 'SI'): SheetData {
-  const content = z
+export function demoSheetData(units: 'SI' | 'IP' = 'SI', assembly?: AssemblyInput): SheetData {
+  const parsed = z
     .object({ assembly: assemblyInputSchema, wind: projectWindSchema, climate: projectClimateSchema })
     .parse(demoAssembly);
+  const content = { ...parsed, assembly: assembly ?? parsed.assembly };
   const set = criteriaSetCreateSchema.parse(demoCriteria.set);
   const p = demo.projects[0]!;
   const ids = {

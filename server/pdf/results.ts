@@ -1,5 +1,6 @@
 import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
 import type { TraceStep } from '@shared/calc/trace';
+import { storedMessageText } from '@shared/format';
 import { fixed } from '@shared/units/rounding';
 import { drawAccumulationChart, drawProfileChart, drawSpacingChart } from './charts';
 import { type Formatter, MONTHS, num } from './format';
@@ -16,8 +17,8 @@ function notRun(w: SheetWriter, data: SheetData, id: string): boolean {
   if (!m || m.status === 'ran') return false;
   w.paragraph(
     m.status === 'missing'
-      ? `Not run — missing: ${m.missing.join('; ')}. Every criterion that reads this module is reported “not evaluated”.`
-      : `Not run — the calculation refused the input: ${m.error ?? 'unknown reason'}.`,
+      ? `Not run — missing: ${m.missing.map(storedMessageText).join('; ')}. Every criterion that reads this module is reported “not evaluated”.`
+      : `Not run — the calculation refused the input: ${m.error === null ? 'unknown reason' : storedMessageText(m.error)}.`,
     { size: 8, color: INK.warning },
   );
   return true;

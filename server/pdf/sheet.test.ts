@@ -62,7 +62,7 @@ describe('the compliance sheet renderer', () => {
     expect(flat).toContain(panel.sources!.loadSpanTable!.text);
     expect(flat).toContain(panel.sources!.clip!.text);
     expect(flat).toContain('2 × 1150 N = 2300 N');
-    expect(flat).toContain('0.9 m 4690 Pa 4070 Pa 6940 Pa');
+    expect(flat).toContain('0.9 m 4.69 kPa 4.07 kPa 6.94 kPa');
     expect(flat).toContain('Source: Demo χ — invented for the Skinwright demo');
   });
 

@@ -5,6 +5,7 @@ import { calculateMoisture } from '../calc/moisture/monthly';
 import { calculateTakeoff } from '../calc/takeoff/takeoff';
 import { calculateThermal } from '../calc/thermal/thermal';
 import { calculateWindSchedule } from '../calc/wind/attachment';
+import { type EngineMessage, messageText } from '../format/messages';
 import { assemblyInputSchema } from '../schemas/assembly';
 import { projectClimateSchema, projectWindSchema } from '../schemas/project';
 import {
@@ -64,19 +65,24 @@ describe('check inputs from an assembly and its project', () => {
   it('names what is missing instead of guessing', () => {
     const bare = { ...assembly, vapour: undefined, windPanel: undefined, joints: [], takeoff: undefined };
     const noData = { ...project, wind: null, climate: null };
-    expect(moistureInputFor(bare, noData)).toEqual({
-      status: 'missing',
-      missing: [
-        ...assembly.thermal.layers.map((l, i) => `vapour data of layer ${i + 1} (${l.name})`),
-        'the project’s monthly climate',
-      ],
-    });
-    expect(windInputFor(bare, noData)).toEqual({
-      status: 'missing',
-      missing: ['the project’s wind data', 'the panel’s load–span table and clip capacity'],
-    });
+    const words = (c: { status: string; missing?: EngineMessage[] }) => (c.missing ?? []).map(messageText);
+    const moisture = moistureInputFor(bare, noData);
+    expect(moisture.status).toBe('missing');
+    expect(words(moisture)).toEqual([
+      ...assembly.thermal.layers.map((l, i) => `vapour data of layer ${i + 1} (${l.name})`),
+      'the project’s monthly climate',
+    ]);
+    // Where each is put right travels as data beside the words.
+    expect(moisture.status === 'missing' && moisture.missing.map((m) => m.path)).toEqual([
+      ...assembly.thermal.layers.map((_l, i) => `vapour.${i}`),
+      'project.climate',
+    ]);
+    expect(words(windInputFor(bare, noData))).toEqual([
+      'the project’s wind data',
+      'the panel’s load–span table and clip capacity',
+    ]);
     expect(windDesignInputFor(bare, noData)).toEqual(windInputFor(bare, noData));
-    expect(jointsInputFor(bare).status).toBe('missing');
-    expect(takeoffInputFor(bare).status).toBe('missing');
+    expect(words(jointsInputFor(bare))).toEqual(['the joint schedule']);
+    expect(words(takeoffInputFor(bare))).toEqual(['the elevation for the takeoff']);
   });
 });

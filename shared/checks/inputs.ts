@@ -3,6 +3,7 @@ import type { MoistureInput } from '../calc/moisture/schema';
 import type { TakeoffInput } from '../calc/takeoff/schema';
 import type { ThermalInput } from '../calc/thermal/schema';
 import type { WindDesignInput, WindScheduleInput } from '../calc/wind/schema';
+import { type EngineMessage, engineMessage } from '../format/messages';
 import type { AssemblyInput } from '../schemas/assembly';
 import type { Project } from '../schemas/project';
 
@@ -22,10 +23,10 @@ export type ProjectForChecks = Pick<
   | 'climate'
 >;
 
-/** Either the calculation input, or the plain-word list of what is still missing to build it. */
-export type CheckInput<T> = { status: 'ready'; input: T } | { status: 'missing'; missing: string[] };
+/** Either the calculation input, or what is still missing to build it (messages, worded by shared/format). */
+export type CheckInput<T> = { status: 'ready'; input: T } | { status: 'missing'; missing: EngineMessage[] };
 
-const missing = <T>(...items: string[]): CheckInput<T> => ({ status: 'missing', missing: items });
+const missing = <T>(...items: EngineMessage[]): CheckInput<T> => ({ status: 'missing', missing: items });
 
 export const thermalInputFor = (a: AssemblyInput): CheckInput<ThermalInput> => ({
   status: 'ready',
@@ -34,12 +35,12 @@ export const thermalInputFor = (a: AssemblyInput): CheckInput<ThermalInput> => (
 
 /** Layers with their vapour data, the project's indoor conditions (or humidity class) and its 12 months. */
 export function moistureInputFor(a: AssemblyInput, p: ProjectForChecks): CheckInput<MoistureInput> {
-  const gaps: string[] = [];
+  const gaps: EngineMessage[] = [];
   const vapour = a.vapour ?? [];
   a.thermal.layers.forEach((layer, i) => {
-    if (!vapour[i]) gaps.push(`vapour data of layer ${i + 1} (${layer.name})`);
+    if (!vapour[i]) gaps.push(engineMessage('vapour_missing', `vapour.${i}`, { layer: i, name: layer.name }));
   });
-  if (!p.climate) gaps.push('the project’s monthly climate');
+  if (!p.climate) gaps.push(engineMessage('climate_missing', 'project.climate', {}));
   if (gaps.length > 0 || !p.climate) return missing(...gaps);
   return {
     status: 'ready',
@@ -58,8 +59,8 @@ export function moistureInputFor(a: AssemblyInput, p: ProjectForChecks): CheckIn
 /** The project's ASCE 7 site data with its height and plan, and the assembly's panel table and clip. */
 export function windInputFor(a: AssemblyInput, p: ProjectForChecks): CheckInput<WindScheduleInput> {
   const gaps = [
-    ...(p.wind ? [] : ['the project’s wind data']),
-    ...(a.windPanel ? [] : ['the panel’s load–span table and clip capacity']),
+    ...(p.wind ? [] : [engineMessage('wind_missing', 'project.wind', {})]),
+    ...(a.windPanel ? [] : [engineMessage('panel_missing', 'windPanel', {})]),
   ];
   if (!p.wind || !a.windPanel) return missing(...gaps);
   return {
@@ -95,7 +96,11 @@ export function windDesignInputFor(a: AssemblyInput, p: ProjectForChecks): Check
 }
 
 export const jointsInputFor = (a: AssemblyInput): CheckInput<JointInput[]> =>
-  a.joints && a.joints.length > 0 ? { status: 'ready', input: a.joints } : missing('the joint schedule');
+  a.joints && a.joints.length > 0
+    ? { status: 'ready', input: a.joints }
+    : missing(engineMessage('joints_missing', 'joints', {}));
 
 export const takeoffInputFor = (a: AssemblyInput): CheckInput<TakeoffInput> =>
-  a.takeoff ? { status: 'ready', input: a.takeoff } : missing('the elevation for the takeoff');
+  a.takeoff
+    ? { status: 'ready', input: a.takeoff }
+    : missing(engineMessage('takeoff_missing', 'takeoff', {}));

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { traceStepSchema } from '../calc/trace';
+import { storedMessageSchema } from '../format/messages';
 import { wallCategorySchema } from '../schemas/assembly';
 import { climateZoneSchema } from '../schemas/project';
 import { fixed } from '../units/rounding';
@@ -89,10 +90,10 @@ export const moduleOutcomeSchema = z.object({
   id: z.string(),
   label: z.string(),
   status: z.enum(['ran', 'missing', 'error']),
-  /** What is missing to build the module's input (status missing). */
-  missing: z.array(z.string()),
-  /** The calculation's refusal, "field: reason" (status error). */
-  error: z.string().nullable(),
+  /** What is missing to build the module's input (status missing): messages; plain words in older runs. */
+  missing: z.array(storedMessageSchema),
+  /** The calculation's refusal (status error): a `calc_refused` message; "field: reason" in older runs. */
+  error: storedMessageSchema.nullable(),
   /** The module's full result with its trace (status ran). */
   result: z.unknown(),
 });

@@ -1,5 +1,6 @@
 import { CalcInputError } from '../calc/errors';
 import type { TraceStep } from '../calc/trace';
+import { engineMessage, missingText, storedMessageText } from '../format/messages';
 import type { AssemblyInput } from '../schemas/assembly';
 import { WALL_CATEGORY_LABELS } from '../schemas/assembly';
 import { applicableRows, type CriteriaRowInput, criterionSpec, type MetricKey, zoneLabel } from './criteria';
@@ -30,14 +31,11 @@ interface ModuleRun {
   cautions: string[];
 }
 
-const listWords = (items: readonly string[]) =>
-  items.length <= 1 ? (items[0] ?? '') : `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
-
-/** Why a module gave no result, in plain words. */
+/** Why a module gave no result, in plain words (shared/format words the messages). */
 function whyNot(run: ModuleRun): string {
   const o = run.outcome;
-  if (o.status === 'missing') return `${listWords(o.missing)} ${o.missing.length > 1 ? 'are' : 'is'} missing`;
-  return `the ${run.module.label.toLowerCase()} refused the input (${o.error})`;
+  if (o.status === 'missing') return missingText(o.missing);
+  return `the ${run.module.label.toLowerCase()} refused the input (${o.error === null ? '' : storedMessageText(o.error)})`;
 }
 
 function runModule(module: CheckModule, assembly: AssemblyInput, project: ProjectForChecks): ModuleRun {
@@ -59,7 +57,13 @@ function runModule(module: CheckModule, assembly: AssemblyInput, project: Projec
     if (!(e instanceof CalcInputError)) throw e;
     return {
       module,
-      outcome: { ...base, status: 'error', missing: [], error: `${e.field}: ${e.reason}`, result: null },
+      outcome: {
+        ...base,
+        status: 'error',
+        missing: [],
+        error: engineMessage('calc_refused', e.field, { reason: e.reason }),
+        result: null,
+      },
       metrics: {},
       verdicts: [],
       trace: [],

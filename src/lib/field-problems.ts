@@ -1,4 +1,5 @@
 import { CalcInputError } from '@shared/calc/errors';
+import { sentence } from '@shared/format';
 import type { UnitSystem } from '@shared/units';
 import type { InputMeasure } from './input-measure';
 import { formatSheetBound, type SheetMeasure } from './sheet-units';
@@ -76,15 +77,8 @@ export function collectIssues(
   }
 }
 
-/** Engine reasons carry raw floats ("got 0.5027093596059113"); six significant figures are plenty. */
-const tidyNumbers = (t: string) => t.replace(/\d+\.\d{7,}/g, (x) => String(Number(Number(x).toPrecision(6))));
-
-/** A sentence: capital first letter, closing full stop. */
-export function sentence(raw: string): string {
-  const t = tidyNumbers(raw);
-  const s = t.charAt(0).toUpperCase() + t.slice(1);
-  return /[.!?]$/.test(s) ? s : `${s}.`;
-}
+/** A sentence: capital first letter, closing full stop, raw floats readable (shared/format). */
+export { sentence };
 
 /** An engine refusal as a problem at its path (prefixed, e.g. `takeoff.`); rethrows anything else. */
 export function calcProblem(e: unknown, prefix = ''): [string, FieldProblem] {

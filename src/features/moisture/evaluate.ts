@@ -7,6 +7,7 @@ import {
   type Vapour,
 } from '@shared/calc/moisture/schema';
 import { moistureInputFor, type ProjectForChecks } from '@shared/checks/inputs';
+import { type EngineMessage, messageText, sentence } from '@shared/format';
 import type { AssemblyInput } from '@shared/schemas/assembly';
 
 /*
@@ -29,20 +30,13 @@ export interface Problem {
   text: string;
   /** What it is about, when the text does not say: "Layer 7 (Polyethylene film)". */
   subject?: string;
+  /** The engine's message code, when the problem is one of its messages (e.g. `vapour_missing`). */
+  code?: EngineMessage['code'];
 }
 
 export type MoistureEvaluation =
   | { status: 'ready'; input: MoistureInput; result: MoistureResult }
   | { status: 'blocked'; problems: Problem[] };
-
-/** Engine reasons carry raw floats ("got 0.5027093596059113"); six significant figures are plenty to read. */
-const tidyNumbers = (t: string) => t.replace(/\d+\.\d{7,}/g, (x) => String(Number(Number(x).toPrecision(6))));
-
-export const sentence = (raw: string) => {
-  const t = tidyNumbers(raw);
-  const s = t.charAt(0).toUpperCase() + t.slice(1);
-  return /[.!?]$/.test(s) ? s : `${s}.`;
-};
 
 /** An engine or schema path (`layers.6.vapour.mu`, `months.3.exteriorTemperature`) → where to fix it. */
 export function whereOf(path: string): Where {
@@ -57,11 +51,10 @@ export function whereOf(path: string): Where {
   return { kind: 'other' };
 }
 
-/** The plain-word items of `moistureInputFor`'s missing list, tied to where each is entered. */
-export function whereMissing(item: string): Where {
-  const m = /^vapour data of layer (\d+)/i.exec(item);
-  if (m) return { kind: 'vapour', layer: Number(m[1]) - 1 };
-  if (/climate/i.test(item)) return { kind: 'climate' };
+/** The items of `moistureInputFor`'s missing list, tied to where each is entered (by code, never by words). */
+export function whereMissing(item: EngineMessage): Where {
+  if (item.code === 'vapour_missing') return { kind: 'vapour', layer: item.values.layer };
+  if (item.code === 'climate_missing') return { kind: 'climate' };
   return { kind: 'other' };
 }
 
@@ -100,7 +93,7 @@ export function evaluateMoisture(
       .map((p) =>
         (p.where.kind === 'vapour' || p.where.kind === 'buildup') &&
         p.where.layer !== null &&
-        !/^Vapour data of layer/i.test(p.text)
+        p.code !== 'vapour_missing'
           ? { ...p, subject: layerName(p.where.layer) }
           : p,
       )
@@ -115,7 +108,7 @@ export function evaluateMoisture(
       const where = whereMissing(item);
       // A row already reported as unreadable is not "missing" as well.
       if (where.kind === 'vapour' && rowErrors[where.layer] !== undefined) continue;
-      problems.push({ where, text: sentence(item) });
+      problems.push({ where, text: sentence(messageText(item)), code: item.code });
     }
   }
   if (problems.length > 0 || built.status !== 'ready')

@@ -1,5 +1,6 @@
 import { calculateWindSchedule } from '@shared/calc/wind/attachment';
 import { checkDesignSpacing } from '@shared/calc/wind/design';
+import { messageText } from '@shared/format';
 import { describe, expect, it } from 'vitest';
 import { evaluateAttachment } from './evaluate';
 import { attachmentFormValues } from './form';
@@ -61,7 +62,11 @@ describe('the attachment sheet computed in the browser', () => {
     const a = { ...demoAssembly(), windPanel: undefined };
     const e = evaluateAttachment(attachmentFormValues(a), a, demoProject(false), 'SI');
     expect(e.result).toBeNull();
-    expect(e.missing).toEqual(['the project’s wind data', 'the panel’s load–span table and clip capacity']);
+    expect(e.missing.map(messageText)).toEqual([
+      'the project’s wind data',
+      'the panel’s load–span table and clip capacity',
+    ]);
+    expect(e.missing.map((m) => m.code)).toEqual(['wind_missing', 'panel_missing']);
   });
 
   it('does not call a panel that is entered but not yet valid "missing"', () => {
@@ -70,7 +75,7 @@ describe('the attachment sheet computed in the browser', () => {
     values.allowableLoad = Number.NaN;
     values.clipKind = 'rating';
     const e = evaluateAttachment(values, a, demoProject(false), 'SI');
-    expect(e.missing).toEqual(['the project’s wind data']);
+    expect(e.missing.map(messageText)).toEqual(['the project’s wind data']);
     expect(e.errors.allowableLoad).toBe('Enter a number.');
   });
 });

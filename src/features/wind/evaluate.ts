@@ -9,6 +9,7 @@ import {
   type ZoneDesign,
 } from '@shared/calc/wind/schema';
 import { type ProjectForChecks, windDesignInputFor } from '@shared/checks/inputs';
+import type { EngineMessage } from '@shared/format';
 import { type AssemblyInput, attachmentSchema } from '@shared/schemas/assembly';
 import type { UnitSystem } from '@shared/units';
 import {
@@ -42,8 +43,8 @@ export interface AttachmentEvaluation {
   design: DesignSpacings;
   /** Form path → reason, shown beside its field. */
   errors: Record<string, string>;
-  /** What `windDesignInputFor` says is missing, in its own words. */
-  missing: string[];
+  /** What `windDesignInputFor` says is missing (messages, worded by shared/format). */
+  missing: EngineMessage[];
   site: SiteProblem[];
 }
 

@@ -4,7 +4,7 @@ import { type Check, methodDetail, type Verdict } from '@shared/checks/report';
 import type { CheckRun } from '@shared/schemas/check-runs';
 import type { UnitSystem } from '@shared/units';
 import { Table, Td, Th } from '../../../components/ui/Table';
-import { checkResultText, formatSiValue, STATUS_WORD, VERDICT_TEXT } from '../../../lib/check-format';
+import { checkFigures, formatSiValue, STATUS_WORD, VERDICT_TEXT } from '../../../lib/check-format';
 import { formatDateTime } from '../../../lib/format';
 
 function VerdictLine({
@@ -92,7 +92,7 @@ function CheckTable({
       <tbody>
         {checks.map((c) => {
           const s = STATUS_WORD[c.status];
-          const dir = c.direction === 'max' ? '≤ ' : c.direction === 'min' ? '≥ ' : '';
+          const figures = checkFigures(c, system);
           return (
             <tr key={c.id} data-check={c.id} data-status={c.status}>
               <Td className="min-w-60">
@@ -118,16 +118,16 @@ function CheckTable({
                 <Steps ids={c.traceStepIds} steps={steps} system={system} />
               </Td>
               <Td numeric className="whitespace-nowrap">
-                {c.required === null ? '—' : `${dir}${formatSiValue(c.required, c.unit, system)}`}
+                {figures.required}
               </Td>
               <Td numeric className="whitespace-nowrap">
-                {formatSiValue(c.provided, c.unit, system)}
+                {figures.provided}
               </Td>
               <Td className={`font-semibold ${s.cls}`}>
                 <span aria-hidden="true" className="mr-1">
                   {s.glyph}
                 </span>
-                <span className="text-ink">{checkResultText(c, system)}</span>
+                <span className="text-ink">{figures.result}</span>
               </Td>
             </tr>
           );

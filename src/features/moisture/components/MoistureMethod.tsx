@@ -1,11 +1,11 @@
 import { DELTA_0 } from '@shared/calc/moisture/glaser';
 import { HUMIDITY_CLASS_EXCESS } from '@shared/calc/moisture/interior';
 import type { MoistureInput, MoistureResult } from '@shared/calc/moisture/schema';
+import { sentence } from '@shared/format';
 import type { UnitSystem } from '@shared/units';
 import type { ReactNode } from 'react';
 import { Notice } from '../../../components/ui/Notice';
 import { formatNumber, formatQuantity } from '../../../lib/quantities';
-import { sentence } from '../evaluate';
 import { formatFactor, formatSd, monthName } from '../units';
 
 const START_RULE_WORDS: Record<MoistureResult['startMonthRule'], string> = {

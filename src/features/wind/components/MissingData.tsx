@@ -1,3 +1,4 @@
+import { type EngineMessage, messageText } from '@shared/format';
 import type { MouseEvent } from 'react';
 import { Link } from 'react-router';
 import { Notice } from '../../../components/ui/Notice';
@@ -41,21 +42,22 @@ const jump = (id: string) => (e: MouseEvent) => {
 };
 
 /** Where each thing `windInputFor` can report missing is entered. */
-function MissingItem({ item, projectId }: { item: string; projectId: string }) {
-  if (/wind data/i.test(item))
+function MissingItem({ item, projectId }: { item: EngineMessage; projectId: string }) {
+  const text = messageText(item);
+  if (item.code === 'wind_missing')
     return (
       <li>
-        <Link to={`/projects/${projectId}/wind`}>{item}</Link> — entered once per project on its wind data
+        <Link to={`/projects/${projectId}/wind`}>{text}</Link> — entered once per project on its wind data
         page
       </li>
     );
-  if (/load.span table|clip capacity/i.test(item))
+  if (item.code === 'panel_missing')
     return (
       <li>
-        <a href="#panel-heading">{item}</a> — enter it under “Inputs — panel and clip” below
+        <a href="#panel-heading">{text}</a> — enter it under “Inputs — panel and clip” below
       </li>
     );
-  return <li>{item}</li>;
+  return <li>{text}</li>;
 }
 
 /**
@@ -69,7 +71,7 @@ export function MissingData({
   errors,
 }: {
   projectId: string;
-  missing: readonly string[];
+  missing: readonly EngineMessage[];
   site: readonly SiteProblem[];
   errors: Record<string, string>;
 }) {
@@ -79,7 +81,7 @@ export function MissingData({
     <Notice tone="caution" title="No schedule yet — the calculation needs:">
       <ul className="list-disc pl-5" data-testid="wind-missing">
         {missing.map((m) => (
-          <MissingItem key={m} item={m} projectId={projectId} />
+          <MissingItem key={m.code} item={m} projectId={projectId} />
         ))}
         {site.map((s) => (
           <li key={s.text}>

@@ -1,15 +1,11 @@
-import { uuidParam } from '@shared/schemas/common';
 import type { QueryClient } from '@tanstack/react-query';
 import type { ComponentType } from 'react';
-import { createBrowserRouter, data, type LoaderFunctionArgs, redirect } from 'react-router';
-import { assemblyQueryOptions } from '../features/assemblies/api/get-assembly';
-import { meQueryOptions } from '../features/me/api/get-me';
-import { projectQueryOptions } from '../features/projects/api/get-project';
-import { signInPath } from '../lib/safe-next';
+import { createBrowserRouter, type LoaderFunctionArgs, redirect } from 'react-router';
 import { AppShell } from './layout/AppShell';
 import { AssemblyLayout } from './layout/AssemblyLayout';
 import { ProjectLayout } from './layout/ProjectLayout';
 import { RequireSession } from './layout/RequireSession';
+import type { Loaders } from './loaders';
 import { NotFoundPage } from './routes/NotFoundPage';
 import { RouteError } from './routes/RouteError';
 
@@ -22,60 +18,16 @@ const page = (load: () => Promise<ComponentType>) => ({
 });
 
 /**
- * Routes. Loaders use the same query options as the components (ensureQueryData), so a page renders
- * from the cache the loader filled. Everything below `RequireSession` needs a signed-in person.
+ * Routes. Every page is lazy; its loader (src/app/loaders.ts) fills the cache with the same query options as
+ * its components (ensureQueryData) while its chunk downloads, so it renders from the cache the loader filled;
+ * meanwhile the bar at the top of AppShell says the page is loading. Everything below `RequireSession` needs a
+ * signed-in person.
  */
 export function createAppRouter(queryClient: QueryClient) {
-  const requireSession = async ({ request }: LoaderFunctionArgs) => {
-    const me = await queryClient.ensureQueryData(meQueryOptions());
-    if (!me) {
-      const url = new URL(request.url);
-      throw redirect(signInPath(url.pathname + url.search));
-    }
-    return null;
-  };
-
-  const requireSiteAdmin = async () => {
-    const me = await queryClient.ensureQueryData(meQueryOptions());
-    if (me?.siteRole !== 'admin') throw data('This page is for site administrators.', { status: 403 });
-    return null;
-  };
-
-  const loadProject = async ({ params }: LoaderFunctionArgs) => {
-    if (!uuidParam.safeParse({ id: params.id }).success) throw data('No such project.', { status: 404 });
-    await queryClient.ensureQueryData(projectQueryOptions(params.id as string));
-    return null;
-  };
-
-  const checkSetId = ({ params }: LoaderFunctionArgs) => {
-    if (!uuidParam.safeParse({ id: params.setId }).success)
-      throw data('No such code table.', { status: 404 });
-    return null;
-  };
-
-  /** An assembly of this project (the same query options as its pages); one of another project is not found. */
-  const loadAssembly = async ({ params }: LoaderFunctionArgs) => {
-    if (!uuidParam.safeParse({ id: params.id }).success) throw data('No such project.', { status: 404 });
-    if (!uuidParam.safeParse({ id: params.assemblyId }).success)
-      throw data('No such assembly.', { status: 404 });
-    const [project, assembly] = await Promise.all([
-      queryClient.ensureQueryData(projectQueryOptions(params.id as string)),
-      queryClient.ensureQueryData(assemblyQueryOptions(params.assemblyId as string)),
-    ]);
-    if (assembly.projectId !== project.id) throw data('No such assembly in this project.', { status: 404 });
-    return null;
-  };
-
-  const checkSubmittalId = ({ params }: LoaderFunctionArgs) => {
-    if (!uuidParam.safeParse({ id: params.submittalId }).success)
-      throw data('No such submittal.', { status: 404 });
-    return null;
-  };
-
-  const checkRunId = ({ params }: LoaderFunctionArgs) => {
-    if (!uuidParam.safeParse({ id: params.runId }).success) throw data('No such check run.', { status: 404 });
-    return null;
-  };
+  // The loaders, with the query options of every page, are a chunk of their own asked for at once (beside the
+  // first page's chunk): the first page downloads no other page's data code.
+  const loaders = import('./loaders').then((m) => m.createLoaders(queryClient));
+  const load = (name: keyof Loaders) => async (args: LoaderFunctionArgs) => (await loaders)[name](args);
 
   return createBrowserRouter([
     {
@@ -86,8 +38,16 @@ export function createAppRouter(queryClient: QueryClient) {
         {
           errorElement: <RouteError />,
           children: [
-            { path: '/sign-in', ...page(() => import('./routes/SignInPage').then((m) => m.SignInPage)) },
-            { path: '/sign-up', ...page(() => import('./routes/SignUpPage').then((m) => m.SignUpPage)) },
+            {
+              path: '/sign-in',
+              loader: load('me'),
+              ...page(() => import('./routes/SignInPage').then((m) => m.SignInPage)),
+            },
+            {
+              path: '/sign-up',
+              loader: load('me'),
+              ...page(() => import('./routes/SignUpPage').then((m) => m.SignUpPage)),
+            },
             {
               path: '/forgot-password',
               ...page(() => import('./routes/ForgotPasswordPage').then((m) => m.ForgotPasswordPage)),
@@ -98,17 +58,23 @@ export function createAppRouter(queryClient: QueryClient) {
             },
             {
               path: '/invite/:token',
+              loader: load('invite'),
               ...page(() => import('./routes/InvitePage').then((m) => m.InvitePage)),
             },
             // Public: anyone holding a compliance sheet confirms it here without signing in.
-            { path: '/verify/:code', ...page(() => import('./routes/VerifyPage').then((m) => m.VerifyPage)) },
             {
-              loader: requireSession,
+              path: '/verify/:code',
+              loader: load('verify'),
+              ...page(() => import('./routes/VerifyPage').then((m) => m.VerifyPage)),
+            },
+            {
+              loader: load('session'),
               element: <RequireSession />,
               children: [
                 { path: '/', loader: () => redirect('/projects') },
                 {
                   path: '/projects',
+                  loader: load('projects'),
                   ...page(() => import('./routes/ProjectsPage').then((m) => m.ProjectsPage)),
                 },
                 {
@@ -117,7 +83,7 @@ export function createAppRouter(queryClient: QueryClient) {
                 },
                 {
                   path: '/projects/:id',
-                  loader: loadProject,
+                  loader: load('project'),
                   element: <ProjectLayout />,
                   children: [
                     {
@@ -128,16 +94,19 @@ export function createAppRouter(queryClient: QueryClient) {
                     },
                     {
                       path: 'assemblies',
+                      loader: load('assemblies'),
                       ...page(() =>
                         import('./routes/ProjectAssembliesPage').then((m) => m.ProjectAssembliesPage),
                       ),
                     },
                     {
                       path: 'assemblies/new',
+                      loader: load('newAssembly'),
                       ...page(() => import('./routes/NewAssemblyPage').then((m) => m.NewAssemblyPage)),
                     },
                     {
                       path: 'assemblies/compare',
+                      loader: load('compare'),
                       ...page(() =>
                         import('./routes/CompareAssembliesPage').then((m) => m.CompareAssembliesPage),
                       ),
@@ -145,17 +114,19 @@ export function createAppRouter(queryClient: QueryClient) {
                     {
                       // The frame of one assembly: its loader loads it and refuses one of another project.
                       path: 'assemblies/:assemblyId',
-                      loader: loadAssembly,
+                      loader: load('assembly'),
                       element: <AssemblyLayout />,
                       children: [
                         {
                           index: true,
+                          loader: load('builder'),
                           ...page(() =>
                             import('./routes/AssemblyBuilderPage').then((m) => m.AssemblyBuilderPage),
                           ),
                         },
                         {
                           path: 'attachment',
+                          loader: load('attachment'),
                           ...page(() =>
                             import('./routes/AssemblyAttachmentPage').then((m) => m.AssemblyAttachmentPage),
                           ),
@@ -174,12 +145,14 @@ export function createAppRouter(queryClient: QueryClient) {
                         },
                         {
                           path: 'checks',
+                          loader: load('checks'),
                           ...page(() =>
                             import('./routes/AssemblyChecksPage').then((m) => m.AssemblyChecksPage),
                           ),
                         },
                         {
                           path: 'revisions/:revision',
+                          loader: load('revision'),
                           ...page(() =>
                             import('./routes/AssemblyRevisionPage').then((m) => m.AssemblyRevisionPage),
                           ),
@@ -188,22 +161,24 @@ export function createAppRouter(queryClient: QueryClient) {
                     },
                     {
                       path: 'check-runs/:runId/sheet',
-                      loader: checkRunId,
+                      loader: load('checkRunSheet'),
                       ...page(() => import('./routes/CheckRunSheetPage').then((m) => m.CheckRunSheetPage)),
                     },
                     {
                       path: 'submittals',
+                      loader: load('submittals'),
                       ...page(() =>
                         import('./routes/ProjectSubmittalsPage').then((m) => m.ProjectSubmittalsPage),
                       ),
                     },
                     {
                       path: 'submittals/new',
+                      loader: load('newSubmittal'),
                       ...page(() => import('./routes/NewSubmittalPage').then((m) => m.NewSubmittalPage)),
                     },
                     {
                       path: 'submittals/:submittalId',
-                      loader: checkSubmittalId,
+                      loader: load('submittal'),
                       ...page(() => import('./routes/SubmittalPage').then((m) => m.SubmittalPage)),
                     },
                     {
@@ -216,10 +191,12 @@ export function createAppRouter(queryClient: QueryClient) {
                     },
                     {
                       path: 'members',
+                      loader: load('members'),
                       ...page(() => import('./routes/ProjectMembersPage').then((m) => m.ProjectMembersPage)),
                     },
                     {
                       path: 'activity',
+                      loader: load('activity'),
                       ...page(() =>
                         import('./routes/ProjectActivityPage').then((m) => m.ProjectActivityPage),
                       ),
@@ -228,20 +205,22 @@ export function createAppRouter(queryClient: QueryClient) {
                 },
                 {
                   path: '/library',
+                  loader: load('library'),
                   ...page(() => import('./routes/LibraryPage').then((m) => m.LibraryPage)),
                 },
                 {
                   path: '/code-tables',
+                  loader: load('codeTables'),
                   ...page(() => import('./routes/CodeTablesPage').then((m) => m.CodeTablesPage)),
                 },
                 {
                   path: '/code-tables/:setId',
-                  loader: checkSetId,
+                  loader: load('criteriaSet'),
                   ...page(() => import('./routes/CriteriaSetPage').then((m) => m.CriteriaSetPage)),
                 },
                 {
                   path: '/code-tables/:setId/diff',
-                  loader: checkSetId,
+                  loader: load('criteriaDiff'),
                   ...page(() => import('./routes/CriteriaDiffPage').then((m) => m.CriteriaDiffPage)),
                 },
                 {
@@ -250,16 +229,17 @@ export function createAppRouter(queryClient: QueryClient) {
                 },
                 {
                   path: '/settings/firm',
+                  loader: load('firmMembers'),
                   ...page(() => import('./routes/FirmMembersPage').then((m) => m.FirmMembersPage)),
                 },
                 {
                   path: '/admin/mail',
-                  loader: requireSiteAdmin,
+                  loader: load('adminMail'),
                   ...page(() => import('./routes/AdminMailPage').then((m) => m.AdminMailPage)),
                 },
                 {
                   path: '/admin/organisations',
-                  loader: requireSiteAdmin,
+                  loader: load('adminOrganisations'),
                   ...page(() =>
                     import('./routes/AdminOrganisationsPage').then((m) => m.AdminOrganisationsPage),
                   ),

@@ -6,6 +6,7 @@ import {
   useAttachmentProducts,
 } from '../../features/library/api/attachment-products';
 import { useMe } from '../../features/me/api/get-me';
+import { firmOf } from '../../features/me/firm';
 import { AttachmentSheet } from '../../features/wind/components/AttachmentSheet';
 import type { AttachmentLibrary } from '../../features/wind/components/LibraryPick';
 import { errorMessage } from '../../lib/api';
@@ -16,8 +17,7 @@ import { useAssemblyFrame } from '../layout/AssemblyLayout';
  * they belong to it, else their first firm (composed here so that the wind and library features stay apart).
  */
 function useAttachmentLibrary(organisationId: string | undefined): AttachmentLibrary | null {
-  const orgs = useMe().data?.organisations ?? [];
-  const org = orgs.find((o) => o.id === organisationId) ?? orgs[0];
+  const org = firmOf(useMe().data, organisationId);
   const products = useAttachmentProducts(org?.id);
   const add = useAddAttachmentProduct();
   if (!org) return null;

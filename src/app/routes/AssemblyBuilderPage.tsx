@@ -7,6 +7,7 @@ import { RevisionHistory } from '../../features/assemblies/components/RevisionHi
 import { useBridgeValues } from '../../features/library/api/get-bridge-values';
 import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
 import { useMe } from '../../features/me/api/get-me';
+import { firmOf } from '../../features/me/firm';
 import { useProjects } from '../../features/projects/api/get-projects';
 import { formatDateTime } from '../../lib/format';
 import { useAssemblyFrame } from '../layout/AssemblyLayout';
@@ -16,9 +17,7 @@ import { useAssemblyFrame } from '../layout/AssemblyLayout';
  * else their first firm. (Composed here so that the assemblies and library features stay apart.)
  */
 export function useBuilderLibrary(project: Project | undefined) {
-  const me = useMe();
-  const orgs = me.data?.organisations ?? [];
-  const org = orgs.find((o) => o.id === project?.organisationId) ?? orgs[0];
+  const org = firmOf(useMe().data, project?.organisationId);
   const materials = useFirmMaterials(org?.id);
   const bridgeValues = useBridgeValues(org?.id);
   return {

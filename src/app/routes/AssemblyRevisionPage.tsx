@@ -7,17 +7,17 @@ import { RevisionHistory } from '../../features/assemblies/components/RevisionHi
 import { errorMessage } from '../../lib/api';
 import { formatDateTime } from '../../lib/format';
 import { useAssemblyFrame } from '../layout/AssemblyLayout';
+import { revisionOf } from '../route-params';
 import { useBuilderLibrary } from './AssemblyBuilderPage';
 
 /** An older revision, read-only, exactly as it was saved (input and stored result). */
 export function AssemblyRevisionPage() {
   const { project, assembly: a } = useAssemblyFrame();
-  const { revision = '' } = useParams();
-  const n = Number(revision);
-  const rev = useRevision(a.id, Number.isInteger(n) && n > 0 ? n : 1);
+  const n = revisionOf(useParams().revision);
+  const rev = useRevision(a.id, n ?? 1);
   const library = useBuilderLibrary(project);
 
-  if (!Number.isInteger(n) || n < 1) return <Notice tone="caution" title="No such revision." />;
+  if (n === null) return <Notice tone="caution" title="No such revision." />;
   if (rev.isPending) return <Loading what={`Loading revision ${n}`} />;
   if (rev.isError) return <Notice tone="caution" title={errorMessage(rev.error)} live />;
 

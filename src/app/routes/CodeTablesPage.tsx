@@ -10,6 +10,7 @@ import { useCriteriaSets } from '../../features/criteria/api/get-criteria-sets';
 import { CriteriaSetTable } from '../../features/criteria/components/CriteriaSetTable';
 import { NewCriteriaSetForm } from '../../features/criteria/components/NewCriteriaSetForm';
 import { useMe } from '../../features/me/api/get-me';
+import { firmOf } from '../../features/me/firm';
 import { errorMessage } from '../../lib/api';
 
 /** The firm's code tables: the criteria its adopted code sets, entered by the firm, one table per code. */
@@ -18,7 +19,7 @@ export function CodeTablesPage() {
   const orgs = me.data?.organisations ?? [];
   const [chosen, setChosen] = useState<string | undefined>(undefined);
   const [adding, setAdding] = useState(false);
-  const org = orgs.find((o) => o.id === chosen) ?? orgs[0];
+  const org = firmOf(me.data, chosen);
   const sets = useCriteriaSets(org?.id);
   // The firm's editors and administrators write its tables (the server enforces the same).
   const mayWrite = canInFirm(org?.role, 'firm.write');

@@ -7,16 +7,17 @@ import { useCriteriaSet } from '../../features/criteria/api/get-criteria-set';
 import { DiffView } from '../../features/criteria/components/DiffView';
 import { errorMessage } from '../../lib/api';
 import { useUnitSystem } from '../../lib/unit-system';
+import { diffVersionsOf } from '../route-params';
 
 /** What changed between two versions of a code table (`?from=1&to=2`). */
 export function CriteriaDiffPage() {
   const { setId = '' } = useParams();
   const [params] = useSearchParams();
-  const from = Number(params.get('from'));
-  const to = Number(params.get('to'));
-  const valid = Number.isInteger(from) && Number.isInteger(to) && from > 0 && to > 0;
+  const versions = diffVersionsOf(params);
+  const { from, to } = versions ?? { from: 1, to: 1 };
+  const valid = versions !== null;
   const set = useCriteriaSet(setId);
-  const diff = useCriteriaDiff(setId, valid ? from : 1, valid ? to : 1);
+  const diff = useCriteriaDiff(setId, from, to);
   const system = useUnitSystem();
 
   return (

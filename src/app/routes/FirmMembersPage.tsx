@@ -9,6 +9,7 @@ import { useFirmMembers } from '../../features/firm-members/api/get-firm-members
 import { AddFirmMemberForm } from '../../features/firm-members/components/AddFirmMemberForm';
 import { FirmMembersTable } from '../../features/firm-members/components/FirmMembersTable';
 import { useMe } from '../../features/me/api/get-me';
+import { firmOf } from '../../features/me/firm';
 import { errorMessage } from '../../lib/api';
 
 /** What each firm role may do, in the firm's own data (shared/auth `FIRM_PERMISSIONS`). */
@@ -25,7 +26,7 @@ export function FirmMembersPage() {
   const me = useMe();
   const [params, setParams] = useSearchParams();
   const orgs = me.data?.organisations ?? [];
-  const org = orgs.find((o) => o.id === params.get('org')) ?? orgs[0];
+  const org = firmOf(me.data, params.get('org'));
   const members = useFirmMembers(org?.id);
   const isAdmin = canInFirm(org?.role, 'firm.admin');
 

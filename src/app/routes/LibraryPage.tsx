@@ -18,6 +18,7 @@ import {
   GenericMaterialsTable,
 } from '../../features/library/components/LibraryTables';
 import { useMe } from '../../features/me/api/get-me';
+import { firmOf } from '../../features/me/firm';
 import { errorMessage } from '../../lib/api';
 
 export function LibraryPage() {
@@ -25,7 +26,7 @@ export function LibraryPage() {
   const reference = useReferenceMaterials();
   const orgs = me.data?.organisations ?? [];
   const [chosen, setChosen] = useState<string | undefined>(undefined);
-  const org = orgs.find((o) => o.id === chosen) ?? orgs[0];
+  const org = firmOf(me.data, chosen);
   const materials = useFirmMaterials(org?.id);
   const bridgeValues = useBridgeValues(org?.id);
   const products = useAttachmentProducts(org?.id);

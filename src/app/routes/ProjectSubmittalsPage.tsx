@@ -1,5 +1,5 @@
 import { can } from '@shared/auth/permissions';
-import { SUBMITTAL_STATUS_TEXT, SUBMITTAL_STATUSES, type SubmittalStatus } from '@shared/schemas/submittals';
+import { SUBMITTAL_STATUS_TEXT, SUBMITTAL_STATUSES } from '@shared/schemas/submittals';
 import { useId } from 'react';
 import { useParams, useSearchParams } from 'react-router';
 import { ButtonLink } from '../../components/ui/Button';
@@ -10,16 +10,14 @@ import { useProject } from '../../features/projects/api/get-project';
 import { useSubmittals } from '../../features/submittals/api/get-submittals';
 import { SubmittalTable } from '../../features/submittals/components/SubmittalTable';
 import { errorMessage } from '../../lib/api';
-
-const isStatus = (s: string | null): s is SubmittalStatus =>
-  (SUBMITTAL_STATUSES as readonly string[]).includes(s ?? '');
+import { submittalStatusOf } from '../route-params';
 
 /** The project's submittals, filtered by status (kept in the address so it can be shared). */
 export function ProjectSubmittalsPage() {
   const { id = '' } = useParams();
   const filterId = useId();
   const [params, setParams] = useSearchParams();
-  const status = isStatus(params.get('status')) ? (params.get('status') as SubmittalStatus) : null;
+  const status = submittalStatusOf(params);
   const { data: project } = useProject(id);
   const list = useSubmittals(id, status);
   if (!project) return null;

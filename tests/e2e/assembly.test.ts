@@ -26,4 +26,33 @@ describe('assembly builder in the browser', () => {
     await screenshot(page, 'assembly-builder');
     expect(problems).toEqual([]);
   });
+
+  it('a layer thickness typed in inches is converted to mm and the conversion shown (390 px)', async () => {
+    const { page, problems } = await suite.openPage({ viewport: { width: 390, height: 900 } });
+    await signIn(page, suite.baseUrl, 'architect@skinwright.demo');
+    await openDemoAssembly(page);
+    const live = page.getByTestId('live-Reff');
+    await live.waitFor();
+    const before = await live.textContent();
+    const thickness = page
+      .getByRole('listitem', { name: /Mineral wool board/ })
+      .getByRole('textbox', { name: /^Thickness d\b.*in mm$/ });
+    // 1 in = 25.4 mm exactly (NIST SP 811 (2008) B.8): 3.5 in = 88.9 mm.
+    await thickness.fill('3.5 in');
+    await thickness.press('Enter');
+    await expect.poll(() => thickness.inputValue()).toBe('88.9');
+    const note = page.getByText('3.5 in → 88.9 mm');
+    expect(await note.isVisible()).toBe(true);
+    expect(await thickness.getAttribute('aria-describedby')).toContain(await note.getAttribute('id'));
+    await expect.poll(() => live.textContent(), { timeout: 10_000 }).not.toBe(before);
+    await screenshot(page, 'assembly-thickness-in-inches');
+
+    await thickness.fill('3.5 kg');
+    await thickness.blur();
+    expect(await page.getByText('“3.5 kg” is a mass; this box takes a length (mm)').isVisible()).toBe(true);
+    expect(await thickness.getAttribute('aria-invalid')).toBe('true');
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    expect(await page.evaluate(() => document.body.textContent?.includes('NaN'))).toBe(false);
+    expect(problems).toEqual([]);
+  });
 });

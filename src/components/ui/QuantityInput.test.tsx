@@ -279,7 +279,8 @@ describe('QuantityInput reads a number typed with its unit (factors: NIST SP 811
     const onSi = vi.fn();
     render(<Harness initial={undefined} measure={measureInput('thickness')} system="SI" onSi={onSi} />);
     fireEvent.change(box(), { target: { value: '1 5/8 in' } });
-    fireEvent.keyDown(box(), { key: 'Enter' });
+    // Enter converts and is kept from submitting the form, so the conversion is seen before anything is saved.
+    expect(fireEvent.keyDown(box(), { key: 'Enter' })).toBe(false);
     expect(onSi.mock.lastCall?.[0]).toBeCloseTo(0.041275, 12);
     expect(box().value).toBe('41.28');
     expect(screen.getByText('1 5/8 in → 41.28 mm')).toBeTruthy();

@@ -226,7 +226,11 @@ export function QuantityInput({
               onChange={(e) => handleChange(e.target.value)}
               onPaste={onPaste}
               onKeyDown={(e) => {
-                if (e.key === 'Enter') commit();
+                // Enter shows the conversion first; it submits the form only when nothing is left to convert.
+                if (e.key === 'Enter' && state.viaUnit) {
+                  e.preventDefault();
+                  commit();
+                }
               }}
               onBlur={() => {
                 commit();

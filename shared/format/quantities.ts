@@ -1,25 +1,12 @@
 import { CRITERION_TYPES, type CriterionSpec } from '../checks/criteria';
-import {
-  CHI_IP_TO_SI,
-  celsiusToFahrenheit,
-  FOOT,
-  INCH,
-  K_IP_TO_SI,
-  LB_PER_FT2_TO_KG_PER_M2,
-  LBF_TO_N,
-  MPH_TO_MS,
-  PSF_TO_PA,
-  PSI_IP_TO_SI,
-  R_IP_TO_SI,
-  U_IP_TO_SI,
-  type UnitSystem,
-} from '../units';
+import { type DisplayUnit, QUANTITIES, storedToShown, type UnitSystem } from '../units';
 import { trimmedFixed } from '../units/rounding';
 
 /*
  * How a figure reads — on every screen and on the compliance sheet alike: an SI value in, the person's unit
- * system out (conversion at the edge only, factors from shared/units), rounded by the one rule of
- * shared/units/rounding.ts, trailing zeros trimmed, a true minus sign and a narrow space before the unit.
+ * system out, rounded by the one rule of shared/units/rounding.ts, trailing zeros trimmed, a true minus sign and
+ * a narrow space before the unit. Units, symbols, conversions and default decimals come from the registry of
+ * shared/units; where a figure reads finer or coarser than its unit's default, the decimals are given here.
  */
 
 const MINUS = '\u2212';
@@ -36,66 +23,66 @@ const sig3 = (v: number) => (v === 0 ? 0 : Math.max(0, Math.min(6, 2 - Math.floo
 
 const withUnit = (text: string, unit: string) => (unit ? `${text}${NNBSP}${unit}` : text);
 
+/** A stored value in the shown unit `d`, to `decimals` (the unit's default unless given), with its symbol. */
+const figure = (stored: number, d: DisplayUnit, decimals = d.decimals) =>
+  withUnit(num(storedToShown(stored, d), decimals), d.symbol);
+
 const specByUnit = new Map<string, CriterionSpec>(Object.values(CRITERION_TYPES).map((s) => [s.unit, s]));
 
-/** 1 in²/ft in mm²/m: the vent area of an air layer in IP. */
-const IN2_PER_FT = (INCH * INCH * 1e6) / FOOT;
+const Q = QUANTITIES;
+/** Wind pressures read in kPa in SI (as the wind sheet shows them), psf in IP. */
+const KPA = Q.pressure.also.kPa!;
 
 export type QuantityFormatter = ReturnType<typeof quantityFormatter>;
 
 /** Every figure's words in one unit system. */
 export function quantityFormatter(system: UnitSystem) {
   const ip = system === 'IP';
+  const unit = (q: keyof typeof QUANTITIES) => Q[q][system];
   const f = {
     system,
     num,
     /** Layer thickness: mm to 0.01 (a 0.15 mm film reads 0.15), in to 0.001. */
-    thickness: (m: number) => (ip ? withUnit(num(m / INCH, 3), 'in') : withUnit(num(m * 1000, 2), 'mm')),
-    /** Spacing, span or joint width: mm below 0.1 m, else m; in IP in below 0.3 m, else ft. */
+    thickness: (m: number) => figure(m, unit('shortLength'), ip ? 3 : 2),
+    /** Spacing, span or joint width: mm below 0.1 m, else m; in IP in (to 0.01) below 0.3 m, else ft. */
     length: (m: number) =>
       ip
         ? Math.abs(m) < 0.3
-          ? withUnit(num(m / INCH, 2), 'in')
-          : withUnit(num(m / FOOT, 2), 'ft')
+          ? figure(m, Q.shortLength.IP, 2)
+          : figure(m, Q.length.IP)
         : Math.abs(m) < 0.1
-          ? withUnit(num(m * 1000, 1), 'mm')
-          : withUnit(num(m, 3), 'm'),
-    /** Site dimensions (height, plan): m or ft. */
-    dimension: (m: number) => (ip ? withUnit(num(m / FOOT, 1), 'ft') : withUnit(num(m, 2), 'm')),
-    temperature: (c: number) =>
-      ip ? withUnit(num(celsiusToFahrenheit(c), 1), '°F') : withUnit(num(c, 1), '°C'),
-    temperatureValue: (c: number) => (ip ? celsiusToFahrenheit(c) : c),
-    temperatureUnit: ip ? '°F' : '°C',
+          ? figure(m, Q.shortLength.SI)
+          : figure(m, Q.length.SI),
+    /** Site dimensions (height, plan): m to 0.01 or ft to 0.1. */
+    dimension: (m: number) => figure(m, unit('length'), ip ? 1 : 2),
+    temperature: (c: number) => figure(c, unit('temperature')),
+    temperatureValue: (c: number) => storedToShown(c, unit('temperature')),
+    temperatureUnit: unit('temperature').symbol,
     rh: (fraction: number) => withUnit(num(fraction * 100, 1), '%'),
     /** Vent area of an air layer (ISO 6946 §6.9.3), stored in mm²/m: mm²/m or in²/ft. */
-    ventArea: (mm2PerM: number) =>
-      ip ? withUnit(num(mm2PerM / IN2_PER_FT, 3), 'in²/ft') : withUnit(num(mm2PerM, 0), 'mm²/m'),
-    rValue: (v: number) =>
-      ip
-        ? withUnit(num(v / R_IP_TO_SI, v / R_IP_TO_SI < 1 ? sig3(v / R_IP_TO_SI) : 1), 'h·ft²·°F/Btu')
-        : withUnit(num(v, v < 0.1 ? Math.min(4, sig3(v)) : 2), 'm²·K/W'),
-    uValue: (v: number) =>
-      ip ? withUnit(num(v / U_IP_TO_SI, 3), 'Btu/(h·ft²·°F)') : withUnit(num(v, 3), 'W/(m²·K)'),
-    lambda: (v: number) =>
-      ip
-        ? withUnit(num(v / K_IP_TO_SI, sig3(v / K_IP_TO_SI)), 'Btu·in/(h·ft²·°F)')
-        : withUnit(num(v, sig3(v)), 'W/(m·K)'),
-    chi: (v: number) => (ip ? withUnit(num(v / CHI_IP_TO_SI, 4), 'Btu/(h·°F)') : withUnit(num(v, 4), 'W/K')),
-    psi: (v: number) =>
-      ip ? withUnit(num(v / PSI_IP_TO_SI, 4), 'Btu/(h·ft·°F)') : withUnit(num(v, 4), 'W/(m·K)'),
-    /** Wind pressure: kPa to 0.001 (as the wind sheet reads it) or psf to 0.1. */
-    pressure: (pa: number) =>
-      ip ? withUnit(num(pa / PSF_TO_PA, 1), 'psf') : withUnit(num(pa / 1000, 3), 'kPa'),
-    force: (n: number) => (ip ? withUnit(num(n / LBF_TO_N, 0), 'lbf') : withUnit(num(n, 0), 'N')),
-    speed: (ms: number) => (ip ? withUnit(num(ms / MPH_TO_MS, 0), 'mph') : withUnit(num(ms, 1), 'm/s')),
-    accumulation: (kg: number) =>
-      ip ? withUnit(num(kg / LB_PER_FT2_TO_KG_PER_M2, 4), 'lb/ft²') : withUnit(num(kg, 3), 'kg/m²'),
-    accumulationValue: (kg: number) => (ip ? kg / LB_PER_FT2_TO_KG_PER_M2 : kg),
-    accumulationUnit: ip ? 'lb/ft²' : 'kg/m²',
-    lengthValue: (m: number) => (ip ? m / FOOT : m),
-    lengthUnit: ip ? 'ft' : 'm',
-    thicknessValue: (m: number) => (ip ? m / INCH : m * 1000),
-    thicknessUnit: ip ? 'in' : 'mm',
+    ventArea: (mm2PerM: number) => figure(mm2PerM, unit('ventArea')),
+    /** R to the unit's decimals, or three significant figures when small (a film, a membrane). */
+    rValue: (v: number) => {
+      const d = unit('resistance');
+      const shown = storedToShown(v, d);
+      const small = ip ? shown < 1 : shown < 0.1;
+      return figure(v, d, small ? Math.min(ip ? 6 : 4, sig3(shown)) : d.decimals);
+    },
+    uValue: (v: number) => figure(v, unit('transmittance')),
+    /** λ to three significant figures. */
+    lambda: (v: number) => figure(v, unit('conductivity'), sig3(storedToShown(v, unit('conductivity')))),
+    chi: (v: number) => figure(v, unit('chi')),
+    psi: (v: number) => figure(v, unit('psi')),
+    pressure: (pa: number) => figure(pa, ip ? Q.pressure.IP : KPA),
+    force: (n: number) => figure(n, unit('force')),
+    speed: (ms: number) => figure(ms, unit('speed')),
+    accumulation: (kg: number) => figure(kg, unit('massPerArea')),
+    accumulationValue: (kg: number) => storedToShown(kg, unit('massPerArea')),
+    accumulationUnit: unit('massPerArea').symbol,
+    lengthValue: (m: number) => storedToShown(m, unit('length')),
+    lengthUnit: unit('length').symbol,
+    thicknessValue: (m: number) => storedToShown(m, unit('shortLength')),
+    thicknessUnit: unit('shortLength').symbol,
     /** A ratio as a whole percentage, "12 %" (a no-break space: the figure and its sign stay together). */
     percent: (ratio: number) => `${num(ratio * 100, 0)}\u00a0%`,
 

@@ -20,6 +20,8 @@ const envSchema = z.object({
   AUTH_RATE_LIMIT: z.coerce.number().int().positive().default(30),
   /** Requests per minute per address on the public calculations (`/api/v1/calc/*`). */
   CALC_RATE_LIMIT: z.coerce.number().int().positive().default(600),
+  /** Most grid cells one bridge solve (`POST /api/v1/calc/bridge`) may use; a 3-D clip of 200 000 ≈ 2 s. */
+  BRIDGE_MAX_CELLS: z.coerce.number().int().min(1000).max(5_000_000).default(250_000),
   /** Requests per minute per address on the public sheet verification (`GET /api/verify/:code`). */
   VERIFY_RATE_LIMIT: z.coerce.number().int().positive().default(30),
   /**
@@ -63,6 +65,8 @@ export type Config = {
   authSecret: string;
   authRateLimit: number;
   calcRateLimit: number;
+  /** Most grid cells of one bridge solve on the API. */
+  bridgeMaxCells: number;
   verifyRateLimit: number;
   /** Express `trust proxy`: false (trust no forwarded address), a hop count, or a list of trusted proxies. */
   trustProxy: TrustProxy;
@@ -139,6 +143,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     authSecret: e.BETTER_AUTH_SECRET ?? DEV_SECRET,
     authRateLimit: e.AUTH_RATE_LIMIT,
     calcRateLimit: e.CALC_RATE_LIMIT,
+    bridgeMaxCells: e.BRIDGE_MAX_CELLS,
     verifyRateLimit: e.VERIFY_RATE_LIMIT,
     trustProxy: parseTrustProxy(e.TRUST_PROXY),
     accountLock: { failures: e.ACCOUNT_LOCK_FAILURES, durationMs: e.ACCOUNT_LOCK_MINUTES * 60_000 },

@@ -1,3 +1,5 @@
+import { demoGirtModel } from '@shared/calc/bridge/fixtures';
+import { bridgeModelSchema, bridgeResultSchema } from '@shared/calc/bridge/schema';
 import { demoJointSchedule } from '@shared/calc/joints/fixtures';
 import { calculateJointSchedule } from '@shared/calc/joints/joints';
 import { jointScheduleInputSchema, jointScheduleResultSchema } from '@shared/calc/joints/schema';
@@ -197,6 +199,31 @@ export const calcRoutes = [
         takeoffToCsv(calculateTakeoff(body), query.units),
         'takeoff.csv',
       ),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/v1/calc/bridge',
+    summary:
+      'Thermal bridge by 2-D/3-D steady conduction (ISO 10211): heat flow, ψ or χ, lowest inside surface temperature and f_Rsi',
+    tag: 'Calculations',
+    access: { kind: 'public' },
+    stateless: true,
+    body: bridgeModelSchema,
+    example: demoGirtModel(),
+    responses: {
+      200: {
+        description:
+          'Heat flows per environment, ψ/χ against the reference U values, solver figures (iterations, residual, energy balance)',
+        schema: bridgeResultSchema,
+      },
+      ...calcErrors,
+      413: {
+        description:
+          'The grid would pass `BRIDGE_MAX_CELLS` cells; `fields.mesh` gives the cap and the count',
+        schema: apiErrorSchema,
+      },
+    },
+    handler: async ({ body, services }) => services.bridge.solve(body),
   }),
   defineRoute({
     method: 'get',

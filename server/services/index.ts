@@ -5,6 +5,7 @@ import type { Mailer } from '../mail/mailer';
 import type { ObjectStore } from '../storage/object-store';
 import { createAssemblyService } from './assemblies';
 import { createAuditService } from './audit';
+import { createBridgeService } from './bridge';
 import { createCheckRunService } from './check-runs';
 import { createCriteriaService } from './criteria';
 import { conflict } from './errors';
@@ -39,6 +40,7 @@ export function createServices(
     },
     auth: { instance: auth, currentUser: createSessionReader(auth) },
     audit: createAuditService(db),
+    bridge: createBridgeService(config.bridgeMaxCells),
     me: createMeService(db),
     organisations: createOrganisationService(db),
     projects: createProjectService(db, database.readCache),

@@ -1,4 +1,5 @@
 // `npm run bench`: prints the speed figures of the calculation engine (not a pass/fail test).
+import { benchBridge } from './bridge.bench';
 import { benchMoisture } from './moisture.bench';
 import { benchSheet } from './sheet.bench';
 import { initialJsLine } from './size';
@@ -26,6 +27,13 @@ for (const [bench, target] of benches) {
     r.medianMicros <= target ? `meets target ≤ ${target} µs` : `SLOWER than target ${target} µs`;
   console.log(
     `${r.name.padEnd(48)} median ${r.medianMicros.toFixed(2).padStart(8)} µs  ${Math.round(r.perSecond).toLocaleString('en-US').padStart(10)} /s   ${verdict}`,
+  );
+}
+for (const r of benchBridge()) {
+  const verdict =
+    r.medianMs <= r.targetMs ? `meets target ≤ ${r.targetMs} ms` : `SLOWER than target ${r.targetMs} ms`;
+  console.log(
+    `${r.name.padEnd(48)} median ${r.medianMs.toFixed(1).padStart(8)} ms (CPU ${r.medianCpuMs.toFixed(0)} ms)  ${r.cells.toLocaleString('en-US').padStart(8)} cells  ${r.iterations} iterations   ${verdict}`,
   );
 }
 console.log(initialJsLine());

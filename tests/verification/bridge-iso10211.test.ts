@@ -21,6 +21,7 @@
 import { solveBridge, temperatureAt } from '@shared/calc/bridge/bridge';
 import { demoGirtModel } from '@shared/calc/bridge/fixtures';
 import { type BridgeModelInput, bridgeModelSchema } from '@shared/calc/bridge/schema';
+import { thermalInputSchema } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
 import { describe, expect, it } from 'vitest';
 
@@ -223,16 +224,18 @@ describe('cross-check with the 1-D engine: a wall without a bridge (derived)', (
     { name: 'gypsum board', d: 0.0125, lambda: 0.25 },
   ];
   const u1d = 1 / (0.04 + layers.reduce((s, l) => s + l.d / l.lambda, 0) + 0.13);
-  const thermalU = calculateThermal({
-    layers: layers.map((l) => ({
-      kind: 'homogeneous',
-      name: l.name,
-      thickness: l.d,
-      conductivity: l.lambda,
-    })),
-    heatFlow: 'horizontal',
-    bridges: [],
-  }).U0;
+  const thermalU = calculateThermal(
+    thermalInputSchema.parse({
+      layers: layers.map((l) => ({
+        kind: 'homogeneous',
+        name: l.name,
+        thickness: l.d,
+        conductivity: l.lambda,
+      })),
+      heatFlow: 'horizontal',
+      bridges: [],
+    }),
+  ).U0;
   const depth = layers.reduce((s, l) => s + l.d, 0);
   const stack = (dim: 2 | 3) => {
     let y = 0;

@@ -14,7 +14,8 @@ import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import { type Db, deepFreeze, type ReadCache } from '../db/client';
 import { assemblies, assemblyRevisions, checkRuns, projects, user } from '../db/schema';
 import { recordAudit } from './audit';
-import { conflict, notFound } from './errors';
+import { notFound } from './errors';
+import { STALE, versionedUpdate } from './versioned';
 
 type AssemblyRow = typeof assemblies.$inferSelect;
 type RevisionRow = typeof assemblyRevisions.$inferSelect;
@@ -194,72 +195,75 @@ export function createAssemblyService(db: Db, readCache: ReadCache) {
       input: AssemblyInput,
       note: string,
     ): Promise<Assembly> {
-      const saved = await db.transaction(async (tx) => {
-        const [current] = await tx
-          .select({ projectId: assemblies.projectId, rev: assemblyRevisions })
-          .from(assemblies)
-          .innerJoin(
-            assemblyRevisions,
-            and(
-              eq(assemblyRevisions.assemblyId, assemblies.id),
-              eq(assemblyRevisions.revision, assemblies.currentRevision),
-            ),
-          )
-          .where(and(eq(assemblies.id, assemblyId), eq(assemblies.version, version)))
-          .for('update', { of: assemblies });
-        if (!current) return false;
-        if (canonicalJson(current.rev.input) === canonicalJson(input)) {
-          if (note === current.rev.note) return true;
-          await tx.update(assemblyRevisions).set({ note }).where(eq(assemblyRevisions.id, current.rev.id));
-          await recordAudit(tx, {
-            actorId: userId,
-            projectId: current.projectId,
-            entity: 'assembly',
-            entityId: assemblyId,
-            action: 'note',
-            before: { revision: current.rev.revision, note: current.rev.note },
-            after: { revision: current.rev.revision, note },
+      return versionedUpdate(db, {
+        conflictMessage: 'someone else saved this assembly after you opened it; your changes were not saved',
+        current: () => get(assemblyId),
+        write: async (tx) => {
+          const [current] = await tx
+            .select({ projectId: assemblies.projectId, rev: assemblyRevisions })
+            .from(assemblies)
+            .innerJoin(
+              assemblyRevisions,
+              and(
+                eq(assemblyRevisions.assemblyId, assemblies.id),
+                eq(assemblyRevisions.revision, assemblies.currentRevision),
+              ),
+            )
+            .where(and(eq(assemblies.id, assemblyId), eq(assemblies.version, version)))
+            .for('update', { of: assemblies });
+          if (!current) return STALE;
+          if (canonicalJson(current.rev.input) === canonicalJson(input)) {
+            if (note === current.rev.note) return { audit: [] };
+            await tx.update(assemblyRevisions).set({ note }).where(eq(assemblyRevisions.id, current.rev.id));
+            return {
+              audit: [
+                {
+                  actorId: userId,
+                  projectId: current.projectId,
+                  entity: 'assembly',
+                  entityId: assemblyId,
+                  action: 'note',
+                  before: { revision: current.rev.revision, note: current.rev.note },
+                  after: { revision: current.rev.revision, note },
+                },
+              ],
+            };
+          }
+          const thermalResult = calculateThermal(input.thermal);
+          const [a] = await tx
+            .update(assemblies)
+            .set({
+              name: input.name,
+              wallCategory: input.wallCategory,
+              version: version + 1,
+              currentRevision: version + 1,
+              updatedAt: new Date(),
+            })
+            .where(eq(assemblies.id, assemblyId))
+            .returning();
+          await tx.insert(assemblyRevisions).values({
+            assemblyId,
+            revision: a!.currentRevision,
+            note,
+            input,
+            thermalResult,
+            engineVersion: ENGINE_VERSION,
+            createdBy: userId,
           });
-          return true;
-        }
-        const thermalResult = calculateThermal(input.thermal);
-        const [a] = await tx
-          .update(assemblies)
-          .set({
-            name: input.name,
-            wallCategory: input.wallCategory,
-            version: version + 1,
-            currentRevision: version + 1,
-            updatedAt: new Date(),
-          })
-          .where(eq(assemblies.id, assemblyId))
-          .returning();
-        await tx.insert(assemblyRevisions).values({
-          assemblyId,
-          revision: a!.currentRevision,
-          note,
-          input,
-          thermalResult,
-          engineVersion: ENGINE_VERSION,
-          createdBy: userId,
-        });
-        await recordAudit(tx, {
-          actorId: userId,
-          projectId: a!.projectId,
-          entity: 'assembly',
-          entityId: assemblyId,
-          action: 'revise',
-          after: { revision: a!.currentRevision, note },
-        });
-        return true;
+          return {
+            audit: [
+              {
+                actorId: userId,
+                projectId: a!.projectId,
+                entity: 'assembly',
+                entityId: assemblyId,
+                action: 'revise',
+                after: { revision: a!.currentRevision, note },
+              },
+            ],
+          };
+        },
       });
-      if (!saved)
-        throw conflict(
-          'version_conflict',
-          'someone else saved this assembly after you opened it; your changes were not saved',
-          await get(assemblyId),
-        );
-      return get(assemblyId);
     },
 
     async revisions(assemblyId: string) {

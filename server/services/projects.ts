@@ -12,7 +12,8 @@ import {
 } from '../db/schema';
 import { copyName } from './assemblies';
 import { recordAudit } from './audit';
-import { conflict, DomainError, notFound } from './errors';
+import { DomainError, notFound } from './errors';
+import { STALE, versionedUpdate } from './versioned';
 
 type ProjectRow = typeof projects.$inferSelect;
 
@@ -252,37 +253,37 @@ export function createProjectService(db: Db, readCache: ReadCache) {
       const { part, changes } = change;
       const before = Object.fromEntries(Object.keys(changes).map((k) => [k, current[k as keyof Project]]));
       const next = sql`${projects.version} + 1`;
-      const updated = await db.transaction(async (tx) => {
-        const rows = await tx
-          .update(projects)
-          .set({ ...changes, version: next, [SAVED_IN[part]]: next, updatedAt: new Date() })
-          .where(
-            and(
-              eq(projects.id, projectId),
-              lte(projects[SAVED_IN[part]], baseVersion),
-              gte(projects.version, baseVersion),
-            ),
-          )
-          .returning({ id: projects.id });
-        if (rows.length === 0) return false;
-        await recordAudit(tx, {
-          actorId: userId,
-          projectId,
-          entity: 'project',
-          entityId: projectId,
-          action: PART_ACTION[part],
-          before,
-          after: changes,
-        });
-        return true;
+      return versionedUpdate(db, {
+        conflictMessage: `someone else saved this project’s ${PART_NAME[part]} after you opened it`,
+        current: () => get(projectId, userId),
+        write: async (tx) => {
+          const rows = await tx
+            .update(projects)
+            .set({ ...changes, version: next, [SAVED_IN[part]]: next, updatedAt: new Date() })
+            .where(
+              and(
+                eq(projects.id, projectId),
+                lte(projects[SAVED_IN[part]], baseVersion),
+                gte(projects.version, baseVersion),
+              ),
+            )
+            .returning({ id: projects.id });
+          if (rows.length === 0) return STALE;
+          return {
+            audit: [
+              {
+                actorId: userId,
+                projectId,
+                entity: 'project',
+                entityId: projectId,
+                action: PART_ACTION[part],
+                before,
+                after: changes,
+              },
+            ],
+          };
+        },
       });
-      if (!updated)
-        throw conflict(
-          'version_conflict',
-          `someone else saved this project’s ${PART_NAME[part]} after you opened it`,
-          await get(projectId, userId),
-        );
-      return get(projectId, userId);
     },
 
     async setArchived(projectId: string, userId: string, archived: boolean): Promise<Project> {

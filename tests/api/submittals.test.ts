@@ -319,8 +319,36 @@ describe.each(testDatabases())('submittals on %s', (kind) => {
           .send({ checkRunId: '00000000-0000-4000-8000-000000000000' })
       ).status,
     ).toBe(404);
-    // Steps on a stale version are refused too.
-    expect((await sub.post(`/api/submittals/${bare.id}/submit`).send({ version: 99 })).status).toBe(409);
+    // Steps on a stale version are refused too, with the submittal as it is now.
+    const staleStep = await sub.post(`/api/submittals/${bare.id}/submit`).send({ version: 99 });
+    expect(staleStep.status).toBe(409);
+    expect(staleStep.body.error.code).toBe('version_conflict');
+    expect(submittalSchema.parse(staleStep.body.current)).toMatchObject({ id: bare.id, status: 'draft' });
+  });
+
+  it('answers every stale version with 409 and the current submittal, also when two steps race', async () => {
+    const sub = await as('subcontractor');
+    const s = await create();
+    await sub.post(`/api/submittals/${s.id}/sheets`).send({ checkRunId: runId });
+    const { version } = submittalSchema.parse((await sub.get(`/api/submittals/${s.id}`)).body);
+    const submitted = await sub.post(`/api/submittals/${s.id}/submit`).send({ version });
+    expect(submitted.status, submitted.text).toBe(200);
+    // Two reviewers start the review from the same version at once: one applies, the other is stale.
+    const [a, b] = await Promise.all(
+      ['architect', 'engineer'].map(async (who) =>
+        (await as(who)).post(`/api/submittals/${s.id}/review`).send({ version: version + 1 }),
+      ),
+    );
+    expect([a!.status, b!.status].sort()).toEqual([200, 409]);
+    const lost = a!.status === 409 ? a! : b!;
+    expect(lost.body.error.code).toBe('version_conflict');
+    expect(submittalSchema.parse(lost.body.current)).toMatchObject({ id: s.id, status: 'under_review' });
+    // A decision on a version read before the review started is stale too.
+    const stale = await (await as('architect'))
+      .post(`/api/submittals/${s.id}/decision`)
+      .send({ decision: 'approved', note: '', version });
+    expect(stale.status).toBe(409);
+    expect(submittalSchema.parse(stale.body.current).version).toBe(version + 2);
   });
 
   // The rule for several reviewers (DEVELOPERS.md "Submittal workflow"): every named reviewer decides; the

@@ -14,8 +14,12 @@ import type { Db } from '../../db/client';
 import { checkRuns, criteriaRows, criteriaSets } from '../../db/schema';
 import { recordAudit } from '../audit';
 import { conflict, notFound } from '../errors';
+import { STALE, versionConflict, versionedUpdate } from '../versioned';
 import { type CriteriaQueries, META_FIELDS, metaOf } from './queries';
 import { rowValues, sameRows } from './rows-csv';
+
+/** An edit of a version that is no longer the latest (thrown out of its transaction, answered as a conflict). */
+class NotLatest extends Error {}
 
 /** A 23505 unique violation, whichever driver reported it. */
 const isUniqueViolation = (e: unknown) => {
@@ -47,104 +51,102 @@ export function createCriteriaVersions(db: Db, q: CriteriaQueries) {
     ) => { meta: CriteriaSetMeta; rows: CriteriaRowInput[] },
     access: CriteriaAccess,
   ): Promise<CriteriaSave> {
-    let result: { id: string; versionCreated: boolean } | 'stale' | 'not_latest';
     try {
-      result = await db.transaction(async (tx) => {
-        const [current] = await tx
-          .select()
-          .from(criteriaSets)
-          .where(eq(criteriaSets.id, setId))
-          .for('update');
-        if (!current) throw notFound('code table');
-        if (revision !== undefined && current.revision !== revision) return 'stale' as const;
-        const [newer] = await tx
-          .select({ id: criteriaSets.id })
-          .from(criteriaSets)
-          .where(
-            and(
-              eq(criteriaSets.lineageId, current.lineageId),
-              sql`${criteriaSets.version} > ${current.version}`,
-            ),
-          )
-          .limit(1);
-        if (newer) return 'not_latest' as const;
-        const rows = await rowsOf(setId, tx);
-        const meta = metaOf(current);
-        const next = apply(meta, rows);
-        const metaChanges = diffFields(meta, next.meta, META_FIELDS);
-        if (metaChanges.length === 0 && sameRows(rows, next.rows))
-          return { id: setId, versionCreated: false };
-        const rowsDiff = diffRows(rows, next.rows);
-        const change = {
-          meta: metaChanges,
-          added: rowsDiff.added.length,
-          removed: rowsDiff.removed.length,
-          changed: rowsDiff.changed.length,
-        };
+      return await versionedUpdate(db, {
+        conflictMessage:
+          'someone else saved this code table after you opened it; your changes were not saved',
+        current: () => get(setId, access),
+        answer: async (saved: { id: string; versionCreated: boolean }) => ({
+          ...(await get(saved.id, access)),
+          versionCreated: saved.versionCreated,
+        }),
+        write: async (tx) => {
+          const [current] = await tx
+            .select()
+            .from(criteriaSets)
+            .where(eq(criteriaSets.id, setId))
+            .for('update');
+          if (!current) throw notFound('code table');
+          if (revision !== undefined && current.revision !== revision) return STALE;
+          const [newer] = await tx
+            .select({ id: criteriaSets.id })
+            .from(criteriaSets)
+            .where(
+              and(
+                eq(criteriaSets.lineageId, current.lineageId),
+                sql`${criteriaSets.version} > ${current.version}`,
+              ),
+            )
+            .limit(1);
+          if (newer) throw new NotLatest();
+          const rows = await rowsOf(setId, tx);
+          const meta = metaOf(current);
+          const next = apply(meta, rows);
+          const metaChanges = diffFields(meta, next.meta, META_FIELDS);
+          if (metaChanges.length === 0 && sameRows(rows, next.rows))
+            return { audit: [], result: { id: setId, versionCreated: false } };
+          const rowsDiff = diffRows(rows, next.rows);
+          const change = {
+            meta: metaChanges,
+            added: rowsDiff.added.length,
+            removed: rowsDiff.removed.length,
+            changed: rowsDiff.changed.length,
+          };
 
-        if (current.frozenAt) {
-          const [created] = await tx
-            .insert(criteriaSets)
-            .values({
-              organisationId: current.organisationId,
-              lineageId: current.lineageId,
-              version: current.version + 1,
-              previousVersionId: current.id,
-              ...next.meta,
-              createdBy: userId,
-            })
-            .returning({ id: criteriaSets.id });
-          if (next.rows.length > 0) await tx.insert(criteriaRows).values(rowValues(created!.id, next.rows));
-          await recordAudit(tx, {
+          if (current.frozenAt) {
+            const [created] = await tx
+              .insert(criteriaSets)
+              .values({
+                organisationId: current.organisationId,
+                lineageId: current.lineageId,
+                version: current.version + 1,
+                previousVersionId: current.id,
+                ...next.meta,
+                createdBy: userId,
+              })
+              .returning({ id: criteriaSets.id });
+            if (next.rows.length > 0) await tx.insert(criteriaRows).values(rowValues(created!.id, next.rows));
+            const audit = {
+              actorId: userId,
+              entity: 'criteria_set',
+              entityId: created!.id,
+              action: 'new_version',
+              before: { id: current.id, version: current.version },
+              after: { version: current.version + 1, cause: action, ...change },
+            };
+            return { audit: [audit], result: { id: created!.id, versionCreated: true } };
+          }
+          await tx
+            .update(criteriaSets)
+            .set({ ...next.meta, revision: current.revision + 1, updatedAt: new Date() })
+            .where(eq(criteriaSets.id, setId));
+          await tx.delete(criteriaRows).where(eq(criteriaRows.setId, setId));
+          if (next.rows.length > 0) await tx.insert(criteriaRows).values(rowValues(setId, next.rows));
+          const audit = {
             actorId: userId,
             entity: 'criteria_set',
-            entityId: created!.id,
-            action: 'new_version',
-            before: { id: current.id, version: current.version },
-            after: { version: current.version + 1, cause: action, ...change },
-          });
-          return { id: created!.id, versionCreated: true };
-        }
-        await tx
-          .update(criteriaSets)
-          .set({ ...next.meta, revision: current.revision + 1, updatedAt: new Date() })
-          .where(eq(criteriaSets.id, setId));
-        await tx.delete(criteriaRows).where(eq(criteriaRows.setId, setId));
-        if (next.rows.length > 0) await tx.insert(criteriaRows).values(rowValues(setId, next.rows));
-        await recordAudit(tx, {
-          actorId: userId,
-          entity: 'criteria_set',
-          entityId: setId,
-          action,
-          before: { revision: current.revision },
-          after: { revision: current.revision + 1, ...change },
-        });
-        return { id: setId, versionCreated: false };
+            entityId: setId,
+            action,
+            before: { revision: current.revision },
+            after: { revision: current.revision + 1, ...change },
+          };
+          return { audit: [audit], result: { id: setId, versionCreated: false } };
+        },
       });
     } catch (e) {
-      if (!isUniqueViolation(e)) throw e;
-      result = 'not_latest';
-    }
-    if (result === 'stale')
-      throw conflict(
-        'version_conflict',
-        'someone else saved this code table after you opened it; your changes were not saved',
-        await get(setId, access),
-      );
-    if (result === 'not_latest') {
+      // A newer version exists (or was created by a racing edit of the same frozen version).
+      if (!(e instanceof NotLatest) && !isUniqueViolation(e)) throw e;
       const [latest] = await db
         .select({ id: criteriaSets.id })
         .from(criteriaSets)
         .where(eq(criteriaSets.lineageId, sql`(select lineage_id from criteria_sets where id = ${setId})`))
         .orderBy(desc(criteriaSets.version))
         .limit(1);
-      throw conflict(
-        'version_conflict',
+      throw versionConflict(
         'a newer version of this code table exists; open the latest version and edit that',
         await get(latest!.id, access),
       );
     }
-    return { ...(await get(result.id, access)), versionCreated: result.versionCreated };
   }
 
   return {

@@ -25,10 +25,13 @@ import {
 } from '../../db/schema';
 import { conflict, notFound } from '../errors';
 import { archivedError } from '../projects';
+import { versionConflict } from '../versioned';
 
 export type Row = typeof submittals.$inferSelect;
 export type ItemRow = typeof submittalItems.$inferSelect;
 export type Actor = { id: string; name: string };
+
+export const STALE_MESSAGE = 'someone changed this submittal after you opened it; here it is as it is now';
 
 /** Items per revision (sheets and files together). */
 export const MAX_ITEMS = 40;
@@ -237,12 +240,7 @@ export function createSubmittalQueries(db: Db) {
   async function writable(id: string, statuses: readonly SubmittalStatus[], version?: number): Promise<Row> {
     const r = await row(id);
     await assertOpenProject(r.projectId);
-    if (version !== undefined && version !== r.version)
-      throw conflict(
-        'version_conflict',
-        'someone changed this submittal after you opened it; here it is as it is now',
-        await get(id),
-      );
+    if (version !== undefined && version !== r.version) throw versionConflict(STALE_MESSAGE, await get(id));
     if (!statuses.includes(r.status as SubmittalStatus)) throw wrongStatus(r, statuses);
     return r;
   }

@@ -24,10 +24,11 @@ import {
   submittals,
   user,
 } from '../../db/schema';
-import { recordAudit } from '../audit';
-import { conflict, DomainError, notFound } from '../errors';
-import type { createSubmittalNotifications } from './notifications';
-import type { Actor, Row, SubmittalQueries } from './queries';
+import { type AuditRecord, recordAudit } from '../audit';
+import { DomainError, notFound } from '../errors';
+import { STALE, versionedUpdate } from '../versioned';
+import type { createSubmittalNotifications, ReviewOutcome } from './notifications';
+import { type Actor, type Row, STALE_MESSAGE, type SubmittalQueries } from './queries';
 
 const fieldsAudit = (f: SubmittalFields & { number?: string }) => ({
   number: f.number,
@@ -154,44 +155,46 @@ export function createSubmittalWorkflow(
       const r = await q.writable(id, ['draft'], version);
       await checkReviewers(r.projectId, changes.reviewerIds);
       const before = { ...fieldsAudit({ ...r, reviewerIds: await q.reviewerIdsOf(id) }), number: undefined };
-      const updated = await db.transaction(async (tx) => {
-        const rows = await tx
-          .update(submittals)
-          .set({
-            title: changes.title,
-            description: changes.description,
-            specSection: changes.specSection,
-            specTitle: changes.specTitle,
-            dueDate: changes.dueDate,
-            version: version + 1,
-            updatedAt: new Date(),
-          })
-          .where(and(eq(submittals.id, id), eq(submittals.version, version), eq(submittals.status, 'draft')))
-          .returning({ id: submittals.id });
-        if (rows.length === 0) return false;
-        await tx.delete(submittalReviewers).where(eq(submittalReviewers.submittalId, id));
-        if (changes.reviewerIds.length > 0)
-          await tx
-            .insert(submittalReviewers)
-            .values(changes.reviewerIds.map((userId) => ({ submittalId: id, userId })));
-        await recordAudit(tx, {
-          actorId: actor.id,
-          projectId: r.projectId,
-          entity: 'submittal',
-          entityId: id,
-          action: 'update',
-          before,
-          after: fieldsAudit(changes),
-        });
-        return true;
+      return versionedUpdate(db, {
+        conflictMessage: STALE_MESSAGE,
+        current: () => q.get(id),
+        write: async (tx) => {
+          const rows = await tx
+            .update(submittals)
+            .set({
+              title: changes.title,
+              description: changes.description,
+              specSection: changes.specSection,
+              specTitle: changes.specTitle,
+              dueDate: changes.dueDate,
+              version: version + 1,
+              updatedAt: new Date(),
+            })
+            .where(
+              and(eq(submittals.id, id), eq(submittals.version, version), eq(submittals.status, 'draft')),
+            )
+            .returning({ id: submittals.id });
+          if (rows.length === 0) return STALE;
+          await tx.delete(submittalReviewers).where(eq(submittalReviewers.submittalId, id));
+          if (changes.reviewerIds.length > 0)
+            await tx
+              .insert(submittalReviewers)
+              .values(changes.reviewerIds.map((userId) => ({ submittalId: id, userId })));
+          return {
+            audit: [
+              {
+                actorId: actor.id,
+                projectId: r.projectId,
+                entity: 'submittal',
+                entityId: id,
+                action: 'update',
+                before,
+                after: fieldsAudit(changes),
+              },
+            ],
+          };
+        },
       });
-      if (!updated)
-        throw conflict(
-          'version_conflict',
-          'someone changed this submittal after you opened it',
-          await q.get(id),
-        );
-      return q.get(id);
     },
 
     /** Sends a draft to its reviewers (it needs at least one item and one reviewer) and e-mails them. */
@@ -207,17 +210,19 @@ export function createSubmittalWorkflow(
       if (reviewers.length === 0) fields.reviewerIds = 'name at least one reviewer first';
       if (Object.keys(fields).length > 0)
         throw new DomainError('invalid', 'incomplete', 'the submittal is not ready to submit', fields);
-      await transition(r, actor, 'submitted', 'submit', { submittedAt: new Date(), submittedBy: actor.id });
+      const submitted = await transition(r, actor, 'submitted', 'submit', {
+        submittedAt: new Date(),
+        submittedBy: actor.id,
+      });
       await notify.submitted(r, actor, reviewers);
-      return q.get(id);
+      return submitted;
     },
 
     /** A named reviewer takes the submittal under review. */
     async startReview(id: string, actor: Actor, version?: number): Promise<Submittal> {
       const r = await q.writable(id, ['submitted'], version);
       await assertReviewer(r, actor);
-      await transition(r, actor, 'under_review', 'start_review', {});
-      return q.get(id);
+      return transition(r, actor, 'under_review', 'start_review', {});
     },
 
     /**
@@ -245,85 +250,96 @@ export function createSubmittalWorkflow(
           },
         );
       const now = new Date();
-      const outcome = await db.transaction(async (tx) => {
-        // Taking the revision row first (still open, the version the caller read if named) serialises the
-        // reviewers' decisions, so exactly one of them sees the last decision and closes the revision.
-        const [open] = await tx
-          .update(submittals)
-          .set({ status: 'under_review', version: sql`${submittals.version} + 1`, updatedAt: now })
-          .where(
-            and(
-              eq(submittals.id, id),
-              inArray(submittals.status, ['submitted', 'under_review']),
-              input.version === undefined ? undefined : eq(submittals.version, input.version),
-            ),
-          )
-          .returning({ version: submittals.version });
-        if (!open)
-          throw conflict('version_conflict', 'someone changed this submittal a moment ago; reload it');
-        await tx
-          .update(submittalReviewers)
-          .set({ decision: input.decision, decisionNote: input.note, decidedAt: now })
-          .where(and(eq(submittalReviewers.submittalId, id), eq(submittalReviewers.userId, actor.id)));
-        const decisions = await tx
-          .select({
-            decision: submittalReviewers.decision,
-            note: submittalReviewers.decisionNote,
-            name: user.name,
-          })
-          .from(submittalReviewers)
-          .innerJoin(user, eq(user.id, submittalReviewers.userId))
-          .where(eq(submittalReviewers.submittalId, id))
-          .orderBy(asc(user.name));
-        const made = decisions.flatMap((d) =>
-          d.decision ? [{ ...d, decision: d.decision as SubmittalDecision, note: d.note ?? '' }] : [],
-        );
-        const closing =
-          made.length === decisions.length ? combinedDecision(made.map((d) => d.decision)) : null;
-        await recordAudit(tx, {
-          actorId: actor.id,
-          projectId: r.projectId,
-          entity: 'submittal',
-          entityId: id,
-          action: 'decide',
-          before: { status: r.status },
-          after: { status: closing ?? 'under_review', decision: input.decision, note: input.note },
-        });
-        if (!closing) return null;
-        const note =
-          made.length === 1
-            ? made[0]!.note
-            : made
-                .filter((d) => d.note)
-                .map((d) => `${d.name} (${SUBMITTAL_STATUS_TEXT[d.decision].label.toLowerCase()}): ${d.note}`)
-                .join('\n\n');
-        await tx
-          .update(submittals)
-          .set({
-            status: closing,
-            decision: closing,
-            decisionNote: note,
-            decidedAt: now,
-            decidedBy: actor.id,
-          })
-          .where(eq(submittals.id, id));
-        await recordAudit(tx, {
-          actorId: actor.id,
-          projectId: r.projectId,
-          entity: 'submittal',
-          entityId: id,
-          action: 'close_review',
-          before: { status: 'under_review' },
-          after: {
-            status: closing,
-            decisions: made.map((d) => ({ reviewer: d.name, decision: d.decision })),
-          },
-        });
-        const next = closing === 'revise_and_resubmit' ? await openNextRevision(tx, r, actor) : null;
-        return { decision: closing, made, next };
+      return versionedUpdate(db, {
+        conflictMessage: STALE_MESSAGE,
+        current: () => q.get(id),
+        // The submitter is e-mailed once the revision closes.
+        answer: async (outcome: ReviewOutcome | null = null) => {
+          if (outcome) await notify.outcome(r, outcome);
+          return q.get(id);
+        },
+        write: async (tx) => {
+          // Taking the revision row first (still open, the version the caller read if named) serialises the
+          // reviewers' decisions, so exactly one of them sees the last decision and closes the revision.
+          const [open] = await tx
+            .update(submittals)
+            .set({ status: 'under_review', version: sql`${submittals.version} + 1`, updatedAt: now })
+            .where(
+              and(
+                eq(submittals.id, id),
+                inArray(submittals.status, ['submitted', 'under_review']),
+                input.version === undefined ? undefined : eq(submittals.version, input.version),
+              ),
+            )
+            .returning({ version: submittals.version });
+          if (!open) return STALE;
+          await tx
+            .update(submittalReviewers)
+            .set({ decision: input.decision, decisionNote: input.note, decidedAt: now })
+            .where(and(eq(submittalReviewers.submittalId, id), eq(submittalReviewers.userId, actor.id)));
+          const decisions = await tx
+            .select({
+              decision: submittalReviewers.decision,
+              note: submittalReviewers.decisionNote,
+              name: user.name,
+            })
+            .from(submittalReviewers)
+            .innerJoin(user, eq(user.id, submittalReviewers.userId))
+            .where(eq(submittalReviewers.submittalId, id))
+            .orderBy(asc(user.name));
+          const made = decisions.flatMap((d) =>
+            d.decision ? [{ ...d, decision: d.decision as SubmittalDecision, note: d.note ?? '' }] : [],
+          );
+          const closing =
+            made.length === decisions.length ? combinedDecision(made.map((d) => d.decision)) : null;
+          const decided: AuditRecord = {
+            actorId: actor.id,
+            projectId: r.projectId,
+            entity: 'submittal',
+            entityId: id,
+            action: 'decide',
+            before: { status: r.status },
+            after: { status: closing ?? 'under_review', decision: input.decision, note: input.note },
+          };
+          if (!closing) return { audit: [decided], result: null };
+          const note =
+            made.length === 1
+              ? made[0]!.note
+              : made
+                  .filter((d) => d.note)
+                  .map(
+                    (d) => `${d.name} (${SUBMITTAL_STATUS_TEXT[d.decision].label.toLowerCase()}): ${d.note}`,
+                  )
+                  .join('\n\n');
+          await tx
+            .update(submittals)
+            .set({
+              status: closing,
+              decision: closing,
+              decisionNote: note,
+              decidedAt: now,
+              decidedBy: actor.id,
+            })
+            .where(eq(submittals.id, id));
+          const closed: AuditRecord = {
+            actorId: actor.id,
+            projectId: r.projectId,
+            entity: 'submittal',
+            entityId: id,
+            action: 'close_review',
+            before: { status: 'under_review' },
+            after: {
+              status: closing,
+              decisions: made.map((d) => ({ reviewer: d.name, decision: d.decision })),
+            },
+          };
+          const opened = closing === 'revise_and_resubmit' ? await openNextRevision(tx, r, actor) : null;
+          return {
+            audit: [decided, closed, ...(opened ? [opened.audit] : [])],
+            result: { decision: closing, made, next: opened?.next ?? null },
+          };
+        },
       });
-      if (outcome) await notify.outcome(r, outcome);
-      return q.get(id);
     },
 
     /** A comment on the submittal or one of its items, while the revision is undecided. */
@@ -360,29 +376,37 @@ export function createSubmittalWorkflow(
     status: SubmittalStatus,
     action: string,
     extra: Partial<typeof submittals.$inferInsert>,
-  ) {
-    await db.transaction(async (tx) => {
-      const rows = await tx
-        .update(submittals)
-        .set({ status, ...extra, version: r.version + 1, updatedAt: new Date() })
-        .where(and(eq(submittals.id, r.id), eq(submittals.version, r.version)))
-        .returning({ id: submittals.id });
-      if (rows.length === 0)
-        throw conflict('version_conflict', 'someone changed this submittal a moment ago; reload it');
-      await recordAudit(tx, {
-        actorId: actor.id,
-        projectId: r.projectId,
-        entity: 'submittal',
-        entityId: r.id,
-        action,
-        before: { status: r.status },
-        after: { status },
-      });
+  ): Promise<Submittal> {
+    return versionedUpdate(db, {
+      conflictMessage: STALE_MESSAGE,
+      current: () => q.get(r.id),
+      write: async (tx) => {
+        const rows = await tx
+          .update(submittals)
+          .set({ status, ...extra, version: r.version + 1, updatedAt: new Date() })
+          .where(and(eq(submittals.id, r.id), eq(submittals.version, r.version)))
+          .returning({ id: submittals.id });
+        if (rows.length === 0) return STALE;
+        const audit = {
+          actorId: actor.id,
+          projectId: r.projectId,
+          entity: 'submittal',
+          entityId: r.id,
+          action,
+          before: { status: r.status },
+          after: { status },
+        };
+        return { audit: [audit] };
+      },
     });
   }
 
   /** "Revise and resubmit": revision n + 1 as a draft, with the same reviewers (undecided) and copies of the items. */
-  async function openNextRevision(tx: Db, r: Row, actor: Actor): Promise<string> {
+  async function openNextRevision(
+    tx: Db,
+    r: Row,
+    actor: Actor,
+  ): Promise<{ next: string; audit: AuditRecord }> {
     const next = randomUUID();
     await tx.insert(submittals).values({
       id: next,
@@ -415,14 +439,16 @@ export function createSubmittalWorkflow(
         .values(
           old.map(({ id: _id, submittalId: _s, createdAt: _c, ...rest }) => ({ ...rest, submittalId: next })),
         );
-    await recordAudit(tx, {
-      actorId: actor.id,
-      projectId: r.projectId,
-      entity: 'submittal',
-      entityId: next,
-      action: 'open_revision',
-      after: { number: r.number, revision: r.revision + 1, previous: r.id },
-    });
-    return next;
+    return {
+      next,
+      audit: {
+        actorId: actor.id,
+        projectId: r.projectId,
+        entity: 'submittal',
+        entityId: next,
+        action: 'open_revision',
+        after: { number: r.number, revision: r.revision + 1, previous: r.id },
+      },
+    };
   }
 }

@@ -1,8 +1,8 @@
 import { existsSync } from 'node:fs';
-import type { IncomingMessage, RequestListener } from 'node:http';
+import type { IncomingMessage, RequestListener, ServerResponse } from 'node:http';
 import path from 'node:path';
 import express, { type Request, type RequestHandler } from 'express';
-import { ipKeyGenerator, type RateLimitInfo, rateLimit } from 'express-rate-limit';
+import { ipKeyGenerator, MemoryStore, type RateLimitInfo, rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
 import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
@@ -94,22 +94,33 @@ export function createApp({
 
   const trusted = (auth.options.trustedOrigins as string[]) ?? [];
   // The public calculations, by both paths (Express and the lean path's bare requests): per address — as
-  // Express computes `req.ip` — and minute; over the limit 429 with Retry-After, passed to `next` as an error.
+  // Express computes `req.ip` — and minute, counted in one store; over the limit 429 with Retry-After.
   const clientAddress = (req: IncomingMessage): string =>
     requestIp?.call({ app, headers: req.headers, socket: req.socket }) ?? req.socket.remoteAddress ?? '';
+  const calcKey = (req: IncomingMessage) => ipKeyGenerator(clientAddress(req));
+  const calcStore = new MemoryStore();
+  /** Retry-After (seconds until the address's window ends) and the refusal to answer. */
+  const calcRefusal = (res: ServerResponse, reset: Date | undefined) => {
+    const seconds = reset ? Math.ceil((reset.getTime() - Date.now()) / 1000) : 60;
+    res.setHeader('retry-after', String(Math.max(1, seconds)));
+    return new HttpError(429, 'rate_limited', 'too many calculations from this address; wait a minute');
+  };
   const calcLimiter = rateLimit({
     windowMs: 60_000,
     limit: config.calcRateLimit,
     standardHeaders: false,
     legacyHeaders: false,
-    keyGenerator: (req) => ipKeyGenerator(clientAddress(req)),
-    handler: (req, res, next) => {
-      const reset = (req as Request & { rateLimit?: RateLimitInfo }).rateLimit?.resetTime;
-      const seconds = reset ? Math.ceil((reset.getTime() - Date.now()) / 1000) : 60;
-      res.setHeader('retry-after', String(Math.max(1, seconds)));
-      next(new HttpError(429, 'rate_limited', 'too many calculations from this address; wait a minute'));
-    },
+    store: calcStore,
+    keyGenerator: calcKey,
+    handler: (req, res, next) =>
+      next(calcRefusal(res, (req as Request & { rateLimit?: RateLimitInfo }).rateLimit?.resetTime)),
   });
+  // The lean path counts in the same store itself: the middleware's own work per request (a chain of awaits
+  // and its bookkeeping) cost four times the count (D-018).
+  const admitCalc = async (req: IncomingMessage, res: ServerResponse) => {
+    const { totalHits, resetTime } = await calcStore.increment(calcKey(req));
+    return totalHits > config.calcRateLimit ? calcRefusal(res, resetTime) : undefined;
+  };
   /** Per address and minute; over the limit: 429 with Retry-After (seconds until the window ends). */
   const limiter = (limit: number, message: string) =>
     rateLimit({
@@ -176,7 +187,7 @@ export function createApp({
     trusted,
     limitBytes: JSON_LIMIT_BYTES,
     middleware: [securityHeaders, requestLog],
-    limiter: calcLimiter,
+    admit: admitCalc,
     logger,
   });
   const listener: RequestListener = (req, res) => {

@@ -18,7 +18,7 @@ const NO_REFUSAL = Promise.resolve(undefined);
  * request and response prototypes, walking its middleware and router stacks, body-parser — costs more than a
  * whole calculation, so these routes are answered here first, in the same order and with the same parts as
  * the Express stack: the middleware that writes headers and logs (`middleware`: helmet, the request logger),
- * the rate limit of the calculations (`limiter`), JSON parsing, the body refusal (nesting depth, NUL), the origin
+ * the rate limit of the calculations (`admit`), JSON parsing, the body refusal (nesting depth, NUL), the origin
  * check, validation, the handler and the error shapes. Whatever is thrown while answering becomes an error
  * answer: nothing a request sends can throw out of its event handlers and end the process.
  * Anything out of the ordinary — another spelling of the path, a content type other than plain JSON in UTF-8,
@@ -33,11 +33,8 @@ export function statelessPath(
     trusted: string[];
     limitBytes: number;
     middleware: RequestHandler[];
-    /**
-     * Express middleware that passes a refusal to `next` (the rate limit), possibly later: awaited before
-     * answering.
-     */
-    limiter?: RequestHandler;
+    /** Counts the request against the calculations' rate limit: a refusal, or undefined to go on. */
+    admit?: (req: IncomingMessage, res: ServerResponse) => Promise<unknown>;
     logger: Logger;
   },
 ): LeanPath {
@@ -80,11 +77,9 @@ export function statelessPath(
       fail(refused);
       return true;
     }
-    const { limiter } = opts;
-    // The limiter decides while the body arrives (a refusal is whatever it passes to `next`).
-    const admitted = limiter
-      ? new Promise<unknown>((resolve) => limiter(req as Request, res as Response, resolve))
-      : NO_REFUSAL;
+    // The rate limit decides while the body arrives; a failure of its own is answered as a refusal (and
+    // never left as a rejected promise before the body's end).
+    const admitted = opts.admit ? opts.admit(req, res).catch((err: unknown) => err) : NO_REFUSAL;
     const serve = (text: string) => {
       let body: unknown;
       try {

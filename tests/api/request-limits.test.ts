@@ -91,16 +91,43 @@ describe('a body nested too deeply', () => {
     expect((await fetch(`${server.base}/api/health`)).status).toBe(200);
   });
 
-  it(`takes ${MAX_JSON_DEPTH} levels, refuses ${MAX_JSON_DEPTH + 1}, and still names a NUL beside deep nesting`, async () => {
-    const thermal = '/api/v1/calc/thermal';
-    // Within the limit the schema speaks (an array is not a wall); one level more is refused before it.
-    const within = await send(server.base, 'POST', thermal, nested(MAX_JSON_DEPTH));
-    expect(JSON.parse(within.text).error.code).toBe('validation_failed');
-    const over = await send(server.base, 'POST', thermal, nested(MAX_JSON_DEPTH + 1));
-    expect(JSON.parse(over.text).error.code).toBe('invalid_json');
-    const nul = await send(server.base, 'POST', thermal, `{"a":${nested(60)},"b":{"c":"x\\u0000"}}`);
-    expect(JSON.parse(nul.text).error.fields).toEqual({ 'b.c': 'text must not contain NUL characters' });
-  });
+  it.each([
+    ['the lean path', 'application/json'],
+    ['Express', VIA_EXPRESS],
+  ])(
+    `takes ${MAX_JSON_DEPTH} levels, refuses ${MAX_JSON_DEPTH + 1}, and names a NUL or lone surrogate beside deep nesting (%s)`,
+    async (_path, type) => {
+      const thermal = '/api/v1/calc/thermal';
+      const post = async (body: string) => {
+        const res = await send(server.base, 'POST', thermal, body, type);
+        return { status: res.status, error: JSON.parse(res.text).error };
+      };
+      // Within the limit the schema speaks (an array is not a wall); one level more is refused before it.
+      expect(await post(nested(MAX_JSON_DEPTH))).toMatchObject({
+        status: 400,
+        error: { code: 'validation_failed' },
+      });
+      expect(await post(nested(MAX_JSON_DEPTH + 1))).toMatchObject({
+        status: 400,
+        error: { code: 'invalid_json' },
+      });
+      // Objects count as arrays do, and brackets inside strings do not count.
+      const objects = `${'{"a":'.repeat(MAX_JSON_DEPTH)}"[[[["${'}'.repeat(MAX_JSON_DEPTH)}`;
+      expect((await post(objects)).error.code).toBe('validation_failed');
+      expect((await post(`{"a":${objects}}`)).error.code).toBe('invalid_json');
+      expect(await post(`{"a":${nested(60)},"b":{"c":"x\\u0000"}}`)).toEqual({
+        status: 400,
+        error: {
+          code: 'validation_failed',
+          message: 'the request is not valid',
+          fields: { 'b.c': 'text must not contain NUL characters' },
+        },
+      });
+      expect((await post(`{"a":${nested(60)},"b":["\\ud800"]}`)).error.fields).toEqual({
+        'b.0': 'text must not contain a lone UTF-16 surrogate (half of a character)',
+      });
+    },
+  );
 });
 
 describe('limits of one app', () => {

@@ -6,9 +6,12 @@ import { type Assembly, type AssemblyInput, assemblyInputSchema } from '@shared/
 import type { Project } from '@shared/schemas/project';
 import { useMemo, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
+import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
 import { NewerRevisionNotice, RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { SheetSection } from '../../../components/ui/SheetSection';
+import { useDeferredCalculation } from '../../../lib/deferred-calculation';
 import { formatDateTime } from '../../../lib/format';
+import { issueLines } from '../../../lib/issue-words';
 import { type RevisionApi, useRevisionEditing } from '../../../lib/use-revision-editing';
 import { ElevationEditor } from '../../takeoff/components/ElevationEditor';
 import { ElevationTable } from '../../takeoff/components/ElevationTable';
@@ -22,6 +25,7 @@ import { JointCautions } from './JointCautions';
 import { JointInputsTable } from './JointInputsTable';
 import { JointMethod } from './JointMethod';
 import { JointScheduleEditor } from './JointScheduleEditor';
+import { JointsSummary } from './JointsSummary';
 import { ScheduleTable } from './ScheduleTable';
 
 const same = (x: unknown, y: unknown) => JSON.stringify(x) === JSON.stringify(y);
@@ -55,6 +59,17 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
   const takeoffEval = useMemo(() => (takeoff ? evaluateTakeoff(takeoff) : null), [takeoff]);
   const problemCount =
     Object.keys(jointsEval.problems).length + Object.keys(takeoffEval?.problems ?? {}).length;
+  // The results (summary, method, schedule, takeoff, the bar) come from one evaluation of the input as React
+  // defers it, marked "updating…" while it lags; the editors beside the inputs read the current one.
+  const { result: shown, stale } = useDeferredCalculation(
+    { joints, takeoff },
+    (v) => ({
+      ...v,
+      jointsEval: evaluateJoints(v.joints),
+      takeoffEval: v.takeoff ? evaluateTakeoff(v.takeoff) : null,
+    }),
+    [],
+  );
 
   const air = { min: project.winterDesignTempC, max: project.summerDesignTempC };
 
@@ -84,10 +99,7 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
       return parsed.success
         ? { input: parsed.data }
         : {
-            problem: [
-              'The assembly would not be accepted:',
-              ...parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`),
-            ],
+            problem: ['The assembly would not be accepted:', ...issueLines(parsed.error.issues, 'assembly')],
           };
     },
     carryOver: () => ({ detail: undefined }),
@@ -129,6 +141,14 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
 
       {mayWrite ? <NewerRevisionNotice newer={editing.newerElsewhere} yours="edits" /> : null}
 
+      <JointsSummary
+        joints={shown.joints}
+        evaluation={shown.jointsEval}
+        takeoff={shown.takeoffEval?.result ?? null}
+        problems={Object.keys(shown.jointsEval.problems).length}
+        stale={stale}
+      />
+
       <SheetSection n={1} title="Joint schedule — inputs" id="joint-inputs-heading">
         {mayWrite ? (
           <div id="joint-editor" className="scroll-mt-4">
@@ -150,20 +170,27 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
       </SheetSection>
 
       <SheetSection n={2} title="Method" id="joint-method-heading">
-        <JointMethod results={jointsEval.results} />
+        <div {...staleProps(stale)}>
+          <JointMethod results={shown.jointsEval.results} />
+        </div>
       </SheetSection>
 
       <SheetSection
         n={3}
         title="Schedule"
         id="joint-schedule-heading"
-        aside={<span className="text-xs text-ink-muted">computed in your browser as you type</span>}
+        aside={
+          <span className="flex items-baseline gap-3">
+            <UpdatingMark stale={stale} />
+            <span className="text-xs text-ink-muted">computed in your browser as you type</span>
+          </span>
+        }
       >
-        <div aria-live="polite">
-          {joints.length > 0 ? (
+        <div aria-live="polite" {...staleProps(stale)}>
+          {shown.joints.length > 0 ? (
             <ScheduleTable
-              joints={joints}
-              evaluation={jointsEval}
+              joints={shown.joints}
+              evaluation={shown.jointsEval}
               onEdit={mayWrite ? editJoint : undefined}
             />
           ) : (
@@ -214,14 +241,21 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
         title="Takeoff"
         id="takeoff-heading"
         aside={
-          <span className="text-xs text-ink-muted">estimates — check them against the shop drawings</span>
+          <span className="flex items-baseline gap-3">
+            <UpdatingMark stale={stale} />
+            <span className="text-xs text-ink-muted">estimates — check them against the shop drawings</span>
+          </span>
         }
       >
-        <div aria-live="polite">
-          {takeoff && takeoffEval?.result ? (
-            <TakeoffTable input={takeoff} result={takeoffEval.result} assemblyName={assembly.name} />
-          ) : takeoff && takeoffEval ? (
-            <TakeoffProblems problems={takeoffEval.problems} input={takeoff} />
+        <div aria-live="polite" {...staleProps(stale)}>
+          {shown.takeoff && shown.takeoffEval?.result ? (
+            <TakeoffTable
+              input={shown.takeoff}
+              result={shown.takeoffEval.result}
+              assemblyName={assembly.name}
+            />
+          ) : shown.takeoff && shown.takeoffEval ? (
+            <TakeoffProblems problems={shown.takeoffEval.problems} input={shown.takeoff} />
           ) : (
             <p className="text-ink-muted">Nothing to take off yet.</p>
           )}
@@ -251,7 +285,7 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
             ) : null
           }
           live={
-            <div className="min-w-52" aria-live="polite" data-testid="joints-live-status">
+            <div aria-live="polite" data-testid="joints-live-status" {...staleProps(stale, 'min-w-52')}>
               <p className="label-caps">Live</p>
               {problemCount > 0 ? (
                 <p className="text-sm text-caution">
@@ -260,27 +294,27 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
                 </p>
               ) : (
                 <p className="text-sm">
-                  {joints.length === 0 ? (
+                  {shown.joints.length === 0 ? (
                     'No joints'
                   ) : (
                     <>
                       <span className="text-meets">
                         <span aria-hidden="true">✓ </span>
-                        {jointsEval.passCount} meet
+                        {shown.jointsEval.passCount} meet
                       </span>
-                      {jointsEval.failCount > 0 ? (
+                      {shown.jointsEval.failCount > 0 ? (
                         <span className="text-caution">
                           {' '}
                           · <span aria-hidden="true">✕ </span>
-                          {jointsEval.failCount} short
+                          {shown.jointsEval.failCount} short
                         </span>
                       ) : null}
                     </>
                   )}
-                  {takeoffEval?.result ? (
+                  {shown.takeoffEval?.result ? (
                     <span className="text-ink-muted">
                       {' '}
-                      · {takeoffEval.result.sealant.cartridges.usFlOz10_1} cartridges (10.1 US fl oz)
+                      · {shown.takeoffEval.result.sealant.cartridges.usFlOz10_1} cartridges (10.1 US fl oz)
                     </span>
                   ) : null}
                 </p>

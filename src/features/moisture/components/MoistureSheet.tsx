@@ -3,11 +3,13 @@ import { ENGINE_VERSION } from '@shared/calc/trace';
 import type { Assembly } from '@shared/schemas/assembly';
 import type { Project } from '@shared/schemas/project';
 import { drawClass } from '@shared/sheets/layer-class';
-import { type ReactNode, useMemo, useState } from 'react';
+import { type ReactNode, useState } from 'react';
 import { Link } from 'react-router';
+import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
 import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { SheetSection } from '../../../components/ui/SheetSection';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
+import { useDeferredCalculation } from '../../../lib/deferred-calculation';
 import { formatDateTime } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import type { RevisionApi } from '../../../lib/use-revision-editing';
@@ -17,6 +19,7 @@ import { draftOf, KIND_SYMBOLS, KIND_UNITS, layerThickness } from '../vapour-dra
 import { MoistureCautions } from './MoistureCautions';
 import { MoistureMethod } from './MoistureMethod';
 import { MoistureResults } from './MoistureResults';
+import { MoistureSummary } from './MoistureSummary';
 import { NeedsList } from './NeedsList';
 import type { ProfileLayer, ProfileMode } from './ProfileChart';
 import { VapourTable } from './VapourTable';
@@ -38,12 +41,11 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
   const [mode, setMode] = useState<ProfileMode>('temperature');
 
   const input = editing.base.current.input;
-  const vapourKey = JSON.stringify(editing.vapour);
-  const rowErrorsKey = JSON.stringify(editing.rowErrors);
-  // biome-ignore lint/correctness/useExhaustiveDependencies: the keys stand for vapour and rowErrors (deep)
-  const evaluation = useMemo(
-    () => evaluateMoisture(input, editing.vapour, editing.rowErrors, project),
-    [input, vapourKey, rowErrorsKey, project],
+  // Every figure of the sheet comes from this one, possibly deferred, evaluation (`stale` while it lags).
+  const { result: evaluation, stale } = useDeferredCalculation(
+    { vapour: editing.vapour, rowErrors: editing.rowErrors },
+    (v) => evaluateMoisture(input, v.vapour, v.rowErrors, project),
+    [input, project],
   );
   const result = evaluation.status === 'ready' ? evaluation.result : null;
   const problems = evaluation.status === 'blocked' ? evaluation.problems : [];
@@ -54,7 +56,7 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
     if (
       p.where.kind === 'vapour' &&
       rowErrors[p.where.layer] === undefined &&
-      !/^Vapour data of layer/i.test(p.text)
+      p.code !== 'vapour_missing'
     )
       rowErrors[p.where.layer] = p.text;
 
@@ -83,6 +85,14 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
           {mayWrite ? ' — recomputed in your browser as you type.' : '.'}
         </p>
       </header>
+
+      <MoistureSummary
+        result={result}
+        layerNames={input.thermal.layers.map((l) => l.name)}
+        problems={problems.length}
+        stale={stale}
+        system={system}
+      />
 
       <SheetSection n={1} title="Inputs — layers and their vapour data" id="moisture-inputs-heading">
         <VapourTable
@@ -126,12 +136,15 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
         title="Result"
         id="moisture-result-heading"
         aside={
-          mayWrite ? (
-            <span className="text-xs text-ink-muted">computed in your browser as you type</span>
-          ) : null
+          <span className="flex items-baseline gap-3">
+            <UpdatingMark stale={stale} />
+            {mayWrite ? (
+              <span className="text-xs text-ink-muted">computed in your browser as you type</span>
+            ) : null}
+          </span>
         }
       >
-        <div aria-live="polite" className="flex flex-col gap-4">
+        <div aria-live="polite" {...staleProps(stale, 'flex flex-col gap-4')}>
           {result ? (
             <MoistureResults
               result={result}
@@ -156,7 +169,11 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
             />
           )}
         </div>
-        {result ? <ShowTheWork steps={result.trace} /> : null}
+        {result ? (
+          <div {...staleProps(stale)}>
+            <ShowTheWork steps={result.trace} />
+          </div>
+        ) : null}
       </SheetSection>
 
       <MoistureCautions engineVersion={ENGINE_VERSION} />

@@ -48,30 +48,61 @@ export type Access =
       whenArchived?: 'allow';
     };
 
-export interface RouteContext<P, Q, B> {
+/**
+ * The project of a `project` route: its id, the caller's role on it and the project record (read by the same
+ * query as the role, so a handler that needs the project need not read it again).
+ */
+export interface ProjectContext {
+  id: string;
+  role: ProjectRole;
+  record: Project;
+}
+
+/** The code tables of a `criteria` route: the firm whose tables these are and what the caller may do. */
+export interface CriteriaContext {
+  organisationId: string;
+  access: CriteriaAccess;
+}
+
+/** What every handler gets, whatever its access. */
+export interface BaseContext<P, Q, B> {
   req: Request;
   res: Response;
   params: P;
   query: Q;
   body: B;
-  user: SessionUser | null;
-  /**
-   * Set for `project` access: the project, the caller's role on it and the project record (read by the same
-   * query as the role, so a handler that needs the project need not read it again).
-   */
-  project: { id: string; role: ProjectRole; record: Project } | null;
-  /** Set for `criteria` access: the firm whose code tables these are and what the caller may do. */
-  criteria: { organisationId: string; access: CriteriaAccess } | null;
   services: Services;
 }
 
-export interface RouteDef<P = unknown, Q = unknown, B = unknown> {
+/**
+ * What a route's access check has established, by access kind: `public` handlers get no caller; every other
+ * kind the signed-in `user`; `project` also the `project`, `criteria` the firm's `criteria`.
+ */
+export type AccessContext<A extends Access> = A extends { kind: 'public' }
+  ? unknown
+  : A extends { kind: 'project' }
+    ? { user: SessionUser; project: ProjectContext }
+    : A extends { kind: 'criteria' }
+      ? { user: SessionUser; criteria: CriteriaContext }
+      : { user: SessionUser };
+
+/** A handler's context: the request's parts and services, and what its access kind has established. */
+export type RouteContext<P, Q, B, A extends Access = Access> = BaseContext<P, Q, B> & AccessContext<A>;
+
+/** The context `answer` is given by either path (the lean path has no caller: all three are null). */
+export type ServedContext = Omit<BaseContext<unknown, unknown, unknown>, 'query' | 'body'> & {
+  user: SessionUser | null;
+  project: ProjectContext | null;
+  criteria: CriteriaContext | null;
+};
+
+export interface RouteDef<P = unknown, Q = unknown, B = unknown, A extends Access = Access> {
   method: 'get' | 'post' | 'put' | 'patch' | 'delete';
   /** Express path under /api, e.g. `/projects/:id`. */
   path: string;
   summary: string;
   tag: string;
-  access: Access;
+  access: A;
   params?: z.ZodType<P>;
   query?: z.ZodType<Q>;
   body?: z.ZodType<B>;
@@ -92,7 +123,8 @@ export interface RouteDef<P = unknown, Q = unknown, B = unknown> {
    */
   workLimits?: WorkLimit[];
   /** Returns the JSON body (status = first documented response) or handles `res` itself and returns undefined. */
-  handler: (ctx: RouteContext<P, Q, B>) => Promise<unknown>;
+  // A method (not a function property), so that the registry's `AnyRoute` holds handlers of every access kind.
+  handler(ctx: RouteContext<P, Q, B, A>): Promise<unknown>;
 }
 
 /** A cap on what one request may ask to compute: at most `max` of `what` (counted by `count`) under `field`. */
@@ -118,11 +150,15 @@ export function workRefusal(limits: WorkLimit[] | undefined, body: unknown): Htt
   return undefined;
 }
 
-/** Identity helper that keeps the param/query/body types inferred from the zod schemas. */
-export const defineRoute = <P, Q, B>(def: RouteDef<P, Q, B>): RouteDef<P, Q, B> => def;
+/**
+ * Identity helper that keeps the param/query/body types inferred from the zod schemas, and the handler's
+ * context typed by the route's access kind.
+ */
+export const defineRoute = <P, Q, B, A extends Access>(def: RouteDef<P, Q, B, A>): RouteDef<P, Q, B, A> =>
+  def;
 
 // biome-ignore lint/suspicious/noExplicitAny: a registry holds routes of every shape
-export type AnyRoute = RouteDef<any, any, any>;
+export type AnyRoute = RouteDef<any, any, any, Access>;
 
 function parsePart<T>(schema: z.ZodType<T> | undefined, value: unknown, where: string): T {
   if (!schema) return undefined as T;
@@ -194,11 +230,7 @@ export function sendResult(req: IncomingMessage, res: ServerResponse, status: nu
  * The part of serving a route that follows access: validates the query and body, runs the handler and sends
  * its result (status = the first documented response; undefined = the handler answered itself, else 204).
  */
-export async function answer(
-  route: AnyRoute,
-  ctx: Omit<RouteContext<unknown, unknown, unknown>, 'query' | 'body'>,
-  sent: { query: unknown; body: unknown },
-) {
+export async function answer(route: AnyRoute, ctx: ServedContext, sent: { query: unknown; body: unknown }) {
   const { req, res } = ctx;
   const overWork = workRefusal(route.workLimits, sent.body);
   if (overWork) throw overWork;
@@ -252,7 +284,7 @@ export function mountRoutes(
       if (access.kind !== 'public' && !user) throw unauthorised();
       if (access.kind === 'siteAdmin' && user?.role !== 'admin') throw forbidden('site administrators only');
       const params = parsePart(route.params, req.params, 'params');
-      let project: RouteContext<unknown, unknown, unknown>['project'] = null;
+      let project: ProjectContext | null = null;
       if (access.kind === 'project') {
         const projectId = access.projectId
           ? await access.projectId({ params: req.params as Record<string, string>, services })
@@ -277,7 +309,7 @@ export function mountRoutes(
               : 'your firm role is reader: an editor or administrator of the firm writes its data',
           );
       }
-      let criteria: RouteContext<unknown, unknown, unknown>['criteria'] = null;
+      let criteria: CriteriaContext | null = null;
       if (access.kind === 'criteria') {
         const p = req.params as Record<string, string>;
         const uuid = (x: string | undefined) => x !== undefined && /^[0-9a-f-]{36}$/i.test(x);

@@ -58,7 +58,7 @@ export const assemblyRoutes = [
       200: { description: 'Assemblies', schema: z.object({ assemblies: z.array(assemblySummarySchema) }) },
       ...errors,
     },
-    handler: async ({ project, services }) => ({ assemblies: await services.assemblies.list(project!.id) }),
+    handler: async ({ project, services }) => ({ assemblies: await services.assemblies.list(project.id) }),
   }),
   defineRoute({
     method: 'post',
@@ -75,7 +75,7 @@ export const assemblyRoutes = [
       ...errors,
       409: { description: 'The project is archived', schema: apiErrorSchema },
     },
-    handler: ({ user, project, body, services }) => services.assemblies.create(project!.id, user!.id, body),
+    handler: ({ user, project, body, services }) => services.assemblies.create(project.id, user.id, body),
   }),
   defineRoute({
     method: 'get',
@@ -107,7 +107,7 @@ export const assemblyRoutes = [
       },
     },
     handler: ({ user, params, body, services }) =>
-      services.assemblies.update(params.assemblyId, user!.id, body.version, body.input, body.note),
+      services.assemblies.update(params.assemblyId, user.id, body.version, body.input, body.note),
   }),
   defineRoute({
     method: 'post',
@@ -127,14 +127,14 @@ export const assemblyRoutes = [
     },
     handler: async ({ user, project, params, body, services }) => {
       const target =
-        body.projectId === undefined || body.projectId === project!.id
-          ? project!.record
-          : await services.projects.access(body.projectId, user!.id);
+        body.projectId === undefined || body.projectId === project.id
+          ? project.record
+          : await services.projects.access(body.projectId, user.id);
       if (!target) throw notFound('project');
       if (!can(target.myRole, 'assembly.write'))
         throw forbidden('your role on the target project does not edit assemblies');
       if (target.archivedAt) throw archivedError();
-      return services.assemblies.duplicate(params.assemblyId, target.id, user!.id, body.name);
+      return services.assemblies.duplicate(params.assemblyId, target.id, user.id, body.name);
     },
   }),
   defineRoute({

@@ -46,7 +46,7 @@ export const checkRunRoutes = [
       409: { description: 'The project is archived', schema: apiErrorSchema },
     },
     handler: ({ params, user, body, services }) =>
-      services.checkRuns.create(params.assemblyId, user!.id, body.criteriaSetId),
+      services.checkRuns.create(params.assemblyId, user.id, body.criteriaSetId),
   }),
   defineRoute({
     method: 'get',
@@ -58,7 +58,7 @@ export const checkRunRoutes = [
     query: checkRunListQuerySchema,
     responses: { 200: { description: 'Runs', schema: checkRunListSchema }, ...errors },
     handler: async ({ project, query, services }) => ({
-      checkRuns: await services.checkRuns.list(project!.id, query.assemblyId),
+      checkRuns: await services.checkRuns.list(project.id, query.assemblyId),
     }),
   }),
   defineRoute({

@@ -71,7 +71,7 @@ export const criteriaRoutes = [
     example: { ...exampleMeta, rows: exampleRows },
     responses: { 201: { description: 'The new table', schema: criteriaSetSchema }, ...errors },
     handler: ({ params, user, body, criteria, services }) =>
-      services.criteria.create(params.orgId, user!.id, body, criteria!.access),
+      services.criteria.create(params.orgId, user.id, body, criteria.access),
   }),
   defineRoute({
     method: 'get',
@@ -81,7 +81,7 @@ export const criteriaRoutes = [
     access: { kind: 'criteria', need: 'read' },
     params: setParams,
     responses: { 200: { description: 'The table', schema: criteriaSetSchema }, ...errors },
-    handler: ({ params, criteria, services }) => services.criteria.get(params.setId, criteria!.access),
+    handler: ({ params, criteria, services }) => services.criteria.get(params.setId, criteria.access),
   }),
   defineRoute({
     method: 'put',
@@ -99,7 +99,7 @@ export const criteriaRoutes = [
       ...conflict,
     },
     handler: ({ params, user, body, criteria, services }) =>
-      services.criteria.updateMeta(params.setId, user!.id, body.revision, body.changes, criteria!.access),
+      services.criteria.updateMeta(params.setId, user.id, body.revision, body.changes, criteria.access),
   }),
   defineRoute({
     method: 'delete',
@@ -114,7 +114,7 @@ export const criteriaRoutes = [
       409: { description: 'Used by a stored check run, or a newer version exists', schema: apiErrorSchema },
     },
     handler: async ({ params, user, services }) => {
-      await services.criteria.remove(params.setId, user!.id);
+      await services.criteria.remove(params.setId, user.id);
       return undefined;
     },
   }),
@@ -134,7 +134,7 @@ export const criteriaRoutes = [
       ...conflict,
     },
     handler: ({ params, user, body, criteria, services }) =>
-      services.criteria.replaceRows(params.setId, user!.id, body.revision, body.rows, criteria!.access),
+      services.criteria.replaceRows(params.setId, user.id, body.revision, body.rows, criteria.access),
   }),
   defineRoute({
     method: 'post',
@@ -158,10 +158,10 @@ export const criteriaRoutes = [
     handler: ({ params, query, user, body, criteria, services }) =>
       services.criteria.importCsv(
         params.setId,
-        user!.id,
+        user.id,
         typeof body === 'string' ? body : body.csv,
         query.revision,
-        criteria!.access,
+        criteria.access,
       ),
   }),
   defineRoute({
@@ -212,7 +212,7 @@ export const criteriaRoutes = [
     params: uuidParam,
     responses: { 200: { description: 'Code tables', schema: criteriaSetListSchema }, ...errors },
     handler: async ({ project, user, services }) => ({
-      criteriaSets: await services.criteria.forProject(project!.id, user!.id),
+      criteriaSets: await services.criteria.forProject(project.id, user.id),
     }),
   }),
 ];

@@ -47,7 +47,7 @@ export const firmMemberRoutes = [
       409: { description: 'Already in the firm', schema: apiErrorSchema },
       422: { description: 'No account uses this address', schema: apiErrorSchema },
     },
-    handler: ({ params, body, user, services }) => services.firmMembers.add(params.orgId, user!, body),
+    handler: ({ params, body, user, services }) => services.firmMembers.add(params.orgId, user, body),
   }),
   defineRoute({
     method: 'put',
@@ -64,7 +64,7 @@ export const firmMemberRoutes = [
       409: { description: 'Would leave the firm without an administrator', schema: apiErrorSchema },
     },
     handler: ({ params, body, user, services }) =>
-      services.firmMembers.setRole(params.orgId, params.userId, body.role, user!.id),
+      services.firmMembers.setRole(params.orgId, params.userId, body.role, user.id),
   }),
   defineRoute({
     method: 'delete',
@@ -79,7 +79,7 @@ export const firmMemberRoutes = [
       409: { description: 'The firm’s last administrator', schema: apiErrorSchema },
     },
     handler: async ({ params, user, services }) => {
-      await services.firmMembers.remove(params.orgId, params.userId, user!.id);
+      await services.firmMembers.remove(params.orgId, params.userId, user.id);
       return undefined;
     },
   }),

@@ -159,7 +159,7 @@ export const libraryRoutes = [
     },
     responses: { 201: { description: 'The entry', schema: attachmentProductSchema }, ...errors },
     handler: ({ params, body, user, services }) =>
-      services.library.addAttachmentProduct(params.orgId, user!.id, body),
+      services.library.addAttachmentProduct(params.orgId, user.id, body),
   }),
   defineRoute({
     method: 'post',

@@ -13,7 +13,7 @@ export const meRoutes = [
     tag: 'Account',
     access: { kind: 'user' },
     responses: { 200: { description: 'The signed-in user', schema: meSchema }, ...unauth },
-    handler: ({ user, services }) => services.me.me(user!.id),
+    handler: ({ user, services }) => services.me.me(user.id),
   }),
   defineRoute({
     method: 'get',
@@ -36,7 +36,7 @@ export const meRoutes = [
     access: { kind: 'user' },
     body: preferencesSchema,
     responses: { 200: { description: 'Updated user', schema: meSchema }, ...unauth },
-    handler: ({ user, body, services }) => services.me.setUnitSystem(user!.id, body.unitSystem),
+    handler: ({ user, body, services }) => services.me.setUnitSystem(user.id, body.unitSystem),
   }),
   defineRoute({
     method: 'post',
@@ -46,7 +46,7 @@ export const meRoutes = [
     access: { kind: 'user' },
     body: z.object({ name: z.string().trim().min(2).max(200) }),
     responses: { 201: { description: 'Updated user with the new firm', schema: meSchema }, ...unauth },
-    handler: ({ user, body, services }) => services.me.createOrganisation(user!.id, body.name),
+    handler: ({ user, body, services }) => services.me.createOrganisation(user.id, body.name),
   }),
   defineRoute({
     method: 'get',

@@ -38,9 +38,9 @@ export const memberRoutes = [
       ...errors,
     },
     handler: async ({ project, services }) => {
-      const { members, invitations } = await services.members.list(project!.id);
+      const { members, invitations } = await services.members.list(project.id);
       // Pending invitations (addresses of people not yet on the project) only for those who may invite.
-      return { members, invitations: can(project!.role, 'members.invite') ? invitations : [] };
+      return { members, invitations: can(project.role, 'members.invite') ? invitations : [] };
     },
   }),
   defineRoute({
@@ -61,7 +61,7 @@ export const memberRoutes = [
       409: { description: 'Already a member, or the project is archived', schema: apiErrorSchema },
     },
     handler: ({ user, project, body, services }) =>
-      services.members.invite(project!.id, { ...user!, role: project!.role }, body),
+      services.members.invite(project.id, { ...user, role: project.role }, body),
   }),
   defineRoute({
     method: 'put',
@@ -78,9 +78,9 @@ export const memberRoutes = [
       409: { description: 'Would leave the project without an owner', schema: apiErrorSchema },
     },
     handler: ({ user, project, params, body, services }) =>
-      services.members.setRole(project!.id, params.memberId, body.role, {
-        id: user!.id,
-        role: project!.role,
+      services.members.setRole(project.id, params.memberId, body.role, {
+        id: user.id,
+        role: project.role,
       }),
   }),
   defineRoute({
@@ -97,7 +97,7 @@ export const memberRoutes = [
       409: { description: 'Last owner', schema: apiErrorSchema },
     },
     handler: async ({ user, project, params, services }) => {
-      await services.members.remove(project!.id, params.memberId, { id: user!.id, role: project!.role });
+      await services.members.remove(project.id, params.memberId, { id: user.id, role: project.role });
       return undefined;
     },
   }),
@@ -136,6 +136,6 @@ export const memberRoutes = [
       },
       410: { description: 'Expired', schema: apiErrorSchema },
     },
-    handler: ({ user, params, services }) => services.members.accept(params.token, user!),
+    handler: ({ user, params, services }) => services.members.accept(params.token, user),
   }),
 ];

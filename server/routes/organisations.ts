@@ -40,6 +40,6 @@ export const organisationAdminRoutes = [
       404: { description: 'No such firm', schema: apiErrorSchema },
     },
     handler: ({ params, body, user, services }) =>
-      services.organisations.setVerified(params.orgId, user!.id, body.verified),
+      services.organisations.setVerified(params.orgId, user.id, body.verified),
   }),
 ];

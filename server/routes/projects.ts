@@ -47,7 +47,7 @@ export const projectRoutes = [
       401: errors[401],
     },
     handler: async ({ user, query, services }) => ({
-      projects: await services.projects.list(user!.id, query.archived === 'true'),
+      projects: await services.projects.list(user.id, query.archived === 'true'),
     }),
   }),
   defineRoute({
@@ -64,7 +64,7 @@ export const projectRoutes = [
       401: errors[401],
       422: { description: 'The caller has no firm', schema: apiErrorSchema },
     },
-    handler: ({ user, body, services }) => services.projects.create(user!.id, body),
+    handler: ({ user, body, services }) => services.projects.create(user.id, body),
   }),
   defineRoute({
     method: 'get',
@@ -75,7 +75,7 @@ export const projectRoutes = [
     params: uuidParam,
     responses: { 200: { description: 'The project', schema: projectSchema }, ...errors },
     // The access check has read the project with the caller's role.
-    handler: async ({ project }) => project!.record,
+    handler: async ({ project }) => project.record,
   }),
   defineRoute({
     method: 'put',
@@ -98,7 +98,7 @@ export const projectRoutes = [
       },
     },
     handler: ({ user, project, body, services }) =>
-      services.projects.update(project!.id, user!.id, body.version, { part: 'site', changes: body.changes }),
+      services.projects.update(project.id, user.id, body.version, { part: 'site', changes: body.changes }),
   }),
   defineRoute({
     method: 'put',
@@ -130,7 +130,7 @@ export const projectRoutes = [
       },
     },
     handler: ({ user, project, body, services }) =>
-      services.projects.update(project!.id, user!.id, body.version, {
+      services.projects.update(project.id, user.id, body.version, {
         part: 'wind',
         changes: { wind: body.wind },
       }),
@@ -163,7 +163,7 @@ export const projectRoutes = [
       },
     },
     handler: ({ user, project, body, services }) =>
-      services.projects.update(project!.id, user!.id, body.version, {
+      services.projects.update(project.id, user.id, body.version, {
         part: 'climate',
         changes: { climate: body.climate },
       }),
@@ -184,7 +184,7 @@ export const projectRoutes = [
       ...errors,
       409: { description: 'The project is archived', schema: apiErrorSchema },
     },
-    handler: ({ user, project, body, services }) => services.projects.duplicate(project!.id, user!.id, body),
+    handler: ({ user, project, body, services }) => services.projects.duplicate(project.id, user.id, body),
   }),
   defineRoute({
     method: 'post',
@@ -194,7 +194,7 @@ export const projectRoutes = [
     access: { kind: 'project', action: 'project.archive', whenArchived: 'allow' },
     params: uuidParam,
     responses: { 200: { description: 'The archived project', schema: projectSchema }, ...errors },
-    handler: ({ user, project, services }) => services.projects.setArchived(project!.id, user!.id, true),
+    handler: ({ user, project, services }) => services.projects.setArchived(project.id, user.id, true),
   }),
   defineRoute({
     method: 'post',
@@ -204,7 +204,7 @@ export const projectRoutes = [
     access: { kind: 'project', action: 'project.archive', whenArchived: 'allow' },
     params: uuidParam,
     responses: { 200: { description: 'The project', schema: projectSchema }, ...errors },
-    handler: ({ user, project, services }) => services.projects.setArchived(project!.id, user!.id, false),
+    handler: ({ user, project, services }) => services.projects.setArchived(project.id, user.id, false),
   }),
   defineRoute({
     method: 'get',
@@ -220,6 +220,6 @@ export const projectRoutes = [
       },
       ...errors,
     },
-    handler: async ({ project, services }) => ({ entries: await services.audit.forProject(project!.id) }),
+    handler: async ({ project, services }) => ({ entries: await services.audit.forProject(project.id) }),
   }),
 ];

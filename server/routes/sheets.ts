@@ -34,7 +34,7 @@ export const sheetRoutes = [
       404: { description: 'No such run, or you are not a member of its project', schema: apiErrorSchema },
     },
     handler: async ({ params, query, user, res, services }) => {
-      const { pdf, filename, code } = await services.sheets.render(params.runId, user!.id, query.units);
+      const { pdf, filename, code } = await services.sheets.render(params.runId, user.id, query.units);
       res
         .status(200)
         .type('application/pdf')

@@ -43,7 +43,7 @@ const viaSubmittal = {
 };
 const submittalParams = z.object({ submittalId: z.uuid() });
 const itemParams = submittalParams.extend({ submittalItemId: z.uuid() });
-const actor = (u: { id: string; name: string } | null) => ({ id: u!.id, name: u!.name });
+const actor = (u: { id: string; name: string }) => ({ id: u.id, name: u.name });
 
 const exampleFields = {
   title: 'Insulated metal wall panels — product data and compliance sheet',
@@ -65,7 +65,7 @@ export const submittalRoutes = [
     query: submittalListQuerySchema,
     responses: { 200: { description: 'Submittals', schema: submittalListSchema }, ...errors },
     handler: async ({ project, query, services }) => ({
-      submittals: await services.submittals.list(project!.id, query.status),
+      submittals: await services.submittals.list(project.id, query.status),
     }),
   }),
   defineRoute({
@@ -86,8 +86,7 @@ export const submittalRoutes = [
         schema: apiErrorSchema,
       },
     },
-    handler: ({ project, user, body, services }) =>
-      services.submittals.create(project!.id, actor(user), body),
+    handler: ({ project, user, body, services }) => services.submittals.create(project.id, actor(user), body),
   }),
   defineRoute({
     method: 'get',

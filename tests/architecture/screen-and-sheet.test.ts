@@ -1,4 +1,5 @@
 import { createRequire } from 'node:module';
+import type { WindScheduleResult } from '@shared/calc/wind/schema';
 import { runChecks } from '@shared/checks/runner';
 import { assemblyInputSchema } from '@shared/schemas/assembly';
 import type { UnitSystem } from '@shared/units';
@@ -10,6 +11,8 @@ import { demoSheetData } from '../../server/pdf/fixtures';
 import { renderComplianceSheet } from '../../server/pdf/sheet';
 import type { SheetData } from '../../server/pdf/sheet-data';
 import { CheckReportView } from '../../src/features/checks/components/CheckReportView';
+import { VelocityBlock } from '../../src/features/wind/components/VelocityBlock';
+import { UnitSystemProvider } from '../../src/lib/unit-system';
 import { readPdf } from '../setup/pdf';
 
 /*
@@ -109,11 +112,26 @@ describe('the checks page and the compliance sheet print the same figures', () =
     holds(sheet, 'Not run — missing: the project’s monthly climate.');
   });
 
-  it('prints wind pressures in kPa (SI) and psf (IP) on the sheet, as the wind sheet shows them', async () => {
-    const si = await sheetText(demoSheetData('SI'));
-    const ip = await sheetText(demoSheetData('IP'));
-    expect(si).toMatch(/q_h \d+\.\d{1,3} kPa/);
-    expect(ip).toMatch(/q_h \d+(\.\d)? psf/);
-    expect(si).not.toMatch(/\d Pa\b/);
-  });
+  it.each(['SI', 'IP'] as const)(
+    'prints q_h and the end-zone width as the attachment sheet shows them (%s)',
+    async (system) => {
+      const data = demoSheetData(system);
+      const wind = data.run.outputs.modules.find((m) => m.id === 'wind')!.result as WindScheduleResult;
+      const html = renderToStaticMarkup(
+        createElement(UnitSystemProvider, {
+          value: system,
+          // biome-ignore lint/correctness/noChildrenProp: no JSX in a .ts test; the provider's props name its children
+          children: createElement(VelocityBlock, { result: wind }),
+        }),
+      );
+      const cells = [...new JSDOM(html).window.document.querySelectorAll('dd.num')];
+      const qh = flat(cells.find((c) => /Pa|psf/.test(c.textContent ?? ''))!.firstChild!.textContent ?? '');
+      const a = flat(cells.at(-2)!.textContent ?? '');
+      expect(qh).toMatch(system === 'SI' ? /^\d+\.\d{1,3} kPa$/ : /^\d+(\.\d)? psf$/);
+      const sheet = await sheetText(data);
+      holds(sheet, `q_h ${qh}`);
+      holds(sheet, `end-zone width a = ${a}`);
+      expect(sheet).not.toMatch(/\d Pa\b/);
+    },
+  );
 });

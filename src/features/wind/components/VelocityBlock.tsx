@@ -1,7 +1,7 @@
 import type { WindScheduleResult } from '@shared/calc/wind/schema';
+import { formatterFor } from '@shared/format';
 import type { ReactNode } from 'react';
 import { useUnitSystem } from '../../../lib/unit-system';
-import { formatWind } from '../units';
 import { Sym } from './Sym';
 
 function Cell({ label, children, note }: { label: ReactNode; children: ReactNode; note?: ReactNode }) {
@@ -14,7 +14,10 @@ function Cell({ label, children, note }: { label: ReactNode; children: ReactNode
   );
 }
 
-/** The velocity pressure and its factors, q_h in psf and in Pa whatever the person's units. */
+/**
+ * The velocity pressure and its factors; q_h in the person's units and, beneath, the other system's (kPa / psf,
+ * worded by shared/format as the compliance sheet prints it).
+ */
 export function VelocityBlock({ result }: { result: WindScheduleResult }) {
   const system = useUnitSystem();
   const v = result.velocity;
@@ -54,8 +57,8 @@ export function VelocityBlock({ result }: { result: WindScheduleResult }) {
           {v.Ke.toFixed(3)}
         </Cell>
         <Cell label={<Sym s="q_h" />} note={kdInQ ? 'includes K_d' : 'excludes K_d'}>
-          {v.qhPsf.toFixed(2)}&#8239;psf
-          <span className="block text-sm">{v.qh.toFixed(0)}&#8239;Pa</span>
+          {formatterFor(system).pressure(v.qh)}
+          <span className="block text-sm">{formatterFor(system === 'SI' ? 'IP' : 'SI').pressure(v.qh)}</span>
         </Cell>
         <Cell
           label={
@@ -65,7 +68,7 @@ export function VelocityBlock({ result }: { result: WindScheduleResult }) {
           }
           note={result.lowRise ? 'h ≤ 60 ft' : 'h > 60 ft'}
         >
-          {formatWind(result.edgeWidth, 'length', system)}
+          {formatterFor(system).length(result.edgeWidth)}
         </Cell>
         <Cell
           label={

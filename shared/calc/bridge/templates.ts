@@ -1,0 +1,208 @@
+import { z } from 'zod';
+import { CalcInputError } from '../errors';
+import { EDGE_TOLERANCE } from './grid';
+import { type BridgeBox, type BridgeModelInput, bridgeMeshSchema, MIN_EDGE, MIN_LAMBDA } from './schema';
+
+/*
+ * Parametric details built from an assembly's own layers (outside → inside): a continuous girt through some
+ * of them (2-D → ψ per metre) and an intermittent clip through them (3-D → χ per clip). Each gives a bridge
+ * model whose reference is the same wall without the metal, U = 1 / (Rse + Σ d/λ + Rsi) (ISO 6946:2017 eq. 7).
+ */
+
+const name = z.string().trim().min(1).max(120, 'at most 120 characters');
+const size = (what: string) => z.number().min(MIN_EDGE).max(5).describe(`${what}, m`);
+
+export const templateLayerSchema = z.object({
+  name,
+  thickness: size('Thickness d'),
+  lambda: z.number().min(MIN_LAMBDA).max(5000).describe('λ, W/(m·K)'),
+});
+
+const wallSchema = z.object({
+  layers: z.array(templateLayerSchema).min(1).max(40).describe('Layers, outside → inside'),
+  crosses: z
+    .object({ from: z.number().int().min(0).max(39), to: z.number().int().min(0).max(39) })
+    .describe('The metal passes through layers from … to (indices, inclusive)'),
+  metalLambda: z.number().min(1).max(500).default(50).describe('λ of the metal, W/(m·K) (steel 50)'),
+  rsi: z.number().min(0).max(1).default(0.13),
+  rse: z.number().min(0).max(1).default(0.04),
+  mesh: bridgeMeshSchema.partial().default({}),
+});
+
+export const girtTemplateSchema = wallSchema.extend({
+  profile: z.enum(['z', 'c']).describe('Z: flanges to opposite sides; C: both to the same side'),
+  spacing: size('Girt spacing'),
+  thickness: z.number().min(0.0003).max(0.01).describe('Steel thickness, m'),
+  outerFlange: size('Outer flange width'),
+  innerFlange: size('Inner flange width'),
+});
+
+export const clipTemplateSchema = wallSchema.extend({
+  spacingX: size('Clip spacing along the girt'),
+  spacingZ: size('Clip spacing across the girts'),
+  width: size('Clip width'),
+  thickness: z.number().min(0.0005).max(0.02).describe('Clip plate thickness, m'),
+  pad: z
+    .object({ thickness: size('Thermal break pad thickness'), lambda: z.number().min(MIN_LAMBDA).max(50) })
+    .optional()
+    .describe('Thermal break between the clip and the layer behind it'),
+});
+
+export type GirtTemplate = z.input<typeof girtTemplateSchema>;
+export type ClipTemplate = z.input<typeof clipTemplateSchema>;
+
+type Box = { name: string; lambda: number; min: number[]; max: number[] };
+
+/**
+ * The parts of `box` outside every hole: the box cut along every hole edge inside it, keeping the pieces
+ * whose centre lies in no hole (so that boxes of different λ never overlap).
+ */
+export function carve(box: Box, holes: { min: number[]; max: number[] }[]): Box[] {
+  const axes = box.min.map((lo, a) => {
+    const cuts = new Set([lo, box.max[a]!]);
+    for (const h of holes)
+      for (const v of [h.min[a]!, h.max[a]!])
+        if (v > lo + EDGE_TOLERANCE && v < box.max[a]! - EDGE_TOLERANCE) cuts.add(v);
+    return [...cuts].sort((x, y) => x - y);
+  });
+  let pieces: { min: number[]; max: number[] }[] = [{ min: [], max: [] }];
+  for (const cuts of axes)
+    pieces = pieces.flatMap((p) =>
+      cuts.slice(1).map((hi, i) => ({ min: [...p.min, cuts[i]!], max: [...p.max, hi] })),
+    );
+  const inside = (c: number[], h: { min: number[]; max: number[] }) =>
+    c.every((v, a) => v > h.min[a]! && v < h.max[a]!);
+  return pieces
+    .filter(
+      (p) =>
+        !holes.some((h) =>
+          inside(
+            p.min.map((v, a) => (v + p.max[a]!) / 2),
+            h,
+          ),
+        ),
+    )
+    .map((p) => ({ ...box, ...p }));
+}
+
+/** Depth positions of the layers: y of each layer's outside face, and the total. */
+function stackOf(input: z.infer<typeof wallSchema>) {
+  const { layers, crosses } = input;
+  if (crosses.to >= layers.length)
+    throw new CalcInputError(
+      'crosses.to',
+      `there are ${layers.length} layers (indices 0–${layers.length - 1})`,
+    );
+  if (crosses.from > crosses.to) throw new CalcInputError('crosses.from', 'must not come after crosses.to');
+  const y: number[] = [0];
+  for (const l of layers) y.push(y[y.length - 1]! + l.thickness);
+  return { y, y0: y[crosses.from]!, y1: y[crosses.to + 1]!, depth: y[layers.length]! };
+}
+
+/** U of the wall without the metal: 1 / (Rse + Σ d/λ + Rsi) (ISO 6946:2017 eq. 7). */
+const clearU = (input: z.infer<typeof wallSchema>) =>
+  1 / (input.rse + input.layers.reduce((s, l) => s + l.thickness / l.lambda, 0) + input.rsi);
+
+const refuseAbove = (value: number, max: number, field: string, what: string) => {
+  if (value > max - EDGE_TOLERANCE)
+    throw new CalcInputError(field, `${what} (${value} m) must be less than ${max} m`);
+};
+
+/**
+ * A continuous Z or C girt at mid-span of a 2-D strip one spacing wide (its edges half-way to the next girts:
+ * symmetry planes, ISO 10211:2017 §5.2.2) → ψ of the girt, W/(m·K), against the clear wall.
+ */
+export function girtModel(raw: GirtTemplate): BridgeModelInput {
+  const input = girtTemplateSchema.parse(raw);
+  const { y, y0, y1, depth } = stackOf(input);
+  const { spacing: s, thickness: t, outerFlange: bo, innerFlange: bi } = input;
+  refuseAbove(2 * t, y1 - y0, 'thickness', 'twice the steel thickness');
+  refuseAbove(bo, s / 2, 'outerFlange', 'the outer flange');
+  refuseAbove(bi, s / 2, 'innerFlange', 'the inner flange');
+  const x = s / 2;
+  const innerFrom = input.profile === 'z' ? x + t - bi : x;
+  const steel: Box[] = [
+    { name: 'girt, outer flange', lambda: input.metalLambda, min: [x, y0], max: [x + bo, y0 + t] },
+    { name: 'girt, web', lambda: input.metalLambda, min: [x, y0 + t], max: [x + t, y1 - t] },
+    {
+      name: 'girt, inner flange',
+      lambda: input.metalLambda,
+      min: [innerFrom, y1 - t],
+      max: [innerFrom + bi, y1],
+    },
+  ];
+  const layers = input.layers.flatMap((l, i) =>
+    carve({ name: l.name, lambda: l.lambda, min: [0, y[i]!], max: [s, y[i + 1]!] }, steel),
+  );
+  return {
+    dimension: '2d',
+    boxes: [...steel, ...layers] as BridgeBox[],
+    boundaries: [
+      { name: 'outside', side: 'outside', temperature: 0, resistance: input.rse, min: [0, 0], max: [s, 0] },
+      {
+        name: 'inside',
+        side: 'inside',
+        temperature: 20,
+        resistance: input.rsi,
+        min: [0, depth],
+        max: [s, depth],
+      },
+    ],
+    reference: { elements: [{ name: 'wall without the girt', u: clearU(input), size: s }] },
+    mesh: input.mesh,
+  };
+}
+
+/**
+ * One clip in a 3-D cell of the clip grid (spacingX × spacingZ, its faces half-way to the next clips:
+ * symmetry planes): a plate `width` wide and `thickness` thick through the crossed layers, with an optional
+ * thermal break pad at its inside end → χ per clip, W/K, against the clear wall.
+ */
+export function clipModel(raw: ClipTemplate): BridgeModelInput {
+  const input = clipTemplateSchema.parse(raw);
+  const { y, y0, y1, depth } = stackOf(input);
+  const { spacingX: sx, spacingZ: sz, width: w, thickness: t, pad } = input;
+  refuseAbove(w, sx, 'width', 'the clip width');
+  refuseAbove(t, sz, 'thickness', 'the clip thickness');
+  if (pad)
+    refuseAbove(pad.thickness, y1 - y0, 'pad.thickness', 'the pad, longer than the layers the clip crosses,');
+  const [xa, za] = [(sx - w) / 2, (sz - t) / 2];
+  const plateEnd = pad ? y1 - pad.thickness : y1;
+  const parts: Box[] = [
+    { name: 'clip', lambda: input.metalLambda, min: [xa, y0, za], max: [xa + w, plateEnd, za + t] },
+  ];
+  if (pad)
+    parts.push({
+      name: 'thermal break pad',
+      lambda: pad.lambda,
+      min: [xa, plateEnd, za],
+      max: [xa + w, y1, za + t],
+    });
+  const layers = input.layers.flatMap((l, i) =>
+    carve({ name: l.name, lambda: l.lambda, min: [0, y[i]!, 0], max: [sx, y[i + 1]!, sz] }, parts),
+  );
+  return {
+    dimension: '3d',
+    boxes: [...parts, ...layers] as BridgeBox[],
+    boundaries: [
+      {
+        name: 'outside',
+        side: 'outside',
+        temperature: 0,
+        resistance: input.rse,
+        min: [0, 0, 0],
+        max: [sx, 0, sz],
+      },
+      {
+        name: 'inside',
+        side: 'inside',
+        temperature: 20,
+        resistance: input.rsi,
+        min: [0, depth, 0],
+        max: [sx, depth, sz],
+      },
+    ],
+    reference: { elements: [{ name: 'wall without the clip', u: clearU(input), size: sx * sz }], lines: [] },
+    mesh: input.mesh,
+  };
+}

@@ -88,7 +88,7 @@ export function statelessPath(
       } catch {
         return fail(invalidJson());
       }
-      const refusal = bodyRefusal(body) ?? originRefusal(req, opts.trusted);
+      const refusal = bodyRefusal(body, text) ?? originRefusal(req, opts.trusted);
       if (refusal) return fail(refusal);
       const query = mark < 0 ? {} : parseQuery(url.slice(mark + 1));
       const ctx = { req: req as Request, res: res as Response, params: {}, services: opts.services };

@@ -20,6 +20,7 @@ const stable = (headers: Record<string, string>) =>
 describe('lean path for stateless routes', () => {
   it('covers the calculations, and only public POST routes without path parameters may be stateless', () => {
     expect(statelessRoutes.map((r) => r.path).sort()).toEqual([
+      '/v1/calc/bridge',
       '/v1/calc/joints',
       '/v1/calc/moisture',
       '/v1/calc/takeoff',

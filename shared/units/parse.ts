@@ -30,7 +30,6 @@ export type Refusal = 'not_a_number' | 'bad_number' | 'unknown_unit' | 'wrong_ki
 
 /** Named dimensions for the reasons, each by one unit of it (first match wins). */
 const DIMENSIONS: [string, string][] = [
-  ['a plain number', ''],
   ['a length', 'm'],
   ['an area', 'm^2'],
   ['a volume', 'm^3'],
@@ -51,18 +50,15 @@ const DIMENSIONS: [string, string][] = [
   ['a vapour permeance', 'kg/(Pa s m^2)'],
 ];
 
-function dimensionName(u: Unit | null): string {
-  for (const [name, ref] of DIMENSIONS) {
-    if (u === null ? ref === '' : ref !== '' && u.equalBase(math.unit(1, ref))) return name;
-  }
-  return 'another kind of quantity';
+function dimensionName(u: Unit): string {
+  return DIMENSIONS.find(([, ref]) => u.equalBase(math.unit(1, ref)))?.[0] ?? 'another kind of quantity';
 }
 
 /**
  * A unit as people write it → mathjs's spelling: "h·ft²·°F/Btu" → "h ft^2 degF/BTU", "W/mK" → "W/(m K)",
  * ″ → in, ′ → ft, °F/℉/F → degF, "US gal" → gal. Boxes' own symbols go through the same door.
  */
-export function unitSpelling(text: string): string {
+function unitSpelling(text: string): string {
   let t = text
     .trim()
     .replace(/[·⋅*×]/g, ' ')

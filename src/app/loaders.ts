@@ -57,6 +57,17 @@ export function createLoaders(queryClient: QueryClient) {
     if (!uuidParam.safeParse({ id: value }).success) throw data(`No such ${what}.`, { status: 404 });
     return value as string;
   };
+  /**
+   * The loaders of pages for a signed-in person: they run beside the session check, so they ask for nothing
+   * while no one is signed in (the session loader sends the person to sign in).
+   */
+  const signedIn = <K extends string>(loaders: Record<K, Loader>) =>
+    Object.fromEntries(
+      Object.entries<Loader>(loaders).map(([name, loader]) => [
+        name,
+        (async (args) => ((await me()) ? loader(args) : null)) satisfies Loader,
+      ]),
+    ) as Record<K, Loader>;
   /** The site administrators' pages: anyone else is not allowed. */
   const siteAdmin = async () => {
     if ((await me())?.siteRole !== 'admin')
@@ -79,119 +90,126 @@ export function createLoaders(queryClient: QueryClient) {
     }) satisfies Loader,
     /** Pages that read who is signed in (sign-in and sign-up send a signed-in person on). */
     me: (() => warm(meQueryOptions())) satisfies Loader,
-    adminMail: (async () => {
-      await siteAdmin();
-      return warm(mailQueryOptions());
-    }) satisfies Loader,
-    adminOrganisations: (async () => {
-      await siteAdmin();
-      return warm(organisationsQueryOptions());
-    }) satisfies Loader,
     invite: (({ params }) =>
       warm(meQueryOptions(), invitationQueryOptions(params.token ?? ''))) satisfies Loader,
     verify: (({ params }) => {
       const code = params.code ?? '';
       return warm(verificationQueryOptions(normaliseVerificationCode(code) ?? code));
     }) satisfies Loader,
-    projects: (({ request }) =>
-      warm(projectsQueryOptions({ archived: search(request).get('archived') === 'true' }))) satisfies Loader,
+    ...signedIn({
+      adminMail: (async () => {
+        await siteAdmin();
+        return warm(mailQueryOptions());
+      }) satisfies Loader,
+      adminOrganisations: (async () => {
+        await siteAdmin();
+        return warm(organisationsQueryOptions());
+      }) satisfies Loader,
+      projects: (({ request }) =>
+        warm(
+          projectsQueryOptions({ archived: search(request).get('archived') === 'true' }),
+        )) satisfies Loader,
 
-    /** The frame of a project: the project itself. */
-    project: (async ({ params }) => {
-      await need(projectQueryOptions(idOf(params.id, 'project')));
-      return null;
-    }) satisfies Loader,
-    assemblies: (({ params }) =>
-      warm(
-        assembliesQueryOptions(params.id ?? ''),
-        projectsQueryOptions({ archived: false }),
-      )) satisfies Loader,
-    newAssembly: (({ params }) => builderLibrary(params.id ?? '')) satisfies Loader,
-    compare: (({ params }) => warm(assembliesQueryOptions(params.id ?? ''))) satisfies Loader,
-    submittals: (({ params, request }) =>
-      warm(submittalsQueryOptions(params.id ?? '', submittalStatusOf(search(request))))) satisfies Loader,
-    newSubmittal: (({ params }) => warm(membersQueryOptions(params.id ?? ''))) satisfies Loader,
-    submittal: (({ params }) =>
-      warm(
-        submittalQueryOptions(idOf(params.submittalId, 'submittal')),
-        membersQueryOptions(params.id ?? ''),
-      )) satisfies Loader,
-    checkRunSheet: (({ params }) =>
-      warm(checkRunQueryOptions(idOf(params.runId, 'check run')))) satisfies Loader,
-    members: (({ params }) => warm(membersQueryOptions(params.id ?? ''))) satisfies Loader,
-    activity: (({ params }) => warm(auditQueryOptions(params.id ?? ''))) satisfies Loader,
+      /** The frame of a project: the project itself. */
+      project: (async ({ params }) => {
+        await need(projectQueryOptions(idOf(params.id, 'project')));
+        return null;
+      }) satisfies Loader,
+      assemblies: (({ params }) =>
+        warm(
+          assembliesQueryOptions(params.id ?? ''),
+          projectsQueryOptions({ archived: false }),
+        )) satisfies Loader,
+      newAssembly: (({ params }) => builderLibrary(params.id ?? '')) satisfies Loader,
+      compare: (({ params }) => warm(assembliesQueryOptions(params.id ?? ''))) satisfies Loader,
+      submittals: (({ params, request }) =>
+        warm(submittalsQueryOptions(params.id ?? '', submittalStatusOf(search(request))))) satisfies Loader,
+      newSubmittal: (({ params }) => warm(membersQueryOptions(params.id ?? ''))) satisfies Loader,
+      submittal: (({ params }) =>
+        warm(
+          submittalQueryOptions(idOf(params.submittalId, 'submittal')),
+          membersQueryOptions(params.id ?? ''),
+        )) satisfies Loader,
+      checkRunSheet: (({ params }) =>
+        warm(checkRunQueryOptions(idOf(params.runId, 'check run')))) satisfies Loader,
+      members: (({ params }) => warm(membersQueryOptions(params.id ?? ''))) satisfies Loader,
+      activity: (({ params }) => warm(auditQueryOptions(params.id ?? ''))) satisfies Loader,
 
-    /** The frame of an assembly: it and its project; an assembly of another project is not found here. */
-    assembly: (async ({ params }) => {
-      const [project, assembly] = await Promise.all([
-        need(projectQueryOptions(idOf(params.id, 'project'))),
-        need(assemblyQueryOptions(idOf(params.assemblyId, 'assembly'))),
-      ]);
-      if (assembly.projectId !== project.id) throw data('No such assembly in this project.', { status: 404 });
-      return null;
-    }) satisfies Loader,
-    builder: (async ({ params }) => {
-      await Promise.all([
-        builderLibrary(params.id ?? ''),
-        warm(revisionsQueryOptions(params.assemblyId ?? ''), projectsQueryOptions({ archived: false })),
-      ]);
-      return null;
-    }) satisfies Loader,
-    attachment: (async ({ params }) => {
-      const firm = firmOf(await me(), (await need(projectQueryOptions(params.id ?? ''))).organisationId);
-      return firm ? warm(attachmentProductsQueryOptions(firm.id)) : null;
-    }) satisfies Loader,
-    checks: (async ({ params, request }) => {
-      const projectId = params.id ?? '';
-      const assemblyId = params.assemblyId ?? '';
-      const runs = queryClient.ensureQueryData(checkRunsQueryOptions(projectId, assemblyId)).catch(() => []);
-      await warm(projectCriteriaSetsQueryOptions(projectId));
-      const shown = search(request).get('run') ?? (await runs)[0]?.id;
-      return shown ? warm(checkRunQueryOptions(shown)) : null;
-    }) satisfies Loader,
-    revision: (async ({ params }) => {
-      const n = revisionOf(params.revision);
-      await Promise.all([
-        builderLibrary(params.id ?? ''),
-        warm(revisionsQueryOptions(params.assemblyId ?? '')),
-        n === null ? null : warm(revisionQueryOptions(params.assemblyId ?? '', n)),
-      ]);
-      return null;
-    }) satisfies Loader,
+      /** The frame of an assembly: it and its project; an assembly of another project is not found here. */
+      assembly: (async ({ params }) => {
+        const [project, assembly] = await Promise.all([
+          need(projectQueryOptions(idOf(params.id, 'project'))),
+          need(assemblyQueryOptions(idOf(params.assemblyId, 'assembly'))),
+        ]);
+        if (assembly.projectId !== project.id)
+          throw data('No such assembly in this project.', { status: 404 });
+        return null;
+      }) satisfies Loader,
+      builder: (async ({ params }) => {
+        await Promise.all([
+          builderLibrary(params.id ?? ''),
+          warm(revisionsQueryOptions(params.assemblyId ?? ''), projectsQueryOptions({ archived: false })),
+        ]);
+        return null;
+      }) satisfies Loader,
+      attachment: (async ({ params }) => {
+        const firm = firmOf(await me(), (await need(projectQueryOptions(params.id ?? ''))).organisationId);
+        return firm ? warm(attachmentProductsQueryOptions(firm.id)) : null;
+      }) satisfies Loader,
+      checks: (async ({ params, request }) => {
+        const projectId = params.id ?? '';
+        const assemblyId = params.assemblyId ?? '';
+        const runs = queryClient
+          .ensureQueryData(checkRunsQueryOptions(projectId, assemblyId))
+          .catch(() => []);
+        await warm(projectCriteriaSetsQueryOptions(projectId));
+        const shown = search(request).get('run') ?? (await runs)[0]?.id;
+        return shown ? warm(checkRunQueryOptions(shown)) : null;
+      }) satisfies Loader,
+      revision: (async ({ params }) => {
+        const n = revisionOf(params.revision);
+        await Promise.all([
+          builderLibrary(params.id ?? ''),
+          warm(revisionsQueryOptions(params.assemblyId ?? '')),
+          n === null ? null : warm(revisionQueryOptions(params.assemblyId ?? '', n)),
+        ]);
+        return null;
+      }) satisfies Loader,
 
-    library: (async () => {
-      const firm = firmOf(await me(), null);
-      return warm(
-        referenceMaterialsQueryOptions(),
-        ...(firm
-          ? [
-              firmMaterialsQueryOptions(firm.id),
-              bridgeValuesQueryOptions(firm.id),
-              attachmentProductsQueryOptions(firm.id),
-            ]
-          : []),
-      );
-    }) satisfies Loader,
-    codeTables: (async () => {
-      const firm = firmOf(await me(), null);
-      return firm ? warm(criteriaSetsQueryOptions(firm.id)) : null;
-    }) satisfies Loader,
-    criteriaSet: (({ params }) => {
-      const setId = idOf(params.setId, 'code table');
-      return warm(criteriaSetQueryOptions(setId), criteriaVersionsQueryOptions(setId));
-    }) satisfies Loader,
-    criteriaDiff: (({ params, request }) => {
-      const setId = idOf(params.setId, 'code table');
-      const versions = diffVersionsOf(search(request));
-      return warm(
-        criteriaSetQueryOptions(setId),
-        ...(versions ? [criteriaDiffQueryOptions(setId, versions.from, versions.to)] : []),
-      );
-    }) satisfies Loader,
-    firmMembers: (async ({ request }) => {
-      const firm = firmOf(await me(), search(request).get('org'));
-      return firm ? warm(firmMembersQueryOptions(firm.id)) : null;
-    }) satisfies Loader,
+      library: (async () => {
+        const firm = firmOf(await me(), null);
+        return warm(
+          referenceMaterialsQueryOptions(),
+          ...(firm
+            ? [
+                firmMaterialsQueryOptions(firm.id),
+                bridgeValuesQueryOptions(firm.id),
+                attachmentProductsQueryOptions(firm.id),
+              ]
+            : []),
+        );
+      }) satisfies Loader,
+      codeTables: (async () => {
+        const firm = firmOf(await me(), null);
+        return firm ? warm(criteriaSetsQueryOptions(firm.id)) : null;
+      }) satisfies Loader,
+      criteriaSet: (({ params }) => {
+        const setId = idOf(params.setId, 'code table');
+        return warm(criteriaSetQueryOptions(setId), criteriaVersionsQueryOptions(setId));
+      }) satisfies Loader,
+      criteriaDiff: (({ params, request }) => {
+        const setId = idOf(params.setId, 'code table');
+        const versions = diffVersionsOf(search(request));
+        return warm(
+          criteriaSetQueryOptions(setId),
+          ...(versions ? [criteriaDiffQueryOptions(setId, versions.from, versions.to)] : []),
+        );
+      }) satisfies Loader,
+      firmMembers: (async ({ request }) => {
+        const firm = firmOf(await me(), search(request).get('org'));
+        return firm ? warm(firmMembersQueryOptions(firm.id)) : null;
+      }) satisfies Loader,
+    }),
   };
 }
 

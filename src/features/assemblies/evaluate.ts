@@ -1,7 +1,9 @@
 import { CalcInputError } from '@shared/calc/errors';
 import { type ThermalResult, thermalInputSchema } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
+import { sentence } from '@shared/format';
 import type { UnitSystem } from '@shared/units';
+import { issueErrorMap, issuesByPath, issueWords, type ZodIssueLike } from '../../lib/issue-words';
 import { type Measure, measureUnit, toShown } from './units';
 
 /**
@@ -34,75 +36,15 @@ export const FIELD_MEASURES: Record<string, Measure> = {
   emissivityFactor: 'emittance',
 };
 
-interface Issue {
-  code?: string;
-  path?: PropertyKey[];
-  input?: unknown;
-  minimum?: number | bigint;
-  maximum?: number | bigint;
-  inclusive?: boolean;
-  origin?: string;
-  message?: string;
-  errors?: Issue[][];
-}
-
-function issueMessage(issue: Issue, key: string, system: UnitSystem): string {
+/** A bound in the person's unit of the field's measure: four significant figures, never a rounded 0. */
+function showBound(key: string, system: UnitSystem) {
   const m = FIELD_MEASURES[key];
-  // Bounds can be tiny (0.000001 m): four significant figures in the person's unit, never a rounded 0.
-  const bound = (b: number | bigint | undefined) => {
-    const si = Number(b);
+  return (si: number) => {
     if (!m) return String(si);
     const shown = Number(toShown(si, m, system).toPrecision(4));
     const unit = measureUnit(m, system);
     return unit === '–' ? String(shown) : `${shown}\u202f${unit}`;
   };
-  switch (issue.code) {
-    case 'invalid_type':
-      return typeof issue.input === 'number' || issue.input === undefined || issue.input === null
-        ? 'Enter a number.'
-        : 'Enter a value.';
-    case 'too_small':
-      if (issue.origin === 'string') return 'Enter a name.';
-      if (issue.origin === 'array') return key === 'layers' ? 'Add at least one layer.' : 'Add at least one.';
-      if (Number(issue.minimum) === 0) return issue.inclusive ? 'Must be 0 or more.' : 'Must be more than 0.';
-      return `Must be at least ${bound(issue.minimum)}.`;
-    case 'too_big':
-      if (issue.origin === 'string') return `Use at most ${String(issue.maximum)} characters.`;
-      if (issue.origin === 'array') return `At most ${String(issue.maximum)}.`;
-      return issue.inclusive
-        ? `Must be at most ${bound(issue.maximum)}.`
-        : `Must be less than ${bound(issue.maximum)}.`;
-    case 'invalid_value':
-      return 'Choose one of the listed options.';
-    default:
-      return issue.message ?? 'Not accepted.';
-  }
-}
-
-/**
- * Flatten zod issues into path → message. A union (the attachment kinds) reports every branch; keep the
- * branch whose `kind` matched and that has the fewest complaints.
- */
-function collect(
-  issues: Issue[],
-  base: PropertyKey[],
-  system: UnitSystem,
-  out: Record<string, string>,
-): void {
-  for (const issue of issues) {
-    const path = [...base, ...(issue.path ?? [])];
-    if (issue.code === 'invalid_union' && issue.errors && issue.errors.length > 0) {
-      const branches = issue.errors.filter(
-        (b) => !b.some((i) => i.path?.length === 1 && i.path[0] === 'kind') && b.length > 0,
-      );
-      const pool = branches.length > 0 ? branches : issue.errors;
-      const best = pool.reduce((a, b) => (b.length < a.length ? b : a));
-      collect(best, path, system, out);
-      continue;
-    }
-    const key = path.map(String).join('.');
-    if (!(key in out)) out[key] = issueMessage(issue, String(path[path.length - 1] ?? ''), system);
-  }
 }
 
 /** `thermal` as the form holds it (numbers may be NaN while a box is empty or unreadable). */
@@ -110,7 +52,8 @@ export function evaluateThermal(thermal: unknown, system: UnitSystem): Evaluatio
   const parsed = thermalInputSchema.safeParse(thermal);
   if (!parsed.success) {
     const errors: Record<string, string> = {};
-    collect(parsed.error.issues as Issue[], ['thermal'], system, errors);
+    for (const [path, issue] of issuesByPath(parsed.error.issues, ['thermal']))
+      errors[path] = issueWords(issue, showBound(path.slice(path.lastIndexOf('.') + 1), system));
     return { result: null, errors };
   }
   try {
@@ -121,15 +64,6 @@ export function evaluateThermal(thermal: unknown, system: UnitSystem): Evaluatio
     return { result: null, errors: { thermal: e instanceof Error ? e.message : 'The calculation failed.' } };
   }
 }
-
-/** Engine reasons carry raw floats ("got 0.5027093596059113"); six significant figures are plenty to read. */
-const tidyNumbers = (t: string) => t.replace(/\d+\.\d{7,}/g, (x) => String(Number(Number(x).toPrecision(6))));
-
-const sentence = (raw: string) => {
-  const t = tidyNumbers(raw);
-  const s = t.charAt(0).toUpperCase() + t.slice(1);
-  return /[.!?]$/.test(s) ? s : `${s}.`;
-};
 
 /**
  * Server field paths to form paths: a 422 names the engine's path (`layers.2.sections`, or with the
@@ -148,9 +82,9 @@ export const fieldDomId = (path: string) => `f-${path.replace(/\./g, '-')}`;
  * check. Messages written into the shared schema (e.g. "an assembly needs a name") take precedence.
  */
 export function assemblyErrorMap(system: UnitSystem) {
-  return (issue: Issue): string | undefined => {
-    const key = String(issue.path?.[issue.path.length - 1] ?? '');
-    if (issue.code === 'invalid_union') return 'Check the values of this attachment.';
-    return issueMessage(issue, key, system);
-  };
+  const words = issueErrorMap((issue) =>
+    showBound(String(issue.path?.[issue.path.length - 1] ?? ''), system),
+  );
+  return (issue: ZodIssueLike): string | undefined =>
+    issue.code === 'invalid_union' ? 'Check the values of this attachment.' : words(issue);
 }

@@ -1,6 +1,7 @@
 import { type ProjectClimate, projectClimateSchema } from '@shared/schemas/project';
 import type { UnitSystem } from '@shared/units';
 import { z } from 'zod';
+import { issueErrorMap } from '../../lib/issue-words';
 import { formatQuantity, type Quantity } from '../../lib/quantities';
 
 /*
@@ -66,31 +67,12 @@ const QUANTITY_OF: Record<string, Quantity> = {
   exteriorRelativeHumidity: 'relativeHumidity',
 };
 
-interface RawIssue {
-  code?: string;
-  origin?: string;
-  path?: PropertyKey[];
-  input?: unknown;
-  minimum?: number | bigint;
-  maximum?: number | bigint;
-  inclusive?: boolean;
-}
-
 /** Range and missing-value messages in the person's units ("Must be at most 140 °F"). */
 export function climateErrorMap(system: UnitSystem) {
-  return (issue: RawIssue): string | undefined => {
-    const key = String(issue.path?.[issue.path.length - 1] ?? '');
-    const q = QUANTITY_OF[key];
-    if (q && issue.code === 'invalid_type') return 'Enter a number.';
-    if (q && (issue.code === 'too_small' || issue.code === 'too_big')) {
-      const bound = Number(issue.code === 'too_small' ? issue.minimum : issue.maximum);
-      const shown = formatQuantity(bound, q, system);
-      return issue.code === 'too_small' ? `Must be at least ${shown}.` : `Must be at most ${shown}.`;
-    }
-    if (key === 'source' && issue.code === 'too_big')
-      return `Use at most ${String(issue.maximum)} characters.`;
-    return undefined;
-  };
+  return issueErrorMap((issue) => {
+    const q = QUANTITY_OF[String(issue.path?.[issue.path.length - 1] ?? '')];
+    return q ? (si) => formatQuantity(si, q, system) : undefined;
+  });
 }
 
 const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);

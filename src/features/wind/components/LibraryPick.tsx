@@ -12,6 +12,7 @@ import { Field } from '../../../components/ui/Field';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { isApiRequestError } from '../../../lib/api';
+import { issueLines } from '../../../lib/issue-words';
 import {
   type AttachmentFormValues,
   libraryEntryFrom,
@@ -78,7 +79,7 @@ export function LibraryPick({ kind, form, values, errors, disabled, library }: P
     if (!parsed.success) {
       setMessage({
         tone: 'problem',
-        lines: parsed.error.issues.map((i) => `${i.path.join('.') || 'entry'}: ${i.message}`),
+        lines: issueLines(parsed.error.issues),
       });
       return;
     }

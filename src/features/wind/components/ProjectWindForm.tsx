@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { CalcInputError } from '@shared/calc/errors';
 import { analyseSite, type SiteAnalysis } from '@shared/calc/wind/pressure';
+import { formatterFor } from '@shared/format';
 import type { Project, ProjectWind } from '@shared/schemas/project';
 import { projectWindSchema } from '@shared/schemas/project';
 import type { UnitSystem } from '@shared/units';
@@ -109,12 +110,13 @@ function Preview({ analysis, system }: { analysis: SiteAnalysis; system: UnitSys
         <div>
           <dt className="font-sans text-ink-muted">q_h</dt>
           <dd>
-            {v.qhPsf.toFixed(2)}&#8239;psf · {v.qh.toFixed(0)}&#8239;Pa
+            {formatterFor(system).pressure(v.qh)} ·{' '}
+            {formatterFor(system === 'SI' ? 'IP' : 'SI').pressure(v.qh)}
           </dd>
         </div>
         <div>
           <dt className="font-sans text-ink-muted">End-zone width a</dt>
-          <dd>{formatWind(analysis.edgeWidth, 'length', system)}</dd>
+          <dd>{formatterFor(system).length(analysis.edgeWidth)}</dd>
         </div>
       </dl>
       <p className="text-xs text-ink-muted">{analysis.figure}.</p>

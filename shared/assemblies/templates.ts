@@ -2,6 +2,7 @@ import type { JointInput } from '../calc/joints/schema';
 import { findMaterial } from '../calc/thermal/materials';
 import type { Bridge, Layer } from '../calc/thermal/schema';
 import type { AssemblyInput } from '../schemas/assembly';
+import { siValue } from '../units';
 
 /**
  * Starting build-ups offered on "New assembly": each a complete input (layers, bridges, joints where the wall
@@ -49,7 +50,7 @@ function steelStuds(depth: number, spacing: number): Layer {
 const clips = (name: string, chi: number, h: number, v: number): Bridge => ({
   kind: 'point',
   name,
-  chi,
+  chi: siValue<'W/K'>(chi),
   spacingHorizontal: h,
   spacingVertical: v,
   source: BRIDGE_SOURCE,
@@ -57,7 +58,7 @@ const clips = (name: string, chi: number, h: number, v: number): Bridge => ({
 const linear = (name: string, psi: number, spacing: number): Bridge => ({
   kind: 'linear',
   name,
-  psi,
+  psi: siValue<'ψ W/(m·K)'>(psi),
   spacing,
   source: BRIDGE_SOURCE,
 });

@@ -6,17 +6,21 @@
  * (`registry.ts`, factors derived from mathjs's unit system at load); this module re-exports it with the names
  * the rest of the code multiplies by.
  */
+import type { z } from 'zod';
 import { QUANTITIES, type Quantity, shownToStored, storedToShown } from './registry';
 
 export * from './registry';
 
-declare const brand: unique symbol;
-export type Brand<T, B extends string> = T & { readonly [brand]: B };
+/** A number that carries its unit in its type — zod's brand, so a `.brand<'m'>()` schema yields a `Metre`. */
+export type Brand<T, B extends string> = T & z.$brand<B>;
 
 export type Metre = Brand<number, 'm'>;
 export type Celsius = Brand<number, '°C'>;
 export type Kelvin = Brand<number, 'K'>;
 export type Pascal = Brand<number, 'Pa'>;
+/** A value already in SI, with its unit stated where no schema parsed it (a fixture, a template, a form's default). */
+export const siValue = <B extends string>(v: number): Brand<number, B> => v as Brand<number, B>;
+
 /** Thermal conductivity λ, W/(m·K). */
 export type WattPerMetreKelvin = Brand<number, 'W/(m·K)'>;
 /** Thermal transmittance U, W/(m²·K). */

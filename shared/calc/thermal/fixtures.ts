@@ -1,3 +1,4 @@
+import { siValue } from '@shared/units';
 import type { ThermalInput } from './schema';
 
 /**
@@ -48,8 +49,14 @@ export const metalPanelWall = (): ThermalInput => ({
     { kind: 'homogeneous', name: 'Interior gypsum board', thickness: 0.0159, conductivity: 0.25 },
   ],
   bridges: [
-    { kind: 'point', name: 'Aluminium clips', chi: 0.03, spacingHorizontal: 0.406, spacingVertical: 0.6 },
-    { kind: 'linear', name: 'Horizontal girts', psi: 0.02, spacing: 1.2 },
+    {
+      kind: 'point',
+      name: 'Aluminium clips',
+      chi: siValue<'W/K'>(0.03),
+      spacingHorizontal: 0.406,
+      spacingVertical: 0.6,
+    },
+    { kind: 'linear', name: 'Horizontal girts', psi: siValue<'ψ W/(m·K)'>(0.02), spacing: 1.2 },
     {
       kind: 'fastener',
       name: 'Insulation screws',

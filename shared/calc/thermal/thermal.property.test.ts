@@ -1,4 +1,4 @@
-import { INCH, R_IP_TO_SI, U_IP_TO_SI } from '@shared/units';
+import { INCH, R_IP_TO_SI, siValue, U_IP_TO_SI } from '@shared/units';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Bridge, FramedLayer, Layer, ThermalInput, ThermalResult } from './schema';
@@ -110,13 +110,13 @@ const bridge: fc.Arbitrary<Bridge> = fc.oneof(
   fc.record({
     kind: fc.constant('point' as const),
     name,
-    chi: fc.double({ min: 0, max: 0.5, noNaN: true }),
+    chi: fc.double({ min: 0, max: 0.5, noNaN: true }).map(siValue<'W/K'>),
     countPerArea: fc.double({ min: 0.1, max: 20, noNaN: true }),
   }),
   fc.record({
     kind: fc.constant('linear' as const),
     name,
-    psi: fc.double({ min: 0, max: 0.5, noNaN: true }),
+    psi: fc.double({ min: 0, max: 0.5, noNaN: true }).map(siValue<'ψ W/(m·K)'>),
     spacing: fc.double({ min: 0.2, max: 5, noNaN: true }),
   }),
 );

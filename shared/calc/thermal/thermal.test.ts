@@ -1,5 +1,5 @@
 import { CalcInputError } from '@shared/calc/errors';
-import { R_IP_TO_SI, U_IP_TO_SI } from '@shared/units';
+import { R_IP_TO_SI, siValue, U_IP_TO_SI } from '@shared/units';
 import { describe, expect, it } from 'vitest';
 import { metalPanelWall } from './fixtures';
 import { findMaterial, materials } from './materials';
@@ -337,11 +337,21 @@ describe('bridges', () => {
   it('point bridges by spacing equal the same bridges by count', () => {
     const a = calculateThermal(
       wall([board(0.1, 0.035)], {
-        bridges: [{ kind: 'point', name: 'Clip', chi: 0.02, spacingHorizontal: 0.4, spacingVertical: 0.5 }],
+        bridges: [
+          {
+            kind: 'point',
+            name: 'Clip',
+            chi: siValue<'W/K'>(0.02),
+            spacingHorizontal: 0.4,
+            spacingVertical: 0.5,
+          },
+        ],
       }),
     );
     const b = calculateThermal(
-      wall([board(0.1, 0.035)], { bridges: [{ kind: 'point', name: 'Clip', chi: 0.02, countPerArea: 5 }] }),
+      wall([board(0.1, 0.035)], {
+        bridges: [{ kind: 'point', name: 'Clip', chi: siValue<'W/K'>(0.02), countPerArea: 5 }],
+      }),
     );
     expect(a.bridges[0]!.deltaU).toBeCloseTo(0.1, 12);
     expect(b.bridges[0]!.deltaU).toBeCloseTo(0.1, 12);
@@ -349,11 +359,13 @@ describe('bridges', () => {
 
   it('linear bridges by spacing equal the same bridges by length per area', () => {
     const a = calculateThermal(
-      wall([board(0.1, 0.035)], { bridges: [{ kind: 'linear', name: 'Girt', psi: 0.05, spacing: 1.25 }] }),
+      wall([board(0.1, 0.035)], {
+        bridges: [{ kind: 'linear', name: 'Girt', psi: siValue<'ψ W/(m·K)'>(0.05), spacing: 1.25 }],
+      }),
     );
     const b = calculateThermal(
       wall([board(0.1, 0.035)], {
-        bridges: [{ kind: 'linear', name: 'Girt', psi: 0.05, lengthPerArea: 0.8 }],
+        bridges: [{ kind: 'linear', name: 'Girt', psi: siValue<'ψ W/(m·K)'>(0.05), lengthPerArea: 0.8 }],
       }),
     );
     expect(a.bridges[0]!.deltaU).toBeCloseTo(0.04, 12);
@@ -535,7 +547,9 @@ describe('input errors carry the dotted field path', () => {
       'zero linear spacing',
       () =>
         calculateThermal(
-          wall([board(0.1, 1)], { bridges: [{ kind: 'linear', name: 'Girt', psi: 0.05, spacing: 0 }] }),
+          wall([board(0.1, 1)], {
+            bridges: [{ kind: 'linear', name: 'Girt', psi: siValue<'ψ W/(m·K)'>(0.05), spacing: 0 }],
+          }),
         ),
       'bridges.0.spacing',
     ],
@@ -545,7 +559,13 @@ describe('input errors carry the dotted field path', () => {
         calculateThermal(
           wall([board(0.1, 1)], {
             bridges: [
-              { kind: 'point', name: 'Clip', chi: 0.02, spacingHorizontal: 0.4, spacingVertical: -1 },
+              {
+                kind: 'point',
+                name: 'Clip',
+                chi: siValue<'W/K'>(0.02),
+                spacingHorizontal: 0.4,
+                spacingVertical: -1,
+              },
             ],
           }),
         ),
@@ -556,7 +576,7 @@ describe('input errors carry the dotted field path', () => {
       () =>
         calculateThermal(
           wall([board(0.1, 1)], {
-            bridges: [{ kind: 'point', name: 'Clip', chi: Number.NaN, countPerArea: 2 }],
+            bridges: [{ kind: 'point', name: 'Clip', chi: siValue<'W/K'>(Number.NaN), countPerArea: 2 }],
           }),
         ),
       'bridges.0.chi',
@@ -689,8 +709,14 @@ describe('bounds that keep every figure finite', () => {
     w.layers[3] = { kind: 'homogeneous', name: 'Thin', thickness: MIN_THICKNESS, conductivity: 1000 };
     w.layers[4] = { kind: 'homogeneous', name: 'Thick', thickness: 2, conductivity: MIN_CONDUCTIVITY };
     w.bridges = [
-      { kind: 'point', name: 'Clips', chi: 10, spacingHorizontal: MIN_SPACING, spacingVertical: MIN_SPACING },
-      { kind: 'linear', name: 'Girts', psi: 10, spacing: MIN_SPACING },
+      {
+        kind: 'point',
+        name: 'Clips',
+        chi: siValue<'W/K'>(10),
+        spacingHorizontal: MIN_SPACING,
+        spacingVertical: MIN_SPACING,
+      },
+      { kind: 'linear', name: 'Girts', psi: siValue<'ψ W/(m·K)'>(10), spacing: MIN_SPACING },
       {
         kind: 'fastener',
         name: 'Screws',

@@ -3,6 +3,7 @@ import { metalPanelWall } from '@shared/calc/thermal/fixtures';
 import type { Material } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import type { AssemblyInput, assemblyInputSchema, BridgeValue, OrgMaterial } from '@shared/schemas/assembly';
+import { siValue } from '@shared/units';
 import { createContext, useContext } from 'react';
 import type { FieldPath } from 'react-hook-form';
 import type { z } from 'zod';
@@ -110,9 +111,15 @@ export type BridgeRole = 'clip' | 'girt' | 'fastener';
 export function newBridge(role: BridgeRole, insulationIndex: number): Bridge {
   switch (role) {
     case 'clip':
-      return { kind: 'point', name: 'Clips', chi: 0.03, spacingHorizontal: 0.406, spacingVertical: 0.6 };
+      return {
+        kind: 'point',
+        name: 'Clips',
+        chi: siValue<'W/K'>(0.03),
+        spacingHorizontal: 0.406,
+        spacingVertical: 0.6,
+      };
     case 'girt':
-      return { kind: 'linear', name: 'Girts', psi: 0.02, spacing: 1.2 };
+      return { kind: 'linear', name: 'Girts', psi: siValue<'ψ W/(m·K)'>(0.02), spacing: 1.2 };
     case 'fastener':
       return {
         kind: 'fastener',

@@ -98,7 +98,7 @@ export type ServedContext = Omit<BaseContext<unknown, unknown, unknown>, 'query'
 
 export interface RouteDef<P = unknown, Q = unknown, B = unknown, A extends Access = Access> {
   method: 'get' | 'post' | 'put' | 'patch' | 'delete';
-  /** Express path under /api, e.g. `/projects/:id`. */
+  /** Express path under /api, e.g. `/projects/:projectId` (parameter names: DEVELOPERS.md "API conventions"). */
   path: string;
   summary: string;
   tag: string;
@@ -288,7 +288,7 @@ export function mountRoutes(
       if (access.kind === 'project') {
         const projectId = access.projectId
           ? await access.projectId({ params: req.params as Record<string, string>, services })
-          : (req.params as Record<string, string>).id;
+          : (req.params as Record<string, string>).projectId;
         // One query for membership, role and record (remembered until the next write).
         const record = projectId ? await services.projects.access(projectId, user!.id) : null;
         if (!projectId || !record) throw notFound('project');

@@ -9,7 +9,7 @@ import {
   assemblyUpdateSchema,
   revisionListSchema,
 } from '@shared/schemas/assembly';
-import { apiErrorSchema, int4Param, uuidParam, versionConflictSchema } from '@shared/schemas/common';
+import { apiErrorSchema, int4Param, projectParams, versionConflictSchema } from '@shared/schemas/common';
 import { z } from 'zod';
 import { forbidden, notFound } from '../http/errors';
 import { defineRoute } from '../http/route';
@@ -35,7 +35,7 @@ const viaAssembly = {
     services: import('../services').Services;
   }) =>
     z.uuid().safeParse(params.assemblyId).success
-      ? services.assemblies.projectOf(params.assemblyId!)
+      ? services.assemblies.projectOf(params.assemblyId)
       : Promise.resolve(null),
 };
 const example = {
@@ -49,11 +49,11 @@ const example = {
 export const assemblyRoutes = [
   defineRoute({
     method: 'get',
-    path: '/projects/:id/assemblies',
+    path: '/projects/:projectId/assemblies',
     summary: 'Assemblies of a project with their effective U-factor',
     tag: 'Assemblies',
     access: { kind: 'project', action: 'assembly.read' },
-    params: uuidParam,
+    params: projectParams,
     responses: {
       200: { description: 'Assemblies', schema: z.object({ assemblies: z.array(assemblySummarySchema) }) },
       ...errors,
@@ -62,12 +62,12 @@ export const assemblyRoutes = [
   }),
   defineRoute({
     method: 'post',
-    path: '/projects/:id/assemblies',
+    path: '/projects/:projectId/assemblies',
     summary:
       'Create an assembly (revision 1; the thermal result is computed and stored with the engine version)',
     tag: 'Assemblies',
     access: { kind: 'project', action: 'assembly.write' },
-    params: uuidParam,
+    params: projectParams,
     body: assemblyCreateSchema,
     example,
     responses: {

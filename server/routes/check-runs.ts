@@ -4,7 +4,7 @@ import {
   checkRunListSchema,
   checkRunSchema,
 } from '@shared/schemas/check-runs';
-import { apiErrorSchema, uuidParam } from '@shared/schemas/common';
+import { apiErrorSchema, projectParams } from '@shared/schemas/common';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
 import type { Services } from '../services';
@@ -22,11 +22,11 @@ const uuid = (x: string | undefined) => z.uuid().safeParse(x).success;
 type Ctx = { params: Record<string, string>; services: Services };
 const viaAssembly = {
   projectId: ({ params, services }: Ctx) =>
-    uuid(params.assemblyId) ? services.assemblies.projectOf(params.assemblyId!) : Promise.resolve(null),
+    uuid(params.assemblyId) ? services.assemblies.projectOf(params.assemblyId) : Promise.resolve(null),
 };
 const viaRun = {
   projectId: ({ params, services }: Ctx) =>
-    uuid(params.runId) ? services.checkRuns.projectOf(params.runId!) : Promise.resolve(null),
+    uuid(params.runId) ? services.checkRuns.projectOf(params.runId) : Promise.resolve(null),
 };
 
 export const checkRunRoutes = [
@@ -50,11 +50,11 @@ export const checkRunRoutes = [
   }),
   defineRoute({
     method: 'get',
-    path: '/projects/:id/check-runs',
+    path: '/projects/:projectId/check-runs',
     summary: 'Stored check runs of a project, newest first (`?assemblyId=` for one assembly)',
     tag: 'Check runs',
     access: { kind: 'project', action: 'assembly.read' },
-    params: uuidParam,
+    params: projectParams,
     query: checkRunListQuerySchema,
     responses: { 200: { description: 'Runs', schema: checkRunListSchema }, ...errors },
     handler: async ({ project, query, services }) => ({

@@ -1,5 +1,5 @@
 import { CSV_COLUMNS } from '@shared/checks/criteria-csv';
-import { apiErrorSchema, uuidParam, versionConflictSchema } from '@shared/schemas/common';
+import { apiErrorSchema, projectParams, versionConflictSchema } from '@shared/schemas/common';
 import {
   criteriaDiffQuerySchema,
   criteriaDiffSchema,
@@ -205,11 +205,11 @@ export const criteriaRoutes = [
   }),
   defineRoute({
     method: 'get',
-    path: '/projects/:id/criteria-sets',
+    path: '/projects/:projectId/criteria-sets',
     summary: 'Code tables a project member may check against: the project firm’s and the caller’s own firms’',
     tag: 'Code tables',
     access: { kind: 'project', action: 'project.read' },
-    params: uuidParam,
+    params: projectParams,
     responses: { 200: { description: 'Code tables', schema: criteriaSetListSchema }, ...errors },
     handler: async ({ project, user, services }) => ({
       criteriaSets: await services.criteria.forProject(project.id, user.id),

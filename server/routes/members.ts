@@ -1,5 +1,5 @@
 import { can } from '@shared/auth/permissions';
-import { apiErrorSchema, uuidParam } from '@shared/schemas/common';
+import { apiErrorSchema, projectParams } from '@shared/schemas/common';
 import {
   invitationInputSchema,
   invitationPreviewSchema,
@@ -20,16 +20,16 @@ const errors = {
   },
   404: { description: 'No such project or member', schema: apiErrorSchema },
 };
-const memberParams = uuidParam.extend({ memberId: z.uuid() });
+const memberParams = projectParams.extend({ memberId: z.uuid() });
 
 export const memberRoutes = [
   defineRoute({
     method: 'get',
-    path: '/projects/:id/members',
+    path: '/projects/:projectId/members',
     summary: 'Members and pending invitations',
     tag: 'Members',
     access: { kind: 'project', action: 'members.read' },
-    params: uuidParam,
+    params: projectParams,
     responses: {
       200: {
         description: 'Members',
@@ -45,11 +45,11 @@ export const memberRoutes = [
   }),
   defineRoute({
     method: 'post',
-    path: '/projects/:id/invitations',
+    path: '/projects/:projectId/invitations',
     summary: 'Invite someone by e-mail with a role on this project',
     tag: 'Members',
     access: { kind: 'project', action: 'members.invite' },
-    params: uuidParam,
+    params: projectParams,
     body: invitationInputSchema,
     example: { email: 'engineer@example.com', role: 'engineer' },
     responses: {
@@ -65,7 +65,7 @@ export const memberRoutes = [
   }),
   defineRoute({
     method: 'put',
-    path: '/projects/:id/members/:memberId',
+    path: '/projects/:projectId/members/:memberId',
     summary: 'Change a member’s role',
     tag: 'Members',
     // Taking someone's access away (or narrowing it) stays possible on an archived project.
@@ -85,7 +85,7 @@ export const memberRoutes = [
   }),
   defineRoute({
     method: 'delete',
-    path: '/projects/:id/members/:memberId',
+    path: '/projects/:projectId/members/:memberId',
     summary: 'Remove a member from the project',
     tag: 'Members',
     // Taking someone's access away (or narrowing it) stays possible on an archived project.

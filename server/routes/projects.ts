@@ -1,4 +1,4 @@
-import { apiErrorSchema, uuidParam, versionConflictSchema } from '@shared/schemas/common';
+import { apiErrorSchema, projectParams, versionConflictSchema } from '@shared/schemas/common';
 import { auditEntrySchema } from '@shared/schemas/me';
 import {
   projectClimateUpdateSchema,
@@ -68,23 +68,23 @@ export const projectRoutes = [
   }),
   defineRoute({
     method: 'get',
-    path: '/projects/:id',
+    path: '/projects/:projectId',
     summary: 'One project with its site data and the caller’s role',
     tag: 'Projects',
     access: { kind: 'project', action: 'project.read' },
-    params: uuidParam,
+    params: projectParams,
     responses: { 200: { description: 'The project', schema: projectSchema }, ...errors },
     // The access check has read the project with the caller's role.
     handler: async ({ project }) => project.record,
   }),
   defineRoute({
     method: 'put',
-    path: '/projects/:id',
+    path: '/projects/:projectId',
     summary:
       'Update the project’s site data (name the version you read; 409 if someone saved the site data after it)',
     tag: 'Projects',
     access: { kind: 'project', action: 'project.update' },
-    params: uuidParam,
+    params: projectParams,
     body: projectUpdateSchema,
     example: { version: 1, changes: example },
     responses: {
@@ -102,11 +102,11 @@ export const projectRoutes = [
   }),
   defineRoute({
     method: 'put',
-    path: '/projects/:id/wind',
+    path: '/projects/:projectId/wind',
     summary: 'Set the project’s wind data (ASCE 7 edition, basic wind speed, exposure, K_zt, enclosure…)',
     tag: 'Projects',
     access: { kind: 'project', action: 'project.wind.update' },
-    params: uuidParam,
+    params: projectParams,
     body: projectWindUpdateSchema,
     example: {
       version: 1,
@@ -137,11 +137,11 @@ export const projectRoutes = [
   }),
   defineRoute({
     method: 'put',
-    path: '/projects/:id/climate',
+    path: '/projects/:projectId/climate',
     summary: 'Set the project’s 12 monthly exterior climates (for the moisture check) with their source',
     tag: 'Projects',
     access: { kind: 'project', action: 'project.climate.update' },
-    params: uuidParam,
+    params: projectParams,
     body: projectClimateUpdateSchema,
     example: {
       version: 1,
@@ -170,12 +170,12 @@ export const projectRoutes = [
   }),
   defineRoute({
     method: 'post',
-    path: '/projects/:id/duplicate',
+    path: '/projects/:projectId/duplicate',
     summary:
       'Copy the project — site data, wind, climate and every assembly’s current revision as revision 1 — with you as its only member (owner)',
     tag: 'Projects',
     access: { kind: 'project', action: 'project.update' },
-    params: uuidParam,
+    params: projectParams,
     body: projectDuplicateSchema,
     example: { name: 'Example distribution centre, phase 2', number: 'EX-02' },
     responses: {
@@ -188,31 +188,31 @@ export const projectRoutes = [
   }),
   defineRoute({
     method: 'post',
-    path: '/projects/:id/archive',
+    path: '/projects/:projectId/archive',
     summary: 'Archive a project',
     tag: 'Projects',
     access: { kind: 'project', action: 'project.archive', whenArchived: 'allow' },
-    params: uuidParam,
+    params: projectParams,
     responses: { 200: { description: 'The archived project', schema: projectSchema }, ...errors },
     handler: ({ user, project, services }) => services.projects.setArchived(project.id, user.id, true),
   }),
   defineRoute({
     method: 'post',
-    path: '/projects/:id/unarchive',
+    path: '/projects/:projectId/unarchive',
     summary: 'Bring an archived project back',
     tag: 'Projects',
     access: { kind: 'project', action: 'project.archive', whenArchived: 'allow' },
-    params: uuidParam,
+    params: projectParams,
     responses: { 200: { description: 'The project', schema: projectSchema }, ...errors },
     handler: ({ user, project, services }) => services.projects.setArchived(project.id, user.id, false),
   }),
   defineRoute({
     method: 'get',
-    path: '/projects/:id/audit',
+    path: '/projects/:projectId/audit',
     summary: 'Who changed what on this project',
     tag: 'Projects',
     access: { kind: 'project', action: 'audit.read' },
-    params: uuidParam,
+    params: projectParams,
     responses: {
       200: {
         description: 'Audit entries, newest first',

@@ -8,7 +8,7 @@ type Ctx = { params: Record<string, string>; services: Services };
 const viaRun = {
   projectId: ({ params, services }: Ctx) =>
     z.uuid().safeParse(params.runId).success
-      ? services.checkRuns.projectOf(params.runId!)
+      ? services.checkRuns.projectOf(params.runId)
       : Promise.resolve(null),
 };
 

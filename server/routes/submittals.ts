@@ -1,4 +1,4 @@
-import { apiErrorSchema, uuidParam, versionConflictSchema } from '@shared/schemas/common';
+import { apiErrorSchema, projectParams, versionConflictSchema } from '@shared/schemas/common';
 import {
   attachSheetSchema,
   commentCreateSchema,
@@ -38,7 +38,7 @@ type Ctx = { params: Record<string, string>; services: Services };
 const viaSubmittal = {
   projectId: ({ params, services }: Ctx) =>
     z.uuid().safeParse(params.submittalId).success
-      ? services.submittals.projectOf(params.submittalId!)
+      ? services.submittals.projectOf(params.submittalId)
       : Promise.resolve(null),
 };
 const submittalParams = z.object({ submittalId: z.uuid() });
@@ -57,11 +57,11 @@ const exampleFields = {
 export const submittalRoutes = [
   defineRoute({
     method: 'get',
-    path: '/projects/:id/submittals',
+    path: '/projects/:projectId/submittals',
     summary: 'Submittals of a project, latest revision of each (`?status=` to filter)',
     tag: 'Submittals',
     access: { kind: 'project', action: 'submittal.read' },
-    params: uuidParam,
+    params: projectParams,
     query: submittalListQuerySchema,
     responses: { 200: { description: 'Submittals', schema: submittalListSchema }, ...errors },
     handler: async ({ project, query, services }) => ({
@@ -70,11 +70,11 @@ export const submittalRoutes = [
   }),
   defineRoute({
     method: 'post',
-    path: '/projects/:id/submittals',
+    path: '/projects/:projectId/submittals',
     summary: 'Start a submittal (revision 1, draft); the number defaults to "<section>-<next>"',
     tag: 'Submittals',
     access: { kind: 'project', action: 'submittal.create' },
-    params: uuidParam,
+    params: projectParams,
     body: submittalCreateSchema,
     example: exampleFields,
     responses: {

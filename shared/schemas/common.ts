@@ -16,6 +16,8 @@ export const apiErrorSchema = z.object({
 export type ApiError = z.infer<typeof apiErrorSchema>;
 
 export const uuidParam = z.object({ id: z.uuid() });
+/** The path parameter of a project's routes (`/projects/:projectId/…`). */
+export const projectParams = z.object({ projectId: z.uuid() });
 
 /*
  * Limits of what a request may carry (DEVELOPERS.md "API conventions"). Text is trimmed and held to a length

@@ -13,10 +13,10 @@ const key = (r: { method: string; path: string }) => `${r.method.toUpperCase()} 
 
 /** The routes that still work on an archived project (decided in DEVELOPERS.md, "API conventions"). */
 const ALLOWED_WHEN_ARCHIVED = [
-  'POST /projects/:id/archive',
-  'POST /projects/:id/unarchive',
-  'PUT /projects/:id/members/:memberId',
-  'DELETE /projects/:id/members/:memberId',
+  'POST /projects/:projectId/archive',
+  'POST /projects/:projectId/unarchive',
+  'PUT /projects/:projectId/members/:memberId',
+  'DELETE /projects/:projectId/members/:memberId',
 ];
 
 /** The demo account of each project role. */
@@ -37,25 +37,25 @@ describe.each(testDatabases())('writes to an archived project on %s', (kind) => 
   beforeAll(async () => {
     t = await createTestApp(kind);
     const owner = await t.as(demoEmail('admin'));
-    params.id = await t.demoProjectId();
-    const assemblies = (await owner.get(`/api/projects/${params.id}/assemblies`)).body.assemblies;
+    params.projectId = await t.demoProjectId();
+    const assemblies = (await owner.get(`/api/projects/${params.projectId}/assemblies`)).body.assemblies;
     assembly = (await owner.get(`/api/assemblies/${assemblies[0].id}`)).body;
     params.assemblyId = assembly.id;
     const example = (k: string) => apiRoutes.find((r) => key(r) === k)!.example as object;
     const submittal = await owner
-      .post(`/api/projects/${params.id}/submittals`)
-      .send(example('POST /projects/:id/submittals'));
+      .post(`/api/projects/${params.projectId}/submittals`)
+      .send(example('POST /projects/:projectId/submittals'));
     expect(submittal.status).toBe(201);
     params.submittalId = submittal.body.id;
     params.submittalItemId = '00000000-0000-4000-8000-000000000000';
     params.memberId = '00000000-0000-4000-8000-000000000000';
     await owner
-      .post(`/api/projects/${params.id}/invitations`)
+      .post(`/api/projects/${params.projectId}/invitations`)
       .send({ email: 'late.joiner@example.com', role: 'engineer' });
     token = (await t.mail())
       .find((m) => m.to.includes('late.joiner@example.com'))!
       .text.match(/\/invite\/([\w-]+)/)![1]!;
-    expect((await owner.post(`/api/projects/${params.id}/archive`)).status).toBe(200);
+    expect((await owner.post(`/api/projects/${params.projectId}/archive`)).status).toBe(200);
   });
   afterAll(async () => {
     await t?.close();
@@ -64,7 +64,7 @@ describe.each(testDatabases())('writes to an archived project on %s', (kind) => 
   it('refuses a new assembly and a new revision with 409 archived, and stores nothing', async () => {
     const engineer = await t.as(demoEmail('engineer'));
     const created = await engineer
-      .post(`/api/projects/${params.id}/assemblies`)
+      .post(`/api/projects/${params.projectId}/assemblies`)
       .send({ ...assembly.current.input, name: 'Written after archiving' });
     expect(created.status).toBe(409);
     expect(created.body.error.code).toBe('archived');
@@ -74,7 +74,7 @@ describe.each(testDatabases())('writes to an archived project on %s', (kind) => 
     expect(saved.status).toBe(409);
     expect(saved.body.error.code).toBe('archived');
     // Reads go on, and nothing was written.
-    const list = await engineer.get(`/api/projects/${params.id}/assemblies`);
+    const list = await engineer.get(`/api/projects/${params.projectId}/assemblies`);
     expect(list.status).toBe(200);
     expect(list.body.assemblies.map((a: { name: string }) => a.name)).not.toContain(
       'Written after archiving',
@@ -116,18 +116,18 @@ describe.each(testDatabases())('writes to an archived project on %s', (kind) => 
     const accept = await invitee.post(`/api/invitations/${token}/accept`);
     expect(accept.status).toBe(409);
     expect(accept.body.error.code).toBe('archived');
-    expect((await invitee.get(`/api/projects/${params.id}`)).status).toBe(404);
+    expect((await invitee.get(`/api/projects/${params.projectId}`)).status).toBe(404);
   });
 
   it('still lets an owner take someone off the project, and restore it; then writes apply again', async () => {
     const owner = await t.as(demoEmail('admin'));
-    const members = (await owner.get(`/api/projects/${params.id}/members`)).body.members as {
+    const members = (await owner.get(`/api/projects/${params.projectId}/members`)).body.members as {
       id: string;
       email: string;
     }[];
     const viewer = members.find((m) => m.email === demoEmail('viewer'))!;
-    expect((await owner.delete(`/api/projects/${params.id}/members/${viewer.id}`)).status).toBe(204);
-    expect((await owner.post(`/api/projects/${params.id}/unarchive`)).status).toBe(200);
+    expect((await owner.delete(`/api/projects/${params.projectId}/members/${viewer.id}`)).status).toBe(204);
+    expect((await owner.post(`/api/projects/${params.projectId}/unarchive`)).status).toBe(200);
     const saved = await (await t.as(demoEmail('engineer'))).put(`/api/assemblies/${assembly.id}`).send({
       version: assembly.version,
       note: 'after restoring',

@@ -19,7 +19,7 @@ const newProject = {
   summerDesignTempC: 29,
 };
 
-/** The site data of a project record: what `PUT /projects/:id` takes as `changes`. */
+/** The site data of a project record: what `PUT /projects/:projectId` takes as `changes`. */
 function siteData(project: Record<string, unknown>) {
   const {
     id: _i,
@@ -142,8 +142,8 @@ describe.each(testDatabases())('foundation API on %s', (kind) => {
     const { version } = current;
     const example = (path: string) =>
       apiRoutes.find((r) => r.method === 'put' && r.path === path)!.example as object;
-    const wind = { ...(example('/projects/:id/wind') as { wind: object }).wind, basicWindSpeed: 53 };
-    const { climate } = example('/projects/:id/climate') as { climate: object };
+    const wind = { ...(example('/projects/:projectId/wind') as { wind: object }).wind, basicWindSpeed: 53 };
+    const { climate } = example('/projects/:projectId/climate') as { climate: object };
     const changes = { ...siteData(current), number: 'LA-2611-R2' };
 
     const site = await architect.put(`/api/projects/${id}`).send({ version, changes });
@@ -252,7 +252,7 @@ describe.each(testDatabases())('foundation API on %s', (kind) => {
   it('serves the OpenAPI document and its reference page', async () => {
     const doc = await t.anonymous().get('/api/openapi.json');
     expect(doc.body.openapi).toBe('3.1.0');
-    expect(doc.body.paths['/api/projects/{id}'].put.requestBody).toBeDefined();
+    expect(doc.body.paths['/api/projects/{projectId}'].put.requestBody).toBeDefined();
     const page = await t.anonymous().get('/api/docs/');
     expect(page.status).toBe(200);
     expect(page.text).toContain('swagger');

@@ -72,11 +72,13 @@ describe('fuzzing every route with a body', () => {
   beforeAll(async () => {
     t = await createTestApp('pglite');
     const owner = await t.as(demoEmail('admin'));
-    params.id = await t.demoProjectId();
+    params.projectId = await t.demoProjectId();
     params.orgId = (await owner.get('/api/me')).body.organisations[0].id;
     // A member of the owner's firm whose firm role the fuzzed role changes may change.
     params.userId = (await (await t.as(demoEmail('viewer'))).get('/api/me')).body.id;
-    params.assemblyId = (await owner.get(`/api/projects/${params.id}/assemblies`)).body.assemblies[0].id;
+    params.assemblyId = (
+      await owner.get(`/api/projects/${params.projectId}/assemblies`)
+    ).body.assemblies[0].id;
     params.setId = (
       await owner.post(`/api/organisations/${params.orgId}/criteria-sets`).send({ name: 'Fuzzed code table' })
     ).body.id;
@@ -87,7 +89,7 @@ describe('fuzzing every route with a body', () => {
     ).body.id;
     params.submittalId = (
       await owner
-        .post(`/api/projects/${params.id}/submittals`)
+        .post(`/api/projects/${params.projectId}/submittals`)
         .send({ title: 'Fuzzed submittal', specSection: '07 42 13', specTitle: 'Metal Wall Panels' })
     ).body.id;
   });

@@ -51,24 +51,24 @@ const EXPECTED: Record<string, Expectation> = {
   'PUT /admin/organisations/:orgId/verification': 'siteAdmin',
   'GET /projects': 'user',
   'POST /projects': 'user',
-  'GET /projects/:id': ALL,
-  'PUT /projects/:id': ['owner', 'architect'],
-  'PUT /projects/:id/wind': ['owner', 'architect', 'engineer'],
-  'PUT /projects/:id/climate': ['owner', 'architect', 'envelope_consultant'],
-  'POST /projects/:id/archive': ['owner'],
-  'POST /projects/:id/unarchive': ['owner'],
-  'GET /projects/:id/audit': ['owner', 'architect', 'envelope_consultant', 'engineer'],
-  'GET /projects/:id/members': ALL,
-  'POST /projects/:id/invitations': ['owner', 'architect'],
-  'PUT /projects/:id/members/:memberId': ['owner'],
-  'DELETE /projects/:id/members/:memberId': ['owner'],
+  'GET /projects/:projectId': ALL,
+  'PUT /projects/:projectId': ['owner', 'architect'],
+  'PUT /projects/:projectId/wind': ['owner', 'architect', 'engineer'],
+  'PUT /projects/:projectId/climate': ['owner', 'architect', 'envelope_consultant'],
+  'POST /projects/:projectId/archive': ['owner'],
+  'POST /projects/:projectId/unarchive': ['owner'],
+  'GET /projects/:projectId/audit': ['owner', 'architect', 'envelope_consultant', 'engineer'],
+  'GET /projects/:projectId/members': ALL,
+  'POST /projects/:projectId/invitations': ['owner', 'architect'],
+  'PUT /projects/:projectId/members/:memberId': ['owner'],
+  'DELETE /projects/:projectId/members/:memberId': ['owner'],
   'GET /invitations/:token': 'public',
   'POST /invitations/:token/accept': 'user',
-  'GET /projects/:id/assemblies': ALL,
-  'POST /projects/:id/assemblies': ['owner', 'architect', 'envelope_consultant', 'engineer'],
+  'GET /projects/:projectId/assemblies': ALL,
+  'POST /projects/:projectId/assemblies': ['owner', 'architect', 'envelope_consultant', 'engineer'],
   'GET /assemblies/:assemblyId': ALL,
   'PUT /assemblies/:assemblyId': ['owner', 'architect', 'envelope_consultant', 'engineer'],
-  'POST /projects/:id/duplicate': ['owner', 'architect'],
+  'POST /projects/:projectId/duplicate': ['owner', 'architect'],
   // Read on the source; a copy into the same project (the default) needs assembly.write there.
   'POST /assemblies/:assemblyId/duplicate': ['owner', 'architect', 'envelope_consultant', 'engineer'],
   'GET /assemblies/:assemblyId/revisions': ALL,
@@ -106,7 +106,7 @@ const EXPECTED: Record<string, Expectation> = {
   'GET /criteria-sets/:setId/export.csv': 'criteriaRead',
   'GET /criteria-sets/:setId/versions': 'criteriaRead',
   'GET /criteria-sets/:setId/diff': 'criteriaRead',
-  'GET /projects/:id/criteria-sets': ALL,
+  'GET /projects/:projectId/criteria-sets': ALL,
   'POST /assemblies/:assemblyId/check-runs': [
     'owner',
     'architect',
@@ -114,12 +114,12 @@ const EXPECTED: Record<string, Expectation> = {
     'engineer',
     'subcontractor',
   ],
-  'GET /projects/:id/check-runs': ALL,
+  'GET /projects/:projectId/check-runs': ALL,
   'GET /check-runs/:runId': ALL,
   'GET /check-runs/:runId/sheet.pdf': ALL,
   'GET /verify/:code': 'public',
-  'GET /projects/:id/submittals': ALL,
-  'POST /projects/:id/submittals': SUBMITTING,
+  'GET /projects/:projectId/submittals': ALL,
+  'POST /projects/:projectId/submittals': SUBMITTING,
   'GET /submittals/:submittalId': ALL,
   'PUT /submittals/:submittalId': SUBMITTING,
   'POST /submittals/:submittalId/sheets': SUBMITTING,
@@ -163,7 +163,7 @@ const emailOf: Record<Role | 'outsider', string> = {
 const BODIES: Record<string, (params: Record<string, string>) => unknown> = {
   'PUT /me/preferences': () => ({ unitSystem: 'SI' }),
   'POST /organisations': () => ({ name: `Firm ${Math.random().toString(36).slice(2)}` }),
-  'PUT /projects/:id/members/:memberId': () => ({ role: 'viewer' }),
+  'PUT /projects/:projectId/members/:memberId': () => ({ role: 'viewer' }),
   'POST /assemblies/:assemblyId/check-runs': (p) => ({ criteriaSetId: p.setId }),
   'POST /submittals/:submittalId/sheets': (p) => ({ checkRunId: p.runId }),
 };
@@ -181,11 +181,11 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
   const params: Record<string, string> = {};
   beforeAll(async () => {
     t = await createTestApp(kind);
-    params.id = await t.demoProjectId();
+    params.projectId = await t.demoProjectId();
     // A spare member whom the member routes may change and remove without disturbing the callers.
     const owner = await t.as(emailOf.owner);
     await owner
-      .post(`/api/projects/${params.id}/invitations`)
+      .post(`/api/projects/${params.projectId}/invitations`)
       .send({ email: 'spare@example.com', role: 'viewer' });
     const token = (await t.mail())
       .find((m) => m.to.includes('spare@example.com'))!
@@ -196,20 +196,22 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
       password: 'spare-password-1',
     });
     await spare.post(`/api/invitations/${token}/accept`);
-    const members = (await owner.get(`/api/projects/${params.id}/members`)).body.members as {
+    const members = (await owner.get(`/api/projects/${params.projectId}/members`)).body.members as {
       id: string;
       email: string;
     }[];
     params.memberId = members.find((m) => m.email === 'spare@example.com')!.id;
     await owner
-      .post(`/api/projects/${params.id}/invitations`)
+      .post(`/api/projects/${params.projectId}/invitations`)
       .send({ email: 'pending@example.com', role: 'viewer' });
     params.token = (await t.mail())
       .find((m) => m.to.includes('pending@example.com'))!
       .text.match(/\/invite\/([\w-]+)/)![1]!;
     const example = (k: string) => apiRoutes.find((r) => key(r) === k)!.example as object;
     params.assemblyId = (
-      await owner.post(`/api/projects/${params.id}/assemblies`).send(example('POST /projects/:id/assemblies'))
+      await owner
+        .post(`/api/projects/${params.projectId}/assemblies`)
+        .send(example('POST /projects/:projectId/assemblies'))
     ).body.id;
     params.revision = '1';
     params.orgId = (await owner.get('/api/me')).body.organisations[0].id;
@@ -248,13 +250,13 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
       .post(`/api/organisations/${params.orgId}/attachment-products/${params.productId}/data-sheet`)
       .attach('files', Buffer.from('%PDF-1.4\n%%EOF\n'), 'data-sheet.pdf');
     // A submittal naming every reviewing role (only named reviewers review), with a sheet and a file.
-    const people = (await owner.get(`/api/projects/${params.id}/members`)).body.members as {
+    const people = (await owner.get(`/api/projects/${params.projectId}/members`)).body.members as {
       userId: string;
       role: string;
     }[];
     params.submittalId = (
-      await owner.post(`/api/projects/${params.id}/submittals`).send({
-        ...example('POST /projects/:id/submittals'),
+      await owner.post(`/api/projects/${params.projectId}/submittals`).send({
+        ...example('POST /projects/:projectId/submittals'),
         reviewerIds: people.filter((m) => (REVIEWING as string[]).includes(m.role)).map((m) => m.userId),
       })
     ).body.id;

@@ -97,6 +97,30 @@ describe('a new user from sign-up to the compliance sheet', () => {
     await page.getByRole('button', { name: 'Create assembly' }).click();
     await page.waitForURL(/\/assemblies\/[0-9a-f-]{36}$/);
 
+    // Result first on a phone: each sheet's summary (verdict and figures) stands above its inputs, no sideways scroll.
+    await page.setViewportSize({ width: 390, height: 844 });
+    for (const [tab, inputs, path] of [
+      ['Build-up & R-value', 'Build-up', /\/assemblies\/[0-9a-f-]{36}$/],
+      ['Moisture', 'Inputs — layers and their vapour data', /\/moisture$/],
+      ['Attachment & wind', 'Inputs — site and wind', /\/attachment$/],
+      ['Joints & quantities', 'Joint schedule — inputs', /\/joints$/],
+    ] as const) {
+      await page.getByRole('link', { name: tab, exact: true }).click();
+      await page.waitForURL(path);
+      await page.getByRole('heading', { name: inputs }).first().waitFor();
+      const summary = page.getByTestId('result-summary');
+      await summary.getByTestId('summary-verdict').waitFor();
+      expect(await summary.getByTestId('summary-verdict').textContent()).toMatch(/^[✓✕?▲]/);
+      const top = (await summary.boundingBox())!.y;
+      const heading = page.getByRole('heading', { name: inputs, exact: false }).first();
+      expect(top).toBeLessThan((await heading.boundingBox())!.y);
+      expect(await fitsWidth(page)).toBe(true);
+      await summary.screenshot({
+        path: `tests/artifacts/result-summary-${tab.split(' ')[0]!.toLowerCase()}-390.png`,
+      });
+    }
+    await page.setViewportSize({ width: 1280, height: 900 });
+
     // The checks page starts the firm's first code table; the editor opens with one empty row per criterion.
     await page.getByRole('link', { name: 'Checks', exact: true }).click();
     const start = page.getByRole('form', { name: 'Start a code table' });

@@ -57,8 +57,8 @@ export function JointsSummary({
   const figures: SummaryFigure[] = [
     { label: 'Joints that meet', value: `${passCount} of ${n}`, testId: 'summary-joints' },
     {
-      label: 'Tightest joint',
-      value: tightest ? `${tightest.name}: ${jointVerdict(tightest.r, system).text}` : '—',
+      label: tightest ? `Tightest joint: ${tightest.name}` : 'Tightest joint',
+      value: tightest ? jointVerdict(tightest.r, system).text : '—',
     },
     {
       label: 'Sealant cartridges (10.1 US fl oz)',

@@ -201,7 +201,7 @@ export function PanelInputs({
         />
       </div>
 
-      <fieldset className="flex flex-col gap-3">
+      <fieldset className="flex min-w-0 flex-col gap-3">
         <legend className="font-serif text-lg font-semibold">Load–span table (ASD allowables)</legend>
         <LibraryPick kind="panel" {...pick} />
         <div className="flex flex-wrap items-end gap-x-6 gap-y-3">
@@ -235,7 +235,7 @@ export function PanelInputs({
             <span>{errors.rows}</span>
           </p>
         ) : null}
-        <div className="overflow-x-auto">
+        <div className="relative overflow-x-auto">
           <table className="w-full border-collapse text-left text-sm" id={windFieldId('rows')}>
             <caption className="sr-only">
               Load–span table of the panel, one row per span, spans increasing
@@ -319,7 +319,7 @@ export function PanelInputs({
         )}
       </fieldset>
 
-      <fieldset className="flex flex-col gap-3">
+      <fieldset className="flex min-w-0 flex-col gap-3">
         <legend className="font-serif text-lg font-semibold">Clip capacity (ASD)</legend>
         <LibraryPick kind="clip" {...pick} />
         <div className="flex flex-wrap gap-6 text-sm">

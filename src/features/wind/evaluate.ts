@@ -9,9 +9,10 @@ import {
   type ZoneDesign,
 } from '@shared/calc/wind/schema';
 import { type ProjectForChecks, windDesignInputFor } from '@shared/checks/inputs';
-import type { EngineMessage } from '@shared/format';
+import { type EngineMessage, sentence } from '@shared/format';
 import { type AssemblyInput, attachmentSchema } from '@shared/schemas/assembly';
 import type { UnitSystem } from '@shared/units';
+import { issueWords, type ZodIssueLike } from '../../lib/issue-words';
 import {
   type AttachmentFormValues,
   panelCandidate,
@@ -79,55 +80,20 @@ const SITE_FIELDS: Record<string, { label: string; measure?: WindMeasure; where:
   heightOfComponent: { label: 'Height of the component', measure: 'length', where: 'site' },
 };
 
-interface Issue {
-  code?: string;
-  path?: PropertyKey[];
-  input?: unknown;
-  minimum?: number | bigint;
-  maximum?: number | bigint;
-  inclusive?: boolean;
-  origin?: string;
-  message?: string;
-  format?: string;
-  expected?: string;
-}
+type Issue = ZodIssueLike;
 
-const sentence = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
-
-/** A zod issue in a practitioner's words, bounds in the person's units. */
+/** A zod issue in a practitioner's words (issue-words.ts), bounds in the person's units; table rows by name. */
 export function issueText(issue: Issue, measure: WindMeasure | undefined, system: UnitSystem): string {
-  const bound = (b: number | bigint | undefined) => {
-    const si = Number(b);
+  if (issue.code === 'invalid_format') return 'Write it as L/ and a number, for example L/180.';
+  if (issue.origin === 'array' && issue.code === 'too_small')
+    return `Give at least ${String(issue.minimum)} rows.`;
+  if (issue.origin === 'array' && issue.code === 'too_big') return `At most ${String(issue.maximum)} rows.`;
+  return issueWords(issue, (si) => {
     if (!measure) return String(si);
     const unit = windUnit(measure, system);
     const shown = trimNumber(toShownWind(si, measure, system), 4);
     return unit === '' ? shown : unit === '°' ? `${shown}°` : `${shown}\u202f${unit}`;
-  };
-  switch (issue.code) {
-    case 'invalid_type':
-      return issue.expected === 'int' ? 'Enter a whole number.' : 'Enter a number.';
-    case 'too_small':
-      if (issue.origin === 'array') return `Give at least ${String(issue.minimum)} rows.`;
-      if (issue.origin === 'string') return 'Enter a value.';
-      if (Number(issue.minimum) === 0) return issue.inclusive ? 'Must be 0 or more.' : 'Must be more than 0.';
-      return issue.inclusive
-        ? `Must be at least ${bound(issue.minimum)}.`
-        : `Must be more than ${bound(issue.minimum)}.`;
-    case 'too_big':
-      if (issue.origin === 'array') return `At most ${String(issue.maximum)} rows.`;
-      if (issue.origin === 'string') return `Use at most ${String(issue.maximum)} characters.`;
-      return issue.inclusive
-        ? `Must be at most ${bound(issue.maximum)}.`
-        : `Must be less than ${bound(issue.maximum)}.`;
-    case 'invalid_value':
-      return 'Choose one of the listed options.';
-    case 'invalid_format':
-      return 'Write it as L/ and a number, for example L/180.';
-    case 'not_multiple_of':
-      return 'Enter a whole number.';
-    default:
-      return issue.message ? sentence(issue.message) : 'Not accepted.';
-  }
+  });
 }
 
 function collect(issues: Issue[], system: UnitSystem, out: Record<string, string>) {

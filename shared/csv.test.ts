@@ -34,6 +34,22 @@ describe('RFC 4180 CSV', () => {
       reason: 'a quoted field is never closed',
     });
     expect(parseCsv('a\n"x"y,z')).toMatchObject({ ok: false, line: 2 });
+    // The line of the problem, after a quoted field spanning lines.
+    expect(parseCsv('h\r\n"one\r\ntwo",x\r\nok\r\n"open')).toEqual({
+      ok: false,
+      line: 5,
+      reason: 'a quoted field is never closed',
+    });
+  });
+
+  it('reads a file with LF line ends as one with CRLF', () => {
+    expect(parseCsv('a,b\n\n"c\nd",e\n')).toEqual({
+      ok: true,
+      records: [
+        { line: 1, fields: ['a', 'b'] },
+        { line: 3, fields: ['c\nd', 'e'] },
+      ],
+    });
   });
 
   it('neutralises text a spreadsheet would run as a formula, leaves numbers alone and reads both back', () => {

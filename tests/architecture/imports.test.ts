@@ -43,7 +43,7 @@ const FEATURE_USES: Record<string, string[]> = {
   'features/joints': ['features/takeoff'],
 };
 
-const SHARED_ALLOWED = /^(zod|mathjs|convert-units|@shared\/|@data\/reference\/|\.{1,2}\/)/;
+const SHARED_ALLOWED = /^(zod|mathjs|convert-units|papaparse|@shared\/|@data\/reference\/|\.{1,2}\/)/;
 
 describe('import rules', () => {
   it('shared/ imports only shared/, zod, small pure libraries and data/reference', () => {

@@ -112,33 +112,35 @@ export function createLoaders(queryClient: QueryClient) {
 
       /** The frame of a project: the project itself. */
       project: (async ({ params }) => {
-        await need(projectQueryOptions(idOf(params.id, 'project')));
+        await need(projectQueryOptions(idOf(params.projectId, 'project')));
         return null;
       }) satisfies Loader,
       assemblies: (({ params }) =>
         warm(
-          assembliesQueryOptions(params.id ?? ''),
+          assembliesQueryOptions(params.projectId ?? ''),
           projectsQueryOptions({ archived: false }),
         )) satisfies Loader,
-      newAssembly: (({ params }) => builderLibrary(params.id ?? '')) satisfies Loader,
-      compare: (({ params }) => warm(assembliesQueryOptions(params.id ?? ''))) satisfies Loader,
+      newAssembly: (({ params }) => builderLibrary(params.projectId ?? '')) satisfies Loader,
+      compare: (({ params }) => warm(assembliesQueryOptions(params.projectId ?? ''))) satisfies Loader,
       submittals: (({ params, request }) =>
-        warm(submittalsQueryOptions(params.id ?? '', submittalStatusOf(search(request))))) satisfies Loader,
-      newSubmittal: (({ params }) => warm(membersQueryOptions(params.id ?? ''))) satisfies Loader,
+        warm(
+          submittalsQueryOptions(params.projectId ?? '', submittalStatusOf(search(request))),
+        )) satisfies Loader,
+      newSubmittal: (({ params }) => warm(membersQueryOptions(params.projectId ?? ''))) satisfies Loader,
       submittal: (({ params }) =>
         warm(
           submittalQueryOptions(idOf(params.submittalId, 'submittal')),
-          membersQueryOptions(params.id ?? ''),
+          membersQueryOptions(params.projectId ?? ''),
         )) satisfies Loader,
       checkRunSheet: (({ params }) =>
         warm(checkRunQueryOptions(idOf(params.runId, 'check run')))) satisfies Loader,
-      members: (({ params }) => warm(membersQueryOptions(params.id ?? ''))) satisfies Loader,
-      activity: (({ params }) => warm(auditQueryOptions(params.id ?? ''))) satisfies Loader,
+      members: (({ params }) => warm(membersQueryOptions(params.projectId ?? ''))) satisfies Loader,
+      activity: (({ params }) => warm(auditQueryOptions(params.projectId ?? ''))) satisfies Loader,
 
       /** The frame of an assembly: it and its project; an assembly of another project is not found here. */
       assembly: (async ({ params }) => {
         const [project, assembly] = await Promise.all([
-          need(projectQueryOptions(idOf(params.id, 'project'))),
+          need(projectQueryOptions(idOf(params.projectId, 'project'))),
           need(assemblyQueryOptions(idOf(params.assemblyId, 'assembly'))),
         ]);
         if (assembly.projectId !== project.id)
@@ -147,17 +149,20 @@ export function createLoaders(queryClient: QueryClient) {
       }) satisfies Loader,
       builder: (async ({ params }) => {
         await Promise.all([
-          builderLibrary(params.id ?? ''),
+          builderLibrary(params.projectId ?? ''),
           warm(revisionsQueryOptions(params.assemblyId ?? ''), projectsQueryOptions({ archived: false })),
         ]);
         return null;
       }) satisfies Loader,
       attachment: (async ({ params }) => {
-        const firm = firmOf(await me(), (await need(projectQueryOptions(params.id ?? ''))).organisationId);
+        const firm = firmOf(
+          await me(),
+          (await need(projectQueryOptions(params.projectId ?? ''))).organisationId,
+        );
         return firm ? warm(attachmentProductsQueryOptions(firm.id)) : null;
       }) satisfies Loader,
       checks: (async ({ params, request }) => {
-        const projectId = params.id ?? '';
+        const projectId = params.projectId ?? '';
         const assemblyId = params.assemblyId ?? '';
         const runs = queryClient
           .ensureQueryData(checkRunsQueryOptions(projectId, assemblyId))
@@ -169,7 +174,7 @@ export function createLoaders(queryClient: QueryClient) {
       revision: (async ({ params }) => {
         const n = revisionOf(params.revision);
         await Promise.all([
-          builderLibrary(params.id ?? ''),
+          builderLibrary(params.projectId ?? ''),
           warm(revisionsQueryOptions(params.assemblyId ?? '')),
           n === null ? null : warm(revisionQueryOptions(params.assemblyId ?? '', n)),
         ]);

@@ -82,7 +82,7 @@ export function createAppRouter(queryClient: QueryClient) {
                   ...page(() => import('./routes/NewProjectPage').then((m) => m.NewProjectPage)),
                 },
                 {
-                  path: '/projects/:id',
+                  path: '/projects/:projectId',
                   loader: load('project'),
                   element: <ProjectLayout />,
                   children: [

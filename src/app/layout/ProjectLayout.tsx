@@ -12,8 +12,8 @@ const tabClass = ({ isActive }: { isActive: boolean }) =>
 
 /** The frame around every project page: its name, the sheet index (overview / assemblies / climate / people / activity). */
 export function ProjectLayout() {
-  const { id = '' } = useParams();
-  const project = useProject(id);
+  const { projectId = '' } = useParams();
+  const project = useProject(projectId);
 
   if (project.isPending) return <Loading what="Loading the project" />;
   if (project.isError) return <Notice tone="caution" title={errorMessage(project.error)} live />;

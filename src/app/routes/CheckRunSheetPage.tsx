@@ -14,8 +14,8 @@ import { useUnitSystem } from '../../lib/unit-system';
 
 /** The compliance sheet of one stored check run: produce it, preview it, download it. */
 export function CheckRunSheetPage() {
-  const { id = '', runId = '' } = useParams();
-  const { data: project } = useProject(id);
+  const { projectId = '', runId = '' } = useParams();
+  const { data: project } = useProject(projectId);
   const run = useCheckRun(runId);
   const preferred = useUnitSystem();
   const [units, setUnits] = useState<UnitSystem>(preferred);

@@ -8,11 +8,11 @@ import { useProject } from '../../features/projects/api/get-project';
 import { errorMessage } from '../../lib/api';
 
 export function CompareAssembliesPage() {
-  const { id = '' } = useParams();
+  const { projectId = '' } = useParams();
   const [params] = useSearchParams();
   const navigate = useNavigate();
-  const { data: project } = useProject(id);
-  const list = useAssemblies(id);
+  const { data: project } = useProject(projectId);
+  const list = useAssemblies(projectId);
   const items = parseCompareParams(params);
   if (!project) return null;
 

@@ -43,7 +43,7 @@ function renderNew(search: string) {
   });
   qc.setQueryData(projectKeys.detail(id), project);
   const router = createMemoryRouter(
-    [{ path: '/projects/:id/assemblies/new', element: <NewAssemblyPage /> }],
+    [{ path: '/projects/:projectId/assemblies/new', element: <NewAssemblyPage /> }],
     { initialEntries: [`/projects/${id}/assemblies/new${search}`] },
   );
   return render(

@@ -19,10 +19,10 @@ const DEFAULT_TEMPLATE = ASSEMBLY_TEMPLATES[0]!;
 const blankInput = () => ({ ...startingInput('blank'), wallCategory: '' }) as unknown as AssemblyInput;
 
 export function NewAssemblyPage() {
-  const { id = '' } = useParams();
+  const { projectId = '' } = useParams();
   const [params] = useSearchParams();
   const navigate = useNavigate();
-  const { data: project } = useProject(id);
+  const { data: project } = useProject(projectId);
   const start = params.get('start');
   const template = start === 'blank' ? undefined : (findTemplate(start) ?? DEFAULT_TEMPLATE);
   const initial = useMemo(() => template?.input ?? blankInput(), [template]);

@@ -10,11 +10,11 @@ import { errorMessage } from '../../lib/api';
 
 /** Start a submittal: its details and reviewers; items are added on its page. */
 export function NewSubmittalPage() {
-  const { id = '' } = useParams();
+  const { projectId = '' } = useParams();
   const navigate = useNavigate();
-  const { data: project } = useProject(id);
-  const members = useMembers(id);
-  const create = useCreateSubmittal(id);
+  const { data: project } = useProject(projectId);
+  const members = useMembers(projectId);
+  const create = useCreateSubmittal(projectId);
   if (!project) return null;
   if (!can(project.myRole, 'submittal.create') || project.archivedAt)
     return <Notice tone="caution" title="Your role on this project does not start submittals." />;

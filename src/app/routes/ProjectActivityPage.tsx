@@ -8,8 +8,8 @@ import { useProject } from '../../features/projects/api/get-project';
 import { errorMessage } from '../../lib/api';
 
 export function ProjectActivityPage() {
-  const { id = '' } = useParams();
-  const { data: project } = useProject(id);
+  const { projectId = '' } = useParams();
+  const { data: project } = useProject(projectId);
   const allowed = can(project?.myRole, 'audit.read');
   if (!project) return null;
   return (
@@ -19,7 +19,7 @@ export function ProjectActivityPage() {
         Activity
       </h2>
       {allowed ? (
-        <AuditSection projectId={id} />
+        <AuditSection projectId={projectId} />
       ) : (
         <Notice tone="info" title="Your role on this project does not include the activity record." />
       )}

@@ -5,8 +5,8 @@ import { useProject } from '../../features/projects/api/get-project';
 import { useAssemblyCopyTargets } from '../../features/projects/api/get-projects';
 
 export function ProjectAssembliesPage() {
-  const { id = '' } = useParams();
-  const { data: project } = useProject(id);
+  const { projectId = '' } = useParams();
+  const { data: project } = useProject(projectId);
   const targets = useAssemblyCopyTargets();
   if (!project) return null;
   const mayWrite = can(project.myRole, 'assembly.write') && project.archivedAt === null;

@@ -8,9 +8,9 @@ import { useProject } from '../../features/projects/api/get-project';
 
 /** The project's monthly climate and interior conditions, read by the moisture sheet of every assembly. */
 export function ProjectClimatePage() {
-  const { id = '' } = useParams();
+  const { projectId = '' } = useParams();
   const [params, setParams] = useSearchParams();
-  const { data: project } = useProject(id);
+  const { data: project } = useProject(projectId);
   if (!project) return null;
 
   const archived = project.archivedAt !== null;

@@ -11,10 +11,10 @@ import { useProject } from '../../features/projects/api/get-project';
 import { errorMessage } from '../../lib/api';
 
 export function ProjectMembersPage() {
-  const { id = '' } = useParams();
-  const { data: project } = useProject(id);
+  const { projectId = '' } = useParams();
+  const { data: project } = useProject(projectId);
   const me = useMe();
-  const members = useMembers(id);
+  const members = useMembers(projectId);
   if (!project) return null;
 
   const mayInvite = can(project.myRole, 'members.invite') && project.archivedAt === null;
@@ -32,7 +32,7 @@ export function ProjectMembersPage() {
           <Notice tone="caution" title={errorMessage(members.error)} live />
         ) : (
           <MembersTable
-            projectId={id}
+            projectId={projectId}
             members={members.data.members}
             myRole={project.myRole}
             myUserId={me.data?.id}
@@ -43,7 +43,7 @@ export function ProjectMembersPage() {
       {mayInvite ? (
         <>
           <section className="border-t border-ink pt-6">
-            <InviteForm projectId={id} myRole={project.myRole} />
+            <InviteForm projectId={projectId} myRole={project.myRole} />
           </section>
           <section aria-labelledby="pending-heading" className="flex flex-col gap-3">
             <h2 id="pending-heading" className="text-xl">

@@ -40,7 +40,7 @@ const base: Project = {
 function renderOverview(myRole: ProjectRole, system: 'SI' | 'IP' = 'SI') {
   const qc = new QueryClient({ defaultOptions: { queries: { staleTime: Number.POSITIVE_INFINITY } } });
   qc.setQueryData(projectKeys.detail(id), { ...base, myRole });
-  const router = createMemoryRouter([{ path: '/projects/:id', element: <ProjectOverviewPage /> }], {
+  const router = createMemoryRouter([{ path: '/projects/:projectId', element: <ProjectOverviewPage /> }], {
     initialEntries: [`/projects/${id}`],
   });
   return render(

@@ -9,9 +9,9 @@ import { ProjectEditor } from '../../features/projects/components/ProjectEditor'
 import { ProjectTitleBlock } from '../../features/projects/components/ProjectTitleBlock';
 
 export function ProjectOverviewPage() {
-  const { id = '' } = useParams();
+  const { projectId = '' } = useParams();
   const [params, setParams] = useSearchParams();
-  const { data: project } = useProject(id);
+  const { data: project } = useProject(projectId);
   if (!project) return null;
 
   const archived = project.archivedAt !== null;

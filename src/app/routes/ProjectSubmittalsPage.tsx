@@ -14,12 +14,12 @@ import { submittalStatusOf } from '../route-params';
 
 /** The project's submittals, filtered by status (kept in the address so it can be shared). */
 export function ProjectSubmittalsPage() {
-  const { id = '' } = useParams();
+  const { projectId = '' } = useParams();
   const filterId = useId();
   const [params, setParams] = useSearchParams();
   const status = submittalStatusOf(params);
-  const { data: project } = useProject(id);
-  const list = useSubmittals(id, status);
+  const { data: project } = useProject(projectId);
+  const list = useSubmittals(projectId, status);
   if (!project) return null;
   const mayCreate = can(project.myRole, 'submittal.create') && project.archivedAt === null;
 

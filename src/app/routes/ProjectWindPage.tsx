@@ -8,9 +8,9 @@ import { BuildingDimensions, ProjectWindSummary } from '../../features/wind/comp
 
 /** The project's ASCE 7 wind data, read by the attachment (wind) sheet of every assembly. */
 export function ProjectWindPage() {
-  const { id = '' } = useParams();
+  const { projectId = '' } = useParams();
   const [params, setParams] = useSearchParams();
-  const { data: project } = useProject(id);
+  const { data: project } = useProject(projectId);
   if (!project) return null;
 
   const archived = project.archivedAt !== null;

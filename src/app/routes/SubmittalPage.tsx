@@ -95,8 +95,8 @@ function EditDetails({ s }: { s: Submittal }) {
 
 /** One revision of a submittal: what it is, its items, the review and the comments. */
 export function SubmittalPage() {
-  const { id = '', submittalId = '' } = useParams();
-  const { data: project } = useProject(id);
+  const { projectId = '', submittalId = '' } = useParams();
+  const { data: project } = useProject(projectId);
   const me = useMe();
   const submittal = useSubmittal(submittalId);
   if (!project) return null;

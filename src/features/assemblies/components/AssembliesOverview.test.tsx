@@ -51,12 +51,12 @@ function renderList(duplicateTargets?: typeof targets) {
   const router = createMemoryRouter(
     [
       {
-        path: '/projects/:id/assemblies',
+        path: '/projects/:projectId/assemblies',
         element: (
           <AssembliesOverview projectId={projectId} mayWrite searchable duplicateTargets={duplicateTargets} />
         ),
       },
-      { path: '/projects/:id/assemblies/:assemblyId', element: <p>the copy’s page</p> },
+      { path: '/projects/:projectId/assemblies/:assemblyId', element: <p>the copy’s page</p> },
     ],
     { initialEntries: [`/projects/${projectId}/assemblies`] },
   );

@@ -16,7 +16,7 @@ function renderBuilder(system: 'SI' | 'IP' = 'SI', initial = startingInput('samp
   const router = createMemoryRouter(
     [
       {
-        path: '/projects/:id/assemblies/new',
+        path: '/projects/:projectId/assemblies/new',
         element: <AssemblyBuilder projectId={projectId} initial={initial} />,
       },
     ],

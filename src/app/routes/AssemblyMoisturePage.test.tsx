@@ -82,7 +82,7 @@ function renderPage({
   const router = createMemoryRouter(
     [
       {
-        path: '/projects/:id/assemblies/:assemblyId',
+        path: '/projects/:projectId/assemblies/:assemblyId',
         element: <AssemblyLayout />,
         children: [{ path: 'moisture', element: <AssemblyMoisturePage /> }],
       },

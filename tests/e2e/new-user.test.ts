@@ -97,6 +97,21 @@ describe('a new user from sign-up to the compliance sheet', () => {
     await page.getByRole('button', { name: 'Create assembly' }).click();
     await page.waitForURL(/\/assemblies\/[0-9a-f-]{36}$/);
 
+    // In inch-pound units at 1280 px no label of the build-up (λ with its long unit) runs past its column.
+    await page.getByRole('button', { name: 'Inch-pound units (ft, °F)' }).click();
+    await page
+      .getByText(/Btu·in\/\(h·ft²·°F\)/)
+      .first()
+      .waitFor();
+    const overruns = await page.evaluate(() =>
+      [...document.querySelectorAll('form[aria-label="Assembly builder"] label')]
+        .filter((l) => l.scrollWidth > l.clientWidth + 1)
+        .map((l) => l.textContent),
+    );
+    expect(overruns).toEqual([]);
+    await page.getByRole('button', { name: 'SI units (m, °C)' }).click();
+    await page.getByRole('button', { name: 'SI units (m, °C)', pressed: true }).waitFor();
+
     // Result first on a phone: each sheet's summary (verdict and figures) stands above its inputs, no sideways scroll.
     await page.setViewportSize({ width: 390, height: 844 });
     for (const [tab, inputs, path] of [

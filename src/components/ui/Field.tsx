@@ -44,7 +44,10 @@ export function Field({ label, unit, hint, error, required, id, className = '', 
         {unit ? (
           <span className="num ml-1 font-normal text-ink-muted">
             <span className="sr-only">, in {unit}</span>
-            <span aria-hidden="true">({unit})</span>
+            {/* A long unit (Btu·in/(h·ft²·°F)) wraps inside a narrow column rather than run under the next box. */}
+            <span aria-hidden="true" className="[overflow-wrap:anywhere]">
+              ({unit})
+            </span>
           </span>
         ) : null}
         {/* The control carries aria-required; the asterisk is for the eye only. */}

@@ -1,0 +1,162 @@
+import { z } from 'zod';
+import { movementClassSchema } from '../calc/joints/schema';
+import { criteriaRowsSchema } from '../checks/criteria';
+import { verdictSchema } from '../checks/report';
+import { assemblyInputSchema } from '../schemas/assembly';
+import { projectClimateSchema, projectSiteSchema, projectWindSchema } from '../schemas/project';
+
+/*
+ * A sweep: one to three parameters of an assembly, each a range or a list; every combination (a variant) is
+ * checked by the compliance runner against the rows of one code table version. SI throughout. Whether a
+ * parameter exists on the assembly, steps, empty lists and the variant cap are the engine's refusals
+ * (`planSweep`, CalcInputError naming the field), so the client's worker gets the same words as the API.
+ */
+
+/** Most values one list may name. */
+export const SWEEP_MAX_LIST = 1000;
+
+const bound = z
+  .number()
+  .min(-1e6)
+  .max(1e6)
+  .describe('SI value of the parameter (the bounds of the field it varies apply: see the parameter)');
+
+/** start, start + step, … up to stop (stop included when it falls on a step). */
+const rangeSchema = z
+  .object({ start: bound, stop: bound, step: bound.describe('Step, SI, greater than 0') })
+  .describe('start, start + step, … up to stop');
+const index = (what: string) =>
+  z.number().int().min(0).max(99).describe(`Index of the ${what} in the assembly, counted from 0`);
+
+/** A numeric parameter: where it sits, and a range or a list of its values (one of the two). */
+const numeric = <K extends string, S extends z.ZodRawShape>(kind: K, what: string, target: S) =>
+  z
+    .object({
+      kind: z.literal(kind),
+      ...target,
+      range: rangeSchema.optional(),
+      list: z.array(bound).max(SWEEP_MAX_LIST).optional().describe('The values, SI, one or more'),
+    })
+    .describe(`${what}; give a range or a list`);
+
+export const sweepParameterSchema = z.discriminatedUnion('kind', [
+  numeric('insulationThickness', 'Thickness of one homogeneous or framed layer, m', {
+    layer: index('layer'),
+  }),
+  numeric(
+    'girtSpacing',
+    'Design girt spacing, m; the girt bridges (ψ by spacing, and the clips’ spacing across the girts) follow it',
+    {},
+  ),
+  numeric(
+    'clipSpacing',
+    'Design clip spacing along a girt, m; the clip bridges’ spacing along the girts follows it',
+    {},
+  ),
+  numeric('clipChi', 'χ of one point bridge (a clip), W/K', { bridge: index('bridge') }),
+  numeric('studSpacing', 'Member spacing of one metal-framed layer, m; the framing fractions follow it', {
+    layer: index('layer'),
+  }),
+  numeric(
+    'panelModule',
+    'Panel module width, m (the wind panel’s tributary width, and the takeoff’s module)',
+    {},
+  ),
+  z
+    .object({
+      kind: z.literal('sealantClass'),
+      joint: index('joint').optional().describe('Index of the joint; omitted: every joint'),
+      list: z.array(movementClassSchema).max(SWEEP_MAX_LIST).describe('ASTM C920 movement classes'),
+    })
+    .describe('Sealant movement class of one joint or of every joint'),
+]);
+export type SweepParameter = z.infer<typeof sweepParameterSchema>;
+export type SweepParameterKind = SweepParameter['kind'];
+
+export const sweepParametersSchema = z
+  .array(sweepParameterSchema)
+  .min(1, 'choose at least one parameter to vary')
+  .max(3, 'at most three parameters at once');
+
+/** The project data the checks read (a stored project's, without its records). */
+export const projectForChecksSchema = projectSiteSchema.omit({ siteAddress: true }).extend({
+  wind: projectWindSchema.nullable(),
+  climate: projectClimateSchema.nullable(),
+});
+
+/** Costs of what varies, each per unit, in the firm's currency (any one currency for all). */
+export const sweepCostsSchema = z.object({
+  insulation: z
+    .number()
+    .min(0)
+    .max(1e6)
+    .optional()
+    .describe('Insulation: cost per m² of wall per 25 mm of thickness'),
+  clip: z.number().min(0).max(1e6).optional().describe('Cost per clip'),
+  girt: z.number().min(0).max(1e6).optional().describe('Cost per m of girt'),
+  sealant: z
+    .object({
+      perMetre: z
+        .partialRecord(movementClassSchema, z.number().min(0).max(1e6))
+        .describe('Cost per m by class'),
+      metresPerSquareMetre: z.number().min(0).max(1000).describe('Metres of sealant per m² of wall, m/m²'),
+    })
+    .optional(),
+});
+export type SweepCosts = z.infer<typeof sweepCostsSchema>;
+
+/** `POST /api/v1/calc/sweep`: an assembly, its project, the rows of a code table version and what to vary. */
+export const sweepRequestSchema = z.object({
+  assembly: assemblyInputSchema,
+  project: projectForChecksSchema,
+  rows: criteriaRowsSchema.describe('The rows of the code table version to check against'),
+  parameters: sweepParametersSchema,
+  costs: sweepCostsSchema
+    .optional()
+    .describe('Given: the passing variants ranked by the cost of what varies'),
+});
+export type SweepRequest = z.infer<typeof sweepRequestSchema>;
+
+const marginSchema = z.object({
+  id: z.string(),
+  status: z.enum(['pass', 'fail', 'not_evaluated']),
+  margin: z.number().nullable().describe('Signed, SI, in the criterion’s direction: ≥ 0 meets'),
+  marginRatio: z.number().nullable().describe('margin / |required|'),
+});
+export const sweepVariantResultSchema = z.object({
+  index: z.number().int().describe('Position in the enumeration (the last parameter varies fastest)'),
+  values: z.array(z.union([z.number(), z.string()])).describe('One value per parameter, in their order'),
+  verdict: verdictSchema,
+  governing: marginSchema
+    .extend({ label: z.string() })
+    .nullable()
+    .describe('The check that decides: the worst failing, else one not evaluated, else the tightest passing'),
+  checks: z.array(marginSchema),
+});
+export type SweepVariantResult = z.infer<typeof sweepVariantResultSchema>;
+
+export const rankedVariantSchema = z.object({
+  index: z.number().int(),
+  values: z.array(z.union([z.number(), z.string()])),
+  cost: z.number().describe('Cost of what varies per m² of wall'),
+  governing: sweepVariantResultSchema.shape.governing,
+});
+export const sweepRankingSchema = z.object({
+  ranked: z.array(rankedVariantSchema).describe('Passing variants, cheapest first'),
+  runnerUp: z
+    .object({
+      costDifference: z.number().describe('Runner-up cost − cheapest cost, per m² of wall'),
+      costRatio: z.number().nullable().describe('costDifference / cheapest cost (null when it costs 0)'),
+    })
+    .nullable(),
+  notPassing: z.number().int().describe('Variants left out: failing or incomplete'),
+});
+export type SweepRanking = z.infer<typeof sweepRankingSchema>;
+
+export const sweepResultSchema = z.object({
+  count: z.number().int(),
+  parameters: z.array(z.object({ kind: z.string(), values: z.array(z.union([z.number(), z.string()])) })),
+  variants: z.array(sweepVariantResultSchema),
+  ranking: sweepRankingSchema.nullable(),
+});
+export type SweepResult = z.infer<typeof sweepResultSchema>;

@@ -1,0 +1,428 @@
+import { CalcInputError } from '../calc/errors';
+import type { MovementClass } from '../calc/joints/schema';
+import {
+  framedLayerSchema,
+  homogeneousLayerSchema,
+  pointBridgeBySpacingSchema,
+} from '../calc/thermal/schema';
+import { panelSchema } from '../calc/wind/schema';
+import type { CriteriaRowInput } from '../checks/criteria';
+import type { ProjectForChecks } from '../checks/inputs';
+import type { CheckModule } from '../checks/module';
+import { CHECK_MODULES } from '../checks/modules';
+import type { Check, CheckReport } from '../checks/report';
+import { runChecks } from '../checks/runner';
+import type { AssemblyInput } from '../schemas/assembly';
+import { attachmentSchema } from '../schemas/assembly';
+import type { SweepParameter, SweepResult, SweepVariantResult } from './schema';
+
+/*
+ * The sweep engine: plan (every refusal before any work), apply one variant to an assembly (a new document;
+ * the parts it does not touch are shared), enumerate lazily, and run each variant through the one compliance
+ * runner (shared/checks/runner.ts) with the registered modules.
+ */
+
+type Value = number | string;
+type Assembly = AssemblyInput;
+
+/** One parameter, planned: its values, which modules it can change, and how it goes onto a document. */
+export interface SweepAxis {
+  kind: SweepParameter['kind'];
+  values: readonly Value[];
+  /** Ids of the check modules whose input this parameter changes. */
+  touches: readonly string[];
+  apply(a: Assembly, value: Value): Assembly;
+}
+
+export interface SweepPlan {
+  axes: SweepAxis[];
+  count: number;
+}
+
+/** Number of values of start, start + step, … ≤ stop; the 1e-9 absorbs binary noise in (stop − start)/step. */
+export const rangeCount = (start: number, stop: number, step: number) =>
+  Math.floor((stop - start) / step + 1e-9) + 1;
+
+/** The i-th value of a range, rounded to 12 significant digits so 0.1 + 2·0.05 reads 0.2. */
+const rangeValue = (start: number, step: number, i: number) => Number((start + i * step).toPrecision(12));
+
+interface Bounds {
+  safeParse(v: unknown): { success: boolean; error?: { issues: { message: string }[] } };
+}
+
+/** Every value a parameter names, refused at its field when the step, the list or a value cannot be. */
+function numericValues(
+  p: Extract<SweepParameter, { range?: unknown }>,
+  at: string,
+  bounds: Bounds,
+  cap: number,
+): number[] {
+  const { range, list } = p;
+  if (range && list) throw new CalcInputError(at, 'give a range or a list, not both');
+  if (list) {
+    if (list.length === 0)
+      throw new CalcInputError(`${at}.list`, 'the list is empty: name one value or more');
+    for (const [i, v] of list.entries()) checkBounds(v, `${at}.list.${i}`, bounds);
+    return [...list];
+  }
+  if (!range) throw new CalcInputError(at, 'give a range (start, stop, step) or a list of values');
+  if (!(range.step > 0))
+    throw new CalcInputError(`${at}.range.step`, `the step must be greater than 0 (got ${range.step})`);
+  if (range.stop < range.start)
+    throw new CalcInputError(
+      `${at}.range.stop`,
+      `the stop (${range.stop}) is below the start (${range.start})`,
+    );
+  checkBounds(range.start, `${at}.range.start`, bounds);
+  checkBounds(range.stop, `${at}.range.stop`, bounds);
+  const n = rangeCount(range.start, range.stop, range.step);
+  if (n > cap)
+    throw new CalcInputError(
+      `${at}.range.step`,
+      `the range alone has ${n} values — at most ${cap} variants in all`,
+    );
+  return Array.from({ length: n }, (_, i) => rangeValue(range.start, range.step, i));
+}
+
+function checkBounds(v: number, field: string, bounds: Bounds) {
+  const r = bounds.safeParse(v);
+  if (!r.success)
+    throw new CalcInputError(field, r.error?.issues[0]?.message ?? 'outside the field’s bounds');
+}
+
+const replaceAt = <T>(list: readonly T[], i: number, item: T): T[] =>
+  list.map((x, j) => (j === i ? item : x));
+
+/** The layer at `index`, refused when there is none or it is not one of `kinds`. */
+function layerAt(a: Assembly, index: number, field: string, kinds: readonly string[], what: string) {
+  const layer = a.thermal.layers[index];
+  if (!layer)
+    throw new CalcInputError(
+      field,
+      `the assembly has ${a.thermal.layers.length} layers (0 to ${a.thermal.layers.length - 1})`,
+    );
+  if (!kinds.includes(layer.kind))
+    throw new CalcInputError(field, `layer ${index} (${layer.name}) is a ${layer.kind} layer: ${what}`);
+  return layer;
+}
+
+/**
+ * Bridges that follow the girts or the clips: linear bridges by spacing at the design girt spacing, and point
+ * bridges whose spacing across the girts (girts horizontal: vertical) is the girt spacing, or along them the
+ * clip spacing. Matched once, on the assembly as given, so two spacings varied together do not confuse them.
+ */
+function followers(a: Assembly, spacing: 'girt' | 'clip') {
+  const design = spacing === 'girt' ? a.attachment.girtSpacing : a.attachment.clipSpacing;
+  const horizontal = a.attachment.girtOrientation === 'horizontal';
+  const across = horizontal ? 'spacingVertical' : 'spacingHorizontal';
+  const along = horizontal ? 'spacingHorizontal' : 'spacingVertical';
+  const out: { index: number; key: 'spacing' | 'spacingVertical' | 'spacingHorizontal' }[] = [];
+  a.thermal.bridges.forEach((b, index) => {
+    if (spacing === 'girt' && b.kind === 'linear' && 'spacing' in b && b.spacing === design)
+      out.push({ index, key: 'spacing' });
+    if (b.kind === 'point' && 'spacingVertical' in b) {
+      const key = spacing === 'girt' ? across : along;
+      if (b[key] === design) out.push({ index, key });
+    }
+  });
+  return out;
+}
+
+function setBridgeSpacing(a: Assembly, follow: ReturnType<typeof followers>, v: number): Assembly['thermal'] {
+  let bridges = a.thermal.bridges;
+  for (const f of follow)
+    bridges = replaceAt(bridges, f.index, { ...bridges[f.index]!, [f.key]: v } as (typeof bridges)[number]);
+  return { ...a.thermal, bridges };
+}
+
+const unwrap = <T extends { unwrap(): Bounds }>(s: T) => s.unwrap();
+
+/** One parameter planned against the assembly: every refusal of a parameter the assembly does not have. */
+function planAxis(a: Assembly, p: SweepParameter, at: string, cap: number): SweepAxis {
+  switch (p.kind) {
+    case 'insulationThickness': {
+      layerAt(
+        a,
+        p.layer,
+        `${at}.layer`,
+        ['homogeneous', 'framed'],
+        'only a homogeneous or framed layer has a thickness to vary',
+      );
+      return {
+        kind: p.kind,
+        values: numericValues(p, at, homogeneousLayerSchema.shape.thickness, cap),
+        touches: ['thermal', 'moisture'],
+        apply: (d, v) => {
+          const layer = d.thermal.layers[p.layer]!;
+          return {
+            ...d,
+            thermal: {
+              ...d.thermal,
+              layers: replaceAt(d.thermal.layers, p.layer, { ...layer, thickness: v as number }),
+            },
+          };
+        },
+      };
+    }
+    case 'girtSpacing':
+    case 'clipSpacing': {
+      const girt = p.kind === 'girtSpacing';
+      if (a.attachment[p.kind] === undefined)
+        throw new CalcInputError(
+          at,
+          `the assembly has no design ${girt ? 'girt' : 'clip'} spacing (attachment.${p.kind}): enter it first`,
+        );
+      const follow = followers(a, girt ? 'girt' : 'clip');
+      return {
+        kind: p.kind,
+        values: numericValues(p, at, unwrap(attachmentSchema.shape[p.kind]), cap),
+        touches: follow.length > 0 ? ['thermal', 'wind'] : ['wind'],
+        apply: (d, v) => ({
+          ...d,
+          attachment: { ...d.attachment, [p.kind]: v as number },
+          thermal: follow.length > 0 ? setBridgeSpacing(d, follow, v as number) : d.thermal,
+        }),
+      };
+    }
+    case 'clipChi': {
+      const b = a.thermal.bridges[p.bridge];
+      if (!b)
+        throw new CalcInputError(`${at}.bridge`, `the assembly has ${a.thermal.bridges.length} bridges`);
+      if (b.kind !== 'point')
+        throw new CalcInputError(
+          `${at}.bridge`,
+          `bridge ${p.bridge} (${b.name}) is not a point bridge (a clip)`,
+        );
+      return {
+        kind: p.kind,
+        values: numericValues(p, at, pointBridgeBySpacingSchema.shape.chi, cap),
+        touches: ['thermal'],
+        apply: (d, v) => {
+          const bridge = d.thermal.bridges[p.bridge]!;
+          return {
+            ...d,
+            thermal: {
+              ...d.thermal,
+              bridges: replaceAt(d.thermal.bridges, p.bridge, { ...bridge, chi: v } as typeof bridge),
+            },
+          };
+        },
+      };
+    }
+    case 'studSpacing': {
+      const layer = layerAt(a, p.layer, `${at}.layer`, ['framed'], 'only a framed layer has studs');
+      if (layer.kind !== 'framed' || !layer.metal || layer.spacing === undefined)
+        throw new CalcInputError(
+          `${at}.layer`,
+          `layer ${p.layer} (${layer.name}) is not metal framing with a spacing entered`,
+        );
+      const base = layer.spacing;
+      // The framing sections' area fractions go as 1/s (one member per spacing); the cavity (the largest section) takes the rest.
+      const cavity = layer.sections.reduce((m, s, i, all) => (s.fraction > all[m]!.fraction ? i : m), 0);
+      const values = numericValues(p, at, unwrap(framedLayerSchema.shape.spacing), cap);
+      values.forEach((v, i) => {
+        const framing = layer.sections.reduce(
+          (sum, s, j) => (j === cavity ? sum : sum + (s.fraction * base) / v),
+          0,
+        );
+        if (framing >= 1)
+          throw new CalcInputError(
+            `${at}.${p.list ? `list.${i}` : 'range.start'}`,
+            `at ${v} m the framing would fill the whole layer`,
+          );
+      });
+      return {
+        kind: p.kind,
+        values,
+        touches: ['thermal', 'moisture'],
+        apply: (d, v) => {
+          const l = d.thermal.layers[p.layer]!;
+          if (l.kind !== 'framed') return d;
+          const scaled = l.sections.map((s, j) =>
+            j === cavity ? s : { ...s, fraction: (s.fraction * base) / (v as number) },
+          );
+          const rest = 1 - scaled.reduce((sum, s, j) => (j === cavity ? sum : sum + s.fraction), 0);
+          const sections = scaled.map((s, j) => (j === cavity ? { ...s, fraction: rest } : s));
+          return {
+            ...d,
+            thermal: {
+              ...d.thermal,
+              layers: replaceAt(d.thermal.layers, p.layer, { ...l, spacing: v as number, sections }),
+            },
+          };
+        },
+      };
+    }
+    case 'panelModule': {
+      if (!a.windPanel)
+        throw new CalcInputError(at, 'the assembly has no wind panel (windPanel): enter the panel first');
+      return {
+        kind: p.kind,
+        values: numericValues(p, at, panelSchema.shape.panelModuleWidth, cap),
+        touches: ['wind'],
+        apply: (d, v) => ({
+          ...d,
+          windPanel: d.windPanel && { ...d.windPanel, panelModuleWidth: v as number },
+          takeoff: d.takeoff && { ...d.takeoff, module: { ...d.takeoff.module, width: v as number } },
+        }),
+      };
+    }
+    case 'sealantClass': {
+      const joints = a.joints ?? [];
+      if (joints.length === 0)
+        throw new CalcInputError(at, 'the assembly has no joints: enter the joint schedule first');
+      if (p.joint !== undefined && p.joint >= joints.length)
+        throw new CalcInputError(
+          `${at}.joint`,
+          `the assembly has ${joints.length} joints (0 to ${joints.length - 1})`,
+        );
+      if (p.list.length === 0)
+        throw new CalcInputError(`${at}.list`, 'the list is empty: name one class or more');
+      return {
+        kind: p.kind,
+        values: [...p.list],
+        touches: ['joints'],
+        apply: (d, v) => ({
+          ...d,
+          joints: d.joints?.map((j, i) =>
+            p.joint === undefined || i === p.joint
+              ? { ...j, sealant: { ...j.sealant, movementClass: v as MovementClass } }
+              : j,
+          ),
+        }),
+      };
+    }
+  }
+}
+
+const targetOf = (p: SweepParameter) =>
+  `${p.kind}:${'layer' in p ? p.layer : 'bridge' in p ? p.bridge : 'joint' in p ? (p.joint ?? '*') : ''}`;
+
+/**
+ * Plans a sweep: each parameter against the assembly, the number of variants against `cap` — every refusal
+ * (CalcInputError naming `parameters.<i>…`) before any variant is run.
+ */
+export function planSweep(a: Assembly, parameters: readonly SweepParameter[], cap: number): SweepPlan {
+  if (parameters.length === 0)
+    throw new CalcInputError('parameters', 'choose at least one parameter to vary');
+  if (parameters.length > 3) throw new CalcInputError('parameters', 'at most three parameters at once');
+  const seen = new Set<string>();
+  const axes = parameters.map((p, i) => {
+    const target = targetOf(p);
+    if (seen.has(target)) throw new CalcInputError(`parameters.${i}`, 'the same parameter is varied twice');
+    seen.add(target);
+    return planAxis(a, p, `parameters.${i}`, cap);
+  });
+  const count = axes.reduce((n, x) => n * x.values.length, 1);
+  if (count > cap) throw new CalcInputError('parameters', `${count} variants — at most ${cap} in one sweep`);
+  return { axes, count };
+}
+
+/** The values of variant `index` (mixed radix, the last parameter fastest). */
+export function variantValues(plan: SweepPlan, index: number): Value[] {
+  const values: Value[] = new Array(plan.axes.length);
+  let rest = index;
+  for (let i = plan.axes.length - 1; i >= 0; i--) {
+    const axis = plan.axes[i]!;
+    values[i] = axis.values[rest % axis.values.length]!;
+    rest = Math.floor(rest / axis.values.length);
+  }
+  return values;
+}
+
+/** The assembly with one variant's values put in: a new document; `a` is not changed. */
+export const applyVariant = (plan: SweepPlan, a: Assembly, values: readonly Value[]): Assembly =>
+  plan.axes.reduce((d, axis, i) => axis.apply(d, values[i]!), a);
+
+/** Every variant's index and values, lazily, in order. */
+export function* enumerateVariants(plan: SweepPlan): Generator<{ index: number; values: Value[] }> {
+  for (let index = 0; index < plan.count; index++) yield { index, values: variantValues(plan, index) };
+}
+
+/** The check that decides: the worst failing; else one not evaluated; else the tightest passing. */
+export function governingCheck(checks: readonly Check[]): Check | null {
+  const rank = { fail: 0, not_evaluated: 1, pass: 2 } as const;
+  let best: Check | null = null;
+  for (const c of checks) {
+    if (best === null) best = c;
+    else if (rank[c.status] !== rank[best.status]) best = rank[c.status] < rank[best.status] ? c : best;
+    else if (c.marginRatio !== null && (best.marginRatio === null || c.marginRatio < best.marginRatio))
+      best = c;
+  }
+  return best;
+}
+
+/** One variant's report as the sweep keeps it: verdict, the governing check, each check's margin. */
+export function variantResult(index: number, values: Value[], report: CheckReport): SweepVariantResult {
+  const margin = (c: Check) => ({ id: c.id, status: c.status, margin: c.margin, marginRatio: c.marginRatio });
+  const g = governingCheck(report.checks);
+  return {
+    index,
+    values,
+    verdict: report.verdict,
+    governing: g && { ...margin(g), label: g.label },
+    checks: report.checks.map(margin),
+  };
+}
+
+/**
+ * The registered modules, each remembering its results by the values of the parameters that change its
+ * input (a module no parameter touches runs once per sweep): the runner itself is unchanged, and a result is
+ * reused only for an input that is the same. At most 256 results are kept per module.
+ */
+function rememberingModules(plan: SweepPlan, modules: readonly CheckModule[]) {
+  let values: readonly Value[] = [];
+  const wrapped = modules.map((m): CheckModule => {
+    const known = ['thermal', 'moisture', 'wind', 'joints'].includes(m.id);
+    const axes = plan.axes.map((x, i) => (!known || x.touches.includes(m.id) ? i : -1)).filter((i) => i >= 0);
+    const cache = new Map<string, { built: ReturnType<CheckModule['build']>; result?: unknown }>();
+    return {
+      ...m,
+      build: (a, p) => {
+        const key = axes.map((i) => values[i]).join('|');
+        let entry = cache.get(key);
+        if (!entry) {
+          if (cache.size >= 256) cache.clear();
+          entry = { built: m.build(a, p) };
+          cache.set(key, entry);
+        }
+        return entry.built.status === 'missing' ? entry.built : { status: 'ready', input: entry };
+      },
+      run: (input) => {
+        const entry = input as { built: { status: 'ready'; input: unknown }; result?: unknown };
+        if (!('result' in entry)) entry.result = m.run(entry.built.input);
+        return entry.result;
+      },
+    };
+  });
+  return { modules: wrapped, use: (v: readonly Value[]) => (values = v) };
+}
+
+/**
+ * Runs every variant of a sweep through the compliance runner against the rows of one code table version.
+ * A module's refusal (CalcInputError) is thrown anew for each variant it refuses, as runChecks reports it.
+ */
+export function runSweep(
+  a: Assembly,
+  project: ProjectForChecks,
+  rows: readonly CriteriaRowInput[],
+  parameters: readonly SweepParameter[],
+  cap: number,
+  modules: readonly CheckModule[] = CHECK_MODULES,
+): Omit<SweepResult, 'ranking'> & { plan: SweepPlan } {
+  const plan = planSweep(a, parameters, cap);
+  const memo = rememberingModules(plan, modules);
+  const variants: SweepVariantResult[] = [];
+  for (const { index, values } of enumerateVariants(plan)) {
+    memo.use(values);
+    variants.push(
+      variantResult(index, values, runChecks(applyVariant(plan, a, values), project, rows, memo.modules)),
+    );
+  }
+  return {
+    plan,
+    count: plan.count,
+    parameters: plan.axes.map((x) => ({ kind: x.kind, values: [...x.values] })),
+    variants,
+  };
+}

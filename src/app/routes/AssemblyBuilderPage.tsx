@@ -8,7 +8,7 @@ import { useBridgeValues } from '../../features/library/api/get-bridge-values';
 import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
 import { useMe } from '../../features/me/api/get-me';
 import { firmOf } from '../../features/me/firm';
-import { useProjects } from '../../features/projects/api/get-projects';
+import { useAssemblyCopyTargets } from '../../features/projects/api/get-projects';
 import { formatDateTime } from '../../lib/format';
 import { useAssemblyFrame } from '../layout/AssemblyLayout';
 
@@ -30,10 +30,7 @@ export function useBuilderLibrary(project: Project | undefined) {
 export function AssemblyBuilderPage() {
   const { project, assembly: a } = useAssemblyFrame();
   const library = useBuilderLibrary(project);
-  // The projects a copy may go to: those the person edits assemblies on, not archived.
-  const targets = (useProjects({ archived: false }).data ?? []).filter(
-    (p) => can(p.myRole, 'assembly.write') && p.archivedAt === null,
-  );
+  const targets = useAssemblyCopyTargets();
   const mayWrite = can(project.myRole, 'assembly.write') && project.archivedAt === null;
 
   return (

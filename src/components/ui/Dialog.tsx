@@ -10,11 +10,14 @@ export function Dialog({
   title,
   children,
   onClose,
+  wide = false,
 }: {
   open: boolean;
   title: ReactNode;
   children: ReactNode;
   onClose: () => void;
+  /** A wider box (up to 56rem) for a drawing or a table. */
+  wide?: boolean;
 }) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
@@ -34,7 +37,7 @@ export function Dialog({
         e.preventDefault();
         onClose();
       }}
-      className="m-auto w-[min(34rem,calc(100vw-2rem))] rounded-sm border border-ink bg-paper p-5 text-ink backdrop:bg-ink/50"
+      className={`m-auto ${wide ? 'w-[min(56rem,calc(100vw-2rem))]' : 'w-[min(34rem,calc(100vw-2rem))]'} rounded-sm border border-ink bg-paper p-5 text-ink backdrop:bg-ink/50`}
     >
       <h2 id={titleId} className="mb-3 text-xl">
         {title}

@@ -1,9 +1,11 @@
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import type { BridgeValue } from '@shared/schemas/assembly';
 import { isInsulation } from '@shared/sheets/layer-class';
+import { lazy, Suspense, useState } from 'react';
 import { type UseFieldArrayReturn, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { Loading } from '../../../components/ui/Loading';
 import { Select } from '../../../components/ui/Select';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { fieldDomId } from '../evaluate';
@@ -12,6 +14,9 @@ import { formatMeasure } from '../units';
 import { BlockError, MeasureField, TextField, useFieldError } from './FormFields';
 
 type BridgesArray = UseFieldArrayReturn<AssemblyFormValues, 'thermal.bridges', 'key'>;
+
+/** The solver, its worker and the map load only when a Solve dialog opens. */
+const BridgeSolveDialog = lazy(() => import('../solve/BridgeSolveDialog'));
 
 export const SOURCE_TYPE_LABELS: Record<BridgeValue['sourceType'], string> = {
   test_report: 'test report',
@@ -174,6 +179,7 @@ function PointFields({
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
         <MeasureField path={`${base}.chi`} measure="chi" label="χ per clip" className="w-44" />
+        <SolveButton index={j} bridge={bridge} array={array} />
         <Field label="Given by" className="w-48">
           {(c) => (
             <Select
@@ -249,6 +255,7 @@ function LinearFields({
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
         <MeasureField path={`${base}.psi`} measure="psi" label="ψ per length" className="w-44" />
+        <SolveButton index={j} bridge={bridge} array={array} />
         <Field label="Given by" className="w-48">
           {(c) => (
             <Select
@@ -294,6 +301,52 @@ function LinearFields({
         bridge={bridge}
       />
     </div>
+  );
+}
+
+/** "Solve χ/ψ…": the bridge solver on this assembly's layers; "Use this value" stores χ or ψ with its source. */
+function SolveButton({
+  index: j,
+  bridge,
+  array,
+}: {
+  index: number;
+  bridge: PointBridge | LinearBridge;
+  array: BridgesArray;
+}) {
+  const { control } = useFormContext<AssemblyFormValues>();
+  const layers = (useWatch({ control, name: 'thermal.layers' }) ?? []) as Layer[];
+  const [open, setOpen] = useState(false);
+  const symbol = bridge.kind === 'point' ? 'χ' : 'ψ';
+  return (
+    <>
+      <Button
+        variant="secondary"
+        className="mt-6 px-3 py-1.5"
+        aria-label={`Solve ${symbol} for ${bridge.name || `bridge ${j + 1}`}`}
+        onClick={() => setOpen(true)}
+      >
+        Solve {symbol}…
+      </Button>
+      {open ? (
+        <Suspense fallback={<Loading what="Loading the solver" />}>
+          <BridgeSolveDialog
+            bridge={bridge}
+            layers={layers}
+            onClose={() => setOpen(false)}
+            onUse={(value, text) => {
+              array.update(
+                j,
+                bridge.kind === 'point'
+                  ? { ...bridge, chi: value, source: { text } }
+                  : { ...bridge, psi: value, source: { text } },
+              );
+              setOpen(false);
+            }}
+          />
+        </Suspense>
+      ) : null}
+    </>
   );
 }
 

@@ -1,0 +1,112 @@
+import type { Bridge } from '@shared/calc/thermal/schema';
+import { ENGINE_VERSION } from '@shared/calc/trace';
+import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
+import { afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
+import { demoInput } from '../../../lib/revision-test-fixtures';
+import { UnitSystemProvider } from '../../../lib/unit-system';
+import { BridgeSolveDialog } from './BridgeSolveDialog';
+import { directRunner, runBridge } from './run-bridge';
+import type { BridgeRunner } from './runners';
+
+afterEach(cleanup);
+
+// jsdom has no modal dialogs: open and close them as a browser would, without the top layer.
+beforeAll(() => {
+  HTMLDialogElement.prototype.showModal ??= function (this: HTMLDialogElement) {
+    this.setAttribute('open', '');
+  };
+  HTMLDialogElement.prototype.close ??= function (this: HTMLDialogElement) {
+    this.removeAttribute('open');
+  };
+});
+
+const layers = demoInput.thermal.layers;
+const bridgeOf = (kind: 'point' | 'linear') =>
+  demoInput.thermal.bridges.find((b) => b.kind === kind) as Extract<Bridge, { kind: 'point' | 'linear' }>;
+
+function renderDialog(
+  kind: 'point' | 'linear',
+  runner: BridgeRunner,
+  system: 'SI' | 'IP' = 'SI',
+  onUse = vi.fn(),
+) {
+  render(
+    <UnitSystemProvider value={system}>
+      <BridgeSolveDialog
+        bridge={bridgeOf(kind)}
+        layers={layers}
+        onUse={onUse}
+        onClose={() => {}}
+        runner={runner}
+      />
+    </UnitSystemProvider>,
+  );
+  return onUse;
+}
+
+describe('Solve dialog (bridge solver on the assembly layers)', () => {
+  it('girt: prefilled from the layers, solved, and "Use this value" hands back ψ with its source', async () => {
+    const onUse = renderDialog('linear', directRunner);
+    // The demo girt runs through the 100 mm mineral wool (the first insulation layer), 1.2 m apart.
+    expect(screen.getByTestId('crossed-depth').textContent).toBe('100\u202fmm');
+    expect((screen.getByLabelText(/Girt spacing/) as HTMLInputElement).value).toBe('1200');
+    expect((screen.getByLabelText(/Steel thickness/) as HTMLInputElement).value).toBe('1.5');
+    expect(screen.getByText(/generic design values/)).toBeTruthy();
+
+    fireEvent.click(screen.getByRole('button', { name: 'Solve' }));
+    expect(screen.getByRole('button', { name: 'Cancel' })).toBeTruthy();
+    const use = await screen.findByRole('button', { name: 'Use this value' }, { timeout: 20_000 });
+    const result = screen.getByRole('region', { name: 'Result' });
+    expect(within(result).getByTestId('temperature-map')).toBeTruthy();
+    expect(within(result).getByTestId('coldest-point')).toBeTruthy();
+    expect(within(result).getByText(/maker's tested values or a specialist's model/)).toBeTruthy();
+
+    fireEvent.click(use);
+    expect(onUse).toHaveBeenCalledTimes(1);
+    const [psi, text] = onUse.mock.calls[0]!;
+    expect(psi).toBeGreaterThan(0);
+    expect(Number.isFinite(psi)).toBe(true);
+    expect(text).toMatch(
+      new RegExp(
+        `^computed by Skinwright ${ENGINE_VERSION.replace(/\./g, '\\.')}, mesh [\\d,]+ cells, \\d{4}-\\d{2}-\\d{2}$`,
+      ),
+    );
+  }, 30_000);
+
+  it('clip: a thermally broken clip starts with a pad; inputs shown in IP units', () => {
+    renderDialog('point', directRunner, 'IP');
+    expect((screen.getByLabelText(/Thermal break pad/) as HTMLInputElement).checked).toBe(true);
+    expect(screen.getByTestId('crossed-depth').textContent).toMatch(/in$/);
+    expect(screen.getByLabelText(/Spacing along the girt/)).toBeTruthy();
+  });
+
+  it('Cancel stops the solve and returns to the inputs', () => {
+    const cancel = vi.fn();
+    renderDialog('linear', () => ({ outcome: new Promise(() => {}), cancel }));
+    fireEvent.click(screen.getByRole('button', { name: 'Solve' }));
+    expect(screen.getByText(/Solving…/)).toBeTruthy();
+    fireEvent.click(screen.getByRole('button', { name: 'Cancel' }));
+    expect(cancel).toHaveBeenCalled();
+    expect(screen.getByRole('button', { name: 'Solve' })).toBeTruthy();
+  });
+
+  it('an impossible input is refused with the reason, and nothing is solved', () => {
+    const runner = vi.fn(directRunner);
+    renderDialog('linear', runner);
+    fireEvent.change(screen.getByLabelText(/Outer flange/), { target: { value: '900' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Solve' }));
+    expect(runner).not.toHaveBeenCalled();
+    expect(screen.getByRole('alert').textContent).toMatch(/outerFlange/);
+  });
+
+  it('the worker outcome of a model the solver refuses names the field', () => {
+    const outcome = runBridge({
+      dimension: '2d',
+      boxes: [{ name: 'a', lambda: 1, min: [0, 0], max: [1, 1] }],
+      boundaries: [
+        { name: 'o', side: 'outside', temperature: 0, resistance: 0.04, min: [5, 5], max: [6, 5] },
+      ],
+    });
+    expect(outcome.ok).toBe(false);
+  });
+});

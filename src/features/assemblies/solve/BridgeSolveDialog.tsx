@@ -1,0 +1,428 @@
+import { CalcInputError } from '@shared/calc/errors';
+import type { Bridge, Layer } from '@shared/calc/thermal/schema';
+import { ENGINE_VERSION } from '@shared/calc/trace';
+import { useEffect, useMemo, useState } from 'react';
+import { ZodError } from 'zod';
+import { Button } from '../../../components/ui/Button';
+import { Dialog } from '../../../components/ui/Dialog';
+import { Field } from '../../../components/ui/Field';
+import { Notice } from '../../../components/ui/Notice';
+import { QuantityInput } from '../../../components/ui/QuantityInput';
+import { Select } from '../../../components/ui/Select';
+import { formatQuantity } from '../../../lib/quantities';
+import { useUnitSystem } from '../../../lib/unit-system';
+import { formatMeasure, type Measure, measureInput } from '../units';
+import {
+  CLIP_METALS,
+  type ClipInputs,
+  computedSourceText,
+  crossedDepth,
+  GENERIC,
+  type GirtInputs,
+  initialInputs,
+  type SolveInputs,
+  solveModel,
+  type TemplateLayer,
+  templateWall,
+} from './bridge-solve';
+import type { Solved } from './run-bridge';
+import { type BridgeRunner, type RunningSolve, workerRunner } from './runners';
+import { TemperatureMap } from './TemperatureMap';
+
+type SolvableBridge = Extract<Bridge, { kind: 'point' | 'linear' }>;
+
+type Phase =
+  | { at: 'form'; problem?: string }
+  | { at: 'solving'; started: number; run: RunningSolve }
+  | {
+      at: 'done';
+      solved: Solved;
+      metal: { min: number[]; max: number[] }[];
+      warm: number;
+      cold: number;
+    };
+
+/**
+ * "Solve" for one clip (χ, 3-D) or girt (ψ, 2-D): the template's inputs from the assembly's layers, the solve
+ * off the page's thread (cancellable), the result with a temperature map, and "Use this value".
+ */
+export function BridgeSolveDialog({
+  bridge,
+  layers,
+  onUse,
+  onClose,
+  runner = workerRunner,
+}: {
+  bridge: SolvableBridge;
+  layers: Layer[];
+  onUse: (value: number, sourceText: string) => void;
+  onClose: () => void;
+  runner?: BridgeRunner;
+}) {
+  const system = useUnitSystem();
+  const [inputs, setInputs] = useState<SolveInputs>(() => initialInputs(bridge, layers));
+  const [phase, setPhase] = useState<Phase>({ at: 'form' });
+  const wall = useMemo(() => templateWall(layers).layers, [layers]);
+  const symbol = inputs.kind === 'girt' ? 'ψ' : 'χ';
+  const running = phase.at === 'solving' ? phase.run : null;
+  useEffect(() => () => running?.cancel(), [running]);
+
+  function solve() {
+    let model: ReturnType<typeof solveModel>;
+    try {
+      model = solveModel(inputs, layers);
+    } catch (e) {
+      setPhase({ at: 'form', problem: problemOf(e) });
+      return;
+    }
+    const run = runner(model);
+    setPhase({ at: 'solving', started: Date.now(), run });
+    run.outcome.then((o) => {
+      setPhase((now) => {
+        if (now.at !== 'solving' || now.run !== run) return now;
+        if (!o.ok) return { at: 'form', problem: `${o.field}: ${o.reason}` };
+        const temps = model.boundaries.map((b) => b.temperature);
+        return {
+          at: 'done',
+          solved: o.solved,
+          metal: model.boxes.filter((b) => b.lambda >= 1),
+          warm: Math.max(...temps),
+          cold: Math.min(...temps),
+        };
+      });
+    });
+  }
+
+  function cancel() {
+    running?.cancel();
+    setPhase({ at: 'form' });
+  }
+
+  const value = phase.at === 'done' ? (phase.solved.result.psi ?? phase.solved.result.chi) : null;
+
+  return (
+    <Dialog
+      open
+      wide
+      title={`Solve ${symbol} — ${bridge.name || (inputs.kind === 'girt' ? 'girt' : 'clip')}`}
+      onClose={() => {
+        running?.cancel();
+        onClose();
+      }}
+    >
+      <div className="flex max-h-[75vh] flex-col gap-4 overflow-y-auto">
+        <p className="text-sm text-ink-muted">
+          {inputs.kind === 'girt'
+            ? 'A continuous girt through the layers below, solved in two dimensions per metre of its length (ISO 10211).'
+            : 'One clip in its share of wall, solved in three dimensions (ISO 10211); the map shows its mid-plane.'}{' '}
+          The starting sizes are generic design values: replace them with the product's.
+        </p>
+        <fieldset disabled={phase.at === 'solving'} className="flex flex-col gap-3">
+          <legend className="sr-only">Inputs</legend>
+          <CrossedLayers inputs={inputs} wall={wall} onChange={setInputs} />
+          {inputs.kind === 'girt' ? (
+            <GirtFields inputs={inputs} onChange={setInputs} />
+          ) : (
+            <ClipFields inputs={inputs} onChange={setInputs} />
+          )}
+        </fieldset>
+        {phase.at === 'form' && phase.problem ? (
+          <Notice tone="caution" title="Cannot solve this" live>
+            {phase.problem}
+          </Notice>
+        ) : null}
+        {phase.at === 'solving' ? (
+          <Progress started={phase.started} onCancel={cancel} />
+        ) : (
+          <div className="flex flex-wrap gap-3">
+            <Button variant={phase.at === 'done' ? 'secondary' : 'primary'} onClick={solve}>
+              {phase.at === 'done' ? 'Solve again' : 'Solve'}
+            </Button>
+            <Button variant="quiet" onClick={onClose}>
+              Close
+            </Button>
+          </div>
+        )}
+        {phase.at === 'done' && value !== null ? (
+          <section aria-label="Result" className="flex flex-col gap-3 border-t border-rule pt-3">
+            <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
+              <dt className="font-semibold">{symbol}</dt>
+              <dd className="num" data-testid="solved-value">
+                {formatMeasure(value, inputs.kind === 'girt' ? 'psi' : 'chi', system)}
+              </dd>
+              <dt>Mesh</dt>
+              <dd className="num">{phase.solved.result.cells.toLocaleString('en-GB')} cells</dd>
+              <dt>Iterations</dt>
+              <dd className="num">{phase.solved.result.solver.iterations}</dd>
+              <dt>Energy balance</dt>
+              <dd className="num">
+                {(phase.solved.result.solver.energyBalance * 100).toPrecision(2)} % of the heat flow
+              </dd>
+              <dt>Coldest inside surface</dt>
+              <dd className="num">
+                {formatQuantity(phase.solved.result.minInsideSurface?.temperature, 'temperature', system)}{' '}
+                (outside {formatQuantity(phase.cold, 'temperature', system)}, inside{' '}
+                {formatQuantity(phase.warm, 'temperature', system)})
+              </dd>
+              <dt>f_Rsi</dt>
+              <dd className="num">{phase.solved.result.fRsi?.toFixed(3) ?? '—'}</dd>
+            </dl>
+            {phase.solved.section ? (
+              <TemperatureMap
+                section={phase.solved.section}
+                warm={phase.warm}
+                cold={phase.cold}
+                metal={phase.metal}
+                coldest={phase.solved.result.minInsideSurface}
+                system={system}
+                title={inputs.kind === 'girt' ? 'Section through the girt' : 'Mid-plane of the clip'}
+              />
+            ) : null}
+            <Notice tone="warning" title="An aid, not a tested value">
+              A computed {symbol} is an aid to design: the maker's tested values or a specialist's model of
+              the actual product govern.
+            </Notice>
+            <div>
+              <Button
+                variant="primary"
+                onClick={() =>
+                  onUse(value, computedSourceText(ENGINE_VERSION, phase.solved.result.cells, new Date()))
+                }
+              >
+                Use this value
+              </Button>
+            </div>
+          </section>
+        ) : null}
+      </div>
+    </Dialog>
+  );
+}
+
+/** Why a template refused the inputs, in its words (the field named as the template names it). */
+function problemOf(e: unknown): string {
+  if (e instanceof CalcInputError) return `${e.field}: ${e.reason}`;
+  if (e instanceof ZodError) {
+    const issue = e.issues[0];
+    return issue ? `${issue.path.join('.')}: ${issue.message}` : 'the inputs are not complete';
+  }
+  return e instanceof Error ? e.message : String(e);
+}
+
+/** An indeterminate bar and the time so far (the solver reports no progress of its own), and Cancel. */
+function Progress({ started, onCancel }: { started: number; onCancel: () => void }) {
+  const [now, setNow] = useState(started);
+  useEffect(() => {
+    const timer = setInterval(() => setNow(Date.now()), 250);
+    return () => clearInterval(timer);
+  }, []);
+  return (
+    <div className="flex flex-wrap items-center gap-3">
+      <div role="status" className="flex min-w-48 flex-1 flex-col gap-1 text-sm">
+        <span>Solving… {((now - started) / 1000).toFixed(1)} s</span>
+        <progress className="h-2 w-full accent-ink" aria-label="Solving, no estimate of the time left" />
+      </div>
+      <Button onClick={onCancel}>Cancel</Button>
+    </div>
+  );
+}
+
+/** Which layers the metal crosses; its depth (girt) or length (clip) follows from them. */
+function CrossedLayers({
+  inputs,
+  wall,
+  onChange,
+}: {
+  inputs: SolveInputs;
+  wall: TemplateLayer[];
+  onChange: (next: SolveInputs) => void;
+}) {
+  const system = useUnitSystem();
+  const options = wall.map((l, k) => (
+    // biome-ignore lint/suspicious/noArrayIndexKey: the index is the value
+    <option key={k} value={k}>
+      {k + 1} {l.name}
+    </option>
+  ));
+  return (
+    <div className="flex flex-wrap items-end gap-x-4 gap-y-2">
+      <Field label="Crosses from layer" className="min-w-48 flex-1">
+        {(c) => (
+          <Select
+            {...c}
+            value={inputs.from}
+            className="py-1.5 text-sm"
+            onChange={(e) => {
+              const from = Number(e.target.value);
+              onChange({ ...inputs, from, to: Math.max(from, inputs.to) });
+            }}
+          >
+            {options}
+          </Select>
+        )}
+      </Field>
+      <Field label="to layer" className="min-w-48 flex-1">
+        {(c) => (
+          <Select
+            {...c}
+            value={inputs.to}
+            className="py-1.5 text-sm"
+            onChange={(e) => {
+              const to = Number(e.target.value);
+              onChange({ ...inputs, to, from: Math.min(to, inputs.from) });
+            }}
+          >
+            {options}
+          </Select>
+        )}
+      </Field>
+      <p className="pb-2 text-sm">
+        {inputs.kind === 'girt' ? 'Girt depth' : 'Clip length'}{' '}
+        <span className="num font-semibold" data-testid="crossed-depth">
+          {formatMeasure(crossedDepth(wall, inputs.from, inputs.to), 'thickness', system)}
+        </span>
+      </p>
+    </div>
+  );
+}
+
+/** A length box of the dialog (SI stored, shown in the person's units). */
+function Size({
+  label,
+  measure = 'thickness',
+  value,
+  onChange,
+  className = 'w-40',
+}: {
+  label: string;
+  measure?: Measure;
+  value: number;
+  onChange: (si: number) => void;
+  className?: string;
+}) {
+  return (
+    <QuantityInput
+      label={label}
+      measure={measureInput(measure)}
+      value={value}
+      onChange={(si) => onChange(si ?? Number.NaN)}
+      size="sheet"
+      className={className}
+    />
+  );
+}
+
+function GirtFields({ inputs, onChange }: { inputs: GirtInputs; onChange: (next: GirtInputs) => void }) {
+  const set = (patch: Partial<GirtInputs>) => onChange({ ...inputs, ...patch });
+  return (
+    <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+      <Field label="Section" className="w-40">
+        {(c) => (
+          <Select
+            {...c}
+            value={inputs.profile}
+            className="py-1.5 text-sm"
+            onChange={(e) => set({ profile: e.target.value as 'z' | 'c' })}
+          >
+            <option value="z">Z girt</option>
+            <option value="c">C girt</option>
+          </Select>
+        )}
+      </Field>
+      <Size label="Steel thickness" value={inputs.thickness} onChange={(thickness) => set({ thickness })} />
+      <Size
+        label="Outer flange"
+        measure="spacing"
+        value={inputs.outerFlange}
+        onChange={(outerFlange) => set({ outerFlange })}
+      />
+      <Size
+        label="Inner flange"
+        measure="spacing"
+        value={inputs.innerFlange}
+        onChange={(innerFlange) => set({ innerFlange })}
+      />
+      <Size
+        label="Girt spacing"
+        measure="spacing"
+        value={inputs.spacing}
+        onChange={(spacing) => set({ spacing })}
+      />
+    </div>
+  );
+}
+
+function ClipFields({ inputs, onChange }: { inputs: ClipInputs; onChange: (next: ClipInputs) => void }) {
+  const set = (patch: Partial<ClipInputs>) => onChange({ ...inputs, ...patch });
+  return (
+    <div className="flex flex-col gap-2">
+      <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+        <Size
+          label="Clip width (footprint)"
+          measure="spacing"
+          value={inputs.width}
+          onChange={(width) => set({ width })}
+        />
+        <Size label="Web thickness" value={inputs.thickness} onChange={(thickness) => set({ thickness })} />
+        <Field label="Material" className="w-48">
+          {(c) => (
+            <Select
+              {...c}
+              value={String(inputs.metalLambda)}
+              className="py-1.5 text-sm"
+              onChange={(e) => set({ metalLambda: Number(e.target.value) })}
+            >
+              {CLIP_METALS.map((m) => (
+                <option key={m.id} value={String(m.conductivity)}>
+                  {m.name} (λ {m.conductivity})
+                </option>
+              ))}
+            </Select>
+          )}
+        </Field>
+        <Size
+          label="Spacing along the girt"
+          measure="spacing"
+          value={inputs.spacingX}
+          onChange={(spacingX) => set({ spacingX })}
+        />
+        <Size
+          label="Spacing across"
+          measure="spacing"
+          value={inputs.spacingZ}
+          onChange={(spacingZ) => set({ spacingZ })}
+        />
+      </div>
+      <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+        <label className="flex items-center gap-2 pt-6 text-sm">
+          <input
+            type="checkbox"
+            className="accent-ink"
+            checked={inputs.pad !== null}
+            onChange={(e) => set({ pad: e.target.checked ? { ...GENERIC.pad } : null })}
+          />
+          Thermal break pad
+        </label>
+        {inputs.pad ? (
+          <>
+            <Size
+              label="Pad thickness"
+              value={inputs.pad.thickness}
+              onChange={(thickness) => set({ pad: { ...inputs.pad!, thickness } })}
+            />
+            <QuantityInput
+              label="Pad λ"
+              measure={measureInput('conductivity')}
+              value={inputs.pad.lambda}
+              onChange={(lambda) => set({ pad: { ...inputs.pad!, lambda: lambda ?? Number.NaN } })}
+              size="sheet"
+              className="w-48"
+            />
+          </>
+        ) : null}
+      </div>
+    </div>
+  );
+}
+
+export default BridgeSolveDialog;

@@ -1,0 +1,165 @@
+import type { UnitSystem } from '@shared/units';
+import { formatQuantity } from '../../../lib/quantities';
+import type { Section } from './bridge-solve';
+
+/**
+ * Bands from warm to cold: light to dark in even lightness steps, the hue turning from straw through rust to
+ * indigo, so neighbouring bands differ in hue on screen and in grey on a black-and-white print.
+ */
+export const PALETTE = [
+  '#fbf4d6',
+  '#f4dc93',
+  '#ebbd68',
+  '#de9651',
+  '#c8734d',
+  '#a95a5a',
+  '#83506e',
+  '#5d4878',
+  '#3b3f6e',
+  '#1f2a4d',
+] as const;
+
+/** Band of θ between the warm (band 0) and the cold (last band) environment temperature. */
+export function bandOf(theta: number, warm: number, cold: number): number {
+  const n = PALETTE.length;
+  const t = (warm - theta) / (warm - cold);
+  return Math.min(n - 1, Math.max(0, Math.floor(t * n)));
+}
+
+/** A rectangle in model metres, drawn as an outline (the metal). */
+export interface Outline {
+  min: number[];
+  max: number[];
+}
+
+/**
+ * The section's cells coloured by temperature band (runs of one band along a row merged into one rectangle),
+ * outside at the top, inside at the bottom, the metal outlined and the coldest inside point marked; a legend
+ * gives the band edges in the person's units.
+ */
+export function TemperatureMap({
+  section,
+  warm,
+  cold,
+  metal,
+  coldest,
+  system,
+  title,
+}: {
+  section: Section;
+  warm: number;
+  cold: number;
+  metal: Outline[];
+  coldest: { at: number[]; temperature: number } | null;
+  system: UnitSystem;
+  title: string;
+}) {
+  const { x, y, values } = section;
+  const nx = x.length - 1;
+  const [x0, x1, y0, y1] = [x[0]!, x[nx]!, y[0]!, y[y.length - 1]!];
+  const w = x1 - x0;
+  const h = y1 - y0;
+  const rects: { x: number; y: number; w: number; h: number; band: number }[] = [];
+  for (let j = 0; j < y.length - 1; j++) {
+    let i = 0;
+    while (i < nx) {
+      const v = values[j * nx + i];
+      if (v === null || v === undefined) {
+        i++;
+        continue;
+      }
+      const band = bandOf(v, warm, cold);
+      let k = i + 1;
+      while (k < nx) {
+        const u = values[j * nx + k];
+        if (u === null || u === undefined || bandOf(u, warm, cold) !== band) break;
+        k++;
+      }
+      rects.push({ x: x[i]!, y: y[j]!, w: x[k]! - x[i]!, h: y[j + 1]! - y[j]!, band });
+      i = k;
+    }
+  }
+  const step = (warm - cold) / PALETTE.length;
+  const cx = coldest?.at[0];
+  const cy = coldest?.at[1];
+  return (
+    <figure className="flex flex-col gap-2">
+      <svg
+        role="img"
+        aria-label={`${title}: temperature bands from ${formatQuantity(warm, 'temperature', system)} inside to ${formatQuantity(cold, 'temperature', system)} outside${coldest ? `; coldest inside point ${formatQuantity(coldest.temperature, 'temperature', system)}` : ''}`}
+        viewBox={`${x0} ${y0 - h * 0.12} ${w} ${h * 1.24}`}
+        preserveAspectRatio="xMidYMid meet"
+        className="h-auto max-h-72 w-full border border-rule bg-paper-raised"
+        data-testid="temperature-map"
+      >
+        {rects.map((r) => (
+          <rect
+            key={`${r.x}-${r.y}`}
+            x={r.x}
+            y={r.y}
+            width={r.w}
+            height={r.h}
+            fill={PALETTE[r.band]}
+            shapeRendering="crispEdges"
+          />
+        ))}
+        {metal.map((m) => (
+          <rect
+            key={`${m.min.join()}-${m.max.join()}`}
+            x={m.min[0]}
+            y={m.min[1]}
+            width={m.max[0]! - m.min[0]!}
+            height={m.max[1]! - m.min[1]!}
+            fill="none"
+            stroke="#111"
+            strokeWidth={1.5}
+            vectorEffect="non-scaling-stroke"
+          />
+        ))}
+        {cx !== undefined && cy !== undefined ? (
+          <g data-testid="coldest-point">
+            <circle
+              cx={cx}
+              cy={cy}
+              r={h * 0.05}
+              fill="none"
+              stroke="#fff"
+              strokeWidth={4}
+              vectorEffect="non-scaling-stroke"
+            />
+            <circle
+              cx={cx}
+              cy={cy}
+              r={h * 0.05}
+              fill="none"
+              stroke="#111"
+              strokeWidth={2}
+              vectorEffect="non-scaling-stroke"
+            />
+          </g>
+        ) : null}
+      </svg>
+      <figcaption className="flex flex-col gap-1 text-xs text-ink-muted">
+        <span>
+          Outside at the top, inside at the bottom; metal outlined; ◯ the coldest inside point
+          {coldest ? ` (${formatQuantity(coldest.temperature, 'temperature', system)})` : ''}.
+        </span>
+        <ol className="flex flex-wrap gap-x-2 gap-y-1" aria-label="Temperature bands">
+          {PALETTE.map((colour, b) => (
+            <li key={colour} className="flex items-center gap-1">
+              <span
+                aria-hidden="true"
+                className="inline-block h-3 w-4 border border-rule"
+                style={{ background: colour }}
+              />
+              <span className="num">
+                {formatQuantity(warm - b * step, 'temperature', system)}–
+                {formatQuantity(warm - (b + 1) * step, 'temperature', system)}
+              </span>
+            </li>
+          ))}
+        </ol>
+      </figcaption>
+    </figure>
+  );
+}

@@ -2,7 +2,14 @@ import { z } from 'zod';
 import { WALL_CATEGORY_LABELS, wallCategorySchema } from '../schemas/assembly';
 import { TEXT_MAX, text } from '../schemas/common';
 import { CLIMATE_ZONES, climateZoneSchema } from '../schemas/project';
-import { LB_PER_FT2_TO_KG_PER_M2, R_IP_TO_SI, U_IP_TO_SI, type UnitSystem } from '../units';
+import {
+  type DisplayUnit,
+  LB_PER_FT2_TO_KG_PER_M2,
+  QUANTITIES,
+  R_IP_TO_SI,
+  U_IP_TO_SI,
+  type UnitSystem,
+} from '../units';
 
 /*
  * Code tables ("criteria sets"): the closed list of criterion types a firm can enter, with their units,
@@ -60,10 +67,13 @@ export interface CriterionSpec {
   decimals: Record<UnitSystem, number>;
 }
 
-const U_SI: UnitSpec = { symbol: 'W/(m²·K)', toSI: 1 };
-const U_IP: UnitSpec = { symbol: 'Btu/(h·ft²·°F)', toSI: U_IP_TO_SI };
-const R_SI: UnitSpec = { symbol: 'm²·K/W', toSI: 1 };
-const R_IP: UnitSpec = { symbol: 'h·ft²·°F/Btu', toSI: R_IP_TO_SI };
+/** A registry unit as a code-table unit. */
+const shown = (u: DisplayUnit): UnitSpec => ({ symbol: u.symbol, toSI: u.scale });
+const U_SI = shown(QUANTITIES.transmittance.SI);
+const U_IP = shown(QUANTITIES.transmittance.IP);
+const R_SI = shown(QUANTITIES.resistance.SI);
+const R_IP = shown(QUANTITIES.resistance.IP);
+const MASS_PER_AREA = QUANTITIES.massPerArea;
 const uAccepts = { 'w/m2k': 1, 'btu/hft2f': U_IP_TO_SI };
 const rAccepts = { 'm2k/w': 1, 'hft2f/btu': R_IP_TO_SI, 'ft2fh/btu': R_IP_TO_SI };
 const resistance = (label: string, description: string, metric: MetricKey): CriterionSpec => ({
@@ -118,7 +128,7 @@ export const CRITERION_TYPES = {
     kind: 'number',
     metric: 'maxAccumulation',
     unit: 'kg/m²',
-    display: { SI: { symbol: 'kg/m²', toSI: 1 }, IP: { symbol: 'lb/ft²', toSI: LB_PER_FT2_TO_KG_PER_M2 } },
+    display: { SI: shown(MASS_PER_AREA.SI), IP: shown(MASS_PER_AREA.IP) },
     accepts: { 'kg/m2': 1, 'g/m2': 0.001, 'lb/ft2': LB_PER_FT2_TO_KG_PER_M2 },
     range: { min: 0, max: 100 },
     decimals: { SI: 3, IP: 4 },

@@ -32,6 +32,16 @@ export type PsiValue = Brand<number, 'ψ W/(m·K)'>;
 /** Point thermal transmittance χ, W/K. */
 export type ChiValue = Brand<number, 'W/K'>;
 
+/**
+ * A quantity's shown symbols and factors (SI value of one shown unit) per system, for a display table;
+ * `siAlso` picks one of its further units for SI (`unitsOf('pressure', 'kPa')`).
+ */
+export function unitsOf(q: Quantity, siAlso?: string) {
+  const spec = QUANTITIES[q];
+  const si = (siAlso && spec.also[siAlso]) || spec.SI;
+  return { unit: { SI: si.symbol, IP: spec.IP.symbol }, factor: { SI: si.scale, IP: spec.IP.scale } };
+}
+
 /*
  * The factors other code multiplies by, each read from the registry (derived from mathjs at load; checked
  * against NIST SP 811 (2008) Appendix B.8/B.9 in units.test.ts). `X_TO_SI` is the SI value of one IP unit.

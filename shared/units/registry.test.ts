@@ -23,6 +23,7 @@ import {
   toStored,
   U_IP_TO_SI,
   US_GALLON,
+  unitsOf,
 } from './index';
 
 /*
@@ -178,6 +179,14 @@ describe('the registry', () => {
         }
       }
     }
+  });
+
+  it('hands a display table its symbols and factors, with a further SI unit where asked', () => {
+    expect(unitsOf('pressure', 'kPa')).toEqual({
+      unit: { SI: 'kPa', IP: 'psf' },
+      factor: { SI: 1000, IP: PSF_TO_PA },
+    });
+    expect(unitsOf('shortLength')).toEqual({ unit: { SI: 'mm', IP: 'in' }, factor: { SI: 0.001, IP: INCH } });
   });
 
   it('the SI shown unit of a quantity stored in SI is 1 or a power of ten of it', () => {

@@ -1,4 +1,4 @@
-import { celsiusToFahrenheit, FOOT, fahrenheitToCelsius, type UnitSystem } from '@shared/units';
+import { QUANTITIES as REGISTRY, toShown, toStored, type UnitSystem } from '@shared/units';
 import { trimmedFixed } from '@shared/units/rounding';
 import type { InputMeasure, ParsedEntry } from './input-measure';
 
@@ -16,19 +16,17 @@ interface QuantitySpec {
   fromDisplay: (shown: number, system: UnitSystem) => number;
 }
 
+/** A quantity of the registry as it is shown: its symbols, default decimals and conversion. */
+const registered = (q: 'length' | 'temperature'): QuantitySpec => ({
+  unit: { SI: REGISTRY[q].SI.symbol, IP: REGISTRY[q].IP.symbol },
+  decimals: { SI: REGISTRY[q].SI.decimals, IP: REGISTRY[q].IP.decimals },
+  toDisplay: (si, s) => toShown(si, q, s),
+  fromDisplay: (v, s) => toStored(v, q, s),
+});
+
 export const QUANTITIES: Record<Quantity, QuantitySpec> = {
-  length: {
-    unit: { SI: 'm', IP: 'ft' },
-    decimals: { SI: 3, IP: 2 },
-    toDisplay: (m, s) => (s === 'IP' ? m / FOOT : m),
-    fromDisplay: (v, s) => (s === 'IP' ? v * FOOT : v),
-  },
-  temperature: {
-    unit: { SI: '°C', IP: '°F' },
-    decimals: { SI: 1, IP: 1 },
-    toDisplay: (c, s) => (s === 'IP' ? celsiusToFahrenheit(c) : c),
-    fromDisplay: (v, s) => (s === 'IP' ? fahrenheitToCelsius(v) : v),
-  },
+  length: registered('length'),
+  temperature: registered('temperature'),
   relativeHumidity: {
     unit: { SI: '%', IP: '%' },
     decimals: { SI: 1, IP: 1 },

@@ -1,11 +1,10 @@
 import {
   celsiusToFahrenheit,
-  FOOT,
   fahrenheitToCelsius,
   INCH,
   QUANTITIES,
   type UnitSystem,
-  US_GALLON,
+  unitsOf,
 } from '@shared/units';
 import { fixed, trimmedFixed } from '@shared/units/rounding';
 import type { InputMeasure, ParsedEntry } from './input-measure';
@@ -41,22 +40,16 @@ const scaled = (si: number, ip: number) => ({
   toShown: (v: number, s: UnitSystem) => v / (s === 'IP' ? ip : si),
   fromShown: (v: number, s: UnitSystem) => v * (s === 'IP' ? ip : si),
 });
+/** A registry quantity's symbols and factors (`unitsOf`) as a sheet measure's unit and conversion. */
+const registered = (q: Parameters<typeof unitsOf>[0]) => {
+  const { unit, factor } = unitsOf(q);
+  return { unit, ...scaled(factor.SI, factor.IP) };
+};
 
 export const SHEET_MEASURES: Record<SheetMeasure, SheetMeasureSpec> = {
-  joint: {
-    unit: { SI: 'mm', IP: 'in' },
-    decimals: { SI: 1, IP: 3 },
-    fixed: true,
-    fractions: true,
-    ...scaled(0.001, INCH),
-  },
-  spacing: {
-    unit: { SI: 'mm', IP: 'in' },
-    decimals: { SI: 0, IP: 2 },
-    fractions: true,
-    ...scaled(0.001, INCH),
-  },
-  length: { unit: { SI: 'm', IP: 'ft' }, decimals: { SI: 3, IP: 2 }, ...scaled(1, FOOT) },
+  joint: { ...registered('shortLength'), decimals: { SI: 1, IP: 3 }, fixed: true, fractions: true },
+  spacing: { ...registered('shortLength'), decimals: { SI: 0, IP: 2 }, fractions: true },
+  length: { ...registered('length'), decimals: { SI: 3, IP: 2 } },
   temperature: {
     unit: { SI: '°C', IP: '°F' },
     decimals: { SI: 1, IP: 1 },
@@ -70,13 +63,8 @@ export const SHEET_MEASURES: Record<SheetMeasure, SheetMeasureSpec> = {
     ...scaled(1e-6, 1e-6 * QUANTITIES.expansion.IP.scale),
   },
   percent: { unit: { SI: '%', IP: '%' }, decimals: { SI: 1, IP: 1 }, ...scaled(0.01, 0.01) },
-  volume: {
-    unit: { SI: 'L', IP: 'US gal' },
-    decimals: { SI: 2, IP: 2 },
-    fixed: true,
-    ...scaled(0.001, US_GALLON),
-  },
-  area: { unit: { SI: 'm²', IP: 'ft²' }, decimals: { SI: 2, IP: 1 }, fixed: true, ...scaled(1, FOOT * FOOT) },
+  volume: { ...registered('volume'), decimals: { SI: 2, IP: 2 }, fixed: true },
+  area: { ...registered('area'), decimals: { SI: 2, IP: 1 }, fixed: true },
 };
 
 export const sheetUnit = (m: SheetMeasure, system: UnitSystem) => SHEET_MEASURES[m].unit[system];

@@ -1,13 +1,4 @@
-import {
-  CHI_IP_TO_SI,
-  FOOT,
-  INCH,
-  K_IP_TO_SI,
-  PSI_IP_TO_SI,
-  R_IP_TO_SI,
-  U_IP_TO_SI,
-  type UnitSystem,
-} from '@shared/units';
+import { FOOT, QUANTITIES, R_IP_TO_SI, U_IP_TO_SI, type UnitSystem, unitsOf } from '@shared/units';
 import { fixed, roundDecimal, trimmedFixed } from '@shared/units/rounding';
 import type { InputMeasure, ParsedEntry } from '../../lib/input-measure';
 
@@ -41,34 +32,14 @@ interface MeasureSpec {
 }
 
 export const MEASURES: Record<Measure, MeasureSpec> = {
-  thickness: { unit: { SI: 'mm', IP: 'in' }, factor: { SI: 0.001, IP: INCH }, decimals: { SI: 2, IP: 3 } },
-  spacing: { unit: { SI: 'mm', IP: 'in' }, factor: { SI: 0.001, IP: INCH }, decimals: { SI: 1, IP: 2 } },
-  diameter: { unit: { SI: 'mm', IP: 'in' }, factor: { SI: 0.001, IP: INCH }, decimals: { SI: 2, IP: 3 } },
-  conductivity: {
-    unit: { SI: 'W/(m·K)', IP: 'Btu·in/(h·ft²·°F)' },
-    factor: { SI: 1, IP: K_IP_TO_SI },
-    decimals: { SI: 4, IP: 4 },
-  },
-  resistance: {
-    unit: { SI: 'm²·K/W', IP: 'h·ft²·°F/Btu' },
-    factor: { SI: 1, IP: R_IP_TO_SI },
-    decimals: { SI: 3, IP: 2 },
-  },
-  transmittance: {
-    unit: { SI: 'W/(m²·K)', IP: 'Btu/(h·ft²·°F)' },
-    factor: { SI: 1, IP: U_IP_TO_SI },
-    decimals: { SI: 3, IP: 4 },
-  },
-  chi: {
-    unit: { SI: 'W/K', IP: 'Btu/(h·°F)' },
-    factor: { SI: 1, IP: CHI_IP_TO_SI },
-    decimals: { SI: 4, IP: 4 },
-  },
-  psi: {
-    unit: { SI: 'W/(m·K)', IP: 'Btu/(h·ft·°F)' },
-    factor: { SI: 1, IP: PSI_IP_TO_SI },
-    decimals: { SI: 4, IP: 4 },
-  },
+  thickness: { ...unitsOf('shortLength'), decimals: { SI: 2, IP: 3 } },
+  spacing: { ...unitsOf('shortLength'), decimals: { SI: 1, IP: 2 } },
+  diameter: { ...unitsOf('shortLength'), decimals: { SI: 2, IP: 3 } },
+  conductivity: { ...unitsOf('conductivity'), decimals: { SI: 4, IP: 4 } },
+  resistance: { ...unitsOf('resistance'), decimals: { SI: 3, IP: 2 } },
+  transmittance: { ...unitsOf('transmittance'), decimals: { SI: 3, IP: 4 } },
+  chi: { ...unitsOf('chi'), decimals: { SI: 4, IP: 4 } },
+  psi: { ...unitsOf('psi'), decimals: { SI: 4, IP: 4 } },
   countPerArea: {
     unit: { SI: 'per m²', IP: 'per ft²' },
     factor: { SI: 1, IP: 1 / (FOOT * FOOT) },
@@ -82,11 +53,7 @@ export const MEASURES: Record<Measure, MeasureSpec> = {
   fraction: { unit: { SI: '%', IP: '%' }, factor: { SI: 0.01, IP: 0.01 }, decimals: { SI: 4, IP: 4 } },
   emittance: { unit: { SI: '–', IP: '–' }, factor: { SI: 1, IP: 1 }, decimals: { SI: 3, IP: 3 } },
   /** Vent area per length of an air layer, stored in mm²/m as ISO 6946 §6.9.3 states it; 1 in²/ft = 2116.7 mm²/m. */
-  ventArea: {
-    unit: { SI: 'mm²/m', IP: 'in²/ft' },
-    factor: { SI: 1, IP: (INCH * INCH * 1e6) / FOOT },
-    decimals: { SI: 0, IP: 3 },
-  },
+  ventArea: { ...unitsOf('ventArea'), decimals: { SI: 0, IP: 3 } },
 };
 
 export const measureUnit = (m: Measure, system: UnitSystem) => MEASURES[m].unit[system];
@@ -144,8 +111,8 @@ export function formatR(si: number | null | undefined, system: UnitSystem): stri
 }
 
 /** Unit of an R figure for a column head ("R-value" in IP carries its unit in the name). */
-export const rUnit = (system: UnitSystem) => (system === 'IP' ? 'h·ft²·°F/Btu' : 'm²·K/W');
-export const uUnit = (system: UnitSystem) => (system === 'IP' ? 'Btu/(h·ft²·°F)' : 'W/(m²·K)');
+export const rUnit = (system: UnitSystem) => QUANTITIES.resistance[system].symbol;
+export const uUnit = (system: UnitSystem) => QUANTITIES.transmittance[system].symbol;
 
 /** Thermal transmittance: "0.433 W/(m²·K)" in SI, "0.0763 Btu/(h·ft²·°F)" in IP. */
 export function formatU(si: number | null | undefined, system: UnitSystem): string {

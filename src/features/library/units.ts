@@ -1,14 +1,4 @@
-import {
-  CHI_IP_TO_SI,
-  FOOT,
-  INCH,
-  K_IP_TO_SI,
-  LB_PER_FT3_TO_KG_PER_M3,
-  LBF_TO_N,
-  PSF_TO_PA,
-  PSI_IP_TO_SI,
-  type UnitSystem,
-} from '@shared/units';
+import { type UnitSystem, unitsOf } from '@shared/units';
 
 /** The library's quantities; shown = SI / factor. Stored values stay SI. */
 export type LibraryMeasure =
@@ -25,22 +15,14 @@ const SPECS: Record<
   LibraryMeasure,
   { unit: Record<UnitSystem, string>; factor: Record<UnitSystem, number>; decimals: number }
 > = {
-  conductivity: {
-    unit: { SI: 'W/(m·K)', IP: 'Btu·in/(h·ft²·°F)' },
-    factor: { SI: 1, IP: K_IP_TO_SI },
-    decimals: 4,
-  },
-  density: {
-    unit: { SI: 'kg/m³', IP: 'lb/ft³' },
-    factor: { SI: 1, IP: LB_PER_FT3_TO_KG_PER_M3 },
-    decimals: 2,
-  },
-  chi: { unit: { SI: 'W/K', IP: 'Btu/(h·°F)' }, factor: { SI: 1, IP: CHI_IP_TO_SI }, decimals: 4 },
-  psi: { unit: { SI: 'W/(m·K)', IP: 'Btu/(h·ft·°F)' }, factor: { SI: 1, IP: PSI_IP_TO_SI }, decimals: 4 },
-  pressure: { unit: { SI: 'kPa', IP: 'psf' }, factor: { SI: 1000, IP: PSF_TO_PA }, decimals: 2 },
-  force: { unit: { SI: 'N', IP: 'lbf' }, factor: { SI: 1, IP: LBF_TO_N }, decimals: 0 },
-  span: { unit: { SI: 'm', IP: 'ft' }, factor: { SI: 1, IP: FOOT }, decimals: 2 },
-  width: { unit: { SI: 'mm', IP: 'in' }, factor: { SI: 0.001, IP: INCH }, decimals: 1 },
+  conductivity: { ...unitsOf('conductivity'), decimals: 4 },
+  density: { ...unitsOf('density'), decimals: 2 },
+  chi: { ...unitsOf('chi'), decimals: 4 },
+  psi: { ...unitsOf('psi'), decimals: 4 },
+  pressure: { ...unitsOf('pressure', 'kPa'), decimals: 2 },
+  force: { ...unitsOf('force'), decimals: 0 },
+  span: { ...unitsOf('length'), decimals: 2 },
+  width: { ...unitsOf('shortLength'), decimals: 1 },
 };
 
 export const libraryUnit = (m: LibraryMeasure, system: UnitSystem) => SPECS[m].unit[system];

@@ -1,4 +1,4 @@
-import { FOOT, INCH, LBF_TO_N, MPH_TO_MS, PSF_TO_PA, type UnitSystem } from '@shared/units';
+import { type UnitSystem, unitsOf } from '@shared/units';
 import { trimmedFixed } from '@shared/units/rounding';
 import type { InputMeasure, ParsedEntry } from '../../lib/input-measure';
 
@@ -31,44 +31,37 @@ interface Spec {
 
 export const WIND_MEASURES: Record<WindMeasure, Spec> = {
   speed: {
-    unit: { SI: 'm/s', IP: 'mph' },
-    factor: { SI: 1, IP: MPH_TO_MS },
+    ...unitsOf('speed'),
     decimals: { SI: 1, IP: 0 },
     inputDecimals: { SI: 2, IP: 1 },
   },
   length: {
-    unit: { SI: 'm', IP: 'ft' },
-    factor: { SI: 1, IP: FOOT },
+    ...unitsOf('length'),
     decimals: { SI: 2, IP: 1 },
     inputDecimals: { SI: 3, IP: 2 },
   },
   span: {
-    unit: { SI: 'm', IP: 'ft' },
-    factor: { SI: 1, IP: FOOT },
+    ...unitsOf('length'),
     decimals: { SI: 3, IP: 2 },
     inputDecimals: { SI: 3, IP: 3 },
   },
   spacing: {
-    unit: { SI: 'mm', IP: 'in' },
-    factor: { SI: 0.001, IP: INCH },
+    ...unitsOf('shortLength'),
     decimals: { SI: 0, IP: 1 },
     inputDecimals: { SI: 1, IP: 2 },
   },
   pressure: {
-    unit: { SI: 'kPa', IP: 'psf' },
-    factor: { SI: 1000, IP: PSF_TO_PA },
+    ...unitsOf('pressure', 'kPa'),
     decimals: { SI: 3, IP: 1 },
     inputDecimals: { SI: 4, IP: 2 },
   },
   force: {
-    unit: { SI: 'N', IP: 'lbf' },
-    factor: { SI: 1, IP: LBF_TO_N },
+    ...unitsOf('force'),
     decimals: { SI: 0, IP: 1 },
     inputDecimals: { SI: 1, IP: 2 },
   },
   area: {
-    unit: { SI: 'm²', IP: 'ft²' },
-    factor: { SI: 1, IP: FOOT * FOOT },
+    ...unitsOf('area'),
     decimals: { SI: 3, IP: 2 },
     inputDecimals: { SI: 3, IP: 2 },
   },

@@ -40,15 +40,14 @@ const bridgeResolver = (system: UnitSystem) =>
   libraryResolver<Values, z.output<typeof bridgeValueInputSchema>>(
     bridgeValueInputSchema,
     (values) => ({ ...values, value: parseLibraryNumber(values.value, measureOf(values.kind), system) }),
-    (i, key, values) => {
-      const measure = measureOf(values.kind);
-      return i.code === 'too_small' && i.origin === 'string' && key === 'name'
-        ? 'Give the value a name (the product or detail it belongs to).'
-        : i.code === 'too_small' && i.origin === 'number'
-          ? 'Must be 0 or more.'
-          : i.code === 'too_big' && i.origin === 'number'
-            ? `Must be at most ${libraryNumber(Number(i.maximum), measure, system)} ${libraryUnit(measure, system)}.`
-            : i.message;
+    {
+      show: (key, values) => {
+        const measure = measureOf(values.kind);
+        return key === 'value'
+          ? (si) => `${libraryNumber(si, measure, system)} ${libraryUnit(measure, system)}`
+          : undefined;
+      },
+      empty: { name: 'Give the value a name (the product or detail it belongs to).' },
     },
   );
 

@@ -5,25 +5,24 @@ import { Button } from '../../../components/ui/Button';
 import { Notice } from '../../../components/ui/Notice';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage } from '../../../lib/api';
+import { issueWords } from '../../../lib/issue-words';
 
-/** The fields of a zod issue that the library forms word their reasons from. */
-export interface SchemaIssue {
-  code: string;
-  message: string;
-  origin?: string;
-  minimum?: unknown;
-  maximum?: unknown;
-  inclusive?: boolean;
+/** How a library form words its fields: a range in the person's units, an empty text box by its own sentence. */
+export interface EntryWords<Values> {
+  /** The bound of a field in the person's units with the unit (undefined: a plain number). */
+  show?: (field: string, values: Values) => ((si: number) => string) | undefined;
+  /** What to say of an empty text box, by field (else the schema's own message). */
+  empty?: Record<string, string>;
 }
 
 /**
  * Typed text (the person's units) → SI → the shared schema; its reasons land on the typed fields, the first
- * reason per field. A missing or unreadable number is worded here; `reason` words every other issue.
+ * reason per field, worded by issue-words. A missing or unreadable number is worded here.
  */
 export function libraryResolver<Values extends FieldValues, Output>(
   schema: z.ZodType<Output>,
   candidate: (values: Values) => unknown,
-  reason: (issue: SchemaIssue, field: string, values: Values) => string,
+  words: EntryWords<Values>,
 ): Resolver<Values, unknown, Output> {
   return async (values) => {
     const parsed = schema.safeParse(candidate(values), { reportInput: true });
@@ -37,7 +36,9 @@ export function libraryResolver<Values extends FieldValues, Output>(
           ? (issue as { input?: unknown }).input === undefined
             ? 'Enter a value.'
             : 'Enter a number (for example 0.035).'
-          : reason(issue as SchemaIssue, key, values);
+          : issue.code === 'too_small' && issue.origin === 'string'
+            ? (words.empty?.[key] ?? issue.message)
+            : issueWords(issue, words.show?.(key, values));
       errors[key] = { type: issue.code, message };
     }
     return { values: {}, errors } as never;

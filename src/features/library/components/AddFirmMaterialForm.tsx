@@ -30,22 +30,15 @@ const materialResolver = (system: UnitSystem) =>
         source: values.source,
       };
     },
-    (i, key) => {
-      const measure: LibraryMeasure | undefined =
-        key === 'conductivity' ? 'conductivity' : key === 'density' ? 'density' : undefined;
-      const bound = (b: unknown) =>
-        measure ? `${libraryNumber(Number(b), measure, system)} ${libraryUnit(measure, system)}` : String(b);
-      return i.code === 'too_small' && i.origin === 'string'
-        ? key === 'name'
-          ? 'Give the material a name.'
-          : i.message
-        : i.code === 'too_small'
-          ? i.inclusive
-            ? `Must be at least ${bound(i.minimum)}.`
-            : `Must be more than ${bound(i.minimum)}.`
-          : i.code === 'too_big'
-            ? `Must be at most ${bound(i.maximum)}.`
-            : i.message;
+    {
+      show: (key) => {
+        const measure: LibraryMeasure | undefined =
+          key === 'conductivity' ? 'conductivity' : key === 'density' ? 'density' : undefined;
+        return measure
+          ? (si) => `${libraryNumber(si, measure, system)} ${libraryUnit(measure, system)}`
+          : undefined;
+      },
+      empty: { name: 'Give the material a name.' },
     },
   );
 

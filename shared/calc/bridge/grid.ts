@@ -12,34 +12,50 @@ export function distinctEdges(values: number[]): number[] {
 }
 
 /**
- * Cell sizes across one interval of length L between two material edges: `first` at both ends, growing by
- * `growth` towards the middle up to `maxCell`, then scaled to fill L exactly. Geometric grading from the
- * interfaces, where the gradients are steepest (Patankar, Numerical Heat Transfer and Fluid Flow, 1980, §4.6).
+ * Cell sizes across one interval of length L between two material edges: `first` at the refined ends (both,
+ * or only the low or high one), growing by `growth` away from them up to `maxCell`, then scaled to fill L
+ * exactly. Geometric grading from the interfaces, where the gradients are steepest (Patankar, Numerical Heat
+ * Transfer and Fluid Flow, 1980, §4.6).
  */
-export function gradedSizes(length: number, first: number, growth: number, maxCell: number): number[] {
+export function gradedSizes(
+  length: number,
+  first: number,
+  growth: number,
+  maxCell: number,
+  ends: 'both' | 'low' | 'high' = 'both',
+): number[] {
   if (length <= first) return [length];
+  const span = ends === 'both' ? length / 2 : length;
   const half: number[] = [];
   let covered = 0;
   let size = first;
-  while (covered < length / 2) {
+  while (covered < span) {
     half.push(size);
     covered += size;
     size = Math.min(size * growth, maxCell);
   }
-  const sizes = [...half, ...half.slice().reverse()];
-  const scale = length / (2 * covered);
+  const sizes =
+    ends === 'both' ? [...half, ...half.slice().reverse()] : ends === 'low' ? half : half.reverse();
+  const scale = span / covered;
   return sizes.map((s) => s * scale);
 }
 
-/** Grid points of one axis: its edges with graded cells between them, every cell split `subdivide` times. */
+/**
+ * Grid points of one axis: its edges with graded cells between them, every cell split `subdivide` times.
+ * Without `gradeBounds` the model's outer faces (cut-off and symmetry planes, surfaces) take no edge cells.
+ */
 export function axisPoints(edges: number[], mesh: BridgeMesh): number[] {
   const points = [edges[0]!];
+  const last = edges.length - 1;
   for (let e = 1; e < edges.length; e++) {
     const a = edges[e - 1]!;
     const length = edges[e]! - a;
     const first = Math.min(mesh.interfaceCell, mesh.maxCell);
+    const low = mesh.gradeBounds || e > 1;
+    const high = mesh.gradeBounds || e < last;
+    const ends = low && !high ? 'low' : high && !low ? 'high' : 'both';
     let at = a;
-    for (const s of gradedSizes(length, first, mesh.growth, mesh.maxCell)) {
+    for (const s of gradedSizes(length, first, mesh.growth, mesh.maxCell, ends)) {
       for (let k = 1; k <= mesh.subdivide; k++) points.push(at + (s * k) / mesh.subdivide);
       at += s;
     }

@@ -98,6 +98,12 @@ export const bridgeMeshSchema = z.object({
     .max(4)
     .default(1)
     .describe('Split every cell into this many along each axis (grid-convergence checks)'),
+  gradeBounds: z
+    .boolean()
+    .default(true)
+    .describe(
+      "Refine at the model's outer faces as at a material edge (false: symmetry and cut-off planes, smooth surfaces)",
+    ),
 });
 
 export const bridgeModelSchema = z.object({
@@ -105,7 +111,7 @@ export const bridgeModelSchema = z.object({
   boxes: z.array(bridgeBoxSchema).min(1).max(200),
   boundaries: z.array(bridgeBoundarySchema).min(1).max(20),
   reference: bridgeReferenceSchema.optional(),
-  mesh: bridgeMeshSchema.default({ interfaceCell: 0.002, maxCell: 0.05, growth: 1.3, subdivide: 1 }),
+  mesh: bridgeMeshSchema.prefault({}),
   field: z.boolean().default(false).describe('Return the temperature of every cell (for drawing)'),
 });
 

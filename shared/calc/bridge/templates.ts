@@ -18,7 +18,7 @@ export const templateLayerSchema = z.object({
   lambda: z.number().min(MIN_LAMBDA).max(5000).describe('λ, W/(m·K)'),
 });
 
-const wallSchema = z.object({
+export const wallSchema = z.object({
   layers: z.array(templateLayerSchema).min(1).max(40).describe('Layers, outside → inside'),
   crosses: z
     .object({ from: z.number().int().min(0).max(39), to: z.number().int().min(0).max(39) })
@@ -80,7 +80,7 @@ export type GirtTemplate = z.input<typeof girtTemplateSchema>;
 export type FastenerTemplate = z.input<typeof fastenerTemplateSchema>;
 export type ClipTemplate = z.input<typeof clipTemplateSchema>;
 
-type Box = { name: string; lambda: number; min: number[]; max: number[] };
+export type Box = { name: string; lambda: number; min: number[]; max: number[] };
 
 /**
  * The parts of `box` outside every hole: the box cut along every hole edge inside it, keeping the pieces
@@ -114,6 +114,13 @@ export function carve(box: Box, holes: { min: number[]; max: number[] }[]): Box[
     .map((p) => ({ ...box, ...p }));
 }
 
+/** Depth of each layer's outside face from the wall's outside face, then the wall's depth. */
+export function layerFaces(layers: { thickness: number }[]): number[] {
+  const y: number[] = [0];
+  for (const l of layers) y.push(y[y.length - 1]! + l.thickness);
+  return y;
+}
+
 /** Depth positions of the layers: y of each layer's outside face, and the total. */
 function stackOf(input: z.infer<typeof wallSchema>) {
   const { layers, crosses } = input;
@@ -123,16 +130,15 @@ function stackOf(input: z.infer<typeof wallSchema>) {
       `there are ${layers.length} layers (indices 0–${layers.length - 1})`,
     );
   if (crosses.from > crosses.to) throw new CalcInputError('crosses.from', 'must not come after crosses.to');
-  const y: number[] = [0];
-  for (const l of layers) y.push(y[y.length - 1]! + l.thickness);
+  const y = layerFaces(layers);
   return { y, y0: y[crosses.from]!, y1: y[crosses.to + 1]!, depth: y[layers.length]! };
 }
 
 /** U of the wall without the metal: 1 / (Rse + Σ d/λ + Rsi) (ISO 6946:2017 eq. 7). */
-const clearU = (input: z.infer<typeof wallSchema>) =>
+export const clearU = (input: Pick<z.infer<typeof wallSchema>, 'layers' | 'rse' | 'rsi'>) =>
   1 / (input.rse + input.layers.reduce((s, l) => s + l.thickness / l.lambda, 0) + input.rsi);
 
-const refuseAbove = (value: number, max: number, field: string, what: string) => {
+export const refuseAbove = (value: number, max: number, field: string, what: string) => {
   if (value > max - EDGE_TOLERANCE)
     throw new CalcInputError(field, `${what} (${value} m) must be less than ${max} m`);
 };

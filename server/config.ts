@@ -22,6 +22,8 @@ const envSchema = z.object({
   CALC_RATE_LIMIT: z.coerce.number().int().positive().default(600),
   /** Most grid cells one bridge solve (`POST /api/v1/calc/bridge`) may use; a 3-D clip of 200 000 ≈ 2 s. */
   BRIDGE_MAX_CELLS: z.coerce.number().int().min(1000).max(5_000_000).default(250_000),
+  /** Most variants one sweep (`POST /api/v1/calc/sweep`) may check; each runs every check module. */
+  SWEEP_MAX_VARIANTS: z.coerce.number().int().min(1).max(100_000).default(2000),
   /** Requests per minute per address on the public sheet verification (`GET /api/verify/:code`). */
   VERIFY_RATE_LIMIT: z.coerce.number().int().positive().default(30),
   /**
@@ -67,6 +69,8 @@ export type Config = {
   calcRateLimit: number;
   /** Most grid cells of one bridge solve on the API. */
   bridgeMaxCells: number;
+  /** Most variants of one sweep on the API. */
+  sweepMaxVariants: number;
   verifyRateLimit: number;
   /** Express `trust proxy`: false (trust no forwarded address), a hop count, or a list of trusted proxies. */
   trustProxy: TrustProxy;
@@ -144,6 +148,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
     authRateLimit: e.AUTH_RATE_LIMIT,
     calcRateLimit: e.CALC_RATE_LIMIT,
     bridgeMaxCells: e.BRIDGE_MAX_CELLS,
+    sweepMaxVariants: e.SWEEP_MAX_VARIANTS,
     verifyRateLimit: e.VERIFY_RATE_LIMIT,
     trustProxy: parseTrustProxy(e.TRUST_PROXY),
     accountLock: { failures: e.ACCOUNT_LOCK_FAILURES, durationMs: e.ACCOUNT_LOCK_MINUTES * 60_000 },

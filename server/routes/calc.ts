@@ -24,6 +24,8 @@ import {
   windScheduleResultSchema,
 } from '@shared/calc/wind/schema';
 import { apiErrorSchema, unitSystemSchema } from '@shared/schemas/common';
+import { demoSweep } from '@shared/sweep/fixtures';
+import { sweepRequestSchema, sweepResultSchema } from '@shared/sweep/schema';
 import { z } from 'zod';
 import { defineRoute, FileAnswer, type WorkLimit } from '../http/route';
 
@@ -224,6 +226,31 @@ export const calcRoutes = [
       },
     },
     handler: async ({ body, services }) => services.bridge.solve(body),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/v1/calc/sweep',
+    summary:
+      'Sweep: every combination of one to three parameters of an assembly checked by every check module against a code table’s rows; with costs, the passing variants ranked',
+    tag: 'Calculations',
+    access: { kind: 'public' },
+    stateless: true,
+    body: sweepRequestSchema,
+    example: demoSweep(),
+    responses: {
+      200: {
+        description:
+          'Each variant’s values, verdict, governing check and the margin of every check; the ranking when costs are given',
+        schema: sweepResultSchema,
+      },
+      ...calcErrors,
+      413: {
+        description:
+          'More variants than `SWEEP_MAX_VARIANTS`; `fields.parameters` gives the cap and the count',
+        schema: apiErrorSchema,
+      },
+    },
+    handler: async ({ body, services }) => services.sweep.run(body),
   }),
   defineRoute({
     method: 'get',

@@ -17,6 +17,7 @@ import { createOrganisationService } from './organisations';
 import { createProjectService } from './projects';
 import { createSheetService } from './sheets';
 import { createSubmittalService } from './submittals';
+import { createSweepService } from './sweep';
 
 /** Everything a route may use; routes never touch the database directly. */
 export function createServices(
@@ -41,6 +42,7 @@ export function createServices(
     auth: { instance: auth, currentUser: createSessionReader(auth) },
     audit: createAuditService(db),
     bridge: createBridgeService(config.bridgeMaxCells),
+    sweep: createSweepService(config.sweepMaxVariants),
     me: createMeService(db),
     organisations: createOrganisationService(db),
     projects: createProjectService(db, database.readCache),

@@ -318,6 +318,17 @@ export function planSweep(a: Assembly, parameters: readonly SweepParameter[], ca
   return { axes, count };
 }
 
+/**
+ * How many variants the parameters name, from their ranges and lists alone (a range that cannot be counted
+ * counts 1: planSweep refuses it) — for a work budget checked before the assembly is looked at.
+ */
+export const sweepSize = (parameters: readonly SweepParameter[]) =>
+  parameters.reduce((n, p) => {
+    if (p.list) return n * Math.max(p.list.length, 1);
+    const r = 'range' in p ? p.range : undefined;
+    return r && r.step > 0 && r.stop >= r.start ? n * rangeCount(r.start, r.stop, r.step) : n;
+  }, 1);
+
 /** The values of variant `index` (mixed radix, the last parameter fastest). */
 export function variantValues(plan: SweepPlan, index: number): Value[] {
   const values: Value[] = new Array(plan.axes.length);
@@ -368,7 +379,8 @@ export function variantResult(index: number, values: Value[], report: CheckRepor
 /**
  * The registered modules, each remembering its results by the values of the parameters that change its
  * input (a module no parameter touches runs once per sweep): the runner itself is unchanged, and a result is
- * reused only for an input that is the same. At most 256 results are kept per module.
+ * reused only for an input that is the same (the property test holds every variant to the runner on its own
+ * assembly). At most 256 results are kept per module.
  */
 function rememberingModules(plan: SweepPlan, modules: readonly CheckModule[]) {
   let values: readonly Value[] = [];

@@ -90,6 +90,7 @@ const EXPECTED: Record<string, Expectation> = {
   'DELETE /organisations/:orgId/members/:userId': 'firmAdmin',
   'POST /v1/calc/thermal': 'public',
   'POST /v1/calc/bridge': 'public',
+  'POST /v1/calc/sweep': 'public',
   'POST /v1/calc/moisture': 'public',
   'POST /v1/calc/wind': 'public',
   'POST /v1/calc/joints': 'public',

@@ -23,6 +23,7 @@ describe('lean path for stateless routes', () => {
       '/v1/calc/bridge',
       '/v1/calc/joints',
       '/v1/calc/moisture',
+      '/v1/calc/sweep',
       '/v1/calc/takeoff',
       '/v1/calc/takeoff.csv',
       '/v1/calc/thermal',

@@ -3,6 +3,7 @@ import { benchBridge } from './bridge.bench';
 import { benchMoisture } from './moisture.bench';
 import { benchSheet } from './sheet.bench';
 import { initialJsLine } from './size';
+import { benchSweep } from './sweep.bench';
 import { benchThermal } from './thermal.bench';
 import { benchWind } from './wind.bench';
 
@@ -34,6 +35,18 @@ for (const r of benchBridge()) {
     r.medianMs <= r.targetMs ? `meets target ≤ ${r.targetMs} ms` : `SLOWER than target ${r.targetMs} ms`;
   console.log(
     `${r.name.padEnd(48)} median ${r.medianMs.toFixed(1).padStart(8)} ms (CPU ${r.medianCpuMs.toFixed(0)} ms)  ${r.cells.toLocaleString('en-US').padStart(8)} cells  ${r.iterations} iterations   ${verdict}`,
+  );
+}
+{
+  const r = benchSweep();
+  const verdict =
+    r.medianMs <= r.targetMs ? `meets target ≤ ${r.targetMs} ms` : `SLOWER than target ${r.targetMs} ms`;
+  console.log(
+    `${r.name.padEnd(48)} median ${r.medianMs.toFixed(0).padStart(8)} ms (CPU ${r.medianCpuMs.toFixed(0)} ms)  ${Math.round(
+      (r.variants / r.medianMs) * 1000,
+    )
+      .toLocaleString('en-US')
+      .padStart(10)} /s   ${verdict}`,
   );
 }
 console.log(initialJsLine());

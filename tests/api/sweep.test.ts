@@ -1,0 +1,66 @@
+import { demoSweep } from '@shared/sweep/fixtures';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createTestApp, type TestApp } from '../setup/app';
+
+/** POST /api/v1/calc/sweep: stateless, so one database is enough. */
+describe('sweep API', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp('pglite');
+  });
+  afterAll(async () => {
+    await t?.close();
+  });
+  const post = (body: object) => t.anonymous().post('/api/v1/calc/sweep').send(body);
+
+  it('checks every variant of the demo sweep and ranks the passing ones by cost', async () => {
+    const res = await post(demoSweep());
+    expect(res.status).toBe(200);
+    expect(res.body.count).toBe(24);
+    expect(res.body.variants).toHaveLength(24);
+    expect(res.body.parameters[1]).toEqual({ kind: 'clipSpacing', values: [0.4, 0.6, 0.8, 1] });
+    const v = res.body.variants[0];
+    expect(v.values).toEqual([0.025, 0.4]);
+    expect(v.verdict).toBe('fail');
+    expect(v.governing.id).toBe('criterion.max_u_factor');
+    const { ranked, runnerUp } = res.body.ranking;
+    expect(ranked.length).toBeGreaterThan(1);
+    expect(ranked[1].cost - ranked[0].cost).toBeCloseTo(runnerUp.costDifference, 9);
+    const { costs: _, ...withoutCosts } = demoSweep();
+    expect((await post(withoutCosts)).body.ranking).toBeNull();
+  });
+
+  it('refuses a zero step (422) and a parameter the assembly lacks (422), naming the field', async () => {
+    const s = demoSweep();
+    const zero = await post({
+      ...s,
+      parameters: [{ kind: 'insulationThickness', layer: 3, range: { start: 0.05, stop: 0.1, step: 0 } }],
+    });
+    expect(zero.status).toBe(422);
+    expect(zero.body.error.code).toBe('invalid_input');
+    expect(Object.keys(zero.body.error.fields)).toEqual(['parameters.0.range.step']);
+    const missing = await post({ ...s, parameters: [{ kind: 'clipChi', bridge: 9, list: [0.01] }] });
+    expect(missing.status).toBe(422);
+    expect(Object.keys(missing.body.error.fields)).toEqual(['parameters.0.bridge']);
+    const four = await post({ ...s, parameters: [...s.parameters, ...s.parameters] });
+    expect(four.status).toBe(400);
+    expect(Object.keys(four.body.error.fields)).toEqual(['parameters']);
+  });
+
+  it('refuses more variants than SWEEP_MAX_VARIANTS with 413 too_much_work naming parameters', async () => {
+    const res = await post({
+      ...demoSweep(),
+      parameters: [
+        { kind: 'insulationThickness', layer: 3, range: { start: 0.01, stop: 0.2, step: 0.00005 } },
+      ],
+    });
+    expect(res.status).toBe(413);
+    expect(res.body.error.code).toBe('too_much_work');
+    expect(res.body.error.fields.parameters).toMatch(/^at most 2000 variants \(got 38\d\d\); vary fewer/);
+  });
+
+  it('is in the OpenAPI document', async () => {
+    const doc = (await t.anonymous().get('/api/openapi.json')).body;
+    expect(doc.paths['/api/v1/calc/sweep'].post).toBeDefined();
+  });
+});

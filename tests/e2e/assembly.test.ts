@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { browserSuite, openDemoAssembly, screenshot, signIn } from '../setup/browser';
+import { ARTIFACTS, browserSuite, openDemoAssembly, screenshot, signIn } from '../setup/browser';
 
 /** The architect opens the demo assembly, halves the clip spacing, and sees the effective R drop live. */
 describe('assembly builder in the browser', () => {
@@ -53,6 +53,33 @@ describe('assembly builder in the browser', () => {
     expect(await thickness.getAttribute('aria-invalid')).toBe('true');
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
     expect(await page.evaluate(() => document.body.textContent?.includes('NaN'))).toBe(false);
+    expect(problems).toEqual([]);
+  });
+
+  it('Solve ψ of the demo girt: a temperature map, then Use this value stores ψ with its source (390 px)', async () => {
+    const { page, problems } = await suite.openPage({ viewport: { width: 390, height: 900 } });
+    await signIn(page, suite.baseUrl, 'architect@skinwright.demo');
+    await openDemoAssembly(page);
+    await page.getByTestId('live-Reff').waitFor();
+    const girt = page.getByRole('listitem', { name: /Horizontal girts/ });
+    const psi = girt.getByRole('textbox', { name: /^ψ per length/ });
+    const before = await psi.inputValue();
+    await girt.getByRole('button', { name: /^Solve ψ/ }).click();
+    const dialog = page.getByRole('dialog', { name: /Solve ψ/ });
+    await dialog.getByRole('button', { name: 'Solve', exact: true }).click();
+    await dialog.getByTestId('temperature-map').waitFor({ timeout: 30_000 });
+    expect(await dialog.getByTestId('coldest-point').count()).toBe(1);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    // The modal sits in the top layer, over the viewport: shot as seen, not as a full page.
+    await page.screenshot({ path: `${ARTIFACTS}/assembly-solve-girt-390.png` });
+    await page.setViewportSize({ width: 1280, height: 1000 });
+    await page.screenshot({ path: `${ARTIFACTS}/assembly-solve-girt-1280.png` });
+    await dialog.getByRole('button', { name: 'Use this value' }).click();
+    await expect.poll(() => dialog.isVisible()).toBe(false);
+    await expect.poll(() => psi.inputValue()).not.toBe(before);
+    expect(
+      await girt.getByText(/computed by Skinwright .*, mesh [\d,]+ cells, \d{4}-\d{2}-\d{2}/).count(),
+    ).toBe(1);
     expect(problems).toEqual([]);
   });
 });

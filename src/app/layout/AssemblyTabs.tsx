@@ -32,7 +32,7 @@ export function AssemblyTabs({
           </>
         )}
       </nav>
-      <nav aria-label="Assembly sheets" className="flex flex-wrap gap-6 border-b border-rule">
+      <nav aria-label="Assembly sheets" className="flex flex-wrap gap-x-6 gap-y-2 border-b border-rule">
         <NavLink to={base} end className={tabClass}>
           Build-up &amp; R-value
         </NavLink>

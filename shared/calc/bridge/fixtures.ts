@@ -1,9 +1,11 @@
 import type { BridgeModelInput } from './schema';
+import type { ClipTemplate, GirtTemplate } from './templates';
 
 /*
  * Invented demo details (not from any product): a steel Z girt through 100 mm of mineral wool between a
- * steel cladding sheet and a steel liner (2-D), and a steel clip through the same insulation onto a concrete
- * backup wall (3-D). Used by the API example, the benchmarks and the grid-convergence test.
+ * steel cladding sheet and a steel liner (2-D, by hand and as a template), and a 3 mm steel clip 80 mm wide
+ * every 0.6 × 0.6 m through the same insulation onto 150 mm of concrete (a template). Used by the API
+ * example, the benchmarks and the grid-convergence tests.
  */
 
 const STEEL = 50;
@@ -52,50 +54,31 @@ export function demoGirtWallU(): number {
   return 1 / (0.04 + 0.0006 / STEEL + 0.1 / WOOL + 0.0006 / STEEL + 0.13);
 }
 
-/** Clip every 0.6 × 0.6 m: a 3 mm plate 80 mm wide through 100 mm of wool onto 150 mm of concrete. */
-export function demoClipModel(mesh: BridgeModelInput['mesh'] = {}): BridgeModelInput {
-  const sheet = 0.0007;
-  const inner = sheet + 0.1;
-  const back = inner + 0.15;
-  return {
-    dimension: '3d',
-    boxes: [
-      box('cladding sheet', STEEL, [0, 0, 0], [0.6, sheet, 0.6]),
-      box('clip', STEEL, [0.26, sheet, 0.3], [0.34, inner, 0.303]),
-      box('mineral wool', WOOL, [0, sheet, 0], [0.6, inner, 0.3]),
-      box('mineral wool', WOOL, [0, sheet, 0.303], [0.6, inner, 0.6]),
-      box('mineral wool', WOOL, [0, sheet, 0.3], [0.26, inner, 0.303]),
-      box('mineral wool', WOOL, [0.34, sheet, 0.3], [0.6, inner, 0.303]),
-      box('concrete', 2, [0, inner, 0], [0.6, back, 0.6]),
+/** The same two details as template inputs (girt: the demo girt's wall; clip: the demo clip's wall). */
+export const demoWall: { girt: GirtTemplate; clip: ClipTemplate } = {
+  girt: {
+    layers: [
+      { name: 'cladding sheet', thickness: 0.0006, lambda: STEEL },
+      { name: 'mineral wool', thickness: 0.1, lambda: WOOL },
+      { name: 'liner', thickness: 0.0006, lambda: STEEL },
     ],
-    boundaries: [
-      {
-        name: 'outside',
-        side: 'outside',
-        temperature: 0,
-        resistance: 0.04,
-        min: [0, 0, 0],
-        max: [0.6, 0, 0.6],
-      },
-      {
-        name: 'inside',
-        side: 'inside',
-        temperature: 20,
-        resistance: 0.13,
-        min: [0, back, 0],
-        max: [0.6, back, 0.6],
-      },
+    crosses: { from: 1, to: 1 },
+    profile: 'z',
+    spacing: 0.6,
+    thickness: 0.0015,
+    outerFlange: 0.05,
+    innerFlange: 0.05,
+  },
+  clip: {
+    layers: [
+      { name: 'cladding sheet', thickness: 0.0007, lambda: STEEL },
+      { name: 'mineral wool', thickness: 0.1, lambda: WOOL },
+      { name: 'concrete', thickness: 0.15, lambda: 2 },
     ],
-    reference: {
-      elements: [
-        {
-          name: 'wall without the clip',
-          u: 1 / (0.04 + sheet / STEEL + 0.1 / WOOL + 0.15 / 2 + 0.13),
-          size: 0.36,
-        },
-      ],
-      lines: [],
-    },
-    mesh,
-  };
-}
+    crosses: { from: 1, to: 1 },
+    spacingX: 0.6,
+    spacingZ: 0.6,
+    width: 0.08,
+    thickness: 0.003,
+  },
+};

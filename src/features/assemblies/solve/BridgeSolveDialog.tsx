@@ -62,7 +62,12 @@ export function BridgeSolveDialog({
   const system = useUnitSystem();
   const [inputs, setInputs] = useState<SolveInputs>(() => initialInputs(bridge, layers));
   const [phase, setPhase] = useState<Phase>({ at: 'form' });
-  const wall = useMemo(() => templateWall(layers).layers, [layers]);
+  const { layers: wall, indices } = useMemo(() => templateWall(layers), [layers]);
+  /** A changed input makes the shown result stale: back to the inputs. */
+  const edit = (next: SolveInputs) => {
+    setInputs(next);
+    setPhase((now) => (now.at === 'done' ? { at: 'form' } : now));
+  };
   const symbol = inputs.kind === 'girt' ? 'ψ' : 'χ';
   const running = phase.at === 'solving' ? phase.run : null;
   useEffect(() => () => running?.cancel(), [running]);
@@ -119,11 +124,11 @@ export function BridgeSolveDialog({
         </p>
         <fieldset disabled={phase.at === 'solving'} className="flex flex-col gap-3">
           <legend className="sr-only">Inputs</legend>
-          <CrossedLayers inputs={inputs} wall={wall} onChange={setInputs} />
+          <CrossedLayers inputs={inputs} wall={wall} indices={indices} onChange={edit} />
           {inputs.kind === 'girt' ? (
-            <GirtFields inputs={inputs} onChange={setInputs} />
+            <GirtFields inputs={inputs} onChange={edit} />
           ) : (
-            <ClipFields inputs={inputs} onChange={setInputs} />
+            <ClipFields inputs={inputs} onChange={edit} />
           )}
         </fieldset>
         {phase.at === 'form' && phase.problem ? (
@@ -231,17 +236,20 @@ function Progress({ started, onCancel }: { started: number; onCancel: () => void
 function CrossedLayers({
   inputs,
   wall,
+  indices,
   onChange,
 }: {
   inputs: SolveInputs;
   wall: TemplateLayer[];
+  /** The assembly's number of each (the build-up page's numbering). */
+  indices: number[];
   onChange: (next: SolveInputs) => void;
 }) {
   const system = useUnitSystem();
   const options = wall.map((l, k) => (
     // biome-ignore lint/suspicious/noArrayIndexKey: the index is the value
     <option key={k} value={k}>
-      {k + 1} {l.name}
+      {(indices[k] ?? k) + 1} {l.name}
     </option>
   ));
   return (

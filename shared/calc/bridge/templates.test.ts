@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { CalcInputError } from '../errors';
 import { fastenerAlpha, fastenerDeltaU } from '../thermal/thermal';
-import { solveBridge } from './bridge';
+import { bridgeGrid, DEFAULT_MAX_CELLS, solveBridge } from './bridge';
 import { demoGirtModel } from './fixtures';
 import { bridgeModelSchema } from './schema';
 import {
@@ -99,6 +99,19 @@ describe('clip template', () => {
     expect(bare.chi!).toBeGreaterThan(0);
     expect(padded.chi!).toBeLessThan(bare.chi!);
     expect(bare.solver.energyBalance).toBeLessThan(1e-3);
+  });
+  it('the default mesh: 0.3 mm edge cells, coarsened only as far as a wall of many layers needs to fit the budget', () => {
+    const { mesh: _, ...plain } = clip;
+    expect(clipModel(plain).mesh).toMatchObject({ interfaceCell: 0.0003, growth: 1.3, gradeBounds: false });
+    const many = clipModel({
+      ...plain,
+      layers: [clip.layers[0]!, { name: 'air', thickness: 0.025, lambda: 0.15 }, ...clip.layers.slice(1)],
+      crosses: { from: 2, to: 2 },
+    });
+    const cells = bridgeGrid(bridgeModelSchema.parse(many)).cells;
+    expect(cells).toBeLessThanOrEqual(DEFAULT_MAX_CELLS);
+    expect(cells).toBeGreaterThan(DEFAULT_MAX_CELLS / 2);
+    expect(clipModel({ ...plain, mesh: { subdivide: 2 } }).mesh).toMatchObject({ interfaceCell: 0.0003 });
   });
   it('refuses a pad as deep as the layers the clip crosses (a clip longer than the insulation is deep)', () => {
     expect(refusedField(() => clipModel({ ...clip, pad: { thickness: 0.1, lambda: 0.2 } }))).toBe(

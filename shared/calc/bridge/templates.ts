@@ -1,7 +1,15 @@
 import { z } from 'zod';
 import { CalcInputError } from '../errors';
+import { bridgeGrid, DEFAULT_MAX_CELLS } from './bridge';
 import { EDGE_TOLERANCE } from './grid';
-import { type BridgeBox, type BridgeModelInput, bridgeMeshSchema, MIN_EDGE, MIN_LAMBDA } from './schema';
+import {
+  type BridgeBox,
+  type BridgeModelInput,
+  bridgeMeshSchema,
+  bridgeModelSchema,
+  MIN_EDGE,
+  MIN_LAMBDA,
+} from './schema';
 
 /*
  * Parametric details built from an assembly's own layers (outside → inside): a continuous girt through some
@@ -188,6 +196,24 @@ export function girtModel(raw: GirtTemplate): BridgeModelInput {
   };
 }
 
+/** Edge cells the default 3-D mesh coarsens to, m, when a wall of many layers would exceed the cell budget. */
+const COARSER_EDGE_CELLS = [0.0005, 0.001, 0.002, 0.005];
+
+/**
+ * The default 3-D mesh unless its grid would exceed DEFAULT_MAX_CELLS: then the first coarser edge cell that
+ * fits (a wall of many layers or a wide cell; each edge adds graded cells on every axis). A mesh the caller
+ * chose (interfaceCell or growth given) is kept as given.
+ */
+function fitMesh(model: BridgeModelInput, asked: { interfaceCell?: number; growth?: number } | undefined) {
+  if (asked?.interfaceCell !== undefined || asked?.growth !== undefined) return model;
+  const cells = (interfaceCell: number) =>
+    bridgeGrid(bridgeModelSchema.parse({ ...model, mesh: { ...model.mesh, interfaceCell, subdivide: 1 } }))
+      .cells;
+  if (cells(TEMPLATE_MESH_3D.interfaceCell) <= DEFAULT_MAX_CELLS) return model;
+  const edge = COARSER_EDGE_CELLS.find((c) => cells(c) <= DEFAULT_MAX_CELLS) ?? COARSER_EDGE_CELLS.at(-1)!;
+  return { ...model, mesh: { ...model.mesh, interfaceCell: edge } };
+}
+
 /**
  * A 3-D cell sx × sz of the wall (its faces half-way to the next bridges: symmetry planes, ISO 10211:2017
  * §5.2.2) with `parts` through it, the layers carved around them, outside 0 °C at y = 0, inside 20 °C at the
@@ -246,7 +272,7 @@ export function clipModel(raw: ClipTemplate): BridgeModelInput {
       min: [xa, plateEnd, za],
       max: [xa + w, y1, za + t],
     });
-  return cellModel3d(input, sx, sz, parts, 'wall without the clip');
+  return fitMesh(cellModel3d(input, sx, sz, parts, 'wall without the clip'), raw.mesh);
 }
 
 /**
@@ -268,5 +294,5 @@ export function fastenerModel(raw: FastenerTemplate): BridgeModelInput {
     min: [xa, y0 + recess, za],
     max: [xa + side, y1, za + side],
   };
-  return cellModel3d(input, sx, sz, [shank], 'wall without the fastener');
+  return fitMesh(cellModel3d(input, sx, sz, [shank], 'wall without the fastener'), raw.mesh);
 }

@@ -1,23 +1,14 @@
-import { create, createUnitDependencies, type Unit, unitDependencies } from 'mathjs';
-import { PERM_23C_TO_SI } from './index';
+import type { Unit } from 'mathjs';
+import { unitMath as math } from './derive';
 
 /*
  * Reading a number typed with its unit into a box that holds another ("3.5 in" in a mm box, "1 5/8 in",
  * "2' 6\"", "89 mm" in an inch box, "R-13" in an m²·K/W box). The units and their factors are mathjs's
  * (exact inch, foot, pound-force and Btu_IT as NIST SP 811 (2008) Appendix B defines them); the few trade
- * units it lacks are defined below from mathjs's own units or from `shared/units`. Pure: no I/O, no DOM.
+ * units it lacks are defined on the units layer's mathjs instance (`derive.ts`). Pure: no I/O, no DOM.
  *
  * A decimal comma is refused with a reason rather than guessed: "1,250" is 1250 to some and 1.25 to others.
  */
-
-const math = create({ unitDependencies, createUnitDependencies });
-math.createUnit({
-  Btu: { definition: '1 BTU', aliases: ['btu'] },
-  psf: '1 lbf/ft^2',
-  pcf: '1 lb/ft^3',
-  mph: '1 mi/h',
-  perm: `${PERM_23C_TO_SI} kg/(Pa s m^2)`,
-});
 
 /** What was typed, read against the box's unit: `value` is in the box's unit, `converted` when typed in another. */
 export type TypedQuantity =

@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { deriveFactors } from './derive';
+import { DERIVED } from './derived';
 import {
   CHI_IP_TO_SI,
   celsiusToFahrenheit,
@@ -195,5 +197,11 @@ describe('the registry', () => {
       const power = Math.log10(scale);
       expect(Math.abs(power - Math.round(power)), q).toBeLessThan(1e-9);
     }
+  });
+});
+
+describe('derived.ts holds what mathjs derives', () => {
+  it('every stored factor and origin equals mathjs’s derivation now, to the last bit (else run npm run units:derive)', () => {
+    expect(DERIVED).toEqual(deriveFactors());
   });
 });

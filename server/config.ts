@@ -23,7 +23,7 @@ const envSchema = z.object({
   /** Most grid cells one bridge solve (`POST /api/v1/calc/bridge`) may use; a 3-D clip of 200 000 ≈ 2 s. */
   BRIDGE_MAX_CELLS: z.coerce.number().int().min(1000).max(5_000_000).default(250_000),
   /** Most variants one sweep (`POST /api/v1/calc/sweep`) may check; each runs every check module. */
-  SWEEP_MAX_VARIANTS: z.coerce.number().int().min(1).max(100_000).default(2000),
+  SWEEP_MAX_VARIANTS: z.coerce.number().int().min(1).max(100_000).default(500),
   /** Requests per minute per address on the public sheet verification (`GET /api/verify/:code`). */
   VERIFY_RATE_LIMIT: z.coerce.number().int().positive().default(30),
   /**

@@ -56,7 +56,7 @@ describe('sweep API', () => {
     });
     expect(res.status).toBe(413);
     expect(res.body.error.code).toBe('too_much_work');
-    expect(res.body.error.fields.parameters).toMatch(/^at most 2000 variants \(got 38\d\d\); vary fewer/);
+    expect(res.body.error.fields.parameters).toMatch(/^at most 500 variants \(got 38\d\d\); vary fewer/);
   });
 
   it('is in the OpenAPI document', async () => {

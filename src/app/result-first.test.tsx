@@ -8,9 +8,9 @@ import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { AssemblyBuilder } from '../features/assemblies/components/AssemblyBuilder';
 import { startingInput } from '../features/assemblies/form';
-import { JointsSheet } from '../features/joints/components/JointsSheet';
-import { MoistureSheet } from '../features/moisture/components/MoistureSheet';
-import { AttachmentSheet } from '../features/wind/components/AttachmentSheet';
+import { JointsView } from '../features/joints/components/JointsView';
+import { MoistureView } from '../features/moisture/components/MoistureView';
+import { AttachmentView } from '../features/wind/components/AttachmentView';
 import { demoAssembly, demoProject } from '../features/wind/test-fixtures';
 import { UnitSystemProvider } from '../lib/unit-system';
 
@@ -122,7 +122,7 @@ const SHEETS: SheetCase[] = [
   {
     sheet: 'attachment',
     element: () => (
-      <AttachmentSheet
+      <AttachmentView
         project={project}
         assembly={assemblyOf(demoAssembly({ girtSpacing: 1.2, clipSpacing: 0.6 }))}
         library={null}
@@ -137,7 +137,7 @@ const SHEETS: SheetCase[] = [
   {
     sheet: 'moisture',
     element: () => (
-      <MoistureSheet
+      <MoistureView
         project={{ ...project, climate: projectClimateSchema.parse(demo.climate) }}
         assembly={demoWall}
         climateSummary={null}
@@ -152,7 +152,7 @@ const SHEETS: SheetCase[] = [
   },
   {
     sheet: 'joints',
-    element: () => <JointsSheet project={project} assembly={demoWall} {...revisionApi} />,
+    element: () => <JointsView project={project} assembly={demoWall} {...revisionApi} />,
     inputs: /Joint schedule — inputs/,
     figure: 'summary-joints',
     // The first joint's design width (mm), from wide enough to too narrow for its movement.

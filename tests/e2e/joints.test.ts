@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { browserSuite, openDemoAssembly, openPage, screenshot, signIn } from '../setup/browser';
 
 /** Open the demo assembly's "Joints & quantities" sheet from the project list, as a person would. */
-async function openJointsSheet(page: Page) {
+async function openJointsPage(page: Page) {
   await openDemoAssembly(page);
   await page.getByRole('link', { name: 'Joints & quantities' }).click();
   await page.waitForURL(/\/assemblies\/[0-9a-f-]{36}\/joints$/);
@@ -22,7 +22,7 @@ describe('joints & quantities in the browser', () => {
     });
     const { page, problems } = await openPage(context);
     await signIn(page, suite.baseUrl, 'subcontractor@skinwright.demo');
-    await openJointsSheet(page);
+    await openJointsPage(page);
 
     const schedule = page.getByRole('table', { name: /Joint schedule/ });
     await schedule.waitFor();
@@ -63,7 +63,7 @@ describe('joints & quantities in the browser', () => {
     const context = await suite.browser.newContext({ viewport: { width: 1280, height: 1000 } });
     const { page, problems } = await openPage(context);
     await signIn(page, suite.baseUrl, 'architect@skinwright.demo');
-    await openJointsSheet(page);
+    await openJointsPage(page);
 
     const live = page.getByTestId('joint-live');
     await expect.poll(() => live.textContent()).toContain('meets — margin 46 %');

@@ -7,7 +7,7 @@ import {
 } from '../../features/library/api/attachment-products';
 import { useMe } from '../../features/me/api/get-me';
 import { firmOf } from '../../features/me/firm';
-import { AttachmentSheet } from '../../features/wind/components/AttachmentSheet';
+import { AttachmentView } from '../../features/wind/components/AttachmentView';
 import type { AttachmentLibrary } from '../../features/wind/components/LibraryPick';
 import { errorMessage } from '../../lib/api';
 import { useAssemblyFrame } from '../layout/AssemblyLayout';
@@ -42,7 +42,7 @@ export function AssemblyAttachmentPage() {
   return (
     <>
       <title>{`Attachment & wind · ${assembly.name} · ${project.name} · Skinwright`}</title>
-      <AttachmentSheet
+      <AttachmentView
         key={assembly.id}
         project={project}
         assembly={assembly}

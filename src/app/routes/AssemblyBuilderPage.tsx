@@ -1,7 +1,7 @@
 import { can } from '@shared/auth/permissions';
 import type { Project } from '@shared/schemas/project';
 import { AssemblyBuilder } from '../../features/assemblies/components/AssemblyBuilder';
-import { AssemblySheet } from '../../features/assemblies/components/AssemblySheet';
+import { AssemblyView } from '../../features/assemblies/components/AssemblyView';
 import { DuplicateAssembly } from '../../features/assemblies/components/DuplicateAssembly';
 import { RevisionHistory } from '../../features/assemblies/components/RevisionHistory';
 import { useBridgeValues } from '../../features/library/api/get-bridge-values';
@@ -47,7 +47,7 @@ export function AssemblyBuilderPage() {
           bridgeValues={library.bridgeValues}
         />
       ) : (
-        <AssemblySheet
+        <AssemblyView
           input={a.current.input}
           storedResult={a.current.thermalResult}
           engineVersion={a.current.engineVersion}

@@ -1,5 +1,5 @@
 import { useAssemblyRevisionApi } from '../../features/assemblies/api/update-assembly';
-import { JointsSheet } from '../../features/joints/components/JointsSheet';
+import { JointsView } from '../../features/joints/components/JointsView';
 import { useAssemblyFrame } from '../layout/AssemblyLayout';
 
 /** The joints & quantities sheet of one assembly: joint schedule and takeoff, computed in the browser. */
@@ -9,7 +9,7 @@ export function AssemblyJointsPage() {
   return (
     <>
       <title>{`Joints & quantities · ${assembly.name} · Skinwright`}</title>
-      <JointsSheet key={assembly.id} project={project} assembly={assembly} {...revisionApi} />
+      <JointsView key={assembly.id} project={project} assembly={assembly} {...revisionApi} />
     </>
   );
 }

@@ -1,6 +1,6 @@
 import { useAssemblyRevisionApi } from '../../features/assemblies/api/update-assembly';
 import { ClimateSummary } from '../../features/climate/components/ClimateSummary';
-import { MoistureSheet } from '../../features/moisture/components/MoistureSheet';
+import { MoistureView } from '../../features/moisture/components/MoistureView';
 import { useAssemblyFrame } from '../layout/AssemblyLayout';
 
 /** The moisture (condensation) sheet of one assembly: inputs, conditions, method, result, cautions. */
@@ -10,7 +10,7 @@ export function AssemblyMoisturePage() {
   return (
     <>
       <title>{`Moisture · ${assembly.name} · ${project.name} · Skinwright`}</title>
-      <MoistureSheet
+      <MoistureView
         key={assembly.id}
         project={project}
         assembly={assembly}

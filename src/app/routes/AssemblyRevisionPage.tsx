@@ -2,7 +2,7 @@ import { Link, useParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { useRevision } from '../../features/assemblies/api/get-revision';
-import { AssemblySheet } from '../../features/assemblies/components/AssemblySheet';
+import { AssemblyView } from '../../features/assemblies/components/AssemblyView';
 import { RevisionHistory } from '../../features/assemblies/components/RevisionHistory';
 import { errorMessage } from '../../lib/api';
 import { formatDateTime } from '../../lib/format';
@@ -28,7 +28,7 @@ export function AssemblyRevisionPage() {
   return (
     <>
       <title>{`${r.input.name}, rev. ${r.revision} · ${project.name} · Skinwright`}</title>
-      <AssemblySheet
+      <AssemblyView
         input={r.input}
         storedResult={r.thermalResult}
         engineVersion={r.engineVersion}

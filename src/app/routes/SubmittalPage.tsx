@@ -5,7 +5,7 @@ import { Link, useParams } from 'react-router';
 import { Button } from '../../components/ui/Button';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
-import { SheetSection } from '../../components/ui/SheetSection';
+import { PageSection } from '../../components/ui/PageSection';
 import { useMe } from '../../features/me/api/get-me';
 import { useMembers } from '../../features/members/api/get-members';
 import { useProject } from '../../features/projects/api/get-project';
@@ -149,7 +149,7 @@ export function SubmittalPage() {
         </Notice>
       ) : null}
 
-      <SheetSection n={1} title="Details" id="details">
+      <PageSection n={1} title="Details" id="details">
         <dl className="grid gap-x-8 gap-y-1 text-sm sm:grid-cols-[12rem_1fr]">
           <dt className="font-semibold">Submitter</dt>
           <dd>{s.submitter?.name ?? '—'}</dd>
@@ -167,9 +167,9 @@ export function SubmittalPage() {
           ) : null}
         </dl>
         {mayEdit ? <EditDetails s={s} /> : null}
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection n={2} title="Items" id="items">
+      <PageSection n={2} title="Items" id="items">
         <ItemList s={s} mayEdit={mayEdit} mayComment={mayComment} />
         {mayEdit ? (
           <div className="grid gap-4 lg:grid-cols-2">
@@ -181,9 +181,9 @@ export function SubmittalPage() {
             <UploadFiles submittalId={s.id} />
           </div>
         ) : null}
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection n={3} title="Review" id="review">
+      <PageSection n={3} title="Review" id="review">
         {s.decision ? (
           <p className="font-semibold" data-testid="decision">
             <span aria-hidden="true">{SUBMITTAL_STATUS_TEXT[s.decision.decision].glyph} </span>
@@ -195,9 +195,9 @@ export function SubmittalPage() {
         {open ? (
           <ReviewPanel s={s} maySubmit={can(project.myRole, 'submittal.submit')} me={myReview} />
         ) : null}
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection n={4} title="Comments" id="comments">
+      <PageSection n={4} title="Comments" id="comments">
         <CommentList comments={s.comments.filter((c) => c.itemId === null)} />
         {s.comments.every((c) => c.itemId !== null) ? (
           <p className="text-sm text-ink-muted">No comment on the whole submittal yet.</p>
@@ -205,7 +205,7 @@ export function SubmittalPage() {
         {mayComment ? (
           <CommentForm submittalId={s.id} itemId={null} label="Comment on the submittal" />
         ) : null}
-      </SheetSection>
+      </PageSection>
     </div>
   );
 }

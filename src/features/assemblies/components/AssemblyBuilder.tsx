@@ -35,7 +35,7 @@ import { AttachmentsEditor } from './AttachmentsEditor';
 import { SelectField, TextField } from './FormFields';
 import { LayersEditor } from './LayersEditor';
 import { ThermalSummary } from './ResultFigures';
-import { describePath, ResultPanel, SheetSection } from './ResultPanel';
+import { describePath, PageSection, ResultPanel } from './ResultPanel';
 
 const HEAT_FLOW = [
   { value: 'horizontal', label: 'Horizontal (walls)' },
@@ -173,7 +173,7 @@ export function AssemblyBuilder({
 
           <ThermalSummary result={result} problems={Object.keys(evaluation.errors).length} stale={stale} />
 
-          <SheetSection n={1} title="Build-up" id="buildup-heading">
+          <PageSection n={1} title="Build-up" id="buildup-heading">
             <div className="grid gap-x-6 gap-y-4 sm:grid-cols-2 lg:grid-cols-4">
               <TextField path="name" label="Name" required className="sm:col-span-2" maxLength={200} />
               <SelectField
@@ -194,11 +194,11 @@ export function AssemblyBuilder({
               </Field>
             </div>
             <LayersEditor />
-          </SheetSection>
+          </PageSection>
 
-          <SheetSection n={2} title="Attachments" id="attachments-heading">
+          <PageSection n={2} title="Attachments" id="attachments-heading">
             <AttachmentsEditor />
-          </SheetSection>
+          </PageSection>
 
           <ResultPanel
             thermal={values.thermal as ThermalInput}

@@ -1,8 +1,8 @@
 import type { ThermalInput, ThermalResult } from '@shared/calc/thermal/schema';
 import type { ReactNode } from 'react';
 import { Notice } from '../../../components/ui/Notice';
+import { PageSection } from '../../../components/ui/PageSection';
 import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
-import { SheetSection } from '../../../components/ui/SheetSection';
 import { fieldDomId } from '../evaluate';
 import { Cautions } from './Cautions';
 import { MethodSection } from './MethodSection';
@@ -12,7 +12,7 @@ import { ShareChart } from './ShareChart';
 import { ShowTheWork } from './ShowTheWork';
 
 /** Re-exported for the builder and the sheet; the primitive lives in components/ui. */
-export { SheetSection };
+export { PageSection };
 
 /** Plain words for a form path, for the list of what the result is waiting for. */
 export function describePath(path: string, thermal: Partial<ThermalInput> | undefined): string {
@@ -120,15 +120,15 @@ export function ResultPanel({
 }: ResultPanelProps) {
   return (
     <>
-      <SheetSection n={startAt} title="Method" id="method-heading">
+      <PageSection n={startAt} title="Method" id="method-heading">
         {result ? (
           <MethodSection result={result} />
         ) : (
           <p className="text-ink-muted">The method is chosen once the build-up can be computed.</p>
         )}
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection
+      <PageSection
         n={startAt + 1}
         title="Result"
         id="result-heading"
@@ -156,7 +156,7 @@ export function ResultPanel({
             ) : null}
           </div>
         </div>
-      </SheetSection>
+      </PageSection>
 
       <Cautions engineVersion={engineVersion} />
     </>

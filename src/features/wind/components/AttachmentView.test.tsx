@@ -5,7 +5,7 @@ import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/re
 import { createMemoryRouter, MemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { demoAssembly, demoProject } from '../test-fixtures';
-import { AttachmentSheet } from './AttachmentSheet';
+import { AttachmentView } from './AttachmentView';
 import type { AttachmentLibrary } from './LibraryPick';
 
 afterEach(cleanup);
@@ -53,7 +53,7 @@ describe('the attachment sheet for a role that only reads', () => {
   it('computes the schedule from the saved inputs and offers no editing', () => {
     render(
       <MemoryRouter>
-        <AttachmentSheet
+        <AttachmentView
           project={project('viewer')}
           assembly={assembly()}
           save={vi.fn()}
@@ -127,7 +127,7 @@ describe('the firm library on the sheet', () => {
       current: { ...assembly().current, revision: 2, input: args.input as Assembly['current']['input'] },
     }));
     const sheet = (
-      <AttachmentSheet
+      <AttachmentView
         project={project('engineer')}
         assembly={assembly()}
         save={saveAssembly}

@@ -5,9 +5,9 @@ import type { Project } from '@shared/schemas/project';
 import { drawClass } from '@shared/sheets/layer-class';
 import { type ReactNode, useState } from 'react';
 import { Link } from 'react-router';
+import { PageSection } from '../../../components/ui/PageSection';
 import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
 import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
-import { SheetSection } from '../../../components/ui/SheetSection';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
 import { useDeferredCalculation } from '../../../lib/deferred-calculation';
 import { formatDateTime } from '../../../lib/format';
@@ -32,7 +32,7 @@ type Props = RevisionApi & {
 };
 
 /** The moisture (condensation) sheet of one assembly: inputs, conditions, method, result, cautions. */
-export function MoistureSheet({ project, assembly, climateSummary, ...revisionApi }: Props) {
+export function MoistureView({ project, assembly, climateSummary, ...revisionApi }: Props) {
   const system = useUnitSystem();
   const archived = project.archivedAt !== null;
   const mayWrite = can(project.myRole, 'assembly.write') && !archived;
@@ -53,11 +53,7 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
   // The engine's reasons about a vapour row are shown on that row, beside its box.
   const rowErrors: Record<number, string> = { ...editing.rowErrors };
   for (const p of problems)
-    if (
-      p.where.kind === 'vapour' &&
-      rowErrors[p.where.layer] === undefined &&
-      p.code !== 'vapour_missing'
-    )
+    if (p.where.kind === 'vapour' && rowErrors[p.where.layer] === undefined && p.code !== 'vapour_missing')
       rowErrors[p.where.layer] = p.text;
 
   const layers: ProfileLayer[] = input.thermal.layers.map((l) => ({
@@ -94,7 +90,7 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
         system={system}
       />
 
-      <SheetSection n={1} title="Inputs — layers and their vapour data" id="moisture-inputs-heading">
+      <PageSection n={1} title="Inputs — layers and their vapour data" id="moisture-inputs-heading">
         <VapourTable
           layers={input.thermal.layers}
           drafts={editing.drafts}
@@ -105,9 +101,9 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
           builderHref={builderHref}
           readOnly={!mayWrite}
         />
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection
+      <PageSection
         n={2}
         title="Conditions inside and outside"
         id="moisture-conditions-heading"
@@ -118,9 +114,9 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
         }
       >
         {climateSummary ?? <p className="text-ink-muted">The project has no monthly climate yet.</p>}
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection n={3} title="Method" id="moisture-method-heading">
+      <PageSection n={3} title="Method" id="moisture-method-heading">
         {evaluation.status === 'ready' ? (
           <MoistureMethod result={evaluation.result} input={evaluation.input} system={system} />
         ) : (
@@ -129,9 +125,9 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
             can be computed.
           </p>
         )}
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection
+      <PageSection
         n={4}
         title="Result"
         id="moisture-result-heading"
@@ -174,7 +170,7 @@ export function MoistureSheet({ project, assembly, climateSummary, ...revisionAp
             <ShowTheWork steps={result.trace} />
           </div>
         ) : null}
-      </SheetSection>
+      </PageSection>
 
       <MoistureCautions engineVersion={ENGINE_VERSION} />
 

@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 
 /** One numbered part of a calculation sheet: inputs, method, result… under a ruled heading. */
-export function SheetSection({
+export function PageSection({
   n,
   title,
   id,

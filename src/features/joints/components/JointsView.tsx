@@ -6,9 +6,9 @@ import { type Assembly, type AssemblyInput, assemblyInputSchema } from '@shared/
 import type { Project } from '@shared/schemas/project';
 import { useMemo, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
+import { PageSection } from '../../../components/ui/PageSection';
 import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
 import { NewerRevisionNotice, RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
-import { SheetSection } from '../../../components/ui/SheetSection';
 import { useDeferredCalculation } from '../../../lib/deferred-calculation';
 import { formatDateTime } from '../../../lib/format';
 import { issueLines } from '../../../lib/issue-words';
@@ -48,7 +48,7 @@ type Props = RevisionApi & { project: Project; assembly: Assembly };
  * thermal movement) and the elevation takeoff, computed in the browser as you type and saved together as a
  * new revision of the assembly.
  */
-export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
+export function JointsView({ project, assembly, ...revisionApi }: Props) {
   const mayWrite = can(project.myRole, 'assembly.write') && project.archivedAt === null;
 
   const [joints, setJoints] = useState<JointInput[]>(assembly.current.input.joints ?? []);
@@ -149,7 +149,7 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
         stale={stale}
       />
 
-      <SheetSection n={1} title="Joint schedule — inputs" id="joint-inputs-heading">
+      <PageSection n={1} title="Joint schedule — inputs" id="joint-inputs-heading">
         {mayWrite ? (
           <div id="joint-editor" className="scroll-mt-4">
             <JointScheduleEditor
@@ -167,15 +167,15 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
         ) : (
           <p className="text-ink-muted">No joint schedule has been entered for this assembly.</p>
         )}
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection n={2} title="Method" id="joint-method-heading">
+      <PageSection n={2} title="Method" id="joint-method-heading">
         <div {...staleProps(stale)}>
           <JointMethod results={shown.jointsEval.results} />
         </div>
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection
+      <PageSection
         n={3}
         title="Schedule"
         id="joint-schedule-heading"
@@ -197,10 +197,10 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
             <p className="text-ink-muted">No joints in the schedule yet.</p>
           )}
         </div>
-      </SheetSection>
+      </PageSection>
       <JointCautions engineVersion={ENGINE_VERSION} />
 
-      <SheetSection
+      <PageSection
         n={4}
         title="Elevation — takeoff inputs"
         id="takeoff-inputs-heading"
@@ -234,9 +234,9 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
         ) : (
           <p className="text-ink-muted">No takeoff has been entered for this assembly.</p>
         )}
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection
+      <PageSection
         n={5}
         title="Takeoff"
         id="takeoff-heading"
@@ -260,7 +260,7 @@ export function JointsSheet({ project, assembly, ...revisionApi }: Props) {
             <p className="text-ink-muted">Nothing to take off yet.</p>
           )}
         </div>
-      </SheetSection>
+      </PageSection>
       <TakeoffCautions engineVersion={ENGINE_VERSION} />
 
       {mayWrite ? (

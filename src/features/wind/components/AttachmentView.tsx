@@ -6,9 +6,9 @@ import type { Project } from '@shared/schemas/project';
 import { Link } from 'react-router';
 import { Cautions } from '../../../components/ui/Cautions';
 import { Notice } from '../../../components/ui/Notice';
+import { PageSection } from '../../../components/ui/PageSection';
 import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
 import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
-import { SheetSection } from '../../../components/ui/SheetSection';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
 import { formatDateTime } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
@@ -45,7 +45,7 @@ type Props = Omit<AttachmentEditingOptions, 'system' | 'project' | 'assembly'> &
  * elevation, the checks at the design spacing and the velocity pressure; the work; the cautions. It recomputes in
  * the browser with the shared engine on every keystroke.
  */
-export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
+export function AttachmentView({ project, assembly, library, ...io }: Props) {
   const system = useUnitSystem();
   const editing = useAttachmentEditing({ project, assembly, system, ...io });
   const { form, values, evaluation, errors, base, stale } = editing;
@@ -76,7 +76,7 @@ export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
 
       <AttachmentSummary result={result} zones={zones} stale={stale} system={system} />
 
-      <SheetSection
+      <PageSection
         n={1}
         title="Inputs — site and wind"
         id="wind-site-heading"
@@ -99,22 +99,22 @@ export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
             : ''}
           . <Link to={builderHref}>Set on the build-up sheet</Link>.
         </p>
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection n={2} title="Inputs — design spacing" id="wind-design-heading">
+      <PageSection n={2} title="Inputs — design spacing" id="wind-design-heading">
         <DesignSpacingInputs form={form} errors={errors} disabled={!mayWrite} />
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection n={3} title="Inputs — panel and clip" id="panel-heading">
+      <PageSection n={3} title="Inputs — panel and clip" id="panel-heading">
         <p className="max-w-prose text-sm text-ink-muted">
           Enter the maker’s published, tested values of the actual product, gauge and fastener pattern — or
           take them from your firm’s library — and check that the table’s span condition matches the girt
           layout. Name the source of each: it is printed beside the values on the compliance sheet.
         </p>
         <PanelInputs form={form} values={values} errors={errors} disabled={!mayWrite} library={library} />
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection n={4} title="Method" id="wind-method-heading">
+      <PageSection n={4} title="Method" id="wind-method-heading">
         {result && input ? (
           <WindMethod result={result} input={input} />
         ) : (
@@ -123,9 +123,9 @@ export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
             edition follow once the sheet can be computed.
           </p>
         )}
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection
+      <PageSection
         n={5}
         title="Result"
         id="wind-result-heading"
@@ -185,7 +185,7 @@ export function AttachmentSheet({ project, assembly, library, ...io }: Props) {
             <ShowTheWork steps={result.trace} />
           </div>
         ) : null}
-      </SheetSection>
+      </PageSection>
 
       <Cautions items={[LEAD_CAUTION, ...CAUTIONS]} engineVersion={ENGINE_VERSION} />
 

@@ -10,7 +10,7 @@ import { firstCountedLayer, LAYER_KIND_LABELS } from '../form';
 import { formatMeasure } from '../units';
 import { SOURCE_TYPE_LABELS } from './AttachmentsEditor';
 import { ThermalSummary } from './ResultFigures';
-import { ResultPanel, SheetSection } from './ResultPanel';
+import { PageSection, ResultPanel } from './ResultPanel';
 
 const HEAT_FLOW_WORDS = { horizontal: 'horizontal (walls)', upward: 'upward', downward: 'downward' } as const;
 const VENT_WORDS = {
@@ -78,7 +78,7 @@ function Meta({ label, children }: { label: string; children: ReactNode }) {
   );
 }
 
-interface AssemblySheetProps {
+interface AssemblyViewProps {
   input: AssemblyInput;
   /** The result stored with the revision; recomputed here when there is none. */
   storedResult: ThermalResult | null;
@@ -88,13 +88,13 @@ interface AssemblySheetProps {
 }
 
 /** An assembly set out read-only, as the same calculation sheet the builder shows. */
-export function AssemblySheet({
+export function AssemblyView({
   input,
   storedResult,
   engineVersion,
   heading,
   bridgeValues = [],
-}: AssemblySheetProps) {
+}: AssemblyViewProps) {
   const system = useUnitSystem();
   const computed = useMemo(
     () => (storedResult ? null : evaluateThermal(input.thermal, system)),
@@ -113,7 +113,7 @@ export function AssemblySheet({
     <article className="flex flex-col gap-10" aria-label={`Assembly ${input.name}, read-only`}>
       {heading}
       <ThermalSummary result={result} problems={Object.keys(computed?.errors ?? {}).length} stale={false} />
-      <SheetSection n={1} title="Build-up" id="buildup-heading">
+      <PageSection n={1} title="Build-up" id="buildup-heading">
         <dl className="grid grid-cols-1 gap-px border border-ink bg-rule sm:grid-cols-4">
           <Meta label="Wall category">{WALL_CATEGORY_LABELS[input.wallCategory]}</Meta>
           <Meta label="Heat flow">{HEAT_FLOW_WORDS[thermal.heatFlow]}</Meta>
@@ -175,9 +175,9 @@ export function AssemblySheet({
             })}
           </tbody>
         </Table>
-      </SheetSection>
+      </PageSection>
 
-      <SheetSection n={2} title="Attachments" id="attachments-heading">
+      <PageSection n={2} title="Attachments" id="attachments-heading">
         <p className="text-sm">
           Girts run {attachment.girtOrientation === 'horizontal' ? 'horizontally' : 'vertically'}.
           {attachment.clipType ? ` Clip: ${attachment.clipType}.` : ''}
@@ -229,7 +229,7 @@ export function AssemblySheet({
             </tbody>
           </Table>
         )}
-      </SheetSection>
+      </PageSection>
 
       <ResultPanel
         thermal={thermal}

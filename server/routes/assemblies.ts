@@ -1,5 +1,5 @@
 import { can } from '@shared/auth/permissions';
-import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import { metalPanelWall } from '@shared/calc/thermal/examples';
 import {
   assemblyCreateSchema,
   assemblyDuplicateSchema,

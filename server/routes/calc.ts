@@ -1,22 +1,22 @@
 import { demoGirtModel } from '@shared/calc/bridge/fixtures';
 import { bridgeModelSchema, bridgeResultSchema } from '@shared/calc/bridge/schema';
-import { demoJointSchedule } from '@shared/calc/joints/fixtures';
+import { demoJointSchedule } from '@shared/calc/joints/examples';
 import { calculateJointSchedule } from '@shared/calc/joints/joints';
 import { jointScheduleInputSchema, jointScheduleResultSchema } from '@shared/calc/joints/schema';
-import { metalPanelMoistureWall } from '@shared/calc/moisture/fixtures';
+import { metalPanelMoistureWall } from '@shared/calc/moisture/examples';
 import { calculateMoisture } from '@shared/calc/moisture/monthly';
 import { moistureInputSchema, moistureResultSchema } from '@shared/calc/moisture/schema';
 import { takeoffToCsv } from '@shared/calc/takeoff/csv';
-import { demoElevation } from '@shared/calc/takeoff/fixtures';
+import { demoElevation } from '@shared/calc/takeoff/examples';
 import { takeoffInputSchema, takeoffResultSchema } from '@shared/calc/takeoff/schema';
 import { calculateTakeoff } from '@shared/calc/takeoff/takeoff';
-import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import { metalPanelWall } from '@shared/calc/thermal/examples';
 import { materialSchema, materials } from '@shared/calc/thermal/materials';
 import { thermalInputSchema, thermalResultSchema } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
 import { calculateWindSchedule } from '@shared/calc/wind/attachment';
 import { checkDesignSpacing } from '@shared/calc/wind/design';
-import { demoWindSchedule } from '@shared/calc/wind/fixtures';
+import { demoWindSchedule } from '@shared/calc/wind/examples';
 import {
   designSpacingResultSchema,
   designSpacingsSchema,
@@ -24,7 +24,7 @@ import {
   windScheduleResultSchema,
 } from '@shared/calc/wind/schema';
 import { apiErrorSchema, unitSystemSchema } from '@shared/schemas/common';
-import { demoSweep } from '@shared/sweep/fixtures';
+import { demoSweep } from '@shared/sweep/examples';
 import { sweepRequestSchema, sweepResultSchema } from '@shared/sweep/schema';
 import { z } from 'zod';
 import { defineRoute, FileAnswer, type WorkLimit } from '../http/route';

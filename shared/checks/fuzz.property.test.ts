@@ -2,20 +2,20 @@ import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
 import type { z } from 'zod';
 import { CalcInputError } from '../calc/errors';
-import { demoJointSchedule } from '../calc/joints/fixtures';
+import { demoJointSchedule } from '../calc/joints/examples';
 import { calculateJointSchedule } from '../calc/joints/joints';
 import { jointScheduleInputSchema, jointScheduleResultSchema } from '../calc/joints/schema';
-import { metalPanelMoistureWall } from '../calc/moisture/fixtures';
+import { metalPanelMoistureWall } from '../calc/moisture/examples';
 import { calculateMoisture } from '../calc/moisture/monthly';
 import { moistureInputSchema, moistureResultSchema } from '../calc/moisture/schema';
-import { demoElevation } from '../calc/takeoff/fixtures';
+import { demoElevation } from '../calc/takeoff/examples';
 import { takeoffInputSchema, takeoffResultSchema } from '../calc/takeoff/schema';
 import { calculateTakeoff } from '../calc/takeoff/takeoff';
-import { metalPanelWall } from '../calc/thermal/fixtures';
+import { metalPanelWall } from '../calc/thermal/examples';
 import { thermalInputSchema, thermalResultSchema } from '../calc/thermal/schema';
 import { calculateThermal } from '../calc/thermal/thermal';
 import { calculateWindSchedule } from '../calc/wind/attachment';
-import { demoWindSchedule } from '../calc/wind/fixtures';
+import { demoWindSchedule } from '../calc/wind/examples';
 import { windScheduleInputSchema, windScheduleResultSchema } from '../calc/wind/schema';
 
 /**

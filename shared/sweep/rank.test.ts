@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { CalcInputError } from '../calc/errors';
-import { demoSweep } from './fixtures';
+import { demoSweep } from './examples';
 import { rankVariants, variantCost } from './rank';
 import { planSweep, runSweep } from './sweep';
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { CalcInputError } from '../calc/errors';
 import { criteriaRow, demoAssembly, demoProject } from '../checks/fixtures';
 import { runChecks } from '../checks/runner';
-import { demoSweep } from './fixtures';
+import { demoSweep } from './examples';
 import type { SweepParameter } from './schema';
 import { applyVariant, enumerateVariants, planSweep, runSweep, variantValues } from './sweep';
 

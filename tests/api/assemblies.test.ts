@@ -1,4 +1,4 @@
-import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import { metalPanelWall } from '@shared/calc/thermal/examples';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, demoEmail, type TestApp, testDatabases } from '../setup/app';
 

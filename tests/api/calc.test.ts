@@ -1,8 +1,8 @@
-import { demoJointSchedule } from '@shared/calc/joints/fixtures';
-import { metalPanelMoistureWall } from '@shared/calc/moisture/fixtures';
-import { demoElevation } from '@shared/calc/takeoff/fixtures';
+import { demoJointSchedule } from '@shared/calc/joints/examples';
+import { metalPanelMoistureWall } from '@shared/calc/moisture/examples';
+import { demoElevation } from '@shared/calc/takeoff/examples';
 import { checkDesignSpacing } from '@shared/calc/wind/design';
-import { demoWindSchedule } from '@shared/calc/wind/fixtures';
+import { demoWindSchedule } from '@shared/calc/wind/examples';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../setup/app';
 

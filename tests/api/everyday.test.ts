@@ -1,7 +1,7 @@
 import { takeoffToCsv } from '@shared/calc/takeoff/csv';
-import { demoElevation } from '@shared/calc/takeoff/fixtures';
+import { demoElevation } from '@shared/calc/takeoff/examples';
 import { calculateTakeoff } from '@shared/calc/takeoff/takeoff';
-import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import { metalPanelWall } from '@shared/calc/thermal/examples';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../server/routes';
 import { createTestApp, demoEmail, type TestApp, testDatabases } from '../setup/app';

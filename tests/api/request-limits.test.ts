@@ -1,8 +1,8 @@
 import { createServer, request as httpRequest, type IncomingHttpHeaders, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { demoJointSchedule } from '@shared/calc/joints/fixtures';
-import { demoElevation } from '@shared/calc/takeoff/fixtures';
-import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import { demoJointSchedule } from '@shared/calc/joints/examples';
+import { demoElevation } from '@shared/calc/takeoff/examples';
+import { metalPanelWall } from '@shared/calc/thermal/examples';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MAX_JSON_DEPTH } from '../../server/http/guards';
 import { apiRoutes } from '../../server/routes';

@@ -1,4 +1,4 @@
-import { demoSweep } from '@shared/sweep/fixtures';
+import { demoSweep } from '@shared/sweep/examples';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../setup/app';
 

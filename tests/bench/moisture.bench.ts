@@ -1,4 +1,4 @@
-import { metalPanelMoistureWall } from '@shared/calc/moisture/fixtures';
+import { metalPanelMoistureWall } from '@shared/calc/moisture/examples';
 import { calculateMoisture } from '@shared/calc/moisture/monthly';
 
 const BATCHES = 50;

@@ -1,4 +1,4 @@
-import { demoSweep } from '@shared/sweep/fixtures';
+import { demoSweep } from '@shared/sweep/examples';
 import type { SweepParameter } from '@shared/sweep/schema';
 import { runSweep } from '@shared/sweep/sweep';
 

@@ -1,4 +1,4 @@
-import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import { metalPanelWall } from '@shared/calc/thermal/examples';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
 
 const BATCHES = 50;

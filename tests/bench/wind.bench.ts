@@ -1,5 +1,5 @@
 import { calculateWindSchedule } from '@shared/calc/wind/attachment';
-import { demoWindSchedule } from '@shared/calc/wind/fixtures';
+import { demoWindSchedule } from '@shared/calc/wind/examples';
 
 const BATCHES = 50;
 const RUNS_PER_BATCH = 200;

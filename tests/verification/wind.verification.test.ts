@@ -7,7 +7,7 @@
 
 import { calculateWindSchedule } from '@shared/calc/wind/attachment';
 import { HIGH_RISE_WALL, LOW_RISE_WALL, logLinear } from '@shared/calc/wind/coefficients';
-import { demoWindSchedule } from '@shared/calc/wind/fixtures';
+import { demoWindSchedule } from '@shared/calc/wind/examples';
 import { analyseSite, MINIMUM_PRESSURE, wallPressures } from '@shared/calc/wind/pressure';
 import type { WindSite } from '@shared/calc/wind/schema';
 import { groundElevationFactor, velocityPressureExposureCoefficient } from '@shared/calc/wind/velocity';

@@ -1,8 +1,8 @@
 import { CalcInputError } from '@shared/calc/errors';
 import { INCH } from '@shared/units';
 import { describe, expect, it } from 'vitest';
+import { demoJointSchedule } from './examples';
 import { expansionMaterials, findExpansionMaterial } from './expansion';
-import { demoJointSchedule } from './fixtures';
 import {
   backerFor,
   calculateJoint,
@@ -218,7 +218,7 @@ describe('refuses impossible input with the field path', () => {
   });
 });
 
-describe('schedule, schema and fixtures', () => {
+describe('schedule, schema and example', () => {
   it('the demo schedule parses, calculates and matches the result schema', () => {
     const input = demoJointSchedule();
     for (const j of input) expect(jointInputSchema.safeParse(j).success).toBe(true);

@@ -2,7 +2,7 @@ import { CalcInputError } from '@shared/calc/errors';
 import { PERM_0C_TO_SI } from '@shared/units';
 import { describe, expect, it } from 'vitest';
 import { layerSd } from './assembly';
-import { coldClimateYear, metalPanelMoistureWall } from './fixtures';
+import { coldClimateYear, metalPanelMoistureWall } from './examples';
 import { DELTA_0 } from './glaser';
 import { designInteriorPressure, HUMIDITY_CLASS_EXCESS, humidityClassExcess } from './interior';
 import { calculateMoisture, MONTH_DAYS } from './monthly';

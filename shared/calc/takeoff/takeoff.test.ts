@@ -1,7 +1,7 @@
 import { CalcInputError } from '@shared/calc/errors';
 import { describe, expect, it } from 'vitest';
 import { csvField, takeoffToCsv } from './csv';
-import { demoElevation } from './fixtures';
+import { demoElevation } from './examples';
 import { type TakeoffInput, takeoffInputSchema, takeoffResultSchema, type Wall } from './schema';
 import {
   beadCrossSection,
@@ -236,7 +236,7 @@ describe('counts stay finite whole numbers: absurd values refused', () => {
   });
 });
 
-describe('schema, fixtures and CSV', () => {
+describe('schema, example and CSV', () => {
   it('the demo elevation parses, calculates and matches the result schema', () => {
     const demo = demoElevation();
     expect(takeoffInputSchema.safeParse(demo).success).toBe(true);

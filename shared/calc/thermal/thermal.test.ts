@@ -1,7 +1,7 @@
 import { CalcInputError } from '@shared/calc/errors';
 import { R_IP_TO_SI, siValue, U_IP_TO_SI } from '@shared/units';
 import { describe, expect, it } from 'vitest';
-import { metalPanelWall } from './fixtures';
+import { metalPanelWall } from './examples';
 import { findMaterial, materials } from './materials';
 import {
   type FramedLayer,

@@ -11,7 +11,7 @@ import {
   spanCheck,
   spanForPressure,
 } from './attachment';
-import { demoPanel, demoSite, demoWindSchedule } from './fixtures';
+import { demoPanel, demoSite, demoWindSchedule } from './examples';
 import { analyseSite, MINIMUM_PRESSURE, wallPressures } from './pressure';
 import { type WindScheduleInput, windScheduleInputSchema, windScheduleResultSchema } from './schema';
 

@@ -12,7 +12,7 @@ import {
   SPACING_TOLERANCE,
 } from './attachment';
 import { checkDesignSpacing } from './design';
-import { demoLoadSpanTable, demoPanel, demoWindSchedule } from './fixtures';
+import { demoLoadSpanTable, demoPanel, demoWindSchedule } from './examples';
 import { analyseSite, wallPressures } from './pressure';
 import {
   type DesignSpacings,
@@ -26,7 +26,7 @@ import {
 /*
  * Every expected value below is computed with the engine's own functions (pressures, effective area, table
  * interpolation, clip capacity and clip spacing of attachment.ts / pressure.ts) or is the engine's schedule itself;
- * the demo table and site are the invented fixtures of fixtures.ts.
+ * the demo table and site are the invented examples of examples.ts.
  */
 
 const demo = (design: DesignSpacings): WindDesignInput => ({ ...demoWindSchedule(), design });

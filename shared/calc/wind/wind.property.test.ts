@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { windSite } from '../../../tests/setup/wind-arbitraries';
 import { calculateWindSchedule, spanForPressure } from './attachment';
 import { LOW_RISE_HEIGHT_LIMIT } from './coefficients';
-import { demoLoadSpanTable } from './fixtures';
+import { demoLoadSpanTable } from './examples';
 import { analyseSite, wallPressures } from './pressure';
 import type { Panel, WindScheduleInput, WindScheduleResult } from './schema';
 

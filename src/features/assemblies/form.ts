@@ -1,5 +1,5 @@
 import type { Vapour } from '@shared/calc/moisture/schema';
-import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import { metalPanelWall } from '@shared/calc/thermal/examples';
 import type { Material } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import type { AssemblyInput, assemblyInputSchema, BridgeValue, OrgMaterial } from '@shared/schemas/assembly';

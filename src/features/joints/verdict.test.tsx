@@ -1,4 +1,4 @@
-import { demoJointSchedule } from '@shared/calc/joints/fixtures';
+import { demoJointSchedule } from '@shared/calc/joints/examples';
 import { calculateJoint, marginText } from '@shared/calc/joints/joints';
 import type { JointInput } from '@shared/calc/joints/schema';
 import { INCH } from '@shared/units';

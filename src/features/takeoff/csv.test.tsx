@@ -1,5 +1,5 @@
 import { takeoffToCsv } from '@shared/calc/takeoff/csv';
-import { demoElevation } from '@shared/calc/takeoff/fixtures';
+import { demoElevation } from '@shared/calc/takeoff/examples';
 import { calculateTakeoff } from '@shared/calc/takeoff/takeoff';
 import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';

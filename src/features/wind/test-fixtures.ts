@@ -1,4 +1,4 @@
-import { demoPanel, demoSite } from '@shared/calc/wind/fixtures';
+import { demoPanel, demoSite } from '@shared/calc/wind/examples';
 import type { ProjectForChecks } from '@shared/checks/inputs';
 import type { AssemblyInput } from '@shared/schemas/assembly';
 

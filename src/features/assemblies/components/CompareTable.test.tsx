@@ -1,4 +1,4 @@
-import { metalPanelWall } from '@shared/calc/thermal/fixtures';
+import { metalPanelWall } from '@shared/calc/thermal/examples';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
 import type { AssemblyInput } from '@shared/schemas/assembly';
 import { cleanup, render, screen, within } from '@testing-library/react';

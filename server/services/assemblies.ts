@@ -49,6 +49,12 @@ function toHead(a: AssemblyRow, result: { Ueff: number | null; Reff: number | nu
 /** "Wall A" → "Wall A (copy)", kept within the name limit. */
 export const copyName = (name: string) => `${name.slice(0, TEXT_MAX.name - ' (copy)'.length)} (copy)`;
 
+/** Join condition: an assembly row with its current revision's row. */
+export const isCurrentRevision = and(
+  eq(assemblyRevisions.assemblyId, assemblies.id),
+  eq(assemblyRevisions.revision, assemblies.currentRevision),
+);
+
 export function createAssemblyService(db: Db, readCache: ReadCache) {
   async function get(assemblyId: string): Promise<Assembly> {
     const [a] = await db.select().from(assemblies).where(eq(assemblies.id, assemblyId));
@@ -120,13 +126,7 @@ export function createAssemblyService(db: Db, readCache: ReadCache) {
         runAt: lastRun.at,
       })
       .from(assemblies)
-      .innerJoin(
-        assemblyRevisions,
-        and(
-          eq(assemblyRevisions.assemblyId, assemblies.id),
-          eq(assemblyRevisions.revision, assemblies.currentRevision),
-        ),
-      )
+      .innerJoin(assemblyRevisions, isCurrentRevision)
       .leftJoinLateral(lastRun, sql`true`)
       .where(eq(assemblies.projectId, projectId))
       .orderBy(asc(assemblies.name));
@@ -202,13 +202,7 @@ export function createAssemblyService(db: Db, readCache: ReadCache) {
           const [current] = await tx
             .select({ projectId: assemblies.projectId, rev: assemblyRevisions })
             .from(assemblies)
-            .innerJoin(
-              assemblyRevisions,
-              and(
-                eq(assemblyRevisions.assemblyId, assemblies.id),
-                eq(assemblyRevisions.revision, assemblies.currentRevision),
-              ),
-            )
+            .innerJoin(assemblyRevisions, isCurrentRevision)
             .where(and(eq(assemblies.id, assemblyId), eq(assemblies.version, version)))
             .for('update', { of: assemblies });
           if (!current) return STALE;

@@ -11,6 +11,7 @@ import type { ProjectClimate, ProjectWind } from '@shared/schemas/project';
 import { and, desc, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
 import { assemblies, assemblyRevisions, checkRuns, organisationMembers, projects, user } from '../db/schema';
+import { isCurrentRevision } from './assemblies';
 import { recordAudit } from './audit';
 import type { createCriteriaService } from './criteria';
 import { notFound } from './errors';
@@ -105,13 +106,7 @@ export function createCheckRunService(db: Db, criteria: ReturnType<typeof create
       const [a] = await db
         .select({ a: assemblies, input: assemblyRevisions.input, p: projects })
         .from(assemblies)
-        .innerJoin(
-          assemblyRevisions,
-          and(
-            eq(assemblyRevisions.assemblyId, assemblies.id),
-            eq(assemblyRevisions.revision, assemblies.currentRevision),
-          ),
-        )
+        .innerJoin(assemblyRevisions, isCurrentRevision)
         .innerJoin(projects, eq(projects.id, assemblies.projectId))
         .where(eq(assemblies.id, assemblyId));
       if (!a) throw notFound('assembly');

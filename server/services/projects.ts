@@ -10,7 +10,7 @@ import {
   projectMembers,
   projects,
 } from '../db/schema';
-import { copyName } from './assemblies';
+import { copyName, isCurrentRevision } from './assemblies';
 import { recordAudit } from './audit';
 import { DomainError, notFound } from './errors';
 import { STALE, versionedUpdate } from './versioned';
@@ -139,13 +139,7 @@ export function createProjectService(db: Db, readCache: ReadCache) {
       const current = await db
         .select({ a: assemblies, r: assemblyRevisions })
         .from(assemblies)
-        .innerJoin(
-          assemblyRevisions,
-          and(
-            eq(assemblyRevisions.assemblyId, assemblies.id),
-            eq(assemblyRevisions.revision, assemblies.currentRevision),
-          ),
-        )
+        .innerJoin(assemblyRevisions, isCurrentRevision)
         .where(eq(assemblies.projectId, projectId))
         .orderBy(asc(assemblies.name));
       const {

@@ -6,10 +6,10 @@ import { checkRuns, projects, submittalItems, submittals } from '../../db/schema
 import type { ReceiveFiles } from '../../storage/files';
 import { fileIntake, type StoredUpload } from '../../storage/files';
 import type { ObjectStore } from '../../storage/object-store';
-import { recordAudit } from '../audit';
+import { type AuditRecord, recordAudit } from '../audit';
 import { conflict, DomainError, notFound } from '../errors';
 import type { createSheetService } from '../sheets';
-import { type Actor, type ItemRow, MAX_ITEMS, type SubmittalQueries, wrongStatus } from './queries';
+import { type Actor, type ItemRow, MAX_ITEMS, type Row, type SubmittalQueries, wrongStatus } from './queries';
 
 const MB = 1024 * 1024;
 
@@ -25,12 +25,24 @@ function describeItem(item: ItemRow) {
     : { item: item.id, kind: 'file', name: item.fileName, sha256: item.sha256 };
 }
 
-/** Item changes count as edits of the revision (its version goes up). */
-async function bump(tx: Db, id: string) {
+/** An item change is an edit of the revision: its version goes up, and the audit log says what changed. */
+async function recordItemChange(
+  tx: Db,
+  submittal: Pick<Row, 'id' | 'projectId'>,
+  actor: Actor,
+  change: Pick<AuditRecord, 'action' | 'before' | 'after'>,
+) {
   await tx
     .update(submittals)
     .set({ version: sql`${submittals.version} + 1`, updatedAt: new Date() })
-    .where(eq(submittals.id, id));
+    .where(eq(submittals.id, submittal.id));
+  await recordAudit(tx, {
+    actorId: actor.id,
+    projectId: submittal.projectId,
+    entity: 'submittal',
+    entityId: submittal.id,
+    ...change,
+  });
 }
 
 /**
@@ -115,12 +127,7 @@ export function createSubmittalItemSteps(
             addedBy: actor.id,
           })
           .returning({ id: submittalItems.id });
-        await bump(tx, id);
-        await recordAudit(tx, {
-          actorId: actor.id,
-          projectId: r.projectId,
-          entity: 'submittal',
-          entityId: id,
+        await recordItemChange(tx, r, actor, {
           action: 'add_sheet',
           after: { item: item!.id, checkRun: checkRunId, assembly: run.assemblyName, verificationCode: code },
         });
@@ -191,12 +198,7 @@ export function createSubmittalItemSteps(
               })),
             )
             .returning({ id: submittalItems.id });
-          await bump(tx, id);
-          await recordAudit(tx, {
-            actorId: actor.id,
-            projectId: r.projectId,
-            entity: 'submittal',
-            entityId: id,
+          await recordItemChange(tx, r, actor, {
             action: 'upload',
             after: {
               files: files.map((f) => ({
@@ -227,12 +229,7 @@ export function createSubmittalItemSteps(
       if (!item) throw notFound('item');
       await db.transaction(async (tx) => {
         await tx.delete(submittalItems).where(eq(submittalItems.id, itemId));
-        await bump(tx, id);
-        await recordAudit(tx, {
-          actorId: actor.id,
-          projectId: r.projectId,
-          entity: 'submittal',
-          entityId: id,
+        await recordItemChange(tx, r, actor, {
           action: 'remove_item',
           before: describeItem(item),
         });

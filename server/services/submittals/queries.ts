@@ -11,7 +11,7 @@ import {
   type SubmittalSummary,
 } from '@shared/schemas/submittals';
 import { verificationCode } from '@shared/sheets/verification';
-import { and, asc, count, eq, inArray } from 'drizzle-orm';
+import { type AnyColumn, and, asc, count, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import {
   checkRuns,
@@ -132,6 +132,10 @@ export function createSubmittalQueries(db: Db) {
     });
   }
 
+  /** Join condition: the person in `userId` as a member of the project (their role there). */
+  const membershipOf = (userId: AnyColumn, projectId: string) =>
+    and(eq(projectMembers.userId, userId), eq(projectMembers.projectId, projectId));
+
   async function get(id: string): Promise<Submittal> {
     const r = await row(id);
     const [itemList, reviewerRows, commentRows, revisionRows] = await Promise.all([
@@ -140,26 +144,14 @@ export function createSubmittalQueries(db: Db) {
         .select({ id: user.id, name: user.name, role: projectMembers.role, reviewer: submittalReviewers })
         .from(submittalReviewers)
         .innerJoin(user, eq(user.id, submittalReviewers.userId))
-        .leftJoin(
-          projectMembers,
-          and(
-            eq(projectMembers.userId, submittalReviewers.userId),
-            eq(projectMembers.projectId, r.projectId),
-          ),
-        )
+        .leftJoin(projectMembers, membershipOf(submittalReviewers.userId, r.projectId))
         .where(eq(submittalReviewers.submittalId, id))
         .orderBy(asc(user.name)),
       db
         .select({ c: submittalComments, author: user.name, role: projectMembers.role })
         .from(submittalComments)
         .leftJoin(user, eq(user.id, submittalComments.authorId))
-        .leftJoin(
-          projectMembers,
-          and(
-            eq(projectMembers.userId, submittalComments.authorId),
-            eq(projectMembers.projectId, r.projectId),
-          ),
-        )
+        .leftJoin(projectMembers, membershipOf(submittalComments.authorId, r.projectId))
         .where(eq(submittalComments.submittalId, id))
         .orderBy(asc(submittalComments.createdAt), asc(submittalComments.id)),
       db

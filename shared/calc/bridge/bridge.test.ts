@@ -1,8 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { CalcInputError } from '../errors';
 import { bridgeGrid, solveBridge } from './bridge';
-import { demoGirtModel } from './fixtures';
+import { demoGirtModel, refusedField } from './fixtures';
 import { gradedSizes } from './grid';
 import { type BridgeModel, type BridgeModelInput, bridgeModelSchema } from './schema';
 
@@ -17,17 +16,6 @@ const slab = (over: Partial<BridgeModelInput> = {}): BridgeModel =>
     ],
     ...over,
   });
-
-/** The field a refusal names. */
-const refusedField = (run: () => unknown) => {
-  try {
-    run();
-  } catch (e) {
-    if (e instanceof CalcInputError) return e.field;
-    throw e;
-  }
-  return 'accepted';
-};
 
 describe('grid', () => {
   it('grades from the edges and fills the interval exactly', () => {

@@ -1,19 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { CalcInputError } from '../errors';
 import { solveBridge } from './bridge';
 import { type EdgeTemplate, edgeModel } from './edges';
+import { refusedField } from './fixtures';
 import { bridgeModelSchema } from './schema';
 
 const solve = (e: EdgeTemplate) => solveBridge(bridgeModelSchema.parse(edgeModel(e)));
-const refusedField = (run: () => unknown) => {
-  try {
-    run();
-  } catch (e) {
-    if (e instanceof CalcInputError) return e.field;
-    throw e;
-  }
-  return 'accepted';
-};
 const layers = [
   { name: 'cladding', thickness: 0.02, lambda: 0.5 },
   { name: 'mineral wool', thickness: 0.15, lambda: 0.035 },

@@ -1,3 +1,4 @@
+import { CalcInputError } from '../errors';
 import type { BridgeModelInput } from './schema';
 import type { ClipTemplate, GirtTemplate } from './templates';
 
@@ -82,3 +83,14 @@ export const demoWall: { girt: GirtTemplate; clip: ClipTemplate } = {
     thickness: 0.003,
   },
 };
+
+/** For tests: the field a calculation's refusal names, or 'accepted' when it runs. */
+export function refusedField(run: () => unknown): string {
+  try {
+    run();
+  } catch (e) {
+    if (e instanceof CalcInputError) return e.field;
+    throw e;
+  }
+  return 'accepted';
+}

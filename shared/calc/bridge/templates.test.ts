@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { CalcInputError } from '../errors';
 import { fastenerAlpha, fastenerDeltaU } from '../thermal/thermal';
 import { bridgeGrid, DEFAULT_MAX_CELLS, solveBridge } from './bridge';
-import { demoGirtModel } from './fixtures';
+import { demoGirtModel, demoWall, refusedField } from './fixtures';
 import { bridgeModelSchema } from './schema';
 import {
   type ClipTemplate,
@@ -14,45 +13,9 @@ import {
   girtModel,
 } from './templates';
 
-const wall = {
-  layers: [
-    { name: 'cladding sheet', thickness: 0.0006, lambda: 50 },
-    { name: 'mineral wool', thickness: 0.1, lambda: 0.035 },
-    { name: 'liner', thickness: 0.0006, lambda: 50 },
-  ],
-  crosses: { from: 1, to: 1 },
-};
-const girt: GirtTemplate = {
-  ...wall,
-  profile: 'z',
-  spacing: 0.6,
-  thickness: 0.0015,
-  outerFlange: 0.05,
-  innerFlange: 0.05,
-};
-const clip: ClipTemplate = {
-  layers: [
-    { name: 'cladding sheet', thickness: 0.0007, lambda: 50 },
-    { name: 'mineral wool', thickness: 0.1, lambda: 0.035 },
-    { name: 'concrete', thickness: 0.15, lambda: 2 },
-  ],
-  crosses: { from: 1, to: 1 },
-  spacingX: 0.6,
-  spacingZ: 0.6,
-  width: 0.08,
-  thickness: 0.003,
-  mesh: { interfaceCell: 0.005, maxCell: 0.1 },
-};
+const girt: GirtTemplate = demoWall.girt;
+const clip: ClipTemplate = { ...demoWall.clip, mesh: { interfaceCell: 0.005, maxCell: 0.1 } };
 const solve = (m: unknown) => solveBridge(bridgeModelSchema.parse(m));
-const refusedField = (run: () => unknown) => {
-  try {
-    run();
-  } catch (e) {
-    if (e instanceof CalcInputError) return e.field;
-    throw e;
-  }
-  return 'accepted';
-};
 
 describe('carve', () => {
   it('leaves the pieces around a hole, which fill the box less the hole', () => {
@@ -84,7 +47,7 @@ describe('girt template', () => {
         girtModel({
           ...girt,
           thickness: 0.006,
-          layers: [wall.layers[0]!, { ...wall.layers[1]!, thickness: 0.01 }, wall.layers[2]!],
+          layers: [girt.layers[0]!, { ...girt.layers[1]!, thickness: 0.01 }, girt.layers[2]!],
         }),
       ),
     ).toBe('thickness');

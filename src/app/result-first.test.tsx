@@ -15,8 +15,8 @@ import { demoAssembly, demoProject } from '../features/wind/test-fixtures';
 import { UnitSystemProvider } from '../lib/unit-system';
 
 /*
- * Result first, on every calculation sheet: the result summary (verdict and headline figures) stands above the
- * inputs, and while the browser has not yet computed the newest input (React's useDeferredValue lags) the sheet
+ * Result first, on every calculation page: the result summary (verdict and headline figures) stands above the
+ * inputs, and while the browser has not yet computed the newest input (React's useDeferredValue lags) the page
  * says "updating…" and dims the figures of the older input instead of showing them as current.
  */
 
@@ -97,8 +97,8 @@ const revisionApi = { save: vi.fn(), conflictOf: () => null, onLoadTheirs: vi.fn
 
 const byId = (id: string) => document.getElementById(id) as HTMLInputElement;
 
-interface SheetCase {
-  sheet: string;
+interface PageCase {
+  page: string;
   element: () => ReactNode;
   /** The first heading of the inputs. */
   inputs: RegExp;
@@ -109,9 +109,9 @@ interface SheetCase {
   entry: string;
 }
 
-const SHEETS: SheetCase[] = [
+const PAGES: PageCase[] = [
   {
-    sheet: 'build-up',
+    page: 'build-up',
     element: () => <AssemblyBuilder projectId={project.id} initial={startingInput('sample')} />,
     inputs: /Build-up/,
     figure: 'summary-Reff',
@@ -120,7 +120,7 @@ const SHEETS: SheetCase[] = [
     entry: '200',
   },
   {
-    sheet: 'attachment',
+    page: 'attachment',
     element: () => (
       <AttachmentView
         project={project}
@@ -135,7 +135,7 @@ const SHEETS: SheetCase[] = [
     entry: '1.5',
   },
   {
-    sheet: 'moisture',
+    page: 'moisture',
     element: () => (
       <MoistureView
         project={{ ...project, climate: projectClimateSchema.parse(demo.climate) }}
@@ -151,7 +151,7 @@ const SHEETS: SheetCase[] = [
     entry: '1',
   },
   {
-    sheet: 'joints',
+    page: 'joints',
     element: () => <JointsView project={project} assembly={demoWall} {...revisionApi} />,
     inputs: /Joint schedule — inputs/,
     figure: 'summary-joints',
@@ -161,7 +161,7 @@ const SHEETS: SheetCase[] = [
   },
 ];
 
-function renderSheet(element: ReactNode) {
+function renderPage(element: ReactNode) {
   const router = createMemoryRouter([{ path: '/', element }]);
   render(
     <QueryClientProvider client={new QueryClient()}>
@@ -172,9 +172,9 @@ function renderSheet(element: ReactNode) {
   );
 }
 
-describe.each(SHEETS)('the $sheet sheet, result first', ({ element, inputs, figure, box, entry }) => {
+describe.each(PAGES)('the $page page, result first', ({ element, inputs, figure, box, entry }) => {
   it('shows the result summary above the inputs', () => {
-    renderSheet(element());
+    renderPage(element());
     const summary = screen.getByTestId('result-summary');
     const firstInputs = screen.getByRole('heading', { name: inputs });
     expect(summary.compareDocumentPosition(firstInputs) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
@@ -183,7 +183,7 @@ describe.each(SHEETS)('the $sheet sheet, result first', ({ element, inputs, figu
   });
 
   it('marks "updating…" and dims the older figures while the deferred input lags', () => {
-    renderSheet(element());
+    renderPage(element());
     const before = screen.getByTestId(figure).textContent;
     const body = () => screen.getByTestId('result-summary-body');
     expect(screen.queryByText('updating…')).toBeNull();

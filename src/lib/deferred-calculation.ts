@@ -1,10 +1,10 @@
 import { useDeferredValue, useMemo } from 'react';
 
 /**
- * A sheet's calculation, run on its input as React defers it (`useDeferredValue`): while the person types
- * faster than the browser draws, the result stays that of the older input and `stale` is true, so the sheet
+ * A page's calculation, run on its input as React defers it (`useDeferredValue`): while the person types
+ * faster than the browser draws, the result stays that of the older input and `stale` is true, so the page
  * marks "updating…" and dims what it drew from that input — never an old chart beside a fresh verdict, because
- * every figure of the sheet comes from this one result. The input is compared by its JSON (form values are new
+ * every figure of the page comes from this one result. The input is compared by its JSON (form values are new
  * objects on every render); `deps` are whatever else the calculation reads (units, the saved revision).
  */
 export function useDeferredCalculation<I, R>(

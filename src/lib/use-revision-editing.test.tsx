@@ -7,7 +7,7 @@ import { conflictError, conflictOf, demoInput, revisionOf as revision } from './
 import { type NoteAlone, type SaveArgs, useRevisionEditing } from './use-revision-editing';
 
 /*
- * The shared revision editing, driven by a small sheet that edits the assembly's description: a save, the 409
+ * The shared revision editing, driven by a small page that edits the assembly's description: a save, the 409
  * carry-over onto their revision, loading theirs, the server's field reasons, a newer revision elsewhere.
  */
 
@@ -16,7 +16,7 @@ const first = revision(1, { ...demoInput, description: 'as built' });
 const theirs = revision(2, { ...demoInput, name: 'Their name', description: 'theirs' }, 'Bea Ortiz');
 const savedFrom = (args: SaveArgs) => revision(args.version + 1, args.input);
 
-function useDescriptionSheet(
+function useDescriptionPage(
   assembly: Assembly,
   save: (args: SaveArgs) => Promise<Assembly>,
   more: { noteAlone?: NoteAlone; markCarried?: boolean; onLoadTheirs?: (a: Assembly) => void } = {},
@@ -50,7 +50,7 @@ function useDescriptionSheet(
 describe('revision editing — saving', () => {
   it('saves the edits as the next revision and starts again from it', async () => {
     const save = vi.fn(async (args: SaveArgs) => savedFrom(args));
-    const { result } = renderHook(() => useDescriptionSheet(first, save));
+    const { result } = renderHook(() => useDescriptionPage(first, save));
     expect(result.current.editing.dirty).toBe(false);
     expect(result.current.editing.canSave).toBe(false);
 
@@ -71,23 +71,23 @@ describe('revision editing — saving', () => {
     expect(result.current.editing.dirty).toBe(false);
   });
 
-  it('does not send what the sheet refuses, and says why', async () => {
+  it('does not send what the page refuses, and says why', async () => {
     const save = vi.fn(savedFrom);
-    const { result } = renderHook(() => useDescriptionSheet(first, async (a) => save(a)));
+    const { result } = renderHook(() => useDescriptionPage(first, async (a) => save(a)));
     act(() => result.current.setText('✕'));
     await act(() => result.current.editing.saveNow());
     expect(save).not.toHaveBeenCalled();
     expect(result.current.editing.problem).toEqual(['Put right the ✕ first.']);
   });
 
-  it('shows the server’s reasons at the field while its values are on the sheet, the rest by path', async () => {
+  it('shows the server’s reasons at the field while its values are on the page, the rest by path', async () => {
     const save = vi.fn(async () => {
       throw new ApiRequestError(400, 'validation_failed', 'no', {
         'input.description': 'too long',
         'input.name': 'an assembly needs a name',
       });
     });
-    const { result } = renderHook(() => useDescriptionSheet(first, save));
+    const { result } = renderHook(() => useDescriptionPage(first, save));
     act(() => result.current.setText('very long'));
     await act(() => result.current.editing.saveNow());
     expect(result.current.editing.serverErrors).toEqual({ description: 'too long' });
@@ -106,7 +106,7 @@ describe('revision editing — someone else saved first (409)', () => {
       if (args.version === 1) throw conflictError(theirs);
       return savedFrom(args);
     });
-    const { result } = renderHook(() => useDescriptionSheet(first, save));
+    const { result } = renderHook(() => useDescriptionPage(first, save));
     act(() => result.current.setText('mine'));
     await act(() => result.current.editing.saveNow());
 
@@ -144,7 +144,7 @@ describe('revision editing — someone else saved first (409)', () => {
   it('loads their revision instead, putting it in the cache and dropping my edits and note', async () => {
     const onLoadTheirs = vi.fn();
     const { result } = renderHook(() =>
-      useDescriptionSheet(
+      useDescriptionPage(
         first,
         async () => {
           throw conflictError(theirs);
@@ -164,9 +164,9 @@ describe('revision editing — someone else saved first (409)', () => {
     expect(result.current.editing.dirty).toBe(false);
   });
 
-  it('without marking the carry-over, the sheet is only as edited as its values', async () => {
+  it('without marking the carry-over, the page is only as edited as its values', async () => {
     const { result } = renderHook(() =>
-      useDescriptionSheet(
+      useDescriptionPage(
         first,
         async () => {
           throw conflictError(revision(2, { ...demoInput, description: 'mine' }));
@@ -184,7 +184,7 @@ describe('revision editing — someone else saved first (409)', () => {
 });
 
 describe('revision editing — the note and newer revisions', () => {
-  it('counts a note typed alone as the sheet says', () => {
+  it('counts a note typed alone as the page says', () => {
     const cases: [NoteAlone, boolean, boolean][] = [
       ['saves', true, true],
       ['guards', true, false],
@@ -192,7 +192,7 @@ describe('revision editing — the note and newer revisions', () => {
     ];
     for (const [noteAlone, dirty, canSave] of cases) {
       const { result, unmount } = renderHook(() =>
-        useDescriptionSheet(first, async (a) => savedFrom(a), { noteAlone }),
+        useDescriptionPage(first, async (a) => savedFrom(a), { noteAlone }),
       );
       act(() => result.current.editing.setNote('just a note'));
       expect([noteAlone, result.current.editing.dirty, result.current.editing.canSave]).toEqual([
@@ -206,13 +206,13 @@ describe('revision editing — the note and newer revisions', () => {
 
   it('takes a newer revision from elsewhere when nothing is edited, and only tells of it otherwise', () => {
     const save = async (a: SaveArgs) => savedFrom(a);
-    const clean = renderHook(({ a }) => useDescriptionSheet(a, save), { initialProps: { a: first } });
+    const clean = renderHook(({ a }) => useDescriptionPage(a, save), { initialProps: { a: first } });
     clean.rerender({ a: theirs });
     expect(clean.result.current.editing.base.version).toBe(2);
     expect(clean.result.current.text).toBe('theirs');
     expect(clean.result.current.editing.newerElsewhere).toBeNull();
 
-    const edited = renderHook(({ a }) => useDescriptionSheet(a, save), { initialProps: { a: first } });
+    const edited = renderHook(({ a }) => useDescriptionPage(a, save), { initialProps: { a: first } });
     act(() => edited.result.current.setText('mine'));
     edited.rerender({ a: theirs });
     expect(edited.result.current.editing.base.version).toBe(1);

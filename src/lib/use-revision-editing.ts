@@ -3,10 +3,10 @@ import { useEffect, useRef, useState } from 'react';
 import { isApiRequestError } from './api';
 
 /*
- * One assembly sheet's edits while they are made, and saving them as a new revision of the assembly — the same
- * for every sheet (build-up, moisture, attachment, joints), which differ only in the parameters below. A stale
+ * One assembly page's edits while they are made, and saving them as a new revision of the assembly — the same
+ * for every page (build-up, moisture, attachment, joints), which differ only in the parameters below. A stale
  * save (409) never overwrites: the person carries their edits onto the revision someone else saved, or loads
- * it. Nothing is saved without a click. The sheet keeps its values where it likes (react-hook-form or state)
+ * it. Nothing is saved without a click. The page keeps its values where it likes (react-hook-form or state)
  * and hands them in with a way to replace them; the API calls are handed in too (src/lib imports no feature).
  */
 
@@ -18,13 +18,13 @@ export interface SaveArgs {
 }
 
 /**
- * Why the sheet's values are replaced: after a save, a create, a newer revision taken in, theirs loaded, a carry-over,
+ * Why the page's values are replaced: after a save, a create, a newer revision taken in, theirs loaded, a carry-over,
  * all edits discarded, a step of undo or redo (`history`: the base revision stays, so a form keeps its defaults).
  */
 export type ResetReason = 'saved' | 'created' | 'newer' | 'theirs' | 'carried' | 'discard' | 'history';
 
 /**
- * Whether a revision note typed on an otherwise unchanged sheet counts: `saves` — it is an edit (kept from
+ * Whether a revision note typed on an otherwise unchanged page counts: `saves` — it is an edit (kept from
  * leaving, and it may be saved as a revision on its own); `guards` — it is kept from leaving, but Save needs an
  * edited value; `ignored` — only the values count (undo keeps the note).
  */
@@ -32,9 +32,9 @@ export type NoteAlone = 'saves' | 'guards' | 'ignored';
 
 /** How this person's edits go onto the revision someone else saved. */
 export interface Carry<V, D> {
-  /** The values to go on with; absent: the sheet's values stay as they are. */
+  /** The values to go on with; absent: the page's values stay as they are. */
   values?: V;
-  /** What the sheet tells about it (e.g. the values both changed). */
+  /** What the page tells about it (e.g. the values both changed). */
   detail: D;
 }
 
@@ -47,7 +47,7 @@ export interface RevisionConflict<V, D> {
   carry: Carry<V, D> | null;
 }
 
-/** The API calls a sheet hands in (src/lib imports no feature): `useAssemblyRevisionApi` in features/assemblies. */
+/** The API calls a page hands in (src/lib imports no feature): `useAssemblyRevisionApi` in features/assemblies. */
 export interface RevisionApi {
   save: (args: SaveArgs) => Promise<Assembly>;
   /** The assembly as saved by someone else, from a 409 error; null for any other error. */
@@ -60,31 +60,31 @@ export interface RevisionApi {
 export interface RevisionEditingOptions<V, D, A extends Assembly | undefined> extends RevisionApi {
   /** The assembly as the cache holds it now (it may move on when someone else saves); undefined while creating one. */
   assembly: A;
-  /** The sheet's values now. */
+  /** The page's values now. */
   values: V;
   /** Whether the values differ from those of the base revision (`base` is undefined while creating). */
   isEdited: (values: V, base: A) => boolean;
-  /** Put values on the sheet. */
+  /** Put values on the page. */
   reset: (values: V, why: ResetReason) => void;
-  /** The sheet's values for a saved input. */
+  /** The page's values for a saved input. */
   formValues: (input: AssemblyInput) => V;
   /**
    * The input to save — the base revision's input with the edits put in — or the reasons it cannot be saved yet.
-   * `submitted` is what the form's resolver parsed, when the sheet submits through react-hook-form.
+   * `submitted` is what the form's resolver parsed, when the page submits through react-hook-form.
    */
   toInput: (
     values: V,
     base: A,
     submitted?: AssemblyInput,
   ) => { input: AssemblyInput; problem?: undefined } | { problem: string[] };
-  /** After a 409: how the edits go onto their revision (`mine` is what was sent, `values` the sheet's then). */
+  /** After a 409: how the edits go onto their revision (`mine` is what was sent, `values` the page's then). */
   carryOver: (c: { base: Assembly; mine: AssemblyInput; values: V; theirs: Assembly }) => Carry<V, D> | null;
-  /** After carrying over, the sheet counts as edited and says so until saved (default true). */
+  /** After carrying over, the page counts as edited and says so until saved (default true). */
   markCarried?: boolean;
   noteAlone?: NoteAlone;
   /**
    * A server reason (400 `fields`, keyed by the request's dotted path, e.g. `input.vapour.3`): the form path it
-   * is shown at on this sheet, or null when this sheet has no field for it (default: none has).
+   * is shown at on this page, or null when this page has no field for it (default: none has).
    */
   fieldPath?: (serverPath: string) => string | null;
   /** The lines of “Not saved.” after the server refused values (default: see the fields marked ✕, then the rest by path). */
@@ -96,7 +96,7 @@ export interface RevisionEditingOptions<V, D, A extends Assembly | undefined> ex
   onCreated?: (created: Assembly) => void;
 }
 
-/** What the save bar reads (any sheet's editing state). */
+/** What the save bar reads (any page's editing state). */
 export interface RevisionSaving {
   base: Assembly | undefined;
   note: string;
@@ -106,22 +106,22 @@ export interface RevisionSaving {
   problem: string[] | null;
   conflict: RevisionConflict<unknown, unknown> | null;
   carried: { onto: number; detail: unknown } | null;
-  /** A newer revision saved elsewhere while this sheet has edits. */
+  /** A newer revision saved elsewhere while this page has edits. */
   newerElsewhere: Assembly | null;
-  /** Unsaved work on the sheet (asked about before leaving). */
+  /** Unsaved work on the page (asked about before leaving). */
   dirty: boolean;
   canSave: boolean;
-  /** Set when the sheet is left on purpose (no more asking). */
+  /** Set when the page is left on purpose (no more asking). */
   leaving: { current: boolean };
   saveNow: (submitted?: AssemblyInput) => Promise<void>;
   carryOver: () => void;
   loadTheirs: () => void;
   discard: () => void;
-  /** Undo and redo of the sheet's values since the last save (the note is not in the history). */
+  /** Undo and redo of the page's values since the last save (the note is not in the history). */
   history: ValueHistory;
 }
 
-/** The steps of a sheet's values since the last save. */
+/** The steps of a page's values since the last save. */
 export interface ValueHistory {
   canUndo: boolean;
   canRedo: boolean;
@@ -140,13 +140,13 @@ export interface RevisionEditing<V, D, A extends Assembly | undefined> extends R
   carried: { onto: number; detail: D } | null;
   /** The values differ from the base revision's. */
   edited: boolean;
-  /** The server's reasons by form path, while the values it judged are on the sheet. */
+  /** The server's reasons by form path, while the values it judged are on the page. */
   serverErrors: Record<string, string>;
   setSavedAs: (revision: number | null) => void;
   setProblem: (problem: string[] | null) => void;
 }
 
-/** A box whose own native undo works on its text: the sheet's undo leaves Ctrl+Z to it. */
+/** A box whose own native undo works on its text: the page's undo leaves Ctrl+Z to it. */
 export function isTextField(el: EventTarget | null): boolean {
   if (el instanceof HTMLTextAreaElement) return true;
   if (el instanceof HTMLElement && el.isContentEditable) return true;
@@ -160,9 +160,9 @@ export function isTextField(el: EventTarget | null): boolean {
 const TYPING_STEP_MS = 2000;
 
 /**
- * The history of a sheet's values: each change is a step (keystrokes in one text box, one step), `apply` puts a
+ * The history of a page's values: each change is a step (keystrokes in one text box, one step), `apply` puts a
  * step's values back. `baseline` (a save, theirs loaded, …) starts it again; a change before the person has
- * touched the sheet since then is taken as the starting point too (a form filling in its fields).
+ * touched the page since then is taken as the starting point too (a form filling in its fields).
  */
 function useValueHistory<V>(values: V, apply: (values: V) => void) {
   const key = JSON.stringify(values);
@@ -290,14 +290,14 @@ export function useRevisionEditing<V, D = undefined, A extends Assembly | undefi
   const dirty = edited || (noteAlone !== 'ignored' && note.trim() !== '') || carried !== null;
   const canSave = base === undefined || (noteAlone === 'guards' ? edited || carried !== null : dirty);
   const { history, baseline } = useValueHistory(values, (v) => resetSheet(v, 'history'));
-  /** Values put on the sheet from outside its edits start the history again (discarding is a step of it). */
+  /** Values put on the page from outside its edits start the history again (discarding is a step of it). */
   function reset(next: V, why: ResetReason) {
     if (why !== 'discard') baseline(next);
     resetSheet(next, why);
   }
 
-  // Someone saved a newer revision while this sheet was open: take it if nothing here is edited.
-  // biome-ignore lint/correctness/useExhaustiveDependencies: reset and formValues are the sheet's (new each render)
+  // Someone saved a newer revision while this page was open: take it if nothing here is edited.
+  // biome-ignore lint/correctness/useExhaustiveDependencies: reset and formValues are the page's (new each render)
   useEffect(() => {
     if (!assembly || !base || savingRef.current || conflict || assembly.version <= base.version || dirty)
       return;

@@ -94,12 +94,12 @@ describe('lists and printing in the browser', () => {
     await signIn(page, suite.baseUrl, 'architect@skinwright.demo');
     await openDemoAssembly(page);
     await page.getByTestId('live-Reff').waitFor();
-    expect(await page.getByRole('navigation', { name: 'Assembly sheets' }).isVisible()).toBe(true);
+    expect(await page.getByRole('navigation', { name: 'Assembly pages' }).isVisible()).toBe(true);
 
     await page.emulateMedia({ media: 'print' });
     await shot(page, 'print-build-up');
     expect(await page.locator('body > div header').first().isVisible()).toBe(false);
-    expect(await page.getByRole('navigation', { name: 'Assembly sheets' }).isVisible()).toBe(false);
+    expect(await page.getByRole('navigation', { name: 'Assembly pages' }).isVisible()).toBe(false);
     expect(await page.getByRole('button', { name: 'Undo', exact: true }).isVisible()).toBe(false);
     expect(await page.getByRole('button', { name: /Save as revision/ }).isVisible()).toBe(false);
     expect(await page.locator('footer').isVisible()).toBe(false);

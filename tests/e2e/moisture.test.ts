@@ -13,7 +13,7 @@ describe('moisture sheet in the browser', () => {
     await signIn(page, suite.baseUrl, 'consultant@skinwright.demo');
     await openDemoAssembly(page);
     await page
-      .getByRole('navigation', { name: 'Assembly sheets' })
+      .getByRole('navigation', { name: 'Assembly pages' })
       .getByRole('link', { name: 'Moisture' })
       .click();
     await page.waitForURL(/\/assemblies\/[0-9a-f-]{36}\/moisture$/);

@@ -70,7 +70,7 @@ describe('submittals in the browser', () => {
     // Items: the compliance sheet and a file (with its progress bar while it goes up).
     const select = sub.getByLabel('Compliance sheet of a check run');
     await select.selectOption({ value: runId });
-    await sub.getByRole('button', { name: 'Attach the sheet' }).click();
+    await sub.getByRole('button', { name: 'Add the sheet' }).click();
     await sub.locator('li[data-item="sheet"]').waitFor();
     await sub.getByLabel(/Add files/).setInputFiles({
       name: 'Panel product data.pdf',

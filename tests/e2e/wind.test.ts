@@ -5,7 +5,7 @@ import { browserSuite, openDemoAssembly, screenshot, signIn } from '../setup/bro
  * The engineer opens the demo assembly's attachment sheet, reads the maximum girt spacing of zones 4 and 5, raises
  * the design girt spacing beyond it and sees the failure in words.
  */
-describe('attachment & wind sheet in the browser', () => {
+describe('attachment & wind page in the browser', () => {
   const suite = browserSuite();
 
   it('shows the schedule per zone and fails a girt spacing beyond the maximum, in words', async () => {

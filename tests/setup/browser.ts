@@ -92,7 +92,7 @@ export async function signIn(page: Page, baseUrl: string, email: string, passwor
   await page.waitForURL(/\/projects/);
 }
 
-/** From the project list, open the demo project's demo assembly (its build-up sheet), as a person would. */
+/** From the project list, open the demo project's demo assembly (its build-up page), as a person would. */
 export async function openDemoAssembly(page: Page) {
   await page.getByRole('link', { name: 'Corvid Lane Cold Store' }).click();
   await page.getByRole('link', { name: 'Assemblies', exact: true }).click();

@@ -16,7 +16,7 @@ export interface AssemblyFrame {
 
 /**
  * The frame around every page of one assembly (`/projects/:projectId/assemblies/:assemblyId/…`): the breadcrumb
- * and the sheet tabs above the page. Its loader (src/app/router.tsx) has loaded the project and the assembly
+ * and the page tabs above the page. Its loader (src/app/router.tsx) has loaded the project and the assembly
  * into the cache with the same query options and refused an assembly of another project, so the page inside
  * reads both from `useAssemblyFrame()` and kept up to date by these queries.
  */

@@ -4,7 +4,7 @@ const tabClass = ({ isActive }: { isActive: boolean }) =>
   `-mb-px border-b-2 px-1 pb-2 text-sm font-semibold no-underline ${isActive ? 'border-ink text-ink' : 'border-transparent text-ink-muted hover:text-ink'}`;
 
 /**
- * The sheets of one assembly: its build-up (thermal), moisture, attachment (wind), joints & quantities, checks;
+ * The pages of one assembly: its build-up (thermal), moisture, attachment (wind), joints & quantities, checks;
  * on an older revision the breadcrumb goes on to it.
  */
 export function AssemblyTabs({
@@ -32,7 +32,7 @@ export function AssemblyTabs({
           </>
         )}
       </nav>
-      <nav aria-label="Assembly sheets" className="flex flex-wrap gap-x-6 gap-y-2 border-b border-rule">
+      <nav aria-label="Assembly pages" className="flex flex-wrap gap-x-6 gap-y-2 border-b border-rule">
         <NavLink to={base} end className={tabClass}>
           Build-up &amp; R-value
         </NavLink>

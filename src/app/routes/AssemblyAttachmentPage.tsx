@@ -13,7 +13,7 @@ import { errorMessage } from '../../lib/api';
 import { useAssemblyFrame } from '../layout/AssemblyLayout';
 
 /**
- * The firm library of panel tables and clips offered on the sheet: the person's firm that owns the project if
+ * The firm library of panel tables and clips offered on the page: the person's firm that owns the project if
  * they belong to it, else their first firm (composed here so that the wind and library features stay apart).
  */
 function useAttachmentLibrary(organisationId: string | undefined): AttachmentLibrary | null {
@@ -34,7 +34,7 @@ function useAttachmentLibrary(organisationId: string | undefined): AttachmentLib
   };
 }
 
-/** The attachment (wind) sheet of one assembly: girt and clip spacing per wall zone from the panel's table. */
+/** The attachment (wind) page of one assembly: girt and clip spacing per wall zone from the panel's table. */
 export function AssemblyAttachmentPage() {
   const { project, assembly } = useAssemblyFrame();
   const revisionApi = useAssemblyRevisionApi();

@@ -2,7 +2,7 @@ import { useAssemblyRevisionApi } from '../../features/assemblies/api/update-ass
 import { JointsView } from '../../features/joints/components/JointsView';
 import { useAssemblyFrame } from '../layout/AssemblyLayout';
 
-/** The joints & quantities sheet of one assembly: joint schedule and takeoff, computed in the browser. */
+/** The joints & quantities page of one assembly: joint schedule and takeoff, computed in the browser. */
 export function AssemblyJointsPage() {
   const { project, assembly } = useAssemblyFrame();
   const revisionApi = useAssemblyRevisionApi();

@@ -100,7 +100,7 @@ function renderPage({
 
 const film = () => screen.getByLabelText('μ of layer 7 (Polyethylene film)') as HTMLInputElement;
 
-describe('Assembly moisture sheet — verdict', () => {
+describe('Assembly moisture page — verdict', () => {
   it('finds no condensation in the demo wall and says so in words and a glyph', async () => {
     renderPage();
     const verdict = await screen.findByTestId('verdict-interstitial');
@@ -173,7 +173,7 @@ describe('Assembly moisture sheet — verdict', () => {
   });
 });
 
-describe('Assembly moisture sheet — what is missing', () => {
+describe('Assembly moisture page — what is missing', () => {
   it('lists the missing vapour data and climate in plain words, each linked to where it is entered', async () => {
     const vapour = [...(demoInput.vapour ?? [])];
     vapour[3] = null;

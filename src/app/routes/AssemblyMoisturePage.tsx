@@ -3,7 +3,7 @@ import { ClimateSummary } from '../../features/climate/components/ClimateSummary
 import { MoistureView } from '../../features/moisture/components/MoistureView';
 import { useAssemblyFrame } from '../layout/AssemblyLayout';
 
-/** The moisture (condensation) sheet of one assembly: inputs, conditions, method, result, cautions. */
+/** The moisture (condensation) page of one assembly: inputs, conditions, method, result, cautions. */
 export function AssemblyMoisturePage() {
   const { project, assembly } = useAssemblyFrame();
   const revisionApi = useAssemblyRevisionApi();

@@ -95,7 +95,7 @@ export function LibraryPage() {
               </h2>
               <p className="text-sm text-ink-muted">
                 The makers’ load–span tables and clip capacities (ASD) for the wind attachment check, each
-                with its source and, once uploaded, the data sheet itself. The Attachment &amp; wind sheet of
+                with its source and, once uploaded, the data sheet itself. The Attachment &amp; wind page of
                 every assembly offers them. The manufacturer’s current tested values govern.
               </p>
             </div>

@@ -6,7 +6,7 @@ import { ClimateEditor } from '../../features/climate/components/ClimateEditor';
 import { ClimateSummary } from '../../features/climate/components/ClimateSummary';
 import { useProject } from '../../features/projects/api/get-project';
 
-/** The project's monthly climate and interior conditions, read by the moisture sheet of every assembly. */
+/** The project's monthly climate and interior conditions, read by the moisture page of every assembly. */
 export function ProjectClimatePage() {
   const { projectId = '' } = useParams();
   const [params, setParams] = useSearchParams();
@@ -30,7 +30,7 @@ export function ProjectClimatePage() {
           </h2>
           <p className="mt-1 max-w-prose text-sm text-ink-muted">
             Twelve monthly means outside and the conditions inside, as used by the moisture (condensation)
-            sheet of every assembly in this project.
+            page of every assembly in this project.
           </p>
         </div>
         {mayEdit && !editing ? (
@@ -49,15 +49,15 @@ export function ProjectClimatePage() {
         <Notice tone="info" title="No monthly climate has been entered for this project yet.">
           <p>
             {mayEdit
-              ? 'Enter the 12 monthly means and their source; the moisture sheets compute as soon as it is saved.'
-              : 'The project owner, architect or envelope consultant enters it; until then the moisture sheets cannot compute.'}
+              ? 'Enter the 12 monthly means and their source; the moisture pages compute as soon as it is saved.'
+              : 'The project owner, architect or envelope consultant enters it; until then the moisture pages cannot compute.'}
           </p>
         </Notice>
       )}
       {!editing ? (
         <p className="text-sm">
-          <Link to={`/projects/${project.id}/assemblies`}>Open an assembly</Link> and choose its Moisture
-          sheet to see the condensation check with this climate.
+          <Link to={`/projects/${project.id}/assemblies`}>Open an assembly</Link> and choose its Moisture page
+          to see the condensation check with this climate.
         </p>
       ) : null}
     </section>

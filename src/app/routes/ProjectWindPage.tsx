@@ -6,7 +6,7 @@ import { useProject } from '../../features/projects/api/get-project';
 import { ProjectWindForm } from '../../features/wind/components/ProjectWindForm';
 import { BuildingDimensions, ProjectWindSummary } from '../../features/wind/components/ProjectWindSummary';
 
-/** The project's ASCE 7 wind data, read by the attachment (wind) sheet of every assembly. */
+/** The project's ASCE 7 wind data, read by the attachment (wind) page of every assembly. */
 export function ProjectWindPage() {
   const { projectId = '' } = useParams();
   const [params, setParams] = useSearchParams();
@@ -27,7 +27,7 @@ export function ProjectWindPage() {
             Wind data
           </h2>
           <p className="mt-1 max-w-prose text-sm text-ink-muted">
-            The ASCE 7 site parameters for components and cladding, as used by the attachment sheet of every
+            The ASCE 7 site parameters for components and cladding, as used by the attachment page of every
             assembly in this project. Height and plan come from the site data.
           </p>
         </div>
@@ -49,8 +49,8 @@ export function ProjectWindPage() {
             <Notice tone="info" title="No wind data has been entered for this project yet.">
               <p>
                 {mayEdit
-                  ? 'Enter it once here; the attachment sheets compute as soon as it is saved.'
-                  : 'The project owner, architect or engineer enters it; until then the attachment sheets cannot compute.'}
+                  ? 'Enter it once here; the attachment pages compute as soon as it is saved.'
+                  : 'The project owner, architect or engineer enters it; until then the attachment pages cannot compute.'}
               </p>
             </Notice>
           )}
@@ -60,7 +60,7 @@ export function ProjectWindPage() {
           />
           <p className="text-sm">
             <Link to={`/projects/${project.id}/assemblies`}>Open an assembly</Link> and choose its Attachment
-            &amp; wind sheet to see the girt and clip spacing with this wind data.
+            &amp; wind page to see the girt and clip spacing with this wind data.
           </p>
         </>
       )}

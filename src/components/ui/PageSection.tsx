@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 
-/** One numbered part of a calculation sheet: inputs, method, result… under a ruled heading. */
+/** One numbered part of a calculation page: inputs, method, result… under a ruled heading. */
 export function PageSection({
   n,
   title,

@@ -15,7 +15,7 @@ const SUFFIX_MAX = 8;
 const SIZES = {
   /** A form page (project and site data): the size of the other form controls. */
   form: { box: 'px-3 py-2 text-base', unit: 'min-w-12 px-2 text-sm' },
-  /** A calculation sheet (assembly, wind, joints, takeoff): compact, many boxes to a row. */
+  /** A calculation page (assembly, wind, joints, takeoff): compact, many boxes to a row. */
   sheet: { box: 'px-2 py-1.5 text-sm', unit: 'min-w-10 whitespace-nowrap px-1.5 text-xs' },
 } as const;
 

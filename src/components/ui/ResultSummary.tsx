@@ -26,7 +26,7 @@ export const staleProps = (stale: boolean, className = '') => ({
   'aria-busy': stale || undefined,
 });
 
-/** "updating…" while the sheet's figures are those of an older input (see `useDeferredCalculation`). */
+/** "updating…" while the page's figures are those of an older input (see `useDeferredCalculation`). */
 export function UpdatingMark({ stale }: { stale: boolean }) {
   return (
     <span role="status" className="text-xs font-semibold text-ink-muted">
@@ -36,8 +36,8 @@ export function UpdatingMark({ stale }: { stale: boolean }) {
 }
 
 /**
- * The result first: a calculation sheet's verdict and headline figures at its top, above the inputs and the
- * method, with a link down to the result in full. One summary for every sheet (build-up, moisture, attachment,
+ * The result first: a calculation page's verdict and headline figures at its top, above the inputs and the
+ * method, with a link down to the result in full. One summary for every page (build-up, moisture, attachment,
  * joints); each brings its verdict and figures.
  */
 export function ResultSummary({
@@ -50,7 +50,7 @@ export function ResultSummary({
   verdict: SummaryVerdict;
   figures: readonly SummaryFigure[];
   stale: boolean;
-  /** The id of the sheet's Result heading, linked as "the result in full". */
+  /** The id of the page's Result heading, linked as "the result in full". */
   resultId: string;
   /** A line under the figures (e.g. what the result is waiting for). */
   children?: ReactNode;
@@ -79,7 +79,7 @@ export function ResultSummary({
         {figures.length > 0 ? (
           <dl className="grid grid-cols-2 gap-x-6 gap-y-2 sm:grid-cols-4">
             {figures.map((f, i) => (
-              // biome-ignore lint/suspicious/noArrayIndexKey: a sheet's figures are a fixed list
+              // biome-ignore lint/suspicious/noArrayIndexKey: a page's figures are a fixed list
               <div key={i} className="flex min-w-0 flex-col">
                 <dt className="text-xs text-ink-muted">{f.label}</dt>
                 <dd className="num text-lg [overflow-wrap:anywhere]" data-testid={f.testId}>

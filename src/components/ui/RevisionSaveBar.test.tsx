@@ -32,8 +32,8 @@ const theirs = revision(
   'renamed',
 );
 
-/** A sheet that edits the description, saved by the shared bar. */
-function DescriptionSheet({ save }: { save: (args: SaveArgs) => Promise<Assembly> }) {
+/** A page that edits the description, saved by the shared bar. */
+function DescriptionPage({ save }: { save: (args: SaveArgs) => Promise<Assembly> }) {
   const [text, setText] = useState(first.current.input.description);
   const editing = useRevisionEditing<string, undefined>({
     assembly: first,
@@ -74,10 +74,10 @@ function DescriptionSheet({ save }: { save: (args: SaveArgs) => Promise<Assembly
 function renderSheet(save: (args: SaveArgs) => Promise<Assembly>) {
   const router = createMemoryRouter(
     [
-      { path: '/sheet', element: <DescriptionSheet save={save} /> },
+      { path: '/page', element: <DescriptionPage save={save} /> },
       { path: '/elsewhere', element: <p>Somewhere else</p> },
     ],
-    { initialEntries: ['/sheet'] },
+    { initialEntries: ['/page'] },
   );
   return render(<RouterProvider router={router} />);
 }

@@ -9,7 +9,7 @@ import { Field } from './Field';
 import { Notice } from './Notice';
 import { TextInput } from './TextInput';
 
-/** The words of one sheet in its save bar and notices. */
+/** The words of one page in its save bar and notices. */
 export interface RevisionSaveWords {
   /** What the person's unsaved work is called: “Your entries are kept”, “Load theirs (discard my entries)”. */
   yours: string;
@@ -19,7 +19,7 @@ export interface RevisionSaveWords {
   carried?: string;
   /** The title of the notice that asks before leaving with unsaved edits. */
   unsaved: string;
-  /** The part of the assembly the sheet saves, named in the button (“Save vapour data as revision 4”). */
+  /** The part of the assembly the page saves, named in the button (“Save vapour data as revision 4”). */
   part?: string;
   /** Form name of the bar when it is a form of its own (“Save the vapour data”). */
   formLabel?: string;
@@ -37,7 +37,7 @@ interface RevisionSaveBarProps {
   inForm?: boolean;
   /** Figures shown live at the left of the bar. */
   live?: ReactNode;
-  /** The sheet's own paragraphs in the conflict notice, after who saved when. */
+  /** The page's own paragraphs in the conflict notice, after who saved when. */
   conflictDetail?: ReactNode;
   /** More in the notice after carrying over (e.g. the values both changed). */
   carriedDetail?: ReactNode;
@@ -45,11 +45,11 @@ interface RevisionSaveBarProps {
   dirtyHint?: ReactNode;
   /** Offer “Discard my edits” (back to the saved revision at once). */
   undo?: boolean;
-  /** Show the “newer revision elsewhere” notice here (false: the sheet shows `NewerRevisionNotice` itself). */
+  /** Show the “newer revision elsewhere” notice here (false: the page shows `NewerRevisionNotice` itself). */
   showNewer?: boolean;
   /** Bring the conflict notice into view when it appears. */
   scrollToConflict?: boolean;
-  /** Of the wrapper: `contents` lets the notices stand in the sheet's own column. */
+  /** Of the wrapper: `contents` lets the notices stand in the page's own column. */
   className?: string;
 }
 
@@ -69,9 +69,9 @@ export function NewerRevisionNotice({ newer, yours }: { newer: Assembly | null; 
 }
 
 /**
- * Saving a sheet's edits as a new revision of the assembly, with a revision note: asks before leaving with unsaved
+ * Saving a page's edits as a new revision of the assembly, with a revision note: asks before leaving with unsaved
  * edits; a stale save shows who saved first and lets the person carry their edits over or load the saved revision;
- * the server's refusals are listed. The same on every assembly sheet; the sheet brings its words.
+ * the server's refusals are listed. The same on every assembly page; the page brings its words.
  */
 export function RevisionSaveBar({
   editing,
@@ -94,7 +94,7 @@ export function RevisionSaveBar({
   const canUndo = stepsOpen && history.canUndo;
   const canRedo = stepsOpen && history.canRedo;
 
-  // Ctrl+Z / Ctrl+Shift+Z / Ctrl+Y (⌘ on a Mac) step through the sheet's values — except in a text box,
+  // Ctrl+Z / Ctrl+Shift+Z / Ctrl+Y (⌘ on a Mac) step through the page's values — except in a text box,
   // whose own undo of its text stays native.
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => {

@@ -11,7 +11,7 @@ import {
 import { formatNumber, formatQuantity } from '../../lib/quantities';
 
 /*
- * How the moisture sheet's figures read. Everything arrives in SI (m, °C, Pa, kg/m²); only the text is
+ * How the moisture page's figures read. Everything arrives in SI (m, °C, Pa, kg/m²); only the text is
  * converted. Vapour pressures stay in Pa in both systems (the unit of the ISO 13788 method); water is shown
  * in g/m² (SI) or oz/ft² (IP), temperatures in °C or °F.
  */

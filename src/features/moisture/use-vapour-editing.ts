@@ -5,7 +5,7 @@ import { mergeVapour } from './merge';
 import { draftsFor, readDrafts, sameVapour, type VapourDraft } from './vapour-draft';
 
 /*
- * The vapour rows of one assembly while they are edited on the moisture sheet, saved as a new revision of the
+ * The vapour rows of one assembly while they are edited on the moisture page, saved as a new revision of the
  * assembly by the shared revision editing (src/lib/use-revision-editing.ts). A stale save (409) carries the
  * entries onto the saved revision only while its layers are the same ones in the same order.
  */

@@ -8,7 +8,7 @@ import { demoAssembly, demoProject } from './test-fixtures';
 
 const noNaN = (value: unknown) => expect(JSON.stringify(value)).not.toMatch(/NaN/);
 
-describe('the attachment sheet computed in the browser', () => {
+describe('the attachment page computed in the browser', () => {
   it('gives the engine’s schedule and its check of the design spacing, with the design steps in the work', () => {
     const a = demoAssembly({ girtSpacing: 1.2, clipSpacing: 0.6 });
     const e = evaluateAttachment(attachmentFormValues(a), a, demoProject(), 'SI');

@@ -24,7 +24,7 @@ import {
 } from './form';
 import { toShownWind, trimNumber, type WindMeasure, windUnit } from './units';
 
-/** A problem with the project's data (not editable on this sheet), with where to put it right. */
+/** A problem with the project's data (not editable on this page), with where to put it right. */
 export interface SiteProblem {
   /** Plain words: "Mean roof height h: must be at most 152.4 m". */
   text: string;
@@ -126,7 +126,7 @@ function optionalSpacing(
 }
 
 /**
- * Everything the sheet shows, computed in the browser from what the form holds right now: the engine's schedule,
+ * Everything the page shows, computed in the browser from what the form holds right now: the engine's schedule,
  * the design-spacing checks, and — where it cannot compute — the reason, next to its field or in the list of
  * what is missing. Never a NaN.
  */

@@ -5,7 +5,7 @@ import type { AttachmentProductInput, ClipProduct, PanelProduct } from '@shared/
 import type { z } from 'zod';
 
 /*
- * What the attachment sheet's form holds. Numbers are SI; NaN while a box is empty or unreadable, and null for an
+ * What the attachment page's form holds. Numbers are SI; NaN while a box is empty or unreadable, and null for an
  * optional box deliberately left empty (the engine's default applies).
  */
 
@@ -193,7 +193,7 @@ function sourcesOf(v: AttachmentFormValues): { sources?: Record<string, ValueSou
 export const panelSchemaFor = (kind: ClipKind) =>
   windPanelSchema.extend({ clip: kind === 'rating' ? clipByRatingSchema : clipByFastenersSchema });
 
-/** The saved assembly with this sheet's fields put in (everything else as it was). */
+/** The saved assembly with this page's fields put in (everything else as it was). */
 export function withAttachment(
   base: AssemblyInput,
   panel: WindPanel | undefined,

@@ -3,7 +3,7 @@ import { trimmedFixed } from '@shared/units/rounding';
 import type { InputMeasure, ParsedEntry } from '../../lib/input-measure';
 
 /**
- * The quantities of the wind sheet and how each crosses the SI/IP edge. Stored values are SI (m/s, m, Pa, N, m²);
+ * The quantities of the wind page and how each crosses the SI/IP edge. Stored values are SI (m/s, m, Pa, N, m²);
  * only what is shown and typed is converted. `factor` is the SI value of one shown unit: shown = SI / factor.
  * Longer lengths (heights, spans, girt spacing, end-zone width) read in m / ft; shorter ones (clip spacing,
  * module width) in mm / in.

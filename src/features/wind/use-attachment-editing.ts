@@ -8,7 +8,7 @@ import { evaluateAttachment } from './evaluate';
 import { type AttachmentFormValues, attachmentFormValues, toFormPath, withAttachment } from './form';
 
 /*
- * The attachment sheet's inputs while they are edited (design spacings, panel table, clip), computed live, and
+ * The attachment page's inputs while they are edited (design spacings, panel table, clip), computed live, and
  * saved as a new revision of the assembly by the shared revision editing (src/lib/use-revision-editing.ts). A stale
  * save (409) carries this person's values onto the saved revision as they are.
  */
@@ -24,7 +24,7 @@ export interface AttachmentCarry {
   theyChangedWind: boolean;
 }
 
-/** The part of an assembly this sheet owns, for comparing revisions. */
+/** The part of an assembly this page owns, for comparing revisions. */
 const windPart = (a: AssemblyInput) =>
   JSON.stringify({
     g: a.attachment.girtSpacing ?? null,
@@ -32,7 +32,7 @@ const windPart = (a: AssemblyInput) =>
     p: a.windPanel ?? null,
   });
 
-/** Where a server reason sits on this sheet, or null when it is about another part of the assembly. */
+/** Where a server reason sits on this page, or null when it is about another part of the assembly. */
 function attachmentFieldPath(serverPath: string): string | null {
   const path = serverPath.replace(/^input\./, '');
   if (path.startsWith('windPanel.')) return toFormPath(path);
@@ -74,7 +74,7 @@ export function useAttachmentEditing({ project, system, ...io }: AttachmentEditi
   });
 
   const { base } = editing;
-  // Every figure of the sheet comes from this one, possibly deferred, evaluation (`stale` while it lags).
+  // Every figure of the page comes from this one, possibly deferred, evaluation (`stale` while it lags).
   const { result: evaluation, stale } = useDeferredCalculation(
     values,
     (v) => evaluateAttachment(v, base.current.input, project, system),

@@ -40,7 +40,7 @@ export function useUpdateAssembly() {
   });
 }
 
-/** What every assembly sheet hands to the shared revision editing (src/lib/use-revision-editing.ts) to save. */
+/** What every assembly page hands to the shared revision editing (src/lib/use-revision-editing.ts) to save. */
 export function useAssemblyRevisionApi(): RevisionApi {
   const qc = useQueryClient();
   const update = useUpdateAssembly();

@@ -13,6 +13,7 @@ import {
 import { useMemo } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import { Field } from '../../../components/ui/Field';
+import { COMPUTED_AS_YOU_TYPE } from '../../../components/ui/ResultSection';
 import { staleProps } from '../../../components/ui/ResultSummary';
 import { NewerRevisionNotice, RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { TextArea } from '../../../components/ui/TextInput';
@@ -62,7 +63,7 @@ interface BuilderCarry {
 }
 
 /**
- * The assembly builder: a calculation sheet that reads top to bottom — build-up, attachments, method,
+ * The assembly builder: a calculation page that reads top to bottom — build-up, thermal bridges, method,
  * result, cautions — and recomputes in the browser on every keystroke with the shared engine. Saving
  * writes a new revision; a stale save never overwrites silently.
  */
@@ -196,7 +197,7 @@ export function AssemblyBuilder({
             <LayersEditor />
           </PageSection>
 
-          <PageSection n={2} title="Attachments" id="attachments-heading">
+          <PageSection n={2} title="Thermal bridges" id="bridges-heading">
             <AttachmentsEditor />
           </PageSection>
 
@@ -207,7 +208,7 @@ export function AssemblyBuilder({
             errors={errors}
             engineVersion={ENGINE_VERSION}
             stale={stale}
-            resultNote={<span className="text-xs text-ink-muted">computed in your browser as you type</span>}
+            resultNote={COMPUTED_AS_YOU_TYPE}
           />
 
           <RevisionSaveBar

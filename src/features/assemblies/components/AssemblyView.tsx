@@ -87,7 +87,7 @@ interface AssemblyViewProps {
   bridgeValues?: readonly BridgeValue[];
 }
 
-/** An assembly set out read-only, as the same calculation sheet the builder shows. */
+/** An assembly set out read-only, as the same calculation page the builder shows. */
 export function AssemblyView({
   input,
   storedResult,
@@ -177,7 +177,7 @@ export function AssemblyView({
         </Table>
       </PageSection>
 
-      <PageSection n={2} title="Attachments" id="attachments-heading">
+      <PageSection n={2} title="Thermal bridges" id="bridges-heading">
         <p className="text-sm">
           Girts run {attachment.girtOrientation === 'horizontal' ? 'horizontally' : 'vertically'}.
           {attachment.clipType ? ` Clip: ${attachment.clipType}.` : ''}
@@ -238,11 +238,9 @@ export function AssemblyView({
         errors={computed?.errors ?? {}}
         engineVersion={engineVersion}
         resultNote={
-          <span className="text-xs text-ink-muted">
-            {storedResult
-              ? `as stored with the revision (engine ${engineVersion})`
-              : 'recomputed in your browser'}
-          </span>
+          storedResult
+            ? `as stored with the revision (engine ${engineVersion})`
+            : 'recomputed in your browser'
         }
       />
     </article>

@@ -287,7 +287,7 @@ function LayerRow({
           >
             <span aria-hidden="true">▲</span>
             <span>
-              Vapour data needed for the moisture check — enter μ, s_d or permeance on the moisture sheet.
+              Vapour data needed for the moisture check — enter μ, s_d or permeance on the moisture page.
             </span>
           </p>
         ) : null}

@@ -90,7 +90,7 @@ export function ResultFigures({ result }: { result: ThermalResult }) {
 }
 
 /**
- * The build-up sheet's result first: computed (and by which method) or what it waits for, with effective R and
+ * The build-up page's result first: computed (and by which method) or what it waits for, with effective R and
  * U, the clear-field R₀ and the bridges' share of the heat.
  */
 export function ThermalSummary({

@@ -11,7 +11,7 @@ import { SectionSketch } from './SectionSketch';
 import { ShareChart } from './ShareChart';
 import { ShowTheWork } from './ShowTheWork';
 
-/** Re-exported for the builder and the sheet; the primitive lives in components/ui. */
+/** Re-exported for the builder and the read-only view; the primitive lives in components/ui. */
 export { PageSection };
 
 /** Plain words for a form path, for the list of what the result is waiting for. */
@@ -51,7 +51,7 @@ export function describePath(path: string, thermal: Partial<ThermalInput> | unde
   if (parts[1] === 'bridges' && parts[2] !== undefined) {
     const j = Number(parts[2]);
     const b = thermal?.bridges?.[j];
-    const where = `Attachment ${String.fromCharCode(65 + (j % 26))}${b?.name ? ` (${b.name})` : ''}`;
+    const where = `Bridge ${j + 1}${b?.name ? ` (${b.name})` : ''}`;
     return parts[3] ? `${where}: ${FIELD[parts[3]] ?? parts[3]}` : where;
   }
   if (parts[1] === 'layers') return 'Layers';
@@ -107,7 +107,7 @@ interface ResultPanelProps {
   stale?: boolean;
 }
 
-/** Method, result (figures, section, shares, the work) and cautions — the lower half of every sheet. */
+/** Method, result (figures, section, shares, the work) and cautions — the lower half of every page. */
 export function ResultPanel({
   thermal,
   girtOrientation,

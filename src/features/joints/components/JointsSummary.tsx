@@ -6,7 +6,7 @@ import type { JointsEvaluation } from '../evaluate';
 import { jointVerdict } from '../verdict';
 
 /**
- * The joints sheet's result first: whether every joint is wide enough for its movement, the tightest joint, and
+ * The joints page's result first: whether every joint is wide enough for its movement, the tightest joint, and
  * the sealant the takeoff counts.
  */
 export function JointsSummary({

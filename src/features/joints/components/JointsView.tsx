@@ -30,7 +30,7 @@ import { ScheduleTable } from './ScheduleTable';
 
 const same = (x: unknown, y: unknown) => JSON.stringify(x) === JSON.stringify(y);
 
-/** What this sheet edits of the assembly. */
+/** What this page edits of the assembly. */
 interface JointsValues {
   joints: JointInput[];
   takeoff: TakeoffInput | undefined;
@@ -44,7 +44,7 @@ const jointsValues = (input: AssemblyInput): JointsValues => ({
 type Props = RevisionApi & { project: Project; assembly: Assembly };
 
 /**
- * The joints & quantities sheet of one assembly: the joint schedule (sealant joints sized for the panels'
+ * The joints & quantities page of one assembly: the joint schedule (sealant joints sized for the panels'
  * thermal movement) and the elevation takeoff, computed in the browser as you type and saved together as a
  * new revision of the assembly.
  */

@@ -128,7 +128,7 @@ export function AttachmentProductsTable({
       columns={columns}
       rows={products}
       rowClassName="align-top"
-      empty="No panel tables or clips yet. Enter them on an assembly’s Attachment & wind sheet and save them to the library from there."
+      empty="No panel tables or clips yet. Enter them on an assembly’s Attachment & wind page and save them to the library from there."
       isAdmin={isAdmin}
       removal={removalOf(del, orgId, 'productId')}
     />

@@ -134,7 +134,7 @@ describe('the firm tables', () => {
     renderIn('SI', <AttachmentProductsTable orgId="o1" products={[]} isAdmin mayWrite />);
     expect(
       screen.getByText(
-        'No panel tables or clips yet. Enter them on an assembly’s Attachment & wind sheet and save them to the library from there.',
+        'No panel tables or clips yet. Enter them on an assembly’s Attachment & wind page and save them to the library from there.',
       ),
     ).toBeTruthy();
   });

@@ -1,7 +1,7 @@
 import { Cautions } from '../../../components/ui/Cautions';
 
 /**
- * The cautions that sit with every moisture result, in the same place as on the other sheets: after the
+ * The cautions that sit with every moisture result, in the same place as on the other pages: after the
  * result, at the end of the page.
  */
 export function MoistureCautions({ engineVersion }: { engineVersion?: string }) {

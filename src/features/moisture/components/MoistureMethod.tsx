@@ -52,7 +52,7 @@ function scientific(v: number): string {
 const num = (v: number, d: number) => <span className="num">{formatNumber(v, d)}</span>;
 
 /**
- * The engine's warnings count layers from 0 ("Layers 0–1 lie outside…"); the sheet numbers them from 1, as
+ * The engine's warnings count layers from 0 ("Layers 0–1 lie outside…"); the page numbers them from 1, as
  * in the table of layers above.
  */
 const numberedFromOne = (w: string) =>

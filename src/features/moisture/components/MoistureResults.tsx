@@ -31,7 +31,7 @@ interface MoistureResultsProps {
 }
 
 /**
- * The result of the moisture sheet: the verdict in words, the profile through the wall for a chosen month,
+ * The result of the moisture page: the verdict in words, the profile through the wall for a chosen month,
  * the water held month by month, and the surface (mould) check month by month.
  */
 export function MoistureResults({

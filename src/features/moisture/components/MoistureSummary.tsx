@@ -18,7 +18,7 @@ const SUMMARY_TONE: Record<Tone, SummaryVerdict['tone']> = {
 };
 
 /**
- * The moisture sheet's result first: the ISO 13788 screening in words and a glyph, the largest water
+ * The moisture page's result first: the ISO 13788 screening in words and a glyph, the largest water
  * accumulated inside the wall, whether it dries out, and the surface factor against the critical month's need.
  */
 export function MoistureSummary({
@@ -30,7 +30,7 @@ export function MoistureSummary({
 }: {
   result: MoistureResult | null;
   layerNames: readonly string[];
-  /** How many things keep the sheet from being computed. */
+  /** How many things keep the page from being computed. */
   problems: number;
   stale: boolean;
   system: UnitSystem;

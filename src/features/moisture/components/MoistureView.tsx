@@ -31,7 +31,7 @@ type Props = RevisionApi & {
   climateSummary: ReactNode;
 };
 
-/** The moisture (condensation) sheet of one assembly: inputs, conditions, method, result, cautions. */
+/** The moisture (condensation) page of one assembly: inputs, conditions, method, result, cautions. */
 export function MoistureView({ project, assembly, climateSummary, ...revisionApi }: Props) {
   const system = useUnitSystem();
   const archived = project.archivedAt !== null;
@@ -41,7 +41,7 @@ export function MoistureView({ project, assembly, climateSummary, ...revisionApi
   const [mode, setMode] = useState<ProfileMode>('temperature');
 
   const input = editing.base.current.input;
-  // Every figure of the sheet comes from this one, possibly deferred, evaluation (`stale` while it lags).
+  // Every figure of the page comes from this one, possibly deferred, evaluation (`stale` while it lags).
   const { result: evaluation, stale } = useDeferredCalculation(
     { vapour: editing.vapour, rowErrors: editing.rowErrors },
     (v) => evaluateMoisture(input, v.vapour, v.rowErrors, project),
@@ -70,7 +70,7 @@ export function MoistureView({ project, assembly, climateSummary, ...revisionApi
     <div className="flex flex-col gap-10 pb-4">
       <header className="flex flex-col gap-1">
         <p className="label-caps">
-          Moisture sheet · revision {editing.base.revision} saved{' '}
+          Moisture page · revision {editing.base.revision} saved{' '}
           {formatDateTime(editing.base.current.createdAt)}
           {editing.base.current.createdBy ? ` by ${editing.base.current.createdBy}` : ''}
           {mayWrite ? '' : ' · read-only'}
@@ -121,7 +121,7 @@ export function MoistureView({ project, assembly, climateSummary, ...revisionApi
           <MoistureMethod result={evaluation.result} input={evaluation.input} system={system} />
         ) : (
           <p className="text-ink-muted">
-            ISO 13788:2012 monthly method (Glaser, tangent construction); the details follow once the sheet
+            ISO 13788:2012 monthly method (Glaser, tangent construction); the details follow once the page
             can be computed.
           </p>
         )}

@@ -8,7 +8,7 @@ export interface NeedsLinks {
   climate: string;
   /** Where the indoor design conditions are edited (the project overview). */
   indoor: string;
-  /** The assembly's build-up sheet. */
+  /** The assembly's build-up page. */
   buildup: string;
   mayEditClimate: boolean;
   mayEditIndoor: boolean;

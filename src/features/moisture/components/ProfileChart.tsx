@@ -13,7 +13,7 @@ const PAPER = '#fbf8f1';
 const SUNK = '#ece5d6';
 const CAUTION = '#a12c2a';
 
-/** How a layer is hatched (the assembly sheet's material classes; unknown → plain). */
+/** How a layer is hatched (the assembly page's material classes; unknown → plain). */
 export type Hatch =
   | 'metal'
   | 'batt'

@@ -70,7 +70,7 @@ function storedText(d: VapourDraft): string {
 }
 
 /**
- * Inputs of the moisture sheet: every layer outside → inside with its thickness, its vapour data (μ, s_d,
+ * Inputs of the moisture page: every layer outside → inside with its thickness, its vapour data (μ, s_d,
  * SI permeance or US perms with the reference temperature) and the s_d it amounts to; μ from the generic
  * library for a layer that names a library material.
  */
@@ -275,7 +275,7 @@ export function VapourTable({
       <p className="mt-2 text-xs text-ink-muted">
         s_d = μ·d for μ; s_d = δ₀/W for a permeance W (1 perm at 23 °C = {PERM_IN_NG['23C']} ng/(Pa·s·m²), at
         0 °C = {PERM_IN_NG['0C']} ng/(Pa·s·m²)). Layers, thicknesses and λ are edited on the{' '}
-        <Link to={builderHref}>build-up sheet</Link>.
+        <Link to={builderHref}>build-up page</Link>.
       </p>
     </div>
   );

@@ -9,7 +9,7 @@ import { formatDateTime } from '../../../lib/format';
 import { useCheckRuns } from '../../checks/api/get-check-runs';
 import { useSubmittalStep } from '../api/mutations';
 
-/** Attach the compliance sheet of a stored check run of the project. */
+/** Add the compliance sheet of a stored check run of the project. */
 export function AttachSheet({
   projectId,
   submittalId,
@@ -50,12 +50,12 @@ export function AttachSheet({
           <Button
             disabled={!runId}
             busy={step.isPending}
-            busyLabel="Attaching…"
+            busyLabel="Adding…"
             onClick={() =>
               step.mutate({ kind: 'sheet', checkRunId: runId }, { onSuccess: () => setRunId('') })
             }
           >
-            Attach the sheet
+            Add the sheet
           </Button>
         </div>
       )}

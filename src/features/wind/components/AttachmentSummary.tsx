@@ -7,7 +7,7 @@ import { formatWind } from '../units';
 const ZONE_WORD = { 4: 'zone 4', 5: 'zone 5' } as const;
 
 /**
- * The attachment sheet's result first: the zones' verdicts at the design spacing (the worst one leads), the
+ * The attachment page's result first: the zones' verdicts at the design spacing (the worst one leads), the
  * largest girt spacing each zone allows and the highest utilisation at the design spacing.
  */
 export function AttachmentSummary({

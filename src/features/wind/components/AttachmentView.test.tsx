@@ -49,7 +49,7 @@ const assembly = (): Assembly => ({
   },
 });
 
-describe('the attachment sheet for a role that only reads', () => {
+describe('the attachment page for a role that only reads', () => {
   it('computes the schedule from the saved inputs and offers no editing', () => {
     render(
       <MemoryRouter>
@@ -79,7 +79,7 @@ describe('the attachment sheet for a role that only reads', () => {
   });
 });
 
-describe('the firm library on the sheet', () => {
+describe('the firm library on the attachment page', () => {
   const products: AttachmentProduct[] = [
     {
       id: '00000000-0000-4000-8000-0000000000a1',

@@ -40,7 +40,7 @@ type Props = Omit<AttachmentEditingOptions, 'system' | 'project' | 'assembly'> &
 };
 
 /**
- * The attachment (wind) sheet of one assembly, read top to bottom like a calculation sheet: the project's wind and
+ * The attachment (wind) page of one assembly, read top to bottom like a calculation page: the project's wind and
  * building data, the design spacings, the panel table and clip; the method; the schedule per wall zone with the
  * elevation, the checks at the design spacing and the velocity pressure; the work; the cautions. It recomputes in
  * the browser with the shared engine on every keystroke.
@@ -63,7 +63,7 @@ export function AttachmentView({ project, assembly, library, ...io }: Props) {
     <div className="flex flex-col gap-10 pb-4">
       <header className="flex flex-col gap-1">
         <p className="label-caps">
-          Attachment sheet · revision {base.revision} saved {formatDateTime(base.current.createdAt)}
+          Attachment page · revision {base.revision} saved {formatDateTime(base.current.createdAt)}
           {base.current.createdBy ? ` by ${base.current.createdBy}` : ''}
           {mayWrite ? '' : ' · read-only'}
         </p>
@@ -97,7 +97,7 @@ export function AttachmentView({ project, assembly, library, ...io }: Props) {
           {base.current.input.attachment.fastenerType
             ? `; fastener: ${base.current.input.attachment.fastenerType}`
             : ''}
-          . <Link to={builderHref}>Set on the build-up sheet</Link>.
+          . <Link to={builderHref}>Set on the build-up page</Link>.
         </p>
       </PageSection>
 
@@ -120,7 +120,7 @@ export function AttachmentView({ project, assembly, library, ...io }: Props) {
         ) : (
           <p className="text-ink-muted">
             ASCE 7 chapters 26 and 30, components and cladding on walls; the equations of the project’s
-            edition follow once the sheet can be computed.
+            edition follow once the page can be computed.
           </p>
         )}
       </PageSection>
@@ -195,7 +195,7 @@ export function AttachmentView({ project, assembly, library, ...io }: Props) {
           words={{
             yours: 'values',
             carry: 'Carry my values over',
-            unsaved: 'The attachment sheet has edits that are not saved.',
+            unsaved: 'The attachment page has edits that are not saved.',
             formLabel: 'Save the attachment inputs',
             noteHint: 'What changed and why; name the maker’s table and clip test you used.',
             notePlaceholder:
@@ -209,7 +209,7 @@ export function AttachmentView({ project, assembly, library, ...io }: Props) {
                 and puts your design spacings, panel table and clip on top of it; their other changes
                 (build-up, vapour, joints) stay.
                 {editing.conflict.carry?.detail.theyChangedWind
-                  ? ' They also changed the wind inputs of this sheet — yours replace theirs, so compare first.'
+                  ? ' They also changed the wind inputs of this page — yours replace theirs, so compare first.'
                   : ''}{' '}
                 Nothing is saved until you save again.
               </p>

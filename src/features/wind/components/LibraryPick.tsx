@@ -50,7 +50,7 @@ const WORDS = {
 
 /**
  * Where the table (or the clip value) came from: take an entry from the firm library — its values and its
- * source go into the sheet — or type the source; and save what is entered as a new library entry.
+ * source go into the page — or type the source; and save what is entered as a new library entry.
  */
 export function LibraryPick({ kind, form, values, errors, disabled, library }: Props) {
   const w = WORDS[kind];
@@ -110,7 +110,7 @@ export function LibraryPick({ kind, form, values, errors, disabled, library }: P
             hint={
               offered.length === 0
                 ? `No ${w.what}s in the library yet${library.save ? ' — enter one below and save it there' : ''}.`
-                : 'Copies the values and their source into this sheet; the library entry may change later, this revision will not.'
+                : 'Copies the values and their source into this page; the library entry may change later, this revision will not.'
             }
           >
             {(c) => (

@@ -28,7 +28,7 @@ describe('the list of what the schedule still needs', () => {
     expect(panel.getAttribute('href')).toBe('#panel-heading');
   });
 
-  it('lists the values on the sheet that are not accepted, each linked to its box', () => {
+  it('lists the values on the page that are not accepted, each linked to its box', () => {
     const a = demoAssembly();
     const values = attachmentFormValues(a);
     values.rows[1] = { ...values.rows[1]!, span: 0.5 };

@@ -62,7 +62,7 @@ function MissingItem({ item, projectId }: { item: EngineMessage; projectId: stri
 
 /**
  * What stands between the inputs and a schedule: data the project lacks (linked to the page that holds it), problems
- * with the project's data, and values on this sheet that are not accepted yet (linked to their fields).
+ * with the project's data, and values on this page that are not accepted yet (linked to their fields).
  */
 export function MissingData({
   projectId,

@@ -2,7 +2,7 @@ import type { ThermalInput, ThermalResult } from '@shared/calc/thermal/schema';
 import type { ReactNode } from 'react';
 import { Notice } from '../../../components/ui/Notice';
 import { PageSection } from '../../../components/ui/PageSection';
-import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
+import { ResultSection } from '../../../components/ui/ResultSection';
 import { fieldDomId } from '../evaluate';
 import { Cautions } from './Cautions';
 import { MethodSection } from './MethodSection';
@@ -101,7 +101,7 @@ interface ResultPanelProps {
   errors: Record<string, string>;
   engineVersion?: string;
   /** Shown above the figures (e.g. "stored result" or "updates as you type"). */
-  resultNote?: ReactNode;
+  resultNote?: string;
   startAt?: number;
   /** The result is of an older input while a newer one is computed: marked "updating…" and dimmed. */
   stale?: boolean;
@@ -128,35 +128,32 @@ export function ResultPanel({
         )}
       </PageSection>
 
-      <PageSection
+      <ResultSection
         n={startAt + 1}
         title="Result"
         id="result-heading"
-        aside={
-          <span className="flex items-baseline gap-3">
-            <UpdatingMark stale={stale} />
-            {resultNote}
-          </span>
+        stale={stale}
+        note={resultNote}
+        className="flex flex-col gap-4"
+        work={
+          thermal || result ? (
+            <>
+              {thermal ? <SectionSketch thermal={thermal} girtOrientation={girtOrientation} /> : null}
+              {result ? (
+                <>
+                  <div className="flex flex-col gap-2">
+                    <h4 className="font-serif text-lg">Where the heat goes</h4>
+                    <ShareChart result={result} />
+                  </div>
+                  <ShowTheWork result={result} />
+                </>
+              ) : null}
+            </>
+          ) : null
         }
       >
-        <div {...staleProps(stale)}>
-          <div className="flex flex-col gap-4">
-            <div aria-live="polite" className="flex flex-col gap-4">
-              {result ? <ResultFigures result={result} /> : <WaitingFor errors={errors} thermal={thermal} />}
-            </div>
-            {thermal ? <SectionSketch thermal={thermal} girtOrientation={girtOrientation} /> : null}
-            {result ? (
-              <>
-                <div className="flex flex-col gap-2">
-                  <h4 className="font-serif text-lg">Where the heat goes</h4>
-                  <ShareChart result={result} />
-                </div>
-                <ShowTheWork result={result} />
-              </>
-            ) : null}
-          </div>
-        </div>
-      </PageSection>
+        {result ? <ResultFigures result={result} /> : <WaitingFor errors={errors} thermal={thermal} />}
+      </ResultSection>
 
       <Cautions engineVersion={engineVersion} />
     </>

@@ -7,7 +7,8 @@ import type { Project } from '@shared/schemas/project';
 import { useMemo, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { PageSection } from '../../../components/ui/PageSection';
-import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
+import { COMPUTED_AS_YOU_TYPE, ResultSection } from '../../../components/ui/ResultSection';
+import { staleProps } from '../../../components/ui/ResultSummary';
 import { NewerRevisionNotice, RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { useDeferredCalculation } from '../../../lib/deferred-calculation';
 import { formatDateTime } from '../../../lib/format';
@@ -175,29 +176,23 @@ export function JointsView({ project, assembly, ...revisionApi }: Props) {
         </div>
       </PageSection>
 
-      <PageSection
+      <ResultSection
         n={3}
         title="Schedule"
         id="joint-schedule-heading"
-        aside={
-          <span className="flex items-baseline gap-3">
-            <UpdatingMark stale={stale} />
-            <span className="text-xs text-ink-muted">computed in your browser as you type</span>
-          </span>
-        }
+        stale={stale}
+        note={COMPUTED_AS_YOU_TYPE}
       >
-        <div aria-live="polite" {...staleProps(stale)}>
-          {shown.joints.length > 0 ? (
-            <ScheduleTable
-              joints={shown.joints}
-              evaluation={shown.jointsEval}
-              onEdit={mayWrite ? editJoint : undefined}
-            />
-          ) : (
-            <p className="text-ink-muted">No joints in the schedule yet.</p>
-          )}
-        </div>
-      </PageSection>
+        {shown.joints.length > 0 ? (
+          <ScheduleTable
+            joints={shown.joints}
+            evaluation={shown.jointsEval}
+            onEdit={mayWrite ? editJoint : undefined}
+          />
+        ) : (
+          <p className="text-ink-muted">No joints in the schedule yet.</p>
+        )}
+      </ResultSection>
       <JointCautions engineVersion={ENGINE_VERSION} />
 
       <PageSection
@@ -236,31 +231,25 @@ export function JointsView({ project, assembly, ...revisionApi }: Props) {
         )}
       </PageSection>
 
-      <PageSection
+      <ResultSection
         n={5}
         title="Takeoff"
         id="takeoff-heading"
-        aside={
-          <span className="flex items-baseline gap-3">
-            <UpdatingMark stale={stale} />
-            <span className="text-xs text-ink-muted">estimates — check them against the shop drawings</span>
-          </span>
-        }
+        stale={stale}
+        note="estimates — check them against the shop drawings"
       >
-        <div aria-live="polite" {...staleProps(stale)}>
-          {shown.takeoff && shown.takeoffEval?.result ? (
-            <TakeoffTable
-              input={shown.takeoff}
-              result={shown.takeoffEval.result}
-              assemblyName={assembly.name}
-            />
-          ) : shown.takeoff && shown.takeoffEval ? (
-            <TakeoffProblems problems={shown.takeoffEval.problems} input={shown.takeoff} />
-          ) : (
-            <p className="text-ink-muted">Nothing to take off yet.</p>
-          )}
-        </div>
-      </PageSection>
+        {shown.takeoff && shown.takeoffEval?.result ? (
+          <TakeoffTable
+            input={shown.takeoff}
+            result={shown.takeoffEval.result}
+            assemblyName={assembly.name}
+          />
+        ) : shown.takeoff && shown.takeoffEval ? (
+          <TakeoffProblems problems={shown.takeoffEval.problems} input={shown.takeoff} />
+        ) : (
+          <p className="text-ink-muted">Nothing to take off yet.</p>
+        )}
+      </ResultSection>
       <TakeoffCautions engineVersion={ENGINE_VERSION} />
 
       {mayWrite ? (

@@ -6,7 +6,7 @@ import { drawClass } from '@shared/sheets/layer-class';
 import { type ReactNode, useState } from 'react';
 import { Link } from 'react-router';
 import { PageSection } from '../../../components/ui/PageSection';
-import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
+import { COMPUTED_AS_YOU_TYPE, ResultSection } from '../../../components/ui/ResultSection';
 import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
 import { useDeferredCalculation } from '../../../lib/deferred-calculation';
@@ -121,56 +121,45 @@ export function MoistureView({ project, assembly, climateSummary, ...revisionApi
           <MoistureMethod result={evaluation.result} input={evaluation.input} system={system} />
         ) : (
           <p className="text-ink-muted">
-            ISO 13788:2012 monthly method (Glaser, tangent construction); the details follow once the page
-            can be computed.
+            ISO 13788:2012 monthly method (Glaser, tangent construction); the details follow once the page can
+            be computed.
           </p>
         )}
       </PageSection>
 
-      <PageSection
+      <ResultSection
         n={4}
         title="Result"
         id="moisture-result-heading"
-        aside={
-          <span className="flex items-baseline gap-3">
-            <UpdatingMark stale={stale} />
-            {mayWrite ? (
-              <span className="text-xs text-ink-muted">computed in your browser as you type</span>
-            ) : null}
-          </span>
-        }
+        stale={stale}
+        note={mayWrite ? COMPUTED_AS_YOU_TYPE : undefined}
+        className="flex flex-col gap-4"
+        work={result ? <ShowTheWork steps={result.trace} /> : null}
       >
-        <div aria-live="polite" {...staleProps(stale, 'flex flex-col gap-4')}>
-          {result ? (
-            <MoistureResults
-              result={result}
-              layers={layers}
-              system={system}
-              month={month}
-              onMonth={setMonth}
-              mode={mode}
-              onMode={setMode}
-            />
-          ) : (
-            <NeedsList
-              problems={problems}
-              links={{
-                climate: climateHref,
-                indoor: base,
-                buildup: builderHref,
-                mayEditClimate,
-                mayEditIndoor: can(project.myRole, 'project.update') && !archived,
-                mayEditVapour: mayWrite,
-              }}
-            />
-          )}
-        </div>
         {result ? (
-          <div {...staleProps(stale)}>
-            <ShowTheWork steps={result.trace} />
-          </div>
-        ) : null}
-      </PageSection>
+          <MoistureResults
+            result={result}
+            layers={layers}
+            system={system}
+            month={month}
+            onMonth={setMonth}
+            mode={mode}
+            onMode={setMode}
+          />
+        ) : (
+          <NeedsList
+            problems={problems}
+            links={{
+              climate: climateHref,
+              indoor: base,
+              buildup: builderHref,
+              mayEditClimate,
+              mayEditIndoor: can(project.myRole, 'project.update') && !archived,
+              mayEditVapour: mayWrite,
+            }}
+          />
+        )}
+      </ResultSection>
 
       <MoistureCautions engineVersion={ENGINE_VERSION} />
 

@@ -7,7 +7,7 @@ import { Link } from 'react-router';
 import { Cautions } from '../../../components/ui/Cautions';
 import { Notice } from '../../../components/ui/Notice';
 import { PageSection } from '../../../components/ui/PageSection';
-import { staleProps, UpdatingMark } from '../../../components/ui/ResultSummary';
+import { COMPUTED_AS_YOU_TYPE, ResultSection } from '../../../components/ui/ResultSection';
 import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
 import { formatDateTime } from '../../../lib/format';
@@ -125,67 +125,56 @@ export function AttachmentView({ project, assembly, library, ...io }: Props) {
         )}
       </PageSection>
 
-      <PageSection
+      <ResultSection
         n={5}
         title="Result"
         id="wind-result-heading"
-        aside={
-          <span className="flex items-baseline gap-3">
-            <UpdatingMark stale={stale} />
-            {mayWrite ? (
-              <span className="text-xs text-ink-muted">computed in your browser as you type</span>
-            ) : null}
-          </span>
-        }
+        stale={stale}
+        note={mayWrite ? COMPUTED_AS_YOU_TYPE : undefined}
+        className="flex flex-col gap-6"
+        work={result ? <ShowTheWork steps={result.trace} /> : null}
       >
-        <div aria-live="polite" {...staleProps(stale, 'flex flex-col gap-6')}>
-          {result && input ? (
-            <>
-              <WallElevation
-                length={input.site.planLength}
-                height={input.site.meanRoofHeight}
-                edgeWidth={result.edgeWidth}
-                girtOrientation={input.panel.girtOrientation}
-                girtSpacing={evaluation.design.girtSpacing}
-              />
-              <ScheduleTable result={result} zones={zones} deflectionLimit={deflectionLimit} />
-              {hasDesign ? (
-                <DesignChecksTable
-                  zones={zones}
-                  deflectionLimit={deflectionLimit}
-                  deflectionFactor={input.panel.deflectionWindFactor ?? DEFAULT_DEFLECTION_WIND_FACTOR}
-                />
-              ) : (
-                <p className="text-sm text-ink-muted">
-                  Enter a design girt spacing (section 2) to check it against the table and the clip.
-                </p>
-              )}
-              {result.warnings.length > 0 ? (
-                <Notice tone="warning" title="Read with the schedule:">
-                  <ul className="list-disc pl-5">
-                    {result.warnings.map((w) => (
-                      <li key={w}>{w}</li>
-                    ))}
-                  </ul>
-                </Notice>
-              ) : null}
-              <VelocityBlock result={result} />
-            </>
-          ) : (
-            <MissingData
-              projectId={project.id}
-              missing={evaluation.missing}
-              site={evaluation.site}
-              errors={errors}
+        {result && input ? (
+          <>
+            <WallElevation
+              length={input.site.planLength}
+              height={input.site.meanRoofHeight}
+              edgeWidth={result.edgeWidth}
+              girtOrientation={input.panel.girtOrientation}
+              girtSpacing={evaluation.design.girtSpacing}
             />
-          )}
-        </div>
-        {result ? (
-          <div {...staleProps(stale)}>
-            <ShowTheWork steps={result.trace} />
-          </div>
-        ) : null}
-      </PageSection>
+            <ScheduleTable result={result} zones={zones} deflectionLimit={deflectionLimit} />
+            {hasDesign ? (
+              <DesignChecksTable
+                zones={zones}
+                deflectionLimit={deflectionLimit}
+                deflectionFactor={input.panel.deflectionWindFactor ?? DEFAULT_DEFLECTION_WIND_FACTOR}
+              />
+            ) : (
+              <p className="text-sm text-ink-muted">
+                Enter a design girt spacing (section 2) to check it against the table and the clip.
+              </p>
+            )}
+            {result.warnings.length > 0 ? (
+              <Notice tone="warning" title="Read with the schedule:">
+                <ul className="list-disc pl-5">
+                  {result.warnings.map((w) => (
+                    <li key={w}>{w}</li>
+                  ))}
+                </ul>
+              </Notice>
+            ) : null}
+            <VelocityBlock result={result} />
+          </>
+        ) : (
+          <MissingData
+            projectId={project.id}
+            missing={evaluation.missing}
+            site={evaluation.site}
+            errors={errors}
+          />
+        )}
+      </ResultSection>
 
       <Cautions items={[LEAD_CAUTION, ...CAUTIONS]} engineVersion={ENGINE_VERSION} />
 

@@ -1,5 +1,4 @@
 import type { ThermalInput, ThermalResult } from '@shared/calc/thermal/schema';
-import type { ReactNode } from 'react';
 import { Notice } from '../../../components/ui/Notice';
 import { PageSection } from '../../../components/ui/PageSection';
 import { ResultSection } from '../../../components/ui/ResultSection';

@@ -301,7 +301,7 @@ export function mountRoutes(
         const orgId = (req.params as Record<string, string>).orgId;
         const role =
           orgId && /^[0-9a-f-]{36}$/i.test(orgId) ? await services.firmMembers.roleIn(orgId, user!.id) : null;
-        if (!role) throw notFound('organisation');
+        if (!role) throw notFound('firm');
         if (!canInFirm(role, access.action))
           throw forbidden(
             access.action === 'firm.admin'
@@ -315,7 +315,7 @@ export function mountRoutes(
         const uuid = (x: string | undefined) => x !== undefined && /^[0-9a-f-]{36}$/i.test(x);
         const orgId = p.orgId ?? (uuid(p.setId) ? await services.criteria.organisationOf(p.setId!) : null);
         const held = uuid(orgId ?? undefined) ? await services.criteria.accessIn(orgId!, user!.id) : null;
-        if (!held) throw notFound(p.orgId ? 'organisation' : 'code table');
+        if (!held) throw notFound(p.orgId ? 'firm' : 'code table');
         if (!criteriaAllows(held, access.need))
           throw forbidden(
             access.need === 'admin'

@@ -44,7 +44,7 @@ export function createOrganisationService(db: Db) {
   });
   const one = async (orgId: string) => {
     const [r] = await select(eq(organisations.id, orgId));
-    if (!r) throw notFound('organisation');
+    if (!r) throw notFound('firm');
     return toApi(r);
   };
 

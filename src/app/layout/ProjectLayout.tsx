@@ -10,7 +10,7 @@ import { formatDate } from '../../lib/format';
 const tabClass = ({ isActive }: { isActive: boolean }) =>
   `-mb-px border-b-2 px-1 pb-2 text-sm font-semibold no-underline ${isActive ? 'border-ink text-ink' : 'border-transparent text-ink-muted hover:text-ink'}`;
 
-/** The frame around every project page: its name, the sheet index (overview / assemblies / climate / people / activity). */
+/** The frame around every project page: its name, the page index (overview / assemblies / climate / people / activity). */
 export function ProjectLayout() {
   const { projectId = '' } = useParams();
   const project = useProject(projectId);

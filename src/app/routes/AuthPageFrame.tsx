@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 
-/** A narrow sheet for the sign-in screens. */
+/** A narrow page for the sign-in screens. */
 export function AuthPageFrame({
   title,
   intro,

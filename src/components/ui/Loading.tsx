@@ -1,4 +1,4 @@
-/** A quiet, announced loading line (no spinner: the sheet just says what it is waiting for). */
+/** A quiet, announced loading line (no spinner: the page just says what it is waiting for). */
 export function Loading({ what = 'Loading' }: { what?: string }) {
   return (
     <p role="status" className="py-6 text-ink-muted">

@@ -21,7 +21,7 @@ export type SignInForm = z.infer<typeof signInFormSchema>;
 
 export const signUpFormSchema = z
   .object({
-    name: z.string().trim().min(1, 'Enter your name as it should appear on sheets.').max(200),
+    name: z.string().trim().min(1, 'Enter your name as it should appear on compliance sheets.').max(200),
     email,
     password: newPassword,
     confirm: z.string(),

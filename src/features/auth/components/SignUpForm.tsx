@@ -70,7 +70,7 @@ export function SignUpForm({ next, defaultEmail = '' }: { next: string; defaultE
       {failure ? <Notice tone="caution" title={failure} live /> : null}
       <Field
         label="Name"
-        hint="As it should appear on calculation sheets."
+        hint="As it should appear on compliance sheets."
         error={errors.name?.message}
         required
       >

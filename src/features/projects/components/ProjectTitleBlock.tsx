@@ -33,7 +33,7 @@ function Cell({
 }
 
 /**
- * The project's site data laid out like the title block of a calculation sheet: one ruled frame,
+ * The project's site data laid out like the title block of a drawing: one ruled frame,
  * small capital labels, figures in tabular mono, units per the person's preference.
  */
 export function ProjectTitleBlock({ project: p }: { project: Project }) {

@@ -20,6 +20,14 @@ const TONE: Record<SummaryVerdict['tone'], string> = {
   open: 'text-warning',
 };
 
+/** The verdict of a page that cannot be computed yet: what it waits for, in words. */
+export const notYet = (word: string, detail: string): SummaryVerdict => ({
+  glyph: '?',
+  word,
+  detail,
+  tone: 'open',
+});
+
 /** Figures drawn from an older input while a newer one is computed: dimmed, and busy for assistive technology. */
 export const staleProps = (stale: boolean, className = '') => ({
   className: `${className} transition-opacity ${stale ? 'opacity-45' : ''}`,

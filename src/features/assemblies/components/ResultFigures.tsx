@@ -2,7 +2,12 @@ import type { ThermalResult } from '@shared/calc/thermal/schema';
 import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
 import { fixed } from '@shared/units/rounding';
 import type { ReactNode } from 'react';
-import { ResultSummary, type SummaryFigure, type SummaryVerdict } from '../../../components/ui/ResultSummary';
+import {
+  notYet,
+  ResultSummary,
+  type SummaryFigure,
+  type SummaryVerdict,
+} from '../../../components/ui/ResultSummary';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { formatR, formatU } from '../units';
 
@@ -111,12 +116,10 @@ export function ThermalSummary({
         detail: `R₀ by the ${METHOD_LABELS[result.defaultMethod]}`,
         tone: 'meets',
       }
-    : {
-        glyph: '?',
-        word: 'no result yet',
-        detail: `${problems === 1 ? 'one value needs' : `${problems} values need`} attention (listed under Result)`,
-        tone: 'open',
-      };
+    : notYet(
+        'no result yet',
+        `${problems === 1 ? 'one value needs' : `${problems} values need`} attention (listed under Result)`,
+      );
   const figures: SummaryFigure[] = result
     ? [
         { label: 'Effective R_eff', value: formatR(result.Reff, system), testId: 'summary-Reff' },

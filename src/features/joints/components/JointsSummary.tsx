@@ -1,6 +1,11 @@
 import type { JointInput } from '@shared/calc/joints/schema';
 import type { TakeoffResult } from '@shared/calc/takeoff/schema';
-import { ResultSummary, type SummaryFigure, type SummaryVerdict } from '../../../components/ui/ResultSummary';
+import {
+  notYet,
+  ResultSummary,
+  type SummaryFigure,
+  type SummaryVerdict,
+} from '../../../components/ui/ResultSummary';
 import { useUnitSystem } from '../../../lib/unit-system';
 import type { JointsEvaluation } from '../evaluate';
 import { jointVerdict } from '../verdict';
@@ -28,7 +33,7 @@ export function JointsSummary({
   const { passCount, failCount } = evaluation;
   const verdict: SummaryVerdict =
     n === 0
-      ? { glyph: '?', word: 'no joints', detail: 'enter the joint schedule below', tone: 'open' }
+      ? notYet('no joints', 'enter the joint schedule below')
       : failCount > 0
         ? {
             glyph: '✕',
@@ -37,12 +42,10 @@ export function JointsSummary({
             tone: 'fails',
           }
         : problems > 0
-          ? {
-              glyph: '?',
-              word: 'not all sized',
-              detail: `${problems === 1 ? 'one value needs' : `${problems} values need`} attention`,
-              tone: 'open',
-            }
+          ? notYet(
+              'not all sized',
+              `${problems === 1 ? 'one value needs' : `${problems} values need`} attention`,
+            )
           : {
               glyph: '✓',
               word: 'meets',

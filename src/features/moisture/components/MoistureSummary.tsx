@@ -1,6 +1,6 @@
 import type { MoistureResult } from '@shared/calc/moisture/schema';
 import type { UnitSystem } from '@shared/units';
-import { ResultSummary, type SummaryVerdict } from '../../../components/ui/ResultSummary';
+import { notYet, ResultSummary, type SummaryVerdict } from '../../../components/ui/ResultSummary';
 import { formatFactor, formatWater } from '../units';
 import {
   interstitialStatement,
@@ -38,12 +38,10 @@ export function MoistureSummary({
   if (!result)
     return (
       <ResultSummary
-        verdict={{
-          glyph: '?',
-          word: 'no result yet',
-          detail: `${problems === 1 ? 'one thing is' : `${problems} things are`} missing (listed under Result)`,
-          tone: 'open',
-        }}
+        verdict={notYet(
+          'no result yet',
+          `${problems === 1 ? 'one thing is' : `${problems} things are`} missing (listed under Result)`,
+        )}
         figures={[]}
         stale={stale}
         resultId="moisture-result-heading"

@@ -1,6 +1,11 @@
 import type { WindScheduleResult, ZoneDesign } from '@shared/calc/wind/schema';
 import type { UnitSystem } from '@shared/units';
-import { ResultSummary, type SummaryFigure, type SummaryVerdict } from '../../../components/ui/ResultSummary';
+import {
+  notYet,
+  ResultSummary,
+  type SummaryFigure,
+  type SummaryVerdict,
+} from '../../../components/ui/ResultSummary';
 import { zoneStatusText } from '../status';
 import { formatWind } from '../units';
 
@@ -24,12 +29,7 @@ export function AttachmentSummary({
   if (!result)
     return (
       <ResultSummary
-        verdict={{
-          glyph: '?',
-          word: 'no schedule yet',
-          detail: 'data is missing (listed under Result)',
-          tone: 'open',
-        }}
+        verdict={notYet('no schedule yet', 'data is missing (listed under Result)')}
         figures={[]}
         stale={stale}
         resultId="wind-result-heading"

@@ -1,6 +1,6 @@
 import demo from '@data/seed/demo-assembly.json';
-import { type Assembly, type AssemblyInput, assemblyInputSchema } from '@shared/schemas/assembly';
-import { type Project, projectClimateSchema } from '@shared/schemas/project';
+import { assemblyInputSchema } from '@shared/schemas/assembly';
+import { projectClimateSchema } from '@shared/schemas/project';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { act, cleanup, fireEvent, render, screen } from '@testing-library/react';
 import type { ReactNode } from 'react';
@@ -11,7 +11,7 @@ import { startingInput } from '../features/assemblies/form';
 import { JointsView } from '../features/joints/components/JointsView';
 import { MoistureView } from '../features/moisture/components/MoistureView';
 import { AttachmentView } from '../features/wind/components/AttachmentView';
-import { demoAssembly, demoProject } from '../features/wind/test-fixtures';
+import { demoAssembly, testAssembly, testProject } from '../features/wind/test-fixtures';
 import { UnitSystemProvider } from '../lib/unit-system';
 
 /*
@@ -54,44 +54,8 @@ afterEach(() => {
   cleanup();
 });
 
-const project: Project = {
-  ...demoProject(),
-  id: '00000000-0000-4000-8000-000000000001',
-  organisationId: '00000000-0000-4000-8000-000000000002',
-  organisationName: 'Test firm',
-  name: 'Test project',
-  number: '',
-  description: '',
-  siteAddress: '',
-  climateZone: '5A',
-  elevationM: 150,
-  archivedAt: null,
-  version: 1,
-  createdAt: '2026-01-01T00:00:00.000Z',
-  updatedAt: '2026-01-01T00:00:00.000Z',
-  myRole: 'owner',
-};
-
-const assemblyOf = (input: AssemblyInput): Assembly => ({
-  id: '00000000-0000-4000-8000-000000000003',
-  projectId: project.id,
-  name: input.name,
-  wallCategory: input.wallCategory,
-  revision: 1,
-  version: 1,
-  updatedAt: '2026-01-01T00:00:00.000Z',
-  Ueff: null,
-  Reff: null,
-  current: {
-    revision: 1,
-    note: '',
-    input,
-    thermalResult: null,
-    engineVersion: '0.1.0',
-    createdBy: 'Test',
-    createdAt: '2026-01-01T00:00:00.000Z',
-  },
-});
+const project = testProject('owner');
+const assemblyOf = testAssembly;
 const demoWall = assemblyOf(assemblyInputSchema.parse(demo.assembly));
 const revisionApi = { save: vi.fn(), conflictOf: () => null, onLoadTheirs: vi.fn(), errorText: String };
 

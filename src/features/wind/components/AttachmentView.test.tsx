@@ -1,53 +1,16 @@
 import type { Assembly } from '@shared/schemas/assembly';
 import type { AttachmentProduct } from '@shared/schemas/attachment-library';
-import type { Project } from '@shared/schemas/project';
 import { cleanup, fireEvent, render, screen, waitFor } from '@testing-library/react';
 import { createMemoryRouter, MemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { demoAssembly, demoProject } from '../test-fixtures';
+import { demoAssembly, testAssembly, testProject } from '../test-fixtures';
 import { AttachmentView } from './AttachmentView';
 import type { AttachmentLibrary } from './LibraryPick';
 
 afterEach(cleanup);
 
-const project = (role: Project['myRole']): Project => ({
-  ...demoProject(),
-  id: '00000000-0000-4000-8000-000000000001',
-  organisationId: '00000000-0000-4000-8000-000000000002',
-  organisationName: 'Test firm',
-  name: 'Test project',
-  number: '',
-  description: '',
-  siteAddress: '',
-  climateZone: '5A',
-  elevationM: 150,
-  archivedAt: null,
-  version: 1,
-  createdAt: '2026-01-01T00:00:00.000Z',
-  updatedAt: '2026-01-01T00:00:00.000Z',
-  myRole: role,
-});
-
-const assembly = (): Assembly => ({
-  id: '00000000-0000-4000-8000-000000000003',
-  projectId: '00000000-0000-4000-8000-000000000001',
-  name: 'Demo wall',
-  wallCategory: 'metal_building',
-  revision: 1,
-  version: 1,
-  updatedAt: '2026-01-01T00:00:00.000Z',
-  Ueff: null,
-  Reff: null,
-  current: {
-    revision: 1,
-    note: '',
-    input: demoAssembly({ girtSpacing: 1.2, clipSpacing: 0.6 }),
-    thermalResult: null,
-    engineVersion: '0.1.0',
-    createdBy: 'Test',
-    createdAt: '2026-01-01T00:00:00.000Z',
-  },
-});
+const project = testProject;
+const assembly = () => testAssembly(demoAssembly({ girtSpacing: 1.2, clipSpacing: 0.6 }));
 
 describe('the attachment page for a role that only reads', () => {
   it('computes the schedule from the saved inputs and offers no editing', () => {

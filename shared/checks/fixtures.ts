@@ -3,6 +3,7 @@ import { type AssemblyInput, assemblyInputSchema } from '../schemas/assembly';
 import { projectClimateSchema, projectWindSchema } from '../schemas/project';
 import type { CriteriaRowInput } from './criteria';
 import type { ProjectForChecks } from './inputs';
+import type { Check } from './report';
 
 /** The invented demo assembly and project (data/seed) as the checks read them — for tests. */
 export const demoAssembly = (): AssemblyInput => assemblyInputSchema.parse(demo.assembly);
@@ -25,3 +26,22 @@ export const criteriaRow = (
   climateZone: CriteriaRowInput['climateZone'] = '5A',
   wallCategory: CriteriaRowInput['wallCategory'] = 'steel_framed',
 ): CriteriaRowInput => ({ climateZone, wallCategory, criterion, value, note: '' });
+
+/** A passing maximum U-factor check (0.307 against 0.35 W/(m²·K)), with `over` put in — for tests. */
+export const uFactorCheck = (over: Partial<Check> = {}): Check => ({
+  id: 'criterion.max_u_factor',
+  source: 'criteria',
+  criterion: 'max_u_factor',
+  label: 'Maximum U-factor',
+  required: 0.35,
+  provided: 0.307,
+  unit: 'W/(m²·K)',
+  direction: 'max',
+  margin: 0.043,
+  marginRatio: 0.043 / 0.35,
+  status: 'pass',
+  reason: '',
+  module: 'thermal',
+  traceStepIds: [],
+  ...over,
+});

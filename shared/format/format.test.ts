@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Check } from '../checks/report';
+import { uFactorCheck as check } from '../checks/fixtures';
 import {
   checkFigures,
   checkResultText,
@@ -12,24 +12,6 @@ import {
   sentence,
   storedMessageText,
 } from './index';
-
-const check = (over: Partial<Check>): Check => ({
-  id: 'criterion.max_u_factor',
-  source: 'criteria',
-  criterion: 'max_u_factor',
-  label: 'Maximum U-factor',
-  required: 0.35,
-  provided: 0.307,
-  unit: 'W/(m²·K)',
-  direction: 'max',
-  margin: 0.043,
-  marginRatio: 0.043 / 0.35,
-  status: 'pass',
-  reason: '',
-  module: 'thermal',
-  traceStepIds: [],
-  ...over,
-});
 
 describe('figures in the person’s units (screens and sheet alike)', () => {
   const si = quantityFormatter('SI');

@@ -1,24 +1,6 @@
-import type { Check } from '@shared/checks/report';
+import { uFactorCheck as check } from '@shared/checks/fixtures';
 import { describe, expect, it } from 'vitest';
 import { checkResultText, formatSiValue } from './check-format';
-
-const check = (over: Partial<Check>): Check => ({
-  id: 'criterion.max_u_factor',
-  source: 'criteria',
-  criterion: 'max_u_factor',
-  label: 'Maximum U-factor',
-  required: 0.35,
-  provided: 0.307,
-  unit: 'W/(m²·K)',
-  direction: 'max',
-  margin: 0.043,
-  marginRatio: 0.043 / 0.35,
-  status: 'pass',
-  reason: '',
-  module: 'thermal',
-  traceStepIds: [],
-  ...over,
-});
 
 describe('check results in words', () => {
   it('says how much a check meets or fails by, in the person’s units', () => {

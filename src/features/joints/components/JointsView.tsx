@@ -9,9 +9,9 @@ import { Button } from '../../../components/ui/Button';
 import { PageSection } from '../../../components/ui/PageSection';
 import { COMPUTED_AS_YOU_TYPE, ResultSection } from '../../../components/ui/ResultSection';
 import { staleProps } from '../../../components/ui/ResultSummary';
+import { RevisionHeader } from '../../../components/ui/RevisionHeader';
 import { NewerRevisionNotice, RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { useDeferredCalculation } from '../../../lib/deferred-calculation';
-import { formatDateTime } from '../../../lib/format';
 import { issueLines } from '../../../lib/issue-words';
 import { type RevisionApi, useRevisionEditing } from '../../../lib/use-revision-editing';
 import { ElevationEditor } from '../../takeoff/components/ElevationEditor';
@@ -119,13 +119,9 @@ export function JointsView({ project, assembly, ...revisionApi }: Props) {
     );
   }
 
-  const revisionLine = `Assembly · revision ${assembly.revision} saved ${formatDateTime(assembly.current.createdAt)}${assembly.current.createdBy ? ` by ${assembly.current.createdBy}` : ''}${mayWrite ? '' : ' · read-only'}`;
-
   return (
     <div className="flex flex-col gap-10 pb-4">
-      <header className="flex flex-col gap-1">
-        <p className="label-caps">{revisionLine}</p>
-        <h2 className="text-3xl">Joints &amp; quantities</h2>
+      <RevisionHeader page="Assembly" assembly={assembly} readOnly={!mayWrite} title="Joints & quantities">
         <p className="max-w-prose text-sm text-ink-muted">
           Sealant joints sized for the panels' thermal movement, and the sealant, tape, trim and fasteners of
           the elevation. Everything is computed in your browser as you type
@@ -138,7 +134,7 @@ export function JointsView({ project, assembly, ...revisionApi }: Props) {
               : 'Your role on this project shows assemblies read-only.'}
           </p>
         ) : null}
-      </header>
+      </RevisionHeader>
 
       {mayWrite ? <NewerRevisionNotice newer={editing.newerElsewhere} yours="edits" /> : null}
 

@@ -7,10 +7,10 @@ import { type ReactNode, useState } from 'react';
 import { Link } from 'react-router';
 import { PageSection } from '../../../components/ui/PageSection';
 import { COMPUTED_AS_YOU_TYPE, ResultSection } from '../../../components/ui/ResultSection';
+import { RevisionHeader } from '../../../components/ui/RevisionHeader';
 import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
 import { useDeferredCalculation } from '../../../lib/deferred-calculation';
-import { formatDateTime } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import type { RevisionApi } from '../../../lib/use-revision-editing';
 import { evaluateMoisture } from '../evaluate';
@@ -68,19 +68,17 @@ export function MoistureView({ project, assembly, climateSummary, ...revisionApi
 
   return (
     <div className="flex flex-col gap-10 pb-4">
-      <header className="flex flex-col gap-1">
-        <p className="label-caps">
-          Moisture page · revision {editing.base.revision} saved{' '}
-          {formatDateTime(editing.base.current.createdAt)}
-          {editing.base.current.createdBy ? ` by ${editing.base.current.createdBy}` : ''}
-          {mayWrite ? '' : ' · read-only'}
-        </p>
-        <h2 className="text-3xl">{editing.base.name}</h2>
+      <RevisionHeader
+        page="Moisture page"
+        assembly={editing.base}
+        readOnly={!mayWrite}
+        title={editing.base.name}
+      >
         <p className="text-sm text-ink-muted">
           Condensation inside the wall and mould risk at its inner face, month by month
           {mayWrite ? ' — recomputed in your browser as you type.' : '.'}
         </p>
-      </header>
+      </RevisionHeader>
 
       <MoistureSummary
         result={result}

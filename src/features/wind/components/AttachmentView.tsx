@@ -8,9 +8,9 @@ import { Cautions } from '../../../components/ui/Cautions';
 import { Notice } from '../../../components/ui/Notice';
 import { PageSection } from '../../../components/ui/PageSection';
 import { COMPUTED_AS_YOU_TYPE, ResultSection } from '../../../components/ui/ResultSection';
+import { RevisionHeader } from '../../../components/ui/RevisionHeader';
 import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
-import { formatDateTime } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AttachmentEditingOptions, useAttachmentEditing } from '../use-attachment-editing';
 import { AttachmentSummary } from './AttachmentSummary';
@@ -61,18 +61,12 @@ export function AttachmentView({ project, assembly, library, ...io }: Props) {
 
   return (
     <div className="flex flex-col gap-10 pb-4">
-      <header className="flex flex-col gap-1">
-        <p className="label-caps">
-          Attachment page · revision {base.revision} saved {formatDateTime(base.current.createdAt)}
-          {base.current.createdBy ? ` by ${base.current.createdBy}` : ''}
-          {mayWrite ? '' : ' · read-only'}
-        </p>
-        <h2 className="text-3xl">{base.name}</h2>
+      <RevisionHeader page="Attachment page" assembly={base} readOnly={!mayWrite} title={base.name}>
         <p className="text-sm text-ink-muted">
           Girt and clip spacing for the design wind pressure on the wall, zone by zone
           {mayWrite ? ' — recomputed in your browser as you type.' : '.'}
         </p>
-      </header>
+      </RevisionHeader>
 
       <AttachmentSummary result={result} zones={zones} stale={stale} system={system} />
 

@@ -32,11 +32,11 @@ import {
 } from '../form';
 import { mergeAssemblyEdits } from '../merge';
 import { formatR, formatU } from '../units';
-import { AttachmentsEditor } from './AttachmentsEditor';
 import { SelectField, TextField } from './FormFields';
 import { LayersEditor } from './LayersEditor';
 import { ThermalSummary } from './ResultFigures';
 import { describePath, PageSection, ResultPanel } from './ResultPanel';
+import { ThermalBridgesEditor } from './ThermalBridgesEditor';
 
 const HEAT_FLOW = [
   { value: 'horizontal', label: 'Horizontal (walls)' },
@@ -198,7 +198,7 @@ export function AssemblyBuilder({
           </PageSection>
 
           <PageSection n={2} title="Thermal bridges" id="bridges-heading">
-            <AttachmentsEditor />
+            <ThermalBridgesEditor />
           </PageSection>
 
           <ResultPanel

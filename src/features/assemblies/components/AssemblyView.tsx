@@ -8,9 +8,9 @@ import { useUnitSystem } from '../../../lib/unit-system';
 import { evaluateThermal } from '../evaluate';
 import { firstCountedLayer, LAYER_KIND_LABELS } from '../form';
 import { formatMeasure } from '../units';
-import { SOURCE_TYPE_LABELS } from './AttachmentsEditor';
 import { ThermalSummary } from './ResultFigures';
 import { PageSection, ResultPanel } from './ResultPanel';
+import { SOURCE_TYPE_LABELS } from './ThermalBridgesEditor';
 
 const HEAT_FLOW_WORDS = { horizontal: 'horizontal (walls)', upward: 'upward', downward: 'downward' } as const;
 const VENT_WORDS = {

@@ -35,7 +35,7 @@ const iconButton =
   'text-sm hover:bg-paper-sunk';
 
 /** How the cladding is held, and the bridges it makes through the insulation. */
-export function AttachmentsEditor() {
+export function ThermalBridgesEditor() {
   const { control, register, getValues } = useFormContext<AssemblyFormValues>();
   const array = useFieldArray({ control, name: 'thermal.bridges', keyName: 'key' });
 

@@ -1,4 +1,4 @@
-import { demoGirtModel } from '@shared/calc/bridge/fixtures';
+import { demoGirtModel } from '@shared/calc/bridge/examples';
 import { bridgeModelSchema, bridgeResultSchema } from '@shared/calc/bridge/schema';
 import { demoJointSchedule } from '@shared/calc/joints/examples';
 import { calculateJointSchedule } from '@shared/calc/joints/joints';

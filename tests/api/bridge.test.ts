@@ -1,4 +1,4 @@
-import { demoGirtModel, demoGirtWallU } from '@shared/calc/bridge/fixtures';
+import { demoGirtModel, demoGirtWallU } from '@shared/calc/bridge/examples';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, type TestApp } from '../setup/app';
 

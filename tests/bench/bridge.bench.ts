@@ -1,5 +1,5 @@
 import { solveBridge } from '@shared/calc/bridge/bridge';
-import { demoGirtModel, demoWall } from '@shared/calc/bridge/fixtures';
+import { demoGirtModel, demoWall } from '@shared/calc/bridge/examples';
 import { bridgeModelSchema } from '@shared/calc/bridge/schema';
 import { clipModel } from '@shared/calc/bridge/templates';
 

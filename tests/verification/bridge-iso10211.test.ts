@@ -19,7 +19,7 @@
  *   agrees with them).
  */
 import { DEFAULT_MAX_CELLS, solveBridge, temperatureAt } from '@shared/calc/bridge/bridge';
-import { demoGirtModel, demoWall } from '@shared/calc/bridge/fixtures';
+import { demoGirtModel, demoWall } from '@shared/calc/bridge/examples';
 import { type BridgeModelInput, bridgeModelSchema } from '@shared/calc/bridge/schema';
 import { clipModel, girtModel } from '@shared/calc/bridge/templates';
 import { thermalInputSchema } from '@shared/calc/thermal/schema';

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { bridgeGrid, solveBridge } from './bridge';
-import { demoGirtModel, refusedField } from './fixtures';
+import { demoGirtModel } from './examples';
+import { refusedField } from './fixtures';
 import { gradedSizes } from './grid';
 import { type BridgeModel, type BridgeModelInput, bridgeModelSchema } from './schema';
 

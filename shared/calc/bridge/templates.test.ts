@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { fastenerAlpha, fastenerDeltaU } from '../thermal/thermal';
 import { bridgeGrid, DEFAULT_MAX_CELLS, solveBridge } from './bridge';
-import { demoGirtModel, demoWall, refusedField } from './fixtures';
+import { demoGirtModel, demoWall } from './examples';
+import { refusedField } from './fixtures';
 import { bridgeModelSchema } from './schema';
 import {
   type ClipTemplate,

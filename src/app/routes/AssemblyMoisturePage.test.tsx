@@ -1,46 +1,32 @@
 import demo from '@data/seed/demo-assembly.json';
 import type { ProjectRole } from '@shared/auth/permissions';
 import type { Vapour } from '@shared/calc/moisture/schema';
-import { type Assembly, type AssemblyInput, assemblyInputSchema } from '@shared/schemas/assembly';
+import type { Assembly, AssemblyInput } from '@shared/schemas/assembly';
 import { type Project, projectClimateSchema } from '@shared/schemas/project';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, fireEvent, render, screen, within } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it } from 'vitest';
 import { assemblyKeys, projectKeys } from '../../lib/query-keys';
+import { demoInput, sampleProject } from '../../lib/revision-test-fixtures';
 import { UnitSystemProvider } from '../../lib/unit-system';
 import { AssemblyLayout } from '../layout/AssemblyLayout';
 import { AssemblyMoisturePage } from './AssemblyMoisturePage';
 
 afterEach(cleanup);
 
-const projectId = '11111111-1111-4111-8111-111111111111';
+const projectId = sampleProject.id;
 const assemblyId = '33333333-3333-4333-8333-333333333333';
-const demoInput: AssemblyInput = assemblyInputSchema.parse(demo.assembly);
 
 const baseProject: Project = {
-  id: projectId,
-  organisationId: '22222222-2222-4222-8222-222222222222',
-  organisationName: 'Arch & Co',
-  name: 'Harbour Depot',
-  number: '24-017',
-  description: '',
-  siteAddress: '1 Quay Street',
-  climateZone: '5A',
-  elevationM: 12,
+  ...sampleProject,
   buildingHeightM: 11.5,
   planLengthM: 96,
   planWidthM: 54,
   indoorTempC: 18,
   indoorRh: 0.45,
   winterDesignTempC: -19,
-  summerDesignTempC: 31,
-  wind: null,
   climate: projectClimateSchema.parse(demo.climate),
-  archivedAt: null,
-  version: 3,
-  createdAt: '2025-01-01T00:00:00Z',
-  updatedAt: '2025-01-02T00:00:00Z',
   myRole: 'envelope_consultant',
 };
 

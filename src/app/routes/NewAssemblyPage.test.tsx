@@ -1,41 +1,17 @@
 import { ASSEMBLY_TEMPLATES } from '@shared/assemblies/templates';
-import type { Project } from '@shared/schemas/project';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, fireEvent, render, screen } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 import { afterEach, describe, expect, it } from 'vitest';
 import { projectKeys } from '../../lib/query-keys';
+import { sampleProject } from '../../lib/revision-test-fixtures';
 import { UnitSystemProvider } from '../../lib/unit-system';
 import { NewAssemblyPage } from './NewAssemblyPage';
 
 afterEach(cleanup);
 
-const id = '11111111-1111-4111-8111-111111111111';
-const project: Project = {
-  id,
-  organisationId: '22222222-2222-4222-8222-222222222222',
-  organisationName: 'Arch & Co',
-  name: 'Harbour Depot',
-  number: '24-017',
-  description: '',
-  siteAddress: '1 Quay Street',
-  climateZone: '5A',
-  elevationM: 12,
-  buildingHeightM: 9.144,
-  planLengthM: 60,
-  planWidthM: 30,
-  indoorTempC: 21,
-  indoorRh: 0.35,
-  winterDesignTempC: -20,
-  summerDesignTempC: 31,
-  wind: null,
-  climate: null,
-  archivedAt: null,
-  version: 3,
-  createdAt: '2025-01-01T00:00:00Z',
-  updatedAt: '2025-01-02T00:00:00Z',
-  myRole: 'owner',
-};
+const { id } = sampleProject;
+const project = sampleProject;
 
 function renderNew(search: string) {
   const qc = new QueryClient({

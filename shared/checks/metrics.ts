@@ -3,6 +3,7 @@ import type { JointInput } from '../calc/joints/schema';
 import { saturationPressureIso13788 } from '../calc/moisture/psychrometrics';
 import type { MoistureResult } from '../calc/moisture/schema';
 import type { Layer } from '../calc/thermal/schema';
+import { firstKeptLayer } from '../calc/thermal/thermal';
 import type { Metric, MetricOutcome } from './report';
 
 /*
@@ -17,15 +18,6 @@ import type { Metric, MetricOutcome } from './report';
  */
 export const INSULATION_MAX_CONDUCTIVITY = 0.065;
 
-/** Index of the first layer inside the last well-ventilated air layer (ISO 6946:2017 §6.9.4: layers outside it are disregarded). */
-function firstKept(layers: readonly Layer[]): number {
-  let start = 0;
-  layers.forEach((l, i) => {
-    if (l.kind === 'air' && l.ventilation === 'well') start = i + 1;
-  });
-  return start;
-}
-
 const layerStep = (i: number) => `thermal.layer.${i}.R`;
 
 /**
@@ -34,7 +26,7 @@ const layerStep = (i: number) => `thermal.layer.${i}.R`;
  * here. Declared-resistance layers are not counted (their material is not known).
  */
 export function continuousInsulationR(layers: readonly Layer[]): Metric {
-  const start = firstKept(layers);
+  const start = firstKeptLayer(layers);
   let R = 0;
   const names: string[] = [];
   const steps: string[] = [];
@@ -60,7 +52,7 @@ export function continuousInsulationR(layers: readonly Layer[]): Metric {
  * ≤ 0.065 W/(m·K) — the nominal R of the cavity fill, not derated for the framing (the framing is in U_eff).
  */
 export function cavityInsulationR(layers: readonly Layer[]): Metric {
-  const start = firstKept(layers);
+  const start = firstKeptLayer(layers);
   let R = 0;
   const names: string[] = [];
   const steps: string[] = [];

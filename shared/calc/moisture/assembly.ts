@@ -1,6 +1,11 @@
 import { CalcInputError, requireInRange } from '@shared/calc/errors';
 import type { HeatFlow } from '@shared/calc/thermal/schema';
-import { airLayerResistance, layerResistance, surfaceResistances } from '@shared/calc/thermal/thermal';
+import {
+  airLayerResistance,
+  firstKeptLayer,
+  layerResistance,
+  surfaceResistances,
+} from '@shared/calc/thermal/thermal';
 import { step, type TraceStep, v } from '@shared/calc/trace';
 import { PERM_0C_TO_SI, PERM_23C_TO_SI } from '@shared/units';
 import { assemblePath, DELTA_0, type DiffusionPath, type PathLayer, SUBLAYER_MAX_R } from './glaser';
@@ -97,15 +102,6 @@ function layerThermal(layer: MoistureLayer, i: number, heatFlow: HeatFlow): Laye
   }
 }
 
-/** Index of the first layer kept: layers outside the innermost well-ventilated air layer are disregarded. */
-function firstIncludedLayer(layers: readonly MoistureLayer[]): number {
-  let start = 0;
-  layers.forEach((l, i) => {
-    if (l.kind === 'air' && l.ventilation === 'well') start = i + 1;
-  });
-  return start;
-}
-
 function nodeLabel(layers: readonly MoistureLayer[], outer: number, inner: number): string {
   if (outer < 0) return `Exterior surface of ${layers[inner]!.name}`;
   if (inner < 0) return `Interior surface of ${layers[outer]!.name}`;
@@ -150,7 +146,7 @@ export interface Assembly {
 /** Layers → diffusion path: R from the thermal engine's functions, s_d from the vapour data. */
 export function assemble(input: MoistureInput, trace: TraceStep[], warnings: string[]): Assembly {
   const { layers, heatFlow } = input;
-  const first = firstIncludedLayer(layers);
+  const first = firstKeptLayer(layers);
   if (first === layers.length)
     throw new CalcInputError(`layers.${first - 1}`, 'no layer is left inside the well-ventilated air layer');
   const pathLayers: PathLayer[] = [];

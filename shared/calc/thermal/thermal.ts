@@ -388,13 +388,17 @@ function validateLayer(layer: Layer, i: number): void {
 
 // ------------------------------------------------------------------------------------------ calculation
 
-/** Index of the first layer kept: everything outside the innermost well-ventilated air layer is discarded. */
-function firstKeptLayer(layers: readonly Layer[]): number {
+/**
+ * Index of the first layer kept: layers outside the innermost well-ventilated air layer are disregarded
+ * (ISO 6946:2017 §6.9.4). One rule for the thermal and moisture engines, the checks and the pages.
+ */
+export function firstKeptLayer(
+  layers: readonly { kind?: string; ventilation?: string }[] | undefined,
+): number {
   let start = 0;
-  for (let i = 0; i < layers.length; i++) {
-    const l = layers[i]!;
-    if (l.kind === 'air' && l.ventilation === 'well') start = i + 1;
-  }
+  (layers ?? []).forEach((l, i) => {
+    if (l?.kind === 'air' && l.ventilation === 'well') start = i + 1;
+  });
   return start;
 }
 

@@ -174,15 +174,4 @@ export const BuilderContext = createContext<BuilderContextValue>({
   markRemoval: () => {},
 });
 
-/** Index of the first layer that counts: everything up to the innermost well-ventilated air layer is discarded. */
-export function firstCountedLayer(
-  layers: readonly { kind?: string; ventilation?: string }[] | undefined,
-): number {
-  let start = 0;
-  (layers ?? []).forEach((l, i) => {
-    if (l?.kind === 'air' && l.ventilation === 'well') start = i + 1;
-  });
-  return start;
-}
-
 export const useBuilder = () => useContext(BuilderContext);

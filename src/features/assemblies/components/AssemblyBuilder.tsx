@@ -1,5 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { ThermalInput } from '@shared/calc/thermal/schema';
+import { firstKeptLayer } from '@shared/calc/thermal/thermal';
 import { ENGINE_VERSION } from '@shared/calc/trace';
 import {
   type Assembly,
@@ -24,12 +25,7 @@ import { useRevisionEditing } from '../../../lib/use-revision-editing';
 import { useCreateAssembly } from '../api/create-assembly';
 import { useAssemblyRevisionApi } from '../api/update-assembly';
 import { assemblyErrorMap, evaluateThermal, toFormPath } from '../evaluate';
-import {
-  type AssemblyFormValues,
-  BuilderContext,
-  type BuilderContextValue,
-  firstCountedLayer,
-} from '../form';
+import { type AssemblyFormValues, BuilderContext, type BuilderContextValue } from '../form';
 import { mergeAssemblyEdits } from '../merge';
 import { formatR, formatU } from '../units';
 import { SelectField, TextField } from './FormFields';
@@ -133,7 +129,7 @@ export function AssemblyBuilder({
     return map;
   }, [result]);
 
-  const counted = firstCountedLayer(values.thermal?.layers as { kind?: string; ventilation?: string }[]);
+  const counted = firstKeptLayer(values.thermal?.layers as { kind?: string; ventilation?: string }[]);
   const context: BuilderContextValue = {
     errors,
     readOnly: false,

@@ -1,12 +1,13 @@
 import { findMaterial } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer, ThermalResult } from '@shared/calc/thermal/schema';
+import { firstKeptLayer } from '@shared/calc/thermal/thermal';
 import { type AssemblyInput, type BridgeValue, WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
 import type { UnitSystem } from '@shared/units';
 import { type ReactNode, useMemo } from 'react';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { evaluateThermal } from '../evaluate';
-import { firstCountedLayer, LAYER_KIND_LABELS } from '../form';
+import { LAYER_KIND_LABELS } from '../form';
 import { formatMeasure } from '../units';
 import { ThermalSummary } from './ResultFigures';
 import { PageSection, ResultPanel } from './ResultPanel';
@@ -107,7 +108,7 @@ export function AssemblyView({
     if (m) layerR.set(Number(m[1]), s.value);
   }
   const { thermal, attachment } = input;
-  const counted = firstCountedLayer(thermal.layers);
+  const counted = firstKeptLayer(thermal.layers);
 
   return (
     <article className="flex flex-col gap-10" aria-label={`Assembly ${input.name}, read-only`}>

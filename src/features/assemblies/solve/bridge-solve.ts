@@ -4,11 +4,11 @@ import { materials } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import {
   airLayerResistance,
+  firstKeptLayer,
   framedLayerIsothermalResistance,
   surfaceResistances,
 } from '@shared/calc/thermal/thermal';
 import { isInsulation } from '@shared/sheets/layer-class';
-import { firstCountedLayer } from '../form';
 
 /*
  * From a bridge on the build-up page to a solver template and back: the assembly's layers as template layers,
@@ -42,7 +42,7 @@ export function templateWall(
   heatFlow: 'horizontal' | 'upward' | 'downward' = 'horizontal',
 ): { layers: TemplateLayer[]; rsi: number; rse: number; indices: number[] } {
   const { Rsi, Rse } = surfaceResistances(heatFlow);
-  const start = firstCountedLayer(layers);
+  const start = firstKeptLayer(layers);
   const out: TemplateLayer[] = [];
   const indices: number[] = [];
   layers.forEach((l, i) => {

@@ -2,6 +2,7 @@ import { layerSd } from '@shared/calc/moisture/assembly';
 import type { MoistureResult } from '@shared/calc/moisture/schema';
 import { GENERIC_MATERIAL_NOTE } from '@shared/calc/thermal/materials';
 import type { Layer } from '@shared/calc/thermal/schema';
+import { firstKeptLayer } from '@shared/calc/thermal/thermal';
 import { Link } from 'react-router';
 import { Select } from '../../../components/ui/Select';
 import { useUnitSystem } from '../../../lib/unit-system';
@@ -24,15 +25,6 @@ export const vapourKindId = (i: number) => `vapour-${i}-kind`;
 export const vapourValueId = (i: number) => `vapour-${i}-value`;
 
 const KINDS: DraftKind[] = ['none', 'mu', 'sd', 'permeance', 'usPerm'];
-
-/** Index of the first layer the calculation keeps: those outside a well-ventilated air layer are dropped. */
-export function firstIncludedLayer(layers: readonly Layer[]): number {
-  let first = 0;
-  layers.forEach((l, i) => {
-    if (l.kind === 'air' && l.ventilation === 'well') first = i + 1;
-  });
-  return first;
-}
 
 const LAYER_KIND_WORDS: Record<Layer['kind'], string> = {
   homogeneous: 'layer',
@@ -85,7 +77,7 @@ export function VapourTable({
   readOnly,
 }: VapourTableProps) {
   const system = useUnitSystem();
-  const first = firstIncludedLayer(layers);
+  const first = firstKeptLayer(layers);
 
   return (
     <div className="overflow-x-auto">

@@ -1,5 +1,12 @@
 import { z } from 'zod';
 import { CalcInputError } from '../errors';
+import type { Layer } from '../thermal/schema';
+import {
+  airLayerResistance,
+  firstKeptLayer,
+  framedLayerIsothermalResistance,
+  surfaceResistances,
+} from '../thermal/thermal';
 import { bridgeGrid, DEFAULT_MAX_CELLS } from './bridge';
 import { EDGE_TOLERANCE } from './grid';
 import {
@@ -25,6 +32,9 @@ export const templateLayerSchema = z.object({
   thickness: size('Thickness d'),
   lambda: z.number().min(MIN_LAMBDA).max(5000).describe('λ, W/(m·K)'),
 });
+
+/** One layer of a template wall: a box of λ over its thickness. */
+export type TemplateLayer = z.infer<typeof templateLayerSchema>;
 
 export const wallSchema = z.object({
   layers: z.array(templateLayerSchema).min(1).max(40).describe('Layers, outside → inside'),
@@ -295,4 +305,36 @@ export function fastenerModel(raw: FastenerTemplate): BridgeModelInput {
     max: [xa + side, y1, za + side],
   };
   return fitMesh(cellModel3d(input, sx, sz, [shank], 'wall without the fastener'), raw.mesh);
+}
+
+/**
+ * The layers that count (outside → inside; those outside a well-ventilated air layer dropped, ISO 6946:2017
+ * §6.9.4) as boxes of λ = d / R: an air layer's R from ISO 6946 (slightly ventilated: unventilated R), a framed
+ * layer's isothermal-planes R, a declared R over its thickness (1 mm when none is given). `rse` is Rsi when a
+ * ventilated layer was dropped (§6.9.4: the still-air resistance on both faces).
+ */
+export function templateWall(
+  layers: readonly Layer[],
+  heatFlow: 'horizontal' | 'upward' | 'downward' = 'horizontal',
+): { layers: TemplateLayer[]; rsi: number; rse: number; indices: number[] } {
+  const { Rsi, Rse } = surfaceResistances(heatFlow);
+  const start = firstKeptLayer(layers);
+  const out: TemplateLayer[] = [];
+  const indices: number[] = [];
+  layers.forEach((l, i) => {
+    if (i < start) return;
+    const d = l.thickness ?? 0.001;
+    const r =
+      l.kind === 'homogeneous'
+        ? d / l.conductivity
+        : l.kind === 'resistance'
+          ? l.resistance
+          : l.kind === 'air'
+            ? airLayerResistance(d, heatFlow, l.ventilation, l.emissivityFactor)
+            : framedLayerIsothermalResistance(d, l.sections);
+    if (!(d > 0) || !(r > 0)) return;
+    out.push({ name: l.name || `layer ${i + 1}`, thickness: d, lambda: d / r });
+    indices.push(i);
+  });
+  return { layers: out, rsi: Rsi, rse: start > 0 ? Rsi : Rse, indices };
 }

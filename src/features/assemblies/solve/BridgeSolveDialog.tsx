@@ -1,3 +1,4 @@
+import { type TemplateLayer, templateWall } from '@shared/calc/bridge/templates';
 import { CalcInputError } from '@shared/calc/errors';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import { ENGINE_VERSION } from '@shared/calc/trace';
@@ -22,8 +23,6 @@ import {
   initialInputs,
   type SolveInputs,
   solveModel,
-  type TemplateLayer,
-  templateWall,
 } from './bridge-solve';
 import type { Solved } from './run-bridge';
 import { type BridgeRunner, type RunningSolve, workerRunner } from './runners';

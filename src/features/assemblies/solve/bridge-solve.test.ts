@@ -1,6 +1,7 @@
+import { templateWall } from '@shared/calc/bridge/templates';
 import { describe, expect, it } from 'vitest';
 import { demoInput } from '../../../lib/revision-test-fixtures';
-import { computedSourceText, sectionOf, templateWall } from './bridge-solve';
+import { computedSourceText, sectionOf } from './bridge-solve';
 
 describe('bridge-solve: the assembly as a solver template', () => {
   it('drops the layers outside a well-ventilated cavity and takes Rse = Rsi (ISO 6946:2017 §6.9.4)', () => {

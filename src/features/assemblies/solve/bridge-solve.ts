@@ -1,13 +1,14 @@
 import type { BridgeModelInput, BridgeResult } from '@shared/calc/bridge/schema';
-import { type ClipTemplate, clipModel, type GirtTemplate, girtModel } from '@shared/calc/bridge/templates';
+import {
+  type ClipTemplate,
+  clipModel,
+  type GirtTemplate,
+  girtModel,
+  type TemplateLayer,
+  templateWall,
+} from '@shared/calc/bridge/templates';
 import { materials } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
-import {
-  airLayerResistance,
-  firstKeptLayer,
-  framedLayerIsothermalResistance,
-  surfaceResistances,
-} from '@shared/calc/thermal/thermal';
 import { isInsulation } from '@shared/sheets/layer-class';
 
 /*
@@ -15,8 +16,6 @@ import { isInsulation } from '@shared/sheets/layer-class';
  * the inputs a "Solve" dialog starts from, the section a temperature map draws, and the source text of a
  * computed χ or ψ. SI throughout.
  */
-
-export type TemplateLayer = { name: string; thickness: number; lambda: number };
 
 /** The metals a clip may be made of: the generic library's (ISO 10456:2007 Table 3). */
 export const CLIP_METALS = materials.filter((m) => m.category === 'metal');
@@ -30,38 +29,6 @@ export const GENERIC = {
   /** A polyamide pad, λ 0.25 W/(m·K) (ISO 10456:2007 Table 3, polyamide), 5 mm thick. */
   pad: { thickness: 0.005, lambda: 0.25 },
 } as const;
-
-/**
- * The layers that count (outside → inside; those outside a well-ventilated air layer dropped, ISO 6946:2017
- * §6.9.4) as boxes of λ = d / R: an air layer's R from ISO 6946 (slightly ventilated: unventilated R), a framed
- * layer's isothermal-planes R, a declared R over its thickness (1 mm when none is given). `rse` is Rsi when a
- * ventilated layer was dropped (§6.9.4: the still-air resistance on both faces).
- */
-export function templateWall(
-  layers: readonly Layer[],
-  heatFlow: 'horizontal' | 'upward' | 'downward' = 'horizontal',
-): { layers: TemplateLayer[]; rsi: number; rse: number; indices: number[] } {
-  const { Rsi, Rse } = surfaceResistances(heatFlow);
-  const start = firstKeptLayer(layers);
-  const out: TemplateLayer[] = [];
-  const indices: number[] = [];
-  layers.forEach((l, i) => {
-    if (i < start) return;
-    const d = l.thickness ?? 0.001;
-    const r =
-      l.kind === 'homogeneous'
-        ? d / l.conductivity
-        : l.kind === 'resistance'
-          ? l.resistance
-          : l.kind === 'air'
-            ? airLayerResistance(d, heatFlow, l.ventilation, l.emissivityFactor)
-            : framedLayerIsothermalResistance(d, l.sections);
-    if (!(d > 0) || !(r > 0)) return;
-    out.push({ name: l.name || `layer ${i + 1}`, thickness: d, lambda: d / r });
-    indices.push(i);
-  });
-  return { layers: out, rsi: Rsi, rse: start > 0 ? Rsi : Rse, indices };
-}
 
 /** Spacing of a linear bridge, m: its own, or 1 / (length per area). */
 const linearSpacing = (b: Extract<Bridge, { kind: 'linear' }>) =>

@@ -1,0 +1,216 @@
+import { CalcInputError } from '@shared/calc/errors';
+import type { MovementClass } from '@shared/calc/joints/schema';
+import type { AssemblyInput } from '@shared/schemas/assembly';
+import type { SweepParameter, SweepParameterKind } from '@shared/sweep/schema';
+import { planSweep, type SweepPlan } from '@shared/sweep/sweep';
+import type { UnitSystem } from '@shared/units';
+import type { InputMeasure } from '../../lib/input-measure';
+import { measureInput } from '../assemblies/units';
+
+/*
+ * The sweep form: what a person chose for each parameter (range boxes hold SI from their number boxes, a list is
+ * text in the person's units), turned into the engine's parameters, and every refusal — the form's own (an empty
+ * box, an unreadable list entry) and the engine's (planSweep: steps, bounds, the cap, a parameter the assembly
+ * does not have) — named by its field before any work starts.
+ */
+
+/** Most variants one sweep runs in the browser. */
+export const SWEEP_BROWSER_CAP = 10_000;
+
+export interface ParameterDraft {
+  kind: SweepParameterKind;
+  /** The layer, bridge or joint it varies (its index); null for "every joint" or a parameter of the whole wall. */
+  target: number | null;
+  mode: 'range' | 'list';
+  /** Range, SI (undefined while its box is empty or unreadable). */
+  start?: number;
+  stop?: number;
+  step?: number;
+  /** The list as typed, in the person's units, values separated by spaces or semicolons. */
+  list: string;
+  /** Sealant classes chosen. */
+  classes: MovementClass[];
+}
+
+export interface FieldProblem {
+  /** The engine's path: `parameters.0.range.step`, `parameters.1.list.2`, `parameters`. */
+  field: string;
+  reason: string;
+}
+
+export const KIND_LABELS: Record<SweepParameterKind, string> = {
+  insulationThickness: 'Insulation thickness',
+  girtSpacing: 'Girt spacing',
+  clipSpacing: 'Clip spacing along the girt',
+  clipChi: 'Clip χ (clip type)',
+  studSpacing: 'Stud spacing',
+  panelModule: 'Panel module',
+  sealantClass: 'Sealant class',
+};
+
+/** How each numeric parameter is typed and shown (the assembly pages' measures). */
+export const measureOf = (kind: SweepParameterKind): InputMeasure =>
+  measureInput(kind === 'insulationThickness' ? 'thickness' : kind === 'clipChi' ? 'chi' : 'spacing');
+
+export interface TargetOption {
+  index: number | null;
+  label: string;
+}
+
+/** What a parameter of this kind can vary on this assembly (an empty list: the assembly lacks it). */
+export function targetsFor(a: AssemblyInput, kind: SweepParameterKind): TargetOption[] {
+  const layers = a.thermal.layers.map((l, index) => ({ l, index }));
+  switch (kind) {
+    case 'insulationThickness':
+      return layers
+        .filter(({ l }) => l.kind === 'homogeneous' || l.kind === 'framed')
+        .map(({ l, index }) => ({ index, label: `Layer ${index + 1}: ${l.name}` }));
+    case 'studSpacing':
+      return layers
+        .filter(({ l }) => l.kind === 'framed' && l.metal && l.spacing !== undefined)
+        .map(({ l, index }) => ({ index, label: `Layer ${index + 1}: ${l.name}` }));
+    case 'clipChi':
+      return a.thermal.bridges.flatMap((b, index) =>
+        b.kind === 'point' ? [{ index, label: `Bridge ${index + 1}: ${b.name}` }] : [],
+      );
+    case 'sealantClass': {
+      const joints = a.joints ?? [];
+      return joints.length === 0
+        ? []
+        : [
+            { index: null, label: 'Every joint' },
+            ...joints.map((j, index) => ({ index, label: `Joint ${index + 1}: ${j.name}` })),
+          ];
+    }
+    case 'girtSpacing':
+    case 'clipSpacing':
+      return a.attachment[kind] === undefined ? [] : [{ index: null, label: 'Design spacing' }];
+    case 'panelModule':
+      return a.windPanel ? [{ index: null, label: 'Wind panel' }] : [];
+  }
+}
+
+/** The value the assembly has now for a parameter, SI (the middle of a first range). */
+export function currentValue(a: AssemblyInput, kind: SweepParameterKind, target: number | null) {
+  const layer = target === null ? undefined : a.thermal.layers[target];
+  switch (kind) {
+    case 'insulationThickness':
+      return layer && 'thickness' in layer ? layer.thickness : undefined;
+    case 'studSpacing':
+      return layer?.kind === 'framed' ? layer.spacing : undefined;
+    case 'clipChi': {
+      const b = target === null ? undefined : a.thermal.bridges[target];
+      return b?.kind === 'point' ? b.chi : undefined;
+    }
+    case 'girtSpacing':
+    case 'clipSpacing':
+      return a.attachment[kind];
+    case 'panelModule':
+      return a.windPanel?.panelModuleWidth;
+    case 'sealantClass':
+      return undefined;
+  }
+}
+
+/** Rounds a starting value to 3 significant figures (a starting range reads 50, 100, 150 mm, not 49.999…). */
+const round3 = (v: number) => Number(v.toPrecision(3));
+
+/** A first draft of a parameter: its first target, a range from half to one and a half times today's value. */
+export function newDraft(a: AssemblyInput, kind: SweepParameterKind): ParameterDraft {
+  const target = targetsFor(a, kind)[0]?.index ?? null;
+  const now = currentValue(a, kind, target);
+  const base: ParameterDraft = { kind, target, mode: 'range', list: '', classes: [] };
+  if (kind === 'sealantClass') return { ...base, mode: 'list', classes: ['25', '35', '50'] };
+  if (now === undefined || now <= 0) return base;
+  return { ...base, start: round3(now / 2), stop: round3(now * 1.5), step: round3(now / 4) };
+}
+
+/** The list's entries: separated by spaces or semicolons (a comma may be a decimal comma, which is refused). */
+const listEntries = (text: string) => text.split(/[\s;]+/).filter((t) => t !== '');
+
+/** One draft as the engine's parameter, or the first problem of its own boxes. */
+export function toParameter(
+  d: ParameterDraft,
+  i: number,
+  system: UnitSystem,
+): { parameter: SweepParameter } | { problem: FieldProblem } {
+  const at = `parameters.${i}`;
+  const problem = (field: string, reason: string) => ({ problem: { field: `${at}${field}`, reason } });
+  if (d.kind === 'sealantClass') {
+    if (d.classes.length === 0) return problem('.list', 'choose one class or more');
+    return {
+      parameter: { kind: d.kind, list: d.classes, ...(d.target === null ? {} : { joint: d.target }) },
+    };
+  }
+  const where =
+    d.kind === 'insulationThickness' || d.kind === 'studSpacing'
+      ? { layer: d.target ?? -1 }
+      : d.kind === 'clipChi'
+        ? { bridge: d.target ?? -1 }
+        : {};
+  if ('layer' in where && where.layer < 0) return problem('.layer', 'choose a layer');
+  if ('bridge' in where && where.bridge < 0) return problem('.bridge', 'choose a bridge');
+  if (d.mode === 'range') {
+    for (const key of ['start', 'stop', 'step'] as const)
+      if (d[key] === undefined || !Number.isFinite(d[key])) return problem(`.range.${key}`, 'enter a number');
+    return {
+      parameter: {
+        kind: d.kind,
+        ...where,
+        range: { start: d.start as number, stop: d.stop as number, step: d.step as number },
+      },
+    };
+  }
+  const measure = measureOf(d.kind);
+  const entries = listEntries(d.list);
+  if (entries.length === 0) return problem('.list', 'the list is empty: name one value or more');
+  const list: number[] = [];
+  for (const [j, text] of entries.entries()) {
+    const read = measure.parse(text, system);
+    if (read.kind !== 'ok')
+      return problem(
+        `.list.${j}`,
+        `“${text}” is not a number in ${measure.unit(system)}; separate values by spaces or semicolons`,
+      );
+    list.push(read.si);
+  }
+  return { parameter: { kind: d.kind, ...where, list } };
+}
+
+export type Validated =
+  | { ok: true; parameters: SweepParameter[]; plan: SweepPlan }
+  | { ok: false; problems: FieldProblem[] };
+
+/**
+ * Every draft read and the sweep planned against the assembly: the form's own problems (all of them), else the
+ * engine's first refusal, named by its field — before a worker starts.
+ */
+export function validateSweep(
+  a: AssemblyInput,
+  drafts: readonly ParameterDraft[],
+  system: UnitSystem,
+  cap = SWEEP_BROWSER_CAP,
+): Validated {
+  if (drafts.length === 0)
+    return {
+      ok: false,
+      problems: [{ field: 'parameters', reason: 'choose at least one parameter to vary' }],
+    };
+  const read = drafts.map((d, i) => toParameter(d, i, system));
+  const problems = read.flatMap((r) => ('problem' in r ? [r.problem] : []));
+  if (problems.length > 0) return { ok: false, problems };
+  const parameters = read.flatMap((r) => ('parameter' in r ? [r.parameter] : []));
+  try {
+    return { ok: true, parameters, plan: planSweep(a, parameters, cap) };
+  } catch (e) {
+    if (e instanceof CalcInputError) return { ok: false, problems: [{ field: e.field, reason: e.reason }] };
+    throw e;
+  }
+}
+
+/** The draft index and the box a problem's field names: `parameters.1.range.step` → 1, 'step'. */
+export function problemBox(field: string): { parameter: number | null; box: string } {
+  const m = /^parameters\.(\d+)(?:\.(range\.(start|stop|step)|list|layer|bridge|joint))?/.exec(field);
+  if (!m) return { parameter: null, box: '' };
+  return { parameter: Number(m[1]), box: m[3] ?? (m[2] === undefined ? '' : m[2]) };
+}

@@ -304,20 +304,15 @@ function LinearFields({
   );
 }
 
-/** "Solve χ/ψ…": the bridge solver on this assembly's layers; "Use this value" stores χ or ψ with its source. */
-function SolveButton({
-  index: j,
-  bridge,
-  array,
-}: {
-  index: number;
-  bridge: PointBridge | LinearBridge;
-  array: BridgesArray;
-}) {
+/**
+ * "Solve χ/ψ…": the bridge solver on this assembly's layers; "Use this value" stores χ or ψ with its source. A
+ * fastener row becomes a point bridge of the computed χ at the same count (the Annex F correction is replaced).
+ */
+function SolveButton({ index: j, bridge, array }: { index: number; bridge: Bridge; array: BridgesArray }) {
   const { control } = useFormContext<AssemblyFormValues>();
   const layers = (useWatch({ control, name: 'thermal.layers' }) ?? []) as Layer[];
   const [open, setOpen] = useState(false);
-  const symbol = bridge.kind === 'point' ? 'χ' : 'ψ';
+  const symbol = bridge.kind === 'linear' ? 'ψ' : 'χ';
   return (
     <>
       <Button
@@ -335,12 +330,7 @@ function SolveButton({
             layers={layers}
             onClose={() => setOpen(false)}
             onUse={(value, text) => {
-              array.update(
-                j,
-                bridge.kind === 'point'
-                  ? { ...bridge, chi: value, source: { text } }
-                  : { ...bridge, psi: value, source: { text } },
-              );
+              array.update(j, withSolvedValue(bridge, value, text));
               setOpen(false);
             }}
           />
@@ -348,6 +338,20 @@ function SolveButton({
       ) : null}
     </>
   );
+}
+
+/** The bridge with a computed χ or ψ and its source (a fastener as a point bridge at its count). */
+export function withSolvedValue(bridge: Bridge, value: number, text: string): Bridge {
+  const source = { text };
+  if (bridge.kind === 'point') return { ...bridge, chi: value as PointBridge['chi'], source };
+  if (bridge.kind === 'linear') return { ...bridge, psi: value as LinearBridge['psi'], source };
+  return {
+    kind: 'point',
+    name: bridge.name,
+    chi: value as PointBridge['chi'],
+    countPerArea: bridge.countPerArea,
+    source,
+  };
 }
 
 /** A library value's source in words, as stored with the bridge and printed on the sheet. */
@@ -538,6 +542,7 @@ function FastenerFields({
         />
         Both ends touch metal sheets
       </label>
+      <SolveButton index={j} bridge={bridge} array={array} />
       <BlockError path={`${base}.bothEndsMetal`} className="basis-full" />
     </div>
   );

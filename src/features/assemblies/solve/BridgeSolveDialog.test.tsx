@@ -21,11 +21,10 @@ beforeAll(() => {
 });
 
 const layers = demoInput.thermal.layers;
-const bridgeOf = (kind: 'point' | 'linear') =>
-  demoInput.thermal.bridges.find((b) => b.kind === kind) as Extract<Bridge, { kind: 'point' | 'linear' }>;
+const bridgeOf = (kind: Bridge['kind']) => demoInput.thermal.bridges.find((b) => b.kind === kind)!;
 
 function renderDialog(
-  kind: 'point' | 'linear',
+  kind: Bridge['kind'],
   runner: BridgeRunner,
   system: 'SI' | 'IP' = 'SI',
   onUse = vi.fn(),
@@ -79,6 +78,29 @@ describe('Solve dialog (bridge solver on the assembly layers)', () => {
     expect(screen.getByTestId('crossed-depth').textContent).toMatch(/in$/);
     expect(screen.getByLabelText(/Spacing along the girt/)).toBeTruthy();
   });
+
+  it('fastener: prefilled from the row (diameter, spacing from the count, the layer crossed)', () => {
+    renderDialog('fastener', directRunner);
+    expect((screen.getByLabelText(/Shank diameter/) as HTMLInputElement).value).toBe('5');
+    expect((screen.getByLabelText(/Spacing along x/) as HTMLInputElement).value).toBe('500');
+    expect(screen.getByTestId('crossed-depth').textContent).toBe('100\u202fmm');
+    expect(screen.getByText(/the round shank is a square of the same area/)).toBeTruthy();
+  });
+
+  it('edge: a linear row solves a slab edge, drawn with its map, ψ handed back', async () => {
+    const onUse = renderDialog('linear', directRunner);
+    fireEvent.change(screen.getByLabelText('Detail'), { target: { value: 'slab' } });
+    expect(screen.getByLabelText(/Slab thickness/)).toBeTruthy();
+    expect(screen.queryByTestId('crossed-depth')).toBeNull();
+    fireEvent.click(screen.getByRole('button', { name: 'Solve' }));
+    const use = await screen.findByRole('button', { name: 'Use this value' }, { timeout: 20_000 });
+    expect(screen.getByRole('img', { name: /Section through the slab edge/ })).toBeTruthy();
+    fireEvent.click(use);
+    const [psi] = onUse.mock.calls[0]!;
+    // A concrete slab through the backup wall bridges the insulation's inside face: ψ > 0, finite.
+    expect(psi).toBeGreaterThan(0);
+    expect(Number.isFinite(psi)).toBe(true);
+  }, 30_000);
 
   it('Cancel stops the solve and returns to the inputs', () => {
     const cancel = vi.fn();

@@ -14,21 +14,27 @@ import { formatQuantity } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { formatMeasure, type Measure, measureInput } from '../units';
 import {
+  annexFChi,
   CLIP_METALS,
   type ClipInputs,
   computedSourceText,
   crossedDepth,
+  type FastenerInputs,
   GENERIC,
   type GirtInputs,
   initialInputs,
+  LINEAR_DETAILS,
+  type LinearDetail,
+  linearInputs,
+  type OpeningInputs,
+  type SlabInputs,
   type SolveInputs,
   solveModel,
+  solvesFor,
 } from './bridge-solve';
 import type { Solved } from './run-bridge';
 import { type BridgeRunner, type RunningSolve, workerRunner } from './runners';
 import { TemperatureMap } from './TemperatureMap';
-
-type SolvableBridge = Extract<Bridge, { kind: 'point' | 'linear' }>;
 
 type Phase =
   | { at: 'form'; problem?: string }
@@ -41,9 +47,49 @@ type Phase =
       cold: number;
     };
 
+/** What each detail is, and what the map shows of it. */
+const DETAIL_WORDS: Record<SolveInputs['kind'], { intro: string; map: string; orientation: string }> = {
+  girt: {
+    intro:
+      'A continuous girt through the layers below, solved in two dimensions per metre of its length (ISO 10211).',
+    map: 'Section through the girt',
+    orientation: 'Outside at the top, inside at the bottom',
+  },
+  clip: {
+    intro:
+      'One clip in its share of wall, solved in three dimensions (ISO 10211); the map shows its mid-plane.',
+    map: 'Mid-plane of the clip',
+    orientation: 'Outside at the top, inside at the bottom',
+  },
+  fastener: {
+    intro:
+      'One fastener in its share of wall, solved in three dimensions (ISO 10211); the round shank is a square of the same area, and the map shows its mid-plane.',
+    map: 'Mid-plane of the fastener',
+    orientation: 'Outside at the top, inside at the bottom',
+  },
+  slab: {
+    intro:
+      'A floor slab meeting the wall, solved in two dimensions per metre of the edge, with external dimensions (ISO 14683); the wall runs 1 m above and below.',
+    map: 'Section through the slab edge',
+    orientation: 'Outside at the left, inside at the right',
+  },
+  corner: {
+    intro:
+      'An outside corner of the wall, solved in two dimensions per metre of its height, with external dimensions (ISO 14683); each wall runs 1 m from the corner.',
+    map: 'Plan of the corner',
+    orientation: 'Outside at the top and left',
+  },
+  opening: {
+    intro:
+      'A window or door frame at the edge of its opening, solved in two dimensions per metre of perimeter (ISO 10211); the wall runs 1 m from the reveal and the frame is cut at the glazing.',
+    map: 'Section through the reveal',
+    orientation: 'Outside at the top, inside at the bottom',
+  },
+};
+
 /**
- * "Solve" for one clip (χ, 3-D) or girt (ψ, 2-D): the template's inputs from the assembly's layers, the solve
- * off the page's thread (cancellable), the result with a temperature map, and "Use this value".
+ * "Solve" for one clip or fastener (χ, 3-D), girt or edge (ψ, 2-D): the template's inputs from the assembly's
+ * layers, the solve off the page's thread (cancellable), the result with a temperature map, and "Use this value".
  */
 export function BridgeSolveDialog({
   bridge,
@@ -52,7 +98,7 @@ export function BridgeSolveDialog({
   onClose,
   runner = workerRunner,
 }: {
-  bridge: SolvableBridge;
+  bridge: Bridge;
   layers: Layer[];
   onUse: (value: number, sourceText: string) => void;
   onClose: () => void;
@@ -67,7 +113,13 @@ export function BridgeSolveDialog({
     setInputs(next);
     setPhase((now) => (now.at === 'done' ? { at: 'form' } : now));
   };
-  const symbol = inputs.kind === 'girt' ? 'ψ' : 'χ';
+  const measure = solvesFor(inputs);
+  const symbol = measure === 'psi' ? 'ψ' : 'χ';
+  const words = DETAIL_WORDS[inputs.kind];
+  const annexF = useMemo(
+    () => (bridge.kind === 'fastener' ? annexFChi(bridge, layers) : null),
+    [bridge, layers],
+  );
   const running = phase.at === 'solving' ? phase.run : null;
   useEffect(() => () => running?.cancel(), [running]);
 
@@ -108,7 +160,7 @@ export function BridgeSolveDialog({
     <Dialog
       open
       wide
-      title={`Solve ${symbol} — ${bridge.name || (inputs.kind === 'girt' ? 'girt' : 'clip')}`}
+      title={`Solve ${symbol} — ${bridge.name || words.map}`}
       onClose={() => {
         running?.cancel();
         onClose();
@@ -116,19 +168,32 @@ export function BridgeSolveDialog({
     >
       <div className="flex max-h-[75vh] flex-col gap-4 overflow-y-auto">
         <p className="text-sm text-ink-muted">
-          {inputs.kind === 'girt'
-            ? 'A continuous girt through the layers below, solved in two dimensions per metre of its length (ISO 10211).'
-            : 'One clip in its share of wall, solved in three dimensions (ISO 10211); the map shows its mid-plane.'}{' '}
-          The starting sizes are generic design values: replace them with the product's.
+          {words.intro} The starting sizes are generic design values: replace them with the product's.
         </p>
         <fieldset disabled={phase.at === 'solving'} className="flex flex-col gap-3">
           <legend className="sr-only">Inputs</legend>
-          <CrossedLayers inputs={inputs} wall={wall} indices={indices} onChange={edit} />
-          {inputs.kind === 'girt' ? (
-            <GirtFields inputs={inputs} onChange={edit} />
-          ) : (
-            <ClipFields inputs={inputs} onChange={edit} />
-          )}
+          {bridge.kind === 'linear' ? (
+            <Field label="Detail" className="w-64">
+              {(c) => (
+                <Select
+                  {...c}
+                  value={inputs.kind}
+                  className="py-1.5 text-sm"
+                  onChange={(e) => edit(linearInputs(e.target.value as LinearDetail, bridge, layers))}
+                >
+                  {LINEAR_DETAILS.map((d) => (
+                    <option key={d.kind} value={d.kind}>
+                      {d.label}
+                    </option>
+                  ))}
+                </Select>
+              )}
+            </Field>
+          ) : null}
+          {'from' in inputs && inputs.kind !== 'slab' ? (
+            <CrossedLayers inputs={inputs} wall={wall} indices={indices} onChange={edit} />
+          ) : null}
+          <DetailFields inputs={inputs} wall={wall} indices={indices} onChange={edit} />
         </fieldset>
         {phase.at === 'form' && phase.problem ? (
           <Notice tone="caution" title="Cannot solve this" live>
@@ -152,8 +217,16 @@ export function BridgeSolveDialog({
             <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
               <dt className="font-semibold">{symbol}</dt>
               <dd className="num" data-testid="solved-value">
-                {formatMeasure(value, inputs.kind === 'girt' ? 'psi' : 'chi', system)}
+                {formatMeasure(value, measure, system)}
               </dd>
+              {annexF !== null ? (
+                <>
+                  <dt>ISO 6946 Annex F</dt>
+                  <dd className="num">
+                    {formatMeasure(annexF, 'chi', system)} per fastener, as the build-up page applies it now
+                  </dd>
+                </>
+              ) : null}
               <dt>Mesh</dt>
               <dd className="num">{phase.solved.result.cells.toLocaleString('en-GB')} cells</dd>
               <dt>Iterations</dt>
@@ -179,7 +252,9 @@ export function BridgeSolveDialog({
                 metal={phase.metal}
                 coldest={phase.solved.result.minInsideSurface}
                 system={system}
-                title={inputs.kind === 'girt' ? 'Section through the girt' : 'Mid-plane of the clip'}
+                title={words.map}
+                orientation={words.orientation}
+                flipY={inputs.kind === 'slab'}
               />
             ) : null}
             <Notice tone="warning" title="An aid, not a tested value">
@@ -232,25 +307,22 @@ function Progress({ started, onCancel }: { started: number; onCancel: () => void
 }
 
 /** Which layers the metal crosses; its depth (girt) or length (clip) follows from them. */
+type Crossing = GirtInputs | ClipInputs | FastenerInputs;
+
 function CrossedLayers({
   inputs,
   wall,
   indices,
   onChange,
 }: {
-  inputs: SolveInputs;
+  inputs: Crossing;
   wall: TemplateLayer[];
   /** The assembly's number of each (the build-up page's numbering). */
   indices: number[];
   onChange: (next: SolveInputs) => void;
 }) {
   const system = useUnitSystem();
-  const options = wall.map((l, k) => (
-    // biome-ignore lint/suspicious/noArrayIndexKey: the index is the value
-    <option key={k} value={k}>
-      {(indices[k] ?? k) + 1} {l.name}
-    </option>
-  ));
+  const options = layerOptions(wall, indices);
   return (
     <div className="flex flex-wrap items-end gap-x-4 gap-y-2">
       <Field label="Crosses from layer" className="min-w-48 flex-1">
@@ -284,11 +356,161 @@ function CrossedLayers({
         )}
       </Field>
       <p className="pb-2 text-sm">
-        {inputs.kind === 'girt' ? 'Girt depth' : 'Clip length'}{' '}
+        {inputs.kind === 'girt' ? 'Girt depth' : inputs.kind === 'clip' ? 'Clip length' : 'Fastener length'}{' '}
         <span className="num font-semibold" data-testid="crossed-depth">
           {formatMeasure(crossedDepth(wall, inputs.from, inputs.to), 'thickness', system)}
         </span>
       </p>
+    </div>
+  );
+}
+
+/** The template wall's layers as options, numbered as on the build-up page. */
+const layerOptions = (wall: TemplateLayer[], indices: number[]) =>
+  wall.map((l, k) => (
+    // biome-ignore lint/suspicious/noArrayIndexKey: the index is the value
+    <option key={k} value={k}>
+      {(indices[k] ?? k) + 1} {l.name}
+    </option>
+  ));
+
+/** The boxes of the detail being solved. */
+function DetailFields({
+  inputs,
+  wall,
+  indices,
+  onChange,
+}: {
+  inputs: SolveInputs;
+  wall: TemplateLayer[];
+  indices: number[];
+  onChange: (next: SolveInputs) => void;
+}) {
+  if (inputs.kind === 'girt') return <GirtFields inputs={inputs} onChange={onChange} />;
+  if (inputs.kind === 'clip') return <ClipFields inputs={inputs} onChange={onChange} />;
+  if (inputs.kind === 'fastener') return <FastenerFields inputs={inputs} onChange={onChange} />;
+  if (inputs.kind === 'slab')
+    return <SlabFields inputs={inputs} wall={wall} indices={indices} onChange={onChange} />;
+  if (inputs.kind === 'opening') return <OpeningFields inputs={inputs} onChange={onChange} />;
+  return <p className="text-sm">Both walls are this assembly's layers; the corner needs no other input.</p>;
+}
+
+/** A λ box of the dialog. */
+function Lambda({
+  label,
+  value,
+  onChange,
+}: {
+  label: string;
+  value: number;
+  onChange: (si: number) => void;
+}) {
+  return (
+    <QuantityInput
+      label={label}
+      measure={measureInput('conductivity')}
+      value={value}
+      onChange={(si) => onChange(si ?? Number.NaN)}
+      size="sheet"
+      className="w-48"
+    />
+  );
+}
+
+function FastenerFields({
+  inputs,
+  onChange,
+}: {
+  inputs: FastenerInputs;
+  onChange: (next: FastenerInputs) => void;
+}) {
+  const set = (patch: Partial<FastenerInputs>) => onChange({ ...inputs, ...patch });
+  return (
+    <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+      <Size
+        label="Shank diameter"
+        measure="diameter"
+        value={inputs.diameter}
+        onChange={(diameter) => set({ diameter })}
+      />
+      <Lambda
+        label="λ of the fastener"
+        value={inputs.metalLambda}
+        onChange={(metalLambda) => set({ metalLambda })}
+      />
+      <Size label="Head recess" value={inputs.recess} onChange={(recess) => set({ recess })} />
+      <Size
+        label="Spacing along x"
+        measure="spacing"
+        value={inputs.spacingX}
+        onChange={(spacingX) => set({ spacingX })}
+      />
+      <Size
+        label="Spacing along z"
+        measure="spacing"
+        value={inputs.spacingZ}
+        onChange={(spacingZ) => set({ spacingZ })}
+      />
+    </div>
+  );
+}
+
+function SlabFields({
+  inputs,
+  wall,
+  indices,
+  onChange,
+}: {
+  inputs: SlabInputs;
+  wall: TemplateLayer[];
+  indices: number[];
+  onChange: (next: SlabInputs) => void;
+}) {
+  const set = (patch: Partial<SlabInputs>) => onChange({ ...inputs, ...patch });
+  return (
+    <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+      <Field label="Slab edge at the outside face of layer" className="min-w-56 flex-1">
+        {(c) => (
+          <Select
+            {...c}
+            value={inputs.from}
+            className="py-1.5 text-sm"
+            onChange={(e) => set({ from: Number(e.target.value) })}
+          >
+            {layerOptions(wall, indices)}
+          </Select>
+        )}
+      </Field>
+      <Size
+        label="Slab thickness"
+        measure="spacing"
+        value={inputs.thickness}
+        onChange={(thickness) => set({ thickness })}
+      />
+      <Lambda label="λ of the slab" value={inputs.lambda} onChange={(lambda) => set({ lambda })} />
+    </div>
+  );
+}
+
+function OpeningFields({
+  inputs,
+  onChange,
+}: {
+  inputs: OpeningInputs;
+  onChange: (next: OpeningInputs) => void;
+}) {
+  const set = (patch: Partial<OpeningInputs>) => onChange({ ...inputs, ...patch });
+  return (
+    <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+      <Size label="Frame width" value={inputs.width} onChange={(width) => set({ width })} />
+      <Size label="Frame depth" value={inputs.depth} onChange={(depth) => set({ depth })} />
+      <Size
+        label="Frame set back from the outside face"
+        value={inputs.offset}
+        onChange={(offset) => set({ offset })}
+        className="w-56"
+      />
+      <Lambda label="λ of the frame" value={inputs.lambda} onChange={(lambda) => set({ lambda })} />
     </div>
   );
 }
@@ -417,13 +639,10 @@ function ClipFields({ inputs, onChange }: { inputs: ClipInputs; onChange: (next:
               value={inputs.pad.thickness}
               onChange={(thickness) => set({ pad: { ...inputs.pad!, thickness } })}
             />
-            <QuantityInput
+            <Lambda
               label="Pad λ"
-              measure={measureInput('conductivity')}
               value={inputs.pad.lambda}
-              onChange={(lambda) => set({ pad: { ...inputs.pad!, lambda: lambda ?? Number.NaN } })}
-              size="sheet"
-              className="w-48"
+              onChange={(lambda) => set({ pad: { ...inputs.pad!, lambda } })}
             />
           </>
         ) : null}

@@ -45,6 +45,8 @@ export function TemperatureMap({
   coldest,
   system,
   title,
+  orientation = 'Outside at the top, inside at the bottom',
+  flipY = false,
 }: {
   section: Section;
   warm: number;
@@ -53,6 +55,10 @@ export function TemperatureMap({
   coldest: { at: number[]; temperature: number } | null;
   system: UnitSystem;
   title: string;
+  /** Where outside and inside are, in words. */
+  orientation?: string;
+  /** Draw y upwards (a model whose y axis points up, e.g. a slab edge). */
+  flipY?: boolean;
 }) {
   const { x, y, values } = section;
   const nx = x.length - 1;
@@ -92,56 +98,58 @@ export function TemperatureMap({
         className="h-auto max-h-72 w-full border border-rule bg-paper-raised"
         data-testid="temperature-map"
       >
-        {rects.map((r) => (
-          <rect
-            key={`${r.x}-${r.y}`}
-            x={r.x}
-            y={r.y}
-            width={r.w}
-            height={r.h}
-            fill={PALETTE[r.band]}
-            shapeRendering="crispEdges"
-          />
-        ))}
-        {metal.map((m) => (
-          <rect
-            key={`${m.min.join()}-${m.max.join()}`}
-            x={m.min[0]}
-            y={m.min[1]}
-            width={m.max[0]! - m.min[0]!}
-            height={m.max[1]! - m.min[1]!}
-            fill="none"
-            stroke="#111"
-            strokeWidth={1.5}
-            vectorEffect="non-scaling-stroke"
-          />
-        ))}
-        {cx !== undefined && cy !== undefined ? (
-          <g data-testid="coldest-point">
-            <circle
-              cx={cx}
-              cy={cy}
-              r={h * 0.05}
-              fill="none"
-              stroke="#fff"
-              strokeWidth={4}
-              vectorEffect="non-scaling-stroke"
+        <g transform={flipY ? `translate(0 ${y0 + y1}) scale(1 -1)` : undefined}>
+          {rects.map((r) => (
+            <rect
+              key={`${r.x}-${r.y}`}
+              x={r.x}
+              y={r.y}
+              width={r.w}
+              height={r.h}
+              fill={PALETTE[r.band]}
+              shapeRendering="crispEdges"
             />
-            <circle
-              cx={cx}
-              cy={cy}
-              r={h * 0.05}
+          ))}
+          {metal.map((m) => (
+            <rect
+              key={`${m.min.join()}-${m.max.join()}`}
+              x={m.min[0]}
+              y={m.min[1]}
+              width={m.max[0]! - m.min[0]!}
+              height={m.max[1]! - m.min[1]!}
               fill="none"
               stroke="#111"
-              strokeWidth={2}
+              strokeWidth={1.5}
               vectorEffect="non-scaling-stroke"
             />
-          </g>
-        ) : null}
+          ))}
+          {cx !== undefined && cy !== undefined ? (
+            <g data-testid="coldest-point">
+              <circle
+                cx={cx}
+                cy={cy}
+                r={h * 0.05}
+                fill="none"
+                stroke="#fff"
+                strokeWidth={4}
+                vectorEffect="non-scaling-stroke"
+              />
+              <circle
+                cx={cx}
+                cy={cy}
+                r={h * 0.05}
+                fill="none"
+                stroke="#111"
+                strokeWidth={2}
+                vectorEffect="non-scaling-stroke"
+              />
+            </g>
+          ) : null}
+        </g>
       </svg>
       <figcaption className="flex flex-col gap-1 text-xs text-ink-muted">
         <span>
-          Outside at the top, inside at the bottom; metal outlined; ◯ the coldest inside point
+          {orientation}; conductive parts outlined; ◯ the coldest inside point
           {coldest ? ` (${formatQuantity(coldest.temperature, 'temperature', system)})` : ''}.
         </span>
         <ol className="flex flex-wrap gap-x-2 gap-y-1" aria-label="Temperature bands">

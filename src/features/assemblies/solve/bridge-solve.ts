@@ -1,14 +1,18 @@
+import { type EdgeTemplate, edgeModel } from '@shared/calc/bridge/edges';
 import type { BridgeModelInput, BridgeResult } from '@shared/calc/bridge/schema';
 import {
   type ClipTemplate,
   clipModel,
+  type FastenerTemplate,
+  fastenerModel,
   type GirtTemplate,
   girtModel,
   type TemplateLayer,
   templateWall,
 } from '@shared/calc/bridge/templates';
-import { materials } from '@shared/calc/thermal/materials';
+import { findMaterial, materials } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
+import { calculateThermal } from '@shared/calc/thermal/thermal';
 import { isInsulation } from '@shared/sheets/layer-class';
 
 /*
@@ -28,6 +32,10 @@ export const GENERIC = {
   clip: { thickness: 0.003, width: 0.075 },
   /** A polyamide pad, λ 0.25 W/(m·K) (ISO 10456:2007 Table 3, polyamide), 5 mm thick. */
   pad: { thickness: 0.005, lambda: 0.25 },
+  /** A 200 mm reinforced concrete slab (ISO 10456:2007 Table 3, λ 2.3 W/(m·K)). */
+  slab: { thickness: 0.2, lambda: findMaterial('concrete-reinforced')?.conductivity ?? 2.3 },
+  /** A 60 mm wide, 70 mm deep softwood frame (ISO 10456:2007 Table 3, λ 0.13 W/(m·K)), 50 mm in. */
+  frame: { width: 0.06, depth: 0.07, offset: 0.05, lambda: findMaterial('softwood')?.conductivity ?? 0.13 },
 } as const;
 
 /** Spacing of a linear bridge, m: its own, or 1 / (length per area). */
@@ -70,36 +78,113 @@ export interface ClipInputs {
   to: number;
 }
 
-export type SolveInputs = GirtInputs | ClipInputs;
+export interface FastenerInputs {
+  kind: 'fastener';
+  diameter: number;
+  metalLambda: number;
+  /** Depth of the head below the outside face of the crossed layers, m. */
+  recess: number;
+  spacingX: number;
+  spacingZ: number;
+  from: number;
+  to: number;
+}
+
+/** A floor slab meeting the wall: it replaces the layers from `from` inwards. */
+export interface SlabInputs {
+  kind: 'slab';
+  from: number;
+  thickness: number;
+  lambda: number;
+}
+
+export interface CornerInputs {
+  kind: 'corner';
+}
+
+/** A window or door frame at the opening's edge. */
+export interface OpeningInputs {
+  kind: 'opening';
+  width: number;
+  depth: number;
+  offset: number;
+  lambda: number;
+}
+
+export type EdgeInputs = SlabInputs | CornerInputs | OpeningInputs;
+export type SolveInputs = GirtInputs | ClipInputs | FastenerInputs | EdgeInputs;
+/** The details a linear bridge may be: a girt or rail, or one of the wall's edges. */
+export type LinearDetail = 'girt' | EdgeInputs['kind'];
+export const LINEAR_DETAILS: { kind: LinearDetail; label: string }[] = [
+  { kind: 'girt', label: 'Girt or rail' },
+  { kind: 'slab', label: 'Floor slab edge' },
+  { kind: 'corner', label: 'Outside corner' },
+  { kind: 'opening', label: 'Window or door perimeter' },
+];
 
 /** A thermally broken clip, by its name: start with a pad. */
 const BROKEN = /therm\w*\s+(break|broken)/i;
 
-/** The inputs a dialog starts from: spacings from the bridge, the metal through the first insulation layer. */
-export function initialInputs(bridge: Bridge, layers: readonly Layer[]): SolveInputs {
+/** The detail a linear bridge is, by its name (a girt unless it names an edge). */
+export function linearDetailOf(name: string): LinearDetail {
+  if (/slab|floor|base|sill plate|foundation/i.test(name)) return 'slab';
+  if (/corner/i.test(name)) return 'corner';
+  if (/window|door|opening|perimeter|reveal|jamb|head|sill/i.test(name)) return 'opening';
+  return 'girt';
+}
+
+/** The inputs of a linear bridge's detail: the girt at the bridge's spacing, an edge with generic sizes. */
+export function linearInputs(
+  detail: LinearDetail,
+  bridge: Extract<Bridge, { kind: 'linear' }>,
+  layers: readonly Layer[],
+): SolveInputs {
   const wall = templateWall(layers);
   const k = Math.max(crossedLayer(layers, wall.indices, wall.layers), 0);
-  if (bridge.kind === 'point') {
-    const [sx, sz] = pointSpacings(bridge);
-    return {
-      kind: 'clip',
-      width: GENERIC.clip.width,
-      thickness: GENERIC.clip.thickness,
-      spacingX: sx!,
-      spacingZ: sz!,
-      metalLambda: CLIP_METALS[0]?.conductivity ?? 50,
-      pad: BROKEN.test(bridge.name) ? { ...GENERIC.pad } : null,
-      from: k,
-      to: k,
-    };
-  }
+  if (detail === 'slab')
+    return { kind: 'slab', from: Math.min(k + 1, wall.layers.length - 1), ...GENERIC.slab };
+  if (detail === 'corner') return { kind: 'corner' };
+  if (detail === 'opening') return { kind: 'opening', ...GENERIC.frame };
   return {
     kind: 'girt',
     profile: 'z',
     thickness: GENERIC.girt.thickness,
     outerFlange: GENERIC.girt.flange,
     innerFlange: GENERIC.girt.flange,
-    spacing: bridge.kind === 'linear' ? linearSpacing(bridge) : 1,
+    spacing: linearSpacing(bridge),
+    from: k,
+    to: k,
+  };
+}
+
+/** The inputs a dialog starts from: spacings from the bridge, the metal through the first insulation layer. */
+export function initialInputs(bridge: Bridge, layers: readonly Layer[]): SolveInputs {
+  const wall = templateWall(layers);
+  const k = Math.max(crossedLayer(layers, wall.indices, wall.layers), 0);
+  if (bridge.kind === 'linear') return linearInputs(linearDetailOf(bridge.name), bridge, layers);
+  if (bridge.kind === 'fastener') {
+    const at = wall.indices.indexOf(bridge.layerIndex);
+    const s = Math.sqrt(1 / bridge.countPerArea);
+    return {
+      kind: 'fastener',
+      diameter: bridge.diameter,
+      metalLambda: bridge.conductivity,
+      recess: bridge.penetration === 'recessed' ? (bridge.recessDepth ?? 0) : 0,
+      spacingX: s,
+      spacingZ: s,
+      from: at >= 0 ? at : k,
+      to: at >= 0 ? at : k,
+    };
+  }
+  const [sx, sz] = pointSpacings(bridge);
+  return {
+    kind: 'clip',
+    width: GENERIC.clip.width,
+    thickness: GENERIC.clip.thickness,
+    spacingX: sx!,
+    spacingZ: sz!,
+    metalLambda: CLIP_METALS[0]?.conductivity ?? 50,
+    pad: BROKEN.test(bridge.name) ? { ...GENERIC.pad } : null,
     from: k,
     to: k,
   };
@@ -112,27 +197,70 @@ export const crossedDepth = (wall: TemplateLayer[], from: number, to: number) =>
 /** The solver model of the inputs (throws `CalcInputError` naming the template field for impossible ones). */
 export function solveModel(inputs: SolveInputs, layers: readonly Layer[]): BridgeModelInput {
   const { layers: wall, rsi, rse } = templateWall(layers);
-  const base = { layers: wall, rsi, rse, crosses: { from: inputs.from, to: inputs.to } };
-  const model =
-    inputs.kind === 'girt'
-      ? girtModel({
-          ...base,
-          profile: inputs.profile,
-          thickness: inputs.thickness,
-          outerFlange: inputs.outerFlange,
-          innerFlange: inputs.innerFlange,
-          spacing: inputs.spacing,
-        } satisfies GirtTemplate)
-      : clipModel({
-          ...base,
-          metalLambda: inputs.metalLambda,
-          width: inputs.width,
-          thickness: inputs.thickness,
-          spacingX: inputs.spacingX,
-          spacingZ: inputs.spacingZ,
-          ...(inputs.pad ? { pad: inputs.pad } : {}),
-        } satisfies ClipTemplate);
-  return { ...model, field: true };
+  const edge = { layers: wall, rsi, rse };
+  return { ...templateModel(inputs, edge), field: true };
+}
+
+function templateModel(inputs: SolveInputs, edge: { layers: TemplateLayer[]; rsi: number; rse: number }) {
+  if (inputs.kind === 'slab') {
+    const { from, thickness, lambda } = inputs;
+    return edgeModel({ ...edge, kind: 'slab', slab: { from, thickness, lambda } } satisfies EdgeTemplate);
+  }
+  if (inputs.kind === 'corner') return edgeModel({ ...edge, kind: 'corner' } satisfies EdgeTemplate);
+  if (inputs.kind === 'opening') {
+    const { width, depth, offset, lambda } = inputs;
+    return edgeModel({
+      ...edge,
+      kind: 'opening',
+      frame: { width, depth, offset, lambda },
+    } satisfies EdgeTemplate);
+  }
+  const base = { ...edge, crosses: { from: inputs.from, to: inputs.to } };
+  if (inputs.kind === 'girt')
+    return girtModel({
+      ...base,
+      profile: inputs.profile,
+      thickness: inputs.thickness,
+      outerFlange: inputs.outerFlange,
+      innerFlange: inputs.innerFlange,
+      spacing: inputs.spacing,
+    } satisfies GirtTemplate);
+  if (inputs.kind === 'fastener')
+    return fastenerModel({
+      ...base,
+      metalLambda: inputs.metalLambda,
+      diameter: inputs.diameter,
+      recess: inputs.recess,
+      spacingX: inputs.spacingX,
+      spacingZ: inputs.spacingZ,
+    } satisfies FastenerTemplate);
+  return clipModel({
+    ...base,
+    metalLambda: inputs.metalLambda,
+    width: inputs.width,
+    thickness: inputs.thickness,
+    spacingX: inputs.spacingX,
+    spacingZ: inputs.spacingZ,
+    ...(inputs.pad ? { pad: inputs.pad } : {}),
+  } satisfies ClipTemplate);
+}
+
+/** χ (3-D: clip, fastener) or ψ (2-D: girt, edges) — what a detail gives. */
+export const solvesFor = (inputs: SolveInputs): 'chi' | 'psi' =>
+  inputs.kind === 'clip' || inputs.kind === 'fastener' ? 'chi' : 'psi';
+
+/**
+ * χ per fastener by ISO 6946:2017 Annex F as the engine applies it to the fastener row: ΔU_f / n_f (null when
+ * the row does not compute) — the value the solved χ is compared with.
+ */
+export function annexFChi(bridge: Extract<Bridge, { kind: 'fastener' }>, layers: Layer[]): number | null {
+  try {
+    const r = calculateThermal({ layers, heatFlow: 'horizontal', bridges: [bridge] });
+    const dU = r.bridges[0]?.deltaU;
+    return dU === undefined ? null : dU / bridge.countPerArea;
+  } catch {
+    return null;
+  }
 }
 
 /** A plane of the temperature field: cell edges along x and y, temperatures row by row (y outer, null = none). */

@@ -43,12 +43,20 @@ export const PROJECT_ACTIONS = [
   'submittal.review',
   'submittal.read',
   'submittal.comment',
+  'inspection.read',
+  'inspection.create',
+  'inspection.answer',
+  'inspection.close',
+  'deficiency.correct',
+  'deficiency.review',
 ] as const;
 export type ProjectAction = (typeof PROJECT_ACTIONS)[number];
 
 const ALL: readonly ProjectRole[] = PROJECT_ROLES;
 const DESIGNERS: readonly ProjectRole[] = ['owner', 'architect', 'envelope_consultant', 'engineer'];
 const REVIEWERS: readonly ProjectRole[] = ['architect', 'envelope_consultant', 'engineer'];
+const INSPECTORS: readonly ProjectRole[] = ['envelope_consultant', 'engineer'];
+const INSPECTORS_AND_CREW: readonly ProjectRole[] = [...INSPECTORS, 'subcontractor'];
 
 /**
  * The one permission table (action × role). The server enforces it on every project route; the client
@@ -72,7 +80,26 @@ export const PERMISSIONS: Record<ProjectAction, readonly ProjectRole[]> = {
   'submittal.review': REVIEWERS,
   'submittal.read': ALL,
   'submittal.comment': [...DESIGNERS, 'subcontractor'],
+  // Field inspections (D-025): the crew fills and corrects, the inspectors inspect, accept and reopen, the
+  // owner and architect read and close.
+  'inspection.read': ALL,
+  'inspection.create': INSPECTORS_AND_CREW,
+  'inspection.answer': INSPECTORS_AND_CREW,
+  'inspection.close': DESIGNERS,
+  'deficiency.correct': ['subcontractor'],
+  'deficiency.review': INSPECTORS,
 };
+
+/**
+ * Actions that are a duty on site, not a power over the design: left out of the grant rule, so an architect
+ * still appoints the envelope consultant and the engineer who inspect the wall (D-025).
+ */
+const FIELD_ACTIONS: readonly ProjectAction[] = [
+  'inspection.create',
+  'inspection.answer',
+  'deficiency.correct',
+  'deficiency.review',
+];
 
 export function can(role: ProjectRole | null | undefined, action: ProjectAction): boolean {
   return role != null && PERMISSIONS[action].includes(role);
@@ -96,7 +123,9 @@ export function mayGrant(
   if (granter == null) return false;
   if (granter === 'owner') return true;
   if (current === 'owner') return false;
-  return PROJECT_ACTIONS.every((action) => !can(role, action) || can(granter, action));
+  return PROJECT_ACTIONS.every(
+    (action) => FIELD_ACTIONS.includes(action) || !can(role, action) || can(granter, action),
+  );
 }
 
 /** The roles `granter` may give someone whose role is `current` (null: a new invitation), in table order. */

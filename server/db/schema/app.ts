@@ -276,6 +276,35 @@ export const orgAttachmentProducts = pgTable(
 );
 
 /**
+ * A firm's cost of one thing a sweep varies (shared/schemas/sweeps.ts): insulation per m² of wall per 25 mm of
+ * thickness, a clip each, girt and sealant per m (sealant per movement class), in the entry's currency.
+ */
+export const orgSweepCosts = pgTable(
+  'org_sweep_costs',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    organisationId: uuid('organisation_id')
+      .notNull()
+      .references(() => organisations.id, { onDelete: 'cascade' }),
+    kind: text('kind').notNull(),
+    name: text('name').notNull(),
+    cost: doublePrecision('cost').notNull(),
+    currency: text('currency').notNull(),
+    movementClass: text('movement_class'),
+    source: text('source').notNull().default(''),
+    notes: text('notes').notNull().default(''),
+    version: integer('version').notNull().default(1),
+    createdBy: text('created_by').references(() => user.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    index('org_sweep_costs_org_idx').on(t.organisationId, t.kind),
+    check('org_sweep_costs_kind', sql`${t.kind} in ('insulation', 'clip', 'girt', 'sealant')`),
+  ],
+);
+
+/**
  * A firm's code table ("criteria set"), one row per version. Versions of one table share `lineageId` (the
  * id of version 1). A version used by a stored check run is frozen (`frozenAt`) and never changes again:
  * editing it creates version + 1 with `previousVersionId` pointing back. `revision` counts in-place edits
@@ -371,6 +400,37 @@ export const checkRuns = pgTable(
     index('check_runs_project_idx').on(t.projectId, t.createdAt),
     index('check_runs_assembly_idx').on(t.assemblyId),
   ],
+);
+
+/**
+ * A saved sweep of an assembly: the revision and code table version it ran against, what it varied, the costs
+ * it ranked by, and a summary of its results (shared/schemas/sweeps.ts) — not every variant.
+ */
+export const assemblySweeps = pgTable(
+  'assembly_sweeps',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    assemblyId: uuid('assembly_id')
+      .notNull()
+      .references(() => assemblies.id, { onDelete: 'cascade' }),
+    assemblyRevision: integer('assembly_revision').notNull(),
+    name: text('name').notNull(),
+    criteriaSetId: uuid('criteria_set_id')
+      .notNull()
+      .references(() => criteriaSets.id),
+    criteriaSetVersion: integer('criteria_set_version').notNull(),
+    criteriaSetName: text('criteria_set_name').notNull(),
+    parameters: jsonb('parameters').notNull(),
+    costs: jsonb('costs'),
+    summary: jsonb('summary').notNull(),
+    engineVersion: text('engine_version').notNull(),
+    createdBy: text('created_by').references(() => user.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('assembly_sweeps_assembly_idx').on(t.assemblyId, t.createdAt)],
 );
 
 /**
@@ -504,4 +564,158 @@ export const submittalComments = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index('submittal_comments_submittal_idx').on(t.submittalId, t.createdAt)],
+);
+
+/**
+ * A firm's checklist template (D-025): items added to every inspection checklist generated for its projects.
+ * Versioned like the code tables: a version used by an inspection is frozen (`frozenAt`), and editing it makes
+ * `version + 1`; an unfrozen version is edited in place under `revision`.
+ */
+export const inspectionTemplates = pgTable(
+  'inspection_templates',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    organisationId: uuid('organisation_id')
+      .notNull()
+      .references(() => organisations.id, { onDelete: 'cascade' }),
+    version: integer('version').notNull().default(1),
+    previousVersionId: uuid('previous_version_id').references((): AnyPgColumn => inspectionTemplates.id),
+    /** shared/inspections/schema.ts templateItemSchema[] */
+    items: jsonb('items').notNull().default([]),
+    revision: integer('revision').notNull().default(1),
+    frozenAt: timestamp('frozen_at', { withTimezone: true }),
+    createdBy: text('created_by').references(() => user.id),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [uniqueIndex('inspection_templates_org_version').on(t.organisationId, t.version)],
+);
+
+/**
+ * A field inspection of one assembly revision over part of the building (elevation and a grid range or wind
+ * zone), numbered within its project. `version` counts changes of the inspection itself (closing);
+ * each item has its own version.
+ */
+export const inspections = pgTable(
+  'inspections',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    projectId: uuid('project_id')
+      .notNull()
+      .references(() => projects.id, { onDelete: 'cascade' }),
+    number: integer('number').notNull(),
+    title: text('title').notNull(),
+    assemblyId: uuid('assembly_id')
+      .notNull()
+      .references(() => assemblies.id, { onDelete: 'cascade' }),
+    assemblyRevision: integer('assembly_revision').notNull(),
+    assemblyName: text('assembly_name').notNull(),
+    elevation: text('elevation').notNull(),
+    /** shared/inspections/schema.ts inspectionAreaSchema */
+    area: jsonb('area').notNull(),
+    /** in_progress | closed */
+    status: text('status').notNull().default('in_progress'),
+    checkRunId: uuid('check_run_id').references(() => checkRuns.id, { onDelete: 'set null' }),
+    sheetCode: text('sheet_code'),
+    templateId: uuid('template_id').references(() => inspectionTemplates.id, { onDelete: 'set null' }),
+    version: integer('version').notNull().default(1),
+    createdBy: text('created_by').references(() => user.id),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    closedAt: timestamp('closed_at', { withTimezone: true }),
+    closedBy: text('closed_by').references(() => user.id),
+  },
+  (t) => [
+    uniqueIndex('inspections_project_number').on(t.projectId, t.number),
+    check('inspections_status', sql`${t.status} in ('in_progress', 'closed')`),
+  ],
+);
+
+/** A checklist item: its design value (SI), limits and source as generated, and its answer (own version). */
+export const inspectionItems = pgTable(
+  'inspection_items',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    inspectionId: uuid('inspection_id')
+      .notNull()
+      .references(() => inspections.id, { onDelete: 'cascade' }),
+    position: integer('position').notNull(),
+    kind: text('kind').notNull(),
+    itemGroup: text('item_group').notNull(),
+    label: text('label').notNull(),
+    designText: text('design_text').notNull(),
+    quantity: text('quantity'),
+    designValue: doublePrecision('design_value'),
+    /** shared/inspections/schema.ts toleranceSchema, or null */
+    tolerance: jsonb('tolerance'),
+    /** shared/inspections/schema.ts itemSourceSchema */
+    source: jsonb('source').notNull(),
+    /** unseen | pass | fail | na */
+    state: text('state').notNull().default('unseen'),
+    measured: doublePrecision('measured'),
+    note: text('note').notNull().default(''),
+    location: text('location').notNull().default(''),
+    version: integer('version').notNull().default(1),
+    answeredBy: text('answered_by').references(() => user.id),
+    answeredAt: timestamp('answered_at', { withTimezone: true }),
+  },
+  (t) => [
+    uniqueIndex('inspection_items_position').on(t.inspectionId, t.position),
+    check('inspection_items_state', sql`${t.state} in ('unseen', 'pass', 'fail', 'na')`),
+  ],
+);
+
+/** A photo of an item, stored in object storage under `storageKey` (a uuid path of ours). */
+export const inspectionPhotos = pgTable(
+  'inspection_photos',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    inspectionId: uuid('inspection_id')
+      .notNull()
+      .references(() => inspections.id, { onDelete: 'cascade' }),
+    itemId: uuid('item_id')
+      .notNull()
+      .references(() => inspectionItems.id, { onDelete: 'cascade' }),
+    storageKey: text('storage_key').notNull(),
+    fileName: text('file_name').notNull(),
+    contentType: text('content_type').notNull(),
+    size: integer('size').notNull(),
+    sha256: text('sha256').notNull(),
+    createdBy: text('created_by').references(() => user.id),
+    createdAt: createdAt(),
+  },
+  (t) => [index('inspection_photos_item_idx').on(t.itemId)],
+);
+
+/** A deficiency opened by a failed item: open → corrected (with a photo) → accepted, or reopened. */
+export const inspectionDeficiencies = pgTable(
+  'inspection_deficiencies',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    inspectionId: uuid('inspection_id')
+      .notNull()
+      .references(() => inspections.id, { onDelete: 'cascade' }),
+    itemId: uuid('item_id')
+      .notNull()
+      .references(() => inspectionItems.id, { onDelete: 'cascade' }),
+    number: integer('number').notNull(),
+    /** open | corrected | accepted | reopened */
+    state: text('state').notNull().default('open'),
+    description: text('description').notNull().default(''),
+    ownerId: text('owner_id').references(() => user.id, { onDelete: 'set null' }),
+    dueDate: date('due_date', { mode: 'string' }),
+    correctionPhotoId: uuid('correction_photo_id').references(() => inspectionPhotos.id, {
+      onDelete: 'set null',
+    }),
+    note: text('note').notNull().default(''),
+    version: integer('version').notNull().default(1),
+    createdBy: text('created_by').references(() => user.id),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    uniqueIndex('inspection_deficiencies_number').on(t.inspectionId, t.number),
+    index('inspection_deficiencies_item_idx').on(t.itemId),
+    check('inspection_deficiencies_state', sql`${t.state} in ('open', 'corrected', 'accepted', 'reopened')`),
+  ],
 );

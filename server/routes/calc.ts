@@ -2,7 +2,11 @@ import { demoGirtModel } from '@shared/calc/bridge/examples';
 import { bridgeModelSchema, bridgeResultSchema } from '@shared/calc/bridge/schema';
 import { demoJointSchedule } from '@shared/calc/joints/examples';
 import { calculateJointSchedule } from '@shared/calc/joints/joints';
-import { jointScheduleInputSchema, jointScheduleResultSchema } from '@shared/calc/joints/schema';
+import {
+  jointResultSchema,
+  jointScheduleInputSchema,
+  jointScheduleResultSchema,
+} from '@shared/calc/joints/schema';
 import { metalPanelMoistureWall } from '@shared/calc/moisture/examples';
 import { calculateMoisture } from '@shared/calc/moisture/monthly';
 import { moistureInputSchema, moistureResultSchema } from '@shared/calc/moisture/schema';
@@ -14,6 +18,7 @@ import { metalPanelWall } from '@shared/calc/thermal/examples';
 import { materialSchema, materials } from '@shared/calc/thermal/materials';
 import { thermalInputSchema, thermalResultSchema } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
+import { withoutTrace } from '@shared/calc/trace';
 import { calculateWindSchedule } from '@shared/calc/wind/attachment';
 import { checkDesignSpacing } from '@shared/calc/wind/design';
 import { demoWindSchedule } from '@shared/calc/wind/examples';
@@ -44,6 +49,19 @@ const calcErrors = {
     schema: apiErrorSchema,
   },
 };
+
+/**
+ * `?trace=true`: the answer keeps every trace step (label, formula, source, inputs, value); without it the
+ * steps are left out and the answer is the results, their basis and warnings (D-029). Each documented answer
+ * below therefore marks its `trace` members optional.
+ */
+const traceQuery = z.object({
+  trace: z
+    .stringbool()
+    .default(false)
+    .describe('`true` adds the trace: every step with its formula, inputs and source'),
+});
+const traced = <T>(asked: { trace: boolean }, result: T): T => (asked.trace ? result : withoutTrace(result));
 
 /** The length of a list in a body not validated yet (anything else counts 0). */
 const lengthOf = (value: unknown) => (Array.isArray(value) ? value.length : 0);
@@ -90,13 +108,17 @@ export const calcRoutes = [
     tag: 'Calculations',
     access: { kind: 'public' },
     stateless: true,
+    query: traceQuery,
     body: thermalInputSchema,
     example: metalPanelWall(),
     responses: {
-      200: { description: 'Result with a trace of every figure', schema: thermalResultSchema },
+      200: {
+        description: 'Result; with `?trace=true` a trace of every figure',
+        schema: thermalResultSchema.partial({ trace: true }),
+      },
       ...calcErrors,
     },
-    handler: async ({ body }) => calculateThermal(body),
+    handler: async ({ body, query }) => traced(query, calculateThermal(body)),
   }),
   defineRoute({
     method: 'post',
@@ -106,16 +128,17 @@ export const calcRoutes = [
     tag: 'Calculations',
     access: { kind: 'public' },
     stateless: true,
+    query: traceQuery,
     body: moistureInputSchema,
     example: metalPanelMoistureWall({ vapourRetarder: false }),
     responses: {
       200: {
-        description: 'Month-by-month profile, accumulation, verdict and a trace',
-        schema: moistureResultSchema,
+        description: 'Month-by-month profile, accumulation and verdict; with `?trace=true` a trace',
+        schema: moistureResultSchema.partial({ trace: true }),
       },
       ...calcErrors,
     },
-    handler: async ({ body }) => calculateMoisture(body),
+    handler: async ({ body, query }) => traced(query, calculateMoisture(body)),
   }),
   defineRoute({
     method: 'post',
@@ -125,6 +148,7 @@ export const calcRoutes = [
     tag: 'Calculations',
     access: { kind: 'public' },
     stateless: true,
+    query: traceQuery,
     body: windScheduleInputSchema.extend({
       design: designSpacingsSchema
         .optional()
@@ -134,15 +158,20 @@ export const calcRoutes = [
     responses: {
       200: {
         description:
-          'Spacing schedule per zone with a trace; with `design`, the check of the design spacings per zone',
-        schema: windScheduleResultSchema.extend({ design: designSpacingResultSchema.nullable() }),
+          'Spacing schedule per zone; with `design`, the check of the design spacings per zone; with `?trace=true`, the traces',
+        schema: windScheduleResultSchema
+          .partial({ trace: true })
+          .extend({ design: designSpacingResultSchema.partial({ trace: true }).nullable() }),
       },
       ...calcErrors,
     },
-    handler: async ({ body }) => {
+    handler: async ({ body, query }) => {
       const schedule = calculateWindSchedule(body);
       const { design } = body;
-      return { ...schedule, design: design ? checkDesignSpacing({ ...body, design }, schedule) : null };
+      return traced(query, {
+        ...schedule,
+        design: design ? checkDesignSpacing({ ...body, design }, schedule) : null,
+      });
     },
   }),
   defineRoute({
@@ -152,15 +181,21 @@ export const calcRoutes = [
     tag: 'Calculations',
     access: { kind: 'public' },
     stateless: true,
+    query: traceQuery,
     body: jointScheduleInputSchema,
     workLimits: [CALC_WORK_LIMITS.joints],
     example: { joints: demoJointSchedule() },
     responses: {
-      200: { description: 'Joint schedule with a trace per joint', schema: jointScheduleResultSchema },
+      200: {
+        description: 'Joint schedule; with `?trace=true` a trace per joint',
+        schema: jointScheduleResultSchema.extend({
+          joints: z.array(jointResultSchema.partial({ trace: true })),
+        }),
+      },
       ...calcErrors,
       ...overWork(CALC_WORK_LIMITS.joints),
     },
-    handler: async ({ body }) => calculateJointSchedule(body.joints),
+    handler: async ({ body, query }) => traced(query, calculateJointSchedule(body.joints)),
   }),
   defineRoute({
     method: 'post',
@@ -169,15 +204,19 @@ export const calcRoutes = [
     tag: 'Calculations',
     access: { kind: 'public' },
     stateless: true,
+    query: traceQuery,
     body: takeoffInputSchema,
     workLimits: [CALC_WORK_LIMITS.openings],
     example: demoElevation(),
     responses: {
-      200: { description: 'Quantities with a trace', schema: takeoffResultSchema },
+      200: {
+        description: 'Quantities, each line with its formula; with `?trace=true` every step',
+        schema: takeoffResultSchema.partial({ trace: true }),
+      },
       ...calcErrors,
       ...overWork(CALC_WORK_LIMITS.openings),
     },
-    handler: async ({ body }) => calculateTakeoff(body),
+    handler: async ({ body, query }) => traced(query, calculateTakeoff(body)),
   }),
   defineRoute({
     method: 'post',

@@ -45,3 +45,16 @@ export const v = (value: number, unit: string): TraceInput => ({ value, unit });
 
 /** Version of the shared calculation engine; stored with every result and printed on every sheet. */
 export const ENGINE_VERSION = '0.3.0';
+
+/**
+ * The same result without its trace steps: every `trace` member, at any depth (a joint schedule has one per
+ * joint, the wind check one per part), left out; everything else kept as it is. What the public calculation
+ * routes answer unless `?trace=true` asks for the steps (D-029).
+ */
+export function withoutTrace<T>(result: T): T {
+  if (Array.isArray(result)) return result.map(withoutTrace) as T;
+  if (result === null || typeof result !== 'object') return result;
+  const out: Record<string, unknown> = {};
+  for (const [key, value] of Object.entries(result)) if (key !== 'trace') out[key] = withoutTrace(value);
+  return out as T;
+}

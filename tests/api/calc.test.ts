@@ -1,6 +1,13 @@
 import { demoJointSchedule } from '@shared/calc/joints/examples';
+import { calculateJointSchedule } from '@shared/calc/joints/joints';
 import { metalPanelMoistureWall } from '@shared/calc/moisture/examples';
+import { calculateMoisture } from '@shared/calc/moisture/monthly';
 import { demoElevation } from '@shared/calc/takeoff/examples';
+import { calculateTakeoff } from '@shared/calc/takeoff/takeoff';
+import { metalPanelWall } from '@shared/calc/thermal/examples';
+import { calculateThermal } from '@shared/calc/thermal/thermal';
+import { withoutTrace } from '@shared/calc/trace';
+import { calculateWindSchedule } from '@shared/calc/wind/attachment';
 import { checkDesignSpacing } from '@shared/calc/wind/design';
 import { demoWindSchedule } from '@shared/calc/wind/examples';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -15,6 +22,37 @@ describe('public calculation API', () => {
   afterAll(async () => {
     await t?.close();
   });
+
+  // D-029: the answer leaves the trace steps out unless `?trace=true` asks for them; with it, every step is
+  // the engine's own, at every depth (per joint, the wind design check).
+  it.each([
+    ['thermal', metalPanelWall(), calculateThermal],
+    ['moisture', metalPanelMoistureWall({ vapourRetarder: false }), calculateMoisture],
+    [
+      'wind',
+      demoWindSchedule(),
+      (b: ReturnType<typeof demoWindSchedule>) => ({ ...calculateWindSchedule(b), design: null }),
+    ],
+    [
+      'joints',
+      { joints: demoJointSchedule() },
+      (b: { joints: ReturnType<typeof demoJointSchedule> }) => calculateJointSchedule(b.joints),
+    ],
+    ['takeoff', demoElevation(), calculateTakeoff],
+  ] as const)(
+    '%s: the trace only with ?trace=true, then the engine’s every step',
+    async (name, body, engine) => {
+      const expected = JSON.parse(JSON.stringify((engine as (b: unknown) => unknown)(body)));
+      const lean = await t.anonymous().post(`/api/v1/calc/${name}`).send(body);
+      const full = await t.anonymous().post(`/api/v1/calc/${name}?trace=true`).send(body);
+      expect([lean.status, full.status]).toEqual([200, 200]);
+      expect(full.body).toEqual(expected);
+      expect(lean.body).toEqual(withoutTrace(expected));
+      expect(JSON.stringify(lean.body)).not.toContain('"trace"');
+      const off = await t.anonymous().post(`/api/v1/calc/${name}?trace=false`).send(body);
+      expect(off.body).toEqual(lean.body);
+    },
+  );
 
   it('computes the monthly moisture balance and refuses 11 months with the field', async () => {
     const ok = await t
@@ -43,7 +81,7 @@ describe('public calculation API', () => {
 
   it('checks design spacings per zone when given, with the same verdict as the engine', async () => {
     const input = { ...demoWindSchedule(), design: { girtSpacing: 1.2, clipSpacing: 0.6 } };
-    const res = await t.anonymous().post('/api/v1/calc/wind').send(input);
+    const res = await t.anonymous().post('/api/v1/calc/wind?trace=true').send(input);
     expect(res.status).toBe(200);
     expect(res.body.design).toEqual(JSON.parse(JSON.stringify(checkDesignSpacing(input))));
     expect(res.body.design.zones.map((z: { zone: number }) => z.zone)).toEqual([4, 5]);

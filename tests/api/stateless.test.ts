@@ -138,6 +138,15 @@ describe('lean path for stateless routes', () => {
       },
     );
 
+    it('answers the trace steps on request by both paths, and refuses an unknown trace flag', async () => {
+      const thermal = JSON.stringify(statelessRoutes.find((r) => r.path === '/v1/calc/thermal')!.example);
+      expect((await same('/api/v1/calc/thermal', thermal)).body.trace).toBeUndefined();
+      expect((await same('/api/v1/calc/thermal?trace=true', thermal)).body.trace.length).toBeGreaterThan(5);
+      expect(
+        (await same('/api/v1/calc/thermal?trace=maybe', thermal)).body.error.fields['query.trace'],
+      ).toBeDefined();
+    });
+
     it('gives the takeoff as a CSV download by both paths, and a 422 for impossible input', async () => {
       const takeoff = statelessRoutes.find((r) => r.path === '/v1/calc/takeoff.csv')!;
       const csv = await same('/api/v1/calc/takeoff.csv', JSON.stringify(takeoff.example));

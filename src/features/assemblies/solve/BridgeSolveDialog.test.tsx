@@ -58,6 +58,7 @@ describe('Solve dialog (bridge solver on the assembly layers)', () => {
     const result = screen.getByRole('region', { name: 'Result' });
     expect(within(result).getByTestId('temperature-map')).toBeTruthy();
     expect(within(result).getByTestId('coldest-point')).toBeTruthy();
+    expect(within(result).getByTestId('isotherms').querySelectorAll('path').length).toBe(9);
     expect(within(result).getByText(/maker's tested values or a specialist's model/)).toBeTruthy();
 
     fireEvent.click(use);

@@ -1,30 +1,6 @@
+import { bandRects, isotherms, PALETTE, type Section } from '@shared/calc/bridge/section';
 import type { UnitSystem } from '@shared/units';
 import { formatQuantity } from '../../../lib/quantities';
-import type { Section } from './bridge-solve';
-
-/**
- * Bands from warm to cold: light to dark in even lightness steps, the hue turning from straw through rust to
- * indigo, so neighbouring bands differ in hue on screen and in grey on a black-and-white print.
- */
-export const PALETTE = [
-  '#fbf4d6',
-  '#f4dc93',
-  '#ebbd68',
-  '#de9651',
-  '#c8734d',
-  '#a95a5a',
-  '#83506e',
-  '#5d4878',
-  '#3b3f6e',
-  '#1f2a4d',
-] as const;
-
-/** Band of θ between the warm (band 0) and the cold (last band) environment temperature. */
-export function bandOf(theta: number, warm: number, cold: number): number {
-  const n = PALETTE.length;
-  const t = (warm - theta) / (warm - cold);
-  return Math.min(n - 1, Math.max(0, Math.floor(t * n)));
-}
 
 /** A rectangle in model metres, drawn as an outline (the metal). */
 export interface Outline {
@@ -60,31 +36,13 @@ export function TemperatureMap({
   /** Draw y upwards (a model whose y axis points up, e.g. a slab edge). */
   flipY?: boolean;
 }) {
-  const { x, y, values } = section;
+  const { x, y } = section;
   const nx = x.length - 1;
   const [x0, x1, y0, y1] = [x[0]!, x[nx]!, y[0]!, y[y.length - 1]!];
   const w = x1 - x0;
   const h = y1 - y0;
-  const rects: { x: number; y: number; w: number; h: number; band: number }[] = [];
-  for (let j = 0; j < y.length - 1; j++) {
-    let i = 0;
-    while (i < nx) {
-      const v = values[j * nx + i];
-      if (v === null || v === undefined) {
-        i++;
-        continue;
-      }
-      const band = bandOf(v, warm, cold);
-      let k = i + 1;
-      while (k < nx) {
-        const u = values[j * nx + k];
-        if (u === null || u === undefined || bandOf(u, warm, cold) !== band) break;
-        k++;
-      }
-      rects.push({ x: x[i]!, y: y[j]!, w: x[k]! - x[i]!, h: y[j + 1]! - y[j]!, band });
-      i = k;
-    }
-  }
+  const rects = bandRects(section, warm, cold);
+  const lines = isotherms(section, warm, cold);
   const step = (warm - cold) / PALETTE.length;
   const cx = coldest?.at[0];
   const cy = coldest?.at[1];
@@ -110,6 +68,16 @@ export function TemperatureMap({
               shapeRendering="crispEdges"
             />
           ))}
+          <g data-testid="isotherms" fill="none" stroke="#1E1C19" strokeOpacity={0.55}>
+            {lines.map((l) => (
+              <path
+                key={l.level}
+                d={l.segments.map(([a, b, c, d]) => `M${a} ${b}L${c} ${d}`).join('')}
+                strokeWidth={0.75}
+                vectorEffect="non-scaling-stroke"
+              />
+            ))}
+          </g>
           {metal.map((m) => (
             <rect
               key={`${m.min.join()}-${m.max.join()}`}
@@ -149,7 +117,8 @@ export function TemperatureMap({
       </svg>
       <figcaption className="flex flex-col gap-1 text-xs text-ink-muted">
         <span>
-          {orientation}; conductive parts outlined; ◯ the coldest inside point
+          {orientation}; conductive parts outlined; thin lines are isotherms at the band edges; ◯ the coldest
+          inside point
           {coldest ? ` (${formatQuantity(coldest.temperature, 'temperature', system)})` : ''}.
         </span>
         <ol className="flex flex-wrap gap-x-2 gap-y-1" aria-label="Temperature bands">

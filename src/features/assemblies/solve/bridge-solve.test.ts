@@ -1,7 +1,7 @@
 import { templateWall } from '@shared/calc/bridge/templates';
+import { calculateThermal } from '@shared/calc/thermal/thermal';
 import { describe, expect, it } from 'vitest';
 import { demoInput } from '../../../lib/revision-test-fixtures';
-import { calculateThermal } from '@shared/calc/thermal/thermal';
 import { withSolvedValue } from '../components/ThermalBridgesEditor';
 import {
   annexFChi,
@@ -9,7 +9,6 @@ import {
   initialInputs,
   linearDetailOf,
   linearInputs,
-  sectionOf,
   solveModel,
   solvesFor,
 } from './bridge-solve';
@@ -26,13 +25,6 @@ describe('bridge-solve: the assembly as a solver template', () => {
     // Framed layer by isothermal planes, λ = Σ f·λ (ISO 6946:2017 §6.7.2; derived from the demo fractions).
     const f = 0.00270935960591133;
     expect(wall.layers[3]!.lambda).toBeCloseTo((1 - f) * 0.04 + f * 50, 9);
-  });
-
-  it('reads the mid-plane of a 3-D field (z between the middle edges)', () => {
-    const grid = { x: [0, 1, 2], y: [0, 1], z: [0, 1, 2, 3] };
-    const field = [1, 2, 3, 4, 5, 6];
-    expect(sectionOf({ grid, field })?.values).toEqual([3, 4]);
-    expect(sectionOf({ grid: { ...grid, z: [0, 1] }, field: [7, 8] })?.values).toEqual([7, 8]);
   });
 
   it('words the source of a computed value', () => {

@@ -1,5 +1,5 @@
 import { type EdgeTemplate, edgeModel } from '@shared/calc/bridge/edges';
-import type { BridgeModelInput, BridgeResult } from '@shared/calc/bridge/schema';
+import type { BridgeModelInput } from '@shared/calc/bridge/schema';
 import {
   type ClipTemplate,
   clipModel,
@@ -261,29 +261,6 @@ export function annexFChi(bridge: Extract<Bridge, { kind: 'fastener' }>, layers:
   } catch {
     return null;
   }
-}
-
-/** A plane of the temperature field: cell edges along x and y, temperatures row by row (y outer, null = none). */
-export interface Section {
-  x: number[];
-  y: number[];
-  values: (number | null)[];
-}
-
-/**
- * The section a map draws: the 2-D field as it is; of a 3-D clip, the x–y plane through the middle of the cell
- * in z (the clip's mid-plane, where it is warmest outside and coldest inside).
- */
-export function sectionOf(result: Pick<BridgeResult, 'grid' | 'field'>): Section | null {
-  const { x, y, z } = result.grid;
-  if (!result.field) return null;
-  const nx = x.length - 1;
-  const ny = y.length - 1;
-  const mid = (z[0]! + z[z.length - 1]!) / 2;
-  let k = 0;
-  while (k < z.length - 2 && z[k + 1]! <= mid) k++;
-  const start = k * nx * ny;
-  return { x, y, values: result.field.slice(start, start + nx * ny) };
 }
 
 /** What is kept with a computed χ or ψ, as its source. */

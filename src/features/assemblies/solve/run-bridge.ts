@@ -1,7 +1,8 @@
 import { solveBridge } from '@shared/calc/bridge/bridge';
 import { type BridgeModelInput, type BridgeResult, bridgeModelSchema } from '@shared/calc/bridge/schema';
+import { type Section, sectionOf } from '@shared/calc/bridge/section';
 import { CalcInputError } from '@shared/calc/errors';
-import { type Section, sectionOf } from './bridge-solve';
+
 import type { BridgeRunner } from './runners';
 
 /** A finished solve: the result without its field, and the section the map draws. */

@@ -241,6 +241,8 @@ export const orgBridgeValues = pgTable(
     sourceType: text('source_type').notNull(),
     source: text('source').notNull(),
     notes: text('notes').notNull().default(''),
+    /** A computed value's detail, solve and map (shared/calc/bridge/computed.ts); null when entered. */
+    computed: jsonb('computed'),
     createdAt: createdAt(),
   },
   (t) => [index('org_bridge_values_org_idx').on(t.organisationId)],

@@ -1,0 +1,1 @@
+ALTER TABLE "org_bridge_values" ADD COLUMN "computed" jsonb;

@@ -1,13 +1,21 @@
 import demo from '../../data/seed/demo-assembly.json' with { type: 'json' };
-import { type AssemblyInput, assemblyInputSchema } from '../schemas/assembly';
-import { projectClimateSchema, projectWindSchema } from '../schemas/project';
+import { type AssemblyInputSI, assemblyInputSchema } from '../schemas/assembly';
+import {
+  type ProjectClimateSI,
+  type ProjectWindSI,
+  projectClimateSchema,
+  projectWindSchema,
+} from '../schemas/project';
 import type { CriteriaRowInput } from './criteria';
 import type { ProjectForChecks } from './inputs';
 import type { Check } from './report';
 
 /** The invented demo assembly and project (data/seed) as the checks read them — for tests. */
-export const demoAssembly = (): AssemblyInput => assemblyInputSchema.parse(demo.assembly);
-export const demoProject = (): ProjectForChecks => ({
+export const demoAssembly = (): AssemblyInputSI => assemblyInputSchema.parse(demo.assembly);
+export const demoProject = (): ProjectForChecks & {
+  climate: ProjectClimateSI | null;
+  wind: ProjectWindSI | null;
+} => ({
   climateZone: '5A',
   elevationM: 185,
   buildingHeightM: 11.5,

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { calculateWindSchedule } from '../calc/wind/attachment';
 import { checkDesignSpacing } from '../calc/wind/design';
+import type { AssemblyInput } from '../schemas/assembly';
 import { canonicalJson } from './canonical';
 import { CRITERION_TYPE_KEYS, CRITERION_TYPES } from './criteria';
 import { demoAssembly, demoProject, criteriaRow as row } from './fixtures';
@@ -59,7 +60,7 @@ describe('the compliance runner on the demo assembly', () => {
   });
 
   it('uses the lowest R of the methods offered when no energy-code path applies, and says so', () => {
-    const a = demoAssembly();
+    const a: AssemblyInput = demoAssembly();
     const studs = a.thermal.layers[5];
     if (studs?.kind !== 'framed') throw new Error('the demo wall has changed');
     a.thermal.layers[5] = { ...studs, spacing: 0.6 };

@@ -1,10 +1,12 @@
 import { z } from 'zod';
+import { computedBridgeSchema } from '../calc/bridge/computed';
 import { jointInputSchema } from '../calc/joints/schema';
 import { vapourSchema } from '../calc/moisture/schema';
 import { valueSourceSchema } from '../calc/source';
 import { takeoffInputSchema } from '../calc/takeoff/schema';
 import { MIN_CONDUCTIVITY, thermalInputSchema, thermalResultSchema } from '../calc/thermal/schema';
 import { MIN_CLIP_SPACING, MIN_SPAN, panelSchema } from '../calc/wind/schema';
+import type { Unbranded } from '../units/brands';
 import { int4, TEXT_MAX, text } from './common';
 
 /**
@@ -72,7 +74,10 @@ export const assemblyInputSchema = z
     path: ['vapour'],
     message: 'vapour data must list one entry per layer (null where not entered)',
   });
-export type AssemblyInput = z.infer<typeof assemblyInputSchema>;
+/** The assembly as the engines and pages take it (plain numbers); `assemblyInputSchema` parses it SI-branded. */
+export type AssemblyInput = Unbranded<AssemblyInputSI>;
+/** What `assemblyInputSchema` parses: lengths, λ, R and temperatures SI-branded (D-028). */
+export type AssemblyInputSI = z.infer<typeof assemblyInputSchema>;
 
 export const assemblyCreateSchema = assemblyInputSchema;
 /** A copy of an assembly's current revision, into this project or `projectId`; named "<name> (copy)" by default. */
@@ -122,10 +127,10 @@ export const assemblyRevisionSchema = z.object({
   createdBy: z.string().nullable(),
   createdAt: z.string(),
 });
-export type AssemblyRevision = z.infer<typeof assemblyRevisionSchema>;
+export type AssemblyRevision = Unbranded<z.infer<typeof assemblyRevisionSchema>>;
 
 export const assemblySchema = assemblyHeadSchema.extend({ current: assemblyRevisionSchema });
-export type Assembly = z.infer<typeof assemblySchema>;
+export type Assembly = Unbranded<z.infer<typeof assemblySchema>>;
 
 export const revisionListSchema = z.object({
   revisions: z.array(
@@ -163,6 +168,9 @@ export const bridgeValueInputSchema = z.object({
   sourceType: z.enum(['test_report', 'catalogue', 'calculation']),
   source: text(TEXT_MAX.line).min(1, 'name the source of the value'),
   notes: text(TEXT_MAX.note).default(''),
+  computed: computedBridgeSchema
+    .optional()
+    .describe('A computed value: the detail it was solved from, the solve and its map'),
 });
 export const bridgeValueSchema = bridgeValueInputSchema.extend({ id: z.uuid(), createdAt: z.string() });
 export type BridgeValue = z.infer<typeof bridgeValueSchema>;

@@ -3,6 +3,7 @@ import { CalcInputError } from '../calc/errors';
 import { valueSourceSchema } from '../calc/source';
 import { tableColumns } from '../calc/wind/attachment';
 import { clipSchema, loadSpanTableSchema, panelSchema } from '../calc/wind/schema';
+import type { Unbranded } from '../units/brands';
 import { TEXT_MAX, text } from './common';
 
 /**
@@ -74,8 +75,8 @@ export const attachmentProductSchema = z.discriminatedUnion('kind', [
   clipProductInputSchema.extend(stored),
 ]);
 
-export type AttachmentProductInput = z.infer<typeof attachmentProductInputSchema>;
-export type AttachmentProduct = z.infer<typeof attachmentProductSchema>;
+export type AttachmentProductInput = Unbranded<z.infer<typeof attachmentProductInputSchema>>;
+export type AttachmentProduct = Unbranded<z.infer<typeof attachmentProductSchema>>;
 export type PanelProduct = Extract<AttachmentProduct, { kind: 'panel' }>;
 export type ClipProduct = Extract<AttachmentProduct, { kind: 'clip' }>;
 export type DataSheet = z.infer<typeof dataSheetSchema>;

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { projectRoleSchema } from '../auth/permissions';
 import { monthClimateSchema } from '../calc/moisture/schema';
 import { windSiteSchema } from '../calc/wind/schema';
+import type { Unbranded } from '../units/brands';
 import { int4, TEXT_MAX, text } from './common';
 
 /** ASHRAE 169 climate zone designations: 0–8 with moisture regime A (moist), B (dry), C (marine) where used. */
@@ -81,7 +82,7 @@ export const projectInputSchema = projectSiteSchema
     path: ['summerDesignTempC'],
     message: 'summer design temperature must be above the winter design temperature',
   });
-export type ProjectInput = z.infer<typeof projectInputSchema>;
+export type ProjectInput = Unbranded<z.infer<typeof projectInputSchema>>;
 
 /**
  * A save of one part of a project (site data, wind data, climate) names the project version it was based on;
@@ -94,7 +95,7 @@ export const projectUpdateSchema = z.object({
   version: baseVersion,
   changes: projectInputSchema,
 });
-export type ProjectUpdate = z.infer<typeof projectUpdateSchema>;
+export type ProjectUpdate = Unbranded<z.infer<typeof projectUpdateSchema>>;
 
 /**
  * The project's wind data (ASCE 7 site parameters). Height, plan dimensions and the ground elevation come from
@@ -110,7 +111,9 @@ export const projectWindSchema = windSiteSchema.pick({
   enclosure: true,
   roofSlopeDeg: true,
 });
-export type ProjectWind = z.infer<typeof projectWindSchema>;
+/** What `projectWindSchema` parses: heights and elevation `Metre` (D-028). */
+export type ProjectWindSI = z.infer<typeof projectWindSchema>;
+export type ProjectWind = Unbranded<ProjectWindSI>;
 
 /** Twelve monthly mean exterior climates (January first) with where they come from, for the moisture check. */
 export const projectClimateSchema = z.object({
@@ -124,7 +127,9 @@ export const projectClimateSchema = z.object({
     .optional()
     .describe('ISO 13788 Annex A humidity class 1–5; omitted = the fixed indoor design temperature and RH'),
 });
-export type ProjectClimate = z.infer<typeof projectClimateSchema>;
+/** What `projectClimateSchema` parses: monthly temperatures `Celsius` (D-028). */
+export type ProjectClimateSI = z.infer<typeof projectClimateSchema>;
+export type ProjectClimate = Unbranded<ProjectClimateSI>;
 
 export const projectWindUpdateSchema = z.object({
   version: baseVersion,
@@ -160,7 +165,7 @@ export const projectSchema = z.object({
   updatedAt: z.string(),
   myRole: projectRoleSchema,
 });
-export type Project = z.infer<typeof projectSchema>;
+export type Project = Unbranded<z.infer<typeof projectSchema>>;
 
 /** A copy of a project (site data, wind, climate, assemblies), named "<name> (copy)" unless given. */
 export const projectDuplicateSchema = z.object({

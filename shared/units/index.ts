@@ -6,31 +6,27 @@
  * (`registry.ts`, factors derived from mathjs's unit system at load); this module re-exports it with the names
  * the rest of the code multiplies by.
  */
-import type { z } from 'zod';
+import type { SI } from './brands';
 import { QUANTITIES, type Quantity, shownToStored, storedToShown } from './registry';
 
+export * from './brands';
 export * from './registry';
 
-/** A number that carries its unit in its type — zod's brand, so a `.brand<'m'>()` schema yields a `Metre`. */
-export type Brand<T, B extends string> = T & z.$brand<B>;
-
-export type Metre = Brand<number, 'm'>;
-export type Celsius = Brand<number, '°C'>;
-export type Kelvin = Brand<number, 'K'>;
-export type Pascal = Brand<number, 'Pa'>;
-/** A value already in SI, with its unit stated where no schema parsed it (a fixture, a template, a form's default). */
-export const siValue = <B extends string>(v: number): Brand<number, B> => v as Brand<number, B>;
+export type Metre = SI<'length'>;
+export type Celsius = SI<'temperature'>;
+export type Kelvin = SI<'temperatureDifference'>;
+export type Pascal = SI<'pressure'>;
 
 /** Thermal conductivity λ, W/(m·K). */
-export type WattPerMetreKelvin = Brand<number, 'W/(m·K)'>;
+export type WattPerMetreKelvin = SI<'conductivity'>;
 /** Thermal transmittance U, W/(m²·K). */
-export type WattPerSquareMetreKelvin = Brand<number, 'W/(m²·K)'>;
+export type WattPerSquareMetreKelvin = SI<'transmittance'>;
 /** Thermal resistance R, m²·K/W. */
-export type SquareMetreKelvinPerWatt = Brand<number, 'm²·K/W'>;
+export type SquareMetreKelvinPerWatt = SI<'resistance'>;
 /** Linear thermal transmittance ψ, W/(m·K) (same dimension as λ, different meaning). */
-export type PsiValue = Brand<number, 'ψ W/(m·K)'>;
+export type PsiValue = SI<'psi'>;
 /** Point thermal transmittance χ, W/K. */
-export type ChiValue = Brand<number, 'W/K'>;
+export type ChiValue = SI<'chi'>;
 
 /**
  * A quantity's shown symbols and factors (SI value of one shown unit) per system, for a display table;

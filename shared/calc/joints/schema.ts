@@ -1,4 +1,5 @@
 import { traceStepSchema } from '@shared/calc/trace';
+import type { Unbranded } from '@shared/units/brands';
 import { z } from 'zod';
 
 /**
@@ -16,10 +17,12 @@ const metres = (what: string, max: number, min = 0.001) =>
     .number()
     .min(min, `at least ${min} m — less is a typing or unit slip`)
     .max(max)
-    .describe(`${what}, m (at least ${min} m, at most ${max} m)`);
+    .describe(`${what}, m (at least ${min} m, at most ${max} m)`)
+    .brand<'m'>();
 const metresOrZero = (what: string, max: number) =>
-  z.number().nonnegative().max(max).describe(`${what}, m (0 to ${max} m)`);
-const celsius = (what: string) => z.number().min(-80).max(120).describe(`${what}, °C (−80 to 120 °C)`);
+  z.number().nonnegative().max(max).describe(`${what}, m (0 to ${max} m)`).brand<'m'>();
+const celsius = (what: string) =>
+  z.number().min(-80).max(120).describe(`${what}, °C (−80 to 120 °C)`).brand<'°C'>();
 
 export const JOINT_TYPES = ['panel_vertical', 'panel_horizontal', 'perimeter', 'corner', 'other'] as const;
 export const jointTypeSchema = z.enum(JOINT_TYPES).describe('Where the joint sits in the wall');
@@ -158,12 +161,15 @@ export const jointScheduleResultSchema = z.object({
 
 export type JointType = z.infer<typeof jointTypeSchema>;
 export type MovementClass = z.infer<typeof movementClassSchema>;
-export type JointSide = z.infer<typeof jointSideSchema>;
-export type TemperatureRange = z.infer<typeof temperatureRangeSchema>;
-export type InstallationTemperature = z.infer<typeof installationTemperatureSchema>;
+export type JointSide = Unbranded<z.infer<typeof jointSideSchema>>;
+export type TemperatureRange = Unbranded<z.infer<typeof temperatureRangeSchema>>;
+export type InstallationTemperature = Unbranded<z.infer<typeof installationTemperatureSchema>>;
 export type BackerCell = (typeof BACKER_CELLS)[number];
-export type JointInput = z.infer<typeof jointInputSchema>;
-export type JointScheduleInput = z.infer<typeof jointScheduleInputSchema>;
+/** What the schema parses: SI by type (lengths `Metre`, temperatures `Celsius` — D-028). */
+export type JointInputSI = z.infer<typeof jointInputSchema>;
+/** The engine's joint: the same shape with the SI brands off. */
+export type JointInput = Unbranded<JointInputSI>;
+export type JointScheduleInput = Unbranded<z.infer<typeof jointScheduleInputSchema>>;
 export type Backer = z.infer<typeof backerSchema>;
 export type JointResult = z.infer<typeof jointResultSchema>;
 export type JointScheduleResult = z.infer<typeof jointScheduleResultSchema>;

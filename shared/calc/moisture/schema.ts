@@ -1,6 +1,6 @@
 import { heatFlowSchema, layerSchema } from '@shared/calc/thermal/schema';
 import { traceStepSchema } from '@shared/calc/trace';
-import { PERM_0C_TO_SI, PERM_23C_TO_SI, QUANTITIES } from '@shared/units';
+import { PERM_0C_TO_SI, PERM_23C_TO_SI, QUANTITIES, type Unbranded } from '@shared/units';
 import { trimmedFixed } from '@shared/units/rounding';
 import { z } from 'zod';
 
@@ -71,7 +71,8 @@ export const vapourSchema = z
 /** The thermal layer (same schema as the thermal calculation) with its vapour data. */
 export const moistureLayerSchema = layerSchema.and(z.object({ vapour: vapourSchema }));
 
-const temperature = (what: string) => z.number().min(-60).max(60).describe(`${what}, °C (−60 to 60)`);
+const temperature = (what: string) =>
+  z.number().min(-60).max(60).describe(`${what}, °C (−60 to 60)`).brand<'°C'>();
 const relativeHumidity = (what: string) =>
   z.number().min(0).max(1).describe(`${what}, fraction 0–1 (0.5 = 50 %)`);
 
@@ -255,10 +256,13 @@ export const moistureResultSchema = z.object({
 });
 
 export type Vapour = z.infer<typeof vapourSchema>;
-export type MoistureLayer = z.infer<typeof moistureLayerSchema>;
-export type Interior = z.infer<typeof interiorSchema>;
-export type MonthClimate = z.infer<typeof monthClimateSchema>;
-export type MoistureInput = z.infer<typeof moistureInputSchema>;
+export type MoistureLayer = Unbranded<z.infer<typeof moistureLayerSchema>>;
+export type Interior = Unbranded<z.infer<typeof interiorSchema>>;
+export type MonthClimate = Unbranded<z.infer<typeof monthClimateSchema>>;
+/** What the schema parses: SI by type (layers as the thermal schema, temperatures `Celsius` — D-028). */
+export type MoistureInputSI = z.infer<typeof moistureInputSchema>;
+/** The engine's input: the same shape with the SI brands off. */
+export type MoistureInput = Unbranded<MoistureInputSI>;
 export type MoistureNode = z.infer<typeof nodeSchema>;
 export type MoistureLayerResult = z.infer<typeof moistureLayerResultSchema>;
 export type MonthResult = z.infer<typeof monthResultSchema>;

@@ -1,5 +1,7 @@
+import { computedBridgeSchema } from '@shared/calc/bridge/computed';
 import { valueSourceSchema } from '@shared/calc/source';
 import { traceStepSchema } from '@shared/calc/trace';
+import type { Unbranded } from '@shared/units/brands';
 import { z } from 'zod';
 
 /**
@@ -30,14 +32,16 @@ const thickness = z
   .number()
   .min(MIN_THICKNESS)
   .max(2)
-  .describe('Layer thickness d, m (at least 0.000001 m = 0.001 mm, at most 2 m)');
+  .describe('Layer thickness d, m (at least 0.000001 m = 0.001 mm, at most 2 m)')
+  .brand<'m'>();
 const conductivity = z
   .number()
   .min(MIN_CONDUCTIVITY)
   .max(1000)
   .describe(
     'Design thermal conductivity λ, W/(m·K) (at least 0.001 — below vacuum insulation panels — at most 1000)',
-  );
+  )
+  .brand<'W/(m·K)'>();
 
 export const homogeneousLayerSchema = z.object({
   kind: z.literal('homogeneous'),
@@ -59,7 +63,8 @@ export const resistanceLayerSchema = z.object({
     .number()
     .min(0.001, 'at least 0.001 m²·K/W — a smaller declared R is a typing or unit slip')
     .max(50)
-    .describe('Declared thermal resistance R, m²·K/W (at least 0.001, at most 50)'),
+    .describe('Declared thermal resistance R, m²·K/W (at least 0.001, at most 50)')
+    .brand<'m²·K/W'>(),
   thickness: thickness
     .optional()
     .describe(
@@ -76,7 +81,8 @@ export const airLayerSchema = z.object({
     .max(0.3)
     .describe(
       'Air layer thickness in the heat-flow direction, m (at least 0.000001 m, at most 0.3 m — ISO 6946 Table 8)',
-    ),
+    )
+    .brand<'m'>(),
   ventilation: z
     .enum(['unventilated', 'slightly', 'well'])
     .describe('ISO 6946:2017 §6.9: unventilated, slightly ventilated, or well ventilated'),
@@ -120,16 +126,18 @@ export const framedLayerSchema = z.object({
     .number()
     .min(MIN_FLANGE_WIDTH)
     .max(0.5)
-    .optional()
-    .describe('Metal flange width m, m (at least 0.001 m = 1 mm, at most 0.5 m) — needed by the zone method'),
+    .describe('Metal flange width m, m (at least 0.001 m = 1 mm, at most 0.5 m) — needed by the zone method')
+    .brand<'m'>()
+    .optional(),
   spacing: z
     .number()
     .min(MIN_SPACING)
     .max(5)
-    .optional()
     .describe(
       'Member spacing on centre s, m (at least 0.01 m = 10 mm, at most 5 m) — needed by the zone method',
-    ),
+    )
+    .brand<'m'>()
+    .optional(),
 });
 
 export const layerSchema = z.discriminatedUnion('kind', [
@@ -165,10 +173,16 @@ const spacing = (what: string) =>
     .number()
     .min(MIN_SPACING)
     .max(100)
-    .describe(`${what} spacing, m (at least 0.01 m = 10 mm, at most 100 m)`);
+    .describe(`${what} spacing, m (at least 0.01 m = 10 mm, at most 100 m)`)
+    .brand<'m'>();
 
-/** Where χ or ψ came from (test report, catalogue, calculation), when it was taken from a firm library. */
-const source = valueSourceSchema.optional();
+/**
+ * Where χ or ψ came from (test report, catalogue, calculation), when it was taken from a firm library; a value
+ * computed by the bridge solver keeps its detail, solve and map (`computed`).
+ */
+const source = valueSourceSchema
+  .extend({ computed: computedBridgeSchema.optional().describe('The solve that gave the value') })
+  .optional();
 
 export const pointBridgeBySpacingSchema = z.object({
   kind: z.literal('point'),
@@ -210,12 +224,14 @@ export const fastenerBridgeSchema = z.object({
     .number()
     .min(MIN_CONDUCTIVITY, `at least ${MIN_CONDUCTIVITY} W/(m·K) — below any fastener material`)
     .max(1000)
-    .describe(`Fastener thermal conductivity λ_f, W/(m·K) (at least ${MIN_CONDUCTIVITY}, at most 1000)`),
+    .describe(`Fastener thermal conductivity λ_f, W/(m·K) (at least ${MIN_CONDUCTIVITY}, at most 1000)`)
+    .brand<'W/(m·K)'>(),
   diameter: z
     .number()
     .min(MIN_FASTENER_DIAMETER)
     .max(0.05)
-    .describe('Fastener shank diameter, m (at least 0.001 m = 1 mm, at most 0.05 m)'),
+    .describe('Fastener shank diameter, m (at least 0.001 m = 1 mm, at most 0.05 m)')
+    .brand<'m'>(),
   countPerArea,
   penetration: z
     .enum(['full', 'recessed'])
@@ -333,17 +349,20 @@ export const thermalResultSchema = z.object({
   warnings: z.array(z.string()),
 });
 
-export type HomogeneousLayer = z.infer<typeof homogeneousLayerSchema>;
-export type ResistanceLayer = z.infer<typeof resistanceLayerSchema>;
-export type AirLayer = z.infer<typeof airLayerSchema>;
-export type FramedLayer = z.infer<typeof framedLayerSchema>;
-export type FramedSection = z.infer<typeof framedSectionSchema>;
-export type Layer = z.infer<typeof layerSchema>;
+/** What the schemas parse: SI by type (lengths `Metre`, λ, R branded — D-028). */
+export type ThermalInputSI = z.infer<typeof thermalInputSchema>;
+/** The engine's types: the same shapes with the SI brands off (plain numbers in the loops; χ, ψ stay branded). */
+export type HomogeneousLayer = Unbranded<z.infer<typeof homogeneousLayerSchema>>;
+export type ResistanceLayer = Unbranded<z.infer<typeof resistanceLayerSchema>>;
+export type AirLayer = Unbranded<z.infer<typeof airLayerSchema>>;
+export type FramedLayer = Unbranded<z.infer<typeof framedLayerSchema>>;
+export type FramedSection = Unbranded<z.infer<typeof framedSectionSchema>>;
+export type Layer = Unbranded<z.infer<typeof layerSchema>>;
 export type HeatFlow = z.infer<typeof heatFlowSchema>;
 export type Ventilation = AirLayer['ventilation'];
-export type Bridge = z.infer<typeof bridgeSchema>;
-export type FastenerBridge = z.infer<typeof fastenerBridgeSchema>;
-export type ThermalInput = z.infer<typeof thermalInputSchema>;
+export type Bridge = Unbranded<z.infer<typeof bridgeSchema>>;
+export type FastenerBridge = Unbranded<z.infer<typeof fastenerBridgeSchema>>;
+export type ThermalInput = Unbranded<ThermalInputSI>;
 export type MethodName = z.infer<typeof methodNameSchema>;
 export type ThermalResult = z.infer<typeof thermalResultSchema>;
 export type BridgeResult = ThermalResult['bridges'][number];

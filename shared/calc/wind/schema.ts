@@ -1,4 +1,5 @@
 import { traceStepSchema } from '@shared/calc/trace';
+import type { Unbranded } from '@shared/units/brands';
 import { z } from 'zod';
 
 /**
@@ -42,7 +43,8 @@ const metres = (what: string, min: number, max: number) =>
     .number()
     .min(min, `at least ${min} m — less is a typing or unit slip`)
     .max(max)
-    .describe(`${what}, m (at least ${min}, at most ${max})`);
+    .describe(`${what}, m (at least ${min}, at most ${max})`)
+    .brand<'m'>();
 
 export const windSiteSchema = z.object({
   edition: windEditionSchema,
@@ -94,7 +96,8 @@ const pascals = (what: string) =>
     .number()
     .min(MIN_ALLOWABLE_PRESSURE, `at least ${MIN_ALLOWABLE_PRESSURE} Pa — less is a typing or unit slip`)
     .max(100_000)
-    .describe(`${what}, Pa (at least ${MIN_ALLOWABLE_PRESSURE}, at most 100 000)`);
+    .describe(`${what}, Pa (at least ${MIN_ALLOWABLE_PRESSURE}, at most 100 000)`)
+    .brand<'Pa'>();
 
 export const loadSpanRowSchema = z.object({
   span: metres('Panel span (girt spacing)', MIN_SPAN, 10),
@@ -265,13 +268,15 @@ export const windScheduleResultSchema = z.object({
 export type WindEdition = z.infer<typeof windEditionSchema>;
 export type Exposure = z.infer<typeof exposureSchema>;
 export type Enclosure = z.infer<typeof enclosureSchema>;
-export type WindSite = z.infer<typeof windSiteSchema>;
+export type WindSite = Unbranded<z.infer<typeof windSiteSchema>>;
 export type SpanCondition = z.infer<typeof spanConditionSchema>;
-export type LoadSpanRow = z.infer<typeof loadSpanRowSchema>;
-export type LoadSpanTable = z.infer<typeof loadSpanTableSchema>;
-export type Clip = z.infer<typeof clipSchema>;
-export type Panel = z.infer<typeof panelSchema>;
-export type WindScheduleInput = z.infer<typeof windScheduleInputSchema>;
+export type LoadSpanRow = Unbranded<z.infer<typeof loadSpanRowSchema>>;
+export type LoadSpanTable = Unbranded<z.infer<typeof loadSpanTableSchema>>;
+export type Clip = Unbranded<z.infer<typeof clipSchema>>;
+export type Panel = Unbranded<z.infer<typeof panelSchema>>;
+/** What the schema parses: lengths `Metre`, the table's pressures `Pascal` (D-028). */
+export type WindScheduleInputSI = z.infer<typeof windScheduleInputSchema>;
+export type WindScheduleInput = Unbranded<WindScheduleInputSI>;
 export type VelocityResult = z.infer<typeof velocityResultSchema>;
 export type SpanCheckName = z.infer<typeof spanCheckNameSchema>;
 export type TableStatus = z.infer<typeof tableStatusSchema>;
@@ -363,8 +368,9 @@ export const designSpacingResultSchema = z.object({
   trace: z.array(traceStepSchema),
 });
 
-export type DesignSpacings = z.infer<typeof designSpacingsSchema>;
-export type WindDesignInput = z.infer<typeof windDesignInputSchema>;
+export type DesignSpacings = Unbranded<z.infer<typeof designSpacingsSchema>>;
+export type WindDesignInputSI = z.infer<typeof windDesignInputSchema>;
+export type WindDesignInput = Unbranded<WindDesignInputSI>;
 export type DesignStatus = z.infer<typeof designStatusSchema>;
 export type DesignCheckName = z.infer<typeof designCheckNameSchema>;
 export type DesignCheck = z.infer<typeof designCheckSchema>;

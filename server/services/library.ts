@@ -1,3 +1,4 @@
+import type { ComputedBridge } from '@shared/calc/bridge/computed';
 import type {
   BridgeValue,
   bridgeValueInputSchema,
@@ -129,6 +130,7 @@ export function createLibraryService(
         sourceType: r.sourceType as BridgeValue['sourceType'],
         source: r.source,
         notes: r.notes,
+        ...(r.computed ? { computed: r.computed as ComputedBridge } : {}),
         createdAt: r.createdAt.toISOString(),
       }));
     },
@@ -138,7 +140,7 @@ export function createLibraryService(
     ): Promise<BridgeValue> {
       const [r] = await db
         .insert(orgBridgeValues)
-        .values({ organisationId, ...input })
+        .values({ organisationId, ...input, computed: input.computed ?? null })
         .returning();
       return { ...input, id: r!.id, createdAt: r!.createdAt.toISOString() };
     },

@@ -1,8 +1,11 @@
-import { z } from 'zod';
+import type { z } from 'zod';
 import { CalcInputError } from '../errors';
 import { EDGE_TOLERANCE } from './grid';
-import { type BridgeBox, type BridgeModelInput, MIN_EDGE, MIN_LAMBDA } from './schema';
-import { type Box, carve, clearU, layerFaces, refuseAbove, wallSchema } from './templates';
+import type { BridgeBox, BridgeModelInput } from './schema';
+import { type EdgeTemplate, edgeTemplateSchema } from './template-schema';
+import { type Box, carve, clearU, layerFaces, refuseAbove } from './templates';
+
+export type { EdgeTemplate };
 
 /*
  * Linear edges of a wall built from its layers (outside → inside), 2-D per metre of edge → ψ, W/(m·K), with
@@ -11,34 +14,6 @@ import { type Box, carve, clearU, layerFaces, refuseAbove, wallSchema } from './
  * §5.2.2: at least 1 m from the central element) to an adiabatic cut-off. Every inside surface takes rsi.
  */
 
-const size = (what: string) => z.number().min(MIN_EDGE).max(5).describe(`${what}, m`);
-const lambda = z.number().min(MIN_LAMBDA).max(5000).describe('λ, W/(m·K)');
-const edgeWallSchema = wallSchema.omit({ crosses: true, metalLambda: true }).extend({
-  flank: size('Length of each flanking wall to its cut-off').default(1),
-});
-
-export const edgeTemplateSchema = z.discriminatedUnion('kind', [
-  edgeWallSchema.extend({
-    kind: z.literal('slab'),
-    slab: z.object({
-      from: z.number().int().min(0).max(39).describe('The slab edge sits at the outside face of this layer'),
-      thickness: size('Slab thickness'),
-      lambda,
-      reach: size('Slab length inside the wall to its cut-off').default(1),
-    }),
-  }),
-  edgeWallSchema.extend({ kind: z.literal('corner') }),
-  edgeWallSchema.extend({
-    kind: z.literal('opening'),
-    frame: z.object({
-      width: size('Frame width seen from outside (to the glazing, an adiabatic cut)'),
-      depth: size('Frame depth through the wall'),
-      offset: z.number().min(0).max(5).describe('Frame outside face behind the wall outside face, m'),
-      lambda,
-    }),
-  }),
-]);
-export type EdgeTemplate = z.input<typeof edgeTemplateSchema>;
 type Edge = z.infer<typeof edgeTemplateSchema>;
 
 type Region = { name: string; side: 'inside' | 'outside'; min: number[]; max: number[] };

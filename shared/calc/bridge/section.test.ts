@@ -3,6 +3,7 @@ import {
   bandEdges,
   bandOf,
   bandRects,
+  coarseSection,
   isotherm,
   isotherms,
   PALETTE,
@@ -104,5 +105,20 @@ describe('map palette and bands', () => {
     expect(sectionOf({ grid, field: [1, 2, 3, 4, 5, 6] })?.values).toEqual([3, 4]);
     expect(sectionOf({ grid: { ...grid, z: [0, 1] }, field: [7, 8] })?.values).toEqual([7, 8]);
     expect(sectionOf({ grid, field: null })).toBeNull();
+  });
+});
+
+describe('the stored map of a computed bridge', () => {
+  it('a uniform grid of at most n cells along the longer side, each the solve cell at its centre', () => {
+    // 200 × 50 cells of 5 mm, θ = 20·x (x in m): n = 40 gives 40 × 10 cells of 25 mm (derived).
+    const s = sectionFrom(200, 50, 0.005, (x, y) => (y > 0.2 ? null : 20 * x));
+    const c = coarseSection(s, 40);
+    expect(c.x).toHaveLength(41);
+    expect(c.y).toHaveLength(11);
+    expect(c.values).toHaveLength(400);
+    // The cell centred at x = 0.0125 lies in the fine cell 2 (0.010–0.015, centre 0.0125): θ = 0.25 °C.
+    expect(c.values[0]).toBeCloseTo(0.25, 3);
+    // Rows above y = 0.2 hold no material.
+    expect(c.values.slice(360)).toEqual(Array(40).fill(null));
   });
 });

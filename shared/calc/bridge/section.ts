@@ -160,3 +160,38 @@ export function isotherm(section: Section, level: number): Segment[] {
 /** Every band edge's isotherm, warm to cold. */
 export const isotherms = (section: Section, warm: number, cold: number) =>
   bandEdges(warm, cold).map((level) => ({ level, segments: isotherm(section, level) }));
+
+/** Index of the cell of `edges` that holds v (edges ascending; the last cell for v at the top edge). */
+function cellAt(edges: number[], v: number): number {
+  let lo = 0;
+  let hi = edges.length - 2;
+  while (lo < hi) {
+    const mid = (lo + hi + 1) >> 1;
+    if (edges[mid]! <= v) lo = mid;
+    else hi = mid - 1;
+  }
+  return lo;
+}
+
+/**
+ * The section on a uniform grid of near-square cells, at most `n` along the longer side (the stored map of a
+ * computed bridge): each cell takes the temperature of the solve's cell at its centre, to 0.001 K.
+ */
+export function coarseSection(s: Section, n: number): Section {
+  const nx = s.x.length - 1;
+  const [x0, x1, y0, y1] = [s.x[0]!, s.x[nx]!, s.y[0]!, s.y[s.y.length - 1]!];
+  const size = Math.max(x1 - x0, y1 - y0) / n;
+  const cx = Math.min(n, Math.max(1, Math.round((x1 - x0) / size)));
+  const cy = Math.min(n, Math.max(1, Math.round((y1 - y0) / size)));
+  const x = Array.from({ length: cx + 1 }, (_, i) => x0 + ((x1 - x0) * i) / cx);
+  const y = Array.from({ length: cy + 1 }, (_, j) => y0 + ((y1 - y0) * j) / cy);
+  const values: (number | null)[] = [];
+  for (let j = 0; j < cy; j++) {
+    const fj = cellAt(s.y, (y[j]! + y[j + 1]!) / 2);
+    for (let i = 0; i < cx; i++) {
+      const v = s.values[fj * nx + cellAt(s.x, (x[i]! + x[i + 1]!) / 2)];
+      values.push(v === null || v === undefined ? null : Math.round(v * 1000) / 1000);
+    }
+  }
+  return { x, y, values };
+}

@@ -12,18 +12,9 @@ let receiving = 0;
 /** How many uploads this process is receiving now (tests). */
 export const uploadsInProgress = () => receiving;
 
-const mb = UPLOAD_LIMITS.maxFileBytes / (1024 * 1024);
-const limits = {
-  fileSize: UPLOAD_LIMITS.maxFileBytes,
-  files: UPLOAD_LIMITS.maxFiles,
-  fields: 5,
-  fieldSize: 10_000,
-  parts: UPLOAD_LIMITS.maxFiles + 5,
-  headerPairs: 50,
-};
+/** Limits of every upload beside the file size and count, which each route may set. */
+const limits = { fields: 5, fieldSize: 10_000, headerPairs: 50 };
 const refusals: Record<string, [number, string]> = {
-  LIMIT_FILE_SIZE: [413, `a file is larger than ${mb} MB; nothing was stored`],
-  LIMIT_FILE_COUNT: [413, `at most ${UPLOAD_LIMITS.maxFiles} files at once; nothing was stored`],
   LIMIT_PART_COUNT: [413, 'too many parts in the upload; nothing was stored'],
   LIMIT_FIELD_COUNT: [400, 'too many form fields; nothing was stored'],
   LIMIT_FIELD_KEY: [400, 'a form field name is too long; nothing was stored'],
@@ -31,17 +22,31 @@ const refusals: Record<string, [number, string]> = {
   LIMIT_UNEXPECTED_FILE: [400, 'files go in the field “files”; nothing was stored'],
 };
 
+/** Multer's refusal in our words, with the limits of this upload. */
+function refusal(code: string, max: { fileBytes: number; files: number }): [number, string] | undefined {
+  if (code === 'LIMIT_FILE_SIZE')
+    return [413, `a file is larger than ${max.fileBytes / (1024 * 1024)} MB; nothing was stored`];
+  if (code === 'LIMIT_FILE_COUNT') return [413, `at most ${max.files} files at once; nothing was stored`];
+  return refusals[code];
+}
+
 /**
  * A multer storage engine that streams each file to `handler.store` (multer keeps the limits, the order and
  * the removal of what was stored when the upload fails). The handler reads a stream of its own: a file over
  * the size limit fails it at once, and whatever the handler leaves unread is drained.
  */
-function streamingEngine<T>(handler: FileHandler<T>, failures: Set<unknown>): multer.StorageEngine {
+function streamingEngine<T>(
+  handler: FileHandler<T>,
+  failures: Set<unknown>,
+  fileBytes: number,
+): multer.StorageEngine {
   return {
     _handleFile(_req, file, done) {
       const stream = new PassThrough();
       file.stream.on('limit', () =>
-        stream.destroy(new HttpError(413, 'limit_file_size', refusals.LIMIT_FILE_SIZE![1])),
+        stream.destroy(
+          new HttpError(413, 'limit_file_size', refusal('LIMIT_FILE_SIZE', { fileBytes, files: 0 })![1]),
+        ),
       );
       file.stream.on('error', (err) => stream.destroy(err));
       stream.on('close', () => {
@@ -69,7 +74,14 @@ function streamingEngine<T>(handler: FileHandler<T>, failures: Set<unknown>): mu
  * number of files and the other parts, and on the uploads received at once. Called by a route handler, i.e.
  * after the caller's permission has been checked.
  */
-export function receiveUpload(req: Request, res: Response): ReceiveFiles {
+export function receiveUpload(
+  req: Request,
+  res: Response,
+  max: { fileBytes: number; files: number } = {
+    fileBytes: UPLOAD_LIMITS.maxFileBytes,
+    files: UPLOAD_LIMITS.maxFiles,
+  },
+): ReceiveFiles {
   return <T>(handler: FileHandler<T>) => {
     if (!req.is('multipart/form-data'))
       return Promise.reject(
@@ -92,18 +104,18 @@ export function receiveUpload(req: Request, res: Response): ReceiveFiles {
     receiving++;
     const failures = new Set<unknown>();
     const parser = multer({
-      storage: streamingEngine(handler, failures),
-      limits,
+      storage: streamingEngine(handler, failures, max.fileBytes),
+      limits: { ...limits, fileSize: max.fileBytes, files: max.files, parts: max.files + 5 },
       // Names arrive as UTF-8 from browsers; they are only ever displayed (see server/storage/files.ts).
       defParamCharset: 'utf8',
-    }).array('files', UPLOAD_LIMITS.maxFiles);
+    }).array('files', max.files);
     return new Promise<T[]>((resolve, reject) => {
       parser(req, res, (err: unknown) => {
         receiving--;
         // The handler's own refusals (type, room, storage) as they are; multer's limits in our words.
         if (failures.has(err) || err instanceof HttpError || err instanceof DomainError) return reject(err);
         if (err instanceof multer.MulterError) {
-          const [status, message] = refusals[err.code] ?? [
+          const [status, message] = refusal(err.code, max) ?? [
             400,
             'the upload could not be read; nothing was stored',
           ];

@@ -5,6 +5,7 @@ import { checkRunRoutes } from './check-runs';
 import { criteriaRoutes } from './criteria';
 import { firmMemberRoutes } from './firm-members';
 import { healthRoutes } from './health';
+import { inspectionRoutes } from './inspections';
 import { libraryRoutes } from './library';
 import { meRoutes } from './me';
 import { memberRoutes } from './members';
@@ -27,5 +28,6 @@ export const apiRoutes: AnyRoute[] = [
   ...checkRunRoutes,
   ...sheetRoutes,
   ...submittalRoutes,
+  ...inspectionRoutes,
   ...calcRoutes,
 ];

@@ -10,6 +10,7 @@ import { createCheckRunService } from './check-runs';
 import { createCriteriaService } from './criteria';
 import { conflict } from './errors';
 import { createFirmMemberService } from './firm-members';
+import { createInspectionService } from './inspections';
 import { createLibraryService } from './library';
 import { createMeService } from './me';
 import { createMemberService } from './members';
@@ -54,6 +55,7 @@ export function createServices(
     checkRuns,
     sheets,
     submittals: createSubmittalService(db, config, mailer, storage, sheets),
+    inspections: createInspectionService(db, config, mailer, storage, sheets),
     storage,
   };
 }

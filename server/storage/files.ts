@@ -59,18 +59,31 @@ export function withTypeExtension(name: string, contentType: string): string {
   return same ? name : `${name}.${ext}`;
 }
 
-/** Detects the type of an upload from its bytes; refuses what is empty or not on the allow-list. */
-export async function detectAllowedType(bytes: Buffer, name: string): Promise<string> {
+/** "PDF, PNG, JPEG or DWG": the accepted types in words (the label's first word). */
+function typeWords(types: readonly string[]): string {
+  const words = types.map((t) => (ALLOWED_TYPES[t]?.label ?? t).split(' ')[0]!);
+  return words.length < 2 ? (words[0] ?? '') : `${words.slice(0, -1).join(', ')} or ${words.at(-1)}`;
+}
+
+/** Photos: images only, by their bytes. */
+export const IMAGE_TYPES: readonly string[] = ['image/png', 'image/jpeg'];
+
+/** Detects the type of an upload from its bytes; refuses what is empty or not on the allow-list (`allowed`: a narrower one). */
+export async function detectAllowedType(
+  bytes: Buffer,
+  name: string,
+  allowed: readonly string[] = Object.keys(ALLOWED_TYPES),
+): Promise<string> {
   if (bytes.length === 0)
     throw new DomainError('malformed', 'empty_file', `“${name}” is empty (0 bytes): nothing was stored`, {
       files: `${name}: empty file`,
     });
   const detected = await fileTypeFromBuffer(bytes);
-  if (!detected || !ALLOWED_TYPES[detected.mime])
+  if (!detected || !allowed.includes(detected.mime))
     throw new DomainError(
       'unsupported',
       'unsupported_type',
-      `“${name}” is ${detected ? `a ${detected.ext.toUpperCase()} file` : 'not a recognised file'} by its content; accepted: PDF, PNG, JPEG or DWG. Nothing was stored.`,
+      `“${name}” is ${detected ? `a ${detected.ext.toUpperCase()} file` : 'not a recognised file'} by its content; accepted: ${typeWords(allowed)}. Nothing was stored.`,
       { files: `${name}: type not accepted` },
     );
   return detected.mime;
@@ -115,7 +128,7 @@ export interface StoredUpload {
  */
 export function fileIntake(
   storage: ObjectStore,
-  opts: { keyPrefix: string; room: number; full: () => DomainError },
+  opts: { keyPrefix: string; room: number; full: () => DomainError; allowed?: readonly string[] },
 ) {
   let taken = 0;
   return {
@@ -135,7 +148,7 @@ export function fileIntake(
       async function judge(self: Transform) {
         const head = Buffer.concat(held);
         held = [];
-        judged(await detectAllowedType(head, name));
+        judged(await detectAllowedType(head, name, opts.allowed));
         checked = true;
         self.push(head);
       }

@@ -338,3 +338,16 @@ export type InspectionTemplate = z.infer<typeof inspectionTemplateSchema>;
 export const inspectionTemplateUpdateSchema = inspectionTemplateInputSchema.extend({
   revision: int4().optional().describe('The revision read (absent: creating the firm’s first template)'),
 });
+
+// ------------------------------------------------------------------------------------------------ answers of the routes
+
+/** An answered item, and the deficiency its failure opened (null: none opened by this answer). */
+export const itemAnswerResultSchema = z.object({
+  item: inspectionItemSchema,
+  openedDeficiency: deficiencySchema.nullable(),
+});
+export type ItemAnswerResult = z.infer<typeof itemAnswerResultSchema>;
+
+/** Photos are images (PNG or JPEG by their bytes), at most this large each, a few per upload. */
+export const PHOTO_LIMITS = { maxFileBytes: 15 * 1024 * 1024, maxFiles: 5 } as const;
+export const photoUploadResultSchema = z.object({ photos: z.array(photoSchema), item: inspectionItemSchema });

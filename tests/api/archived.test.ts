@@ -3,6 +3,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../server/routes';
 import { createTestApp, demoEmail, type TestApp, testDatabases } from '../setup/app';
+import { inspectionParams } from '../setup/inspections';
 
 /**
  * An archived project is a closed record: every write under it answers 409 `archived` — the project's parts,
@@ -55,6 +56,7 @@ describe.each(testDatabases())('writes to an archived project on %s', (kind) => 
     token = (await t.mail())
       .find((m) => m.to.includes('late.joiner@example.com'))!
       .text.match(/\/invite\/([\w-]+)/)![1]!;
+    Object.assign(params, await inspectionParams(t, params.projectId));
     expect((await owner.post(`/api/projects/${params.projectId}/archive`)).status).toBe(200);
   });
   afterAll(async () => {

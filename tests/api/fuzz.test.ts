@@ -1,12 +1,15 @@
+import { can, PERMISSIONS } from '@shared/auth/permissions';
 import { apiErrorSchema } from '@shared/schemas/common';
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AnyRoute } from '../../server/http/route';
 import { apiRoutes } from '../../server/routes';
 import { createTestApp, demoEmail, type TestApp } from '../setup/app';
+import { inspectionParams } from '../setup/inspections';
 
 /**
- * Fuzzing every route that takes a body (calculations and forms), signed in as the demo owner: arbitrary
+ * Fuzzing every route that takes a body (calculations and forms), signed in as the demo owner (or, for a
+ * field-inspection step the owner may not take, the first role that may): arbitrary
  * JSON, and the documented example with one leaf replaced by something hostile. Never a 5xx; a success
  * body always matches the documented response schema (so no NaN/Infinity smuggled in as null); every
  * error has the documented shape. The case count is printed at the end.
@@ -66,6 +69,13 @@ function replaceAt(value: unknown, path: (string | number)[], replacement: unkno
 
 let totalCases = 0;
 
+/** The demo owner, or for a project action the owner may not take (field inspections) the first role that may. */
+function fuzzAccount(route: AnyRoute): string {
+  if (route.access.kind !== 'project' || can('owner', route.access.action)) return 'admin';
+  const role = PERMISSIONS[route.access.action][0]!;
+  return role === 'envelope_consultant' ? 'consultant' : role;
+}
+
 describe('fuzzing every route with a body', () => {
   let t: TestApp;
   const params: Record<string, string> = {};
@@ -92,6 +102,7 @@ describe('fuzzing every route with a body', () => {
         .post(`/api/projects/${params.projectId}/submittals`)
         .send({ title: 'Fuzzed submittal', specSection: '07 42 13', specTitle: 'Metal Wall Panels' })
     ).body.id;
+    Object.assign(params, await inspectionParams(t, params.projectId));
   });
   afterAll(async () => {
     console.log(`fuzz: ${totalCases} HTTP cases run`);
@@ -104,7 +115,7 @@ describe('fuzzing every route with a body', () => {
   it.each(bodyRoutes.map((r) => [`${r.method.toUpperCase()} ${r.path}`, r] as const))(
     '%s',
     async (_n, route: AnyRoute) => {
-      const agent = await t.as(demoEmail('admin'));
+      const agent = await t.as(demoEmail(fuzzAccount(route)));
       const path = `/api${route.path.replace(/:(\w+)/g, (_m, p: string) => params[p] ?? 'x')}`;
       const success = Object.entries(route.responses).find(([s]) => Number(s) < 300)?.[1]?.schema;
       const example = route.example ?? {};

@@ -2,6 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { apiRoutes } from '../../server/routes';
 import { createTestApp, demoEmail, type TestApp, testDatabases } from '../setup/app';
+import { inspectionParams } from '../setup/inspections';
 
 /**
  * The permission matrix, written out by hand and independent of the table in shared/auth: for every route
@@ -21,6 +22,9 @@ const ALL: Role[] = [...PROJECT_ROLES];
 /** The submitting side of submittals, and the reviewing side (reviewers must also be named on the submittal). */
 const SUBMITTING: Role[] = ['owner', 'subcontractor'];
 const REVIEWING: Role[] = ['architect', 'envelope_consultant', 'engineer'];
+/** Field inspections: the inspectors (accept, reopen), and with the crew (fill in, photograph). */
+const INSPECTING: Role[] = ['envelope_consultant', 'engineer'];
+const INSPECTING_AND_CREW: Role[] = [...INSPECTING, 'subcontractor'];
 /**
  * `firmMember` / `firmEditor` / `firmAdmin`: the firm's own data by firm role (any role; editor or admin;
  * admin); people outside the firm get 404.
@@ -137,6 +141,18 @@ const EXPECTED: Record<string, Expectation> = {
     'engineer',
     'subcontractor',
   ],
+  'GET /projects/:projectId/inspections': ALL,
+  'POST /projects/:projectId/inspections': INSPECTING_AND_CREW,
+  'GET /inspections/:inspectionId': ALL,
+  'GET /inspections/:inspectionId/report.pdf': ALL,
+  'PUT /inspection-items/:inspectionItemId': INSPECTING_AND_CREW,
+  'POST /inspection-items/:inspectionItemId/photos': INSPECTING_AND_CREW,
+  'GET /inspection-photos/:photoId': ALL,
+  'POST /inspections/:inspectionId/close': ['owner', 'architect', 'envelope_consultant', 'engineer'],
+  'PUT /deficiencies/:deficiencyId': INSPECTING,
+  'POST /deficiencies/:deficiencyId/correct': ['subcontractor'],
+  'POST /deficiencies/:deficiencyId/accept': INSPECTING,
+  'POST /deficiencies/:deficiencyId/reopen': INSPECTING,
 };
 
 /**
@@ -271,6 +287,7 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
         .post(`/api/submittals/${params.submittalId}/files`)
         .attach('files', Buffer.from('%PDF-1.4\n%%EOF\n'), 'specification.pdf')
     ).body.items[0].id;
+    Object.assign(params, await inspectionParams(t, params.projectId));
   });
   afterAll(async () => {
     await t?.close();

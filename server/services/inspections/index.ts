@@ -1,0 +1,43 @@
+import type { Config } from '../../config';
+import type { Db } from '../../db/client';
+import type { Mailer } from '../../mail/mailer';
+import type { ObjectStore } from '../../storage/object-store';
+import type { createSheetService } from '../sheets';
+import { createInspectionNotifications } from './notifications';
+import { createInspectionPhotos } from './photos';
+import { createInspectionQueries } from './queries';
+import { createFieldReports } from './report';
+import { createInspectionWorkflow } from './workflow';
+
+/**
+ * Field inspections (D-025): generated from an assembly revision, answered item by item, photographed, closed;
+ * failed items open deficiencies that go open → corrected → accepted or reopened.
+ *
+ * By workflow: `queries` (reading, the project of each record), `workflow` (create, answer, close, deficiency
+ * steps), `photos` (upload and download), `report` (the field report PDF), `notifications` (the e-mails).
+ */
+export function createInspectionService(
+  db: Db,
+  config: Config,
+  mailer: Mailer,
+  storage: ObjectStore,
+  sheets: ReturnType<typeof createSheetService>,
+) {
+  const q = createInspectionQueries(db);
+  const notify = createInspectionNotifications(db, config, mailer);
+  const photos = createInspectionPhotos(db, config, storage, q);
+  return {
+    get: q.get,
+    list: q.list,
+    item: q.item,
+    deficiency: q.deficiency,
+    projectOf: q.projectOf,
+    projectOfItem: q.projectOfItem,
+    projectOfDeficiency: q.projectOfDeficiency,
+    projectOfPhoto: q.projectOfPhoto,
+    ...createInspectionWorkflow(db, q, notify, sheets),
+    uploadPhotos: photos.upload,
+    photo: photos.file,
+    ...createFieldReports(db, storage, q),
+  };
+}

@@ -1,0 +1,75 @@
+import { createHash } from 'node:crypto';
+import { canonicalJson } from '@shared/checks/canonical';
+import { verificationCode } from '@shared/sheets/verification';
+import type { UnitSystem } from '@shared/units/registry';
+import { asc, eq } from 'drizzle-orm';
+import type { Db } from '../../db/client';
+import { inspectionPhotos, projects, user } from '../../db/schema';
+import { type ReportPhoto, renderFieldReport } from '../../pdf/field-report';
+import type { ObjectStore } from '../../storage/object-store';
+import type { InspectionQueries } from './queries';
+
+/** Photos printed beside each item, and in the whole report (the rest stay in the app). */
+const PHOTOS_PER_ITEM = 2;
+const PHOTOS_PER_REPORT = 80;
+
+async function readAll(body: AsyncIterable<unknown>): Promise<Buffer> {
+  const chunks: Buffer[] = [];
+  for await (const c of body) chunks.push(Buffer.from(c as Uint8Array));
+  return Buffer.concat(chunks);
+}
+
+/**
+ * The field report of an inspection as PDF bytes (server/pdf/field-report.ts). Its code is the first 10 base32
+ * characters of the SHA-256 of the canonical JSON of the inspection as read and its photos' hashes, so the
+ * same content gives the same code and the same bytes.
+ */
+export function createFieldReports(db: Db, storage: ObjectStore, q: InspectionQueries) {
+  return {
+    async report(id: string, userId: string, units?: UnitSystem) {
+      const inspection = await q.get(id);
+      const [[project], [me], rows] = await Promise.all([
+        db.select({ name: projects.name }).from(projects).where(eq(projects.id, inspection.projectId)),
+        db.select({ unitSystem: user.unitSystem }).from(user).where(eq(user.id, userId)),
+        db
+          .select()
+          .from(inspectionPhotos)
+          .where(eq(inspectionPhotos.inspectionId, id))
+          .orderBy(asc(inspectionPhotos.createdAt)),
+      ]);
+      const system: UnitSystem = units ?? (me?.unitSystem === 'IP' ? 'IP' : 'SI');
+      const chosen = inspection.items
+        .flatMap((item) => rows.filter((p) => p.itemId === item.id).slice(0, PHOTOS_PER_ITEM))
+        .slice(0, PHOTOS_PER_REPORT);
+      const photos: ReportPhoto[] = await Promise.all(
+        chosen.map(async (p) => ({
+          itemId: p.itemId,
+          bytes: await readAll((await storage.get(p.storageKey)).body),
+          format: p.contentType === 'image/png' ? ('PNG' as const) : ('JPEG' as const),
+        })),
+      );
+      const hash = createHash('sha256')
+        .update(canonicalJson({ inspection, photos: rows.map((p) => p.sha256) }))
+        .digest('hex');
+      const times = [
+        inspection.createdAt,
+        inspection.closedAt,
+        ...inspection.items.map((i) => i.answeredAt),
+        ...inspection.deficiencies.map((d) => d.updatedAt),
+        ...rows.map((p) => p.createdAt.toISOString()),
+      ].filter((t): t is string => t !== null);
+      const asOf = times.sort().at(-1)!; // ISO times sort as text
+      const code = verificationCode(hash);
+      const pdf = renderFieldReport({
+        inspection,
+        projectName: project?.name ?? '',
+        units: system,
+        photos,
+        hash,
+        code,
+        asOf,
+      });
+      return { pdf, code, filename: `inspection-${inspection.number}-${code}.pdf` };
+    },
+  };
+}

@@ -10,6 +10,9 @@ import {
   inspectionItemSchema,
   inspectionListSchema,
   inspectionSchema,
+  inspectionTemplateAnswerSchema,
+  inspectionTemplateSchema,
+  inspectionTemplateUpdateSchema,
   itemAnswerResultSchema,
   itemAnswerSchema,
   PHOTO_LIMITS,
@@ -295,5 +298,42 @@ export const inspectionRoutes = [
     },
     handler: ({ params, user, body, services }) =>
       services.inspections.reopen(params.deficiencyId, actor(user), body),
+  }),
+  defineRoute({
+    method: 'get',
+    path: '/organisations/:orgId/inspection-template',
+    summary:
+      'The firm’s checklist template (its latest version): items added to every inspection of its projects',
+    tag: 'Inspections',
+    access: { kind: 'organisation', action: 'firm.read' },
+    params: z.object({ orgId: z.uuid() }),
+    responses: {
+      200: { description: 'The template, or null', schema: inspectionTemplateAnswerSchema },
+      ...errors,
+    },
+    handler: async ({ params, services }) => ({
+      template: await services.inspections.template(params.orgId),
+    }),
+  }),
+  defineRoute({
+    method: 'put',
+    path: '/organisations/:orgId/inspection-template',
+    summary:
+      'Save the firm’s checklist template naming the revision read; a version used by an inspection is frozen, so saving it makes the next version',
+    tag: 'Inspections',
+    access: { kind: 'organisation', action: 'firm.write' },
+    params: z.object({ orgId: z.uuid() }),
+    body: inspectionTemplateUpdateSchema,
+    example: { items: [{ group: 'firm', label: 'Site left clean, offcuts removed', designText: '' }] },
+    responses: {
+      200: { description: 'The saved version', schema: inspectionTemplateSchema },
+      ...errors,
+      409: {
+        description: 'A stale or missing revision (`current` is the template as it is now)',
+        schema: versionConflictSchema(inspectionTemplateAnswerSchema.shape.template),
+      },
+    },
+    handler: ({ params, user, body, services }) =>
+      services.inspections.saveTemplate(params.orgId, actor(user), body),
   }),
 ];

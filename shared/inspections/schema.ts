@@ -351,3 +351,5 @@ export type ItemAnswerResult = z.infer<typeof itemAnswerResultSchema>;
 /** Photos are images (PNG or JPEG by their bytes), at most this large each, a few per upload. */
 export const PHOTO_LIMITS = { maxFileBytes: 15 * 1024 * 1024, maxFiles: 5 } as const;
 export const photoUploadResultSchema = z.object({ photos: z.array(photoSchema), item: inspectionItemSchema });
+/** A firm's checklist template, or null before its first save. */
+export const inspectionTemplateAnswerSchema = z.object({ template: inspectionTemplateSchema.nullable() });

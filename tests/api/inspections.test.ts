@@ -357,4 +357,38 @@ describe.each(testDatabases())('field inspections on %s', (kind) => {
       });
     expect(Buffer.compare(again.body as Buffer, pdf)).toBe(0);
   });
+  it('adds the firm’s template items; a template used by an inspection is frozen and the next save makes version 2', async () => {
+    const admin = await as('admin');
+    const orgId = (await admin.get(`/api/projects/${projectId}`)).body.organisationId as string;
+    const url = `/api/organisations/${orgId}/inspection-template`;
+    expect((await admin.get(url)).body).toEqual({ template: null });
+    const first = await admin.put(url).send({ items: [{ label: 'Site left clean, offcuts removed' }] });
+    expect(first.status, first.text).toBe(200);
+    expect(first.body).toMatchObject({ version: 1, revision: 1, frozen: false });
+    const edited = await admin
+      .put(url)
+      .send({ revision: 1, items: [{ label: 'Site left clean', designText: 'No offcuts in the cavity' }] });
+    expect(edited.body).toMatchObject({ version: 1, revision: 2 });
+    const stale = await admin.put(url).send({ revision: 1, items: [] });
+    expect(stale.status).toBe(409);
+    expect(stale.body.current.revision).toBe(2);
+    expect((await (await as('viewer')).put(url).send({ revision: 2, items: [] })).status).toBe(403);
+
+    const i = await start();
+    expect(i.items.at(-1)).toMatchObject({
+      kind: 'firm',
+      label: 'Site left clean',
+      designText: 'No offcuts in the cavity',
+    });
+    expect(i.items.at(-1)!.source.text).toContain('version 1');
+    const next = await admin
+      .put(url)
+      .send({ revision: 2, items: [{ label: 'Site left clean' }, { label: 'Protection film removed' }] });
+    expect(next.body).toMatchObject({ version: 2, frozen: false });
+    expect((await admin.get(url)).body.template.version).toBe(2);
+    // The inspection keeps the items it was made with.
+    expect(
+      inspectionSchema.parse((await admin.get(`/api/inspections/${i.id}`)).body).items.at(-1)!.label,
+    ).toBe('Site left clean');
+  });
 });

@@ -153,6 +153,8 @@ const EXPECTED: Record<string, Expectation> = {
   'POST /deficiencies/:deficiencyId/correct': ['subcontractor'],
   'POST /deficiencies/:deficiencyId/accept': INSPECTING,
   'POST /deficiencies/:deficiencyId/reopen': INSPECTING,
+  'GET /organisations/:orgId/inspection-template': 'firmMember',
+  'PUT /organisations/:orgId/inspection-template': 'firmEditor',
 };
 
 /**

@@ -7,6 +7,7 @@ import { createInspectionNotifications } from './notifications';
 import { createInspectionPhotos } from './photos';
 import { createInspectionQueries } from './queries';
 import { createFieldReports } from './report';
+import { createInspectionTemplates } from './templates';
 import { createInspectionWorkflow } from './workflow';
 
 /**
@@ -14,7 +15,7 @@ import { createInspectionWorkflow } from './workflow';
  * failed items open deficiencies that go open → corrected → accepted or reopened.
  *
  * By workflow: `queries` (reading, the project of each record), `workflow` (create, answer, close, deficiency
- * steps), `photos` (upload and download), `report` (the field report PDF), `notifications` (the e-mails).
+ * steps), `photos` (upload and download), `report` (the field report PDF), `templates` (the firm's checklist template), `notifications` (the e-mails).
  */
 export function createInspectionService(
   db: Db,
@@ -39,5 +40,6 @@ export function createInspectionService(
     uploadPhotos: photos.upload,
     photo: photos.file,
     ...createFieldReports(db, storage, q),
+    ...createInspectionTemplates(db),
   };
 }

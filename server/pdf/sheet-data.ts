@@ -6,6 +6,7 @@ import type { WindScheduleResult } from '@shared/calc/wind/schema';
 import type { ModuleOutcome } from '@shared/checks/report';
 import type { CheckRun } from '@shared/schemas/check-runs';
 import type { SheetIssuer } from '@shared/schemas/sheets';
+import type { SavedSweep } from '@shared/schemas/sweeps';
 import type { UnitSystem } from '@shared/units';
 
 /** Everything one sheet prints: the stored run as it is, plus who issued it and how to verify it. */
@@ -20,6 +21,8 @@ export interface SheetData {
   code: string;
   verifyUrl: string;
   units: UnitSystem;
+  /** A saved sweep of the same assembly, printed as an appendix. */
+  sweep?: SavedSweep;
 }
 
 /** The result a module stored in the run, typed by its id; null when the module did not run. */

@@ -8,6 +8,7 @@ import { INK, PAGE, SheetWriter } from './layout';
 import { drawResults } from './results';
 import { drawSectionSketch } from './section-sketch';
 import type { SheetData } from './sheet-data';
+import { drawSweepAppendix } from './sweep-appendix';
 import { drawTitleBlock, PRODUCT } from './title-block';
 
 export type { SheetData } from './sheet-data';
@@ -103,6 +104,7 @@ export function renderComplianceSheet(data: SheetData): Buffer {
   drawCheckList(w, data, fmt);
   drawCautions(w, data);
   drawStampAndVerification(w, data);
+  if (data.sweep) drawSweepAppendix(w, data.sweep, fmt);
   footers(w, data);
   metadata(doc, data);
   return Buffer.from(doc.output('arraybuffer'));

@@ -13,6 +13,7 @@ import { organisationAdminRoutes } from './organisations';
 import { projectRoutes } from './projects';
 import { sheetRoutes } from './sheets';
 import { submittalRoutes } from './submittals';
+import { sweepRoutes } from './sweeps';
 
 /** Every API route, in one registry: it mounts the routes, generates the OpenAPI document and drives the permission tests. */
 export const apiRoutes: AnyRoute[] = [
@@ -26,6 +27,7 @@ export const apiRoutes: AnyRoute[] = [
   ...firmMemberRoutes,
   ...criteriaRoutes,
   ...checkRunRoutes,
+  ...sweepRoutes,
   ...sheetRoutes,
   ...submittalRoutes,
   ...inspectionRoutes,

@@ -17,7 +17,7 @@ export const sheetRoutes = [
     method: 'get',
     path: '/check-runs/:runId/sheet.pdf',
     summary:
-      'The compliance sheet of a stored check run (PDF: title block, inputs, section to scale, results, charts, checks, cautions, verification code)',
+      'The compliance sheet of a stored check run (PDF: title block, inputs, section to scale, results, charts, checks, cautions, verification code); `?sweep=` adds a saved sweep of the same assembly as an appendix',
     tag: 'Compliance sheets',
     access: { kind: 'project', action: 'assembly.read', ...viaRun },
     params: z.object({ runId: z.uuid() }),
@@ -31,10 +31,14 @@ export const sheetRoutes = [
       400: { description: 'Invalid query', schema: apiErrorSchema },
       401: { description: 'Not signed in', schema: apiErrorSchema },
       403: { description: 'Your role does not allow this', schema: apiErrorSchema },
-      404: { description: 'No such run, or you are not a member of its project', schema: apiErrorSchema },
+      404: {
+        description: 'No such run (or sweep of its assembly), or you are not a member of its project',
+        schema: apiErrorSchema,
+      },
     },
     handler: async ({ params, query, user, res, services }) => {
-      const { pdf, filename, code } = await services.sheets.render(params.runId, user.id, query.units);
+      const sweep = query.sweep ? await services.sweeps.get(query.sweep) : undefined;
+      const { pdf, filename, code } = await services.sheets.render(params.runId, user.id, query.units, sweep);
       res
         .status(200)
         .type('application/pdf')

@@ -1,7 +1,16 @@
 import type { AuditEntry } from '@shared/schemas/me';
 import { desc, eq, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { assemblies, auditLog, checkRuns, invitations, projects, submittals, user } from '../db/schema';
+import {
+  assemblies,
+  assemblySweeps,
+  auditLog,
+  checkRuns,
+  invitations,
+  projects,
+  submittals,
+  user,
+} from '../db/schema';
 
 export interface AuditRecord {
   actorId: string | null;
@@ -37,6 +46,7 @@ const entityName = sql<string | null>`case ${auditLog.entity}
     from ${submittals} where ${submittals.id}::text = ${auditLog.entityId})
   when 'check_run' then (select ${checkRuns.assemblyName} || ', revision ' || ${checkRuns.assemblyRevision}
     from ${checkRuns} where ${checkRuns.id}::text = ${auditLog.entityId})
+  when 'sweep' then (select ${assemblySweeps.name} from ${assemblySweeps} where ${assemblySweeps.id}::text = ${auditLog.entityId})
   when 'member' then (select ${user.name} from ${user} where ${user.id} = ${auditLog.entityId})
   when 'invitation' then (select ${invitations.email} from ${invitations} where ${invitations.id}::text = ${auditLog.entityId})
 end`;

@@ -30,6 +30,45 @@ export function checkRunHashes(engineVersion: string, inputs: CheckRunInputs, ou
   };
 }
 
+/** A stored project's data as the checks read it. */
+export function projectForChecks(p: typeof projects.$inferSelect): ProjectForChecks {
+  return {
+    climateZone: p.climateZone as ProjectForChecks['climateZone'],
+    elevationM: p.elevationM,
+    buildingHeightM: p.buildingHeightM,
+    planLengthM: p.planLengthM,
+    planWidthM: p.planWidthM,
+    indoorTempC: p.indoorTempC,
+    indoorRh: p.indoorRh,
+    winterDesignTempC: p.winterDesignTempC,
+    summerDesignTempC: p.summerDesignTempC,
+    wind: (p.wind as ProjectWind | null) ?? null,
+    climate: (p.climate as ProjectClimate | null) ?? null,
+  };
+}
+
+/**
+ * Refuses (404 `code table`) a code table a project's checks may not use: one must belong to the project's
+ * firm or to one of the caller's firms. Returns the table's firm.
+ */
+export async function usableCodeTable(
+  db: Db,
+  criteria: ReturnType<typeof createCriteriaService>,
+  criteriaSetId: string,
+  projectOrganisationId: string | null,
+  userId: string,
+): Promise<string> {
+  const setOrg = await criteria.organisationOf(criteriaSetId);
+  const mine = setOrg
+    ? await db
+        .select({ id: organisationMembers.organisationId })
+        .from(organisationMembers)
+        .where(and(eq(organisationMembers.organisationId, setOrg), eq(organisationMembers.userId, userId)))
+    : [];
+  if (!setOrg || (setOrg !== projectOrganisationId && mine.length === 0)) throw notFound('code table');
+  return setOrg;
+}
+
 function toSummary(r: RunRow, by: string | null): CheckRunSummary {
   return {
     id: r.id,
@@ -111,35 +150,12 @@ export function createCheckRunService(db: Db, criteria: ReturnType<typeof create
         .where(eq(assemblies.id, assemblyId));
       if (!a) throw notFound('assembly');
       if (a.p.archivedAt) throw archivedError();
-      const setOrg = await criteria.organisationOf(criteriaSetId);
-      const mine = setOrg
-        ? await db
-            .select({ id: organisationMembers.organisationId })
-            .from(organisationMembers)
-            .where(
-              and(eq(organisationMembers.organisationId, setOrg), eq(organisationMembers.userId, userId)),
-            )
-        : [];
-      if (!setOrg || (setOrg !== a.p.organisationId && mine.length === 0)) throw notFound('code table');
+      await usableCodeTable(db, criteria, criteriaSetId, a.p.organisationId, userId);
 
       const id = await db.transaction(async (tx) => {
         const { set, rows } = await criteria.freezeForRun(tx, criteriaSetId, userId);
         const assemblyInput = a.input as AssemblyInput;
-        const project: ProjectForChecks & { id: string; name: string } = {
-          id: a.p.id,
-          name: a.p.name,
-          climateZone: a.p.climateZone as ProjectForChecks['climateZone'],
-          elevationM: a.p.elevationM,
-          buildingHeightM: a.p.buildingHeightM,
-          planLengthM: a.p.planLengthM,
-          planWidthM: a.p.planWidthM,
-          indoorTempC: a.p.indoorTempC,
-          indoorRh: a.p.indoorRh,
-          winterDesignTempC: a.p.winterDesignTempC,
-          summerDesignTempC: a.p.summerDesignTempC,
-          wind: (a.p.wind as ProjectWind | null) ?? null,
-          climate: (a.p.climate as ProjectClimate | null) ?? null,
-        };
+        const project = { id: a.p.id, name: a.p.name, ...projectForChecks(a.p) };
         const inputs: CheckRunInputs = {
           engineVersion: ENGINE_VERSION,
           assembly: { id: a.a.id, revision: a.a.currentRevision, name: a.a.name, input: assemblyInput },

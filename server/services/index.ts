@@ -16,9 +16,11 @@ import { createMeService } from './me';
 import { createMemberService } from './members';
 import { createOrganisationService } from './organisations';
 import { createProjectService } from './projects';
+import { createSavedSweepService } from './saved-sweeps';
 import { createSheetService } from './sheets';
 import { createSubmittalService } from './submittals';
 import { createSweepService } from './sweep';
+import { createSweepCostService } from './sweep-costs';
 
 /** Everything a route may use; routes never touch the database directly. */
 export function createServices(
@@ -32,6 +34,7 @@ export function createServices(
   const criteria = createCriteriaService(db);
   const checkRuns = createCheckRunService(db, criteria);
   const sheets = createSheetService(db, config, checkRuns);
+  const sweepCosts = createSweepCostService(db);
   return {
     databaseKind: database.kind,
     /** Hot backup of the embedded database (PGlite); a PostgreSQL server is backed up with pg_dump. */
@@ -44,6 +47,8 @@ export function createServices(
     audit: createAuditService(db),
     bridge: createBridgeService(config.bridgeMaxCells),
     sweep: createSweepService(config.sweepMaxVariants),
+    sweepCosts,
+    sweeps: createSavedSweepService(db, criteria, sweepCosts, config.sweepMaxVariants),
     me: createMeService(db),
     organisations: createOrganisationService(db),
     projects: createProjectService(db, database.readCache),

@@ -1,5 +1,6 @@
 import type { Verdict } from '@shared/checks/report';
 import type { SheetIssuer, SheetVerification } from '@shared/schemas/sheets';
+import type { SavedSweep } from '@shared/schemas/sweeps';
 import { normaliseVerificationCode, verificationCode, verificationUrl } from '@shared/sheets/verification';
 import type { UnitSystem } from '@shared/units';
 import { asc, eq } from 'drizzle-orm';
@@ -105,8 +106,12 @@ export function createSheetService(db: Db, config: Config, runs: ReturnType<type
     },
 
     /** The sheet of a run as PDF bytes, in the units asked for (default: the caller's preference). */
-    async render(runId: string, userId: string, units?: UnitSystem) {
+    async render(runId: string, userId: string, units?: UnitSystem, sweep?: SavedSweep) {
       const run = await runs.get(runId);
+      if (sweep && sweep.assemblyId !== run.assemblyId)
+        throw new DomainError('not_found', 'not_found', 'sweep not found', {
+          sweep: 'no saved sweep of this run’s assembly has this id',
+        });
       const [p] = await db
         .select({ number: projects.number, siteAddress: projects.siteAddress })
         .from(projects)
@@ -116,7 +121,14 @@ export function createSheetService(db: Db, config: Config, runs: ReturnType<type
       const { code, issuer } = await issue(run.id, run.hash);
       // The issuer's standing is printed as it is now, so it is part of the key: verifying the firm (or
       // withdrawing that) gives a new sheet, the same standing the same bytes.
-      const key = JSON.stringify([run.id, system, p?.number ?? '', p?.siteAddress ?? '', issuer]);
+      const key = JSON.stringify([
+        run.id,
+        system,
+        p?.number ?? '',
+        p?.siteAddress ?? '',
+        issuer,
+        sweep ? [sweep.id, sweep.currentRevision] : null,
+      ]);
       let pdf = cache.get(key);
       if (!pdf) {
         pdf = renderComplianceSheet({
@@ -127,6 +139,7 @@ export function createSheetService(db: Db, config: Config, runs: ReturnType<type
           code,
           verifyUrl: verificationUrl(config.baseUrl, code),
           units: system,
+          sweep,
         });
         if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value!);
         cache.set(key, pdf);

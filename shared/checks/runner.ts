@@ -5,7 +5,7 @@ import type { AssemblyInput } from '../schemas/assembly';
 import { WALL_CATEGORY_LABELS } from '../schemas/assembly';
 import { applicableRows, type CriteriaRowInput, criterionSpec, type MetricKey, zoneLabel } from './criteria';
 import type { ProjectForChecks } from './inputs';
-import { type CheckModule, compare, type ModuleCheck } from './module';
+import { type CheckModule, compare } from './module';
 import { CHECK_MODULES } from './modules';
 import { type Check, type CheckReport, type MetricOutcome, type ModuleOutcome, verdictOf } from './report';
 
@@ -22,11 +22,14 @@ export const RUN_CAUTIONS: readonly string[] = [
   'Skinwright is an aid to — never a substitute for — the licensed professional of record and the local code official.',
 ];
 
-interface ModuleRun {
+/** One module's run on one assembly: its outcome, the metrics it provides and its own checks. */
+export interface ModuleRun {
   module: CheckModule;
   outcome: ModuleOutcome;
-  metrics: Partial<Record<MetricKey, MetricOutcome>>;
-  verdicts: ModuleCheck[];
+  /** Every metric the module provides: its value, or why there is none. */
+  metrics: Map<MetricKey, MetricOutcome>;
+  /** The module's own checks (or one `not_evaluated` check when it could not run). */
+  checks: Check[];
   trace: TraceStep[];
   cautions: string[];
 }
@@ -38,47 +41,88 @@ function whyNot(run: ModuleRun): string {
   return `the ${run.module.label.toLowerCase()} refused the input (${o.error === null ? '' : storedMessageText(o.error)})`;
 }
 
-function runModule(module: CheckModule, assembly: AssemblyInput, project: ProjectForChecks): ModuleRun {
+/** A module that did not run: every metric it provides with the reason, and its one `not_evaluated` check. */
+function notRun(module: CheckModule, outcome: ModuleOutcome): ModuleRun {
+  const run: ModuleRun = { module, outcome, metrics: new Map(), checks: [], trace: [], cautions: [] };
+  const reason = whyNot(run);
+  for (const key of module.provides) run.metrics.set(key, { value: null, reason });
+  run.checks.push({
+    id: `${module.id}.run`,
+    source: 'module',
+    criterion: 'run',
+    label: module.label,
+    required: null,
+    provided: null,
+    unit: '',
+    direction: null,
+    margin: null,
+    marginRatio: null,
+    status: 'not_evaluated',
+    reason,
+    module: module.id,
+    traceStepIds: [],
+  });
+  return run;
+}
+
+/** Builds and runs one module on an assembly of a project (a refusal of the engine is its outcome). */
+export function runModule(
+  module: CheckModule,
+  assembly: AssemblyInput,
+  project: ProjectForChecks,
+): ModuleRun {
   const base = { id: module.id, label: module.label };
   const built = module.build(assembly, project);
   if (built.status === 'missing')
-    return {
-      module,
-      outcome: { ...base, status: 'missing', missing: built.missing, error: null, result: null },
-      metrics: {},
-      verdicts: [],
-      trace: [],
-      cautions: [],
-    };
+    return notRun(module, { ...base, status: 'missing', missing: built.missing, error: null, result: null });
   let result: unknown;
   try {
     result = module.run(built.input);
   } catch (e) {
     if (!(e instanceof CalcInputError)) throw e;
-    return {
-      module,
-      outcome: {
-        ...base,
-        status: 'error',
-        missing: [],
-        error: engineMessage('calc_refused', e.field, { reason: e.reason }),
-        result: null,
-      },
-      metrics: {},
-      verdicts: [],
-      trace: [],
-      cautions: [],
-    };
+    return notRun(module, {
+      ...base,
+      status: 'error',
+      missing: [],
+      error: engineMessage('calc_refused', e.field, { reason: e.reason }),
+      result: null,
+    });
   }
+  const reported = module.metrics(result, assembly);
+  const metrics = new Map<MetricKey, MetricOutcome>();
+  for (const key of module.provides)
+    metrics.set(
+      key,
+      reported[key] ?? { value: null, reason: `the ${module.label.toLowerCase()} did not report it` },
+    );
   return {
     module,
     outcome: { ...base, status: 'ran', missing: [], error: null, result },
-    metrics: module.metrics(result, assembly),
-    verdicts: module.verdicts(result, assembly),
+    metrics,
+    checks: module
+      .verdicts(result, assembly)
+      .map((v) => ({ ...v, module: module.id, source: 'module' as const })),
     trace: module.trace(result),
     cautions: module.cautions(result),
   };
 }
+
+/** A criterion's check that could not be evaluated, with the module it waits for and why. */
+type CriterionBase = Omit<
+  Check,
+  'provided' | 'margin' | 'marginRatio' | 'status' | 'reason' | 'module' | 'traceStepIds' | 'method'
+>;
+
+const notEvaluated = (base: CriterionBase, module: string, reason: string): Check => ({
+  ...base,
+  provided: null,
+  margin: null,
+  marginRatio: null,
+  status: 'not_evaluated',
+  reason,
+  module,
+  traceStepIds: [],
+});
 
 function criterionCheck(
   row: CriteriaRowInput,
@@ -96,72 +140,63 @@ function criterionCheck(
     row: { climateZone: row.climateZone, wallCategory: row.wallCategory },
   };
   const found = metrics.get(spec.metric);
-  const notEvaluated = (module: string, reason: string): Check => ({
-    ...base,
-    provided: null,
-    margin: null,
-    marginRatio: null,
-    status: 'not_evaluated',
-    reason,
-    module,
-    traceStepIds: [],
-  });
-  if (!found) return notEvaluated('—', `no check module measures ${spec.label.toLowerCase()} yet`);
+  if (!found) return notEvaluated(base, '—', `no check module measures ${spec.label.toLowerCase()} yet`);
   const { outcome, run } = found;
-  if (outcome.value === null)
-    return notEvaluated(run.module.id, run.outcome.status === 'ran' ? outcome.reason : whyNot(run));
-  const common = {
-    module: run.module.id,
-    traceStepIds: outcome.traceStepIds,
-    provided: outcome.value,
-    ...('method' in outcome && outcome.method ? { method: outcome.method } : {}),
-  };
+  if (outcome.value === null) return notEvaluated(base, run.module.id, outcome.reason);
+  const method = 'method' in outcome && outcome.method ? { method: outcome.method } : {};
   const note = 'note' in outcome && outcome.note ? outcome.note : '';
   if (spec.direction === 'required') {
     if (typeof row.value !== 'boolean' || typeof outcome.value !== 'boolean')
-      return notEvaluated(run.module.id, 'the criterion and the metric are not both yes/no');
-    const pass = !row.value || outcome.value;
-    return {
-      ...base,
-      ...common,
+      return notEvaluated(base, run.module.id, 'the criterion and the metric are not both yes/no');
+    return Object.assign(checked(base, run, outcome.traceStepIds, outcome.value), method, {
       margin: null,
       marginRatio: null,
-      status: pass ? 'pass' : 'fail',
+      status: !row.value || outcome.value ? 'pass' : 'fail',
       reason: row.value ? note : `The table does not require it. ${note}`.trim(),
-    };
+    } as const);
   }
   if (typeof row.value !== 'number' || typeof outcome.value !== 'number')
-    return notEvaluated(run.module.id, 'the criterion and the metric are not both numbers');
-  return { ...base, ...common, ...compare(spec.direction, row.value, outcome.value), reason: note };
+    return notEvaluated(base, run.module.id, 'the criterion and the metric are not both numbers');
+  return Object.assign(
+    checked(base, run, outcome.traceStepIds, outcome.value),
+    method,
+    compare(spec.direction, row.value, outcome.value),
+    { reason: note },
+  );
 }
 
 /**
- * Checks an assembly of a project against the rows of a code table with every registered module.
- * Rows apply when they name the project's climate zone (or all zones) and the assembly's wall category.
+ * The part of an evaluated criterion's check that does not depend on the comparison. Built by assignment, not
+ * object spread: a sweep makes one per row per variant, and V8's spread of several objects costs ≈ 30× more.
  */
-export function runChecks(
-  assembly: AssemblyInput,
-  project: ProjectForChecks,
-  rows: readonly CriteriaRowInput[],
-  modules: readonly CheckModule[] = CHECK_MODULES,
-): CheckReport {
-  const runs = modules.map((m) => runModule(m, assembly, project));
+function checked(
+  base: CriterionBase,
+  run: ModuleRun,
+  traceStepIds: string[],
+  provided: number | boolean,
+): Omit<Check, 'margin' | 'marginRatio' | 'status' | 'reason'> {
+  return Object.assign({}, base, { module: run.module.id, traceStepIds, provided });
+}
 
+/** The metrics of the runs by key, each with the run that provides it (a later module's wins). */
+function metricsOf(runs: readonly ModuleRun[]) {
   const metrics = new Map<MetricKey, { outcome: MetricOutcome; run: ModuleRun }>();
-  for (const run of runs)
-    for (const key of run.module.provides)
-      metrics.set(key, {
-        run,
-        outcome:
-          run.outcome.status === 'ran'
-            ? (run.metrics[key] ?? {
-                value: null,
-                reason: `the ${run.module.label.toLowerCase()} did not report it`,
-              })
-            : { value: null, reason: whyNot(run) },
-      });
+  for (const run of runs) for (const [key, outcome] of run.metrics) metrics.set(key, { outcome, run });
+  return metrics;
+}
 
-  const applicable = applicableRows(rows, project.climateZone, assembly.wallCategory);
+/**
+ * The checks of one assembly from its module runs: each applicable row against its metric (one
+ * `not_evaluated` check when no row applies), then the modules' own checks. `runChecks` reports them; a sweep
+ * calls this with the runs it keeps, so a variant is judged by the same code as a check run.
+ */
+export function checksOf(
+  runs: readonly ModuleRun[],
+  applicable: readonly CriteriaRowInput[],
+  climateZone: ProjectForChecks['climateZone'],
+  wallCategory: AssemblyInput['wallCategory'],
+) {
+  const metrics = metricsOf(runs);
   const criteriaChecks = applicable.map((row) => criterionCheck(row, metrics));
   if (applicable.length === 0)
     criteriaChecks.push({
@@ -176,34 +211,32 @@ export function runChecks(
       margin: null,
       marginRatio: null,
       status: 'not_evaluated',
-      reason: `the code table has no row for climate zone ${zoneLabel(project.climateZone)} (or all zones) and ${WALL_CATEGORY_LABELS[assembly.wallCategory].toLowerCase()}s, so nothing was checked against it`,
+      reason: `the code table has no row for climate zone ${zoneLabel(climateZone)} (or all zones) and ${WALL_CATEGORY_LABELS[wallCategory].toLowerCase()}s, so nothing was checked against it`,
       module: '—',
       traceStepIds: [],
     });
+  const moduleChecks = runs.flatMap((run) => run.checks);
+  return { metrics, criteriaChecks, moduleChecks, checks: [...criteriaChecks, ...moduleChecks] };
+}
 
-  const moduleChecks: Check[] = runs.flatMap((run) =>
-    run.outcome.status === 'ran'
-      ? run.verdicts.map((v) => ({ ...v, module: run.module.id, source: 'module' as const }))
-      : [
-          {
-            id: `${run.module.id}.run`,
-            source: 'module' as const,
-            criterion: 'run',
-            label: run.module.label,
-            required: null,
-            provided: null,
-            unit: '',
-            direction: null,
-            margin: null,
-            marginRatio: null,
-            status: 'not_evaluated' as const,
-            reason: whyNot(run),
-            module: run.module.id,
-            traceStepIds: [],
-          },
-        ],
+/**
+ * Checks an assembly of a project against the rows of a code table with every registered module.
+ * Rows apply when they name the project's climate zone (or all zones) and the assembly's wall category.
+ */
+export function runChecks(
+  assembly: AssemblyInput,
+  project: ProjectForChecks,
+  rows: readonly CriteriaRowInput[],
+  modules: readonly CheckModule[] = CHECK_MODULES,
+): CheckReport {
+  const runs = modules.map((m) => runModule(m, assembly, project));
+  const applicable = applicableRows(rows, project.climateZone, assembly.wallCategory);
+  const { metrics, criteriaChecks, moduleChecks, checks } = checksOf(
+    runs,
+    applicable,
+    project.climateZone,
+    assembly.wallCategory,
   );
-  const checks = [...criteriaChecks, ...moduleChecks];
 
   const allSteps = new Map<string, TraceStep>();
   for (const run of runs) for (const s of run.trace) if (!allSteps.has(s.id)) allSteps.set(s.id, s);

@@ -10,6 +10,12 @@ export const sheetQuerySchema = z.object({
     .enum(['attachment', 'inline'])
     .default('attachment')
     .describe('attachment = download; inline = show in the browser'),
+  sweep: z
+    .uuid()
+    .optional()
+    .describe(
+      'A saved sweep of the run’s assembly, printed as an appendix (its chart and cheapest variants)',
+    ),
 });
 
 export const verifyParamsSchema = z.object({ code: z.string().max(100) });

@@ -56,6 +56,17 @@ export function variantCost(
 }
 
 /**
+ * Refuses, before any variant runs, costs that lack a price for something the sweep varies (every value of every
+ * parameter is priced once, the others at their first value): the same refusal `variantCost` would give later.
+ */
+export function checkCosts(plan: SweepPlan, a: AssemblyInput, costs: SweepCosts): void {
+  const first = plan.axes.map((x) => x.values[0]!);
+  plan.axes.forEach((axis, i) => {
+    for (const v of axis.values) variantCost(plan, a, first.with(i, v), costs);
+  });
+}
+
+/**
  * The passing variants cheapest first (equal costs in enumeration order), each with what governs it, and how
  * far the runner-up is from the cheapest. Failing and incomplete variants are left out and counted.
  */

@@ -114,6 +114,12 @@ export const sweepRequestSchema = z.object({
   costs: sweepCostsSchema
     .optional()
     .describe('Given: the passing variants ranked by the cost of what varies'),
+  mode: z
+    .enum(['exhaustive', 'search'])
+    .optional()
+    .describe(
+      '`search`: when the parameters name more variants than may be run, search them (bounded, leaning on "more insulation never raises U") instead of refusing; the answer’s `exploration` says what was and was not explored',
+    ),
 });
 export type SweepRequest = z.infer<typeof sweepRequestSchema>;
 
@@ -153,10 +159,31 @@ export const sweepRankingSchema = z.object({
 });
 export type SweepRanking = z.infer<typeof sweepRankingSchema>;
 
+/** What a sweep ran and what it left out (shared/sweep/search.ts). */
+export const sweepExplorationSchema = z.object({
+  mode: z.enum(['exhaustive', 'bounded']).describe('`exhaustive`: every variant ran; `bounded`: searched'),
+  combinations: z.number().int().describe('Variants the parameters name'),
+  evaluated: z.number().int().describe('Variants run (these are `variants`)'),
+  provenFailing: z
+    .number()
+    .int()
+    .describe('Not run: thinner than a thickness whose thermal criteria fail, so they fail too'),
+  costlier: z
+    .number()
+    .int()
+    .describe('Not run: thicker than the thinnest passing variant of the same other values'),
+  unexplored: z.number().int().describe('Not run and not ruled out: the budget ran out'),
+  notes: z.array(z.string()).describe('What was done, in words'),
+});
+export type SweepExploration = z.infer<typeof sweepExplorationSchema>;
+
 export const sweepResultSchema = z.object({
   count: z.number().int(),
   parameters: z.array(z.object({ kind: z.string(), values: z.array(z.union([z.number(), z.string()])) })),
   variants: z.array(sweepVariantResultSchema),
   ranking: sweepRankingSchema.nullable(),
+  exploration: sweepExplorationSchema
+    .optional()
+    .describe('With `mode: "search"`: what was run, ruled out and left unexplored'),
 });
 export type SweepResult = z.infer<typeof sweepResultSchema>;

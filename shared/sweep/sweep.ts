@@ -6,12 +6,12 @@ import {
   pointBridgeBySpacingSchema,
 } from '../calc/thermal/schema';
 import { panelSchema } from '../calc/wind/schema';
-import type { CriteriaRowInput } from '../checks/criteria';
+import { applicableRows, type CriteriaRowInput } from '../checks/criteria';
 import type { ProjectForChecks } from '../checks/inputs';
 import type { CheckModule } from '../checks/module';
 import { CHECK_MODULES } from '../checks/modules';
-import type { Check, CheckReport } from '../checks/report';
-import { runChecks } from '../checks/runner';
+import { type Check, type CheckReport, verdictOf } from '../checks/report';
+import { checksOf, type ModuleRun, runModule } from '../checks/runner';
 import type { AssemblyInput } from '../schemas/assembly';
 import { attachmentSchema } from '../schemas/assembly';
 import type { SweepParameter, SweepResult, SweepVariantResult } from './schema';
@@ -77,10 +77,7 @@ function numericValues(
   checkBounds(range.stop, `${at}.range.stop`, bounds);
   const n = rangeCount(range.start, range.stop, range.step);
   if (n > cap)
-    throw new CalcInputError(
-      `${at}.range.step`,
-      `the range alone has ${n} values — at most ${cap} variants in all`,
-    );
+    throw new CalcInputError(`${at}.range.step`, `the range has ${n} values — at most ${cap} in one sweep`);
   return Array.from({ length: n }, (_, i) => rangeValue(range.start, range.step, i));
 }
 
@@ -299,10 +296,15 @@ const targetOf = (p: SweepParameter) =>
   `${p.kind}:${'layer' in p ? p.layer : 'bridge' in p ? p.bridge : 'joint' in p ? (p.joint ?? '*') : ''}`;
 
 /**
- * Plans a sweep: each parameter against the assembly, the number of variants against `cap` — every refusal
- * (CalcInputError naming `parameters.<i>…`) before any variant is run.
+ * Plans a sweep: each parameter against the assembly (one range at most `valuesCap` values), the number of
+ * variants against `cap` — every refusal (CalcInputError naming `parameters.<i>…`) before any variant is run.
  */
-export function planSweep(a: Assembly, parameters: readonly SweepParameter[], cap: number): SweepPlan {
+export function planSweep(
+  a: Assembly,
+  parameters: readonly SweepParameter[],
+  cap: number,
+  valuesCap = cap,
+): SweepPlan {
   if (parameters.length === 0)
     throw new CalcInputError('parameters', 'choose at least one parameter to vary');
   if (parameters.length > 3) throw new CalcInputError('parameters', 'at most three parameters at once');
@@ -311,7 +313,7 @@ export function planSweep(a: Assembly, parameters: readonly SweepParameter[], ca
     const target = targetOf(p);
     if (seen.has(target)) throw new CalcInputError(`parameters.${i}`, 'the same parameter is varied twice');
     seen.add(target);
-    return planAxis(a, p, `parameters.${i}`, cap);
+    return planAxis(a, p, `parameters.${i}`, valuesCap);
   });
   const count = axes.reduce((n, x) => n * x.values.length, 1);
   if (count > cap) throw new CalcInputError('parameters', `${count} variants — at most ${cap} in one sweep`);
@@ -363,9 +365,14 @@ export function governingCheck(checks: readonly Check[]): Check | null {
   return best;
 }
 
+const margin = (c: Check) => ({ id: c.id, status: c.status, margin: c.margin, marginRatio: c.marginRatio });
+
 /** One variant's report as the sweep keeps it: verdict, the governing check, each check's margin. */
-export function variantResult(index: number, values: Value[], report: CheckReport): SweepVariantResult {
-  const margin = (c: Check) => ({ id: c.id, status: c.status, margin: c.margin, marginRatio: c.marginRatio });
+export function variantResult(
+  index: number,
+  values: Value[],
+  report: Pick<CheckReport, 'verdict' | 'checks'>,
+): SweepVariantResult {
   const g = governingCheck(report.checks);
   return {
     index,
@@ -377,42 +384,53 @@ export function variantResult(index: number, values: Value[], report: CheckRepor
 }
 
 /**
- * The registered modules, each remembering its results by the values of the parameters that change its
- * input (a module no parameter touches runs once per sweep): the runner itself is unchanged, and a result is
- * reused only for an input that is the same (the property test holds every variant to the runner on its own
- * assembly). At most 256 results are kept per module.
+ * A runner for the variants of one plan: each module's run (outcome, metrics, own checks) is kept by the values
+ * of the parameters that change its input (a module no parameter touches runs once per sweep; unknown modules
+ * are never kept), a variant's document is made only when a module must run on it, and the rows that apply are
+ * found once (the climate zone and wall category no parameter changes). The checks come from the runner's own
+ * `checksOf`, so a variant is judged as a check run judges it (the property test holds every variant to
+ * `runChecks` on its own assembly). At most 256 runs are kept per module.
  */
-function rememberingModules(plan: SweepPlan, modules: readonly CheckModule[]) {
-  let values: readonly Value[] = [];
-  const wrapped = modules.map((m): CheckModule => {
-    const known = ['thermal', 'moisture', 'wind', 'joints'].includes(m.id);
-    const axes = plan.axes.map((x, i) => (!known || x.touches.includes(m.id) ? i : -1)).filter((i) => i >= 0);
-    const cache = new Map<string, { built: ReturnType<CheckModule['build']>; result?: unknown }>();
-    return {
-      ...m,
-      build: (a, p) => {
-        const key = axes.map((i) => values[i]).join('|');
-        let entry = cache.get(key);
-        if (!entry) {
-          if (cache.size >= 256) cache.clear();
-          entry = { built: m.build(a, p) };
-          cache.set(key, entry);
-        }
-        return entry.built.status === 'missing' ? entry.built : { status: 'ready', input: entry };
-      },
-      run: (input) => {
-        const entry = input as { built: { status: 'ready'; input: unknown }; result?: unknown };
-        if (!('result' in entry)) entry.result = m.run(entry.built.input);
-        return entry.result;
-      },
-    };
-  });
-  return { modules: wrapped, use: (v: readonly Value[]) => (values = v) };
+export function variantRunner(
+  plan: SweepPlan,
+  a: Assembly,
+  project: ProjectForChecks,
+  rows: readonly CriteriaRowInput[],
+  modules: readonly CheckModule[] = CHECK_MODULES,
+) {
+  const known = ['thermal', 'moisture', 'wind', 'joints'];
+  const kept = modules.map((m) => ({
+    module: m,
+    axes: plan.axes.flatMap((x, i) => (!known.includes(m.id) || x.touches.includes(m.id) ? [i] : [])),
+    runs: new Map<string, ModuleRun>(),
+  }));
+  const applicable = applicableRows(rows, project.climateZone, a.wallCategory);
+  const runs: ModuleRun[] = new Array(kept.length);
+  return (index: number, values: Value[]): SweepVariantResult => {
+    let doc: Assembly | undefined;
+    for (let m = 0; m < kept.length; m++) {
+      const k = kept[m]!;
+      let key = '';
+      for (const i of k.axes) key += `${values[i]}|`;
+      let run = k.runs.get(key);
+      if (!run) {
+        if (k.runs.size >= 256) k.runs.clear();
+        doc ??= applyVariant(plan, a, values);
+        // Kept without its result, trace and cautions (a variant needs only the metrics and checks): less to carry into the old generation.
+        const { outcome, ...whole } = runModule(k.module, doc, project);
+        run = { ...whole, outcome: { ...outcome, result: null }, trace: [], cautions: [] };
+        k.runs.set(key, run);
+      }
+      runs[m] = run;
+    }
+    const { checks } = checksOf(runs, applicable, project.climateZone, a.wallCategory);
+    return variantResult(index, values, { verdict: verdictOf(checks), checks });
+  };
 }
 
 /**
  * Runs every variant of a sweep through the compliance runner against the rows of one code table version.
- * A module's refusal (CalcInputError) is thrown anew for each variant it refuses, as runChecks reports it.
+ * A module's refusal (CalcInputError) is reported for each variant it refuses, as runChecks reports it.
  */
 export function runSweep(
   a: Assembly,
@@ -423,14 +441,9 @@ export function runSweep(
   modules: readonly CheckModule[] = CHECK_MODULES,
 ): Omit<SweepResult, 'ranking'> & { plan: SweepPlan } {
   const plan = planSweep(a, parameters, cap);
-  const memo = rememberingModules(plan, modules);
-  const variants: SweepVariantResult[] = [];
-  for (const { index, values } of enumerateVariants(plan)) {
-    memo.use(values);
-    variants.push(
-      variantResult(index, values, runChecks(applyVariant(plan, a, values), project, rows, memo.modules)),
-    );
-  }
+  const run = variantRunner(plan, a, project, rows, modules);
+  const variants: SweepVariantResult[] = new Array(plan.count);
+  for (const { index, values } of enumerateVariants(plan)) variants[index] = run(index, values);
   return {
     plan,
     count: plan.count,

@@ -57,6 +57,15 @@ describe.each(testDatabases())('writes to an archived project on %s', (kind) => 
       .find((m) => m.to.includes('late.joiner@example.com'))!
       .text.match(/\/invite\/([\w-]+)/)![1]!;
     Object.assign(params, await inspectionParams(t, params.projectId));
+    const sets = (await owner.get(`/api/projects/${params.projectId}/criteria-sets`)).body.criteriaSets;
+    params.sweepId = (
+      await owner.post(`/api/assemblies/${assembly.id}/sweeps`).send({
+        name: 'Saved before archiving',
+        criteriaSetId: sets[0].id,
+        parameters: [{ kind: 'sealantClass', list: ['25'] }],
+      })
+    ).body.id;
+    expect(params.sweepId).toBeDefined();
     expect((await owner.post(`/api/projects/${params.projectId}/archive`)).status).toBe(200);
   });
   afterAll(async () => {

@@ -103,7 +103,23 @@ describe('fuzzing every route with a body', () => {
         .send({ title: 'Fuzzed submittal', specSection: '07 42 13', specTitle: 'Metal Wall Panels' })
     ).body.id;
     Object.assign(params, await inspectionParams(t, params.projectId));
+    // A firm cost entry for the cost routes' :itemId (the other library routes' entries are not of this kind: 404).
+    params.itemId = (
+      await owner
+        .post(`/api/organisations/${params.orgId}/sweep-costs`)
+        .send({ kind: 'clip', name: 'Fuzzed clip', cost: 5, currency: 'EUR' })
+    ).body.id;
   });
+  /** Examples that need this database's ids to reach past the lookups. */
+  const EXAMPLES: Record<string, (example: object) => object> = {
+    'POST /assemblies/:assemblyId/sweeps': (example) => ({ ...example, criteriaSetId: params.setId }),
+    // A computed library value: its detail, solve and map are fuzzed too.
+    'POST /organisations/:orgId/bridge-values': (example) => ({
+      ...example,
+      kind: 'linear',
+      computed: demoComputedGirt(ENGINE_VERSION),
+    }),
+  };
   afterAll(async () => {
     console.log(`fuzz: ${totalCases} HTTP cases run`);
     await t?.close();
@@ -118,7 +134,10 @@ describe('fuzzing every route with a body', () => {
       const agent = await t.as(demoEmail(fuzzAccount(route)));
       const path = `/api${route.path.replace(/:(\w+)/g, (_m, p: string) => params[p] ?? 'x')}`;
       const success = Object.entries(route.responses).find(([s]) => Number(s) < 300)?.[1]?.schema;
-      const example = route.example ?? {};
+      const example =
+        EXAMPLES[`${route.method.toUpperCase()} ${route.path}`]?.(route.example as object) ??
+        route.example ??
+        {};
       const paths = leafPaths(example);
       const payload = fc.oneof(
         { weight: 1, arbitrary: fc.jsonValue({ maxDepth: 4 }) },

@@ -88,6 +88,15 @@ const EXPECTED: Record<string, Expectation> = {
   'POST /organisations/:orgId/attachment-products/:itemId/data-sheet': 'firmEditor',
   'GET /organisations/:orgId/attachment-products/:itemId/data-sheet': 'firmMember',
   'DELETE /organisations/:orgId/attachment-products/:itemId': 'firmAdmin',
+  'GET /organisations/:orgId/sweep-costs': 'firmMember',
+  'POST /organisations/:orgId/sweep-costs': 'firmEditor',
+  'PUT /organisations/:orgId/sweep-costs/:itemId': 'firmEditor',
+  'DELETE /organisations/:orgId/sweep-costs/:itemId': 'firmAdmin',
+  'GET /assemblies/:assemblyId/sweeps': ALL,
+  'POST /assemblies/:assemblyId/sweeps': ['owner', 'architect', 'envelope_consultant', 'engineer'],
+  'GET /assemblies/:assemblyId/sweeps/compare': ALL,
+  'GET /sweeps/:sweepId': ALL,
+  'DELETE /sweeps/:sweepId': ['owner', 'architect', 'envelope_consultant', 'engineer'],
   'GET /organisations/:orgId/members': 'firmMember',
   'POST /organisations/:orgId/members': 'firmAdmin',
   'PUT /organisations/:orgId/members/:userId': 'firmAdmin',
@@ -185,6 +194,29 @@ const BODIES: Record<string, (params: Record<string, string>) => unknown> = {
   'PUT /projects/:projectId/members/:memberId': () => ({ role: 'viewer' }),
   'POST /assemblies/:assemblyId/check-runs': (p) => ({ criteriaSetId: p.setId }),
   'POST /submittals/:submittalId/sheets': (p) => ({ checkRunId: p.runId }),
+  'POST /assemblies/:assemblyId/sweeps': (p) => ({ ...sweepBody, criteriaSetId: p.setId }),
+  'PUT /organisations/:orgId/sweep-costs/:itemId': () => ({ ...costBody, version: 1 }),
+};
+const sweepBody = {
+  name: 'Insulation',
+  parameters: [{ kind: 'insulationThickness', layer: 3, list: [0.05, 0.1] }],
+};
+const costBody = { kind: 'clip', name: 'Clip', cost: 5, currency: 'EUR' };
+
+/**
+ * Routes whose allowed callers each need a fresh object (a delete by one allowed caller leaves the next
+ * nothing to delete): made anew before each call.
+ */
+const FRESH: Record<string, (params: Record<string, string>, t: TestApp) => Promise<void>> = {
+  'DELETE /sweeps/:sweepId': async (p, t) => {
+    p.sweepId = (
+      await (
+        await t.as(emailOf.owner)
+      )
+        .post(`/api/assemblies/${p.assemblyId}/sweeps`)
+        .send({ ...sweepBody, criteriaSetId: p.setId })
+    ).body.id;
+  },
 };
 
 const key = (r: { method: string; path: string }) => `${r.method.toUpperCase()} ${r.path}`;
@@ -255,6 +287,15 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
         .post(`/api/assemblies/${params.assemblyId}/check-runs`)
         .send({ criteriaSetId: params.setId })
     ).body.id;
+    params.sweepId = (
+      await owner
+        .post(`/api/assemblies/${params.assemblyId}/sweeps`)
+        .send({ ...sweepBody, criteriaSetId: params.setId })
+    ).body.id;
+    params.compareQuery = `?from=${params.sweepId}&to=${params.sweepId}`;
+    params.costId = (
+      await owner.post(`/api/organisations/${params.orgId}/sweep-costs`).send(costBody)
+    ).body.id;
     params.bridgeId = (
       await owner
         .post(`/api/organisations/${params.orgId}/bridge-values`)
@@ -305,13 +346,18 @@ describe.each(testDatabases())('permission matrix on %s', (kind) => {
       ? params.materialId
       : route.path.includes('/attachment-products/')
         ? params.productId
-        : params.bridgeId;
-    const path = `/api${route.path.replace(/:(\w+)/g, (_m, p: string) => (p === 'itemId' ? itemId : params[p])!)}`;
+        : route.path.includes('/sweep-costs/')
+          ? params.costId
+          : params.bridgeId;
+    const query = route.path.endsWith('/sweeps/compare') ? params.compareQuery : '';
+    const pathNow = () =>
+      `/api${route.path.replace(/:(\w+)/g, (_m, p: string) => (p === 'itemId' ? itemId : params[p])!)}${query}`;
     const body = BODIES[key(route)]?.(params) ?? route.example ?? {};
     const call = async (agent: { [m: string]: (p: string) => request.Test } | null) => {
+      await FRESH[key(route)]?.(params, t);
       const req = (agent ?? (t.anonymous() as unknown as { [m: string]: (p: string) => request.Test }))[
         route.method
-      ]!(path);
+      ]!(pathNow());
       const res =
         route.method === 'get' || route.method === 'delete' ? await req : await req.send(body as object);
       return res.status;

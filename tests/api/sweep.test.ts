@@ -59,6 +59,37 @@ describe('sweep API', () => {
     expect(res.body.error.fields.parameters).toMatch(/^at most 500 variants \(got 38\d\d\); vary fewer/);
   });
 
+  it('searches a space of over 100 000 variants with mode "search", saying what was and was not explored', async () => {
+    const res = await post({
+      ...demoSweep(),
+      mode: 'search',
+      parameters: [
+        { kind: 'insulationThickness', layer: 3, range: { start: 0.01, stop: 0.3, step: 0.0005 } },
+        { kind: 'clipSpacing', range: { start: 0.3, stop: 1.5, step: 0.01 } },
+        { kind: 'sealantClass', list: ['25', '50'] },
+      ],
+      costs: { insulation: 4.5, clip: 6, sealant: { perMetre: { 25: 3, 50: 5 }, metresPerSquareMetre: 0.5 } },
+    });
+    expect(res.status).toBe(200);
+    expect(res.body.count).toBe(581 * 121 * 2);
+    const e = res.body.exploration;
+    expect(e.mode).toBe('bounded');
+    expect(e.evaluated).toBeLessThanOrEqual(500);
+    expect(res.body.variants).toHaveLength(e.evaluated);
+    expect(e.evaluated + e.provenFailing + e.costlier + e.unexplored).toBe(res.body.count);
+    expect(e.notes.length).toBeGreaterThan(1);
+  });
+
+  it('refuses a varied thing without a price before anything runs (422, the cost named)', async () => {
+    const res = await post({
+      ...demoSweep(),
+      parameters: [...demoSweep().parameters, { kind: 'sealantClass', list: ['25', '50'] }],
+      costs: { insulation: 4.5, clip: 6, sealant: { perMetre: { 25: 3 }, metresPerSquareMetre: 0.5 } },
+    });
+    expect(res.status).toBe(422);
+    expect(Object.keys(res.body.error.fields)).toEqual(['costs.sealant.perMetre.50']);
+  });
+
   it('is in the OpenAPI document', async () => {
     const doc = (await t.anonymous().get('/api/openapi.json')).body;
     expect(doc.paths['/api/v1/calc/sweep'].post).toBeDefined();

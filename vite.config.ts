@@ -1,6 +1,7 @@
 import { fileURLToPath } from 'node:url';
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
+import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
 const alias = {
@@ -9,7 +10,24 @@ const alias = {
 };
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [
+    react(),
+    tailwindcss(),
+    // A service worker (Workbox, generated at build) keeps the app shell — the built scripts, styles, fonts and
+    // index.html — so a page opened once starts with no signal (D-026). It never answers /api: data comes from
+    // the persisted query cache (src/lib/offline). Not in the dev server (hot reload needs the network).
+    VitePWA({
+      injectRegister: 'script-defer',
+      registerType: 'autoUpdate',
+      manifest: false,
+      workbox: {
+        globPatterns: ['**/*.{js,css,html,woff2,svg}'],
+        navigateFallback: '/index.html',
+        navigateFallbackDenylist: [/^\/api(\/|$)/],
+        cleanupOutdatedCaches: true,
+      },
+    }),
+  ],
   resolve: { alias },
   // convert-units reads `global`; the browser has only globalThis.
   define: { global: 'globalThis' },

@@ -106,3 +106,14 @@ export const verificationKeys = {
   all: ['sheet-verification'] as const,
   detail: (code: string) => [...verificationKeys.all, code] as const,
 };
+
+export const inspectionKeys = {
+  all: ['inspections'] as const,
+  lists: () => [...inspectionKeys.all, 'list'] as const,
+  list: (projectId: string) => [...inspectionKeys.lists(), projectId] as const,
+  details: () => [...inspectionKeys.all, 'detail'] as const,
+  detail: (inspectionId: string) => [...inspectionKeys.details(), inspectionId] as const,
+  /** Mutations kept on the device and sent when the connection returns (src/lib/offline). */
+  answers: () => [...inspectionKeys.all, 'answer'] as const,
+  photos: () => [...inspectionKeys.all, 'photo'] as const,
+};

@@ -173,4 +173,5 @@ export const bridgeValueInputSchema = z.object({
     .describe('A computed value: the detail it was solved from, the solve and its map'),
 });
 export const bridgeValueSchema = bridgeValueInputSchema.extend({ id: z.uuid(), createdAt: z.string() });
+export type BridgeValueInput = z.input<typeof bridgeValueInputSchema>;
 export type BridgeValue = z.infer<typeof bridgeValueSchema>;

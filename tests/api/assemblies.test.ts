@@ -1,4 +1,6 @@
+import { demoComputedGirt } from '@shared/calc/bridge/examples';
 import { metalPanelWall } from '@shared/calc/thermal/examples';
+import { ENGINE_VERSION } from '@shared/calc/trace';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, demoEmail, type TestApp, testDatabases } from '../setup/app';
 
@@ -96,5 +98,40 @@ describe.each(testDatabases())('assemblies and the thermal calculation API on %s
     expect(ok.status).toBe(201);
     const seen = await (await t.as(demoEmail('outsider'))).get(`/api/organisations/${orgId}/bridge-values`);
     expect(seen.status).toBe(404);
+  });
+
+  it('keeps a computed ψ with its detail, solve and map; a firm reader may not save one', async () => {
+    const computed = demoComputedGirt(ENGINE_VERSION);
+    const entry = {
+      name: 'Z girt 1.5 mm at 600 mm (computed)',
+      kind: 'linear',
+      value: computed.value,
+      sourceType: 'calculation',
+      source: `computed by Skinwright ${ENGINE_VERSION}, mesh ${computed.cells} cells, ${computed.date}`,
+      computed,
+    };
+    // The architect is an editor of the demo firm, the viewer a reader (README, demo accounts).
+    const editor = await t.as(demoEmail('architect'));
+    const orgId = (await editor.get('/api/me')).body.organisations[0].id;
+    const saved = await editor.post(`/api/organisations/${orgId}/bridge-values`).send(entry);
+    expect(saved.status).toBe(201);
+    const list = await editor.get(`/api/organisations/${orgId}/bridge-values`);
+    const back = list.body.bridgeValues.find((b: { id: string }) => b.id === saved.body.id);
+    expect(back.computed).toEqual(computed);
+    expect(back.computed.detail.input.layers).toHaveLength(3);
+    // Entered values carry no computed record.
+    expect(
+      list.body.bridgeValues.every(
+        (b: { id: string; computed?: unknown }) => b.id === saved.body.id || !b.computed,
+      ),
+    ).toBe(true);
+    const reader = await t.as(demoEmail('viewer'));
+    expect((await reader.post(`/api/organisations/${orgId}/bridge-values`).send(entry)).status).toBe(403);
+    // A map whose values do not fill its grid is refused with the field named.
+    const bad = await editor
+      .post(`/api/organisations/${orgId}/bridge-values`)
+      .send({ ...entry, computed: { ...computed, map: { ...computed.map, values: [1] } } });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toContain('computed.map.values');
   });
 });

@@ -1,4 +1,8 @@
-import type { BridgeModelInput } from './schema';
+import { solveBridge } from './bridge';
+import type { ComputedBridge } from './computed';
+import { computedOf, detailModel } from './detail';
+import { type BridgeModelInput, bridgeModelSchema } from './schema';
+import { sectionOf } from './section';
 import type { ClipTemplate, GirtTemplate } from './templates';
 
 /*
@@ -82,3 +86,22 @@ export const demoWall: { girt: GirtTemplate; clip: ClipTemplate } = {
     thickness: 0.003,
   },
 };
+
+/**
+ * The demo girt solved on a coarse mesh (5 mm edge cells) as a computed library value: the API example of a
+ * computed entry and the tests' stored solve. Dated 2026-01-01 so that it is the same on every run.
+ */
+export function demoComputedGirt(engineVersion: string): ComputedBridge {
+  const detail = { template: 'girt', input: { ...demoWall.girt, mesh: { interfaceCell: 0.005 } } } as const;
+  const result = solveBridge(bridgeModelSchema.parse({ ...detailModel(detail), field: true }));
+  const computed = computedOf(
+    detail,
+    result,
+    sectionOf(result),
+    { inside: 20, outside: 0 },
+    engineVersion,
+    new Date('2026-01-01T00:00:00Z'),
+  );
+  if (!computed) throw new Error('the demo girt gives ψ');
+  return computed;
+}

@@ -1,9 +1,11 @@
-import { can } from '@shared/auth/permissions';
+import { can, canInFirm } from '@shared/auth/permissions';
+import type { BridgeValueInput } from '@shared/schemas/assembly';
 import type { Project } from '@shared/schemas/project';
 import { AssemblyBuilder } from '../../features/assemblies/components/AssemblyBuilder';
 import { AssemblyView } from '../../features/assemblies/components/AssemblyView';
 import { DuplicateAssembly } from '../../features/assemblies/components/DuplicateAssembly';
 import { RevisionHistory } from '../../features/assemblies/components/RevisionHistory';
+import { useAddBridgeValue } from '../../features/library/api/add-bridge-value';
 import { useBridgeValues } from '../../features/library/api/get-bridge-values';
 import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
 import { useMe } from '../../features/me/api/get-me';
@@ -20,10 +22,16 @@ export function useBuilderLibrary(project: Project | undefined) {
   const org = firmOf(useMe().data, project?.organisationId);
   const materials = useFirmMaterials(org?.id);
   const bridgeValues = useBridgeValues(org?.id);
+  const add = useAddBridgeValue();
   return {
     firmName: org?.name ?? null,
     firmMaterials: materials.data ?? [],
     bridgeValues: bridgeValues.data ?? [],
+    // Only the firm's editors and administrators add to its library.
+    saveBridgeValue:
+      org && canInFirm(org.role, 'firm.write')
+        ? { firmName: org.name, add: (input: BridgeValueInput) => add.mutateAsync({ orgId: org.id, input }) }
+        : undefined,
   };
 }
 
@@ -45,6 +53,7 @@ export function AssemblyBuilderPage() {
           firmName={library.firmName}
           firmMaterials={library.firmMaterials}
           bridgeValues={library.bridgeValues}
+          saveBridgeValue={library.saveBridgeValue}
         />
       ) : (
         <AssemblyView

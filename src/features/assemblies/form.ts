@@ -2,7 +2,13 @@ import type { Vapour } from '@shared/calc/moisture/schema';
 import { metalPanelWall } from '@shared/calc/thermal/examples';
 import type { Material } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
-import type { AssemblyInput, assemblyInputSchema, BridgeValue, OrgMaterial } from '@shared/schemas/assembly';
+import type {
+  AssemblyInput,
+  assemblyInputSchema,
+  BridgeValue,
+  BridgeValueInput,
+  OrgMaterial,
+} from '@shared/schemas/assembly';
 import { siValue } from '@shared/units';
 import { createContext, useContext } from 'react';
 import type { FieldPath } from 'react-hook-form';
@@ -155,6 +161,8 @@ export interface BuilderContextValue {
   firmName: string | null;
   firmMaterials: readonly OrgMaterial[];
   bridgeValues: readonly BridgeValue[];
+  /** Save a computed χ/ψ to the firm library (absent unless the person is its editor or administrator). */
+  saveBridgeValue?: { firmName: string; add: (entry: BridgeValueInput) => Promise<{ id: string }> };
   /** Per layer, its R (m²·K/W) from the live result's trace, when there is one. */
   layerR: (index: number) => number | undefined;
   /** Layers outside a well-ventilated air layer (and that layer) do not count (ISO 6946 §6.9). */

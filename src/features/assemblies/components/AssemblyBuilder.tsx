@@ -2,6 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { ThermalInput } from '@shared/calc/thermal/schema';
 import { firstKeptLayer } from '@shared/calc/thermal/thermal';
 import { ENGINE_VERSION } from '@shared/calc/trace';
+import { formatR, formatU } from '@shared/format';
 import {
   type Assembly,
   type AssemblyInput,
@@ -27,7 +28,6 @@ import { useAssemblyRevisionApi } from '../api/update-assembly';
 import { assemblyErrorMap, evaluateThermal, toFormPath } from '../evaluate';
 import { type AssemblyFormValues, BuilderContext, type BuilderContextValue } from '../form';
 import { mergeAssemblyEdits } from '../merge';
-import { formatR, formatU } from '../units';
 import { SelectField, TextField } from './FormFields';
 import { LayersEditor } from './LayersEditor';
 import { ThermalSummary } from './ResultFigures';
@@ -49,6 +49,7 @@ interface AssemblyBuilderProps {
   firmName?: string | null;
   firmMaterials?: readonly OrgMaterial[];
   bridgeValues?: readonly BridgeValue[];
+  saveBridgeValue?: BuilderContextValue['saveBridgeValue'];
   /** After the first save of a new assembly (the page moves to its address). */
   onCreated?: (assembly: Assembly) => void;
 }
@@ -70,6 +71,7 @@ export function AssemblyBuilder({
   firmName = null,
   firmMaterials = [],
   bridgeValues = [],
+  saveBridgeValue,
   onCreated,
 }: AssemblyBuilderProps) {
   const system = useUnitSystem();
@@ -136,6 +138,7 @@ export function AssemblyBuilder({
     firmName,
     firmMaterials,
     bridgeValues,
+    ...(saveBridgeValue ? { saveBridgeValue } : {}),
     layerR: (i) => layerRs.get(i),
     disregarded: (i) => i < counted,
     markRemoval: editing.history.markRemoval,
@@ -267,7 +270,9 @@ export function AssemblyBuilder({
                 {result ? (
                   <p className="num text-lg" data-testid="live-Reff">
                     {formatR(result.Reff, system)}
-                    <span className="ml-3 text-sm text-ink-muted">{formatU(result.Ueff, system)}</span>
+                    <span className="ml-3 text-sm text-ink-muted max-sm:hidden">
+                      {formatU(result.Ueff, system)}
+                    </span>
                   </p>
                 ) : (
                   <p className="text-sm text-caution">

@@ -10,6 +10,7 @@ import { Select } from '../../../components/ui/Select';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { fieldDomId } from '../evaluate';
 import { type AssemblyFormValues, type BridgeRole, newBridge, p, useBuilder } from '../form';
+import type { SolvedSource } from '../solve/BridgeSolveDialog';
 import { formatMeasure } from '../units';
 import { BlockError, MeasureField, TextField, useFieldError } from './FormFields';
 
@@ -312,6 +313,7 @@ function SolveButton({ index: j, bridge, array }: { index: number; bridge: Bridg
   const { control } = useFormContext<AssemblyFormValues>();
   const layers = (useWatch({ control, name: 'thermal.layers' }) ?? []) as Layer[];
   const [open, setOpen] = useState(false);
+  const { saveBridgeValue } = useBuilder();
   const symbol = bridge.kind === 'linear' ? 'ψ' : 'χ';
   return (
     <>
@@ -329,8 +331,9 @@ function SolveButton({ index: j, bridge, array }: { index: number; bridge: Bridg
             bridge={bridge}
             layers={layers}
             onClose={() => setOpen(false)}
-            onUse={(value, text) => {
-              array.update(j, withSolvedValue(bridge, value, text));
+            save={saveBridgeValue}
+            onUse={(value, source) => {
+              array.update(j, withSolvedValue(bridge, value, source));
               setOpen(false);
             }}
           />
@@ -341,8 +344,7 @@ function SolveButton({ index: j, bridge, array }: { index: number; bridge: Bridg
 }
 
 /** The bridge with a computed χ or ψ and its source (a fastener as a point bridge at its count). */
-export function withSolvedValue(bridge: Bridge, value: number, text: string): Bridge {
-  const source = { text };
+export function withSolvedValue(bridge: Bridge, value: number, source: SolvedSource): Bridge {
   if (bridge.kind === 'point') return { ...bridge, chi: value as PointBridge['chi'], source };
   if (bridge.kind === 'linear') return { ...bridge, psi: value as LinearBridge['psi'], source };
   return {
@@ -398,7 +400,12 @@ function LibraryPick({
               const pick = offered.find((b) => b.id === e.target.value);
               if (!pick) return;
               const n = pick.name.slice(0, 120);
-              const from = { text: bridgeSourceText(pick), libraryEntryId: pick.id };
+              // A computed entry brings its detail, solve and map (the sheet draws it, the moisture check reads f_Rsi).
+              const from = {
+                text: bridgeSourceText(pick),
+                libraryEntryId: pick.id,
+                ...(pick.computed ? { computed: pick.computed } : {}),
+              };
               array.update(
                 j,
                 kind === 'point'

@@ -63,14 +63,54 @@ describe('Solve dialog (bridge solver on the assembly layers)', () => {
 
     fireEvent.click(use);
     expect(onUse).toHaveBeenCalledTimes(1);
-    const [psi, text] = onUse.mock.calls[0]!;
+    const [psi, source] = onUse.mock.calls[0]!;
     expect(psi).toBeGreaterThan(0);
     expect(Number.isFinite(psi)).toBe(true);
-    expect(text).toMatch(
+    // The solve travels with the value: its detail (to redraw it), mesh, f_Rsi and a coarse map.
+    expect(source.computed.detail.template).toBe('girt');
+    expect(source.computed.value).toBe(psi);
+    expect(source.computed.fRsi).toBeGreaterThan(0);
+    expect(source.computed.fRsi).toBeLessThan(1);
+    expect(source.computed.map.x.length).toBeLessThanOrEqual(49);
+    expect(source.text).toMatch(
       new RegExp(
         `^computed by Skinwright ${ENGINE_VERSION.replace(/\./g, '\\.')}, mesh [\\d,]+ cells, \\d{4}-\\d{2}-\\d{2}$`,
       ),
     );
+  }, 30_000);
+
+  it('"Save to the library" sends the computed value with its detail; "Use this value" then names the entry', async () => {
+    const add = vi.fn(async () => ({ id: '00000000-0000-4000-8000-000000000001' }));
+    const onUse = vi.fn();
+    render(
+      <UnitSystemProvider value="SI">
+        <BridgeSolveDialog
+          bridge={bridgeOf('linear')}
+          layers={layers}
+          onUse={onUse}
+          onClose={() => {}}
+          runner={directRunner}
+          save={{ firmName: 'Larchmere', add }}
+        />
+      </UnitSystemProvider>,
+    );
+    fireEvent.change(screen.getByLabelText('Detail'), { target: { value: 'corner' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Solve' }));
+    const save = await screen.findByRole(
+      'button',
+      { name: "Save to Larchmere's library" },
+      { timeout: 20_000 },
+    );
+    fireEvent.change(screen.getByLabelText('Name in the library'), {
+      target: { value: 'Corner, demo wall' },
+    });
+    fireEvent.click(save);
+    expect(await screen.findByText(/Saved to Larchmere's library/)).toBeTruthy();
+    const [entry] = add.mock.calls[0]! as unknown as [Record<string, unknown>];
+    expect(entry).toMatchObject({ name: 'Corner, demo wall', kind: 'linear', sourceType: 'calculation' });
+    expect((entry.computed as { detail: { input: { kind: string } } }).detail.input.kind).toBe('corner');
+    fireEvent.click(screen.getByRole('button', { name: 'Use this value' }));
+    expect(onUse.mock.calls[0]![1].libraryEntryId).toBe('00000000-0000-4000-8000-000000000001');
   }, 30_000);
 
   it('clip: a thermally broken clip starts with a pad; inputs shown in IP units', () => {

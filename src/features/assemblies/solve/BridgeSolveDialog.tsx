@@ -1,7 +1,10 @@
+import type { ComputedBridge } from '@shared/calc/bridge/computed';
+import { computedOf } from '@shared/calc/bridge/detail';
 import { type TemplateLayer, templateWall } from '@shared/calc/bridge/templates';
 import { CalcInputError } from '@shared/calc/errors';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import { ENGINE_VERSION } from '@shared/calc/trace';
+import type { BridgeValueInput } from '@shared/schemas/assembly';
 import { useEffect, useMemo, useState } from 'react';
 import { ZodError } from 'zod';
 import { Button } from '../../../components/ui/Button';
@@ -10,6 +13,7 @@ import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
+import { TextInput } from '../../../components/ui/TextInput';
 import { formatQuantity } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { formatMeasure, type Measure, measureInput } from '../units';
@@ -19,6 +23,7 @@ import {
   type ClipInputs,
   computedSourceText,
   crossedDepth,
+  detailOf,
   type FastenerInputs,
   GENERIC,
   type GirtInputs,
@@ -45,7 +50,11 @@ type Phase =
       metal: { min: number[]; max: number[] }[];
       warm: number;
       cold: number;
+      source: SolvedSource;
     };
+
+/** The source a computed value is stored with: its words, the solve, and the library entry once saved. */
+export type SolvedSource = { text: string; computed?: ComputedBridge; libraryEntryId?: string };
 
 /** What each detail is, and what the map shows of it. */
 const DETAIL_WORDS: Record<SolveInputs['kind'], { intro: string; map: string; orientation: string }> = {
@@ -96,12 +105,15 @@ export function BridgeSolveDialog({
   layers,
   onUse,
   onClose,
+  save,
   runner = workerRunner,
 }: {
   bridge: Bridge;
   layers: Layer[];
-  onUse: (value: number, sourceText: string) => void;
+  onUse: (value: number, source: SolvedSource) => void;
   onClose: () => void;
+  /** Save to the firm library (absent unless the person may write it). */
+  save?: { firmName: string; add: (entry: BridgeValueInput) => Promise<{ id: string }> };
   runner?: BridgeRunner;
 }) {
   const system = useUnitSystem();
@@ -133,17 +145,32 @@ export function BridgeSolveDialog({
     }
     const run = runner(model);
     setPhase({ at: 'solving', started: Date.now(), run });
+    const detail = detailOf(inputs, layers);
     run.outcome.then((o) => {
       setPhase((now) => {
         if (now.at !== 'solving' || now.run !== run) return now;
         if (!o.ok) return { at: 'form', problem: `${o.field}: ${o.reason}` };
         const temps = model.boundaries.map((b) => b.temperature);
+        const [warm, cold] = [Math.max(...temps), Math.min(...temps)];
+        const date = new Date();
+        const computed = computedOf(
+          detail,
+          o.solved.result,
+          o.solved.section,
+          { inside: warm, outside: cold },
+          ENGINE_VERSION,
+          date,
+        );
         return {
           at: 'done',
           solved: o.solved,
           metal: model.boxes.filter((b) => b.lambda >= 1),
-          warm: Math.max(...temps),
-          cold: Math.min(...temps),
+          warm,
+          cold,
+          source: {
+            text: computedSourceText(ENGINE_VERSION, o.solved.result.cells, date),
+            ...(computed ? { computed } : {}),
+          },
         };
       });
     });
@@ -261,20 +288,89 @@ export function BridgeSolveDialog({
               A computed {symbol} is an aid to design: the maker's tested values or a specialist's model of
               the actual product govern.
             </Notice>
-            <div>
-              <Button
-                variant="primary"
-                onClick={() =>
-                  onUse(value, computedSourceText(ENGINE_VERSION, phase.solved.result.cells, new Date()))
-                }
-              >
+            <div className="flex flex-wrap items-end gap-3">
+              <Button variant="primary" onClick={() => onUse(value, phase.source)}>
                 Use this value
               </Button>
+              {save && phase.source.computed ? (
+                <SaveToLibrary
+                  save={save}
+                  defaultName={bridge.name || words.map}
+                  entry={{
+                    kind: measure === 'chi' ? 'point' : 'linear',
+                    value,
+                    sourceType: 'calculation',
+                    source: phase.source.text,
+                    computed: phase.source.computed,
+                  }}
+                  onSaved={(libraryEntryId) =>
+                    setPhase((now) =>
+                      now.at === 'done' ? { ...now, source: { ...now.source, libraryEntryId } } : now,
+                    )
+                  }
+                />
+              ) : null}
             </div>
           </section>
         ) : null}
       </div>
     </Dialog>
+  );
+}
+
+/** "Save to the library": the computed value with its detail and map, under a name, for other projects. */
+function SaveToLibrary({
+  save,
+  defaultName,
+  entry,
+  onSaved,
+}: {
+  save: { firmName: string; add: (entry: BridgeValueInput) => Promise<{ id: string }> };
+  defaultName: string;
+  entry: Omit<BridgeValueInput, 'name'>;
+  onSaved: (id: string) => void;
+}) {
+  const [name, setName] = useState(defaultName);
+  const [state, setState] = useState<'idle' | 'saving' | 'saved' | { problem: string }>('idle');
+  async function submit() {
+    setState('saving');
+    try {
+      const saved = await save.add({ ...entry, name: name.trim() });
+      setState('saved');
+      onSaved(saved.id);
+    } catch (e) {
+      setState({ problem: e instanceof Error ? e.message : String(e) });
+    }
+  }
+  return (
+    <div className="flex flex-wrap items-end gap-3">
+      <Field label="Name in the library" className="min-w-56 flex-1">
+        {(c) => (
+          <TextInput
+            {...c}
+            className="py-1.5 text-sm"
+            value={name}
+            maxLength={200}
+            disabled={state === 'saved'}
+            onChange={(e) => setName(e.target.value)}
+          />
+        )}
+      </Field>
+      {state === 'saved' ? (
+        <p role="status" className="pb-2 text-sm text-meets">
+          ✓ Saved to {save.firmName}'s library
+        </p>
+      ) : (
+        <Button variant="secondary" onClick={submit} disabled={state === 'saving' || name.trim() === ''}>
+          {state === 'saving' ? 'Saving…' : `Save to ${save.firmName}'s library`}
+        </Button>
+      )}
+      {typeof state === 'object' ? (
+        <p role="alert" className="basis-full text-sm text-caution">
+          Not saved: {state.problem}
+        </p>
+      ) : null}
+    </div>
   );
 }
 

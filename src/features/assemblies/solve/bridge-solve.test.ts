@@ -73,7 +73,7 @@ describe('bridge-solve: fastener and edge details from the build-up page rows', 
   });
 
   it('"Use this value" on a fastener row makes a point bridge of χ at the same count', () => {
-    const solved = withSolvedValue(fastener, 0.002, 'computed');
+    const solved = withSolvedValue(fastener, 0.002, { text: 'computed' });
     expect(solved).toEqual({
       kind: 'point',
       name: fastener.name,
@@ -81,6 +81,10 @@ describe('bridge-solve: fastener and edge details from the build-up page rows', 
       countPerArea: 4,
       source: { text: 'computed' },
     });
-    expect(withSolvedValue(girt, 0.03, 'x')).toMatchObject({ kind: 'linear', psi: 0.03, spacing: 1.2 });
+    expect(withSolvedValue(girt, 0.03, { text: 'x' })).toMatchObject({
+      kind: 'linear',
+      psi: 0.03,
+      spacing: 1.2,
+    });
   });
 });

@@ -1,15 +1,7 @@
-import { type EdgeTemplate, edgeModel } from '@shared/calc/bridge/edges';
+import type { BridgeDetailInput } from '@shared/calc/bridge/computed';
+import { detailModel } from '@shared/calc/bridge/detail';
 import type { BridgeModelInput } from '@shared/calc/bridge/schema';
-import {
-  type ClipTemplate,
-  clipModel,
-  type FastenerTemplate,
-  fastenerModel,
-  type GirtTemplate,
-  girtModel,
-  type TemplateLayer,
-  templateWall,
-} from '@shared/calc/bridge/templates';
+import { type TemplateLayer, templateWall } from '@shared/calc/bridge/templates';
 import { findMaterial, materials } from '@shared/calc/thermal/materials';
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import { calculateThermal } from '@shared/calc/thermal/thermal';
@@ -194,58 +186,42 @@ export function initialInputs(bridge: Bridge, layers: readonly Layer[]): SolveIn
 export const crossedDepth = (wall: TemplateLayer[], from: number, to: number) =>
   wall.slice(from, to + 1).reduce((s, l) => s + l.thickness, 0);
 
-/** The solver model of the inputs (throws `CalcInputError` naming the template field for impossible ones). */
-export function solveModel(inputs: SolveInputs, layers: readonly Layer[]): BridgeModelInput {
+/** The detail of the inputs on this assembly's layers: a template and its inputs (stored with a computed value). */
+export function detailOf(inputs: SolveInputs, layers: readonly Layer[]): BridgeDetailInput {
   const { layers: wall, rsi, rse } = templateWall(layers);
   const edge = { layers: wall, rsi, rse };
-  return { ...templateModel(inputs, edge), field: true };
-}
-
-function templateModel(inputs: SolveInputs, edge: { layers: TemplateLayer[]; rsi: number; rse: number }) {
   if (inputs.kind === 'slab') {
     const { from, thickness, lambda } = inputs;
-    return edgeModel({ ...edge, kind: 'slab', slab: { from, thickness, lambda } } satisfies EdgeTemplate);
+    return { template: 'edge', input: { ...edge, kind: 'slab', slab: { from, thickness, lambda } } };
   }
-  if (inputs.kind === 'corner') return edgeModel({ ...edge, kind: 'corner' } satisfies EdgeTemplate);
+  if (inputs.kind === 'corner') return { template: 'edge', input: { ...edge, kind: 'corner' } };
   if (inputs.kind === 'opening') {
     const { width, depth, offset, lambda } = inputs;
-    return edgeModel({
-      ...edge,
-      kind: 'opening',
-      frame: { width, depth, offset, lambda },
-    } satisfies EdgeTemplate);
+    return { template: 'edge', input: { ...edge, kind: 'opening', frame: { width, depth, offset, lambda } } };
   }
   const base = { ...edge, crosses: { from: inputs.from, to: inputs.to } };
-  if (inputs.kind === 'girt')
-    return girtModel({
-      ...base,
-      profile: inputs.profile,
-      thickness: inputs.thickness,
-      outerFlange: inputs.outerFlange,
-      innerFlange: inputs.innerFlange,
-      spacing: inputs.spacing,
-    } satisfies GirtTemplate);
-  if (inputs.kind === 'fastener')
-    return fastenerModel({
-      ...base,
-      metalLambda: inputs.metalLambda,
-      diameter: inputs.diameter,
-      recess: inputs.recess,
-      spacingX: inputs.spacingX,
-      spacingZ: inputs.spacingZ,
-    } satisfies FastenerTemplate);
-  return clipModel({
-    ...base,
-    metalLambda: inputs.metalLambda,
-    width: inputs.width,
-    thickness: inputs.thickness,
-    spacingX: inputs.spacingX,
-    spacingZ: inputs.spacingZ,
-    ...(inputs.pad ? { pad: inputs.pad } : {}),
-  } satisfies ClipTemplate);
+  if (inputs.kind === 'girt') {
+    const { profile, thickness, outerFlange, innerFlange, spacing } = inputs;
+    return { template: 'girt', input: { ...base, profile, thickness, outerFlange, innerFlange, spacing } };
+  }
+  if (inputs.kind === 'fastener') {
+    const { metalLambda, diameter, recess, spacingX, spacingZ } = inputs;
+    return { template: 'fastener', input: { ...base, metalLambda, diameter, recess, spacingX, spacingZ } };
+  }
+  const { metalLambda, width, thickness, spacingX, spacingZ, pad } = inputs;
+  return {
+    template: 'clip',
+    input: { ...base, metalLambda, width, thickness, spacingX, spacingZ, ...(pad ? { pad } : {}) },
+  };
 }
 
-/** χ (3-D: clip, fastener) or ψ (2-D: girt, edges) — what a detail gives. */
+/** The solver model of the inputs (throws `CalcInputError` naming the template field for impossible ones). */
+export const solveModel = (inputs: SolveInputs, layers: readonly Layer[]): BridgeModelInput => ({
+  ...detailModel(detailOf(inputs, layers)),
+  field: true,
+});
+
+/** χ (3-D: clip, fastener) or ψ (2-D: girt, edges) — what the inputs' detail gives. */
 export const solvesFor = (inputs: SolveInputs): 'chi' | 'psi' =>
   inputs.kind === 'clip' || inputs.kind === 'fastener' ? 'chi' : 'psi';
 

@@ -23,15 +23,27 @@ const PARAMETER_WORDS: Record<string, string> = {
   panelModule: 'panel module',
   sealantClass: 'sealant class',
 };
-const LENGTHS = new Set(['insulationThickness', 'girtSpacing', 'clipSpacing', 'studSpacing', 'panelModule']);
+const SPACINGS = new Set(['girtSpacing', 'clipSpacing', 'studSpacing', 'panelModule']);
 
-/** A parameter's value as printed: lengths in the sheet's units, χ in W/K, a sealant class as its class. */
+/** How a numeric parameter is shown: thickness in mm (in), spacings in m (ft), χ in W/K. */
+function measureOf(kind: string, fmt: Formatter) {
+  if (kind === 'insulationThickness')
+    return {
+      value: fmt.thicknessValue,
+      unit: fmt.thicknessUnit,
+      words: fmt.thickness,
+      decimals: fmt.thicknessUnit === 'mm' ? 0 : 1,
+    };
+  if (SPACINGS.has(kind))
+    return { value: fmt.lengthValue, unit: fmt.lengthUnit, words: (m: number) => fmt.length(m), decimals: 2 };
+  return { value: (v: number) => v, unit: 'W/K', words: (v: number) => `${num(v, 4)} W/K`, decimals: 3 };
+}
+
+/** A parameter's value as printed (a sealant class as its class). */
 function valueWords(kind: string, v: number | string, fmt: Formatter): string {
   if (typeof v === 'string') return kind === 'sealantClass' ? `class ${v}` : v;
-  if (LENGTHS.has(kind)) return fmt.length(v);
-  return `${num(v, 4)} W/K`;
+  return measureOf(kind, fmt).words(v);
 }
-const axisValue = (kind: string, v: number, fmt: Formatter) => (LENGTHS.has(kind) ? fmt.lengthValue(v) : v);
 
 function drawChart(w: SheetWriter, sweep: SavedSweep, fmt: Formatter): void {
   const { parameters, points } = sweep.summary;
@@ -45,6 +57,7 @@ function drawChart(w: SheetWriter, sweep: SavedSweep, fmt: Formatter): void {
     return;
   }
   const second = parameters[1];
+  const m = measureOf(first.kind, fmt);
   const keyOf = (values: (number | string)[]) => (second ? String(values[1]) : '');
   const groups = new Map<string, { x: number; y: number; pass: boolean }[]>();
   for (const p of numeric) {
@@ -52,13 +65,13 @@ function drawChart(w: SheetWriter, sweep: SavedSweep, fmt: Formatter): void {
     if (!groups.has(k) && groups.size >= MAX_LINES) continue;
     const list = groups.get(k) ?? [];
     list.push({
-      x: axisValue(first.kind, p.values[0] as number, fmt),
+      x: m.value(p.values[0] as number),
       y: p.marginRatio! * 100,
       pass: p.verdict === 'pass',
     });
     groups.set(k, list);
   }
-  const xs = numeric.map((p) => axisValue(first.kind, p.values[0] as number, fmt));
+  const xs = numeric.map((p) => m.value(p.values[0] as number));
   const ys = [...groups.values()].flat().map((p) => p.y);
   const xTicks = niceTicks(Math.min(...xs), Math.max(...xs), 5);
   const yTicks = niceTicks(Math.min(0, ...ys), Math.max(0, ...ys), 5);
@@ -85,12 +98,12 @@ function drawChart(w: SheetWriter, sweep: SavedSweep, fmt: Formatter): void {
     w.text(`${num(t, 0)} %`, f.x - 1.2, py(t) + 1, { size: 6.2, align: 'right', color: INK.muted });
   }
   for (const t of xTicks)
-    w.text(num(t, LENGTHS.has(first.kind) ? (fmt.lengthUnit === 'mm' ? 0 : 2) : 3), px(t), f.y + f.h + 3.2, {
+    w.text(num(t, m.decimals), px(t), f.y + f.h + 3.2, {
       size: 6.2,
       align: 'center',
       color: INK.muted,
     });
-  w.text(LENGTHS.has(first.kind) ? fmt.lengthUnit : 'W/K', f.x + f.w, f.y + f.h + 6.4, {
+  w.text(m.unit, f.x + f.w, f.y + f.h + 6.4, {
     size: 6.2,
     align: 'right',
     color: INK.muted,
@@ -111,7 +124,7 @@ function drawChart(w: SheetWriter, sweep: SavedSweep, fmt: Formatter): void {
       doc.line(px(pts[j - 1]!.x), py(pts[j - 1]!.y), px(pts[j]!.x), py(pts[j]!.y));
     doc.setLineDashPattern([], 0);
     doc.setFillColor(LINE_COLORS[i]!);
-    for (const p of pts) if (p.pass) doc.circle(px(p.x), py(p.y), 0.45, 'F');
+    for (const p of pts) if (p.pass) doc.circle(px(p.x), py(p.y), 0.6, 'F');
   });
   doc.setDrawColor(INK.ink);
   doc.setLineWidth(0.2);
@@ -179,6 +192,7 @@ export function drawSweepAppendix(w: SheetWriter, sweep: SavedSweep, fmt: Format
   drawChart(w, sweep, fmt);
   const top = s.ranking?.top ?? [];
   if (top.length > 0) {
+    w.ensure(24);
     w.text('Cheapest passing variants (cost of what varies, per m² of wall)', w.left, w.y + 3, {
       font: 'sansBold',
       size: 7.6,

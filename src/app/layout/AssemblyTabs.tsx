@@ -1,7 +1,5 @@
-import { Link, NavLink } from 'react-router';
-
-const tabClass = ({ isActive }: { isActive: boolean }) =>
-  `-mb-px border-b-2 px-1 pb-2 text-sm font-semibold no-underline ${isActive ? 'border-ink text-ink' : 'border-transparent text-ink-muted hover:text-ink'}`;
+import { Link } from 'react-router';
+import { TabStrip } from '../../components/ui/TabStrip';
 
 /**
  * The pages of one assembly: its build-up (thermal), moisture, attachment (wind), joints & quantities, checks;
@@ -32,23 +30,16 @@ export function AssemblyTabs({
           </>
         )}
       </nav>
-      <nav aria-label="Assembly pages" className="flex flex-wrap gap-x-6 gap-y-2 border-b border-rule">
-        <NavLink to={base} end className={tabClass}>
-          Build-up &amp; R-value
-        </NavLink>
-        <NavLink to={`${base}/moisture`} className={tabClass}>
-          Moisture
-        </NavLink>
-        <NavLink to={`${base}/attachment`} className={tabClass}>
-          Attachment &amp; wind
-        </NavLink>
-        <NavLink to={`${base}/joints`} className={tabClass}>
-          Joints &amp; quantities
-        </NavLink>
-        <NavLink to={`${base}/checks`} className={tabClass}>
-          Checks
-        </NavLink>
-      </nav>
+      <TabStrip
+        label="Assembly pages"
+        tabs={[
+          { to: base, label: 'Build-up & R-value', end: true },
+          { to: `${base}/moisture`, label: 'Moisture' },
+          { to: `${base}/attachment`, label: 'Attachment & wind' },
+          { to: `${base}/joints`, label: 'Joints & quantities' },
+          { to: `${base}/checks`, label: 'Checks' },
+        ]}
+      />
     </div>
   );
 }

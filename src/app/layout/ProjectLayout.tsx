@@ -1,14 +1,12 @@
 import { can } from '@shared/auth/permissions';
-import { NavLink, Outlet, useParams } from 'react-router';
+import { Outlet, useParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
+import { TabStrip } from '../../components/ui/TabStrip';
 import { useProject } from '../../features/projects/api/get-project';
 import { errorMessage } from '../../lib/api';
 import { formatDate } from '../../lib/format';
-
-const tabClass = ({ isActive }: { isActive: boolean }) =>
-  `-mb-px border-b-2 px-1 pb-2 text-sm font-semibold no-underline ${isActive ? 'border-ink text-ink' : 'border-transparent text-ink-muted hover:text-ink'}`;
 
 /** The frame around every project page: its name, the page index (overview / assemblies / climate / people / activity). */
 export function ProjectLayout() {
@@ -24,34 +22,19 @@ export function ProjectLayout() {
     <>
       <title>{`${p.name} · Skinwright`}</title>
       <PageHeader eyebrow={eyebrow} title={p.name} />
-      <nav
-        aria-label="Project pages"
-        className="-mt-2 mb-6 flex flex-wrap gap-x-6 gap-y-2 border-b border-rule"
-      >
-        <NavLink to={`/projects/${p.id}`} end className={tabClass}>
-          Overview
-        </NavLink>
-        <NavLink to={`/projects/${p.id}/assemblies`} className={tabClass}>
-          Assemblies
-        </NavLink>
-        <NavLink to={`/projects/${p.id}/submittals`} className={tabClass}>
-          Submittals
-        </NavLink>
-        <NavLink to={`/projects/${p.id}/climate`} className={tabClass}>
-          Climate
-        </NavLink>
-        <NavLink to={`/projects/${p.id}/wind`} className={tabClass}>
-          Wind
-        </NavLink>
-        <NavLink to={`/projects/${p.id}/members`} className={tabClass}>
-          People
-        </NavLink>
-        {can(p.myRole, 'audit.read') ? (
-          <NavLink to={`/projects/${p.id}/activity`} className={tabClass}>
-            Activity
-          </NavLink>
-        ) : null}
-      </nav>
+      <TabStrip
+        label="Project pages"
+        className="-mt-2 mb-6"
+        tabs={[
+          { to: `/projects/${p.id}`, label: 'Overview', end: true },
+          { to: `/projects/${p.id}/assemblies`, label: 'Assemblies' },
+          { to: `/projects/${p.id}/submittals`, label: 'Submittals' },
+          { to: `/projects/${p.id}/climate`, label: 'Climate' },
+          { to: `/projects/${p.id}/wind`, label: 'Wind' },
+          { to: `/projects/${p.id}/members`, label: 'People' },
+          ...(can(p.myRole, 'audit.read') ? [{ to: `/projects/${p.id}/activity`, label: 'Activity' }] : []),
+        ]}
+      />
       {p.archivedAt ? (
         <Notice tone="warning" title={`Archived on ${formatDate(p.archivedAt)}.`} className="mb-6">
           <p>The project is read-only until an owner restores it.</p>

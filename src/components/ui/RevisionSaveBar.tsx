@@ -1,5 +1,5 @@
 import type { Assembly } from '@shared/schemas/assembly';
-import { type ReactNode, useEffect, useRef } from 'react';
+import { type ReactNode, useEffect, useRef, useState } from 'react';
 import { useBlocker } from 'react-router';
 import { formatDateTime } from '../../lib/format';
 import { isTextField, type RevisionSaving } from '../../lib/use-revision-editing';
@@ -89,6 +89,13 @@ export function RevisionSaveBar({
   const { base, conflict, carried, dirty, canSave, saving, savedAs, problem, note, setNote, leaving } =
     editing;
   const conflictRef = useRef<HTMLDivElement>(null);
+  // On a phone the bar is one line — live figures or the status, and Save; the note and Undo / Redo fold away.
+  const [more, setMore] = useState(false);
+  const folded = more ? '' : 'max-sm:hidden';
+  // The status line: beside Save on a phone, unless the live figures stand there (then it folds away too).
+  const status = live
+    ? `max-sm:order-last max-sm:min-w-full ${folded}`
+    : 'max-sm:order-first max-sm:min-w-0 max-sm:flex-1 max-sm:truncate';
   const { history } = editing;
   const stepsOpen = !saving && conflict === null;
   const canUndo = stepsOpen && history.canUndo;
@@ -129,7 +136,7 @@ export function RevisionSaveBar({
       requestAnimationFrame(() => conflictRef.current?.scrollIntoView({ block: 'center' }));
   }, [conflict, scrollToConflict]);
 
-  const row = 'flex flex-wrap items-end gap-x-6 gap-y-3';
+  const row = 'flex flex-wrap items-center gap-x-3 gap-y-3 sm:items-end sm:gap-x-6';
   const saveButton = (
     <Button
       type={inForm || words.formLabel ? 'submit' : 'button'}
@@ -139,11 +146,21 @@ export function RevisionSaveBar({
       disabled={conflict !== null || !canSave}
       onClick={inForm || words.formLabel ? undefined : () => void editing.saveNow()}
     >
-      {base ? `Save ${words.part ? `${words.part} ` : ''}as revision ${base.version + 1}` : 'Create assembly'}
+      {base ? (
+        // One text box (the button spaces its children apart); on a phone the rest is for screen readers only.
+        <span>
+          Save{' '}
+          <span className="max-sm:sr-only">
+            {`${words.part ? `${words.part} ` : ''}as revision ${base.version + 1}`}
+          </span>
+        </span>
+      ) : (
+        'Create assembly'
+      )}
     </Button>
   );
   const steps = (
-    <div className="flex gap-2">
+    <div className={`flex gap-2 max-sm:order-last ${folded}`}>
       <Button
         variant="quiet"
         onClick={history.undo}
@@ -166,12 +183,16 @@ export function RevisionSaveBar({
   );
   const content = (
     <>
-      {live}
+      {live ? (
+        <div className="min-w-0 max-sm:flex-1 max-sm:overflow-hidden max-sm:[&_.label-caps]:sr-only max-sm:[&>*]:min-w-0">
+          {live}
+        </div>
+      ) : null}
       {base ? (
         <Field
           label="Revision note"
           hint={words.noteHint ?? 'What changed, and why (kept with the revision).'}
-          className="min-w-64 flex-1"
+          className={`min-w-64 flex-1 max-sm:order-last max-sm:min-w-full ${folded}`}
         >
           {(c) => (
             <TextInput
@@ -185,20 +206,35 @@ export function RevisionSaveBar({
           )}
         </Field>
       ) : (
-        <p className="flex-1 text-sm text-ink-muted">The first save creates revision 1.</p>
+        <p className={`flex-1 text-sm text-ink-muted max-sm:order-last max-sm:min-w-full ${folded}`}>
+          The first save creates revision 1.
+        </p>
       )}
-      <div className="flex flex-col items-end gap-1">
-        <div className="flex flex-wrap justify-end gap-3">
+      <div className="flex flex-col items-end gap-1 max-sm:contents">
+        <div className="flex flex-wrap justify-end gap-3 max-sm:contents">
           {steps}
           {undo && dirty ? (
-            <Button variant="quiet" onClick={editing.discard} disabled={saving}>
+            <Button
+              variant="quiet"
+              onClick={editing.discard}
+              disabled={saving}
+              className={`max-sm:order-last ${folded}`}
+            >
               Discard my edits
             </Button>
           ) : null}
+          <Button
+            variant="quiet"
+            className="ml-auto sm:hidden"
+            aria-expanded={more}
+            onClick={() => setMore((open) => !open)}
+          >
+            {more ? 'Less' : 'More'}
+          </Button>
           {saveButton}
         </div>
         {history.removed && canUndo ? (
-          <p role="status" className="flex items-center gap-2 text-xs">
+          <p role="status" className="flex items-center gap-2 text-xs max-sm:min-w-full">
             Removed {history.removed} —
             <button type="button" className="underline underline-offset-2" onClick={history.undo}>
               Undo
@@ -206,13 +242,15 @@ export function RevisionSaveBar({
           </p>
         ) : null}
         {savedAs !== null && !dirty ? (
-          <p role="status" className="text-xs">
+          <p role="status" className={`text-xs ${status}`}>
             <span aria-hidden="true">✓ </span>Saved as revision {savedAs}.
           </p>
         ) : base && !dirty ? (
-          <p className="text-xs text-ink-muted">No changes to save.</p>
+          <p className={`text-xs text-ink-muted ${status}`}>No changes to save.</p>
         ) : dirtyHint ? (
-          <p className="text-xs text-ink-muted">{dirtyHint}</p>
+          <p className={`text-xs text-ink-muted ${status}`}>{dirtyHint}</p>
+        ) : dirty ? (
+          <p className={`text-xs text-ink-muted sm:hidden ${status}`}>Not saved yet.</p>
         ) : null}
       </div>
     </>
@@ -278,7 +316,7 @@ export function RevisionSaveBar({
         </Notice>
       ) : null}
 
-      <div className="sticky bottom-0 z-10 -mx-4 border-t-2 border-ink bg-paper px-4 py-3 sm:-mx-6 sm:px-6 print:hidden">
+      <div className="sticky bottom-0 z-10 -mx-4 border-t-2 border-ink bg-paper px-4 py-2 sm:-mx-6 sm:py-3 sm:px-6 print:hidden">
         {words.formLabel ? (
           <form
             className={row}

@@ -1,4 +1,12 @@
-import type { ReactNode, TdHTMLAttributes, ThHTMLAttributes } from 'react';
+import {
+  type ReactNode,
+  type TdHTMLAttributes,
+  type ThHTMLAttributes,
+  useId,
+  useLayoutEffect,
+  useRef,
+  useState,
+} from 'react';
 
 interface TableProps {
   /** Every table has a caption; pass `captionHidden` to keep it for screen readers only. */
@@ -8,16 +16,61 @@ interface TableProps {
   className?: string;
 }
 
-/** Ruled table: a heavy rule under the head, hairlines between rows, no boxes. */
-export function Table({ caption, captionHidden = false, children, className = '' }: TableProps) {
+/** Whether the box's content is wider than the box (it scrolls sideways), followed as either is resized. */
+function useWiderThanBox() {
+  const box = useRef<HTMLDivElement>(null);
+  const [wider, setWider] = useState(false);
+  useLayoutEffect(() => {
+    const el = box.current;
+    if (!el || typeof ResizeObserver === 'undefined') return;
+    const measure = () => setWider(el.scrollWidth > el.clientWidth + 1);
+    const observer = new ResizeObserver(measure);
+    observer.observe(el);
+    if (el.firstElementChild) observer.observe(el.firstElementChild);
+    return () => observer.disconnect();
+  }, []);
+  return { box, wider };
+}
+
+/**
+ * The box a table scrolls sideways in, so that a wide table never widens the page (a phone is 390 px). While
+ * the table is wider than the box, the box is a named region reachable with the keyboard (arrow keys scroll
+ * it), its right edge is ruled where the table is cut, and a line under it says it scrolls.
+ */
+export function TableScroller({ labelledBy, children }: { labelledBy?: string; children: ReactNode }) {
+  const { box, wider } = useWiderThanBox();
+  const hint = useId();
   // `relative`: text for screen readers only (absolutely placed) stays inside the scroller, not past the page.
   return (
-    <div className="relative overflow-x-auto">
+    <div
+      ref={box}
+      className={`relative overflow-x-auto ${wider ? 'border-r border-rule print:border-0' : ''}`}
+      {...(wider
+        ? { role: 'region', tabIndex: 0, 'aria-labelledby': labelledBy, 'aria-describedby': hint }
+        : {})}
+    >
+      {children}
+      {wider ? (
+        <p id={hint} className="sticky left-0 pt-1 text-xs text-ink-muted print:hidden">
+          Wider than the screen: scroll the table sideways.
+        </p>
+      ) : null}
+    </div>
+  );
+}
+
+/** Ruled table: a heavy rule under the head, hairlines between rows, no boxes. */
+export function Table({ caption, captionHidden = false, children, className = '' }: TableProps) {
+  const captionId = useId();
+  return (
+    <TableScroller labelledBy={captionId}>
       <table className={`w-full border-collapse text-left text-sm ${className}`}>
-        <caption className={captionHidden ? 'sr-only' : 'label-caps pb-2 text-left'}>{caption}</caption>
+        <caption id={captionId} className={captionHidden ? 'sr-only' : 'label-caps pb-2 text-left'}>
+          {caption}
+        </caption>
         {children}
       </table>
-    </div>
+    </TableScroller>
   );
 }
 

@@ -10,7 +10,7 @@ import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
-import { Th } from '../../../components/ui/Table';
+import { TableScroller, Th } from '../../../components/ui/Table';
 import { TextInput } from '../../../components/ui/TextInput';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AttachmentFormValues, blankRow, windFieldId } from '../form';
@@ -235,9 +235,9 @@ export function PanelInputs({
             <span>{errors.rows}</span>
           </p>
         ) : null}
-        <div className="relative overflow-x-auto">
-          <table className="w-full border-collapse text-left text-sm" id={windFieldId('rows')}>
-            <caption className="sr-only">
+        <TableScroller labelledBy={`${windFieldId('rows')}-caption`}>
+          <table className="w-full min-w-[40rem] border-collapse text-left text-sm" id={windFieldId('rows')}>
+            <caption id={`${windFieldId('rows')}-caption`} className="sr-only">
               Load–span table of the panel, one row per span, spans increasing
             </caption>
             <thead>
@@ -301,7 +301,7 @@ export function PanelInputs({
               ))}
             </tbody>
           </table>
-        </div>
+        </TableScroller>
         {disabled ? null : (
           <div className="flex flex-wrap items-center gap-3">
             <Button

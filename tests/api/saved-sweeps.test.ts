@@ -199,6 +199,23 @@ describe.each(testDatabases())('sweep costs and saved sweeps on %s', (kind) => {
     expect(Object.keys(bad.body.error.fields)).toEqual(['query.to']);
   });
 
+  it('searches a saved sweep larger than SWEEP_MAX_VARIANTS within that many, and keeps what it explored', async () => {
+    const res = await (await as('engineer')).post(`/api/assemblies/${assembly.id}/sweeps`).send({
+      name: 'Fine thickness',
+      criteriaSetId: setId,
+      parameters: [
+        { kind: 'insulationThickness', layer, range: { start: 0.01, stop: 0.3, step: 0.0005 } },
+        { kind: 'clipChi', bridge: 0, list: [0.005, 0.02] },
+      ],
+    });
+    expect(res.status, res.text.slice(0, 300)).toBe(201);
+    const e = res.body.summary.exploration;
+    expect(res.body.summary.count).toBe(1162);
+    expect(e.mode).toBe('bounded');
+    expect(e.evaluated).toBeLessThanOrEqual(500);
+    expect(e.evaluated + e.provenFailing + e.costlier + e.unexplored).toBe(1162);
+  });
+
   it('prints a saved sweep as an appendix of the compliance sheet', async () => {
     const engineer = await as('engineer');
     const sweep = (await engineer.get(`/api/assemblies/${assembly.id}/sweeps`)).body.sweeps[0];

@@ -170,8 +170,8 @@ function joints(w: SheetWriter, data: SheetData, fmt: Formatter): void {
     r.joints.map((j) => [
       j.name,
       `${fmt.length(j.movementExtension)} / ${fmt.length(j.movementCompression)}`,
-      fmt.length(j.requiredWidth),
-      fmt.length(j.designWidth),
+      fmt.length(j.requiredWidth, { inchFractions: true }),
+      fmt.length(j.designWidth, { inchFractions: true }),
       j.governing,
       {
         text:

@@ -5,16 +5,21 @@ import {
   QUANTITIES,
   type UnitSystem,
   unitsOf,
-} from '@shared/units';
-import { fixed, trimmedFixed } from '@shared/units/rounding';
-import type { InputMeasure, ParsedEntry } from './input-measure';
+} from '../units';
+import { fixed, trimmedFixed } from '../units/rounding';
+import { exactFraction, inchFraction, parseInches } from './inches';
+import { formatterFor } from './quantities';
+
+/** What a number box read: nothing, something that is not a number, or a number (already SI). */
+export type ParsedEntry = { kind: 'empty' } | { kind: 'invalid' } | { kind: 'ok'; si: number };
 
 /*
- * The quantities of the joint schedule and the takeoff, and how each crosses the SI/IP edge. Stored values
+ * The measures of the joints and takeoff pages (screen words: the joint schedule, the takeoff) and how each
+ * crosses the SI/IP edge. Stored values
  * are SI (m, °C, 1/K, m³, m², fractions 0–1); only what is shown and typed is converted. Small lengths in IP
  * are read and written in inches with fractions (¾, 1 1/4, 13/16) as the trade draws them.
  */
-export type SheetMeasure =
+export type PageMeasure =
   | 'joint'
   | 'spacing'
   | 'length'
@@ -24,7 +29,7 @@ export type SheetMeasure =
   | 'volume'
   | 'area';
 
-interface SheetMeasureSpec {
+interface PageMeasureSpec {
   unit: Record<UnitSystem, string>;
   /** Decimals shown in tables (and most decimals typed back into a box). */
   decimals: Record<UnitSystem, number>;
@@ -46,7 +51,7 @@ const registered = (q: Parameters<typeof unitsOf>[0]) => {
   return { unit, ...scaled(factor.SI, factor.IP) };
 };
 
-export const SHEET_MEASURES: Record<SheetMeasure, SheetMeasureSpec> = {
+export const PAGE_MEASURES: Record<PageMeasure, PageMeasureSpec> = {
   joint: { ...registered('shortLength'), decimals: { SI: 1, IP: 3 }, fixed: true, fractions: true },
   spacing: { ...registered('shortLength'), decimals: { SI: 0, IP: 2 }, fractions: true },
   length: { ...registered('length'), decimals: { SI: 3, IP: 2 } },
@@ -67,7 +72,7 @@ export const SHEET_MEASURES: Record<SheetMeasure, SheetMeasureSpec> = {
   area: { ...registered('area'), decimals: { SI: 2, IP: 1 }, fixed: true },
 };
 
-export const sheetUnit = (m: SheetMeasure, system: UnitSystem) => SHEET_MEASURES[m].unit[system];
+export const pageMeasureUnit = (m: PageMeasure, system: UnitSystem) => PAGE_MEASURES[m].unit[system];
 
 const minus = (t: string) => t.replace(/^-/, '\u2212');
 
@@ -80,68 +85,12 @@ function fixedText(value: number, decimals: number): string {
   return fixed(value, decimals);
 }
 
-// --------------------------------------------------------------------------------------- fractions
-
-const gcd = (a: number, b: number): number => (b === 0 ? a : gcd(b, a % b));
-
-/** Inches as a trade fraction: 0.75 → "3/4", 1.25 → "1 1/4", 2 → "2". `denominator` sets the step. */
-export function inchFraction(inches: number, denominator = 16, mode: 'nearest' | 'up' = 'nearest'): string {
-  if (!Number.isFinite(inches)) return '';
-  const sign = inches < 0 ? '-' : '';
-  const a = Math.abs(inches);
-  const n = mode === 'up' ? Math.ceil(a * denominator - 1e-9) : Math.round(a * denominator);
-  const whole = Math.floor(n / denominator);
-  const rest = n % denominator;
-  if (rest === 0) return `${sign}${whole}`;
-  const g = gcd(rest, denominator);
-  const frac = `${rest / g}/${denominator / g}`;
-  return `${sign}${whole > 0 ? `${whole} ` : ''}${frac}`;
-}
-
-/** The fraction when `inches` is a whole number of 64ths (to 1e-6 in), else null. */
-function exactFraction(inches: number): string | null {
-  const n = inches * 64;
-  return Math.abs(n - Math.round(n)) < 64e-6 ? inchFraction(inches, 64) : null;
-}
-
-const VULGAR: Record<string, string> = {
-  '¼': '1/4',
-  '½': '1/2',
-  '¾': '3/4',
-  '⅛': '1/8',
-  '⅜': '3/8',
-  '⅝': '5/8',
-  '⅞': '7/8',
-  '⅙': '1/6',
-  '⅓': '1/3',
-  '⅔': '2/3',
-};
-
-/** Read "3/4", "1 1/4", "1-1/4", "1¼", ".75", "0.75" (an optional trailing ″, " or in); null otherwise. */
-export function parseInches(text: string): number | null {
-  let t = text.trim().replace(/\u2212/g, '-');
-  t = t.replace(/(in\.?|["″])$/i, '').trim();
-  t = t.replace(/(\d)?\s*([¼½¾⅛⅜⅝⅞⅙⅓⅔])/g, (_, d: string | undefined, v: string) =>
-    d ? `${d} ${VULGAR[v]}` : (VULGAR[v] ?? v),
-  );
-  const sign = t.startsWith('-') ? -1 : 1;
-  t = t.replace(/^[-+]/, '').trim();
-  if (/^(\d+\.?\d*|\.\d+)$/.test(t)) return sign * Number(t);
-  const m = /^(?:(\d+)(?:\s+|\s*-\s*))?(\d+)\s*\/\s*(\d+)$/.exec(t);
-  if (!m) return null;
-  const whole = m[1] ? Number(m[1]) : 0;
-  const num = Number(m[2]);
-  const den = Number(m[3]);
-  if (den === 0) return null;
-  return sign * (whole + num / den);
-}
-
 // ------------------------------------------------------------------------------------ text ⇄ SI
 
 /** The number as it goes into an editable box (exact inch fractions written as fractions). */
-export function sheetInputText(si: number | null | undefined, m: SheetMeasure, system: UnitSystem): string {
+export function pageInputText(si: number | null | undefined, m: PageMeasure, system: UnitSystem): string {
   if (si == null || !Number.isFinite(si)) return '';
-  const spec = SHEET_MEASURES[m];
+  const spec = PAGE_MEASURES[m];
   const shown = spec.toShown(si, system);
   if (spec.fractions && system === 'IP') {
     const f = exactFraction(shown);
@@ -151,13 +100,11 @@ export function sheetInputText(si: number | null | undefined, m: SheetMeasure, s
   return trim(shown, spec.decimals[system] + 1);
 }
 
-export type SheetParse = ParsedEntry;
-
 /** Read what was typed: a plain number (sign, one point, exponent), or inch fractions where they apply. */
-export function parseSheetInput(text: string, m: SheetMeasure, system: UnitSystem): SheetParse {
+export function parsePageInput(text: string, m: PageMeasure, system: UnitSystem): ParsedEntry {
   const t = text.trim().replace(/\u2212/g, '-');
   if (t === '') return { kind: 'empty' };
-  const spec = SHEET_MEASURES[m];
+  const spec = PAGE_MEASURES[m];
   let shown: number | null = null;
   if (/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) shown = Number(t);
   else if (spec.fractions && system === 'IP') shown = parseInches(t);
@@ -167,14 +114,16 @@ export function parseSheetInput(text: string, m: SheetMeasure, system: UnitSyste
 }
 
 /** The figure as it is read: typographic minus, narrow space, unit; "—" when there is no number. */
-export function formatSheet(
+export function formatPageMeasure(
   si: number | null | undefined,
-  m: SheetMeasure,
+  m: PageMeasure,
   system: UnitSystem,
   decimals?: number,
 ): string {
+  // A joint dimension reads as the length formatter words it, here and on the sheet (one rule).
+  if (m === 'joint' && decimals === undefined) return formatJointDimension(si, system);
   if (si == null || !Number.isFinite(si)) return '—';
-  const spec = SHEET_MEASURES[m];
+  const spec = PAGE_MEASURES[m];
   const shown = spec.toShown(si, system);
   const d = decimals ?? spec.decimals[system];
   const text = spec.fixed ? fixedText(shown, d) : trim(shown, d);
@@ -183,24 +132,21 @@ export function formatSheet(
 }
 
 /** A range with its unit once: "−25 to 80 °C". */
-export function formatSheetRange(min: number, max: number, m: SheetMeasure, system: UnitSystem): string {
-  const lo = formatSheet(min, m, system);
-  const hi = formatSheet(max, m, system);
-  const unit = SHEET_MEASURES[m].unit[system];
+export function formatPageRange(min: number, max: number, m: PageMeasure, system: UnitSystem): string {
+  const lo = formatPageMeasure(min, m, system);
+  const hi = formatPageMeasure(max, m, system);
+  const unit = PAGE_MEASURES[m].unit[system];
   return lo === '—' || hi === '—' ? `${lo} to ${hi}` : `${lo.slice(0, -unit.length).trimEnd()} to ${hi}`;
 }
 
 /**
- * A joint dimension as the trade writes it: "20.0 mm"; in IP the exact fraction when there is one
- * ("3/4 in"), else decimal inches ("0.787 in").
+ * A joint dimension as the trade writes it, on the joints and takeoff pages and on the sheet alike: the
+ * length formatter with inch fractions ("20 mm"; in IP the exact fraction when there is one, "3/4 in", else
+ * decimal inches, "0.79 in").
  */
 export function formatJointDimension(si: number | null | undefined, system: UnitSystem): string {
   if (si == null || !Number.isFinite(si)) return '—';
-  if (system === 'IP') {
-    const f = exactFraction(si / INCH);
-    if (f !== null) return `${minus(f)}\u202fin`;
-  }
-  return formatSheet(si, 'joint', system);
+  return formatterFor(system).length(si, { inchFractions: true });
 }
 
 /** The next 1/16 in at or above a width, for the IP reader: "11/16 in"; null in SI. */
@@ -210,21 +156,8 @@ export function nextSixteenth(si: number, system: UnitSystem): string | null {
 }
 
 /** A limit from a schema in the person's units, four significant figures ("200 mm", "7.874 in"). */
-export function formatSheetBound(si: number, m: SheetMeasure, system: UnitSystem): string {
-  const spec = SHEET_MEASURES[m];
+export function formatPageBound(si: number, m: PageMeasure, system: UnitSystem): string {
+  const spec = PAGE_MEASURES[m];
   const shown = Number(spec.toShown(si, system).toPrecision(4));
   return `${minus(String(shown))}\u202f${spec.unit[system]}`;
 }
-
-/**
- * A sheet measure as a number box (`QuantityInput`) shows and reads it: range problems worded in its units,
- * inch fractions typed where they apply (a keyboard with space and slash).
- */
-export const sheetInput = (m: SheetMeasure): InputMeasure => ({
-  unit: (system) => sheetUnit(m, system),
-  toText: (si, system) => sheetInputText(si, m, system),
-  parse: (text, system) => parseSheetInput(text, m, system),
-  bound: (si, system) => formatSheetBound(si, m, system),
-  example: (system) => (m === 'joint' && system === 'IP' ? '3/4 or 0.75' : '12.5'),
-  inputMode: SHEET_MEASURES[m].fractions ? 'text' : 'decimal',
-});

@@ -1,6 +1,7 @@
 import { CRITERION_TYPES, type CriterionSpec } from '../checks/criteria';
 import { type DisplayUnit, QUANTITIES, storedToShown, type UnitSystem } from '../units';
 import { trimmedFixed } from '../units/rounding';
+import { exactFraction } from './inches';
 
 /*
  * How a figure reads — on every screen and on the compliance sheet alike: an SI value in, the person's unit
@@ -44,15 +45,18 @@ export function quantityFormatter(system: UnitSystem) {
     num,
     /** Layer thickness: mm to 0.01 (a 0.15 mm film reads 0.15), in to 0.001. */
     thickness: (m: number) => figure(m, unit('shortLength'), ip ? 3 : 2),
-    /** Spacing, span or joint width: mm below 0.1 m, else m; in IP in (to 0.01) below 0.3 m, else ft. */
-    length: (m: number) =>
-      ip
-        ? Math.abs(m) < 0.3
-          ? figure(m, Q.shortLength.IP, 2)
-          : figure(m, Q.length.IP)
-        : Math.abs(m) < 0.1
-          ? figure(m, Q.shortLength.SI)
-          : figure(m, Q.length.SI),
+    /**
+     * Spacing, span or joint width: mm below 0.1 m, else m; in IP in (to 0.01) below 0.3 m, else ft.
+     * `inchFractions`: inches that are a whole number of 64ths read as the trade draws them ("3/4 in").
+     */
+    length: (m: number, options: { inchFractions?: boolean } = {}) => {
+      if (!ip) return figure(m, Math.abs(m) < 0.1 ? Q.shortLength.SI : Q.length.SI);
+      if (Math.abs(m) >= 0.3) return figure(m, Q.length.IP);
+      const fraction = options.inchFractions ? exactFraction(storedToShown(m, Q.shortLength.IP)) : null;
+      return fraction === null
+        ? figure(m, Q.shortLength.IP, 2)
+        : withUnit(fraction.replace(/^-/, MINUS), Q.shortLength.IP.symbol);
+    },
     /** Site dimensions (height, plan): m to 0.01 or ft to 0.1. */
     dimension: (m: number) => figure(m, unit('length'), ip ? 1 : 2),
     temperature: (c: number) => figure(c, unit('temperature')),
@@ -61,13 +65,17 @@ export function quantityFormatter(system: UnitSystem) {
     rh: (fraction: number) => withUnit(num(fraction * 100, 1), '%'),
     /** Vent area of an air layer (ISO 6946 §6.9.3), stored in mm²/m: mm²/m or in²/ft. */
     ventArea: (mm2PerM: number) => figure(mm2PerM, unit('ventArea')),
-    /** R to the unit's decimals, or three significant figures when small (a film, a membrane). */
-    rValue: (v: number) => {
-      const d = unit('resistance');
-      const shown = storedToShown(v, d);
+    /** The bare R number (a column head carries the unit): the unit's decimals, three significant figures when small (a film, a membrane). */
+    rNumber: (v: number) => {
+      const shown = storedToShown(v, unit('resistance'));
       const small = ip ? shown < 1 : shown < 0.1;
-      return figure(v, d, small ? Math.min(ip ? 6 : 4, sig3(shown)) : d.decimals);
+      return num(shown, small ? Math.min(ip ? 6 : 4, sig3(shown)) : unit('resistance').decimals);
     },
+    /** R with its unit, "2.31 m²·K/W"; `rPrefix` reads IP as practitioners say it, "R-13.1". */
+    rValue: (v: number, options: { rPrefix?: boolean } = {}) =>
+      ip && options.rPrefix ? `R-${f.rNumber(v)}` : withUnit(f.rNumber(v), unit('resistance').symbol),
+    /** The bare U number. */
+    uNumber: (v: number) => num(storedToShown(v, unit('transmittance')), unit('transmittance').decimals),
     uValue: (v: number) => figure(v, unit('transmittance')),
     /** λ to three significant figures. */
     lambda: (v: number) => figure(v, unit('conductivity'), sig3(storedToShown(v, unit('conductivity')))),
@@ -120,3 +128,16 @@ export const formatterFor = (system: UnitSystem): QuantityFormatter => FORMATTER
 /** A value of a check, metric or trace step with its unit in `system` (see `siValue`). */
 export const formatSiValue = (value: number | boolean | null, siUnit: string, system: UnitSystem): string =>
   FORMATTERS[system].siValue(value, siUnit);
+
+/** R as the build-up page and the sheet read it ("2.31 m²·K/W", "R-13.1" in IP); "—" without a number. */
+export const formatR = (si: number | null | undefined, system: UnitSystem): string =>
+  si == null || !Number.isFinite(si) ? '—' : FORMATTERS[system].rValue(si, { rPrefix: true });
+/** U with its unit ("0.433 W/(m²·K)"); "—" without a number. */
+export const formatU = (si: number | null | undefined, system: UnitSystem): string =>
+  si == null || !Number.isFinite(si) ? '—' : FORMATTERS[system].uValue(si);
+/** The bare R number for a table whose head carries the unit; "—" without a number. */
+export const rNumber = (si: number | null | undefined, system: UnitSystem): string =>
+  si == null || !Number.isFinite(si) ? '—' : FORMATTERS[system].rNumber(si);
+/** The bare U number; "—" without a number. */
+export const uNumber = (si: number | null | undefined, system: UnitSystem): string =>
+  si == null || !Number.isFinite(si) ? '—' : FORMATTERS[system].uNumber(si);

@@ -1,9 +1,9 @@
 import { CalcInputError } from '@shared/calc/errors';
 import { sentence } from '@shared/format';
+import { formatPageBound, type PageMeasure } from '@shared/format/page-measures';
 import type { UnitSystem } from '@shared/units';
 import type { InputMeasure } from './input-measure';
 import { type IssueReason, issueReason, issuesByPath, reasonWords, type ZodIssueLike } from './issue-words';
-import { formatSheetBound, type SheetMeasure } from './sheet-units';
 
 /*
  * Why a value cannot be used, keyed by its dotted path (`joints.0.designWidth`, `takeoff.walls.1.length`).
@@ -42,13 +42,13 @@ export function calcProblem(e: unknown, prefix = ''): [string, FieldProblem] {
 /** The problem in words; a bound is worded in the box's measure and the person's units. */
 export function problemText(
   p: FieldProblem,
-  measure: SheetMeasure | InputMeasure | undefined,
+  measure: PageMeasure | InputMeasure | undefined,
   system: UnitSystem,
 ): string {
   if (p.kind === 'text') return p.text;
   return reasonWords(p, (si) =>
     typeof measure === 'string'
-      ? formatSheetBound(si, measure, system)
+      ? formatPageBound(si, measure, system)
       : (measure?.bound?.(si, system) ?? String(si)),
   );
 }

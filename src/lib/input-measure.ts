@@ -1,11 +1,19 @@
+import {
+  formatPageBound,
+  PAGE_MEASURES,
+  type PageMeasure,
+  type ParsedEntry,
+  pageInputText,
+  pageMeasureUnit,
+  parsePageInput,
+} from '@shared/format/page-measures';
 import type { UnitSystem } from '@shared/units';
 
-/** What a number box read: nothing, something that is not a number, or a number (already SI). */
-export type ParsedEntry = { kind: 'empty' } | { kind: 'invalid' } | { kind: 'ok'; si: number };
+export type { ParsedEntry };
 
 /**
  * How one measure crosses the SI/IP edge in an editable box — the small interface through which every units
- * table (`lib/quantities`, `lib/sheet-units`, `features/wind/units`, `features/assemblies/units`) plugs into
+ * table (`lib/quantities`, the joints and takeoff pages' `pageInput` below, `features/wind/units`, `features/assemblies/units`) plugs into
  * `QuantityInput`. The box stores SI; only what is shown and typed is converted.
  */
 export interface InputMeasure {
@@ -22,3 +30,16 @@ export interface InputMeasure {
   /** 'text' where fractions with spaces and slashes are typed ("1 1/4"); 'decimal' otherwise. */
   inputMode?: 'decimal' | 'text';
 }
+
+/**
+ * A joints or takeoff page measure (`@shared/format/page-measures`) as a number box shows and reads it: range
+ * problems worded in its units, inch fractions typed where they apply (a keyboard with space and slash).
+ */
+export const pageInput = (m: PageMeasure): InputMeasure => ({
+  unit: (system) => pageMeasureUnit(m, system),
+  toText: (si, system) => pageInputText(si, m, system),
+  parse: (text, system) => parsePageInput(text, m, system),
+  bound: (si, system) => formatPageBound(si, m, system),
+  example: (system) => (m === 'joint' && system === 'IP' ? '3/4 or 0.75' : '12.5'),
+  inputMode: PAGE_MEASURES[m].fractions ? 'text' : 'decimal',
+});

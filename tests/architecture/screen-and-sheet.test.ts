@@ -11,6 +11,8 @@ import { demoSheetData } from '../../server/pdf/fixtures';
 import { renderComplianceSheet } from '../../server/pdf/sheet';
 import type { SheetData } from '../../server/pdf/sheet-data';
 import { CheckReportView } from '../../src/features/checks/components/CheckReportView';
+import { ScheduleTable } from '../../src/features/joints/components/ScheduleTable';
+import { evaluateJoints } from '../../src/features/joints/evaluate';
 import { VelocityBlock } from '../../src/features/wind/components/VelocityBlock';
 import { UnitSystemProvider } from '../../src/lib/unit-system';
 import { readPdf } from '../setup/pdf';
@@ -111,6 +113,32 @@ describe('the checks page and the compliance sheet print the same figures', () =
     holds(sheet, moisture.result);
     holds(sheet, 'Not run — missing: the project’s monthly climate.');
   });
+
+  it.each(['SI', 'IP'] as const)(
+    'prints each joint’s required and design width as the joints page shows them, inch fractions and all (%s)',
+    async (system) => {
+      const data = demoSheetData(system);
+      const joints = data.run.inputs.assembly.input.joints ?? [];
+      expect(joints.length).toBeGreaterThan(0);
+      const html = renderToStaticMarkup(
+        createElement(UnitSystemProvider, {
+          value: system,
+          // biome-ignore lint/correctness/noChildrenProp: no JSX in a .ts test; the provider's props name its children
+          children: createElement(ScheduleTable, { joints, evaluation: evaluateJoints(joints) }),
+        }),
+      );
+      const rows = [...new JSDOM(html).window.document.querySelectorAll('tr[data-joint]')];
+      expect(rows).toHaveLength(joints.length);
+      const sheet = await sheetText(data);
+      for (const tr of rows) {
+        const cells = tr.querySelectorAll('td');
+        const required = flat(cells[2]!.querySelector('.font-semibold')!.textContent ?? '');
+        const design = flat(cells[3]!.textContent ?? '');
+        expect(required).toMatch(system === 'SI' ? / mm$/ : / in$/);
+        holds(sheet, `${required} ${design}`);
+      }
+    },
+  );
 
   it.each(['SI', 'IP'] as const)(
     'prints q_h and the end-zone width as the attachment sheet shows them (%s)',

@@ -4,8 +4,8 @@ import { useState } from 'react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { measureInput } from '../../features/assemblies/units';
 import type { InputMeasure } from '../../lib/input-measure';
+import { pageInput } from '../../lib/input-measure';
 import { type Quantity, quantityInput } from '../../lib/quantities';
-import { sheetInput } from '../../lib/sheet-units';
 import { QuantityInput } from './QuantityInput';
 
 afterEach(cleanup);
@@ -189,7 +189,7 @@ describe('QuantityInput with the form quantities (lib/quantities)', () => {
 describe('QuantityInput with the sheet measures (lib/sheet-units)', () => {
   it('reads and writes inch fractions for joint dimensions in IP, with a keyboard that has them', () => {
     const onSi = vi.fn();
-    render(<Harness initial={0.75 * INCH} measure={sheetInput('joint')} system="IP" onSi={onSi} />);
+    render(<Harness initial={0.75 * INCH} measure={pageInput('joint')} system="IP" onSi={onSi} />);
     expect(box().value).toBe('3/4');
     expect(box().getAttribute('inputmode')).toBe('text');
     fireEvent.change(box(), { target: { value: '1 1/4' } });
@@ -203,7 +203,7 @@ describe('QuantityInput with the sheet measures (lib/sheet-units)', () => {
   });
 
   it('keeps the decimal keyboard where no fractions are typed', () => {
-    render(<Harness initial={20} measure={sheetInput('temperature')} system="SI" />);
+    render(<Harness initial={20} measure={pageInput('temperature')} system="SI" />);
     expect(box().getAttribute('inputmode')).toBe('decimal');
   });
 
@@ -212,7 +212,7 @@ describe('QuantityInput with the sheet measures (lib/sheet-units)', () => {
     const { rerender } = render(
       <QuantityInput
         label="Design width"
-        measure={sheetInput('joint')}
+        measure={pageInput('joint')}
         value={0.003}
         system="SI"
         problem={problem}
@@ -223,7 +223,7 @@ describe('QuantityInput with the sheet measures (lib/sheet-units)', () => {
     rerender(
       <QuantityInput
         label="Design width"
-        measure={sheetInput('joint')}
+        measure={pageInput('joint')}
         value={0.003}
         system="IP"
         problem={problem}
@@ -235,7 +235,7 @@ describe('QuantityInput with the sheet measures (lib/sheet-units)', () => {
 
   it('lets an optional box be emptied without complaint and says which kind of entry it got', () => {
     const onSi = vi.fn();
-    render(<Harness initial={0.01} measure={sheetInput('joint')} system="SI" required={false} onSi={onSi} />);
+    render(<Harness initial={0.01} measure={pageInput('joint')} system="SI" required={false} onSi={onSi} />);
     expect(box().getAttribute('aria-required')).toBeNull();
     fireEvent.change(box(), { target: { value: '' } });
     fireEvent.blur(box());
@@ -296,7 +296,7 @@ describe('QuantityInput reads a number typed with its unit (factors: NIST SP 811
     expect(screen.getByText('89 mm → 3.504 in')).toBeTruthy();
     cleanup();
 
-    render(<Harness initial={undefined} measure={sheetInput('joint')} system="IP" onSi={onSi} />);
+    render(<Harness initial={undefined} measure={pageInput('joint')} system="IP" onSi={onSi} />);
     fireEvent.change(box(), { target: { value: '1-5/8"' } });
     fireEvent.blur(box());
     expect(onSi.mock.lastCall?.[0]).toBeCloseTo(1.625 * INCH, 12);

@@ -1,4 +1,4 @@
-import { FOOT, QUANTITIES, R_IP_TO_SI, U_IP_TO_SI, type UnitSystem, unitsOf } from '@shared/units';
+import { FOOT, QUANTITIES, type UnitSystem, unitsOf } from '@shared/units';
 import { fixed, roundDecimal, trimmedFixed } from '@shared/units/rounding';
 import type { InputMeasure, ParsedEntry } from '../../lib/input-measure';
 
@@ -104,32 +104,9 @@ export const measureInput = (m: Measure): InputMeasure => ({
   parse: (text, system) => parseMeasure(text, m, system),
 });
 
-/** Thermal resistance as practitioners read it: "2.31 m²·K/W" in SI, "R-13.1" in IP. */
-export function formatR(si: number | null | undefined, system: UnitSystem): string {
-  if (si == null || !Number.isFinite(si)) return '—';
-  return system === 'IP' ? `R-${rNumber(si, system)}` : `${rNumber(si, system)}\u202fm²·K/W`;
-}
-
 /** Unit of an R figure for a column head ("R-value" in IP carries its unit in the name). */
 export const rUnit = (system: UnitSystem) => QUANTITIES.resistance[system].symbol;
 export const uUnit = (system: UnitSystem) => QUANTITIES.transmittance[system].symbol;
-
-/** Thermal transmittance: "0.433 W/(m²·K)" in SI, "0.0763 Btu/(h·ft²·°F)" in IP. */
-export function formatU(si: number | null | undefined, system: UnitSystem): string {
-  if (si == null || !Number.isFinite(si)) return '—';
-  return `${uNumber(si, system)}\u202f${uUnit(system)}`;
-}
-
-/** The bare R number (no unit) for tables whose head carries the unit. */
-export function rNumber(si: number | null | undefined, system: UnitSystem): string {
-  if (si == null || !Number.isFinite(si)) return '—';
-  return system === 'IP' ? fixed(si / R_IP_TO_SI, 1) : fixed(si, 2);
-}
-
-export function uNumber(si: number | null | undefined, system: UnitSystem): string {
-  if (si == null || !Number.isFinite(si)) return '—';
-  return system === 'IP' ? fixed(si / U_IP_TO_SI, 3) : fixed(si, 3);
-}
 
 /** Decimals of a share in per cent, everywhere it is printed (screens and sheet): 12.3 %. */
 export const SHARE_DECIMALS = 1;

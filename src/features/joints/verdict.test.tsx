@@ -36,7 +36,10 @@ describe('verdict words', () => {
     expect(si.glyph).toBe('✕');
     expect(si.text).toBe('short by 3.7 mm');
     expect(si.text).toBe(marginText(r.designWidth, r.requiredWidth));
-    expect(jointVerdict(r, 'IP').text).toBe(`short by ${((r.requiredWidth - 0.01) / INCH).toFixed(3)} in`);
+    // One rule with the sheet: inches to 0.01 (shared/format's length), trailing zeros trimmed.
+    expect(jointVerdict(r, 'IP').text).toBe(
+      `short by ${Number(((r.requiredWidth - 0.01) / INCH).toFixed(2))} in`,
+    );
   });
 
   it('exactly the required width meets with no margin', () => {
@@ -61,16 +64,16 @@ describe('schedule table', () => {
     const first = within(rows[0] as HTMLElement);
     expect(first.getByText('meets — margin 46 %')).toBeTruthy();
     expect(first.getByText('13.7 mm')).toBeTruthy();
-    expect(first.getByText(/Closed-cell rod, Ø 25\.0–26\.6\smm/)).toBeTruthy();
+    expect(first.getByText(/Closed-cell rod, Ø 25–26\.6\smm/)).toBeTruthy();
     expect(document.querySelectorAll('[data-verdict="fail"]').length).toBeGreaterThan(0);
     for (const el of document.querySelectorAll('[data-verdict="fail"]'))
-      expect(el.textContent).toMatch(/^✕short by \d+\.\d mm$/);
+      expect(el.textContent).toMatch(/^✕short by \d+(\.\d)? mm$/);
     expect(document.body.textContent).not.toContain('NaN');
   });
 
   it('in IP the widths read in inches with the next sixteenth', () => {
     renderTable([vj1()], 'IP');
-    expect(screen.getByText('0.539 in')).toBeTruthy();
+    expect(screen.getByText('0.54 in')).toBeTruthy();
     expect(screen.getByText('next 1/16: 9/16 in')).toBeTruthy();
   });
 
@@ -117,7 +120,7 @@ describe('joint editor', () => {
   it('takes inch fractions in IP', () => {
     render(<Harness initial={[vj1()]} system="IP" />);
     fireEvent.change(box('joints.0.designWidth'), { target: { value: '3/8' } });
-    expect(screen.getByTestId('joint-live').textContent).toMatch(/short by 0\.164 in/);
+    expect(screen.getByTestId('joint-live').textContent).toMatch(/short by 0\.16 in/);
   });
 
   it("impossible input shows the engine's reason next to the field, never NaN", () => {

@@ -1,6 +1,6 @@
 import type { JointResult } from '@shared/calc/joints/schema';
+import { formatPageMeasure } from '@shared/format/page-measures';
 import type { UnitSystem } from '@shared/units';
-import { formatSheet } from '../../lib/sheet-units';
 
 export interface JointVerdict {
   verdict: 'pass' | 'fail';
@@ -29,7 +29,7 @@ export function jointVerdict(
     verdict: 'fail',
     glyph: '✕',
     word: 'short',
-    text: `short by ${formatSheet(short, 'joint', system).replace('\u202f', ' ')}`,
+    text: `short by ${formatPageMeasure(short, 'joint', system).replace('\u202f', ' ')}`,
     cls: 'text-caution',
   };
 }

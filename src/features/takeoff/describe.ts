@@ -1,5 +1,5 @@
 import type { TakeoffInput } from '@shared/calc/takeoff/schema';
-import type { SheetMeasure } from '../../lib/sheet-units';
+import type { PageMeasure } from '@shared/format/page-measures';
 import { TAKEOFF_TYPE_LABELS } from './labels';
 
 const WORDS: Record<string, string> = {
@@ -53,7 +53,7 @@ export function describeTakeoffPath(path: string, input: TakeoffInput | undefine
 }
 
 /** The measure of a takeoff path, so a range problem is worded in the person's units. */
-export function takeoffPathMeasure(path: string): SheetMeasure | undefined {
+export function takeoffPathMeasure(path: string): PageMeasure | undefined {
   const p = path.replace(/^takeoff\./, '');
   if (/^beads\./.test(p) || p === 'tape.width') return 'joint';
   if (/lapAllowance$|spacingAlongGirt$/.test(p)) return 'spacing';

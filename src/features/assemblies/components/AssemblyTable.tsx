@@ -1,3 +1,4 @@
+import { rNumber, uNumber } from '@shared/format';
 import { type AssemblySummary, WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
 import { Link } from 'react-router';
 import { Button } from '../../../components/ui/Button';
@@ -5,7 +6,7 @@ import { Table, Td, Th } from '../../../components/ui/Table';
 import { VERDICT_TEXT } from '../../../lib/check-format';
 import { formatDate } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
-import { rNumber, rUnit, uNumber, uUnit } from '../units';
+import { rUnit, uUnit } from '../units';
 
 /**
  * The project's assemblies with their effective R and U in the person's units, and their last check's verdict;

@@ -1,5 +1,6 @@
 import type { ThermalResult } from '@shared/calc/thermal/schema';
 import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
+import { formatR, formatU, rNumber, uNumber } from '@shared/format';
 import type { AssemblyInput } from '@shared/schemas/assembly';
 import { layerThickness } from '@shared/sheets/layer-class';
 import type { UnitSystem } from '@shared/units';
@@ -7,17 +8,7 @@ import { fixed, roundDecimal, trimmedFixed } from '@shared/units/rounding';
 import type { ReactNode } from 'react';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
-import {
-  formatMeasure,
-  formatR,
-  formatShare,
-  formatU,
-  rNumber,
-  SHARE_DECIMALS,
-  shownPercent,
-  toShown,
-  uNumber,
-} from '../units';
+import { formatMeasure, formatShare, SHARE_DECIMALS, shownPercent, toShown } from '../units';
 
 export interface CompareColumn {
   key: string;

@@ -1,9 +1,9 @@
 import type { MethodName, ThermalResult } from '@shared/calc/thermal/schema';
 import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
+import { formatR } from '@shared/format';
 import { fixed } from '@shared/units/rounding';
 import { Notice } from '../../../components/ui/Notice';
 import { Table, Td, Th } from '../../../components/ui/Table';
-import { formatR } from '../units';
 
 const METHOD_NOTES: Record<MethodName, (r: ThermalResult) => string | undefined> = {
   parallelPath: () => 'heat flows straight through each path',

@@ -1,5 +1,6 @@
 import type { ThermalResult } from '@shared/calc/thermal/schema';
 import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
+import { formatR, formatU } from '@shared/format';
 import { fixed } from '@shared/units/rounding';
 import type { ReactNode } from 'react';
 import {
@@ -9,7 +10,6 @@ import {
   type SummaryVerdict,
 } from '../../../components/ui/ResultSummary';
 import { useUnitSystem } from '../../../lib/unit-system';
-import { formatR, formatU } from '../units';
 
 function Figure({
   label,

@@ -1,3 +1,4 @@
+import { uNumber } from '@shared/format';
 import { Link } from 'react-router';
 import { Loading } from '../../../components/ui/Loading';
 import { Notice } from '../../../components/ui/Notice';
@@ -6,7 +7,7 @@ import { errorMessage } from '../../../lib/api';
 import { formatDateTime } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { useRevisions } from '../api/get-revisions';
-import { uNumber, uUnit } from '../units';
+import { uUnit } from '../units';
 
 /** Every saved revision, newest first; an older one opens read-only or side by side with the current one. */
 export function RevisionHistory({

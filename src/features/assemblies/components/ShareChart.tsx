@@ -1,8 +1,9 @@
 import type { ThermalResult } from '@shared/calc/thermal/schema';
+import { formatU } from '@shared/format';
 import { Bar, BarChart, CartesianGrid, Cell, LabelList, XAxis, YAxis } from 'recharts';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
-import { formatShare, formatU } from '../units';
+import { formatShare } from '../units';
 
 const INK = '#1e1c19';
 const RULE = '#c8bead';

@@ -14,6 +14,7 @@ import {
   MOVEMENT_CLASSES,
   type MovementClass,
 } from '@shared/calc/joints/schema';
+import { formatJointDimension, formatPageMeasure } from '@shared/format/page-measures';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { FieldGroup, GroupProblem } from '../../../components/ui/FieldGroup';
@@ -21,7 +22,7 @@ import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
-import { formatJointDimension, formatSheet, sheetInput } from '../../../lib/sheet-units';
+import { pageInput } from '../../../lib/input-measure';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AirDesign, newSide, removeAt, replaceAt } from '../draft';
 import { BACKER_LABELS, JOINT_TYPE_LABELS, MOVEMENT_CLASS_LABELS } from '../labels';
@@ -137,7 +138,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
         <QuantityInput
           id={fieldDomId(path('designWidth'))}
           label="Design width"
-          measure={sheetInput('joint')}
+          measure={pageInput('joint')}
           value={joint.designWidth}
           onChange={(v) => set({ designWidth: v ?? Number.NaN })}
           problem={pr('designWidth')}
@@ -146,7 +147,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
         <QuantityInput
           id={fieldDomId(path('designDepth'))}
           label="Design depth"
-          measure={sheetInput('joint')}
+          measure={pageInput('joint')}
           required={false}
           value={joint.designDepth}
           onChange={(v, entry) => setOptional('designDepth', entry === 'invalid' ? Number.NaN : v)}
@@ -156,7 +157,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
         <QuantityInput
           id={fieldDomId(path('constructionTolerance'))}
           label="Construction tolerance"
-          measure={sheetInput('joint')}
+          measure={pageInput('joint')}
           value={joint.constructionTolerance}
           onChange={(v) => set({ constructionTolerance: v ?? Number.NaN })}
           problem={pr('constructionTolerance')}
@@ -212,8 +213,10 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                 {'material' in side ? (
                   row ? (
                     <p className="text-xs text-ink-muted">
-                      <span className="num text-ink">α = {formatSheet(row.alpha, 'alpha', system)}</span> ·{' '}
-                      {row.source}
+                      <span className="num text-ink">
+                        α = {formatPageMeasure(row.alpha, 'alpha', system)}
+                      </span>{' '}
+                      · {row.source}
                       <span className="block">{GENERIC_EXPANSION_NOTE}.</span>
                     </p>
                   ) : null
@@ -222,7 +225,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                     <QuantityInput
                       id={fieldDomId(path(`sides.${k}.alpha`))}
                       label="Declared α"
-                      measure={sheetInput('alpha')}
+                      measure={pageInput('alpha')}
                       value={side.alpha}
                       onChange={(v) => setSide(k, { ...side, alpha: v ?? Number.NaN })}
                       problem={sp('alpha')}
@@ -248,7 +251,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
               <QuantityInput
                 id={fieldDomId(path(`sides.${k}.length`))}
                 label="Moving length L"
-                measure={sheetInput('length')}
+                measure={pageInput('length')}
                 value={side.length}
                 onChange={(v) => setSide(k, { ...side, length: v ?? Number.NaN })}
                 problem={sp('length')}
@@ -288,7 +291,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <QuantityInput
             id={fieldDomId(path('surfaceTemperatureRange.min'))}
             label="Lowest surface temperature"
-            measure={sheetInput('temperature')}
+            measure={pageInput('temperature')}
             value={joint.surfaceTemperatureRange.min}
             onChange={(v) =>
               set({ surfaceTemperatureRange: { ...joint.surfaceTemperatureRange, min: v ?? Number.NaN } })
@@ -298,7 +301,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <QuantityInput
             id={fieldDomId(path('surfaceTemperatureRange.max'))}
             label="Highest surface temperature"
-            measure={sheetInput('temperature')}
+            measure={pageInput('temperature')}
             value={joint.surfaceTemperatureRange.max}
             onChange={(v) =>
               set({ surfaceTemperatureRange: { ...joint.surfaceTemperatureRange, max: v ?? Number.NaN } })
@@ -338,7 +341,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                 <QuantityInput
                   id={fieldDomId(path('installationTemperature.min'))}
                   label="Coolest at installation"
-                  measure={sheetInput('temperature')}
+                  measure={pageInput('temperature')}
                   value={install.min}
                   onChange={(v) => set({ installationTemperature: { ...install, min: v ?? Number.NaN } })}
                   problem={pr('installationTemperature.min')}
@@ -346,7 +349,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                 <QuantityInput
                   id={fieldDomId(path('installationTemperature.max'))}
                   label="Warmest at installation"
-                  measure={sheetInput('temperature')}
+                  measure={pageInput('temperature')}
                   value={install.max}
                   onChange={(v) => set({ installationTemperature: { ...install, max: v ?? Number.NaN } })}
                   problem={pr('installationTemperature.max')}
@@ -356,7 +359,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
               <QuantityInput
                 id={fieldDomId(path('installationTemperature'))}
                 label="Surface temperature at installation"
-                measure={sheetInput('temperature')}
+                measure={pageInput('temperature')}
                 value={install}
                 onChange={(v) => set({ installationTemperature: v ?? Number.NaN })}
                 problem={pr('installationTemperature')}
@@ -379,7 +382,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <QuantityInput
             id={fieldDomId(path('otherMovement.extension'))}
             label="Other opening"
-            measure={sheetInput('joint')}
+            measure={pageInput('joint')}
             required={false}
             value={joint.otherMovement?.extension}
             onChange={(v, entry) => setOther('extension', entry === 'invalid' ? Number.NaN : v)}
@@ -388,7 +391,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <QuantityInput
             id={fieldDomId(path('otherMovement.compression'))}
             label="Other closing"
-            measure={sheetInput('joint')}
+            measure={pageInput('joint')}
             required={false}
             value={joint.otherMovement?.compression}
             onChange={(v, entry) => setOther('compression', entry === 'invalid' ? Number.NaN : v)}
@@ -418,7 +421,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <QuantityInput
             id={fieldDomId(path('openingDepth'))}
             label="Opening depth"
-            measure={sheetInput('joint')}
+            measure={pageInput('joint')}
             required={false}
             value={joint.openingDepth}
             onChange={(v, entry) => setOptional('openingDepth', entry === 'invalid' ? Number.NaN : v)}
@@ -428,7 +431,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
           <QuantityInput
             id={fieldDomId(path('minimumPracticalWidth'))}
             label="Smallest workable width"
-            measure={sheetInput('joint')}
+            measure={pageInput('joint')}
             required={false}
             value={joint.minimumPracticalWidth}
             onChange={(v, entry) =>

@@ -1,8 +1,8 @@
 import { findExpansionMaterial } from '@shared/calc/joints/expansion';
 import type { JointInput, JointSide } from '@shared/calc/joints/schema';
+import { formatJointDimension, formatPageMeasure, formatPageRange } from '@shared/format/page-measures';
 import type { UnitSystem } from '@shared/units';
 import { Table, Td, Th } from '../../../components/ui/Table';
-import { formatJointDimension, formatSheet, formatSheetRange } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { BACKER_LABELS, JOINT_TYPE_LABELS, MOVEMENT_CLASS_LABELS } from '../labels';
 
@@ -12,12 +12,12 @@ function sideText(s: JointSide, system: UnitSystem) {
   const alpha = 'material' in s ? row?.alpha : s.alpha;
   return {
     what,
-    alpha: alpha === undefined ? '—' : formatSheet(alpha, 'alpha', system),
+    alpha: alpha === undefined ? '—' : formatPageMeasure(alpha, 'alpha', system),
     source: row?.source,
   };
 }
 
-const t = (c: number, system: UnitSystem) => formatSheet(c, 'temperature', system);
+const t = (c: number, system: UnitSystem) => formatPageMeasure(c, 'temperature', system);
 
 /** The schedule's inputs as a table, for people who read but do not edit the assembly. */
 export function JointInputsTable({ joints }: { joints: readonly JointInput[] }) {
@@ -58,14 +58,14 @@ export function JointInputsTable({ joints }: { joints: readonly JointInput[] }) 
                     // biome-ignore lint/suspicious/noArrayIndexKey: at most two sides
                     <span key={k} className="block">
                       {d.what}: <span className="num">{d.alpha}</span> ×{' '}
-                      <span className="num">{formatSheet(s.length, 'length', system)}</span>
+                      <span className="num">{formatPageMeasure(s.length, 'length', system)}</span>
                       {d.source ? <span className="block text-xs text-ink-muted">{d.source}</span> : null}
                     </span>
                   );
                 })}
               </Td>
               <Td numeric>
-                {formatSheetRange(
+                {formatPageRange(
                   j.surfaceTemperatureRange.min,
                   j.surfaceTemperatureRange.max,
                   'temperature',
@@ -79,14 +79,14 @@ export function JointInputsTable({ joints }: { joints: readonly JointInput[] }) 
               </Td>
               <Td numeric>
                 {j.otherMovement
-                  ? `+${formatSheet(j.otherMovement.extension, 'joint', system)} / −${formatSheet(j.otherMovement.compression, 'joint', system)}`
+                  ? `+${formatPageMeasure(j.otherMovement.extension, 'joint', system)} / −${formatPageMeasure(j.otherMovement.compression, 'joint', system)}`
                   : 'none'}
               </Td>
               <Td>
                 {MOVEMENT_CLASS_LABELS[j.sealant.movementClass]}
                 <span className="block text-xs">
                   tolerance{' '}
-                  <span className="num">{formatSheet(j.constructionTolerance, 'joint', system)}</span>
+                  <span className="num">{formatPageMeasure(j.constructionTolerance, 'joint', system)}</span>
                   {' · '}
                   {BACKER_LABELS[j.backer ?? 'closed_cell']}
                   {j.openingDepth !== undefined ? (

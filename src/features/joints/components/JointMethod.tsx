@@ -7,8 +7,8 @@ import {
   ROD_OVERSIZE,
 } from '@shared/calc/joints/joints';
 import { type JointResult, MOVEMENT_CLASSES } from '@shared/calc/joints/schema';
+import { formatJointDimension } from '@shared/format/page-measures';
 import { Table, Td, Th } from '../../../components/ui/Table';
-import { formatJointDimension } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { MOVEMENT_CLASS_LABELS } from '../labels';
 

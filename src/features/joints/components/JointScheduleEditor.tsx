@@ -1,8 +1,8 @@
 import type { JointInput } from '@shared/calc/joints/schema';
+import { formatPageMeasure, type PageMeasure } from '@shared/format/page-measures';
 import { Button } from '../../../components/ui/Button';
 import { Notice } from '../../../components/ui/Notice';
 import { fieldDomId, problemText } from '../../../lib/field-problems';
-import { formatSheet, type SheetMeasure } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AirDesign, copyJoint, newJoint, removeAt, replaceAt } from '../draft';
 import { type JointsEvaluation, MAX_JOINTS, problemsOfJoint } from '../evaluate';
@@ -42,7 +42,7 @@ export function describeJointPath(rest: string): string {
 }
 
 /** The measure of a path inside a joint, so a range problem is worded in the person's units. */
-export function jointPathMeasure(rest: string): SheetMeasure | undefined {
+export function jointPathMeasure(rest: string): PageMeasure | undefined {
   if (/emperature/.test(rest)) return 'temperature';
   if (/^sides\.\d+\.length$/.test(rest)) return 'length';
   if (/^sides\.\d+\.alpha$/.test(rest)) return 'alpha';
@@ -174,7 +174,7 @@ export function JointScheduleEditor({
                 <span>
                   Required width{' '}
                   <span className="num font-semibold">
-                    {formatSheet(result.requiredWidth, 'joint', system)}
+                    {formatPageMeasure(result.requiredWidth, 'joint', system)}
                   </span>{' '}
                   <span className="text-sm text-ink-muted">({GOVERNING_LABELS[result.governing]})</span>
                 </span>

@@ -1,21 +1,21 @@
 import type { Backer, JointInput, JointResult } from '@shared/calc/joints/schema';
+import { formatJointDimension, formatPageMeasure, nextSixteenth } from '@shared/format/page-measures';
 import type { UnitSystem } from '@shared/units';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { sentence } from '../../../lib/field-problems';
-import { formatJointDimension, formatSheet, nextSixteenth } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type JointsEvaluation, problemsOfJoint } from '../evaluate';
 import { GOVERNING_LABELS, JOINT_TYPE_LABELS } from '../labels';
 import { jointVerdict } from '../verdict';
 
-const dim = (si: number, system: UnitSystem) => formatSheet(si, 'joint', system);
+const dim = (si: number, system: UnitSystem) => formatPageMeasure(si, 'joint', system);
 
-/** "Closed-cell rod, Ø 25.0–26.6 mm" or "Bond-breaker tape, 19.0 mm wide". */
+/** "Closed-cell rod, Ø 25–26.6 mm" or "Bond-breaker tape, 19 mm wide". */
 export function backerText(b: Backer, system: UnitSystem): string {
   if (b.kind === 'bond_breaker_tape') return `Bond-breaker tape, ${dim(b.width, system)} wide`;
   const cell = b.cell === 'closed_cell' ? 'Closed-cell' : 'Open-cell';
-  return `${cell} rod, Ø ${formatSheet(b.minDiameter, 'joint', system).replace(/\s\S+$/, '')}–${dim(b.maxDiameter, system)}`;
+  return `${cell} rod, Ø ${formatPageMeasure(b.minDiameter, 'joint', system).replace(/\s\S+$/, '')}–${dim(b.maxDiameter, system)}`;
 }
 
 /** The verdict cell: glyph, word and margin (colour last). */

@@ -8,6 +8,7 @@ import {
   SURFACE_RISE_ABOVE_AIR,
   type SurfaceFinish,
 } from '@shared/calc/joints/surface-temperature';
+import { formatPageRange } from '@shared/format/page-measures';
 import { toShown } from '@shared/units';
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
@@ -15,7 +16,7 @@ import { Field } from '../../../components/ui/Field';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { calcProblem, type FieldProblem } from '../../../lib/field-problems';
-import { formatSheetRange, sheetInput } from '../../../lib/sheet-units';
+import { pageInput } from '../../../lib/input-measure';
 import { useUnitSystem } from '../../../lib/unit-system';
 import type { AirDesign } from '../draft';
 import { EXPOSURE_LABELS, FINISH_LABELS } from '../labels';
@@ -61,7 +62,7 @@ export function SurfaceSuggest({
         <div className="grid gap-3 sm:grid-cols-4">
           <QuantityInput
             label="Coldest air"
-            measure={sheetInput('temperature')}
+            measure={pageInput('temperature')}
             value={airMin}
             onChange={(v) => setAirMin(v ?? Number.NaN)}
             hint={air ? 'Project winter design temperature.' : undefined}
@@ -69,7 +70,7 @@ export function SurfaceSuggest({
           />
           <QuantityInput
             label="Hottest air"
-            measure={sheetInput('temperature')}
+            measure={pageInput('temperature')}
             value={airMax}
             onChange={(v) => setAirMax(v ?? Number.NaN)}
             hint={air ? 'Project summer design temperature.' : undefined}
@@ -109,7 +110,7 @@ export function SurfaceSuggest({
             <p>
               Suggested surface range:{' '}
               <span className="num font-semibold">
-                {formatSheetRange(suggestion.min, suggestion.max, 'temperature', system)}
+                {formatPageRange(suggestion.min, suggestion.max, 'temperature', system)}
               </span>
             </p>
             <Button

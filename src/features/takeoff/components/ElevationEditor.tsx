@@ -6,6 +6,7 @@ import {
   type Trim,
   type Wall,
 } from '@shared/calc/takeoff/schema';
+import type { PageMeasure } from '@shared/format/page-measures';
 import { type ComponentProps, type ReactNode, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
@@ -15,7 +16,7 @@ import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { type FieldProblem, type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
 import type { ParsedEntry } from '../../../lib/input-measure';
-import { type SheetMeasure, sheetInput } from '../../../lib/sheet-units';
+import { pageInput } from '../../../lib/input-measure';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { newOpening, newTrim, newWall, removeAt, replaceAt } from '../draft';
 import { BEAD_SHAPE_LABELS, TAKEOFF_TYPE_LABELS } from '../labels';
@@ -83,7 +84,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
   const quantity = (
     path: string,
     label: string,
-    kind: SheetMeasure,
+    kind: PageMeasure,
     value: number | undefined,
     apply: (v: number, entry: ParsedEntry['kind']) => void,
     extra?: Pick<ComponentProps<typeof QuantityInput>, 'hint' | 'required'>,
@@ -91,7 +92,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
     <QuantityInput
       id={id(path)}
       label={label}
-      measure={sheetInput(kind)}
+      measure={pageInput(kind)}
       value={value}
       onChange={(v, entry) => apply(v ?? Number.NaN, entry)}
       problem={pr(path)}

@@ -1,13 +1,13 @@
 import type { TakeoffInput } from '@shared/calc/takeoff/schema';
+import { formatJointDimension, formatPageMeasure } from '@shared/format/page-measures';
 import { Table, Td, Th } from '../../../components/ui/Table';
-import { formatJointDimension, formatSheet } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { TAKEOFF_TYPE_LABELS } from '../labels';
 
 /** The elevation list and allowances as saved, for people who read but do not edit the assembly. */
 export function ElevationTable({ input }: { input: TakeoffInput }) {
   const system = useUnitSystem();
-  const len = (m: number | undefined) => formatSheet(m, 'length', system);
+  const len = (m: number | undefined) => formatPageMeasure(m, 'length', system);
   return (
     <div className="flex flex-col gap-4">
       <Table caption="Walls as saved">
@@ -70,7 +70,7 @@ export function ElevationTable({ input }: { input: TakeoffInput }) {
             .join('; ') || 'none'}
         </dd>
         <dt className="font-semibold">Waste</dt>
-        <dd className="num">{formatSheet(input.wasteFactor, 'percent', system)}</dd>
+        <dd className="num">{formatPageMeasure(input.wasteFactor, 'percent', system)}</dd>
         <dt className="font-semibold">Trims</dt>
         <dd>
           {input.trims.length === 0
@@ -78,14 +78,14 @@ export function ElevationTable({ input }: { input: TakeoffInput }) {
             : input.trims
                 .map(
                   (t) =>
-                    `${t.name} (${TAKEOFF_TYPE_LABELS[t.appliesTo].toLowerCase()}): ${len(t.stockLength)} lapped ${formatSheet(t.lapAllowance, 'spacing', system)}`,
+                    `${t.name} (${TAKEOFF_TYPE_LABELS[t.appliesTo].toLowerCase()}): ${len(t.stockLength)} lapped ${formatPageMeasure(t.lapAllowance, 'spacing', system)}`,
                 )
                 .join('; ')}
         </dd>
         <dt className="font-semibold">Fasteners</dt>
         <dd className="num">
           {input.fasteners
-            ? `every ${formatSheet(input.fasteners.spacingAlongGirt, 'spacing', system)} along girts at ${len(input.fasteners.girtSpacing)}`
+            ? `every ${formatPageMeasure(input.fasteners.spacingAlongGirt, 'spacing', system)} along girts at ${len(input.fasteners.girtSpacing)}`
             : 'not counted'}
         </dd>
         <dt className="font-semibold">Tape</dt>

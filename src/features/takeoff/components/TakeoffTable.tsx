@@ -1,10 +1,10 @@
 import { TAKEOFF_JOINT_TYPES, type TakeoffInput, type TakeoffResult } from '@shared/calc/takeoff/schema';
+import { formatJointDimension, formatPageMeasure } from '@shared/format/page-measures';
 import type { UnitSystem } from '@shared/units';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
 import { Table, Td, Th } from '../../../components/ui/Table';
-import { formatJointDimension, formatSheet } from '../../../lib/sheet-units';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { downloadTakeoffCsv } from '../csv';
 import { BEAD_SHAPE_LABELS, TAKEOFF_TYPE_LABELS } from '../labels';
@@ -37,7 +37,7 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
   const system = useUnitSystem();
   const [downloaded, setDownloaded] = useState<string | null>(null);
   const volume = new Map(result.sealant.byJoint.map((b) => [b.joint, b.volume]));
-  const len = (m: number) => formatSheet(m, 'length', system, system === 'IP' ? 1 : 2);
+  const len = (m: number) => formatPageMeasure(m, 'length', system, system === 'IP' ? 1 : 2);
 
   return (
     <div className="flex flex-col gap-6">
@@ -76,7 +76,7 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
               <Td>{TAKEOFF_TYPE_LABELS[t]}</Td>
               <Td numeric>{len(result.lengths[t] ?? 0)}</Td>
               <Td className="num">{beadText(input, t, system)}</Td>
-              <Td numeric>{volume.has(t) ? formatSheet(volume.get(t), 'volume', system) : '—'}</Td>
+              <Td numeric>{volume.has(t) ? formatPageMeasure(volume.get(t), 'volume', system) : '—'}</Td>
             </tr>
           ))}
           <tr>
@@ -84,17 +84,17 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
             <Td />
             <Td />
             <Td numeric className="font-semibold">
-              {formatSheet(result.sealant.volume, 'volume', system)}
+              {formatPageMeasure(result.sealant.volume, 'volume', system)}
             </Td>
           </tr>
           <tr>
             <Td className="font-semibold">
-              Sealant with {formatSheet(input.wasteFactor, 'percent', system)} waste
+              Sealant with {formatPageMeasure(input.wasteFactor, 'percent', system)} waste
             </Td>
             <Td />
             <Td />
             <Td numeric className="font-semibold" data-testid="sealant-with-waste">
-              {formatSheet(result.sealant.volumeWithWaste, 'volume', system)}
+              {formatPageMeasure(result.sealant.volumeWithWaste, 'volume', system)}
             </Td>
           </tr>
         </tbody>
@@ -148,7 +148,7 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
               <Td>Tape, {formatJointDimension(input.tape?.width, system)} wide</Td>
               <Td numeric>
                 {len(result.tape.length)}
-                <span className="block">{formatSheet(result.tape.area, 'area', system)}</span>
+                <span className="block">{formatPageMeasure(result.tape.area, 'area', system)}</span>
                 {result.tape.rolls !== null ? (
                   <span className="block">{count(result.tape.rolls)} rolls</span>
                 ) : null}
@@ -168,8 +168,8 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
               <Td className="text-ink-muted">
                 {count(t.runs)} {t.runs === 1 ? 'run' : 'runs'}, {len(t.length)} along{' '}
                 {TAKEOFF_TYPE_LABELS[t.appliesTo].toLowerCase()}; stock{' '}
-                {formatSheet(input.trims[k]?.stockLength, 'length', system)} lapped{' '}
-                {formatSheet(input.trims[k]?.lapAllowance, 'spacing', system)}
+                {formatPageMeasure(input.trims[k]?.stockLength, 'length', system)} lapped{' '}
+                {formatPageMeasure(input.trims[k]?.lapAllowance, 'spacing', system)}
               </Td>
             </tr>
           ))}
@@ -180,8 +180,8 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
                 {count(result.fasteners)}
               </Td>
               <Td className="text-ink-muted">
-                every {formatSheet(input.fasteners?.spacingAlongGirt, 'spacing', system)} along girts at{' '}
-                {formatSheet(input.fasteners?.girtSpacing, 'length', system)}
+                every {formatPageMeasure(input.fasteners?.spacingAlongGirt, 'spacing', system)} along girts at{' '}
+                {formatPageMeasure(input.fasteners?.girtSpacing, 'length', system)}
               </Td>
             </tr>
           ) : null}

@@ -171,6 +171,7 @@ export function createLoaders(queryClient: QueryClient) {
         const shown = search(request).get('run') ?? (await runs)[0]?.id;
         return shown ? warm(checkRunQueryOptions(shown)) : null;
       }) satisfies Loader,
+      sweep: (({ params }) => warm(projectCriteriaSetsQueryOptions(params.projectId ?? ''))) satisfies Loader,
       revision: (async ({ params }) => {
         const n = revisionOf(params.revision);
         await Promise.all([

@@ -151,6 +151,11 @@ export function createAppRouter(queryClient: QueryClient) {
                           ),
                         },
                         {
+                          path: 'sweep',
+                          loader: load('sweep'),
+                          ...page(() => import('./routes/AssemblySweepPage').then((m) => m.AssemblySweepPage)),
+                        },
+                        {
                           path: 'revisions/:revision',
                           loader: load('revision'),
                           ...page(() =>

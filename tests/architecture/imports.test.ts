@@ -41,6 +41,9 @@ const FEATURE_USES: Record<string, string[]> = {
   // The joints & quantities sheet edits the joint schedule and the elevation takeoff together, saved as one
   // revision of the assembly.
   'features/joints': ['features/takeoff'],
+  // A sweep reads its code table's rows, and makes a chosen variant an assembly or a revision of this one (the
+  // assemblies' create and save calls and their number boxes).
+  'features/sweep': ['features/assemblies', 'features/criteria'],
 };
 
 const SHARED_ALLOWED = /^(zod|mathjs|convert-units|papaparse|@shared\/|@data\/reference\/|\.{1,2}\/)/;

@@ -116,8 +116,11 @@ export function currentValue(a: AssemblyInput, kind: SweepParameterKind, target:
 const round3 = (v: number) => Number(v.toPrecision(3));
 
 /** A first draft of a parameter: its first target, a range from half to one and a half times today's value. */
-export function newDraft(a: AssemblyInput, kind: SweepParameterKind): ParameterDraft {
-  const target = targetsFor(a, kind)[0]?.index ?? null;
+export function newDraft(
+  a: AssemblyInput,
+  kind: SweepParameterKind,
+  target = targetsFor(a, kind)[0]?.index ?? null,
+): ParameterDraft {
   const now = currentValue(a, kind, target);
   const base: ParameterDraft = { kind, target, mode: 'range', list: '', classes: [] };
   if (kind === 'sealantClass') return { ...base, mode: 'list', classes: ['25', '35', '50'] };
@@ -142,24 +145,19 @@ export function toParameter(
       parameter: { kind: d.kind, list: d.classes, ...(d.target === null ? {} : { joint: d.target }) },
     };
   }
-  const where =
+  const needs =
     d.kind === 'insulationThickness' || d.kind === 'studSpacing'
-      ? { layer: d.target ?? -1 }
+      ? 'layer'
       : d.kind === 'clipChi'
-        ? { bridge: d.target ?? -1 }
-        : {};
-  if ('layer' in where && where.layer < 0) return problem('.layer', 'choose a layer');
-  if ('bridge' in where && where.bridge < 0) return problem('.bridge', 'choose a bridge');
+        ? 'bridge'
+        : null;
+  if (needs && d.target === null) return problem(`.${needs}`, `choose a ${needs}`);
+  const where = needs ? { [needs]: d.target } : {};
+  const as = (values: object) => ({ parameter: { kind: d.kind, ...where, ...values } as SweepParameter });
   if (d.mode === 'range') {
     for (const key of ['start', 'stop', 'step'] as const)
       if (d[key] === undefined || !Number.isFinite(d[key])) return problem(`.range.${key}`, 'enter a number');
-    return {
-      parameter: {
-        kind: d.kind,
-        ...where,
-        range: { start: d.start as number, stop: d.stop as number, step: d.step as number },
-      },
-    };
+    return as({ range: { start: d.start, stop: d.stop, step: d.step } });
   }
   const measure = measureOf(d.kind);
   const entries = listEntries(d.list);
@@ -174,7 +172,7 @@ export function toParameter(
       );
     list.push(read.si);
   }
-  return { parameter: { kind: d.kind, ...where, list } };
+  return as({ list });
 }
 
 export type Validated =

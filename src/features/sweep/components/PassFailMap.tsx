@@ -1,0 +1,84 @@
+import { VERDICT_WORDS } from '@shared/format';
+import type { SweepParameterKind, SweepVariantResult } from '@shared/sweep/schema';
+import type { UnitSystem } from '@shared/units';
+import { KIND_LABELS } from '../draft';
+import { valueText } from '../present';
+
+const TONE = { pass: 'text-meets', fail: 'text-caution', incomplete: 'text-warning' } as const;
+
+/**
+ * Pass or fail of every variant of two parameters (the others held): a row per value of one, a column per
+ * value of the other, each cell its glyph and the verdict's word for screen readers.
+ */
+export function PassFailMap({
+  grid,
+  kinds,
+  values,
+  across,
+  lines,
+  system,
+}: {
+  grid: (SweepVariantResult | undefined)[][];
+  kinds: SweepParameterKind[];
+  values: (number | string)[][];
+  across: number;
+  lines: number | null;
+  system: UnitSystem;
+}) {
+  const rowLabel = (l: number) =>
+    lines === null ? 'Verdict' : valueText(kinds[lines]!, values[lines]![l]!, system);
+  return (
+    <div className="relative max-w-full overflow-x-auto" data-testid="pass-fail-map">
+      <table className="border-collapse text-sm">
+        <caption className="pb-2 text-left text-sm text-ink-muted">
+          Pass or fail: {KIND_LABELS[kinds[across]!].toLowerCase()} across
+          {lines === null ? '' : `, ${KIND_LABELS[kinds[lines]!].toLowerCase()} down`}. ✓ pass, ✕ fail, ?
+          incomplete.
+        </caption>
+        <thead>
+          <tr>
+            <th scope="col" className="border-b-2 border-ink px-2 py-1 text-left">
+              <span className="sr-only">{lines === null ? '' : KIND_LABELS[kinds[lines]!]}</span>
+            </th>
+            {values[across]!.map((x) => (
+              <th
+                key={String(x)}
+                scope="col"
+                className="num whitespace-nowrap border-b-2 border-ink px-2 py-1 text-center"
+              >
+                {valueText(kinds[across]!, x, system)}
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {grid.map((row, l) => (
+            <tr key={rowLabel(l)}>
+              <th
+                scope="row"
+                className="num whitespace-nowrap border-b border-rule px-2 py-1 text-left font-semibold"
+              >
+                {rowLabel(l)}
+              </th>
+              {row.map((v, x) => (
+                <td key={String(values[across]![x])} className="border-b border-rule px-2 py-1 text-center">
+                  {v ? (
+                    <span
+                      className={`font-semibold ${TONE[v.verdict]}`}
+                      title={VERDICT_WORDS[v.verdict].word}
+                    >
+                      <span aria-hidden="true">{VERDICT_WORDS[v.verdict].glyph}</span>
+                      <span className="sr-only">{VERDICT_WORDS[v.verdict].word}</span>
+                    </span>
+                  ) : (
+                    <span className="text-ink-muted">…</span>
+                  )}
+                </td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

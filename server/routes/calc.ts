@@ -57,8 +57,9 @@ const calcErrors = {
  */
 const traceQuery = z.object({
   trace: z
-    .stringbool()
-    .default(false)
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((v) => v === 'true')
     .describe('`true` adds the trace: every step with its formula, inputs and source'),
 });
 const traced = <T>(asked: { trace: boolean }, result: T): T => (asked.trace ? result : withoutTrace(result));

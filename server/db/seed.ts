@@ -13,6 +13,7 @@ import demoPanelAssembly from '../../data/seed/demo-panel-assembly.json' with { 
 import type { Auth } from '../auth/auth';
 import { createAssemblyService } from '../services/assemblies';
 import { createCriteriaService } from '../services/criteria';
+import { seedDemoInspection } from '../services/inspections/demo';
 import { attachmentProductRow } from '../services/library';
 import { createProjectService } from '../services/projects';
 import { type Db, noReadCache } from './client';
@@ -134,8 +135,16 @@ export async function seedDemo(db: Db, auth: Auth): Promise<boolean> {
       .update(projectTable)
       .set({ wind: demoContent.wind, climate: demoContent.climate })
       .where(eq(projectTable.id, created.id));
-    await assemblies.create(created.id, userIds.get(owner)!, demoContent.assembly);
+    const wall = await assemblies.create(created.id, userIds.get(owner)!, demoContent.assembly);
     await assemblies.create(created.id, userIds.get(owner)!, demoPanel);
+    const inspector = members.find((m) => m.role === 'envelope_consultant');
+    if (inspector) {
+      const person = demoScenario.users.find((u) => u.email === inspector.email)!;
+      await seedDemoInspection(db, await projects.get(created.id, userIds.get(owner)!), wall.id, {
+        id: userIds.get(inspector.email)!,
+        name: person.name,
+      });
+    }
   }
   await createCriteriaService(db).create(
     firmIds.get(demoCodeTable.firm)!,

@@ -1,4 +1,5 @@
 import {
+  attachReportSchema,
   deficiencyAcceptSchema,
   deficiencyCorrectSchema,
   deficiencyReopenSchema,
@@ -20,7 +21,9 @@ import {
 } from '@shared/inspections/schema';
 import { apiErrorSchema, projectParams, versionConflictSchema } from '@shared/schemas/common';
 import { sheetQuerySchema } from '@shared/schemas/sheets';
+import { submittalSchema } from '@shared/schemas/submittals';
 import { z } from 'zod';
+import { HttpError } from '../http/errors';
 import { defineRoute } from '../http/route';
 import { receiveUpload, sendStoredFile } from '../http/upload';
 import type { Services } from '../services';
@@ -53,6 +56,12 @@ const viaInspection = { projectId: via('inspectionId', (s, id) => s.projectOf(id
 const viaItem = { projectId: via('inspectionItemId', (s, id) => s.projectOfItem(id)) };
 const viaDeficiency = { projectId: via('deficiencyId', (s, id) => s.projectOfDeficiency(id)) };
 const viaPhoto = { projectId: via('photoId', (s, id) => s.projectOfPhoto(id)) };
+const viaSubmittal = {
+  projectId: ({ params, services }: Ctx) =>
+    z.uuid().safeParse(params.submittalId).success
+      ? services.submittals.projectOf(params.submittalId!)
+      : Promise.resolve(null),
+};
 
 const inspectionParams = z.object({ inspectionId: z.uuid() });
 const itemParams = z.object({ inspectionItemId: z.uuid() });
@@ -335,5 +344,43 @@ export const inspectionRoutes = [
     },
     handler: ({ params, user, body, services }) =>
       services.inspections.saveTemplate(params.orgId, actor(user), body),
+  }),
+  defineRoute({
+    method: 'post',
+    path: '/submittals/:submittalId/inspection-reports',
+    summary:
+      'Add the field report (PDF) of an inspection of the same project to a draft submittal, as a file item',
+    tag: 'Inspections',
+    access: { kind: 'project', action: 'submittal.create', ...viaSubmittal },
+    params: z.object({ submittalId: z.uuid() }),
+    body: attachReportSchema,
+    example: { inspectionId: '00000000-0000-4000-8000-000000000000' },
+    responses: {
+      201: { description: 'The submittal with the report', schema: submittalSchema },
+      ...errors,
+      409: {
+        description: 'Archived project, a submittal that is not a draft, or too many items',
+        schema: apiErrorSchema,
+      },
+      413: { description: 'The project’s storage quota reached', schema: apiErrorSchema },
+      ...invalid('No such inspection on this project'),
+    },
+    handler: async ({ params, project, user, body, services }) => {
+      if ((await services.inspections.projectOf(body.inspectionId)) !== project.id)
+        throw new HttpError(422, 'invalid_input', 'inspectionId: no such inspection on this project', {
+          inspectionId: 'no such inspection on this project',
+        });
+      const { pdf, filename, code } = await services.inspections.report(
+        body.inspectionId,
+        user.id,
+        body.units,
+      );
+      return services.submittals.attachGenerated(params.submittalId, actor(user), {
+        name: filename,
+        contentType: 'application/pdf',
+        bytes: pdf,
+        about: { inspection: body.inspectionId, reportCode: code },
+      });
+    },
   }),
 ];

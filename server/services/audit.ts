@@ -6,6 +6,7 @@ import {
   assemblySweeps,
   auditLog,
   checkRuns,
+  inspections,
   invitations,
   projects,
   submittals,
@@ -47,6 +48,8 @@ const entityName = sql<string | null>`case ${auditLog.entity}
   when 'check_run' then (select ${checkRuns.assemblyName} || ', revision ' || ${checkRuns.assemblyRevision}
     from ${checkRuns} where ${checkRuns.id}::text = ${auditLog.entityId})
   when 'sweep' then (select ${assemblySweeps.name} from ${assemblySweeps} where ${assemblySweeps.id}::text = ${auditLog.entityId})
+  when 'inspection' then (select 'Inspection ' || ${inspections.number} || ' — ' || ${inspections.title}
+    from ${inspections} where ${inspections.id}::text = ${auditLog.entityId})
   when 'member' then (select ${user.name} from ${user} where ${user.id} = ${auditLog.entityId})
   when 'invitation' then (select ${invitations.email} from ${invitations} where ${invitations.id}::text = ${auditLog.entityId})
 end`;

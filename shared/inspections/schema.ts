@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { projectRoleSchema } from '../auth/permissions';
-import { calendarDate, int4, TEXT_MAX, text } from '../schemas/common';
+import { calendarDate, int4, TEXT_MAX, text, unitSystemSchema } from '../schemas/common';
 import { QUANTITIES, type Quantity } from '../units/registry';
 
 /**
@@ -353,3 +353,9 @@ export const PHOTO_LIMITS = { maxFileBytes: 15 * 1024 * 1024, maxFiles: 5 } as c
 export const photoUploadResultSchema = z.object({ photos: z.array(photoSchema), item: inspectionItemSchema });
 /** A firm's checklist template, or null before its first save. */
 export const inspectionTemplateAnswerSchema = z.object({ template: inspectionTemplateSchema.nullable() });
+
+/** The field report of an inspection of the submittal's project, added to a draft as a PDF file item. */
+export const attachReportSchema = z.object({
+  inspectionId: z.uuid(),
+  units: unitSystemSchema.optional().describe('Units of the report (default: yours)'),
+});

@@ -89,6 +89,8 @@ describe.each(testDatabases())('field inspections on %s', (kind) => {
       (await (await as('viewer')).get(`/api/projects/${projectId}/inspections`)).body,
     );
     expect(list.inspections.some((x) => x.id === i.id)).toBe(true);
+    // The demo project's seeded inspection in progress: two spacings answered.
+    expect(list.inspections.at(-1)).toMatchObject({ number: 1, status: 'in_progress', counts: { pass: 2 } });
     // The crew and the inspectors are told.
     expect(
       (await t.mailTo(demoEmail('subcontractor'), `Inspection ${i.number}: new inspection`)).text,
@@ -300,7 +302,9 @@ describe.each(testDatabases())('field inspections on %s', (kind) => {
     const audit = (await (await as('admin')).get(`/api/projects/${projectId}/audit`)).body.entries as {
       entity: string;
       action: string;
+      entityName: string | null;
     }[];
+    expect(audit.find((e) => e.entity === 'inspection')?.entityName).toMatch(/^Inspection \d+ — /);
     expect(audit.filter((e) => e.entity === 'inspection').map((e) => e.action)).toEqual(
       expect.arrayContaining(['create', 'answer', 'close', 'deficiency_open']),
     );
@@ -390,5 +394,43 @@ describe.each(testDatabases())('field inspections on %s', (kind) => {
     expect(
       inspectionSchema.parse((await admin.get(`/api/inspections/${i.id}`)).body).items.at(-1)!.label,
     ).toBe('Site left clean');
+  });
+  it('adds the field report to a draft submittal as a PDF file item; an inspection of no project of this one is 422', async () => {
+    const i = await start();
+    const sub = await as('subcontractor');
+    const draft = await sub
+      .post(`/api/projects/${projectId}/submittals`)
+      .send({ title: 'Field inspection reports', specSection: '07 42 13', specTitle: 'Metal Wall Panels' });
+    expect(draft.status, draft.text).toBe(201);
+    const added = await sub
+      .post(`/api/submittals/${draft.body.id}/inspection-reports`)
+      .send({ inspectionId: i.id });
+    expect(added.status, added.text).toBe(201);
+    const item = added.body.items.at(-1);
+    expect(item).toMatchObject({ kind: 'file', file: { contentType: 'application/pdf' } });
+    expect(item.file.name).toMatch(new RegExp(`^inspection-${i.number}-[A-Z2-7]{10}\\.pdf$`));
+    const file = await sub
+      .get(`/api/submittals/${draft.body.id}/items/${item.id}/file`)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
+    expect((await readPdf(file.body as Buffer)).text).toContain('Field inspection report');
+    const stranger = await sub
+      .post(`/api/submittals/${draft.body.id}/inspection-reports`)
+      .send({ inspectionId: '00000000-0000-4000-8000-000000000000' });
+    expect(stranger.status).toBe(422);
+    expect(stranger.body.error.fields.inspectionId).toBeDefined();
+    expect(
+      (
+        await (
+          await as('consultant')
+        )
+          .post(`/api/submittals/${draft.body.id}/inspection-reports`)
+          .send({ inspectionId: i.id })
+      ).status,
+    ).toBe(403);
   });
 });

@@ -164,6 +164,7 @@ const EXPECTED: Record<string, Expectation> = {
   'POST /deficiencies/:deficiencyId/reopen': INSPECTING,
   'GET /organisations/:orgId/inspection-template': 'firmMember',
   'PUT /organisations/:orgId/inspection-template': 'firmEditor',
+  'POST /submittals/:submittalId/inspection-reports': SUBMITTING,
 };
 
 /**

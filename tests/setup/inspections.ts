@@ -7,26 +7,33 @@ export const PNG_PIXEL = Buffer.from(
 );
 
 /**
- * The path parameters of the inspection routes on the demo project: an inspection of its first assembly
- * (started by the envelope consultant), an unanswered item, a deficiency (its first item failed) and a photo.
+ * The path parameters of the inspection routes on the demo project: its seeded inspection in progress, one of
+ * its unanswered items, a deficiency (another item failed by the envelope consultant) and a photo.
  */
 export async function inspectionParams(t: TestApp, projectId: string) {
   const consultant = await t.as(demoEmail('consultant'));
-  const assemblyId = (await consultant.get(`/api/projects/${projectId}/assemblies`)).body.assemblies[0].id;
-  const created = await consultant
-    .post(`/api/projects/${projectId}/inspections`)
-    .send({ assemblyId, elevation: 'North elevation', area: { kind: 'zone', zone: 'field' } });
-  if (created.status !== 201) throw new Error(`inspection not created: ${created.status} ${created.text}`);
-  const items = created.body.items as { id: string }[];
+  const list = (await consultant.get(`/api/projects/${projectId}/inspections`)).body.inspections as {
+    id: string;
+  }[];
+  const seeded = list.at(-1);
+  if (!seeded) throw new Error('the demo project has no inspection (server/db/seed.ts)');
+  const items = (await consultant.get(`/api/inspections/${seeded.id}`)).body.items as {
+    id: string;
+    state: string;
+    version: number;
+    quantity: string | null;
+  }[];
+  const [failing, open] = items.filter((i) => i.state === 'unseen' && i.quantity === null);
+  if (!failing || !open) throw new Error('the demo inspection has too few unanswered items');
   const failed = await consultant
-    .put(`/api/inspection-items/${items[0]!.id}`)
-    .send({ version: 1, state: 'fail' });
+    .put(`/api/inspection-items/${failing.id}`)
+    .send({ version: failing.version, state: 'fail' });
   const photo = await (await t.as(demoEmail('subcontractor')))
-    .post(`/api/inspection-items/${items[0]!.id}/photos`)
+    .post(`/api/inspection-items/${failing.id}/photos`)
     .attach('files', PNG_PIXEL, 'photo.png');
   return {
-    inspectionId: created.body.id as string,
-    inspectionItemId: items[1]!.id,
+    inspectionId: seeded.id,
+    inspectionItemId: open.id,
     deficiencyId: failed.body.openedDeficiency.id as string,
     photoId: photo.body.photos[0].id as string,
   };

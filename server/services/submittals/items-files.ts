@@ -1,3 +1,5 @@
+import { createHash, randomUUID } from 'node:crypto';
+import { Readable } from 'node:stream';
 import type { Submittal, SubmittalItem } from '@shared/schemas/submittals';
 import { and, count, eq, isNotNull, max, sql } from 'drizzle-orm';
 import type { Config } from '../../config';
@@ -217,6 +219,59 @@ export function createSubmittalItemSteps(
       }
       const submittal = await q.get(id);
       return { items: submittal.items.filter((i) => ids.includes(i.id)), submittal };
+    },
+
+    /**
+     * Adds a file the server made (an inspection's field report) to a draft as a file item: stored first, then
+     * written in a transaction that takes its turn on the revision (item limit, position) and on the project
+     * (quota); the stored object is removed when that fails.
+     */
+    async attachGenerated(
+      id: string,
+      actor: Actor,
+      file: { name: string; contentType: string; bytes: Buffer; about: Record<string, unknown> },
+    ): Promise<Submittal> {
+      const r = await q.writable(id, ['draft']);
+      const quota = config.storage.projectQuotaBytes;
+      const used = await storedBytes(db, r.projectId);
+      if (used + file.bytes.length > quota) throw quotaFull(used);
+      const key = `projects/${r.projectId}/submittals/${randomUUID()}`;
+      await storage.put(key, Readable.from([file.bytes]), file.contentType);
+      const sha256 = createHash('sha256').update(file.bytes).digest('hex');
+      try {
+        await db.transaction(async (tx) => {
+          const position = await placesFor(tx, id, 1);
+          await tx
+            .select({ id: projects.id })
+            .from(projects)
+            .where(eq(projects.id, r.projectId))
+            .for('update');
+          const now = await storedBytes(tx, r.projectId);
+          if (now + file.bytes.length > quota) throw quotaFull(now);
+          const [item] = await tx
+            .insert(submittalItems)
+            .values({
+              submittalId: id,
+              kind: 'file',
+              position,
+              storageKey: key,
+              fileName: file.name,
+              contentType: file.contentType,
+              size: file.bytes.length,
+              sha256,
+              addedBy: actor.id,
+            })
+            .returning({ id: submittalItems.id });
+          await recordItemChange(tx, r, actor, {
+            action: 'add_report',
+            after: { item: item!.id, name: file.name, sha256, ...file.about },
+          });
+        });
+      } catch (err) {
+        await storage.delete(key).catch(() => undefined);
+        throw err;
+      }
+      return q.get(id);
     },
 
     /** Removes an item from a draft; a file's stored object goes when no revision refers to it any more. */

@@ -52,9 +52,18 @@ export function moistureInputFor(a: AssemblyInput, p: ProjectForChecks): CheckIn
           ? { kind: 'fixed', temperature: p.indoorTempC, relativeHumidity: p.indoorRh }
           : { kind: 'humidityClass', temperature: p.indoorTempC, humidityClass: p.climate.humidityClass },
       months: p.climate.months,
+      bridges: solvedBridgeSurfaces(a.thermal.bridges),
     },
   };
 }
+
+/** The bridges whose χ/ψ was computed here: their name and f_Rsi of the surface-check solve (Rsi 0.25). */
+export const solvedBridgeSurfaces = (bridges: AssemblyInput['thermal']['bridges']) =>
+  bridges.flatMap((b, i) =>
+    b.kind !== 'fastener' && b.source?.computed
+      ? [{ name: b.name || `Bridge ${i + 1}`, fRsi: b.source.computed.surface.fRsi }]
+      : [],
+  );
 
 /** The project's ASCE 7 site data with its height and plan, and the assembly's panel table and clip. */
 export function windInputFor(a: AssemblyInput, p: ProjectForChecks): CheckInput<WindScheduleInput> {

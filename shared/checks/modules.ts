@@ -97,7 +97,7 @@ export const moistureModule = defineCheckModule({
     maxSurfaceRh: maxSurfaceRh(r),
   }),
   verdicts: (r): ModuleCheck[] => {
-    const { fRsi, fRsiMax, pass, criticalMonth } = r.surface;
+    const { fRsi, fRsiMax, criticalMonth } = r.surface;
     const base = {
       id: 'moisture.surface',
       criterion: 'surface',
@@ -119,13 +119,27 @@ export const moistureModule = defineCheckModule({
             'Not applicable: in no month is the outside cold enough for the interior surface to reach 80 % RH (f_Rsi,max would be 0 or negative).',
         },
       ];
+    const atBridges = r.surface.bridges.map(
+      (b, i): ModuleCheck => ({
+        ...base,
+        id: `moisture.surface.bridge.${i}`,
+        label: `Interior surface at ${b.name} (mould risk): f_Rsi ≥ f_Rsi,max`,
+        provided: b.fRsi,
+        traceStepIds: [`moisture.bridge.${i}.fRsi`, 'moisture.fRsiMax'],
+        ...compare('min', fRsiMax, b.fRsi),
+        status: b.pass ? 'pass' : 'fail',
+        reason: `ISO 13788 §5 at the thermal bridge: f_Rsi from its ISO 10211 solve with Rsi = 0.25 m²·K/W; critical month ${criticalMonth}.`,
+      }),
+    );
+    const clearPass = r.months.every((m) => m.surface.pass);
     return [
       {
         ...base,
         ...compare('min', fRsiMax, fRsi),
-        status: pass ? 'pass' : 'fail',
-        reason: `ISO 13788 §5: the surface stays at or below 80 % RH when f_Rsi ≥ f_Rsi,max; critical month ${criticalMonth}. Clear field only — girts, clips and studs need their own f_Rsi.`,
+        status: clearPass ? 'pass' : 'fail',
+        reason: `ISO 13788 §5: the surface stays at or below 80 % RH when f_Rsi ≥ f_Rsi,max; critical month ${criticalMonth}. Clear field${atBridges.length > 0 ? '; the solved bridges are checked below' : ' only — girts, clips and studs need their own f_Rsi (solve them on the build-up page)'}.`,
       },
+      ...atBridges,
     ];
   },
   trace: (r) => r.trace,

@@ -1,4 +1,6 @@
 import { can, PERMISSIONS } from '@shared/auth/permissions';
+import { demoComputedGirt } from '@shared/calc/bridge/examples';
+import { ENGINE_VERSION } from '@shared/calc/trace';
 import { apiErrorSchema } from '@shared/schemas/common';
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';

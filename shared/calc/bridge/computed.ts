@@ -64,6 +64,17 @@ export const computedBridgeSchema = z.object({
   outside: temperature.describe('Outside environment θe, °C'),
   minInsideSurface: temperature.describe('θsi,min at the bridge, °C'),
   fRsi: z.number().min(-1).max(2).describe('f_Rsi = (θsi,min − θe) / (θi − θe) at the bridge'),
+  surface: z
+    .object({
+      rsi: z
+        .number()
+        .min(0)
+        .max(1)
+        .describe('Inside surface resistance of the surface-humidity check, m²·K/W'),
+      fRsi: z.number().min(-1).max(2),
+      minInsideSurface: temperature,
+    })
+    .describe('The same detail solved with Rsi = 0.25 m²·K/W for the ISO 13788 surface check'),
   map: bridgeMapSchema,
 });
 export type ComputedBridge = z.infer<typeof computedBridgeSchema>;

@@ -1,6 +1,6 @@
 import { solveBridge } from './bridge';
 import type { ComputedBridge } from './computed';
-import { computedOf, detailModel } from './detail';
+import { computedOf, detailModel, surfaceCheck } from './detail';
 import { type BridgeModelInput, bridgeModelSchema } from './schema';
 import { sectionOf } from './section';
 import type { ClipTemplate, GirtTemplate } from './templates';
@@ -93,11 +93,13 @@ export const demoWall: { girt: GirtTemplate; clip: ClipTemplate } = {
  */
 export function demoComputedGirt(engineVersion: string): ComputedBridge {
   const detail = { template: 'girt', input: { ...demoWall.girt, mesh: { interfaceCell: 0.005 } } } as const;
-  const result = solveBridge(bridgeModelSchema.parse({ ...detailModel(detail), field: true }));
+  const model = detailModel(detail);
+  const result = solveBridge(bridgeModelSchema.parse({ ...model, field: true }));
   const computed = computedOf(
     detail,
     result,
     sectionOf(result),
+    surfaceCheck(model),
     { inside: 20, outside: 0 },
     engineVersion,
     new Date('2026-01-01T00:00:00Z'),

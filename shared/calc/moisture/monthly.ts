@@ -23,7 +23,8 @@ import { minSurfaceTemperature, minTemperatureFactor, surfaceTemperature } from 
 
 /** Days per month, January first (365-day year). */
 export const MONTH_DAYS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31] as const;
-const MONTH_NAMES = [
+/** Month names, January first (the climate form, the moisture page and the engine's messages). */
+export const MONTH_NAMES = [
   'January',
   'February',
   'March',
@@ -268,7 +269,11 @@ function summarise(months: readonly MonthResult[], nodes: readonly MoistureNode[
 }
 
 /** Year summary of the surface check: critical month = highest f_Rsi,min. */
-function surfaceSummary(months: readonly MonthResult[], fRsi: number): MoistureResult['surface'] {
+function surfaceSummary(
+  months: readonly MonthResult[],
+  fRsi: number,
+  given: MoistureInput['bridges'] = [],
+): MoistureResult['surface'] {
   let fRsiMax: number | null = null;
   let criticalMonth: number | null = null;
   for (const month of months) {
@@ -278,7 +283,10 @@ function surfaceSummary(months: readonly MonthResult[], fRsi: number): MoistureR
       criticalMonth = month.month;
     }
   }
-  return { fRsi, criticalMonth, fRsiMax, pass: months.every((month) => month.surface.pass) };
+  // At a bridge the check is the same (ISO 13788:2012 §5 with ISO 10211): f_Rsi at the bridge ≥ f_Rsi,max.
+  const bridges = given.map((b) => ({ ...b, pass: fRsiMax === null || b.fRsi >= fRsiMax }));
+  const pass = months.every((month) => month.surface.pass) && bridges.every((b) => b.pass);
+  return { fRsi, criticalMonth, fRsiMax, bridges, pass };
 }
 
 function verdict(
@@ -296,12 +304,20 @@ function verdict(
       ? `Interstitial condensation is predicted (at most ${grams(interstitial.maxAccumulation)} in ${MONTH_NAMES[(interstitial.maxAccumulationMonth ?? 1) - 1]}, mostly at ${worst?.label}) but it all evaporates within the year; check that amount against what the materials there tolerate.`
       : `Interstitial condensation builds up: it peaks at ${grams(interstitial.maxAccumulation)} in ${MONTH_NAMES[(interstitial.maxAccumulationMonth ?? 1) - 1]} and ${grams(interstitial.finalAccumulation)} remain after the 12 months, so water accumulates year on year — the wall fails the ISO 13788 balance.`;
   const failing = months.filter((month) => !month.surface.pass).map((month) => MONTH_NAMES[month.month - 1]);
-  const onSurface = surface.pass
-    ? surface.fRsiMax === null
-      ? 'Surface humidity check not applicable: in no month is the outside cold enough for the interior surface to reach 80 % RH.'
-      : `The clear-field interior surface stays at or below 80 % RH in every month (f_Rsi ${surface.fRsi.toFixed(3)} ≥ f_Rsi,max ${surface.fRsiMax.toFixed(3)}).`
-    : `Mould risk: the clear-field interior surface exceeds 80 % RH in ${failing.join(', ')} (f_Rsi ${surface.fRsi.toFixed(3)}).`;
-  return `${inside} ${onSurface}`;
+  const coldBridges = surface.bridges.filter((b) => !b.pass);
+  const atBridges =
+    coldBridges.length === 0
+      ? surface.bridges.length > 0 && surface.fRsiMax !== null
+        ? ` At the thermal bridges solved (${surface.bridges.map((b) => b.name).join(', ')}) it stays at or below 80 % RH too.`
+        : ''
+      : ` Mould risk at ${coldBridges.map((b) => `${b.name} (f_Rsi ${b.fRsi.toFixed(3)})`).join(', ')}: below f_Rsi,max ${surface.fRsiMax?.toFixed(3)}.`;
+  const onSurface =
+    failing.length === 0
+      ? surface.fRsiMax === null
+        ? 'Surface humidity check not applicable: in no month is the outside cold enough for the interior surface to reach 80 % RH.'
+        : `The clear-field interior surface stays at or below 80 % RH in every month (f_Rsi ${surface.fRsi.toFixed(3)} ≥ f_Rsi,max ${surface.fRsiMax.toFixed(3)}).`
+      : `Mould risk: the clear-field interior surface exceeds 80 % RH in ${failing.join(', ')} (f_Rsi ${surface.fRsi.toFixed(3)}).`;
+  return `${inside} ${onSurface}${atBridges}`;
 }
 
 const START_FORMULA: Record<StartRule, string> = {
@@ -370,7 +386,7 @@ export function calculateMoisture(input: MoistureInput): MoistureResult {
     );
   }
   const interstitial = summarise(months, asm.nodes);
-  const surface = surfaceSummary(months, asm.fRsi);
+  const surface = surfaceSummary(months, asm.fRsi, input.bridges);
   trace.push(
     step(
       'moisture.maxAccumulation',
@@ -403,6 +419,20 @@ export function calculateMoisture(input: MoistureInput): MoistureResult {
         ONE,
       ),
     );
+  trace.push(
+    ...surface.bridges.map((b, i) =>
+      step(
+        `moisture.bridge.${i}.fRsi`,
+        `Temperature factor at ${b.name}`,
+        'f_Rsi = (θsi,min − θe) / (θi − θe), solved with Rsi = 0.25 m²·K/W',
+        'ISO 10211:2017 (2-D/3-D solve); ISO 13788:2012 §5',
+        {},
+        b.fRsi,
+        ONE,
+        b.pass ? undefined : 'below f_Rsi,max: mould risk at the bridge',
+      ),
+    ),
+  );
 
   return {
     layers: asm.layers,

@@ -103,8 +103,25 @@ export const monthClimateSchema = z.object({
   exteriorRelativeHumidity: relativeHumidity('Monthly mean exterior relative humidity φ_e'),
 });
 
+/** A thermal bridge's temperature factor from a 2-D/3-D solve (ISO 10211) for the surface check. */
+export const surfaceBridgeSchema = z.object({
+  name: z.string().trim().min(1).max(120, 'at most 120 characters'),
+  fRsi: z
+    .number()
+    .min(-1)
+    .max(2)
+    .describe('f_Rsi at the bridge with Rsi = 0.25 m²·K/W (ISO 10211 solve), dimensionless'),
+});
+
 export const moistureInputSchema = z.object({
   layers: z.array(moistureLayerSchema).min(1).max(40).describe('Layers ordered outside → inside'),
+  bridges: z
+    .array(surfaceBridgeSchema)
+    .max(40)
+    .optional()
+    .describe(
+      'Thermal bridges whose inside surface is checked too (f_Rsi at the clip or girt, not only the clear field)',
+    ),
   heatFlow: heatFlowSchema,
   interior: interiorSchema,
   months: z
@@ -248,7 +265,13 @@ export const moistureResultSchema = z.object({
       .nullable()
       .describe('Calendar month with the highest f_Rsi,min; null if none'),
     fRsiMax: z.number().nullable().describe('Highest f_Rsi,min of the year, dimensionless'),
-    pass: z.boolean().describe('True when every month passes'),
+    bridges: z
+      .array(
+        surfaceBridgeSchema.extend({ pass: z.boolean().describe('f_Rsi ≥ f_Rsi,max (or not applicable)') }),
+      )
+      .default([])
+      .describe('The surface check at each thermal bridge given'),
+    pass: z.boolean().describe('True when every month passes, at the clear field and at every bridge'),
   }),
   verdict: z.string().describe('The result in plain words'),
   trace: z.array(traceStepSchema),

@@ -157,6 +157,7 @@ export function BridgeSolveDialog({
           detail,
           o.solved.result,
           o.solved.section,
+          o.solved.surface,
           { inside: warm, outside: cold },
           ENGINE_VERSION,
           date,
@@ -270,6 +271,15 @@ export function BridgeSolveDialog({
               </dd>
               <dt>f_Rsi</dt>
               <dd className="num">{phase.solved.result.fRsi?.toFixed(3) ?? '—'}</dd>
+              {phase.solved.surface ? (
+                <>
+                  <dt>f_Rsi, surface check</dt>
+                  <dd className="num" data-testid="surface-frsi">
+                    {phase.solved.surface.fRsi.toFixed(3)} with the inside surface resistance of ISO 13788,
+                    read by the moisture page
+                  </dd>
+                </>
+              ) : null}
             </dl>
             {phase.solved.section ? (
               <TemperatureMap

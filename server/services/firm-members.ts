@@ -17,6 +17,11 @@ interface Row {
 }
 
 /** A stored role as the API shows it: anything unknown reads as the least, `reader`. */
+
+/** One person's membership row of a firm. */
+const memberRow = (organisationId: string, userId: string) =>
+  and(eq(organisationMembers.organisationId, organisationId), eq(organisationMembers.userId, userId));
+
 export const firmRoleOf = (role: string | null | undefined): FirmRole =>
   firmRoleSchema.catch('reader').parse(role);
 
@@ -75,9 +80,7 @@ export function createFirmMemberService(db: Db, config: Config, mailer: Mailer) 
       const [m] = await tx
         .select({ role: organisationMembers.role })
         .from(organisationMembers)
-        .where(
-          and(eq(organisationMembers.organisationId, organisationId), eq(organisationMembers.userId, userId)),
-        );
+        .where(memberRow(organisationId, userId));
       if (!m) throw notFound('member');
       return change(tx, firmRoleOf(m.role));
     });
@@ -107,9 +110,7 @@ export function createFirmMemberService(db: Db, config: Config, mailer: Mailer) 
       const [m] = await db
         .select({ role: organisationMembers.role })
         .from(organisationMembers)
-        .where(
-          and(eq(organisationMembers.organisationId, organisationId), eq(organisationMembers.userId, userId)),
-        );
+        .where(memberRow(organisationId, userId));
       return m ? firmRoleOf(m.role) : null;
     },
 
@@ -180,15 +181,7 @@ export function createFirmMemberService(db: Db, config: Config, mailer: Mailer) 
       await changeMember(organisationId, userId, async (tx, before) => {
         if (before === role) return;
         if (before === 'admin') await assertNotLastAdmin(tx, organisationId, userId);
-        await tx
-          .update(organisationMembers)
-          .set({ role })
-          .where(
-            and(
-              eq(organisationMembers.organisationId, organisationId),
-              eq(organisationMembers.userId, userId),
-            ),
-          );
+        await tx.update(organisationMembers).set({ role }).where(memberRow(organisationId, userId));
         await recordAudit(tx, {
           actorId,
           entity: 'firm_member',
@@ -205,14 +198,7 @@ export function createFirmMemberService(db: Db, config: Config, mailer: Mailer) 
     async remove(organisationId: string, userId: string, actorId: string): Promise<void> {
       await changeMember(organisationId, userId, async (tx, before) => {
         if (before === 'admin') await assertNotLastAdmin(tx, organisationId, userId);
-        await tx
-          .delete(organisationMembers)
-          .where(
-            and(
-              eq(organisationMembers.organisationId, organisationId),
-              eq(organisationMembers.userId, userId),
-            ),
-          );
+        await tx.delete(organisationMembers).where(memberRow(organisationId, userId));
         await recordAudit(tx, {
           actorId,
           entity: 'firm_member',

@@ -1,15 +1,14 @@
 import { canInFirm, FIRM_ROLE_LABELS } from '@shared/auth/permissions';
 import { useState } from 'react';
 import { Button } from '../../components/ui/Button';
-import { Field } from '../../components/ui/Field';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
-import { Select } from '../../components/ui/Select';
 import { useCriteriaSets } from '../../features/criteria/api/get-criteria-sets';
 import { CriteriaSetTable } from '../../features/criteria/components/CriteriaSetTable';
 import { NewCriteriaSetForm } from '../../features/criteria/components/NewCriteriaSetForm';
 import { useMe } from '../../features/me/api/get-me';
+import { FirmPicker } from '../../features/me/components/FirmPicker';
 import { firmOf } from '../../features/me/firm';
 import { errorMessage } from '../../lib/api';
 
@@ -48,19 +47,7 @@ export function CodeTablesPage() {
         </Notice>
       ) : (
         <>
-          {orgs.length > 1 ? (
-            <Field label="Firm" className="max-w-sm">
-              {(c) => (
-                <Select {...c} value={org?.id} onChange={(e) => setChosen(e.target.value)}>
-                  {orgs.map((o) => (
-                    <option key={o.id} value={o.id}>
-                      {o.name}
-                    </option>
-                  ))}
-                </Select>
-              )}
-            </Field>
-          ) : null}
+          <FirmPicker firms={orgs} value={org?.id} onChange={(id) => setChosen(id)} />
           {org && !mayWrite ? (
             <p className="text-sm text-ink-muted">
               Your role in {org.name} is {FIRM_ROLE_LABELS[org.role]}: you read its code tables and check

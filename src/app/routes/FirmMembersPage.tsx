@@ -1,14 +1,13 @@
 import { canInFirm, FIRM_ROLE_LABELS, FIRM_ROLES, type FirmRole } from '@shared/auth/permissions';
 import { useSearchParams } from 'react-router';
-import { Field } from '../../components/ui/Field';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
-import { Select } from '../../components/ui/Select';
 import { useFirmMembers } from '../../features/firm-members/api/get-firm-members';
 import { AddFirmMemberForm } from '../../features/firm-members/components/AddFirmMemberForm';
 import { FirmMembersTable } from '../../features/firm-members/components/FirmMembersTable';
 import { useMe } from '../../features/me/api/get-me';
+import { FirmPicker } from '../../features/me/components/FirmPicker';
 import { firmOf } from '../../features/me/firm';
 import { errorMessage } from '../../lib/api';
 
@@ -44,19 +43,7 @@ export function FirmMembersPage() {
         <Notice tone="info" title="You are not a member of a firm." />
       ) : (
         <>
-          {orgs.length > 1 ? (
-            <Field label="Firm" className="max-w-sm">
-              {(c) => (
-                <Select {...c} value={org.id} onChange={(e) => setParams({ org: e.target.value })}>
-                  {orgs.map((o) => (
-                    <option key={o.id} value={o.id}>
-                      {o.name}
-                    </option>
-                  ))}
-                </Select>
-              )}
-            </Field>
-          ) : null}
+          <FirmPicker firms={orgs} value={org.id} onChange={(id) => setParams({ org: id })} />
           <section aria-labelledby="roles-heading" className="flex flex-col gap-2">
             <h2 id="roles-heading" className="text-xl">
               Firm roles

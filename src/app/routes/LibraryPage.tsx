@@ -1,10 +1,8 @@
 import { canInFirm, FIRM_ROLE_LABELS } from '@shared/auth/permissions';
 import { useState } from 'react';
-import { Field } from '../../components/ui/Field';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
-import { Select } from '../../components/ui/Select';
 import { useAttachmentProducts } from '../../features/library/api/attachment-products';
 import { useBridgeValues } from '../../features/library/api/get-bridge-values';
 import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
@@ -18,6 +16,7 @@ import {
   GenericMaterialsTable,
 } from '../../features/library/components/LibraryTables';
 import { useMe } from '../../features/me/api/get-me';
+import { FirmPicker } from '../../features/me/components/FirmPicker';
 import { firmOf } from '../../features/me/firm';
 import { errorMessage } from '../../lib/api';
 
@@ -47,19 +46,7 @@ export function LibraryPage() {
         <Notice tone="info" title="You are not a member of a firm, so there is no firm library to show." />
       ) : (
         <>
-          {orgs.length > 1 ? (
-            <Field label="Firm" className="max-w-sm">
-              {(c) => (
-                <Select {...c} value={org?.id} onChange={(e) => setChosen(e.target.value)}>
-                  {orgs.map((o) => (
-                    <option key={o.id} value={o.id}>
-                      {o.name}
-                    </option>
-                  ))}
-                </Select>
-              )}
-            </Field>
-          ) : null}
+          <FirmPicker firms={orgs} value={org?.id} onChange={(id) => setChosen(id)} />
           {org && !mayWrite ? (
             <Notice
               tone="info"

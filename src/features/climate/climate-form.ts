@@ -1,29 +1,17 @@
+import { MONTH_NAMES } from '@shared/calc/moisture/monthly';
 import { type ProjectClimate, projectClimateSchema } from '@shared/schemas/project';
 import type { UnitSystem } from '@shared/units';
 import { z } from 'zod';
 import { issueErrorMap } from '../../lib/issue-words';
 import { formatQuantity, type Quantity } from '../../lib/quantities';
 
+export { MONTH_NAMES };
+
 /*
  * The climate form: 12 months of exterior temperature and RH (stored SI: °C and a 0–1 fraction; typed in
  * °C/°F and %), where they come from, and the interior: an ISO 13788 humidity class, or the project's fixed
  * indoor design conditions. Validated by the shared project-climate schema.
  */
-
-export const MONTH_NAMES = [
-  'January',
-  'February',
-  'March',
-  'April',
-  'May',
-  'June',
-  'July',
-  'August',
-  'September',
-  'October',
-  'November',
-  'December',
-] as const;
 
 export const climateFormSchema = z
   .object({

@@ -1,4 +1,5 @@
 import { DELTA_0 } from '@shared/calc/moisture/glaser';
+import { MONTH_NAMES } from '@shared/calc/moisture/monthly';
 import {
   INCH,
   OZ_PER_FT2_TO_KG_PER_M2,
@@ -9,6 +10,8 @@ import {
   type UnitSystem,
 } from '@shared/units';
 import { formatNumber, formatQuantity } from '../../lib/quantities';
+
+export { MONTH_NAMES };
 
 /*
  * How the moisture page's figures read. Everything arrives in SI (m, °C, Pa, kg/m²); only the text is
@@ -101,21 +104,6 @@ export function formatPerm(sd: number): string {
 /** A dimensionless factor (f_Rsi), three decimals. */
 export const formatFactor = (f: number | null) =>
   f === null || !Number.isFinite(f) ? '—' : minus(f.toFixed(3));
-
-export const MONTH_NAMES = [
-  'January',
-  'February',
-  'March',
-  'April',
-  'May',
-  'June',
-  'July',
-  'August',
-  'September',
-  'October',
-  'November',
-  'December',
-] as const;
 
 export const monthName = (month: number) => MONTH_NAMES[(month - 1 + 12) % 12]!;
 export const monthShort = (month: number) => monthName(month).slice(0, 3);

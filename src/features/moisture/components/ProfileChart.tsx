@@ -1,5 +1,6 @@
 import { dewPoint, saturationPressureIso13788 } from '@shared/calc/moisture/psychrometrics';
 import type { MoistureResult, MonthResult } from '@shared/calc/moisture/schema';
+import type { DrawClass } from '@shared/sheets/layer-class';
 import { celsiusToFahrenheit, type UnitSystem } from '@shared/units';
 import { useId } from 'react';
 import { formatNumber } from '../../../lib/quantities';
@@ -13,18 +14,8 @@ const PAPER = '#fbf8f1';
 const SUNK = '#ece5d6';
 const CAUTION = '#a12c2a';
 
-/** How a layer is hatched (the assembly page's material classes; unknown → plain). */
-export type Hatch =
-  | 'metal'
-  | 'batt'
-  | 'rigid'
-  | 'gypsum'
-  | 'board'
-  | 'masonry'
-  | 'membrane'
-  | 'air'
-  | 'glass'
-  | 'other';
+/** How a layer is hatched: the material classes of the section drawings (unknown → plain). */
+export type Hatch = DrawClass;
 
 export type ProfileMode = 'temperature' | 'pressure';
 

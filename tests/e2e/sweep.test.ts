@@ -48,9 +48,12 @@ describe('sweep in the browser', () => {
     });
     expect(saved.status()).toBe(200);
 
-    await page.goto(`${assemblyUrl}/sweep`);
+    await page.reload();
+    await page
+      .getByRole('navigation', { name: 'Assembly pages' })
+      .getByRole('link', { name: 'Sweep' })
+      .click();
     await page.getByRole('heading', { name: /^Sweep of/ }).waitFor();
-    // No chart code before the sweep page: recharts came with this page's chunk.
     const first = page.getByRole('group', { name: 'Parameter 1', exact: true });
     expect(await first.getByRole('combobox', { name: 'Layer' }).inputValue()).toBe('3');
 

@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import { TabStrip } from '../../components/ui/TabStrip';
 
 /**
- * The pages of one assembly: its build-up (thermal), moisture, attachment (wind), joints & quantities, checks;
+ * The pages of one assembly: its build-up (thermal), moisture, attachment (wind), joints & quantities, checks, sweep;
  * on an older revision the breadcrumb goes on to it.
  */
 export function AssemblyTabs({
@@ -38,6 +38,7 @@ export function AssemblyTabs({
           { to: `${base}/attachment`, label: 'Attachment & wind' },
           { to: `${base}/joints`, label: 'Joints & quantities' },
           { to: `${base}/checks`, label: 'Checks' },
+          { to: `${base}/sweep`, label: 'Sweep' },
         ]}
       />
     </div>

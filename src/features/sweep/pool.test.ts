@@ -1,74 +1,39 @@
 import { demoSweep } from '@shared/sweep/examples';
 import type { SweepVariantResult } from '@shared/sweep/schema';
-import { planSweep, runSweep, variantValues } from '@shared/sweep/sweep';
+import { planSweep, runSweep, variantRunner, variantValues } from '@shared/sweep/sweep';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-  type Chunk,
-  chunkParameters,
-  type FromWorker,
-  runPool,
-  splitSweep,
-  type ToWorker,
-  type WorkerLike,
-} from './pool';
-
-const axesOf = (sizes: number[]) => sizes.map((n, i) => Array.from({ length: n }, (_, j) => i * 1000 + j));
-
-/** Every variant number of each chunk, with the values the chunk gives it. */
-const unrolled = (chunk: Chunk) =>
-  Array.from({ length: chunk.count }, (_, local) =>
-    variantValues({ axes: chunk.lists.map((values) => ({ values })), count: chunk.count } as never, local),
-  ).map((values, local) => ({ index: chunk.start + local, values }));
+import { type FromWorker, runPool, splitSweep, type ToWorker, type WorkerLike } from './pool';
 
 describe('splitting a sweep over workers', () => {
-  it('chunks cover every variant once, in order, each with the values the whole sweep gives it (property)', () => {
+  it('chunks cover every variant once, in order, none larger than the target (property)', () => {
     fc.assert(
-      fc.property(
-        fc.array(fc.integer({ min: 1, max: 9 }), { minLength: 1, maxLength: 3 }),
-        fc.integer({ min: 1, max: 50 }),
-        (sizes, target) => {
-          const axes = axesOf(sizes);
-          const count = sizes.reduce((p, n) => p * n, 1);
-          const plan = { axes: axes.map((values) => ({ values })), count } as never;
-          const chunks = splitSweep(axes, target);
-          const all = chunks.flatMap(unrolled);
-          expect(all.map((v) => v.index)).toEqual(Array.from({ length: count }, (_, i) => i));
-          for (const v of all) expect(v.values).toEqual(variantValues(plan, v.index));
-          const last = sizes[sizes.length - 1]!;
-          for (const c of chunks) expect(c.count).toBeLessThanOrEqual(Math.max(target, last));
-        },
-      ),
+      fc.property(fc.integer({ min: 1, max: 5000 }), fc.integer({ min: 1, max: 400 }), (count, target) => {
+        const chunks = splitSweep(count, target);
+        const all = chunks.flatMap((c) => Array.from({ length: c.count }, (_, i) => c.start + i));
+        expect(all).toEqual(Array.from({ length: count }, (_, i) => i));
+        for (const c of chunks) expect(c.count).toBeLessThanOrEqual(target);
+      }),
     );
-  });
-
-  it('10 000 variants of 100 × 100 with a target of 250: 50 chunks of two values of the first parameter', () => {
-    const chunks = splitSweep(axesOf([100, 100]), 250);
-    expect(chunks).toHaveLength(50);
-    expect(chunks[1]).toMatchObject({ start: 200, count: 200 });
-    expect(chunks[1]!.lists[0]).toEqual([2, 3]);
   });
 });
 
-/** A worker that runs the chunk in this thread (as sweep.worker.ts does), answering on the next tick. */
+/** A worker that runs its chunks in this thread as sweep.worker.ts does (one runner), answering on the next tick. */
 function inThreadWorker(log: string[]): WorkerLike {
-  let setup: Extract<ToWorker, { type: 'setup' }>['setup'] | null = null;
+  let run: ((index: number) => SweepVariantResult) | null = null;
   const w: WorkerLike = {
     onmessage: null,
     onerror: null,
     terminate: () => log.push('terminate'),
-    postMessage: (m) => {
-      if (m.type === 'setup') setup = m.setup;
-      else
+    postMessage: (m: ToWorker) => {
+      if (m.type === 'setup') {
+        const { assembly, project, rows, parameters } = m.setup;
+        const plan = planSweep(assembly, parameters, 1e6);
+        const runner = variantRunner(plan, assembly, project, rows);
+        run = (i) => runner(i, variantValues(plan, i));
+      } else
         setTimeout(() => {
-          const s = setup!;
-          const { variants } = runSweep(
-            s.assembly,
-            s.project,
-            s.rows,
-            chunkParameters(s.parameters, m.chunk),
-            m.chunk.count,
-          );
+          const variants = Array.from({ length: m.chunk.count }, (_, i) => run!(m.chunk.start + i));
           w.onmessage?.({
             data: { type: 'done', id: m.id, variants } satisfies FromWorker,
           } as MessageEvent<FromWorker>);
@@ -82,15 +47,11 @@ describe('the worker pool', () => {
   it('merges the chunks into exactly what one runSweep gives (the demo sweep, 3 workers, chunks of 5)', async () => {
     const { assembly, project, rows, parameters } = demoSweep();
     const whole = runSweep(assembly, project, rows, parameters, 1000);
-    const chunks = splitSweep(
-      whole.plan.axes.map((x) => x.values),
-      5,
-    );
     const got: SweepVariantResult[] = [];
     const log: string[] = [];
     const run = runPool({
       setup: { assembly, project, rows, parameters },
-      chunks,
+      chunks: splitSweep(whole.count, 5),
       size: 3,
       createWorker: () => inThreadWorker(log),
       onResults: (v) => got.push(...v),
@@ -102,14 +63,11 @@ describe('the worker pool', () => {
 
   it('cancel stops every worker and settles as cancelled; a refusal settles with its field', async () => {
     const { assembly, project, rows, parameters } = demoSweep();
-    const plan = planSweep(assembly, parameters, 1000);
-    const chunks = splitSweep(
-      plan.axes.map((x) => x.values),
-      4,
-    );
+    const chunks = splitSweep(24, 4);
+    const setup = { assembly, project, rows, parameters };
     const log: string[] = [];
     const run = runPool({
-      setup: { assembly, project, rows, parameters },
+      setup,
       chunks,
       size: 2,
       createWorker: () => inThreadWorker(log),
@@ -132,13 +90,7 @@ describe('the worker pool', () => {
           );
       },
     };
-    const refused = runPool({
-      setup: { assembly, project, rows, parameters },
-      chunks,
-      size: 1,
-      createWorker: () => refusing,
-      onResults: () => {},
-    });
+    const refused = runPool({ setup, chunks, size: 1, createWorker: () => refusing, onResults: () => {} });
     expect(await refused.done).toEqual({ ok: false, field: 'parameters.0.list.0', reason: 'no' });
   });
 });

@@ -4,66 +4,24 @@ import type { AssemblyInput } from '@shared/schemas/assembly';
 import type { SweepParameter, SweepVariantResult } from '@shared/sweep/schema';
 
 /*
- * A sweep split over a small pool of Web Workers. The variants are numbered in mixed radix (the last parameter
- * fastest, as the engine enumerates them), so fixing the values of the first parameters and taking a run of the
- * next one's values is a contiguous stretch of numbers: each chunk is a small sweep of its own (its parameters as
- * lists) whose variant i is variant start + i of the whole. Workers take chunks as they finish one; results stream
- * back chunk by chunk; cancel terminates every worker.
+ * A sweep split over a small pool of Web Workers. Each worker plans the sweep once and keeps one variant runner
+ * (shared/sweep `variantRunner`: each module's run kept by the values of the parameters that touch it), then
+ * takes contiguous runs of variant numbers — chunks — as it hands one back; results stream back chunk by chunk,
+ * already numbered in the whole sweep; cancel terminates every worker.
  */
 
-type Value = number | string;
-
+/** A contiguous run of variant numbers. */
 export interface Chunk {
-  /** Number of the chunk's first variant in the whole sweep. */
   start: number;
   count: number;
-  /** The values of each parameter in this chunk, in order. */
-  lists: Value[][];
 }
 
-/**
- * The sweep's variants in contiguous chunks of at most `target` variants, or of one value of the last parameter
- * when that alone is more: the split parameter is the first whose later combinations fit in `target`.
- */
-export function splitSweep(axes: readonly (readonly Value[])[], target: number): Chunk[] {
-  const n = axes.map((v) => v.length);
-  // tail[k]: variants per value of parameter k (the product of the later parameters' counts).
-  const tail = n.map((_, k) => n.slice(k + 1).reduce((p, x) => p * x, 1));
-  const k = tail.findIndex((t) => t <= target);
-  const per = Math.max(1, Math.floor(target / tail[k]!));
-  const prefixes = n.slice(0, k).reduce((p, x) => p * x, 1);
-  const chunks: Chunk[] = [];
-  for (let p = 0; p < prefixes; p++) {
-    // The values of parameters 0 … k−1 fixed by prefix p (mixed radix, the last fastest).
-    const fixed: Value[][] = new Array(k);
-    let rest = p;
-    for (let i = k - 1; i >= 0; i--) {
-      fixed[i] = [axes[i]![rest % n[i]!]!];
-      rest = Math.floor(rest / n[i]!);
-    }
-    for (let j = 0; j < n[k]!; j += per) {
-      const slice = axes[k]!.slice(j, j + per);
-      chunks.push({
-        start: (p * n[k]! + j) * tail[k]!,
-        count: slice.length * tail[k]!,
-        lists: [...fixed, [...slice], ...axes.slice(k + 1).map((v) => [...v])],
-      });
-    }
-  }
-  return chunks;
-}
-
-/** A chunk's parameters: the sweep's own, each with the chunk's values as its list. */
-export const chunkParameters = (parameters: readonly SweepParameter[], chunk: Chunk): SweepParameter[] =>
-  parameters.map((p, i) => {
-    if (p.kind === 'sealantClass') return { ...p, list: chunk.lists[i] as typeof p.list };
-    const { range: _range, ...rest } = p;
-    return { ...rest, list: chunk.lists[i] as number[] };
-  });
-
-/** A chunk's results numbered as variants of the whole sweep. */
-export const placeChunk = (chunk: Chunk, results: readonly SweepVariantResult[]): SweepVariantResult[] =>
-  results.map((r) => ({ ...r, index: chunk.start + r.index }));
+/** Variants 0 … count − 1 in chunks of at most `target`, in order. */
+export const splitSweep = (count: number, target: number): Chunk[] =>
+  Array.from({ length: Math.ceil(count / target) }, (_, i) => ({
+    start: i * target,
+    count: Math.min(target, count - i * target),
+  }));
 
 /** What every worker of one sweep is given once. */
 export interface SweepSetup {
@@ -94,7 +52,7 @@ export interface PoolRun {
 
 /**
  * Runs the chunks on `size` workers, each taking the next chunk when it hands one back; `onResults` receives
- * each chunk's variants numbered in the whole sweep, in the order they finish.
+ * each chunk's variants (numbered in the whole sweep) in the order they finish.
  */
 export function runPool({
   setup,
@@ -138,7 +96,7 @@ export function runPool({
       if (settled) return;
       const m = e.data;
       if (m.type === 'refused') return finish({ ok: false, field: m.field, reason: m.reason });
-      onResults(placeChunk(chunks[m.id]!, m.variants));
+      onResults(m.variants);
       back++;
       if (back === chunks.length) finish({ ok: true });
       else feed(w);

@@ -1,6 +1,6 @@
 import { CalcInputError } from '@shared/calc/errors';
-import { runSweep } from '@shared/sweep/sweep';
-import { chunkParameters, type FromWorker, type SweepSetup, type ToWorker } from './pool';
+import { planSweep, variantRunner, variantValues } from '@shared/sweep/sweep';
+import type { FromWorker, ToWorker } from './pool';
 
 /** The worker's scope, as much of it as is used (the client's types are the DOM's). */
 const scope = self as unknown as {
@@ -8,27 +8,38 @@ const scope = self as unknown as {
   postMessage: (message: FromWorker) => void;
 };
 
-let setup: SweepSetup | null = null;
+let sweep: { plan: ReturnType<typeof planSweep>; run: ReturnType<typeof variantRunner> } | null = null;
+let refused: { field: string; reason: string } | null = null;
 
-/** The sweep once, then chunks: each run through the compliance runner, its variants numbered within it. */
+/**
+ * The sweep once (planned, and one runner that keeps module runs across chunks), then chunks: each variant of
+ * the chunk through the compliance runner, numbered in the whole sweep.
+ */
 scope.onmessage = (e) => {
   const m = e.data;
   if (m.type === 'setup') {
-    setup = m.setup;
+    const { assembly, project, rows, parameters } = m.setup;
+    try {
+      const plan = planSweep(assembly, parameters, Number.MAX_SAFE_INTEGER);
+      sweep = { plan, run: variantRunner(plan, assembly, project, rows) };
+    } catch (err) {
+      if (!(err instanceof CalcInputError)) throw err;
+      refused = { field: err.field, reason: err.reason };
+    }
     return;
   }
-  if (!setup) return;
-  try {
-    const { variants } = runSweep(
-      setup.assembly,
-      setup.project,
-      setup.rows,
-      chunkParameters(setup.parameters, m.chunk),
-      m.chunk.count,
-    );
-    scope.postMessage({ type: 'done', id: m.id, variants });
-  } catch (err) {
-    if (!(err instanceof CalcInputError)) throw err;
-    scope.postMessage({ type: 'refused', id: m.id, field: err.field, reason: err.reason });
+  if (refused || !sweep) {
+    scope.postMessage({
+      type: 'refused',
+      id: m.id,
+      ...(refused ?? { field: 'parameters', reason: 'no sweep' }),
+    });
+    return;
   }
+  const { plan, run } = sweep;
+  const variants = Array.from({ length: m.chunk.count }, (_, i) => {
+    const index = m.chunk.start + i;
+    return run(index, variantValues(plan, index));
+  });
+  scope.postMessage({ type: 'done', id: m.id, variants });
 };

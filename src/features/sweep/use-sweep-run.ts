@@ -21,11 +21,11 @@ export type RunState =
 const sweepWorker = (): WorkerLike =>
   new Worker(new URL('./sweep.worker.ts', import.meta.url), { type: 'module' }) as unknown as WorkerLike;
 
-/** Results reach the page at most this often (ms), so streaming 10 000 variants never floods React. */
-const FLUSH_MS = 150;
+/** Results reach the page every 150 ms, less often as they grow (1 s from 8 500 on): each flush redraws the table. */
+const flushEvery = (received: number) => Math.min(1000, 150 + received / 10);
 
 /**
- * One sweep at a time on the worker pool: its progress, the variants as they stream in (flushed every 150 ms),
+ * One sweep at a time on the worker pool: its progress, the variants as they stream in (flushed every 150 ms to 1 s),
  * cancel. A new run or leaving the page stops the one before.
  */
 export function useSweepRun(createWorker: () => WorkerLike = sweepWorker) {
@@ -38,10 +38,7 @@ export function useSweepRun(createWorker: () => WorkerLike = sweepWorker) {
     (setup: SweepSetup, plan: SweepPlan) => {
       run.current?.cancel();
       const workers = poolSize(typeof navigator === 'undefined' ? undefined : navigator.hardwareConcurrency);
-      const chunks = splitSweep(
-        plan.axes.map((x) => x.values),
-        chunkTarget(plan.count, workers),
-      );
+      const chunks = splitSweep(plan.count, chunkTarget(plan.count, workers));
       const startedAt = performance.now();
       let buffer: SweepVariantResult[] = [];
       let done = 0;
@@ -63,7 +60,7 @@ export function useSweepRun(createWorker: () => WorkerLike = sweepWorker) {
         onResults: (batch) => {
           buffer = buffer.concat(batch);
           done += batch.length;
-          if (performance.now() - last >= FLUSH_MS) flush();
+          if (performance.now() - last >= flushEvery(done)) flush();
         },
       });
       run.current = current;

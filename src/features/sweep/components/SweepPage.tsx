@@ -5,7 +5,7 @@ import type { CriteriaSetSummary } from '@shared/schemas/criteria';
 import type { Project } from '@shared/schemas/project';
 import type { SweepParameter, SweepParameterKind } from '@shared/sweep/schema';
 import { applyVariant, type SweepPlan } from '@shared/sweep/sweep';
-import { useCallback, useMemo, useState } from 'react';
+import { useCallback, useDeferredValue, useMemo, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Cautions } from '../../../components/ui/Cautions';
 import { Field } from '../../../components/ui/Field';
@@ -93,6 +93,8 @@ export function SweepPage({
   const [chosen, setChosen] = useState<number | null>(null);
   const sweep = useSweepRun();
   const choose = useCallback((i: number) => setChosen(i), []);
+  // The results redraw at React's lower priority: the page keeps answering while 10 000 variants stream in.
+  const variants = useDeferredValue(sweep.variants);
 
   const start = async () => {
     const v = validateSweep(input, drafts, system, SWEEP_BROWSER_CAP);
@@ -128,13 +130,13 @@ export function SweepPage({
   );
   const drawn = useMemo(() => (base ? drawnChecks(base, system) : []), [base, system]);
   const check = drawn.find((c) => c.id === checkId) ?? drawn[0];
-  const byIndex = useMemo(() => new Map(sweep.variants.map((v) => [v.index, v])), [sweep.variants]);
+  const byIndex = useMemo(() => new Map(variants.map((v) => [v.index, v])), [variants]);
   const governingLabels = useMemo(() => {
     const m = new Map<string, string>();
-    for (const v of sweep.variants)
+    for (const v of variants)
       if (v.governing && !m.has(v.governing.id)) m.set(v.governing.id, v.governing.label);
     return m;
-  }, [sweep.variants]);
+  }, [variants]);
   const kinds = ran ? ran.plan.axes.map((x) => x.kind) : [];
   const values = ran ? ran.plan.axes.map((x) => [...x.values]) : [];
   const sizes = values.map((v) => v.length);
@@ -406,7 +408,7 @@ export function SweepPage({
             <CostRanking
               plan={ran.plan}
               assembly={ran.assembly.current.input}
-              variants={sweep.variants}
+              variants={variants}
               draft={costs}
               onDraft={setCosts}
               system={system}
@@ -420,7 +422,7 @@ export function SweepPage({
               Every variant
             </h4>
             <SweepResultsTable
-              variants={sweep.variants}
+              variants={variants}
               kinds={kinds}
               checks={drawn}
               labels={governingLabels}

@@ -130,7 +130,14 @@ function drawItem(w: SheetWriter, fmt: Formatter, item: InspectionItem, photos: 
     item.measured === null
       ? ''
       : `Measured ${figure(fmt, item.quantity, item.measured)} — ${item.check.text}`;
-  const where = [item.location && `At ${item.location}`, item.note].filter(Boolean).join(' · ');
+  const more = item.photos.length - thumbs.length;
+  const where = [
+    item.location && `At ${item.location}`,
+    item.note,
+    more > 0 ? `${more} more photo${more === 1 ? '' : 's'} in ${PRODUCT}` : '',
+  ]
+    .filter(Boolean)
+    .join(' · ');
   const blocks: [string, number, string][] = [
     [design, 7.6, INK.ink],
     [measured, 7.6, item.check.status === 'below' || item.check.status === 'above' ? INK.caution : INK.ink],

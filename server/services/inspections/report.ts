@@ -9,9 +9,10 @@ import { type ReportPhoto, renderFieldReport } from '../../pdf/field-report';
 import type { ObjectStore } from '../../storage/object-store';
 import type { InspectionQueries } from './queries';
 
-/** Photos printed beside each item, and in the whole report (the rest stay in the app). */
+/** Photos printed beside each item, and in the whole report by count and bytes (the rest stay in the app). */
 const PHOTOS_PER_ITEM = 2;
 const PHOTOS_PER_REPORT = 80;
+const PHOTO_BYTES_PER_REPORT = 40 * 1024 * 1024;
 
 async function readAll(body: AsyncIterable<unknown>): Promise<Buffer> {
   const chunks: Buffer[] = [];
@@ -38,9 +39,15 @@ export function createFieldReports(db: Db, storage: ObjectStore, q: InspectionQu
           .orderBy(asc(inspectionPhotos.createdAt)),
       ]);
       const system: UnitSystem = units ?? (me?.unitSystem === 'IP' ? 'IP' : 'SI');
-      const chosen = inspection.items
-        .flatMap((item) => rows.filter((p) => p.itemId === item.id).slice(0, PHOTOS_PER_ITEM))
-        .slice(0, PHOTOS_PER_REPORT);
+      const chosen: typeof rows = [];
+      let bytes = 0;
+      for (const p of inspection.items.flatMap((item) =>
+        rows.filter((r) => r.itemId === item.id).slice(0, PHOTOS_PER_ITEM),
+      )) {
+        if (chosen.length >= PHOTOS_PER_REPORT || bytes + p.size > PHOTO_BYTES_PER_REPORT) break;
+        chosen.push(p);
+        bytes += p.size;
+      }
       const photos: ReportPhoto[] = await Promise.all(
         chosen.map(async (p) => ({
           itemId: p.itemId,

@@ -25,6 +25,10 @@ export default defineConfig({
         navigateFallback: '/index.html',
         navigateFallbackDenylist: [/^\/api(\/|$)/],
         cleanupOutdatedCaches: true,
+        // The page that installed it is kept too: a phone that loses its signal right after the first visit
+        // still reloads.
+        clientsClaim: true,
+        skipWaiting: true,
       },
     }),
   ],

@@ -21,13 +21,18 @@ import '@fontsource/ibm-plex-mono/latin-ext-500.css';
 import './styles.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
+import { startOffline } from './app/offline';
 import { AppProviders } from './app/providers';
+import { createQueryClient } from './app/query-client';
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
 
-createRoot(root).render(
-  <StrictMode>
-    <AppProviders />
-  </StrictMode>,
+const queryClient = createQueryClient();
+void startOffline(queryClient).finally(() =>
+  createRoot(root).render(
+    <StrictMode>
+      <AppProviders queryClient={queryClient} />
+    </StrictMode>,
+  ),
 );

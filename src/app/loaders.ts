@@ -17,6 +17,8 @@ import { criteriaSetsQueryOptions } from '../features/criteria/api/get-criteria-
 import { criteriaVersionsQueryOptions } from '../features/criteria/api/get-criteria-versions';
 import { projectCriteriaSetsQueryOptions } from '../features/criteria/api/get-project-criteria-sets';
 import { firmMembersQueryOptions } from '../features/firm-members/api/get-firm-members';
+import { inspectionQueryOptions } from '../features/inspections/api/get-inspection';
+import { inspectionsQueryOptions } from '../features/inspections/api/get-inspections';
 import { invitationQueryOptions } from '../features/invitations/api/get-invitation';
 import { attachmentProductsQueryOptions } from '../features/library/api/attachment-products';
 import { bridgeValuesQueryOptions } from '../features/library/api/get-bridge-values';
@@ -135,6 +137,13 @@ export function createLoaders(queryClient: QueryClient) {
       checkRunSheet: (({ params }) =>
         warm(checkRunQueryOptions(idOf(params.runId, 'check run')))) satisfies Loader,
       members: (({ params }) => warm(membersQueryOptions(params.projectId ?? ''))) satisfies Loader,
+      inspections: (({ params }) => warm(inspectionsQueryOptions(params.projectId ?? ''))) satisfies Loader,
+      newInspection: (({ params }) => warm(assembliesQueryOptions(params.projectId ?? ''))) satisfies Loader,
+      /** An inspection, its deficiency and closing pages: the inspection (kept on the device, D-026). */
+      inspection: (async ({ params }) => {
+        await need(inspectionQueryOptions(idOf(params.inspectionId, 'inspection')));
+        return null;
+      }) satisfies Loader,
       activity: (({ params }) => warm(auditQueryOptions(params.projectId ?? ''))) satisfies Loader,
 
       /** The frame of an assembly: it and its project; an assembly of another project is not found here. */

@@ -1,11 +1,10 @@
-import { QueryClientProvider } from '@tanstack/react-query';
+import { type QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { useState } from 'react';
 import { RouterProvider } from 'react-router';
-import { createQueryClient } from './query-client';
 import { createAppRouter } from './router';
 
-export function AppProviders() {
-  const [queryClient] = useState(createQueryClient);
+/** The query client is made (and its device cache restored, src/app/offline.ts) before the router loads anything. */
+export function AppProviders({ queryClient }: { queryClient: QueryClient }) {
   const [router] = useState(() => createAppRouter(queryClient));
   return (
     <QueryClientProvider client={queryClient}>

@@ -187,6 +187,33 @@ export function createAppRouter(queryClient: QueryClient) {
                       ...page(() => import('./routes/SubmittalPage').then((m) => m.SubmittalPage)),
                     },
                     {
+                      path: 'inspections',
+                      loader: load('inspections'),
+                      ...page(() =>
+                        import('./routes/ProjectInspectionsPage').then((m) => m.ProjectInspectionsPage),
+                      ),
+                    },
+                    {
+                      path: 'inspections/new',
+                      loader: load('newInspection'),
+                      ...page(() => import('./routes/NewInspectionPage').then((m) => m.NewInspectionPage)),
+                    },
+                    {
+                      path: 'inspections/:inspectionId',
+                      loader: load('inspection'),
+                      ...page(() => import('./routes/InspectionPage').then((m) => m.InspectionPage)),
+                    },
+                    {
+                      path: 'inspections/:inspectionId/close',
+                      loader: load('inspection'),
+                      ...page(() => import('./routes/CloseInspectionPage').then((m) => m.CloseInspectionPage)),
+                    },
+                    {
+                      path: 'inspections/:inspectionId/deficiencies/:deficiencyId',
+                      loader: load('inspection'),
+                      ...page(() => import('./routes/DeficiencyPage').then((m) => m.DeficiencyPage)),
+                    },
+                    {
                       path: 'climate',
                       ...page(() => import('./routes/ProjectClimatePage').then((m) => m.ProjectClimatePage)),
                     },

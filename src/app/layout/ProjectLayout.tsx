@@ -29,6 +29,7 @@ export function ProjectLayout() {
           { to: `/projects/${p.id}`, label: 'Overview', end: true },
           { to: `/projects/${p.id}/assemblies`, label: 'Assemblies' },
           { to: `/projects/${p.id}/submittals`, label: 'Submittals' },
+          { to: `/projects/${p.id}/inspections`, label: 'Inspections' },
           { to: `/projects/${p.id}/climate`, label: 'Climate' },
           { to: `/projects/${p.id}/wind`, label: 'Wind' },
           { to: `/projects/${p.id}/members`, label: 'People' },

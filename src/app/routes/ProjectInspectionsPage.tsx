@@ -1,0 +1,71 @@
+import { can } from '@shared/auth/permissions';
+import { useParams } from 'react-router';
+import { ButtonLink } from '../../components/ui/Button';
+import { Loading } from '../../components/ui/Loading';
+import { Notice } from '../../components/ui/Notice';
+import { useInspections } from '../../features/inspections/api/get-inspections';
+import { ElevationDrawing } from '../../features/inspections/components/ElevationDrawing';
+import { InspectionList } from '../../features/inspections/components/InspectionList';
+import { WaitingToSend } from '../../features/inspections/components/WaitingToSend';
+import { byElevation } from '../../features/inspections/scope';
+import { useProject } from '../../features/projects/api/get-project';
+import { errorMessage } from '../../lib/api';
+
+/** The project's field inspections: each elevation drawn by state, then the list. */
+export function ProjectInspectionsPage() {
+  const { projectId = '' } = useParams();
+  const { data: project } = useProject(projectId);
+  const list = useInspections(projectId);
+  if (!project) return null;
+  const mayCreate = can(project.myRole, 'inspection.create') && project.archivedAt === null;
+
+  return (
+    <div className="flex flex-col gap-6">
+      <title>{`Inspections · ${project.name} · Skinwright`}</title>
+      <div className="flex flex-wrap items-end justify-between gap-4 border-b border-ink pb-2">
+        <h2 className="text-2xl">Inspections</h2>
+        {mayCreate ? (
+          <ButtonLink variant="primary" className="min-h-11" to={`/projects/${project.id}/inspections/new`}>
+            New inspection
+          </ButtonLink>
+        ) : null}
+      </div>
+      <p className="max-w-prose text-sm text-ink-muted">
+        The wall as built, walked against what was proved: a checklist generated from an assembly revision for
+        an elevation and a range of grid lines or a wind zone. An inspection opened once on a phone keeps
+        working with no signal; answers and photos are sent when the connection returns.
+      </p>
+      <Notice tone="warning" title="Attachment, fire and moisture details hold people and the building up.">
+        <p>
+          A failed attachment item (girts, clips, fasteners) is a safety matter: stop work on that part of the
+          wall and tell the engineer of record before it is loaded or closed in.
+        </p>
+      </Notice>
+      <WaitingToSend inspectionId="" />
+      {list.isPending ? (
+        <Loading what="Loading the inspections" />
+      ) : list.isError ? (
+        <Notice tone="caution" title={errorMessage(list.error)} live />
+      ) : list.data.length === 0 ? (
+        <p className="text-ink-muted">No inspection yet.</p>
+      ) : (
+        <>
+          <section aria-labelledby="by-elevation" className="flex flex-col gap-4">
+            <h3 id="by-elevation" className="text-xl">
+              By elevation
+            </h3>
+            {byElevation(list.data).map((g) => (
+              <ElevationDrawing key={g.elevation} projectId={project.id} {...g} />
+            ))}
+          </section>
+          <section aria-labelledby="all-inspections" className="flex flex-col gap-2">
+            <h3 id="all-inspections" className="text-xl">
+              Every inspection
+            </h3>
+            <InspectionList projectId={project.id} inspections={list.data} />
+          </section>
+        </>
+      )}
+    </div>
+  );
+}

@@ -43,7 +43,7 @@ function diagonals(
 }
 
 /** Hatch of one material class inside the band (x, y, w, h). */
-function hatch(doc: jsPDF, cls: DrawClass, x: number, y: number, w: number, h: number): void {
+export function hatch(doc: jsPDF, cls: DrawClass, x: number, y: number, w: number, h: number): void {
   doc.setDrawColor(INK.ink);
   doc.setFillColor(INK.ink);
   doc.setLineWidth(0.08);

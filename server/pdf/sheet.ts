@@ -1,4 +1,5 @@
 import { jsPDF } from 'jspdf';
+import { drawComputedBridges } from './bridges';
 import { drawCheckList } from './checks';
 import { drawCautions, drawStampAndVerification } from './closing';
 import { registerFonts } from './fonts';
@@ -100,6 +101,7 @@ export function renderComplianceSheet(data: SheetData): Buffer {
   drawSite(w, data, fmt);
   w.heading('2', 'Section, to scale', 80);
   drawSectionSketch(w, data, fmt);
+  drawComputedBridges(w, data, fmt);
   drawResults(w, data, fmt);
   drawCheckList(w, data, fmt);
   drawCautions(w, data);

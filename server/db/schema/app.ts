@@ -459,6 +459,28 @@ export const sheetVerifications = pgTable(
 );
 
 /**
+ * A field report's verification code (the first 10 base32 characters of the SHA-256 of the inspection as
+ * printed and its photos' hashes), recorded the first time a report with that content is printed, with the
+ * project's firm as it was named then and what the report showed (`summary`: the inspection's number, title,
+ * scope, status and counts, shared/schemas/sheets.ts fieldReportVerificationSchema). /verify looks codes up
+ * here when no compliance sheet has them.
+ */
+export const fieldReportVerifications = pgTable('field_report_verifications', {
+  code: text('code').primaryKey(),
+  inspectionId: uuid('inspection_id')
+    .notNull()
+    .references(() => inspections.id, { onDelete: 'cascade' }),
+  hash: text('hash').notNull(),
+  issuerOrganisationId: uuid('issuer_organisation_id').references(() => organisations.id, {
+    onDelete: 'set null',
+  }),
+  issuerName: text('issuer_name').notNull(),
+  issuedBy: text('issued_by').references(() => user.id, { onDelete: 'set null' }),
+  summary: jsonb('summary').notNull(),
+  issuedAt: timestamp('issued_at', { withTimezone: true }).notNull().defaultNow(),
+});
+
+/**
  * One revision of a submittal. Revisions of one submittal share `lineageId` (the id of revision 1) and its
  * number; "revise and resubmit" closes a revision and opens `revision + 1` (`previousRevisionId`). A
  * decided revision never changes again. `version` counts edits (optimistic concurrency).

@@ -153,7 +153,9 @@ export function createAppRouter(queryClient: QueryClient) {
                         {
                           path: 'sweep',
                           loader: load('sweep'),
-                          ...page(() => import('./routes/AssemblySweepPage').then((m) => m.AssemblySweepPage)),
+                          ...page(() =>
+                            import('./routes/AssemblySweepPage').then((m) => m.AssemblySweepPage),
+                          ),
                         },
                         {
                           path: 'revisions/:revision',

@@ -283,7 +283,7 @@ describe('every page at 390 px wide', () => {
     await page.getByTestId('live-Reff').waitFor();
     await page.getByRole('link', { name: 'Checks', exact: true }).click();
     await page.waitForURL(/\/checks$/);
-    // The last assembly tab is active: its strip scrolls inside itself and shows it whole.
+    // A tab past the phone's edge is active: its strip scrolls inside itself and shows it whole.
     const strip = page.getByRole('navigation', { name: 'Assembly pages' });
     const fit = await strip.evaluate((nav) => {
       const box = nav.getBoundingClientRect();

@@ -55,3 +55,12 @@ export function problemText(
 
 /** The DOM id of the box (or block) that shows a path's problem. */
 export const fieldDomId = (path: string) => `f-${path.replace(/\./g, '-')}`;
+
+/** Moves to the box of a field path and focuses it; false when the page has no such box. */
+export function focusField(path: string): boolean {
+  const el = document.getElementById(fieldDomId(path));
+  if (!el) return false;
+  el.scrollIntoView({ block: 'center' });
+  el.focus?.();
+  return true;
+}

@@ -6,6 +6,9 @@ import type { UnitSystem } from '@shared/units';
 import { issueErrorMap, issuesByPath, issueWords, type ZodIssueLike } from '../../lib/issue-words';
 import { type Measure, measureUnit, toShown } from './units';
 
+/** The DOM id of the control (or the block) that shows a form path's error (one rule for every page). */
+export { fieldDomId } from '../../lib/field-problems';
+
 /**
  * Runs the shared engine in the browser on what the form holds right now. Either a result, or the reasons
  * it cannot be computed keyed by the form path (`thermal.layers.6.sections`) so each reason is shown next
@@ -73,9 +76,6 @@ export function toFormPath(serverPath: string): string {
   const p = serverPath.startsWith('input.') ? serverPath.slice('input.'.length) : serverPath;
   return /^(layers|bridges|heatFlow)(\.|$)/.test(p) ? `thermal.${p}` : p;
 }
-
-/** The DOM id of the control (or the block) that shows a form path's error. */
-export const fieldDomId = (path: string) => `f-${path.replace(/\./g, '-')}`;
 
 /**
  * A zod error map for `zodResolver(assemblyInputSchema, { error })`: the same plain words as the live

@@ -1,8 +1,8 @@
 import type { ThermalInput, ThermalResult } from '@shared/calc/thermal/schema';
+import { FieldLink } from '../../../components/ui/FieldLink';
 import { Notice } from '../../../components/ui/Notice';
 import { PageSection } from '../../../components/ui/PageSection';
 import { ResultSection } from '../../../components/ui/ResultSection';
-import { fieldDomId } from '../evaluate';
 import { Cautions } from './Cautions';
 import { MethodSection } from './MethodSection';
 import { ResultFigures } from './ResultFigures';
@@ -73,19 +73,7 @@ export function WaitingFor({
       <ul className="list-disc pl-5">
         {entries.map(([path, message]) => (
           <li key={path}>
-            <a
-              href={`#${fieldDomId(path)}`}
-              onClick={(e) => {
-                const el = document.getElementById(fieldDomId(path));
-                if (!el) return;
-                e.preventDefault();
-                el.scrollIntoView({ block: 'center' });
-                el.focus?.();
-              }}
-            >
-              {describePath(path, thermal)}
-            </a>
-            : {message}
+            <FieldLink path={path}>{describePath(path, thermal)}</FieldLink>: {message}
           </li>
         ))}
       </ul>

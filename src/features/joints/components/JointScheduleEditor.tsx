@@ -1,8 +1,9 @@
 import type { JointInput } from '@shared/calc/joints/schema';
 import { formatPageMeasure, type PageMeasure } from '@shared/format/page-measures';
 import { Button } from '../../../components/ui/Button';
+import { FieldLink } from '../../../components/ui/FieldLink';
 import { Notice } from '../../../components/ui/Notice';
-import { fieldDomId, problemText } from '../../../lib/field-problems';
+import { problemText } from '../../../lib/field-problems';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AirDesign, copyJoint, newJoint, removeAt, replaceAt } from '../draft';
 import { type JointsEvaluation, MAX_JOINTS, problemsOfJoint } from '../evaluate';
@@ -53,14 +54,6 @@ export function jointPathMeasure(rest: string): PageMeasure | undefined {
   )
     return 'joint';
   return undefined;
-}
-
-function focusField(path: string) {
-  const el = document.getElementById(fieldDomId(path));
-  if (!el) return false;
-  el.scrollIntoView({ block: 'center' });
-  el.focus?.();
-  return true;
 }
 
 interface JointScheduleEditorProps {
@@ -188,14 +181,9 @@ export function JointScheduleEditor({
                 <ul className="list-disc pl-5">
                   {problems.map(([path, p]) => (
                     <li key={path}>
-                      <a
-                        href={`#${fieldDomId(path)}`}
-                        onClick={(e) => {
-                          if (focusField(path)) e.preventDefault();
-                        }}
-                      >
+                      <FieldLink path={path}>
                         {describeJointPath(path.slice(`joints.${i}.`.length))}
-                      </a>
+                      </FieldLink>
                       : {problemText(p, jointPathMeasure(path.slice(`joints.${i}.`.length)), system)}
                     </li>
                   ))}

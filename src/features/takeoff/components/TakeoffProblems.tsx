@@ -1,6 +1,7 @@
 import type { TakeoffInput } from '@shared/calc/takeoff/schema';
+import { FieldLink } from '../../../components/ui/FieldLink';
 import { Notice } from '../../../components/ui/Notice';
-import { type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
+import { type FieldProblems, problemText } from '../../../lib/field-problems';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { describeTakeoffPath, takeoffPathMeasure } from '../describe';
 
@@ -12,19 +13,8 @@ export function TakeoffProblems({ problems, input }: { problems: FieldProblems; 
       <ul className="list-disc pl-5">
         {Object.entries(problems).map(([path, p]) => (
           <li key={path}>
-            <a
-              href={`#${fieldDomId(path)}`}
-              onClick={(e) => {
-                const el = document.getElementById(fieldDomId(path));
-                if (!el) return;
-                e.preventDefault();
-                el.scrollIntoView({ block: 'center' });
-                el.focus?.();
-              }}
-            >
-              {describeTakeoffPath(path, input)}
-            </a>
-            : {problemText(p, takeoffPathMeasure(path), system)}
+            <FieldLink path={path}>{describeTakeoffPath(path, input)}</FieldLink>:{' '}
+            {problemText(p, takeoffPathMeasure(path), system)}
           </li>
         ))}
       </ul>

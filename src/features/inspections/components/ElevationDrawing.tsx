@@ -33,7 +33,7 @@ export function ElevationDrawing({
     <figure className="flex flex-col gap-2" data-testid="elevation">
       <figcaption className="text-lg font-semibold">{elevation}</figcaption>
       <svg
-        viewBox={`0 0 ${width} ${height + 24}`}
+        viewBox={`0 0 ${width} ${height + 32}`}
         className="h-auto w-full max-w-2xl border border-ink bg-paper-raised"
         role="img"
         aria-label={`${elevation}: ${inspections.map((i) => `${areaText(i.scope.area)} ${LOOK[elevationState(i)].words}`).join('; ')}`}
@@ -59,7 +59,7 @@ export function ElevationDrawing({
                 x={x + w / 2}
                 y={height / 2 - 6}
                 textAnchor="middle"
-                fontSize={36}
+                fontSize={44}
                 fill="var(--color-ink)"
               >
                 {look.glyph}
@@ -68,16 +68,19 @@ export function ElevationDrawing({
                 x={x + w / 2}
                 y={height / 2 + 26}
                 textAnchor="middle"
-                fontSize={w < 150 ? 13 : 16}
+                fontSize={w < 150 ? 16 : 24}
                 fill="var(--color-ink)"
+                stroke="var(--color-paper-raised)"
+                strokeWidth={5}
+                paintOrder="stroke"
               >
                 {look.words}
               </text>
               <text
                 x={x + w / 2}
-                y={height + 18}
+                y={height + 24}
                 textAnchor="middle"
-                fontSize={w < 150 ? 13 : 16}
+                fontSize={w < 150 ? 16 : 24}
                 fill="var(--color-ink)"
               >
                 {areaText(i.scope.area)}

@@ -24,9 +24,24 @@ export interface DetailDrawing {
   yDown: boolean;
 }
 
+/** The hatch of a box: concrete as masonry; metal only when λ says so (a framed layer named "steel studs" is not). */
+function drawnClass(name: string, lambda: number): DrawClass {
+  if (/slab|concrete/i.test(name)) return 'masonry';
+  const cls = classifyNamed(name, lambda);
+  return cls === 'metal' && lambda < 10 ? classifyNamed('', lambda) : cls;
+}
+
 /** The section of a detail, to scale, in model metres. */
 export function detailDrawing(detail: BridgeDetailInput): DetailDrawing {
-  const model = detailModel(detail);
+  // A mesh given keeps a 3-D template from sizing its grid (the boxes do not depend on it).
+  const model = detailModel(
+    detail.template === 'clip' || detail.template === 'fastener'
+      ? ({
+          ...detail,
+          input: { ...detail.input, mesh: { ...detail.input.mesh, interfaceCell: 0.01 } },
+        } as BridgeDetailInput)
+      : detail,
+  );
   const three = model.dimension === '3d';
   const zs = model.boxes.flatMap((b) => [b.min[2] ?? 0, b.max[2] ?? 0]);
   const mid = three ? (Math.min(...zs) + Math.max(...zs)) / 2 : 0;
@@ -35,7 +50,7 @@ export function detailDrawing(detail: BridgeDetailInput): DetailDrawing {
     .map((b) => ({
       name: b.name,
       lambda: b.lambda,
-      cls: /slab|concrete/i.test(b.name) ? 'masonry' : classifyNamed(b.name, b.lambda),
+      cls: drawnClass(b.name, b.lambda),
       min: [b.min[0]!, b.min[1]!],
       max: [b.max[0]!, b.max[1]!],
     }));

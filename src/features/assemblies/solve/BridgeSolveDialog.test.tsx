@@ -51,6 +51,11 @@ describe('Solve dialog (bridge solver on the assembly layers)', () => {
     expect((screen.getByLabelText(/Girt spacing/) as HTMLInputElement).value).toBe('1200');
     expect((screen.getByLabelText(/Steel thickness/) as HTMLInputElement).value).toBe('1.5');
     expect(screen.getByText(/generic design values/)).toBeTruthy();
+    // The girt drawn to scale from the model the solver gets: steel solid, the wool hatched.
+    const drawing = screen.getByTestId('detail-section');
+    const metal = [...drawing.querySelectorAll('rect[fill="url(#dh-metal)"]')].map((r) => r.textContent);
+    expect(metal).toEqual(['girt, outer flange, λ 50', 'girt, web, λ 50', 'girt, inner flange, λ 50']);
+    expect(drawing.querySelector('rect[fill="url(#dh-batt)"]')).toBeTruthy();
 
     fireEvent.click(screen.getByRole('button', { name: 'Solve' }));
     expect(screen.getByRole('button', { name: 'Cancel' })).toBeTruthy();
@@ -135,7 +140,7 @@ describe('Solve dialog (bridge solver on the assembly layers)', () => {
     expect(screen.queryByTestId('crossed-depth')).toBeNull();
     fireEvent.click(screen.getByRole('button', { name: 'Solve' }));
     const use = await screen.findByRole('button', { name: 'Use this value' }, { timeout: 20_000 });
-    expect(screen.getByRole('img', { name: /Section through the slab edge/ })).toBeTruthy();
+    expect(screen.getByRole('img', { name: /Section through the slab edge: temperature/ })).toBeTruthy();
     fireEvent.click(use);
     const [psi] = onUse.mock.calls[0]!;
     // A concrete slab through the backup wall bridges the insulation's inside face: ψ > 0, finite.

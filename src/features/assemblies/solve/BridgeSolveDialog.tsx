@@ -37,6 +37,7 @@ import {
   solveModel,
   solvesFor,
 } from './bridge-solve';
+import { DetailSection } from './DetailSection';
 import type { Solved } from './run-bridge';
 import { type BridgeRunner, type RunningSolve, workerRunner } from './runners';
 import { TemperatureMap } from './TemperatureMap';
@@ -132,6 +133,14 @@ export function BridgeSolveDialog({
     () => (bridge.kind === 'fastener' ? annexFChi(bridge, layers) : null),
     [bridge, layers],
   );
+  /** The detail as drawn: what the solver gets (null while the inputs cannot make one). */
+  const drawn = useMemo(() => {
+    try {
+      return detailOf(inputs, layers);
+    } catch {
+      return null;
+    }
+  }, [inputs, layers]);
   const running = phase.at === 'solving' ? phase.run : null;
   useEffect(() => () => running?.cancel(), [running]);
 
@@ -223,6 +232,7 @@ export function BridgeSolveDialog({
           ) : null}
           <DetailFields inputs={inputs} wall={wall} indices={indices} onChange={edit} />
         </fieldset>
+        <DetailSection detail={drawn} label={words.map} />
         {phase.at === 'form' && phase.problem ? (
           <Notice tone="caution" title="Cannot solve this" live>
             {phase.problem}

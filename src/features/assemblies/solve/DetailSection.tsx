@@ -100,7 +100,7 @@ export function DetailSection({ detail, label }: { detail: BridgeDetailInput | n
             </rect>
           );
         })}
-        <g aria-hidden="true">
+        <g>
           <rect x={x0} y={y0 + h + pad} width={bar} height={u} fill="#1E1C19" />
           <text x={x0 + bar + u} y={y0 + h + pad + u} fontSize={3 * u} fill="#57514A">
             {formatMeasure(bar, 'spacing', system)}

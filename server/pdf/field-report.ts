@@ -37,6 +37,8 @@ export interface FieldReportData {
   /** SHA-256 (hex) of the canonical JSON of the inspection and its photos' hashes. */
   hash: string;
   code: string;
+  /** Where anyone can confirm the code (the public verification page). */
+  verifyUrl: string;
   /** The time of the latest change the report shows (its creation date, so the same content gives the same bytes). */
   asOf: string;
 }
@@ -246,6 +248,9 @@ function drawCautionsAndCode(w: SheetWriter, d: FieldReportData): void {
     `Derived from the SHA-256 hash of this report’s content (the inspection as of ${sheetDateTime(d.asOf)} and its photos): ${d.hash}`,
     { size: 7.2 },
   );
+  w.paragraph(`Confirm it at ${d.verifyUrl} — the page shows what this report stated and who issued it.`, {
+    size: 7.2,
+  });
 }
 
 function footers(w: SheetWriter, d: FieldReportData): void {

@@ -1,5 +1,5 @@
 import { apiErrorSchema } from '@shared/schemas/common';
-import { sheetQuerySchema, sheetVerificationSchema, verifyParamsSchema } from '@shared/schemas/sheets';
+import { sheetQuerySchema, verificationSchema, verifyParamsSchema } from '@shared/schemas/sheets';
 import { z } from 'zod';
 import { defineRoute } from '../http/route';
 import type { Services } from '../services';
@@ -57,12 +57,15 @@ export const sheetRoutes = [
     method: 'get',
     path: '/verify/:code',
     summary:
-      'Confirm a compliance sheet by its verification code (no sign-in): issuer, project, assembly, date, verdict',
+      'Confirm a compliance sheet or a field report by its verification code (no sign-in): issuer, project, assembly, date, verdict or inspection state',
     tag: 'Compliance sheets',
     access: { kind: 'public' },
     params: verifyParamsSchema,
     responses: {
-      200: { description: 'The sheet is genuine: what it states', schema: sheetVerificationSchema },
+      200: {
+        description: 'The sheet or report is genuine: what it states (`kind` says which)',
+        schema: verificationSchema,
+      },
       404: { description: 'No such sheet (unknown, mistyped or altered code)', schema: apiErrorSchema },
     },
     handler: ({ params, res, services }) => {

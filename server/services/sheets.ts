@@ -1,5 +1,10 @@
 import type { Verdict } from '@shared/checks/report';
-import type { SheetIssuer, SheetVerification } from '@shared/schemas/sheets';
+import {
+  type FieldReportVerification,
+  fieldReportVerificationSchema,
+  type SheetIssuer,
+  type Verification,
+} from '@shared/schemas/sheets';
 import type { SavedSweep } from '@shared/schemas/sweeps';
 import { normaliseVerificationCode, verificationCode, verificationUrl } from '@shared/sheets/verification';
 import type { UnitSystem } from '@shared/units';
@@ -8,6 +13,7 @@ import type { Config } from '../config';
 import type { Db } from '../db/client';
 import {
   checkRuns,
+  fieldReportVerifications,
   organisationMembers,
   organisations,
   projects,
@@ -26,6 +32,12 @@ const issuerOf = (r: { name: string; slug: string | null; verifiedAt: Date | nul
   name: r.name,
   handle: r.slug === null ? null : firmHandle(r.slug),
   verifiedAt: r.verifiedAt?.toISOString() ?? null,
+});
+
+/** The name and the e-mail's domain are enough to tell who it was; the whole address is not given out. */
+const accountOf = (a: { name: string; email: string }) => ({
+  name: a.name,
+  emailDomain: a.email.slice(a.email.lastIndexOf('@') + 1),
 });
 
 export const noSuchSheet = () =>
@@ -152,44 +164,82 @@ export function createSheetService(db: Db, config: Config, runs: ReturnType<type
       return { pdf, code, filename: `compliance-sheet-${slug || 'assembly'}-${code}.pdf` };
     },
 
-    /** Public: what a verification code confirms, or 404 "no such sheet". */
-    async verify(input: string): Promise<SheetVerification> {
+    /** Public: what a verification code confirms (a compliance sheet or a field report), or 404 "no such sheet". */
+    async verify(input: string): Promise<Verification> {
       const code = normaliseVerificationCode(input);
       if (!code) throw noSuchSheet();
-      const [r] = await db
-        .select({
-          v: sheetVerifications,
-          run: checkRuns,
-          projectNumber: projects.number,
-          slug: organisations.slug,
-          verifiedAt: organisations.verifiedAt,
-          ranBy: { name: user.name, email: user.email },
-        })
-        .from(sheetVerifications)
-        .innerJoin(checkRuns, eq(checkRuns.id, sheetVerifications.runId))
-        .innerJoin(projects, eq(projects.id, checkRuns.projectId))
-        .leftJoin(organisations, eq(organisations.id, sheetVerifications.issuerOrganisationId))
-        .leftJoin(user, eq(user.id, checkRuns.createdBy))
-        .where(eq(sheetVerifications.code, code));
-      // The code must still be the one derived from the stored hash (a run is immutable; this is a guard).
-      if (!r || verificationCode(r.run.hash) !== code) throw noSuchSheet();
-      const inputs = r.run.inputs as { project: { name: string } };
-      return {
-        code,
-        issuer: issuerOf({ name: r.v.issuerName, slug: r.slug, verifiedAt: r.verifiedAt }),
-        // The name and the e-mail's domain are enough to tell who ran it; the whole address is not given out.
-        ranBy: r.ranBy && {
-          name: r.ranBy.name,
-          emailDomain: r.ranBy.email.slice(r.ranBy.email.lastIndexOf('@') + 1),
-        },
-        project: { name: inputs.project.name, number: r.projectNumber },
-        assembly: { name: r.run.assemblyName, revision: r.run.assemblyRevision },
-        criteriaSet: { name: r.run.criteriaSetName, version: r.run.criteriaSetVersion },
-        runAt: r.run.createdAt.toISOString(),
-        verdict: r.run.verdict as Verdict,
-        engineVersion: r.run.engineVersion,
-        hash: r.run.hash,
-      };
+      return (await verifySheet(code)) ?? (await verifyFieldReport(code));
     },
   };
+
+  /** A compliance sheet's code: what its run states, or undefined when no sheet has the code. */
+  async function verifySheet(code: string): Promise<Verification | undefined> {
+    const [r] = await db
+      .select({
+        v: sheetVerifications,
+        run: checkRuns,
+        projectNumber: projects.number,
+        slug: organisations.slug,
+        verifiedAt: organisations.verifiedAt,
+        ranBy: { name: user.name, email: user.email },
+      })
+      .from(sheetVerifications)
+      .innerJoin(checkRuns, eq(checkRuns.id, sheetVerifications.runId))
+      .innerJoin(projects, eq(projects.id, checkRuns.projectId))
+      .leftJoin(organisations, eq(organisations.id, sheetVerifications.issuerOrganisationId))
+      .leftJoin(user, eq(user.id, checkRuns.createdBy))
+      .where(eq(sheetVerifications.code, code));
+    if (!r) return undefined;
+    // The code must still be the one derived from the stored hash (a run is immutable; this is a guard).
+    if (verificationCode(r.run.hash) !== code) throw noSuchSheet();
+    const inputs = r.run.inputs as { project: { name: string } };
+    return {
+      kind: 'sheet',
+      code,
+      issuer: issuerOf({ name: r.v.issuerName, slug: r.slug, verifiedAt: r.verifiedAt }),
+      ranBy: r.ranBy && accountOf(r.ranBy),
+      project: { name: inputs.project.name, number: r.projectNumber },
+      assembly: { name: r.run.assemblyName, revision: r.run.assemblyRevision },
+      criteriaSet: { name: r.run.criteriaSetName, version: r.run.criteriaSetVersion },
+      runAt: r.run.createdAt.toISOString(),
+      verdict: r.run.verdict as Verdict,
+      engineVersion: r.run.engineVersion,
+      hash: r.run.hash,
+    };
+  }
+
+  /** A field report's code: what the report showed when it was first printed, or 404. */
+  async function verifyFieldReport(code: string): Promise<FieldReportVerification> {
+    const [r] = await db
+      .select({
+        v: fieldReportVerifications,
+        slug: organisations.slug,
+        verifiedAt: organisations.verifiedAt,
+        issuedBy: { name: user.name, email: user.email },
+      })
+      .from(fieldReportVerifications)
+      .leftJoin(organisations, eq(organisations.id, fieldReportVerifications.issuerOrganisationId))
+      .leftJoin(user, eq(user.id, fieldReportVerifications.issuedBy))
+      .where(eq(fieldReportVerifications.code, code));
+    if (!r || verificationCode(r.v.hash) !== code) throw noSuchSheet();
+    const summary = r.v.summary as {
+      projectName: string;
+      projectNumber: string;
+      inspection: FieldReportVerification['inspection'];
+      assembly: FieldReportVerification['assembly'];
+      asOf: string;
+    };
+    return fieldReportVerificationSchema.parse({
+      kind: 'field report',
+      code,
+      issuer: issuerOf({ name: r.v.issuerName, slug: r.slug, verifiedAt: r.verifiedAt }),
+      issuedBy: r.issuedBy && accountOf(r.issuedBy),
+      project: { name: summary.projectName, number: summary.projectNumber },
+      inspection: summary.inspection,
+      assembly: summary.assembly,
+      asOf: summary.asOf,
+      issuedAt: r.v.issuedAt.toISOString(),
+      hash: r.v.hash,
+    });
+  }
 }

@@ -360,6 +360,29 @@ describe.each(testDatabases())('field inspections on %s', (kind) => {
         r.on('end', () => cb(null, Buffer.concat(chunks)));
       });
     expect(Buffer.compare(again.body as Buffer, pdf)).toBe(0);
+
+    // Anyone can confirm the code on the public verification page: what this report stated, and who issued it.
+    expect(text).toContain(`/verify/${code}`);
+    const verified = await t.anonymous().get(`/api/verify/${code}`);
+    expect(verified.status, verified.text).toBe(200);
+    expect(verified.body).toMatchObject({
+      kind: 'field report',
+      code,
+      project: { name: expect.any(String) },
+      inspection: { number: i.number, elevation: i.scope.elevation, status: 'in_progress' },
+      assembly: { revision: i.scope.revision },
+      issuedBy: { emailDomain: expect.any(String) },
+    });
+    expect(verified.body.inspection.counts).toMatchObject({ pass: 1, fail: 1, openDeficiencies: 1 });
+    expect(verified.body.hash).toMatch(/^[0-9a-f]{64}$/);
+    expect(verified.body.issuer.handle).toMatch(/^@/);
+    // One more answer is a new report with a new code; the first code still confirms the first report.
+    await answer('consultant', itemOf(i, 'clip_spacing').id, { version: 1, state: 'na' });
+    const later = await (await as('viewer')).get(`/api/inspections/${i.id}/report.pdf?units=SI`);
+    const laterCode = later.headers['x-verification-code'] as string;
+    expect(laterCode).not.toBe(code);
+    expect((await t.anonymous().get(`/api/verify/${laterCode}`)).body.inspection.counts.na).toBe(1);
+    expect((await t.anonymous().get(`/api/verify/${code}`)).body.inspection.counts.na).toBe(0);
   });
   it('adds the firm’s template items; a template used by an inspection is frozen and the next save makes version 2', async () => {
     const admin = await as('admin');

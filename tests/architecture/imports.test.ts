@@ -44,6 +44,8 @@ const FEATURE_USES: Record<string, string[]> = {
   // A sweep reads its code table's rows, and makes a chosen variant an assembly or a revision of this one (the
   // assemblies' create and save calls and their number boxes).
   'features/sweep': ['features/assemblies', 'features/criteria'],
+  // A field report's code is confirmed on the same public page as a sheet's, in the same issuer frame.
+  'features/inspections': ['features/sheets'],
 };
 
 const SHARED_ALLOWED = /^(zod|mathjs|convert-units|papaparse|@shared\/|@data\/reference\/|\.{1,2}\/)/;

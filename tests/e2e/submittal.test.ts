@@ -116,7 +116,7 @@ describe('submittals in the browser', () => {
     expect(await anon.getByTestId('verified').textContent()).toMatch(/Ridgeline Cladding Co\. \(demo\)/);
     await screenshot(anon, 'sheet-verification');
     await anon.goto(`${suite.baseUrl}/verify/AAAAAAAAAA`);
-    await anon.getByText('No such sheet.').waitFor();
+    await anon.getByText('No such sheet or report.').waitFor();
     await anon.close();
 
     // The architect, a named reviewer: nothing is preselected, and the form says so when nothing is chosen.

@@ -39,7 +39,7 @@ export function createInspectionService(
     ...createInspectionWorkflow(db, q, notify, sheets),
     uploadPhotos: photos.upload,
     photo: photos.file,
-    ...createFieldReports(db, storage, q),
+    ...createFieldReports(db, config, storage, q),
     ...createInspectionTemplates(db),
   };
 }

@@ -1,10 +1,11 @@
 import { createHash } from 'node:crypto';
 import { canonicalJson } from '@shared/checks/canonical';
-import { verificationCode } from '@shared/sheets/verification';
+import { verificationCode, verificationUrl } from '@shared/sheets/verification';
 import type { UnitSystem } from '@shared/units/registry';
 import { asc, eq } from 'drizzle-orm';
+import type { Config } from '../../config';
 import type { Db } from '../../db/client';
-import { inspectionPhotos, projects, user } from '../../db/schema';
+import { fieldReportVerifications, inspectionPhotos, organisations, projects, user } from '../../db/schema';
 import { type ReportPhoto, renderFieldReport } from '../../pdf/field-report';
 import type { ObjectStore } from '../../storage/object-store';
 import type { InspectionQueries } from './queries';
@@ -23,14 +24,24 @@ async function readAll(body: AsyncIterable<unknown>): Promise<Buffer> {
 /**
  * The field report of an inspection as PDF bytes (server/pdf/field-report.ts). Its code is the first 10 base32
  * characters of the SHA-256 of the canonical JSON of the inspection as read and its photos' hashes, so the
- * same content gives the same code and the same bytes.
+ * same content gives the same code and the same bytes. The first report printed with a code records it, with
+ * the project's firm and what the report showed, for the public /verify page.
  */
-export function createFieldReports(db: Db, storage: ObjectStore, q: InspectionQueries) {
+export function createFieldReports(db: Db, config: Config, storage: ObjectStore, q: InspectionQueries) {
   return {
     async report(id: string, userId: string, units?: UnitSystem) {
       const inspection = await q.get(id);
       const [[project], [me], rows] = await Promise.all([
-        db.select({ name: projects.name }).from(projects).where(eq(projects.id, inspection.projectId)),
+        db
+          .select({
+            name: projects.name,
+            number: projects.number,
+            organisationId: projects.organisationId,
+            firm: organisations.name,
+          })
+          .from(projects)
+          .innerJoin(organisations, eq(organisations.id, projects.organisationId))
+          .where(eq(projects.id, inspection.projectId)),
         db.select({ unitSystem: user.unitSystem }).from(user).where(eq(user.id, userId)),
         db
           .select()
@@ -67,6 +78,28 @@ export function createFieldReports(db: Db, storage: ObjectStore, q: InspectionQu
       ].filter((t): t is string => t !== null);
       const asOf = times.sort().at(-1)!; // ISO times sort as text
       const code = verificationCode(hash);
+      if (project) {
+        const { number, title, scope, status, counts, assemblyName } = inspection;
+        const summary = {
+          projectName: project.name,
+          projectNumber: project.number,
+          inspection: { number, title, elevation: scope.elevation, area: scope.area, status, counts },
+          assembly: { name: assemblyName, revision: scope.revision },
+          asOf,
+        };
+        await db
+          .insert(fieldReportVerifications)
+          .values({
+            code,
+            inspectionId: id,
+            hash,
+            issuerOrganisationId: project.organisationId,
+            issuerName: project.firm,
+            issuedBy: userId,
+            summary,
+          })
+          .onConflictDoNothing();
+      }
       const pdf = renderFieldReport({
         inspection,
         projectName: project?.name ?? '',
@@ -74,6 +107,7 @@ export function createFieldReports(db: Db, storage: ObjectStore, q: InspectionQu
         photos,
         hash,
         code,
+        verifyUrl: verificationUrl(config.baseUrl, code),
         asOf,
       });
       return { pdf, code, filename: `inspection-${inspection.number}-${code}.pdf` };

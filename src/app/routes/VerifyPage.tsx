@@ -6,6 +6,7 @@ import { Field } from '../../components/ui/Field';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { TextInput } from '../../components/ui/TextInput';
+import { FieldReportVerificationDetails } from '../../features/inspections/components/FieldReportVerificationDetails';
 import { useVerification } from '../../features/sheets/api/get-verification';
 import { SheetVerificationDetails } from '../../features/sheets/components/SheetVerificationDetails';
 import { errorMessage, isApiRequestError } from '../../lib/api';
@@ -29,7 +30,7 @@ function CodeForm({ initial }: { initial: string }) {
     <form onSubmit={submit} noValidate className="flex flex-wrap items-end gap-3">
       <Field
         label="Verification code"
-        hint="As printed on the sheet."
+        hint="As printed on the sheet or report."
         error={error}
         className="min-w-56 flex-1"
       >
@@ -43,8 +44,8 @@ function CodeForm({ initial }: { initial: string }) {
 }
 
 /**
- * Public: confirms a compliance sheet by its code — who issued it (name, unique handle, verified or not), for
- * what, when, with what verdict.
+ * Public: confirms a compliance sheet or a field report by its code — who issued it (name, unique handle,
+ * verified or not), for what, when, with what verdict or inspection state.
  */
 export function VerifyPage() {
   const { code = '' } = useParams();
@@ -53,23 +54,25 @@ export function VerifyPage() {
 
   return (
     <AuthPageFrame
-      title="Check a compliance sheet"
-      intro="Every Skinwright compliance sheet carries a verification code. The details below are what the sheet with this code states, and who issued it; compare them with the paper or file you were given."
+      title="Check a sheet or field report"
+      intro="Every Skinwright compliance sheet and field report carries a verification code. The details below are what the document with this code states, and who issued it; compare them with the paper or file you were given."
     >
       <div className="flex flex-col gap-6">
         {!canonical || (result.isError && isApiRequestError(result.error) && result.error.status === 404) ? (
-          <Notice tone="caution" title="No such sheet." live>
+          <Notice tone="caution" title="No such sheet or report." live>
             <p>
-              No sheet was issued with the code <span className="num font-semibold">{code}</span>. It may be
-              mistyped, or the sheet may have been altered.
+              Nothing was issued with the code <span className="num font-semibold">{code}</span>. It may be
+              mistyped, or the document may have been altered.
             </p>
           </Notice>
         ) : result.isPending ? (
           <Loading what="Checking the code" />
         ) : result.isError ? (
           <Notice tone="caution" title={errorMessage(result.error)} live />
-        ) : (
+        ) : result.data.kind === 'sheet' ? (
           <SheetVerificationDetails sheet={result.data} />
+        ) : (
+          <FieldReportVerificationDetails report={result.data} />
         )}
         <CodeForm initial={canonical ? formatVerificationCode(canonical) : ''} />
       </div>

@@ -1,11 +1,11 @@
-import { sheetVerificationSchema } from '@shared/schemas/sheets';
+import { verificationSchema } from '@shared/schemas/sheets';
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiRequest, isApiRequestError } from '../../../lib/api';
 import { verificationKeys } from '../../../lib/query-keys';
 
-/** `GET /api/verify/:code` (public) → what the sheet states; 404 = no such sheet; 429 = too many checks. */
+/** `GET /api/verify/:code` (public) → what the sheet or field report states; 404 = no such code; 429 = too many checks. */
 export const getVerification = (code: string, signal?: AbortSignal) =>
-  apiRequest(`/api/verify/${encodeURIComponent(code)}`, sheetVerificationSchema, { signal });
+  apiRequest(`/api/verify/${encodeURIComponent(code)}`, verificationSchema, { signal });
 
 export const verificationQueryOptions = (code: string) =>
   queryOptions({

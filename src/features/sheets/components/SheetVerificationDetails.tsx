@@ -1,18 +1,30 @@
-import type { SheetVerification } from '@shared/schemas/sheets';
+import type { SheetIssuer, SheetVerification } from '@shared/schemas/sheets';
 import { formatVerificationCode, ISSUER_NOT_VERIFIED, ISSUER_VERIFIED } from '@shared/sheets/verification';
+import type { ReactNode } from 'react';
 import { Notice } from '../../../components/ui/Notice';
 import { VERDICT_TEXT } from '../../../lib/check-format';
 import { formatDate, formatDateTime } from '../../../lib/format';
 
 /**
- * What a verification code confirms. A firm's name proves nothing (anyone may make a firm of any name), so
- * the issuer is shown with its unique handle and whether a site administrator has verified it; a sheet
- * from an unverified firm is not presented as vouched for.
+ * What a verification code confirms, framed by who issued it. A firm's name proves nothing (anyone may make a
+ * firm of any name), so the issuer is shown with its unique handle and whether a site administrator has
+ * verified it; a sheet or report from an unverified firm is not presented as vouched for. `children` are the
+ * rows of what the code confirms (a `<dt>`/`<dd>` pair each), `footer` how to compare it with the paper.
  */
-export function SheetVerificationDetails({ sheet }: { sheet: SheetVerification }) {
-  const { issuer, ranBy } = sheet;
+export function VerifiedBy({
+  what,
+  code,
+  issuer,
+  children,
+  footer,
+}: {
+  what: string;
+  code: string;
+  issuer: SheetIssuer;
+  children: ReactNode;
+  footer: ReactNode;
+}) {
   const verified = issuer.verifiedAt !== null;
-  const verdict = VERDICT_TEXT[sheet.verdict];
   return (
     <section
       aria-labelledby="genuine"
@@ -34,16 +46,16 @@ export function SheetVerificationDetails({ sheet }: { sheet: SheetVerification }
             title={`${ISSUER_NOT_VERIFIED[0]!.toUpperCase()}${ISSUER_NOT_VERIFIED.slice(1)}.`}
           >
             <p>
-              A sheet with this code exists, but anyone can make a firm of any name. Nobody has confirmed that{' '}
-              <span className="num">{issuer.handle ?? 'this firm'}</span> is “{issuer.name}”. Ask the firm for
-              its handle through a channel you already trust before relying on this sheet.
+              A {what} with this code exists, but anyone can make a firm of any name. Nobody has confirmed
+              that <span className="num">{issuer.handle ?? 'this firm'}</span> is “{issuer.name}”. Ask the
+              firm for its handle through a channel you already trust before relying on this {what}.
             </p>
           </Notice>
         </>
       )}
       <dl className="grid gap-x-6 gap-y-2 text-sm sm:grid-cols-[10rem_1fr]">
         <dt className="font-semibold">Code</dt>
-        <dd className="num">{formatVerificationCode(sheet.code)}</dd>
+        <dd className="num">{formatVerificationCode(code)}</dd>
         <dt className="font-semibold">Issued by</dt>
         <dd data-testid="issuer">
           {issuer.name}
@@ -62,48 +74,59 @@ export function SheetVerificationDetails({ sheet }: { sheet: SheetVerification }
             </span>
           )}
         </dd>
-        <dt className="font-semibold">Checks run by</dt>
-        <dd>
-          {ranBy ? (
-            <>
-              {ranBy.name}, e-mail at <span className="break-words">{ranBy.emailDomain}</span>
-            </>
-          ) : (
-            'an account since removed'
-          )}
-        </dd>
-        <dt className="font-semibold">Project</dt>
-        <dd>
-          {sheet.project.name}
-          {sheet.project.number ? ` · No. ${sheet.project.number}` : ''}
-        </dd>
-        <dt className="font-semibold">Assembly</dt>
-        <dd>
-          {sheet.assembly.name}, revision <span className="num">{sheet.assembly.revision}</span>
-        </dd>
-        <dt className="font-semibold">Code table</dt>
-        <dd>
-          {sheet.criteriaSet.name}, version <span className="num">{sheet.criteriaSet.version}</span>
-        </dd>
-        <dt className="font-semibold">Date of the run</dt>
-        <dd>{formatDateTime(sheet.runAt)}</dd>
-        <dt className="font-semibold">Verdict</dt>
-        <dd className={`font-semibold ${verdict.cls.split(' ')[0]}`}>
-          <span aria-hidden="true">{verdict.glyph} </span>
-          <span className="uppercase tracking-wide">{verdict.word}</span>
-          <span className="font-normal text-ink"> — {verdict.sentence}</span>
-        </dd>
-        <dt className="font-semibold">Run hash (SHA-256)</dt>
-        <dd className="num break-all text-xs" data-testid="run-hash">
-          {sheet.hash}
-        </dd>
+        {children}
       </dl>
-      <p className="text-xs text-ink-muted">
-        Compare the handle and the hash with the sheet you were given: a copy may carry the same firm and
-        project names. This confirms that a sheet with this content was issued; it does not approve the
-        design. The licensed professional of record, the local code and the authority having jurisdiction
-        govern.
-      </p>
+      <p className="text-xs text-ink-muted">{footer}</p>
     </section>
+  );
+}
+
+/** What a compliance sheet's code confirms: the check run it prints. */
+export function SheetVerificationDetails({ sheet }: { sheet: SheetVerification }) {
+  const { ranBy } = sheet;
+  const verdict = VERDICT_TEXT[sheet.verdict];
+  return (
+    <VerifiedBy
+      what="sheet"
+      code={sheet.code}
+      issuer={sheet.issuer}
+      footer="Compare the handle and the hash with the sheet you were given: a copy may carry the same firm and project names. This confirms that a sheet with this content was issued; it does not approve the design. The licensed professional of record, the local code and the authority having jurisdiction govern."
+    >
+      <dt className="font-semibold">Checks run by</dt>
+      <dd>
+        {ranBy ? (
+          <>
+            {ranBy.name}, e-mail at <span className="break-words">{ranBy.emailDomain}</span>
+          </>
+        ) : (
+          'an account since removed'
+        )}
+      </dd>
+      <dt className="font-semibold">Project</dt>
+      <dd>
+        {sheet.project.name}
+        {sheet.project.number ? ` · No. ${sheet.project.number}` : ''}
+      </dd>
+      <dt className="font-semibold">Assembly</dt>
+      <dd>
+        {sheet.assembly.name}, revision <span className="num">{sheet.assembly.revision}</span>
+      </dd>
+      <dt className="font-semibold">Code table</dt>
+      <dd>
+        {sheet.criteriaSet.name}, version <span className="num">{sheet.criteriaSet.version}</span>
+      </dd>
+      <dt className="font-semibold">Date of the run</dt>
+      <dd>{formatDateTime(sheet.runAt)}</dd>
+      <dt className="font-semibold">Verdict</dt>
+      <dd className={`font-semibold ${verdict.cls.split(' ')[0]}`}>
+        <span aria-hidden="true">{verdict.glyph} </span>
+        <span className="uppercase tracking-wide">{verdict.word}</span>
+        <span className="font-normal text-ink"> — {verdict.sentence}</span>
+      </dd>
+      <dt className="font-semibold">Run hash (SHA-256)</dt>
+      <dd className="num break-all text-xs" data-testid="run-hash">
+        {sheet.hash}
+      </dd>
+    </VerifiedBy>
   );
 }

@@ -163,7 +163,7 @@ export function ItemCard({
           <TextInput
             value={location}
             disabled={readOnly}
-            placeholder="grid C/4, level 2, panel P-12"
+            placeholder="e.g. grid C/4, level 2"
             onChange={(e) => setLocation(e.target.value)}
           />
         </label>

@@ -20,33 +20,52 @@ interface TableProps {
 function useWiderThanBox() {
   const box = useRef<HTMLDivElement>(null);
   const [wider, setWider] = useState(false);
+  const [caption, setCaption] = useState('');
   useLayoutEffect(() => {
     const el = box.current;
     if (!el || typeof ResizeObserver === 'undefined') return;
-    const measure = () => setWider(el.scrollWidth > el.clientWidth + 1);
+    const measure = () => {
+      setWider(el.scrollWidth > el.clientWidth + 1);
+      setCaption(el.querySelector('caption')?.textContent ?? '');
+    };
     const observer = new ResizeObserver(measure);
     observer.observe(el);
     if (el.firstElementChild) observer.observe(el.firstElementChild);
     return () => observer.disconnect();
   }, []);
-  return { box, wider };
+  return { box, wider, caption };
 }
 
 /**
  * The box a table scrolls sideways in, so that a wide table never widens the page (a phone is 390 px). While
- * the table is wider than the box, the box is a named region reachable with the keyboard (arrow keys scroll
- * it), its right edge is ruled where the table is cut, and a line under it says it scrolls.
+ * the table is wider than the box, the box is a region named by the table's caption (`labelledBy`, else its
+ * text) reachable with the keyboard (arrow keys scroll it), its right edge is ruled where the table is cut, and
+ * a line under it says it scrolls.
  */
-export function TableScroller({ labelledBy, children }: { labelledBy?: string; children: ReactNode }) {
-  const { box, wider } = useWiderThanBox();
+export function TableScroller({
+  labelledBy,
+  className = '',
+  children,
+}: {
+  labelledBy?: string;
+  className?: string;
+  children: ReactNode;
+}) {
+  const { box, wider, caption } = useWiderThanBox();
   const hint = useId();
   // `relative`: text for screen readers only (absolutely placed) stays inside the scroller, not past the page.
   return (
     <div
       ref={box}
-      className={`relative overflow-x-auto ${wider ? 'border-r border-rule print:border-0' : ''}`}
+      className={`relative overflow-x-auto ${wider ? 'border-r border-rule print:border-0' : ''} ${className}`}
       {...(wider
-        ? { role: 'region', tabIndex: 0, 'aria-labelledby': labelledBy, 'aria-describedby': hint }
+        ? {
+            role: 'region',
+            tabIndex: 0,
+            'aria-labelledby': labelledBy,
+            'aria-label': labelledBy ? undefined : caption,
+            'aria-describedby': hint,
+          }
         : {})}
     >
       {children}

@@ -12,6 +12,7 @@ import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
+import { TableScroller } from '../../../components/ui/Table';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
 import { formatQuantity, parseInput, type Quantity, quantityInput, unitOf } from '../../../lib/quantities';
@@ -215,7 +216,7 @@ export function ClimateForm({
           Mean air temperature and relative humidity of each month. To fill a column, paste the 12 values from
           a spreadsheet into its January box (two columns side by side fill both).
         </p>
-        <div className="mt-3 overflow-x-auto">
+        <TableScroller className="mt-3">
           <table className="border-collapse text-left text-sm">
             <caption className="sr-only">Monthly mean exterior temperature and relative humidity</caption>
             <thead>
@@ -285,7 +286,7 @@ export function ClimateForm({
               })}
             </tbody>
           </table>
-        </div>
+        </TableScroller>
         {pasted ? (
           <p role="status" className="mt-2 text-sm">
             {pasted}

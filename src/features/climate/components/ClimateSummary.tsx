@@ -2,6 +2,7 @@ import { saturationPressureIso13788 } from '@shared/calc/moisture/psychrometrics
 import type { Project } from '@shared/schemas/project';
 import type { ReactNode } from 'react';
 import { Notice } from '../../../components/ui/Notice';
+import { TableScroller } from '../../../components/ui/Table';
 import { formatQuantity, unitOf } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { MONTH_NAMES } from '../climate-form';
@@ -54,7 +55,7 @@ export function ClimateSummary({ project, actions }: { project: Project; actions
         </Notice>
       ) : null}
       {c ? (
-        <div className="overflow-x-auto">
+        <TableScroller>
           <table className="w-full border-collapse text-sm">
             <caption className="label-caps pb-2 text-left">Monthly means outside</caption>
             <thead>
@@ -122,7 +123,7 @@ export function ClimateSummary({ project, actions }: { project: Project; actions
               </tr>
             </tbody>
           </table>
-        </div>
+        </TableScroller>
       ) : null}
       {actions ? <div className="flex flex-wrap items-center gap-3">{actions}</div> : null}
     </div>

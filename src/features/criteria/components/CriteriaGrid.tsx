@@ -14,6 +14,7 @@ import type { UnitSystem } from '@shared/units';
 import { type CellContext, createColumnHelper, tableFeatures, useTable } from '@tanstack/react-table';
 import { createContext, useContext } from 'react';
 import { Button } from '../../../components/ui/Button';
+import { TableScroller } from '../../../components/ui/Table';
 import type { DraftErrors, DraftField, DraftRow } from '../draft';
 
 /*
@@ -256,7 +257,7 @@ export function CriteriaGrid({
   };
   return (
     <GridContext.Provider value={state}>
-      <div className="relative overflow-x-auto">
+      <TableScroller>
         <table className="w-full border-collapse text-left text-sm">
           <caption className="label-caps pb-2 text-left">{caption}</caption>
           <thead>
@@ -303,7 +304,7 @@ export function CriteriaGrid({
             ) : null}
           </tbody>
         </table>
-      </div>
+      </TableScroller>
     </GridContext.Provider>
   );
 }

@@ -5,6 +5,7 @@ import type { Layer } from '@shared/calc/thermal/schema';
 import { firstKeptLayer } from '@shared/calc/thermal/thermal';
 import { Link } from 'react-router';
 import { Select } from '../../../components/ui/Select';
+import { TableScroller } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
 import type { Problem } from '../evaluate';
 import { formatPerm, formatSd, formatThickness, PERM_IN_NG } from '../units';
@@ -80,7 +81,7 @@ export function VapourTable({
   const first = firstKeptLayer(layers);
 
   return (
-    <div className="overflow-x-auto">
+    <TableScroller>
       <table className="w-full border-collapse text-left text-sm">
         <caption className="label-caps pb-2 text-left">
           Layers outside → inside, with their vapour data
@@ -269,7 +270,7 @@ export function VapourTable({
         0 °C = {PERM_IN_NG['0C']} ng/(Pa·s·m²)). Layers, thicknesses and λ are edited on the{' '}
         <Link to={builderHref}>build-up page</Link>.
       </p>
-    </div>
+    </TableScroller>
   );
 }
 

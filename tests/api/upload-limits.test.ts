@@ -7,6 +7,7 @@ import type { Response } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { CONCURRENT_UPLOADS, uploadsInProgress } from '../../server/http/upload';
 import { createTestApp, DEMO_PASSWORD, demoEmail, type TestApp, testDatabases } from '../setup/app';
+import { inspectionParams } from '../setup/inspections';
 
 /*
  * What keeps uploads from exhausting the server: files stream to object storage (never whole in memory),
@@ -183,6 +184,40 @@ describe.each(testDatabases())('upload limits on %s', (kind) => {
       expect(racing.map((r) => r.status).sort()).toEqual([201, 413]);
       expect(await keys(prefix)).toHaveLength(2);
       expect(await items(id, 'admin')).toHaveLength(2);
+    } finally {
+      t.config.storage.projectQuotaBytes = saved;
+    }
+  });
+
+  it('counts inspection photos and submittal files against one project quota', async () => {
+    const { inspectionItemId } = await inspectionParams(t, projectId);
+    const id = await newSubmittal();
+    const saved = t.config.storage.projectQuotaBytes;
+    const photoBytes = (n: number) => {
+      const b = pdfOf(n);
+      PNG.copy(b); // a PNG by its first bytes
+      return b;
+    };
+    try {
+      // What the project holds now, as the refusal words it (to 0.1 MB).
+      t.config.storage.projectQuotaBytes = 0;
+      const full = await upload(id, [[pdfOf(1024), 'full.pdf']]);
+      expect(full.status).toBe(413);
+      const inUse = Number(/full \(([\d.]+) of/.exec(full.body.error.message)![1]) * MiB;
+      t.config.storage.projectQuotaBytes = Math.ceil(inUse + 3 * MiB); // room for one 2 MiB file, not two
+      const photo = await (await as('subcontractor'))
+        .post(`/api/inspection-items/${inspectionItemId}/photos`)
+        .attach('files', photoBytes(2 * MiB), { filename: 'wall.png', contentType: 'image/png' });
+      expect(photo.status, photo.text).toBe(201);
+      // The photo took the room: a 2 MiB submittal file no longer fits, and the refusal says so.
+      const over = await upload(id, [[pdfOf(2 * MiB), 'after-photo.pdf']]);
+      expect(over.status).toBe(413);
+      expect(over.body.error.code).toBe('storage_quota_exceeded');
+      // And the other way round: the file room left is too small for another 2 MiB photo.
+      const overPhoto = await (await as('subcontractor'))
+        .post(`/api/inspection-items/${inspectionItemId}/photos`)
+        .attach('files', photoBytes(2 * MiB), { filename: 'wall2.png', contentType: 'image/png' });
+      expect(overPhoto.status).toBe(413);
     } finally {
       t.config.storage.projectQuotaBytes = saved;
     }

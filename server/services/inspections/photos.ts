@@ -1,15 +1,14 @@
 import type { Photo } from '@shared/inspections/schema';
-import { and, eq, isNotNull, sql } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import type { Config } from '../../config';
 import type { Db } from '../../db/client';
-import { inspectionPhotos, inspections, projects, submittalItems, submittals } from '../../db/schema';
+import { inspectionPhotos, projects } from '../../db/schema';
 import { fileIntake, IMAGE_TYPES, type ReceiveFiles, type StoredUpload } from '../../storage/files';
 import type { ObjectStore } from '../../storage/object-store';
 import { recordAudit } from '../audit';
-import { DomainError, notFound } from '../errors';
+import { notFound } from '../errors';
+import { projectStoredBytes, quotaFull } from '../project-storage';
 import { type Actor, type InspectionQueries, photoDto } from './queries';
-
-const MB = 1024 * 1024;
 
 /**
  * Photos of items: PNG or JPEG by their bytes, at most 15 MB each (the client shrinks them first), streamed to
@@ -18,46 +17,17 @@ const MB = 1024 * 1024;
  * after sign-off, and the correction needs one.
  */
 export function createInspectionPhotos(db: Db, config: Config, storage: ObjectStore, q: InspectionQueries) {
-  /** Bytes the project stores: its submittal files (each object once) and its inspection photos. */
-  async function storedBytes(tx: Db, projectId: string): Promise<number> {
-    const objects = tx
-      .selectDistinct({ key: submittalItems.storageKey, size: submittalItems.size })
-      .from(submittalItems)
-      .innerJoin(submittals, eq(submittals.id, submittalItems.submittalId))
-      .where(and(eq(submittals.projectId, projectId), isNotNull(submittalItems.storageKey)))
-      .as('objects');
-    const [[files], [photos]] = await Promise.all([
-      tx.select({ bytes: sql<string>`coalesce(sum(${objects.size}), 0)` }).from(objects),
-      tx
-        .select({ bytes: sql<string>`coalesce(sum(${inspectionPhotos.size}), 0)` })
-        .from(inspectionPhotos)
-        .innerJoin(inspections, eq(inspections.id, inspectionPhotos.inspectionId))
-        .where(eq(inspections.projectId, projectId)),
-    ]);
-    return Number(files?.bytes ?? 0) + Number(photos?.bytes ?? 0);
-  }
-
-  const quotaFull = (used: number) => {
-    const quota = config.storage.projectQuotaBytes;
-    return new DomainError(
-      'too_large',
-      'storage_quota_exceeded',
-      `this project’s file storage is full (${(used / MB).toFixed(1)} of ${(quota / MB).toFixed(0)} MB used) and the photo does not fit; nothing was stored`,
-      { files: 'project storage quota reached' },
-    );
-  };
-
   return {
     async upload(itemId: string, actor: Actor, receive: ReceiveFiles) {
       const item = await q.item(itemId);
       const r = await q.row(item.inspectionId);
       const quota = config.storage.projectQuotaBytes;
-      const used = await storedBytes(db, r.projectId);
-      if (used >= quota) throw quotaFull(used);
+      const used = await projectStoredBytes(db, r.projectId);
+      if (used >= quota) throw quotaFull(used, quota, 'the photo');
       const intake = fileIntake(storage, {
         keyPrefix: `projects/${r.projectId}/inspections/`,
         room: quota - used,
-        full: () => quotaFull(used),
+        full: () => quotaFull(used, quota, 'the photo'),
         allowed: IMAGE_TYPES,
       });
       const files = await receive<StoredUpload>(intake);
@@ -70,8 +40,9 @@ export function createInspectionPhotos(db: Db, config: Config, storage: ObjectSt
             .from(projects)
             .where(eq(projects.id, r.projectId))
             .for('update');
-          const now = await storedBytes(tx, r.projectId);
-          if (now + files.reduce((sum, f) => sum + f.size, 0) > quota) throw quotaFull(now);
+          const now = await projectStoredBytes(tx, r.projectId);
+          if (now + files.reduce((sum, f) => sum + f.size, 0) > quota)
+            throw quotaFull(now, quota, 'the photo');
           const rows = await tx
             .insert(inspectionPhotos)
             .values(

@@ -1,7 +1,7 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { Readable } from 'node:stream';
 import type { Submittal, SubmittalItem } from '@shared/schemas/submittals';
-import { and, count, eq, isNotNull, max, sql } from 'drizzle-orm';
+import { and, count, eq, max, sql } from 'drizzle-orm';
 import type { Config } from '../../config';
 import type { Db } from '../../db/client';
 import { checkRuns, projects, submittalItems, submittals } from '../../db/schema';
@@ -10,10 +10,9 @@ import { fileIntake, type StoredUpload } from '../../storage/files';
 import type { ObjectStore } from '../../storage/object-store';
 import { type AuditRecord, recordAudit } from '../audit';
 import { conflict, DomainError, notFound } from '../errors';
+import { projectStoredBytes, quotaFull } from '../project-storage';
 import type { createSheetService } from '../sheets';
 import { type Actor, type ItemRow, MAX_ITEMS, type Row, type SubmittalQueries, wrongStatus } from './queries';
-
-const MB = 1024 * 1024;
 
 const tooManyItems = (has: number, adding: number) =>
   conflict(
@@ -80,28 +79,6 @@ export function createSubmittalItemSteps(
     return last === null ? 0 : last + 1;
   }
 
-  /** Bytes of the project's stored submittal files, each object once (revisions share their objects). */
-  async function storedBytes(tx: Db, projectId: string): Promise<number> {
-    const objects = tx
-      .selectDistinct({ key: submittalItems.storageKey, size: submittalItems.size })
-      .from(submittalItems)
-      .innerJoin(submittals, eq(submittals.id, submittalItems.submittalId))
-      .where(and(eq(submittals.projectId, projectId), isNotNull(submittalItems.storageKey)))
-      .as('objects');
-    const [r] = await tx.select({ bytes: sql<string>`coalesce(sum(${objects.size}), 0)` }).from(objects);
-    return Number(r?.bytes ?? 0);
-  }
-
-  const quotaFull = (used: number) => {
-    const quota = config.storage.projectQuotaBytes;
-    return new DomainError(
-      'too_large',
-      'storage_quota_exceeded',
-      `this project’s file storage is full (${(used / MB).toFixed(1)} of ${(quota / MB).toFixed(0)} MB used) and the upload does not fit; remove files that are no longer needed, or ask the site administrator to raise the quota. Nothing was stored`,
-      { files: 'project storage quota reached' },
-    );
-  };
-
   return {
     /** Attaches the compliance sheet of a stored check run of the same project (and issues its code). */
     async attachSheet(id: string, actor: Actor, checkRunId: string): Promise<Submittal> {
@@ -151,16 +128,16 @@ export function createSubmittalItemSteps(
       const r = await q.writable(id, ['draft']);
       const [[{ n } = { n: 0 }], used] = await Promise.all([
         db.select({ n: count() }).from(submittalItems).where(eq(submittalItems.submittalId, id)),
-        storedBytes(db, r.projectId),
+        projectStoredBytes(db, r.projectId),
       ]);
       const has = Number(n);
       if (has >= MAX_ITEMS) throw tooManyItems(has, 1);
       const quota = config.storage.projectQuotaBytes;
-      if (used >= quota) throw quotaFull(used);
+      if (used >= quota) throw quotaFull(used, quota, 'the upload');
       const intake = fileIntake(storage, {
         keyPrefix: `projects/${r.projectId}/submittals/`,
         room: quota - used,
-        full: () => quotaFull(used),
+        full: () => quotaFull(used, quota, 'the upload'),
       });
       let arrived = 0;
       const files = await receive<StoredUpload>({
@@ -182,8 +159,9 @@ export function createSubmittalItemSteps(
             .from(projects)
             .where(eq(projects.id, r.projectId))
             .for('update');
-          const now = await storedBytes(tx, r.projectId);
-          if (now + files.reduce((sum, f) => sum + f.size, 0) > quota) throw quotaFull(now);
+          const now = await projectStoredBytes(tx, r.projectId);
+          if (now + files.reduce((sum, f) => sum + f.size, 0) > quota)
+            throw quotaFull(now, quota, 'the upload');
           const inserted = await tx
             .insert(submittalItems)
             .values(
@@ -233,8 +211,8 @@ export function createSubmittalItemSteps(
     ): Promise<Submittal> {
       const r = await q.writable(id, ['draft']);
       const quota = config.storage.projectQuotaBytes;
-      const used = await storedBytes(db, r.projectId);
-      if (used + file.bytes.length > quota) throw quotaFull(used);
+      const used = await projectStoredBytes(db, r.projectId);
+      if (used + file.bytes.length > quota) throw quotaFull(used, quota, 'the upload');
       const key = `projects/${r.projectId}/submittals/${randomUUID()}`;
       await storage.put(key, Readable.from([file.bytes]), file.contentType);
       const sha256 = createHash('sha256').update(file.bytes).digest('hex');
@@ -246,8 +224,8 @@ export function createSubmittalItemSteps(
             .from(projects)
             .where(eq(projects.id, r.projectId))
             .for('update');
-          const now = await storedBytes(tx, r.projectId);
-          if (now + file.bytes.length > quota) throw quotaFull(now);
+          const now = await projectStoredBytes(tx, r.projectId);
+          if (now + file.bytes.length > quota) throw quotaFull(now, quota, 'the upload');
           const [item] = await tx
             .insert(submittalItems)
             .values({

@@ -1,0 +1,38 @@
+import { and, eq, isNotNull, sql } from 'drizzle-orm';
+import type { Db } from '../db/client';
+import { inspectionPhotos, inspections, submittalItems, submittals } from '../db/schema';
+import { DomainError } from './errors';
+
+const MB = 1024 * 1024;
+
+/**
+ * Bytes a project stores against its quota (`config.storage.projectQuotaBytes`): its submittal files (each
+ * object once — revisions share their objects) and its inspection photos. Submittal uploads and photo uploads
+ * both check this one figure.
+ */
+export async function projectStoredBytes(tx: Db, projectId: string): Promise<number> {
+  const objects = tx
+    .selectDistinct({ key: submittalItems.storageKey, size: submittalItems.size })
+    .from(submittalItems)
+    .innerJoin(submittals, eq(submittals.id, submittalItems.submittalId))
+    .where(and(eq(submittals.projectId, projectId), isNotNull(submittalItems.storageKey)))
+    .as('objects');
+  const [[files], [photos]] = await Promise.all([
+    tx.select({ bytes: sql<string>`coalesce(sum(${objects.size}), 0)` }).from(objects),
+    tx
+      .select({ bytes: sql<string>`coalesce(sum(${inspectionPhotos.size}), 0)` })
+      .from(inspectionPhotos)
+      .innerJoin(inspections, eq(inspections.id, inspectionPhotos.inspectionId))
+      .where(eq(inspections.projectId, projectId)),
+  ]);
+  return Number(files?.bytes ?? 0) + Number(photos?.bytes ?? 0);
+}
+
+/** 413 `storage_quota_exceeded`: the project's storage is full and `what` ("the upload", "the photo") does not fit. */
+export const quotaFull = (used: number, quota: number, what: string) =>
+  new DomainError(
+    'too_large',
+    'storage_quota_exceeded',
+    `this project’s file storage is full (${(used / MB).toFixed(1)} of ${(quota / MB).toFixed(0)} MB used) and ${what} does not fit; remove files that are no longer needed, or ask the site administrator to raise the quota. Nothing was stored`,
+    { files: 'project storage quota reached' },
+  );

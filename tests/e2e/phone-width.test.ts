@@ -285,15 +285,19 @@ describe('every page at 390 px wide', () => {
     await page.waitForURL(/\/checks$/);
     // A tab past the phone's edge is active: its strip scrolls inside itself and shows it whole.
     const strip = page.getByRole('navigation', { name: 'Assembly pages' });
-    const fit = await strip.evaluate((nav) => {
-      const box = nav.getBoundingClientRect();
-      const tab = nav.querySelector('[aria-current="page"]')!.getBoundingClientRect();
-      return {
-        scrolls: nav.scrollWidth > nav.clientWidth,
-        shown: tab.left >= box.left && tab.right <= box.right,
-      };
-    });
-    expect(fit).toEqual({ scrolls: true, shown: true });
+    const fit = () =>
+      strip.evaluate((nav) => {
+        const box = nav.getBoundingClientRect();
+        const active = nav.querySelector('[aria-current="page"]')!;
+        const tab = active.getBoundingClientRect();
+        return {
+          active: active.textContent,
+          scrolls: nav.scrollWidth > nav.clientWidth,
+          shown: tab.left >= box.left && tab.right <= box.right,
+        };
+      });
+    // The address changes a moment before the page is drawn.
+    await expect.poll(fit).toEqual({ active: 'Checks', scrolls: true, shown: true });
 
     // An edit on the build-up page: the bar is the live figure, More and Save on one line.
     await page.getByRole('link', { name: 'Build-up & R-value' }).click();

@@ -69,6 +69,8 @@ describe('assembly builder in the browser', () => {
     await dialog.getByRole('button', { name: 'Solve', exact: true }).click();
     await dialog.getByTestId('temperature-map').waitFor({ timeout: 30_000 });
     expect(await dialog.getByTestId('coldest-point').count()).toBe(1);
+    expect(await dialog.getByTestId('isotherms').locator('path').count()).toBe(9);
+    expect(await dialog.getByTestId('detail-section').isVisible()).toBe(true);
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
     // The modal sits in the top layer, over the viewport: shot as seen, not as a full page.
     await page.screenshot({ path: `${ARTIFACTS}/assembly-solve-girt-390.png` });
@@ -82,4 +84,37 @@ describe('assembly builder in the browser', () => {
     ).toBe(1);
     expect(problems).toEqual([]);
   });
+
+  it('Solve χ of the demo clip (3-D): map and drawing, saved to the firm library, value applied (1280 px)', async () => {
+    const { page, problems } = await suite.openPage({ viewport: { width: 1280, height: 1000 } });
+    await signIn(page, suite.baseUrl, 'architect@skinwright.demo');
+    await openDemoAssembly(page);
+    await page.getByTestId('live-Reff').waitFor();
+    const clip = page.getByRole('listitem', { name: /Thermally broken clips/ });
+    const chi = clip.getByRole('textbox', { name: /^χ per clip/ });
+    const before = await chi.inputValue();
+    await clip.getByRole('button', { name: /^Solve χ/ }).click();
+    const dialog = page.getByRole('dialog', { name: /Solve χ/ });
+    await dialog.getByTestId('detail-section').waitFor({ timeout: 15_000 });
+    await dialog.getByRole('button', { name: 'Solve', exact: true }).click();
+    await dialog.getByTestId('temperature-map').waitFor({ timeout: 90_000 });
+    expect(await dialog.getByTestId('coldest-point').count()).toBe(1);
+    expect(await dialog.getByTestId('surface-frsi').textContent()).toMatch(/^0\.\d{3} /);
+    // The architect is an editor of the demo firm: the value goes to its library with its detail.
+    await dialog.getByLabel('Name in the library').fill('Demo clip, computed');
+    await dialog.getByRole('button', { name: /^Save to .* library$/ }).click();
+    await dialog.getByText(/^✓ Saved to .* library$/).waitFor({ timeout: 15_000 });
+    await page.screenshot({ path: `${ARTIFACTS}/assembly-solve-clip-1280.png` });
+    await page.setViewportSize({ width: 390, height: 900 });
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await page.screenshot({ path: `${ARTIFACTS}/assembly-solve-clip-390.png` });
+    await dialog.getByRole('button', { name: 'Use this value' }).click();
+    await expect.poll(() => dialog.isVisible()).toBe(false);
+    await expect.poll(() => chi.inputValue()).not.toBe(before);
+    // The row names the source, and the entry just saved is the library value it is taken from.
+    const source = clip.locator('p').filter({ hasText: /computed by Skinwright .*, mesh [\d,]+ cells/ });
+    expect(await source.isVisible()).toBe(true);
+    expect(await clip.getByRole('option', { name: /Demo clip, computed/, selected: true }).count()).toBe(1);
+    expect(problems).toEqual([]);
+  }, 180_000);
 });

@@ -208,7 +208,9 @@ export function createAppRouter(queryClient: QueryClient) {
                     {
                       path: 'inspections/:inspectionId/close',
                       loader: load('inspection'),
-                      ...page(() => import('./routes/CloseInspectionPage').then((m) => m.CloseInspectionPage)),
+                      ...page(() =>
+                        import('./routes/CloseInspectionPage').then((m) => m.CloseInspectionPage),
+                      ),
                     },
                     {
                       path: 'inspections/:inspectionId/deficiencies/:deficiencyId',

@@ -2,6 +2,7 @@ import {
   type Deficiency,
   type DeficiencyTransition,
   deficiencySchema,
+  type deficiencyUpdateSchema,
   type Inspection,
   type InspectionCreate,
   inspectionCloseResultSchema,
@@ -9,7 +10,8 @@ import {
   photoUploadResultSchema,
 } from '@shared/inspections/schema';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api';
+import type { z } from 'zod';
+import { apiRequest, currentOnConflict } from '../../../lib/api';
 import { auditKeys, inspectionKeys } from '../../../lib/query-keys';
 import { uploadMultipart } from '../../../lib/upload';
 import { inspectionPaths } from './paths';
@@ -64,6 +66,24 @@ export function useDeficiencyStep(inspectionId: string, deficiencyId: string) {
       });
     },
     onSuccess: put,
+  });
+}
+
+/** On 409 `version_conflict` the server sends the deficiency as it is now; null for any other error. */
+export const conflictingDeficiency = (error: unknown): Deficiency | null =>
+  currentOnConflict(error, deficiencySchema);
+
+/** Owner, due date, description (an inspector); a stale save puts theirs in the cache and fails. */
+export function useUpdateDeficiency(inspectionId: string, deficiencyId: string) {
+  const put = usePutDeficiency(inspectionId);
+  return useMutation({
+    mutationFn: (body: z.input<typeof deficiencyUpdateSchema>) =>
+      apiRequest(inspectionPaths.deficiencyDetails(deficiencyId), deficiencySchema, { method: 'PUT', body }),
+    onSuccess: put,
+    onError: (e) => {
+      const current = conflictingDeficiency(e);
+      if (current) put(current);
+    },
   });
 }
 

@@ -5,6 +5,7 @@ export const inspectionPaths = {
   one: (inspectionId: string) => `/api/inspections/${e(inspectionId)}`,
   item: (itemId: string) => `/api/inspection-items/${e(itemId)}`,
   photos: (itemId: string) => `/api/inspection-items/${e(itemId)}/photos`,
+  deficiencyDetails: (deficiencyId: string) => `/api/deficiencies/${e(deficiencyId)}`,
   deficiency: (deficiencyId: string, step: string) => `/api/deficiencies/${e(deficiencyId)}/${step}`,
   close: (inspectionId: string) => `/api/inspections/${e(inspectionId)}/close`,
   report: (inspectionId: string) => `/api/inspections/${e(inspectionId)}/report.pdf`,

@@ -6,7 +6,7 @@ import { errorMessage } from '../../../lib/api';
 import { useWaitingCount } from '../../../lib/offline/queue';
 import { inspectionKeys } from '../../../lib/query-keys';
 import { useCloseInspection } from '../api/mutations';
-import { DeficiencyStateMark } from './StateMark';
+import { DeficiencyStateMark, DueMark } from './StateMark';
 
 /**
  * Closing: every item needs a state first (the items not yet seen are listed); the deficiencies still open are
@@ -61,10 +61,10 @@ export function CloseInspection({ inspection, base }: { inspection: Inspection; 
             {open.map((d) => (
               <li key={d.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
                 <Link to={`${base}/deficiencies/${d.id}`}>{`D-${d.number} · ${d.itemLabel}`}</Link>
-                <span className="flex gap-3 text-sm">
+                <span className="flex flex-wrap items-center gap-3 text-sm">
                   <DeficiencyStateMark state={d.state} />
-                  {d.ownerName ? <span>{d.ownerName}</span> : null}
-                  {d.dueDate ? <span>{`due ${d.dueDate}`}</span> : null}
+                  <span className="[overflow-wrap:anywhere]">{d.ownerName ?? 'no owner yet'}</span>
+                  <DueMark deficiency={d} />
                 </span>
               </li>
             ))}

@@ -12,7 +12,8 @@ import { TextArea } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
 import { useDeficiencyStep } from '../api/mutations';
 import { shrinkPhoto } from '../photo';
-import { DeficiencyStateMark } from './StateMark';
+import { DeficiencyDetailsForm } from './DeficiencyDetailsForm';
+import { DeficiencyStateMark, DueMark } from './StateMark';
 
 const STEP_WORDS: Record<DeficiencyTransition, string> = {
   correct: 'Mark corrected',
@@ -63,9 +64,13 @@ export function DeficiencyView({
         <dt className="font-semibold">What is wrong</dt>
         <dd className="min-w-0 [overflow-wrap:anywhere]">{d.description || '—'}</dd>
         <dt className="font-semibold">Owner</dt>
-        <dd>{d.ownerName ?? '—'}</dd>
+        <dd className="min-w-0 [overflow-wrap:anywhere]" data-testid="deficiency-owner">
+          {d.ownerName ?? 'nobody yet'}
+        </dd>
         <dt className="font-semibold">Due</dt>
-        <dd className="num">{d.dueDate ?? '—'}</dd>
+        <dd>
+          <DueMark deficiency={d} />
+        </dd>
         {d.note ? (
           <>
             <dt className="font-semibold">Latest note</dt>
@@ -83,6 +88,10 @@ export function DeficiencyView({
           />
           <figcaption className="text-sm text-ink-muted">Photo of the correction</figcaption>
         </figure>
+      ) : null}
+
+      {!readOnly && can(role, 'deficiency.review') ? (
+        <DeficiencyDetailsForm projectId={inspection.projectId} inspectionId={inspection.id} deficiency={d} />
       ) : null}
 
       {readOnly || steps.length === 0 ? null : (

@@ -1,6 +1,6 @@
 import type { ProjectRole } from '@shared/auth/permissions';
 import { can } from '@shared/auth/permissions';
-import { type Inspection, isDeficiencyOpen } from '@shared/inspections/schema';
+import type { Inspection } from '@shared/inspections/schema';
 import { Link, useSearchParams } from 'react-router';
 import { buttonClass } from '../../../components/ui/Button';
 import { useAnswerItem } from '../api/answer-item';
@@ -8,7 +8,7 @@ import { inspectionPaths } from '../api/paths';
 import { usePendingAnswers, usePendingPhotos } from '../api/pending';
 import { scopeText } from '../scope';
 import { ItemCard } from './ItemCard';
-import { DeficiencyStateMark } from './StateMark';
+import { DeficiencyStateMark, DueMark } from './StateMark';
 import { WaitingToSend } from './WaitingToSend';
 
 /**
@@ -147,7 +147,8 @@ export function InspectionView({
                 </Link>
                 <span className="flex flex-wrap items-center gap-3 text-sm">
                   <DeficiencyStateMark state={d.state} />
-                  {isDeficiencyOpen(d.state) && d.dueDate ? <span>{`due ${d.dueDate}`}</span> : null}
+                  <span className="[overflow-wrap:anywhere]">{d.ownerName ?? 'no owner yet'}</span>
+                  <DueMark deficiency={d} />
                 </span>
               </li>
             ))}

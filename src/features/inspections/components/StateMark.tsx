@@ -1,9 +1,11 @@
 import {
   DEFICIENCY_STATE_TEXT,
+  type Deficiency,
   type DeficiencyState,
   ITEM_STATE_TEXT,
   type ItemState,
 } from '@shared/inspections/schema';
+import { isOverdue, localToday } from '../overdue';
 
 const ITEM_TONE: Record<ItemState, string> = {
   unseen: 'text-ink-muted',
@@ -31,6 +33,27 @@ export function DeficiencyStateMark({ state }: { state: DeficiencyState }) {
     <span className={`inline-flex items-center gap-1 font-semibold ${tone}`} data-state={state}>
       <span aria-hidden="true">{t.glyph}</span>
       {t.label}
+    </span>
+  );
+}
+
+/** A deficiency's due date, and "overdue" in a glyph and words when it is past and not yet accepted. */
+export function DueMark({
+  deficiency: d,
+  today = localToday(),
+}: {
+  deficiency: Pick<Deficiency, 'state' | 'dueDate'>;
+  today?: string;
+}) {
+  if (!d.dueDate) return <span className="text-ink-muted">no due date</span>;
+  return (
+    <span className="inline-flex flex-wrap items-center gap-2" data-testid="deficiency-due">
+      <span className="num">{`due ${d.dueDate}`}</span>
+      {isOverdue(d, today) ? (
+        <span className="inline-flex items-center gap-1 font-semibold text-caution" data-overdue="true">
+          <span aria-hidden="true">⚠</span>overdue
+        </span>
+      ) : null}
     </span>
   );
 }

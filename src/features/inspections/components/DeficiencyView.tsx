@@ -69,7 +69,7 @@ export function DeficiencyView({
         </dd>
         <dt className="font-semibold">Due</dt>
         <dd>
-          <DueMark deficiency={d} />
+          <DueMark deficiency={d} word={false} />
         </dd>
         {d.note ? (
           <>

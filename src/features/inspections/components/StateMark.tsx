@@ -41,14 +41,17 @@ export function DeficiencyStateMark({ state }: { state: DeficiencyState }) {
 export function DueMark({
   deficiency: d,
   today = localToday(),
+  word = true,
 }: {
   deficiency: Pick<Deficiency, 'state' | 'dueDate'>;
   today?: string;
+  /** "due …" in a list; the date alone beside a "Due" label. */
+  word?: boolean;
 }) {
   if (!d.dueDate) return <span className="text-ink-muted">no due date</span>;
   return (
     <span className="inline-flex flex-wrap items-center gap-2" data-testid="deficiency-due">
-      <span className="num">{`due ${d.dueDate}`}</span>
+      <span className="num">{word ? `due ${d.dueDate}` : d.dueDate}</span>
       {isOverdue(d, today) ? (
         <span className="inline-flex items-center gap-1 font-semibold text-caution" data-overdue="true">
           <span aria-hidden="true">⚠</span>overdue

@@ -320,8 +320,10 @@ export const templateItemSchema = z.object({
 });
 export type TemplateItem = z.infer<typeof templateItemSchema>;
 
+/** The most items a firm's checklist template holds. */
+export const TEMPLATE_MAX_ITEMS = 100;
 export const inspectionTemplateInputSchema = z.object({
-  items: z.array(templateItemSchema).max(100),
+  items: z.array(templateItemSchema).max(TEMPLATE_MAX_ITEMS),
 });
 
 /** One version of a firm's checklist template; a version used by an inspection is frozen (edits make the next). */

@@ -69,6 +69,7 @@ export const libraryKeys = {
   materials: (orgId: string) => [...libraryKeys.all, 'materials', orgId] as const,
   bridgeValues: (orgId: string) => [...libraryKeys.all, 'bridge-values', orgId] as const,
   attachmentProducts: (orgId: string) => [...libraryKeys.all, 'attachment-products', orgId] as const,
+  inspectionTemplate: (orgId: string) => [...libraryKeys.all, 'inspection-template', orgId] as const,
 };
 
 export const criteriaKeys = {

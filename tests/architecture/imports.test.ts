@@ -33,8 +33,8 @@ const clientImportsOf = (file: string) =>
  * changed without reading the others.
  */
 const FEATURE_USES: Record<string, string[]> = {
-  // A submittal lists check runs and links their compliance sheets.
-  'features/submittals': ['features/checks', 'features/sheets'],
+  // A submittal lists check runs and links their compliance sheets, and lists inspections to add a field report.
+  'features/submittals': ['features/checks', 'features/sheets', 'features/inspections'],
   // Each stored run on the checks page opens and downloads its compliance sheet; with no code table yet, the
   // page starts one (the code-table create call and row kinds) in a firm the person may write for (their firms).
   'features/checks': ['features/sheets', 'features/criteria', 'features/me'],

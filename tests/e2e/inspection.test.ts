@@ -189,4 +189,71 @@ describe('field inspection on a phone', () => {
     await crew.close();
     await inspector.close();
   });
+
+  /**
+   * The firm's checklist template, edited in the library by a firm editor (the architect) on a desk, read by a
+   * firm reader; and the demo inspection's field report added by the subcontractor to a draft submittal on a
+   * phone, as a PDF file item.
+   */
+  it('the firm checklist template is edited and read; a field report joins a draft submittal', async () => {
+    const problems: string[] = [];
+    const desk = await suite.browser.newContext({ viewport: { width: 1280, height: 900 } });
+    const architect = await desk.newPage();
+    architect.on('pageerror', (e) => problems.push(e.message));
+    await signIn(architect, suite.baseUrl, 'architect@skinwright.demo');
+    await architect.goto(`${suite.baseUrl}/library`);
+    const checklist = architect.getByRole('form', { name: 'Firm checklist items' });
+    await checklist.getByRole('button', { name: 'Add an item' }).click();
+    await checklist.getByRole('button', { name: 'Save the template' }).click();
+    await checklist.getByText('Name the item.').waitFor();
+    await checklist.getByRole('textbox', { name: /^Item 1/ }).fill('Offcuts and swarf cleared (invented)');
+    await checklist.getByRole('button', { name: 'Save the template' }).click();
+    await checklist.getByText(/Saved as version 1\./).waitFor();
+    await screenshot(architect, 'library-checklist-desk');
+    await architect.setViewportSize(PHONE);
+    expect(await fitsWidth(architect)).toBe(true);
+    await checklist.scrollIntoViewIfNeeded();
+    await screenshot(architect, 'library-checklist-phone');
+
+    // A firm reader sees the items, with no way to change them.
+    const reader = await suite.browser.newContext({ viewport: PHONE });
+    const viewer = await reader.newPage();
+    await signIn(viewer, suite.baseUrl, 'viewer@skinwright.demo');
+    await viewer.goto(`${suite.baseUrl}/library`);
+    await viewer.getByText('Offcuts and swarf cleared (invented)').waitFor();
+    expect(await viewer.getByRole('button', { name: 'Save the template' }).count()).toBe(0);
+
+    // The subcontractor adds the demo inspection's field report to a new draft submittal.
+    const crew = await suite.browser.newContext({ viewport: PHONE });
+    const sub = await crew.newPage();
+    sub.on('pageerror', (e) => problems.push(e.message));
+    await signIn(sub, suite.baseUrl, 'subcontractor@skinwright.demo');
+    const projectId = (
+      (await (await sub.request.get(`${suite.baseUrl}/api/projects`)).json()).projects[0] as {
+        id: string;
+      }
+    ).id;
+    const created = await sub.request.post(`${suite.baseUrl}/api/projects/${projectId}/submittals`, {
+      data: { title: 'Field report (invented)', specSection: '07 42 13', specTitle: 'Metal Wall Panels' },
+    });
+    expect(created.status()).toBe(201);
+    const submittalId = ((await created.json()) as { id: string }).id;
+    await sub.goto(`${suite.baseUrl}/projects/${projectId}/submittals/${submittalId}`);
+    const report = sub.getByRole('combobox', { name: /Field report of an inspection/ });
+    await report.selectOption({ index: 1 });
+    await sub.getByRole('button', { name: 'Add the field report' }).click();
+    await sub
+      .getByText(/inspection-\d+-[A-Z2-7]{10}\.pdf/)
+      .first()
+      .waitFor({ timeout: 30_000 });
+    expect(await fitsWidth(sub)).toBe(true);
+    await screenshot(sub, 'submittal-phone-field-report');
+    const stored = await (await sub.request.get(`${suite.baseUrl}/api/submittals/${submittalId}`)).json();
+    expect(stored.items.map((i: { kind: string }) => i.kind)).toEqual(['file']);
+
+    expect(problems).toEqual([]);
+    await crew.close();
+    await reader.close();
+    await desk.close();
+  });
 });

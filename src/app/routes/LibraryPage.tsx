@@ -7,9 +7,11 @@ import { useAttachmentProducts } from '../../features/library/api/attachment-pro
 import { useBridgeValues } from '../../features/library/api/get-bridge-values';
 import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
 import { useReferenceMaterials } from '../../features/library/api/get-reference-materials';
+import { useInspectionTemplate } from '../../features/library/api/inspection-template';
 import { AddBridgeValueForm } from '../../features/library/components/AddBridgeValueForm';
 import { AddFirmMaterialForm } from '../../features/library/components/AddFirmMaterialForm';
 import { AttachmentProductsTable } from '../../features/library/components/AttachmentProductsTable';
+import { InspectionTemplateEditor } from '../../features/library/components/InspectionTemplateEditor';
 import {
   BridgeValuesTable,
   FirmMaterialsTable,
@@ -29,6 +31,7 @@ export function LibraryPage() {
   const materials = useFirmMaterials(org?.id);
   const bridgeValues = useBridgeValues(org?.id);
   const products = useAttachmentProducts(org?.id);
+  const checklist = useInspectionTemplate(org?.id);
   // What the firm role allows (the server enforces the same): readers read, editors add, administrators delete.
   const isAdmin = canInFirm(org?.role, 'firm.admin');
   const mayWrite = canInFirm(org?.role, 'firm.write');
@@ -117,6 +120,31 @@ export function LibraryPage() {
               <FirmMaterialsTable orgId={org!.id} materials={materials.data} isAdmin={isAdmin} />
             )}
             {org && mayWrite ? <AddFirmMaterialForm orgId={org.id} /> : null}
+          </section>
+
+          <section aria-labelledby="firm-checklist-heading" className="flex flex-col gap-4">
+            <div className="border-b border-ink pb-1">
+              <h2 id="firm-checklist-heading" className="text-2xl">
+                Inspection checklist — {org?.name}
+              </h2>
+              <p className="text-sm text-ink-muted">
+                The firm’s own items, added after the generated ones to every new inspection of its projects:
+                each is looked at on the wall and passed, failed or marked not applicable. Versioned like the
+                code tables: an inspection keeps the version it was made with.
+              </p>
+            </div>
+            {checklist.isPending ? (
+              <Loading what="Loading the firm's inspection checklist" />
+            ) : checklist.isError ? (
+              <Notice tone="caution" title={errorMessage(checklist.error)} />
+            ) : (
+              <InspectionTemplateEditor
+                key={org!.id}
+                orgId={org!.id}
+                template={checklist.data}
+                mayWrite={mayWrite}
+              />
+            )}
           </section>
         </>
       )}

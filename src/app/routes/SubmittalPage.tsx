@@ -11,6 +11,7 @@ import { useMembers } from '../../features/members/api/get-members';
 import { useProject } from '../../features/projects/api/get-project';
 import { useSubmittal } from '../../features/submittals/api/get-submittal';
 import { conflictingSubmittal, useUpdateSubmittal } from '../../features/submittals/api/mutations';
+import { AttachFieldReport } from '../../features/submittals/components/AttachFieldReport';
 import { AttachSheet } from '../../features/submittals/components/AttachSheet';
 import { CommentForm, CommentList } from '../../features/submittals/components/Comments';
 import { ItemList } from '../../features/submittals/components/ItemList';
@@ -178,6 +179,7 @@ export function SubmittalPage() {
               submittalId={s.id}
               attached={s.items.flatMap((i) => (i.kind === 'sheet' ? [i.sheet.checkRunId] : []))}
             />
+            <AttachFieldReport projectId={project.id} submittalId={s.id} />
             <UploadFiles submittalId={s.id} />
           </div>
         ) : null}

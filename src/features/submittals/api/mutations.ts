@@ -62,6 +62,7 @@ type Step =
   | ({ kind: 'decision' } & SubmittalDecisionInput)
   | { kind: 'comment'; body: string; itemId: string | null }
   | { kind: 'sheet'; checkRunId: string }
+  | { kind: 'report'; inspectionId: string }
   | { kind: 'remove'; itemId: string };
 
 /** Every workflow step of one revision. */
@@ -80,6 +81,8 @@ export function useSubmittalStep(id: string) {
           return apiRequest(`${base(id)}/comments`, submittalSchema, { method: 'POST', body });
         case 'sheet':
           return apiRequest(`${base(id)}/sheets`, submittalSchema, { method: 'POST', body });
+        case 'report':
+          return apiRequest(`${base(id)}/inspection-reports`, submittalSchema, { method: 'POST', body });
         case 'remove':
           return apiRequest(
             `${base(id)}/items/${encodeURIComponent((body as { itemId: string }).itemId)}`,

@@ -98,6 +98,7 @@ describe('a body nested too deeply', () => {
     `takes ${MAX_JSON_DEPTH} levels, refuses ${MAX_JSON_DEPTH + 1}, and names a NUL or lone surrogate beside deep nesting (%s)`,
     async (_path, type) => {
       const thermal = '/api/v1/calc/thermal';
+      const traced = `${thermal}?trace=true`;
       const post = async (body: string | Buffer) => {
         const res = await send(server.base, 'POST', thermal, body, type);
         return { status: res.status, error: JSON.parse(res.text).error };
@@ -127,16 +128,17 @@ describe('a body nested too deeply', () => {
         'b.0': 'text must not contain a lone UTF-16 surrogate (half of a character)',
       });
       // Only an escape brings either: a raw NUL is not JSON, an encoded lone surrogate (ED A0 80) is decoded
-      // as replacement characters, and an escaped backslash before "u0000" is ordinary text.
+      // as replacement characters, and an escaped backslash before "u0000" is ordinary text (the layer's name
+      // comes back in the trace's labels).
       const wall = (name: Buffer) => {
         const [before, after] = JSON.stringify(metalPanelWall()).split('Steel face sheet');
         return Buffer.concat([Buffer.from(before!), name, Buffer.from(after!)]);
       };
       expect((await post(wall(Buffer.from([0x61, 0x00])))).error.code).toBe('invalid_json');
-      const decoded = await send(server.base, 'POST', thermal, wall(Buffer.from([0xed, 0xa0, 0x80])), type);
+      const decoded = await send(server.base, 'POST', traced, wall(Buffer.from([0xed, 0xa0, 0x80])), type);
       expect(decoded.status).toBe(200);
       expect(decoded.text).toContain('\ufffd');
-      const backslash = await send(server.base, 'POST', thermal, wall(Buffer.from('a\\\\u0000')), type);
+      const backslash = await send(server.base, 'POST', traced, wall(Buffer.from('a\\\\u0000')), type);
       expect(backslash.status).toBe(200);
       expect(backslash.text).toContain('a\\\\u0000');
     },

@@ -45,7 +45,8 @@ const FEATURE_USES: Record<string, string[]> = {
   // assemblies' create and save calls and their number boxes).
   'features/sweep': ['features/assemblies', 'features/criteria'],
   // A field report's code is confirmed on the same public page as a sheet's, in the same issuer frame.
-  'features/inspections': ['features/sheets'],
+  // A deficiency's owner is picked from the project's members.
+  'features/inspections': ['features/sheets', 'features/members'],
 };
 
 const SHARED_ALLOWED = /^(zod|mathjs|convert-units|papaparse|@shared\/|@data\/reference\/|\.{1,2}\/)/;

@@ -20,9 +20,14 @@ export function drawCautions(w: SheetWriter, data: SheetData): void {
     ...SHEET_CAUTIONS,
     ...data.run.outputs.cautions.filter((c) => !own.has(c) && !c.includes('never a substitute')),
   ];
-  const unique = [...new Set(items)];
+  cautionList(w, [...new Set(items)]);
+  w.y += 2;
+}
+
+/** Cautions as a list, each behind a small caution-coloured square (the sheet's and the field report's). */
+export function cautionList(w: SheetWriter, items: readonly string[]): void {
   const { doc } = w;
-  for (const item of unique) {
+  for (const item of items) {
     const lines = w.wrap(item, w.width - 8, 'sans', 7.8);
     const h = lines.length * w.lineHeight(7.8) + 1.2;
     w.ensure(h);
@@ -33,7 +38,6 @@ export function drawCautions(w: SheetWriter, data: SheetData): void {
     });
     w.y += h;
   }
-  w.y += 2;
 }
 
 /** A blank box for the professional's review stamp, beside the verification code. */

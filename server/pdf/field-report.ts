@@ -10,6 +10,7 @@ import { formatVerificationCode } from '@shared/sheets/verification';
 import type { UnitSystem } from '@shared/units/registry';
 import { QUANTITIES } from '@shared/units/registry';
 import { jsPDF } from 'jspdf';
+import { cautionList } from './closing';
 import { registerFonts } from './fonts';
 import { type Formatter, formatter, sheetDate, sheetDateTime } from './format';
 import { type Glyph, INK, PAGE, SheetWriter } from './layout';
@@ -227,18 +228,7 @@ function drawSignatures(w: SheetWriter, d: FieldReportData): void {
 
 function drawCautionsAndCode(w: SheetWriter, d: FieldReportData): void {
   w.heading('4', 'Cautions', 30);
-  const { doc } = w;
-  for (const item of FIELD_REPORT_CAUTIONS) {
-    const lines = w.wrap(item, w.width - 8, 'sans', 7.8);
-    const h = lines.length * w.lineHeight(7.8) + 1.2;
-    w.ensure(h);
-    doc.setFillColor(INK.caution);
-    doc.rect(w.left + 1, w.y + 1.6, 1.4, 1.4, 'F');
-    lines.forEach((line, i) => {
-      w.text(line, w.left + 5, w.y + (i + 1) * w.lineHeight(7.8) - 0.6, { size: 7.8 });
-    });
-    w.y += h;
-  }
+  cautionList(w, FIELD_REPORT_CAUTIONS);
   w.ensure(34);
   w.y += 4;
   w.text('VERIFICATION CODE', w.left, w.y + 3, { font: 'sansBold', size: 6.6, color: INK.muted });

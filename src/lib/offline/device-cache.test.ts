@@ -108,6 +108,8 @@ describe('the queue kept on the device', () => {
     await startDeviceCache(second, [['inspections']], createDevicePersister(store));
     expect(second.getQueryData(['inspections', 'detail', 'i1'])).toEqual({ title: 'North elevation' });
     expect(second.getQueryData(['assemblies', 'detail', 'a1'])).toBeUndefined();
+    // Shown at once, never taken as fresh: a page that uses it fetches it again (a change made elsewhere shows).
+    expect(second.getQueryState(['inspections', 'detail', 'i1'])?.isInvalidated).toBe(true);
   });
 });
 

@@ -88,6 +88,13 @@ export async function startDeviceCache(
     },
   });
   await restored.catch(() => undefined);
+  // What the device kept is shown at once but never taken as fresh: each restored query is fetched again when a
+  // page uses it (with no signal the fetch waits and the kept data stays), so a change made elsewhere — the
+  // person's units on another device, an answer by someone else — shows after a reload as it did before.
+  void queryClient.invalidateQueries({
+    predicate: (q) => roots.includes(String(q.queryKey[0])),
+    refetchType: 'none',
+  });
   void queryClient.resumePausedMutations();
   return stop;
 }

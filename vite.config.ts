@@ -37,6 +37,9 @@ export default defineConfig({
   define: { global: 'globalThis' },
   build: { outDir: 'dist/client', emptyOutDir: true, manifest: true },
   test: {
+    // Both cores: vitest's default is one worker fewer than the cores, which is one on this 2-core machine (the
+    // browser tests still run one file at a time, `fileParallelism: false` below).
+    maxWorkers: 2,
     projects: [
       {
         resolve: { alias },

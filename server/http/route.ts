@@ -193,6 +193,28 @@ function writeAnswer(res: ServerResponse, status: number, contentType: string, b
 }
 
 /**
+ * Sends a printed document (a compliance sheet, a field report) with its verification code: downloaded or shown
+ * inline, never cached by a shared cache, and viewable in a frame of our own pages (the browser's PDF viewer).
+ */
+export function sendPdf(
+  res: Response,
+  doc: { pdf: Buffer; filename: string; code: string },
+  disposition: 'attachment' | 'inline',
+): undefined {
+  res
+    .status(200)
+    .type('application/pdf')
+    .set({
+      'Content-Disposition': `${disposition}; filename="${doc.filename}"`,
+      'Cache-Control': 'private, no-cache',
+      'X-Verification-Code': doc.code,
+      'Content-Security-Policy': "default-src 'none'; style-src 'unsafe-inline'; frame-ancestors 'self'",
+    })
+    .send(doc.pdf);
+  return undefined;
+}
+
+/**
  * Sends a handler's result. Only GET (and HEAD) JSON responses get an ETag, so that a conditional GET can
  * answer 304 (a POST, PUT, PATCH or DELETE response is never revalidated: it is written without hashing the
  * body). A frozen body — a record shared from the read cache — is serialised and hashed once, not on every

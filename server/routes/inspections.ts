@@ -24,7 +24,7 @@ import { sheetQuerySchema } from '@shared/schemas/sheets';
 import { submittalSchema } from '@shared/schemas/submittals';
 import { z } from 'zod';
 import { HttpError } from '../http/errors';
-import { defineRoute } from '../http/route';
+import { defineRoute, sendPdf } from '../http/route';
 import { receiveUpload, sendStoredFile } from '../http/upload';
 import type { Services } from '../services';
 
@@ -197,22 +197,8 @@ export const inspectionRoutes = [
       ...errors,
     },
     handler: async ({ params, query, user, res, services }) => {
-      const { pdf, filename, code } = await services.inspections.report(
-        params.inspectionId,
-        user.id,
-        query.units,
-      );
-      res
-        .status(200)
-        .type('application/pdf')
-        .set({
-          'Content-Disposition': `${query.disposition}; filename="${filename}"`,
-          'Cache-Control': 'private, no-cache',
-          'X-Verification-Code': code,
-          'Content-Security-Policy': "default-src 'none'; style-src 'unsafe-inline'; frame-ancestors 'self'",
-        })
-        .send(pdf);
-      return undefined;
+      const doc = await services.inspections.report(params.inspectionId, user.id, query.units);
+      return sendPdf(res, doc, query.disposition);
     },
   }),
   defineRoute({

@@ -1,7 +1,7 @@
 import { apiErrorSchema } from '@shared/schemas/common';
 import { sheetQuerySchema, verificationSchema, verifyParamsSchema } from '@shared/schemas/sheets';
 import { z } from 'zod';
-import { defineRoute } from '../http/route';
+import { defineRoute, sendPdf } from '../http/route';
 import type { Services } from '../services';
 
 type Ctx = { params: Record<string, string>; services: Services };
@@ -38,19 +38,11 @@ export const sheetRoutes = [
     },
     handler: async ({ params, query, user, res, services }) => {
       const sweep = query.sweep ? await services.sweeps.get(query.sweep) : undefined;
-      const { pdf, filename, code } = await services.sheets.render(params.runId, user.id, query.units, sweep);
-      res
-        .status(200)
-        .type('application/pdf')
-        .set({
-          'Content-Disposition': `${query.disposition}; filename="${filename}"`,
-          'Cache-Control': 'private, no-cache',
-          'X-Verification-Code': code,
-          // The browser's PDF viewer may show it in a frame of our own pages.
-          'Content-Security-Policy': "default-src 'none'; style-src 'unsafe-inline'; frame-ancestors 'self'",
-        })
-        .send(pdf);
-      return undefined;
+      return sendPdf(
+        res,
+        await services.sheets.render(params.runId, user.id, query.units, sweep),
+        query.disposition,
+      );
     },
   }),
   defineRoute({

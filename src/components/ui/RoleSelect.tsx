@@ -1,5 +1,6 @@
 import { useId } from 'react';
 import { Button } from './Button';
+import { Options } from './Options';
 import { Select } from './Select';
 
 interface RoleSelectProps<R extends string> {
@@ -38,11 +39,7 @@ export function RoleSelect<R extends string>({
         onChange={(e) => onChange(e.target.value as R)}
         className="w-auto py-1 text-sm"
       >
-        {roles.map((r) => (
-          <option key={r} value={r}>
-            {labels[r]}
-          </option>
-        ))}
+        <Options values={roles} labels={labels} />
       </Select>
       {value !== saved ? (
         <>

@@ -3,6 +3,7 @@ import { useNavigate } from 'react-router';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
+import { NamedOptions } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage } from '../../../lib/api';
@@ -89,11 +90,7 @@ export function DuplicateAssemblyForm({
         <Field label="Into project">
           {(c) => (
             <Select {...c} value={target} onChange={(e) => setTarget(e.target.value)}>
-              {targets.map((p) => (
-                <option key={p.id} value={p.id}>
-                  {p.name}
-                </option>
-              ))}
+              <NamedOptions items={targets} />
             </Select>
           )}
         </Field>

@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { type UseFieldArrayReturn, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { Options } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { fieldDomId } from '../evaluate';
@@ -183,11 +184,7 @@ function LayerRow({
                 className="py-1.5 text-sm"
                 onChange={(e) => array.update(i, layerOfKind(e.target.value as LayerKind, layer))}
               >
-                {(Object.keys(LAYER_KIND_LABELS) as LayerKind[]).map((k) => (
-                  <option key={k} value={k}>
-                    {LAYER_KIND_LABELS[k]}
-                  </option>
-                ))}
+                <Options values={Object.keys(LAYER_KIND_LABELS) as LayerKind[]} labels={LAYER_KIND_LABELS} />
               </Select>
             )}
           </Field>

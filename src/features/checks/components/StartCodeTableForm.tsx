@@ -8,6 +8,7 @@ import { Link, useNavigate } from 'react-router';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
+import { NamedOptions } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
@@ -87,11 +88,7 @@ export function StartCodeTableForm({
           <Field label="Firm it belongs to">
             {(c) => (
               <Select {...c} value={orgId} onChange={(e) => setChosen(e.target.value)}>
-                {firms.map((f) => (
-                  <option key={f.id} value={f.id}>
-                    {f.name}
-                  </option>
-                ))}
+                <NamedOptions items={firms} />
               </Select>
             )}
           </Field>

@@ -14,6 +14,7 @@ import type { UnitSystem } from '@shared/units';
 import { type CellContext, createColumnHelper, tableFeatures, useTable } from '@tanstack/react-table';
 import { createContext, useContext } from 'react';
 import { Button } from '../../../components/ui/Button';
+import { Options } from '../../../components/ui/Options';
 import { TableScroller } from '../../../components/ui/Table';
 import type { DraftErrors, DraftField, DraftRow } from '../draft';
 
@@ -70,11 +71,7 @@ function ZoneCell({ row }: Ctx) {
       value={d.climateZone}
       onChange={(e) => g.update(d.key, { climateZone: e.target.value as CriteriaZone })}
     >
-      {CRITERIA_ZONES.map((z) => (
-        <option key={z} value={z}>
-          {zoneLabel(z)}
-        </option>
-      ))}
+      <Options values={CRITERIA_ZONES} labels={zoneLabel} />
     </select>
   );
 }

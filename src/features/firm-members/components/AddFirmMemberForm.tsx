@@ -7,6 +7,7 @@ import type { z } from 'zod';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
+import { Options } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
@@ -67,11 +68,7 @@ export function AddFirmMemberForm({ orgId, firmName }: { orgId: string; firmName
         <Field label="Firm role" error={errors.role?.message} required>
           {(c) => (
             <Select {...c} {...register('role')}>
-              {FIRM_ROLES.map((r) => (
-                <option key={r} value={r}>
-                  {FIRM_ROLE_LABELS[r]}
-                </option>
-              ))}
+              <Options values={FIRM_ROLES} labels={FIRM_ROLE_LABELS} />
             </Select>
           )}
         </Field>

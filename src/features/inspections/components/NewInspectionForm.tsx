@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
+import { NamedOptions, Options } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
@@ -55,11 +56,7 @@ export function NewInspectionForm({
       <Field label="Assembly" required error={fields.assemblyId}>
         {(p) => (
           <Select {...p} value={assemblyId} onChange={(e) => setAssemblyId(e.target.value)}>
-            {assemblies.map((a) => (
-              <option key={a.id} value={a.id}>
-                {a.name}
-              </option>
-            ))}
+            <NamedOptions items={assemblies} />
           </Select>
         )}
       </Field>
@@ -115,11 +112,7 @@ export function NewInspectionForm({
           <Field label="Zone" error={fields['area.zone']}>
             {(p) => (
               <Select {...p} value={zone} onChange={(e) => setZone(e.target.value as InspectionZone)}>
-                {INSPECTION_ZONES.map((z) => (
-                  <option key={z} value={z}>
-                    {ZONE_LABELS[z]}
-                  </option>
-                ))}
+                <Options values={INSPECTION_ZONES} labels={ZONE_LABELS} />
               </Select>
             )}
           </Field>

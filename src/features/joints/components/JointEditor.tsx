@@ -18,6 +18,7 @@ import { formatJointDimension, formatPageMeasure } from '@shared/format/page-mea
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { FieldGroup, GroupProblem } from '../../../components/ui/FieldGroup';
+import { NamedOptions, Options } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
@@ -106,11 +107,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
               onChange={(e) => set({ type: e.target.value as JointType })}
               className="py-1.5 text-sm"
             >
-              {JOINT_TYPES.map((t) => (
-                <option key={t} value={t}>
-                  {JOINT_TYPE_LABELS[t]}
-                </option>
-              ))}
+              <Options values={JOINT_TYPES} labels={JOINT_TYPE_LABELS} />
             </Select>
           )}
         </Field>
@@ -127,11 +124,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
               onChange={(e) => set({ sealant: { movementClass: e.target.value as MovementClass } })}
               className="py-1.5 text-sm"
             >
-              {MOVEMENT_CLASSES.map((m) => (
-                <option key={m} value={m}>
-                  {MOVEMENT_CLASS_LABELS[m]}
-                </option>
-              ))}
+              <Options values={MOVEMENT_CLASSES} labels={MOVEMENT_CLASS_LABELS} />
             </Select>
           )}
         </Field>
@@ -201,11 +194,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                         else setSide(k, { material: v, length: side.length });
                       }}
                     >
-                      {expansionMaterials.map((m) => (
-                        <option key={m.id} value={m.id}>
-                          {m.name}
-                        </option>
-                      ))}
+                      <NamedOptions items={expansionMaterials} />
                       <option value={CUSTOM}>Custom α (the product's declared value)</option>
                     </Select>
                   )}
@@ -410,11 +399,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                 value={joint.backer ?? 'closed_cell'}
                 onChange={(e) => set({ backer: e.target.value as BackerCell })}
               >
-                {BACKER_CELLS.map((b) => (
-                  <option key={b} value={b}>
-                    {BACKER_LABELS[b]}
-                  </option>
-                ))}
+                <Options values={BACKER_CELLS} labels={BACKER_LABELS} />
               </Select>
             )}
           </Field>

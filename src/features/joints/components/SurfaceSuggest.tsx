@@ -13,6 +13,7 @@ import { toShown } from '@shared/units';
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { Options } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { calcProblem, type FieldProblem } from '../../../lib/field-problems';
@@ -78,22 +79,14 @@ export function SurfaceSuggest({
           <Field label="Finish">
             {(c) => (
               <Select {...c} value={finish} onChange={(e) => setFinish(e.target.value as SurfaceFinish)}>
-                {SURFACE_FINISHES.map((f) => (
-                  <option key={f} value={f}>
-                    {FINISH_LABELS[f]}
-                  </option>
-                ))}
+                <Options values={SURFACE_FINISHES} labels={FINISH_LABELS} />
               </Select>
             )}
           </Field>
           <Field label="Exposure">
             {(c) => (
               <Select {...c} value={exposure} onChange={(e) => setExposure(e.target.value as Exposure)}>
-                {EXPOSURES.map((x) => (
-                  <option key={x} value={x}>
-                    {EXPOSURE_LABELS[x]}
-                  </option>
-                ))}
+                <Options values={EXPOSURES} labels={EXPOSURE_LABELS} />
               </Select>
             )}
           </Field>

@@ -1,4 +1,5 @@
 import { Field } from '../../../components/ui/Field';
+import { NamedOptions } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 
 interface FirmPickerProps {
@@ -14,11 +15,7 @@ export function FirmPicker({ firms, value, onChange }: FirmPickerProps) {
     <Field label="Firm" className="max-w-sm">
       {(c) => (
         <Select {...c} value={value} onChange={(e) => onChange(e.target.value)}>
-          {firms.map((o) => (
-            <option key={o.id} value={o.id}>
-              {o.name}
-            </option>
-          ))}
+          <NamedOptions items={firms} />
         </Select>
       )}
     </Field>

@@ -7,6 +7,7 @@ import type { z } from 'zod';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
+import { Options } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
@@ -64,11 +65,7 @@ export function InviteForm({ projectId, myRole }: { projectId: string; myRole: P
         <Field label="Role on this project" error={errors.role?.message} required>
           {(c) => (
             <Select {...c} {...register('role')}>
-              {grantableRoles(myRole).map((r) => (
-                <option key={r} value={r}>
-                  {PROJECT_ROLE_LABELS[r]}
-                </option>
-              ))}
+              <Options values={grantableRoles(myRole)} labels={PROJECT_ROLE_LABELS} />
             </Select>
           )}
         </Field>

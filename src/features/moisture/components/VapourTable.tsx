@@ -4,6 +4,7 @@ import { GENERIC_MATERIAL_NOTE } from '@shared/calc/thermal/materials';
 import type { Layer } from '@shared/calc/thermal/schema';
 import { firstKeptLayer } from '@shared/calc/thermal/thermal';
 import { Link } from 'react-router';
+import { Options } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { TableScroller } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
@@ -178,11 +179,7 @@ export function VapourTable({
                           }}
                           className="w-56! py-1.5 text-sm"
                         >
-                          {KINDS.map((k) => (
-                            <option key={k} value={k}>
-                              {KIND_LABELS[k]}
-                            </option>
-                          ))}
+                          <Options values={KINDS} labels={KIND_LABELS} />
                         </Select>
                         {d.kind !== 'none' ? (
                           <div className="flex items-stretch">

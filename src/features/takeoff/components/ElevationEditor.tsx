@@ -11,6 +11,7 @@ import { type ComponentProps, type ReactNode, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { FieldGroup, GroupProblem } from '../../../components/ui/FieldGroup';
+import { Options } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
@@ -330,11 +331,10 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                       onChange={(e) => changeShape(t, e.target.value)}
                     >
                       <option value="none">No sealant</option>
-                      {(['rectangular', 'round', 'fillet'] as const).map((s) => (
-                        <option key={s} value={s}>
-                          {BEAD_SHAPE_LABELS[s]}
-                        </option>
-                      ))}
+                      <Options
+                        values={['rectangular', 'round', 'fillet'] as const}
+                        labels={BEAD_SHAPE_LABELS}
+                      />
                     </Select>
                   )}
                 </Field>
@@ -385,11 +385,7 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                   value={t.appliesTo}
                   onChange={(e) => setTrim(k, { ...t, appliesTo: e.target.value as TakeoffJointType })}
                 >
-                  {TAKEOFF_JOINT_TYPES.map((j) => (
-                    <option key={j} value={j}>
-                      {TAKEOFF_TYPE_LABELS[j]}
-                    </option>
-                  ))}
+                  <Options values={TAKEOFF_JOINT_TYPES} labels={TAKEOFF_TYPE_LABELS} />
                 </Select>
               )}
             </Field>

@@ -9,6 +9,7 @@ import { useState } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { NamedOptions } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { isApiRequestError } from '../../../lib/api';
@@ -122,11 +123,7 @@ export function LibraryPick({ kind, form, values, errors, disabled, library }: P
                 className="py-1.5 text-sm"
               >
                 <option value="">Choose an entry…</option>
-                {offered.map((p) => (
-                  <option key={p.id} value={p.id}>
-                    {p.name}
-                  </option>
-                ))}
+                <NamedOptions items={offered} />
               </Select>
             )}
           </Field>

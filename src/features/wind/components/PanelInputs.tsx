@@ -8,6 +8,7 @@ import type { ReactNode } from 'react';
 import { Controller, type FieldPath, type UseFormReturn, useFieldArray } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { Options } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TableScroller, Th } from '../../../components/ui/Table';
@@ -156,11 +157,10 @@ export function PanelInputs({
               <option value="" disabled>
                 Choose…
               </option>
-              {(Object.keys(SPAN_CONDITION_LABELS) as SpanCondition[]).map((k) => (
-                <option key={k} value={k}>
-                  {SPAN_CONDITION_LABELS[k]}
-                </option>
-              ))}
+              <Options
+                values={Object.keys(SPAN_CONDITION_LABELS) as SpanCondition[]}
+                labels={SPAN_CONDITION_LABELS}
+              />
             </Select>
           )}
         </Field>

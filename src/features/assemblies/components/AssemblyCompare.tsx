@@ -5,6 +5,7 @@ import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Loading } from '../../../components/ui/Loading';
 import { Notice } from '../../../components/ui/Notice';
+import { NamedOptions } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { errorMessage } from '../../../lib/api';
 import { useUnitSystem } from '../../../lib/unit-system';
@@ -155,11 +156,7 @@ export function AssemblyCompare({
                     }
                   >
                     <option value="">Choose…</option>
-                    {assemblies.map((a) => (
-                      <option key={a.id} value={a.id}>
-                        {a.name}
-                      </option>
-                    ))}
+                    <NamedOptions items={assemblies} />
                   </Select>
                 )}
               </Field>

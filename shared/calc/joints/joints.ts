@@ -1,5 +1,6 @@
 import { CalcInputError, requireNonNegative, requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
+import { K, M, ONE, PCT, PER_K } from '@shared/calc/trace-units';
 import { INCH } from '@shared/units';
 import { findExpansionMaterial, GENERIC_EXPANSION_NOTE } from './expansion';
 import type {
@@ -26,12 +27,6 @@ import type {
  * Class capabilities: ASTM C920. Backer rod sizing, the minimum width and the review of very wide joints:
  * common practice (the tests name the published sources they were checked against).
  */
-
-const M = 'm';
-const K = 'K';
-const PER_K = '1/K';
-const PCT = '%';
-const ONE = '1';
 
 const SRC_THERMAL = 'ASTM C1472 approach: ΔL = α·L·ΔT from surface temperatures, split at installation';
 const SRC_WIDTH = 'ASTM C1193 approach: W = (100/X)·movement + tolerance; X per ASTM C920 class';
@@ -189,28 +184,26 @@ export function calculateJoint(joint: JointInput, path = 'joint'): JointResult {
   const deltaTCompression = surface.max - install.min;
 
   const sideResults = sides.map((s, k) => {
-    const extension = thermalMovement(s.alpha, s.length, deltaTExtension);
-    const compression = thermalMovement(s.alpha, s.length, deltaTCompression);
-    trace.push(
-      step(
-        id(`side.${k}.extension`),
-        `Side ${k + 1} (${s.label}): thermal opening`,
-        'ΔL_ext = α·L·(T_install,max − T_surface,min)',
-        SRC_THERMAL,
-        { α: v(s.alpha, PER_K), L: v(s.length, M), ΔT: v(deltaTExtension, K) },
-        extension,
-        M,
-      ),
-      step(
-        id(`side.${k}.compression`),
-        `Side ${k + 1} (${s.label}): thermal closing`,
-        'ΔL_comp = α·L·(T_surface,max − T_install,min)',
-        SRC_THERMAL,
-        { α: v(s.alpha, PER_K), L: v(s.length, M), ΔT: v(deltaTCompression, K) },
-        compression,
-        M,
-      ),
-    );
+    const [extension, compression] = (
+      [
+        ['extension', 'opening', 'ΔL_ext = α·L·(T_install,max − T_surface,min)', deltaTExtension],
+        ['compression', 'closing', 'ΔL_comp = α·L·(T_surface,max − T_install,min)', deltaTCompression],
+      ] as const
+    ).map(([part, words, formula, deltaT]) => {
+      const movement = thermalMovement(s.alpha, s.length, deltaT);
+      trace.push(
+        step(
+          id(`side.${k}.${part}`),
+          `Side ${k + 1} (${s.label}): thermal ${words}`,
+          formula,
+          SRC_THERMAL,
+          { α: v(s.alpha, PER_K), L: v(s.length, M), ΔT: v(deltaT, K) },
+          movement,
+          M,
+        ),
+      );
+      return movement;
+    });
     const generic = `α of ${s.label}: ${GENERIC_EXPANSION_NOTE.toLowerCase()}`;
     if (s.generic && !warnings.includes(generic)) warnings.push(generic);
     return { label: s.label, alpha: s.alpha, length: s.length, extension, compression };

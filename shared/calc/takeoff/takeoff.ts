@@ -1,5 +1,6 @@
 import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
+import { M, M2, M3, PCS } from '@shared/calc/trace-units';
 import { INCH } from '@shared/units';
 import {
   type BeadProfile,
@@ -18,11 +19,6 @@ import {
  * is in the trace. Opening positions are not part of the input, so panel joints are measured gross through
  * openings and only fasteners certainly inside an opening are deducted (see `notes`).
  */
-
-const M = 'm';
-const M2 = 'm²';
-const M3 = 'm³';
-const PCS = 'pcs';
 
 const SRC_GEOMETRY = 'Elevation geometry (derived)';
 const SRC_BEAD = 'Plane geometry: round πd²/4, triangular fillet leg²/2, rectangular W·D';
@@ -144,27 +140,27 @@ function wallRuns(wall: Wall, panel: PanelModule, i: number): WallRuns {
   const label = (s: string) => `${wall.name}: ${s}`;
   const total = (joint: TakeoffJointType) =>
     runs.reduce((sum, r) => (r.joint === joint ? sum + r.length * r.count : sum), 0);
+  // The two panel joint lines: (⌈across/s⌉ − 1) lines, each as long as the other side of the wall.
+  const sides = { L, H };
+  const panelJoints = (
+    [
+      ['panel_vertical', 'vertical', 'L', 'H', along, vertical ? 'module width' : 'panel length'],
+      ['panel_horizontal', 'horizontal', 'H', 'L', up, vertical ? 'panel length' : 'module width'],
+    ] as const
+  ).map(([joint, words, across, run, s, module]) =>
+    step(
+      id(joint),
+      label(`${words} panel joints`),
+      `(⌈${across}/s⌉ − 1)·${run}, s = ${module}`,
+      SRC_GEOMETRY,
+      { [across]: v(sides[across], M), s: v(s, M), [run]: v(sides[run], M) },
+      total(joint),
+      M,
+      'Measured gross through openings',
+    ),
+  );
   const trace = [
-    step(
-      id('panel_vertical'),
-      label('vertical panel joints'),
-      `(⌈L/s⌉ − 1)·H, s = ${vertical ? 'module width' : 'panel length'}`,
-      SRC_GEOMETRY,
-      { L: v(L, M), s: v(along, M), H: v(H, M) },
-      total('panel_vertical'),
-      M,
-      'Measured gross through openings',
-    ),
-    step(
-      id('panel_horizontal'),
-      label('horizontal panel joints'),
-      `(⌈H/s⌉ − 1)·L, s = ${vertical ? 'panel length' : 'module width'}`,
-      SRC_GEOMETRY,
-      { H: v(H, M), s: v(up, M), L: v(L, M) },
-      total('panel_horizontal'),
-      M,
-      'Measured gross through openings',
-    ),
+    ...panelJoints,
     step(
       id('perimeter'),
       label('perimeter joints (head and abutting ends)'),

@@ -1,5 +1,6 @@
 import { CalcInputError } from '@shared/calc/errors';
-import { step, type TraceStep, v } from '@shared/calc/trace';
+import { step, type TraceInput, type TraceStep, v } from '@shared/calc/trace';
+import { M, ONE, RK, UK, WMK } from '@shared/calc/trace-units';
 import { R_IP_TO_SI, U_IP_TO_SI } from '@shared/units';
 import {
   ENERGY_CODE_FILMS_SOURCE,
@@ -34,12 +35,6 @@ import type {
  * Table 8 is reproduced by the Annex D formula (h_a, h_r0 = 5.1) to its rounding. The verification tests name
  * the published source each constant was checked against, and how.
  */
-
-const RK = 'm²·K/W';
-const UK = 'W/(m²·K)';
-const M = 'm';
-const WMK = 'W/(m·K)';
-const ONE = '1';
 
 const SRC_LAYER = 'ISO 6946:2017, thermal resistance of homogeneous layers';
 const SRC_SURFACE = 'ISO 6946:2017 §6.8, Table 7';
@@ -459,35 +454,24 @@ interface Bridged {
 }
 
 function pointOrLinear(b: Exclude<Bridge, FastenerBridge>, j: number): Bridged {
+  let deltaU: number;
+  let formula: string;
+  let inputs: Record<string, TraceInput>;
   if (b.kind === 'point') {
     const n = 'countPerArea' in b ? b.countPerArea : 1 / (b.spacingHorizontal * b.spacingVertical);
-    const deltaU = pointBridgeDeltaU(b.chi, n);
-    return {
-      deltaU,
-      trace: step(
-        `thermal.bridge.${j}.deltaU`,
-        `${b.name}: point bridges`,
-        'countPerArea' in b ? 'ΔU = n·χ' : 'ΔU = χ/(s_h·s_v)',
-        SRC_BRIDGE,
-        { χ: v(b.chi, 'W/K'), n: v(n, '1/m²') },
-        deltaU,
-        UK,
-      ),
-    };
+    deltaU = pointBridgeDeltaU(b.chi, n);
+    formula = 'countPerArea' in b ? 'ΔU = n·χ' : 'ΔU = χ/(s_h·s_v)';
+    inputs = { χ: v(b.chi, 'W/K'), n: v(n, '1/m²') };
+  } else {
+    const L = 'lengthPerArea' in b ? b.lengthPerArea : 1 / b.spacing;
+    deltaU = linearBridgeDeltaU(b.psi, L);
+    formula = 'lengthPerArea' in b ? 'ΔU = ψ·L/A' : 'ΔU = ψ/s';
+    inputs = { ψ: v(b.psi, WMK), 'L/A': v(L, 'm/m²') };
   }
-  const L = 'lengthPerArea' in b ? b.lengthPerArea : 1 / b.spacing;
-  const deltaU = linearBridgeDeltaU(b.psi, L);
+  const label = `${b.name}: ${b.kind} bridges`;
   return {
     deltaU,
-    trace: step(
-      `thermal.bridge.${j}.deltaU`,
-      `${b.name}: linear bridges`,
-      'lengthPerArea' in b ? 'ΔU = ψ·L/A' : 'ΔU = ψ/s',
-      SRC_BRIDGE,
-      { ψ: v(b.psi, WMK), 'L/A': v(L, 'm/m²') },
-      deltaU,
-      UK,
-    ),
+    trace: step(`thermal.bridge.${j}.deltaU`, label, formula, SRC_BRIDGE, inputs, deltaU, UK),
   };
 }
 
@@ -899,28 +883,29 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
   }
   const { pp, ip } = m;
   const blended = vent ? ' (blended for the slightly ventilated air layer, §6.9.3)' : '';
-  trace.push(
-    step(
-      'thermal.R.parallelPath',
-      'Total resistance, parallel-path method',
-      '1/R_T = Σ f_m/R_T,m over every path',
-      SRC_PARALLEL,
-      { 'Rsi + ΣR_unbridged + Rse': v(seriesR, RK) },
-      pp,
-      RK,
-      vent ? `Value${blended}` : undefined,
-    ),
-    step(
-      'thermal.R.isothermalPlanes',
-      'Total resistance, isothermal-planes method',
+  const pathMethods = [
+    ['parallelPath', 'parallel-path', '1/R_T = Σ f_m/R_T,m over every path', SRC_PARALLEL, pp],
+    [
+      'isothermalPlanes',
+      'isothermal-planes',
       'R_T = Rsi + ΣR_j + Rse, bridged layers 1/R_j = Σ f_q/R_qj',
       SRC_ISOTHERMAL,
-      { 'Rsi + ΣR_unbridged + Rse': v(seriesR, RK) },
       ip,
-      RK,
-      vent ? `Value${blended}` : undefined,
-    ),
-  );
+    ],
+  ] as const;
+  for (const [key, method, formula, source, value] of pathMethods)
+    trace.push(
+      step(
+        `thermal.R.${key}`,
+        `Total resistance, ${method} method`,
+        formula,
+        source,
+        { 'Rsi + ΣR_unbridged + Rse': v(seriesR, RK) },
+        value,
+        RK,
+        vent ? `Value${blended}` : undefined,
+      ),
+    );
 
   let isoUpper: number | null = null;
   let isoLower: number | null = null;

@@ -1,5 +1,6 @@
 import { CalcInputError, requireInRange, requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
+import { M, N, ONE, PA } from '@shared/calc/trace-units';
 import { analyseSite, MINIMUM_PRESSURE, type SiteAnalysis, tracePressures, wallPressures } from './pressure';
 import type {
   ClipResult,
@@ -47,11 +48,6 @@ export const SPAN_CONDITION_WORDS: Readonly<Record<SpanCondition, string>> = {
   double: 'two-span',
   triple: 'three-span',
 };
-
-const M = 'm';
-const PA = 'Pa';
-const N = 'N';
-const ONE = '1';
 
 export const CAUTIONS: readonly string[] = [
   'The engineer of record or the delegated-design engineer is responsible for the cladding design; this schedule is a design aid, not a sealed design.',

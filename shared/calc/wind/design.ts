@@ -1,5 +1,6 @@
 import { requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
+import { M, M2, N, ONE, PA } from '@shared/calc/trace-units';
 import {
   CONTINUITY_FACTOR,
   calculateWindSchedule,
@@ -32,12 +33,6 @@ import type {
 
 /** Utilisation counted as met up to 1 + this: floating-point round-off only. */
 export const UTILISATION_TOLERANCE = 1e-9;
-
-const M = 'm';
-const M2 = 'm²';
-const PA = 'Pa';
-const N = 'N';
-const ONE = '1';
 
 /** Combine verdicts: a failure wins, then "outside the table", then "missing", else met. */
 export function combineStatus(statuses: readonly DesignStatus[]): DesignStatus {

@@ -1,5 +1,6 @@
 import { CalcInputError, requireInRange, requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
+import { M, ONE, PA } from '@shared/calc/trace-units';
 import { PSF_TO_PA } from '@shared/units';
 import {
   edgeWidth,
@@ -33,10 +34,6 @@ import {
 export const MINIMUM_PRESSURE = 16 * PSF_TO_PA;
 /** ASD load factor on W (ASCE 7-16 §2.4.1, D + 0.6W). */
 export const ASD_WIND_FACTOR = 0.6;
-
-const ONE = '1';
-const PA = 'Pa';
-const M = 'm';
 
 export interface SiteAnalysis {
   velocity: VelocityResult;

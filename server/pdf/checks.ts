@@ -44,11 +44,7 @@ export function drawCheckList(w: SheetWriter, data: SheetData, fmt: Formatter): 
         { text: `${c.label}\n${basis(c, data)}` },
         figures.required,
         figures.provided,
-        [
-          figures.result,
-          c.status !== 'not_evaluated' ? c.reason : '',
-          c.method ? methodText(c.method, fmt.rValue) : '',
-        ]
+        [figures.result, figures.reason, c.method ? methodText(c.method, fmt.rValue) : '']
           .filter(Boolean)
           .join('. '),
       ];

@@ -17,7 +17,7 @@ function notRun(w: SheetWriter, data: SheetData, id: string): boolean {
   if (!m || m.status === 'ran') return false;
   w.paragraph(
     m.status === 'missing'
-      ? `Not run — missing: ${m.missing.map(storedMessageText).join('; ')}. Every criterion that reads this module is reported “not evaluated”.`
+      ? `Not run — missing: ${m.missing.map((x) => storedMessageText(x)).join('; ')}. Every criterion that reads this module is reported “not evaluated”.`
       : `Not run — the calculation refused the input: ${m.error === null ? 'unknown reason' : storedMessageText(m.error)}.`,
     { size: 8, color: INK.warning },
   );
@@ -95,7 +95,7 @@ function moisture(w: SheetWriter, data: SheetData, fmt: Formatter): void {
   const s = r.surface;
   w.fields(
     [
-      ['Result', r.verdict],
+      ['Result', storedMessageText(r.verdict, fmt.system)],
       [
         'Interstitial condensation',
         r.interstitial.condensationOccurs

@@ -65,7 +65,8 @@ describe('check inputs from an assembly and its project', () => {
   it('names what is missing instead of guessing', () => {
     const bare = { ...assembly, vapour: undefined, windPanel: undefined, joints: [], takeoff: undefined };
     const noData = { ...project, wind: null, climate: null };
-    const words = (c: { status: string; missing?: EngineMessage[] }) => (c.missing ?? []).map(messageText);
+    const words = (c: { status: string; missing?: EngineMessage[] }) =>
+      (c.missing ?? []).map((m) => messageText(m));
     const moisture = moistureInputFor(bare, noData);
     expect(moisture.status).toBe('missing');
     expect(words(moisture)).toEqual([

@@ -3,7 +3,7 @@ import type { MoistureInput } from '../calc/moisture/schema';
 import type { TakeoffInput } from '../calc/takeoff/schema';
 import type { ThermalInput } from '../calc/thermal/schema';
 import type { WindDesignInput, WindScheduleInput } from '../calc/wind/schema';
-import { type EngineMessage, engineMessage } from '../format/messages';
+import { engineMessage, type InputMissing } from '../format/message-schema';
 import type { AssemblyInput } from '../schemas/assembly';
 import type { Project } from '../schemas/project';
 
@@ -24,9 +24,9 @@ export type ProjectForChecks = Pick<
 >;
 
 /** Either the calculation input, or what is still missing to build it (messages, worded by shared/format). */
-export type CheckInput<T> = { status: 'ready'; input: T } | { status: 'missing'; missing: EngineMessage[] };
+export type CheckInput<T> = { status: 'ready'; input: T } | { status: 'missing'; missing: InputMissing[] };
 
-const missing = <T>(...items: EngineMessage[]): CheckInput<T> => ({ status: 'missing', missing: items });
+const missing = <T>(...items: InputMissing[]): CheckInput<T> => ({ status: 'missing', missing: items });
 
 export const thermalInputFor = (a: AssemblyInput): CheckInput<ThermalInput> => ({
   status: 'ready',
@@ -35,7 +35,7 @@ export const thermalInputFor = (a: AssemblyInput): CheckInput<ThermalInput> => (
 
 /** Layers with their vapour data, the project's indoor conditions (or humidity class) and its 12 months. */
 export function moistureInputFor(a: AssemblyInput, p: ProjectForChecks): CheckInput<MoistureInput> {
-  const gaps: EngineMessage[] = [];
+  const gaps: InputMissing[] = [];
   const vapour = a.vapour ?? [];
   a.thermal.layers.forEach((layer, i) => {
     if (!vapour[i]) gaps.push(engineMessage('vapour_missing', `vapour.${i}`, { layer: i, name: layer.name }));

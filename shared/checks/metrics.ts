@@ -2,8 +2,10 @@ import { MOVEMENT_CAPABILITY } from '../calc/joints/joints';
 import type { JointInput } from '../calc/joints/schema';
 import { saturationPressureIso13788 } from '../calc/moisture/psychrometrics';
 import type { MoistureResult } from '../calc/moisture/schema';
+import { RSI_SURFACE } from '../calc/moisture/surface';
 import type { Layer } from '../calc/thermal/schema';
 import { firstKeptLayer } from '../calc/thermal/thermal';
+import { engineMessage } from '../format/message-schema';
 import type { Metric, MetricOutcome } from './report';
 
 /*
@@ -37,13 +39,11 @@ export function continuousInsulationR(layers: readonly Layer[]): Metric {
     steps.push(layerStep(i));
   });
   const declared = layers.filter((l, i) => i >= start && l.kind === 'resistance').map((l) => l.name);
-  const note = [
-    names.length > 0 ? `Counted: ${names.join(', ')}.` : 'No homogeneous layer has λ ≤ 0.065 W/(m·K).',
-    'Convention: homogeneous layers with λ ≤ 0.065 W/(m·K) outside the framing, R = d/λ.',
-    declared.length > 0 ? `Declared-resistance layers not counted: ${declared.join(', ')}.` : '',
-  ]
-    .filter(Boolean)
-    .join(' ');
+  const note = engineMessage('ci_counted', '', {
+    counted: names,
+    declared,
+    maxLambda: INSULATION_MAX_CONDUCTIVITY,
+  });
   return { value: R, unit: 'm²·K/W', traceStepIds: steps, note };
 }
 
@@ -54,24 +54,19 @@ export function continuousInsulationR(layers: readonly Layer[]): Metric {
 export function cavityInsulationR(layers: readonly Layer[]): Metric {
   const start = firstKeptLayer(layers);
   let R = 0;
-  const names: string[] = [];
+  const counted: { fill: string; layer: string }[] = [];
   const steps: string[] = [];
   layers.forEach((l, i) => {
     if (i < start || l.kind !== 'framed') return;
     const fill = l.sections.reduce((a, b) => (b.conductivity < a.conductivity ? b : a));
     if (fill.conductivity > INSULATION_MAX_CONDUCTIVITY) return;
     R += l.thickness / fill.conductivity;
-    names.push(`${fill.name} in ${l.name}`);
+    counted.push({ fill: fill.name, layer: l.name });
     steps.push(layerStep(i));
   });
-  const note =
-    names.length > 0
-      ? `Counted: ${names.join(', ')}. Convention: d/λ of the lowest-λ section of each framed layer.`
-      : 'No framed layer is filled with insulation (λ ≤ 0.065 W/(m·K)).';
+  const note = engineMessage('cavity_counted', '', { counted, maxLambda: INSULATION_MAX_CONDUCTIVITY });
   return { value: R, unit: 'm²·K/W', traceStepIds: steps, note };
 }
-
-const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
 /**
  * Highest relative humidity at the clear-field interior surface over the 12 months:
@@ -88,20 +83,26 @@ export function maxSurfaceRh(result: MoistureResult): Metric {
     value: worst.rh,
     unit: 'fraction',
     traceStepIds: ['moisture.fRsi'],
-    note: `Highest in ${MONTHS[worst.month - 1]}: φ_si = p_i/p_sat(θ_si) at the clear-field interior surface (Rsi = 0.25 m²·K/W).`,
+    note: engineMessage('surface_rh_highest', '', { month: worst.month, rsi: RSI_SURFACE }),
   };
 }
 
 /** Lowest ASTM C920 movement capability of the schedule's sealants, % (100/50 counts by its 50 % compression). */
 export function minSealantMovementClass(joints: readonly JointInput[]): MetricOutcome {
-  if (joints.length === 0) return { value: null, reason: 'the joint schedule is empty' };
-  let worst = { value: Number.POSITIVE_INFINITY, name: '' };
+  if (joints.length === 0) return { value: null, reason: engineMessage('joints_empty', 'joints', {}) };
+  let worst = { value: Number.POSITIVE_INFINITY, joint: '', movementClass: '' };
   for (const j of joints) {
     const c = MOVEMENT_CAPABILITY[j.sealant.movementClass];
     const v = Math.min(c.extension, c.compression);
-    if (v < worst.value) worst = { value: v, name: `${j.name} (class ${j.sealant.movementClass})` };
+    if (v < worst.value) worst = { value: v, joint: j.name, movementClass: j.sealant.movementClass };
   }
-  return { value: worst.value, unit: '%', traceStepIds: [], note: `Lowest: ${worst.name}.` };
+  const { joint, movementClass } = worst;
+  return {
+    value: worst.value,
+    unit: '%',
+    traceStepIds: [],
+    note: engineMessage('sealant_lowest', '', { joint, movementClass }),
+  };
 }
 
 /** "L/180" → 180. */

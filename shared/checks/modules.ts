@@ -1,5 +1,6 @@
 import { calculateJointSchedule } from '../calc/joints/joints';
 import { calculateMoisture } from '../calc/moisture/monthly';
+import { RSI_SURFACE } from '../calc/moisture/surface';
 import type { ThermalResult } from '../calc/thermal/schema';
 import { calculateThermal, METHOD_LABELS } from '../calc/thermal/thermal';
 import { calculateWindSchedule } from '../calc/wind/attachment';
@@ -12,6 +13,7 @@ import type {
   ZoneDesign,
   ZoneResult,
 } from '../calc/wind/schema';
+import { type EngineMessage, engineMessage } from '../format/message-schema';
 import { jointsInputFor, moistureInputFor, thermalInputFor, windDesignInputFor } from './inputs';
 import {
   cavityInsulationR,
@@ -90,9 +92,7 @@ export const moistureModule = defineCheckModule({
       value: r.interstitial.driesOut,
       unit: '',
       traceStepIds: ['moisture.finalAccumulation'],
-      note: r.interstitial.condensationOccurs
-        ? undefined
-        : 'No interstitial condensation is predicted, so there is nothing to dry.',
+      note: r.interstitial.condensationOccurs ? undefined : engineMessage('nothing_to_dry', '', {}),
     },
     maxSurfaceRh: maxSurfaceRh(r),
   }),
@@ -115,8 +115,7 @@ export const moistureModule = defineCheckModule({
           margin: null,
           marginRatio: null,
           status: 'pass',
-          reason:
-            'Not applicable: in no month is the outside cold enough for the interior surface to reach 80 % RH (f_Rsi,max would be 0 or negative).',
+          reason: engineMessage('surface_not_applicable', '', {}),
         },
       ];
     const atBridges = r.surface.bridges.map(
@@ -128,7 +127,7 @@ export const moistureModule = defineCheckModule({
         traceStepIds: [`moisture.bridge.${i}.fRsi`, 'moisture.fRsiMax'],
         ...compare('min', fRsiMax, b.fRsi),
         status: b.pass ? 'pass' : 'fail',
-        reason: `ISO 13788 §5 at the thermal bridge: f_Rsi from its ISO 10211 solve with Rsi = 0.25 m²·K/W; critical month ${criticalMonth}.`,
+        reason: engineMessage('surface_at_bridge', '', { month: criticalMonth, rsi: RSI_SURFACE }),
       }),
     );
     const clearPass = r.months.every((m) => m.surface.pass);
@@ -137,7 +136,10 @@ export const moistureModule = defineCheckModule({
         ...base,
         ...compare('min', fRsiMax, fRsi),
         status: clearPass ? 'pass' : 'fail',
-        reason: `ISO 13788 §5: the surface stays at or below 80 % RH when f_Rsi ≥ f_Rsi,max; critical month ${criticalMonth}. Clear field${atBridges.length > 0 ? '; the solved bridges are checked below' : ' only — girts, clips and studs need their own f_Rsi (solve them on the build-up page)'}.`,
+        reason: engineMessage('surface_clear_field', '', {
+          month: criticalMonth,
+          bridgesSolved: atBridges.length > 0,
+        }),
       },
       ...atBridges,
     ];
@@ -153,7 +155,7 @@ interface SpacingVerdict {
   design: number | undefined;
   max: number | null;
   /** Why it is not evaluated (missing, outside the table), why it fails without a maximum, what governs. */
-  reasons: { missing: string; outside: string; none: string; note: string };
+  reasons: { missing: EngineMessage; outside: EngineMessage; none: EngineMessage; note: EngineMessage };
   traceStepIds: string[];
 }
 
@@ -185,13 +187,11 @@ function spacingCheck(z: ZoneResult, v: SpacingVerdict): ModuleCheck {
   };
 }
 
-/** "Not met at the design spacing: outward (utilisation 1.042)." for the checks of `d` that fail. */
-function failures(d: ZoneDesign, clip: boolean): string {
-  const failed = d.checks
+/** The checks of `d` that fail at the design spacing, with their utilisation (the clip's, or the others). */
+const failures = (d: ZoneDesign, clip: boolean) =>
+  d.checks
     .filter((c) => (c.check === 'clip') === clip && c.status === 'fails')
-    .map((c) => `${c.check} (utilisation ${c.utilisation!.toFixed(3)})`);
-  return failed.length > 0 ? ` Not met at the design spacing: ${failed.join(', ')}.` : '';
-}
+    .map((c) => ({ check: c.check, utilisation: c.utilisation! }));
 
 /**
  * The wind module's own verdicts per zone: the table carries the pressure, and the design girt and clip spacing as
@@ -212,12 +212,15 @@ function zoneChecks(z: ZoneResult, d: ZoneDesign): ModuleCheck[] {
       margin: null,
       marginRatio: null,
       status: z.status === 'outside-table' ? 'fail' : 'pass',
-      reason:
+      reason: engineMessage(
         z.status === 'outside-table'
-          ? 'Even the shortest span of the table does not carry this zone’s pressure: choose a stronger panel or add support.'
+          ? 'table_outside'
           : z.status === 'table-end'
-            ? 'The longest span of the table still carries the pressure; spans beyond the table are not extrapolated.'
-            : 'Found inside the table.',
+            ? 'table_end'
+            : 'table_inside',
+        'windPanel.loadSpanTable',
+        {},
+      ),
       traceStepIds: z.status === 'outside-table' ? [] : [`${at}.girtSpacing`],
     },
     spacingCheck(z, {
@@ -227,10 +230,15 @@ function zoneChecks(z: ZoneResult, d: ZoneDesign): ModuleCheck[] {
       design: d.girtSpacing,
       max: d.maxGirtSpacing,
       reasons: {
-        missing: 'the design girt spacing is not entered on the assembly',
-        outside: `the table cannot say — ${d.checks.find((c) => c.status === 'outside-table')?.reason ?? 'the design span is outside the table'} (tables are never extrapolated)`,
-        none: 'no girt spacing works: the panel table does not carry this zone’s pressure',
-        note: `${z.governingCheck ? `The maximum is governed by the ${z.governingCheck} check.` : ''}${failures(d, false)}`.trim(),
+        missing: engineMessage('girt_spacing_missing', 'attachment.girtSpacing', {}),
+        outside: engineMessage('girt_outside_table', 'attachment.girtSpacing', {
+          detail: d.checks.find((c) => c.status === 'outside-table')?.reason ?? null,
+        }),
+        none: engineMessage('no_girt_spacing_works', 'windPanel.loadSpanTable', {}),
+        note: engineMessage('girt_governed', '', {
+          governing: z.governingCheck ?? null,
+          failed: failures(d, false),
+        }),
       },
       traceStepIds: [
         ...(d.maxGirtSpacing === null ? [] : [`${at}.girtSpacing`]),
@@ -249,11 +257,11 @@ function zoneChecks(z: ZoneResult, d: ZoneDesign): ModuleCheck[] {
       reasons: {
         missing:
           d.clipSpacing === undefined
-            ? 'the design clip spacing is not entered on the assembly'
-            : 'the design girt spacing is not entered on the assembly, and the clip spacing is checked at it',
-        outside: 'the clip cannot be checked at a design girt spacing outside the table',
-        none: 'no clip spacing works at this girt spacing',
-        note: `The maximum clip spacing is found at the design girt spacing.${failures(d, true)}`,
+            ? engineMessage('clip_spacing_missing', 'attachment.clipSpacing', {})
+            : engineMessage('clip_needs_girt_spacing', 'attachment.girtSpacing', {}),
+        outside: engineMessage('clip_outside_table', 'attachment.girtSpacing', {}),
+        none: engineMessage('no_clip_spacing_works', 'attachment.girtSpacing', {}),
+        note: engineMessage('clip_at_design_girt', '', { failed: failures(d, true) }),
       },
       traceStepIds: [
         ...(d.maxClipAtDesignGirt === null ? [] : [`${at}.design.maxClipSpacing`]),
@@ -285,12 +293,11 @@ export const windModule = defineCheckModule({
               value: deflectionDenominator(limit),
               unit: 'L/x',
               traceStepIds: r.zones.map((z) => `wind.zone${z.zone}.girtSpacing`),
-              note: `The girt spacing is limited by the table’s ${limit} deflection column.`,
+              note: engineMessage('deflection_column', '', { limit }),
             }
           : {
               value: null,
-              reason:
-                'the panel’s load–span table has no deflection column, so no deflection limit is checked',
+              reason: engineMessage('no_deflection_column', 'windPanel.loadSpanTable', {}),
             },
     };
   },
@@ -321,8 +328,8 @@ export const jointsModule = defineCheckModule({
         status: j.verdict,
         reason:
           j.governing === 'minimum'
-            ? 'The smallest practical joint width governs.'
-            : `The joint’s ${j.governing} governs the width it needs.`,
+            ? engineMessage('joint_minimum_governs', `joints.${i}`, {})
+            : engineMessage('joint_governs', `joints.${i}`, { governing: j.governing }),
         traceStepIds: [`joints.${i}.requiredWidth`, `joints.${i}.margin`],
       }),
     ),

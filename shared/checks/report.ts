@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { traceStepSchema } from '../calc/trace';
-import { storedMessageSchema } from '../format/messages';
+import { metricNoteSchema, storedMessageSchema } from '../format/message-schema';
 import { wallCategorySchema } from '../schemas/assembly';
 import { climateZoneSchema } from '../schemas/project';
 import { fixed } from '../units/rounding';
@@ -67,7 +67,11 @@ export const checkSchema = z.object({
     .describe('Signed, in the criterion’s direction: ≥ 0 meets, < 0 short by |margin| (SI unit)'),
   marginRatio: z.number().nullable().describe('margin / |required|, dimensionless (null when required is 0)'),
   status: checkStatusSchema,
-  reason: z.string().describe('Plain words: why not evaluated, what governs, what was compared'),
+  reason: storedMessageSchema
+    .nullable()
+    .describe(
+      'Why not evaluated, what governs, what was compared: a message (`{ code, path, values }`) worded by the client (plain words in runs stored before); null when there is nothing to add',
+    ),
   module: z.string(),
   traceStepIds: z.array(z.string()),
   row: z.object({ climateZone: criteriaZoneSchema, wallCategory: wallCategorySchema }).optional(),
@@ -79,11 +83,18 @@ export const metricSchema = z.object({
   value: z.union([z.number(), z.boolean()]),
   unit: z.string(),
   traceStepIds: z.array(z.string()),
-  note: z.string().optional(),
+  /** What was counted or read: a message (plain words in runs stored before). */
+  note: z.union([metricNoteSchema, z.string()]).optional(),
   method: checkMethodSchema.optional(),
 });
 export type Metric = z.infer<typeof metricSchema>;
-export const metricOutcomeSchema = z.union([metricSchema, z.object({ value: z.null(), reason: z.string() })]);
+export const metricOutcomeSchema = z.union([
+  metricSchema,
+  z.object({
+    value: z.null(),
+    reason: storedMessageSchema.describe('Why there is no value (words in older runs)'),
+  }),
+]);
 export type MetricOutcome = z.infer<typeof metricOutcomeSchema>;
 
 export const moduleOutcomeSchema = z.object({

@@ -1,13 +1,19 @@
 import { CalcInputError } from '../calc/errors';
 import type { TraceStep } from '../calc/trace';
-import { engineMessage, missingText, storedMessageText } from '../format/messages';
+import { type EngineMessage, engineMessage } from '../format/message-schema';
 import type { AssemblyInput } from '../schemas/assembly';
-import { WALL_CATEGORY_LABELS } from '../schemas/assembly';
-import { applicableRows, type CriteriaRowInput, criterionSpec, type MetricKey, zoneLabel } from './criteria';
-import type { ProjectForChecks } from './inputs';
+import { applicableRows, type CriteriaRowInput, criterionSpec, type MetricKey } from './criteria';
+import type { CheckInput, ProjectForChecks } from './inputs';
 import { type CheckModule, compare } from './module';
 import { CHECK_MODULES } from './modules';
-import { type Check, type CheckReport, type MetricOutcome, type ModuleOutcome, verdictOf } from './report';
+import {
+  type Check,
+  type CheckReport,
+  type Metric,
+  type MetricOutcome,
+  type ModuleOutcome,
+  verdictOf,
+} from './report';
 
 /*
  * The compliance runner: every registered module builds its input from the assembly and its project, runs,
@@ -34,17 +40,9 @@ export interface ModuleRun {
   cautions: string[];
 }
 
-/** Why a module gave no result, in plain words (shared/format words the messages). */
-function whyNot(run: ModuleRun): string {
-  const o = run.outcome;
-  if (o.status === 'missing') return missingText(o.missing);
-  return `the ${run.module.label.toLowerCase()} refused the input (${o.error === null ? '' : storedMessageText(o.error)})`;
-}
-
 /** A module that did not run: every metric it provides with the reason, and its one `not_evaluated` check. */
-function notRun(module: CheckModule, outcome: ModuleOutcome): ModuleRun {
+function notRun(module: CheckModule, outcome: ModuleOutcome, reason: EngineMessage): ModuleRun {
   const run: ModuleRun = { module, outcome, metrics: new Map(), checks: [], trace: [], cautions: [] };
-  const reason = whyNot(run);
   for (const key of module.provides) run.metrics.set(key, { value: null, reason });
   run.checks.push({
     id: `${module.id}.run`,
@@ -72,28 +70,39 @@ export function runModule(
   project: ProjectForChecks,
 ): ModuleRun {
   const base = { id: module.id, label: module.label };
-  const built = module.build(assembly, project);
+  const built: CheckInput<unknown> = module.build(assembly, project);
   if (built.status === 'missing')
-    return notRun(module, { ...base, status: 'missing', missing: built.missing, error: null, result: null });
+    return notRun(
+      module,
+      { ...base, status: 'missing', missing: built.missing, error: null, result: null },
+      engineMessage('module_missing', '', { items: built.missing }),
+    );
   let result: unknown;
   try {
     result = module.run(built.input);
   } catch (e) {
     if (!(e instanceof CalcInputError)) throw e;
-    return notRun(module, {
-      ...base,
-      status: 'error',
-      missing: [],
-      error: engineMessage('calc_refused', e.field, { reason: e.reason }),
-      result: null,
-    });
+    return notRun(
+      module,
+      {
+        ...base,
+        status: 'error',
+        missing: [],
+        error: engineMessage('calc_refused', e.field, { reason: e.reason }),
+        result: null,
+      },
+      engineMessage('module_refused', e.field, { module: module.label, reason: e.reason }),
+    );
   }
   const reported = module.metrics(result, assembly);
   const metrics = new Map<MetricKey, MetricOutcome>();
   for (const key of module.provides)
     metrics.set(
       key,
-      reported[key] ?? { value: null, reason: `the ${module.label.toLowerCase()} did not report it` },
+      reported[key] ?? {
+        value: null,
+        reason: engineMessage('metric_not_reported', '', { module: module.label }),
+      },
     );
   return {
     module,
@@ -113,7 +122,7 @@ type CriterionBase = Omit<
   'provided' | 'margin' | 'marginRatio' | 'status' | 'reason' | 'module' | 'traceStepIds' | 'method'
 >;
 
-const notEvaluated = (base: CriterionBase, module: string, reason: string): Check => ({
+const notEvaluated = (base: CriterionBase, module: string, reason: Check['reason']): Check => ({
   ...base,
   provided: null,
   margin: null,
@@ -123,6 +132,12 @@ const notEvaluated = (base: CriterionBase, module: string, reason: string): Chec
   module,
   traceStepIds: [],
 });
+
+/** A yes/no criterion the table sets to "no", with the metric's note (a note stored as words is kept as such). */
+const notRequired = (note: Metric['note'] | null): Check['reason'] =>
+  typeof note === 'string'
+    ? `The table does not require it. ${note}`.trim()
+    : engineMessage('not_required', '', { note: note ?? null });
 
 function criterionCheck(
   row: CriteriaRowInput,
@@ -140,23 +155,24 @@ function criterionCheck(
     row: { climateZone: row.climateZone, wallCategory: row.wallCategory },
   };
   const found = metrics.get(spec.metric);
-  if (!found) return notEvaluated(base, '—', `no check module measures ${spec.label.toLowerCase()} yet`);
+  if (!found)
+    return notEvaluated(base, '—', engineMessage('no_module_measures', '', { criterion: spec.label }));
   const { outcome, run } = found;
   if (outcome.value === null) return notEvaluated(base, run.module.id, outcome.reason);
   const method = 'method' in outcome && outcome.method ? { method: outcome.method } : {};
-  const note = 'note' in outcome && outcome.note ? outcome.note : '';
+  const note = 'note' in outcome && outcome.note ? outcome.note : null;
   if (spec.direction === 'required') {
     if (typeof row.value !== 'boolean' || typeof outcome.value !== 'boolean')
-      return notEvaluated(base, run.module.id, 'the criterion and the metric are not both yes/no');
+      return notEvaluated(base, run.module.id, engineMessage('not_both_yes_no', '', {}));
     return Object.assign(checked(base, run, outcome.traceStepIds, outcome.value), method, {
       margin: null,
       marginRatio: null,
       status: !row.value || outcome.value ? 'pass' : 'fail',
-      reason: row.value ? note : `The table does not require it. ${note}`.trim(),
+      reason: row.value ? note : notRequired(note),
     } as const);
   }
   if (typeof row.value !== 'number' || typeof outcome.value !== 'number')
-    return notEvaluated(base, run.module.id, 'the criterion and the metric are not both numbers');
+    return notEvaluated(base, run.module.id, engineMessage('not_both_numbers', '', {}));
   return Object.assign(
     checked(base, run, outcome.traceStepIds, outcome.value),
     method,
@@ -211,7 +227,7 @@ export function checksOf(
       margin: null,
       marginRatio: null,
       status: 'not_evaluated',
-      reason: `the code table has no row for climate zone ${zoneLabel(climateZone)} (or all zones) and ${WALL_CATEGORY_LABELS[wallCategory].toLowerCase()}s, so nothing was checked against it`,
+      reason: engineMessage('no_matching_rows', '', { climateZone, wallCategory }),
       module: '—',
       traceStepIds: [],
     });

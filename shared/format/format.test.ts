@@ -50,6 +50,7 @@ describe('pass and fail in words', () => {
       required: '≤ 0.35\u202fW/(m²·K)',
       provided: '0.307\u202fW/(m²·K)',
       result: 'meets — margin 12\u00a0%',
+      reason: '',
     });
     expect(
       checkResultText(check({ status: 'fail', margin: -0.0212, marginRatio: null, unit: 'm' }), 'SI'),

@@ -1,5 +1,6 @@
 import type { Check, CheckStatus, Verdict } from '../checks/report';
 import type { UnitSystem } from '../units';
+import { storedMessageText } from './messages';
 import { formatterFor } from './quantities';
 
 /*
@@ -28,23 +29,27 @@ export const VERDICT_WORDS: Record<Verdict, { glyph: string; word: string; sente
 export function checkResultText(c: Check, system: UnitSystem): string {
   const f = formatterFor(system);
   const word = STATUS_WORDS[c.status].word;
-  if (c.status === 'not_evaluated') return `${word} — ${c.reason}`;
+  if (c.status === 'not_evaluated') return `${word} — ${storedMessageText(c.reason, system)}`;
   if (c.margin === null) return word;
   if (c.status === 'fail') return `${word} — short by ${f.siValue(Math.abs(c.margin), c.unit)}`;
   if (c.marginRatio !== null) return `${word} — margin ${f.percent(c.marginRatio)}`;
   return `${word} — margin ${f.siValue(c.margin, c.unit)}`;
 }
 
-/** The figures of one check as the checks page and the sheet print them: required (with ≤ / ≥), provided, result. */
+/**
+ * The figures of one check as the checks page and the sheet print them: required (with ≤ / ≥), provided, result,
+ * and `reason` — what governs or was compared, in words ('' for a check not evaluated: its result says why).
+ */
 export function checkFigures(
   c: Check,
   system: UnitSystem,
-): { required: string; provided: string; result: string } {
+): { required: string; provided: string; result: string; reason: string } {
   const f = formatterFor(system);
   const dir = c.direction === 'max' ? '≤ ' : c.direction === 'min' ? '≥ ' : '';
   return {
     required: c.required === null ? '—' : `${dir}${f.siValue(c.required, c.unit)}`,
     provided: f.siValue(c.provided, c.unit),
     result: checkResultText(c, system),
+    reason: c.status === 'not_evaluated' ? '' : storedMessageText(c.reason, system),
   };
 }

@@ -1,5 +1,6 @@
 import { CalcInputError, requireInRange } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
+import { type EngineMessage, engineMessage } from '@shared/format/message-schema';
 import { type Assembly, assemble } from './assembly';
 import {
   type DiffusionPath,
@@ -95,8 +96,6 @@ function chooseStart(
     if (condensing[m] && !condensing[(m + 11) % 12]) return { index: m, rule: 'firstCondensingMonth' };
   return { index: 0, rule: 'condensationEveryMonth' };
 }
-
-const grams = (kg: number): string => `${(kg * 1000).toFixed(0)} g/m²`;
 
 /** Boundary conditions, node temperatures and p_sat of all 12 months. */
 interface Climate {
@@ -289,35 +288,27 @@ function surfaceSummary(
   return { fRsi, criticalMonth, fRsiMax, bridges, pass };
 }
 
+/** The result as data (shared/format words it): condensation, the clear-field surface and the solved bridges. */
 function verdict(
   interstitial: Interstitial,
   surface: MoistureResult['surface'],
   months: readonly MonthResult[],
-): string {
+): EngineMessage {
   const worst = interstitial.planes.reduce<Plane | undefined>(
     (a, b) => (a === undefined || b.maxAccumulation > a.maxAccumulation ? b : a),
     undefined,
   );
-  const inside = !interstitial.condensationOccurs
-    ? 'No interstitial condensation is predicted in any month.'
-    : interstitial.driesOut
-      ? `Interstitial condensation is predicted (at most ${grams(interstitial.maxAccumulation)} in ${MONTH_NAMES[(interstitial.maxAccumulationMonth ?? 1) - 1]}, mostly at ${worst?.label}) but it all evaporates within the year; check that amount against what the materials there tolerate.`
-      : `Interstitial condensation builds up: it peaks at ${grams(interstitial.maxAccumulation)} in ${MONTH_NAMES[(interstitial.maxAccumulationMonth ?? 1) - 1]} and ${grams(interstitial.finalAccumulation)} remain after the 12 months, so water accumulates year on year — the wall fails the ISO 13788 balance.`;
-  const failing = months.filter((month) => !month.surface.pass).map((month) => MONTH_NAMES[month.month - 1]);
-  const coldBridges = surface.bridges.filter((b) => !b.pass);
-  const atBridges =
-    coldBridges.length === 0
-      ? surface.bridges.length > 0 && surface.fRsiMax !== null
-        ? ` At the thermal bridges solved (${surface.bridges.map((b) => b.name).join(', ')}) it stays at or below 80 % RH too.`
-        : ''
-      : ` Mould risk at ${coldBridges.map((b) => `${b.name} (f_Rsi ${b.fRsi.toFixed(3)})`).join(', ')}: below f_Rsi,max ${surface.fRsiMax?.toFixed(3)}.`;
-  const onSurface =
-    failing.length === 0
-      ? surface.fRsiMax === null
-        ? 'Surface humidity check not applicable: in no month is the outside cold enough for the interior surface to reach 80 % RH.'
-        : `The clear-field interior surface stays at or below 80 % RH in every month (f_Rsi ${surface.fRsi.toFixed(3)} ≥ f_Rsi,max ${surface.fRsiMax.toFixed(3)}).`
-      : `Mould risk: the clear-field interior surface exceeds 80 % RH in ${failing.join(', ')} (f_Rsi ${surface.fRsi.toFixed(3)}).`;
-  return `${inside} ${onSurface}${atBridges}`;
+  return engineMessage('moisture_verdict', '', {
+    condensation: !interstitial.condensationOccurs ? 'none' : interstitial.driesOut ? 'dries' : 'builds',
+    maxAccumulation: interstitial.maxAccumulation,
+    finalAccumulation: interstitial.finalAccumulation,
+    month: interstitial.maxAccumulationMonth ?? null,
+    plane: worst?.label ?? null,
+    fRsi: surface.fRsi,
+    fRsiMax: surface.fRsiMax,
+    failingMonths: months.filter((m) => !m.surface.pass).map((m) => m.month),
+    bridges: surface.bridges.map(({ name, fRsi, pass }) => ({ name, fRsi, pass })),
+  });
 }
 
 const START_FORMULA: Record<StartRule, string> = {

@@ -1,5 +1,6 @@
 import { heatFlowSchema, layerSchema } from '@shared/calc/thermal/schema';
 import { traceStepSchema } from '@shared/calc/trace';
+import { storedMessageSchema } from '@shared/format/message-schema';
 import { PERM_0C_TO_SI, PERM_23C_TO_SI, QUANTITIES, type Unbranded } from '@shared/units';
 import { trimmedFixed } from '@shared/units/rounding';
 import { z } from 'zod';
@@ -273,7 +274,9 @@ export const moistureResultSchema = z.object({
       .describe('The surface check at each thermal bridge given'),
     pass: z.boolean().describe('True when every month passes, at the clear field and at every bridge'),
   }),
-  verdict: z.string().describe('The result in plain words'),
+  verdict: storedMessageSchema.describe(
+    'The result as a `moisture_verdict` message (`{ code, path, values }`, SI values), worded by the client; plain words in results stored before',
+  ),
   trace: z.array(traceStepSchema),
   warnings: z.array(z.string()),
 });

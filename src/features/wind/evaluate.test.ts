@@ -62,7 +62,7 @@ describe('the attachment page computed in the browser', () => {
     const a = { ...demoAssembly(), windPanel: undefined };
     const e = evaluateAttachment(attachmentFormValues(a), a, demoProject(false), 'SI');
     expect(e.result).toBeNull();
-    expect(e.missing.map(messageText)).toEqual([
+    expect(e.missing.map((m) => messageText(m))).toEqual([
       'the project’s wind data',
       'the panel’s load–span table and clip capacity',
     ]);
@@ -75,7 +75,7 @@ describe('the attachment page computed in the browser', () => {
     values.allowableLoad = Number.NaN;
     values.clipKind = 'rating';
     const e = evaluateAttachment(values, a, demoProject(false), 'SI');
-    expect(e.missing.map(messageText)).toEqual(['the project’s wind data']);
+    expect(e.missing.map((m) => messageText(m))).toEqual(['the project’s wind data']);
     expect(e.errors.allowableLoad).toBe('Enter a number.');
   });
 });

@@ -102,8 +102,8 @@ function CheckTable({
                     {zoneLabel(c.row.climateZone)} · {categoryLabel(labels, c.row.wallCategory)}
                   </span>
                 ) : null}
-                {c.status !== 'not_evaluated' && c.reason ? (
-                  <span className="block text-xs text-ink-muted">{c.reason}</span>
+                {figures.reason ? (
+                  <span className="block text-xs text-ink-muted">{figures.reason}</span>
                 ) : null}
                 {c.method ? (
                   <details className="mt-1 text-xs" data-testid="check-method">

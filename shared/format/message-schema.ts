@@ -1,0 +1,128 @@
+import { z } from 'zod';
+
+/*
+ * The engine's and the runner's messages as data — `{ path, code, values }` — one discriminated union by `code`.
+ * `path` says where the thing is put right (an assembly or project field, or the calculation's own field path;
+ * '' when nothing is to be put right); `values` hold names, keys and SI numbers, never words of a sentence.
+ * Worded by `messageText` (messages.ts). This file imports zod only: the engines' schemas use it, and the
+ * wording's imports (the formatter, the code tables) reach back into them.
+ */
+
+const none = z.object({});
+const message = <C extends string, V extends z.ZodObject>(code: C, values: V) =>
+  z.object({ code: z.literal(code), path: z.string(), values });
+const month = z.number().int().min(1).max(12);
+const names = z.array(z.string());
+
+/** What a module lacks to build its input (`moduleOutcome.missing`). */
+const inputMissing = [
+  /** A layer has no vapour data (`path` vapour.<i>; `layer` is the index i). */
+  message('vapour_missing', z.object({ layer: z.number().int().min(0), name: z.string() })),
+  message('climate_missing', none),
+  message('wind_missing', none),
+  message('panel_missing', none),
+  message('joints_missing', none),
+  message('takeoff_missing', none),
+] as const;
+export const inputMissingSchema = z.discriminatedUnion('code', [...inputMissing]);
+export type InputMissing = z.infer<typeof inputMissingSchema>;
+
+/** What a metric counted or read (a metric's `note`; the reason of a criterion's check). */
+const metricNotes = [
+  /** Continuous insulation: the layers counted and the declared-R layers left out; λ limit in W/(m·K). */
+  message('ci_counted', z.object({ counted: names, declared: names, maxLambda: z.number() })),
+  /** Cavity insulation: each counted fill and its framed layer; λ limit in W/(m·K). */
+  message(
+    'cavity_counted',
+    z.object({ counted: z.array(z.object({ fill: z.string(), layer: z.string() })), maxLambda: z.number() }),
+  ),
+  /** Highest interior surface RH: its month and the surface resistance used, m²·K/W. */
+  message('surface_rh_highest', z.object({ month, rsi: z.number() })),
+  message('sealant_lowest', z.object({ joint: z.string(), movementClass: z.string() })),
+  message('deflection_column', z.object({ limit: z.string() })),
+  message('nothing_to_dry', none),
+] as const;
+export const metricNoteSchema = z.discriminatedUnion('code', [...metricNotes]);
+export type MetricNote = z.infer<typeof metricNoteSchema>;
+
+const failedCheck = z.object({ check: z.string(), utilisation: z.number() });
+
+export const engineMessageSchema = z.discriminatedUnion('code', [
+  ...inputMissing,
+  ...metricNotes,
+  /** A calculation refused its input (`CalcInputError`): `path` is the calculation's field, `reason` its words. */
+  message('calc_refused', z.object({ reason: z.string() })),
+
+  // Why a criterion or a module could not be evaluated (the runner).
+  message('module_missing', z.object({ items: z.array(inputMissingSchema) })),
+  /** `path` is the calculation's field, `reason` the engine's words of the refusal. */
+  message('module_refused', z.object({ module: z.string(), reason: z.string() })),
+  message('metric_not_reported', z.object({ module: z.string() })),
+  message('no_module_measures', z.object({ criterion: z.string() })),
+  message('not_both_yes_no', none),
+  message('not_both_numbers', none),
+  /** No row of the code table applies: the project's climate zone and the wall category (keys). */
+  message('no_matching_rows', z.object({ climateZone: z.string(), wallCategory: z.string() })),
+  /** A yes/no criterion the table sets to "no": met whatever the metric, with its note. */
+  message('not_required', z.object({ note: metricNoteSchema.nullable() })),
+  message('joints_empty', none),
+  message('no_deflection_column', none),
+
+  // The moisture module's own checks.
+  message('surface_not_applicable', none),
+  /** `month`: the critical month (1–12) of the surface check. */
+  message('surface_at_bridge', z.object({ month: month.nullable(), rsi: z.number() })),
+  message('surface_clear_field', z.object({ month: month.nullable(), bridgesSolved: z.boolean() })),
+
+  // The wind module's own checks, per zone.
+  message('table_outside', none),
+  message('table_end', none),
+  message('table_inside', none),
+  message('girt_spacing_missing', none),
+  message('clip_spacing_missing', none),
+  message('clip_needs_girt_spacing', none),
+  /** `detail`: the design check's own words for why the table cannot say (null: the design span is outside). */
+  message('girt_outside_table', z.object({ detail: z.string().nullable() })),
+  message('clip_outside_table', none),
+  message('no_girt_spacing_works', none),
+  message('no_clip_spacing_works', none),
+  message('girt_governed', z.object({ governing: z.string().nullable(), failed: z.array(failedCheck) })),
+  message('clip_at_design_girt', z.object({ failed: z.array(failedCheck) })),
+
+  // The joints module's own checks.
+  message('joint_minimum_governs', none),
+  message('joint_governs', z.object({ governing: z.string() })),
+
+  /** The moisture result: condensation (none, dries out, builds up) and the surface checks; SI values. */
+  message(
+    'moisture_verdict',
+    z.object({
+      condensation: z.enum(['none', 'dries', 'builds']),
+      /** kg/m² */
+      maxAccumulation: z.number(),
+      /** kg/m² left after the 12 months */
+      finalAccumulation: z.number(),
+      month: month.nullable(),
+      /** Where most of it condenses. */
+      plane: z.string().nullable(),
+      fRsi: z.number(),
+      fRsiMax: z.number().nullable(),
+      /** Months whose clear-field surface exceeds 80 % RH. */
+      failingMonths: z.array(month),
+      bridges: z.array(z.object({ name: z.string(), fRsi: z.number(), pass: z.boolean() })),
+    }),
+  ),
+]);
+export type EngineMessage = z.infer<typeof engineMessageSchema>;
+export type EngineMessageCode = EngineMessage['code'];
+
+/** A message built in code, its values checked against its code. */
+export const engineMessage = <C extends EngineMessageCode>(
+  code: C,
+  path: string,
+  values: Extract<EngineMessage, { code: C }>['values'],
+): Extract<EngineMessage, { code: C }> => ({ code, path, values }) as Extract<EngineMessage, { code: C }>;
+
+/** A stored message: data (runs since messages became data) or the words a run stored before. */
+export const storedMessageSchema = z.union([engineMessageSchema, z.string()]);
+export type StoredMessage = z.infer<typeof storedMessageSchema>;

@@ -1,3 +1,4 @@
+import { steelStudsWithBatts } from '@shared/calc/thermal/examples';
 import type { MoistureInput, MoistureLayer, MonthClimate } from './schema';
 
 /**
@@ -69,19 +70,7 @@ export function metalPanelMoistureWall({ vapourRetarder = true } = {}): Moisture
       materialId: 'gypsum-board',
       vapour: { kind: 'mu', mu: 10 },
     },
-    {
-      kind: 'framed',
-      name: 'Steel studs 92 mm @ 406 mm with batts',
-      thickness: 0.092,
-      metal: true,
-      flangeWidth: 0.041,
-      spacing: 0.406,
-      sections: [
-        { name: 'Glass-fibre batt', conductivity: 0.04, fraction: 1 - 0.0011 / 0.406 },
-        { name: 'Steel web', conductivity: 50, fraction: 0.0011 / 0.406 },
-      ],
-      vapour: { kind: 'mu', mu: 1 },
-    },
+    { ...steelStudsWithBatts(), vapour: { kind: 'mu', mu: 1 } },
     {
       kind: 'homogeneous',
       name: 'Polyethylene film',

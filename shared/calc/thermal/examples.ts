@@ -1,5 +1,19 @@
 import { siValue } from '@shared/units';
-import type { ThermalInput } from './schema';
+import type { FramedLayer, ThermalInput } from './schema';
+
+/** 92 mm steel studs at 406 mm with glass-fibre batts (the 1.1 mm web's share of the spacing is steel). */
+export const steelStudsWithBatts = (): FramedLayer => ({
+  kind: 'framed',
+  name: 'Steel studs 92 mm @ 406 mm with batts',
+  thickness: 0.092,
+  metal: true,
+  flangeWidth: 0.041,
+  spacing: 0.406,
+  sections: [
+    { name: 'Glass-fibre batt', conductivity: 0.04, fraction: 1 - 0.0011 / 0.406 },
+    { name: 'Steel web', conductivity: 50, fraction: 0.0011 / 0.406 },
+  ],
+});
 
 /**
  * A metal-panel rainscreen over mineral wool and an insulated steel-stud backup wall — ten layers, one of
@@ -26,18 +40,7 @@ export const metalPanelWall = (): ThermalInput => ({
     },
     { kind: 'homogeneous', name: 'Exterior gypsum sheathing', thickness: 0.0159, conductivity: 0.25 },
     { kind: 'air', name: 'Gap behind sheathing', thickness: 0.005, ventilation: 'unventilated' },
-    {
-      kind: 'framed',
-      name: 'Steel studs 92 mm @ 406 mm with batts',
-      thickness: 0.092,
-      metal: true,
-      flangeWidth: 0.041,
-      spacing: 0.406,
-      sections: [
-        { name: 'Glass-fibre batt', conductivity: 0.04, fraction: 1 - 0.0011 / 0.406 },
-        { name: 'Steel web', conductivity: 50, fraction: 0.0011 / 0.406 },
-      ],
-    },
+    steelStudsWithBatts(),
     {
       kind: 'homogeneous',
       name: 'Polyethylene film',

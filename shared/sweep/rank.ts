@@ -11,7 +11,7 @@ import type { SweepPlan } from './sweep';
  */
 
 /** Insulation thickness the price is quoted per, m (25 mm). */
-const PRICE_THICKNESS = 0.025;
+export const PRICE_THICKNESS = 0.025;
 
 const need = <T>(value: T | undefined, field: string, what: string): T => {
   if (value === undefined) throw new CalcInputError(field, `the sweep varies ${what}: give its cost`);

@@ -70,6 +70,15 @@ export const libraryKeys = {
   bridgeValues: (orgId: string) => [...libraryKeys.all, 'bridge-values', orgId] as const,
   attachmentProducts: (orgId: string) => [...libraryKeys.all, 'attachment-products', orgId] as const,
   inspectionTemplate: (orgId: string) => [...libraryKeys.all, 'inspection-template', orgId] as const,
+  sweepCosts: (orgId: string) => [...libraryKeys.all, 'sweep-costs', orgId] as const,
+};
+
+export const sweepKeys = {
+  all: ['sweeps'] as const,
+  list: (assemblyId: string) => [...sweepKeys.all, 'list', assemblyId] as const,
+  detail: (sweepId: string) => [...sweepKeys.all, 'detail', sweepId] as const,
+  compare: (assemblyId: string, from: string, to: string) =>
+    [...sweepKeys.all, 'compare', assemblyId, from, to] as const,
 };
 
 export const criteriaKeys = {

@@ -42,8 +42,15 @@ const FEATURE_USES: Record<string, string[]> = {
   // revision of the assembly.
   'features/joints': ['features/takeoff'],
   // A sweep reads its code table's rows, and makes a chosen variant an assembly or a revision of this one (the
-  // assemblies' create and save calls and their number boxes).
-  'features/sweep': ['features/assemblies', 'features/criteria'],
+  // assemblies' create and save calls and their number boxes); it prices from the firm library by the person's
+  // firm role (me), and prints a saved sweep on a check run's compliance sheet (the runs and the sheet's address).
+  'features/sweep': [
+    'features/assemblies',
+    'features/criteria',
+    'features/me',
+    'features/checks',
+    'features/sheets',
+  ],
   // A field report's code is confirmed on the same public page as a sheet's, in the same issuer frame.
   // A deficiency's owner is picked from the project's members.
   'features/inspections': ['features/sheets', 'features/members'],

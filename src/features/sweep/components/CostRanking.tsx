@@ -1,59 +1,45 @@
+import { canInFirm, FIRM_ROLE_LABELS } from '@shared/auth/permissions';
 import { CalcInputError } from '@shared/calc/errors';
 import { MOVEMENT_CLASSES } from '@shared/calc/joints/schema';
 import type { AssemblyInput } from '@shared/schemas/assembly';
 import { rankVariants } from '@shared/sweep/rank';
-import type { SweepCosts, SweepVariantResult } from '@shared/sweep/schema';
+import type { SweepVariantResult } from '@shared/sweep/schema';
 import type { SweepPlan } from '@shared/sweep/sweep';
 import type { UnitSystem } from '@shared/units';
-import { useMemo } from 'react';
+import { useEffect, useMemo } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { Notice } from '../../../components/ui/Notice';
 import { TextInput } from '../../../components/ui/TextInput';
 import { formatNumber } from '../../../lib/quantities';
+import {
+  type CostDraft,
+  type CostSlot,
+  costsOf,
+  costToShown,
+  costUnit,
+  prefillCosts,
+  slotText,
+  withSlot,
+} from '../costs';
 import { valueText } from '../present';
-
-/** The costs as typed (text), so a box can be empty or wrong without losing what was typed. */
-export interface CostDraft {
-  insulation: string;
-  clip: string;
-  girt: string;
-  sealantPerMetre: Partial<Record<(typeof MOVEMENT_CLASSES)[number], string>>;
-  sealantMetres: string;
-}
-export const emptyCosts: CostDraft = {
-  insulation: '',
-  clip: '',
-  girt: '',
-  sealantPerMetre: {},
-  sealantMetres: '',
-};
-
-const amount = (t: string) => {
-  const s = t.trim();
-  return s === '' || !/^\d+(\.\d*)?$|^\.\d+$/.test(s) ? undefined : Number(s);
-};
-
-/** The costs the ranking reads (a box left empty or unreadable is left out: the ranking names it). */
-export function costsOf(d: CostDraft): SweepCosts {
-  const perMetre = Object.fromEntries(
-    Object.entries(d.sealantPerMetre).flatMap(([k, v]) =>
-      amount(v ?? '') === undefined ? [] : [[k, amount(v ?? '')]],
-    ),
-  );
-  const metres = amount(d.sealantMetres);
-  return {
-    insulation: amount(d.insulation),
-    clip: amount(d.clip),
-    girt: amount(d.girt),
-    sealant: metres === undefined ? undefined : { perMetre, metresPerSquareMetre: metres },
-  };
-}
+import { type FirmLibrary, LibraryCost } from './LibraryCost';
 
 const money = (v: number) => formatNumber(v, 2);
 
+/** What the person may do with the firm's library, in words (shown once above the boxes). */
+function libraryNote(l: FirmLibrary): string {
+  if (l.role === null)
+    return `You are not a member of ${l.firmName}, so its cost library is not shown: the costs typed here are for this visit.`;
+  if (!canInFirm(l.role, 'firm.write'))
+    return `Costs come from the library of ${l.firmName} where it has them. Only its editors and administrators save costs to it (your firm role: ${FIRM_ROLE_LABELS[l.role]}).`;
+  return `Costs come from the library of ${l.firmName} where it has them; a changed or new cost can be saved to it.`;
+}
+
 /**
- * The cost of what the sweep varies, typed here (any one currency), and the passing variants cheapest first —
- * what governs each, and how far the runner-up is from the cheapest.
+ * The cost of what the sweep varies — prefilled from the firm library, typed in the person's units (any one
+ * currency), saved to the library by its editors — and the passing variants cheapest first: what governs each,
+ * and how far the runner-up is from the cheapest.
  */
 export function CostRanking({
   plan,
@@ -64,6 +50,7 @@ export function CostRanking({
   system,
   chosen,
   onChoose,
+  library,
 }: {
   plan: SweepPlan;
   assembly: AssemblyInput;
@@ -73,6 +60,7 @@ export function CostRanking({
   system: UnitSystem;
   chosen: number | null;
   onChoose: (index: number) => void;
+  library: FirmLibrary;
 }) {
   const kinds = plan.axes.map((x) => x.kind);
   const needs = {
@@ -81,36 +69,62 @@ export function CostRanking({
     girt: kinds.includes('girtSpacing'),
     sealant: kinds.includes('sealantClass'),
   };
+  // Empty boxes take the library's price once it has loaded (a box typed or emptied before keeps its text).
+  useEffect(() => {
+    if (!library.entries) return;
+    const next = prefillCosts(draft, library.entries, system);
+    if (next !== draft) onDraft(next);
+  }, [library.entries, draft, system, onDraft]);
   const ranking = useMemo(() => {
     try {
-      return { ok: true as const, value: rankVariants(plan, assembly, variants, costsOf(draft)) };
+      return { ok: true as const, value: rankVariants(plan, assembly, variants, costsOf(draft, system)) };
     } catch (e) {
       if (e instanceof CalcInputError) return { ok: false as const, reason: e.reason };
       throw e;
     }
-  }, [plan, assembly, variants, draft]);
-  const box = (key: 'insulation' | 'clip' | 'girt', label: string) => (
-    <Field label={label} className="w-56">
-      {(c) => (
-        <TextInput
-          {...c}
-          inputMode="decimal"
-          value={draft[key]}
-          onChange={(e) => onDraft({ ...draft, [key]: e.target.value })}
-        />
-      )}
-    </Field>
+  }, [plan, assembly, variants, draft, system]);
+  // The currency of the library entries the boxes came from: one is named; several cannot be added up.
+  const currencies = [
+    ...new Set(
+      Object.values(draft.from).flatMap((id) => library.entries?.find((e) => e.id === id)?.currency ?? []),
+    ),
+  ];
+  const currency = currencies.length === 1 ? ` ${currencies[0]}` : '';
+  const perWall = (v: number, more = '') =>
+    `${money(costToShown(v, 'wall', system))}${currency}${more} ${costUnit('wall', system)}`;
+  const box = (slot: CostSlot, label: string) => (
+    <div key={slot} className="flex w-full flex-col gap-1 sm:w-60">
+      <Field label={label}>
+        {(c) => (
+          <TextInput
+            {...c}
+            inputMode="decimal"
+            value={slotText(draft, slot)}
+            onChange={(e) => onDraft(withSlot(draft, slot, e.target.value))}
+          />
+        )}
+      </Field>
+      <LibraryCost
+        slot={slot}
+        label={label}
+        library={library}
+        draft={draft}
+        onDraft={onDraft}
+        system={system}
+      />
+    </div>
   );
   const top = ranking.ok ? ranking.value.ranked.slice(0, 5) : [];
   return (
     <div className="flex flex-col gap-4">
-      <div className="flex flex-wrap gap-4">
-        {needs.insulation ? box('insulation', 'Insulation, per m² of wall per 25 mm') : null}
+      <p className="max-w-prose text-sm text-ink-muted">{libraryNote(library)}</p>
+      <div className="flex flex-wrap items-start gap-4">
+        {needs.insulation ? box('insulation', `Insulation, ${costUnit('insulation', system)}`) : null}
         {needs.clip ? box('clip', 'Per clip') : null}
-        {needs.girt ? box('girt', 'Girt, per m') : null}
+        {needs.girt ? box('girt', `Girt, ${costUnit('girt', system)}`) : null}
         {needs.sealant ? (
           <>
-            <Field label="Sealant, m per m² of wall" className="w-56">
+            <Field label={`Sealant, ${costUnit('sealantMetres', system)}`} className="w-full sm:w-60">
               {(c) => (
                 <TextInput
                   {...c}
@@ -120,30 +134,21 @@ export function CostRanking({
                 />
               )}
             </Field>
-            {MOVEMENT_CLASSES.filter((cls) => plan.axes.some((x) => x.values.includes(cls))).map((cls) => (
-              <Field
-                key={cls}
-                label={`Sealant ${valueText('sealantClass', cls, system)}, per m`}
-                className="w-44"
-              >
-                {(c) => (
-                  <TextInput
-                    {...c}
-                    inputMode="decimal"
-                    value={draft.sealantPerMetre[cls] ?? ''}
-                    onChange={(e) =>
-                      onDraft({
-                        ...draft,
-                        sealantPerMetre: { ...draft.sealantPerMetre, [cls]: e.target.value },
-                      })
-                    }
-                  />
-                )}
-              </Field>
-            ))}
+            {MOVEMENT_CLASSES.filter((cls) => plan.axes.some((x) => x.values.includes(cls))).map((cls) =>
+              box(
+                `sealant ${cls}`,
+                `Sealant ${valueText('sealantClass', cls, system)}, ${costUnit('sealant', system)}`,
+              ),
+            )}
           </>
         ) : null}
       </div>
+      {currencies.length > 1 ? (
+        <Notice
+          tone="warning"
+          title={`The library costs chosen are in different currencies (${currencies.join(', ')}): type them in one currency before comparing.`}
+        />
+      ) : null}
       {!ranking.ok ? (
         <p className="text-sm text-ink-muted">
           {ranking.reason.charAt(0).toUpperCase() + ranking.reason.slice(1)}.
@@ -164,7 +169,7 @@ export function CostRanking({
                 <span>
                   Variant {r.index + 1}: {r.values.map((v, j) => valueText(kinds[j]!, v, system)).join(' · ')}
                 </span>
-                <span className="num">{money(r.cost)} per m² of wall</span>
+                <span className="num">{perWall(r.cost)}</span>
                 {r.governing ? (
                   <span className="text-sm text-ink-muted">
                     governed by {r.governing.label}
@@ -192,7 +197,7 @@ export function CostRanking({
             {ranking.value.ranked.length} variants pass every check; {ranking.value.notPassing} fail or are
             incomplete.
             {ranking.value.runnerUp
-              ? ` The runner-up costs ${money(ranking.value.runnerUp.costDifference)} more per m² of wall${
+              ? ` The runner-up costs ${perWall(ranking.value.runnerUp.costDifference, ' more')}${
                   ranking.value.runnerUp.costRatio === null
                     ? ''
                     : ` (${formatNumber(ranking.value.runnerUp.costRatio * 100, 1)} %)`

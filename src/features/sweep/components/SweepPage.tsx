@@ -1,10 +1,14 @@
+import { CalcInputError } from '@shared/calc/errors';
 import { ENGINE_VERSION } from '@shared/calc/trace';
 import { runChecks } from '@shared/checks/runner';
 import type { Assembly } from '@shared/schemas/assembly';
-import type { CriteriaSetSummary } from '@shared/schemas/criteria';
+import type { CriteriaSet, CriteriaSetSummary } from '@shared/schemas/criteria';
 import type { Project } from '@shared/schemas/project';
+import type { SavedSweep } from '@shared/schemas/sweeps';
+import { checkCosts } from '@shared/sweep/rank';
 import type { SweepParameter, SweepParameterKind } from '@shared/sweep/schema';
-import { applyVariant, type SweepPlan } from '@shared/sweep/sweep';
+import { applyVariant, planSweep, type SweepPlan } from '@shared/sweep/sweep';
+import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useDeferredValue, useMemo, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Cautions } from '../../../components/ui/Cautions';
@@ -13,8 +17,14 @@ import { Notice } from '../../../components/ui/Notice';
 import { PageSection } from '../../../components/ui/PageSection';
 import { Select } from '../../../components/ui/Select';
 import { errorMessage } from '../../../lib/api';
+import { formatDateTime } from '../../../lib/format';
 import { useUnitSystem } from '../../../lib/unit-system';
-import { getCriteriaSet } from '../../criteria/api/get-criteria-set';
+import { revisionQueryOptions } from '../../assemblies/api/get-revision';
+import { criteriaSetQueryOptions } from '../../criteria/api/get-criteria-set';
+import { useMe } from '../../me/api/get-me';
+import { getSavedSweep } from '../api/get-saved-sweeps';
+import { useSweepCosts } from '../api/sweep-costs';
+import { type CostDraft, costsOf, draftOfCosts, emptyCosts } from '../costs';
 import {
   type FieldProblem,
   KIND_LABELS,
@@ -26,12 +36,16 @@ import {
   validateSweep,
 } from '../draft';
 import { drawnChecks, type Slice, sliceVariants, valueText } from '../present';
+import { draftOf } from '../saved';
 import { useSweepRun } from '../use-sweep-run';
-import { type CostDraft, CostRanking, emptyCosts } from './CostRanking';
+import { CostRanking } from './CostRanking';
 import { MakeAssembly } from './MakeAssembly';
 import { ParameterEditor } from './ParameterEditor';
 import { PassFailMap } from './PassFailMap';
+import { SavedSweeps, type ToSave } from './SavedSweeps';
 import { SweepChart } from './SweepChart';
+import { resultText } from './SweepFacts';
+import { SweepProgress } from './SweepProgress';
 import { SweepResultsTable } from './SweepResultsTable';
 
 /** What a started sweep ran on: kept with its results, so later edits of the form or the assembly do not mix in. */
@@ -40,11 +54,8 @@ interface Ran {
   parameters: SweepParameter[];
   assembly: Assembly;
   table: CriteriaSetSummary;
-  rows: Awaited<ReturnType<typeof getCriteriaSet>>['rows'];
+  rows: CriteriaSet['rows'];
 }
-
-const seconds = (s: number) =>
-  s < 1 ? 'under a second' : s < 90 ? `about ${Math.round(s)} s` : `about ${Math.round(s / 60)} min`;
 
 /** The first parameters: the thickest insulation layer and the clip spacing, where the assembly has them. */
 function firstDrafts(input: Assembly['current']['input']): ParameterDraft[] {
@@ -91,10 +102,30 @@ export function SweepPage({
   const [checkId, setCheckId] = useState('');
   const [costs, setCosts] = useState<CostDraft>(emptyCosts);
   const [chosen, setChosen] = useState<number | null>(null);
+  const [reopened, setReopened] = useState<SavedSweep | null>(null);
   const sweep = useSweepRun();
+  const qc = useQueryClient();
+  const me = useMe();
+  const firmRole = me.data?.organisations.find((o) => o.id === project.organisationId)?.role ?? null;
+  const firmCosts = useSweepCosts(firmRole ? project.organisationId : undefined);
+  const library = {
+    orgId: project.organisationId,
+    firmName: project.organisationName,
+    role: firmRole,
+    entries: firmCosts.data,
+  };
   const choose = useCallback((i: number) => setChosen(i), []);
   // The results redraw at React's lower priority: the page keeps answering while 10 000 variants stream in.
   const variants = useDeferredValue(sweep.variants);
+
+  /** Starts the workers on a planned sweep of `on` (the assembly at one revision) against one code table version. */
+  const launch = (on: Assembly, parameters: SweepParameter[], plan: SweepPlan, set: CriteriaSet) => {
+    const sizes = plan.axes.map((x) => x.values.length);
+    setRan({ plan, parameters, assembly: on, table: set, rows: set.rows });
+    setSlice({ across: 0, lines: sizes.length > 1 ? 1 : null, held: sizes.map(() => 0) });
+    setChosen(null);
+    sweep.start({ assembly: on.current.input, project, rows: set.rows, parameters }, plan);
+  };
 
   const start = async () => {
     const v = validateSweep(input, drafts, system, SWEEP_BROWSER_CAP);
@@ -111,14 +142,45 @@ export function SweepPage({
     setPreparing(true);
     setLoadError(null);
     try {
-      const { rows } = await getCriteriaSet(table.id);
-      const kinds = v.plan.axes.map((x) => x.values.length);
-      setRan({ plan: v.plan, parameters: v.parameters, assembly, table, rows });
-      setSlice({ across: 0, lines: kinds.length > 1 ? 1 : null, held: kinds.map(() => 0) });
-      setChosen(null);
-      sweep.start({ assembly: input, project, rows, parameters: v.parameters }, v.plan);
+      launch(assembly, v.parameters, v.plan, await qc.fetchQuery(criteriaSetQueryOptions(table.id)));
+      setReopened(null);
     } catch (e) {
       setLoadError(errorMessage(e));
+    } finally {
+      setPreparing(false);
+    }
+  };
+
+  /**
+   * A saved sweep back on the page: its parameters, code table version and costs in the form, and its variants
+   * run again here on the revision and code table version it ran against (the same engine, the same numbers).
+   */
+  const reopen = async (sweepId: string) => {
+    setPreparing(true);
+    setLoadError(null);
+    try {
+      const saved = await getSavedSweep(sweepId);
+      const on =
+        saved.assemblyRevision === assembly.revision
+          ? assembly
+          : {
+              ...assembly,
+              revision: saved.assemblyRevision,
+              current: await qc.fetchQuery(revisionQueryOptions(assembly.id, saved.assemblyRevision)),
+            };
+      const set = await qc.fetchQuery(criteriaSetQueryOptions(saved.criteriaSetId));
+      setDrafts(saved.parameters.map((p) => draftOf(on.current.input, p, system)));
+      if (sets.some((x) => x.id === saved.criteriaSetId)) setSetId(saved.criteriaSetId);
+      setCosts(draftOfCosts(saved.costs, system));
+      setProblems([]);
+      setReopened(saved);
+      launch(on, saved.parameters, planSweep(on.current.input, saved.parameters, SWEEP_BROWSER_CAP), set);
+    } catch (e) {
+      setLoadError(
+        e instanceof CalcInputError
+          ? `The saved sweep cannot run again in this browser (${e.reason}); its summary is in the list below.`
+          : errorMessage(e),
+      );
     } finally {
       setPreparing(false);
     }
@@ -137,10 +199,20 @@ export function SweepPage({
       if (v.governing && !m.has(v.governing.id)) m.set(v.governing.id, v.governing.label);
     return m;
   }, [variants]);
-  const kinds = ran ? ran.plan.axes.map((x) => x.kind) : [];
-  const values = ran ? ran.plan.axes.map((x) => [...x.values]) : [];
-  const sizes = values.map((v) => v.length);
-  const grid = ran ? sliceVariants(sizes, slice, byIndex) : [];
+  // Kept between renders: the chart, map and table redraw only when the results or the view change (D-032).
+  const kinds = useMemo(() => (ran ? ran.plan.axes.map((x) => x.kind) : []), [ran]);
+  const values = useMemo(() => (ran ? ran.plan.axes.map((x) => [...x.values]) : []), [ran]);
+  const grid = useMemo(
+    () =>
+      ran
+        ? sliceVariants(
+            values.map((v) => v.length),
+            slice,
+            byIndex,
+          )
+        : [],
+    [ran, values, slice, byIndex],
+  );
   const numericAxes = kinds.flatMap((k, i) => (k === 'sealantClass' ? [] : [i]));
   const state = sweep.state;
   const running = state.status === 'running';
@@ -155,6 +227,34 @@ export function SweepPage({
     (k) => targetsFor(input, k).length > 0,
   );
   const general = problems.filter((p) => problemBox(p.field).parameter === null);
+  // The costs go with a saved sweep only when they price everything it varies (else the server refuses them).
+  const priced = (() => {
+    if (!ran) return undefined;
+    const c = costsOf(costs, system);
+    try {
+      checkCosts(ran.plan, ran.assembly.current.input, c);
+      return c;
+    } catch (e) {
+      if (e instanceof CalcInputError) return undefined;
+      throw e;
+    }
+  })();
+  const toSave: ToSave = !ran
+    ? { reason: 'Run a sweep to save it here.' }
+    : state.status !== 'finished'
+      ? { reason: 'A sweep can be saved once it has finished.' }
+      : ran.assembly.revision !== assembly.revision
+        ? {
+            reason: `This sweep ran on revision ${ran.assembly.revision}; the assembly is now at revision ${assembly.revision}. Run it again to save it.`,
+          }
+        : {
+            body: {
+              name: '',
+              criteriaSetId: ran.table.id,
+              parameters: ran.parameters,
+              ...(priced ? { costs: priced } : {}),
+            },
+          };
 
   return (
     <>
@@ -163,7 +263,8 @@ export function SweepPage({
       <p className="max-w-prose text-sm text-ink-muted">
         Vary one to three parameters of revision {assembly.revision} and check every combination — thermal,
         moisture, wind attachment and sealant joints — against one version of a code table, as a check run
-        would. The work runs in this browser; nothing is saved until you make a variant an assembly.
+        would. The work runs in this browser; nothing is saved until you save the sweep (the server runs it
+        again and keeps a summary) or make a variant an assembly.
       </p>
 
       <PageSection n={1} title="What varies" id="sweep-inputs">
@@ -256,26 +357,7 @@ export function SweepPage({
         <PageSection n={2} title="Results" id="sweep-results">
           <div className="flex flex-col gap-2" aria-live="polite">
             {state.status === 'running' ? (
-              <>
-                <progress
-                  className="h-3 w-full accent-ink"
-                  max={state.total}
-                  value={state.done}
-                  aria-label="Variants checked"
-                />
-                <div className="flex flex-wrap items-center gap-3 text-sm">
-                  <span className="num">
-                    {state.done.toLocaleString('en-GB')} of {state.total.toLocaleString('en-GB')} variants
-                    checked
-                  </span>
-                  <span>
-                    {state.done === 0
-                      ? 'estimating the time left…'
-                      : `${seconds(((state.total - state.done) * (state.now - state.startedAt)) / state.done / 1000)} left`}
-                  </span>
-                  <Button onClick={sweep.cancel}>Cancel</Button>
-                </div>
-              </>
+              <SweepProgress progress={sweep.progress} onCancel={sweep.cancel} />
             ) : state.status === 'finished' ? (
               <p className="text-sm" data-testid="sweep-finished">
                 {state.total.toLocaleString('en-GB')} variants checked in {(state.ms / 1000).toFixed(2)} s
@@ -288,6 +370,21 @@ export function SweepPage({
               />
             ) : state.status === 'refused' ? (
               <Notice tone="caution" title={`${state.field}: ${state.reason}`} live />
+            ) : null}
+            {reopened ? (
+              <p className="text-sm" data-testid="reopened-sweep">
+                Reopened the saved sweep “{reopened.name}” ({formatDateTime(reopened.createdAt)}
+                {reopened.createdBy ? ` by ${reopened.createdBy}` : ''}); the server found{' '}
+                {resultText(
+                  {
+                    count: reopened.summary.count,
+                    verdicts: reopened.summary.verdicts,
+                    cheapest: reopened.summary.ranking?.top[0] ?? null,
+                  },
+                  system,
+                )}
+                .
+              </p>
             ) : null}
             {ran.assembly.revision !== assembly.revision ? (
               <Notice
@@ -414,6 +511,7 @@ export function SweepPage({
               system={system}
               chosen={chosen}
               onChoose={choose}
+              library={library}
             />
           </section>
 
@@ -455,6 +553,17 @@ export function SweepPage({
           )}
         </PageSection>
       ) : null}
+
+      <PageSection n={ran && chosenVariant ? 4 : ran ? 3 : 2} title="Saved sweeps" id="sweep-saved">
+        <SavedSweeps
+          assembly={assembly}
+          mayWrite={mayWrite}
+          system={system}
+          toSave={toSave}
+          reopened={reopened?.id ?? null}
+          onReopen={(id) => void reopen(id)}
+        />
+      </PageSection>
 
       <Cautions
         engineVersion={ENGINE_VERSION}

@@ -1,16 +1,14 @@
 import { assemblySchema } from '@shared/schemas/assembly';
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api';
+import { useQuery } from '@tanstack/react-query';
+import { getQuery } from '../../../lib/api-cache';
 import { assemblyKeys } from '../../../lib/query-keys';
 
 /** `GET /api/assemblies/:assemblyId` → the assembly with its current revision (input and stored result). */
-export const getAssembly = (assemblyId: string, signal?: AbortSignal) =>
-  apiRequest(`/api/assemblies/${encodeURIComponent(assemblyId)}`, assemblySchema, { signal });
-
 export const assemblyQueryOptions = (assemblyId: string) =>
-  queryOptions({
-    queryKey: assemblyKeys.detail(assemblyId),
-    queryFn: ({ signal }) => getAssembly(assemblyId, signal),
-  });
+  getQuery(
+    assemblyKeys.detail(assemblyId),
+    `/api/assemblies/${encodeURIComponent(assemblyId)}`,
+    assemblySchema,
+  );
 
 export const useAssembly = (assemblyId: string) => useQuery(assemblyQueryOptions(assemblyId));

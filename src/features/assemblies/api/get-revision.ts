@@ -1,23 +1,17 @@
 import { assemblyRevisionSchema } from '@shared/schemas/assembly';
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api';
+import { useQuery } from '@tanstack/react-query';
+import { getQuery } from '../../../lib/api-cache';
 import { assemblyKeys } from '../../../lib/query-keys';
 
 /** `GET /api/assemblies/:assemblyId/revisions/:n` → one stored revision (never changes once saved). */
-export const getRevision = (assemblyId: string, revision: number, signal?: AbortSignal) =>
-  apiRequest(
+export const revisionQueryOptions = (assemblyId: string, revision: number) =>
+  getQuery(
+    assemblyKeys.revision(assemblyId, revision),
     `/api/assemblies/${encodeURIComponent(assemblyId)}/revisions/${revision}`,
     assemblyRevisionSchema,
-    { signal },
-  );
-
-export const revisionQueryOptions = (assemblyId: string, revision: number) =>
-  queryOptions({
-    queryKey: assemblyKeys.revision(assemblyId, revision),
-    queryFn: ({ signal }) => getRevision(assemblyId, revision, signal),
     // A saved revision is immutable.
-    staleTime: Number.POSITIVE_INFINITY,
-  });
+    { staleTime: Number.POSITIVE_INFINITY },
+  );
 
 export const useRevision = (assemblyId: string, revision: number) =>
   useQuery(revisionQueryOptions(assemblyId, revision));

@@ -1,21 +1,16 @@
 import { checkRunListSchema } from '@shared/schemas/check-runs';
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api';
+import { useQuery } from '@tanstack/react-query';
+import { getQuery } from '../../../lib/api-cache';
 import { checkRunKeys } from '../../../lib/query-keys';
 
 /** `GET /api/projects/:id/check-runs?assemblyId=` → stored runs, newest first. */
-export const getCheckRuns = (projectId: string, assemblyId: string | null, signal?: AbortSignal) =>
-  apiRequest(
+export const checkRunsQueryOptions = (projectId: string, assemblyId: string | null) =>
+  getQuery(
+    checkRunKeys.list(projectId, assemblyId),
     `/api/projects/${encodeURIComponent(projectId)}/check-runs${assemblyId ? `?assemblyId=${encodeURIComponent(assemblyId)}` : ''}`,
     checkRunListSchema,
-    { signal },
-  ).then((r) => r.checkRuns);
-
-export const checkRunsQueryOptions = (projectId: string, assemblyId: string | null) =>
-  queryOptions({
-    queryKey: checkRunKeys.list(projectId, assemblyId),
-    queryFn: ({ signal }) => getCheckRuns(projectId, assemblyId, signal),
-  });
+    { pick: (r) => r.checkRuns },
+  );
 
 export const useCheckRuns = (projectId: string, assemblyId: string | null) =>
   useQuery(checkRunsQueryOptions(projectId, assemblyId));

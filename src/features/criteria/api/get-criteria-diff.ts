@@ -1,21 +1,15 @@
 import { criteriaDiffSchema } from '@shared/schemas/criteria';
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api';
+import { useQuery } from '@tanstack/react-query';
+import { getQuery } from '../../../lib/api-cache';
 import { criteriaKeys } from '../../../lib/query-keys';
 
 /** `GET /api/criteria-sets/:setId/diff?from=&to=` → rows added, removed and changed between two versions. */
-export const getCriteriaDiff = (setId: string, from: number, to: number, signal?: AbortSignal) =>
-  apiRequest(
+export const criteriaDiffQueryOptions = (setId: string, from: number, to: number) =>
+  getQuery(
+    criteriaKeys.diff(setId, from, to),
     `/api/criteria-sets/${encodeURIComponent(setId)}/diff?from=${from}&to=${to}`,
     criteriaDiffSchema,
-    { signal },
   );
-
-export const criteriaDiffQueryOptions = (setId: string, from: number, to: number) =>
-  queryOptions({
-    queryKey: criteriaKeys.diff(setId, from, to),
-    queryFn: ({ signal }) => getCriteriaDiff(setId, from, to, signal),
-  });
 
 export const useCriteriaDiff = (setId: string, from: number, to: number) =>
   useQuery(criteriaDiffQueryOptions(setId, from, to));

@@ -1,16 +1,10 @@
 import { criteriaSetSchema } from '@shared/schemas/criteria';
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api';
+import { useQuery } from '@tanstack/react-query';
+import { getQuery } from '../../../lib/api-cache';
 import { criteriaKeys } from '../../../lib/query-keys';
 
 /** `GET /api/criteria-sets/:setId` → one version with its rows (SI) and what the caller may do. */
-export const getCriteriaSet = (setId: string, signal?: AbortSignal) =>
-  apiRequest(`/api/criteria-sets/${encodeURIComponent(setId)}`, criteriaSetSchema, { signal });
-
 export const criteriaSetQueryOptions = (setId: string) =>
-  queryOptions({
-    queryKey: criteriaKeys.detail(setId),
-    queryFn: ({ signal }) => getCriteriaSet(setId, signal),
-  });
+  getQuery(criteriaKeys.detail(setId), `/api/criteria-sets/${encodeURIComponent(setId)}`, criteriaSetSchema);
 
 export const useCriteriaSet = (setId: string) => useQuery(criteriaSetQueryOptions(setId));

@@ -1,19 +1,18 @@
 import { criteriaSetListSchema } from '@shared/schemas/criteria';
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api';
+import { useQuery } from '@tanstack/react-query';
+import { getQuery } from '../../../lib/api-cache';
 import { criteriaKeys } from '../../../lib/query-keys';
 
 /** `GET /api/organisations/:orgId/criteria-sets` → the firm's code tables (latest version of each). */
-export const getCriteriaSets = (orgId: string, signal?: AbortSignal) =>
-  apiRequest(`/api/organisations/${encodeURIComponent(orgId)}/criteria-sets`, criteriaSetListSchema, {
-    signal,
-  }).then((r) => r.criteriaSets);
-
 export const criteriaSetsQueryOptions = (orgId: string) =>
-  queryOptions({
-    queryKey: criteriaKeys.list(orgId),
-    queryFn: ({ signal }) => getCriteriaSets(orgId, signal),
-  });
+  getQuery(
+    criteriaKeys.list(orgId),
+    `/api/organisations/${encodeURIComponent(orgId)}/criteria-sets`,
+    criteriaSetListSchema,
+    {
+      pick: (r) => r.criteriaSets,
+    },
+  );
 
 /** Idle while no firm is known. */
 export const useCriteriaSets = (orgId: string | undefined) =>

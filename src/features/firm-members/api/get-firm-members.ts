@@ -1,20 +1,15 @@
 import { firmMemberSchema } from '@shared/schemas/firm-members';
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
-import { apiRequest } from '../../../lib/api';
+import { getQuery } from '../../../lib/api-cache';
 import { firmMemberKeys } from '../../../lib/query-keys';
+import { firmMembersPath } from './paths';
 
 const responseSchema = z.object({ members: z.array(firmMemberSchema) });
 
 /** `GET /api/organisations/:orgId/members` → the firm's people with their firm roles. */
-export const getFirmMembers = (orgId: string, signal?: AbortSignal) =>
-  apiRequest(`/api/organisations/${encodeURIComponent(orgId)}/members`, responseSchema, { signal });
-
 export const firmMembersQueryOptions = (orgId: string) =>
-  queryOptions({
-    queryKey: firmMemberKeys.list(orgId),
-    queryFn: async ({ signal }) => (await getFirmMembers(orgId, signal)).members,
-  });
+  getQuery(firmMemberKeys.list(orgId), firmMembersPath(orgId), responseSchema, { pick: (r) => r.members });
 
 export const useFirmMembers = (orgId: string | undefined) =>
   useQuery({ ...firmMembersQueryOptions(orgId ?? ''), enabled: orgId !== undefined });

@@ -1,21 +1,16 @@
 import { bridgeValueSchema } from '@shared/schemas/assembly';
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
-import { apiRequest } from '../../../lib/api';
+import { getQuery } from '../../../lib/api-cache';
 import { libraryKeys } from '../../../lib/query-keys';
+import { firmLibraryPath } from './paths';
 
 const bridgeValueListSchema = z.object({ bridgeValues: z.array(bridgeValueSchema) });
 
 /** `GET /api/organisations/:orgId/bridge-values` → the firm's χ and ψ values with where each came from. */
-export const getBridgeValues = (orgId: string, signal?: AbortSignal) =>
-  apiRequest(`/api/organisations/${encodeURIComponent(orgId)}/bridge-values`, bridgeValueListSchema, {
-    signal,
-  }).then((r) => r.bridgeValues);
-
 export const bridgeValuesQueryOptions = (orgId: string) =>
-  queryOptions({
-    queryKey: libraryKeys.bridgeValues(orgId),
-    queryFn: ({ signal }) => getBridgeValues(orgId, signal),
+  getQuery(libraryKeys.bridgeValues(orgId), firmLibraryPath(orgId, 'bridge-values'), bridgeValueListSchema, {
+    pick: (r) => r.bridgeValues,
   });
 
 /** Disabled (idle) while no firm is known. */

@@ -1,8 +1,9 @@
 import { invitationSchema, memberSchema } from '@shared/schemas/members';
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
-import { apiRequest } from '../../../lib/api';
+import { getQuery } from '../../../lib/api-cache';
 import { memberKeys } from '../../../lib/query-keys';
+import { projectPeoplePath } from './paths';
 
 const membersResponseSchema = z.object({
   members: z.array(memberSchema),
@@ -11,13 +12,7 @@ const membersResponseSchema = z.object({
 export type MembersResponse = z.infer<typeof membersResponseSchema>;
 
 /** `GET /api/projects/:id/members` → members and invitations. */
-export const getMembers = (projectId: string, signal?: AbortSignal) =>
-  apiRequest(`/api/projects/${encodeURIComponent(projectId)}/members`, membersResponseSchema, { signal });
-
 export const membersQueryOptions = (projectId: string) =>
-  queryOptions({
-    queryKey: memberKeys.list(projectId),
-    queryFn: ({ signal }) => getMembers(projectId, signal),
-  });
+  getQuery(memberKeys.list(projectId), projectPeoplePath(projectId, 'members'), membersResponseSchema);
 
 export const useMembers = (projectId: string) => useQuery(membersQueryOptions(projectId));

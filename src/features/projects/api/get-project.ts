@@ -1,13 +1,10 @@
 import { projectSchema } from '@shared/schemas/project';
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api';
+import { useQuery } from '@tanstack/react-query';
+import { getQuery } from '../../../lib/api-cache';
 import { projectKeys } from '../../../lib/query-keys';
 
 /** `GET /api/projects/:id` (includes `myRole`). */
-export const getProject = (id: string, signal?: AbortSignal) =>
-  apiRequest(`/api/projects/${encodeURIComponent(id)}`, projectSchema, { signal });
-
 export const projectQueryOptions = (id: string) =>
-  queryOptions({ queryKey: projectKeys.detail(id), queryFn: ({ signal }) => getProject(id, signal) });
+  getQuery(projectKeys.detail(id), `/api/projects/${encodeURIComponent(id)}`, projectSchema);
 
 export const useProject = (id: string) => useQuery(projectQueryOptions(id));

@@ -1,20 +1,17 @@
 import { can } from '@shared/auth/permissions';
 import { projectSchema } from '@shared/schemas/project';
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
-import { apiRequest } from '../../../lib/api';
+import { getQuery } from '../../../lib/api-cache';
 import { type ProjectListFilter, projectKeys } from '../../../lib/query-keys';
 
 const projectListSchema = z.object({ projects: z.array(projectSchema) });
 
 /** `GET /api/projects?archived=…` */
-export const getProjects = (filter: ProjectListFilter, signal?: AbortSignal) =>
-  apiRequest(`/api/projects?archived=${filter.archived}`, projectListSchema, { signal }).then(
-    (r) => r.projects,
-  );
-
 export const projectsQueryOptions = (filter: ProjectListFilter) =>
-  queryOptions({ queryKey: projectKeys.list(filter), queryFn: ({ signal }) => getProjects(filter, signal) });
+  getQuery(projectKeys.list(filter), `/api/projects?archived=${filter.archived}`, projectListSchema, {
+    pick: (r) => r.projects,
+  });
 
 export const useProjects = (filter: ProjectListFilter) => useQuery(projectsQueryOptions(filter));
 

@@ -1,22 +1,16 @@
 import { type SubmittalStatus, submittalListSchema } from '@shared/schemas/submittals';
-import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { apiRequest } from '../../../lib/api';
+import { keepPreviousData, useQuery } from '@tanstack/react-query';
+import { getQuery } from '../../../lib/api-cache';
 import { submittalKeys } from '../../../lib/query-keys';
 
 /** `GET /api/projects/:id/submittals?status=` → the latest revision of each submittal. */
-export const getSubmittals = (projectId: string, status: SubmittalStatus | null, signal?: AbortSignal) =>
-  apiRequest(
+export const submittalsQueryOptions = (projectId: string, status: SubmittalStatus | null) =>
+  getQuery(
+    submittalKeys.list(projectId, { status }),
     `/api/projects/${encodeURIComponent(projectId)}/submittals${status ? `?status=${status}` : ''}`,
     submittalListSchema,
-    { signal },
-  ).then((r) => r.submittals);
-
-export const submittalsQueryOptions = (projectId: string, status: SubmittalStatus | null) =>
-  queryOptions({
-    queryKey: submittalKeys.list(projectId, { status }),
-    queryFn: ({ signal }) => getSubmittals(projectId, status, signal),
-    placeholderData: keepPreviousData,
-  });
+    { pick: (r) => r.submittals, placeholderData: keepPreviousData },
+  );
 
 export const useSubmittals = (projectId: string, status: SubmittalStatus | null) =>
   useQuery(submittalsQueryOptions(projectId, status));

@@ -23,3 +23,12 @@ export function NamedOptions({ items }: { items: readonly { id: string; name: st
     </option>
   ));
 }
+
+/** The choices of a select box given as value and words, in order. */
+export function LabelledOptions({ options }: { options: readonly { value: string; label: ReactNode }[] }) {
+  return options.map((o) => (
+    <option key={o.value} value={o.value}>
+      {o.label}
+    </option>
+  ));
+}

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { Controller, useFormContext } from 'react-hook-form';
 import { Field } from '../../../components/ui/Field';
+import { LabelledOptions } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
@@ -139,11 +140,7 @@ export function SelectField({
       {(c) => (
         <Select {...c} {...register(p(path))} className="py-1.5 text-sm">
           {placeholder === undefined ? null : <option value="">{placeholder}</option>}
-          {options.map((o) => (
-            <option key={o.value} value={o.value}>
-              {o.label}
-            </option>
-          ))}
+          <LabelledOptions options={options} />
         </Select>
       )}
     </Field>

@@ -5,7 +5,7 @@ import { useState } from 'react';
 import { type UseFieldArrayReturn, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
-import { Options } from '../../../components/ui/Options';
+import { LabelledOptions, Options } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { fieldDomId } from '../evaluate';
@@ -354,11 +354,7 @@ function AirFields({
               );
             }}
           >
-            {VENTILATION.map((v) => (
-              <option key={v.value} value={v.value}>
-                {v.label}
-              </option>
-            ))}
+            <LabelledOptions options={VENTILATION} />
           </Select>
         )}
       </Field>

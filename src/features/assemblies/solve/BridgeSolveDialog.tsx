@@ -11,6 +11,7 @@ import { Button } from '../../../components/ui/Button';
 import { Dialog } from '../../../components/ui/Dialog';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
+import { LabelledOptions } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
@@ -218,11 +219,7 @@ export function BridgeSolveDialog({
                   className="py-1.5 text-sm"
                   onChange={(e) => edit(linearInputs(e.target.value as LinearDetail, bridge, layers))}
                 >
-                  {LINEAR_DETAILS.map((d) => (
-                    <option key={d.kind} value={d.kind}>
-                      {d.label}
-                    </option>
-                  ))}
+                  <LabelledOptions options={LINEAR_DETAILS.map((d) => ({ value: d.kind, label: d.label }))} />
                 </Select>
               )}
             </Field>

@@ -3,6 +3,7 @@ import type { UnitSystem } from '@shared/units';
 import { useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field } from '../../../components/ui/Field';
+import { LabelledOptions } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { TextArea } from '../../../components/ui/TextInput';
 import { useUnitSystem } from '../../../lib/unit-system';
@@ -109,11 +110,7 @@ export function AddBridgeValueForm({ orgId }: { orgId: string }) {
       <Field label="Kind of source" required error={errors.sourceType?.message}>
         {(c) => (
           <Select {...c} {...register('sourceType')} className="py-1.5 text-sm">
-            {SOURCE_TYPES.map((s) => (
-              <option key={s.value} value={s.value}>
-                {s.label}
-              </option>
-            ))}
+            <LabelledOptions options={SOURCE_TYPES} />
           </Select>
         )}
       </Field>

@@ -8,10 +8,18 @@ import {
   useState,
 } from 'react';
 
+/** A head cell of `Table`'s `head`: its words, or `numeric(words)` over a column of figures (set right). */
+export type Column = ReactNode | { label: ReactNode; numeric: true };
+export const numeric = (label: ReactNode): Column => ({ label, numeric: true });
+const isNumeric = (c: Column): c is { label: ReactNode; numeric: true } =>
+  typeof c === 'object' && c !== null && 'numeric' in c;
+
 interface TableProps {
   /** Every table has a caption; pass `captionHidden` to keep it for screen readers only. */
   caption: ReactNode;
   captionHidden?: boolean;
+  /** The head row's cells, one a column, when they are plain words (else write the `<thead>` as a child). */
+  head?: readonly Column[];
   children: ReactNode;
   className?: string;
 }
@@ -79,7 +87,7 @@ export function TableScroller({
 }
 
 /** Ruled table: a heavy rule under the head, hairlines between rows, no boxes. */
-export function Table({ caption, captionHidden = false, children, className = '' }: TableProps) {
+export function Table({ caption, captionHidden = false, head, children, className = '' }: TableProps) {
   const captionId = useId();
   return (
     <TableScroller labelledBy={captionId}>
@@ -87,6 +95,18 @@ export function Table({ caption, captionHidden = false, children, className = ''
         <caption id={captionId} className={captionHidden ? 'sr-only' : 'label-caps pb-2 text-left'}>
           {caption}
         </caption>
+        {head ? (
+          <thead>
+            <tr>
+              {head.map((c, i) => (
+                // biome-ignore lint/suspicious/noArrayIndexKey: the columns are fixed per table
+                <Th key={i} numeric={isNumeric(c)}>
+                  {isNumeric(c) ? c.label : c}
+                </Th>
+              ))}
+            </tr>
+          </thead>
+        ) : null}
         {children}
       </table>
     </TableScroller>

@@ -4,7 +4,7 @@ import { firstKeptLayer } from '@shared/calc/thermal/thermal';
 import { type AssemblyInput, type BridgeValue, WALL_CATEGORY_LABELS } from '@shared/schemas/assembly';
 import type { UnitSystem } from '@shared/units';
 import { type ReactNode, useMemo } from 'react';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { evaluateThermal } from '../evaluate';
 import { LAYER_KIND_LABELS } from '../form';
@@ -131,17 +131,10 @@ export function AssemblyView({
             </div>
           ) : null}
         </dl>
-        <Table caption="Layers, outside to inside">
-          <thead>
-            <tr>
-              <Th numeric>No.</Th>
-              <Th>Layer</Th>
-              <Th>Kind</Th>
-              <Th numeric>d</Th>
-              <Th>Values</Th>
-              <Th numeric>R of layer</Th>
-            </tr>
-          </thead>
+        <Table
+          caption="Layers, outside to inside"
+          head={[numeric('No.'), 'Layer', 'Kind', numeric('d'), 'Values', numeric('R of layer')]}
+        >
           <tbody>
             {thermal.layers.map((l, i) => {
               const f = layerFigures(l, system);
@@ -187,15 +180,10 @@ export function AssemblyView({
         {thermal.bridges.length === 0 ? (
           <p className="text-ink-muted">No bridges entered.</p>
         ) : (
-          <Table caption="Bridges through the insulation">
-            <thead>
-              <tr>
-                <Th>Ref.</Th>
-                <Th>Bridge</Th>
-                <Th>Values</Th>
-                <Th>Source of χ/ψ</Th>
-              </tr>
-            </thead>
+          <Table
+            caption="Bridges through the insulation"
+            head={['Ref.', 'Bridge', 'Values', 'Source of χ/ψ']}
+          >
             <tbody>
               {thermal.bridges.map((b, j) => {
                 const v = b.kind === 'point' ? b.chi : b.kind === 'linear' ? b.psi : null;

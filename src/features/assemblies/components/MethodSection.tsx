@@ -3,7 +3,7 @@ import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
 import { formatR } from '@shared/format';
 import { fixed } from '@shared/units/rounding';
 import { Notice } from '../../../components/ui/Notice';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 
 const METHOD_NOTES: Record<MethodName, (r: ThermalResult) => string | undefined> = {
   parallelPath: () => 'heat flows straight through each path',
@@ -37,15 +37,10 @@ export function MethodSection({ result }: { result: ThermalResult }) {
       {refused ? (
         <p className="text-sm text-ink-muted">Energy-code path not applied: {sentence(refused.text)}</p>
       ) : null}
-      <Table caption="Clear-field total resistance R_T by each method offered">
-        <thead>
-          <tr>
-            <Th>Method</Th>
-            <Th numeric>R_T (SI)</Th>
-            <Th numeric>R_T (IP)</Th>
-            <Th>Note</Th>
-          </tr>
-        </thead>
+      <Table
+        caption="Clear-field total resistance R_T by each method offered"
+        head={['Method', numeric('R_T (SI)'), numeric('R_T (IP)'), 'Note']}
+      >
         <tbody>
           {rows.map((r) => (
             <tr key={r.key} className={r.used ? 'bg-paper-raised font-semibold' : ''}>

@@ -1,7 +1,7 @@
 import type { ThermalResult } from '@shared/calc/thermal/schema';
 import { formatU } from '@shared/format';
 import { Bar, BarChart, CartesianGrid, Cell, LabelList, XAxis, YAxis } from 'recharts';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { formatShare } from '../units';
 
@@ -79,14 +79,7 @@ export function ShareChart({ result }: { result: ThermalResult }) {
           <span className="num">{formatShare(result.sharesSum)}</span>.
         </figcaption>
       </figure>
-      <Table caption="Heat-loss shares">
-        <thead>
-          <tr>
-            <Th>Part</Th>
-            <Th numeric>U or ΔU</Th>
-            <Th numeric>Share</Th>
-          </tr>
-        </thead>
+      <Table caption="Heat-loss shares" head={['Part', numeric('U or ΔU'), numeric('Share')]}>
         <tbody>
           {rows.map((r, i) => (
             <tr key={r.name + String(i)}>

@@ -2,7 +2,7 @@ import { PROJECT_ROLE_LABELS } from '@shared/auth/permissions';
 import type { AuditEntry } from '@shared/schemas/me';
 import type { UnitSystem } from '@shared/units';
 import { Link } from 'react-router';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { Table, Td } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format';
 import { formatProjectFieldValue, projectFieldLabel } from '../../../lib/project-fields';
 import { useUnitSystem } from '../../../lib/unit-system';
@@ -81,8 +81,14 @@ const VERBS: Record<string, string> = {
   new_version: 'Made a new version of',
 };
 
+/** Where an object's own verb reads better than the action's: a sweep is saved, not created. */
+const ENTITY_VERBS: Record<string, Record<string, string>> = {
+  sweep: { create: 'Saved', delete: 'Deleted' },
+};
+
 /** The object's kind in words: "check_run" → "check run", a member → "member". */
 const KIND: Record<string, string> = {
+  sweep: 'the sweep',
   check_run: 'the check run of',
   member: 'member',
   invitation: 'the invitation of',
@@ -119,10 +125,19 @@ function outcome(entry: AuditEntry): string | null {
   return null;
 }
 
+/** The name an object had when its entry was made ("“Insulation × clips” "), for one that is gone. */
+function goneName(entry: AuditEntry): string {
+  const v = isRecord(entry.before) ? entry.before : isRecord(entry.after) ? entry.after : {};
+  return typeof v.name === 'string' ? `“${v.name}” ` : '';
+}
+
 /** "Decided submittal S-003 rev 1 — Façade panels: approved as noted", the object linked to its page. */
 export function What({ projectId, entry }: { projectId: string; entry: AuditEntry }) {
   const action = entry.action.split('.').pop() ?? entry.action;
-  const verb = VERBS[action] ?? `${words(action).charAt(0).toUpperCase()}${words(action).slice(1)}`;
+  const verb =
+    ENTITY_VERBS[entry.entity]?.[action] ??
+    VERBS[action] ??
+    `${words(action).charAt(0).toUpperCase()}${words(action).slice(1)}`;
   const kind = KIND[entry.entity] ?? words(entry.entity);
   const name = entry.entityName;
   const href = name === null ? null : hrefOf(projectId, entry);
@@ -131,7 +146,7 @@ export function What({ projectId, entry }: { projectId: string; entry: AuditEntr
     <>
       {verb} {kind}{' '}
       {name === null ? (
-        <span className="text-ink-muted">(no longer there)</span>
+        <span className="text-ink-muted">{goneName(entry)}(no longer there)</span>
       ) : href ? (
         <Link to={href}>{name}</Link>
       ) : (
@@ -175,10 +190,23 @@ const OTHER_LABELS: Record<string, string> = {
   wind: 'Wind data',
   climate: 'Monthly climate',
   copiedFrom: 'Copied from',
+  // A saved sweep: what it ran on and what it found.
+  assembly: 'Assembly',
+  criteriaSet: 'Code table',
+  criteriaSetVersion: 'Code table version',
+  variants: 'Variants',
+  passing: 'Passing variants',
+};
+
+/** A saved sweep's entry names its code table's version `version`: there it is a fact, not book-keeping. */
+const snapshot = (entry: AuditEntry, v: unknown) => {
+  if (entry.entity !== 'sweep' || !isRecord(v) || !('version' in v)) return v;
+  const { version, ...rest } = v;
+  return { ...rest, criteriaSetVersion: version };
 };
 
 function Changes({ entry, system }: { entry: AuditEntry; system: UnitSystem }) {
-  const changes = changedFields(entry.before, entry.after);
+  const changes = changedFields(snapshot(entry, entry.before), snapshot(entry, entry.after));
   if (changes.length === 0) return <span className="text-ink-muted">No values changed.</span>;
   return (
     <ul className="space-y-1">
@@ -205,15 +233,7 @@ export function AuditLog({ projectId, entries }: { projectId: string; entries: A
     return <p className="text-ink-muted">Nothing has been recorded on this project yet.</p>;
   const newestFirst = [...entries].sort((a, b) => b.at.localeCompare(a.at));
   return (
-    <Table caption="Recorded changes, newest first" captionHidden>
-      <thead>
-        <tr>
-          <Th>When</Th>
-          <Th>Who</Th>
-          <Th>What</Th>
-          <Th>Changes</Th>
-        </tr>
-      </thead>
+    <Table caption="Recorded changes, newest first" captionHidden head={['When', 'Who', 'What', 'Changes']}>
       <tbody>
         {newestFirst.map((e) => (
           <tr key={e.id}>

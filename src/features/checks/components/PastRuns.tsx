@@ -2,7 +2,7 @@ import type { CheckRunSummary } from '@shared/schemas/check-runs';
 import { formatVerificationCode, verificationCode } from '@shared/sheets/verification';
 import type { UnitSystem } from '@shared/units';
 import { Link } from 'react-router';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { VERDICT_TEXT } from '../../../lib/check-format';
 import { formatDateTime } from '../../../lib/format';
 import { SheetActions } from '../../sheets/components/SheetLink';
@@ -23,18 +23,18 @@ export function PastRuns({
   units: UnitSystem;
 }) {
   return (
-    <Table caption="Past runs (each is stored as issued)">
-      <thead>
-        <tr>
-          <Th>When</Th>
-          <Th>By</Th>
-          <Th>Code table</Th>
-          <Th numeric>Assembly rev.</Th>
-          <Th>Verdict</Th>
-          <Th>Verification code</Th>
-          <Th>Compliance sheet</Th>
-        </tr>
-      </thead>
+    <Table
+      caption="Past runs (each is stored as issued)"
+      head={[
+        'When',
+        'By',
+        'Code table',
+        numeric('Assembly rev.'),
+        'Verdict',
+        'Verification code',
+        'Compliance sheet',
+      ]}
+    >
       <tbody>
         {runs.map((r) => {
           const v = VERDICT_TEXT[r.verdict];

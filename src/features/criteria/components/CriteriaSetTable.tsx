@@ -1,22 +1,22 @@
 import type { CriteriaSetSummary } from '@shared/schemas/criteria';
 import { Link } from 'react-router';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { formatDate } from '../../../lib/format';
 
 /** A firm's code tables (latest version of each). */
 export function CriteriaSetTable({ sets, caption }: { sets: CriteriaSetSummary[]; caption: string }) {
   return (
-    <Table caption={caption}>
-      <thead>
-        <tr>
-          <Th>Code table</Th>
-          <Th>Jurisdiction</Th>
-          <Th>Edition</Th>
-          <Th numeric>Version</Th>
-          <Th numeric>Rows</Th>
-          <Th numeric>Last saved</Th>
-        </tr>
-      </thead>
+    <Table
+      caption={caption}
+      head={[
+        'Code table',
+        'Jurisdiction',
+        'Edition',
+        numeric('Version'),
+        numeric('Rows'),
+        numeric('Last saved'),
+      ]}
+    >
       <tbody>
         {sets.map((s) => (
           <tr key={s.id} className="hover:bg-paper-sunk">

@@ -3,7 +3,7 @@ import type { CriteriaSave, CriteriaSet } from '@shared/schemas/criteria';
 import { useId, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Notice } from '../../../components/ui/Notice';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { TextArea } from '../../../components/ui/TextInput';
 import { errorMessage } from '../../../lib/api';
 import { conflictingSet, csvProblems, useImportCriteriaCsv } from '../api/save-criteria';
@@ -97,14 +97,7 @@ export function CsvImport({ set, onSaved }: { set: CriteriaSet; onSaved: (saved:
           title={`Not imported: ${problems.length} problem${problems.length === 1 ? '' : 's'}. Nothing was changed.`}
           live
         >
-          <Table caption="Problems in the CSV, by line">
-            <thead>
-              <tr>
-                <Th numeric>Line</Th>
-                <Th>Column</Th>
-                <Th>Problem</Th>
-              </tr>
-            </thead>
+          <Table caption="Problems in the CSV, by line" head={[numeric('Line'), 'Column', 'Problem']}>
             <tbody>
               {problems.map((p, i) => (
                 // biome-ignore lint/suspicious/noArrayIndexKey: problems are listed once, in order

@@ -132,14 +132,10 @@ export function DiffView({
         ) : null,
       )}
       {diff.meta.length > 0 ? (
-        <Table caption="Changed details">
-          <thead>
-            <tr>
-              <Th>Detail</Th>
-              <Th>Version {diff.from.version}</Th>
-              <Th>Version {diff.to.version}</Th>
-            </tr>
-          </thead>
+        <Table
+          caption="Changed details"
+          head={['Detail', <>Version {diff.from.version}</>, <>Version {diff.to.version}</>]}
+        >
           <tbody>
             {diff.meta.map((m) => (
               <tr key={m.field}>

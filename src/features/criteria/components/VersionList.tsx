@@ -1,21 +1,12 @@
 import type { CriteriaSetSummary } from '@shared/schemas/criteria';
 import { Link } from 'react-router';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format';
 
 /** Every version of a table, newest first, with links to each and to what changed from the one before. */
 export function VersionList({ versions, currentId }: { versions: CriteriaSetSummary[]; currentId: string }) {
   return (
-    <Table caption="Versions">
-      <thead>
-        <tr>
-          <Th numeric>Version</Th>
-          <Th>Status</Th>
-          <Th numeric>Rows</Th>
-          <Th>Created</Th>
-          <Th>Changes</Th>
-        </tr>
-      </thead>
+    <Table caption="Versions" head={[numeric('Version'), 'Status', numeric('Rows'), 'Created', 'Changes']}>
       <tbody>
         {versions.map((v) => (
           <tr key={v.id} className={v.id === currentId ? 'bg-paper-sunk' : undefined}>

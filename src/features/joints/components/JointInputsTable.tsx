@@ -2,7 +2,7 @@ import { findExpansionMaterial } from '@shared/calc/joints/expansion';
 import type { JointInput, JointSide } from '@shared/calc/joints/schema';
 import { formatJointDimension, formatPageMeasure, formatPageRange } from '@shared/format/page-measures';
 import type { UnitSystem } from '@shared/units';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { BACKER_LABELS, JOINT_TYPE_LABELS, MOVEMENT_CLASS_LABELS } from '../labels';
 
@@ -23,18 +23,18 @@ const t = (c: number, system: UnitSystem) => formatPageMeasure(c, 'temperature',
 export function JointInputsTable({ joints }: { joints: readonly JointInput[] }) {
   const system = useUnitSystem();
   return (
-    <Table caption="Joint inputs as saved">
-      <thead>
-        <tr>
-          <Th>Joint</Th>
-          <Th numeric>Design width / depth</Th>
-          <Th>Moving sides (α × L)</Th>
-          <Th numeric>Surface range</Th>
-          <Th numeric>Installed at</Th>
-          <Th numeric>Other movement</Th>
-          <Th>Sealant, tolerance, backer</Th>
-        </tr>
-      </thead>
+    <Table
+      caption="Joint inputs as saved"
+      head={[
+        'Joint',
+        numeric('Design width / depth'),
+        'Moving sides (α × L)',
+        numeric('Surface range'),
+        numeric('Installed at'),
+        numeric('Other movement'),
+        'Sealant, tolerance, backer',
+      ]}
+    >
       <tbody>
         {joints.map((j, i) => {
           const install = j.installationTemperature;

@@ -8,7 +8,7 @@ import {
 } from '@shared/calc/joints/joints';
 import { type JointResult, MOVEMENT_CLASSES } from '@shared/calc/joints/schema';
 import { formatJointDimension } from '@shared/format/page-measures';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { MOVEMENT_CLASS_LABELS } from '../labels';
 
@@ -86,15 +86,10 @@ export function JointMethod({ results }: { results: readonly (JointResult | null
           ))}
         </li>
       </ol>
-      <Table caption="Movement capability X by sealant class (ASTM C920 classes; the maker's declared class governs)">
-        <thead>
-          <tr>
-            <Th>Class</Th>
-            <Th numeric>X opening</Th>
-            <Th numeric>X closing</Th>
-            <Th numeric>W per unit movement</Th>
-          </tr>
-        </thead>
+      <Table
+        caption="Movement capability X by sealant class (ASTM C920 classes; the maker's declared class governs)"
+        head={['Class', numeric('X opening'), numeric('X closing'), numeric('W per unit movement')]}
+      >
         <tbody>
           {MOVEMENT_CLASSES.map((c) => {
             const x = MOVEMENT_CAPABILITY[c];

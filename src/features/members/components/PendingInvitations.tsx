@@ -1,6 +1,6 @@
 import { PROJECT_ROLE_LABELS } from '@shared/auth/permissions';
 import type { Invitation } from '@shared/schemas/members';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format';
 
 /** Invitations not yet accepted; expired ones are marked in words, not only by colour. */
@@ -14,15 +14,10 @@ export function PendingInvitations({
   const pending = invitations.filter((i) => i.acceptedAt === null);
   if (pending.length === 0) return <p className="text-ink-muted">No invitations waiting for an answer.</p>;
   return (
-    <Table caption="Invitations waiting for an answer">
-      <thead>
-        <tr>
-          <Th>E-mail</Th>
-          <Th>Role</Th>
-          <Th numeric>Sent</Th>
-          <Th numeric>Expires</Th>
-        </tr>
-      </thead>
+    <Table
+      caption="Invitations waiting for an answer"
+      head={['E-mail', 'Role', numeric('Sent'), numeric('Expires')]}
+    >
       <tbody>
         {pending.map((i) => {
           const expired = new Date(i.expiresAt).getTime() <= now.getTime();

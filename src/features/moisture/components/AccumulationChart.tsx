@@ -1,7 +1,7 @@
 import type { MoistureResult } from '@shared/calc/moisture/schema';
 import type { UnitSystem } from '@shared/units';
 import { Bar, BarChart, CartesianGrid, Cell, LabelList, XAxis, YAxis } from 'recharts';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { formatNumber } from '../../../lib/quantities';
 import { formatWaterInColumn, monthName, monthShort, toShownWater, waterUnit } from '../units';
 
@@ -101,15 +101,10 @@ export function AccumulationChart({
         </figcaption>
       </figure>
       {any ? (
-        <Table caption="Monthly water balance (all planes)">
-          <thead>
-            <tr>
-              <Th>Month</Th>
-              <Th numeric>Condensed</Th>
-              <Th numeric>Evaporated</Th>
-              <Th numeric>Held at month end</Th>
-            </tr>
-          </thead>
+        <Table
+          caption="Monthly water balance (all planes)"
+          head={['Month', numeric('Condensed'), numeric('Evaporated'), numeric('Held at month end')]}
+        >
           <tbody>
             {result.months.map((m) => (
               <tr key={m.month} className={m.month === selected ? 'bg-paper-raised font-semibold' : ''}>

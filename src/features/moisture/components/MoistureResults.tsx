@@ -3,7 +3,7 @@ import type { MoistureResult } from '@shared/calc/moisture/schema';
 import type { UnitSystem } from '@shared/units';
 import { useId } from 'react';
 import { Select } from '../../../components/ui/Select';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { formatNumber } from '../../../lib/quantities';
 import {
   formatPressure,
@@ -160,20 +160,21 @@ function ProfileValues({
       <summary className="cursor-pointer py-2 text-sm font-semibold">
         Values at each face in {monthName(m.month)} ({rows.length} planes)
       </summary>
-      <Table caption={`Profile values, ${monthName(m.month)}`} captionHidden>
-        <thead>
-          <tr>
-            <Th>Plane</Th>
-            <Th numeric>x ({lengthUnit(system)})</Th>
-            <Th numeric>s_d from outside</Th>
-            <Th numeric>θ</Th>
-            <Th numeric>θ_d</Th>
-            <Th numeric>p_sat</Th>
-            <Th numeric>p</Th>
-            <Th numeric>g·t this month</Th>
-            <Th numeric>Held</Th>
-          </tr>
-        </thead>
+      <Table
+        caption={`Profile values, ${monthName(m.month)}`}
+        captionHidden
+        head={[
+          'Plane',
+          numeric(<>x ({lengthUnit(system)})</>),
+          numeric('s_d from outside'),
+          numeric('θ'),
+          numeric('θ_d'),
+          numeric('p_sat'),
+          numeric('p'),
+          numeric('g·t this month'),
+          numeric('Held'),
+        ]}
+      >
         <tbody>
           {rows.map(({ node, k }) => {
             const p = m.vapourPressure[k]!;

@@ -86,15 +86,15 @@ export function ProjectEditor({ project, onDone }: { project: Project; onDone: (
         and your edits are still in the form above.
       </p>
       {rows.length > 0 ? (
-        <Table caption="Where your edits and the saved revision differ">
-          <thead>
-            <tr>
-              <Th>Field</Th>
-              <Th>You started from (rev. {conflict.base.version})</Th>
-              <Th>Yours, not saved</Th>
-              <Th>Saved (rev. {conflict.theirs.version})</Th>
-            </tr>
-          </thead>
+        <Table
+          caption="Where your edits and the saved revision differ"
+          head={[
+            'Field',
+            <>You started from (rev. {conflict.base.version})</>,
+            'Yours, not saved',
+            <>Saved (rev. {conflict.theirs.version})</>,
+          ]}
+        >
           <tbody>
             {rows.map((r) => (
               <tr key={r.field}>

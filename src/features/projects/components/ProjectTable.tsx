@@ -1,7 +1,7 @@
 import { PROJECT_ROLE_LABELS } from '@shared/auth/permissions';
 import type { Project } from '@shared/schemas/project';
 import { Link } from 'react-router';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { formatDate } from '../../../lib/format';
 import { formatQuantity } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
@@ -9,18 +9,18 @@ import { useUnitSystem } from '../../../lib/unit-system';
 export function ProjectTable({ projects, caption }: { projects: Project[]; caption: string }) {
   const system = useUnitSystem();
   return (
-    <Table caption={caption}>
-      <thead>
-        <tr>
-          <Th>No.</Th>
-          <Th>Project</Th>
-          <Th>Firm</Th>
-          <Th>Climate zone</Th>
-          <Th numeric>Height h</Th>
-          <Th>Your role</Th>
-          <Th numeric>Last saved</Th>
-        </tr>
-      </thead>
+    <Table
+      caption={caption}
+      head={[
+        'No.',
+        'Project',
+        'Firm',
+        'Climate zone',
+        numeric('Height h'),
+        'Your role',
+        numeric('Last saved'),
+      ]}
+    >
       <tbody>
         {projects.map((p) => (
           <tr key={p.id} className="hover:bg-paper-sunk">

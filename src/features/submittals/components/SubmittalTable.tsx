@@ -1,6 +1,6 @@
 import type { SubmittalSummary } from '@shared/schemas/submittals';
 import { Link } from 'react-router';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { formatDate } from '../../../lib/format';
 import { StatusBadge } from './StatusBadge';
 
@@ -13,19 +13,20 @@ export function SubmittalTable({
   submittals: SubmittalSummary[];
 }) {
   return (
-    <Table caption="Submittals (latest revision of each)" captionHidden>
-      <thead>
-        <tr>
-          <Th>Number</Th>
-          <Th>Title</Th>
-          <Th>Specification section</Th>
-          <Th numeric>Rev.</Th>
-          <Th>Status</Th>
-          <Th>Submitter</Th>
-          <Th>Due</Th>
-          <Th numeric>Items</Th>
-        </tr>
-      </thead>
+    <Table
+      caption="Submittals (latest revision of each)"
+      captionHidden
+      head={[
+        'Number',
+        'Title',
+        'Specification section',
+        numeric('Rev.'),
+        'Status',
+        'Submitter',
+        'Due',
+        numeric('Items'),
+      ]}
+    >
       <tbody>
         {submittals.map((s) => (
           <tr key={s.id} data-submittal={s.number}>

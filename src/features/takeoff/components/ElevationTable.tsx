@@ -1,6 +1,6 @@
 import type { TakeoffInput } from '@shared/calc/takeoff/schema';
 import { formatJointDimension, formatPageMeasure } from '@shared/format/page-measures';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { TAKEOFF_TYPE_LABELS } from '../labels';
 
@@ -10,15 +10,15 @@ export function ElevationTable({ input }: { input: TakeoffInput }) {
   const len = (m: number | undefined) => formatPageMeasure(m, 'length', system);
   return (
     <div className="flex flex-col gap-4">
-      <Table caption="Walls as saved">
-        <thead>
-          <tr>
-            <Th>Wall</Th>
-            <Th numeric>Length × height</Th>
-            <Th numeric>Corners / abutments</Th>
-            <Th>Openings (n × width × height)</Th>
-          </tr>
-        </thead>
+      <Table
+        caption="Walls as saved"
+        head={[
+          'Wall',
+          numeric('Length × height'),
+          numeric('Corners / abutments'),
+          'Openings (n × width × height)',
+        ]}
+      >
         <tbody>
           {input.walls.map((w, i) => (
             // biome-ignore lint/suspicious/noArrayIndexKey: walls follow the input order

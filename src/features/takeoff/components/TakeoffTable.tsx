@@ -4,7 +4,7 @@ import type { UnitSystem } from '@shared/units';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { downloadTakeoffCsv } from '../csv';
 import { BEAD_SHAPE_LABELS, TAKEOFF_TYPE_LABELS } from '../labels';
@@ -61,15 +61,10 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
         </p>
       </div>
 
-      <Table caption="Joint lengths and sealant">
-        <thead>
-          <tr>
-            <Th>Joint line</Th>
-            <Th numeric>Length</Th>
-            <Th>Bead</Th>
-            <Th numeric>Sealant, net</Th>
-          </tr>
-        </thead>
+      <Table
+        caption="Joint lengths and sealant"
+        head={['Joint line', numeric('Length'), 'Bead', numeric('Sealant, net')]}
+      >
         <tbody>
           {TAKEOFF_JOINT_TYPES.map((t) => (
             <tr key={t} data-line={t}>
@@ -100,14 +95,10 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
         </tbody>
       </Table>
 
-      <Table caption="Sealant packages (whole packages, with waste)">
-        <thead>
-          <tr>
-            <Th>Package</Th>
-            <Th numeric>Size</Th>
-            <Th numeric>How many</Th>
-          </tr>
-        </thead>
+      <Table
+        caption="Sealant packages (whole packages, with waste)"
+        head={['Package', numeric('Size'), numeric('How many')]}
+      >
         <tbody>
           <tr>
             <Td>Cartridges</Td>
@@ -134,14 +125,7 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
         </tbody>
       </Table>
 
-      <Table caption="Tape, trim and fasteners">
-        <thead>
-          <tr>
-            <Th>Item</Th>
-            <Th numeric>Quantity</Th>
-            <Th>Basis</Th>
-          </tr>
-        </thead>
+      <Table caption="Tape, trim and fasteners" head={['Item', numeric('Quantity'), 'Basis']}>
         <tbody>
           {result.tape ? (
             <tr>

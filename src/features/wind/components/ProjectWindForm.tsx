@@ -11,6 +11,7 @@ import type { z } from 'zod';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
+import { LabelledOptions } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { Table, Td, Th } from '../../../components/ui/Table';
@@ -226,11 +227,7 @@ export function ProjectWindForm({ project, onDone }: { project: Project; onDone:
           <option value="" disabled>
             Choose…
           </option>
-          {options.map(([value, label]) => (
-            <option key={value} value={value}>
-              {label}
-            </option>
-          ))}
+          <LabelledOptions options={options.map(([value, label]) => ({ value, label }))} />
         </Select>
       )}
     </Field>
@@ -327,14 +324,10 @@ export function ProjectWindForm({ project, onDone }: { project: Project; onDone:
             still in the form.
           </p>
           {differing.length > 0 ? (
-            <Table caption="Where your wind data and the saved wind data differ">
-              <thead>
-                <tr>
-                  <Th>Value</Th>
-                  <Th>Yours, not saved</Th>
-                  <Th>Saved (rev. {conflict.theirs.version})</Th>
-                </tr>
-              </thead>
+            <Table
+              caption="Where your wind data and the saved wind data differ"
+              head={['Value', 'Yours, not saved', <>Saved (rev. {conflict.theirs.version})</>]}
+            >
               <tbody>
                 {differing.map((k) => (
                   <tr key={k}>

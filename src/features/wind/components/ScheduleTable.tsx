@@ -1,7 +1,7 @@
 import type { DesignCheck, WindScheduleResult, ZoneDesign, ZoneResult } from '@shared/calc/wind/schema';
 import type { UnitSystem } from '@shared/units';
 import type { ReactNode } from 'react';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td, Th } from '../../../components/ui/Table';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { CHECK_LABELS, ZONE_SHORT } from '../labels';
 import { checkStatusText, type StatusText, zoneStatusText } from '../status';
@@ -116,28 +116,19 @@ export function ScheduleTable({
                     : 'the wall between the end strips'}
                 </span>
               </Th>
-              <Td numeric>
-                {z.pressures ? (
-                  <PressurePair
-                    inward={z.pressures.strength.inward}
-                    outward={z.pressures.strength.outward}
-                    system={system}
-                  />
-                ) : (
-                  <span className="font-sans text-ink-muted">not computed</span>
-                )}
-              </Td>
-              <Td numeric>
-                {z.pressures ? (
-                  <PressurePair
-                    inward={z.pressures.asd.inward}
-                    outward={z.pressures.asd.outward}
-                    system={system}
-                  />
-                ) : (
-                  <span className="font-sans text-ink-muted">not computed</span>
-                )}
-              </Td>
+              {(['strength', 'asd'] as const).map((level) => (
+                <Td numeric key={level}>
+                  {z.pressures ? (
+                    <PressurePair
+                      inward={z.pressures[level].inward}
+                      outward={z.pressures[level].outward}
+                      system={system}
+                    />
+                  ) : (
+                    <span className="font-sans text-ink-muted">not computed</span>
+                  )}
+                </Td>
+              ))}
               <Td numeric data-testid={`max-girt-${z.zone}`}>
                 {outside || z.girtSpacing === null ? (
                   <Outside />
@@ -238,18 +229,18 @@ export function DesignChecksTable({
     }
   };
   return (
-    <Table caption="Checks at the design spacing: required against allowable">
-      <thead>
-        <tr>
-          <Th>Zone</Th>
-          <Th>Check</Th>
-          <Th numeric>At</Th>
-          <Th numeric>Required</Th>
-          <Th numeric>Allowable</Th>
-          <Th>Utilisation</Th>
-          <Th>Result</Th>
-        </tr>
-      </thead>
+    <Table
+      caption="Checks at the design spacing: required against allowable"
+      head={[
+        'Zone',
+        'Check',
+        numeric('At'),
+        numeric('Required'),
+        numeric('Allowable'),
+        'Utilisation',
+        'Result',
+      ]}
+    >
       <tbody>
         {zones.flatMap((d) =>
           d.checks.map((c, i) => (

@@ -4,7 +4,7 @@ import {
   SPACING_TOLERANCE,
 } from '@shared/calc/wind/attachment';
 import type { WindScheduleInput, WindScheduleResult } from '@shared/calc/wind/schema';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { numeric, Table, Td } from '../../../components/ui/Table';
 import { CHECK_LABELS, ZONE_SHORT } from '../labels';
 
 const stepFormula = (result: WindScheduleResult, id: string) =>
@@ -78,16 +78,10 @@ export function WindMethod({ result, input }: { result: WindScheduleResult; inpu
           governs.
         </li>
       </ol>
-      <Table caption="Iterations of the spacing searches">
-        <thead>
-          <tr>
-            <Th>Zone</Th>
-            <Th>Search</Th>
-            <Th numeric>Steps</Th>
-            <Th numeric>Last change</Th>
-            <Th>Converged</Th>
-          </tr>
-        </thead>
+      <Table
+        caption="Iterations of the spacing searches"
+        head={['Zone', 'Search', numeric('Steps'), numeric('Last change'), 'Converged']}
+      >
         <tbody>
           {steps.map((s) => (
             <tr key={s.key}>

@@ -1,6 +1,5 @@
 import type { AdminOrganisation } from '@shared/schemas/organisations';
-import { useState } from 'react';
-import { Button } from '../../../components/ui/Button';
+import { InlineConfirm } from '../../../components/ui/InlineConfirm';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { errorMessage } from '../../../lib/api';
 import { formatDate } from '../../../lib/format';
@@ -36,11 +35,8 @@ export function OrganisationsTable({ organisations }: { organisations: AdminOrga
 }
 
 function OrganisationRow({ firm, sameName }: { firm: AdminOrganisation; sameName: boolean }) {
-  const [confirming, setConfirming] = useState(false);
   const mutation = useSetVerification();
   const verified = firm.verifiedAt !== null;
-  const change = () =>
-    mutation.mutate({ orgId: firm.id, verified: !verified }, { onSuccess: () => setConfirming(false) });
 
   return (
     <tr data-firm={firm.handle}>
@@ -64,40 +60,29 @@ function OrganisationRow({ firm, sameName }: { firm: AdminOrganisation; sameName
         )}
       </Td>
       <Td className="min-w-56">
-        {confirming ? (
-          <fieldset className="flex flex-col items-start gap-2">
-            <legend className="mb-1 text-sm">
-              {verified
-                ? `Withdraw the verification of ${firm.handle}? Its sheets, those already handed out too, will show “issuer not verified”.`
-                : `Verify ${firm.handle}? Only when you have confirmed, outside Skinwright, that it is “${firm.name}”. Its sheets will show it as verified.`}
-            </legend>
-            <div className="flex flex-wrap gap-2">
-              <Button
-                variant={verified ? 'danger' : 'primary'}
-                className="px-3 py-1"
-                busy={mutation.isPending}
-                busyLabel={verified ? 'Withdrawing…' : 'Verifying…'}
-                onClick={change}
-              >
-                {verified ? 'Withdraw' : 'Verify'}
-                <span className="sr-only"> {firm.handle}</span>
-              </Button>
-              <Button
-                variant="quiet"
-                className="px-2 py-1"
-                onClick={() => setConfirming(false)}
-                disabled={mutation.isPending}
-              >
-                Cancel
-              </Button>
-            </div>
-          </fieldset>
-        ) : (
-          <Button variant="quiet" className="px-2 py-1" onClick={() => setConfirming(true)}>
-            {verified ? 'Withdraw…' : 'Verify…'}
-            <span className="sr-only"> {firm.handle}</span>
-          </Button>
-        )}
+        <InlineConfirm
+          opener={verified ? 'Withdraw…' : 'Verify…'}
+          who={firm.handle}
+          question={
+            verified
+              ? `Withdraw the verification of ${firm.handle}? Its sheets, those already handed out too, will show “issuer not verified”.`
+              : `Verify ${firm.handle}? Only when you have confirmed, outside Skinwright, that it is “${firm.name}”. Its sheets will show it as verified.`
+          }
+          confirmLabel={
+            <>
+              {verified ? 'Withdraw' : 'Verify'}
+              <span className="sr-only"> {firm.handle}</span>
+            </>
+          }
+          confirmVariant={verified ? 'danger' : 'primary'}
+          busy={mutation.isPending}
+          busyLabel={verified ? 'Withdrawing…' : 'Verifying…'}
+          cancelLabel="Cancel"
+          onConfirm={(close) =>
+            mutation.mutate({ orgId: firm.id, verified: !verified }, { onSuccess: close })
+          }
+          className="flex flex-col items-start gap-2"
+        />
         {mutation.isError ? (
           <p role="alert" className="mt-1 text-xs text-caution">
             {errorMessage(mutation.error)}

@@ -1,9 +1,9 @@
 import { FIRM_ROLE_LABELS, FIRM_ROLES, type FirmRole } from '@shared/auth/permissions';
 import type { FirmMember } from '@shared/schemas/firm-members';
 import { useState } from 'react';
-import { Button } from '../../../components/ui/Button';
+import { InlineConfirm } from '../../../components/ui/InlineConfirm';
 import { RoleSelect } from '../../../components/ui/RoleSelect';
-import { Table, Td, Th } from '../../../components/ui/Table';
+import { Table, Td } from '../../../components/ui/Table';
 import { errorMessage } from '../../../lib/api';
 import { useRemoveFirmMember } from '../api/remove-firm-member';
 import { useUpdateFirmMemberRole } from '../api/update-firm-member-role';
@@ -23,13 +23,7 @@ interface Props {
  */
 export function FirmMembersTable({ orgId, firmName, members, isAdmin, myUserId }: Props) {
   return (
-    <Table caption={`People of ${firmName}`}>
-      <thead>
-        <tr>
-          <Th>Person</Th>
-          <Th>Firm role</Th>
-        </tr>
-      </thead>
+    <Table caption={`People of ${firmName}`} head={['Person', 'Firm role']}>
       <tbody>
         {members.map((m) => {
           const isMe = m.userId === myUserId;
@@ -60,7 +54,6 @@ function PersonCell({ member, isMe = false }: { member: FirmMember; isMe?: boole
 
 function ManagedRow({ orgId, firmName, member }: { orgId: string; firmName: string; member: FirmMember }) {
   const [role, setRole] = useState<FirmRole>(member.role);
-  const [confirmRemove, setConfirmRemove] = useState(false);
   const updateRole = useUpdateFirmMemberRole(orgId);
   const remove = useRemoveFirmMember(orgId);
   const error = updateRole.error ?? remove.error;
@@ -84,35 +77,17 @@ function ManagedRow({ orgId, firmName, member }: { orgId: string; firmName: stri
             {errorMessage(error)}
           </p>
         ) : null}
-        {confirmRemove ? (
-          <fieldset className="mt-2 flex flex-wrap items-center gap-2">
-            <legend className="mb-1 text-sm">
-              Take {member.name} out of {firmName}? What they entered stays.
-            </legend>
-            <Button
-              variant="danger"
-              className="px-3 py-1"
-              busy={remove.isPending}
-              busyLabel="Removing…"
-              onClick={() => remove.mutate(member.userId)}
-            >
-              Remove
-            </Button>
-            <Button
-              variant="quiet"
-              className="px-2 py-1"
-              onClick={() => setConfirmRemove(false)}
-              disabled={remove.isPending}
-            >
-              Keep
-            </Button>
-          </fieldset>
-        ) : (
-          <Button variant="quiet" className="mt-1 px-0 py-1" onClick={() => setConfirmRemove(true)}>
-            Remove from the firm…
-            <span className="sr-only"> {member.name}</span>
-          </Button>
-        )}
+        <InlineConfirm
+          opener="Remove from the firm…"
+          who={member.name}
+          question={`Take ${member.name} out of ${firmName}? What they entered stays.`}
+          confirmLabel="Remove"
+          busy={remove.isPending}
+          busyLabel="Removing…"
+          onConfirm={() => remove.mutate(member.userId)}
+          className="mt-2 flex flex-wrap items-center gap-2"
+          openerClassName="mt-1 px-0 py-1"
+        />
       </Td>
     </tr>
   );

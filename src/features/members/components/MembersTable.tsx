@@ -7,7 +7,7 @@ import {
 } from '@shared/auth/permissions';
 import type { Member } from '@shared/schemas/members';
 import { useState } from 'react';
-import { Button } from '../../../components/ui/Button';
+import { InlineConfirm } from '../../../components/ui/InlineConfirm';
 import { RoleSelect } from '../../../components/ui/RoleSelect';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { errorMessage } from '../../../lib/api';
@@ -80,7 +80,6 @@ function ManagedRow({
   // The roles this person may give the member; the member's own role stays shown even when it is not one.
   const grantable = grantableRoles(myRole, member.role);
   const options = grantable.includes(member.role) ? grantable : [member.role, ...grantable];
-  const [confirmRemove, setConfirmRemove] = useState(false);
   const updateRole = useUpdateMemberRole(projectId);
   const remove = useRemoveMember(projectId);
   const error = updateRole.error ?? remove.error;
@@ -110,33 +109,15 @@ function ManagedRow({
         ) : null}
       </Td>
       <Td className="whitespace-nowrap">
-        {confirmRemove ? (
-          <fieldset className="flex flex-wrap items-center gap-2">
-            <legend className="mb-1 text-sm">Remove {member.name} from this project?</legend>
-            <Button
-              variant="danger"
-              className="px-3 py-1"
-              busy={remove.isPending}
-              busyLabel="Removing…"
-              onClick={() => remove.mutate(member.id)}
-            >
-              Remove
-            </Button>
-            <Button
-              variant="quiet"
-              className="px-2 py-1"
-              onClick={() => setConfirmRemove(false)}
-              disabled={remove.isPending}
-            >
-              Keep
-            </Button>
-          </fieldset>
-        ) : (
-          <Button variant="quiet" className="px-2 py-1" onClick={() => setConfirmRemove(true)}>
-            Remove…
-            <span className="sr-only"> {member.name}</span>
-          </Button>
-        )}
+        <InlineConfirm
+          opener="Remove…"
+          who={member.name}
+          question={`Remove ${member.name} from this project?`}
+          confirmLabel="Remove"
+          busy={remove.isPending}
+          busyLabel="Removing…"
+          onConfirm={() => remove.mutate(member.id)}
+        />
       </Td>
     </tr>
   );

@@ -46,6 +46,14 @@ function Figure({
   );
 }
 
+/** The four figures, clear field then effective (stressed), R beside U. */
+const FIGURES = [
+  { key: 'R0', label: 'Clear field', symbol: 'R₀', format: formatR, strong: false },
+  { key: 'U0', label: 'Clear field', symbol: 'U₀', format: formatU, strong: false },
+  { key: 'Reff', label: 'Effective', symbol: 'R_eff', format: formatR, strong: true },
+  { key: 'Ueff', label: 'Effective', symbol: 'U_eff', format: formatU, strong: true },
+] as const;
+
 /** Clear-field and effective R and U, the person's units first, the other system beneath. */
 export function ResultFigures({ result }: { result: ThermalResult }) {
   const system = useUnitSystem();
@@ -54,36 +62,17 @@ export function ResultFigures({ result }: { result: ThermalResult }) {
   return (
     <div className="flex flex-col gap-2">
       <dl className="grid grid-cols-1 gap-px border border-ink bg-rule sm:grid-cols-2 lg:grid-cols-4">
-        <Figure
-          label="Clear field"
-          symbol="R₀"
-          primary={formatR(result.R0, system)}
-          secondary={formatR(result.R0, other)}
-          testId="result-R0"
-        />
-        <Figure
-          label="Clear field"
-          symbol="U₀"
-          primary={formatU(result.U0, system)}
-          secondary={formatU(result.U0, other)}
-          testId="result-U0"
-        />
-        <Figure
-          label="Effective"
-          symbol="R_eff"
-          primary={formatR(result.Reff, system)}
-          secondary={formatR(result.Reff, other)}
-          testId="result-Reff"
-          strong
-        />
-        <Figure
-          label="Effective"
-          symbol="U_eff"
-          primary={formatU(result.Ueff, system)}
-          secondary={formatU(result.Ueff, other)}
-          testId="result-Ueff"
-          strong
-        />
+        {FIGURES.map((f) => (
+          <Figure
+            key={f.key}
+            label={f.label}
+            symbol={f.symbol}
+            primary={f.format(result[f.key], system)}
+            secondary={f.format(result[f.key], other)}
+            testId={`result-${f.key}`}
+            strong={f.strong}
+          />
+        ))}
       </dl>
       <p className="text-sm">
         {result.bridges.length === 0

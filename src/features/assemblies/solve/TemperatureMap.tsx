@@ -93,24 +93,22 @@ export function TemperatureMap({
           ))}
           {cx !== undefined && cy !== undefined ? (
             <g data-testid="coldest-point">
-              <circle
-                cx={cx}
-                cy={cy}
-                r={h * 0.05}
-                fill="none"
-                stroke="#fff"
-                strokeWidth={4}
-                vectorEffect="non-scaling-stroke"
-              />
-              <circle
-                cx={cx}
-                cy={cy}
-                r={h * 0.05}
-                fill="none"
-                stroke="#111"
-                strokeWidth={2}
-                vectorEffect="non-scaling-stroke"
-              />
+              {/* A white ring under a dark one: the mark reads on any colour of the map. */}
+              {[
+                { stroke: '#fff', width: 4 },
+                { stroke: '#111', width: 2 },
+              ].map((ring) => (
+                <circle
+                  key={ring.stroke}
+                  cx={cx}
+                  cy={cy}
+                  r={h * 0.05}
+                  fill="none"
+                  stroke={ring.stroke}
+                  strokeWidth={ring.width}
+                  vectorEffect="non-scaling-stroke"
+                />
+              ))}
             </g>
           ) : null}
         </g>

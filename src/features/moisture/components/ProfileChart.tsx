@@ -422,26 +422,22 @@ export function ProfileChart({
           <text x={xOf(geo.total / 2)} y={TOP + PLOT_H + 36} fontSize="11" textAnchor="middle" fill={INK}>
             {`position through the wall from its outer face, ${unit} (to scale)`}
           </text>
-          <text
-            x={xLeft + AIR / 2}
-            y={TOP + PLOT_H + 36}
-            fontSize="10"
-            letterSpacing="1.2"
-            textAnchor="middle"
-            fill={INK}
-          >
-            OUTSIDE
-          </text>
-          <text
-            x={xRight - AIR / 2}
-            y={TOP + PLOT_H + 36}
-            fontSize="10"
-            letterSpacing="1.2"
-            textAnchor="middle"
-            fill={INK}
-          >
-            INSIDE
-          </text>
+          {[
+            { x: xLeft + AIR / 2, side: 'OUTSIDE' },
+            { x: xRight - AIR / 2, side: 'INSIDE' },
+          ].map((a) => (
+            <text
+              key={a.side}
+              x={a.x}
+              y={TOP + PLOT_H + 36}
+              fontSize="10"
+              letterSpacing="1.2"
+              textAnchor="middle"
+              fill={INK}
+            >
+              {a.side}
+            </text>
+          ))}
         </svg>
       </div>
       <figcaption className="mt-1 flex flex-wrap items-center gap-x-5 gap-y-1 text-xs text-ink-muted">

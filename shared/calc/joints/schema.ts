@@ -1,4 +1,6 @@
+import { measure } from '@shared/calc/answer';
 import { traceStepSchema } from '@shared/calc/trace';
+import { K, M, PER_K } from '@shared/calc/trace-units';
 import type { Unbranded } from '@shared/units/brands';
 import { z } from 'zod';
 
@@ -108,18 +110,16 @@ export const jointInputSchema = z.object({
 
 export const jointScheduleInputSchema = z.object({ joints: z.array(jointInputSchema).min(1).max(500) });
 
-const m = (what: string) => z.number().describe(`${what}, m`);
-
 export const backerSchema = z.discriminatedUnion('kind', [
   z.object({
     kind: z.literal('rod'),
     cell: z.enum(BACKER_CELLS),
-    minDiameter: m('Smallest rod diameter for the joint width'),
-    maxDiameter: m('Largest rod diameter for the joint width'),
+    minDiameter: measure('Smallest rod diameter for the joint width', M),
+    maxDiameter: measure('Largest rod diameter for the joint width', M),
   }),
   z.object({
     kind: z.literal('bond_breaker_tape'),
-    width: m('Tape width = joint width'),
+    width: measure('Tape width = joint width', M),
   }),
 ]);
 
@@ -129,22 +129,22 @@ export const jointResultSchema = z.object({
   sides: z.array(
     z.object({
       label: z.string(),
-      alpha: z.number().describe('α used, 1/K'),
-      length: m('Moving length L'),
-      extension: m('Thermal opening α·L·ΔT_ext'),
-      compression: m('Thermal closing α·L·ΔT_comp'),
+      alpha: measure('α used', PER_K),
+      length: measure('Moving length L', M),
+      extension: measure('Thermal opening α·L·ΔT_ext', M),
+      compression: measure('Thermal closing α·L·ΔT_comp', M),
     }),
   ),
-  deltaTExtension: z.number().describe('Installation (warmest) → coldest surface, K'),
-  deltaTCompression: z.number().describe('Coldest installation → hottest surface, K'),
-  movementExtension: m('Total opening movement'),
-  movementCompression: m('Total closing movement'),
-  widthForExtension: m('(100/X_ext)·movementExtension + tolerance'),
-  widthForCompression: m('(100/X_comp)·movementCompression + tolerance'),
-  requiredWidth: m('Largest of the two and the minimum practical width'),
+  deltaTExtension: measure('Installation (warmest) → coldest surface', K),
+  deltaTCompression: measure('Coldest installation → hottest surface', K),
+  movementExtension: measure('Total opening movement', M),
+  movementCompression: measure('Total closing movement', M),
+  widthForExtension: measure('(100/X_ext)·movementExtension + tolerance', M),
+  widthForCompression: measure('(100/X_comp)·movementCompression + tolerance', M),
+  requiredWidth: measure('Largest of the two and the minimum practical width', M),
   governing: z.enum(['extension', 'compression', 'minimum']),
-  designWidth: m('Width as designed'),
-  requiredDepth: m('Sealant depth for the design width by the depth rule'),
+  designWidth: measure('Width as designed', M),
+  requiredDepth: measure('Sealant depth for the design width by the depth rule', M),
   backer: backerSchema,
   verdict: z.enum(['pass', 'fail']),
   margin: z.number().describe('(designWidth − requiredWidth)/requiredWidth, dimensionless'),

@@ -1,4 +1,6 @@
+import { measure } from '@shared/calc/answer';
 import { traceStepSchema } from '@shared/calc/trace';
+import { M, M2, M3 } from '@shared/calc/trace-units';
 import { z } from 'zod';
 
 /**
@@ -122,21 +124,20 @@ export const takeoffInputSchema = z.object({
 });
 
 const count = (what: string) => z.number().int().describe(`${what}, whole number`);
-const m = (what: string) => z.number().describe(`${what}, m`);
 
 export const takeoffResultSchema = z.object({
-  lengths: z.record(takeoffJointTypeSchema, m('Joint length of the type')),
+  lengths: z.record(takeoffJointTypeSchema, measure('Joint length of the type', M)),
   sealant: z.object({
     byJoint: z.array(
       z.object({
         joint: takeoffJointTypeSchema,
-        length: m('Joint length'),
-        crossSection: z.number().describe('Bead cross-section, m²'),
-        volume: z.number().describe('Net volume, m³'),
+        length: measure('Joint length', M),
+        crossSection: measure('Bead cross-section', M2),
+        volume: measure('Net volume', M3),
       }),
     ),
-    volume: z.number().describe('Net sealant volume, m³'),
-    volumeWithWaste: z.number().describe('Volume × (1 + waste), m³'),
+    volume: measure('Net sealant volume', M3),
+    volumeWithWaste: measure('Volume × (1 + waste)', M3),
     cartridges: z.object({
       usFlOz10_1: count('10.1 US fl oz cartridges'),
       ml300: count('300 ml cartridges'),
@@ -145,8 +146,8 @@ export const takeoffResultSchema = z.object({
   }),
   tape: z
     .object({
-      length: m('Tape length with waste'),
-      area: z.number().describe('Tape area with waste, m²'),
+      length: measure('Tape length with waste', M),
+      area: measure('Tape area with waste', M2),
       rolls: count('Rolls').nullable(),
     })
     .nullable(),
@@ -155,7 +156,7 @@ export const takeoffResultSchema = z.object({
       name: z.string(),
       appliesTo: takeoffJointTypeSchema,
       runs: count('Continuous runs'),
-      length: m('Run length to cover'),
+      length: measure('Run length to cover', M),
       pieces: count('Stock pieces'),
     }),
   ),

@@ -1,4 +1,6 @@
+import { measure } from '@shared/calc/answer';
 import { traceStepSchema } from '@shared/calc/trace';
+import { M, M2, N, PA } from '@shared/calc/trace-units';
 import type { Unbranded } from '@shared/units/brands';
 import { z } from 'zod';
 
@@ -174,8 +176,6 @@ export const windScheduleInputSchema = z.object({ site: windSiteSchema, panel: p
 
 // ------------------------------------------------------------------------------------------------ result
 
-const pa = (what: string) => z.number().describe(`${what}, Pa`);
-
 export const velocityResultSchema = z.object({
   edition: windEditionSchema,
   Kh: z
@@ -187,9 +187,9 @@ export const velocityResultSchema = z.object({
   Kzt: z.number().describe('Topographic factor K_zt, dimensionless'),
   Kd: z.number().describe('Wind directionality factor K_d, dimensionless'),
   Ke: z.number().describe('Ground elevation factor K_e, dimensionless'),
-  qh: pa('Velocity pressure at the mean roof height q_h (7-16: includes K_d; 7-22: excludes it)'),
+  qh: measure('Velocity pressure at the mean roof height q_h (7-16: includes K_d; 7-22: excludes it)', PA),
   qhPsf: z.number().describe('q_h, lbf/ft²'),
-  qz: pa('Velocity pressure at the component height q_z (same convention as q_h)'),
+  qz: measure('Velocity pressure at the component height q_z (same convention as q_h)', PA),
   qzPsf: z.number().describe('q_z, lbf/ft²'),
   equation: z.string().describe('Velocity pressure equation of the edition with its number'),
 });
@@ -200,7 +200,7 @@ export const tableStatusSchema = z.enum(['ok', 'table-end', 'outside-table']);
 export const iterationSchema = z.object({
   converged: z.boolean(),
   iterations: z.number().int().describe('Fixed-point iterations used'),
-  lastChange: z.number().describe('Change of the spacing in the last iteration, m'),
+  lastChange: measure('Change of the spacing in the last iteration', M),
 });
 
 export const spanCheckSchema = z.object({
@@ -216,24 +216,27 @@ export const spanCheckSchema = z.object({
 });
 
 export const zonePressureSchema = z.object({
-  effectiveArea: z.number().describe('Effective wind area A = span × max(width, span/3), m²'),
+  effectiveArea: measure('Effective wind area A = span × max(width, span/3)', M2),
   GCpInward: z.number().describe('External pressure coefficient, positive (toward the surface)'),
   GCpOutward: z.number().describe('External pressure coefficient, negative (away from the surface)'),
   strength: z.object({
-    inward: pa('Strength-level inward pressure W'),
-    outward: pa('Strength-level outward'),
+    inward: measure('Strength-level inward pressure W', PA),
+    outward: measure('Strength-level outward', PA),
   }),
-  asd: z.object({ inward: pa('ASD inward pressure 0.6 W'), outward: pa('ASD outward pressure 0.6 W') }),
+  asd: z.object({
+    inward: measure('ASD inward pressure 0.6 W', PA),
+    outward: measure('ASD outward pressure 0.6 W', PA),
+  }),
   minimumGoverns: z.boolean().describe('True when the 16 psf (0.77 kPa) minimum net pressure governs'),
 });
 
 export const clipResultSchema = z.object({
-  capacity: z.number().describe('Allowable ASD load per clip, N'),
+  capacity: measure('Allowable ASD load per clip', N),
   continuityFactor: z.number().describe('Reaction factor of the panel at the clip, dimensionless'),
-  maxSpacing: z.number().describe('Largest clip spacing along the girt, m'),
-  effectiveArea: z.number().describe('Tributary (= effective) area of one clip at that spacing, m²'),
-  pressure: z.number().describe('ASD pressure magnitude at the clip’s effective area, Pa'),
-  demand: z.number().describe('ASD load on one clip at the maximum spacing, N'),
+  maxSpacing: measure('Largest clip spacing along the girt', M),
+  effectiveArea: measure('Tributary (= effective) area of one clip at that spacing', M2),
+  pressure: measure('ASD pressure magnitude at the clip’s effective area', PA),
+  demand: measure('ASD load on one clip at the maximum spacing', N),
   utilisation: z.number().describe('demand / capacity, dimensionless (1 at the maximum spacing)'),
   iteration: iterationSchema,
 });
@@ -256,9 +259,9 @@ export const windScheduleResultSchema = z.object({
   velocity: velocityResultSchema,
   lowRise: z.boolean().describe('h ≤ 60 ft (18.3 m): Part 1 figures; otherwise the h > 60 ft figures'),
   figure: z.string().describe('Wall figure applied'),
-  edgeWidth: z.number().describe('End-zone width a (zone 5 at each corner), m'),
+  edgeWidth: measure('End-zone width a (zone 5 at each corner)', M),
   GCpi: z.number().describe('Magnitude of the internal pressure coefficient (GC_pi), dimensionless'),
-  minimumPressure: z.number().describe('Minimum net C&C pressure (strength level), Pa'),
+  minimumPressure: measure('Minimum net C&C pressure (strength level)', PA),
   zones: z.array(zoneResultSchema),
   trace: z.array(traceStepSchema),
   warnings: z.array(z.string()),

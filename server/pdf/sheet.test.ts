@@ -83,6 +83,21 @@ describe('the compliance sheet renderer', () => {
     for (const b of thermal.bridges) expect(flat).toContain(`${fixed(b.share * 100, 1)} %`);
     expect(flat).toContain('Method: Energy-code path for steel framing (ASHRAE 90.1 Appendix A)');
   });
+
+  it('prints a run stored before messages became data (reasons in words) as it prints one stored now', async () => {
+    const { renderComplianceSheet } = await import('./sheet');
+    const { demoSheetData } = await import('./fixtures');
+    const { readPdf } = await import('../../tests/setup/pdf');
+    const { storedBefore } = await import('@shared/checks/fixtures');
+    const { checkReportSchema } = await import('@shared/checks/report');
+    const now = demoSheetData('SI');
+    const outputs = checkReportSchema.parse(storedBefore(now.run.outputs));
+    expect(outputs.checks.some((c) => typeof c.reason === 'string' && c.reason !== '')).toBe(true);
+    const before = { ...now, run: { ...now.run, outputs } };
+    const [a, b] = await Promise.all([now, before].map((d) => readPdf(renderComplianceSheet(d))));
+    expect(b!.text).toBe(a!.text);
+    expect(a!.text.replace(/\s+/g, ' ')).toContain('No interstitial condensation');
+  });
 });
 
 describe('sheet helpers', () => {

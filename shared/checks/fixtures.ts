@@ -1,4 +1,5 @@
 import demo from '../../data/seed/demo-assembly.json' with { type: 'json' };
+import { engineMessageSchema, messageText } from '../format/messages';
 import { type AssemblyInputSI, assemblyInputSchema } from '../schemas/assembly';
 import {
   type ProjectClimateSI,
@@ -8,7 +9,7 @@ import {
 } from '../schemas/project';
 import type { CriteriaRowInput } from './criteria';
 import type { ProjectForChecks } from './inputs';
-import type { Check } from './report';
+import type { Check, CheckReport } from './report';
 
 /** The invented demo assembly and project (data/seed) as the checks read them — for tests. */
 export const demoAssembly = (): AssemblyInputSI => assemblyInputSchema.parse(demo.assembly);
@@ -53,3 +54,19 @@ export const uFactorCheck = (over: Partial<Check> = {}): Check => ({
   traceStepIds: [],
   ...over,
 });
+
+/**
+ * A report as check runs stored it before messages became data (D-030): every message replaced by its SI words,
+ * a reason of none by ''.
+ */
+export function storedBefore(report: CheckReport): unknown {
+  const walk = (v: unknown, key = ''): unknown => {
+    if (v === null) return key === 'reason' ? '' : null;
+    if (Array.isArray(v)) return v.map((x) => walk(x));
+    if (typeof v !== 'object') return v;
+    const parsed = engineMessageSchema.safeParse(v);
+    if (parsed.success) return messageText(parsed.data);
+    return Object.fromEntries(Object.entries(v as object).map(([k, x]) => [k, walk(x, k)]));
+  };
+  return walk(JSON.parse(JSON.stringify(report)));
+}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { demoAssembly, demoProject, criteriaRow as row } from '../checks/fixtures';
-import { type CheckReport, checkReportSchema } from '../checks/report';
+import { demoAssembly, demoProject, criteriaRow as row, storedBefore } from '../checks/fixtures';
+import { checkReportSchema } from '../checks/report';
 import { runChecks } from '../checks/runner';
 import {
   type EngineMessage,
@@ -228,19 +228,6 @@ describe('every engine message code in words', () => {
     expect(engineMessageSchema.safeParse({ code: 'no_such_code', path: '', values: {} }).success).toBe(false);
   });
 });
-
-/** A report as runs stored it before messages became data: every message replaced by its SI words, '' for none. */
-function storedBefore(report: CheckReport): unknown {
-  const walk = (v: unknown, key = ''): unknown => {
-    if (v === null) return key === 'reason' ? '' : null;
-    if (Array.isArray(v)) return v.map((x) => walk(x));
-    if (typeof v !== 'object') return v;
-    const parsed = engineMessageSchema.safeParse(v);
-    if (parsed.success) return messageText(parsed.data);
-    return Object.fromEntries(Object.entries(v as object).map(([k, x]) => [k, walk(x, k)]));
-  };
-  return walk(JSON.parse(JSON.stringify(report)));
-}
 
 describe('check runs stored before messages became data', () => {
   const a = demoAssembly();

@@ -192,7 +192,7 @@ export function assemble(input: MoistureInput, trace: TraceStep[], warnings: str
   });
   if (first > 0)
     warnings.push(
-      `Layers 0–${first - 1} lie outside a well-ventilated air layer and are disregarded; the exterior climate is taken to reach the cavity`,
+      `${first === 1 ? 'Layer 1 lies' : `Layers 1–${first} lie`} outside a well-ventilated air layer and ${first === 1 ? 'is' : 'are'} disregarded; the exterior climate is taken to reach the cavity`,
     );
 
   const table = surfaceResistances(heatFlow);

@@ -51,15 +51,6 @@ function scientific(v: number): string {
 
 const num = (v: number, d: number) => <span className="num">{formatNumber(v, d)}</span>;
 
-/**
- * The engine's warnings count layers from 0 ("Layers 0–1 lie outside…"); the page numbers them from 1, as
- * in the table of layers above.
- */
-const numberedFromOne = (w: string) =>
-  w.replace(/^Layers (\d+)–(\d+) lie outside/, (_, a: string, b: string) =>
-    a === b ? `Layer ${Number(a) + 1} lies outside` : `Layers ${Number(a) + 1}–${Number(b) + 1} lie outside`,
-  );
-
 /** The method as the engine ran it, read from its trace: the clause, the constants and the choices made. */
 export function MoistureMethod({
   result,
@@ -126,7 +117,7 @@ export function MoistureMethod({
         </Row>
       </dl>
       {result.warnings.map((w) => (
-        <Notice key={w} tone="warning" title={sentence(numberedFromOne(w))} />
+        <Notice key={w} tone="warning" title={sentence(w)} />
       ))}
     </div>
   );

@@ -3,6 +3,7 @@ import type { SweepVariantResult } from '@shared/sweep/schema';
 import { planSweep, runSweep, variantRunner, variantValues } from '@shared/sweep/sweep';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { packVariants } from './packed';
 import { type FromWorker, runPool, splitSweep, type ToWorker, type WorkerLike } from './pool';
 
 describe('splitting a sweep over workers', () => {
@@ -18,7 +19,10 @@ describe('splitting a sweep over workers', () => {
   });
 });
 
-/** A worker that runs its chunks in this thread as sweep.worker.ts does (one runner), answering on the next tick. */
+/**
+ * A worker that runs its chunks in this thread as sweep.worker.ts does (one runner, results packed), answering on
+ * the next tick.
+ */
 function inThreadWorker(log: string[]): WorkerLike {
   let run: ((index: number) => SweepVariantResult) | null = null;
   const w: WorkerLike = {
@@ -35,7 +39,7 @@ function inThreadWorker(log: string[]): WorkerLike {
         setTimeout(() => {
           const variants = Array.from({ length: m.chunk.count }, (_, i) => run!(m.chunk.start + i));
           w.onmessage?.({
-            data: { type: 'done', id: m.id, variants } satisfies FromWorker,
+            data: { type: 'done', id: m.id, packed: packVariants(variants) } satisfies FromWorker,
           } as MessageEvent<FromWorker>);
         });
     },

@@ -2,12 +2,13 @@ import type { CriteriaRowInput } from '@shared/checks/criteria';
 import type { ProjectForChecks } from '@shared/checks/inputs';
 import type { AssemblyInput } from '@shared/schemas/assembly';
 import type { SweepParameter, SweepVariantResult } from '@shared/sweep/schema';
+import { type PackedVariants, unpackVariants } from './packed';
 
 /*
  * A sweep split over a small pool of Web Workers. Each worker plans the sweep once and keeps one variant runner
  * (shared/sweep `variantRunner`: each module's run kept by the values of the parameters that touch it), then
  * takes contiguous runs of variant numbers — chunks — as it hands one back; results stream back chunk by chunk,
- * already numbered in the whole sweep; cancel terminates every worker.
+ * already numbered in the whole sweep and packed into numbers (packed.ts); cancel terminates every worker.
  */
 
 /** A contiguous run of variant numbers. */
@@ -33,7 +34,7 @@ export interface SweepSetup {
 
 export type ToWorker = { type: 'setup'; setup: SweepSetup } | { type: 'chunk'; id: number; chunk: Chunk };
 export type FromWorker =
-  | { type: 'done'; id: number; variants: SweepVariantResult[] }
+  | { type: 'done'; id: number; packed: PackedVariants }
   | { type: 'refused'; id: number; field: string; reason: string };
 
 /** The part of a Worker the pool uses (a test passes its own). */
@@ -96,7 +97,7 @@ export function runPool({
       if (settled) return;
       const m = e.data;
       if (m.type === 'refused') return finish({ ok: false, field: m.field, reason: m.reason });
-      onResults(m.variants);
+      onResults(unpackVariants(m.packed));
       back++;
       if (back === chunks.length) finish({ ok: true });
       else feed(w);

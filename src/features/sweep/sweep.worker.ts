@@ -1,11 +1,12 @@
 import { CalcInputError } from '@shared/calc/errors';
 import { planSweep, variantRunner, variantValues } from '@shared/sweep/sweep';
+import { packVariants } from './packed';
 import type { FromWorker, ToWorker } from './pool';
 
 /** The worker's scope, as much of it as is used (the client's types are the DOM's). */
 const scope = self as unknown as {
   onmessage: (e: MessageEvent<ToWorker>) => void;
-  postMessage: (message: FromWorker) => void;
+  postMessage: (message: FromWorker, transfer?: Transferable[]) => void;
 };
 
 let sweep: { plan: ReturnType<typeof planSweep>; run: ReturnType<typeof variantRunner> } | null = null;
@@ -13,7 +14,7 @@ let refused: { field: string; reason: string } | null = null;
 
 /**
  * The sweep once (planned, and one runner that keeps module runs across chunks), then chunks: each variant of
- * the chunk through the compliance runner, numbered in the whole sweep.
+ * the chunk through the compliance runner, numbered in the whole sweep, packed into numbers (moved, not copied).
  */
 scope.onmessage = (e) => {
   const m = e.data;
@@ -41,5 +42,6 @@ scope.onmessage = (e) => {
     const index = m.chunk.start + i;
     return run(index, variantValues(plan, index));
   });
-  scope.postMessage({ type: 'done', id: m.id, variants });
+  const packed = packVariants(variants);
+  scope.postMessage({ type: 'done', id: m.id, packed }, [packed.numbers.buffer]);
 };

@@ -1,6 +1,7 @@
 import { VERDICT_WORDS } from '@shared/format';
 import type { SweepParameterKind, SweepVariantResult } from '@shared/sweep/schema';
 import type { UnitSystem } from '@shared/units';
+import { memo } from 'react';
 import { KIND_LABELS } from '../draft';
 import { spread, valueText } from '../present';
 
@@ -13,7 +14,7 @@ const TONE = { pass: 'text-meets', fail: 'text-caution', incomplete: 'text-warni
  * Pass or fail of every variant of two parameters (the others held): a row per value of one, a column per
  * value of the other, each cell its glyph and the verdict's word for screen readers.
  */
-export function PassFailMap({
+export const PassFailMap = memo(function PassFailMap({
   grid,
   kinds,
   values,
@@ -94,4 +95,4 @@ export function PassFailMap({
       </table>
     </div>
   );
-}
+});

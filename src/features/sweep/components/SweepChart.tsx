@@ -1,5 +1,6 @@
 import type { SweepParameterKind, SweepVariantResult } from '@shared/sweep/schema';
 import type { UnitSystem } from '@shared/units';
+import { memo } from 'react';
 import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, Tooltip, XAxis, YAxis } from 'recharts';
 import { formatNumber } from '../../../lib/quantities';
 import { KIND_LABELS, measureOf } from '../draft';
@@ -18,13 +19,14 @@ const STROKES = [
   { stroke: MUTED, dash: '4 4' },
   { stroke: '#7a5500', dash: '1 2' },
 ];
+const DOTS_MAX = 30;
 const MONO = { fontSize: 11, fontFamily: 'IBM Plex Mono, monospace' };
 
 /**
  * A code-table figure (e.g. U-factor) against one numeric parameter, one line per value of another (at most
  * six, spread over its values), the others held; the limit drawn as a line and named.
  */
-export function SweepChart({
+export const SweepChart = memo(function SweepChart({
   grid,
   kinds,
   values,
@@ -55,6 +57,8 @@ export function SweepChart({
     }
     return point;
   });
+  // A dot per point while they can be told apart; a line of 100 points reads as a line (and draws faster).
+  const dense = data.length > DOTS_MAX;
   const limit = check.shown(check.required);
   const xUnit = measureOf(xKind).unit(system);
   const words = `${check.label} (${check.unit}) against ${KIND_LABELS[xKind].toLowerCase()} (${xUnit})${
@@ -116,7 +120,7 @@ export function SweepChart({
               stroke={STROKES[i]!.stroke}
               strokeDasharray={STROKES[i]!.dash}
               strokeWidth={1.5}
-              dot={{ r: 2.5 }}
+              dot={dense ? false : { r: 2.5 }}
               connectNulls
               isAnimationActive={false}
             />
@@ -134,4 +138,4 @@ export function SweepChart({
       </figcaption>
     </figure>
   );
-}
+});

@@ -15,7 +15,7 @@ import {
   tableFeatures,
   useTable,
 } from '@tanstack/react-table';
-import { useMemo } from 'react';
+import { memo, useMemo } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Select } from '../../../components/ui/Select';
@@ -55,7 +55,7 @@ function Outcome({ status, ratio }: { status: keyof typeof STATUS_WORDS; ratio: 
  * check (share of the limit, ≥ 0 meets); sortable by any column, filtered by verdict and by what governs,
  * 25 to a page; "Choose" picks a variant for "Make this an assembly".
  */
-export function SweepResultsTable({
+export const SweepResultsTable = memo(function SweepResultsTable({
   variants,
   kinds,
   checks,
@@ -257,4 +257,4 @@ export function SweepResultsTable({
       </div>
     </div>
   );
-}
+});

@@ -9,35 +9,19 @@ import {
   assemblyUpdateSchema,
   revisionListSchema,
 } from '@shared/schemas/assembly';
-import { apiErrorSchema, int4Param, projectParams, versionConflictSchema } from '@shared/schemas/common';
+import { int4Param, projectParams, versionConflictSchema } from '@shared/schemas/common';
 import { z } from 'zod';
 import { forbidden, notFound } from '../http/errors';
+import { errorResponse, refusals, via } from '../http/responses';
 import { defineRoute } from '../http/route';
 import { archivedError } from '../services/projects';
 
 const errors = {
-  400: { description: 'Invalid fields', schema: apiErrorSchema },
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: { description: 'Your role does not allow this', schema: apiErrorSchema },
-  404: { description: 'No such project or assembly, or you are not a member', schema: apiErrorSchema },
-  422: {
-    description: 'Physically impossible input (e.g. framing fractions not summing to 1)',
-    schema: apiErrorSchema,
-  },
+  ...refusals('project', 'project or assembly'),
+  422: errorResponse('Physically impossible input (e.g. framing fractions not summing to 1)'),
 };
 const assemblyParams = z.object({ assemblyId: z.uuid() });
-const viaAssembly = {
-  projectId: ({
-    params,
-    services,
-  }: {
-    params: Record<string, string>;
-    services: import('../services').Services;
-  }) =>
-    z.uuid().safeParse(params.assemblyId).success
-      ? services.assemblies.projectOf(params.assemblyId)
-      : Promise.resolve(null),
-};
+const viaAssembly = via('assemblyId', (s, id) => s.assemblies.projectOf(id));
 const example = {
   name: 'Insulated metal panel on girts',
   description: '',
@@ -73,7 +57,7 @@ export const assemblyRoutes = [
     responses: {
       201: { description: 'The new assembly', schema: assemblySchema },
       ...errors,
-      409: { description: 'The project is archived', schema: apiErrorSchema },
+      409: errorResponse('The project is archived'),
     },
     handler: ({ user, project, body, services }) => services.assemblies.create(project.id, user.id, body),
   }),
@@ -123,7 +107,7 @@ export const assemblyRoutes = [
     responses: {
       201: { description: 'The copy', schema: assemblySchema },
       ...errors,
-      409: { description: 'The source or the target project is archived', schema: apiErrorSchema },
+      409: errorResponse('The source or the target project is archived'),
     },
     handler: async ({ user, project, params, body, services }) => {
       const target =

@@ -28,26 +28,19 @@ import {
   windScheduleInputSchema,
   windScheduleResultSchema,
 } from '@shared/calc/wind/schema';
-import { apiErrorSchema, unitSystemSchema } from '@shared/schemas/common';
+import { unitSystemSchema } from '@shared/schemas/common';
 import { demoSweep } from '@shared/sweep/examples';
 import { sweepRequestSchema, sweepResultSchema } from '@shared/sweep/schema';
 import { z } from 'zod';
+import { errorResponse } from '../http/responses';
 import { defineRoute, FileAnswer, type WorkLimit } from '../http/route';
 
 const calcErrors = {
-  400: {
-    description: 'The request does not match the schema; `fields` names each field and the reason',
-    schema: apiErrorSchema,
-  },
-  422: {
-    description: 'Physically impossible input; `fields` names the field and the reason',
-    schema: apiErrorSchema,
-  },
-  429: {
-    description:
-      'Too many calculations from this address in the last minute (`CALC_RATE_LIMIT`); `Retry-After` gives the seconds to wait',
-    schema: apiErrorSchema,
-  },
+  400: errorResponse('The request does not match the schema; `fields` names each field and the reason'),
+  422: errorResponse('Physically impossible input; `fields` names the field and the reason'),
+  429: errorResponse(
+    'Too many calculations from this address in the last minute (`CALC_RATE_LIMIT`); `Retry-After` gives the seconds to wait',
+  ),
 };
 
 /**
@@ -93,10 +86,9 @@ export const CALC_WORK_LIMITS = {
 
 /** The documented 413 of a route with work limits. */
 const overWork = (...limits: WorkLimit[]) => ({
-  413: {
-    description: `Over a work limit (${limits.map((l) => `at most ${l.max} ${l.what}`).join('; ')}); \`fields\` names the field`,
-    schema: apiErrorSchema,
-  },
+  413: errorResponse(
+    `Over a work limit (${limits.map((l) => `at most ${l.max} ${l.what}`).join('; ')}); \`fields\` names the field`,
+  ),
 });
 
 /** The public, stateless calculation API (versioned). */
@@ -259,11 +251,9 @@ export const calcRoutes = [
         schema: bridgeResultSchema,
       },
       ...calcErrors,
-      413: {
-        description:
-          'The grid would pass `BRIDGE_MAX_CELLS` cells; `fields.mesh` gives the cap and the count',
-        schema: apiErrorSchema,
-      },
+      413: errorResponse(
+        'The grid would pass `BRIDGE_MAX_CELLS` cells; `fields.mesh` gives the cap and the count',
+      ),
     },
     handler: async ({ body, services }) => services.bridge.solve(body),
   }),
@@ -284,11 +274,9 @@ export const calcRoutes = [
         schema: sweepResultSchema,
       },
       ...calcErrors,
-      413: {
-        description:
-          'More variants than `SWEEP_MAX_VARIANTS`; `fields.parameters` gives the cap and the count',
-        schema: apiErrorSchema,
-      },
+      413: errorResponse(
+        'More variants than `SWEEP_MAX_VARIANTS`; `fields.parameters` gives the cap and the count',
+      ),
     },
     handler: async ({ body, services }) => services.sweep.run(body),
   }),

@@ -4,30 +4,14 @@ import {
   checkRunListSchema,
   checkRunSchema,
 } from '@shared/schemas/check-runs';
-import { apiErrorSchema, projectParams } from '@shared/schemas/common';
+import { projectParams } from '@shared/schemas/common';
 import { z } from 'zod';
+import { errorResponse, refusals, via } from '../http/responses';
 import { defineRoute } from '../http/route';
-import type { Services } from '../services';
 
-const errors = {
-  400: { description: 'Invalid fields', schema: apiErrorSchema },
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: { description: 'Your role does not allow this', schema: apiErrorSchema },
-  404: {
-    description: 'No such project, assembly, code table or run, or you are not a member',
-    schema: apiErrorSchema,
-  },
-};
-const uuid = (x: string | undefined) => z.uuid().safeParse(x).success;
-type Ctx = { params: Record<string, string>; services: Services };
-const viaAssembly = {
-  projectId: ({ params, services }: Ctx) =>
-    uuid(params.assemblyId) ? services.assemblies.projectOf(params.assemblyId) : Promise.resolve(null),
-};
-const viaRun = {
-  projectId: ({ params, services }: Ctx) =>
-    uuid(params.runId) ? services.checkRuns.projectOf(params.runId) : Promise.resolve(null),
-};
+const errors = refusals('project', 'project, assembly, code table or run');
+const viaAssembly = via('assemblyId', (s, id) => s.assemblies.projectOf(id));
+const viaRun = via('runId', (s, id) => s.checkRuns.projectOf(id));
 
 export const checkRunRoutes = [
   defineRoute({
@@ -43,7 +27,7 @@ export const checkRunRoutes = [
     responses: {
       201: { description: 'The stored run with its inputs, outputs and hash', schema: checkRunSchema },
       ...errors,
-      409: { description: 'The project is archived', schema: apiErrorSchema },
+      409: errorResponse('The project is archived'),
     },
     handler: ({ params, user, body, services }) =>
       services.checkRuns.create(params.assemblyId, user.id, body.criteriaSetId),

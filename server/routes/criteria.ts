@@ -1,5 +1,5 @@
 import { CSV_COLUMNS } from '@shared/checks/criteria-csv';
-import { apiErrorSchema, projectParams, versionConflictSchema } from '@shared/schemas/common';
+import { projectParams, versionConflictSchema } from '@shared/schemas/common';
 import {
   criteriaDiffQuerySchema,
   criteriaDiffSchema,
@@ -16,16 +16,12 @@ import {
   csvImportErrorSchema,
 } from '@shared/schemas/criteria';
 import { z } from 'zod';
+import { errorResponse, refusals } from '../http/responses';
 import { defineRoute } from '../http/route';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const setParams = z.object({ setId: z.uuid() });
-const errors = {
-  400: { description: 'Invalid fields', schema: apiErrorSchema },
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: { description: 'You may read but not change this firm’s code tables', schema: apiErrorSchema },
-  404: { description: 'No such firm or code table, or you cannot see it', schema: apiErrorSchema },
-};
+const errors = refusals('criteria', 'firm or code table');
 const conflict = {
   409: {
     description:
@@ -111,7 +107,7 @@ export const criteriaRoutes = [
     responses: {
       204: { description: 'Deleted' },
       ...errors,
-      409: { description: 'Used by a stored check run, or a newer version exists', schema: apiErrorSchema },
+      409: errorResponse('Used by a stored check run, or a newer version exists'),
     },
     handler: async ({ params, user, services }) => {
       await services.criteria.remove(params.setId, user.id);

@@ -1,4 +1,3 @@
-import { apiErrorSchema } from '@shared/schemas/common';
 import {
   firmMemberAddSchema,
   firmMemberParams,
@@ -6,15 +5,11 @@ import {
   firmMemberSchema,
 } from '@shared/schemas/firm-members';
 import { z } from 'zod';
+import { errorResponse, refusals } from '../http/responses';
 import { defineRoute } from '../http/route';
 
 const orgParams = z.object({ orgId: z.uuid() });
-const errors = {
-  400: { description: 'Invalid fields', schema: apiErrorSchema },
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: { description: 'Firm administrators only', schema: apiErrorSchema },
-  404: { description: 'No such firm or member, or you are not in the firm', schema: apiErrorSchema },
-};
+const errors = refusals('organisation', 'firm or member');
 
 /** The firm members page: who is in the firm with which firm role (admin, editor, reader). */
 export const firmMemberRoutes = [
@@ -44,8 +39,8 @@ export const firmMemberRoutes = [
     responses: {
       201: { description: 'The new member', schema: firmMemberSchema },
       ...errors,
-      409: { description: 'Already in the firm', schema: apiErrorSchema },
-      422: { description: 'No account uses this address', schema: apiErrorSchema },
+      409: errorResponse('Already in the firm'),
+      422: errorResponse('No account uses this address'),
     },
     handler: ({ params, body, user, services }) => services.firmMembers.add(params.orgId, user, body),
   }),
@@ -61,7 +56,7 @@ export const firmMemberRoutes = [
     responses: {
       200: { description: 'The member', schema: firmMemberSchema },
       ...errors,
-      409: { description: 'Would leave the firm without an administrator', schema: apiErrorSchema },
+      409: errorResponse('Would leave the firm without an administrator'),
     },
     handler: ({ params, body, user, services }) =>
       services.firmMembers.setRole(params.orgId, params.userId, body.role, user.id),
@@ -76,7 +71,7 @@ export const firmMemberRoutes = [
     responses: {
       204: { description: 'Removed' },
       ...errors,
-      409: { description: 'The firm’s last administrator', schema: apiErrorSchema },
+      409: errorResponse('The firm’s last administrator'),
     },
     handler: async ({ params, user, services }) => {
       await services.firmMembers.remove(params.orgId, params.userId, user.id);

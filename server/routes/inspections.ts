@@ -1,3 +1,4 @@
+import type { ProjectAction } from '@shared/auth/permissions';
 import {
   attachReportSchema,
   deficiencyAcceptSchema,
@@ -19,54 +20,69 @@ import {
   PHOTO_LIMITS,
   photoUploadResultSchema,
 } from '@shared/inspections/schema';
-import { apiErrorSchema, projectParams, versionConflictSchema } from '@shared/schemas/common';
+import { projectParams, versionConflictSchema } from '@shared/schemas/common';
 import { sheetQuerySchema } from '@shared/schemas/sheets';
 import { submittalSchema } from '@shared/schemas/submittals';
 import { z } from 'zod';
 import { HttpError } from '../http/errors';
+import { errorResponse, refusals, via } from '../http/responses';
 import { defineRoute, sendPdf } from '../http/route';
 import { receiveUpload, sendStoredFile } from '../http/upload';
 import type { Services } from '../services';
+import type { Actor } from '../services/inspections/queries';
 
-const errors = {
-  400: { description: 'Invalid fields', schema: apiErrorSchema },
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: { description: 'Your role does not allow this', schema: apiErrorSchema },
-  404: {
-    description: 'No such inspection, item, deficiency or photo, or you are not a member',
-    schema: apiErrorSchema,
-  },
-};
+const errors = refusals('project', 'inspection, item, deficiency or photo');
 const conflictOf = (what: string, schema: z.ZodType) => ({
   409: {
     description: `Archived project, a closed inspection, a state that does not allow this step, or a stale version (\`current\` is the ${what} as it is now)`,
     schema: versionConflictSchema(schema),
   },
 });
-const invalid = (description: string) => ({ 422: { description, schema: apiErrorSchema } });
+const invalid = (description?: string): Record<number, ReturnType<typeof errorResponse>> =>
+  description ? { 422: errorResponse(description) } : {};
 
-type Ctx = { params: Record<string, string>; services: Services };
-const via =
-  (param: string, find: (s: Services['inspections'], id: string) => Promise<string | null>) =>
-  ({ params, services }: Ctx) =>
-    z.uuid().safeParse(params[param]).success
-      ? find(services.inspections, params[param]!)
-      : Promise.resolve(null);
-const viaInspection = { projectId: via('inspectionId', (s, id) => s.projectOf(id)) };
-const viaItem = { projectId: via('inspectionItemId', (s, id) => s.projectOfItem(id)) };
-const viaDeficiency = { projectId: via('deficiencyId', (s, id) => s.projectOfDeficiency(id)) };
-const viaPhoto = { projectId: via('photoId', (s, id) => s.projectOfPhoto(id)) };
-const viaSubmittal = {
-  projectId: ({ params, services }: Ctx) =>
-    z.uuid().safeParse(params.submittalId).success
-      ? services.submittals.projectOf(params.submittalId!)
-      : Promise.resolve(null),
-};
+const viaInspection = via('inspectionId', (s, id) => s.inspections.projectOf(id));
+const viaItem = via('inspectionItemId', (s, id) => s.inspections.projectOfItem(id));
+const viaDeficiency = via('deficiencyId', (s, id) => s.inspections.projectOfDeficiency(id));
+const viaPhoto = via('photoId', (s, id) => s.inspections.projectOfPhoto(id));
+const viaSubmittal = via('submittalId', (s, id) => s.submittals.projectOf(id));
 
 const inspectionParams = z.object({ inspectionId: z.uuid() });
 const itemParams = z.object({ inspectionItemId: z.uuid() });
 const deficiencyParams = z.object({ deficiencyId: z.uuid() });
 const actor = (u: { id: string; name: string }) => ({ id: u.id, name: u.name });
+
+/** A change or workflow step of a deficiency, naming the version read: the deficiency as it now stands. */
+function deficiencyStep<B>(def: {
+  method: 'put' | 'post';
+  step?: 'correct' | 'accept' | 'reopen';
+  summary: string;
+  action: ProjectAction;
+  body: z.ZodType<B>;
+  example: unknown;
+  /** The 422 of a body that names something that does not fit. */
+  invalid?: string;
+  run: (s: Services['inspections'], id: string, who: Actor, body: B) => Promise<unknown>;
+}) {
+  return defineRoute({
+    method: def.method,
+    path: def.step ? `/deficiencies/:deficiencyId/${def.step}` : '/deficiencies/:deficiencyId',
+    summary: def.summary,
+    tag: 'Inspections',
+    access: { kind: 'project', action: def.action, ...viaDeficiency },
+    params: deficiencyParams,
+    body: def.body,
+    example: def.example,
+    responses: {
+      200: { description: 'The deficiency', schema: deficiencySchema },
+      ...errors,
+      ...conflictOf('deficiency', deficiencySchema),
+      ...invalid(def.invalid),
+    },
+    handler: ({ params, user, body, services }) =>
+      def.run(services.inspections, params.deficiencyId, actor(user), body),
+  });
+}
 
 export const inspectionRoutes = [
   defineRoute({
@@ -97,7 +113,7 @@ export const inspectionRoutes = [
     responses: {
       201: { description: 'The new inspection', schema: inspectionSchema },
       ...errors,
-      409: { description: 'Archived project', schema: apiErrorSchema },
+      409: errorResponse('Archived project'),
       ...invalid('No such assembly on this project, or no such revision'),
     },
     handler: ({ project, user, body, services }) =>
@@ -144,19 +160,10 @@ export const inspectionRoutes = [
     responses: {
       201: { description: 'The stored photos and the item', schema: photoUploadResultSchema },
       ...errors,
-      409: { description: 'Archived project', schema: apiErrorSchema },
-      413: {
-        description: 'A photo too large, too many, or the project’s storage quota reached',
-        schema: apiErrorSchema,
-      },
-      415: {
-        description: 'Not multipart, or a file that is not a PNG or JPEG image',
-        schema: apiErrorSchema,
-      },
-      503: {
-        description: 'Too many uploads at once: try again after `Retry-After` seconds',
-        schema: apiErrorSchema,
-      },
+      409: errorResponse('Archived project'),
+      413: errorResponse('A photo too large, too many, or the project’s storage quota reached'),
+      415: errorResponse('Not multipart, or a file that is not a PNG or JPEG image'),
+      503: errorResponse('Too many uploads at once: try again after `Retry-After` seconds'),
     },
     handler: ({ req, res, params, user, services }) =>
       services.inspections.uploadPhotos(
@@ -223,76 +230,43 @@ export const inspectionRoutes = [
     handler: ({ params, user, body, services }) =>
       services.inspections.close(params.inspectionId, actor(user), body.version),
   }),
-  defineRoute({
+  deficiencyStep({
     method: 'put',
-    path: '/deficiencies/:deficiencyId',
     summary: 'Set a deficiency’s owner (a project member), due date or description, naming its version',
-    tag: 'Inspections',
-    access: { kind: 'project', action: 'deficiency.review', ...viaDeficiency },
-    params: deficiencyParams,
+    action: 'deficiency.review',
     body: deficiencyUpdateSchema,
     example: { version: 1, dueDate: '2027-01-15' },
-    responses: {
-      200: { description: 'The deficiency', schema: deficiencySchema },
-      ...errors,
-      ...conflictOf('deficiency', deficiencySchema),
-      ...invalid('The owner is not a member of the project'),
-    },
-    handler: ({ params, user, body, services }) =>
-      services.inspections.updateDeficiency(params.deficiencyId, actor(user), body),
+    invalid: 'The owner is not a member of the project',
+    run: (s, id, who, body) => s.updateDeficiency(id, who, body),
   }),
-  defineRoute({
+  deficiencyStep({
     method: 'post',
-    path: '/deficiencies/:deficiencyId/correct',
+    step: 'correct',
     summary:
       'Mark a deficiency corrected (open or reopened), with a photo of the item taken since it was opened',
-    tag: 'Inspections',
-    access: { kind: 'project', action: 'deficiency.correct', ...viaDeficiency },
-    params: deficiencyParams,
+    action: 'deficiency.correct',
     body: deficiencyCorrectSchema,
     example: { version: 1, photoId: '00000000-0000-4000-8000-000000000000', note: 'Clip added at grid C.' },
-    responses: {
-      200: { description: 'The deficiency', schema: deficiencySchema },
-      ...errors,
-      ...conflictOf('deficiency', deficiencySchema),
-      ...invalid('No such photo of the item taken since the deficiency was opened'),
-    },
-    handler: ({ params, user, body, services }) =>
-      services.inspections.correct(params.deficiencyId, actor(user), body),
+    invalid: 'No such photo of the item taken since the deficiency was opened',
+    run: (s, id, who, body) => s.correct(id, who, body),
   }),
-  defineRoute({
+  deficiencyStep({
     method: 'post',
-    path: '/deficiencies/:deficiencyId/accept',
+    step: 'accept',
     summary: 'Accept a corrected deficiency (an inspector)',
-    tag: 'Inspections',
-    access: { kind: 'project', action: 'deficiency.review', ...viaDeficiency },
-    params: deficiencyParams,
+    action: 'deficiency.review',
     body: deficiencyAcceptSchema,
     example: { version: 2, note: '' },
-    responses: {
-      200: { description: 'The deficiency', schema: deficiencySchema },
-      ...errors,
-      ...conflictOf('deficiency', deficiencySchema),
-    },
-    handler: ({ params, user, body, services }) =>
-      services.inspections.accept(params.deficiencyId, actor(user), body),
+    run: (s, id, who, body) => s.accept(id, who, body),
   }),
-  defineRoute({
+  deficiencyStep({
     method: 'post',
-    path: '/deficiencies/:deficiencyId/reopen',
+    step: 'reopen',
     summary: 'Reopen a corrected or accepted deficiency, saying what is still wrong (an inspector)',
-    tag: 'Inspections',
-    access: { kind: 'project', action: 'deficiency.review', ...viaDeficiency },
-    params: deficiencyParams,
+    action: 'deficiency.review',
     body: deficiencyReopenSchema,
     example: { version: 2, note: 'The sealant is still short at the head.' },
-    responses: {
-      200: { description: 'The deficiency', schema: deficiencySchema },
-      ...errors,
-      ...conflictOf('deficiency', deficiencySchema),
-    },
-    handler: ({ params, user, body, services }) =>
-      services.inspections.reopen(params.deficiencyId, actor(user), body),
+    run: (s, id, who, body) => s.reopen(id, who, body),
   }),
   defineRoute({
     method: 'get',
@@ -344,11 +318,8 @@ export const inspectionRoutes = [
     responses: {
       201: { description: 'The submittal with the report', schema: submittalSchema },
       ...errors,
-      409: {
-        description: 'Archived project, a submittal that is not a draft, or too many items',
-        schema: apiErrorSchema,
-      },
-      413: { description: 'The project’s storage quota reached', schema: apiErrorSchema },
+      409: errorResponse('Archived project, a submittal that is not a draft, or too many items'),
+      413: errorResponse('The project’s storage quota reached'),
       ...invalid('No such inspection on this project'),
     },
     handler: async ({ params, project, user, body, services }) => {

@@ -1,9 +1,9 @@
-import { apiErrorSchema } from '@shared/schemas/common';
 import { capturedMailSchema, meSchema, preferencesSchema } from '@shared/schemas/me';
 import { z } from 'zod';
+import { errorResponse, refusals } from '../http/responses';
 import { defineRoute } from '../http/route';
 
-const unauth = { 401: { description: 'Not signed in', schema: apiErrorSchema } };
+const unauth = refusals('user', undefined, { invalid: false });
 
 export const meRoutes = [
   defineRoute({
@@ -59,9 +59,8 @@ export const meRoutes = [
         description: 'PGlite data folder as .tar.gz (restore with `npm run db:restore -- file`)',
         contentType: 'application/gzip',
       },
-      ...unauth,
-      403: { description: 'Not a site administrator', schema: apiErrorSchema },
-      409: { description: 'Running on a PostgreSQL server: use pg_dump', schema: apiErrorSchema },
+      ...refusals('siteAdmin', undefined, { invalid: false }),
+      409: errorResponse('Running on a PostgreSQL server: use pg_dump'),
     },
     handler: async ({ res, services }) => {
       const tarball = await services.backup();
@@ -83,8 +82,7 @@ export const meRoutes = [
         description: 'Captured messages, newest first',
         schema: z.object({ messages: z.array(capturedMailSchema) }),
       },
-      ...unauth,
-      403: { description: 'Not a site administrator', schema: apiErrorSchema },
+      ...refusals('siteAdmin', undefined, { invalid: false }),
     },
     handler: async ({ services }) => ({ messages: await services.me.capturedMail() }),
   }),

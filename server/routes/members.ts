@@ -1,5 +1,5 @@
 import { can } from '@shared/auth/permissions';
-import { apiErrorSchema, projectParams } from '@shared/schemas/common';
+import { projectParams } from '@shared/schemas/common';
 import {
   invitationInputSchema,
   invitationPreviewSchema,
@@ -9,17 +9,14 @@ import {
   memberSchema,
 } from '@shared/schemas/members';
 import { z } from 'zod';
+import { errorResponse, refusals } from '../http/responses';
 import { defineRoute } from '../http/route';
 
-const errors = {
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: {
-    description:
-      'Your role does not allow this, or does not allow granting that role (`role_not_grantable`: see `mayGrant` in shared/auth)',
-    schema: apiErrorSchema,
-  },
-  404: { description: 'No such project or member', schema: apiErrorSchema },
-};
+const errors = refusals('project', 'project, member or invitation', {
+  invalid: false,
+  forbidden:
+    'Your role does not allow this, or does not allow granting that role (`role_not_grantable`: see `mayGrant` in shared/auth)',
+});
 const memberParams = projectParams.extend({ memberId: z.uuid() });
 
 export const memberRoutes = [
@@ -58,7 +55,7 @@ export const memberRoutes = [
         schema: invitationSchema,
       },
       ...errors,
-      409: { description: 'Already a member, or the project is archived', schema: apiErrorSchema },
+      409: errorResponse('Already a member, or the project is archived'),
     },
     handler: ({ user, project, body, services }) =>
       services.members.invite(project.id, { ...user, role: project.role }, body),
@@ -75,7 +72,7 @@ export const memberRoutes = [
     responses: {
       200: { description: 'The member', schema: memberSchema },
       ...errors,
-      409: { description: 'Would leave the project without an owner', schema: apiErrorSchema },
+      409: errorResponse('Would leave the project without an owner'),
     },
     handler: ({ user, project, params, body, services }) =>
       services.members.setRole(project.id, params.memberId, body.role, {
@@ -94,7 +91,7 @@ export const memberRoutes = [
     responses: {
       204: { description: 'Removed' },
       ...errors,
-      409: { description: 'Last owner', schema: apiErrorSchema },
+      409: errorResponse('Last owner'),
     },
     handler: async ({ user, project, params, services }) => {
       await services.members.remove(project.id, params.memberId, { id: user.id, role: project.role });
@@ -124,17 +121,12 @@ export const memberRoutes = [
     responses: {
       200: { description: 'Joined', schema: z.object({ projectId: z.uuid() }) },
       401: errors[401],
-      403: {
-        description:
-          'Signed in with another address, or the sender may no longer grant the role (`inviter_not_allowed`)',
-        schema: apiErrorSchema,
-      },
+      403: errorResponse(
+        'Signed in with another address, or the sender may no longer grant the role (`inviter_not_allowed`)',
+      ),
       404: errors[404],
-      409: {
-        description: 'Already accepted, already a member, or the project is archived',
-        schema: apiErrorSchema,
-      },
-      410: { description: 'Expired', schema: apiErrorSchema },
+      409: errorResponse('Already accepted, already a member, or the project is archived'),
+      410: errorResponse('Expired'),
     },
     handler: ({ user, params, services }) => services.members.accept(params.token, user),
   }),

@@ -1,16 +1,13 @@
-import { apiErrorSchema } from '@shared/schemas/common';
 import {
   adminOrganisationListSchema,
   adminOrganisationSchema,
   organisationVerificationSchema,
 } from '@shared/schemas/organisations';
 import { z } from 'zod';
+import { errorResponse, refusals } from '../http/responses';
 import { defineRoute } from '../http/route';
 
-const refused = {
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: { description: 'Not a site administrator', schema: apiErrorSchema },
-};
+const refused = refusals('siteAdmin', undefined, { invalid: false });
 
 /** Site administration of firms: the list, and verifying who a firm is (its sheets show it). */
 export const organisationAdminRoutes = [
@@ -35,9 +32,9 @@ export const organisationAdminRoutes = [
     example: { verified: true },
     responses: {
       200: { description: 'The firm as it now stands', schema: adminOrganisationSchema },
-      400: { description: 'Invalid id or body', schema: apiErrorSchema },
+      400: errorResponse('Invalid id or body'),
       ...refused,
-      404: { description: 'No such firm', schema: apiErrorSchema },
+      404: errorResponse('No such firm'),
     },
     handler: ({ params, body, user, services }) =>
       services.organisations.setVerified(params.orgId, user.id, body.verified),

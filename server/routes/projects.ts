@@ -1,4 +1,5 @@
-import { apiErrorSchema, projectParams, versionConflictSchema } from '@shared/schemas/common';
+import type { ProjectAction } from '@shared/auth/permissions';
+import { projectParams, versionConflictSchema } from '@shared/schemas/common';
 import { auditEntrySchema } from '@shared/schemas/me';
 import {
   projectClimateUpdateSchema,
@@ -10,13 +11,11 @@ import {
   projectWindUpdateSchema,
 } from '@shared/schemas/project';
 import { z } from 'zod';
+import { errorResponse, refusals } from '../http/responses';
 import { defineRoute } from '../http/route';
+import type { ProjectPartChange } from '../services/projects';
 
-const errors = {
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: { description: 'Your role does not allow this', schema: apiErrorSchema },
-  404: { description: 'No such project, or you are not a member', schema: apiErrorSchema },
-};
+const errors = refusals('project', 'project', { invalid: false });
 
 const example = {
   name: 'Example distribution centre',
@@ -33,6 +32,38 @@ const example = {
   winterDesignTempC: -18,
   summerDesignTempC: 31,
 };
+
+/** A PUT of the wind data or the climate: that part with the project `version` read (D-009). */
+function partRoute<B extends { version: number }>(def: {
+  part: 'wind' | 'climate';
+  summary: string;
+  action: ProjectAction;
+  body: z.ZodType<B>;
+  example: unknown;
+  change: (body: B) => ProjectPartChange;
+}) {
+  return defineRoute({
+    method: 'put',
+    path: `/projects/:projectId/${def.part}`,
+    summary: def.summary,
+    tag: 'Projects',
+    access: { kind: 'project', action: def.action },
+    params: projectParams,
+    body: def.body,
+    example: def.example,
+    responses: {
+      200: { description: 'The updated project', schema: projectSchema },
+      400: errorResponse('Invalid fields'),
+      ...errors,
+      409: {
+        description: 'Someone saved the same part first, or archived',
+        schema: versionConflictSchema(projectSchema),
+      },
+    },
+    handler: ({ user, project, body, services }) =>
+      services.projects.update(project.id, user.id, body.version, def.change(body)),
+  });
+}
 
 export const projectRoutes = [
   defineRoute({
@@ -60,9 +91,9 @@ export const projectRoutes = [
     example,
     responses: {
       201: { description: 'The new project', schema: projectSchema },
-      400: { description: 'Invalid fields', schema: apiErrorSchema },
+      400: errorResponse('Invalid fields'),
       401: errors[401],
-      422: { description: 'The caller has no firm', schema: apiErrorSchema },
+      422: errorResponse('The caller has no firm'),
     },
     handler: ({ user, body, services }) => services.projects.create(user.id, body),
   }),
@@ -89,7 +120,7 @@ export const projectRoutes = [
     example: { version: 1, changes: example },
     responses: {
       200: { description: 'The updated project', schema: projectSchema },
-      400: { description: 'Invalid fields', schema: apiErrorSchema },
+      400: errorResponse('Invalid fields'),
       ...errors,
       409: {
         description:
@@ -100,13 +131,10 @@ export const projectRoutes = [
     handler: ({ user, project, body, services }) =>
       services.projects.update(project.id, user.id, body.version, { part: 'site', changes: body.changes }),
   }),
-  defineRoute({
-    method: 'put',
-    path: '/projects/:projectId/wind',
+  partRoute({
+    part: 'wind',
     summary: 'Set the project’s wind data (ASCE 7 edition, basic wind speed, exposure, K_zt, enclosure…)',
-    tag: 'Projects',
-    access: { kind: 'project', action: 'project.wind.update' },
-    params: projectParams,
+    action: 'project.wind.update',
     body: projectWindUpdateSchema,
     example: {
       version: 1,
@@ -120,28 +148,12 @@ export const projectRoutes = [
         roofSlopeDeg: 2,
       },
     },
-    responses: {
-      200: { description: 'The updated project', schema: projectSchema },
-      400: { description: 'Invalid fields', schema: apiErrorSchema },
-      ...errors,
-      409: {
-        description: 'Someone saved the same part first, or archived',
-        schema: versionConflictSchema(projectSchema),
-      },
-    },
-    handler: ({ user, project, body, services }) =>
-      services.projects.update(project.id, user.id, body.version, {
-        part: 'wind',
-        changes: { wind: body.wind },
-      }),
+    change: (body) => ({ part: 'wind', changes: { wind: body.wind } }),
   }),
-  defineRoute({
-    method: 'put',
-    path: '/projects/:projectId/climate',
+  partRoute({
+    part: 'climate',
     summary: 'Set the project’s 12 monthly exterior climates (for the moisture check) with their source',
-    tag: 'Projects',
-    access: { kind: 'project', action: 'project.climate.update' },
-    params: projectParams,
+    action: 'project.climate.update',
     body: projectClimateUpdateSchema,
     example: {
       version: 1,
@@ -153,20 +165,7 @@ export const projectRoutes = [
         })),
       },
     },
-    responses: {
-      200: { description: 'The updated project', schema: projectSchema },
-      400: { description: 'Invalid fields', schema: apiErrorSchema },
-      ...errors,
-      409: {
-        description: 'Someone saved the same part first, or archived',
-        schema: versionConflictSchema(projectSchema),
-      },
-    },
-    handler: ({ user, project, body, services }) =>
-      services.projects.update(project.id, user.id, body.version, {
-        part: 'climate',
-        changes: { climate: body.climate },
-      }),
+    change: (body) => ({ part: 'climate', changes: { climate: body.climate } }),
   }),
   defineRoute({
     method: 'post',
@@ -180,9 +179,9 @@ export const projectRoutes = [
     example: { name: 'Example distribution centre, phase 2', number: 'EX-02' },
     responses: {
       201: { description: 'The copy', schema: projectSchema },
-      400: { description: 'Invalid fields', schema: apiErrorSchema },
+      400: errorResponse('Invalid fields'),
       ...errors,
-      409: { description: 'The project is archived', schema: apiErrorSchema },
+      409: errorResponse('The project is archived'),
     },
     handler: ({ user, project, body, services }) => services.projects.duplicate(project.id, user.id, body),
   }),

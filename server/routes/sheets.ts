@@ -1,16 +1,9 @@
-import { apiErrorSchema } from '@shared/schemas/common';
 import { sheetQuerySchema, verificationSchema, verifyParamsSchema } from '@shared/schemas/sheets';
 import { z } from 'zod';
+import { errorResponse, refusals, via } from '../http/responses';
 import { defineRoute, sendPdf } from '../http/route';
-import type { Services } from '../services';
 
-type Ctx = { params: Record<string, string>; services: Services };
-const viaRun = {
-  projectId: ({ params, services }: Ctx) =>
-    z.uuid().safeParse(params.runId).success
-      ? services.checkRuns.projectOf(params.runId)
-      : Promise.resolve(null),
-};
+const viaRun = via('runId', (s, id) => s.checkRuns.projectOf(id));
 
 export const sheetRoutes = [
   defineRoute({
@@ -28,13 +21,8 @@ export const sheetRoutes = [
         contentType: 'application/pdf',
         schema: z.string().describe('PDF bytes'),
       },
-      400: { description: 'Invalid query', schema: apiErrorSchema },
-      401: { description: 'Not signed in', schema: apiErrorSchema },
-      403: { description: 'Your role does not allow this', schema: apiErrorSchema },
-      404: {
-        description: 'No such run (or sweep of its assembly), or you are not a member of its project',
-        schema: apiErrorSchema,
-      },
+      ...refusals('project', 'run (or sweep of its assembly)'),
+      400: errorResponse('Invalid query'),
     },
     handler: async ({ params, query, user, res, services }) => {
       const sweep = query.sweep ? await services.sweeps.get(query.sweep) : undefined;
@@ -58,7 +46,7 @@ export const sheetRoutes = [
         description: 'The sheet or report is genuine: what it states (`kind` says which)',
         schema: verificationSchema,
       },
-      404: { description: 'No such sheet (unknown, mistyped or altered code)', schema: apiErrorSchema },
+      404: errorResponse('No such sheet (unknown, mistyped or altered code)'),
     },
     handler: ({ params, res, services }) => {
       res.set('Cache-Control', 'no-store');

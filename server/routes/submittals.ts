@@ -1,4 +1,4 @@
-import { apiErrorSchema, projectParams, versionConflictSchema } from '@shared/schemas/common';
+import { projectParams, versionConflictSchema } from '@shared/schemas/common';
 import {
   attachSheetSchema,
   commentCreateSchema,
@@ -13,19 +13,13 @@ import {
   uploadResultSchema,
 } from '@shared/schemas/submittals';
 import { z } from 'zod';
+import { errorResponse, refusals, via } from '../http/responses';
 import { defineRoute } from '../http/route';
 import { receiveUpload, sendStoredFile } from '../http/upload';
-import type { Services } from '../services';
 
-const errors = {
-  400: { description: 'Invalid fields', schema: apiErrorSchema },
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: {
-    description: 'Your role (or not being a named reviewer) does not allow this',
-    schema: apiErrorSchema,
-  },
-  404: { description: 'No such project, submittal or item, or you are not a member', schema: apiErrorSchema },
-};
+const errors = refusals('project', 'project, submittal or item', {
+  forbidden: 'Your role (or not being a named reviewer) does not allow this',
+});
 const stateErrors = {
   409: {
     description:
@@ -34,13 +28,7 @@ const stateErrors = {
   },
 };
 
-type Ctx = { params: Record<string, string>; services: Services };
-const viaSubmittal = {
-  projectId: ({ params, services }: Ctx) =>
-    z.uuid().safeParse(params.submittalId).success
-      ? services.submittals.projectOf(params.submittalId)
-      : Promise.resolve(null),
-};
+const viaSubmittal = via('submittalId', (s, id) => s.submittals.projectOf(id));
 const submittalParams = z.object({ submittalId: z.uuid() });
 const itemParams = submittalParams.extend({ submittalItemId: z.uuid() });
 const actor = (u: { id: string; name: string }) => ({ id: u.id, name: u.name });
@@ -80,11 +68,8 @@ export const submittalRoutes = [
     responses: {
       201: { description: 'The new draft', schema: submittalSchema },
       ...errors,
-      409: { description: 'Archived project or number already used', schema: apiErrorSchema },
-      422: {
-        description: 'A reviewer is not a project member who reviews submittals',
-        schema: apiErrorSchema,
-      },
+      409: errorResponse('Archived project or number already used'),
+      422: errorResponse('A reviewer is not a project member who reviews submittals'),
     },
     handler: ({ project, user, body, services }) => services.submittals.create(project.id, actor(user), body),
   }),
@@ -111,10 +96,7 @@ export const submittalRoutes = [
       200: { description: 'The edited draft', schema: submittalSchema },
       ...errors,
       ...stateErrors,
-      422: {
-        description: 'A reviewer is not a project member who reviews submittals',
-        schema: apiErrorSchema,
-      },
+      422: errorResponse('A reviewer is not a project member who reviews submittals'),
     },
     handler: ({ params, user, body, services }) =>
       services.submittals.update(params.submittalId, actor(user), body.version, body.changes),
@@ -147,18 +129,9 @@ export const submittalRoutes = [
       201: { description: 'The stored files and the submittal', schema: uploadResultSchema },
       ...errors,
       ...stateErrors,
-      413: {
-        description: 'A file too large, too many files, or the project’s storage quota reached',
-        schema: apiErrorSchema,
-      },
-      415: {
-        description: 'Not multipart, or a file whose content is not an accepted type',
-        schema: apiErrorSchema,
-      },
-      503: {
-        description: 'Too many uploads at once: try again after `Retry-After` seconds',
-        schema: apiErrorSchema,
-      },
+      413: errorResponse('A file too large, too many files, or the project’s storage quota reached'),
+      415: errorResponse('Not multipart, or a file whose content is not an accepted type'),
+      503: errorResponse('Too many uploads at once: try again after `Retry-After` seconds'),
     },
     handler: ({ req, res, params, user, services }) =>
       services.submittals.upload(params.submittalId, actor(user), receiveUpload(req, res)),
@@ -205,7 +178,7 @@ export const submittalRoutes = [
       200: { description: 'The submitted revision', schema: submittalSchema },
       ...errors,
       ...stateErrors,
-      422: { description: 'No item or no reviewer yet', schema: apiErrorSchema },
+      422: errorResponse('No item or no reviewer yet'),
     },
     handler: ({ params, user, body, services }) =>
       services.submittals.submit(params.submittalId, actor(user), body.version),
@@ -243,11 +216,9 @@ export const submittalRoutes = [
       },
       ...errors,
       ...stateErrors,
-      422: {
-        description:
-          'Approving a package whose attached compliance sheet fails without `failingSheetConfirmation`',
-        schema: apiErrorSchema,
-      },
+      422: errorResponse(
+        'Approving a package whose attached compliance sheet fails without `failingSheetConfirmation`',
+      ),
     },
     handler: ({ params, user, body, services }) =>
       services.submittals.decide(params.submittalId, actor(user), body),

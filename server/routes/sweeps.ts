@@ -1,4 +1,3 @@
-import { apiErrorSchema, versionConflictSchema } from '@shared/schemas/common';
 import {
   savedSweepListSchema,
   savedSweepSchema,
@@ -11,47 +10,20 @@ import {
   sweepSaveSchema,
 } from '@shared/schemas/sweeps';
 import { z } from 'zod';
+import { errorResponse, refusals, via } from '../http/responses';
 import { defineRoute } from '../http/route';
-import type { Services } from '../services';
+import { firmLibraryRoutes } from './firm-library';
 
 /*
  * A firm's sweep costs (library entries: read by its members, written by its editors and administrators,
  * removed by its administrators) and an assembly's saved sweeps (read and written as the assembly is).
  */
 
-const orgParams = z.object({ orgId: z.uuid() });
-const costParams = orgParams.extend({ itemId: z.uuid() });
 const assemblyParams = z.object({ assemblyId: z.uuid() });
 const sweepParams = z.object({ sweepId: z.uuid() });
-const firmErrors = {
-  400: { description: 'Invalid fields', schema: apiErrorSchema },
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: {
-    description:
-      'Your firm role does not allow this (writing: editors and administrators; deleting: administrators)',
-    schema: apiErrorSchema,
-  },
-  404: { description: 'No such firm or entry, or you are not a member', schema: apiErrorSchema },
-};
-const errors = {
-  400: { description: 'Invalid fields', schema: apiErrorSchema },
-  401: { description: 'Not signed in', schema: apiErrorSchema },
-  403: { description: 'Your role does not allow this', schema: apiErrorSchema },
-  404: {
-    description: 'No such project, assembly, sweep or code table, or you are not a member',
-    schema: apiErrorSchema,
-  },
-};
-type Ctx = { params: Record<string, string>; services: Services };
-const uuid = (x: string | undefined) => z.uuid().safeParse(x).success;
-const viaAssembly = {
-  projectId: ({ params, services }: Ctx) =>
-    uuid(params.assemblyId) ? services.assemblies.projectOf(params.assemblyId) : Promise.resolve(null),
-};
-const viaSweep = {
-  projectId: ({ params, services }: Ctx) =>
-    uuid(params.sweepId) ? services.sweeps.projectOf(params.sweepId) : Promise.resolve(null),
-};
+const errors = refusals('project', 'project, assembly, sweep or code table');
+const viaAssembly = via('assemblyId', (s, id) => s.assemblies.projectOf(id));
+const viaSweep = via('sweepId', (s, id) => s.sweeps.projectOf(id));
 const costExample = {
   kind: 'insulation',
   name: 'Mineral wool board 45 kg/m³ (example)',
@@ -62,59 +34,33 @@ const costExample = {
 };
 
 export const sweepRoutes = [
-  defineRoute({
-    method: 'get',
-    path: '/organisations/:orgId/sweep-costs',
-    summary: 'The firm’s costs of what a sweep varies (insulation per m² per 25 mm, clips, girts, sealant)',
-    tag: 'Libraries',
-    access: { kind: 'organisation', action: 'firm.read' },
-    params: orgParams,
-    responses: { 200: { description: 'Cost entries', schema: sweepCostListSchema }, ...firmErrors },
-    handler: async ({ params, services }) => ({ costs: await services.sweepCosts.list(params.orgId) }),
-  }),
-  defineRoute({
-    method: 'post',
-    path: '/organisations/:orgId/sweep-costs',
-    summary: 'Add a cost entry to the firm library (a sealant price names its movement class)',
-    tag: 'Libraries',
-    access: { kind: 'organisation', action: 'firm.write' },
-    params: orgParams,
-    body: sweepCostInputSchema,
-    example: costExample,
-    responses: { 201: { description: 'The entry', schema: sweepCostSchema }, ...firmErrors },
-    handler: ({ params, body, user, services }) => services.sweepCosts.add(params.orgId, user.id, body),
-  }),
-  defineRoute({
-    method: 'put',
-    path: '/organisations/:orgId/sweep-costs/:itemId',
-    summary:
-      'Change a cost entry (the whole entry with the `version` read; saved sweeps keep the prices they used)',
-    tag: 'Libraries',
-    access: { kind: 'organisation', action: 'firm.write' },
-    params: costParams,
-    body: sweepCostUpdateSchema,
-    example: { ...costExample, cost: 4.8, version: 1 },
-    responses: {
-      200: { description: 'The entry', schema: sweepCostSchema },
-      ...firmErrors,
-      409: {
-        description: 'Changed by someone else since: `current` is the entry now',
-        schema: versionConflictSchema(sweepCostSchema),
-      },
+  ...firmLibraryRoutes({
+    segment: 'sweep-costs',
+    entry: 'entry',
+    list: {
+      summary: 'The firm’s costs of what a sweep varies (insulation per m² per 25 mm, clips, girts, sealant)',
+      description: 'Cost entries',
+      schema: sweepCostListSchema,
+      read: async (services, orgId) => ({ costs: await services.sweepCosts.list(orgId) }),
     },
-    handler: ({ params, body, services }) => services.sweepCosts.update(params.orgId, params.itemId, body),
-  }),
-  defineRoute({
-    method: 'delete',
-    path: '/organisations/:orgId/sweep-costs/:itemId',
-    summary: 'Remove a cost entry (saved sweeps keep the prices they used)',
-    tag: 'Libraries',
-    access: { kind: 'organisation', action: 'firm.admin' },
-    params: costParams,
-    responses: { 204: { description: 'Removed' }, ...firmErrors },
-    handler: async ({ params, services }) => {
-      await services.sweepCosts.remove(params.orgId, params.itemId);
-      return undefined;
+    add: {
+      summary: 'Add a cost entry to the firm library (a sealant price names its movement class)',
+      description: 'The entry',
+      schema: sweepCostSchema,
+      body: sweepCostInputSchema,
+      example: costExample,
+      write: (services, orgId, body, userId) => services.sweepCosts.add(orgId, userId, body),
+    },
+    update: {
+      summary:
+        'Change a cost entry (the whole entry with the `version` read; saved sweeps keep the prices they used)',
+      body: sweepCostUpdateSchema,
+      example: { ...costExample, cost: 4.8, version: 1 },
+      write: (services, orgId, itemId, body) => services.sweepCosts.update(orgId, itemId, body),
+    },
+    remove: {
+      summary: 'Remove a cost entry (saved sweeps keep the prices they used)',
+      write: (services, orgId, itemId) => services.sweepCosts.remove(orgId, itemId),
     },
   }),
 
@@ -148,12 +94,10 @@ export const sweepRoutes = [
     responses: {
       201: { description: 'The saved sweep', schema: savedSweepSchema },
       ...errors,
-      409: { description: 'The project is archived', schema: apiErrorSchema },
-      422: {
-        description:
-          'A parameter the assembly does not have, a bad range or list, a deleted or foreign cost entry, or a varied thing without a cost — the field named, before anything runs',
-        schema: apiErrorSchema,
-      },
+      409: errorResponse('The project is archived'),
+      422: errorResponse(
+        'A parameter the assembly does not have, a bad range or list, a deleted or foreign cost entry, or a varied thing without a cost — the field named, before anything runs',
+      ),
     },
     handler: ({ params, body, user, services }) => services.sweeps.create(params.assemblyId, user.id, body),
   }),
@@ -190,7 +134,7 @@ export const sweepRoutes = [
     responses: {
       204: { description: 'Deleted' },
       ...errors,
-      409: { description: 'The project is archived', schema: apiErrorSchema },
+      409: errorResponse('The project is archived'),
     },
     handler: async ({ params, user, services }) => {
       await services.sweeps.remove(params.sweepId, user.id);

@@ -15,6 +15,7 @@ import { type Db, deepFreeze, type ReadCache } from '../db/client';
 import { assemblies, assemblyRevisions, checkRuns, projects, user } from '../db/schema';
 import { recordAudit } from './audit';
 import { notFound } from './errors';
+import { ownerOf } from './owner';
 import { STALE, versionedUpdate } from './versioned';
 
 type AssemblyRow = typeof assemblies.$inferSelect;
@@ -54,6 +55,18 @@ export const isCurrentRevision = and(
   eq(assemblyRevisions.assemblyId, assemblies.id),
   eq(assemblyRevisions.revision, assemblies.currentRevision),
 );
+
+/** An assembly with its current revision's input and its project — what a check run or a sweep starts from; 404 if none. */
+export async function currentAssembly(db: Db, assemblyId: string) {
+  const [a] = await db
+    .select({ a: assemblies, input: assemblyRevisions.input, p: projects })
+    .from(assemblies)
+    .innerJoin(assemblyRevisions, isCurrentRevision)
+    .innerJoin(projects, eq(projects.id, assemblies.projectId))
+    .where(eq(assemblies.id, assemblyId));
+  if (!a) throw notFound('assembly');
+  return { ...a, input: a.input as AssemblyInput };
+}
 
 export function createAssemblyService(db: Db, readCache: ReadCache) {
   async function get(assemblyId: string): Promise<Assembly> {
@@ -150,13 +163,7 @@ export function createAssemblyService(db: Db, readCache: ReadCache) {
     get,
 
     /** The project an assembly belongs to (for the permission check), or null. */
-    async projectOf(assemblyId: string): Promise<string | null> {
-      const [a] = await db
-        .select({ projectId: assemblies.projectId })
-        .from(assemblies)
-        .where(eq(assemblies.id, assemblyId));
-      return a?.projectId ?? null;
-    },
+    projectOf: ownerOf(db, { from: assemblies, key: assemblies.id, owner: assemblies.projectId }),
 
     /** The project's assemblies, from the read cache (emptied by every write) once loaded. */
     list(projectId: string): Promise<readonly AssemblySummary[]> {

@@ -5,16 +5,16 @@ import type { CategoryLabels } from '@shared/checks/criteria';
 import type { ProjectForChecks } from '@shared/checks/inputs';
 import type { CheckReport } from '@shared/checks/report';
 import { runChecks } from '@shared/checks/runner';
-import type { AssemblyInput } from '@shared/schemas/assembly';
 import type { CheckRun, CheckRunInputs, CheckRunSummary } from '@shared/schemas/check-runs';
 import type { ProjectClimate, ProjectWind } from '@shared/schemas/project';
 import { and, desc, eq } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { assemblies, assemblyRevisions, checkRuns, organisationMembers, projects, user } from '../db/schema';
-import { isCurrentRevision } from './assemblies';
+import { checkRuns, organisationMembers, type projects, user } from '../db/schema';
+import { currentAssembly } from './assemblies';
 import { recordAudit } from './audit';
 import type { createCriteriaService } from './criteria';
 import { notFound } from './errors';
+import { ownerOf } from './owner';
 import { archivedError } from './projects';
 
 type RunRow = typeof checkRuns.$inferSelect;
@@ -115,13 +115,7 @@ export function createCheckRunService(db: Db, criteria: ReturnType<typeof create
     get,
 
     /** The project a run belongs to (for the permission check), or null. */
-    async projectOf(runId: string): Promise<string | null> {
-      const [r] = await db
-        .select({ projectId: checkRuns.projectId })
-        .from(checkRuns)
-        .where(eq(checkRuns.id, runId));
-      return r?.projectId ?? null;
-    },
+    projectOf: ownerOf(db, { from: checkRuns, key: checkRuns.id, owner: checkRuns.projectId }),
 
     async list(projectId: string, assemblyId?: string): Promise<CheckRunSummary[]> {
       const rows = await db
@@ -142,19 +136,13 @@ export function createCheckRunService(db: Db, criteria: ReturnType<typeof create
      * the run. The table must belong to the project's firm or to one of the caller's firms.
      */
     async create(assemblyId: string, userId: string, criteriaSetId: string): Promise<CheckRun> {
-      const [a] = await db
-        .select({ a: assemblies, input: assemblyRevisions.input, p: projects })
-        .from(assemblies)
-        .innerJoin(assemblyRevisions, isCurrentRevision)
-        .innerJoin(projects, eq(projects.id, assemblies.projectId))
-        .where(eq(assemblies.id, assemblyId));
-      if (!a) throw notFound('assembly');
+      const a = await currentAssembly(db, assemblyId);
       if (a.p.archivedAt) throw archivedError();
       await usableCodeTable(db, criteria, criteriaSetId, a.p.organisationId, userId);
 
       const id = await db.transaction(async (tx) => {
         const { set, rows } = await criteria.freezeForRun(tx, criteriaSetId, userId);
-        const assemblyInput = a.input as AssemblyInput;
+        const assemblyInput = a.input;
         const project = { id: a.p.id, name: a.p.name, ...projectForChecks(a.p) };
         const inputs: CheckRunInputs = {
           engineVersion: ENGINE_VERSION,

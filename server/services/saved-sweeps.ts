@@ -1,5 +1,4 @@
 import { ENGINE_VERSION } from '@shared/calc/trace';
-import type { AssemblyInput } from '@shared/schemas/assembly';
 import type {
   SavedSweep,
   SavedSweepSummary,
@@ -15,19 +14,13 @@ import { compareSweeps, summarizeSweep } from '@shared/sweep/summary';
 import { planSweep } from '@shared/sweep/sweep';
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import {
-  assemblies,
-  assemblyRevisions,
-  assemblySweeps,
-  organisationMembers,
-  projects,
-  user,
-} from '../db/schema';
-import { isCurrentRevision } from './assemblies';
+import { assemblies, assemblySweeps, organisationMembers, user } from '../db/schema';
+import { currentAssembly } from './assemblies';
 import { recordAudit } from './audit';
 import { projectForChecks, usableCodeTable } from './check-runs';
 import type { createCriteriaService } from './criteria';
 import { DomainError, notFound } from './errors';
+import { ownerOf } from './owner';
 import type { createSweepCostService } from './sweep-costs';
 
 type SweepRow = typeof assemblySweeps.$inferSelect;
@@ -100,13 +93,7 @@ export function createSavedSweepService(
     get,
 
     /** The project a saved sweep belongs to (for the permission check), or null. */
-    async projectOf(sweepId: string): Promise<string | null> {
-      const [r] = await db
-        .select({ projectId: assemblySweeps.projectId })
-        .from(assemblySweeps)
-        .where(eq(assemblySweeps.id, sweepId));
-      return r?.projectId ?? null;
-    },
+    projectOf: ownerOf(db, { from: assemblySweeps, key: assemblySweeps.id, owner: assemblySweeps.projectId }),
 
     async list(assemblyId: string): Promise<SavedSweepSummary[]> {
       const rows = await selectSweep()
@@ -122,14 +109,8 @@ export function createSavedSweepService(
      * cost when costs are given (422).
      */
     async create(assemblyId: string, userId: string, body: SweepSave): Promise<SavedSweep> {
-      const [a] = await db
-        .select({ a: assemblies, input: assemblyRevisions.input, p: projects })
-        .from(assemblies)
-        .innerJoin(assemblyRevisions, isCurrentRevision)
-        .innerJoin(projects, eq(projects.id, assemblies.projectId))
-        .where(eq(assemblies.id, assemblyId));
-      if (!a) throw notFound('assembly');
-      const input = a.input as AssemblyInput;
+      const a = await currentAssembly(db, assemblyId);
+      const { input } = a;
       const plan = planSweep(input, body.parameters, SWEEP_SEARCH_MAX_COMBINATIONS, SWEEP_SEARCH_MAX_VALUES);
       await usableCodeTable(db, criteria, body.criteriaSetId, a.p.organisationId, userId);
       const firms = await db

@@ -3,18 +3,17 @@ import type { CriteriaAccess } from '@shared/schemas/criteria';
 import { and, eq } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { criteriaSets, organisationMembers, projectMembers, projects } from '../../db/schema';
+import { ownerOf } from '../owner';
 
 /** Who may do what with a firm's code tables (the `criteria` access kind of the route registry). */
 export function createCriteriaAccess(db: Db) {
   return {
     /** The firm a table belongs to (for the permission check), or null. */
-    async organisationOf(setId: string): Promise<string | null> {
-      const [s] = await db
-        .select({ org: criteriaSets.organisationId })
-        .from(criteriaSets)
-        .where(eq(criteriaSets.id, setId));
-      return s?.org ?? null;
-    },
+    organisationOf: ownerOf(db, {
+      from: criteriaSets,
+      key: criteriaSets.id,
+      owner: criteriaSets.organisationId,
+    }),
 
     /**
      * What a person may do with a firm's code tables: by their firm role — admin: admin (edit, delete);

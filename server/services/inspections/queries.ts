@@ -27,6 +27,7 @@ import {
   user,
 } from '../../db/schema';
 import { conflict, notFound } from '../errors';
+import { ownerOf } from '../owner';
 
 export type InspectionRow = typeof inspections.$inferSelect;
 export type ItemRow = typeof inspectionItems.$inferSelect;
@@ -283,37 +284,25 @@ export function createInspectionQueries(db: Db) {
       );
     },
 
-    async projectOf(id: string): Promise<string | null> {
-      const [r] = await db
-        .select({ p: inspections.projectId })
-        .from(inspections)
-        .where(eq(inspections.id, id));
-      return r?.p ?? null;
-    },
-    async projectOfItem(id: string): Promise<string | null> {
-      const [r] = await db
-        .select({ p: inspections.projectId })
-        .from(inspectionItems)
-        .innerJoin(inspections, eq(inspections.id, inspectionItems.inspectionId))
-        .where(eq(inspectionItems.id, id));
-      return r?.p ?? null;
-    },
-    async projectOfDeficiency(id: string): Promise<string | null> {
-      const [r] = await db
-        .select({ p: inspections.projectId })
-        .from(inspectionDeficiencies)
-        .innerJoin(inspections, eq(inspections.id, inspectionDeficiencies.inspectionId))
-        .where(eq(inspectionDeficiencies.id, id));
-      return r?.p ?? null;
-    },
-    async projectOfPhoto(id: string): Promise<string | null> {
-      const [r] = await db
-        .select({ p: inspections.projectId })
-        .from(inspectionPhotos)
-        .innerJoin(inspections, eq(inspections.id, inspectionPhotos.inspectionId))
-        .where(eq(inspectionPhotos.id, id));
-      return r?.p ?? null;
-    },
+    projectOf: ownerOf(db, { from: inspections, key: inspections.id, owner: inspections.projectId }),
+    projectOfItem: ownerOf(db, {
+      from: inspectionItems,
+      key: inspectionItems.id,
+      owner: inspections.projectId,
+      join: { table: inspections, on: eq(inspections.id, inspectionItems.inspectionId) },
+    }),
+    projectOfDeficiency: ownerOf(db, {
+      from: inspectionDeficiencies,
+      key: inspectionDeficiencies.id,
+      owner: inspections.projectId,
+      join: { table: inspections, on: eq(inspections.id, inspectionDeficiencies.inspectionId) },
+    }),
+    projectOfPhoto: ownerOf(db, {
+      from: inspectionPhotos,
+      key: inspectionPhotos.id,
+      owner: inspections.projectId,
+      join: { table: inspections, on: eq(inspections.id, inspectionPhotos.inspectionId) },
+    }),
   };
 }
 export type InspectionQueries = ReturnType<typeof createInspectionQueries>;

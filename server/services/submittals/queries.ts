@@ -24,6 +24,7 @@ import {
   user,
 } from '../../db/schema';
 import { conflict, notFound } from '../errors';
+import { ownerOf } from '../owner';
 import { archivedError } from '../projects';
 import { versionConflict } from '../versioned';
 
@@ -253,13 +254,7 @@ export function createSubmittalQueries(db: Db) {
     reviewerIdsOf,
 
     /** The project a submittal belongs to (for the permission check), or null. */
-    async projectOf(id: string): Promise<string | null> {
-      const [r] = await db
-        .select({ projectId: submittals.projectId })
-        .from(submittals)
-        .where(eq(submittals.id, id));
-      return r?.projectId ?? null;
-    },
+    projectOf: ownerOf(db, { from: submittals, key: submittals.id, owner: submittals.projectId }),
 
     /** The latest revision of every submittal of the project, by number (optionally one status only). */
     async list(projectId: string, status?: SubmittalStatus): Promise<SubmittalSummary[]> {

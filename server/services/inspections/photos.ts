@@ -2,12 +2,12 @@ import type { Photo } from '@shared/inspections/schema';
 import { eq } from 'drizzle-orm';
 import type { Config } from '../../config';
 import type { Db } from '../../db/client';
-import { inspectionPhotos, projects } from '../../db/schema';
-import { fileIntake, IMAGE_TYPES, type ReceiveFiles, type StoredUpload } from '../../storage/files';
+import { inspectionPhotos } from '../../db/schema';
+import { IMAGE_TYPES, type ReceiveFiles, type StoredUpload } from '../../storage/files';
 import type { ObjectStore } from '../../storage/object-store';
 import { recordAudit } from '../audit';
 import { notFound } from '../errors';
-import { projectStoredBytes, quotaFull } from '../project-storage';
+import { projectIntake, projectStoredBytes, takeQuotaTurn } from '../project-storage';
 import { type Actor, type InspectionQueries, photoDto } from './queries';
 
 /**
@@ -23,26 +23,20 @@ export function createInspectionPhotos(db: Db, config: Config, storage: ObjectSt
       const r = await q.row(item.inspectionId);
       const quota = config.storage.projectQuotaBytes;
       const used = await projectStoredBytes(db, r.projectId);
-      if (used >= quota) throw quotaFull(used, quota, 'the photo');
-      const intake = fileIntake(storage, {
-        keyPrefix: `projects/${r.projectId}/inspections/`,
-        room: quota - used,
-        full: () => quotaFull(used, quota, 'the photo'),
+      const intake = projectIntake(storage, {
+        projectId: r.projectId,
+        folder: 'inspections',
+        used,
+        quota,
+        what: 'the photo',
         allowed: IMAGE_TYPES,
       });
       const files = await receive<StoredUpload>(intake);
       let photos: Photo[];
       try {
         photos = await db.transaction(async (tx) => {
-          // Uploads to the project take their turn on its row for the quota.
-          await tx
-            .select({ id: projects.id })
-            .from(projects)
-            .where(eq(projects.id, r.projectId))
-            .for('update');
-          const now = await projectStoredBytes(tx, r.projectId);
-          if (now + files.reduce((sum, f) => sum + f.size, 0) > quota)
-            throw quotaFull(now, quota, 'the photo');
+          const size = files.reduce((sum, f) => sum + f.size, 0);
+          await takeQuotaTurn(tx, r.projectId, size, quota, 'the photo');
           const rows = await tx
             .insert(inspectionPhotos)
             .values(

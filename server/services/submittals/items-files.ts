@@ -4,13 +4,12 @@ import type { Submittal, SubmittalItem } from '@shared/schemas/submittals';
 import { and, count, eq, max, sql } from 'drizzle-orm';
 import type { Config } from '../../config';
 import type { Db } from '../../db/client';
-import { checkRuns, projects, submittalItems, submittals } from '../../db/schema';
-import type { ReceiveFiles } from '../../storage/files';
-import { fileIntake, type StoredUpload } from '../../storage/files';
+import { checkRuns, submittalItems, submittals } from '../../db/schema';
+import type { ReceiveFiles, StoredUpload } from '../../storage/files';
 import type { ObjectStore } from '../../storage/object-store';
 import { type AuditRecord, recordAudit } from '../audit';
 import { conflict, DomainError, notFound } from '../errors';
-import { projectStoredBytes, quotaFull } from '../project-storage';
+import { projectIntake, projectStoredBytes, quotaFull, takeQuotaTurn } from '../project-storage';
 import type { createSheetService } from '../sheets';
 import { type Actor, type ItemRow, MAX_ITEMS, type Row, type SubmittalQueries, wrongStatus } from './queries';
 
@@ -115,7 +114,7 @@ export function createSubmittalItemSteps(
     },
 
     /**
-     * Stores uploaded files as they arrive (`fileIntake`: each judged by its first bytes before anything is
+     * Stores uploaded files as they arrive (`projectIntake`: each judged by its first bytes before anything is
      * stored, streamed to object storage, within the project's storage quota), then writes the items in one
      * transaction that takes its turn on the revision (item limit, positions) and on the project (quota).
      * Anything that fails removes what was already stored: nothing is kept from a refused upload.
@@ -133,11 +132,12 @@ export function createSubmittalItemSteps(
       const has = Number(n);
       if (has >= MAX_ITEMS) throw tooManyItems(has, 1);
       const quota = config.storage.projectQuotaBytes;
-      if (used >= quota) throw quotaFull(used, quota, 'the upload');
-      const intake = fileIntake(storage, {
-        keyPrefix: `projects/${r.projectId}/submittals/`,
-        room: quota - used,
-        full: () => quotaFull(used, quota, 'the upload'),
+      const intake = projectIntake(storage, {
+        projectId: r.projectId,
+        folder: 'submittals',
+        used,
+        quota,
+        what: 'the upload',
       });
       let arrived = 0;
       const files = await receive<StoredUpload>({
@@ -153,15 +153,8 @@ export function createSubmittalItemSteps(
       try {
         ids = await db.transaction(async (tx) => {
           const first = await placesFor(tx, id, files.length);
-          // Uploads to the project's other submittals take their turn on its row for the quota.
-          await tx
-            .select({ id: projects.id })
-            .from(projects)
-            .where(eq(projects.id, r.projectId))
-            .for('update');
-          const now = await projectStoredBytes(tx, r.projectId);
-          if (now + files.reduce((sum, f) => sum + f.size, 0) > quota)
-            throw quotaFull(now, quota, 'the upload');
+          const size = files.reduce((sum, f) => sum + f.size, 0);
+          await takeQuotaTurn(tx, r.projectId, size, quota, 'the upload');
           const inserted = await tx
             .insert(submittalItems)
             .values(
@@ -219,13 +212,7 @@ export function createSubmittalItemSteps(
       try {
         await db.transaction(async (tx) => {
           const position = await placesFor(tx, id, 1);
-          await tx
-            .select({ id: projects.id })
-            .from(projects)
-            .where(eq(projects.id, r.projectId))
-            .for('update');
-          const now = await projectStoredBytes(tx, r.projectId);
-          if (now + file.bytes.length > quota) throw quotaFull(now, quota, 'the upload');
+          await takeQuotaTurn(tx, r.projectId, file.bytes.length, quota, 'the upload');
           const [item] = await tx
             .insert(submittalItems)
             .values({

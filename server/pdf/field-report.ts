@@ -9,11 +9,10 @@ import {
 import { formatVerificationCode } from '@shared/sheets/verification';
 import type { UnitSystem } from '@shared/units/registry';
 import { QUANTITIES } from '@shared/units/registry';
-import { jsPDF } from 'jspdf';
 import { cautionList } from './closing';
-import { registerFonts } from './fonts';
+import { newA4Document } from './fonts';
 import { type Formatter, formatter, sheetDate, sheetDateTime } from './format';
-import { type Glyph, INK, PAGE, SheetWriter } from './layout';
+import { type Glyph, INK, pageFooters, runningHead, SheetWriter } from './layout';
 import { PRODUCT } from './title-block';
 
 /*
@@ -244,53 +243,23 @@ function drawCautionsAndCode(w: SheetWriter, d: FieldReportData): void {
 }
 
 function footers(w: SheetWriter, d: FieldReportData): void {
-  const { doc } = w;
-  const pages = doc.getNumberOfPages();
-  for (let i = 1; i <= pages; i++) {
-    doc.setPage(i);
-    const y = PAGE.height - PAGE.bottom + 9;
-    w.hline(y - 4, 0.1, INK.rule);
-    w.text(`Report code ${formatVerificationCode(d.code)} (SHA-256 of its content)`, w.left, y, {
-      size: 6.8,
-      color: INK.muted,
-    });
-    w.text(
-      `${d.projectName} · inspection ${d.inspection.number} · as of ${sheetDate(d.asOf)}`,
-      w.left,
-      y + 3.2,
-      {
-        size: 6.8,
-        color: INK.muted,
-      },
-    );
-    w.text(`Page ${i} of ${pages}`, w.right, y, { font: 'sansBold', size: 7.4, align: 'right' });
-  }
+  pageFooters(w, [
+    `Report code ${formatVerificationCode(d.code)} (SHA-256 of its content)`,
+    `${d.projectName} · inspection ${d.inspection.number} · as of ${sheetDate(d.asOf)}`,
+  ]);
 }
 
 /** Renders the field report; returns the PDF bytes. */
 export function renderFieldReport(d: FieldReportData): Buffer {
-  const doc = new jsPDF({
-    unit: 'mm',
-    format: 'a4',
-    orientation: 'portrait',
-    compress: true,
-    putOnlyUsedFonts: true,
-  });
-  registerFonts(doc);
+  const doc = newA4Document();
   const fmt = formatter(d.units);
-  const w = new SheetWriter(doc, (sw) => {
-    sw.text(`${PRODUCT} · Field inspection report`, sw.left, PAGE.top - 6, {
-      font: 'serifBold',
-      size: 8,
-      color: INK.muted,
-    });
-    sw.text(`Inspection ${d.inspection.number}, ${d.inspection.scope.elevation}`, sw.right, PAGE.top - 6, {
-      size: 7,
-      color: INK.muted,
-      align: 'right',
-    });
-    sw.hline(PAGE.top - 4.5, 0.1, INK.rule);
-  });
+  const w = new SheetWriter(
+    doc,
+    runningHead(
+      `${PRODUCT} · Field inspection report`,
+      `Inspection ${d.inspection.number}, ${d.inspection.scope.elevation}`,
+    ),
+  );
   titleBlock(w, d);
   w.heading('1', 'Checklist', 30);
   for (const item of d.inspection.items)

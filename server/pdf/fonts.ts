@@ -156,8 +156,21 @@ function fastDirectoryEncode(directory: unknown): void {
   };
 }
 
+/** A new A4 portrait document (millimetres, compressed) with the four faces registered. */
+export function newA4Document(): jsPDF {
+  const doc = new jsPDF({
+    unit: 'mm',
+    format: 'a4',
+    orientation: 'portrait',
+    compress: true,
+    putOnlyUsedFonts: true,
+  });
+  registerFonts(doc);
+  return doc;
+}
+
 /** Registers the four faces on a new document. */
-export function registerFonts(doc: jsPDF): void {
+function registerFonts(doc: jsPDF): void {
   const data = fontData();
   for (const [kind, f] of Object.entries(FILES) as [FontKind, (typeof FILES)[FontKind]][]) {
     const name = `${f.family}-${f.style}.ttf`;

@@ -304,3 +304,26 @@ export class SheetWriter {
     }
   }
 }
+
+/** Every page's footer: a rule, two muted lines on the left (how to verify; what this is) and "Page i of n". */
+export function pageFooters(w: SheetWriter, lines: readonly [string, string]): void {
+  const { doc } = w;
+  const pages = doc.getNumberOfPages();
+  for (let i = 1; i <= pages; i++) {
+    doc.setPage(i);
+    const y = PAGE.height - PAGE.bottom + 9;
+    w.hline(y - 4, 0.1, INK.rule);
+    w.text(lines[0], w.left, y, { size: 6.8, color: INK.muted });
+    w.text(lines[1], w.left, y + 3.2, { size: 6.8, color: INK.muted });
+    w.text(`Page ${i} of ${pages}`, w.right, y, { font: 'sansBold', size: 7.4, align: 'right' });
+  }
+}
+
+/** The running head of every page: what the document is (left, serif) and what it is of (right), over a rule. */
+export const runningHead =
+  (what: string, of: string) =>
+  (w: SheetWriter): void => {
+    w.text(what, w.left, PAGE.top - 6, { font: 'serifBold', size: 8, color: INK.muted });
+    w.text(of, w.right, PAGE.top - 6, { size: 7, color: INK.muted, align: 'right' });
+    w.hline(PAGE.top - 4.5, 0.1, INK.rule);
+  };

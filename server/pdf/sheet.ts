@@ -1,11 +1,11 @@
-import { jsPDF } from 'jspdf';
+import type { jsPDF } from 'jspdf';
 import { drawComputedBridges } from './bridges';
 import { drawCheckList } from './checks';
 import { drawCautions, drawStampAndVerification } from './closing';
-import { registerFonts } from './fonts';
+import { newA4Document } from './fonts';
 import { formatter, sheetDate, VERDICT_WORDS } from './format';
 import { drawLayers, drawSite } from './inputs';
-import { INK, PAGE, SheetWriter } from './layout';
+import { pageFooters, runningHead, SheetWriter } from './layout';
 import { drawResults } from './results';
 import { drawSectionSketch } from './section-sketch';
 import type { SheetData } from './sheet-data';
@@ -21,38 +21,11 @@ export type { SheetData } from './sheet-data';
  * read from the stored run; nothing is recomputed. Same run, same units → the same bytes.
  */
 
-function runningHead(data: SheetData) {
-  return (w: SheetWriter) => {
-    w.text(`${PRODUCT} · Compliance sheet`, w.left, PAGE.top - 6, {
-      font: 'serifBold',
-      size: 8,
-      color: INK.muted,
-    });
-    w.text(`${data.run.assemblyName}, revision ${data.run.assemblyRevision}`, w.right, PAGE.top - 6, {
-      size: 7,
-      color: INK.muted,
-      align: 'right',
-    });
-    w.hline(PAGE.top - 4.5, 0.1, INK.rule);
-  };
-}
-
 function footers(w: SheetWriter, data: SheetData): void {
-  const { doc } = w;
-  const pages = doc.getNumberOfPages();
-  for (let i = 1; i <= pages; i++) {
-    doc.setPage(i);
-    const y = PAGE.height - PAGE.bottom + 9;
-    w.hline(y - 4, 0.1, INK.rule);
-    w.text(`Verify: ${data.verifyUrl}`, w.left, y, { size: 6.8, color: INK.muted });
-    w.text(
-      `${data.run.inputs.project.name} · run ${sheetDate(data.run.createdAt)} · ${VERDICT_WORDS[data.run.verdict].word}`,
-      w.left,
-      y + 3.2,
-      { size: 6.8, color: INK.muted },
-    );
-    w.text(`Page ${i} of ${pages}`, w.right, y, { font: 'sansBold', size: 7.4, align: 'right' });
-  }
+  pageFooters(w, [
+    `Verify: ${data.verifyUrl}`,
+    `${data.run.inputs.project.name} · run ${sheetDate(data.run.createdAt)} · ${VERDICT_WORDS[data.run.verdict].word}`,
+  ]);
 }
 
 /** PDF metadata: document information and an XMP packet (PDF/A-friendly; the language is set too). */
@@ -84,16 +57,15 @@ function metadata(doc: jsPDF, data: SheetData): void {
 
 /** Renders the sheet; returns the PDF bytes. */
 export function renderComplianceSheet(data: SheetData): Buffer {
-  const doc = new jsPDF({
-    unit: 'mm',
-    format: 'a4',
-    orientation: 'portrait',
-    compress: true,
-    putOnlyUsedFonts: true,
-  });
-  registerFonts(doc);
+  const doc = newA4Document();
   const fmt = formatter(data.units);
-  const w = new SheetWriter(doc, runningHead(data));
+  const w = new SheetWriter(
+    doc,
+    runningHead(
+      `${PRODUCT} · Compliance sheet`,
+      `${data.run.assemblyName}, revision ${data.run.assemblyRevision}`,
+    ),
+  );
 
   drawTitleBlock(w, data, fmt);
   w.heading('1', 'Inputs', 40);

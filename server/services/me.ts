@@ -58,6 +58,15 @@ function toMe(rows: MeRow[]): Me {
   };
 }
 
+/** Each of the user's firms (one row per membership; none: nulls from the left joins). */
+const firmColumns = {
+  orgId: organisations.id,
+  orgName: organisations.name,
+  orgSlug: organisations.slug,
+  orgVerifiedAt: organisations.verifiedAt,
+  orgRole: organisationMembers.role,
+};
+
 export function createMeService(db: Db) {
   // Prepared once (no query building per request; a PostgreSQL server plans them once per connection), and
   // one statement each: the user with their firms, and the preference write returning the same rows.
@@ -68,11 +77,7 @@ export function createMeService(db: Db) {
       email: user.email,
       role: user.role,
       unitSystem: user.unitSystem,
-      orgId: organisations.id,
-      orgName: organisations.name,
-      orgSlug: organisations.slug,
-      orgVerifiedAt: organisations.verifiedAt,
-      orgRole: organisationMembers.role,
+      ...firmColumns,
     })
     .from(user)
     .leftJoin(organisationMembers, eq(organisationMembers.userId, user.id))
@@ -101,11 +106,7 @@ export function createMeService(db: Db) {
       email: updated.email,
       role: updated.role,
       unitSystem: updated.unitSystem,
-      orgId: organisations.id,
-      orgName: organisations.name,
-      orgSlug: organisations.slug,
-      orgVerifiedAt: organisations.verifiedAt,
-      orgRole: organisationMembers.role,
+      ...firmColumns,
     })
     .from(updated)
     .leftJoin(organisationMembers, eq(organisationMembers.userId, updated.id))

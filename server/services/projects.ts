@@ -12,6 +12,7 @@ import {
 } from '../db/schema';
 import { copyName, isCurrentRevision } from './assemblies';
 import { recordAudit } from './audit';
+import { projectForChecks } from './check-runs';
 import { DomainError, notFound } from './errors';
 import { STALE, versionedUpdate } from './versioned';
 
@@ -26,17 +27,7 @@ function toProject(row: ProjectRow, organisationName: string, myRole: ProjectRol
     number: row.number,
     description: row.description,
     siteAddress: row.siteAddress,
-    climateZone: row.climateZone as Project['climateZone'],
-    elevationM: row.elevationM,
-    buildingHeightM: row.buildingHeightM,
-    planLengthM: row.planLengthM,
-    planWidthM: row.planWidthM,
-    indoorTempC: row.indoorTempC,
-    indoorRh: row.indoorRh,
-    winterDesignTempC: row.winterDesignTempC,
-    summerDesignTempC: row.summerDesignTempC,
-    wind: (row.wind as ProjectWind | null) ?? null,
-    climate: (row.climate as ProjectClimate | null) ?? null,
+    ...projectForChecks(row),
     archivedAt: row.archivedAt?.toISOString() ?? null,
     version: row.version,
     createdAt: row.createdAt.toISOString(),

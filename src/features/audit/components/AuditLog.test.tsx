@@ -60,4 +60,48 @@ describe('the activity log', () => {
     const text = document.body.textContent ?? '';
     expect(text).not.toMatch(/submittal: decide|add_sheet|0b0e7b7e|a1b2|c3d4/);
   });
+
+  it('a saved sweep reads in words: saved with what it ran on and found, deleted with its name', () => {
+    show([
+      entry({
+        id: 5,
+        entity: 'sweep',
+        entityId: 's1',
+        entityName: 'Insulation × clips',
+        action: 'create',
+        after: {
+          name: 'Insulation × clips',
+          assembly: 'Wall A',
+          revision: 3,
+          criteriaSet: 'Demo code table',
+          version: 2,
+          variants: 15,
+          passing: 6,
+        },
+      }),
+      entry({
+        id: 6,
+        entity: 'sweep',
+        entityId: 's2',
+        entityName: null,
+        action: 'delete',
+        before: { name: 'Old sweep' },
+        after: null,
+      }),
+    ]);
+    const saved = screen.getByText(/Saved the sweep/).closest('tr')!;
+    expect(saved.textContent).toContain('Saved the sweep Insulation × clips');
+    for (const line of [
+      'Assembly: —',
+      'Code table: —',
+      'Code table version: —',
+      'Variants: —',
+      'Passing variants: —',
+    ])
+      expect(saved.textContent).toContain(line);
+    expect(saved.textContent).not.toMatch(/criteriaSet|passing:/);
+    expect(screen.getByText(/Deleted the sweep/).textContent).toBe(
+      'Deleted the sweep “Old sweep” (no longer there)',
+    );
+  });
 });

@@ -3,7 +3,7 @@ import { categoryLabelsSchema } from '../checks/criteria';
 import { checkReportSchema, verdictSchema } from '../checks/report';
 import type { AssemblyInput } from './assembly';
 import { criteriaRowSchema } from './criteria';
-import { climateZoneSchema, type ProjectClimate, type ProjectWind } from './project';
+import { climateZoneSchema, type ProjectClimate, type ProjectWind, projectDesignData } from './project';
 
 const isObject = (v: unknown) => typeof v === 'object' && v !== null && !Array.isArray(v);
 
@@ -32,13 +32,7 @@ export const checkRunInputsSchema = z.object({
     climateZone: climateZoneSchema,
     /** The site's ground elevation, m (absent from runs stored before the wind data stopped keeping its own). */
     elevationM: z.number().optional(),
-    buildingHeightM: z.number(),
-    planLengthM: z.number(),
-    planWidthM: z.number(),
-    indoorTempC: z.number(),
-    indoorRh: z.number(),
-    winterDesignTempC: z.number(),
-    summerDesignTempC: z.number(),
+    ...projectDesignData,
     /** The project's wind data and monthly climate as they were (not re-validated, for the same reason). */
     wind: z.custom<ProjectWind>(isObject).nullable(),
     climate: z.custom<ProjectClimate>(isObject).nullable(),

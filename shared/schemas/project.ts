@@ -140,6 +140,17 @@ export const projectClimateUpdateSchema = z.object({
   climate: projectClimateSchema,
 });
 
+/** A project's building and indoor/outdoor design data as answered (and as a stored check run keeps it). */
+export const projectDesignData = {
+  buildingHeightM: z.number(),
+  planLengthM: z.number(),
+  planWidthM: z.number(),
+  indoorTempC: z.number(),
+  indoorRh: z.number(),
+  winterDesignTempC: z.number(),
+  summerDesignTempC: z.number(),
+};
+
 export const projectSchema = z.object({
   id: z.uuid(),
   organisationId: z.uuid(),
@@ -150,13 +161,7 @@ export const projectSchema = z.object({
   siteAddress: z.string(),
   climateZone: climateZoneSchema,
   elevationM: z.number(),
-  buildingHeightM: z.number(),
-  planLengthM: z.number(),
-  planWidthM: z.number(),
-  indoorTempC: z.number(),
-  indoorRh: z.number(),
-  winterDesignTempC: z.number(),
-  summerDesignTempC: z.number(),
+  ...projectDesignData,
   wind: projectWindSchema.nullable(),
   climate: projectClimateSchema.nullable(),
   archivedAt: z.string().nullable(),

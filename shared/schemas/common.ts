@@ -75,6 +75,13 @@ export const calendarDate = () =>
 /** A finite number (NaN, ±Infinity and numbers written as strings are refused). */
 export const finite = () => z.number().refine(Number.isFinite, 'must be a finite number');
 
+/** An e-mail address someone types to reach a person (invitation, firm member): at most 320 characters, kept lower-case. */
+export const emailInput = () =>
+  z
+    .email()
+    .max(320)
+    .transform((e) => e.toLowerCase());
+
 export const unitSystemSchema = z.enum(['SI', 'IP']);
 
 /** A 409 for a stale save: the error plus the record as it is now, so the client can merge or reload. */

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { firmRoleSchema } from '../auth/permissions';
+import { emailInput } from './common';
 
 /** Someone in a firm with their firm role (`organisation_members`). */
 export const firmMemberSchema = z.object({
@@ -13,10 +14,7 @@ export type FirmMember = z.infer<typeof firmMemberSchema>;
 
 /** Adding someone who already has a Skinwright account to the firm, by their e-mail address. */
 export const firmMemberAddSchema = z.object({
-  email: z
-    .email()
-    .max(320)
-    .transform((e) => e.toLowerCase()),
+  email: emailInput(),
   role: firmRoleSchema,
 });
 export type FirmMemberAdd = z.infer<typeof firmMemberAddSchema>;

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { projectRoleSchema } from '../auth/permissions';
+import { emailInput } from './common';
 
 export const memberSchema = z.object({
   id: z.uuid(),
@@ -14,10 +15,7 @@ export type Member = z.infer<typeof memberSchema>;
 export const memberRoleUpdateSchema = z.object({ role: projectRoleSchema });
 
 export const invitationInputSchema = z.object({
-  email: z
-    .email()
-    .max(320)
-    .transform((e) => e.toLowerCase()),
+  email: emailInput(),
   role: projectRoleSchema,
 });
 export type InvitationInput = z.infer<typeof invitationInputSchema>;

@@ -123,22 +123,20 @@ export const loadSpanTableSchema = z.object({
     .describe('Rows in increasing span; allowables as published by the maker (ASD)'),
 });
 
-export const clipByRatingSchema = z.object({
-  allowableLoad: z
+/** An allowable ASD capacity, N: 1 N to 1 MN (less is a typing or unit slip). */
+const newtons = (what: string) =>
+  z
     .number()
     .min(MIN_CAPACITY, `at least ${MIN_CAPACITY} N — less is a typing or unit slip`)
     .max(1_000_000)
-    .describe('Allowable ASD load of one clip (tested or published), N (at least 1, at most 1 000 000)'),
+    .describe(`${what}, N (at least 1, at most 1 000 000)`);
+
+export const clipByRatingSchema = z.object({
+  allowableLoad: newtons('Allowable ASD load of one clip (tested or published)'),
 });
 
 export const clipByFastenersSchema = z.object({
-  fastenerCapacity: z
-    .number()
-    .min(MIN_CAPACITY, `at least ${MIN_CAPACITY} N — less is a typing or unit slip`)
-    .max(1_000_000)
-    .describe(
-      'Allowable ASD capacity of one fastener, lesser of pull-out and pull-over, N (at least 1, at most 1 000 000)',
-    ),
+  fastenerCapacity: newtons('Allowable ASD capacity of one fastener, lesser of pull-out and pull-over'),
   fastenersPerClip: z.number().int().min(1).max(20).describe('Fasteners per clip, count (1 to 20)'),
 });
 

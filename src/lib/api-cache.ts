@@ -7,6 +7,7 @@ import {
 } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { apiRequest } from './api';
+import { auditKeys, projectKeys } from './query-keys';
 
 /** What a query keeps of the answer (`pick`; the whole answer by default) and its own options, if any. */
 export type GetQueryOptions<S extends z.ZodType, T, K extends QueryKey> = {
@@ -63,3 +64,12 @@ export function useApiMutation<V, R>(mutationFn: (vars: V) => Promise<R>, effect
     },
   });
 }
+
+/**
+ * After a project's own fields change (details, climate, wind, archived) — one cache effect for the three
+ * features that save them: the project kept, the lists and its activity log stale.
+ */
+export const projectSaved = {
+  keep: (project: { id: string }) => projectKeys.detail(project.id),
+  stale: (project: { id: string }) => [projectKeys.lists(), auditKeys.list(project.id)],
+};

@@ -1,23 +1,21 @@
-import { type AssemblyInput, assemblySchema } from '@shared/schemas/assembly';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { type Assembly, type AssemblyInput, assemblySchema } from '@shared/schemas/assembly';
 import { apiRequest } from '../../../lib/api';
+import { useApiMutation } from '../../../lib/api-cache';
 import { assemblyKeys, auditKeys } from '../../../lib/query-keys';
 
-/** `POST /api/projects/:id/assemblies` → 201 Assembly at revision 1 (the server stores its own result). */
-export const createAssembly = ({ projectId, input }: { projectId: string; input: AssemblyInput }) =>
-  apiRequest(`/api/projects/${encodeURIComponent(projectId)}/assemblies`, assemblySchema, {
-    method: 'POST',
-    body: input,
-  });
+/** After an assembly is made or saved: it kept, its project's list and activity log stale. */
+export const assemblySaved = {
+  keep: (assembly: Assembly) => assemblyKeys.detail(assembly.id),
+  stale: (assembly: Assembly) => [assemblyKeys.list(assembly.projectId), auditKeys.list(assembly.projectId)],
+};
 
-export function useCreateAssembly() {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: createAssembly,
-    onSuccess: (assembly) => {
-      qc.setQueryData(assemblyKeys.detail(assembly.id), assembly);
-      void qc.invalidateQueries({ queryKey: assemblyKeys.list(assembly.projectId) });
-      void qc.invalidateQueries({ queryKey: auditKeys.list(assembly.projectId) });
-    },
-  });
-}
+/** `POST /api/projects/:id/assemblies` → 201 Assembly at revision 1 (the server stores its own result). */
+export const useCreateAssembly = () =>
+  useApiMutation(
+    ({ projectId, input }: { projectId: string; input: AssemblyInput }) =>
+      apiRequest(`/api/projects/${encodeURIComponent(projectId)}/assemblies`, assemblySchema, {
+        method: 'POST',
+        body: input,
+      }),
+    assemblySaved,
+  );

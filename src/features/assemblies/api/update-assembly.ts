@@ -1,44 +1,32 @@
 import { type Assembly, type AssemblyInput, assemblySchema } from '@shared/schemas/assembly';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
 import { apiRequest, currentOnConflict, errorMessage } from '../../../lib/api';
-import { assemblyKeys, auditKeys } from '../../../lib/query-keys';
+import { useApiMutation } from '../../../lib/api-cache';
+import { assemblyKeys } from '../../../lib/query-keys';
 import type { RevisionApi } from '../../../lib/use-revision-editing';
-
-/** `PUT /api/assemblies/:assemblyId` `{version, note, input}` → the assembly at its new revision. */
-export const updateAssembly = ({
-  assemblyId,
-  version,
-  note,
-  input,
-}: {
-  assemblyId: string;
-  version: number;
-  note: string;
-  input: AssemblyInput;
-}) =>
-  apiRequest(`/api/assemblies/${encodeURIComponent(assemblyId)}`, assemblySchema, {
-    method: 'PUT',
-    body: { version, note, input },
-  });
+import { assemblySaved } from './create-assembly';
 
 /** On a 409 `version_conflict` the server sends the assembly as it now stands; null for any other error. */
 export const conflictingAssembly = (error: unknown): Assembly | null =>
   currentOnConflict(error, assemblySchema);
 
-export function useUpdateAssembly() {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: updateAssembly,
-    onSuccess: (assembly) => {
-      qc.setQueryData(assemblyKeys.detail(assembly.id), assembly);
-      void qc.invalidateQueries({ queryKey: assemblyKeys.revisions(assembly.id) });
-      void qc.invalidateQueries({ queryKey: assemblyKeys.list(assembly.projectId) });
-      void qc.invalidateQueries({ queryKey: auditKeys.list(assembly.projectId) });
+/**
+ * `PUT /api/assemblies/:assemblyId` `{version, note, input}` → the assembly at its new revision. On a conflict
+ * the cached detail is NOT replaced: the builder still holds the person's edits and decides with them whether
+ * to load the saved revision or carry the edits over.
+ */
+export const useUpdateAssembly = () =>
+  useApiMutation(
+    ({ assemblyId, ...body }: { assemblyId: string; version: number; note: string; input: AssemblyInput }) =>
+      apiRequest(`/api/assemblies/${encodeURIComponent(assemblyId)}`, assemblySchema, {
+        method: 'PUT',
+        body,
+      }),
+    {
+      keep: assemblySaved.keep,
+      stale: (assembly) => [assemblyKeys.revisions(assembly.id), ...assemblySaved.stale(assembly)],
     },
-    // On a conflict the cached detail is NOT replaced here: the builder still holds the person's edits and
-    // decides with them whether to load the saved revision or carry the edits over.
-  });
-}
+  );
 
 /** What every assembly page hands to the shared revision editing (src/lib/use-revision-editing.ts) to save. */
 export function useAssemblyRevisionApi(): RevisionApi {

@@ -1,19 +1,13 @@
 import { type FirmMemberAdd, firmMemberSchema } from '@shared/schemas/firm-members';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api';
+import { useApiMutation } from '../../../lib/api-cache';
 import { firmMemberKeys } from '../../../lib/query-keys';
+import { firmMembersPath } from './paths';
 
 /** `POST /api/organisations/:orgId/members` `{ email, role }` → 201 FirmMember; the server e-mails them. */
-export const addFirmMember = ({ orgId, input }: { orgId: string; input: FirmMemberAdd }) =>
-  apiRequest(`/api/organisations/${encodeURIComponent(orgId)}/members`, firmMemberSchema, {
-    method: 'POST',
-    body: input,
-  });
-
-export function useAddFirmMember(orgId: string) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (input: FirmMemberAdd) => addFirmMember({ orgId, input }),
-    onSuccess: () => void qc.invalidateQueries({ queryKey: firmMemberKeys.list(orgId) }),
-  });
-}
+export const useAddFirmMember = (orgId: string) =>
+  useApiMutation(
+    (input: FirmMemberAdd) =>
+      apiRequest(firmMembersPath(orgId), firmMemberSchema, { method: 'POST', body: input }),
+    { stale: () => [firmMemberKeys.list(orgId)] },
+  );

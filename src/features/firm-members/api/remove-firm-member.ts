@@ -1,20 +1,10 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequestEmpty } from '../../../lib/api';
+import { useApiMutation } from '../../../lib/api-cache';
 import { firmMemberKeys, meKeys } from '../../../lib/query-keys';
+import { firmMembersPath } from './paths';
 
 /** `DELETE /api/organisations/:orgId/members/:userId` → 204. */
-export const removeFirmMember = ({ orgId, userId }: { orgId: string; userId: string }) =>
-  apiRequestEmpty(`/api/organisations/${encodeURIComponent(orgId)}/members/${encodeURIComponent(userId)}`, {
-    method: 'DELETE',
+export const useRemoveFirmMember = (orgId: string) =>
+  useApiMutation((userId: string) => apiRequestEmpty(firmMembersPath(orgId, userId), { method: 'DELETE' }), {
+    stale: () => [firmMemberKeys.list(orgId), meKeys.all],
   });
-
-export function useRemoveFirmMember(orgId: string) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (userId: string) => removeFirmMember({ orgId, userId }),
-    onSuccess: () => {
-      void qc.invalidateQueries({ queryKey: firmMemberKeys.list(orgId) });
-      void qc.invalidateQueries({ queryKey: meKeys.all });
-    },
-  });
-}

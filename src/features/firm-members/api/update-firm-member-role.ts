@@ -1,33 +1,15 @@
 import type { FirmRole } from '@shared/auth/permissions';
 import { firmMemberSchema } from '@shared/schemas/firm-members';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api';
+import { useApiMutation } from '../../../lib/api-cache';
 import { firmMemberKeys, meKeys } from '../../../lib/query-keys';
+import { firmMembersPath } from './paths';
 
 /** `PUT /api/organisations/:orgId/members/:userId` `{ role }` → FirmMember. */
-export const updateFirmMemberRole = ({
-  orgId,
-  userId,
-  role,
-}: {
-  orgId: string;
-  userId: string;
-  role: FirmRole;
-}) =>
-  apiRequest(
-    `/api/organisations/${encodeURIComponent(orgId)}/members/${encodeURIComponent(userId)}`,
-    firmMemberSchema,
-    { method: 'PUT', body: { role } },
+export const useUpdateFirmMemberRole = (orgId: string) =>
+  useApiMutation(
+    ({ userId, role }: { userId: string; role: FirmRole }) =>
+      apiRequest(firmMembersPath(orgId, userId), firmMemberSchema, { method: 'PUT', body: { role } }),
+    // One's own firm role decides what the library and code table pages offer.
+    { stale: () => [firmMemberKeys.list(orgId), meKeys.all] },
   );
-
-export function useUpdateFirmMemberRole(orgId: string) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (v: { userId: string; role: FirmRole }) => updateFirmMemberRole({ orgId, ...v }),
-    onSuccess: () => {
-      void qc.invalidateQueries({ queryKey: firmMemberKeys.list(orgId) });
-      // One's own firm role decides what the library and code table pages offer.
-      void qc.invalidateQueries({ queryKey: meKeys.all });
-    },
-  });
-}

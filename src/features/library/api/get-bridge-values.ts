@@ -3,7 +3,7 @@ import { useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { getQuery } from '../../../lib/api-cache';
 import { libraryKeys } from '../../../lib/query-keys';
-import { firmLibraryPath } from './paths';
+import { firmLibraryPath } from './firm-list';
 
 const bridgeValueListSchema = z.object({ bridgeValues: z.array(bridgeValueSchema) });
 

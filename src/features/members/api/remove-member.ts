@@ -1,21 +1,12 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequestEmpty } from '../../../lib/api';
+import { useApiMutation } from '../../../lib/api-cache';
 import { auditKeys, memberKeys, projectKeys } from '../../../lib/query-keys';
+import { projectPeoplePath } from './paths';
 
 /** `DELETE /api/projects/:id/members/:memberId` → 204. */
-export const removeMember = ({ projectId, memberId }: { projectId: string; memberId: string }) =>
-  apiRequestEmpty(`/api/projects/${encodeURIComponent(projectId)}/members/${encodeURIComponent(memberId)}`, {
-    method: 'DELETE',
-  });
-
-export function useRemoveMember(projectId: string) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (memberId: string) => removeMember({ projectId, memberId }),
-    onSuccess: () => {
-      void qc.invalidateQueries({ queryKey: memberKeys.list(projectId) });
-      void qc.invalidateQueries({ queryKey: auditKeys.list(projectId) });
-      void qc.invalidateQueries({ queryKey: projectKeys.all });
-    },
-  });
-}
+export const useRemoveMember = (projectId: string) =>
+  useApiMutation(
+    (memberId: string) =>
+      apiRequestEmpty(projectPeoplePath(projectId, 'members', memberId), { method: 'DELETE' }),
+    { stale: () => [memberKeys.list(projectId), auditKeys.list(projectId), projectKeys.all] },
+  );

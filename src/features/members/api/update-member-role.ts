@@ -1,34 +1,18 @@
 import type { ProjectRole } from '@shared/auth/permissions';
 import { memberSchema } from '@shared/schemas/members';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api';
+import { useApiMutation } from '../../../lib/api-cache';
 import { auditKeys, memberKeys, projectKeys } from '../../../lib/query-keys';
+import { projectPeoplePath } from './paths';
 
 /** `PUT /api/projects/:id/members/:memberId` `{ role }` → Member. */
-export const updateMemberRole = ({
-  projectId,
-  memberId,
-  role,
-}: {
-  projectId: string;
-  memberId: string;
-  role: ProjectRole;
-}) =>
-  apiRequest(
-    `/api/projects/${encodeURIComponent(projectId)}/members/${encodeURIComponent(memberId)}`,
-    memberSchema,
-    { method: 'PUT', body: { role } },
+export const useUpdateMemberRole = (projectId: string) =>
+  useApiMutation(
+    ({ memberId, role }: { memberId: string; role: ProjectRole }) =>
+      apiRequest(projectPeoplePath(projectId, 'members', memberId), memberSchema, {
+        method: 'PUT',
+        body: { role },
+      }),
+    // One's own role may have changed, and with it what the project pages show.
+    { stale: () => [memberKeys.list(projectId), auditKeys.list(projectId), projectKeys.detail(projectId)] },
   );
-
-export function useUpdateMemberRole(projectId: string) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (v: { memberId: string; role: ProjectRole }) => updateMemberRole({ projectId, ...v }),
-    onSuccess: () => {
-      void qc.invalidateQueries({ queryKey: memberKeys.list(projectId) });
-      void qc.invalidateQueries({ queryKey: auditKeys.list(projectId) });
-      // One's own role may have changed, and with it what the project pages show.
-      void qc.invalidateQueries({ queryKey: projectKeys.detail(projectId) });
-    },
-  });
-}

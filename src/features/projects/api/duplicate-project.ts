@@ -1,22 +1,15 @@
 import { projectSchema } from '@shared/schemas/project';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '../../../lib/api';
+import { useApiMutation } from '../../../lib/api-cache';
 import { projectKeys } from '../../../lib/query-keys';
 
-/** `POST /api/projects/:id/duplicate` → 201 the copy, with the caller as its only member (owner). */
-export const duplicateProject = ({ id, name, number }: { id: string; name: string; number: string }) =>
-  apiRequest(`/api/projects/${encodeURIComponent(id)}/duplicate`, projectSchema, {
-    method: 'POST',
-    body: { name, number },
-  });
-
-export function useDuplicateProject() {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: duplicateProject,
-    onSuccess: (project) => {
-      qc.setQueryData(projectKeys.detail(project.id), project);
-      void qc.invalidateQueries({ queryKey: projectKeys.lists() });
-    },
-  });
-}
+/** `POST /api/projects/:id/duplicate` `{ name, number }` → 201 the copy, with the caller as its only member (owner). */
+export const useDuplicateProject = () =>
+  useApiMutation(
+    ({ id, ...body }: { id: string; name: string; number: string }) =>
+      apiRequest(`/api/projects/${encodeURIComponent(id)}/duplicate`, projectSchema, {
+        method: 'POST',
+        body,
+      }),
+    { keep: (project) => projectKeys.detail(project.id), stale: () => [projectKeys.lists()] },
+  );

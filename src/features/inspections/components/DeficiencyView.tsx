@@ -13,6 +13,7 @@ import { errorMessage, isApiRequestError } from '../../../lib/api';
 import { useDeficiencyStep } from '../api/mutations';
 import { shrinkPhoto } from '../photo';
 import { DeficiencyDetailsForm } from './DeficiencyDetailsForm';
+import { PhotoButton } from './PhotoButton';
 import { DeficiencyStateMark, DueMark } from './StateMark';
 
 const STEP_WORDS: Record<DeficiencyTransition, string> = {
@@ -105,20 +106,9 @@ export function DeficiencyView({
           {step.error ? <Notice tone="caution" live title={errorMessage(step.error)} /> : null}
           {steps.includes('correct') ? (
             <div className="flex flex-col gap-2">
-              <label
-                htmlFor={`${id}-photo`}
-                className="inline-flex min-h-11 w-fit cursor-pointer items-center gap-2 rounded-sm border border-ink px-4 py-2 text-base font-semibold hover:bg-paper-sunk"
-              >
-                <span aria-hidden="true">▣</span> Photo of the correction
-              </label>
-              <input
+              <PhotoButton
                 id={`${id}-photo`}
-                type="file"
-                accept="image/*"
-                capture="environment"
-                className="sr-only"
-                onChange={async (e) => {
-                  const file = e.target.files?.[0];
+                onFile={async (file) => {
                   setPhotoProblem(undefined);
                   if (!file) return;
                   try {
@@ -127,7 +117,9 @@ export function DeficiencyView({
                     setPhotoProblem(err instanceof Error ? err.message : 'The photo could not be read.');
                   }
                 }}
-              />
+              >
+                Photo of the correction
+              </PhotoButton>
               {photo ? (
                 <p className="text-sm" data-testid="correction-photo-ready">{`✓ ${photo.name} ready`}</p>
               ) : null}

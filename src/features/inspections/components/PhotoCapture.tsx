@@ -2,6 +2,7 @@ import { useEffect, useId, useState } from 'react';
 import { keepPhoto, keptPhoto, newPhotoKey } from '../../../lib/offline/device-photos';
 import { useUploadPhoto } from '../api/upload-photo';
 import { shrinkPhoto } from '../photo';
+import { PhotoButton } from './PhotoButton';
 
 /** Most a photo may weigh before it is made smaller (the server's limit on what it is sent is the same). */
 const MAX_PHOTO_BYTES = 15 * 1024 * 1024;
@@ -66,24 +67,9 @@ export function PhotoCapture({
 
   return (
     <div className="flex flex-col gap-2">
-      <label
-        htmlFor={`${id}-photo`}
-        className={`inline-flex min-h-11 w-fit cursor-pointer items-center gap-2 rounded-sm border border-ink px-4 py-2 text-base font-semibold ${disabled ? 'opacity-55' : 'hover:bg-paper-sunk'}`}
-      >
-        <span aria-hidden="true">▣</span> {busy ? 'Making the photo smaller…' : 'Take a photo'}
-      </label>
-      <input
-        id={`${id}-photo`}
-        type="file"
-        accept="image/*"
-        capture="environment"
-        className="sr-only"
-        disabled={disabled || busy}
-        onChange={(e) => {
-          void take(e.target.files?.[0]);
-          e.target.value = '';
-        }}
-      />
+      <PhotoButton id={`${id}-photo`} disabled={disabled || busy} onFile={(file) => void take(file)}>
+        {busy ? 'Making the photo smaller…' : 'Take a photo'}
+      </PhotoButton>
       <label className="flex min-h-11 items-center gap-3 text-sm">
         <input
           type="checkbox"

@@ -6,6 +6,7 @@ import { type UseFieldArrayReturn, useFieldArray, useFormContext, useWatch } fro
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Loading } from '../../../components/ui/Loading';
+import { RadioGroup } from '../../../components/ui/RadioGroup';
 import { Select } from '../../../components/ui/Select';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { fieldDomId } from '../evaluate';
@@ -49,29 +50,14 @@ export function ThermalBridgesEditor() {
   return (
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-end gap-x-6 gap-y-3">
-        <fieldset className="flex flex-col gap-1">
-          <legend className="text-sm font-semibold">Girts run</legend>
-          <div className="flex gap-4 pt-1 text-sm">
-            <label className="flex items-center gap-2">
-              <input
-                type="radio"
-                value="horizontal"
-                className="accent-ink"
-                {...register('attachment.girtOrientation')}
-              />
-              horizontally (panels span vertically)
-            </label>
-            <label className="flex items-center gap-2">
-              <input
-                type="radio"
-                value="vertical"
-                className="accent-ink"
-                {...register('attachment.girtOrientation')}
-              />
-              vertically
-            </label>
-          </div>
-        </fieldset>
+        <RadioGroup
+          legend="Girts run"
+          options={[
+            { value: 'horizontal', label: 'horizontally (panels span vertically)' },
+            { value: 'vertical', label: 'vertically' },
+          ]}
+          field={register('attachment.girtOrientation')}
+        />
         <TextField
           path="attachment.clipType"
           label="Clip or bracket"

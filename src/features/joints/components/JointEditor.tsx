@@ -20,6 +20,7 @@ import { Field } from '../../../components/ui/Field';
 import { FieldGroup, GroupProblem } from '../../../components/ui/FieldGroup';
 import { NamedOptions, Options } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
+import { RadioGroup } from '../../../components/ui/RadioGroup';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
@@ -297,34 +298,24 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
             }
             problem={pr('surfaceTemperatureRange.max')}
           />
-          <fieldset className="flex flex-col gap-1 sm:col-span-2">
-            <legend className="text-sm font-semibold">Installation temperature</legend>
-            <div className="flex gap-4 text-sm">
-              <label className="flex items-center gap-1">
-                <input
-                  type="radio"
-                  name={`${base}-install`}
-                  checked={!ranged}
-                  onChange={() =>
-                    set({ installationTemperature: ranged ? (install.min + install.max) / 2 : install })
-                  }
-                />
-                one temperature
-              </label>
-              <label className="flex items-center gap-1">
-                <input
-                  type="radio"
-                  name={`${base}-install`}
-                  checked={ranged}
-                  onChange={() =>
-                    set({
-                      installationTemperature: ranged ? install : { min: install - 10, max: install + 10 },
-                    })
-                  }
-                />
-                a range (season unknown)
-              </label>
-            </div>
+          <RadioGroup
+            legend="Installation temperature"
+            name={`${base}-install`}
+            options={[
+              { value: 'one', label: 'one temperature' },
+              { value: 'range', label: 'a range (season unknown)' },
+            ]}
+            value={ranged ? 'range' : 'one'}
+            // A radio changes only to the other choice: one temperature becomes a range around it, a range its middle.
+            onChange={() =>
+              set({
+                installationTemperature: ranged
+                  ? (install.min + install.max) / 2
+                  : { min: install - 10, max: install + 10 },
+              })
+            }
+            className="sm:col-span-2"
+          >
             {ranged ? (
               <div className="grid gap-3 sm:grid-cols-2">
                 <QuantityInput
@@ -354,7 +345,7 @@ export function JointEditor({ joint, index, onChange, problems, air }: JointEdit
                 problem={pr('installationTemperature')}
               />
             )}
-          </fieldset>
+          </RadioGroup>
         </div>
         <GroupProblem path={path('surfaceTemperatureRange')} problem={pr('surfaceTemperatureRange')} />
         {ranged ? (

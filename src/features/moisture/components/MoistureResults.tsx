@@ -2,6 +2,7 @@ import { dewPoint } from '@shared/calc/moisture/psychrometrics';
 import type { MoistureResult } from '@shared/calc/moisture/schema';
 import type { UnitSystem } from '@shared/units';
 import { useId } from 'react';
+import { RadioGroup } from '../../../components/ui/RadioGroup';
 import { Select } from '../../../components/ui/Select';
 import { numeric, Table, Td } from '../../../components/ui/Table';
 import { formatNumber } from '../../../lib/quantities';
@@ -86,29 +87,16 @@ export function MoistureResults({
                 ))}
               </Select>
             </div>
-            <fieldset className="flex flex-col gap-1">
-              <legend className="mb-1 text-sm font-semibold">Lines drawn</legend>
-              <div className="flex gap-4 text-sm">
-                <label className="flex items-center gap-1.5">
-                  <input
-                    type="radio"
-                    name={`${uid}-mode`}
-                    checked={mode === 'temperature'}
-                    onChange={() => onMode('temperature')}
-                  />
-                  Temperature and dew point
-                </label>
-                <label className="flex items-center gap-1.5">
-                  <input
-                    type="radio"
-                    name={`${uid}-mode`}
-                    checked={mode === 'pressure'}
-                    onChange={() => onMode('pressure')}
-                  />
-                  p and p_sat
-                </label>
-              </div>
-            </fieldset>
+            <RadioGroup
+              legend="Lines drawn"
+              name={`${uid}-mode`}
+              options={[
+                { value: 'temperature', label: 'Temperature and dew point' },
+                { value: 'pressure', label: 'p and p_sat' },
+              ]}
+              value={mode}
+              onChange={onMode}
+            />
           </div>
         </div>
         <ProfileChart layers={layers} result={result} month={m} mode={mode} system={system} />

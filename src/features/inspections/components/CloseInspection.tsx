@@ -6,7 +6,7 @@ import { errorMessage } from '../../../lib/api';
 import { useWaitingCount } from '../../../lib/offline/queue';
 import { inspectionKeys } from '../../../lib/query-keys';
 import { useCloseInspection } from '../api/mutations';
-import { DeficiencyStateMark, DueMark } from './StateMark';
+import { DeficiencyMarks } from './StateMark';
 
 /**
  * Closing: every item needs a state first (the items not yet seen are listed); the deficiencies still open are
@@ -61,11 +61,7 @@ export function CloseInspection({ inspection, base }: { inspection: Inspection; 
             {open.map((d) => (
               <li key={d.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
                 <Link to={`${base}/deficiencies/${d.id}`}>{`D-${d.number} · ${d.itemLabel}`}</Link>
-                <span className="flex flex-wrap items-center gap-3 text-sm">
-                  <DeficiencyStateMark state={d.state} />
-                  <span className="[overflow-wrap:anywhere]">{d.ownerName ?? 'no owner yet'}</span>
-                  <DueMark deficiency={d} />
-                </span>
+                <DeficiencyMarks deficiency={d} />
               </li>
             ))}
           </ul>

@@ -8,7 +8,7 @@ import { inspectionPaths } from '../api/paths';
 import { usePendingAnswers, usePendingPhotos } from '../api/pending';
 import { scopeText } from '../scope';
 import { ItemCard } from './ItemCard';
-import { DeficiencyStateMark, DueMark } from './StateMark';
+import { DeficiencyMarks } from './StateMark';
 import { WaitingToSend } from './WaitingToSend';
 
 /**
@@ -145,11 +145,7 @@ export function InspectionView({
                 <Link to={`${base}/deficiencies/${d.id}`} className="min-h-11 content-center font-semibold">
                   {`D-${d.number} · ${d.itemLabel}`}
                 </Link>
-                <span className="flex flex-wrap items-center gap-3 text-sm">
-                  <DeficiencyStateMark state={d.state} />
-                  <span className="[overflow-wrap:anywhere]">{d.ownerName ?? 'no owner yet'}</span>
-                  <DueMark deficiency={d} />
-                </span>
+                <DeficiencyMarks deficiency={d} />
               </li>
             ))}
           </ul>

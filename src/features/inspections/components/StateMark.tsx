@@ -60,3 +60,18 @@ export function DueMark({
     </span>
   );
 }
+
+/** A deficiency's state, owner and due date on one wrapping line, as each list of deficiencies shows them. */
+export function DeficiencyMarks({
+  deficiency: d,
+}: {
+  deficiency: Pick<Deficiency, 'state' | 'dueDate' | 'ownerName'>;
+}) {
+  return (
+    <span className="flex flex-wrap items-center gap-3 text-sm">
+      <DeficiencyStateMark state={d.state} />
+      <span className="[overflow-wrap:anywhere]">{d.ownerName ?? 'no owner yet'}</span>
+      <DueMark deficiency={d} />
+    </span>
+  );
+}

@@ -7,8 +7,8 @@ import type { Project, ProjectClimate } from '@shared/schemas/project';
 import { type ReactNode, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { Link } from 'react-router';
-import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { FormSaveBar } from '../../../components/ui/FormSaveBar';
 import { Notice } from '../../../components/ui/Notice';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
@@ -342,28 +342,9 @@ export function ClimateForm({
 
       {banner}
 
-      <div className="flex flex-wrap items-center gap-4 border-t border-ink pt-4">
-        <Button
-          type="submit"
-          variant="primary"
-          busy={isSubmitting}
-          busyLabel="Saving…"
-          disabled={submitDisabled}
-        >
-          Save the climate
-        </Button>
-        {onCancel ? (
-          <Button variant="secondary" onClick={onCancel} disabled={isSubmitting}>
-            Cancel
-          </Button>
-        ) : null}
-        {errorCount > 0 ? (
-          <p className="text-sm text-caution" role="status">
-            <span aria-hidden="true">✕ </span>
-            {errorCount === 1 ? 'One value needs attention.' : `${errorCount} values need attention.`}
-          </p>
-        ) : null}
-      </div>
+      <FormSaveBar busy={isSubmitting} disabled={submitDisabled} onCancel={onCancel} errorCount={errorCount}>
+        Save the climate
+      </FormSaveBar>
     </form>
   );
 }

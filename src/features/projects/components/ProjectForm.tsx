@@ -3,8 +3,8 @@ import { CLIMATE_ZONES, type ProjectInput, projectInputSchema } from '@shared/sc
 import { type ReactNode, useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { FormSaveBar } from '../../../components/ui/FormSaveBar';
 import { Notice } from '../../../components/ui/Notice';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
@@ -182,28 +182,15 @@ export function ProjectForm({
 
       {banner}
 
-      <div className="flex flex-wrap items-center gap-4 border-t border-ink pt-4">
-        <Button
-          type="submit"
-          variant="primary"
-          busy={isSubmitting}
-          busyLabel={busyLabel}
-          disabled={submitDisabled}
-        >
-          {submitLabel}
-        </Button>
-        {onCancel ? (
-          <Button variant="secondary" onClick={onCancel} disabled={isSubmitting}>
-            Cancel
-          </Button>
-        ) : null}
-        {errorCount > 0 ? (
-          <p className="text-sm text-caution" role="status">
-            <span aria-hidden="true">✕ </span>
-            {errorCount === 1 ? 'One value needs attention.' : `${errorCount} values need attention.`}
-          </p>
-        ) : null}
-      </div>
+      <FormSaveBar
+        busy={isSubmitting}
+        busyLabel={busyLabel}
+        disabled={submitDisabled}
+        onCancel={onCancel}
+        errorCount={errorCount}
+      >
+        {submitLabel}
+      </FormSaveBar>
     </form>
   );
 }

@@ -10,6 +10,7 @@ import { Controller, useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { FormSaveBar } from '../../../components/ui/FormSaveBar';
 import { Notice } from '../../../components/ui/Notice';
 import { LabelledOptions } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
@@ -373,28 +374,14 @@ export function ProjectWindForm({ project, onDone }: { project: Project; onDone:
         </Notice>
       ) : null}
 
-      <div className="flex flex-wrap items-center gap-4 border-t border-ink pt-4">
-        <Button
-          type="submit"
-          variant="primary"
-          busy={update.isPending}
-          busyLabel="Saving…"
-          disabled={conflict !== null}
-        >
-          Save wind data
-        </Button>
-        <Button variant="secondary" onClick={onDone} disabled={update.isPending}>
-          Cancel
-        </Button>
-        {Object.keys(formState.errors).length > 0 ? (
-          <p className="text-sm text-caution" role="status">
-            <span aria-hidden="true">✕ </span>
-            {Object.keys(formState.errors).length === 1
-              ? 'One value needs attention.'
-              : `${Object.keys(formState.errors).length} values need attention.`}
-          </p>
-        ) : null}
-      </div>
+      <FormSaveBar
+        busy={update.isPending}
+        disabled={conflict !== null}
+        onCancel={onDone}
+        errorCount={Object.keys(formState.errors).length}
+      >
+        Save wind data
+      </FormSaveBar>
     </form>
   );
 }

@@ -3,15 +3,10 @@ import { useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Notice } from '../../../components/ui/Notice';
 import { formatDateTime } from '../../../lib/format';
+import { useConflictEdit } from '../../../lib/use-conflict-edit';
 import { conflictingProject, useUpdateClimate } from '../api/update-climate';
 import { type ClimateFormValues, climateToForm, mergeClimate } from '../climate-form';
 import { ClimateForm } from './ClimateForm';
-
-interface Conflict {
-  base: Project;
-  theirs: Project;
-  mine: ProjectClimate;
-}
 
 /**
  * Edits the project's climate. Every save names the project version it started from; when someone saved the
@@ -28,29 +23,22 @@ export function ClimateEditor({
   indoorHref?: string;
 }) {
   const update = useUpdateClimate();
-  const [base, setBase] = useState<Project>(project);
-  const [values, setValues] = useState<ClimateFormValues>(() => climateToForm(project.climate));
-  const [formKey, setFormKey] = useState(0);
-  const [conflict, setConflict] = useState<Conflict | null>(null);
+  const {
+    base,
+    values,
+    formKey,
+    conflict,
+    save: saveVersion,
+    restart,
+  } = useConflictEdit<Project, ClimateFormValues, ProjectClimate>(
+    project,
+    (p) => climateToForm(p.climate),
+    conflictingProject,
+  );
   const [carried, setCarried] = useState<{ onto: number; bothChanged: string[] } | null>(null);
 
-  async function save(climate: ProjectClimate) {
-    try {
-      await update.mutateAsync({ id: project.id, version: base.version, climate });
-      onDone();
-    } catch (e) {
-      const theirs = conflictingProject(e);
-      if (!theirs) throw e;
-      setConflict({ base, theirs, mine: climate });
-    }
-  }
-
-  function restart(next: Project, form: ClimateFormValues) {
-    setBase(next);
-    setValues(form);
-    setFormKey((k) => k + 1);
-    setConflict(null);
-  }
+  const save = (climate: ProjectClimate) =>
+    saveVersion(climate, (version) => update.mutateAsync({ id: project.id, version, climate }), onDone);
 
   const merge = conflict ? mergeClimate(conflict.base.climate, conflict.mine, conflict.theirs.climate) : null;
 

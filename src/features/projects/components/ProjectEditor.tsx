@@ -10,6 +10,7 @@ import {
   projectFieldLabel,
 } from '../../../lib/project-fields';
 import { useUnitSystem } from '../../../lib/unit-system';
+import { useConflictEdit } from '../../../lib/use-conflict-edit';
 import { conflictingProject, useUpdateProject } from '../api/update-project';
 import { ProjectForm, type ProjectFormValues, projectToFormValues } from './ProjectForm';
 
@@ -42,29 +43,25 @@ export function mergeEdits({ base, theirs, mine }: Conflict): ProjectFormValues 
 export function ProjectEditor({ project, onDone }: { project: Project; onDone: () => void }) {
   const update = useUpdateProject();
   const system = useUnitSystem();
-  const [base, setBase] = useState<Project>(project);
-  const [formValues, setFormValues] = useState<ProjectFormValues>(() => projectToFormValues(project));
-  const [formKey, setFormKey] = useState(0);
-  const [conflict, setConflict] = useState<Conflict | null>(null);
+  const {
+    values: formValues,
+    formKey,
+    conflict,
+    save: saveVersion,
+    restart,
+  } = useConflictEdit<Project, ProjectFormValues, ProjectInput>(
+    project,
+    projectToFormValues,
+    conflictingProject,
+  );
   const [carriedOnto, setCarriedOnto] = useState<number | null>(null);
 
-  async function save(values: ProjectInput) {
-    try {
-      await update.mutateAsync({ id: project.id, version: base.version, changes: values });
-      onDone();
-    } catch (e) {
-      const theirs = conflictingProject(e);
-      if (!theirs) throw e;
-      setConflict({ base, theirs, mine: values });
-    }
-  }
-
-  function restart(next: Project, values: ProjectFormValues) {
-    setBase(next);
-    setFormValues(values);
-    setFormKey((k) => k + 1);
-    setConflict(null);
-  }
+  const save = (values: ProjectInput) =>
+    saveVersion(
+      values,
+      (version) => update.mutateAsync({ id: project.id, version, changes: values }),
+      onDone,
+    );
 
   const rows = conflict
     ? PROJECT_INPUT_FIELDS.filter((f) => !same(conflict.mine[f], conflict.theirs[f])).map((f) => ({

@@ -1,28 +1,19 @@
-import { z } from 'zod';
+import type { z } from 'zod';
+import { wordedEnum } from '../schemas/common';
 
 /**
  * Roles on a project. One project is shared by people of several firms, each with a role on that project.
  * `owner` is the project administrator (usually the architect's firm that created it).
  */
-export const PROJECT_ROLES = [
-  'owner',
-  'architect',
-  'envelope_consultant',
-  'engineer',
-  'subcontractor',
-  'viewer',
-] as const;
-export const projectRoleSchema = z.enum(PROJECT_ROLES);
-export type ProjectRole = z.infer<typeof projectRoleSchema>;
-
-export const PROJECT_ROLE_LABELS: Record<ProjectRole, string> = {
+export const [PROJECT_ROLES, projectRoleSchema, PROJECT_ROLE_LABELS] = wordedEnum({
   owner: 'Owner / admin',
   architect: 'Architect',
   envelope_consultant: 'Envelope consultant',
   engineer: 'Engineer',
   subcontractor: 'Cladding subcontractor',
   viewer: 'Viewer',
-};
+});
+export type ProjectRole = z.infer<typeof projectRoleSchema>;
 
 /** Every action that a route or a button can take on a project. */
 export const PROJECT_ACTIONS = [
@@ -145,15 +136,12 @@ export const mayRemove = (remover: ProjectRole | null | undefined, current: Proj
  * their firm roles, deleting entries and tables); `editor`: writes code tables, library entries and data
  * sheets; `reader`: reads them. A project role never writes a firm's data.
  */
-export const FIRM_ROLES = ['admin', 'editor', 'reader'] as const;
-export const firmRoleSchema = z.enum(FIRM_ROLES);
-export type FirmRole = z.infer<typeof firmRoleSchema>;
-
-export const FIRM_ROLE_LABELS: Record<FirmRole, string> = {
+export const [FIRM_ROLES, firmRoleSchema, FIRM_ROLE_LABELS] = wordedEnum({
   admin: 'Firm administrator',
   editor: 'Editor',
   reader: 'Reader',
-};
+});
+export type FirmRole = z.infer<typeof firmRoleSchema>;
 
 /** What a firm role allows, in the firm's own data. */
 export const FIRM_PERMISSIONS = {

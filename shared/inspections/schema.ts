@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { projectRoleSchema } from '../auth/permissions';
-import { calendarDate, int4, TEXT_MAX, text, unitSystemSchema } from '../schemas/common';
+import { calendarDate, int4, TEXT_MAX, text, unitSystemSchema, wordedEnum } from '../schemas/common';
 import { QUANTITIES, type Quantity } from '../units/registry';
 
 /**
@@ -37,16 +37,14 @@ export type InspectionScope = z.infer<typeof inspectionScopeSchema>;
 
 // ------------------------------------------------------------------------------------------------ items
 
-export const ITEM_STATES = ['unseen', 'pass', 'fail', 'na'] as const;
-export const itemStateSchema = z.enum(ITEM_STATES);
-export type ItemState = z.infer<typeof itemStateSchema>;
-/** Plain words and a glyph for each state, so it reads without colour. */
-export const ITEM_STATE_TEXT: Record<ItemState, { label: string; glyph: string }> = {
+/** Each state with plain words and a glyph, so it reads without colour. */
+export const [ITEM_STATES, itemStateSchema, ITEM_STATE_TEXT] = wordedEnum({
   unseen: { label: 'Not yet seen', glyph: '○' },
   pass: { label: 'Pass', glyph: '✓' },
   fail: { label: 'Fail', glyph: '✕' },
   na: { label: 'Not applicable', glyph: '–' },
-};
+});
+export type ItemState = z.infer<typeof itemStateSchema>;
 
 export const ITEM_KINDS = [
   'girt_spacing',
@@ -188,15 +186,13 @@ export type ItemAnswer = z.infer<typeof itemAnswerSchema>;
 
 // ------------------------------------------------------------------------------------------------ deficiencies
 
-export const DEFICIENCY_STATES = ['open', 'corrected', 'accepted', 'reopened'] as const;
-export const deficiencyStateSchema = z.enum(DEFICIENCY_STATES);
-export type DeficiencyState = z.infer<typeof deficiencyStateSchema>;
-export const DEFICIENCY_STATE_TEXT: Record<DeficiencyState, { label: string; glyph: string }> = {
+export const [DEFICIENCY_STATES, deficiencyStateSchema, DEFICIENCY_STATE_TEXT] = wordedEnum({
   open: { label: 'Open', glyph: '!' },
   corrected: { label: 'Corrected — to be accepted', glyph: '→' },
   accepted: { label: 'Accepted', glyph: '✓' },
   reopened: { label: 'Reopened', glyph: '↻' },
-};
+});
+export type DeficiencyState = z.infer<typeof deficiencyStateSchema>;
 /** A deficiency is open (still to be dealt with) until the inspector accepts it. */
 export const isDeficiencyOpen = (s: DeficiencyState) => s !== 'accepted';
 

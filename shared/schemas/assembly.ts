@@ -7,21 +7,19 @@ import { takeoffInputSchema } from '../calc/takeoff/schema';
 import { MIN_CONDUCTIVITY, thermalInputSchema, thermalResultSchema } from '../calc/thermal/schema';
 import { MIN_CLIP_SPACING, MIN_SPAN, panelSchema } from '../calc/wind/schema';
 import type { Unbranded } from '../units/brands';
-import { int4, TEXT_MAX, text } from './common';
+import { int4, TEXT_MAX, text, wordedEnum } from './common';
 
 /**
  * Wall categories a code table may key on. The list is deliberately short and generic; criteria sets
  * (code tables) refer to these keys.
  */
-export const WALL_CATEGORIES = ['metal_building', 'steel_framed', 'mass', 'wood_framed', 'other'] as const;
-export const wallCategorySchema = z.enum(WALL_CATEGORIES);
-export const WALL_CATEGORY_LABELS: Record<z.infer<typeof wallCategorySchema>, string> = {
+export const [WALL_CATEGORIES, wallCategorySchema, WALL_CATEGORY_LABELS] = wordedEnum({
   metal_building: 'Metal building wall',
   steel_framed: 'Steel-framed wall',
   mass: 'Mass wall',
   wood_framed: 'Wood-framed wall',
   other: 'Other',
-};
+});
 
 /** How the cladding is held: descriptive data the drawings and the wind check read; the thermal effect sits in `thermal.bridges`. */
 export const attachmentSchema = z.object({

@@ -82,6 +82,16 @@ export const emailInput = () =>
     .max(320)
     .transform((e) => e.toLowerCase());
 
+/**
+ * A closed set of values written once, as the keys of its words (labels, glyphs, units): the values in table
+ * order, their zod enum and the words, so no value can be listed without words or twice.
+ */
+export function wordedEnum<W extends Record<string, unknown>>(words: W) {
+  type Value = Extract<keyof W, string>;
+  const values = Object.keys(words) as [Value, ...Value[]];
+  return [values, z.enum(values), words] as const;
+}
+
 export const unitSystemSchema = z.enum(['SI', 'IP']);
 
 /** A 409 for a stale save: the error plus the record as it is now, so the client can merge or reload. */

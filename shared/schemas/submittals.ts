@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { projectRoleSchema } from '../auth/permissions';
 import { verdictSchema } from '../checks/report';
-import { calendarDate, int4, TEXT_MAX, text } from './common';
+import { calendarDate, int4, TEXT_MAX, text, wordedEnum } from './common';
 
 /**
  * Submittals: a package the cladding subcontractor (or the owner) sends to the design team for review —
@@ -11,16 +11,16 @@ import { calendarDate, int4, TEXT_MAX, text } from './common';
  * decided revision stays as it was (read-only).
  */
 
-export const SUBMITTAL_STATUSES = [
-  'draft',
-  'submitted',
-  'under_review',
-  'approved',
-  'approved_as_noted',
-  'revise_and_resubmit',
-  'rejected',
-] as const;
-export const submittalStatusSchema = z.enum(SUBMITTAL_STATUSES);
+/** Every status with plain words and a glyph, so that it reads without colour (and in grey-scale print). */
+export const [SUBMITTAL_STATUSES, submittalStatusSchema, SUBMITTAL_STATUS_TEXT] = wordedEnum({
+  draft: { label: 'Draft', glyph: '○' },
+  submitted: { label: 'Submitted', glyph: '→' },
+  under_review: { label: 'Under review', glyph: '…' },
+  approved: { label: 'Approved', glyph: '✓' },
+  approved_as_noted: { label: 'Approved as noted', glyph: '✓' },
+  revise_and_resubmit: { label: 'Revise and resubmit', glyph: '↻' },
+  rejected: { label: 'Rejected', glyph: '✕' },
+});
 export type SubmittalStatus = z.infer<typeof submittalStatusSchema>;
 
 export const SUBMITTAL_DECISIONS = [
@@ -31,17 +31,6 @@ export const SUBMITTAL_DECISIONS = [
 ] as const;
 export const submittalDecisionSchema = z.enum(SUBMITTAL_DECISIONS);
 export type SubmittalDecision = z.infer<typeof submittalDecisionSchema>;
-
-/** Plain words and a glyph for every status, so that it reads without colour (and in grey-scale print). */
-export const SUBMITTAL_STATUS_TEXT: Record<SubmittalStatus, { label: string; glyph: string }> = {
-  draft: { label: 'Draft', glyph: '○' },
-  submitted: { label: 'Submitted', glyph: '→' },
-  under_review: { label: 'Under review', glyph: '…' },
-  approved: { label: 'Approved', glyph: '✓' },
-  approved_as_noted: { label: 'Approved as noted', glyph: '✓' },
-  revise_and_resubmit: { label: 'Revise and resubmit', glyph: '↻' },
-  rejected: { label: 'Rejected', glyph: '✕' },
-};
 
 /** Decided revisions never change again. */
 export const isDecided = (s: SubmittalStatus) => (SUBMITTAL_DECISIONS as readonly string[]).includes(s);

@@ -8,7 +8,7 @@ import {
   sweepParametersSchema,
   sweepRankingSchema,
 } from '../sweep/schema';
-import { TEXT_MAX, text } from './common';
+import { TEXT_MAX, text, wordedEnum } from './common';
 
 /*
  * The API of a firm's sweep costs (library entries) and of saved sweeps (an assembly's, with the revision and
@@ -17,16 +17,14 @@ import { TEXT_MAX, text } from './common';
 
 // ------------------------------------------------------------------ firm library: costs of what a sweep varies
 
-export const COST_KINDS = ['insulation', 'clip', 'girt', 'sealant'] as const;
-export const costKindSchema = z.enum(COST_KINDS);
-export type CostKind = z.infer<typeof costKindSchema>;
-/** What one unit of each kind is: the screens and the sheet word the price with it. */
-export const COST_UNITS: Record<CostKind, string> = {
+/** Each kind with what one unit of it is: the screens and the sheet word the price with it. */
+export const [COST_KINDS, costKindSchema, COST_UNITS] = wordedEnum({
   insulation: 'per m² of wall per 25 mm of thickness',
   clip: 'per clip',
   girt: 'per m of girt',
   sealant: 'per m of joint',
-};
+});
+export type CostKind = z.infer<typeof costKindSchema>;
 
 const costFields = {
   kind: costKindSchema.describe(

@@ -3,6 +3,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   type CostMeasure,
+  convertCosts,
   costBoxText,
   costsOf,
   costToShown,
@@ -87,6 +88,17 @@ describe('sweep cost units (SI stored, IP shown)', () => {
     expect(back.sealant?.perMetre['35']).toBeCloseTo(10, 4);
     expect(back.sealant?.metresPerSquareMetre).toBeCloseTo(0.5, 4);
     expect(costBoxText(4.5, 'insulation', 'SI')).toBe('4.5');
+  });
+});
+
+describe('a change of unit system keeps the costs', () => {
+  it('the boxes are converted, not reread: 4.5 per m² per 25 mm → 0.424753 per ft² per in and back (derived)', () => {
+    const si = { ...emptyCosts, insulation: '4.5', clip: '6', girt: '10', sealantMetres: 'x' };
+    const ip = convertCosts(si, 'SI', 'IP');
+    expect(ip).toMatchObject({ insulation: '0.424753', clip: '6', girt: '3.048', sealantMetres: 'x' });
+    expect(costsOf(ip, 'IP').insulation).toBeCloseTo(4.5, 5);
+    expect(convertCosts(ip, 'IP', 'SI').girt).toBe('10');
+    expect(convertCosts(si, 'SI', 'SI')).toBe(si);
   });
 });
 

@@ -145,6 +145,25 @@ export function draftOfCosts(c: SweepCosts | null, system: UnitSystem): CostDraf
   };
 }
 
+/** The boxes' text from one unit system in another (the same SI costs; an unreadable box kept as typed). */
+export function convertCosts(d: CostDraft, from: UnitSystem, to: UnitSystem): CostDraft {
+  if (from === to) return d;
+  const convert = (text: string, m: CostMeasure) => {
+    const v = amount(text);
+    return v === undefined ? text : costBoxText(costToSI(v, m, from), m, to);
+  };
+  return {
+    ...d,
+    insulation: convert(d.insulation, 'insulation'),
+    clip: d.clip,
+    girt: convert(d.girt, 'girt'),
+    sealantPerMetre: Object.fromEntries(
+      Object.entries(d.sealantPerMetre).map(([cls, t]) => [cls, convert(t ?? '', 'sealant')]),
+    ),
+    sealantMetres: convert(d.sealantMetres, 'sealantMetres'),
+  };
+}
+
 const SLOTS: CostSlot[] = [
   'insulation',
   'clip',

@@ -6,7 +6,7 @@ import { rankVariants } from '@shared/sweep/rank';
 import type { SweepVariantResult } from '@shared/sweep/schema';
 import type { SweepPlan } from '@shared/sweep/sweep';
 import type { UnitSystem } from '@shared/units';
-import { useEffect, useMemo } from 'react';
+import { useEffect, useMemo, useRef } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
@@ -15,6 +15,7 @@ import { formatNumber } from '../../../lib/quantities';
 import {
   type CostDraft,
   type CostSlot,
+  convertCosts,
   costsOf,
   costToShown,
   costUnit,
@@ -69,6 +70,13 @@ export function CostRanking({
     girt: kinds.includes('girtSpacing'),
     sealant: kinds.includes('sealantClass'),
   };
+  // A change of unit system converts what the boxes hold: the same costs, never reread in the other units.
+  const typedIn = useRef(system);
+  useEffect(() => {
+    if (typedIn.current === system) return;
+    onDraft(convertCosts(draft, typedIn.current, system));
+    typedIn.current = system;
+  }, [system, draft, onDraft]);
   // Empty boxes take the library's price once it has loaded (a box typed or emptied before keeps its text).
   useEffect(() => {
     if (!library.entries) return;

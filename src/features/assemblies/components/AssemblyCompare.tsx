@@ -2,6 +2,7 @@ import type { AssemblySummary } from '@shared/schemas/assembly';
 import { useQueries } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/Button';
+import { Cautions } from '../../../components/ui/Cautions';
 import { Field } from '../../../components/ui/Field';
 import { Loading } from '../../../components/ui/Loading';
 import { Notice } from '../../../components/ui/Notice';
@@ -14,7 +15,7 @@ import { revisionQueryOptions } from '../api/get-revision';
 import { useRevisions } from '../api/get-revisions';
 import type { CompareItem } from '../compare-params';
 import { evaluateThermal } from '../evaluate';
-import { Cautions } from './Cautions';
+import { THERMAL_CAUTIONS } from './Cautions';
 import { type CompareColumn, CompareTable } from './CompareTable';
 
 interface PickRow {
@@ -206,7 +207,7 @@ export function AssemblyCompare({
       ) : (
         <>
           <CompareTable columns={columns} />
-          <Cautions />
+          <Cautions items={THERMAL_CAUTIONS} />
         </>
       )}
     </div>

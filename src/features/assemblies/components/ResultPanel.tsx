@@ -1,9 +1,10 @@
 import type { ThermalInput, ThermalResult } from '@shared/calc/thermal/schema';
+import { Cautions } from '../../../components/ui/Cautions';
 import { FieldLink } from '../../../components/ui/FieldLink';
 import { Notice } from '../../../components/ui/Notice';
 import { PageSection } from '../../../components/ui/PageSection';
 import { ResultSection } from '../../../components/ui/ResultSection';
-import { Cautions } from './Cautions';
+import { THERMAL_CAUTIONS } from './Cautions';
 import { MethodSection } from './MethodSection';
 import { ResultFigures } from './ResultFigures';
 import { SectionSketch } from './SectionSketch';
@@ -142,7 +143,7 @@ export function ResultPanel({
         {result ? <ResultFigures result={result} /> : <WaitingFor errors={errors} thermal={thermal} />}
       </ResultSection>
 
-      <Cautions engineVersion={engineVersion} />
+      <Cautions items={THERMAL_CAUTIONS} engineVersion={engineVersion} />
     </>
   );
 }

@@ -6,6 +6,7 @@ import { type Assembly, type AssemblyInput, assemblyInputSchema } from '@shared/
 import type { Project } from '@shared/schemas/project';
 import { useMemo, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
+import { Cautions } from '../../../components/ui/Cautions';
 import { PageSection } from '../../../components/ui/PageSection';
 import { COMPUTED_AS_YOU_TYPE, ResultSection } from '../../../components/ui/ResultSection';
 import { staleProps } from '../../../components/ui/ResultSummary';
@@ -16,13 +17,13 @@ import { issueLines } from '../../../lib/issue-words';
 import { type RevisionApi, useRevisionEditing } from '../../../lib/use-revision-editing';
 import { ElevationEditor } from '../../takeoff/components/ElevationEditor';
 import { ElevationTable } from '../../takeoff/components/ElevationTable';
-import { TakeoffCautions } from '../../takeoff/components/TakeoffCautions';
+import { TAKEOFF_CAUTIONS } from '../../takeoff/components/TakeoffCautions';
 import { TakeoffProblems } from '../../takeoff/components/TakeoffProblems';
 import { TakeoffTable } from '../../takeoff/components/TakeoffTable';
 import { blankTakeoff } from '../../takeoff/draft';
 import { evaluateTakeoff } from '../../takeoff/evaluate';
 import { evaluateJoints } from '../evaluate';
-import { JointCautions } from './JointCautions';
+import { JOINT_CAUTIONS } from './JointCautions';
 import { JointInputsTable } from './JointInputsTable';
 import { JointMethod } from './JointMethod';
 import { JointScheduleEditor } from './JointScheduleEditor';
@@ -189,7 +190,7 @@ export function JointsView({ project, assembly, ...revisionApi }: Props) {
           <p className="text-ink-muted">No joints in the schedule yet.</p>
         )}
       </ResultSection>
-      <JointCautions engineVersion={ENGINE_VERSION} />
+      <Cautions title="Cautions — sealant joints" items={JOINT_CAUTIONS} engineVersion={ENGINE_VERSION} />
 
       <PageSection
         n={4}
@@ -246,7 +247,7 @@ export function JointsView({ project, assembly, ...revisionApi }: Props) {
           <p className="text-ink-muted">Nothing to take off yet.</p>
         )}
       </ResultSection>
-      <TakeoffCautions engineVersion={ENGINE_VERSION} />
+      <Cautions title="Cautions — quantities" items={TAKEOFF_CAUTIONS} engineVersion={ENGINE_VERSION} />
 
       {mayWrite ? (
         <RevisionSaveBar

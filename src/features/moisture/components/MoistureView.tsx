@@ -5,6 +5,7 @@ import type { Project } from '@shared/schemas/project';
 import { drawClass } from '@shared/sheets/layer-class';
 import { type ReactNode, useState } from 'react';
 import { Link } from 'react-router';
+import { Cautions } from '../../../components/ui/Cautions';
 import { PageSection } from '../../../components/ui/PageSection';
 import { COMPUTED_AS_YOU_TYPE, ResultSection } from '../../../components/ui/ResultSection';
 import { RevisionHeader } from '../../../components/ui/RevisionHeader';
@@ -16,7 +17,7 @@ import type { RevisionApi } from '../../../lib/use-revision-editing';
 import { evaluateMoisture } from '../evaluate';
 import { useVapourEditing, type VapourEditing } from '../use-vapour-editing';
 import { draftOf, KIND_SYMBOLS, KIND_UNITS, layerThickness } from '../vapour-draft';
-import { MoistureCautions } from './MoistureCautions';
+import { MOISTURE_CAUTIONS } from './MoistureCautions';
 import { MoistureMethod } from './MoistureMethod';
 import { MoistureResults } from './MoistureResults';
 import { MoistureSummary } from './MoistureSummary';
@@ -159,7 +160,7 @@ export function MoistureView({ project, assembly, climateSummary, ...revisionApi
         )}
       </ResultSection>
 
-      <MoistureCautions engineVersion={ENGINE_VERSION} />
+      <Cautions items={MOISTURE_CAUTIONS} engineVersion={ENGINE_VERSION} />
 
       {mayWrite ? (
         <RevisionSaveBar

@@ -1,16 +1,6 @@
-import { Cautions } from '../../../components/ui/Cautions';
-
 /** The cautions that sit with the takeoff, after its result. */
-export function TakeoffCautions({ engineVersion }: { engineVersion?: string }) {
-  return (
-    <Cautions
-      title="Cautions — quantities"
-      engineVersion={engineVersion}
-      items={[
-        'Quantities are estimates from a simplified elevation: verify them against the shop drawings before ordering.',
-        'Panel joints are measured gross through openings, and only fasteners certainly inside an opening are deducted; the waste allowance is the one entered here.',
-        "Sealant yield depends on the joint as built, the bead profile and the gun; follow the sealant maker's published coverage and limits.",
-      ]}
-    />
-  );
-}
+export const TAKEOFF_CAUTIONS = [
+  'Quantities are estimates from a simplified elevation: verify them against the shop drawings before ordering.',
+  'Panel joints are measured gross through openings, and only fasteners certainly inside an opening are deducted; the waste allowance is the one entered here.',
+  "Sealant yield depends on the joint as built, the bead profile and the gun; follow the sealant maker's published coverage and limits.",
+];

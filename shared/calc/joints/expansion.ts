@@ -1,5 +1,6 @@
 import raw from '@data/reference/thermal-expansion.json';
 import { z } from 'zod';
+import { referenceTable } from '../reference-table';
 
 const alpha = (what: string) => z.number().positive().max(5e-4).describe(`${what}, 1/K`);
 
@@ -17,16 +18,10 @@ export const expansionMaterialSchema = z.object({
 export const GENERIC_EXPANSION_NOTE = 'Generic value — use the maker’s declared coefficient where it differs';
 export type ExpansionMaterial = z.infer<typeof expansionMaterialSchema>;
 
-const tableSchema = z
-  .object({ version: z.literal(1), note: z.string(), materials: z.array(expansionMaterialSchema).min(1) })
-  .refine((t) => new Set(t.materials.map((r) => r.id)).size === t.materials.length, {
-    message: 'material ids must be unique',
-  });
+const table = referenceTable(expansionMaterialSchema, raw);
 
 /** The parsed, validated table; importing this module throws if the JSON is malformed. */
-export const expansionMaterials: readonly ExpansionMaterial[] = tableSchema.parse(raw).materials;
-
-const byId = new Map(expansionMaterials.map((r) => [r.id, r]));
+export const expansionMaterials: readonly ExpansionMaterial[] = table.rows;
 
 /** Look a material up by id; undefined when unknown. */
-export const findExpansionMaterial = (id: string): ExpansionMaterial | undefined => byId.get(id);
+export const findExpansionMaterial = table.find;

@@ -1,5 +1,6 @@
 import raw from '@data/reference/materials.json';
 import { z } from 'zod';
+import { referenceTable } from '../reference-table';
 
 /** One generic material (data/reference/materials.json; sources in materials.source.md). */
 export const materialSchema = z.object({
@@ -28,16 +29,10 @@ export const GENERIC_MATERIAL_NOTE =
   'Generic design value (ISO 10456 / ASHRAE Fundamentals) — use the maker’s declared value';
 export type Material = z.infer<typeof materialSchema>;
 
-const librarySchema = z
-  .object({ version: z.literal(1), note: z.string(), materials: z.array(materialSchema).min(1) })
-  .refine((lib) => new Set(lib.materials.map((m) => m.id)).size === lib.materials.length, {
-    message: 'material ids must be unique',
-  });
+const library = referenceTable(materialSchema, raw);
 
 /** The parsed, validated library; importing this module throws if the JSON is malformed. */
-export const materials: readonly Material[] = librarySchema.parse(raw).materials;
-
-const byId = new Map(materials.map((m) => [m.id, m]));
+export const materials: readonly Material[] = library.rows;
 
 /** Look a material up by id; undefined when unknown. */
-export const findMaterial = (id: string): Material | undefined => byId.get(id);
+export const findMaterial = library.find;

@@ -58,6 +58,7 @@ const sweepWorker = (): WorkerLike =>
  */
 const PROGRESS_MS = 100;
 const FIRST_RESULTS_MS = 2000;
+const REWARM_MS = 1000;
 
 const workersHere = () =>
   poolSize(typeof navigator === 'undefined' ? undefined : navigator.hardwareConcurrency);
@@ -65,7 +66,7 @@ const workersHere = () =>
 /**
  * One sweep at a time on the worker pool: its progress, the variants as they stream in (ever less often), cancel.
  * The pool's workers are started while the page is open, before a run, so a run does not wait for them to load
- * the engine; each run uses them up (it ends by stopping them) and fresh ones start for the next. A new run or
+ * the engine; each run uses them up (it ends by stopping them) and fresh ones start a second later. A new run or
  * leaving the page stops the one before.
  */
 export function useSweepRun(createWorker: () => WorkerLike = sweepWorker) {
@@ -147,7 +148,8 @@ export function useSweepRun(createWorker: () => WorkerLike = sweepWorker) {
         if (r.ok) setState({ status: 'finished', total: plan.count, ms: performance.now() - startedAt });
         else if ('cancelled' in r) setState({ status: 'cancelled', done, total: plan.count });
         else setState({ status: 'refused', field: r.field, reason: r.reason });
-        warm();
+        // The next run's workers start once this one's results are drawn, not while they are.
+        setTimeout(warm, REWARM_MS);
       });
     },
     [createWorker, progress, warm],

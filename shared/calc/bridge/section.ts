@@ -1,3 +1,4 @@
+import { cellIndex } from './grid';
 import type { BridgeResult } from './schema';
 
 /*
@@ -161,18 +162,6 @@ export function isotherm(section: Section, level: number): Segment[] {
 export const isotherms = (section: Section, warm: number, cold: number) =>
   bandEdges(warm, cold).map((level) => ({ level, segments: isotherm(section, level) }));
 
-/** Index of the cell of `edges` that holds v (edges ascending; the last cell for v at the top edge). */
-function cellAt(edges: number[], v: number): number {
-  let lo = 0;
-  let hi = edges.length - 2;
-  while (lo < hi) {
-    const mid = (lo + hi + 1) >> 1;
-    if (edges[mid]! <= v) lo = mid;
-    else hi = mid - 1;
-  }
-  return lo;
-}
-
 /**
  * The section on a uniform grid of near-square cells, at most `n` along the longer side (the stored map of a
  * computed bridge): each cell takes the temperature of the solve's cell at its centre, to 0.001 K.
@@ -187,9 +176,9 @@ export function coarseSection(s: Section, n: number): Section {
   const y = Array.from({ length: cy + 1 }, (_, j) => y0 + ((y1 - y0) * j) / cy);
   const values: (number | null)[] = [];
   for (let j = 0; j < cy; j++) {
-    const fj = cellAt(s.y, (y[j]! + y[j + 1]!) / 2);
+    const fj = cellIndex(s.y, (y[j]! + y[j + 1]!) / 2);
     for (let i = 0; i < cx; i++) {
-      const v = s.values[fj * nx + cellAt(s.x, (x[i]! + x[i + 1]!) / 2)];
+      const v = s.values[fj * nx + cellIndex(s.x, (x[i]! + x[i + 1]!) / 2)];
       values.push(v === null || v === undefined ? null : Math.round(v * 1000) / 1000);
     }
   }

@@ -1,8 +1,10 @@
 import { z } from 'zod';
+import { computedBridgeSchema } from '../calc/bridge/computed';
 import { movementClassSchema } from '../calc/joints/schema';
+import { valueSourceSchema } from '../calc/source';
 import { criteriaRowsSchema } from '../checks/criteria';
 import { verdictSchema } from '../checks/report';
-import { assemblyInputSchema } from '../schemas/assembly';
+import { assemblyInputSchema, orgMaterialInputSchema } from '../schemas/assembly';
 import { projectClimateSchema, projectSiteSchema, projectWindSchema } from '../schemas/project';
 
 /*
@@ -39,6 +41,38 @@ const numeric = <K extends string, S extends z.ZodRawShape>(kind: K, what: strin
     })
     .describe(`${what}; give a range or a list`);
 
+/** One insulation product: the firm library's material fields; the entry it was taken from, when it was. */
+export const sweepProductSchema = orgMaterialInputSchema
+  .extend({
+    libraryEntryId: z
+      .uuid()
+      .optional()
+      .describe(
+        'The firm library material it was taken from: a saved sweep reads the entry’s values (a deleted one is refused at this field)',
+      ),
+  })
+  .describe('An insulation product: its name (the variant’s label), λ, μ (s_d = μ·d) and source');
+export type SweepProduct = z.infer<typeof sweepProductSchema>;
+
+/** One clip type: its χ, name (the variant's label) and source — a firm library entry or a solved bridge. */
+export const sweepClipEntrySchema = z
+  .object({
+    name: z
+      .string()
+      .min(1)
+      .max(120)
+      .describe('Name of the clip type (the variant’s label and the bridge’s name)'),
+    chi: z.number().min(0).max(10).describe('χ, W/K (0–10)'),
+    source: valueSourceSchema
+      .extend({ computed: computedBridgeSchema.optional().describe('The solve that gave the value') })
+      .optional()
+      .describe(
+        'Where χ comes from (`libraryEntryId`: the firm library entry — a saved sweep reads its values, a deleted one is refused at this field; `computed`: the bridge solver’s detail and solve, whose surface f_Rsi the moisture check reads)',
+      ),
+  })
+  .describe('A clip type with its χ and source');
+export type SweepClipEntry = z.infer<typeof sweepClipEntrySchema>;
+
 export const sweepParameterSchema = z.discriminatedUnion('kind', [
   numeric('insulationThickness', 'Thickness of one homogeneous or framed layer, m', {
     layer: index('layer'),
@@ -53,7 +87,26 @@ export const sweepParameterSchema = z.discriminatedUnion('kind', [
     'Design clip spacing along a girt, m; the clip bridges’ spacing along the girts follows it',
     {},
   ),
-  numeric('clipChi', 'χ of one point bridge (a clip), W/K', { bridge: index('bridge') }),
+  z
+    .object({
+      kind: z.literal('insulationProduct'),
+      layer: index('layer'),
+      products: z
+        .array(sweepProductSchema)
+        .max(SWEEP_MAX_LIST)
+        .describe('The products, one or more, each with its own name'),
+    })
+    .describe(
+      'Insulation product of one homogeneous layer, or of the insulation (lowest-λ section) of a framed layer: λ, μ and the name change in every check; a product without μ leaves the layer’s vapour data unentered (the moisture check is then not evaluated)',
+    ),
+  numeric('clipChi', 'χ of one point bridge (a clip), W/K; or clip types with their χ, name and source', {
+    bridge: index('bridge'),
+    entries: z
+      .array(sweepClipEntrySchema)
+      .max(SWEEP_MAX_LIST)
+      .optional()
+      .describe('Clip types from the firm library or the bridge solver, instead of a range or list'),
+  }),
   numeric('studSpacing', 'Member spacing of one metal-framed layer, m; the framing fractions follow it', {
     layer: index('layer'),
   }),

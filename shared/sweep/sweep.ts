@@ -13,8 +13,8 @@ import { CHECK_MODULES } from '../checks/modules';
 import { type Check, type CheckReport, verdictOf } from '../checks/report';
 import { checksOf, type ModuleRun, runModule } from '../checks/runner';
 import type { AssemblyInput } from '../schemas/assembly';
-import { attachmentSchema } from '../schemas/assembly';
-import type { SweepParameter, SweepResult, SweepVariantResult } from './schema';
+import { attachmentSchema, orgMaterialInputSchema } from '../schemas/assembly';
+import type { SweepClipEntry, SweepParameter, SweepProduct, SweepResult, SweepVariantResult } from './schema';
 
 /*
  * The sweep engine: plan (every refusal before any work), apply one variant to an assembly (a new document;
@@ -134,6 +134,76 @@ function setBridgeSpacing(a: Assembly, follow: ReturnType<typeof followers>, v: 
 
 const unwrap = <T extends { unwrap(): Bounds }>(s: T) => s.unwrap();
 
+/**
+ * The names of a list of products or clip types, each once: a variant's value is the name (its label, and the
+ * key its module runs are kept by, so two materials under one name would share a run).
+ */
+function namedValues(items: readonly { name: string }[], at: string, what: string): string[] {
+  if (items.length === 0) throw new CalcInputError(at, `the list is empty: name one ${what} or more`);
+  const seen = new Map<string, number>();
+  items.forEach(({ name }, i) => {
+    const first = seen.get(name);
+    if (first !== undefined)
+      throw new CalcInputError(
+        `${at}.${i}.name`,
+        `${what}s ${first + 1} and ${i + 1} are both named “${name}”: each needs its own name`,
+      );
+    seen.set(name, i);
+  });
+  return items.map((x) => x.name);
+}
+
+/** The item a variant's value names (its name, checked unique by namedValues). */
+const byName = <T extends { name: string }>(items: readonly T[]) => {
+  const m = new Map(items.map((x) => [x.name, x]));
+  return (v: Value) => m.get(v as string)!;
+};
+
+/**
+ * The assembly with a product in layer `i`: the layer's name and λ (in a framed layer, those of section
+ * `section`, its insulation), and its vapour data μ (none given: not entered — the moisture check says so).
+ * A homogeneous layer drops its `materialId` (that names the generic library, not this product).
+ */
+function withProduct(d: Assembly, i: number, section: number, m: SweepProduct): Assembly {
+  const layer = d.thermal.layers[i]!;
+  const name = m.name.slice(0, 120);
+  let next = layer;
+  if (layer.kind === 'framed')
+    next = {
+      ...layer,
+      sections: replaceAt(layer.sections, section, {
+        ...layer.sections[section]!,
+        name,
+        conductivity: m.conductivity,
+      }),
+    };
+  else if (layer.kind === 'homogeneous') {
+    const { materialId: _generic, ...rest } = layer;
+    next = { ...rest, name, conductivity: m.conductivity };
+  }
+  const mu = m.vapourResistanceFactor;
+  return {
+    ...d,
+    thermal: { ...d.thermal, layers: replaceAt(d.thermal.layers, i, next) },
+    vapour: d.vapour && replaceAt(d.vapour, i, mu === undefined ? null : { kind: 'mu' as const, mu }),
+  };
+}
+
+/** The assembly with clip type `e` at point bridge `i`: its name, χ and source (a solved one's surface f_Rsi too). */
+function withClip(d: Assembly, i: number, e: SweepClipEntry): Assembly {
+  const b = d.thermal.bridges[i]!;
+  if (b.kind !== 'point') return d;
+  const { source: _old, ...bridge } = b;
+  const next = { ...bridge, name: e.name, chi: e.chi, ...(e.source ? { source: e.source } : {}) };
+  return {
+    ...d,
+    thermal: {
+      ...d.thermal,
+      bridges: replaceAt(d.thermal.bridges, i, next as Assembly['thermal']['bridges'][number]),
+    },
+  };
+}
+
 /** One parameter planned against the assembly: every refusal of a parameter the assembly does not have. */
 function planAxis(a: Assembly, p: SweepParameter, at: string, cap: number): SweepAxis {
   switch (p.kind) {
@@ -159,6 +229,41 @@ function planAxis(a: Assembly, p: SweepParameter, at: string, cap: number): Swee
             },
           };
         },
+      };
+    }
+    case 'insulationProduct': {
+      const layer = layerAt(
+        a,
+        p.layer,
+        `${at}.layer`,
+        ['homogeneous', 'framed'],
+        'only a homogeneous or framed layer has a material to change',
+      );
+      const values = namedValues(p.products, `${at}.products`, 'product');
+      p.products.forEach((m, i) => {
+        checkBounds(
+          m.conductivity,
+          `${at}.products.${i}.conductivity`,
+          homogeneousLayerSchema.shape.conductivity,
+        );
+        if (m.vapourResistanceFactor !== undefined)
+          checkBounds(
+            m.vapourResistanceFactor,
+            `${at}.products.${i}.vapourResistanceFactor`,
+            unwrap(orgMaterialInputSchema.shape.vapourResistanceFactor),
+          );
+      });
+      // A framed layer's insulation: its lowest-λ section, as the cavity-insulation metric reads it.
+      const section =
+        layer.kind === 'framed'
+          ? layer.sections.reduce((m, s, i, all) => (s.conductivity < all[m]!.conductivity ? i : m), 0)
+          : 0;
+      const product = byName(p.products);
+      return {
+        kind: p.kind,
+        values,
+        touches: ['thermal', 'moisture'],
+        apply: (d, v) => withProduct(d, p.layer, section, product(v)),
       };
     }
     case 'girtSpacing':
@@ -190,6 +295,22 @@ function planAxis(a: Assembly, p: SweepParameter, at: string, cap: number): Swee
           `${at}.bridge`,
           `bridge ${p.bridge} (${b.name}) is not a point bridge (a clip)`,
         );
+      if (p.entries) {
+        if (p.range || p.list)
+          throw new CalcInputError(at, 'give a range, a list or clip types — one of them');
+        const values = namedValues(p.entries, `${at}.entries`, 'clip type');
+        p.entries.forEach((e, i) => {
+          checkBounds(e.chi, `${at}.entries.${i}.chi`, pointBridgeBySpacingSchema.shape.chi);
+        });
+        const entry = byName(p.entries);
+        // The name and a solved source's surface f_Rsi reach the moisture check too.
+        return {
+          kind: p.kind,
+          values,
+          touches: ['thermal', 'moisture'],
+          apply: (d, v) => withClip(d, p.bridge, entry(v)),
+        };
+      }
       return {
         kind: p.kind,
         values: numericValues(p, at, pointBridgeBySpacingSchema.shape.chi, cap),
@@ -326,7 +447,9 @@ export function planSweep(
  */
 export const sweepSize = (parameters: readonly SweepParameter[]) =>
   parameters.reduce((n, p) => {
-    if (p.list) return n * Math.max(p.list.length, 1);
+    const named = 'products' in p ? p.products : 'entries' in p ? p.entries : undefined;
+    if (named) return n * Math.max(named.length, 1);
+    if ('list' in p && p.list) return n * Math.max(p.list.length, 1);
     const r = 'range' in p ? p.range : undefined;
     return r && r.step > 0 && r.stop >= r.start ? n * rangeCount(r.start, r.stop, r.step) : n;
   }, 1);

@@ -1,6 +1,7 @@
 import { demoAssembly } from '@shared/checks/fixtures';
+import { clipEntryOf, productOf } from '@shared/sweep/library';
 import { describe, expect, it } from 'vitest';
-import { newDraft, type ParameterDraft, problemBox, targetsFor, validateSweep } from './draft';
+import { clipOptions, newDraft, type ParameterDraft, problemBox, targetsFor, validateSweep } from './draft';
 
 const a = demoAssembly();
 const thickness = (over: Partial<ParameterDraft> = {}): ParameterDraft => ({
@@ -92,5 +93,74 @@ describe('sweep form validation (before any work)', () => {
     expect(problemBox('parameters.1.range.step')).toEqual({ parameter: 1, box: 'step' });
     expect(problemBox('parameters.0.list.3')).toEqual({ parameter: 0, box: 'list' });
     expect(problemBox('parameters')).toEqual({ parameter: null, box: '' });
+  });
+});
+
+describe('library picks: insulation products and clip types', () => {
+  const material = (id: string, name: string, conductivity: number) => ({
+    id: `00000000-0000-4000-8000-00000000000${id}`,
+    name,
+    conductivity,
+    vapourResistanceFactor: 40,
+    source: 'Demo data sheet (invented)',
+    createdAt: '2026-12-05T00:00:00Z',
+  });
+  const materials = [material('1', 'Demo PIR board', 0.022), material('2', 'Demo wool slab', 0.034)];
+  const bridgeValue = {
+    id: '00000000-0000-4000-8000-000000000009',
+    name: 'Demo clip',
+    kind: 'point' as const,
+    value: 0.02,
+    sourceType: 'test_report' as const,
+    source: 'Demo test report',
+    notes: '',
+    createdAt: '2026-12-05T00:00:00Z',
+  };
+  const library = { firmName: 'Demo firm', materials, bridgeValues: [bridgeValue] };
+  const products = (over: Partial<ParameterDraft> = {}): ParameterDraft => ({
+    ...newDraft(a, 'insulationProduct'),
+    products: materials.map(productOf),
+    ...over,
+  });
+
+  it('products picked from the library become the engine’s parameter on the chosen layer', () => {
+    expect(targetsFor(a, 'insulationProduct').map((t) => t.index)).toEqual([0, 3, 4, 5, 6, 7]);
+    const v = validateSweep(a, [products({ target: 3 })], 'SI', 100, library);
+    expect(v.ok && v.parameters[0]).toEqual({
+      kind: 'insulationProduct',
+      layer: 3,
+      products: materials.map(productOf),
+    });
+    expect(v.ok && v.plan.axes[0]!.values).toEqual(['Demo PIR board', 'Demo wool slab']);
+  });
+
+  it('none chosen, or one deleted from the library since, is refused at its field before any work', () => {
+    const none = validateSweep(a, [products({ target: 3, products: [] })], 'SI', 100, library);
+    expect(!none.ok && none.problems).toEqual([
+      { field: 'parameters.0.products', reason: expect.stringMatching(/choose one product/) },
+    ]);
+    const deleted = validateSweep(a, [products({ target: 3 })], 'SI', 100, {
+      ...library,
+      materials: materials.slice(0, 1),
+    });
+    expect(!deleted.ok && deleted.problems).toEqual([
+      {
+        field: 'parameters.0.products.1.libraryEntryId',
+        reason: expect.stringMatching(/“Demo wool slab” is no longer in the firm library/),
+      },
+    ]);
+    expect(problemBox('parameters.0.products.1.libraryEntryId')).toEqual({ parameter: 0, box: 'products' });
+  });
+
+  it('clip types: the library’s χ values and the solved clips; a deleted entry is refused at its field', () => {
+    const entries = clipOptions(a, [bridgeValue]);
+    expect(entries).toEqual([clipEntryOf(bridgeValue)]); // the demo wall has no solved clip
+    const clip = { ...newDraft(a, 'clipChi'), mode: 'entries' as const, entries };
+    const v = validateSweep(a, [clip], 'SI', 100, library);
+    expect(v.ok && v.parameters[0]).toEqual({ kind: 'clipChi', bridge: 0, entries });
+    const gone = validateSweep(a, [clip], 'SI', 100, { ...library, bridgeValues: [] });
+    expect(!gone.ok && gone.problems[0]!.field).toBe('parameters.0.entries.0.source.libraryEntryId');
+    const empty = validateSweep(a, [{ ...clip, entries: [] }], 'SI', 100, library);
+    expect(!empty.ok && empty.problems[0]!.field).toBe('parameters.0.entries');
   });
 });

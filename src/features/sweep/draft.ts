@@ -1,7 +1,8 @@
 import { CalcInputError } from '@shared/calc/errors';
 import type { MovementClass } from '@shared/calc/joints/schema';
-import type { AssemblyInput } from '@shared/schemas/assembly';
-import type { SweepParameter, SweepParameterKind } from '@shared/sweep/schema';
+import type { AssemblyInput, BridgeValue, OrgMaterial } from '@shared/schemas/assembly';
+import { clipEntryOf } from '@shared/sweep/library';
+import type { SweepClipEntry, SweepParameter, SweepParameterKind, SweepProduct } from '@shared/sweep/schema';
 import { planSweep, type SweepPlan } from '@shared/sweep/sweep';
 import type { UnitSystem } from '@shared/units';
 import type { InputMeasure } from '../../lib/input-measure';
@@ -21,7 +22,8 @@ export interface ParameterDraft {
   kind: SweepParameterKind;
   /** The layer, bridge or joint it varies (its index); null for "every joint" or a parameter of the whole wall. */
   target: number | null;
-  mode: 'range' | 'list';
+  /** `entries`: clip types from the firm library or the solved bridges (clipChi). */
+  mode: 'range' | 'list' | 'entries';
   /** Range, SI (undefined while its box is empty or unreadable). */
   start?: number;
   stop?: number;
@@ -30,7 +32,19 @@ export interface ParameterDraft {
   list: string;
   /** Sealant classes chosen. */
   classes: MovementClass[];
+  /** Insulation products chosen from the firm library (copied: a deleted entry stays here, and is refused). */
+  products: SweepProduct[];
+  /** Clip types chosen: firm library χ values and the assembly's solved bridges. */
+  entries: SweepClipEntry[];
 }
+
+/** The firm library the form offers (undefined while it loads, or with no firm). */
+export interface SweepLibrary {
+  firmName: string | null;
+  materials?: OrgMaterial[];
+  bridgeValues?: BridgeValue[];
+}
+export const NO_LIBRARY: SweepLibrary = { firmName: null };
 
 export interface FieldProblem {
   /** The engine's path: `parameters.0.range.step`, `parameters.1.list.2`, `parameters`. */
@@ -40,6 +54,7 @@ export interface FieldProblem {
 
 export const KIND_LABELS: Record<SweepParameterKind, string> = {
   insulationThickness: 'Insulation thickness',
+  insulationProduct: 'Insulation product',
   girtSpacing: 'Girt spacing',
   clipSpacing: 'Clip spacing along the girt',
   clipChi: 'Clip χ (clip type)',
@@ -62,6 +77,7 @@ export function targetsFor(a: AssemblyInput, kind: SweepParameterKind): TargetOp
   const layers = a.thermal.layers.map((l, index) => ({ l, index }));
   switch (kind) {
     case 'insulationThickness':
+    case 'insulationProduct':
       return layers
         .filter(({ l }) => l.kind === 'homogeneous' || l.kind === 'framed')
         .map(({ l, index }) => ({ index, label: `Layer ${index + 1}: ${l.name}` }));
@@ -108,8 +124,23 @@ export function currentValue(a: AssemblyInput, kind: SweepParameterKind, target:
     case 'panelModule':
       return a.windPanel?.panelModuleWidth;
     case 'sealantClass':
+    case 'insulationProduct':
       return undefined;
   }
+}
+
+/**
+ * The clip types a sweep can take for a clip: the firm's χ values, then the assembly's solved point bridges not
+ * among them (the assembly's own copy: its source without the library entry, which may have been deleted since).
+ */
+export function clipOptions(a: AssemblyInput, values: readonly BridgeValue[] = []): SweepClipEntry[] {
+  const offered = values.filter((b) => b.kind === 'point');
+  const solved = a.thermal.bridges.flatMap((b) =>
+    b.kind === 'point' && b.source?.computed && !offered.some((v) => v.id === b.source?.libraryEntryId)
+      ? [{ name: b.name, chi: b.chi, source: { text: b.source.text, computed: b.source.computed } }]
+      : [],
+  );
+  return [...offered.map(clipEntryOf), ...solved];
 }
 
 /** Rounds a starting value to 3 significant figures (a starting range reads 50, 100, 150 mm, not 49.999…). */
@@ -122,7 +153,15 @@ export function newDraft(
   target = targetsFor(a, kind)[0]?.index ?? null,
 ): ParameterDraft {
   const now = currentValue(a, kind, target);
-  const base: ParameterDraft = { kind, target, mode: 'range', list: '', classes: [] };
+  const base: ParameterDraft = {
+    kind,
+    target,
+    mode: 'range',
+    list: '',
+    classes: [],
+    products: [],
+    entries: [],
+  };
   if (kind === 'sealantClass') return { ...base, mode: 'list', classes: ['25', '35', '50'] };
   if (now === undefined || now <= 0) return base;
   return { ...base, start: round3(now / 2), stop: round3(now * 1.5), step: round3(now / 4) };
@@ -145,6 +184,11 @@ export function toParameter(
       parameter: { kind: d.kind, list: d.classes, ...(d.target === null ? {} : { joint: d.target }) },
     };
   }
+  if (d.kind === 'insulationProduct') {
+    if (d.target === null) return problem('.layer', 'choose a layer');
+    if (d.products.length === 0) return problem('.products', 'choose one product or more from the library');
+    return { parameter: { kind: d.kind, layer: d.target, products: d.products } };
+  }
   const needs =
     d.kind === 'insulationThickness' || d.kind === 'studSpacing'
       ? 'layer'
@@ -158,6 +202,11 @@ export function toParameter(
     for (const key of ['start', 'stop', 'step'] as const)
       if (d[key] === undefined || !Number.isFinite(d[key])) return problem(`.range.${key}`, 'enter a number');
     return as({ range: { start: d.start, stop: d.stop, step: d.step } });
+  }
+  if (d.mode === 'entries') {
+    if (d.entries.length === 0)
+      return problem('.entries', 'choose one clip type or more from the library or the solved bridges');
+    return as({ entries: d.entries });
   }
   const measure = measureOf(d.kind);
   const entries = listEntries(d.list);
@@ -179,15 +228,43 @@ export type Validated =
   | { ok: true; parameters: SweepParameter[]; plan: SweepPlan }
   | { ok: false; problems: FieldProblem[] };
 
+/** Products and clip types taken from the firm library that it no longer has (deleted since), at their fields. */
+export function deletedPicks(drafts: readonly ParameterDraft[], library: SweepLibrary): FieldProblem[] {
+  const gone = (what: string, name: string) =>
+    `“${name}” is no longer in the firm library (deleted): remove it, or pick ${what}`;
+  return drafts.flatMap((d, i) => {
+    const at = `parameters.${i}`;
+    if (d.kind === 'insulationProduct' && library.materials) {
+      const ids = new Set(library.materials.map((m) => m.id));
+      return d.products.flatMap((p, j) =>
+        p.libraryEntryId && !ids.has(p.libraryEntryId)
+          ? [{ field: `${at}.products.${j}.libraryEntryId`, reason: gone('another product', p.name) }]
+          : [],
+      );
+    }
+    if (d.kind === 'clipChi' && d.mode === 'entries' && library.bridgeValues) {
+      const ids = new Set(library.bridgeValues.map((b) => b.id));
+      return d.entries.flatMap((e, j) => {
+        const id = e.source?.libraryEntryId;
+        return id && !ids.has(id)
+          ? [{ field: `${at}.entries.${j}.source.libraryEntryId`, reason: gone('another clip', e.name) }]
+          : [];
+      });
+    }
+    return [];
+  });
+}
+
 /**
- * Every draft read and the sweep planned against the assembly: the form's own problems (all of them), else the
- * engine's first refusal, named by its field — before a worker starts.
+ * Every draft read and the sweep planned against the assembly: the form's own problems (all of them, and a
+ * library pick deleted since), else the engine's first refusal, named by its field — before a worker starts.
  */
 export function validateSweep(
   a: AssemblyInput,
   drafts: readonly ParameterDraft[],
   system: UnitSystem,
   cap = SWEEP_BROWSER_CAP,
+  library: SweepLibrary = NO_LIBRARY,
 ): Validated {
   if (drafts.length === 0)
     return {
@@ -195,7 +272,10 @@ export function validateSweep(
       problems: [{ field: 'parameters', reason: 'choose at least one parameter to vary' }],
     };
   const read = drafts.map((d, i) => toParameter(d, i, system));
-  const problems = read.flatMap((r) => ('problem' in r ? [r.problem] : []));
+  const problems = [
+    ...read.flatMap((r) => ('problem' in r ? [r.problem] : [])),
+    ...deletedPicks(drafts, library),
+  ];
   if (problems.length > 0) return { ok: false, problems };
   const parameters = read.flatMap((r) => ('parameter' in r ? [r.parameter] : []));
   try {
@@ -208,7 +288,10 @@ export function validateSweep(
 
 /** The draft index and the box a problem's field names: `parameters.1.range.step` → 1, 'step'. */
 export function problemBox(field: string): { parameter: number | null; box: string } {
-  const m = /^parameters\.(\d+)(?:\.(range\.(start|stop|step)|list|layer|bridge|joint))?/.exec(field);
+  const m =
+    /^parameters\.(\d+)(?:\.(range\.(start|stop|step)|list|layer|bridge|joint|products|entries))?/.exec(
+      field,
+    );
   if (!m) return { parameter: null, box: '' };
   return { parameter: Number(m[1]), box: m[3] ?? (m[2] === undefined ? '' : m[2]) };
 }

@@ -15,13 +15,15 @@ type Value = number | string;
 const measureOfKind = (kind: SweepParameterKind): Measure =>
   kind === 'insulationThickness' ? 'thickness' : kind === 'clipChi' ? 'chi' : 'spacing';
 
-/** A parameter's value as it reads: "75 mm", "3 in", "±25 %" (a sealant class). */
+/** A parameter's value as it reads: "75 mm", "3 in", "±25 %" (a sealant class), a product's or clip's name. */
 export const valueText = (kind: SweepParameterKind, v: Value, system: UnitSystem) =>
-  kind === 'sealantClass'
-    ? v === '100/50'
-      ? '+100/−50 %'
-      : `±${v} %`
-    : formatMeasure(v as number, measureOfKind(kind), system);
+  typeof v === 'number'
+    ? formatMeasure(v, measureOfKind(kind), system)
+    : kind !== 'sealantClass'
+      ? v
+      : v === '100/50'
+        ? '+100/−50 %'
+        : `±${v} %`;
 
 /** A numeric value in the person's units (a chart's axis), and that unit. */
 export const shownValue = (kind: SweepParameterKind, v: number, system: UnitSystem) =>

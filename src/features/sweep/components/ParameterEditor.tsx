@@ -1,25 +1,32 @@
 import { MOVEMENT_CLASSES } from '@shared/calc/joints/schema';
 import type { AssemblyInput } from '@shared/schemas/assembly';
-import type { SweepParameterKind } from '@shared/sweep/schema';
+import { productOf } from '@shared/sweep/library';
+import type { SweepClipEntry, SweepParameterKind } from '@shared/sweep/schema';
 import type { UnitSystem } from '@shared/units';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
+import { formatMeasure } from '../../assemblies/units';
 import {
+  clipOptions,
   type FieldProblem,
   KIND_LABELS,
   measureOf,
+  NO_LIBRARY,
   type ParameterDraft,
   problemBox,
+  type SweepLibrary,
   targetsFor,
 } from '../draft';
 import { valueText } from '../present';
+import { LibraryPicks, type Pick } from './LibraryPicks';
 
 const KINDS = Object.keys(KIND_LABELS) as SweepParameterKind[];
 const TARGET_WORDS: Record<SweepParameterKind, string> = {
   insulationThickness: 'Layer',
+  insulationProduct: 'Layer',
   studSpacing: 'Layer',
   clipChi: 'Bridge',
   sealantClass: 'Joint',
@@ -32,6 +39,34 @@ const TARGET_WORDS: Record<SweepParameterKind, string> = {
 const words = (p: FieldProblem | undefined) =>
   p ? p.reason.charAt(0).toUpperCase() + p.reason.slice(1) : undefined;
 
+const MODE_WORDS = { range: 'A range', list: 'A list of values', entries: 'Library or solved values' };
+
+/** The firm's materials as picks, and the chosen ones it no longer has. */
+function productPicks(draft: ParameterDraft, library: SweepLibrary, system: UnitSystem): Pick[] {
+  const offered = (library.materials ?? []).map(productOf);
+  const chosen = new Set(draft.products.map((p) => p.libraryEntryId));
+  const gone = draft.products.filter((p) => !offered.some((o) => o.libraryEntryId === p.libraryEntryId));
+  return [...offered, ...gone].map((p) => ({
+    key: p.libraryEntryId ?? p.name,
+    label: p.name,
+    detail: `λ ${formatMeasure(p.conductivity, 'conductivity', system)} · μ ${p.vapourResistanceFactor ?? 'not given (moisture not evaluated)'} · ${p.source}`,
+    checked: chosen.has(p.libraryEntryId),
+    gone: library.materials !== undefined && gone.includes(p),
+  }));
+}
+
+/** The clip types offered as picks, and the chosen ones no longer offered. */
+function clipPicks(draft: ParameterDraft, offered: SweepClipEntry[], system: UnitSystem): Pick[] {
+  const gone = draft.entries.filter((e) => !offered.some((o) => o.name === e.name));
+  return [...offered, ...gone].map((e) => ({
+    key: e.name,
+    label: e.name,
+    detail: `χ ${formatMeasure(e.chi, 'chi', system)} · ${e.source?.computed ? 'solved here' : e.source?.libraryEntryId ? 'firm library' : 'typed'}${e.source ? ` · ${e.source.text}` : ''}`,
+    checked: draft.entries.some((x) => x.name === e.name),
+    gone: gone.includes(e),
+  }));
+}
+
 /**
  * One parameter of the sweep: what it varies (a kind the assembly has, and which layer, bridge or joint), and its
  * values as a range (start, stop, step in the person's units) or a list; the problems of its boxes under them.
@@ -42,6 +77,7 @@ export function ParameterEditor({
   assembly,
   system,
   problems,
+  library = NO_LIBRARY,
   onChange,
   onKind,
   onRemove,
@@ -51,6 +87,7 @@ export function ParameterEditor({
   assembly: AssemblyInput;
   system: UnitSystem;
   problems: FieldProblem[];
+  library?: SweepLibrary;
   onChange: (d: ParameterDraft) => void;
   onKind: (kind: SweepParameterKind) => void;
   onRemove?: () => void;
@@ -59,6 +96,7 @@ export function ParameterEditor({
   const whole = problems.find((p) => problemBox(p.field).box === '');
   const targets = targetsFor(assembly, draft.kind);
   const measure = measureOf(draft.kind);
+  const offered = draft.kind === 'clipChi' ? clipOptions(assembly, library.bridgeValues) : [];
   const targetProblem = at('layer') ?? at('bridge') ?? at('joint');
   return (
     <fieldset className="flex flex-col gap-3 border-t border-rule pt-3">
@@ -99,7 +137,20 @@ export function ParameterEditor({
           </Field>
         ) : null}
       </div>
-      {draft.kind === 'sealantClass' ? (
+      {draft.kind === 'insulationProduct' ? (
+        <LibraryPicks
+          legend={`Products from ${library.firmName ?? 'the firm'}'s library`}
+          empty="No materials in the firm library yet — add them on the Library page."
+          picks={productPicks(draft, library, system)}
+          error={words(at('products'))}
+          onToggle={(key, checked) => {
+            const all = [...(library.materials ?? []).map(productOf), ...draft.products];
+            const p = all.find((x) => (x.libraryEntryId ?? x.name) === key);
+            const rest = draft.products.filter((x) => (x.libraryEntryId ?? x.name) !== key);
+            onChange({ ...draft, products: checked && p ? [...rest, p] : rest });
+          }}
+        />
+      ) : draft.kind === 'sealantClass' ? (
         <fieldset className="flex flex-col gap-1">
           <legend className="text-sm font-semibold">Movement classes (ASTM C920)</legend>
           <div className="flex flex-wrap gap-x-4 gap-y-1">
@@ -127,7 +178,10 @@ export function ParameterEditor({
         <>
           <fieldset className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
             <legend className="sr-only">Values of parameter {n}</legend>
-            {(['range', 'list'] as const).map((mode) => (
+            {(draft.kind === 'clipChi'
+              ? (['range', 'list', 'entries'] as const)
+              : (['range', 'list'] as const)
+            ).map((mode) => (
               <label key={mode} className="flex items-center gap-1">
                 <input
                   type="radio"
@@ -135,11 +189,23 @@ export function ParameterEditor({
                   checked={draft.mode === mode}
                   onChange={() => onChange({ ...draft, mode })}
                 />
-                {mode === 'range' ? 'A range' : 'A list of values'}
+                {MODE_WORDS[mode]}
               </label>
             ))}
           </fieldset>
-          {draft.mode === 'range' ? (
+          {draft.mode === 'entries' ? (
+            <LibraryPicks
+              legend={`Clip types: ${library.firmName ?? 'the firm'}'s χ values and this assembly's solved clips`}
+              empty="No clip χ in the firm library and no solved clip on this assembly — type the values instead."
+              picks={clipPicks(draft, offered, system)}
+              error={words(at('entries'))}
+              onToggle={(key, checked) => {
+                const e = offered.find((x) => x.name === key);
+                const rest = draft.entries.filter((x) => x.name !== key);
+                onChange({ ...draft, entries: checked && e ? [...rest, e] : rest });
+              }}
+            />
+          ) : draft.mode === 'range' ? (
             <div className="grid grid-cols-3 gap-2">
               {(['start', 'stop', 'step'] as const).map((key) => (
                 <QuantityInput

@@ -10,9 +10,8 @@ import { formatVerificationCode } from '@shared/sheets/verification';
 import type { UnitSystem } from '@shared/units/registry';
 import { QUANTITIES } from '@shared/units/registry';
 import { cautionList } from './closing';
-import { newA4Document } from './fonts';
 import { type Formatter, formatter, sheetDate, sheetDateTime } from './format';
-import { type Glyph, INK, pageFooters, runningHead, SheetWriter } from './layout';
+import { type Glyph, INK, newSheetWriter, pageFooters, type SheetWriter } from './layout';
 import { PRODUCT } from './title-block';
 
 /*
@@ -251,15 +250,12 @@ function footers(w: SheetWriter, d: FieldReportData): void {
 
 /** Renders the field report; returns the PDF bytes. */
 export function renderFieldReport(d: FieldReportData): Buffer {
-  const doc = newA4Document();
-  const fmt = formatter(d.units);
-  const w = new SheetWriter(
-    doc,
-    runningHead(
-      `${PRODUCT} · Field inspection report`,
-      `Inspection ${d.inspection.number}, ${d.inspection.scope.elevation}`,
-    ),
+  const w = newSheetWriter(
+    `${PRODUCT} · Field inspection report`,
+    `Inspection ${d.inspection.number}, ${d.inspection.scope.elevation}`,
   );
+  const { doc } = w;
+  const fmt = formatter(d.units);
   titleBlock(w, d);
   w.heading('1', 'Checklist', 30);
   for (const item of d.inspection.items)

@@ -1,6 +1,6 @@
 import { POINT_MM } from '@shared/units';
 import type { jsPDF } from 'jspdf';
-import { type FontKind, runsOf, setFace } from './fonts';
+import { type FontKind, newA4Document, runsOf, setFace } from './fonts';
 
 /*
  * A small flow layout over jsPDF for the sheet: A4 portrait in millimetres, a cursor that moves down the
@@ -327,3 +327,7 @@ export const runningHead =
     w.text(of, w.right, PAGE.top - 6, { size: 7, color: INK.muted, align: 'right' });
     w.hline(PAGE.top - 4.5, 0.1, INK.rule);
   };
+
+/** A writer on a new A4 document whose every page has the running head `what` (left) and `of` (right). */
+export const newSheetWriter = (what: string, of: string) =>
+  new SheetWriter(newA4Document(), runningHead(what, of));

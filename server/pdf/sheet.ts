@@ -2,10 +2,9 @@ import type { jsPDF } from 'jspdf';
 import { drawComputedBridges } from './bridges';
 import { drawCheckList } from './checks';
 import { drawCautions, drawStampAndVerification } from './closing';
-import { newA4Document } from './fonts';
 import { formatter, sheetDate, VERDICT_WORDS } from './format';
 import { drawLayers, drawSite } from './inputs';
-import { pageFooters, runningHead, SheetWriter } from './layout';
+import { newSheetWriter, pageFooters, type SheetWriter } from './layout';
 import { drawResults } from './results';
 import { drawSectionSketch } from './section-sketch';
 import type { SheetData } from './sheet-data';
@@ -57,15 +56,12 @@ function metadata(doc: jsPDF, data: SheetData): void {
 
 /** Renders the sheet; returns the PDF bytes. */
 export function renderComplianceSheet(data: SheetData): Buffer {
-  const doc = newA4Document();
-  const fmt = formatter(data.units);
-  const w = new SheetWriter(
-    doc,
-    runningHead(
-      `${PRODUCT} · Compliance sheet`,
-      `${data.run.assemblyName}, revision ${data.run.assemblyRevision}`,
-    ),
+  const w = newSheetWriter(
+    `${PRODUCT} · Compliance sheet`,
+    `${data.run.assemblyName}, revision ${data.run.assemblyRevision}`,
   );
+  const { doc } = w;
+  const fmt = formatter(data.units);
 
   drawTitleBlock(w, data, fmt);
   w.heading('1', 'Inputs', 40);

@@ -16,7 +16,7 @@ import type { StorageConfig } from '../config';
 import type { Db } from '../db/client';
 import { orgAttachmentProducts, organisations, orgBridgeValues, orgMaterials } from '../db/schema';
 import type { ReceiveFiles } from '../storage/files';
-import { fileIntake, type StoredUpload, skipFile } from '../storage/files';
+import { fileIntake, type StoredUpload, skipFile, storedDownload } from '../storage/files';
 import type { ObjectStore } from '../storage/object-store';
 import { DomainError, notFound } from './errors';
 
@@ -252,13 +252,11 @@ export function createLibraryService(
     async dataSheet(organisationId: string, id: string) {
       const r = await productRow(organisationId, id);
       if (!r.dataSheetKey) throw notFound('data sheet');
-      const object = await storage.get(r.dataSheetKey);
-      return {
-        body: object.body,
+      return storedDownload(storage, r.dataSheetKey, {
         name: r.dataSheetName ?? 'data sheet',
-        contentType: r.dataSheetType ?? 'application/octet-stream',
-        size: r.dataSheetSize ?? object.size,
-      };
+        contentType: r.dataSheetType,
+        size: r.dataSheetSize,
+      });
     },
     /** Removes an entry and its data sheet. Assemblies keep the values and source they copied from it. */
     async removeAttachmentProduct(organisationId: string, id: string): Promise<void> {

@@ -204,3 +204,21 @@ export async function skipFile({ stream }: IncomingFile): Promise<null> {
   await finished(stream.resume());
   return null;
 }
+
+/**
+ * A stored object to stream back as a download, under what was recorded of it: its name, its type (unknown:
+ * `application/octet-stream`) and its size (unknown: the size the store reports).
+ */
+export async function storedDownload(
+  storage: ObjectStore,
+  key: string,
+  recorded: { name: string; contentType: string | null; size: number | null },
+) {
+  const object = await storage.get(key);
+  return {
+    body: object.body,
+    name: recorded.name,
+    contentType: recorded.contentType ?? 'application/octet-stream',
+    size: recorded.size ?? object.size,
+  };
+}

@@ -3,7 +3,7 @@ import { eq } from 'drizzle-orm';
 import type { Config } from '../../config';
 import type { Db } from '../../db/client';
 import { inspectionPhotos } from '../../db/schema';
-import { IMAGE_TYPES, type ReceiveFiles, type StoredUpload } from '../../storage/files';
+import { IMAGE_TYPES, type ReceiveFiles, type StoredUpload, storedDownload } from '../../storage/files';
 import type { ObjectStore } from '../../storage/object-store';
 import { recordAudit } from '../audit';
 import { notFound } from '../errors';
@@ -76,8 +76,11 @@ export function createInspectionPhotos(db: Db, config: Config, storage: ObjectSt
     async file(photoId: string) {
       const [p] = await db.select().from(inspectionPhotos).where(eq(inspectionPhotos.id, photoId));
       if (!p) throw notFound('photo');
-      const object = await storage.get(p.storageKey);
-      return { body: object.body, name: p.fileName, contentType: p.contentType, size: p.size };
+      return storedDownload(storage, p.storageKey, {
+        name: p.fileName,
+        contentType: p.contentType,
+        size: p.size,
+      });
     },
   };
 }

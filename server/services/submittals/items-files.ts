@@ -5,7 +5,7 @@ import { and, count, eq, max, sql } from 'drizzle-orm';
 import type { Config } from '../../config';
 import type { Db } from '../../db/client';
 import { checkRuns, submittalItems, submittals } from '../../db/schema';
-import type { ReceiveFiles, StoredUpload } from '../../storage/files';
+import { type ReceiveFiles, type StoredUpload, storedDownload } from '../../storage/files';
 import type { ObjectStore } from '../../storage/object-store';
 import { type AuditRecord, recordAudit } from '../audit';
 import { conflict, DomainError, notFound } from '../errors';
@@ -277,13 +277,11 @@ export function createSubmittalItemSteps(
           'not_found',
           'this item is a compliance sheet: download it from its run',
         );
-      const object = await storage.get(item.storageKey);
-      return {
-        body: object.body,
+      return storedDownload(storage, item.storageKey, {
         name: item.fileName ?? 'file',
-        contentType: item.contentType ?? 'application/octet-stream',
-        size: item.size ?? object.size,
-      };
+        contentType: item.contentType,
+        size: item.size,
+      });
     },
   };
 }

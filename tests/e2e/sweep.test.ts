@@ -3,6 +3,7 @@ import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { ARTIFACTS, browserSuite, openDemoAssembly, screenshot, signIn } from '../setup/browser';
+import { readPdf } from '../setup/pdf';
 
 /** Fills a range (From, To, Step, in the boxes' units) of one parameter of the sweep form. */
 async function range(page: Page, n: number, from: string, to: string, step: string) {
@@ -97,6 +98,85 @@ describe('sweep in the browser', () => {
     await screenshot(page, 'sweep-390');
     await page.setViewportSize({ width: 1280, height: 1000 });
 
+    // The architect (a firm editor) keeps the insulation price in the firm library: the box then says where it
+    // came from, and the library has the entry in SI.
+    const costs = page.getByRole('region', { name: /^\d+\s*Results$/ });
+    await costs.getByRole('button', { name: /^Save to the firm library… — Insulation/ }).click();
+    const toLibrary = page.getByRole('form', {
+      name: /^Save insulation, per m² of wall per 25 mm to the library/,
+    });
+    await toLibrary.getByRole('textbox', { name: 'Product name' }).fill('Mineral wool board (test)');
+    await toLibrary.getByRole('textbox', { name: /^Currency/ }).fill('EUR');
+    await toLibrary.getByRole('button', { name: 'Save to the library' }).click();
+    await costs
+      .getByText('From the library: Mineral wool board (test) (EUR; Typed on the sweep page)')
+      .waitFor();
+    const project = await (await page.request.get(api(`/projects/${current.projectId}`))).json();
+    const library = await (
+      await page.request.get(api(`/organisations/${project.organisationId}/sweep-costs`))
+    ).json();
+    expect(library.costs).toEqual([
+      expect.objectContaining({
+        kind: 'insulation',
+        name: 'Mineral wool board (test)',
+        cost: 4.5,
+        currency: 'EUR',
+      }),
+    ]);
+    expect(await cheapest.textContent()).toContain('17.67 EUR per m² of wall');
+
+    // Saved: the server runs the same 15 variants on this revision and lists the sweep with who, revision and
+    // code table version; reopened, its parameters and costs come back and it runs again here.
+    const shelf = page.getByRole('region', { name: /^\d+\s*Saved sweeps$/ });
+    await shelf.getByRole('textbox', { name: 'Name of the saved sweep' }).fill('Wool × clips (test)');
+    await shelf.getByRole('button', { name: 'Save the sweep' }).click();
+    await shelf
+      .getByText(/Saved “Wool × clips \(test\)”: 15 variants, \d+ pass · cheapest 17\.67 per m² of wall\./)
+      .waitFor();
+    const listed = shelf.getByTestId('saved-sweeps').getByRole('listitem').first();
+    expect(await listed.textContent()).toMatch(
+      /^Wool × clips \(test\).* by Marguerite Oyelaran · revision \d+ · “.*” version \d+ · 15 variants/,
+    );
+    expect(await listed.textContent()).not.toContain('Stale');
+    await range(page, 1, '60', '80', '10');
+    await listed.getByRole('button', { name: /^Reopen/ }).click();
+    await page.getByTestId('reopened-sweep').waitFor();
+    await page.getByTestId('sweep-finished').waitFor({ timeout: 30_000 });
+    expect(await page.getByTestId('sweep-finished').textContent()).toMatch(/^15 variants checked/);
+    expect(await first.getByRole('textbox', { name: /^From\b/ }).inputValue()).toBe('50');
+    await cheapest.getByText('Variant 6: 75 mm · 1200 mm').waitFor();
+
+    // Printed as the appendix of a compliance sheet: none without a check run (the checks page is linked); with
+    // one, the sheet's PDF carries the sweep's heading.
+    await shelf.getByText('This assembly has no check run yet').waitFor();
+    expect(await shelf.getByRole('link', { name: /Run its checks/ }).getAttribute('href')).toMatch(
+      /\/checks$/,
+    );
+    const table = (await (await page.request.get(api(`/projects/${current.projectId}/criteria-sets`))).json())
+      .criteriaSets[0];
+    const run = await page.request.post(api(`/assemblies/${assemblyId}/check-runs`), {
+      data: { criteriaSetId: table.id },
+    });
+    expect(run.status()).toBe(201);
+    await page.reload();
+    const pdfLink = page.getByTestId('sweep-appendix-pdf');
+    expect(await pdfLink.textContent()).toBe(
+      'Download the compliance sheet with “Wool × clips (test)” (PDF)',
+    );
+    const pdf = await page.request.get(`${suite.baseUrl}${await pdfLink.getAttribute('href')}`);
+    expect(pdf.headers()['content-type']).toBe('application/pdf');
+    const body = await pdf.body();
+    expect(body.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    expect((await readPdf(body)).text).toContain('Appendix: sweep “Wool × clips (test)”');
+    await screenshot(page, 'sweep-saved-1280');
+    await page.setViewportSize({ width: 390, height: 900 });
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await screenshot(page, 'sweep-saved-390');
+    await page.setViewportSize({ width: 1280, height: 1000 });
+
+    // The page was reloaded: reopen the saved sweep to choose from it.
+    await listed.getByRole('button', { name: /^Reopen/ }).click();
+    await page.getByTestId('sweep-finished').waitFor({ timeout: 30_000 });
     await cheapest.getByRole('button', { name: /^Choose the cheapest/ }).click();
     const make = page.getByRole('region', { name: /Make this an assembly/ });
     await make
@@ -140,5 +220,6 @@ describe('sweep in the browser', () => {
     console.log(figure);
     writeFileSync(path.join(ARTIFACTS, 'sweep-browser-10000.txt'), `${figure}\n`);
     expect(problems).toEqual([]);
-  });
+    // Saving, reopening and printing add a server sweep, a check run and a sheet to the 10 000 variants.
+  }, 240_000);
 });

@@ -1,37 +1,26 @@
 import { can } from '@shared/auth/permissions';
-import { useParams, useSearchParams } from 'react-router';
-import { Button } from '../../components/ui/Button';
 import { AssembliesOverview } from '../../features/assemblies/components/AssembliesOverview';
-import { useProject } from '../../features/projects/api/get-project';
 import { ArchiveControl } from '../../features/projects/components/ArchiveControl';
 import { DuplicateProject } from '../../features/projects/components/DuplicateProject';
 import { ProjectEditor } from '../../features/projects/components/ProjectEditor';
 import { ProjectTitleBlock } from '../../features/projects/components/ProjectTitleBlock';
+import { EditableHeading, useEditableProject } from './editable-project';
 
 export function ProjectOverviewPage() {
-  const { projectId = '' } = useParams();
-  const [params, setParams] = useSearchParams();
-  const { data: project } = useProject(projectId);
-  if (!project) return null;
-
-  const archived = project.archivedAt !== null;
-  const mayEdit = can(project.myRole, 'project.update') && !archived;
-  const editing = mayEdit && params.get('edit') === '1';
-  const setEditing = (on: boolean) => setParams(on ? { edit: '1' } : {}, { replace: false });
+  const page = useEditableProject('project.update');
+  if (!page) return null;
+  const { project, archived, editing, setEditing } = page;
 
   return (
     <div className="flex flex-col gap-10">
       <section aria-labelledby="site-heading" className="flex flex-col gap-4">
-        <div className="flex flex-wrap items-end justify-between gap-3">
-          <h2 id="site-heading" className="text-2xl">
-            Site data
-          </h2>
-          {mayEdit && !editing ? (
-            <Button variant="secondary" onClick={() => setEditing(true)}>
-              Edit site data
-            </Button>
-          ) : null}
-        </div>
+        <EditableHeading
+          id="site-heading"
+          title="Site data"
+          editLabel="Edit site data"
+          page={page}
+          ruled={false}
+        />
         {editing ? (
           <div className="max-w-form">
             <ProjectEditor project={project} onDone={() => setEditing(false)} />

@@ -151,18 +151,11 @@ export const heatFlowSchema = z
   .enum(['horizontal', 'upward', 'downward'])
   .describe('Direction of heat flow (ISO 6946:2017 Table 7): horizontal within ±30°, upward, downward');
 
-const chi = z
-  .number()
-  .nonnegative()
-  .max(10)
-  .describe('Point thermal transmittance χ, W/K (0–10)')
-  .brand<'W/K'>();
-const psi = z
-  .number()
-  .nonnegative()
-  .max(10)
-  .describe('Linear thermal transmittance ψ, W/(m·K) (0–10)')
-  .brand<'ψ W/(m·K)'>();
+/** A bridge's thermal transmittance, 0–10 in its unit (χ and ψ keep their brands, D-028). */
+const transmittance = (what: string, unit: string) =>
+  z.number().nonnegative().max(10).describe(`${what}, ${unit} (0–10)`);
+const chi = transmittance('Point thermal transmittance χ', 'W/K').brand<'W/K'>();
+const psi = transmittance('Linear thermal transmittance ψ', 'W/(m·K)').brand<'ψ W/(m·K)'>();
 const countPerArea = z
   .number()
   .min(0.001, 'at least 0.001 per m² (one in 1000 m²) — fewer is a typing or unit slip')

@@ -59,8 +59,8 @@ export function createServices(
     criteria,
     checkRuns,
     sheets,
-    submittals: createSubmittalService(db, config, mailer, storage, sheets),
-    inspections: createInspectionService(db, config, mailer, storage, sheets),
+    submittals: createSubmittalService({ db, config, mailer, storage, sheets }),
+    inspections: createInspectionService({ db, config, mailer, storage, sheets }),
     storage,
   };
 }

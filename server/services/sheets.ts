@@ -20,7 +20,9 @@ import {
   sheetVerifications,
   user,
 } from '../db/schema';
+import type { Mailer } from '../mail/mailer';
 import { renderComplianceSheet } from '../pdf/sheet';
+import type { ObjectStore } from '../storage/object-store';
 import type { createCheckRunService } from './check-runs';
 import { DomainError, notFound } from './errors';
 import { firmHandle } from './organisations';
@@ -242,4 +244,13 @@ export function createSheetService(db: Db, config: Config, runs: ReturnType<type
       hash: r.v.hash,
     });
   }
+}
+
+/** What a workflow with files, e-mail and printed sheets is built from (submittals, field inspections). */
+export interface FileWorkflowDeps {
+  db: Db;
+  config: Config;
+  mailer: Mailer;
+  storage: ObjectStore;
+  sheets: ReturnType<typeof createSheetService>;
 }

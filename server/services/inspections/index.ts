@@ -1,8 +1,4 @@
-import type { Config } from '../../config';
-import type { Db } from '../../db/client';
-import type { Mailer } from '../../mail/mailer';
-import type { ObjectStore } from '../../storage/object-store';
-import type { createSheetService } from '../sheets';
+import type { FileWorkflowDeps } from '../sheets';
 import { createInspectionNotifications } from './notifications';
 import { createInspectionPhotos } from './photos';
 import { createInspectionQueries } from './queries';
@@ -17,13 +13,7 @@ import { createInspectionWorkflow } from './workflow';
  * By workflow: `queries` (reading, the project of each record), `workflow` (create, answer, close, deficiency
  * steps), `photos` (upload and download), `report` (the field report PDF), `templates` (the firm's checklist template), `notifications` (the e-mails).
  */
-export function createInspectionService(
-  db: Db,
-  config: Config,
-  mailer: Mailer,
-  storage: ObjectStore,
-  sheets: ReturnType<typeof createSheetService>,
-) {
+export function createInspectionService({ db, config, mailer, storage, sheets }: FileWorkflowDeps) {
   const q = createInspectionQueries(db);
   const notify = createInspectionNotifications(db, config, mailer);
   const photos = createInspectionPhotos(db, config, storage, q);

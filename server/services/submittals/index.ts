@@ -1,8 +1,4 @@
-import type { Config } from '../../config';
-import type { Db } from '../../db/client';
-import type { Mailer } from '../../mail/mailer';
-import type { ObjectStore } from '../../storage/object-store';
-import type { createSheetService } from '../sheets';
+import type { FileWorkflowDeps } from '../sheets';
 import { createSubmittalItemSteps } from './items-files';
 import { createSubmittalNotifications } from './notifications';
 import { createSubmittalQueries } from './queries';
@@ -17,13 +13,7 @@ import { createSubmittalWorkflow } from './workflow';
  * By workflow: `queries` (reading, and the guard of every write), `workflow` (create, edit, submit, review,
  * decide, comment), `items-files` (sheets and uploaded files), `notifications` (the e-mails).
  */
-export function createSubmittalService(
-  db: Db,
-  config: Config,
-  mailer: Mailer,
-  storage: ObjectStore,
-  sheets: ReturnType<typeof createSheetService>,
-) {
+export function createSubmittalService({ db, config, mailer, storage, sheets }: FileWorkflowDeps) {
   const q = createSubmittalQueries(db);
   const notify = createSubmittalNotifications(db, config, mailer);
   return {

@@ -47,6 +47,10 @@ export function currentOnConflict<S extends z.ZodType>(
   return parsed.success ? parsed.data : null;
 }
 
+/** An API address whose every interpolated value is encoded (one path segment): apiPath`/api/assemblies/${id}`. */
+export const apiPath = (parts: TemplateStringsArray, ...values: (string | number)[]) =>
+  parts.reduce((path, part, i) => path + encodeURIComponent(values[i - 1] ?? '') + part);
+
 type Method = 'GET' | 'POST' | 'PUT' | 'DELETE';
 
 interface RequestOptions {

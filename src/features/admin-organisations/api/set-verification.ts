@@ -1,5 +1,5 @@
 import { adminOrganisationSchema } from '@shared/schemas/organisations';
-import { apiRequest } from '../../../lib/api';
+import { apiPath, apiRequest } from '../../../lib/api';
 import { useApiMutation } from '../../../lib/api-cache';
 import { adminOrganisationKeys, meKeys, verificationKeys } from '../../../lib/query-keys';
 
@@ -7,14 +7,10 @@ import { adminOrganisationKeys, meKeys, verificationKeys } from '../../../lib/qu
 export const useSetVerification = () =>
   useApiMutation(
     ({ orgId, ...body }: { orgId: string; verified: boolean }) =>
-      apiRequest(
-        `/api/admin/organisations/${encodeURIComponent(orgId)}/verification`,
-        adminOrganisationSchema,
-        {
-          method: 'PUT',
-          body,
-        },
-      ),
+      apiRequest(apiPath`/api/admin/organisations/${orgId}/verification`, adminOrganisationSchema, {
+        method: 'PUT',
+        body,
+      }),
     // The firm's standing shows on verification pages and on its members' settings.
     { stale: () => [adminOrganisationKeys.all, verificationKeys.all, meKeys.all] },
   );

@@ -1,5 +1,5 @@
 import { type Assembly, type AssemblyInput, assemblySchema } from '@shared/schemas/assembly';
-import { apiRequest } from '../../../lib/api';
+import { apiPath, apiRequest } from '../../../lib/api';
 import { useApiMutation } from '../../../lib/api-cache';
 import { assemblyKeys, auditKeys } from '../../../lib/query-keys';
 
@@ -13,7 +13,7 @@ export const assemblySaved = {
 export const useCreateAssembly = () =>
   useApiMutation(
     ({ projectId, input }: { projectId: string; input: AssemblyInput }) =>
-      apiRequest(`/api/projects/${encodeURIComponent(projectId)}/assemblies`, assemblySchema, {
+      apiRequest(apiPath`/api/projects/${projectId}/assemblies`, assemblySchema, {
         method: 'POST',
         body: input,
       }),

@@ -1,5 +1,5 @@
 import { assemblySchema } from '@shared/schemas/assembly';
-import { apiRequest } from '../../../lib/api';
+import { apiPath, apiRequest } from '../../../lib/api';
 import { useApiMutation } from '../../../lib/api-cache';
 import { assemblySaved } from './create-assembly';
 
@@ -7,7 +7,7 @@ import { assemblySaved } from './create-assembly';
 export const useDuplicateAssembly = () =>
   useApiMutation(
     ({ assemblyId, ...body }: { assemblyId: string; projectId: string; name: string }) =>
-      apiRequest(`/api/assemblies/${encodeURIComponent(assemblyId)}/duplicate`, assemblySchema, {
+      apiRequest(apiPath`/api/assemblies/${assemblyId}/duplicate`, assemblySchema, {
         method: 'POST',
         body,
       }),

@@ -1,5 +1,6 @@
 import { assemblyRevisionSchema } from '@shared/schemas/assembly';
 import { useQuery } from '@tanstack/react-query';
+import { apiPath } from '../../../lib/api';
 import { getQuery } from '../../../lib/api-cache';
 import { assemblyKeys } from '../../../lib/query-keys';
 
@@ -7,7 +8,7 @@ import { assemblyKeys } from '../../../lib/query-keys';
 export const revisionQueryOptions = (assemblyId: string, revision: number) =>
   getQuery(
     assemblyKeys.revision(assemblyId, revision),
-    `/api/assemblies/${encodeURIComponent(assemblyId)}/revisions/${revision}`,
+    apiPath`/api/assemblies/${assemblyId}/revisions/${revision}`,
     assemblyRevisionSchema,
     // A saved revision is immutable.
     { staleTime: Number.POSITIVE_INFINITY },

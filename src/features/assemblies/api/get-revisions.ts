@@ -1,5 +1,6 @@
 import { revisionListSchema } from '@shared/schemas/assembly';
 import { useQuery } from '@tanstack/react-query';
+import { apiPath } from '../../../lib/api';
 import { getQuery } from '../../../lib/api-cache';
 import { assemblyKeys } from '../../../lib/query-keys';
 
@@ -7,7 +8,7 @@ import { assemblyKeys } from '../../../lib/query-keys';
 export const revisionsQueryOptions = (assemblyId: string) =>
   getQuery(
     assemblyKeys.revisions(assemblyId),
-    `/api/assemblies/${encodeURIComponent(assemblyId)}/revisions`,
+    apiPath`/api/assemblies/${assemblyId}/revisions`,
     revisionListSchema,
     {
       pick: (r) => r.revisions,

@@ -1,6 +1,6 @@
 import { type Assembly, type AssemblyInput, assemblySchema } from '@shared/schemas/assembly';
 import { useQueryClient } from '@tanstack/react-query';
-import { apiRequest, currentOnConflict, errorMessage } from '../../../lib/api';
+import { apiPath, apiRequest, currentOnConflict, errorMessage } from '../../../lib/api';
 import { useApiMutation } from '../../../lib/api-cache';
 import { assemblyKeys } from '../../../lib/query-keys';
 import type { RevisionApi } from '../../../lib/use-revision-editing';
@@ -18,7 +18,7 @@ export const conflictingAssembly = (error: unknown): Assembly | null =>
 export const useUpdateAssembly = () =>
   useApiMutation(
     ({ assemblyId, ...body }: { assemblyId: string; version: number; note: string; input: AssemblyInput }) =>
-      apiRequest(`/api/assemblies/${encodeURIComponent(assemblyId)}`, assemblySchema, {
+      apiRequest(apiPath`/api/assemblies/${assemblyId}`, assemblySchema, {
         method: 'PUT',
         body,
       }),

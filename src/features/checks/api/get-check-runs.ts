@@ -1,5 +1,6 @@
 import { checkRunListSchema } from '@shared/schemas/check-runs';
 import { useQuery } from '@tanstack/react-query';
+import { apiPath } from '../../../lib/api';
 import { getQuery } from '../../../lib/api-cache';
 import { checkRunKeys } from '../../../lib/query-keys';
 
@@ -7,7 +8,7 @@ import { checkRunKeys } from '../../../lib/query-keys';
 export const checkRunsQueryOptions = (projectId: string, assemblyId: string | null) =>
   getQuery(
     checkRunKeys.list(projectId, assemblyId),
-    `/api/projects/${encodeURIComponent(projectId)}/check-runs${assemblyId ? `?assemblyId=${encodeURIComponent(assemblyId)}` : ''}`,
+    apiPath`/api/projects/${projectId}/check-runs` + (assemblyId ? apiPath`?assemblyId=${assemblyId}` : ''),
     checkRunListSchema,
     { pick: (r) => r.checkRuns },
   );

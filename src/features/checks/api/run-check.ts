@@ -1,5 +1,5 @@
 import { checkRunSchema } from '@shared/schemas/check-runs';
-import { apiRequest } from '../../../lib/api';
+import { apiPath, apiRequest } from '../../../lib/api';
 import { useApiMutation } from '../../../lib/api-cache';
 import { auditKeys, checkRunKeys, criteriaKeys } from '../../../lib/query-keys';
 
@@ -7,7 +7,7 @@ import { auditKeys, checkRunKeys, criteriaKeys } from '../../../lib/query-keys';
 export const useRunCheck = () =>
   useApiMutation(
     ({ assemblyId, ...body }: { assemblyId: string; criteriaSetId: string }) =>
-      apiRequest(`/api/assemblies/${encodeURIComponent(assemblyId)}/check-runs`, checkRunSchema, {
+      apiRequest(apiPath`/api/assemblies/${assemblyId}/check-runs`, checkRunSchema, {
         method: 'POST',
         body,
       }),

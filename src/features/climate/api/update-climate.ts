@@ -1,5 +1,5 @@
 import { type Project, type ProjectClimate, projectSchema } from '@shared/schemas/project';
-import { apiRequest, currentOnConflict } from '../../../lib/api';
+import { apiPath, apiRequest, currentOnConflict } from '../../../lib/api';
 import { projectSaved, useApiMutation } from '../../../lib/api-cache';
 
 /**
@@ -10,7 +10,7 @@ import { projectSaved, useApiMutation } from '../../../lib/api-cache';
 export const useUpdateClimate = () =>
   useApiMutation(
     ({ id, ...body }: { id: string; version: number; climate: ProjectClimate }) =>
-      apiRequest(`/api/projects/${encodeURIComponent(id)}/climate`, projectSchema, { method: 'PUT', body }),
+      apiRequest(apiPath`/api/projects/${id}/climate`, projectSchema, { method: 'PUT', body }),
     projectSaved,
   );
 

@@ -1,5 +1,5 @@
 import { type CriteriaSetCreate, criteriaSetSchema } from '@shared/schemas/criteria';
-import { apiRequest } from '../../../lib/api';
+import { apiPath, apiRequest } from '../../../lib/api';
 import { useApiMutation } from '../../../lib/api-cache';
 import { criteriaKeys } from '../../../lib/query-keys';
 
@@ -7,7 +7,7 @@ import { criteriaKeys } from '../../../lib/query-keys';
 export const useCreateCriteriaSet = () =>
   useApiMutation(
     ({ orgId, input }: { orgId: string; input: Partial<CriteriaSetCreate> }) =>
-      apiRequest(`/api/organisations/${encodeURIComponent(orgId)}/criteria-sets`, criteriaSetSchema, {
+      apiRequest(apiPath`/api/organisations/${orgId}/criteria-sets`, criteriaSetSchema, {
         method: 'POST',
         body: input,
       }),

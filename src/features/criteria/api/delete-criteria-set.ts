@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequestEmpty } from '../../../lib/api';
+import { apiPath, apiRequestEmpty } from '../../../lib/api';
 import { criteriaKeys } from '../../../lib/query-keys';
 
 /** `DELETE /api/criteria-sets/:setId` (firm administrators; only a version no check run used) → 204. */
 export const deleteCriteriaSet = (setId: string) =>
-  apiRequestEmpty(`/api/criteria-sets/${encodeURIComponent(setId)}`, { method: 'DELETE' });
+  apiRequestEmpty(apiPath`/api/criteria-sets/${setId}`, { method: 'DELETE' });
 
 export function useDeleteCriteriaSet() {
   const qc = useQueryClient();

@@ -1,5 +1,6 @@
 import { criteriaDiffSchema } from '@shared/schemas/criteria';
 import { useQuery } from '@tanstack/react-query';
+import { apiPath } from '../../../lib/api';
 import { getQuery } from '../../../lib/api-cache';
 import { criteriaKeys } from '../../../lib/query-keys';
 
@@ -7,7 +8,7 @@ import { criteriaKeys } from '../../../lib/query-keys';
 export const criteriaDiffQueryOptions = (setId: string, from: number, to: number) =>
   getQuery(
     criteriaKeys.diff(setId, from, to),
-    `/api/criteria-sets/${encodeURIComponent(setId)}/diff?from=${from}&to=${to}`,
+    apiPath`/api/criteria-sets/${setId}/diff?from=${from}&to=${to}`,
     criteriaDiffSchema,
   );
 

@@ -1,5 +1,6 @@
 import { criteriaSetListSchema } from '@shared/schemas/criteria';
 import { useQuery } from '@tanstack/react-query';
+import { apiPath } from '../../../lib/api';
 import { getQuery } from '../../../lib/api-cache';
 import { criteriaKeys } from '../../../lib/query-keys';
 
@@ -7,7 +8,7 @@ import { criteriaKeys } from '../../../lib/query-keys';
 export const criteriaSetsQueryOptions = (orgId: string) =>
   getQuery(
     criteriaKeys.list(orgId),
-    `/api/organisations/${encodeURIComponent(orgId)}/criteria-sets`,
+    apiPath`/api/organisations/${orgId}/criteria-sets`,
     criteriaSetListSchema,
     {
       pick: (r) => r.criteriaSets,

@@ -1,5 +1,6 @@
 import { criteriaVersionListSchema } from '@shared/schemas/criteria';
 import { useQuery } from '@tanstack/react-query';
+import { apiPath } from '../../../lib/api';
 import { getQuery } from '../../../lib/api-cache';
 import { criteriaKeys } from '../../../lib/query-keys';
 
@@ -7,7 +8,7 @@ import { criteriaKeys } from '../../../lib/query-keys';
 export const criteriaVersionsQueryOptions = (setId: string) =>
   getQuery(
     criteriaKeys.versions(setId),
-    `/api/criteria-sets/${encodeURIComponent(setId)}/versions`,
+    apiPath`/api/criteria-sets/${setId}/versions`,
     criteriaVersionListSchema,
     {
       pick: (r) => r.versions,

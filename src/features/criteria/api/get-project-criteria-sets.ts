@@ -1,5 +1,6 @@
 import { criteriaSetListSchema } from '@shared/schemas/criteria';
 import { useQuery } from '@tanstack/react-query';
+import { apiPath } from '../../../lib/api';
 import { getQuery } from '../../../lib/api-cache';
 import { criteriaKeys } from '../../../lib/query-keys';
 
@@ -7,7 +8,7 @@ import { criteriaKeys } from '../../../lib/query-keys';
 export const projectCriteriaSetsQueryOptions = (projectId: string) =>
   getQuery(
     criteriaKeys.forProject(projectId),
-    `/api/projects/${encodeURIComponent(projectId)}/criteria-sets`,
+    apiPath`/api/projects/${projectId}/criteria-sets`,
     criteriaSetListSchema,
     {
       pick: (r) => r.criteriaSets,

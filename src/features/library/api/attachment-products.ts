@@ -5,7 +5,7 @@ import {
 } from '@shared/schemas/attachment-library';
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
-import { apiRequest, apiRequestEmpty } from '../../../lib/api';
+import { apiPath, apiRequest, apiRequestEmpty } from '../../../lib/api';
 import { libraryKeys } from '../../../lib/query-keys';
 import { uploadMultipart } from '../../../lib/upload';
 
@@ -14,7 +14,7 @@ import { uploadMultipart } from '../../../lib/upload';
  * change refreshes the firm's list.
  */
 
-const base = (orgId: string) => `/api/organisations/${encodeURIComponent(orgId)}/attachment-products`;
+const base = (orgId: string) => apiPath`/api/organisations/${orgId}/attachment-products`;
 const listSchema = z.object({ products: z.array(attachmentProductSchema) });
 
 /** Where an entry's data sheet downloads from. */

@@ -5,10 +5,10 @@ import {
   type TemplateItem,
 } from '@shared/inspections/schema';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { apiRequest, currentOnConflict } from '../../../lib/api';
+import { apiPath, apiRequest, currentOnConflict } from '../../../lib/api';
 import { libraryKeys } from '../../../lib/query-keys';
 
-const path = (orgId: string) => `/api/organisations/${encodeURIComponent(orgId)}/inspection-template`;
+const path = (orgId: string) => apiPath`/api/organisations/${orgId}/inspection-template`;
 
 /** `GET …/inspection-template` → the firm's checklist template (its latest version), null before the first save. */
 export const useInspectionTemplate = (orgId: string | undefined) =>

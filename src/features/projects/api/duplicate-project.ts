@@ -1,5 +1,5 @@
 import { projectSchema } from '@shared/schemas/project';
-import { apiRequest } from '../../../lib/api';
+import { apiPath, apiRequest } from '../../../lib/api';
 import { useApiMutation } from '../../../lib/api-cache';
 import { projectKeys } from '../../../lib/query-keys';
 
@@ -7,7 +7,7 @@ import { projectKeys } from '../../../lib/query-keys';
 export const useDuplicateProject = () =>
   useApiMutation(
     ({ id, ...body }: { id: string; name: string; number: string }) =>
-      apiRequest(`/api/projects/${encodeURIComponent(id)}/duplicate`, projectSchema, {
+      apiRequest(apiPath`/api/projects/${id}/duplicate`, projectSchema, {
         method: 'POST',
         body,
       }),

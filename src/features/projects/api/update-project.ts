@@ -1,5 +1,5 @@
 import { type Project, type ProjectInput, projectSchema } from '@shared/schemas/project';
-import { apiRequest, currentOnConflict } from '../../../lib/api';
+import { apiPath, apiRequest, currentOnConflict } from '../../../lib/api';
 import { projectSaved, useApiMutation } from '../../../lib/api-cache';
 
 /** On a 409 `version_conflict`, the server sends the project as it now stands; null for any other error. */
@@ -12,6 +12,6 @@ export const conflictingProject = (error: unknown): Project | null => currentOnC
 export const useUpdateProject = () =>
   useApiMutation(
     ({ id, ...body }: { id: string; version: number; changes: ProjectInput }) =>
-      apiRequest(`/api/projects/${encodeURIComponent(id)}`, projectSchema, { method: 'PUT', body }),
+      apiRequest(apiPath`/api/projects/${id}`, projectSchema, { method: 'PUT', body }),
     { ...projectSaved, conflict: conflictingProject },
   );

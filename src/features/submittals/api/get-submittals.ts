@@ -1,5 +1,6 @@
 import { type SubmittalStatus, submittalListSchema } from '@shared/schemas/submittals';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
+import { apiPath } from '../../../lib/api';
 import { getQuery } from '../../../lib/api-cache';
 import { submittalKeys } from '../../../lib/query-keys';
 
@@ -7,7 +8,7 @@ import { submittalKeys } from '../../../lib/query-keys';
 export const submittalsQueryOptions = (projectId: string, status: SubmittalStatus | null) =>
   getQuery(
     submittalKeys.list(projectId, { status }),
-    `/api/projects/${encodeURIComponent(projectId)}/submittals${status ? `?status=${status}` : ''}`,
+    apiPath`/api/projects/${projectId}/submittals` + (status ? `?status=${status}` : ''),
     submittalListSchema,
     { pick: (r) => r.submittals, placeholderData: keepPreviousData },
   );

@@ -6,10 +6,10 @@ import {
   submittalSchema,
 } from '@shared/schemas/submittals';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { apiRequest, currentOnConflict } from '../../../lib/api';
+import { apiPath, apiRequest, currentOnConflict } from '../../../lib/api';
 import { auditKeys, submittalKeys } from '../../../lib/query-keys';
 
-const base = (id: string) => `/api/submittals/${encodeURIComponent(id)}`;
+const base = (id: string) => apiPath`/api/submittals/${id}`;
 
 /** After any change: the revision as the server now has it, the lists and the activity log refreshed. */
 function useSettle() {
@@ -34,7 +34,7 @@ export function useCreateSubmittal(projectId: string) {
   const settle = useSettle();
   return useMutation({
     mutationFn: (input: SubmittalCreate) =>
-      apiRequest(`/api/projects/${encodeURIComponent(projectId)}/submittals`, submittalSchema, {
+      apiRequest(apiPath`/api/projects/${projectId}/submittals`, submittalSchema, {
         method: 'POST',
         body: input,
       }),

@@ -1,6 +1,7 @@
 import { uploadResultSchema } from '@shared/schemas/submittals';
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
+import { apiPath } from '../../../lib/api';
 import { auditKeys, submittalKeys } from '../../../lib/query-keys';
 import { type UploadProgress, uploadMultipart } from '../../../lib/upload';
 
@@ -8,12 +9,7 @@ export type { UploadProgress };
 
 /** `POST /api/submittals/:id/files` (multipart, with progress) → the stored items and the submittal. */
 export const uploadFiles = (submittalId: string, files: File[], onProgress: (p: UploadProgress) => void) =>
-  uploadMultipart(
-    `/api/submittals/${encodeURIComponent(submittalId)}/files`,
-    files,
-    uploadResultSchema,
-    onProgress,
-  );
+  uploadMultipart(apiPath`/api/submittals/${submittalId}/files`, files, uploadResultSchema, onProgress);
 
 /** The upload as a mutation, with its progress (null when idle). */
 export function useUploadFiles(submittalId: string) {

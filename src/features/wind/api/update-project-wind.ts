@@ -1,5 +1,5 @@
 import { type Project, type ProjectWind, projectSchema } from '@shared/schemas/project';
-import { apiRequest, currentOnConflict } from '../../../lib/api';
+import { apiPath, apiRequest, currentOnConflict } from '../../../lib/api';
 import { projectSaved, useApiMutation } from '../../../lib/api-cache';
 
 /**
@@ -9,7 +9,7 @@ import { projectSaved, useApiMutation } from '../../../lib/api-cache';
 export const useUpdateProjectWind = () =>
   useApiMutation(
     ({ id, ...body }: { id: string; version: number; wind: ProjectWind }) =>
-      apiRequest(`/api/projects/${encodeURIComponent(id)}/wind`, projectSchema, { method: 'PUT', body }),
+      apiRequest(apiPath`/api/projects/${id}/wind`, projectSchema, { method: 'PUT', body }),
     projectSaved,
   );
 

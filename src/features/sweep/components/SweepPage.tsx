@@ -9,7 +9,7 @@ import { checkCosts } from '@shared/sweep/rank';
 import type { SweepParameter, SweepParameterKind } from '@shared/sweep/schema';
 import { applyVariant, planSweep, type SweepPlan } from '@shared/sweep/sweep';
 import { useQueryClient } from '@tanstack/react-query';
-import { useCallback, useDeferredValue, useMemo, useState } from 'react';
+import { startTransition, useCallback, useDeferredValue, useMemo, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Cautions } from '../../../components/ui/Cautions';
 import { Field } from '../../../components/ui/Field';
@@ -121,9 +121,12 @@ export function SweepPage({
   /** Starts the workers on a planned sweep of `on` (the assembly at one revision) against one code table version. */
   const launch = (on: Assembly, parameters: SweepParameter[], plan: SweepPlan, set: CriteriaSet) => {
     const sizes = plan.axes.map((x) => x.values.length);
-    setRan({ plan, parameters, assembly: on, table: set, rows: set.rows });
-    setSlice({ across: 0, lines: sizes.length > 1 ? 1 : null, held: sizes.map(() => 0) });
-    setChosen(null);
+    // The results section's first draw (the chart, the table) yields to the browser: the workers start at once.
+    startTransition(() => {
+      setRan({ plan, parameters, assembly: on, table: set, rows: set.rows });
+      setSlice({ across: 0, lines: sizes.length > 1 ? 1 : null, held: sizes.map(() => 0) });
+      setChosen(null);
+    });
     sweep.start({ assembly: on.current.input, project, rows: set.rows, parameters }, plan);
   };
 

@@ -1,10 +1,8 @@
 import { Button } from '../../components/ui/Button';
-import { Loading } from '../../components/ui/Loading';
-import { Notice } from '../../components/ui/Notice';
+import { Loaded } from '../../components/ui/Loaded';
 import { PageHeader } from '../../components/ui/PageHeader';
 import { useMail } from '../../features/admin-mail/api/get-mail';
 import { Outbox } from '../../features/admin-mail/components/Outbox';
-import { errorMessage } from '../../lib/api';
 
 export function AdminMailPage() {
   const mail = useMail();
@@ -26,13 +24,9 @@ export function AdminMailPage() {
           </Button>
         }
       />
-      {mail.isPending ? (
-        <Loading what="Loading mail" />
-      ) : mail.isError ? (
-        <Notice tone="caution" title={errorMessage(mail.error)} live />
-      ) : (
-        <Outbox messages={mail.data} />
-      )}
+      <Loaded query={mail} what="Loading mail">
+        {(data) => <Outbox messages={data} />}
+      </Loaded>
     </>
   );
 }

@@ -1,7 +1,7 @@
 import { canInFirm, FIRM_ROLE_LABELS } from '@shared/auth/permissions';
 import { useState } from 'react';
 import { Button } from '../../components/ui/Button';
-import { Loading } from '../../components/ui/Loading';
+import { Loaded } from '../../components/ui/Loaded';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
 import { useCriteriaSets } from '../../features/criteria/api/get-criteria-sets';
@@ -10,7 +10,6 @@ import { NewCriteriaSetForm } from '../../features/criteria/components/NewCriter
 import { useMe } from '../../features/me/api/get-me';
 import { FirmPicker } from '../../features/me/components/FirmPicker';
 import { firmOf } from '../../features/me/firm';
-import { errorMessage } from '../../lib/api';
 
 /** The firm's code tables: the criteria its adopted code sets, entered by the firm, one table per code. */
 export function CodeTablesPage() {
@@ -67,17 +66,17 @@ export function CodeTablesPage() {
               </div>
             </section>
           ) : null}
-          {sets.isPending ? (
-            <Loading what="Loading the code tables" />
-          ) : sets.isError ? (
-            <Notice tone="caution" title={errorMessage(sets.error)} live />
-          ) : sets.data.length === 0 ? (
-            <p className="text-ink-muted">
-              No code table yet. Create one and enter the values your adopted code sets.
-            </p>
-          ) : (
-            <CriteriaSetTable sets={sets.data} caption={`Code tables of ${org?.name}`} />
-          )}
+          <Loaded
+            query={sets}
+            what="Loading the code tables"
+            empty={
+              <p className="text-ink-muted">
+                No code table yet. Create one and enter the values your adopted code sets.
+              </p>
+            }
+          >
+            {(data) => <CriteriaSetTable sets={data} caption={`Code tables of ${org?.name}`} />}
+          </Loaded>
         </>
       )}
     </div>

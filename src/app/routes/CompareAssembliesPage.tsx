@@ -1,11 +1,9 @@
 import { useNavigate, useParams, useSearchParams } from 'react-router';
-import { Loading } from '../../components/ui/Loading';
-import { Notice } from '../../components/ui/Notice';
+import { Loaded } from '../../components/ui/Loaded';
 import { useAssemblies } from '../../features/assemblies/api/get-assemblies';
 import { compareSearch, parseCompareParams } from '../../features/assemblies/compare-params';
 import { AssemblyCompare } from '../../features/assemblies/components/AssemblyCompare';
 import { useProject } from '../../features/projects/api/get-project';
-import { errorMessage } from '../../lib/api';
 
 export function CompareAssembliesPage() {
   const { projectId = '' } = useParams();
@@ -26,20 +24,20 @@ export function CompareAssembliesPage() {
           figure that differs from it is marked ▲ higher or ▼ lower, with the difference in words.
         </p>
       </div>
-      {list.isPending ? (
-        <Loading what="Loading the assemblies" />
-      ) : list.isError ? (
-        <Notice tone="caution" title={errorMessage(list.error)} live />
-      ) : list.data.length === 0 ? (
-        <p className="text-ink-muted">This project has no assemblies yet.</p>
-      ) : (
-        <AssemblyCompare
-          key={params.toString()}
-          assemblies={list.data}
-          items={items}
-          onApply={(next) => navigate({ search: compareSearch(next) })}
-        />
-      )}
+      <Loaded
+        query={list}
+        what="Loading the assemblies"
+        empty={<p className="text-ink-muted">This project has no assemblies yet.</p>}
+      >
+        {(data) => (
+          <AssemblyCompare
+            key={params.toString()}
+            assemblies={data}
+            items={items}
+            onApply={(next) => navigate({ search: compareSearch(next) })}
+          />
+        )}
+      </Loaded>
     </div>
   );
 }

@@ -1,5 +1,6 @@
 import { canInFirm, FIRM_ROLE_LABELS, FIRM_ROLES, type FirmRole } from '@shared/auth/permissions';
 import { useSearchParams } from 'react-router';
+import { Loaded } from '../../components/ui/Loaded';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
@@ -9,7 +10,6 @@ import { FirmMembersTable } from '../../features/firm-members/components/FirmMem
 import { useMe } from '../../features/me/api/get-me';
 import { FirmPicker } from '../../features/me/components/FirmPicker';
 import { firmOf } from '../../features/me/firm';
-import { errorMessage } from '../../lib/api';
 
 /** What each firm role may do, in the firm's own data (shared/auth `FIRM_PERMISSIONS`). */
 const ROLE_WORDS: Record<FirmRole, string> = {
@@ -65,19 +65,17 @@ export function FirmMembersPage() {
             <h2 id="people-heading" className="sr-only">
               People
             </h2>
-            {members.isPending ? (
-              <Loading what="Loading the firm's people" />
-            ) : members.isError ? (
-              <Notice tone="caution" title={errorMessage(members.error)} live />
-            ) : (
-              <FirmMembersTable
-                orgId={org.id}
-                firmName={org.name}
-                members={members.data}
-                isAdmin={isAdmin}
-                myUserId={me.data?.id}
-              />
-            )}
+            <Loaded query={members} what="Loading the firm's people">
+              {(data) => (
+                <FirmMembersTable
+                  orgId={org.id}
+                  firmName={org.name}
+                  members={data}
+                  isAdmin={isAdmin}
+                  myUserId={me.data?.id}
+                />
+              )}
+            </Loaded>
           </section>
           {isAdmin ? (
             <section className="border-t border-ink pt-6">

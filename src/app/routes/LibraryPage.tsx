@@ -1,6 +1,6 @@
 import { canInFirm, FIRM_ROLE_LABELS } from '@shared/auth/permissions';
 import { useState } from 'react';
-import { Loading } from '../../components/ui/Loading';
+import { Loaded } from '../../components/ui/Loaded';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
 import { useAttachmentProducts } from '../../features/library/api/attachment-products';
@@ -20,7 +20,6 @@ import {
 import { useMe } from '../../features/me/api/get-me';
 import { FirmPicker } from '../../features/me/components/FirmPicker';
 import { firmOf } from '../../features/me/firm';
-import { errorMessage } from '../../lib/api';
 
 export function LibraryPage() {
   const me = useMe();
@@ -68,13 +67,9 @@ export function LibraryPage() {
                 {isAdmin ? '' : ' Firm administrators can remove entries.'}
               </p>
             </div>
-            {bridgeValues.isPending ? (
-              <Loading what="Loading the firm's χ and ψ values" />
-            ) : bridgeValues.isError ? (
-              <Notice tone="caution" title={errorMessage(bridgeValues.error)} />
-            ) : (
-              <BridgeValuesTable orgId={org!.id} values={bridgeValues.data} isAdmin={isAdmin} />
-            )}
+            <Loaded query={bridgeValues} what="Loading the firm's χ and ψ values">
+              {(data) => <BridgeValuesTable orgId={org!.id} values={data} isAdmin={isAdmin} />}
+            </Loaded>
             {org && mayWrite ? <AddBridgeValueForm orgId={org.id} /> : null}
           </section>
 
@@ -89,18 +84,16 @@ export function LibraryPage() {
                 every assembly offers them. The manufacturer’s current tested values govern.
               </p>
             </div>
-            {products.isPending ? (
-              <Loading what="Loading the firm's panel tables and clips" />
-            ) : products.isError ? (
-              <Notice tone="caution" title={errorMessage(products.error)} />
-            ) : (
-              <AttachmentProductsTable
-                orgId={org!.id}
-                products={products.data}
-                isAdmin={isAdmin}
-                mayWrite={mayWrite}
-              />
-            )}
+            <Loaded query={products} what="Loading the firm's panel tables and clips">
+              {(data) => (
+                <AttachmentProductsTable
+                  orgId={org!.id}
+                  products={data}
+                  isAdmin={isAdmin}
+                  mayWrite={mayWrite}
+                />
+              )}
+            </Loaded>
           </section>
 
           <section aria-labelledby="firm-materials-heading" className="flex flex-col gap-4">
@@ -112,13 +105,9 @@ export function LibraryPage() {
                 Product values from data sheets and test reports; they override the generic values below.
               </p>
             </div>
-            {materials.isPending ? (
-              <Loading what="Loading the firm's materials" />
-            ) : materials.isError ? (
-              <Notice tone="caution" title={errorMessage(materials.error)} />
-            ) : (
-              <FirmMaterialsTable orgId={org!.id} materials={materials.data} isAdmin={isAdmin} />
-            )}
+            <Loaded query={materials} what="Loading the firm's materials">
+              {(data) => <FirmMaterialsTable orgId={org!.id} materials={data} isAdmin={isAdmin} />}
+            </Loaded>
             {org && mayWrite ? <AddFirmMaterialForm orgId={org.id} /> : null}
           </section>
 
@@ -133,18 +122,11 @@ export function LibraryPage() {
                 code tables: an inspection keeps the version it was made with.
               </p>
             </div>
-            {checklist.isPending ? (
-              <Loading what="Loading the firm's inspection checklist" />
-            ) : checklist.isError ? (
-              <Notice tone="caution" title={errorMessage(checklist.error)} />
-            ) : (
-              <InspectionTemplateEditor
-                key={org!.id}
-                orgId={org!.id}
-                template={checklist.data}
-                mayWrite={mayWrite}
-              />
-            )}
+            <Loaded query={checklist} what="Loading the firm's inspection checklist">
+              {(data) => (
+                <InspectionTemplateEditor key={org!.id} orgId={org!.id} template={data} mayWrite={mayWrite} />
+              )}
+            </Loaded>
           </section>
         </>
       )}
@@ -159,13 +141,9 @@ export function LibraryPage() {
             table it belongs to and whether it has been checked against that table.
           </p>
         </div>
-        {reference.isPending ? (
-          <Loading what="Loading the generic materials" />
-        ) : reference.isError ? (
-          <Notice tone="caution" title={errorMessage(reference.error)} />
-        ) : (
-          <GenericMaterialsTable materials={reference.data} />
-        )}
+        <Loaded query={reference} what="Loading the generic materials">
+          {(data) => <GenericMaterialsTable materials={data} />}
+        </Loaded>
       </section>
     </div>
   );

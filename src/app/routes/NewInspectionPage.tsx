@@ -1,11 +1,9 @@
 import { useNavigate, useParams } from 'react-router';
-import { Loading } from '../../components/ui/Loading';
-import { Notice } from '../../components/ui/Notice';
+import { Loaded } from '../../components/ui/Loaded';
 import { useAssemblies } from '../../features/assemblies/api/get-assemblies';
 import { useCreateInspection } from '../../features/inspections/api/mutations';
 import { NewInspectionForm } from '../../features/inspections/components/NewInspectionForm';
 import { useProject } from '../../features/projects/api/get-project';
-import { errorMessage } from '../../lib/api';
 
 export function NewInspectionPage() {
   const { projectId = '' } = useParams();
@@ -18,22 +16,24 @@ export function NewInspectionPage() {
     <div className="flex flex-col gap-6">
       <title>{`New inspection · ${project.name} · Skinwright`}</title>
       <h2 className="border-b border-ink pb-2 text-2xl">New inspection</h2>
-      {assemblies.isPending ? (
-        <Loading what="Loading the assemblies" />
-      ) : assemblies.isError ? (
-        <Notice tone="caution" title={errorMessage(assemblies.error)} live />
-      ) : assemblies.data.length === 0 ? (
-        <p className="text-ink-muted">The project has no assembly to inspect against yet.</p>
-      ) : (
-        <NewInspectionForm
-          assemblies={assemblies.data}
-          busy={create.isPending}
-          error={create.error}
-          onCreate={(input) =>
-            create.mutate(input, { onSuccess: (i) => navigate(`/projects/${projectId}/inspections/${i.id}`) })
-          }
-        />
-      )}
+      <Loaded
+        query={assemblies}
+        what="Loading the assemblies"
+        empty={<p className="text-ink-muted">The project has no assembly to inspect against yet.</p>}
+      >
+        {(data) => (
+          <NewInspectionForm
+            assemblies={data}
+            busy={create.isPending}
+            error={create.error}
+            onCreate={(input) =>
+              create.mutate(input, {
+                onSuccess: (i) => navigate(`/projects/${projectId}/inspections/${i.id}`),
+              })
+            }
+          />
+        )}
+      </Loaded>
     </div>
   );
 }

@@ -1,12 +1,11 @@
 import { can } from '@shared/auth/permissions';
 import { Link, useNavigate, useParams } from 'react-router';
-import { Loading } from '../../components/ui/Loading';
+import { Loaded } from '../../components/ui/Loaded';
 import { Notice } from '../../components/ui/Notice';
 import { useMembers } from '../../features/members/api/get-members';
 import { useProject } from '../../features/projects/api/get-project';
 import { useCreateSubmittal } from '../../features/submittals/api/mutations';
 import { SubmittalForm } from '../../features/submittals/components/SubmittalForm';
-import { errorMessage } from '../../lib/api';
 
 /** Start a submittal: its details and reviewers; items are added on its page. */
 export function NewSubmittalPage() {
@@ -27,23 +26,21 @@ export function NewSubmittalPage() {
         New
       </nav>
       <h2 className="border-b border-ink pb-2 text-2xl">New submittal</h2>
-      {members.isPending ? (
-        <Loading what="Loading the people of the project" />
-      ) : members.isError ? (
-        <Notice tone="caution" title={errorMessage(members.error)} live />
-      ) : (
-        <SubmittalForm
-          members={members.data.members}
-          withNumber
-          submitLabel="Create the draft"
-          busyLabel="Creating…"
-          onSubmit={async (values) => {
-            const s = await create.mutateAsync(values);
-            navigate(`/projects/${project.id}/submittals/${s.id}`);
-          }}
-          onCancel={() => navigate(`/projects/${project.id}/submittals`)}
-        />
-      )}
+      <Loaded query={members} what="Loading the people of the project">
+        {(data) => (
+          <SubmittalForm
+            members={data.members}
+            withNumber
+            submitLabel="Create the draft"
+            busyLabel="Creating…"
+            onSubmit={async (values) => {
+              const s = await create.mutateAsync(values);
+              navigate(`/projects/${project.id}/submittals/${s.id}`);
+            }}
+            onCancel={() => navigate(`/projects/${project.id}/submittals`)}
+          />
+        )}
+      </Loaded>
     </div>
   );
 }

@@ -1,7 +1,7 @@
 import { can } from '@shared/auth/permissions';
 import { useParams } from 'react-router';
 import { ButtonLink } from '../../components/ui/Button';
-import { Loading } from '../../components/ui/Loading';
+import { Loaded } from '../../components/ui/Loaded';
 import { Notice } from '../../components/ui/Notice';
 import { useInspections } from '../../features/inspections/api/get-inspections';
 import { ElevationDrawing } from '../../features/inspections/components/ElevationDrawing';
@@ -9,7 +9,6 @@ import { InspectionList } from '../../features/inspections/components/Inspection
 import { WaitingToSend } from '../../features/inspections/components/WaitingToSend';
 import { byElevation } from '../../features/inspections/scope';
 import { useProject } from '../../features/projects/api/get-project';
-import { errorMessage } from '../../lib/api';
 
 /** The project's field inspections: each elevation drawn by state, then the list. */
 export function ProjectInspectionsPage() {
@@ -42,30 +41,30 @@ export function ProjectInspectionsPage() {
         </p>
       </Notice>
       <WaitingToSend inspectionId="" />
-      {list.isPending ? (
-        <Loading what="Loading the inspections" />
-      ) : list.isError ? (
-        <Notice tone="caution" title={errorMessage(list.error)} live />
-      ) : list.data.length === 0 ? (
-        <p className="text-ink-muted">No inspection yet.</p>
-      ) : (
-        <>
-          <section aria-labelledby="by-elevation" className="flex flex-col gap-4">
-            <h3 id="by-elevation" className="text-xl">
-              By elevation
-            </h3>
-            {byElevation(list.data).map((g) => (
-              <ElevationDrawing key={g.elevation} projectId={project.id} {...g} />
-            ))}
-          </section>
-          <section aria-labelledby="all-inspections" className="flex flex-col gap-2">
-            <h3 id="all-inspections" className="text-xl">
-              Every inspection
-            </h3>
-            <InspectionList projectId={project.id} inspections={list.data} />
-          </section>
-        </>
-      )}
+      <Loaded
+        query={list}
+        what="Loading the inspections"
+        empty={<p className="text-ink-muted">No inspection yet.</p>}
+      >
+        {(data) => (
+          <>
+            <section aria-labelledby="by-elevation" className="flex flex-col gap-4">
+              <h3 id="by-elevation" className="text-xl">
+                By elevation
+              </h3>
+              {byElevation(data).map((g) => (
+                <ElevationDrawing key={g.elevation} projectId={project.id} {...g} />
+              ))}
+            </section>
+            <section aria-labelledby="all-inspections" className="flex flex-col gap-2">
+              <h3 id="all-inspections" className="text-xl">
+                Every inspection
+              </h3>
+              <InspectionList projectId={project.id} inspections={data} />
+            </section>
+          </>
+        )}
+      </Loaded>
     </div>
   );
 }

@@ -1,14 +1,12 @@
 import { can } from '@shared/auth/permissions';
 import { useParams } from 'react-router';
-import { Loading } from '../../components/ui/Loading';
-import { Notice } from '../../components/ui/Notice';
+import { Loaded } from '../../components/ui/Loaded';
 import { useMe } from '../../features/me/api/get-me';
 import { useMembers } from '../../features/members/api/get-members';
 import { InviteForm } from '../../features/members/components/InviteForm';
 import { MembersTable } from '../../features/members/components/MembersTable';
 import { PendingInvitations } from '../../features/members/components/PendingInvitations';
 import { useProject } from '../../features/projects/api/get-project';
-import { errorMessage } from '../../lib/api';
 
 export function ProjectMembersPage() {
   const { projectId = '' } = useParams();
@@ -26,18 +24,16 @@ export function ProjectMembersPage() {
         <h2 id="people-heading" className="text-2xl">
           People and roles
         </h2>
-        {members.isPending ? (
-          <Loading what="Loading people" />
-        ) : members.isError ? (
-          <Notice tone="caution" title={errorMessage(members.error)} live />
-        ) : (
-          <MembersTable
-            projectId={projectId}
-            members={members.data.members}
-            myRole={project.myRole}
-            myUserId={me.data?.id}
-          />
-        )}
+        <Loaded query={members} what="Loading people">
+          {(data) => (
+            <MembersTable
+              projectId={projectId}
+              members={data.members}
+              myRole={project.myRole}
+              myUserId={me.data?.id}
+            />
+          )}
+        </Loaded>
       </section>
 
       {mayInvite ? (

@@ -3,13 +3,11 @@ import { SUBMITTAL_STATUS_TEXT, SUBMITTAL_STATUSES } from '@shared/schemas/submi
 import { useId } from 'react';
 import { useParams, useSearchParams } from 'react-router';
 import { ButtonLink } from '../../components/ui/Button';
-import { Loading } from '../../components/ui/Loading';
-import { Notice } from '../../components/ui/Notice';
+import { Loaded } from '../../components/ui/Loaded';
 import { Select } from '../../components/ui/Select';
 import { useProject } from '../../features/projects/api/get-project';
 import { useSubmittals } from '../../features/submittals/api/get-submittals';
 import { SubmittalTable } from '../../features/submittals/components/SubmittalTable';
-import { errorMessage } from '../../lib/api';
 import { submittalStatusOf } from '../route-params';
 
 /** The project's submittals, filtered by status (kept in the address so it can be shared). */
@@ -58,19 +56,19 @@ export function ProjectSubmittalsPage() {
           </Select>
         </div>
       </div>
-      {list.isPending ? (
-        <Loading what="Loading the submittals" />
-      ) : list.isError ? (
-        <Notice tone="caution" title={errorMessage(list.error)} live />
-      ) : list.data.length === 0 ? (
-        <p className="text-ink-muted">
-          {status
-            ? `No submittal is ${SUBMITTAL_STATUS_TEXT[status].label.toLowerCase()}.`
-            : 'No submittal yet.'}
-        </p>
-      ) : (
-        <SubmittalTable projectId={project.id} submittals={list.data} />
-      )}
+      <Loaded
+        query={list}
+        what="Loading the submittals"
+        empty={
+          <p className="text-ink-muted">
+            {status
+              ? `No submittal is ${SUBMITTAL_STATUS_TEXT[status].label.toLowerCase()}.`
+              : 'No submittal yet.'}
+          </p>
+        }
+      >
+        {(data) => <SubmittalTable projectId={project.id} submittals={data} />}
+      </Loaded>
     </div>
   );
 }

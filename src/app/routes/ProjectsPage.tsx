@@ -1,12 +1,10 @@
 import { Link, useSearchParams } from 'react-router';
 import { ButtonLink } from '../../components/ui/Button';
 import { FilterBar, FilterSelect, SearchBox } from '../../components/ui/FilterBar';
-import { Loading } from '../../components/ui/Loading';
-import { Notice } from '../../components/ui/Notice';
+import { Loaded } from '../../components/ui/Loaded';
 import { PageHeader } from '../../components/ui/PageHeader';
 import { useProjects } from '../../features/projects/api/get-projects';
 import { ProjectTable } from '../../features/projects/components/ProjectTable';
-import { errorMessage } from '../../lib/api';
 import { matchesQuery, useListFilters } from '../../lib/list-filter';
 
 const filterClass = (active: boolean) =>
@@ -55,41 +53,44 @@ export function ProjectsPage() {
         </Link>
       </nav>
 
-      {projects.isPending ? (
-        <Loading what="Loading projects" />
-      ) : projects.isError ? (
-        <Notice tone="caution" title={errorMessage(projects.error)} live />
-      ) : projects.data.length === 0 ? (
-        <div className="border-y border-rule py-10 text-center">
-          <p className="font-serif text-xl">{archived ? 'No archived projects.' : 'No projects yet.'}</p>
-          {!archived ? (
-            <p className="mt-2 text-ink-muted">
-              Start one with <Link to="/projects/new">New project</Link>, or accept an invitation sent to you.
+      <Loaded
+        query={projects}
+        what="Loading projects"
+        empty={
+          <div className="border-y border-rule py-10 text-center">
+            <p className="font-serif text-xl">{archived ? 'No archived projects.' : 'No projects yet.'}</p>
+            {!archived ? (
+              <p className="mt-2 text-ink-muted">
+                Start one with <Link to="/projects/new">New project</Link>, or accept an invitation sent to
+                you.
+              </p>
+            ) : null}
+          </div>
+        }
+      >
+        {() => (
+          <>
+            <FilterBar label="Find projects" active={filters.active} onClear={filters.clear} className="mb-4">
+              <SearchBox hint="Name, number or firm." value={q} onChange={(t) => filters.set('q', t, true)} />
+              <FilterSelect
+                label="Climate zone"
+                className="w-40"
+                value={zone}
+                onChange={(z) => filters.set('zone', z)}
+                options={zones.map((z) => ({ value: z, label: z }))}
+              />
+            </FilterBar>
+            <p role="status" className="mb-2 text-sm text-ink-muted">
+              {filters.active ? `${shown.length} of ${all.length} projects match.` : ''}
             </p>
-          ) : null}
-        </div>
-      ) : (
-        <>
-          <FilterBar label="Find projects" active={filters.active} onClear={filters.clear} className="mb-4">
-            <SearchBox hint="Name, number or firm." value={q} onChange={(t) => filters.set('q', t, true)} />
-            <FilterSelect
-              label="Climate zone"
-              className="w-40"
-              value={zone}
-              onChange={(z) => filters.set('zone', z)}
-              options={zones.map((z) => ({ value: z, label: z }))}
-            />
-          </FilterBar>
-          <p role="status" className="mb-2 text-sm text-ink-muted">
-            {filters.active ? `${shown.length} of ${all.length} projects match.` : ''}
-          </p>
-          {shown.length > 0 ? (
-            <ProjectTable projects={shown} caption={archived ? 'Archived projects' : 'Current projects'} />
-          ) : (
-            <p className="border-y border-rule py-8 text-center">No project matches the search.</p>
-          )}
-        </>
-      )}
+            {shown.length > 0 ? (
+              <ProjectTable projects={shown} caption={archived ? 'Archived projects' : 'Current projects'} />
+            ) : (
+              <p className="border-y border-rule py-8 text-center">No project matches the search.</p>
+            )}
+          </>
+        )}
+      </Loaded>
     </>
   );
 }

@@ -82,6 +82,17 @@ function windDesign(src: ChecklistSource): { zones: ZoneDesign[] } | { reason: s
   }
 }
 
+/** A girt or clip spacing item of one wind zone: what the site may show and where the limit comes from. */
+interface SpacingCheck {
+  label: string;
+  things: string;
+  design: number;
+  max: number;
+  basis: string;
+  path: string;
+  verdict: string | undefined;
+}
+
 function attachmentItems(src: ChecklistSource): GeneratedItem[] {
   const a = src.assembly.input;
   const { girtSpacing, clipSpacing, clipType, fastenerType } = a.attachment;
@@ -90,57 +101,56 @@ function attachmentItems(src: ChecklistSource): GeneratedItem[] {
   for (const zone of windZonesOf(src.scope)) {
     const d = 'zones' in design ? design.zones.find((z) => z.zone === zone) : undefined;
     const unproved = 'reason' in design ? ` — not proved: ${design.reason}` : '';
+    /** A spacing on site passes up to `max`; the design spacing is the item's value. */
+    const spacingItem = (kind: 'girt_spacing' | 'clip_spacing', o: SpacingCheck) => {
+      const source = citation(
+        src,
+        'attachment',
+        o.path,
+        d ? `wind design check, ${ZONE_WORDS[zone]}: ${o.verdict}` : undefined,
+      );
+      items.push({
+        kind,
+        group: 'attachment',
+        label: `${o.label} — ${ZONE_WORDS[zone]}`,
+        designText: `${o.things} at the design spacing or closer${unproved}`,
+        quantity: 'shortLength',
+        designValue: o.design,
+        tolerance: { min: null, max: o.max, basis: o.basis },
+        source,
+      });
+    };
     // Girts: a wider spacing than designed is not proved (the clip load grows with it), nor one above the schedule's.
     const girtMax = d?.maxGirtSpacing ?? null;
     const girtDesign = girtSpacing ?? girtMax;
     if (girtDesign !== null)
-      items.push({
-        kind: 'girt_spacing',
-        group: 'attachment',
-        label: `Girt spacing — ${ZONE_WORDS[zone]}`,
-        designText: `Girts at the design spacing or closer${unproved}`,
-        quantity: 'shortLength',
-        designValue: girtDesign,
-        tolerance: {
-          min: null,
-          max: girtMax === null ? girtDesign : Math.min(girtDesign, girtMax),
-          basis:
-            girtMax !== null && girtMax < girtDesign
-              ? 'the largest girt spacing the wind check proved for this zone (the design spacing exceeds it)'
-              : 'the design girt spacing: a wider one is not proved (the panel span and the clip load grow with it)',
-        },
-        source: citation(
-          src,
-          'attachment',
-          girtSpacing === undefined ? 'windPanel.loadSpanTable' : 'attachment.girtSpacing',
-          d ? `wind design check, ${ZONE_WORDS[zone]}: ${d.girt}` : undefined,
-        ),
+      spacingItem('girt_spacing', {
+        label: 'Girt spacing',
+        things: 'Girts',
+        design: girtDesign,
+        max: girtMax === null ? girtDesign : Math.min(girtDesign, girtMax),
+        basis:
+          girtMax !== null && girtMax < girtDesign
+            ? 'the largest girt spacing the wind check proved for this zone (the design spacing exceeds it)'
+            : 'the design girt spacing: a wider one is not proved (the panel span and the clip load grow with it)',
+        path: girtSpacing === undefined ? 'windPanel.loadSpanTable' : 'attachment.girtSpacing',
+        verdict: d?.girt,
       });
     // Clips: any spacing up to the largest the wind check proved at the design girt spacing.
     const clipMax = d?.maxClipAtDesignGirt ?? null;
     const clipDesign = clipSpacing ?? clipMax;
     if (clipDesign !== null)
-      items.push({
-        kind: 'clip_spacing',
-        group: 'attachment',
-        label: `Clip spacing along the girt — ${ZONE_WORDS[zone]}`,
-        designText: `Clips at the design spacing or closer${unproved}`,
-        quantity: 'shortLength',
-        designValue: clipDesign,
-        tolerance: {
-          min: null,
-          max: clipMax ?? clipDesign,
-          basis:
-            clipMax === null
-              ? 'the design clip spacing'
-              : 'the largest clip spacing the wind check proved at the design girt spacing for this zone',
-        },
-        source: citation(
-          src,
-          'attachment',
-          clipSpacing === undefined ? 'windPanel.clip' : 'attachment.clipSpacing',
-          d ? `wind design check, ${ZONE_WORDS[zone]}: ${d.clip}` : undefined,
-        ),
+      spacingItem('clip_spacing', {
+        label: 'Clip spacing along the girt',
+        things: 'Clips',
+        design: clipDesign,
+        max: clipMax ?? clipDesign,
+        basis:
+          clipMax === null
+            ? 'the design clip spacing'
+            : 'the largest clip spacing the wind check proved at the design girt spacing for this zone',
+        path: clipSpacing === undefined ? 'windPanel.clip' : 'attachment.clipSpacing',
+        verdict: d?.clip,
       });
   }
   items.push(

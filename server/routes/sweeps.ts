@@ -96,7 +96,7 @@ export const sweepRoutes = [
       ...errors,
       409: errorResponse('The project is archived'),
       422: errorResponse(
-        'A parameter the assembly does not have, a bad range or list, a deleted or foreign cost entry, or a varied thing without a cost — the field named, before anything runs',
+        'A parameter the assembly does not have, a bad range or list, a deleted or foreign cost entry, library material or χ value (`parameters.<i>.products.<j>.libraryEntryId`, `parameters.<i>.entries.<j>.source.libraryEntryId`), or a varied thing without a cost — the field named, before anything runs',
       ),
     },
     handler: ({ params, body, user, services }) => services.sweeps.create(params.assemblyId, user.id, body),

@@ -1,3 +1,4 @@
+import type { ComputedBridge } from '@shared/calc/bridge/computed';
 import { ENGINE_VERSION } from '@shared/calc/trace';
 import type {
   SavedSweep,
@@ -7,6 +8,7 @@ import type {
   SweepSave,
   SweepSummary,
 } from '@shared/schemas/sweeps';
+import { clipEntryOf, productOf } from '@shared/sweep/library';
 import { checkCosts, rankVariants } from '@shared/sweep/rank';
 import type { SweepCosts, SweepParameter } from '@shared/sweep/schema';
 import { SWEEP_SEARCH_MAX_COMBINATIONS, SWEEP_SEARCH_MAX_VALUES, searchSweep } from '@shared/sweep/search';
@@ -14,7 +16,14 @@ import { compareSweeps, summarizeSweep } from '@shared/sweep/summary';
 import { planSweep } from '@shared/sweep/sweep';
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import type { Db } from '../db/client';
-import { assemblies, assemblySweeps, organisationMembers, user } from '../db/schema';
+import {
+  assemblies,
+  assemblySweeps,
+  organisationMembers,
+  orgBridgeValues,
+  orgMaterials,
+  user,
+} from '../db/schema';
 import { currentAssembly } from './assemblies';
 import { recordAudit } from './audit';
 import { projectForChecks, usableCodeTable } from './check-runs';
@@ -64,6 +73,82 @@ function toSweep(r: SweepRow, currentRevision: number, by: string | null): Saved
   };
 }
 
+/** Refusal of a library entry a sweep names: deleted, of another firm, or of the wrong kind — at its field. */
+const refuseEntry = (field: string, reason: string) =>
+  new DomainError('invalid', 'invalid_input', 'a library entry cannot be used', { [field]: reason });
+const DELETED = 'no such entry in the firm library (it may have been deleted)';
+
+/**
+ * The parameters with the firm library's own values for every product and clip type named by its entry
+ * (`libraryEntryId`), read from the firms in `organisationIds` only — so the sweep runs what the library holds
+ * now, not what a page sent. A deleted or foreign entry, or a ψ value named as a clip, is refused at its field.
+ */
+async function withLibraryValues(
+  db: Db,
+  organisationIds: string[],
+  parameters: readonly SweepParameter[],
+): Promise<SweepParameter[]> {
+  const productIds = parameters.flatMap((p) =>
+    p.kind === 'insulationProduct' ? p.products.flatMap((x) => x.libraryEntryId ?? []) : [],
+  );
+  const clipIds = parameters.flatMap((p) =>
+    p.kind === 'clipChi' ? (p.entries ?? []).flatMap((e) => e.source?.libraryEntryId ?? []) : [],
+  );
+  const [materials, bridges] = await Promise.all([
+    productIds.length === 0
+      ? []
+      : db
+          .select()
+          .from(orgMaterials)
+          .where(
+            and(inArray(orgMaterials.id, productIds), inArray(orgMaterials.organisationId, organisationIds)),
+          ),
+    clipIds.length === 0
+      ? []
+      : db
+          .select()
+          .from(orgBridgeValues)
+          .where(
+            and(
+              inArray(orgBridgeValues.id, clipIds),
+              inArray(orgBridgeValues.organisationId, organisationIds),
+            ),
+          ),
+  ]);
+  const material = new Map(materials.map((r) => [r.id, r]));
+  const bridge = new Map(bridges.map((r) => [r.id, r]));
+  return parameters.map((p, i) => {
+    if (p.kind === 'insulationProduct')
+      return {
+        ...p,
+        products: p.products.map((x, j) => {
+          if (!x.libraryEntryId) return x;
+          const r = material.get(x.libraryEntryId);
+          if (!r) throw refuseEntry(`parameters.${i}.products.${j}.libraryEntryId`, DELETED);
+          return productOf({
+            ...r,
+            density: r.density ?? undefined,
+            vapourResistanceFactor: r.vapourResistanceFactor ?? undefined,
+          });
+        }),
+      };
+    if (p.kind === 'clipChi' && p.entries)
+      return {
+        ...p,
+        entries: p.entries.map((e, j) => {
+          const id = e.source?.libraryEntryId;
+          if (!id) return e;
+          const field = `parameters.${i}.entries.${j}.source.libraryEntryId`;
+          const r = bridge.get(id);
+          if (!r) throw refuseEntry(field, DELETED);
+          if (r.kind !== 'point') throw refuseEntry(field, 'the entry is a girt’s ψ, not a clip’s χ');
+          return clipEntryOf({ ...r, computed: (r.computed as ComputedBridge | null) ?? undefined });
+        }),
+      };
+    return p;
+  });
+}
+
 /**
  * Saved sweeps of an assembly: run on the server against the current revision and one code table version
  * (frozen, as a check run freezes it), with the costs of the firm library entries named, and kept as a
@@ -111,17 +196,15 @@ export function createSavedSweepService(
     async create(assemblyId: string, userId: string, body: SweepSave): Promise<SavedSweep> {
       const a = await currentAssembly(db, assemblyId);
       const { input } = a;
-      const plan = planSweep(input, body.parameters, SWEEP_SEARCH_MAX_COMBINATIONS, SWEEP_SEARCH_MAX_VALUES);
-      await usableCodeTable(db, criteria, body.criteriaSetId, a.p.organisationId, userId);
       const firms = await db
         .select({ id: organisationMembers.organisationId })
         .from(organisationMembers)
         .where(eq(organisationMembers.userId, userId));
-      const priced = await costs.resolve(
-        [a.p.organisationId, ...firms.map((f) => f.id)],
-        body.costs,
-        body.costEntries,
-      );
+      const organisationIds = [a.p.organisationId, ...firms.map((f) => f.id)];
+      const parameters = await withLibraryValues(db, organisationIds, body.parameters);
+      const plan = planSweep(input, parameters, SWEEP_SEARCH_MAX_COMBINATIONS, SWEEP_SEARCH_MAX_VALUES);
+      await usableCodeTable(db, criteria, body.criteriaSetId, a.p.organisationId, userId);
+      const priced = await costs.resolve(organisationIds, body.costs, body.costEntries);
       // A missing price is refused at its field before anything runs.
       if (priced) checkCosts(plan, input, priced);
       const project = projectForChecks(a.p);
@@ -132,7 +215,7 @@ export function createSavedSweepService(
           plan: ran,
           exploration,
           ...result
-        } = searchSweep(input, project, rows, body.parameters, maxVariants);
+        } = searchSweep(input, project, rows, parameters, maxVariants);
         const ranking = priced ? rankVariants(ran, input, result.variants, priced) : null;
         const summary = summarizeSweep(
           result.count,
@@ -151,7 +234,7 @@ export function createSavedSweepService(
             criteriaSetId: set.id,
             criteriaSetVersion: set.version,
             criteriaSetName: set.name,
-            parameters: body.parameters,
+            parameters,
             costs: priced ? { costs: priced, costEntries: body.costEntries ?? null } : null,
             summary,
             engineVersion: ENGINE_VERSION,

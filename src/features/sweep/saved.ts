@@ -23,8 +23,8 @@ const targetOf = (p: SweepParameter): number | null =>
 export function draftOf(a: AssemblyInput, p: SweepParameter, system: UnitSystem): ParameterDraft {
   const base = { ...newDraft(a, p.kind, targetOf(p)), target: targetOf(p) };
   if (p.kind === 'sealantClass') return { ...base, mode: 'list', classes: [...p.list] };
-  // A parameter of another shape (library products) starts from its first draft.
-  if (!('range' in p) && !('list' in p)) return base;
+  if (p.kind === 'insulationProduct') return { ...base, products: [...p.products] };
+  if (p.kind === 'clipChi' && p.entries) return { ...base, mode: 'entries', entries: [...p.entries] };
   if ('range' in p && p.range) return { ...base, mode: 'range', ...p.range };
   const measure = measureOf(p.kind);
   const list = 'list' in p ? (p.list ?? []) : [];

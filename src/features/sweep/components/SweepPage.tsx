@@ -28,10 +28,12 @@ import { type CostDraft, costsOf, draftOfCosts, emptyCosts } from '../costs';
 import {
   type FieldProblem,
   KIND_LABELS,
+  NO_LIBRARY,
   newDraft,
   type ParameterDraft,
   problemBox,
   SWEEP_BROWSER_CAP,
+  type SweepLibrary,
   targetsFor,
   validateSweep,
 } from '../draft';
@@ -84,11 +86,14 @@ export function SweepPage({
   assembly,
   sets,
   mayWrite,
+  firmLibrary = NO_LIBRARY,
 }: {
   project: Project;
   assembly: Assembly;
   sets: CriteriaSetSummary[];
   mayWrite: boolean;
+  /** The firm's materials and χ values the form offers (insulation products, clip types). */
+  firmLibrary?: SweepLibrary;
 }) {
   const system = useUnitSystem();
   const input = assembly.current.input;
@@ -131,7 +136,7 @@ export function SweepPage({
   };
 
   const start = async () => {
-    const v = validateSweep(input, drafts, system, SWEEP_BROWSER_CAP);
+    const v = validateSweep(input, drafts, system, SWEEP_BROWSER_CAP, firmLibrary);
     const table = sets.find((s) => s.id === setId);
     if (!v.ok) {
       setProblems(v.problems);
@@ -216,7 +221,7 @@ export function SweepPage({
         : [],
     [ran, values, slice, byIndex],
   );
-  const numericAxes = kinds.flatMap((k, i) => (k === 'sealantClass' ? [] : [i]));
+  const numericAxes = values.flatMap((v, i) => (v.every((x) => typeof x === 'number') ? [i] : []));
   const state = sweep.state;
   const running = state.status === 'running';
   const chosenVariant = chosen === null ? undefined : byIndex.get(chosen);
@@ -304,6 +309,7 @@ export function SweepPage({
               assembly={input}
               system={system}
               problems={problems.filter((p) => problemBox(p.field).parameter === i)}
+              library={firmLibrary}
               onChange={(next) => update(i, next)}
               onKind={(kind) => update(i, newDraft(input, kind))}
               onRemove={drafts.length > 1 ? () => setDrafts(drafts.filter((_, j) => j !== i)) : undefined}

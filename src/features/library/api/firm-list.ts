@@ -1,7 +1,7 @@
 import { type QueryKey, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
 import { apiRequest, apiRequestEmpty } from '../../../lib/api';
-import { useApiMutation } from '../../../lib/api-cache';
+import { getQuery, useApiMutation } from '../../../lib/api-cache';
 
 /*
  * A firm's library lists kept one entry at a time (server/routes/firm-library.ts): its own materials and its χ
@@ -13,6 +13,17 @@ type FirmList = 'materials' | 'bridge-values';
 /** The list's address, or one entry's. */
 export const firmLibraryPath = (orgId: string, list: FirmList, itemId?: string) =>
   `/api/organisations/${encodeURIComponent(orgId)}/${list}${itemId ? `/${encodeURIComponent(itemId)}` : ''}`;
+
+/** `GET …/<list>` → the firm's entries (`pick`ed from the answer read with `schema`), kept under `keyOf(orgId)`. */
+export const firmListQuery =
+  <S extends z.ZodType, T>(
+    list: FirmList,
+    keyOf: (orgId: string) => QueryKey,
+    schema: S,
+    pick: (answer: z.output<S>) => T,
+  ) =>
+  (orgId: string) =>
+    getQuery(keyOf(orgId), firmLibraryPath(orgId, list), schema, { pick });
 
 /** `POST …/<list>` → 201 the entry: shown at the end of the cached list at once, the list then fetched again. */
 export function useAddToFirmList<S extends z.ZodType, I>(

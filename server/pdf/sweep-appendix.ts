@@ -16,9 +16,10 @@ const DASHES: (number[] | undefined)[] = [undefined, [1.6, 0.9], undefined, [0.6
 
 const PARAMETER_WORDS: Record<string, string> = {
   insulationThickness: 'insulation thickness',
+  insulationProduct: 'insulation product',
   girtSpacing: 'girt spacing',
   clipSpacing: 'clip spacing',
-  clipChi: 'clip χ',
+  clipChi: 'clip χ (clip type)',
   studSpacing: 'stud spacing',
   panelModule: 'panel module',
   sealantClass: 'sealant class',

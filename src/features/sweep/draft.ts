@@ -143,6 +143,20 @@ export function clipOptions(a: AssemblyInput, values: readonly BridgeValue[] = [
   return [...offered.map(clipEntryOf), ...solved];
 }
 
+/** The layer a product most likely replaces: the homogeneous or framed layer of the lowest λ. */
+function insulationLayer(a: AssemblyInput): number | null {
+  const lambda = (i: number) => {
+    const l = a.thermal.layers[i];
+    if (l?.kind === 'homogeneous') return l.conductivity;
+    return l?.kind === 'framed' ? Math.min(...l.sections.map((s) => s.conductivity)) : Infinity;
+  };
+  const layers = targetsFor(a, 'insulationProduct').map((t) => t.index ?? 0);
+  return layers.reduce<number | null>(
+    (best, i) => (best === null || lambda(i) < lambda(best) ? i : best),
+    null,
+  );
+}
+
 /** Rounds a starting value to 3 significant figures (a starting range reads 50, 100, 150 mm, not 49.999…). */
 const round3 = (v: number) => Number(v.toPrecision(3));
 
@@ -150,7 +164,7 @@ const round3 = (v: number) => Number(v.toPrecision(3));
 export function newDraft(
   a: AssemblyInput,
   kind: SweepParameterKind,
-  target = targetsFor(a, kind)[0]?.index ?? null,
+  target = kind === 'insulationProduct' ? insulationLayer(a) : (targetsFor(a, kind)[0]?.index ?? null),
 ): ParameterDraft {
   const now = currentValue(a, kind, target);
   const base: ParameterDraft = {

@@ -55,14 +55,17 @@ function productPicks(draft: ParameterDraft, library: SweepLibrary, system: Unit
   }));
 }
 
+/** A clip type's identity among the picks: its library entry, else (a solved clip) its name. */
+const clipKey = (e: SweepClipEntry) => e.source?.libraryEntryId ?? e.name;
+
 /** The clip types offered as picks, and the chosen ones no longer offered. */
 function clipPicks(draft: ParameterDraft, offered: SweepClipEntry[], system: UnitSystem): Pick[] {
-  const gone = draft.entries.filter((e) => !offered.some((o) => o.name === e.name));
+  const gone = draft.entries.filter((e) => !offered.some((o) => clipKey(o) === clipKey(e)));
   return [...offered, ...gone].map((e) => ({
-    key: e.name,
+    key: clipKey(e),
     label: e.name,
     detail: `χ ${formatMeasure(e.chi, 'chi', system)} · ${e.source?.computed ? 'solved here' : e.source?.libraryEntryId ? 'firm library' : 'typed'}${e.source ? ` · ${e.source.text}` : ''}`,
-    checked: draft.entries.some((x) => x.name === e.name),
+    checked: draft.entries.some((x) => clipKey(x) === clipKey(e)),
     gone: gone.includes(e),
   }));
 }
@@ -200,8 +203,8 @@ export function ParameterEditor({
               picks={clipPicks(draft, offered, system)}
               error={words(at('entries'))}
               onToggle={(key, checked) => {
-                const e = offered.find((x) => x.name === key);
-                const rest = draft.entries.filter((x) => x.name !== key);
+                const e = offered.find((x) => clipKey(x) === key);
+                const rest = draft.entries.filter((x) => clipKey(x) !== key);
                 onChange({ ...draft, entries: checked && e ? [...rest, e] : rest });
               }}
             />

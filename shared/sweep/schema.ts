@@ -145,6 +145,12 @@ export const sweepCostsSchema = z.object({
     .max(1e6)
     .optional()
     .describe('Insulation: cost per m² of wall per 25 mm of thickness'),
+  insulationProducts: z
+    .record(z.string().min(1).max(120), z.number().min(0).max(1e6))
+    .optional()
+    .describe(
+      'Insulation products by name (the product parameter’s values): cost per m² of wall per 25 mm of each; the product’s layer is priced here, not at `insulation`',
+    ),
   clip: z.number().min(0).max(1e6).optional().describe('Cost per clip'),
   girt: z.number().min(0).max(1e6).optional().describe('Cost per m of girt'),
   sealant: z

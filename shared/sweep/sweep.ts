@@ -32,6 +32,10 @@ export interface SweepAxis {
   /** Ids of the check modules whose input this parameter changes. */
   touches: readonly string[];
   apply(a: Assembly, value: Value): Assembly;
+  /** The layer it varies (insulation thickness or product): the ranking prices and weighs that layer. */
+  layer?: number;
+  /** An insulation product parameter's products (their density weighs the layer). */
+  products?: readonly SweepProduct[];
 }
 
 export interface SweepPlan {
@@ -219,6 +223,7 @@ function planAxis(a: Assembly, p: SweepParameter, at: string, cap: number): Swee
         kind: p.kind,
         values: numericValues(p, at, homogeneousLayerSchema.shape.thickness, cap),
         touches: ['thermal', 'moisture'],
+        layer: p.layer,
         apply: (d, v) => {
           const layer = d.thermal.layers[p.layer]!;
           return {
@@ -263,6 +268,8 @@ function planAxis(a: Assembly, p: SweepParameter, at: string, cap: number): Swee
         kind: p.kind,
         values,
         touches: ['thermal', 'moisture'],
+        layer: p.layer,
+        products: p.products,
         apply: (d, v) => withProduct(d, p.layer, section, product(v)),
       };
     }

@@ -11,6 +11,7 @@ import {
   costUnit,
   draftOfCosts,
   emptyCosts,
+  measureText,
   prefillCosts,
 } from './costs';
 
@@ -134,5 +135,52 @@ describe('costs prefilled from the firm library', () => {
     expect(prefillCosts(typed, [ins], 'SI').insulation).toBe('7');
     const emptied = { ...emptyCosts, from: { insulation: ins.id } };
     expect(prefillCosts(emptied, [ins], 'SI')).toBe(emptied);
+  });
+});
+
+describe('each insulation product’s price', () => {
+  const lib = (name: string, cost: number): SweepCost => ({
+    id: crypto.randomUUID(),
+    kind: 'insulation',
+    name,
+    cost,
+    currency: 'EUR',
+    source: '',
+    notes: '',
+    version: 1,
+    createdAt: '2026-01-01T00:00:00.000Z',
+    updatedAt: '2026-01-01T00:00:00.000Z',
+  });
+
+  it('reads each product’s box into SI by name, and a saved sweep’s prices back into the boxes', () => {
+    // 0.42 per ft² per in is 0.42 / 0.094 389 489 = 4.4496 per m² per 25 mm (derived, as above).
+    const d = { ...emptyCosts, products: { 'Demo PIR board': '0.42', 'Demo slab': '', 'Demo felt': 'x' } };
+    const c = costsOf(d, 'IP');
+    expect(Object.keys(c.insulationProducts!)).toEqual(['Demo PIR board']);
+    expect(c.insulationProducts!['Demo PIR board']).toBeCloseTo(0.42 / 0.0943894886, 6);
+    expect(costsOf(emptyCosts, 'SI').insulationProducts).toBeUndefined();
+    expect(draftOfCosts({ insulationProducts: { 'Demo PIR board': 7 } }, 'SI').products).toEqual({
+      'Demo PIR board': '7',
+    });
+    expect(convertCosts({ ...emptyCosts, products: { a: '7' } }, 'SI', 'IP').products.a).toBe(
+      costBoxText(7, 'insulation', 'IP'),
+    );
+  });
+
+  it('prefills a product’s box from the library entry of the same name, once', () => {
+    const pir = lib('Demo PIR board', 7);
+    const d = prefillCosts(emptyCosts, [lib('Other board', 3), pir], 'SI', ['Demo PIR board', 'Demo slab']);
+    expect(d.products).toEqual({ 'Demo PIR board': '7' });
+    expect(d.from['product Demo PIR board']).toBe(pir.id);
+    const emptied = { ...d, products: { 'Demo PIR board': '' } };
+    expect(prefillCosts(emptied, [pir], 'SI', ['Demo PIR board'])).toBe(emptied);
+  });
+
+  it('shows a ranking’s thickness and weight in the person’s units (1 in = 25.4 mm, 1 lb/ft² = 4.882 428 kg/m²)', () => {
+    // NIST SP 811 (2008) Appendix B.9: 0.1916 m = 191.6 mm = 7.543 in; 26.27 kg/m² = 5.38 lb/ft² (derived).
+    expect(measureText(0.1916, 'thickness', 'SI')).toBe('191.6 mm');
+    expect(measureText(0.1916, 'thickness', 'IP')).toBe('7.54 in');
+    expect(measureText(26.27, 'weight', 'SI')).toBe('26.27 kg/m²');
+    expect(measureText(26.27, 'weight', 'IP')).toBe('5.38 lb/ft²');
   });
 });

@@ -1,8 +1,9 @@
 import { MOVEMENT_CLASSES, type MovementClass } from '@shared/calc/joints/schema';
 import type { CostKind, SweepCost } from '@shared/schemas/sweeps';
-import { PRICE_THICKNESS } from '@shared/sweep/rank';
+import { PRICE_THICKNESS, type RankMeasure } from '@shared/sweep/rank';
 import type { SweepCosts } from '@shared/sweep/schema';
-import { FOOT, INCH, type UnitSystem } from '@shared/units';
+import { FOOT, INCH, QUANTITIES, toShown, type UnitSystem } from '@shared/units';
+import { formatNumber } from '../../lib/quantities';
 
 /*
  * The sweep's costs as a person types them: in their unit system (IP: per ft² per inch, per ft), stored and
@@ -63,18 +64,24 @@ export const slotClass = (slot: CostSlot): MovementClass | undefined =>
 export const entriesFor = (entries: readonly SweepCost[], slot: CostSlot) =>
   entries.filter((e) => e.kind === slotKind(slot) && e.movementClass === slotClass(slot));
 
+/** A box priced per product: the insulation product parameter's value (its name). */
+export type ProductSlot = `product ${string}`;
+
 /** The costs as typed (text, in the person's units), so a box can be empty or wrong without losing it. */
 export interface CostDraft {
   insulation: string;
+  /** Each insulation product's price per area per 25 mm (per ft² per inch in IP), by product name. */
+  products: Record<string, string>;
   clip: string;
   girt: string;
   sealantPerMetre: Partial<Record<MovementClass, string>>;
   sealantMetres: string;
   /** The library entry a box was filled from, by slot (kept when the box is cleared: it is not refilled). */
-  from: Partial<Record<CostSlot, string>>;
+  from: Partial<Record<CostSlot | ProductSlot, string>>;
 }
 export const emptyCosts: CostDraft = {
   insulation: '',
+  products: {},
   clip: '',
   girt: '',
   sealantPerMetre: {},
@@ -118,8 +125,13 @@ export function costsOf(d: CostDraft, system: UnitSystem): SweepCosts {
     }),
   );
   const metres = amount(d.sealantMetres);
+  const products = Object.entries(d.products).flatMap(([name, t]) => {
+    const v = amount(t);
+    return v === undefined ? [] : [[name, costToSI(v, 'insulation', system)] as const];
+  });
   return {
     insulation: slotSI(d, 'insulation', system),
+    insulationProducts: products.length > 0 ? Object.fromEntries(products) : undefined,
     clip: slotSI(d, 'clip', system),
     girt: slotSI(d, 'girt', system),
     sealant:
@@ -135,6 +147,9 @@ export function draftOfCosts(c: SweepCosts | null, system: UnitSystem): CostDraf
   const box = (v: number | undefined, m: CostMeasure) => (v === undefined ? '' : costBoxText(v, m, system));
   return {
     insulation: box(c.insulation, 'insulation'),
+    products: Object.fromEntries(
+      Object.entries(c.insulationProducts ?? {}).map(([name, v]) => [name, box(v, 'insulation')]),
+    ),
     clip: box(c.clip, 'clip'),
     girt: box(c.girt, 'girt'),
     sealantPerMetre: Object.fromEntries(
@@ -155,6 +170,9 @@ export function convertCosts(d: CostDraft, from: UnitSystem, to: UnitSystem): Co
   return {
     ...d,
     insulation: convert(d.insulation, 'insulation'),
+    products: Object.fromEntries(
+      Object.entries(d.products).map(([name, t]) => [name, convert(t, 'insulation')]),
+    ),
     clip: d.clip,
     girt: convert(d.girt, 'girt'),
     sealantPerMetre: Object.fromEntries(
@@ -172,15 +190,37 @@ const SLOTS: CostSlot[] = [
 ];
 
 /**
- * Empty boxes filled from the firm library: the first entry of each slot, unless the box was filled (or
- * emptied) before. The same draft back when nothing changes.
+ * Empty boxes filled from the firm library: the first entry of each slot, and each product's box from the first
+ * insulation entry of the same name, unless the box was filled (or emptied) before. The same draft back when
+ * nothing changes.
  */
-export function prefillCosts(d: CostDraft, entries: readonly SweepCost[], system: UnitSystem): CostDraft {
+export function prefillCosts(
+  d: CostDraft,
+  entries: readonly SweepCost[],
+  system: UnitSystem,
+  products: readonly string[] = [],
+): CostDraft {
   let next = d;
+  for (const name of products) {
+    const entry = entries.find((e) => e.kind === 'insulation' && e.name === name);
+    if (!entry || next.products[name] !== undefined) continue;
+    next = {
+      ...next,
+      products: { ...next.products, [name]: costBoxText(entry.cost, 'insulation', system) },
+      from: { ...next.from, [`product ${name}`]: entry.id },
+    };
+  }
   for (const slot of SLOTS) {
     const entry = entriesFor(entries, slot)[0];
     if (!entry || slotText(next, slot) !== '' || next.from[slot] !== undefined) continue;
     next = withSlot(next, slot, costBoxText(entry.cost, slotKind(slot), system), entry.id);
   }
   return next;
+}
+
+/** A ranking measure's value as shown: wall thickness in mm or in, weight in kg/m² or lb/ft² (shared/units). */
+export function measureText(si: number, measure: Exclude<RankMeasure, 'cost'>, system: UnitSystem): string {
+  const q = measure === 'thickness' ? 'shortLength' : 'massPerArea';
+  const unit = QUANTITIES[q][system];
+  return `${formatNumber(toShown(si, q, system), Math.min(unit.decimals, 2))} ${unit.symbol}`;
 }

@@ -112,6 +112,15 @@ describe('each insulation product at its own price', () => {
     expect(() => variantCost(plan, s.assembly, ['Demo PIR board'], {})).toThrow(
       expect.objectContaining({ field: 'costs.insulationProducts.Demo PIR board' }),
     );
+    // A product's name is never read off an object's prototype (no NaN for a product called "toString").
+    const odd = planSweep(
+      s.assembly,
+      [{ ...byProduct, products: [{ ...products[0]!, name: 'toString' }] }],
+      10,
+    );
+    expect(() => variantCost(odd, s.assembly, ['toString'], prices)).toThrow(
+      expect.objectContaining({ field: 'costs.insulationProducts.toString' }),
+    );
   });
 
   it('ranks two products apart by their own prices', () => {

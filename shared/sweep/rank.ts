@@ -39,8 +39,9 @@ export function variantCost(
   plan.axes.forEach((axis, i) => {
     if (axis.kind === 'insulationProduct') {
       const name = values[i] as string;
+      const prices = costs.insulationProducts ?? {};
       const price = need(
-        costs.insulationProducts?.[name],
+        Object.hasOwn(prices, name) ? prices[name] : undefined, // a product named "toString" is not priced by it
         `costs.insulationProducts.${name}`,
         `the insulation product (${name})`,
       );

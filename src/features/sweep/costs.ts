@@ -95,6 +95,10 @@ export const slotText = (d: CostDraft, slot: CostSlot): string => {
   return cls ? (d.sealantPerMetre[cls] ?? '') : d[slot as 'insulation' | 'clip' | 'girt'];
 };
 
+/** A product box's text; undefined when never filled (a product may be named "toString"). */
+export const productText = (d: CostDraft, name: string) =>
+  Object.hasOwn(d.products, name) ? d.products[name] : undefined;
+
 /** The draft with a slot's text (and where it came from) set. */
 export function withSlot(d: CostDraft, slot: CostSlot, text: string, from?: string): CostDraft {
   const cls = slotClass(slot);
@@ -203,7 +207,7 @@ export function prefillCosts(
   let next = d;
   for (const name of products) {
     const entry = entries.find((e) => e.kind === 'insulation' && e.name === name);
-    if (!entry || next.products[name] !== undefined) continue;
+    if (!entry || productText(next, name) !== undefined) continue;
     next = {
       ...next,
       products: { ...next.products, [name]: costBoxText(entry.cost, 'insulation', system) },

@@ -22,6 +22,7 @@ import {
   costUnit,
   measureText,
   prefillCosts,
+  productText,
   slotText,
   withSlot,
 } from '../costs';
@@ -168,7 +169,7 @@ export function CostRanking({
               <TextInput
                 {...c}
                 inputMode="decimal"
-                value={draft.products[name] ?? ''}
+                value={productText(draft, name) ?? ''}
                 onChange={(e) =>
                   onDraft({ ...draft, products: { ...draft.products, [name]: e.target.value } })
                 }

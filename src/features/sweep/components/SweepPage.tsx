@@ -509,7 +509,7 @@ export function SweepPage({
 
           <section aria-labelledby="sweep-cost-heading" className="flex flex-col gap-3">
             <h4 id="sweep-cost-heading" className="font-semibold">
-              Cheapest passing variants
+              Leanest passing variants: cost, thickness or weight
             </h4>
             <CostRanking
               plan={ran.plan}

@@ -30,6 +30,33 @@ describe('sweep API', () => {
     expect((await post(withoutCosts)).body.ranking).toBeNull();
   });
 
+  it('prices each insulation product on its own, and refuses one without a price (422 at its field)', async () => {
+    // Invented demo products and prices; the demo wall's layer 3 is 100 mm: 7 × 4 = 28 and 5 × 4 = 20 (derived).
+    const products = [
+      { name: 'Demo PIR board', conductivity: 0.022, vapourResistanceFactor: 60, source: 'Demo (invented)' },
+      { name: 'Demo slab', conductivity: 0.034, vapourResistanceFactor: 1.3, source: 'Demo (invented)' },
+    ];
+    const body = (insulationProducts: Record<string, number>) => ({
+      ...demoSweep(),
+      parameters: [{ kind: 'insulationProduct', layer: 3, products }],
+      costs: { insulationProducts },
+    });
+    const res = await post(body({ 'Demo PIR board': 7, 'Demo slab': 5 }));
+    expect(res.status).toBe(200);
+    const costOf = Object.fromEntries(
+      res.body.ranking.ranked.map((r: { values: string[]; cost: number }) => [r.values[0], r.cost]),
+    );
+    expect(res.body.ranking.ranked.map((r: { values: string[] }) => r.values[0])).toEqual([
+      'Demo slab',
+      'Demo PIR board',
+    ]);
+    expect(costOf['Demo slab']).toBeCloseTo(20, 9);
+    expect(costOf['Demo PIR board']).toBeCloseTo(28, 9);
+    const unpriced = await post(body({ 'Demo PIR board': 7 }));
+    expect(unpriced.status).toBe(422);
+    expect(Object.keys(unpriced.body.error.fields)).toEqual(['costs.insulationProducts.Demo slab']);
+  });
+
   it('refuses a zero step (422) and a parameter the assembly lacks (422), naming the field', async () => {
     const s = demoSweep();
     const zero = await post({

@@ -103,21 +103,22 @@ describe('a change of unit system keeps the costs', () => {
   });
 });
 
-describe('costs prefilled from the firm library', () => {
-  const entry = (over: Partial<SweepCost>): SweepCost => ({
-    id: crypto.randomUUID(),
-    kind: 'insulation',
-    name: 'Board (example)',
-    cost: 4.5,
-    currency: 'EUR',
-    source: '',
-    notes: '',
-    version: 1,
-    createdAt: '2026-01-01T00:00:00.000Z',
-    updatedAt: '2026-01-01T00:00:00.000Z',
-    ...over,
-  });
+/** A firm library cost entry (invented demo values), with what a test changes. */
+const entry = (over: Partial<SweepCost>): SweepCost => ({
+  id: crypto.randomUUID(),
+  kind: 'insulation',
+  name: 'Board (example)',
+  cost: 4.5,
+  currency: 'EUR',
+  source: '',
+  notes: '',
+  version: 1,
+  createdAt: '2026-01-01T00:00:00.000Z',
+  updatedAt: '2026-01-01T00:00:00.000Z',
+  ...over,
+});
 
+describe('costs prefilled from the firm library', () => {
   it('fills empty boxes with the first entry of each kind (a sealant price by its class), in the person’s units', () => {
     const ins = entry({});
     const girt = entry({ kind: 'girt', cost: 10 });
@@ -139,18 +140,7 @@ describe('costs prefilled from the firm library', () => {
 });
 
 describe('each insulation product’s price', () => {
-  const lib = (name: string, cost: number): SweepCost => ({
-    id: crypto.randomUUID(),
-    kind: 'insulation',
-    name,
-    cost,
-    currency: 'EUR',
-    source: '',
-    notes: '',
-    version: 1,
-    createdAt: '2026-01-01T00:00:00.000Z',
-    updatedAt: '2026-01-01T00:00:00.000Z',
-  });
+  const lib = (name: string, cost: number) => entry({ name, cost });
 
   it('reads each product’s box into SI by name, and a saved sweep’s prices back into the boxes', () => {
     // 0.42 per ft² per in is 0.42 / 0.094 389 489 = 4.4496 per m² per 25 mm (derived, as above).

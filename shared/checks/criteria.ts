@@ -88,6 +88,11 @@ const resistance = (label: string, description: string, metric: MetricKey): Crit
   range: { min: 0, max: 30, minExclusive: true },
   decimals: { SI: 2, IP: 1 },
 });
+/** A unit written and rounded alike in both systems (a pure number, %, L/x). */
+const sameInBoth = (symbol: string, toSI: number, decimals: number) => ({
+  display: { SI: { symbol, toSI }, IP: { symbol, toSI } },
+  decimals: { SI: decimals, IP: decimals },
+});
 
 /**
  * The closed list of criterion types. A firm enters the values its adopted code requires; Skinwright
@@ -140,10 +145,9 @@ export const CRITERION_TYPES = {
     kind: 'boolean',
     metric: 'driesOut',
     unit: '',
-    display: { SI: { symbol: '', toSI: 1 }, IP: { symbol: '', toSI: 1 } },
+    ...sameInBoth('', 1, 0),
     accepts: { '': 1 },
     range: { min: 0, max: 1 },
-    decimals: { SI: 0, IP: 0 },
   },
   max_surface_rh: {
     label: 'Maximum interior surface RH',
@@ -153,10 +157,9 @@ export const CRITERION_TYPES = {
     kind: 'number',
     metric: 'maxSurfaceRh',
     unit: 'fraction',
-    display: { SI: { symbol: '%', toSI: 0.01 }, IP: { symbol: '%', toSI: 0.01 } },
+    ...sameInBoth('%', 0.01, 1),
     accepts: { '': 1, fraction: 1, '%': 0.01 },
     range: { min: 0, max: 1, minExclusive: true },
-    decimals: { SI: 1, IP: 1 },
   },
   min_deflection_limit: {
     label: 'Minimum deflection limit (L/x)',
@@ -166,10 +169,9 @@ export const CRITERION_TYPES = {
     kind: 'number',
     metric: 'deflectionLimit',
     unit: 'L/x',
-    display: { SI: { symbol: 'L/x', toSI: 1 }, IP: { symbol: 'L/x', toSI: 1 } },
+    ...sameInBoth('L/x', 1, 0),
     accepts: { '': 1, 'l/x': 1 },
     range: { min: 1, max: 5000 },
-    decimals: { SI: 0, IP: 0 },
   },
   min_sealant_movement_class: {
     label: 'Minimum sealant movement class',
@@ -179,10 +181,9 @@ export const CRITERION_TYPES = {
     kind: 'number',
     metric: 'minSealantMovementClass',
     unit: '%',
-    display: { SI: { symbol: '%', toSI: 1 }, IP: { symbol: '%', toSI: 1 } },
+    ...sameInBoth('%', 1, 1),
     accepts: { '': 1, '%': 1 },
     range: { min: 0, max: 100, minExclusive: true },
-    decimals: { SI: 1, IP: 1 },
   },
 } as const satisfies Record<string, CriterionSpec>;
 

@@ -1,6 +1,6 @@
 import { CalcInputError } from '../calc/errors';
 import type { TraceStep } from '../calc/trace';
-import { type EngineMessage, engineMessage } from '../format/message-schema';
+import { type EngineMessage, engineMessage, type StoredMessage } from '../format/message-schema';
 import type { AssemblyInput } from '../schemas/assembly';
 import { applicableRows, type CriteriaRowInput, criterionSpec, type MetricKey } from './criteria';
 import type { CheckInput, ProjectForChecks } from './inputs';
@@ -37,29 +37,16 @@ export interface ModuleRun {
   /** The module's own checks (or one `not_evaluated` check when it could not run). */
   checks: Check[];
   trace: TraceStep[];
-  cautions: string[];
+  cautions: StoredMessage[];
 }
 
 /** A module that did not run: every metric it provides with the reason, and its one `not_evaluated` check. */
 function notRun(module: CheckModule, outcome: ModuleOutcome, reason: EngineMessage): ModuleRun {
   const run: ModuleRun = { module, outcome, metrics: new Map(), checks: [], trace: [], cautions: [] };
   for (const key of module.provides) run.metrics.set(key, { value: null, reason });
-  run.checks.push({
-    id: `${module.id}.run`,
-    source: 'module',
-    criterion: 'run',
-    label: module.label,
-    required: null,
-    provided: null,
-    unit: '',
-    direction: null,
-    margin: null,
-    marginRatio: null,
-    status: 'not_evaluated',
-    reason,
-    module: module.id,
-    traceStepIds: [],
-  });
+  run.checks.push(
+    notEvaluated(unmeasured(`${module.id}.run`, 'module', 'run', module.label), module.id, reason),
+  );
   return run;
 }
 
@@ -116,12 +103,13 @@ export function runModule(
   };
 }
 
-/** A criterion's check that could not be evaluated, with the module it waits for and why. */
+/** What a check is about before anything is measured: its id, source, criterion, label, requirement, unit. */
 type CriterionBase = Omit<
   Check,
   'provided' | 'margin' | 'marginRatio' | 'status' | 'reason' | 'module' | 'traceStepIds' | 'method'
 >;
 
+/** A check that could not be evaluated, with the module it waits for and why. */
 const notEvaluated = (base: CriterionBase, module: string, reason: Check['reason']): Check => ({
   ...base,
   provided: null,
@@ -132,6 +120,14 @@ const notEvaluated = (base: CriterionBase, module: string, reason: Check['reason
   module,
   traceStepIds: [],
 });
+
+/** The head of a check with no requirement to measure against (a module that did not run, no rows). */
+const unmeasured = (
+  id: string,
+  source: Check['source'],
+  criterion: string,
+  label: string,
+): CriterionBase => ({ id, source, criterion, label, required: null, unit: '', direction: null });
 
 /** A yes/no criterion the table sets to "no", with the metric's note (a note stored as words is kept as such). */
 const notRequired = (note: Metric['note'] | null): Check['reason'] =>
@@ -215,22 +211,13 @@ export function checksOf(
   const metrics = metricsOf(runs);
   const criteriaChecks = applicable.map((row) => criterionCheck(row, metrics));
   if (applicable.length === 0)
-    criteriaChecks.push({
-      id: 'criteria.none',
-      source: 'criteria',
-      criterion: 'rows',
-      label: 'Rows of the code table for this wall',
-      required: null,
-      provided: null,
-      unit: '',
-      direction: null,
-      margin: null,
-      marginRatio: null,
-      status: 'not_evaluated',
-      reason: engineMessage('no_matching_rows', '', { climateZone, wallCategory }),
-      module: '—',
-      traceStepIds: [],
-    });
+    criteriaChecks.push(
+      notEvaluated(
+        unmeasured('criteria.none', 'criteria', 'rows', 'Rows of the code table for this wall'),
+        '—',
+        engineMessage('no_matching_rows', '', { climateZone, wallCategory }),
+      ),
+    );
   const moduleChecks = runs.flatMap((run) => run.checks);
   return { metrics, criteriaChecks, moduleChecks, checks: [...criteriaChecks, ...moduleChecks] };
 }
@@ -281,6 +268,10 @@ export function runChecks(
     criteriaVerdict: verdictOf(criteriaChecks),
     moduleVerdict: verdictOf(moduleChecks),
     steps: [...referenced.values()],
-    cautions: [...new Set([...runs.flatMap((r) => r.cautions), ...RUN_CAUTIONS])],
+    cautions: [
+      ...new Map(
+        [...runs.flatMap((r) => r.cautions), ...RUN_CAUTIONS].map((c) => [JSON.stringify(c), c]),
+      ).values(),
+    ],
   };
 }

@@ -94,6 +94,21 @@ function checkBounds(v: number, field: string, bounds: Bounds) {
 const replaceAt = <T>(list: readonly T[], i: number, item: T): T[] =>
   list.map((x, j) => (j === i ? item : x));
 
+type Layer = Assembly['thermal']['layers'][number];
+type Bridge = Assembly['thermal']['bridges'][number];
+
+/** The assembly with thermal layer `i` replaced (the rest of the document shared). */
+const withLayer = (d: Assembly, i: number, layer: Layer): Assembly => ({
+  ...d,
+  thermal: { ...d.thermal, layers: replaceAt(d.thermal.layers, i, layer) },
+});
+
+/** The assembly with thermal bridge `i` replaced. */
+const withBridge = (d: Assembly, i: number, bridge: Bridge): Assembly => ({
+  ...d,
+  thermal: { ...d.thermal, bridges: replaceAt(d.thermal.bridges, i, bridge) },
+});
+
 /** The layer at `index`, refused when there is none or it is not one of `kinds`. */
 function layerAt(a: Assembly, index: number, field: string, kinds: readonly string[], what: string) {
   const layer = a.thermal.layers[index];
@@ -187,8 +202,7 @@ function withProduct(d: Assembly, i: number, section: number, m: SweepProduct): 
   }
   const mu = m.vapourResistanceFactor;
   return {
-    ...d,
-    thermal: { ...d.thermal, layers: replaceAt(d.thermal.layers, i, next) },
+    ...withLayer(d, i, next),
     vapour: d.vapour && replaceAt(d.vapour, i, mu === undefined ? null : { kind: 'mu' as const, mu }),
   };
 }
@@ -199,13 +213,7 @@ function withClip(d: Assembly, i: number, e: SweepClipEntry): Assembly {
   if (b.kind !== 'point') return d;
   const { source: _old, ...bridge } = b;
   const next = { ...bridge, name: e.name, chi: e.chi, ...(e.source ? { source: e.source } : {}) };
-  return {
-    ...d,
-    thermal: {
-      ...d.thermal,
-      bridges: replaceAt(d.thermal.bridges, i, next as Assembly['thermal']['bridges'][number]),
-    },
-  };
+  return withBridge(d, i, next as Bridge);
 }
 
 /** One parameter planned against the assembly: every refusal of a parameter the assembly does not have. */
@@ -224,16 +232,7 @@ function planAxis(a: Assembly, p: SweepParameter, at: string, cap: number): Swee
         values: numericValues(p, at, homogeneousLayerSchema.shape.thickness, cap),
         touches: ['thermal', 'moisture'],
         layer: p.layer,
-        apply: (d, v) => {
-          const layer = d.thermal.layers[p.layer]!;
-          return {
-            ...d,
-            thermal: {
-              ...d.thermal,
-              layers: replaceAt(d.thermal.layers, p.layer, { ...layer, thickness: v as number }),
-            },
-          };
-        },
+        apply: (d, v) => withLayer(d, p.layer, { ...d.thermal.layers[p.layer]!, thickness: v as number }),
       };
     }
     case 'insulationProduct': {
@@ -322,16 +321,7 @@ function planAxis(a: Assembly, p: SweepParameter, at: string, cap: number): Swee
         kind: p.kind,
         values: numericValues(p, at, pointBridgeBySpacingSchema.shape.chi, cap),
         touches: ['thermal'],
-        apply: (d, v) => {
-          const bridge = d.thermal.bridges[p.bridge]!;
-          return {
-            ...d,
-            thermal: {
-              ...d.thermal,
-              bridges: replaceAt(d.thermal.bridges, p.bridge, { ...bridge, chi: v } as typeof bridge),
-            },
-          };
-        },
+        apply: (d, v) => withBridge(d, p.bridge, { ...d.thermal.bridges[p.bridge]!, chi: v } as Bridge),
       };
     }
     case 'studSpacing': {
@@ -368,13 +358,7 @@ function planAxis(a: Assembly, p: SweepParameter, at: string, cap: number): Swee
           );
           const rest = 1 - scaled.reduce((sum, s, j) => (j === cavity ? sum : sum + s.fraction), 0);
           const sections = scaled.map((s, j) => (j === cavity ? { ...s, fraction: rest } : s));
-          return {
-            ...d,
-            thermal: {
-              ...d.thermal,
-              layers: replaceAt(d.thermal.layers, p.layer, { ...l, spacing: v as number, sections }),
-            },
-          };
+          return withLayer(d, p.layer, { ...l, spacing: v as number, sections });
         },
       };
     }

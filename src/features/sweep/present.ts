@@ -81,6 +81,16 @@ export interface Slice {
   held: number[];
 }
 
+/** A slice as the chart and the pass/fail map draw it: its variants by [line][across] and the sweep's axes. */
+export interface DrawnSlice {
+  grid: (SweepVariantResult | undefined)[][];
+  kinds: SweepParameterKind[];
+  values: Value[][];
+  across: number;
+  lines: number | null;
+  system: UnitSystem;
+}
+
 /**
  * The variants of a slice, by [line][across] (one line when none is chosen); undefined where a variant has not
  * come back yet.

@@ -142,8 +142,24 @@ export function CheckReportView({ run, system }: { run: CheckRun; system: UnitSy
   const report = run.outputs;
   const set = run.inputs.criteriaSet;
   const labels = set.categoryLabels as Record<string, string>;
-  const criteria = report.checks.filter((c) => c.source === 'criteria');
-  const modules = report.checks.filter((c) => c.source === 'module');
+  // The report's two halves, each a verdict line and a table: against the code table, the modules' design checks.
+  const part = (id: string, source: Check['source'], verdict: Verdict, label: string, caption: string) => ({
+    id,
+    verdict,
+    label,
+    caption,
+    checks: report.checks.filter((c) => c.source === source),
+  });
+  const parts = [
+    part('criteria', 'criteria', report.criteriaVerdict, 'Against the code table', 'Against the code table'),
+    part(
+      'modules',
+      'module',
+      report.moduleVerdict,
+      'Design checks (wind, joints, surface)',
+      'Design checks of the modules',
+    ),
+  ];
   const steps = new Map(report.steps.map((s) => [s.id, s]));
   return (
     <article aria-labelledby={`run-${run.id}`} className="flex flex-col gap-6">
@@ -170,34 +186,27 @@ export function CheckReportView({ run, system }: { run: CheckRun; system: UnitSy
           verdict={report.verdict}
           detail={`${VERDICT_TEXT[report.verdict].sentence} (${counts(report.checks)})`}
         />
-        <VerdictLine
-          testId="verdict-criteria"
-          label="Against the code table"
-          verdict={report.criteriaVerdict}
-          detail={counts(criteria)}
-        />
-        <VerdictLine
-          testId="verdict-modules"
-          label="Design checks (wind, joints, surface)"
-          verdict={report.moduleVerdict}
-          detail={counts(modules)}
-        />
+        {parts.map((p) => (
+          <VerdictLine
+            key={p.id}
+            testId={`verdict-${p.id}`}
+            label={p.label}
+            verdict={p.verdict}
+            detail={counts(p.checks)}
+          />
+        ))}
       </dl>
 
-      <CheckTable
-        caption="Against the code table"
-        checks={criteria}
-        labels={labels}
-        system={system}
-        steps={steps}
-      />
-      <CheckTable
-        caption="Design checks of the modules"
-        checks={modules}
-        labels={labels}
-        system={system}
-        steps={steps}
-      />
+      {parts.map((p) => (
+        <CheckTable
+          key={p.id}
+          caption={p.caption}
+          checks={p.checks}
+          labels={labels}
+          system={system}
+          steps={steps}
+        />
+      ))}
 
       <section
         aria-labelledby={`cautions-${run.id}`}

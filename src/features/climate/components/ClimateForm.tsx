@@ -10,6 +10,7 @@ import { Link } from 'react-router';
 import { Field } from '../../../components/ui/Field';
 import { FormSaveBar } from '../../../components/ui/FormSaveBar';
 import { Notice } from '../../../components/ui/Notice';
+import { NotSaved } from '../../../components/ui/NotSaved';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TableScroller } from '../../../components/ui/Table';
@@ -156,13 +157,7 @@ export function ClimateForm({
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-8" aria-label="Monthly climate">
-      {formError ? (
-        <Notice tone="caution" title="Not saved." live>
-          {formError.map((m) => (
-            <p key={m}>{m}</p>
-          ))}
-        </Notice>
-      ) : null}
+      <NotSaved reasons={formError} />
 
       <fieldset className="border-t border-ink pt-3">
         <legend className="pr-3 font-serif text-lg font-semibold">Where the values come from</legend>

@@ -1,5 +1,5 @@
 import { saturationPressureIso13788 } from '@shared/calc/moisture/psychrometrics';
-import type { Project } from '@shared/schemas/project';
+import type { Project, ProjectClimate } from '@shared/schemas/project';
 import type { ReactNode } from 'react';
 import { Notice } from '../../../components/ui/Notice';
 import { TableScroller } from '../../../components/ui/Table';
@@ -77,55 +77,62 @@ export function ClimateSummary({ project, actions }: { project: Project; actions
               </tr>
             </thead>
             <tbody className="num">
-              <tr>
-                <th
-                  scope="row"
-                  className="border-b border-rule px-2 py-1.5 text-left font-sans font-normal whitespace-nowrap"
-                >
-                  θ_e ({unitOf('temperature', system)})
-                </th>
-                {c.months.map((m, k) => (
-                  <td key={MONTH_NAMES[k]} className="border-b border-rule px-2 py-1.5 text-right">
-                    {t(m.exteriorTemperature)}
-                  </td>
-                ))}
-              </tr>
-              <tr>
-                <th
-                  scope="row"
-                  className="border-b border-rule px-2 py-1.5 text-left font-sans font-normal whitespace-nowrap"
-                >
-                  φ_e (%)
-                </th>
-                {c.months.map((m, k) => (
-                  <td key={MONTH_NAMES[k]} className="border-b border-rule px-2 py-1.5 text-right">
-                    {Math.round(m.exteriorRelativeHumidity * 100)}
-                  </td>
-                ))}
-              </tr>
-              <tr>
-                <th
-                  scope="row"
-                  className="border-b border-rule px-2 py-1.5 text-left font-sans font-normal whitespace-nowrap"
-                >
-                  p_e (Pa)
-                </th>
-                {c.months.map((m, k) => (
-                  <td
-                    key={MONTH_NAMES[k]}
-                    className="border-b border-rule px-2 py-1.5 text-right text-ink-muted"
-                  >
-                    {(m.exteriorRelativeHumidity * saturationPressureIso13788(m.exteriorTemperature)).toFixed(
-                      0,
-                    )}
-                  </td>
-                ))}
-              </tr>
+              <MonthRow
+                head={<>θ_e ({unitOf('temperature', system)})</>}
+                months={c.months}
+                cell={(m) => t(m.exteriorTemperature)}
+              />
+              <MonthRow
+                head="φ_e (%)"
+                months={c.months}
+                cell={(m) => Math.round(m.exteriorRelativeHumidity * 100)}
+              />
+              <MonthRow
+                head="p_e (Pa)"
+                months={c.months}
+                cell={(m) =>
+                  (m.exteriorRelativeHumidity * saturationPressureIso13788(m.exteriorTemperature)).toFixed(0)
+                }
+                muted
+              />
             </tbody>
           </table>
         </TableScroller>
       ) : null}
       {actions ? <div className="flex flex-wrap items-center gap-3">{actions}</div> : null}
     </div>
+  );
+}
+
+/** One quantity of the monthly means: its symbol and unit, then a cell per month (January first). */
+function MonthRow({
+  head,
+  months,
+  cell,
+  muted = false,
+}: {
+  head: ReactNode;
+  months: ProjectClimate['months'];
+  cell: (m: ProjectClimate['months'][number]) => ReactNode;
+  /** Derived from the others (drawn quieter). */
+  muted?: boolean;
+}) {
+  return (
+    <tr>
+      <th
+        scope="row"
+        className="border-b border-rule px-2 py-1.5 text-left font-sans font-normal whitespace-nowrap"
+      >
+        {head}
+      </th>
+      {months.map((m, k) => (
+        <td
+          key={MONTH_NAMES[k]}
+          className={`border-b border-rule px-2 py-1.5 text-right${muted ? ' text-ink-muted' : ''}`}
+        >
+          {cell(m)}
+        </td>
+      ))}
+    </tr>
   );
 }

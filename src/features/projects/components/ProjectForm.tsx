@@ -5,7 +5,7 @@ import { Controller, useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field } from '../../../components/ui/Field';
 import { FormSaveBar } from '../../../components/ui/FormSaveBar';
-import { Notice } from '../../../components/ui/Notice';
+import { NotSaved } from '../../../components/ui/NotSaved';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
 import { TextArea, TextInput } from '../../../components/ui/TextInput';
@@ -121,13 +121,7 @@ export function ProjectForm({
 
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-8" aria-label="Project and site data">
-      {formError ? (
-        <Notice tone="caution" title="Not saved." live>
-          {formError.map((m) => (
-            <p key={m}>{m}</p>
-          ))}
-        </Notice>
-      ) : null}
+      <NotSaved reasons={formError} />
 
       <fieldset className={fieldset}>
         <legend className={legend}>Project</legend>

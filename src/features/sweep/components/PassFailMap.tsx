@@ -1,9 +1,7 @@
 import { VERDICT_WORDS } from '@shared/format';
-import type { SweepParameterKind, SweepVariantResult } from '@shared/sweep/schema';
-import type { UnitSystem } from '@shared/units';
 import { memo } from 'react';
 import { KIND_LABELS } from '../draft';
-import { spread, valueText } from '../present';
+import { type DrawnSlice, spread, valueText } from '../present';
 
 /** Most rows and columns drawn: a larger sweep shows evenly spread values (the table below has every variant). */
 const MAP_MAX = 24;
@@ -14,21 +12,8 @@ const TONE = { pass: 'text-meets', fail: 'text-caution', incomplete: 'text-warni
  * Pass or fail of every variant of two parameters (the others held): a row per value of one, a column per
  * value of the other, each cell its glyph and the verdict's word for screen readers.
  */
-export const PassFailMap = memo(function PassFailMap({
-  grid,
-  kinds,
-  values,
-  across,
-  lines,
-  system,
-}: {
-  grid: (SweepVariantResult | undefined)[][];
-  kinds: SweepParameterKind[];
-  values: (number | string)[][];
-  across: number;
-  lines: number | null;
-  system: UnitSystem;
-}) {
+export const PassFailMap = memo(function PassFailMap({ slice }: { slice: DrawnSlice }) {
+  const { grid, kinds, values, across, lines, system } = slice;
   const rowLabel = (l: number) =>
     lines === null ? 'Verdict' : valueText(kinds[lines]!, values[lines]![l]!, system);
   const rows = spread(grid.length, MAP_MAX);

@@ -10,6 +10,7 @@ import { errorMessage } from '../../../lib/api';
 import { formatDateTime } from '../../../lib/format';
 import { useCheckRuns } from '../../checks/api/get-check-runs';
 import { sheetPdfUrl } from '../../sheets/components/SheetLink';
+import { SweepSection } from './SweepSection';
 
 /**
  * A saved sweep printed as the appendix of a compliance sheet: the sheet is a check run's, so the person picks
@@ -36,10 +37,7 @@ export function PrintSweep({
   const run = list.find((r) => r.id === runId) ?? list[0];
   const checksPath = `/projects/${encodeURIComponent(assembly.projectId)}/assemblies/${encodeURIComponent(assembly.id)}/checks`;
   return (
-    <section aria-labelledby="sweep-print-heading" className="flex flex-col gap-3">
-      <h4 id="sweep-print-heading" className="font-semibold">
-        Print a sweep on the compliance sheet
-      </h4>
+    <SweepSection id="sweep-print-heading" title="Print a sweep on the compliance sheet">
       <p className="max-w-prose text-sm text-ink-muted">
         A saved sweep prints as an appendix (its chart and cheapest variants) of the compliance sheet of one
         check run of this assembly. The sheet still certifies only the assembly as checked.
@@ -97,6 +95,6 @@ export function PrintSweep({
           </a>
         </>
       )}
-    </section>
+    </SweepSection>
   );
 }

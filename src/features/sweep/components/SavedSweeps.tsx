@@ -13,6 +13,7 @@ import { useSaveSweep } from '../api/save-sweep';
 import { PrintSweep } from './PrintSweep';
 import { SweepComparison } from './SweepComparison';
 import { resultText, StaleMark } from './SweepFacts';
+import { SweepSection } from './SweepSection';
 
 /** What the page's finished run would save, or why there is nothing to save. */
 export type ToSave = { body: SweepSave } | { reason: string };
@@ -105,10 +106,7 @@ export function SavedSweeps({
         </p>
       )}
 
-      <section aria-labelledby="saved-sweeps-heading" className="flex flex-col gap-2">
-        <h4 id="saved-sweeps-heading" className="font-semibold">
-          Saved sweeps of this assembly
-        </h4>
+      <SweepSection id="saved-sweeps-heading" title="Saved sweeps of this assembly" tight>
         {list.isPending ? (
           <p className="text-sm text-ink-muted">Loading the saved sweeps…</p>
         ) : list.isError ? (
@@ -140,7 +138,7 @@ export function SavedSweeps({
             ))}
           </ul>
         )}
-      </section>
+      </SweepSection>
 
       {sweeps.length > 1 ? (
         <SweepComparison assemblyId={assembly.id} sweeps={sweeps} system={system} />

@@ -1,10 +1,8 @@
-import type { SweepParameterKind, SweepVariantResult } from '@shared/sweep/schema';
-import type { UnitSystem } from '@shared/units';
 import { memo } from 'react';
 import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, Tooltip, XAxis, YAxis } from 'recharts';
 import { formatNumber } from '../../../lib/quantities';
 import { KIND_LABELS, measureOf } from '../draft';
-import { type DrawnCheck, providedOf, shownValue, spread, valueText } from '../present';
+import { type DrawnCheck, type DrawnSlice, providedOf, shownValue, spread, valueText } from '../present';
 
 const INK = '#1e1c19';
 const RULE = '#c8bead';
@@ -27,23 +25,13 @@ const MONO = { fontSize: 11, fontFamily: 'IBM Plex Mono, monospace' };
  * six, spread over its values), the others held; the limit drawn as a line and named.
  */
 export const SweepChart = memo(function SweepChart({
-  grid,
-  kinds,
-  values,
-  across,
-  lines,
+  slice,
   check,
-  system,
 }: {
-  /** The slice's variants by [line][across]. */
-  grid: (SweepVariantResult | undefined)[][];
-  kinds: SweepParameterKind[];
-  values: (number | string)[][];
-  across: number;
-  lines: number | null;
+  slice: DrawnSlice;
   check: DrawnCheck;
-  system: UnitSystem;
 }) {
+  const { grid, kinds, values, across, lines, system } = slice;
   const xKind = kinds[across]!;
   const shownLines = spread(grid.length, STROKES.length);
   const lineName = (l: number) =>

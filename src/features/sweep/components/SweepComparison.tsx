@@ -9,6 +9,7 @@ import { errorMessage } from '../../../lib/api';
 import { formatDateTime } from '../../../lib/format';
 import { useSweepComparison } from '../api/compare-sweeps';
 import { resultText, StaleMark } from './SweepFacts';
+import { SweepSection } from './SweepSection';
 
 /** Two saved sweeps side by side (the server's comparison): what each ran on and found, and what changed. */
 export function SweepComparison({
@@ -49,10 +50,7 @@ export function SweepComparison({
       </tr>
     ) : null;
   return (
-    <section aria-labelledby="sweep-compare-heading" className="flex flex-col gap-3">
-      <h4 id="sweep-compare-heading" className="font-semibold">
-        Compare two saved sweeps
-      </h4>
+    <SweepSection id="sweep-compare-heading" title="Compare two saved sweeps">
       <div className="flex flex-wrap gap-3">
         {pick('Earlier', from, setFrom)}
         {pick('Later', to, setTo)}
@@ -104,6 +102,6 @@ export function SweepComparison({
           </div>
         </>
       )}
-    </section>
+    </SweepSection>
   );
 }

@@ -49,6 +49,7 @@ import { SweepChart } from './SweepChart';
 import { resultText } from './SweepFacts';
 import { SweepProgress } from './SweepProgress';
 import { SweepResultsTable } from './SweepResultsTable';
+import { SweepSection } from './SweepSection';
 
 /** What a started sweep ran on: kept with its results, so later edits of the form or the assembly do not mix in. */
 interface Ran {
@@ -220,6 +221,10 @@ export function SweepPage({
           )
         : [],
     [ran, values, slice, byIndex],
+  );
+  const drawnSlice = useMemo(
+    () => ({ grid, kinds, values, across: slice.across, lines: slice.lines, system }),
+    [grid, kinds, values, slice, system],
   );
   const numericAxes = values.flatMap((v, i) => (v.every((x) => typeof x === 'number') ? [i] : []));
   const state = sweep.state;
@@ -404,10 +409,7 @@ export function SweepPage({
           </div>
 
           {check && numericAxes.length > 0 ? (
-            <section aria-labelledby="sweep-chart-heading" className="flex flex-col gap-3">
-              <h4 id="sweep-chart-heading" className="font-semibold">
-                Chart and pass/fail map
-              </h4>
+            <SweepSection id="sweep-chart-heading" title="Chart and pass/fail map">
               <div className="flex flex-wrap gap-3">
                 <Field label="Figure" className="min-w-48">
                   {(c) => (
@@ -485,32 +487,12 @@ export function SweepPage({
                   ),
                 )}
               </div>
-              {numericAxes.includes(slice.across) ? (
-                <SweepChart
-                  grid={grid}
-                  kinds={kinds}
-                  values={values}
-                  across={slice.across}
-                  lines={slice.lines}
-                  check={check}
-                  system={system}
-                />
-              ) : null}
-              <PassFailMap
-                grid={grid}
-                kinds={kinds}
-                values={values}
-                across={slice.across}
-                lines={slice.lines}
-                system={system}
-              />
-            </section>
+              {numericAxes.includes(slice.across) ? <SweepChart slice={drawnSlice} check={check} /> : null}
+              <PassFailMap slice={drawnSlice} />
+            </SweepSection>
           ) : null}
 
-          <section aria-labelledby="sweep-cost-heading" className="flex flex-col gap-3">
-            <h4 id="sweep-cost-heading" className="font-semibold">
-              Leanest passing variants: cost, thickness or weight
-            </h4>
+          <SweepSection id="sweep-cost-heading" title="Leanest passing variants: cost, thickness or weight">
             <CostRanking
               plan={ran.plan}
               assembly={ran.assembly.current.input}
@@ -522,12 +504,9 @@ export function SweepPage({
               onChoose={choose}
               library={library}
             />
-          </section>
+          </SweepSection>
 
-          <section aria-labelledby="sweep-table-heading" className="flex flex-col gap-3">
-            <h4 id="sweep-table-heading" className="font-semibold">
-              Every variant
-            </h4>
+          <SweepSection id="sweep-table-heading" title="Every variant">
             <SweepResultsTable
               variants={variants}
               kinds={kinds}
@@ -537,7 +516,7 @@ export function SweepPage({
               chosen={chosen}
               onChoose={choose}
             />
-          </section>
+          </SweepSection>
         </PageSection>
       ) : null}
 

@@ -1,9 +1,8 @@
 import type { Project, ProjectClimate } from '@shared/schemas/project';
-import { useState } from 'react';
-import { Button } from '../../../components/ui/Button';
 import { Notice } from '../../../components/ui/Notice';
 import { formatDateTime } from '../../../lib/format';
 import { useConflictEdit } from '../../../lib/use-conflict-edit';
+import { CarriedNotice, ConflictChoice, useConflictChoice } from '../../projects/components/ConflictChoice';
 import { conflictingProject, useUpdateClimate } from '../api/update-climate';
 import { type ClimateFormValues, climateToForm, mergeClimate } from '../climate-form';
 import { ClimateForm } from './ClimateForm';
@@ -35,7 +34,7 @@ export function ClimateEditor({
     (p) => climateToForm(p.climate),
     conflictingProject,
   );
-  const [carried, setCarried] = useState<{ onto: number; bothChanged: string[] } | null>(null);
+  const choice = useConflictChoice(restart);
 
   const save = (climate: ProjectClimate) =>
     saveVersion(climate, (version) => update.mutateAsync({ id: project.id, version, climate }), onDone);
@@ -62,32 +61,14 @@ export function ClimateEditor({
             : ''}
           . Nothing is saved until you press Save.
         </p>
-        <div className="flex flex-wrap gap-3 pt-1">
-          <Button
-            variant="secondary"
-            onClick={() => {
-              setCarried({ onto: conflict.theirs.version, bothChanged: merge.bothChanged });
-              restart(conflict.theirs, climateToForm(merge.merged));
-            }}
-          >
-            Carry my changes over
-          </Button>
-          <Button
-            variant="secondary"
-            onClick={() => {
-              setCarried(null);
-              restart(conflict.theirs, climateToForm(conflict.theirs.climate));
-            }}
-          >
-            Load the saved climate (discard my edits)
-          </Button>
-        </div>
+        <ConflictChoice
+          onCarry={() => choice.carry(conflict.theirs, climateToForm(merge.merged))}
+          onLoad={() => choice.load(conflict.theirs, climateToForm(conflict.theirs.climate))}
+          loadLabel="Load the saved climate (discard my edits)"
+        />
       </Notice>
-    ) : carried ? (
-      <Notice
-        tone="info"
-        title={`Your changes are now on top of version ${carried.onto}. Check them, then save.`}
-      />
+    ) : choice.carriedOnto !== null ? (
+      <CarriedNotice onto={choice.carriedOnto} version="version" />
     ) : null;
 
   return (

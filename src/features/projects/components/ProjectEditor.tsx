@@ -1,6 +1,4 @@
 import type { Project, ProjectInput } from '@shared/schemas/project';
-import { useState } from 'react';
-import { Button } from '../../../components/ui/Button';
 import { Notice } from '../../../components/ui/Notice';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format';
@@ -12,6 +10,7 @@ import {
 import { useUnitSystem } from '../../../lib/unit-system';
 import { useConflictEdit } from '../../../lib/use-conflict-edit';
 import { conflictingProject, useUpdateProject } from '../api/update-project';
+import { CarriedNotice, ConflictChoice, useConflictChoice } from './ConflictChoice';
 import { ProjectForm, type ProjectFormValues, projectToFormValues } from './ProjectForm';
 
 type Field = keyof ProjectInput;
@@ -54,7 +53,7 @@ export function ProjectEditor({ project, onDone }: { project: Project; onDone: (
     projectToFormValues,
     conflictingProject,
   );
-  const [carriedOnto, setCarriedOnto] = useState<number | null>(null);
+  const choice = useConflictChoice(restart);
 
   const save = (values: ProjectInput) =>
     saveVersion(
@@ -125,32 +124,14 @@ export function ProjectEditor({ project, onDone }: { project: Project; onDone: (
           : ''}
         . Nothing is saved until you press Save.
       </p>
-      <div className="flex flex-wrap gap-3 pt-1">
-        <Button
-          variant="secondary"
-          onClick={() => {
-            setCarriedOnto(conflict.theirs.version);
-            restart(conflict.theirs, mergeEdits(conflict));
-          }}
-        >
-          Carry my changes over
-        </Button>
-        <Button
-          variant="secondary"
-          onClick={() => {
-            setCarriedOnto(null);
-            restart(conflict.theirs, projectToFormValues(conflict.theirs));
-          }}
-        >
-          Load the saved revision (discard my edits)
-        </Button>
-      </div>
+      <ConflictChoice
+        onCarry={() => choice.carry(conflict.theirs, mergeEdits(conflict))}
+        onLoad={() => choice.load(conflict.theirs, projectToFormValues(conflict.theirs))}
+        loadLabel="Load the saved revision (discard my edits)"
+      />
     </Notice>
-  ) : carriedOnto !== null ? (
-    <Notice
-      tone="info"
-      title={`Your changes are now on top of revision ${carriedOnto}. Check them, then save.`}
-    />
+  ) : choice.carriedOnto !== null ? (
+    <CarriedNotice onto={choice.carriedOnto} version="revision" />
   ) : null;
 
   return (

@@ -3,20 +3,14 @@ import type { ApiError } from '@shared/schemas/common';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Logger } from 'pino';
 import { ZodError } from 'zod';
-import { DomainError, type ErrorKind, zodFields } from '../services/errors';
+import { DomainError, type ErrorKind, Refusal, zodFields } from '../services/errors';
 
 export { notFound } from '../services/errors';
 
-/** A refusal of the HTTP layer itself (access, parsing, limits), with its status; services throw `DomainError`. */
-export class HttpError extends Error {
-  constructor(
-    readonly status: number,
-    readonly code: string,
-    message: string,
-    readonly fields?: Record<string, string>,
-    readonly extra?: Record<string, unknown>,
-  ) {
-    super(message);
+/** A refusal of the HTTP layer itself (access, parsing, limits): its kind is its status; services throw `DomainError`. */
+export class HttpError extends Refusal<number> {
+  get status(): number {
+    return this.kind;
   }
 }
 

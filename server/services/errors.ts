@@ -23,10 +23,13 @@ export type ErrorKind =
   /** A part the step needs (file storage) is not available here. */
   | 'unavailable';
 
-/** A refusal: its kind, a stable `code`, a message for people, and optionally the fields at fault and more body. */
-export class DomainError extends Error {
+/**
+ * A refusal: what decides its status (`K`: a domain kind, or a status the HTTP layer sets itself), a stable
+ * `code`, a message for people, and optionally the fields at fault and more body.
+ */
+export class Refusal<K extends ErrorKind | number> extends Error {
   constructor(
-    readonly kind: ErrorKind,
+    readonly kind: K,
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
@@ -36,6 +39,9 @@ export class DomainError extends Error {
     super(message);
   }
 }
+
+/** A refusal in the domain's words; the HTTP layer maps its kind to the status it answers with. */
+export class DomainError extends Refusal<ErrorKind> {}
 
 export const notFound = (what = 'resource') => new DomainError('not_found', 'not_found', `${what} not found`);
 

@@ -65,27 +65,6 @@ export function createFirmMemberService(db: Db, config: Config, mailer: Mailer) 
     return toMember(r);
   }
 
-  /** One change to a member, with the firm's row locked; 404 when they are not in the firm. */
-  function changeMember<T>(
-    organisationId: string,
-    userId: string,
-    change: (tx: Db, role: FirmRole) => Promise<T>,
-  ): Promise<T> {
-    return db.transaction(async (tx) => {
-      await tx
-        .select({ id: organisations.id })
-        .from(organisations)
-        .where(eq(organisations.id, organisationId))
-        .for('update');
-      const [m] = await tx
-        .select({ role: organisationMembers.role })
-        .from(organisationMembers)
-        .where(memberRow(organisationId, userId));
-      if (!m) throw notFound('member');
-      return change(tx, firmRoleOf(m.role));
-    });
-  }
-
   async function assertNotLastAdmin(tx: Db, organisationId: string, userId: string) {
     const [other] = await tx
       .select({ userId: organisationMembers.userId })
@@ -102,6 +81,38 @@ export function createFirmMemberService(db: Db, config: Config, mailer: Mailer) 
       throw new DomainError('conflict', 'last_admin', 'a firm must keep at least one administrator', {
         role: 'the firm’s only administrator; make someone else administrator first',
       });
+  }
+
+  /**
+   * Gives a member another role, or (`role` null) takes them out of the firm, with the firm's row locked: 404
+   * when they are not in it, 409 when it would leave the firm without an administrator.
+   */
+  function changeMember(organisationId: string, userId: string, actorId: string, role: FirmRole | null) {
+    return db.transaction(async (tx) => {
+      await tx
+        .select({ id: organisations.id })
+        .from(organisations)
+        .where(eq(organisations.id, organisationId))
+        .for('update');
+      const [m] = await tx
+        .select({ role: organisationMembers.role })
+        .from(organisationMembers)
+        .where(memberRow(organisationId, userId));
+      if (!m) throw notFound('member');
+      const before = firmRoleOf(m.role);
+      if (before === role) return;
+      if (before === 'admin') await assertNotLastAdmin(tx, organisationId, userId);
+      if (role) await tx.update(organisationMembers).set({ role }).where(memberRow(organisationId, userId));
+      else await tx.delete(organisationMembers).where(memberRow(organisationId, userId));
+      await recordAudit(tx, {
+        actorId,
+        entity: 'firm_member',
+        entityId: userId,
+        action: role ? 'change_role' : 'remove',
+        before: { organisationId, role: before },
+        after: role && { organisationId, role },
+      });
+    });
   }
 
   return {
@@ -178,35 +189,13 @@ export function createFirmMemberService(db: Db, config: Config, mailer: Mailer) 
       role: FirmRole,
       actorId: string,
     ): Promise<FirmMember> {
-      await changeMember(organisationId, userId, async (tx, before) => {
-        if (before === role) return;
-        if (before === 'admin') await assertNotLastAdmin(tx, organisationId, userId);
-        await tx.update(organisationMembers).set({ role }).where(memberRow(organisationId, userId));
-        await recordAudit(tx, {
-          actorId,
-          entity: 'firm_member',
-          entityId: userId,
-          action: 'change_role',
-          before: { organisationId, role: before },
-          after: { organisationId, role },
-        });
-      });
+      await changeMember(organisationId, userId, actorId, role);
       return one(organisationId, userId);
     },
 
     /** Takes someone out of the firm (what they wrote stays, with their name). */
     async remove(organisationId: string, userId: string, actorId: string): Promise<void> {
-      await changeMember(organisationId, userId, async (tx, before) => {
-        if (before === 'admin') await assertNotLastAdmin(tx, organisationId, userId);
-        await tx.delete(organisationMembers).where(memberRow(organisationId, userId));
-        await recordAudit(tx, {
-          actorId,
-          entity: 'firm_member',
-          entityId: userId,
-          action: 'remove',
-          before: { organisationId, role: before },
-        });
-      });
+      await changeMember(organisationId, userId, actorId, null);
     },
   };
 }

@@ -28,20 +28,13 @@ export async function seedDemoInspection(
     area: { kind: 'zone', zone: 'field' },
     title: 'North elevation — field zone, first walk',
   });
-  const girt = i.items.find((x) => x.kind === 'girt_spacing');
-  const clip = i.items.find((x) => x.kind === 'clip_spacing');
-  if (girt)
-    await flow.answer(girt.id, inspector, {
-      version: girt.version,
-      state: 'pass',
-      measured: 1.195,
-      location: 'Grid A–C, level 2',
-    });
-  if (clip)
-    await flow.answer(clip.id, inspector, {
-      version: clip.version,
-      state: 'pass',
-      measured: 0.79,
-      location: 'Grid B, level 2',
-    });
+  // Invented answers: girt and clip spacing as measured on the walk.
+  const answers = [
+    { kind: 'girt_spacing', measured: 1.195, location: 'Grid A–C, level 2' },
+    { kind: 'clip_spacing', measured: 0.79, location: 'Grid B, level 2' },
+  ];
+  for (const { kind, ...answer } of answers) {
+    const item = i.items.find((x) => x.kind === kind);
+    if (item) await flow.answer(item.id, inspector, { version: item.version, state: 'pass', ...answer });
+  }
 }

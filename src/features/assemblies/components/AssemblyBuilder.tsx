@@ -21,6 +21,7 @@ import { NewerRevisionNotice, RevisionSaveBar } from '../../../components/ui/Rev
 import { TextArea } from '../../../components/ui/TextInput';
 import { useDeferredCalculation } from '../../../lib/deferred-calculation';
 import { formatDateTime } from '../../../lib/format';
+import { REVISION_SAVE_WORDS } from '../../../lib/revision-save-words';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { useRevisionEditing } from '../../../lib/use-revision-editing';
 import { useCreateAssembly } from '../api/create-assembly';
@@ -212,13 +213,7 @@ export function AssemblyBuilder({
 
           <RevisionSaveBar
             editing={editing}
-            words={{
-              yours: 'edits',
-              carry: 'Carry my changes over',
-              carried: 'changes',
-              unsaved: 'This assembly has edits that are not saved.',
-              notePlaceholder: "e.g. clip spacing to 600 mm per maker's layout",
-            }}
+            words={REVISION_SAVE_WORDS.builder}
             inForm
             showNewer={false}
             scrollToConflict

@@ -14,6 +14,7 @@ import { RevisionHeader } from '../../../components/ui/RevisionHeader';
 import { NewerRevisionNotice, RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { useDeferredCalculation } from '../../../lib/deferred-calculation';
 import { issueLines } from '../../../lib/issue-words';
+import { REVISION_SAVE_WORDS } from '../../../lib/revision-save-words';
 import { type RevisionApi, useRevisionEditing } from '../../../lib/use-revision-editing';
 import { ElevationEditor } from '../../takeoff/components/ElevationEditor';
 import { ElevationTable } from '../../takeoff/components/ElevationTable';
@@ -252,12 +253,7 @@ export function JointsView({ project, assembly, ...revisionApi }: Props) {
       {mayWrite ? (
         <RevisionSaveBar
           editing={editing}
-          words={{
-            yours: 'edits',
-            carry: 'Carry my joints and takeoff over',
-            unsaved: 'The joints and takeoff have edits that are not saved.',
-            notePlaceholder: "e.g. VJ-1 widened to 25 mm after the maker's review",
-          }}
+          words={REVISION_SAVE_WORDS.joints}
           showNewer={false}
           className="contents"
           conflictDetail={

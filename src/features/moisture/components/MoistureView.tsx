@@ -12,6 +12,7 @@ import { RevisionHeader } from '../../../components/ui/RevisionHeader';
 import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
 import { useDeferredCalculation } from '../../../lib/deferred-calculation';
+import { REVISION_SAVE_WORDS } from '../../../lib/revision-save-words';
 import { useUnitSystem } from '../../../lib/unit-system';
 import type { RevisionApi } from '../../../lib/use-revision-editing';
 import { evaluateMoisture } from '../evaluate';
@@ -165,15 +166,7 @@ export function MoistureView({ project, assembly, climateSummary, ...revisionApi
       {mayWrite ? (
         <RevisionSaveBar
           editing={editing}
-          words={{
-            yours: 'entries',
-            carry: 'Carry my entries over',
-            unsaved: 'The vapour data have edits that are not saved.',
-            part: 'vapour data',
-            formLabel: 'Save the vapour data',
-            notePlaceholder: 'e.g. vapour retarder from the maker’s test report',
-            stillOnPage: false,
-          }}
+          words={REVISION_SAVE_WORDS.vapour}
           undo
           conflictDetail={<VapourConflictDetail editing={editing} />}
           dirtyHint={

@@ -1,6 +1,7 @@
 import { can } from '@shared/auth/permissions';
 import { ENGINE_VERSION } from '@shared/calc/trace';
 import { CAUTIONS, DEFAULT_DEFLECTION_WIND_FACTOR } from '@shared/calc/wind/attachment';
+import { messageText } from '@shared/format';
 import type { Assembly } from '@shared/schemas/assembly';
 import type { Project } from '@shared/schemas/project';
 import { Link } from 'react-router';
@@ -11,6 +12,7 @@ import { COMPUTED_AS_YOU_TYPE, ResultSection } from '../../../components/ui/Resu
 import { RevisionHeader } from '../../../components/ui/RevisionHeader';
 import { RevisionSaveBar } from '../../../components/ui/RevisionSaveBar';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
+import { REVISION_SAVE_WORDS } from '../../../lib/revision-save-words';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { type AttachmentEditingOptions, useAttachmentEditing } from '../use-attachment-editing';
 import { AttachmentSummary } from './AttachmentSummary';
@@ -153,7 +155,7 @@ export function AttachmentView({ project, assembly, library, ...io }: Props) {
               <Notice tone="warning" title="Read with the schedule:">
                 <ul className="list-disc pl-5">
                   {result.warnings.map((w) => (
-                    <li key={w}>{w}</li>
+                    <li key={JSON.stringify(w)}>{messageText(w, system)}</li>
                   ))}
                 </ul>
               </Notice>
@@ -175,15 +177,7 @@ export function AttachmentView({ project, assembly, library, ...io }: Props) {
       {mayWrite ? (
         <RevisionSaveBar
           editing={editing}
-          words={{
-            yours: 'values',
-            carry: 'Carry my values over',
-            unsaved: 'The attachment page has edits that are not saved.',
-            formLabel: 'Save the attachment inputs',
-            noteHint: 'What changed and why; name the maker’s table and clip test you used.',
-            notePlaceholder:
-              'e.g. girts at 1.2 m; load–span table of the 0.7 mm panel, maker’s 2024 catalogue',
-          }}
+          words={REVISION_SAVE_WORDS.attachment}
           undo
           conflictDetail={
             editing.conflict ? (

@@ -1,5 +1,4 @@
-import { libraryKeys } from '../../../lib/query-keys';
-import { useDeleteFromFirmList } from './firm-list';
+import { bridgeValues } from './firm-lists';
 
 /** `DELETE /api/organisations/:orgId/bridge-values/:itemId` (firm administrators) → 204. */
-export const useDeleteBridgeValue = () => useDeleteFromFirmList('bridge-values', libraryKeys.bridgeValues);
+export const useDeleteBridgeValue = bridgeValues.useDelete;

@@ -1,5 +1,4 @@
-import { libraryKeys } from '../../../lib/query-keys';
-import { useDeleteFromFirmList } from './firm-list';
+import { firmMaterials } from './firm-lists';
 
 /** `DELETE /api/organisations/:orgId/materials/:itemId` (firm administrators) → 204. */
-export const useDeleteFirmMaterial = () => useDeleteFromFirmList('materials', libraryKeys.materials);
+export const useDeleteFirmMaterial = firmMaterials.useDelete;

@@ -1,11 +1,25 @@
-import { type ComponentProps, type FormEventHandler, type ReactNode, useState } from 'react';
-import { type DefaultValues, type FieldValues, type Resolver, useForm } from 'react-hook-form';
+import type { UnitSystem } from '@shared/units';
+import type { UseMutationResult } from '@tanstack/react-query';
+import { type ComponentProps, type ReactNode, useState } from 'react';
+import {
+  type DefaultValues,
+  type FieldValues,
+  type Path,
+  type Resolver,
+  type UseFormReturn,
+  useForm,
+} from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '../../../components/ui/Button';
+import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
-import { TextInput } from '../../../components/ui/TextInput';
+import { LabelledOptions } from '../../../components/ui/Options';
+import { Select } from '../../../components/ui/Select';
+import { TextArea, TextInput } from '../../../components/ui/TextInput';
 import { errorMessage } from '../../../lib/api';
 import { issueWords } from '../../../lib/issue-words';
+import { useUnitSystem } from '../../../lib/unit-system';
+import { type LibraryMeasure, libraryNumber, libraryUnit } from '../units';
 
 /** How a library form words its fields: a range in the person's units, an empty text box by its own sentence. */
 export interface EntryWords<Values> {
@@ -14,6 +28,10 @@ export interface EntryWords<Values> {
   /** What to say of an empty text box, by field (else the schema's own message). */
   empty?: Record<string, string>;
 }
+
+/** A bound worded in the person's units with the unit ("0.0069 Btu·in/(h·ft²·°F)"). */
+export const shownIn = (measure: LibraryMeasure, system: UnitSystem) => (si: number) =>
+  `${libraryNumber(si, measure, system)} ${libraryUnit(measure, system)}`;
 
 /**
  * Typed text (the person's units) → SI → the shared schema; its reasons land on the typed fields, the first
@@ -46,23 +64,39 @@ export function libraryResolver<Values extends FieldValues, Output>(
 }
 
 /**
- * The form state of an "add to the firm's library" form: on a valid submit it calls `add`, then names the
- * added entry and empties the form; a failed call leaves the typed values (the caller shows its error).
+ * An "add to the firm's library" form: heading, the boxes `fields` draws in a grid, the submit button with the
+ * "added" line, the error. Typed values (the person's units) go through `resolver` to `add`; the added entry is
+ * named and the form emptied; a failed call leaves the typed values and shows the server's reason.
  */
-export function useAddEntry<Values extends FieldValues, Output>({
+export function AddEntryForm<Values extends FieldValues, Output>({
+  orgId,
+  add,
   empty,
   resolver,
-  add,
+  title,
+  label = title,
+  submitLabel,
+  fields,
 }: {
+  orgId: string;
+  add: UseMutationResult<{ name: string }, unknown, { orgId: string; input: Output }>;
   empty: Values;
-  resolver: Resolver<Values, unknown, Output>;
-  add: (input: Output) => Promise<{ name: string }>;
+  resolver: (system: UnitSystem) => Resolver<Values, unknown, Output>;
+  title: string;
+  /** The form's accessible name (else its title). */
+  label?: string;
+  submitLabel: string;
+  fields: (form: UseFormReturn<Values, unknown, Output>) => ReactNode;
 }) {
+  const system = useUnitSystem();
   const [added, setAdded] = useState<string | null>(null);
-  const form = useForm<Values, unknown, Output>({ resolver, defaultValues: empty as DefaultValues<Values> });
+  const form = useForm<Values, unknown, Output>({
+    resolver: resolver(system),
+    defaultValues: empty as DefaultValues<Values>,
+  });
   const submit = form.handleSubmit(async (input) => {
     setAdded(null);
-    await add(input).then(
+    await add.mutateAsync({ orgId, input }).then(
       (entry) => {
         setAdded(entry.name);
         form.reset(empty);
@@ -70,30 +104,6 @@ export function useAddEntry<Values extends FieldValues, Output>({
       () => undefined,
     );
   });
-  return { form, submit, added };
-}
-
-/** The frame of an add form: heading, the fields in a grid, the submit button with the "added" line, the error. */
-export function AddEntryForm({
-  label,
-  title,
-  submitLabel,
-  submit,
-  isSubmitting,
-  added,
-  error,
-  children,
-}: {
-  /** The form's accessible name. */
-  label: string;
-  title: string;
-  submitLabel: string;
-  submit: FormEventHandler<HTMLFormElement>;
-  isSubmitting: boolean;
-  added: string | null;
-  error: unknown;
-  children: ReactNode;
-}) {
   return (
     <form
       onSubmit={submit}
@@ -102,9 +112,9 @@ export function AddEntryForm({
       aria-label={label}
     >
       <h4 className="font-serif text-lg">{title}</h4>
-      <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2 lg:grid-cols-4">{children}</div>
+      <div className="grid gap-x-4 gap-y-3 sm:grid-cols-2 lg:grid-cols-4">{fields(form)}</div>
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" variant="secondary" busy={isSubmitting} busyLabel="Adding…">
+        <Button type="submit" variant="secondary" busy={form.formState.isSubmitting} busyLabel="Adding…">
           {submitLabel}
         </Button>
         {added ? (
@@ -113,19 +123,67 @@ export function AddEntryForm({
           </p>
         ) : null}
       </div>
-      {error ? <Notice tone="caution" title={errorMessage(error)} live /> : null}
+      {add.error ? <Notice tone="caution" title={errorMessage(add.error)} live /> : null}
     </form>
   );
 }
 
-/** A compact text box of the add forms. */
-export function TextBox(props: ComponentProps<'input'>) {
+/**
+ * One box of an add form: a compact text box (the default), a number box (typed in the person's units of
+ * `measure`, read by the resolver), a select of `options`, or a two-line notes box; `className` places it in
+ * the form's grid.
+ */
+export interface EntryField<Values extends FieldValues> {
+  name: Path<Values>;
+  label: ReactNode;
+  box?: 'number' | 'select' | 'notes';
+  measure?: LibraryMeasure;
+  hint?: string;
+  required?: boolean;
+  options?: readonly { value: string; label: string }[];
+  className?: string;
+}
+
+type BoxProps = ComponentProps<'input'> & ComponentProps<'select'> & ComponentProps<'textarea'>;
+
+function Box({ box, options, ...props }: BoxProps & Pick<EntryField<FieldValues>, 'box' | 'options'>) {
+  if (box === 'number')
+    return (
+      <TextInput
+        {...props}
+        inputMode="decimal"
+        autoComplete="off"
+        className="num py-1.5 text-right text-sm"
+      />
+    );
+  if (box === 'select')
+    return (
+      <Select {...props} className="py-1.5 text-sm">
+        <LabelledOptions options={options ?? []} />
+      </Select>
+    );
+  if (box === 'notes') return <TextArea {...props} rows={2} className="min-h-0 text-sm" />;
   return <TextInput {...props} autoComplete="off" className="py-1.5 text-sm" />;
 }
 
-/** A compact number box of the add forms (typed in the person's units, read by the resolver). */
-export function NumberBox(props: ComponentProps<'input'>) {
-  return (
-    <TextInput {...props} inputMode="decimal" autoComplete="off" className="num py-1.5 text-right text-sm" />
-  );
+/** The boxes of an add form, in order, each registered with the form and showing its reason. */
+export function EntryFields<Values extends FieldValues, Output>({
+  form,
+  fields,
+}: {
+  form: UseFormReturn<Values, unknown, Output>;
+  fields: readonly EntryField<Values>[];
+}) {
+  const system = useUnitSystem();
+  const errors = form.formState.errors as Record<string, { message?: string } | undefined>;
+  return fields.map(({ name, box, measure, options, ...field }) => (
+    <Field
+      key={name}
+      {...field}
+      unit={measure ? libraryUnit(measure, system) : undefined}
+      error={errors[name]?.message}
+    >
+      {(c) => <Box {...c} {...form.register(name)} box={box} options={options} />}
+    </Field>
+  ));
 }

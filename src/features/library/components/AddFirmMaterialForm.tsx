@@ -1,20 +1,31 @@
 import { orgMaterialInputSchema } from '@shared/schemas/assembly';
 import type { UnitSystem } from '@shared/units';
-import { Field } from '../../../components/ui/Field';
-import { useUnitSystem } from '../../../lib/unit-system';
 import { type FirmMaterialInput, useAddFirmMaterial } from '../api/add-firm-material';
-import { type LibraryMeasure, libraryNumber, libraryUnit, parseLibraryNumber } from '../units';
-import { AddEntryForm, libraryResolver, NumberBox, TextBox, useAddEntry } from './AddEntryForm';
+import { type LibraryMeasure, parseLibraryNumber } from '../units';
+import { AddEntryForm, type EntryField, EntryFields, libraryResolver, shownIn } from './AddEntryForm';
 
-interface Values {
-  name: string;
-  conductivity: string;
-  density: string;
-  vapourResistanceFactor: string;
-  source: string;
-}
+/** The boxes as typed (empty to start). */
+const EMPTY = { name: '', conductivity: '', density: '', vapourResistanceFactor: '', source: '' };
+type Values = typeof EMPTY;
 
-const EMPTY: Values = { name: '', conductivity: '', density: '', vapourResistanceFactor: '', source: '' };
+const FIELDS: EntryField<Values>[] = [
+  { name: 'name', label: 'Name', required: true, className: 'sm:col-span-2' },
+  { name: 'conductivity', label: 'λ', box: 'number', measure: 'conductivity', required: true },
+  { name: 'density', label: 'Density ρ', box: 'number', measure: 'density', hint: 'Optional' },
+  {
+    name: 'vapourResistanceFactor',
+    label: 'Vapour resistance factor μ',
+    box: 'number',
+    hint: 'Optional, dimensionless',
+  },
+  {
+    name: 'source',
+    label: 'Source',
+    required: true,
+    hint: 'Data sheet, test report or table the value comes from (with its date or revision).',
+    className: 'sm:col-span-2 lg:col-span-3',
+  },
+];
 
 const materialResolver = (system: UnitSystem) =>
   libraryResolver<Values, FirmMaterialInput>(
@@ -31,76 +42,23 @@ const materialResolver = (system: UnitSystem) =>
       };
     },
     {
-      show: (key) => {
-        const measure: LibraryMeasure | undefined =
-          key === 'conductivity' ? 'conductivity' : key === 'density' ? 'density' : undefined;
-        return measure
-          ? (si) => `${libraryNumber(si, measure, system)} ${libraryUnit(measure, system)}`
-          : undefined;
-      },
+      show: (key) => (key === 'conductivity' || key === 'density' ? shownIn(key, system) : undefined),
       empty: { name: 'Give the material a name.' },
     },
   );
 
 /** Add a material to the firm's library; every value needs its source. */
 export function AddFirmMaterialForm({ orgId }: { orgId: string }) {
-  const system = useUnitSystem();
-  const add = useAddFirmMaterial();
-  const { form, submit, added } = useAddEntry({
-    empty: EMPTY,
-    resolver: materialResolver(system),
-    add: (input) => add.mutateAsync({ orgId, input }),
-  });
-  const {
-    register,
-    formState: { errors, isSubmitting },
-  } = form;
-
   return (
     <AddEntryForm
+      orgId={orgId}
+      add={useAddFirmMaterial()}
+      empty={EMPTY}
+      resolver={materialResolver}
       label="Add a firm material"
       title="Add a material"
       submitLabel="Add material"
-      submit={submit}
-      isSubmitting={isSubmitting}
-      added={added}
-      error={add.error}
-    >
-      <Field label="Name" required error={errors.name?.message} className="sm:col-span-2">
-        {(c) => <TextBox {...c} {...register('name')} />}
-      </Field>
-      <Field
-        label="λ"
-        unit={libraryUnit('conductivity', system)}
-        required
-        error={errors.conductivity?.message}
-      >
-        {(c) => <NumberBox {...c} {...register('conductivity')} />}
-      </Field>
-      <Field
-        label="Density ρ"
-        unit={libraryUnit('density', system)}
-        hint="Optional"
-        error={errors.density?.message}
-      >
-        {(c) => <NumberBox {...c} {...register('density')} />}
-      </Field>
-      <Field
-        label="Vapour resistance factor μ"
-        hint="Optional, dimensionless"
-        error={errors.vapourResistanceFactor?.message}
-      >
-        {(c) => <NumberBox {...c} {...register('vapourResistanceFactor')} />}
-      </Field>
-      <Field
-        label="Source"
-        required
-        hint="Data sheet, test report or table the value comes from (with its date or revision)."
-        error={errors.source?.message}
-        className="sm:col-span-2 lg:col-span-3"
-      >
-        {(c) => <TextBox {...c} {...register('source')} />}
-      </Field>
-    </AddEntryForm>
+      fields={(form) => <EntryFields form={form} fields={FIELDS} />}
+    />
   );
 }

@@ -8,22 +8,20 @@ import { STATUS_WORDS, VERDICT_WORDS } from '@shared/format';
 
 export { checkFigures, checkResultText, formatSiValue } from '@shared/format';
 
-const STATUS_CLASS: Record<CheckStatus, string> = {
+/** Each entry of a word table with the screen's colour class of its key. */
+function coloured<K extends string, W>(words: Record<K, W>, cls: Record<K, string>) {
+  const entries = (Object.keys(words) as K[]).map((k) => [k, { ...words[k], cls: cls[k] }]);
+  return Object.fromEntries(entries) as Record<K, W & { cls: string }>;
+}
+
+export const STATUS_WORD = coloured(STATUS_WORDS, {
   pass: 'text-meets',
   fail: 'text-caution',
   not_evaluated: 'text-warning',
-};
+} satisfies Record<CheckStatus, string>);
 
-export const STATUS_WORD = Object.fromEntries(
-  (Object.keys(STATUS_WORDS) as CheckStatus[]).map((s) => [s, { ...STATUS_WORDS[s], cls: STATUS_CLASS[s] }]),
-) as Record<CheckStatus, { glyph: string; word: string; cls: string }>;
-
-const VERDICT_CLASS: Record<Verdict, string> = {
+export const VERDICT_TEXT = coloured(VERDICT_WORDS, {
   pass: 'text-meets border-meets',
   fail: 'text-caution border-caution',
   incomplete: 'text-warning border-warning',
-};
-
-export const VERDICT_TEXT = Object.fromEntries(
-  (Object.keys(VERDICT_WORDS) as Verdict[]).map((v) => [v, { ...VERDICT_WORDS[v], cls: VERDICT_CLASS[v] }]),
-) as Record<Verdict, { glyph: string; word: string; sentence: string; cls: string }>;
+} satisfies Record<Verdict, string>);

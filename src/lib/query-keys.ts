@@ -10,55 +10,35 @@ export const meKeys = {
   current: () => [...meKeys.all, 'current'] as const,
 };
 
-export const projectKeys = {
-  all: ['projects'] as const,
-  lists: () => [...projectKeys.all, 'list'] as const,
-  list: (filter: ProjectListFilter) => [...projectKeys.lists(), filter] as const,
-  details: () => [...projectKeys.all, 'detail'] as const,
-  detail: (id: string) => [...projectKeys.details(), id] as const,
-};
+/**
+ * One resource's keys: all → lists → list(what narrows the list) and all → details → detail(id). `ListArgs` are
+ * what `list` takes (a project's id by default).
+ */
+function resourceKeys<ListArgs extends unknown[] = [projectId: string]>(name: string) {
+  const all = [name] as const;
+  const lists = () => [...all, 'list'] as const;
+  const details = () => [...all, 'detail'] as const;
+  return {
+    all,
+    lists,
+    list: (...args: ListArgs) => [...lists(), ...args] as const,
+    details,
+    detail: (id: string) => [...details(), id] as const,
+  };
+}
 
-export const memberKeys = {
-  all: ['members'] as const,
-  lists: () => [...memberKeys.all, 'list'] as const,
-  list: (projectId: string) => [...memberKeys.lists(), projectId] as const,
-};
+export const projectKeys = resourceKeys<[filter: ProjectListFilter]>('projects');
+export const memberKeys = resourceKeys('members');
+export const invitationKeys = resourceKeys('invitations');
+export const auditKeys = resourceKeys('audit');
+export const mailKeys = resourceKeys('admin-mail');
+export const firmMemberKeys = resourceKeys<[orgId: string]>('firm-members');
+export const adminOrganisationKeys = resourceKeys('admin-organisations');
 
-export const invitationKeys = {
-  all: ['invitations'] as const,
-  details: () => [...invitationKeys.all, 'detail'] as const,
-  detail: (token: string) => [...invitationKeys.details(), token] as const,
-};
-
-export const auditKeys = {
-  all: ['audit'] as const,
-  lists: () => [...auditKeys.all, 'list'] as const,
-  list: (projectId: string) => [...auditKeys.lists(), projectId] as const,
-};
-
-export const mailKeys = {
-  all: ['admin-mail'] as const,
-  lists: () => [...mailKeys.all, 'list'] as const,
-};
-
-export const firmMemberKeys = {
-  all: ['firm-members'] as const,
-  lists: () => [...firmMemberKeys.all, 'list'] as const,
-  list: (orgId: string) => [...firmMemberKeys.lists(), orgId] as const,
-};
-
-export const adminOrganisationKeys = {
-  all: ['admin-organisations'] as const,
-  lists: () => [...adminOrganisationKeys.all, 'list'] as const,
-};
-
+const assemblies = resourceKeys('assemblies');
 export const assemblyKeys = {
-  all: ['assemblies'] as const,
-  lists: () => [...assemblyKeys.all, 'list'] as const,
-  list: (projectId: string) => [...assemblyKeys.lists(), projectId] as const,
-  details: () => [...assemblyKeys.all, 'detail'] as const,
-  detail: (assemblyId: string) => [...assemblyKeys.details(), assemblyId] as const,
-  revisions: (assemblyId: string) => [...assemblyKeys.detail(assemblyId), 'revisions'] as const,
+  ...assemblies,
+  revisions: (assemblyId: string) => [...assemblies.detail(assemblyId), 'revisions'] as const,
   revision: (assemblyId: string, revision: number) =>
     [...assemblyKeys.revisions(assemblyId), revision] as const,
 };
@@ -81,49 +61,30 @@ export const sweepKeys = {
     [...sweepKeys.all, 'compare', assemblyId, from, to] as const,
 };
 
+const criteria = resourceKeys('criteria-sets');
 export const criteriaKeys = {
-  all: ['criteria-sets'] as const,
-  lists: () => [...criteriaKeys.all, 'list'] as const,
-  list: (orgId: string) => [...criteriaKeys.lists(), 'firm', orgId] as const,
-  forProject: (projectId: string) => [...criteriaKeys.lists(), 'project', projectId] as const,
-  details: () => [...criteriaKeys.all, 'detail'] as const,
-  detail: (setId: string) => [...criteriaKeys.details(), setId] as const,
-  versions: (setId: string) => [...criteriaKeys.all, 'versions', setId] as const,
-  diff: (setId: string, from: number, to: number) => [...criteriaKeys.all, 'diff', setId, from, to] as const,
+  ...criteria,
+  list: (orgId: string) => [...criteria.lists(), 'firm', orgId] as const,
+  forProject: (projectId: string) => [...criteria.lists(), 'project', projectId] as const,
+  versions: (setId: string) => [...criteria.all, 'versions', setId] as const,
+  diff: (setId: string, from: number, to: number) => [...criteria.all, 'diff', setId, from, to] as const,
 };
 
-export const checkRunKeys = {
-  all: ['check-runs'] as const,
-  lists: () => [...checkRunKeys.all, 'list'] as const,
-  list: (projectId: string, assemblyId: string | null) =>
-    [...checkRunKeys.lists(), projectId, assemblyId] as const,
-  details: () => [...checkRunKeys.all, 'detail'] as const,
-  detail: (runId: string) => [...checkRunKeys.details(), runId] as const,
-};
+export const checkRunKeys = resourceKeys<[projectId: string, assemblyId: string | null]>('check-runs');
 
 export type SubmittalListFilter = { status: string | null };
 
-export const submittalKeys = {
-  all: ['submittals'] as const,
-  lists: () => [...submittalKeys.all, 'list'] as const,
-  list: (projectId: string, filter: SubmittalListFilter) =>
-    [...submittalKeys.lists(), projectId, filter] as const,
-  details: () => [...submittalKeys.all, 'detail'] as const,
-  detail: (submittalId: string) => [...submittalKeys.details(), submittalId] as const,
-};
+export const submittalKeys = resourceKeys<[projectId: string, filter: SubmittalListFilter]>('submittals');
 
 export const verificationKeys = {
   all: ['sheet-verification'] as const,
   detail: (code: string) => [...verificationKeys.all, code] as const,
 };
 
+const inspections = resourceKeys('inspections');
 export const inspectionKeys = {
-  all: ['inspections'] as const,
-  lists: () => [...inspectionKeys.all, 'list'] as const,
-  list: (projectId: string) => [...inspectionKeys.lists(), projectId] as const,
-  details: () => [...inspectionKeys.all, 'detail'] as const,
-  detail: (inspectionId: string) => [...inspectionKeys.details(), inspectionId] as const,
+  ...inspections,
   /** Mutations kept on the device and sent when the connection returns (src/lib/offline). */
-  answers: () => [...inspectionKeys.all, 'answer'] as const,
-  photos: () => [...inspectionKeys.all, 'photo'] as const,
+  answers: () => [...inspections.all, 'answer'] as const,
+  photos: () => [...inspections.all, 'photo'] as const,
 };

@@ -7,6 +7,16 @@ import { UnitToggle } from '../../features/me/components/UnitToggle';
 const navClass = ({ isActive }: { isActive: boolean }) =>
   `px-1 py-1 text-sm font-medium no-underline border-b-2 ${isActive ? 'border-ink text-ink' : 'border-transparent text-ink-muted hover:text-ink hover:border-rule-strong'}`;
 
+/** The main menu, in order; the site administrators' pages only for them. */
+const MENU: { to: string; label: string; admin?: true }[] = [
+  { to: '/projects', label: 'Projects' },
+  { to: '/library', label: 'Library' },
+  { to: '/code-tables', label: 'Code tables' },
+  { to: '/admin/organisations', label: 'Firms', admin: true },
+  { to: '/admin/mail', label: 'Outbox', admin: true },
+  { to: '/settings', label: 'Settings' },
+];
+
 export function SiteHeader() {
   const me = useMe();
   const signOut = useSignOut();
@@ -23,28 +33,11 @@ export function SiteHeader() {
 
         {user ? (
           <nav aria-label="Main" className="flex flex-wrap items-center gap-x-5 gap-y-1">
-            <NavLink to="/projects" className={navClass}>
-              Projects
-            </NavLink>
-            <NavLink to="/library" className={navClass}>
-              Library
-            </NavLink>
-            <NavLink to="/code-tables" className={navClass}>
-              Code tables
-            </NavLink>
-            {user.siteRole === 'admin' ? (
-              <>
-                <NavLink to="/admin/organisations" className={navClass}>
-                  Firms
-                </NavLink>
-                <NavLink to="/admin/mail" className={navClass}>
-                  Outbox
-                </NavLink>
-              </>
-            ) : null}
-            <NavLink to="/settings" className={navClass}>
-              Settings
-            </NavLink>
+            {MENU.filter((m) => !m.admin || user.siteRole === 'admin').map((m) => (
+              <NavLink key={m.to} to={m.to} className={navClass}>
+                {m.label}
+              </NavLink>
+            ))}
           </nav>
         ) : null}
 

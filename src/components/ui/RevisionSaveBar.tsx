@@ -73,6 +73,16 @@ export function NewerRevisionNotice({ newer, yours }: { newer: Assembly | null; 
  * edits; a stale save shows who saved first and lets the person carry their edits over or load the saved revision;
  * the server's refusals are listed. The same on every assembly page; the page brings its words.
  */
+/** The bar's Undo and Redo buttons: word, tooltip and the keys that do the same (handled in the bar). */
+const STEP_BUTTONS = {
+  undo: { label: 'Undo', title: 'Undo the last change (Ctrl+Z)', keys: 'Control+Z Meta+Z' },
+  redo: {
+    label: 'Redo',
+    title: 'Redo (Ctrl+Shift+Z or Ctrl+Y)',
+    keys: 'Control+Shift+Z Control+Y Meta+Shift+Z',
+  },
+};
+
 export function RevisionSaveBar({
   editing,
   words,
@@ -159,26 +169,21 @@ export function RevisionSaveBar({
       )}
     </Button>
   );
+  const stepOn = { undo: canUndo, redo: canRedo };
   const steps = (
     <div className={`flex gap-2 max-sm:order-last ${folded}`}>
-      <Button
-        variant="quiet"
-        onClick={history.undo}
-        disabled={!canUndo}
-        title="Undo the last change (Ctrl+Z)"
-        aria-keyshortcuts="Control+Z Meta+Z"
-      >
-        Undo
-      </Button>
-      <Button
-        variant="quiet"
-        onClick={history.redo}
-        disabled={!canRedo}
-        title="Redo (Ctrl+Shift+Z or Ctrl+Y)"
-        aria-keyshortcuts="Control+Shift+Z Control+Y Meta+Shift+Z"
-      >
-        Redo
-      </Button>
+      {(['undo', 'redo'] as const).map((step) => (
+        <Button
+          key={step}
+          variant="quiet"
+          onClick={history[step]}
+          disabled={!stepOn[step]}
+          title={STEP_BUTTONS[step].title}
+          aria-keyshortcuts={STEP_BUTTONS[step].keys}
+        >
+          {STEP_BUTTONS[step].label}
+        </Button>
+      ))}
     </div>
   );
   const content = (

@@ -6,6 +6,7 @@ import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
 import { Select } from '../../../components/ui/Select';
 import { errorMessage } from '../../../lib/api';
+import { submitting } from '../../../lib/form-submit';
 import { useRunCheck } from '../api/run-check';
 
 /** Pick a code table (grouped by firm) and run every check against it; the run is stored. */
@@ -25,14 +26,9 @@ export function RunCheckForm({
   return (
     <form
       className="flex flex-wrap items-end gap-4"
-      onSubmit={async (e) => {
-        e.preventDefault();
-        try {
-          onRun((await run.mutateAsync({ assemblyId, criteriaSetId: setId })).id);
-        } catch {
-          // shown below
-        }
-      }}
+      onSubmit={submitting(async () => {
+        onRun((await run.mutateAsync({ assemblyId, criteriaSetId: setId })).id);
+      })}
     >
       <Field label="Code table" className="min-w-72 max-w-xl grow">
         {(c) => (

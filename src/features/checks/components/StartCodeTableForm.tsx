@@ -12,6 +12,7 @@ import { NamedOptions } from '../../../components/ui/Options';
 import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
+import { submitting } from '../../../lib/form-submit';
 import { useCreateCriteriaSet } from '../../criteria/api/create-criteria-set';
 import { CriterionKinds } from '../../criteria/components/CriterionKinds';
 import { useMe } from '../../me/api/get-me';
@@ -63,16 +64,11 @@ export function StartCodeTableForm({
       <form
         aria-label="Start a code table"
         className="flex max-w-form flex-col gap-4"
-        onSubmit={async (e) => {
-          e.preventDefault();
-          try {
-            const set = await create.mutateAsync({ orgId, input: { name, edition } });
-            const q = new URLSearchParams({ back, zone, category });
-            navigate(`/code-tables/${set.id}?${q}`);
-          } catch {
-            // shown below
-          }
-        }}
+        onSubmit={submitting(async () => {
+          const set = await create.mutateAsync({ orgId, input: { name, edition } });
+          const q = new URLSearchParams({ back, zone, category });
+          navigate(`/code-tables/${set.id}?${q}`);
+        })}
       >
         <Field label="Table name" required error={fields.name}>
           {(c) => <TextInput {...c} value={name} onChange={(e) => setName(e.target.value)} />}

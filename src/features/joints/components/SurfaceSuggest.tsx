@@ -52,6 +52,38 @@ export function SurfaceSuggest({
     problem = calcProblem(e)[1];
   }
   const rise = SURFACE_RISE_ABOVE_AIR[exposure][finish];
+  /** An air temperature of the design range; the hint names the project's figure it started from. */
+  const airInput = (
+    label: string,
+    value: number,
+    set: (v: number) => void,
+    projectHint: string,
+    fieldProblem?: FieldProblem,
+  ) => (
+    <QuantityInput
+      label={label}
+      measure={pageInput('temperature')}
+      value={value}
+      onChange={(v) => set(v ?? Number.NaN)}
+      hint={air ? projectHint : undefined}
+      problem={fieldProblem}
+    />
+  );
+  const choice = <T extends string>(
+    label: string,
+    value: T,
+    set: (v: T) => void,
+    values: readonly T[],
+    labels: { readonly [K in T]: string },
+  ) => (
+    <Field label={label}>
+      {(c) => (
+        <Select {...c} value={value} onChange={(e) => set(e.target.value as T)}>
+          <Options values={values} labels={labels} />
+        </Select>
+      )}
+    </Field>
+  );
 
   return (
     <details className="border border-rule bg-paper-raised px-3 py-2 text-sm">
@@ -61,35 +93,10 @@ export function SurfaceSuggest({
       </summary>
       <div className="mt-3 flex flex-col gap-3">
         <div className="grid gap-3 sm:grid-cols-4">
-          <QuantityInput
-            label="Coldest air"
-            measure={pageInput('temperature')}
-            value={airMin}
-            onChange={(v) => setAirMin(v ?? Number.NaN)}
-            hint={air ? 'Project winter design temperature.' : undefined}
-            problem={problem}
-          />
-          <QuantityInput
-            label="Hottest air"
-            measure={pageInput('temperature')}
-            value={airMax}
-            onChange={(v) => setAirMax(v ?? Number.NaN)}
-            hint={air ? 'Project summer design temperature.' : undefined}
-          />
-          <Field label="Finish">
-            {(c) => (
-              <Select {...c} value={finish} onChange={(e) => setFinish(e.target.value as SurfaceFinish)}>
-                <Options values={SURFACE_FINISHES} labels={FINISH_LABELS} />
-              </Select>
-            )}
-          </Field>
-          <Field label="Exposure">
-            {(c) => (
-              <Select {...c} value={exposure} onChange={(e) => setExposure(e.target.value as Exposure)}>
-                <Options values={EXPOSURES} labels={EXPOSURE_LABELS} />
-              </Select>
-            )}
-          </Field>
+          {airInput('Coldest air', airMin, setAirMin, 'Project winter design temperature.', problem)}
+          {airInput('Hottest air', airMax, setAirMax, 'Project summer design temperature.')}
+          {choice('Finish', finish, setFinish, SURFACE_FINISHES, FINISH_LABELS)}
+          {choice('Exposure', exposure, setExposure, EXPOSURES, EXPOSURE_LABELS)}
         </div>
         <p id={`${id}-basis`} className="text-xs text-ink-muted">
           Hottest surface = hottest air + {delta(rise, system)} ({finish} finish,{' '}

@@ -39,6 +39,12 @@ function Cell({
 export function ProjectTitleBlock({ project: p }: { project: Project }) {
   const system = useUnitSystem();
   const q = (field: keyof typeof Q) => formatQuantity(p[field], Q[field], system);
+  /** A design figure of the site in a third of the block's width. */
+  const design = (label: string, field: keyof typeof Q) => (
+    <Cell label={label} span={2} numeric>
+      {q(field)}
+    </Cell>
+  );
 
   return (
     <section aria-labelledby="title-block-heading" className="border border-ink bg-paper-raised">
@@ -76,22 +82,14 @@ export function ProjectTitleBlock({ project: p }: { project: Project }) {
         >
           {q('buildingHeightM')}
         </Cell>
-        <Cell label="Plan length" span={2} numeric>
-          {q('planLengthM')}
-        </Cell>
-        <Cell label="Plan width" span={2} numeric>
-          {q('planWidthM')}
-        </Cell>
+        {design('Plan length', 'planLengthM')}
+        {design('Plan width', 'planWidthM')}
 
         <Cell label="Indoor design" span={2} numeric>
           {q('indoorTempC')} at {q('indoorRh')} RH
         </Cell>
-        <Cell label="Winter design" span={2} numeric>
-          {q('winterDesignTempC')}
-        </Cell>
-        <Cell label="Summer design" span={2} numeric>
-          {q('summerDesignTempC')}
-        </Cell>
+        {design('Winter design', 'winterDesignTempC')}
+        {design('Summer design', 'summerDesignTempC')}
 
         <Cell label="Your role" span={2}>
           {PROJECT_ROLE_LABELS[p.myRole]}

@@ -6,6 +6,7 @@ import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage } from '../../../lib/api';
+import { submitting } from '../../../lib/form-submit';
 import { useCreateAssembly } from '../../assemblies/api/create-assembly';
 import { useUpdateAssembly } from '../../assemblies/api/update-assembly';
 
@@ -41,34 +42,29 @@ export function MakeAssembly({
   return (
     <form
       className="flex flex-col gap-3"
-      onSubmit={async (e) => {
-        e.preventDefault();
-        try {
-          if (as === 'new') {
-            const made = await create.mutateAsync({
-              projectId: assembly.projectId,
-              input: { ...input, name: name.trim() },
-            });
-            // The same input with a note puts the note on revision 1 (a note-only save makes no revision).
-            await update.mutateAsync({
-              assemblyId: made.id,
-              version: made.version,
-              note,
-              input: made.current.input,
-            });
-            navigate(`/projects/${made.projectId}/assemblies/${made.id}`);
-          } else {
-            await update.mutateAsync({
-              assemblyId: assembly.id,
-              version: assembly.version,
-              note,
-              input: { ...input, name: assembly.name },
-            });
-          }
-        } catch {
-          // shown below
+      onSubmit={submitting(async () => {
+        if (as === 'new') {
+          const made = await create.mutateAsync({
+            projectId: assembly.projectId,
+            input: { ...input, name: name.trim() },
+          });
+          // The same input with a note puts the note on revision 1 (a note-only save makes no revision).
+          await update.mutateAsync({
+            assemblyId: made.id,
+            version: made.version,
+            note,
+            input: made.current.input,
+          });
+          navigate(`/projects/${made.projectId}/assemblies/${made.id}`);
+        } else {
+          await update.mutateAsync({
+            assemblyId: assembly.id,
+            version: assembly.version,
+            note,
+            input: { ...input, name: assembly.name },
+          });
         }
-      }}
+      })}
     >
       <fieldset className="flex flex-wrap gap-x-6 gap-y-1 text-sm">
         <legend className="sr-only">Save the variant as</legend>

@@ -7,6 +7,7 @@ import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
 import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage } from '../../../lib/api';
+import { submitting } from '../../../lib/form-submit';
 import { formatDateTime } from '../../../lib/format';
 import { useSavedSweeps } from '../api/get-saved-sweeps';
 import { useSaveSweep } from '../api/save-sweep';
@@ -49,18 +50,13 @@ export function SavedSweeps({
           <form
             className="flex flex-col gap-3"
             aria-label="Save this sweep"
-            onSubmit={async (e) => {
-              e.preventDefault();
-              try {
-                await save.mutateAsync({
-                  assemblyId: assembly.id,
-                  body: { ...toSave.body, name: name.trim() },
-                });
-                setName('');
-              } catch {
-                // shown below
-              }
-            }}
+            onSubmit={submitting(async () => {
+              await save.mutateAsync({
+                assemblyId: assembly.id,
+                body: { ...toSave.body, name: name.trim() },
+              });
+              setName('');
+            })}
           >
             <Field
               label="Name of the saved sweep"

@@ -17,30 +17,83 @@ import {
 } from 'drizzle-orm/pg-core';
 import { user } from './auth';
 
-const createdAt = () => timestamp('created_at', { withTimezone: true }).notNull().defaultNow();
-const updatedAt = () => timestamp('updated_at', { withTimezone: true }).notNull().defaultNow();
+/** A moment, with its time zone. */
+const at = (name: string) => timestamp(name, { withTimezone: true });
+const createdAt = () => at('created_at').notNull().defaultNow();
+const updatedAt = () => at('updated_at').notNull().defaultNow();
+/** A row's own key: a random uuid. */
+const id = () => uuid('id').primaryKey().defaultRandom();
+/** A required link to the row of another table that this one is part of: deleted with it. */
+const partOf = (name: string, target: () => AnyPgColumn) =>
+  uuid(name).notNull().references(target, { onDelete: 'cascade' });
+/**
+ * A person's account: by default it cannot be deleted while named here; `set null` forgets them, `cascade`
+ * (a membership) goes with them.
+ */
+const account = (name: string, onDelete?: 'set null' | 'cascade') =>
+  text(name).references(() => user.id, onDelete && { onDelete });
+const projectId = () => partOf('project_id', () => projects.id);
+const organisationId = () => partOf('organisation_id', () => organisations.id);
+/** Who made the row and when. */
+const created = (onDelete?: 'set null') => ({
+  createdBy: account('created_by', onDelete),
+  createdAt: createdAt(),
+});
+/** Who made the row, when, and when it last changed. */
+const edited = (onDelete?: 'set null') => ({ ...created(onDelete), updatedAt: updatedAt() });
+/** Optimistic concurrency: every update names the `version` it read; with who made the row and when. */
+const versioned = (onDelete?: 'set null') => ({
+  version: integer('version').notNull().default(1),
+  ...edited(onDelete),
+});
+/** A firm library entry's key and firm. */
+const firmEntry = () => ({ id: id(), organisationId: organisationId() });
+/** The assembly revision a run, a sweep or an inspection was made of, in its project. */
+const ofAssembly = () => ({
+  projectId: projectId(),
+  assemblyId: partOf('assembly_id', () => assemblies.id),
+  assemblyRevision: integer('assembly_revision').notNull(),
+});
+/** The code table version a run or a sweep was checked against, with its name as it was then. */
+const checkedAgainst = () => ({
+  criteriaSetId: uuid('criteria_set_id')
+    .notNull()
+    .references(() => criteriaSets.id),
+  criteriaSetVersion: integer('criteria_set_version').notNull(),
+  criteriaSetName: text('criteria_set_name').notNull(),
+});
+/** The firm that issued a verification code, as it was named then (the firm may go; its name stays). */
+const issuer = () => ({
+  issuerOrganisationId: uuid('issuer_organisation_id').references(() => organisations.id, {
+    onDelete: 'set null',
+  }),
+  issuerName: text('issuer_name').notNull(),
+});
+const issuedAt = () => at('issued_at').notNull().defaultNow();
+/** A decision with its note and time (null before there is one). */
+const decided = () => ({
+  decision: text('decision'),
+  decisionNote: text('decision_note'),
+  decidedAt: at('decided_at'),
+});
 
 /** A firm: the architect's, the engineer's, the cladding subcontractor's… */
 export const organisations = pgTable('organisations', {
-  id: uuid('id').primaryKey().defaultRandom(),
+  id: id(),
   name: text('name').notNull(),
   /** The firm's handle (`@slug`): unique, never changed; names are not unique, so sheets print this too. */
   slug: text('slug').notNull().unique(),
   createdAt: createdAt(),
   /** When and by which site administrator the firm was confirmed to be who its name says (null: not verified). */
-  verifiedAt: timestamp('verified_at', { withTimezone: true }),
-  verifiedBy: text('verified_by').references(() => user.id, { onDelete: 'set null' }),
+  verifiedAt: at('verified_at'),
+  verifiedBy: account('verified_by', 'set null'),
 });
 
 export const organisationMembers = pgTable(
   'organisation_members',
   {
-    organisationId: uuid('organisation_id')
-      .notNull()
-      .references(() => organisations.id, { onDelete: 'cascade' }),
-    userId: text('user_id')
-      .notNull()
-      .references(() => user.id, { onDelete: 'cascade' }),
+    organisationId: organisationId(),
+    userId: account('user_id', 'cascade').notNull(),
     /**
      * The firm role (shared/auth/permissions.ts `FIRM_ROLES`): `admin` — members, roles, deletes; `editor` —
      * writes code tables, library entries and data sheets; `reader` — reads them.
@@ -59,7 +112,7 @@ export const organisationMembers = pgTable(
 export const projects = pgTable(
   'projects',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
+    id: id(),
     organisationId: uuid('organisation_id')
       .notNull()
       .references(() => organisations.id),
@@ -84,7 +137,7 @@ export const projects = pgTable(
     wind: jsonb('wind'),
     /** Twelve monthly exterior climates and their source (projectClimateSchema), null until entered. */
     climate: jsonb('climate'),
-    archivedAt: timestamp('archived_at', { withTimezone: true }),
+    archivedAt: at('archived_at'),
     /** Optimistic-concurrency version: every update must name the version it read. */
     version: integer('version').notNull().default(1),
     /**
@@ -94,9 +147,7 @@ export const projects = pgTable(
     siteSavedIn: integer('site_saved_in').notNull().default(1),
     windSavedIn: integer('wind_saved_in').notNull().default(1),
     climateSavedIn: integer('climate_saved_in').notNull().default(1),
-    createdBy: text('created_by').references(() => user.id),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    ...edited(),
   },
   (t) => [index('projects_org_idx').on(t.organisationId)],
 );
@@ -105,13 +156,9 @@ export const projects = pgTable(
 export const projectMembers = pgTable(
   'project_members',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    projectId: uuid('project_id')
-      .notNull()
-      .references(() => projects.id, { onDelete: 'cascade' }),
-    userId: text('user_id')
-      .notNull()
-      .references(() => user.id, { onDelete: 'cascade' }),
+    id: id(),
+    projectId: projectId(),
+    userId: account('user_id', 'cascade').notNull(),
     role: text('role').notNull(),
     createdAt: createdAt(),
   },
@@ -124,20 +171,16 @@ export const projectMembers = pgTable(
 export const invitations = pgTable(
   'invitations',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    projectId: uuid('project_id')
-      .notNull()
-      .references(() => projects.id, { onDelete: 'cascade' }),
+    id: id(),
+    projectId: projectId(),
     email: text('email').notNull(),
     role: text('role').notNull(),
     /** SHA-256 of the token sent in the e-mail; the token itself is never stored. */
     tokenHash: text('token_hash').notNull().unique(),
-    invitedBy: text('invited_by')
-      .notNull()
-      .references(() => user.id),
-    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
-    acceptedAt: timestamp('accepted_at', { withTimezone: true }),
-    acceptedBy: text('accepted_by').references(() => user.id),
+    invitedBy: account('invited_by').notNull(),
+    expiresAt: at('expires_at').notNull(),
+    acceptedAt: at('accepted_at'),
+    acceptedBy: account('accepted_by'),
     createdAt: createdAt(),
   },
   (t) => [index('invitations_project_idx').on(t.projectId)],
@@ -148,8 +191,8 @@ export const auditLog = pgTable(
   'audit_log',
   {
     id: bigserial('id', { mode: 'number' }).primaryKey(),
-    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
-    actorId: text('actor_id').references(() => user.id),
+    at: at('at').notNull().defaultNow(),
+    actorId: account('actor_id'),
     projectId: uuid('project_id').references(() => projects.id, { onDelete: 'cascade' }),
     entity: text('entity').notNull(),
     entityId: text('entity_id').notNull(),
@@ -162,8 +205,8 @@ export const auditLog = pgTable(
 
 /** Messages captured by the local SMTP fake (demo/dev/test); a real SMTP server is used in production. */
 export const capturedMail = pgTable('captured_mail', {
-  id: uuid('id').primaryKey().defaultRandom(),
-  receivedAt: timestamp('received_at', { withTimezone: true }).notNull().defaultNow(),
+  id: id(),
+  receivedAt: at('received_at').notNull().defaultNow(),
   from: text('from').notNull(),
   to: text('to').notNull(),
   subject: text('subject').notNull(),
@@ -175,17 +218,12 @@ export const capturedMail = pgTable('captured_mail', {
 export const assemblies = pgTable(
   'assemblies',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    projectId: uuid('project_id')
-      .notNull()
-      .references(() => projects.id, { onDelete: 'cascade' }),
+    id: id(),
+    projectId: projectId(),
     name: text('name').notNull(),
     wallCategory: text('wall_category').notNull(),
     currentRevision: integer('current_revision').notNull().default(1),
-    version: integer('version').notNull().default(1),
-    createdBy: text('created_by').references(() => user.id),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    ...versioned(),
   },
   (t) => [index('assemblies_project_idx').on(t.projectId)],
 );
@@ -194,17 +232,14 @@ export const assemblies = pgTable(
 export const assemblyRevisions = pgTable(
   'assembly_revisions',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    assemblyId: uuid('assembly_id')
-      .notNull()
-      .references(() => assemblies.id, { onDelete: 'cascade' }),
+    id: id(),
+    assemblyId: partOf('assembly_id', () => assemblies.id),
     revision: integer('revision').notNull(),
     note: text('note').notNull().default(''),
     input: jsonb('input').notNull(),
     thermalResult: jsonb('thermal_result'),
     engineVersion: text('engine_version').notNull(),
-    createdBy: text('created_by').references(() => user.id),
-    createdAt: createdAt(),
+    ...created(),
   },
   (t) => [uniqueIndex('assembly_revisions_unique').on(t.assemblyId, t.revision)],
 );
@@ -213,10 +248,7 @@ export const assemblyRevisions = pgTable(
 export const orgMaterials = pgTable(
   'org_materials',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    organisationId: uuid('organisation_id')
-      .notNull()
-      .references(() => organisations.id, { onDelete: 'cascade' }),
+    ...firmEntry(),
     name: text('name').notNull(),
     conductivity: doublePrecision('conductivity').notNull(),
     density: doublePrecision('density'),
@@ -231,10 +263,7 @@ export const orgMaterials = pgTable(
 export const orgBridgeValues = pgTable(
   'org_bridge_values',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    organisationId: uuid('organisation_id')
-      .notNull()
-      .references(() => organisations.id, { onDelete: 'cascade' }),
+    ...firmEntry(),
     name: text('name').notNull(),
     kind: text('kind').notNull(),
     value: doublePrecision('value').notNull(),
@@ -256,10 +285,7 @@ export const orgBridgeValues = pgTable(
 export const orgAttachmentProducts = pgTable(
   'org_attachment_products',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    organisationId: uuid('organisation_id')
-      .notNull()
-      .references(() => organisations.id, { onDelete: 'cascade' }),
+    ...firmEntry(),
     kind: text('kind').notNull(),
     name: text('name').notNull(),
     source: text('source').notNull(),
@@ -270,9 +296,8 @@ export const orgAttachmentProducts = pgTable(
     dataSheetType: text('data_sheet_type'),
     dataSheetSize: integer('data_sheet_size'),
     dataSheetSha256: text('data_sheet_sha256'),
-    dataSheetUploadedAt: timestamp('data_sheet_uploaded_at', { withTimezone: true }),
-    createdBy: text('created_by').references(() => user.id, { onDelete: 'set null' }),
-    createdAt: createdAt(),
+    dataSheetUploadedAt: at('data_sheet_uploaded_at'),
+    ...created('set null'),
   },
   (t) => [index('org_attachment_products_org_idx').on(t.organisationId, t.kind)],
 );
@@ -284,10 +309,7 @@ export const orgAttachmentProducts = pgTable(
 export const orgSweepCosts = pgTable(
   'org_sweep_costs',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    organisationId: uuid('organisation_id')
-      .notNull()
-      .references(() => organisations.id, { onDelete: 'cascade' }),
+    ...firmEntry(),
     kind: text('kind').notNull(),
     name: text('name').notNull(),
     cost: doublePrecision('cost').notNull(),
@@ -295,10 +317,7 @@ export const orgSweepCosts = pgTable(
     movementClass: text('movement_class'),
     source: text('source').notNull().default(''),
     notes: text('notes').notNull().default(''),
-    version: integer('version').notNull().default(1),
-    createdBy: text('created_by').references(() => user.id, { onDelete: 'set null' }),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    ...versioned('set null'),
   },
   (t) => [
     index('org_sweep_costs_org_idx').on(t.organisationId, t.kind),
@@ -315,10 +334,7 @@ export const orgSweepCosts = pgTable(
 export const criteriaSets = pgTable(
   'criteria_sets',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    organisationId: uuid('organisation_id')
-      .notNull()
-      .references(() => organisations.id, { onDelete: 'cascade' }),
+    ...firmEntry(),
     lineageId: uuid('lineage_id').notNull(),
     version: integer('version').notNull().default(1),
     previousVersionId: uuid('previous_version_id').references((): AnyPgColumn => criteriaSets.id),
@@ -331,10 +347,8 @@ export const criteriaSets = pgTable(
     sourceReference: text('source_reference').notNull().default(''),
     /** The table's own names of the wall categories (shared/checks/criteria.ts categoryLabelsSchema). */
     categoryLabels: jsonb('category_labels').notNull().default({}),
-    frozenAt: timestamp('frozen_at', { withTimezone: true }),
-    createdBy: text('created_by').references(() => user.id),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    frozenAt: at('frozen_at'),
+    ...edited(),
   },
   (t) => [
     uniqueIndex('criteria_sets_lineage_version').on(t.lineageId, t.version),
@@ -346,10 +360,8 @@ export const criteriaSets = pgTable(
 export const criteriaRows = pgTable(
   'criteria_rows',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    setId: uuid('set_id')
-      .notNull()
-      .references(() => criteriaSets.id, { onDelete: 'cascade' }),
+    id: id(),
+    setId: partOf('set_id', () => criteriaSets.id),
     position: integer('position').notNull(),
     climateZone: text('climate_zone').notNull(),
     wallCategory: text('wall_category').notNull(),
@@ -369,20 +381,10 @@ export const criteriaRows = pgTable(
 export const checkRuns = pgTable(
   'check_runs',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    projectId: uuid('project_id')
-      .notNull()
-      .references(() => projects.id, { onDelete: 'cascade' }),
-    assemblyId: uuid('assembly_id')
-      .notNull()
-      .references(() => assemblies.id, { onDelete: 'cascade' }),
-    assemblyRevision: integer('assembly_revision').notNull(),
+    id: id(),
+    ...ofAssembly(),
     assemblyName: text('assembly_name').notNull(),
-    criteriaSetId: uuid('criteria_set_id')
-      .notNull()
-      .references(() => criteriaSets.id),
-    criteriaSetVersion: integer('criteria_set_version').notNull(),
-    criteriaSetName: text('criteria_set_name').notNull(),
+    ...checkedAgainst(),
     verdict: text('verdict').notNull(),
     criteriaVerdict: text('criteria_verdict').notNull(),
     moduleVerdict: text('module_verdict').notNull(),
@@ -395,8 +397,7 @@ export const checkRuns = pgTable(
     inputsHash: text('inputs_hash').notNull(),
     outputsHash: text('outputs_hash').notNull(),
     hash: text('hash').notNull(),
-    createdBy: text('created_by').references(() => user.id),
-    createdAt: createdAt(),
+    ...created(),
   },
   (t) => [
     index('check_runs_project_idx').on(t.projectId, t.createdAt),
@@ -411,26 +412,15 @@ export const checkRuns = pgTable(
 export const assemblySweeps = pgTable(
   'assembly_sweeps',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    projectId: uuid('project_id')
-      .notNull()
-      .references(() => projects.id, { onDelete: 'cascade' }),
-    assemblyId: uuid('assembly_id')
-      .notNull()
-      .references(() => assemblies.id, { onDelete: 'cascade' }),
-    assemblyRevision: integer('assembly_revision').notNull(),
+    id: id(),
+    ...ofAssembly(),
     name: text('name').notNull(),
-    criteriaSetId: uuid('criteria_set_id')
-      .notNull()
-      .references(() => criteriaSets.id),
-    criteriaSetVersion: integer('criteria_set_version').notNull(),
-    criteriaSetName: text('criteria_set_name').notNull(),
+    ...checkedAgainst(),
     parameters: jsonb('parameters').notNull(),
     costs: jsonb('costs'),
     summary: jsonb('summary').notNull(),
     engineVersion: text('engine_version').notNull(),
-    createdBy: text('created_by').references(() => user.id, { onDelete: 'set null' }),
-    createdAt: createdAt(),
+    ...created('set null'),
   },
   (t) => [index('assembly_sweeps_assembly_idx').on(t.assemblyId, t.createdAt)],
 );
@@ -446,14 +436,9 @@ export const sheetVerifications = pgTable(
   'sheet_verifications',
   {
     code: text('code').primaryKey(),
-    runId: uuid('run_id')
-      .notNull()
-      .references(() => checkRuns.id, { onDelete: 'cascade' }),
-    issuerOrganisationId: uuid('issuer_organisation_id').references(() => organisations.id, {
-      onDelete: 'set null',
-    }),
-    issuerName: text('issuer_name').notNull(),
-    issuedAt: timestamp('issued_at', { withTimezone: true }).notNull().defaultNow(),
+    runId: partOf('run_id', () => checkRuns.id),
+    ...issuer(),
+    issuedAt: issuedAt(),
   },
   (t) => [uniqueIndex('sheet_verifications_run').on(t.runId)],
 );
@@ -467,17 +452,12 @@ export const sheetVerifications = pgTable(
  */
 export const fieldReportVerifications = pgTable('field_report_verifications', {
   code: text('code').primaryKey(),
-  inspectionId: uuid('inspection_id')
-    .notNull()
-    .references(() => inspections.id, { onDelete: 'cascade' }),
+  inspectionId: partOf('inspection_id', () => inspections.id),
   hash: text('hash').notNull(),
-  issuerOrganisationId: uuid('issuer_organisation_id').references(() => organisations.id, {
-    onDelete: 'set null',
-  }),
-  issuerName: text('issuer_name').notNull(),
-  issuedBy: text('issued_by').references(() => user.id, { onDelete: 'set null' }),
+  ...issuer(),
+  issuedBy: account('issued_by', 'set null'),
   summary: jsonb('summary').notNull(),
-  issuedAt: timestamp('issued_at', { withTimezone: true }).notNull().defaultNow(),
+  issuedAt: issuedAt(),
 });
 
 /**
@@ -488,10 +468,8 @@ export const fieldReportVerifications = pgTable('field_report_verifications', {
 export const submittals = pgTable(
   'submittals',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    projectId: uuid('project_id')
-      .notNull()
-      .references(() => projects.id, { onDelete: 'cascade' }),
+    id: id(),
+    projectId: projectId(),
     lineageId: uuid('lineage_id').notNull(),
     previousRevisionId: uuid('previous_revision_id').references((): AnyPgColumn => submittals.id),
     revision: integer('revision').notNull().default(1),
@@ -505,17 +483,12 @@ export const submittals = pgTable(
     /** draft | submitted | under_review | approved | approved_as_noted | revise_and_resubmit | rejected */
     status: text('status').notNull().default('draft'),
     /** The person on the submitting side (creator of revision 1; carried to later revisions). */
-    submitterId: text('submitter_id').references(() => user.id),
-    submittedAt: timestamp('submitted_at', { withTimezone: true }),
-    submittedBy: text('submitted_by').references(() => user.id),
-    decision: text('decision'),
-    decisionNote: text('decision_note'),
-    decidedAt: timestamp('decided_at', { withTimezone: true }),
-    decidedBy: text('decided_by').references(() => user.id),
-    version: integer('version').notNull().default(1),
-    createdBy: text('created_by').references(() => user.id),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    submitterId: account('submitter_id'),
+    submittedAt: at('submitted_at'),
+    submittedBy: account('submitted_by'),
+    ...decided(),
+    decidedBy: account('decided_by'),
+    ...versioned(),
   },
   (t) => [
     index('submittals_project_idx').on(t.projectId, t.status),
@@ -531,16 +504,10 @@ export const submittals = pgTable(
 export const submittalReviewers = pgTable(
   'submittal_reviewers',
   {
-    submittalId: uuid('submittal_id')
-      .notNull()
-      .references(() => submittals.id, { onDelete: 'cascade' }),
-    userId: text('user_id')
-      .notNull()
-      .references(() => user.id, { onDelete: 'cascade' }),
+    submittalId: partOf('submittal_id', () => submittals.id),
+    userId: account('user_id', 'cascade').notNull(),
     /** approved | approved_as_noted | revise_and_resubmit | rejected */
-    decision: text('decision'),
-    decisionNote: text('decision_note'),
-    decidedAt: timestamp('decided_at', { withTimezone: true }),
+    ...decided(),
   },
   (t) => [primaryKey({ columns: [t.submittalId, t.userId] })],
 );
@@ -554,10 +521,8 @@ export const submittalReviewers = pgTable(
 export const submittalItems = pgTable(
   'submittal_items',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    submittalId: uuid('submittal_id')
-      .notNull()
-      .references(() => submittals.id, { onDelete: 'cascade' }),
+    id: id(),
+    submittalId: partOf('submittal_id', () => submittals.id),
     position: integer('position').notNull(),
     /** sheet | file */
     kind: text('kind').notNull(),
@@ -567,7 +532,7 @@ export const submittalItems = pgTable(
     contentType: text('content_type'),
     size: integer('size'),
     sha256: text('sha256'),
-    addedBy: text('added_by').references(() => user.id),
+    addedBy: account('added_by'),
     createdAt: createdAt(),
   },
   // One item per place: racing additions cannot share a position (they are also serialised by a row lock).
@@ -578,12 +543,10 @@ export const submittalItems = pgTable(
 export const submittalComments = pgTable(
   'submittal_comments',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    submittalId: uuid('submittal_id')
-      .notNull()
-      .references(() => submittals.id, { onDelete: 'cascade' }),
+    id: id(),
+    submittalId: partOf('submittal_id', () => submittals.id),
     itemId: uuid('item_id').references(() => submittalItems.id, { onDelete: 'cascade' }),
-    authorId: text('author_id').references(() => user.id),
+    authorId: account('author_id'),
     body: text('body').notNull(),
     createdAt: createdAt(),
   },
@@ -598,19 +561,14 @@ export const submittalComments = pgTable(
 export const inspectionTemplates = pgTable(
   'inspection_templates',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    organisationId: uuid('organisation_id')
-      .notNull()
-      .references(() => organisations.id, { onDelete: 'cascade' }),
+    ...firmEntry(),
     version: integer('version').notNull().default(1),
     previousVersionId: uuid('previous_version_id').references((): AnyPgColumn => inspectionTemplates.id),
     /** shared/inspections/schema.ts templateItemSchema[] */
     items: jsonb('items').notNull().default([]),
     revision: integer('revision').notNull().default(1),
-    frozenAt: timestamp('frozen_at', { withTimezone: true }),
-    createdBy: text('created_by').references(() => user.id),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    frozenAt: at('frozen_at'),
+    ...edited(),
   },
   (t) => [uniqueIndex('inspection_templates_org_version').on(t.organisationId, t.version)],
 );
@@ -623,15 +581,11 @@ export const inspectionTemplates = pgTable(
 export const inspections = pgTable(
   'inspections',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    projectId: uuid('project_id')
-      .notNull()
-      .references(() => projects.id, { onDelete: 'cascade' }),
+    id: id(),
+    projectId: projectId(),
     number: integer('number').notNull(),
     title: text('title').notNull(),
-    assemblyId: uuid('assembly_id')
-      .notNull()
-      .references(() => assemblies.id, { onDelete: 'cascade' }),
+    assemblyId: partOf('assembly_id', () => assemblies.id),
     assemblyRevision: integer('assembly_revision').notNull(),
     assemblyName: text('assembly_name').notNull(),
     elevation: text('elevation').notNull(),
@@ -642,12 +596,9 @@ export const inspections = pgTable(
     checkRunId: uuid('check_run_id').references(() => checkRuns.id, { onDelete: 'set null' }),
     sheetCode: text('sheet_code'),
     templateId: uuid('template_id').references(() => inspectionTemplates.id, { onDelete: 'set null' }),
-    version: integer('version').notNull().default(1),
-    createdBy: text('created_by').references(() => user.id),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
-    closedAt: timestamp('closed_at', { withTimezone: true }),
-    closedBy: text('closed_by').references(() => user.id),
+    ...versioned(),
+    closedAt: at('closed_at'),
+    closedBy: account('closed_by'),
   },
   (t) => [
     uniqueIndex('inspections_project_number').on(t.projectId, t.number),
@@ -659,10 +610,8 @@ export const inspections = pgTable(
 export const inspectionItems = pgTable(
   'inspection_items',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    inspectionId: uuid('inspection_id')
-      .notNull()
-      .references(() => inspections.id, { onDelete: 'cascade' }),
+    id: id(),
+    inspectionId: partOf('inspection_id', () => inspections.id),
     position: integer('position').notNull(),
     kind: text('kind').notNull(),
     itemGroup: text('item_group').notNull(),
@@ -680,8 +629,8 @@ export const inspectionItems = pgTable(
     note: text('note').notNull().default(''),
     location: text('location').notNull().default(''),
     version: integer('version').notNull().default(1),
-    answeredBy: text('answered_by').references(() => user.id),
-    answeredAt: timestamp('answered_at', { withTimezone: true }),
+    answeredBy: account('answered_by'),
+    answeredAt: at('answered_at'),
   },
   (t) => [
     uniqueIndex('inspection_items_position').on(t.inspectionId, t.position),
@@ -693,20 +642,15 @@ export const inspectionItems = pgTable(
 export const inspectionPhotos = pgTable(
   'inspection_photos',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    inspectionId: uuid('inspection_id')
-      .notNull()
-      .references(() => inspections.id, { onDelete: 'cascade' }),
-    itemId: uuid('item_id')
-      .notNull()
-      .references(() => inspectionItems.id, { onDelete: 'cascade' }),
+    id: id(),
+    inspectionId: partOf('inspection_id', () => inspections.id),
+    itemId: partOf('item_id', () => inspectionItems.id),
     storageKey: text('storage_key').notNull(),
     fileName: text('file_name').notNull(),
     contentType: text('content_type').notNull(),
     size: integer('size').notNull(),
     sha256: text('sha256').notNull(),
-    createdBy: text('created_by').references(() => user.id),
-    createdAt: createdAt(),
+    ...created(),
   },
   (t) => [index('inspection_photos_item_idx').on(t.itemId)],
 );
@@ -715,27 +659,20 @@ export const inspectionPhotos = pgTable(
 export const inspectionDeficiencies = pgTable(
   'inspection_deficiencies',
   {
-    id: uuid('id').primaryKey().defaultRandom(),
-    inspectionId: uuid('inspection_id')
-      .notNull()
-      .references(() => inspections.id, { onDelete: 'cascade' }),
-    itemId: uuid('item_id')
-      .notNull()
-      .references(() => inspectionItems.id, { onDelete: 'cascade' }),
+    id: id(),
+    inspectionId: partOf('inspection_id', () => inspections.id),
+    itemId: partOf('item_id', () => inspectionItems.id),
     number: integer('number').notNull(),
     /** open | corrected | accepted | reopened */
     state: text('state').notNull().default('open'),
     description: text('description').notNull().default(''),
-    ownerId: text('owner_id').references(() => user.id, { onDelete: 'set null' }),
+    ownerId: account('owner_id', 'set null'),
     dueDate: date('due_date', { mode: 'string' }),
     correctionPhotoId: uuid('correction_photo_id').references(() => inspectionPhotos.id, {
       onDelete: 'set null',
     }),
     note: text('note').notNull().default(''),
-    version: integer('version').notNull().default(1),
-    createdBy: text('created_by').references(() => user.id),
-    createdAt: createdAt(),
-    updatedAt: updatedAt(),
+    ...versioned(),
   },
   (t) => [
     uniqueIndex('inspection_deficiencies_number').on(t.inspectionId, t.number),

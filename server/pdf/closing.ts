@@ -1,3 +1,4 @@
+import { storedMessageText } from '@shared/format';
 import { formatVerificationCode } from '@shared/sheets/verification';
 import { INK, PAGE, type SheetWriter } from './layout';
 import type { SheetData } from './sheet-data';
@@ -18,7 +19,9 @@ export function drawCautions(w: SheetWriter, data: SheetData): void {
   // The runner's own "aid to, never a substitute for" line is said first here already.
   const items = [
     ...SHEET_CAUTIONS,
-    ...data.run.outputs.cautions.filter((c) => !own.has(c) && !c.includes('never a substitute')),
+    ...data.run.outputs.cautions
+      .map((c) => storedMessageText(c, data.units))
+      .filter((c) => !own.has(c) && !c.includes('never a substitute')),
   ];
   cautionList(w, [...new Set(items)]);
   w.y += 2;

@@ -1,4 +1,5 @@
 import type { TraceStep } from '../calc/trace';
+import type { StoredMessage } from '../format/message-schema';
 import type { AssemblyInput } from '../schemas/assembly';
 import type { MetricKey } from './criteria';
 import type { CheckInput, ProjectForChecks } from './inputs';
@@ -27,8 +28,8 @@ export interface CheckModule<I = unknown, R = unknown> {
   verdicts(result: R, assembly: AssemblyInput): ModuleCheck[];
   /** Every trace step of the result, for "show the work" lookups by id. */
   trace(result: R): TraceStep[];
-  /** Warnings and cautions the module attaches to its result. */
-  cautions(result: R): string[];
+  /** Warnings (messages) and cautions (the calculation's fixed words) the module attaches to its result. */
+  cautions(result: R): StoredMessage[];
 }
 
 /** Identity helper that keeps a module's input and result types while registering it. */

@@ -334,7 +334,10 @@ export const jointsModule = defineCheckModule({
       }),
     ),
   trace: (r) => r.joints.flatMap((j) => j.trace),
-  cautions: (r) => r.joints.flatMap((j) => j.warnings.map((w) => `${j.name}: ${w}`)),
+  cautions: (r) =>
+    r.joints.flatMap((j, i) =>
+      j.warnings.map((warning) => engineMessage('joint_warning', `joints.${i}`, { joint: j.name, warning })),
+    ),
 });
 
 /** Every module the runner evaluates, in the order of the sheet. */

@@ -125,7 +125,8 @@ export const checkReportSchema = z.object({
   moduleVerdict: verdictSchema,
   /** Every trace step a check or metric refers to, in order of first reference. */
   steps: z.array(traceStepSchema),
-  cautions: z.array(z.string()),
+  /** The modules' warnings (messages; words in runs stored before) and the fixed cautions (words). */
+  cautions: z.array(storedMessageSchema),
 });
 export type CheckReport = z.infer<typeof checkReportSchema>;
 

@@ -45,6 +45,70 @@ const metricNotes = [
 export const metricNoteSchema = z.discriminatedUnion('code', [...metricNotes]);
 export type MetricNote = z.infer<typeof metricNoteSchema>;
 
+/** Why the wind design check has no number at the design spacing (a `DesignCheck`'s `reason`); lengths in m. */
+const designReasons = [
+  message('design_girt_missing', none),
+  message('design_clip_missing', none),
+  message('span_beyond_table', z.object({ span: z.number(), longest: z.number() })),
+  message('span_below_table', z.object({ span: z.number(), shortest: z.number() })),
+] as const;
+export const designReasonSchema = z.discriminatedUnion('code', [...designReasons]);
+export type DesignReason = z.infer<typeof designReasonSchema>;
+
+// The engines' warnings: what to read with a result (each engine's result schema lists its own codes).
+
+/** The thermal engine's: R′T/R″T of the combined method above the ISO 6946 limit (dimensionless). */
+const thermalWarnings = [
+  message('combined_method_limit', z.object({ ratio: z.number(), limit: z.number() })),
+] as const;
+export const thermalWarningSchema = z.discriminatedUnion('code', [...thermalWarnings]);
+export type ThermalWarning = z.infer<typeof thermalWarningSchema>;
+
+/** The moisture engine's; `layer` is a layer's index (`path` layers.<i>). */
+const moistureWarnings = [
+  message('interior_capped', z.object({ months: z.array(month) })),
+  message('condensation_every_month', none),
+  message('slightly_ventilated_unventilated', z.object({ layer: z.number().int().min(0), name: z.string() })),
+  message('framed_layer_between_members', z.object({ layer: z.number().int().min(0), name: z.string() })),
+  /** The first `count` layers lie outside a well-ventilated air layer. */
+  message('outside_ventilated_layer', z.object({ count: z.number().int().min(1) })),
+] as const;
+export const moistureWarningSchema = z.discriminatedUnion('code', [...moistureWarnings]);
+export type MoistureWarning = z.infer<typeof moistureWarningSchema>;
+
+/** The joint engine's, per joint; lengths in m. */
+const jointWarnings = [
+  /** `side`: the label of the side whose α is a generic value. */
+  message('expansion_generic', z.object({ side: z.string() })),
+  message('depth_over_rule', z.object({ designDepth: z.number(), requiredDepth: z.number() })),
+  message('depth_below_bond', z.object({ designDepth: z.number(), minimum: z.number() })),
+  message('joint_over_wide', z.object({ width: z.number(), limit: z.number() })),
+  message('opening_shallow', z.object({ openingDepth: z.number(), requiredDepth: z.number() })),
+] as const;
+export const jointWarningSchema = z.discriminatedUnion('code', [...jointWarnings]);
+export type JointWarning = z.infer<typeof jointWarningSchema>;
+
+const zone = z.number().int();
+/** The wind engine's: the site's, then each zone's; heights and spacings in m. */
+const windWarnings = [
+  message('above_gradient_height', z.object({ height: z.number(), gradientHeight: z.number() })),
+  message('high_rise_gcp', z.object({ figure: z.string(), limit: z.number() })),
+  /** K_z here, the 0.70 floor ASCE 7-10 kept below `floorHeight` for components and cladding. */
+  message(
+    'exposure_b_floor',
+    z.object({ edition: z.string(), kz: z.number(), floorKz: z.number(), floorHeight: z.number() }),
+  ),
+  message('low_slope_gcp', z.object({ slopeLimit: z.number() })),
+  message('span_outside_table', z.object({ zone, check: z.string() })),
+  message('spacing_not_converged', z.object({ zone, check: z.string(), iterations: z.number().int() })),
+  message('table_end_governs', z.object({ zone })),
+  message('clip_below_module', z.object({ zone, clipSpacing: z.number() })),
+  message('module_wider_than_end_zone', none),
+  message('panels_cross_end_zone', none),
+] as const;
+export const windWarningSchema = z.discriminatedUnion('code', [...windWarnings]);
+export type WindWarning = z.infer<typeof windWarningSchema>;
+
 const failedCheck = z.object({ check: z.string(), utilisation: z.number() });
 
 export const engineMessageSchema = z.discriminatedUnion('code', [
@@ -81,8 +145,8 @@ export const engineMessageSchema = z.discriminatedUnion('code', [
   message('girt_spacing_missing', none),
   message('clip_spacing_missing', none),
   message('clip_needs_girt_spacing', none),
-  /** `detail`: the design check's own words for why the table cannot say (null: the design span is outside). */
-  message('girt_outside_table', z.object({ detail: z.string().nullable() })),
+  /** `detail`: the design check's reason the table cannot say (words in runs stored before; null: outside). */
+  message('girt_outside_table', z.object({ detail: z.union([designReasonSchema, z.string()]).nullable() })),
   message('clip_outside_table', none),
   message('no_girt_spacing_works', none),
   message('no_clip_spacing_works', none),
@@ -92,6 +156,14 @@ export const engineMessageSchema = z.discriminatedUnion('code', [
   // The joints module's own checks.
   message('joint_minimum_governs', none),
   message('joint_governs', z.object({ governing: z.string() })),
+
+  ...designReasons,
+  ...thermalWarnings,
+  ...moistureWarnings,
+  ...jointWarnings,
+  ...windWarnings,
+  /** A joint's warning among a check run's cautions: the joint's name and the warning. */
+  message('joint_warning', z.object({ joint: z.string(), warning: jointWarningSchema })),
 
   /** The moisture result: condensation (none, dries out, builds up) and the surface checks; SI values. */
   message(

@@ -1,8 +1,19 @@
+import { GENERIC_EXPANSION_NOTE } from '../calc/joints/expansion';
 import { MONTH_NAMES } from '../calc/moisture/monthly';
 import { WALL_CATEGORY_LABELS } from '../schemas/assembly';
 import type { UnitSystem } from '../units';
-import type { EngineMessage, StoredMessage } from './message-schema';
-import { formatterFor } from './quantities';
+import type {
+  DesignReason,
+  EngineMessage,
+  JointWarning,
+  MoistureWarning,
+  StoredMessage,
+  ThermalWarning,
+  WindWarning,
+} from './message-schema';
+import { formatterFor, num } from './quantities';
+
+type Warning = DesignReason | ThermalWarning | MoistureWarning | JointWarning | WindWarning;
 
 export * from './message-schema';
 
@@ -23,6 +34,7 @@ const notMet = (failed: readonly { check: string; utilisation: number }[]): stri
     : '';
 
 const fixed3 = (x: number) => x.toFixed(3);
+const fixed2 = (x: number) => x.toFixed(2);
 
 /** The moisture result in words: condensation first, then the clear-field surface, then the solved bridges. */
 function moistureVerdict(
@@ -140,8 +152,12 @@ export function messageText(m: EngineMessage, system: UnitSystem = 'SI'): string
       return 'the design clip spacing is not entered on the assembly';
     case 'clip_needs_girt_spacing':
       return 'the design girt spacing is not entered on the assembly, and the clip spacing is checked at it';
-    case 'girt_outside_table':
-      return `the table cannot say — ${m.values.detail ?? 'the design span is outside the table'} (tables are never extrapolated)`;
+    case 'girt_outside_table': {
+      const { detail } = m.values;
+      const why =
+        detail === null ? 'the design span is outside the table' : storedMessageText(detail, system);
+      return `the table cannot say — ${why} (tables are never extrapolated)`;
+    }
     case 'clip_outside_table':
       return 'the clip cannot be checked at a design girt spacing outside the table';
     case 'no_girt_spacing_works':
@@ -158,6 +174,76 @@ export function messageText(m: EngineMessage, system: UnitSystem = 'SI'): string
       return `The joint’s ${m.values.governing} governs the width it needs.`;
     case 'moisture_verdict':
       return moistureVerdict(m.values, system);
+    case 'joint_warning':
+      return `${m.values.joint}: ${messageText(m.values.warning, system)}`;
+    default:
+      return warningText(m, system);
+  }
+}
+
+/**
+ * The wind design check's reasons and the engines' warnings, in words (lower case, no full stop: pages and the
+ * sheet make them sentences). Lengths through the quantity formatter; the SI words are those of before.
+ */
+function warningText(m: Warning, system: UnitSystem): string {
+  const f = formatterFor(system);
+  const depth = (x: number) => f.length(x, { inchFractions: true });
+  switch (m.code) {
+    case 'design_girt_missing':
+      return 'no design girt spacing entered';
+    case 'design_clip_missing':
+      return 'no design clip spacing entered';
+    case 'span_beyond_table':
+      return `the design span (${f.length(m.values.span)}) is longer than the table’s longest span (${f.length(m.values.longest)})`;
+    case 'span_below_table':
+      return `the design span (${f.length(m.values.span)}) is shorter than the table’s shortest span (${f.length(m.values.shortest)})`;
+    case 'combined_method_limit':
+      return `R′T/R″T = ${num(m.values.ratio, 2)} exceeds ${num(m.values.limit, 1)}, the ISO 6946:2017 limit for the combined method; use a numerical calculation (ISO 10211)`;
+    case 'interior_capped':
+      return `${m.values.months.map((k) => MONTH_NAMES[k - 1]).join(', ')}: the humidity-class vapour pressure would exceed saturation at the interior temperature; p_i is capped at p_sat(θ_i)`;
+    case 'condensation_every_month':
+      return 'Condensation is predicted in every month: the balance starts in January and the element never dries';
+    case 'slightly_ventilated_unventilated':
+      return `${m.values.name}: a slightly ventilated air layer is taken as unventilated here (its unventilated R, no vapour exchange with the outside) — the cautious side for interstitial condensation; the thermal check blends R_T by its vent area (ISO 6946:2017 §6.9.3)`;
+    case 'framed_layer_between_members':
+      return `${m.values.name}: the one-dimensional condensation calculation runs through the cavity between the members; the members themselves are thermal bridges — check their surface temperature and condensation risk with ISO 10211 or published ψ/χ and f_Rsi values`;
+    case 'outside_ventilated_layer': {
+      const n = m.values.count;
+      return `${n === 1 ? 'Layer 1 lies' : `Layers 1–${n} lie`} outside a well-ventilated air layer and ${n === 1 ? 'is' : 'are'} disregarded; the exterior climate is taken to reach the cavity`;
+    }
+    case 'expansion_generic':
+      return `α of ${m.values.side}: ${GENERIC_EXPANSION_NOTE.toLowerCase()}`;
+    case 'depth_over_rule':
+      return `Design depth ${depth(m.values.designDepth)} is deeper than the depth rule (${depth(m.values.requiredDepth)}); excess depth reduces the sealant’s movement capability`;
+    case 'depth_below_bond':
+      return `Design depth ${depth(m.values.designDepth)} is below the ${depth(m.values.minimum)} needed for the bond to the substrate`;
+    case 'joint_over_wide':
+      return `Joint ${depth(m.values.width)} wide, wider than ${depth(m.values.limit)}: have the sealant manufacturer review it`;
+    case 'opening_shallow':
+      return `The opening (${depth(m.values.openingDepth)} deep) is shallower than the sealant depth (${depth(m.values.requiredDepth)})`;
+    case 'above_gradient_height':
+      return `The mean roof height (${f.dimension(m.values.height)}) lies above the gradient height z_g (${f.dimension(m.values.gradientHeight)}); K_z is held at its value at z_g`;
+    case 'high_rise_gcp':
+      return `h > ${f.dimension(m.values.limit)}: confirm the wall GC_p values of ${m.values.figure} against the adopted edition before issuing the schedule`;
+    case 'exposure_b_floor': {
+      const { edition, kz, floorKz, floorHeight } = m.values;
+      const below = `below ${f.dimension(floorHeight)}`;
+      return `Exposure B ${below}: ${edition} Table 26.10-1 gives K_z = ${fixed2(kz)} here for components and cladding; its ${fixed2(floorKz)} footnote is for Chapter 28 (main wind-force resisting system, envelope procedure) only. ASCE 7-10 held K_z at ${fixed2(floorKz)} ${below} for components and cladding (Table 30.3-1), which gives pressures ${Math.round((floorKz / kz - 1) * 100)} % higher — where the adopted code or the building official keeps that floor, design for it`;
+    }
+    case 'low_slope_gcp':
+      return `Roof slope θ ≤ ${m.values.slopeLimit}°: wall GC_p reduced by 10 % (Figure 30.3-1 note), and h must be the eave height`;
+    case 'span_outside_table':
+      return `Zone ${m.values.zone}: the ${m.values.check} pressure exceeds the table even at its shortest span — outside the table, no spacing given`;
+    case 'spacing_not_converged':
+      return `Zone ${m.values.zone}: the ${m.values.check} spacing did not converge in ${m.values.iterations} iterations`;
+    case 'table_end_governs':
+      return `Zone ${m.values.zone}: the governing span is the table’s longest span; longer spans are outside the table`;
+    case 'clip_below_module':
+      return `Zone ${m.values.zone}: the clip spacing (${f.length(m.values.clipSpacing)}) is less than the panel module width — more than one clip per module per girt is needed`;
+    case 'module_wider_than_end_zone':
+      return 'The panel module is wider than the end zone a: design the corner panels for zone 5';
+    case 'panels_cross_end_zone':
+      return 'Panels spanning from a corner cross the end zone a: use the zone 5 girt spacing there';
   }
 }
 

@@ -11,6 +11,7 @@ import { demoWindSchedule } from '@shared/calc/wind/examples';
 import { analyseSite, MINIMUM_PRESSURE, wallPressures } from '@shared/calc/wind/pressure';
 import type { WindSite } from '@shared/calc/wind/schema';
 import { groundElevationFactor, velocityPressureExposureCoefficient } from '@shared/calc/wind/velocity';
+import { messageText } from '@shared/format/messages';
 import { FOOT, MPH_TO_MS, PSF_TO_PA } from '@shared/units';
 import { describe, expect, it } from 'vitest';
 
@@ -98,10 +99,11 @@ describe('ASCE 7-16/7-22 Table 26.10-1 — exposure B below 30 ft for components
         ...demoWindSchedule(),
         site: { ...demoWindSchedule().site, edition, exposure: 'B', meanRoofHeight: 15 * FOOT },
       });
-      const w = r.warnings.find((x) => x.startsWith('Exposure B below 30 ft'))!;
+      const w = messageText(r.warnings.find((x) => x.code === 'exposure_b_floor')!, 'IP');
+      expect(w).toMatch(/^Exposure B below 30\u202fft/);
       expect(w).toContain(`${edition} Table 26.10-1 gives K_z = 0.57`);
       expect(w).toContain('Chapter 28');
-      expect(w).toMatch(/0\.70 below 30 ft .* (22|23) % higher/);
+      expect(w).toMatch(/0\.70 below 30\u202fft .* (22|23) % higher/);
     },
   );
 });

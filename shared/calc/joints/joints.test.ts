@@ -1,4 +1,5 @@
 import { CalcInputError } from '@shared/calc/errors';
+import { messageText } from '@shared/format/messages';
 import { INCH } from '@shared/units';
 import { describe, expect, it } from 'vitest';
 import { demoJointSchedule } from './examples';
@@ -160,15 +161,31 @@ describe('calculateJoint', () => {
   });
 
   it('warns on excess or too-shallow depth, an over-wide joint, a shallow opening and a generic α', () => {
-    const w = (extra: Partial<JointInput>) => calculateJoint(joint(extra)).warnings.join('\n');
+    const w = (extra: Partial<JointInput>) =>
+      calculateJoint(joint(extra))
+        .warnings.map((m) => messageText(m))
+        .join('\n');
     expect(w({ designWidth: 0.02, designDepth: 0.015 })).toMatch(/deeper than the depth rule/);
-    expect(w({ designDepth: 0.004 })).toMatch(/below the 6 mm/);
-    expect(w({ designWidth: 0.06 })).toMatch(/wider than 2 in/);
+    expect(w({ designDepth: 0.004 })).toMatch(/below the 6\u202fmm needed/);
+    expect(w({ designWidth: 0.06 })).toMatch(/wider than 50\.8\u202fmm/);
     expect(w({ openingDepth: 0.005 })).toMatch(/shallower than the sealant depth/);
     expect(w({ sides: [{ material: 'pvc-rigid', length: 1 }] })).toMatch(
       /α of PVC, rigid \(unplasticised\): generic value — use the maker’s declared coefficient/,
     );
     expect(calculateJoint(joint()).warnings).toEqual([]);
+  });
+
+  it('a joint wider than 2 in (51 mm) is a message with its width and the limit in m, worded in SI and IP', () => {
+    const [wide] = calculateJoint(joint({ designWidth: 0.06 })).warnings.filter(
+      (m) => m.code === 'joint_over_wide',
+    );
+    // 2 in = 0.0508 m exactly (NIST SP 811 [memory]).
+    expect(wide).toEqual({
+      code: 'joint_over_wide',
+      path: 'joint.designWidth',
+      values: { width: 0.06, limit: 2 * INCH },
+    });
+    expect(messageText(wide!, 'IP')).toMatch(/wider than 2\u202fin: have the sealant manufacturer review it/);
   });
 
   it('every trace step carries a formula, a source and a finite value', () => {

@@ -1,8 +1,9 @@
 import { CalcInputError, requireNonNegative, requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
 import { K, M, ONE, PCT, PER_K } from '@shared/calc/trace-units';
+import { engineMessage, type JointWarning } from '@shared/format/message-schema';
 import { INCH } from '@shared/units';
-import { findExpansionMaterial, GENERIC_EXPANSION_NOTE } from './expansion';
+import { findExpansionMaterial } from './expansion';
 import type {
   Backer,
   BackerCell,
@@ -178,7 +179,7 @@ export function calculateJoint(joint: JointInput, path = 'joint'): JointResult {
   const sides = joint.sides.map((s, k) => resolveSide(s, `${path}.sides.${k}`));
 
   const trace: TraceStep[] = [];
-  const warnings: string[] = [];
+  const warnings: JointWarning[] = [];
   const id = (s: string) => `${path}.${s}`;
   const deltaTExtension = install.max - surface.min;
   const deltaTCompression = surface.max - install.min;
@@ -204,8 +205,8 @@ export function calculateJoint(joint: JointInput, path = 'joint'): JointResult {
       );
       return movement;
     });
-    const generic = `α of ${s.label}: ${GENERIC_EXPANSION_NOTE.toLowerCase()}`;
-    if (s.generic && !warnings.includes(generic)) warnings.push(generic);
+    if (s.generic && !warnings.some((w) => w.code === 'expansion_generic' && w.values.side === s.label))
+      warnings.push(engineMessage('expansion_generic', `${path}.sides.${k}`, { side: s.label }));
     return { label: s.label, alpha: s.alpha, length: s.length, extension, compression };
   });
 
@@ -292,14 +293,22 @@ export function calculateJoint(joint: JointInput, path = 'joint'): JointResult {
   );
   if (joint.designDepth !== undefined && joint.designDepth > requiredDepth * (1 + 1e-9))
     warnings.push(
-      `Design depth ${(joint.designDepth * 1000).toFixed(1)} mm is deeper than the depth rule (${(requiredDepth * 1000).toFixed(1)} mm); excess depth reduces the sealant's movement capability`,
+      engineMessage('depth_over_rule', `${path}.designDepth`, {
+        designDepth: joint.designDepth,
+        requiredDepth,
+      }),
     );
   if (joint.designDepth !== undefined && joint.designDepth < MIN_SEALANT_DEPTH)
     warnings.push(
-      `Design depth ${(joint.designDepth * 1000).toFixed(1)} mm is below the 6 mm (≈ ¼ in) needed for the bond to the substrate`,
+      engineMessage('depth_below_bond', `${path}.designDepth`, {
+        designDepth: joint.designDepth,
+        minimum: MIN_SEALANT_DEPTH,
+      }),
     );
   if (width > MAX_WIDTH_WITHOUT_REVIEW)
-    warnings.push('Joint wider than 2 in (51 mm): have the sealant manufacturer review it');
+    warnings.push(
+      engineMessage('joint_over_wide', `${path}.designWidth`, { width, limit: MAX_WIDTH_WITHOUT_REVIEW }),
+    );
 
   const backer = backerFor(width, requiredDepth, joint.backer ?? 'closed_cell', joint.openingDepth);
   if (backer.kind === 'rod')
@@ -329,7 +338,10 @@ export function calculateJoint(joint: JointInput, path = 'joint'): JointResult {
     );
   if (joint.openingDepth !== undefined && joint.openingDepth < requiredDepth)
     warnings.push(
-      `The opening (${(joint.openingDepth * 1000).toFixed(1)} mm deep) is shallower than the sealant depth (${(requiredDepth * 1000).toFixed(1)} mm)`,
+      engineMessage('opening_shallow', `${path}.openingDepth`, {
+        openingDepth: joint.openingDepth,
+        requiredDepth,
+      }),
     );
 
   const margin = (width - requiredWidth) / requiredWidth;

@@ -7,6 +7,7 @@ import {
   surfaceResistances,
 } from '@shared/calc/thermal/thermal';
 import { step, type TraceStep, v } from '@shared/calc/trace';
+import { engineMessage, type MoistureWarning } from '@shared/format/message-schema';
 import { PERM_0C_TO_SI, PERM_23C_TO_SI } from '@shared/units';
 import { assemblePath, DELTA_0, type DiffusionPath, type PathLayer, SUBLAYER_MAX_R } from './glaser';
 import type { MoistureInput, MoistureLayer, MoistureLayerResult, MoistureNode, Vapour } from './schema';
@@ -144,7 +145,7 @@ export interface Assembly {
 }
 
 /** Layers → diffusion path: R from the thermal engine's functions, s_d from the vapour data. */
-export function assemble(input: MoistureInput, trace: TraceStep[], warnings: string[]): Assembly {
+export function assemble(input: MoistureInput, trace: TraceStep[], warnings: MoistureWarning[]): Assembly {
   const { layers, heatFlow } = input;
   const first = firstKeptLayer(layers);
   if (first === layers.length)
@@ -182,18 +183,16 @@ export function assemble(input: MoistureInput, trace: TraceStep[], warnings: str
     );
     if (layer.kind === 'air' && layer.ventilation === 'slightly' && included)
       warnings.push(
-        `${layer.name}: a slightly ventilated air layer is taken as unventilated here (its unventilated R, no vapour exchange with the outside) — the cautious side for interstitial condensation; the thermal check blends R_T by its vent area (ISO 6946:2017 §6.9.3)`,
+        engineMessage('slightly_ventilated_unventilated', `layers.${i}`, { layer: i, name: layer.name }),
       );
     if (layer.kind === 'framed' && included)
       warnings.push(
-        `${layer.name}: the one-dimensional condensation calculation runs through the cavity between the members; the members themselves are thermal bridges — check their surface temperature and condensation risk with ISO 10211 or published ψ/χ and f_Rsi values`,
+        engineMessage('framed_layer_between_members', `layers.${i}`, { layer: i, name: layer.name }),
       );
     return { name: layer.name, included, resistance: t.resistance, sd, sublayers: 0 };
   });
   if (first > 0)
-    warnings.push(
-      `${first === 1 ? 'Layer 1 lies' : `Layers 1–${first} lie`} outside a well-ventilated air layer and ${first === 1 ? 'is' : 'are'} disregarded; the exterior climate is taken to reach the cavity`,
-    );
+    warnings.push(engineMessage('outside_ventilated_layer', `layers.${first - 1}`, { count: first }));
 
   const table = surfaceResistances(heatFlow);
   const Rsi = table.Rsi;

@@ -70,8 +70,13 @@ describe('calculateMoisture — demo metal-panel wall (invented climate)', () =>
     expect(r.layers[0]!.included).toBe(false);
     expect(r.layers[1]!.included).toBe(false);
     expect(r.Rse).toBe(r.Rsi);
-    expect(r.warnings.join(' ')).toMatch(/well-ventilated/);
-    expect(r.warnings.join(' ')).toMatch(/cavity between the members/);
+    expect(r.warnings.map((w) => said(w)).join(' ')).toMatch(/well-ventilated/);
+    expect(r.warnings.map((w) => said(w)).join(' ')).toMatch(/cavity between the members/);
+    expect(r.warnings.find((w) => w.code === 'outside_ventilated_layer')).toEqual({
+      code: 'outside_ventilated_layer',
+      path: 'layers.1',
+      values: { count: 2 },
+    });
   });
 
   it('without it: the sheathing plane condenses from November, peaks in February and dries by April', () => {
@@ -130,9 +135,9 @@ describe('calculateMoisture — demo metal-panel wall (invented climate)', () =>
     });
     expect(slight.layers[1]!.resistance).toBe(closed.layers[1]!.resistance);
     expect(
-      slight.warnings.some((w) => /slightly ventilated air layer is taken as unventilated/.test(w)),
+      slight.warnings.some((w) => /slightly ventilated air layer is taken as unventilated/.test(said(w))),
     ).toBe(true);
-    expect(closed.warnings.some((w) => /slightly ventilated/.test(w))).toBe(false);
+    expect(closed.warnings.some((w) => w.code === 'slightly_ventilated_unventilated')).toBe(false);
   });
 
   it('traces the steps with stable ids', () => {
@@ -159,7 +164,7 @@ describe('calculateMoisture — accumulation cases', () => {
     expect(r.interstitial.finalAccumulation).toBeGreaterThan(0);
     expect(r.interstitial.finalAccumulation).toBeCloseTo(r.interstitial.maxAccumulation, 12);
     expect(said(r.verdict)).toMatch(/builds up/);
-    expect(r.warnings.join(' ')).toMatch(/every month/);
+    expect(r.warnings.map((w) => said(w)).join(' ')).toMatch(/every month/);
   });
 
   it('moves water between planes: one evaporates while another condenses (constructed sandwich, derived)', () => {
@@ -216,7 +221,14 @@ describe('calculateMoisture — accumulation cases', () => {
   it('caps a humidity-class vapour pressure above saturation and warns', () => {
     const r = calculateMoisture(membraneRoofWall(sameMonths(25, 0.9)));
     expect(r.months[0]!.interiorVapourPressure).toBeCloseTo(2336.95, 1);
-    expect(r.warnings.join(' ')).toMatch(/capped/);
+    expect(r.warnings).toContainEqual({
+      code: 'interior_capped',
+      path: 'interior',
+      values: { months: [1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12] },
+    });
+    expect(said(r.warnings.find((w) => w.code === 'interior_capped'))).toMatch(
+      /^January, February, .*capped/,
+    );
   });
 });
 

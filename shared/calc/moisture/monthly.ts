@@ -1,6 +1,6 @@
 import { CalcInputError, requireInRange } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
-import { type EngineMessage, engineMessage } from '@shared/format/message-schema';
+import { type EngineMessage, engineMessage, type MoistureWarning } from '@shared/format/message-schema';
 import { type Assembly, assemble } from './assembly';
 import {
   type DiffusionPath,
@@ -109,26 +109,23 @@ function monthlyClimate(
   input: MoistureInput,
   path: DiffusionPath,
   factor: number,
-  warnings: string[],
+  warnings: MoistureWarning[],
 ): Climate {
   const theta: number[][] = [];
   const psat: number[][] = [];
   const pe: number[] = [];
-  const capped: string[] = [];
+  const capped: number[] = [];
   const interior = input.months.map((c, m) => {
     const p = c.exteriorRelativeHumidity * saturationPressureIso13788(c.exteriorTemperature);
     pe.push(p);
     const im = interiorMonth(input.interior, c.exteriorTemperature, p, factor, MONTH_NAMES[m]!);
-    if (im.capped) capped.push(MONTH_NAMES[m]!);
+    if (im.capped) capped.push(m + 1);
     const t = nodeTemperatures(path, im.theta, c.exteriorTemperature);
     theta.push(t);
     psat.push(saturationPressures(t));
     return im;
   });
-  if (capped.length > 0)
-    warnings.push(
-      `${capped.join(', ')}: the humidity-class vapour pressure would exceed saturation at the interior temperature; p_i is capped at p_sat(θ_i)`,
-    );
+  if (capped.length > 0) warnings.push(engineMessage('interior_capped', 'interior', { months: capped }));
   return { theta, psat, pe, interior };
 }
 
@@ -323,15 +320,13 @@ export function calculateMoisture(input: MoistureInput): MoistureResult {
   if (input.layers.length === 0) throw new CalcInputError('layers', 'needs at least one layer');
   const factor = validateConditions(input);
   const trace: TraceStep[] = [];
-  const warnings: string[] = [];
+  const warnings: MoistureWarning[] = [];
   const asm = assemble(input, trace, warnings);
   const climate = monthlyClimate(input, asm.path, factor, warnings);
   const work = glaserWork(asm.path.nodeCount);
   const start = chooseStart(condensingMonths(asm.path, climate, work), input.startMonth);
   if (start.rule === 'condensationEveryMonth')
-    warnings.push(
-      'Condensation is predicted in every month: the balance starts in January and the element never dries',
-    );
+    warnings.push(engineMessage('condensation_every_month', '', {}));
   trace.push(
     step(
       'moisture.safetyFactor',

@@ -1,6 +1,6 @@
 import { heatFlowSchema, layerSchema } from '@shared/calc/thermal/schema';
 import { traceStepSchema } from '@shared/calc/trace';
-import { storedMessageSchema } from '@shared/format/message-schema';
+import { moistureWarningSchema, storedMessageSchema } from '@shared/format/message-schema';
 import { PERM_0C_TO_SI, PERM_23C_TO_SI, QUANTITIES, type Unbranded } from '@shared/units';
 import { trimmedFixed } from '@shared/units/rounding';
 import { z } from 'zod';
@@ -278,7 +278,11 @@ export const moistureResultSchema = z.object({
     'The result as a `moisture_verdict` message (`{ code, path, values }`, SI values), worded by the client; plain words in results stored before',
   ),
   trace: z.array(traceStepSchema),
-  warnings: z.array(z.string()),
+  warnings: z
+    .array(moistureWarningSchema)
+    .describe(
+      'What to read with the result: messages `{ code, path, values }` (SI values) worded by the client',
+    ),
 });
 
 export type Vapour = z.infer<typeof vapourSchema>;

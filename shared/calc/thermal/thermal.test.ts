@@ -1,4 +1,5 @@
 import { CalcInputError } from '@shared/calc/errors';
+import { messageText } from '@shared/format/messages';
 import { R_IP_TO_SI, siValue, U_IP_TO_SI } from '@shared/units';
 import { describe, expect, it } from 'vitest';
 import { metalPanelWall } from './examples';
@@ -329,7 +330,10 @@ describe('methods', () => {
         },
       ]),
     );
-    expect(r.warnings.join(' ')).toMatch(/exceeds 1\.5/);
+    const [w] = r.warnings;
+    expect(w).toMatchObject({ code: 'combined_method_limit', values: { limit: 1.5 } });
+    expect(w!.values.ratio).toBeGreaterThan(1.5);
+    expect(messageText(w!)).toMatch(/exceeds 1\.5, the ISO 6946:2017 limit/);
   });
 });
 

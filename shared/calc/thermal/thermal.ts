@@ -1,6 +1,7 @@
 import { CalcInputError } from '@shared/calc/errors';
 import { step, type TraceInput, type TraceStep, v } from '@shared/calc/trace';
 import { M, ONE, RK, UK, WMK } from '@shared/calc/trace-units';
+import { engineMessage, type ThermalWarning } from '@shared/format/message-schema';
 import { R_IP_TO_SI, U_IP_TO_SI } from '@shared/units';
 import {
   ENERGY_CODE_FILMS_SOURCE,
@@ -774,7 +775,7 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
   if (layers.length === 0) throw new CalcInputError('layers', 'needs at least one layer');
   for (let i = 0; i < layers.length; i++) validateLayer(layers[i]!, i);
   const trace: TraceStep[] = [];
-  const warnings: string[] = [];
+  const warnings: ThermalWarning[] = [];
 
   const start = firstKeptLayer(layers);
   if (start === layers.length)
@@ -998,7 +999,7 @@ export function calculateThermal(input: ThermalInput): ThermalResult {
     );
     if (c.ratio > ISO_LIMIT_RATIO_MAX)
       warnings.push(
-        `R′T/R″T = ${c.ratio.toFixed(2)} exceeds 1.5, the ISO 6946:2017 limit for the combined method; use a numerical calculation (ISO 10211)`,
+        engineMessage('combined_method_limit', '', { ratio: c.ratio, limit: ISO_LIMIT_RATIO_MAX }),
       );
   }
 

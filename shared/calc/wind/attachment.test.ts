@@ -1,4 +1,5 @@
 import { CalcInputError } from '@shared/calc/errors';
+import { messageText } from '@shared/format/messages';
 import { describe, expect, it } from 'vitest';
 import {
   CONTINUITY_FACTOR,
@@ -172,13 +173,29 @@ describe('calculateWindSchedule — editions, heights and table limits', () => {
     expect(s22.velocity.equation).toContain('K_d enters p');
   });
 
+  it('above the gradient height z_g: a message with h and z_g in m, worded in SI and IP', () => {
+    // ASCE 7-16 Table 26.11-1 [memory]: exposure D, z_g = 700 ft = 213.36 m; h = 220 m lies above it.
+    const high = analyseSite({ ...demoSite(), exposure: 'D', meanRoofHeight: 220, roofSlopeDeg: 0 });
+    const w = high.warnings.find((m) => m.code === 'above_gradient_height')!;
+    expect(w.path).toBe('site.meanRoofHeight');
+    expect(w.values.height).toBe(220);
+    expect(w.values.gradientHeight).toBeCloseTo(213.36, 9);
+    expect(messageText(w)).toBe(
+      'The mean roof height (220\u202fm) lies above the gradient height z_g (213.36\u202fm); K_z is held at its value at z_g',
+    );
+    expect(messageText(w, 'IP')).toContain(
+      '(721.8\u202fft) lies above the gradient height z_g (700\u202fft)',
+    );
+    expect(analyseSite(demoSite()).warnings.some((m) => m.code === 'above_gradient_height')).toBe(false);
+  });
+
   it('h > 60 ft: h > 60 figure, q_z for inward pressure, and a caution to confirm the coefficients', () => {
     const tall = { ...demoSite(), meanRoofHeight: 40, roofSlopeDeg: 0 };
     const top = analyseSite(tall);
     const low = analyseSite({ ...tall, heightOfComponent: 5 });
     expect(top.lowRise).toBe(false);
     expect(top.figure).toContain('30.5-1');
-    expect(top.warnings.join(' ')).toContain('confirm the wall GC_p values');
+    expect(top.warnings.map((w) => messageText(w)).join(' ')).toContain('confirm the wall GC_p values');
     expect(wallPressures(low, 4, 2).strength.inward).toBeLessThan(wallPressures(top, 4, 2).strength.inward);
     expect(wallPressures(low, 4, 2).strength.outward).toBe(wallPressures(top, 4, 2).strength.outward);
   });
@@ -190,7 +207,7 @@ describe('calculateWindSchedule — editions, heights and table limits', () => {
       expect(z.girtSpacing).toBeNull();
       expect(z.clip).toBeNull();
     }
-    expect(r.warnings.join(' ')).toContain('outside the table');
+    expect(r.warnings.map((w) => messageText(w)).join(' ')).toContain('outside the table');
   });
 
   it('at the end of the table: the longest tabulated span, flagged, never more', () => {
@@ -213,7 +230,9 @@ describe('calculateWindSchedule — editions, heights and table limits', () => {
       expect(z.girtSpacing).toBe(1.2);
       expect(z.pressures!.minimumGoverns).toBe(true);
     }
-    expect(weak.warnings.join(' ')).toContain('longer spans are outside the table');
+    expect(weak.warnings.map((w) => messageText(w)).join(' ')).toContain(
+      'longer spans are outside the table',
+    );
   });
 });
 

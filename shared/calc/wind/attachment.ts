@@ -1,6 +1,7 @@
 import { CalcInputError, requireInRange, requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
 import { M, N, ONE, PA } from '@shared/calc/trace-units';
+import { engineMessage, type WindWarning } from '@shared/format/message-schema';
 import { analyseSite, MINIMUM_PRESSURE, type SiteAnalysis, tracePressures, wallPressures } from './pressure';
 import type {
   ClipResult,
@@ -307,30 +308,24 @@ function scheduleZone(zone: WallZone, z: ZoneSetup, trace: TraceStep[]): ZoneRes
   };
 }
 
-function zoneWarnings(zone: ZoneResult, site: SiteAnalysis, panel: Panel): string[] {
-  const out: string[] = [];
+function zoneWarnings(zone: ZoneResult, site: SiteAnalysis, panel: Panel): WindWarning[] {
+  const out: WindWarning[] = [];
+  const at = { zone: zone.zone };
+  const notConverged = (check: string) =>
+    engineMessage('spacing_not_converged', '', { ...at, check, iterations: MAX_ITERATIONS });
   for (const c of zone.spanChecks) {
     if (c.status === 'outside-table')
-      out.push(
-        `Zone ${zone.zone}: the ${c.check} pressure exceeds the table even at its shortest span — outside the table, no spacing given`,
-      );
-    else if (!c.iteration.converged)
-      out.push(`Zone ${zone.zone}: the ${c.check} spacing did not converge in ${MAX_ITERATIONS} iterations`);
+      out.push(engineMessage('span_outside_table', 'panel.loadSpanTable', { ...at, check: c.check }));
+    else if (!c.iteration.converged) out.push(notConverged(c.check));
   }
-  if (zone.status === 'table-end')
-    out.push(
-      `Zone ${zone.zone}: the governing span is the table’s longest span; longer spans are outside the table`,
-    );
+  if (zone.status === 'table-end') out.push(engineMessage('table_end_governs', 'panel.loadSpanTable', at));
   if (zone.clip && zone.clip.maxSpacing < panel.panelModuleWidth)
-    out.push(
-      `Zone ${zone.zone}: the clip spacing (${zone.clip.maxSpacing.toFixed(3)} m) is less than the panel module width — more than one clip per module per girt is needed`,
-    );
-  if (zone.clip && !zone.clip.iteration.converged)
-    out.push(`Zone ${zone.zone}: the clip spacing did not converge in ${MAX_ITERATIONS} iterations`);
+    out.push(engineMessage('clip_below_module', '', { ...at, clipSpacing: zone.clip.maxSpacing }));
+  if (zone.clip && !zone.clip.iteration.converged) out.push(notConverged('clip'));
   if (zone.zone === 5 && panel.girtOrientation === 'horizontal' && panel.panelModuleWidth > site.edgeWidth)
-    out.push('The panel module is wider than the end zone a: design the corner panels for zone 5');
+    out.push(engineMessage('module_wider_than_end_zone', 'panel.panelModuleWidth', {}));
   if (zone.zone === 4 && panel.girtOrientation === 'vertical' && (zone.girtSpacing ?? 0) > site.edgeWidth)
-    out.push('Panels spanning from a corner cross the end zone a: use the zone 5 girt spacing there');
+    out.push(engineMessage('panels_cross_end_zone', '', {}));
   return out;
 }
 

@@ -1,4 +1,5 @@
 import { CalcInputError } from '@shared/calc/errors';
+import { messageText } from '@shared/format/messages';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { windSite } from '../../../tests/setup/wind-arbitraries';
@@ -117,14 +118,27 @@ describe('design spacing of the demo wall', () => {
     expect(inward.status).toBe('outside-table');
     expect(inward.utilisation).toBeNull();
     expect(inward.required).toBeNull();
-    expect(inward.reason).toMatch(/longer than the table’s longest span/);
+    expect(inward.reason).toMatchObject({
+      code: 'span_beyond_table',
+      path: 'design.girtSpacing',
+      values: { span: 3.5 },
+    });
+    expect(messageText(inward.reason!)).toMatch(
+      /^the design span \(3\.5\u202fm\) is longer than the table’s longest span/,
+    );
     // Longer than the longest span is also longer than the maximum: a failure, not a question.
     expect(longer.girt).toBe('fails');
 
     const shorter = checkDesignSpacing(demo({ girtSpacing: 0.5, clipSpacing: 0.3 })).zones[0]!;
     expect(shorter.girt).toBe('outside-table');
     expect(shorter.status).toBe('outside-table');
-    expect(checkOf(shorter, 'outward').reason).toMatch(/shorter than the table’s shortest span/);
+    expect(checkOf(shorter, 'outward').reason).toMatchObject({
+      code: 'span_below_table',
+      values: { span: 0.5 },
+    });
+    expect(messageText(checkOf(shorter, 'outward').reason!, 'IP')).toMatch(
+      /^the design span \(1\.64\u202fft\) is shorter than the table’s shortest span \(2\.95\u202fft\)/,
+    );
   });
 
   it('leaves a spacing that is not given "missing", and still gives the clip maximum at a design girt spacing', () => {
@@ -136,7 +150,11 @@ describe('design spacing of the demo wall', () => {
     const girtOnly = checkDesignSpacing(demo({ girtSpacing: 1.2 })).zones[0]!;
     expect(girtOnly.girt).toBe('meets');
     expect(girtOnly.clip).toBe('missing');
-    expect(checkOf(girtOnly, 'clip').reason).toBe('no design clip spacing entered');
+    expect(checkOf(girtOnly, 'clip').reason).toEqual({
+      code: 'design_clip_missing',
+      path: 'design.clipSpacing',
+      values: {},
+    });
     expect(girtOnly.maxClipAtDesignGirt).toBeGreaterThan(0);
   });
 

@@ -1,6 +1,7 @@
 import { requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
 import { M, M2, N, ONE, PA } from '@shared/calc/trace-units';
+import { engineMessage } from '@shared/format/message-schema';
 import {
   CONTINUITY_FACTOR,
   calculateWindSchedule,
@@ -46,6 +47,8 @@ export function combineStatus(statuses: readonly DesignStatus[]): DesignStatus {
 export const utilisationStatus = (u: number): DesignStatus =>
   u <= 1 + UTILISATION_TOLERANCE ? 'meets' : 'fails';
 
+const GIRT_MISSING = engineMessage('design_girt_missing', 'design.girtSpacing', {});
+
 /**
  * One span check at the design girt spacing s_g: u = p(A(s_g)) / allowable(s_g), A = s_g × max(w, s_g/3)
  * (ASCE 7 §26.2), allowable interpolated linearly in the load–span table and never extrapolated.
@@ -58,7 +61,7 @@ export function spanAtDesign(
   demandAt: (span: number) => number,
 ): DesignCheck {
   const none = { check, required: null, allowable: null, utilisation: null, unit: 'Pa' } as const;
-  if (span === undefined) return { ...none, status: 'missing', reason: 'no design girt spacing entered' };
+  if (span === undefined) return { ...none, status: 'missing', reason: GIRT_MISSING };
   const allowable = interpolateColumn(spans, column, span);
   if (allowable === null)
     return {
@@ -66,8 +69,11 @@ export function spanAtDesign(
       status: 'outside-table',
       reason:
         span > spans[spans.length - 1]!
-          ? 'the design span is longer than the table’s longest span'
-          : 'the design span is shorter than the table’s shortest span',
+          ? engineMessage('span_beyond_table', 'design.girtSpacing', {
+              span,
+              longest: spans[spans.length - 1]!,
+            })
+          : engineMessage('span_below_table', 'design.girtSpacing', { span, shortest: spans[0]! }),
     };
   const required = demandAt(span);
   const utilisation = required / allowable;
@@ -93,7 +99,10 @@ export function clipAtDesign(
       allowable: capacity,
       utilisation: null,
       unit: 'N',
-      reason: girtSpacing === undefined ? 'no design girt spacing entered' : 'no design clip spacing entered',
+      reason:
+        girtSpacing === undefined
+          ? GIRT_MISSING
+          : engineMessage('design_clip_missing', 'design.clipSpacing', {}),
     };
   const area = clipSpacingDesign * girtSpacing;
   const required = continuity * pressureAt(area) * area;

@@ -1,7 +1,8 @@
 import { CalcInputError, requireInRange, requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
 import { M, ONE, PA } from '@shared/calc/trace-units';
-import { PSF_TO_PA } from '@shared/units';
+import { engineMessage, type WindWarning } from '@shared/format/message-schema';
+import { FOOT, PSF_TO_PA } from '@shared/units';
 import {
   edgeWidth,
   internalPressureCoefficient,
@@ -15,6 +16,7 @@ import {
   aboveGradientHeight,
   EXPOSURE_B_CHAPTER_28_KZ,
   EXPOSURE_B_FLOOR_HEIGHT,
+  EXPOSURE_CONSTANTS,
   groundElevationFactor,
   KD_BUILDINGS,
   pressureDirectionality,
@@ -45,7 +47,7 @@ export interface SiteAnalysis {
   /** K_d in the pressure equation (7-22) or 1 (7-16). */
   pressureFactor: number;
   trace: TraceStep[];
-  warnings: string[];
+  warnings: WindWarning[];
 }
 
 function validateSite(site: WindSite): number {
@@ -73,7 +75,7 @@ export function analyseSite(site: WindSite): SiteAnalysis {
   const { edition, exposure, Kzt } = site;
   const h = site.meanRoofHeight;
   const trace: TraceStep[] = [];
-  const warnings: string[] = [];
+  const warnings: WindWarning[] = [];
 
   const Kh = velocityPressureExposureCoefficient(edition, exposure, h);
   const Kz = velocityPressureExposureCoefficient(edition, exposure, z);
@@ -167,21 +169,26 @@ export function analyseSite(site: WindSite): SiteAnalysis {
   );
 
   if (aboveGradientHeight(edition, exposure, h))
-    warnings.push('The mean roof height lies above the gradient height z_g; K_z is held at its value at z_g');
-  if (!lowRise)
     warnings.push(
-      `h > 60 ft: confirm the wall GC_p values of ${figure} against the adopted edition before issuing the schedule`,
+      engineMessage('above_gradient_height', 'site.meanRoofHeight', {
+        height: h,
+        gradientHeight: EXPOSURE_CONSTANTS[edition][exposure].zgFt * FOOT,
+      }),
     );
+  if (!lowRise) warnings.push(engineMessage('high_rise_gcp', '', { figure, limit: LOW_RISE_HEIGHT_LIMIT }));
   if (exposure === 'B' && Math.min(z, h) < EXPOSURE_B_FLOOR_HEIGHT) {
     const k = Math.min(Kh, Kz);
     warnings.push(
-      `Exposure B below 30 ft: ${edition} Table 26.10-1 gives K_z = ${k.toFixed(2)} here for components and cladding; its 0.70 footnote is for Chapter 28 (main wind-force resisting system, envelope procedure) only. ASCE 7-10 held K_z at 0.70 below 30 ft for components and cladding (Table 30.3-1), which gives pressures ${Math.round((EXPOSURE_B_CHAPTER_28_KZ / k - 1) * 100)} % higher — where the adopted code or the building official keeps that floor, design for it`,
+      engineMessage('exposure_b_floor', '', {
+        edition,
+        kz: k,
+        floorKz: EXPOSURE_B_CHAPTER_28_KZ,
+        floorHeight: EXPOSURE_B_FLOOR_HEIGHT,
+      }),
     );
   }
   if (site.roofSlopeDeg <= LOW_SLOPE_LIMIT_DEG && lowRise)
-    warnings.push(
-      'Roof slope θ ≤ 10°: wall GC_p reduced by 10 % (Figure 30.3-1 note), and h must be the eave height',
-    );
+    warnings.push(engineMessage('low_slope_gcp', 'site.roofSlopeDeg', { slopeLimit: LOW_SLOPE_LIMIT_DEG }));
 
   return {
     velocity: {

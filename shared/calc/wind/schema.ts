@@ -1,6 +1,7 @@
 import { measure } from '@shared/calc/answer';
 import { traceStepSchema } from '@shared/calc/trace';
 import { M, M2, N, PA } from '@shared/calc/trace-units';
+import { designReasonSchema, windWarningSchema } from '@shared/format/message-schema';
 import type { Unbranded } from '@shared/units/brands';
 import { z } from 'zod';
 
@@ -262,7 +263,11 @@ export const windScheduleResultSchema = z.object({
   minimumPressure: measure('Minimum net C&C pressure (strength level)', PA),
   zones: z.array(zoneResultSchema),
   trace: z.array(traceStepSchema),
-  warnings: z.array(z.string()),
+  warnings: z
+    .array(windWarningSchema)
+    .describe(
+      'What to read with the result: messages `{ code, path, values }` (SI values) worded by the client',
+    ),
   cautions: z.array(z.string()),
 });
 
@@ -336,7 +341,11 @@ export const designCheckSchema = z.object({
     .describe('Table value at the design span, Pa (interpolated linearly), or the clip capacity, N'),
   utilisation: z.number().nullable().describe('required / allowable, dimensionless'),
   unit: z.enum(['Pa', 'N']),
-  reason: z.string().optional().describe('Why there is no number (outside the table, no design spacing)'),
+  reason: designReasonSchema
+    .optional()
+    .describe(
+      'Why there is no number (outside the table, no design spacing): a message `{ code, path, values }`',
+    ),
 });
 
 export const zoneDesignSchema = z.object({

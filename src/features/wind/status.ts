@@ -1,4 +1,5 @@
 import type { DesignCheck, ZoneDesign, ZoneResult } from '@shared/calc/wind/schema';
+import { storedMessageText } from '@shared/format';
 import type { UnitSystem } from '@shared/units';
 import { CHECK_LABELS } from './labels';
 import { formatWind } from './units';
@@ -29,9 +30,14 @@ export function checkStatusText(c: DesignCheck, system: UnitSystem): StatusText 
       };
     }
     case 'outside-table':
-      return { glyph: '✕', word: 'outside the table', detail: c.reason ?? '', tone: 'fails' };
+      return {
+        glyph: '✕',
+        word: 'outside the table',
+        detail: storedMessageText(c.reason, system),
+        tone: 'fails',
+      };
     case 'missing':
-      return { glyph: '?', word: 'not checked', detail: c.reason ?? '', tone: 'open' };
+      return { glyph: '?', word: 'not checked', detail: storedMessageText(c.reason, system), tone: 'open' };
   }
 }
 

@@ -1,6 +1,6 @@
 import type { MethodName, ThermalResult } from '@shared/calc/thermal/schema';
 import { METHOD_LABELS } from '@shared/calc/thermal/thermal';
-import { formatR } from '@shared/format';
+import { formatR, messageText } from '@shared/format';
 import { fixed } from '@shared/units/rounding';
 import { Notice } from '../../../components/ui/Notice';
 import { numeric, Table, Td } from '../../../components/ui/Table';
@@ -85,7 +85,7 @@ export function MethodSection({ result }: { result: ThermalResult }) {
         </Notice>
       ) : null}
       {result.warnings.map((w) => (
-        <Notice key={w} tone="warning" title={sentence(w)} />
+        <Notice key={JSON.stringify(w)} tone="warning" title={sentence(messageText(w))} />
       ))}
     </div>
   );

@@ -1,6 +1,7 @@
 import type { TraceStep } from '@shared/calc/trace';
 import { categoryLabel, zoneLabel } from '@shared/checks/criteria';
 import { type Check, methodDetail, type Verdict } from '@shared/checks/report';
+import { storedMessageText } from '@shared/format';
 import type { CheckRun } from '@shared/schemas/check-runs';
 import type { UnitSystem } from '@shared/units';
 import { Table, Td, Th } from '../../../components/ui/Table';
@@ -217,7 +218,7 @@ export function CheckReportView({ run, system }: { run: CheckRun; system: UnitSy
         </h4>
         <ul className="list-disc pl-5 text-sm">
           {report.cautions.map((c) => (
-            <li key={c}>{c}</li>
+            <li key={JSON.stringify(c)}>{storedMessageText(c, system)}</li>
           ))}
         </ul>
       </section>

@@ -1,4 +1,5 @@
 import type { Backer, JointInput, JointResult } from '@shared/calc/joints/schema';
+import { messageText } from '@shared/format';
 import { formatJointDimension, formatPageMeasure, nextSixteenth } from '@shared/format/page-measures';
 import type { UnitSystem } from '@shared/units';
 import { ShowTheWork } from '../../../components/ui/ShowTheWork';
@@ -44,7 +45,9 @@ export function ScheduleTable({ joints, evaluation, onEdit }: ScheduleTableProps
   const system = useUnitSystem();
   const { results, passCount, failCount } = evaluation;
   const waiting = results.filter((r) => r === null).length;
-  const warnings = results.flatMap((r) => (r ? r.warnings.map((w) => ({ joint: r.name, text: w })) : []));
+  const warnings = results.flatMap((r) =>
+    r ? r.warnings.map((w) => ({ joint: r.name, text: messageText(w, system) })) : [],
+  );
 
   return (
     <div className="flex flex-col gap-4">

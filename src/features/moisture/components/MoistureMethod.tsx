@@ -1,7 +1,7 @@
 import { DELTA_0 } from '@shared/calc/moisture/glaser';
 import { HUMIDITY_CLASS_EXCESS } from '@shared/calc/moisture/interior';
 import type { MoistureInput, MoistureResult } from '@shared/calc/moisture/schema';
-import { sentence } from '@shared/format';
+import { messageText, sentence } from '@shared/format';
 import type { UnitSystem } from '@shared/units';
 import type { ReactNode } from 'react';
 import { Notice } from '../../../components/ui/Notice';
@@ -117,7 +117,7 @@ export function MoistureMethod({
         </Row>
       </dl>
       {result.warnings.map((w) => (
-        <Notice key={w} tone="warning" title={sentence(w)} />
+        <Notice key={JSON.stringify(w)} tone="warning" title={sentence(messageText(w, system))} />
       ))}
     </div>
   );

@@ -5,7 +5,7 @@ import { fixed } from '@shared/units/rounding';
 import { drawAccumulationChart, drawProfileChart, drawSpacingChart } from './charts';
 import { type Formatter, MONTHS, num } from './format';
 import { INK, type SheetWriter } from './layout';
-import { moduleOutcome, moduleResult, type SheetData } from './sheet-data';
+import { type ModuleResults, moduleOutcome, moduleResult, type SheetData } from './sheet-data';
 
 /*
  * The results of every module as the run stored them, each with the formulas that govern its figures
@@ -48,13 +48,26 @@ function formulas(w: SheetWriter, steps: TraceStep[], fmt: Formatter): void {
 const stepsOf = (data: SheetData, prefix: string) =>
   data.run.outputs.steps.filter((s) => s.id.startsWith(prefix));
 
+/** A module's section: its heading, why it did not run or what it found, then the formulas that govern it. */
+function moduleSection<K extends keyof ModuleResults>(
+  w: SheetWriter,
+  data: SheetData,
+  fmt: Formatter,
+  id: K,
+  [number, title, keep]: [string, string, number],
+  draw: (w: SheetWriter, r: ModuleResults[K], fmt: Formatter, data: SheetData) => void,
+): void {
+  w.heading(number, title, keep);
+  const r = moduleResult(data.run, id);
+  if (notRun(w, data, id) || !r) return;
+  draw(w, r, fmt, data);
+  formulas(w, stepsOf(data, `${id}.`), fmt);
+}
+
 /** A share of U_eff as the build-up page prints it (formatShare: one decimal, kept even when 0). */
 const share = (x: number) => `${fixed(x * 100, 1)} %`;
 
-function thermal(w: SheetWriter, data: SheetData, fmt: Formatter): void {
-  w.heading('3.1', 'Thermal: effective R-value and U-factor', 40);
-  const r = moduleResult(data.run, 'thermal');
-  if (notRun(w, data, 'thermal') || !r) return;
+function thermal(w: SheetWriter, r: ModuleResults['thermal'], fmt: Formatter): void {
   w.fields(
     [
       ['Clear field R₀ · U₀', `${fmt.rValue(r.R0)} · ${fmt.uValue(r.U0)}`],
@@ -85,13 +98,9 @@ function thermal(w: SheetWriter, data: SheetData, fmt: Formatter): void {
       { size: 7.2 },
     );
   }
-  formulas(w, stepsOf(data, 'thermal.'), fmt);
 }
 
-function moisture(w: SheetWriter, data: SheetData, fmt: Formatter): void {
-  w.heading('3.2', 'Moisture: condensation and surface humidity', 60);
-  const r = moduleResult(data.run, 'moisture');
-  if (notRun(w, data, 'moisture') || !r) return;
+function moisture(w: SheetWriter, r: ModuleResults['moisture'], fmt: Formatter, data: SheetData): void {
   const s = r.surface;
   w.fields(
     [
@@ -117,13 +126,9 @@ function moisture(w: SheetWriter, data: SheetData, fmt: Formatter): void {
   );
   drawProfileChart(w, data, r, fmt);
   drawAccumulationChart(w, data, r, fmt);
-  formulas(w, stepsOf(data, 'moisture.'), fmt);
 }
 
-function wind(w: SheetWriter, data: SheetData, fmt: Formatter): void {
-  w.heading('3.3', 'Wind: girt and clip spacing per zone', 50);
-  const r = moduleResult(data.run, 'wind');
-  if (notRun(w, data, 'wind') || !r) return;
+function wind(w: SheetWriter, r: ModuleResults['wind'], fmt: Formatter, data: SheetData): void {
   w.fields(
     [
       ['Velocity pressure', `q_h ${fmt.pressure(r.velocity.qh)} (${r.velocity.equation})`],
@@ -151,13 +156,9 @@ function wind(w: SheetWriter, data: SheetData, fmt: Formatter): void {
     { size: 7.2 },
   );
   drawSpacingChart(w, data, r, fmt);
-  formulas(w, stepsOf(data, 'wind.'), fmt);
 }
 
-function joints(w: SheetWriter, data: SheetData, fmt: Formatter): void {
-  w.heading('3.4', 'Sealant joints', 40);
-  const r = moduleResult(data.run, 'joints');
-  if (notRun(w, data, 'joints') || !r) return;
+function joints(w: SheetWriter, r: ModuleResults['joints'], fmt: Formatter): void {
   w.table(
     [
       { header: 'Joint', width: 58 },
@@ -183,7 +184,6 @@ function joints(w: SheetWriter, data: SheetData, fmt: Formatter): void {
     ]),
     { size: 7.2 },
   );
-  formulas(w, stepsOf(data, 'joints.'), fmt);
 }
 
 export function drawResults(w: SheetWriter, data: SheetData, fmt: Formatter): void {
@@ -192,8 +192,15 @@ export function drawResults(w: SheetWriter, data: SheetData, fmt: Formatter): vo
     'As stored with the run: figures are the engine’s own, converted to the units of this sheet only for printing.',
     { size: 7.6, color: INK.muted },
   );
-  thermal(w, data, fmt);
-  moisture(w, data, fmt);
-  wind(w, data, fmt);
-  joints(w, data, fmt);
+  moduleSection(w, data, fmt, 'thermal', ['3.1', 'Thermal: effective R-value and U-factor', 40], thermal);
+  moduleSection(
+    w,
+    data,
+    fmt,
+    'moisture',
+    ['3.2', 'Moisture: condensation and surface humidity', 60],
+    moisture,
+  );
+  moduleSection(w, data, fmt, 'wind', ['3.3', 'Wind: girt and clip spacing per zone', 50], wind);
+  moduleSection(w, data, fmt, 'joints', ['3.4', 'Sealant joints', 40], joints);
 }

@@ -25,14 +25,18 @@ export interface SheetData {
   sweep?: SavedSweep;
 }
 
+/** The result each module stores in a run, by its id. */
+export interface ModuleResults {
+  thermal: ThermalResult;
+  moisture: MoistureResult;
+  wind: WindScheduleResult;
+  joints: JointScheduleResult;
+}
+
 /** The result a module stored in the run, typed by its id; null when the module did not run. */
-export function moduleResult(run: CheckRun, id: 'thermal'): ThermalResult | null;
-export function moduleResult(run: CheckRun, id: 'moisture'): MoistureResult | null;
-export function moduleResult(run: CheckRun, id: 'wind'): WindScheduleResult | null;
-export function moduleResult(run: CheckRun, id: 'joints'): JointScheduleResult | null;
-export function moduleResult(run: CheckRun, id: string): unknown {
+export function moduleResult<K extends keyof ModuleResults>(run: CheckRun, id: K): ModuleResults[K] | null {
   const m = run.outputs.modules.find((x) => x.id === id);
-  return m && m.status === 'ran' ? m.result : null;
+  return m && m.status === 'ran' ? (m.result as ModuleResults[K]) : null;
 }
 
 export const moduleOutcome = (run: CheckRun, id: string): ModuleOutcome | undefined =>

@@ -15,34 +15,6 @@ export const [PROJECT_ROLES, projectRoleSchema, PROJECT_ROLE_LABELS] = wordedEnu
 });
 export type ProjectRole = z.infer<typeof projectRoleSchema>;
 
-/** Every action that a route or a button can take on a project. */
-export const PROJECT_ACTIONS = [
-  'project.read',
-  'project.update',
-  'project.archive',
-  'project.wind.update',
-  'project.climate.update',
-  'members.read',
-  'members.invite',
-  'members.manage',
-  'audit.read',
-  'assembly.read',
-  'assembly.write',
-  'checkrun.create',
-  'submittal.create',
-  'submittal.submit',
-  'submittal.review',
-  'submittal.read',
-  'submittal.comment',
-  'inspection.read',
-  'inspection.create',
-  'inspection.answer',
-  'inspection.close',
-  'deficiency.correct',
-  'deficiency.review',
-] as const;
-export type ProjectAction = (typeof PROJECT_ACTIONS)[number];
-
 const ALL: readonly ProjectRole[] = PROJECT_ROLES;
 const DESIGNERS: readonly ProjectRole[] = ['owner', 'architect', 'envelope_consultant', 'engineer'];
 const REVIEWERS: readonly ProjectRole[] = ['architect', 'envelope_consultant', 'engineer'];
@@ -50,10 +22,11 @@ const INSPECTORS: readonly ProjectRole[] = ['envelope_consultant', 'engineer'];
 const INSPECTORS_AND_CREW: readonly ProjectRole[] = [...INSPECTORS, 'subcontractor'];
 
 /**
- * The one permission table (action × role). The server enforces it on every project route; the client
- * uses the same table to hide what a role cannot do.
+ * The one permission table: every action that a route or a button can take on a project, and the roles that
+ * may take it. The server enforces it on every project route; the client uses the same table to hide what a
+ * role cannot do.
  */
-export const PERMISSIONS: Record<ProjectAction, readonly ProjectRole[]> = {
+export const PERMISSIONS = {
   'project.read': ALL,
   'project.update': ['owner', 'architect'],
   'project.archive': ['owner'],
@@ -79,7 +52,9 @@ export const PERMISSIONS: Record<ProjectAction, readonly ProjectRole[]> = {
   'inspection.close': DESIGNERS,
   'deficiency.correct': ['subcontractor'],
   'deficiency.review': INSPECTORS,
-};
+} as const satisfies Record<string, readonly ProjectRole[]>;
+export type ProjectAction = keyof typeof PERMISSIONS;
+const PROJECT_ACTIONS = Object.keys(PERMISSIONS) as ProjectAction[];
 
 /**
  * Actions that are a duty on site, not a power over the design: left out of the grant rule, so an architect
@@ -93,7 +68,7 @@ const FIELD_ACTIONS: readonly ProjectAction[] = [
 ];
 
 export function can(role: ProjectRole | null | undefined, action: ProjectAction): boolean {
-  return role != null && PERMISSIONS[action].includes(role);
+  return role != null && (PERMISSIONS[action] as readonly ProjectRole[]).includes(role);
 }
 
 /**

@@ -37,8 +37,7 @@ export const METRIC_KEYS = [
   'deflectionLimit',
   'minSealantMovementClass',
 ] as const;
-export const metricKeySchema = z.enum(METRIC_KEYS);
-export type MetricKey = z.infer<typeof metricKeySchema>;
+export type MetricKey = (typeof METRIC_KEYS)[number];
 
 /** How a unit is shown in a system and converted to the stored SI value: si = shown × toSI. */
 export interface UnitSpec {

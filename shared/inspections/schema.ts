@@ -1,6 +1,15 @@
 import { z } from 'zod';
 import { projectRoleSchema } from '../auth/permissions';
-import { calendarDate, int4, TEXT_MAX, text, unitSystemSchema, wordedEnum } from '../schemas/common';
+import {
+  calendarDate,
+  createdFields,
+  int4,
+  TEXT_MAX,
+  text,
+  unitSystemSchema,
+  versionedFields,
+  wordedEnum,
+} from '../schemas/common';
 import { QUANTITIES, type Quantity } from '../units/registry';
 
 /**
@@ -46,7 +55,7 @@ export const [ITEM_STATES, itemStateSchema, ITEM_STATE_TEXT] = wordedEnum({
 });
 export type ItemState = z.infer<typeof itemStateSchema>;
 
-export const ITEM_KINDS = [
+export const itemKindSchema = z.enum([
   'girt_spacing',
   'clip_spacing',
   'clip_type',
@@ -69,11 +78,10 @@ export const ITEM_KINDS = [
   'panel_module',
   'joint_alignment',
   'firm',
-] as const;
-export const itemKindSchema = z.enum(ITEM_KINDS);
+]);
 export type ItemKind = z.infer<typeof itemKindSchema>;
 
-export const ITEM_GROUPS = [
+export const itemGroupSchema = z.enum([
   'attachment',
   'insulation',
   'joints',
@@ -82,8 +90,7 @@ export const ITEM_GROUPS = [
   'openings',
   'panels',
   'firm',
-] as const;
-export const itemGroupSchema = z.enum(ITEM_GROUPS);
+]);
 export type ItemGroup = z.infer<typeof itemGroupSchema>;
 
 const quantityNames = Object.keys(QUANTITIES) as [Quantity, ...Quantity[]];
@@ -145,8 +152,7 @@ export const photoSchema = z.object({
   contentType: z.string(),
   size: z.number().int(),
   name: z.string(),
-  createdBy: z.string().nullable(),
-  createdAt: z.string(),
+  ...createdFields,
   url: z.string().describe('GET address of the image'),
 });
 export type Photo = z.infer<typeof photoSchema>;
@@ -217,9 +223,7 @@ export const deficiencySchema = z.object({
   dueDate: z.string().nullable().describe('YYYY-MM-DD'),
   correctionPhotoId: z.uuid().nullable(),
   note: z.string().describe('The latest note of a transition'),
-  version: z.number().int(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  ...versionedFields,
 });
 export type Deficiency = z.infer<typeof deficiencySchema>;
 
@@ -244,8 +248,7 @@ export const deficiencyReopenSchema = z.object({
 
 // ------------------------------------------------------------------------------------------------ inspection
 
-export const INSPECTION_STATUSES = ['in_progress', 'closed'] as const;
-export const inspectionStatusSchema = z.enum(INSPECTION_STATUSES);
+export const inspectionStatusSchema = z.enum(['in_progress', 'closed']);
 
 export const inspectionCreateSchema = z.object({
   assemblyId: z.uuid(),

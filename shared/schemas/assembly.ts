@@ -7,7 +7,7 @@ import { takeoffInputSchema } from '../calc/takeoff/schema';
 import { MIN_CONDUCTIVITY, thermalInputSchema, thermalResultSchema } from '../calc/thermal/schema';
 import { MIN_CLIP_SPACING, MIN_SPAN, panelSchema } from '../calc/wind/schema';
 import type { Unbranded } from '../units/brands';
-import { int4, TEXT_MAX, text, wordedEnum } from './common';
+import { createdFields, int4, TEXT_MAX, text, wordedEnum } from './common';
 
 /**
  * Wall categories a code table may key on. The list is deliberately short and generic; criteria sets
@@ -122,8 +122,7 @@ export const assemblyRevisionSchema = z.object({
   input: assemblyInputSchema,
   thermalResult: thermalResultSchema.nullable(),
   engineVersion: z.string(),
-  createdBy: z.string().nullable(),
-  createdAt: z.string(),
+  ...createdFields,
 });
 export type AssemblyRevision = Unbranded<z.infer<typeof assemblyRevisionSchema>>;
 

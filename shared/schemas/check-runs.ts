@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { categoryLabelsSchema } from '../checks/criteria';
 import { checkReportSchema, verdictSchema } from '../checks/report';
 import type { AssemblyInput } from './assembly';
+import { createdFields } from './common';
 import { criteriaRowSchema } from './criteria';
 import { climateZoneSchema, type ProjectClimate, type ProjectWind, projectDesignData } from './project';
 
@@ -72,8 +73,7 @@ export const checkRunSummarySchema = z.object({
   }),
   engineVersion: z.string(),
   hash: z.string().describe('SHA-256 (hex) of the canonical JSON of { engineVersion, inputs, outputs }'),
-  createdBy: z.string().nullable(),
-  createdAt: z.string(),
+  ...createdFields,
 });
 export type CheckRunSummary = z.infer<typeof checkRunSummarySchema>;
 

@@ -94,5 +94,14 @@ export function wordedEnum<W extends Record<string, unknown>>(words: W) {
 
 export const unitSystemSchema = z.enum(['SI', 'IP']);
 
+/*
+ * Fields several stored records answer with, spread into their field lists (`...createdFields`) in the place
+ * they stand, so the OpenAPI document keeps its order.
+ */
+/** Who created the record (a user id; null when unknown or deleted) and when (ISO 8601). */
+export const createdFields = { createdBy: z.string().nullable(), createdAt: z.string() };
+/** An editable record's version (the concurrency token a save names; 409 when stale) and when it was created and last changed. */
+export const versionedFields = { version: z.number().int(), createdAt: z.string(), updatedAt: z.string() };
+
 /** A 409 for a stale save: the error plus the record as it is now, so the client can merge or reload. */
 export const versionConflictSchema = <T extends z.ZodType>(current: T) => apiErrorSchema.extend({ current });

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { categoryLabelsSchema, criteriaRowInputSchema, criteriaRowsSchema } from '../checks/criteria';
 import { CSV_COLUMNS } from '../checks/criteria-csv';
-import { calendarDate, int4, int4Param, TEXT_MAX, text, unitSystemSchema } from './common';
+import { calendarDate, createdFields, int4, int4Param, TEXT_MAX, text, unitSystemSchema } from './common';
 
 /** API contracts of code tables (criteria sets). Values in rows are SI; see shared/checks/criteria.ts. */
 
@@ -69,8 +69,7 @@ export const criteriaSetSummarySchema = z.object({
   frozenAt: z.string().nullable().describe('When a stored check run first used this version'),
   isLatest: z.boolean(),
   rowCount: z.number().int(),
-  createdBy: z.string().nullable(),
-  createdAt: z.string(),
+  ...createdFields,
   updatedAt: z.string(),
 });
 export type CriteriaSetSummary = z.infer<typeof criteriaSetSummarySchema>;

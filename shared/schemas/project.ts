@@ -3,7 +3,7 @@ import { projectRoleSchema } from '../auth/permissions';
 import { monthClimateSchema } from '../calc/moisture/schema';
 import { windSiteSchema } from '../calc/wind/schema';
 import type { Unbranded } from '../units/brands';
-import { int4, TEXT_MAX, text } from './common';
+import { int4, TEXT_MAX, text, versionedFields } from './common';
 
 /** ASHRAE 169 climate zone designations: 0–8 with moisture regime A (moist), B (dry), C (marine) where used. */
 export const CLIMATE_ZONES = [
@@ -165,9 +165,7 @@ export const projectSchema = z.object({
   wind: projectWindSchema.nullable(),
   climate: projectClimateSchema.nullable(),
   archivedAt: z.string().nullable(),
-  version: z.number().int(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  ...versionedFields,
   myRole: projectRoleSchema,
 });
 export type Project = Unbranded<z.infer<typeof projectSchema>>;

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { projectRoleSchema } from '../auth/permissions';
 import { verdictSchema } from '../checks/report';
-import { calendarDate, int4, TEXT_MAX, text, wordedEnum } from './common';
+import { calendarDate, int4, TEXT_MAX, text, versionedFields, wordedEnum } from './common';
 
 /**
  * Submittals: a package the cladding subcontractor (or the owner) sends to the design team for review —
@@ -23,13 +23,14 @@ export const [SUBMITTAL_STATUSES, submittalStatusSchema, SUBMITTAL_STATUS_TEXT] 
 });
 export type SubmittalStatus = z.infer<typeof submittalStatusSchema>;
 
-export const SUBMITTAL_DECISIONS = [
+/** The statuses a decision closes a revision with. */
+export const submittalDecisionSchema = submittalStatusSchema.extract([
   'approved',
   'approved_as_noted',
   'revise_and_resubmit',
   'rejected',
-] as const;
-export const submittalDecisionSchema = z.enum(SUBMITTAL_DECISIONS);
+]);
+export const SUBMITTAL_DECISIONS = submittalDecisionSchema.options;
 export type SubmittalDecision = z.infer<typeof submittalDecisionSchema>;
 
 /** Decided revisions never change again. */
@@ -208,9 +209,7 @@ export const submittalSummarySchema = z.object({
   submitter: person.nullable(),
   dueDate: z.string().nullable(),
   itemCount: z.number().int(),
-  version: z.number().int(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  ...versionedFields,
   submittedAt: z.string().nullable(),
   decidedAt: z.string().nullable(),
 });

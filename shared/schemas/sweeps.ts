@@ -8,7 +8,7 @@ import {
   sweepParametersSchema,
   sweepRankingSchema,
 } from '../sweep/schema';
-import { TEXT_MAX, text, wordedEnum } from './common';
+import { createdFields, int4, TEXT_MAX, text, versionedFields, wordedEnum } from './common';
 
 /*
  * The API of a firm's sweep costs (library entries) and of saved sweeps (an assembly's, with the revision and
@@ -66,14 +66,12 @@ export const sweepCostInputSchema = z.object(costFields).superRefine(sealantHasC
 export type SweepCostInput = z.infer<typeof sweepCostInputSchema>;
 /** A changed cost entry: the whole entry with the version it was read at (409 with the current one if stale). */
 export const sweepCostUpdateSchema = z
-  .object({ ...costFields, version: z.number().int().min(1).max(2_147_483_647) })
+  .object({ ...costFields, version: int4() })
   .superRefine(sealantHasClass);
 export const sweepCostSchema = z.object({
   ...costFields,
   id: z.uuid(),
-  version: z.number().int(),
-  createdAt: z.string(),
-  updatedAt: z.string(),
+  ...versionedFields,
 });
 export type SweepCost = z.infer<typeof sweepCostSchema>;
 export const sweepCostListSchema = z.object({ costs: z.array(sweepCostSchema) });
@@ -149,8 +147,7 @@ const savedSweepHead = {
   criteriaSetVersion: z.number().int(),
   criteriaSetName: z.string(),
   engineVersion: z.string(),
-  createdBy: z.string().nullable(),
-  createdAt: z.string(),
+  ...createdFields,
 };
 export const savedSweepSummarySchema = z.object({
   ...savedSweepHead,

@@ -3,11 +3,10 @@ import { useQueries } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Cautions } from '../../../components/ui/Cautions';
-import { Field } from '../../../components/ui/Field';
+import { LabelledSelect } from '../../../components/ui/LabelledSelect';
 import { Loading } from '../../../components/ui/Loading';
 import { Notice } from '../../../components/ui/Notice';
 import { NamedOptions } from '../../../components/ui/Options';
-import { Select } from '../../../components/ui/Select';
 import { errorMessage } from '../../../lib/api';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { assemblyQueryOptions } from '../api/get-assembly';
@@ -37,25 +36,21 @@ function RevisionSelect({
 }) {
   const revisions = useRevisions(assemblyId, Boolean(assemblyId));
   return (
-    <Field label={label} className="w-56">
-      {(c) => (
-        <Select
-          {...c}
-          value={value}
-          onChange={(e) => onChange(e.target.value)}
-          disabled={!assemblyId}
-          className="py-1.5 text-sm"
-        >
-          <option value="">Current revision</option>
-          {(revisions.data ?? []).map((r) => (
-            <option key={r.revision} value={String(r.revision)}>
-              Rev. {r.revision}
-              {r.note ? ` — ${r.note.slice(0, 40)}` : ''}
-            </option>
-          ))}
-        </Select>
-      )}
-    </Field>
+    <LabelledSelect
+      label={label}
+      className="w-56"
+      value={value}
+      onChange={(e) => onChange(e.target.value)}
+      disabled={!assemblyId}
+    >
+      <option value="">Current revision</option>
+      {(revisions.data ?? []).map((r) => (
+        <option key={r.revision} value={String(r.revision)}>
+          Rev. {r.revision}
+          {r.note ? ` — ${r.note.slice(0, 40)}` : ''}
+        </option>
+      ))}
+    </LabelledSelect>
   );
 }
 
@@ -139,28 +134,21 @@ export function AssemblyCompare({
               <span className="num w-6 pb-2 text-ink-muted" aria-hidden="true">
                 {String.fromCharCode(65 + i)}
               </span>
-              <Field
+              <LabelledSelect
                 label={`Assembly ${String.fromCharCode(65 + i)}${i === 0 ? ' (baseline)' : ''}`}
                 className="min-w-72 flex-1"
+                value={row.assemblyId}
+                onChange={(e) =>
+                  setRows((rs) =>
+                    rs.map((x) =>
+                      x.key === row.key ? { ...x, assemblyId: e.target.value, revision: '' } : x,
+                    ),
+                  )
+                }
               >
-                {(c) => (
-                  <Select
-                    {...c}
-                    value={row.assemblyId}
-                    className="py-1.5 text-sm"
-                    onChange={(e) =>
-                      setRows((rs) =>
-                        rs.map((x) =>
-                          x.key === row.key ? { ...x, assemblyId: e.target.value, revision: '' } : x,
-                        ),
-                      )
-                    }
-                  >
-                    <option value="">Choose…</option>
-                    <NamedOptions items={assemblies} />
-                  </Select>
-                )}
-              </Field>
+                <option value="">Choose…</option>
+                <NamedOptions items={assemblies} />
+              </LabelledSelect>
               <RevisionSelect
                 assemblyId={row.assemblyId}
                 value={row.revision}

@@ -4,9 +4,8 @@ import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import { useState } from 'react';
 import { type UseFieldArrayReturn, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
-import { Field } from '../../../components/ui/Field';
+import { LabelledSelect } from '../../../components/ui/LabelledSelect';
 import { LabelledOptions, Options } from '../../../components/ui/Options';
-import { Select } from '../../../components/ui/Select';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { fieldDomId } from '../evaluate';
 import {
@@ -176,18 +175,14 @@ function LayerRow({
       <div className="flex min-w-0 flex-col gap-3">
         <div className="flex flex-wrap items-end gap-x-4 gap-y-2">
           <TextField path={`${base}.name`} label="Layer" className="min-w-56 flex-[2]" maxLength={120} />
-          <Field label="Kind" className="min-w-44 flex-1">
-            {(c) => (
-              <Select
-                {...c}
-                value={layer.kind}
-                className="py-1.5 text-sm"
-                onChange={(e) => array.update(i, layerOfKind(e.target.value as LayerKind, layer))}
-              >
-                <Options values={Object.keys(LAYER_KIND_LABELS) as LayerKind[]} labels={LAYER_KIND_LABELS} />
-              </Select>
-            )}
-          </Field>
+          <LabelledSelect
+            label="Kind"
+            className="min-w-44 flex-1"
+            value={layer.kind}
+            onChange={(e) => array.update(i, layerOfKind(e.target.value as LayerKind, layer))}
+          >
+            <Options values={Object.keys(LAYER_KIND_LABELS) as LayerKind[]} labels={LAYER_KIND_LABELS} />
+          </LabelledSelect>
           <p className="w-40 shrink-0 text-right text-sm">
             <span className="label-caps block">R of layer</span>
             <span className="num">
@@ -336,28 +331,22 @@ function AirFields({
         label="Depth in the heat-flow direction"
         className="w-48"
       />
-      <Field label="Ventilation" className="min-w-64">
-        {(c) => (
-          <Select
-            {...c}
-            value={layer.ventilation}
-            className="py-1.5 text-sm"
-            onChange={(e) => {
-              const ventilation = e.target.value as (typeof VENTILATION)[number]['value'];
-              const { ventArea: _drop, ...rest } = layer;
-              // ISO 6946 §6.9.3: a slightly ventilated layer is described by its vent area; the others need none.
-              array.update(
-                i,
-                ventilation === 'slightly'
-                  ? { ...rest, ventilation, ventArea: 1000 }
-                  : { ...rest, ventilation },
-              );
-            }}
-          >
-            <LabelledOptions options={VENTILATION} />
-          </Select>
-        )}
-      </Field>
+      <LabelledSelect
+        label="Ventilation"
+        className="min-w-64"
+        value={layer.ventilation}
+        onChange={(e) => {
+          const ventilation = e.target.value as (typeof VENTILATION)[number]['value'];
+          const { ventArea: _drop, ...rest } = layer;
+          // ISO 6946 §6.9.3: a slightly ventilated layer is described by its vent area; the others need none.
+          array.update(
+            i,
+            ventilation === 'slightly' ? { ...rest, ventilation, ventArea: 1000 } : { ...rest, ventilation },
+          );
+        }}
+      >
+        <LabelledOptions options={VENTILATION} />
+      </LabelledSelect>
       {layer.ventilation === 'slightly' ? (
         <MeasureField
           path={`${base}.ventArea`}
@@ -582,67 +571,59 @@ function AddLayer({
   return (
     <fieldset className="flex flex-wrap items-end gap-x-4 gap-y-2 bg-paper-sunk px-3 py-3">
       <legend className="sr-only">Add a layer</legend>
-      <Field label="Add a layer" className="min-w-72 flex-[2]">
-        {(c) => (
-          <Select
-            {...c}
-            value={choice}
-            onChange={(e) => setChoice(e.target.value)}
-            className="py-1.5 text-sm"
-          >
-            {byCategory.map((g) =>
-              g.items.length ? (
-                <optgroup key={g.label} label={`Generic library — ${g.label}`}>
-                  {g.items.map((m) => (
-                    <option key={m.id} value={`generic:${m.id}`}>
-                      {m.name} (λ {m.conductivity})
-                    </option>
-                  ))}
-                </optgroup>
-              ) : null,
-            )}
-            <optgroup label={firmName ? `${firmName} — firm materials` : 'Firm materials'}>
-              {firmMaterials.length === 0 ? (
-                <option value="none:" disabled>
-                  None yet — add them on the Library page
-                </option>
-              ) : (
-                firmMaterials.map((m) => (
-                  <option key={m.id} value={`firm:${m.id}`}>
-                    {m.name} (λ {m.conductivity}) — {m.source}
-                  </option>
-                ))
-              )}
-            </optgroup>
-            <optgroup label="By kind, values entered by hand">
-              {(Object.keys(LAYER_KIND_LABELS) as LayerKind[]).map((k) => (
-                <option key={k} value={`kind:${k}`}>
-                  {LAYER_KIND_LABELS[k]}
+      <LabelledSelect
+        label="Add a layer"
+        className="min-w-72 flex-[2]"
+        value={choice}
+        onChange={(e) => setChoice(e.target.value)}
+      >
+        {byCategory.map((g) =>
+          g.items.length ? (
+            <optgroup key={g.label} label={`Generic library — ${g.label}`}>
+              {g.items.map((m) => (
+                <option key={m.id} value={`generic:${m.id}`}>
+                  {m.name} (λ {m.conductivity})
                 </option>
               ))}
             </optgroup>
-          </Select>
+          ) : null,
         )}
-      </Field>
-      <Field label="Where" className="min-w-56 flex-1">
-        {(c) => (
-          <Select
-            {...c}
-            value={position}
-            onChange={(e) => setPosition(e.target.value)}
-            className="py-1.5 text-sm"
-          >
-            <option value="end">At the inside face (last)</option>
-            <option value="start">At the outside face (first)</option>
-            {names.map((n, i) => (
-              // biome-ignore lint/suspicious/noArrayIndexKey: positions are indexes by nature
-              <option key={i} value={String(i)}>
-                After {i + 1} {n}
+        <optgroup label={firmName ? `${firmName} — firm materials` : 'Firm materials'}>
+          {firmMaterials.length === 0 ? (
+            <option value="none:" disabled>
+              None yet — add them on the Library page
+            </option>
+          ) : (
+            firmMaterials.map((m) => (
+              <option key={m.id} value={`firm:${m.id}`}>
+                {m.name} (λ {m.conductivity}) — {m.source}
               </option>
-            ))}
-          </Select>
-        )}
-      </Field>
+            ))
+          )}
+        </optgroup>
+        <optgroup label="By kind, values entered by hand">
+          {(Object.keys(LAYER_KIND_LABELS) as LayerKind[]).map((k) => (
+            <option key={k} value={`kind:${k}`}>
+              {LAYER_KIND_LABELS[k]}
+            </option>
+          ))}
+        </optgroup>
+      </LabelledSelect>
+      <LabelledSelect
+        label="Where"
+        className="min-w-56 flex-1"
+        value={position}
+        onChange={(e) => setPosition(e.target.value)}
+      >
+        <option value="end">At the inside face (last)</option>
+        <option value="start">At the outside face (first)</option>
+        {names.map((n, i) => (
+          // biome-ignore lint/suspicious/noArrayIndexKey: positions are indexes by nature
+          <option key={i} value={String(i)}>
+            After {i + 1} {n}
+          </option>
+        ))}
+      </LabelledSelect>
       <Button variant="secondary" onClick={add} className="py-1.5">
         Add layer
       </Button>

@@ -4,10 +4,9 @@ import { isInsulation } from '@shared/sheets/layer-class';
 import { lazy, Suspense, useState } from 'react';
 import { type UseFieldArrayReturn, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
-import { Field } from '../../../components/ui/Field';
+import { LabelledSelect } from '../../../components/ui/LabelledSelect';
 import { Loading } from '../../../components/ui/Loading';
 import { RadioGroup } from '../../../components/ui/RadioGroup';
-import { Select } from '../../../components/ui/Select';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { fieldDomId } from '../evaluate';
 import { type AssemblyFormValues, type BridgeRole, newBridge, p, useBuilder } from '../form';
@@ -167,32 +166,28 @@ function PointFields({
       <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
         <MeasureField path={`${base}.chi`} measure="chi" label="χ per clip" className="w-44" />
         <SolveButton index={j} bridge={bridge} array={array} />
-        <Field label="Given by" className="w-48">
-          {(c) => (
-            <Select
-              {...c}
-              value={bySpacing ? 'spacing' : 'count'}
-              className="py-1.5 text-sm"
-              onChange={(e) =>
-                array.update(
-                  j,
-                  e.target.value === 'spacing'
-                    ? {
-                        kind: 'point',
-                        name: bridge.name,
-                        chi: bridge.chi,
-                        spacingHorizontal: 0.406,
-                        spacingVertical: 0.6,
-                      }
-                    : { kind: 'point', name: bridge.name, chi: bridge.chi, countPerArea: 4 },
-                )
-              }
-            >
-              <option value="spacing">Spacing, horizontal × vertical</option>
-              <option value="count">Count per area</option>
-            </Select>
-          )}
-        </Field>
+        <LabelledSelect
+          label="Given by"
+          className="w-48"
+          value={bySpacing ? 'spacing' : 'count'}
+          onChange={(e) =>
+            array.update(
+              j,
+              e.target.value === 'spacing'
+                ? {
+                    kind: 'point',
+                    name: bridge.name,
+                    chi: bridge.chi,
+                    spacingHorizontal: 0.406,
+                    spacingVertical: 0.6,
+                  }
+                : { kind: 'point', name: bridge.name, chi: bridge.chi, countPerArea: 4 },
+            )
+          }
+        >
+          <option value="spacing">Spacing, horizontal × vertical</option>
+          <option value="count">Count per area</option>
+        </LabelledSelect>
         {bySpacing ? (
           <>
             <MeasureField
@@ -243,26 +238,22 @@ function LinearFields({
       <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
         <MeasureField path={`${base}.psi`} measure="psi" label="ψ per length" className="w-44" />
         <SolveButton index={j} bridge={bridge} array={array} />
-        <Field label="Given by" className="w-48">
-          {(c) => (
-            <Select
-              {...c}
-              value={bySpacing ? 'spacing' : 'length'}
-              className="py-1.5 text-sm"
-              onChange={(e) =>
-                array.update(
-                  j,
-                  e.target.value === 'spacing'
-                    ? { kind: 'linear', name: bridge.name, psi: bridge.psi, spacing: 1.2 }
-                    : { kind: 'linear', name: bridge.name, psi: bridge.psi, lengthPerArea: 0.8 },
-                )
-              }
-            >
-              <option value="spacing">Spacing on centre</option>
-              <option value="length">Length per area</option>
-            </Select>
-          )}
-        </Field>
+        <LabelledSelect
+          label="Given by"
+          className="w-48"
+          value={bySpacing ? 'spacing' : 'length'}
+          onChange={(e) =>
+            array.update(
+              j,
+              e.target.value === 'spacing'
+                ? { kind: 'linear', name: bridge.name, psi: bridge.psi, spacing: 1.2 }
+                : { kind: 'linear', name: bridge.name, psi: bridge.psi, lengthPerArea: 0.8 },
+            )
+          }
+        >
+          <option value="spacing">Spacing on centre</option>
+          <option value="length">Length per area</option>
+        </LabelledSelect>
         {bySpacing ? (
           <MeasureField
             path={`${base}.spacing`}
@@ -375,45 +366,41 @@ function LibraryPick({
 
   return (
     <div className="flex flex-wrap items-end gap-x-4 gap-y-2">
-      <Field label={`Take ${symbol} from ${firmName ?? 'the firm'}'s library`} className="min-w-72 flex-1">
-        {(c) => (
-          <Select
-            {...c}
-            value={matched?.id ?? ''}
-            className="py-1.5 text-sm"
-            disabled={offered.length === 0}
-            onChange={(e) => {
-              const pick = offered.find((b) => b.id === e.target.value);
-              if (!pick) return;
-              const n = pick.name.slice(0, 120);
-              // A computed entry brings its detail, solve and map (the sheet draws it, the moisture check reads f_Rsi).
-              const from = {
-                text: bridgeSourceText(pick),
-                libraryEntryId: pick.id,
-                ...(pick.computed ? { computed: pick.computed } : {}),
-              };
-              array.update(
-                j,
-                kind === 'point'
-                  ? { ...(bridge as PointBridge), name: n, chi: pick.value, source: from }
-                  : { ...(bridge as LinearBridge), name: n, psi: pick.value, source: from },
-              );
-            }}
-          >
-            <option value="">
-              {offered.length === 0
-                ? `No ${symbol} values in the library yet`
-                : 'Entered by hand — choose a library value…'}
-            </option>
-            {offered.map((b) => (
-              <option key={b.id} value={b.id}>
-                {b.name} — {symbol} {formatMeasure(b.value, measure, system)} —{' '}
-                {SOURCE_TYPE_LABELS[b.sourceType]}: {b.source}
-              </option>
-            ))}
-          </Select>
-        )}
-      </Field>
+      <LabelledSelect
+        label={`Take ${symbol} from ${firmName ?? 'the firm'}'s library`}
+        className="min-w-72 flex-1"
+        value={matched?.id ?? ''}
+        disabled={offered.length === 0}
+        onChange={(e) => {
+          const pick = offered.find((b) => b.id === e.target.value);
+          if (!pick) return;
+          const n = pick.name.slice(0, 120);
+          // A computed entry brings its detail, solve and map (the sheet draws it, the moisture check reads f_Rsi).
+          const from = {
+            text: bridgeSourceText(pick),
+            libraryEntryId: pick.id,
+            ...(pick.computed ? { computed: pick.computed } : {}),
+          };
+          array.update(
+            j,
+            kind === 'point'
+              ? { ...(bridge as PointBridge), name: n, chi: pick.value, source: from }
+              : { ...(bridge as LinearBridge), name: n, psi: pick.value, source: from },
+          );
+        }}
+      >
+        <option value="">
+          {offered.length === 0
+            ? `No ${symbol} values in the library yet`
+            : 'Entered by hand — choose a library value…'}
+        </option>
+        {offered.map((b) => (
+          <option key={b.id} value={b.id}>
+            {b.name} — {symbol} {formatMeasure(b.value, measure, system)} — {SOURCE_TYPE_LABELS[b.sourceType]}
+            : {b.source}
+          </option>
+        ))}
+      </LabelledSelect>
       <p className="max-w-md pb-1 text-xs text-ink-muted">
         {source || matched ? (
           <>
@@ -463,58 +450,47 @@ function FastenerFields({
       />
       <MeasureField path={`${base}.diameter`} measure="diameter" label="Shank diameter" className="w-36" />
       <MeasureField path={`${base}.countPerArea`} measure="countPerArea" label="Fasteners" className="w-36" />
-      <Field
+      <LabelledSelect
         label="Layer crossed"
         error={layerError}
         className="min-w-56 flex-1"
         id={fieldDomId(`${base}.layerIndex`)}
+        value={String(bridge.layerIndex)}
+        onChange={(e) => array.update(j, { ...bridge, layerIndex: Number(e.target.value) })}
       >
-        {(c) => (
-          <Select
-            {...c}
-            value={String(bridge.layerIndex)}
-            className="py-1.5 text-sm"
-            onChange={(e) => array.update(j, { ...bridge, layerIndex: Number(e.target.value) })}
-          >
-            <option value="-1" disabled>
-              Choose the insulation layer…
+        <option value="-1" disabled>
+          Choose the insulation layer…
+        </option>
+        {layers.map((l, i) =>
+          l.kind === 'homogeneous' ? (
+            // biome-ignore lint/suspicious/noArrayIndexKey: the index is the value
+            <option key={i} value={String(i)}>
+              {i + 1} {l.name}
             </option>
-            {layers.map((l, i) =>
-              l.kind === 'homogeneous' ? (
-                // biome-ignore lint/suspicious/noArrayIndexKey: the index is the value
-                <option key={i} value={String(i)}>
-                  {i + 1} {l.name}
-                </option>
-              ) : null,
-            )}
-          </Select>
+          ) : null,
         )}
-      </Field>
-      <Field label="Penetration" className="w-56">
-        {(c) => (
-          <Select
-            {...c}
-            value={bridge.penetration}
-            className="py-1.5 text-sm"
-            onChange={(e) => {
-              const { recessDepth, ...rest } = bridge;
-              array.update(
-                j,
-                e.target.value === 'recessed'
-                  ? {
-                      ...rest,
-                      penetration: 'recessed',
-                      recessDepth: Number.isFinite(recessDepth) ? recessDepth : 0.01,
-                    }
-                  : { ...rest, penetration: 'full' },
-              );
-            }}
-          >
-            <option value="full">Through the whole layer</option>
-            <option value="recessed">Recessed head</option>
-          </Select>
-        )}
-      </Field>
+      </LabelledSelect>
+      <LabelledSelect
+        label="Penetration"
+        className="w-56"
+        value={bridge.penetration}
+        onChange={(e) => {
+          const { recessDepth, ...rest } = bridge;
+          array.update(
+            j,
+            e.target.value === 'recessed'
+              ? {
+                  ...rest,
+                  penetration: 'recessed',
+                  recessDepth: Number.isFinite(recessDepth) ? recessDepth : 0.01,
+                }
+              : { ...rest, penetration: 'full' },
+          );
+        }}
+      >
+        <option value="full">Through the whole layer</option>
+        <option value="recessed">Recessed head</option>
+      </LabelledSelect>
       {bridge.penetration === 'recessed' ? (
         <MeasureField
           path={`${base}.recessDepth`}

@@ -10,10 +10,10 @@ import { ZodError } from 'zod';
 import { Button } from '../../../components/ui/Button';
 import { Dialog } from '../../../components/ui/Dialog';
 import { Field } from '../../../components/ui/Field';
+import { LabelledSelect } from '../../../components/ui/LabelledSelect';
 import { Notice } from '../../../components/ui/Notice';
 import { LabelledOptions } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
-import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { formatQuantity } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
@@ -211,18 +211,14 @@ export function BridgeSolveDialog({
         <fieldset disabled={phase.at === 'solving'} className="flex flex-col gap-3">
           <legend className="sr-only">Inputs</legend>
           {bridge.kind === 'linear' ? (
-            <Field label="Detail" className="w-64">
-              {(c) => (
-                <Select
-                  {...c}
-                  value={inputs.kind}
-                  className="py-1.5 text-sm"
-                  onChange={(e) => edit(linearInputs(e.target.value as LinearDetail, bridge, layers))}
-                >
-                  <LabelledOptions options={LINEAR_DETAILS.map((d) => ({ value: d.kind, label: d.label }))} />
-                </Select>
-              )}
-            </Field>
+            <LabelledSelect
+              label="Detail"
+              className="w-64"
+              value={inputs.kind}
+              onChange={(e) => edit(linearInputs(e.target.value as LinearDetail, bridge, layers))}
+            >
+              <LabelledOptions options={LINEAR_DETAILS.map((d) => ({ value: d.kind, label: d.label }))} />
+            </LabelledSelect>
           ) : null}
           {'from' in inputs && inputs.kind !== 'slab' ? (
             <CrossedLayers inputs={inputs} wall={wall} indices={indices} onChange={edit} />
@@ -438,36 +434,28 @@ function CrossedLayers({
   const options = layerOptions(wall, indices);
   return (
     <div className="flex flex-wrap items-end gap-x-4 gap-y-2">
-      <Field label="Crosses from layer" className="min-w-48 flex-1">
-        {(c) => (
-          <Select
-            {...c}
-            value={inputs.from}
-            className="py-1.5 text-sm"
-            onChange={(e) => {
-              const from = Number(e.target.value);
-              onChange({ ...inputs, from, to: Math.max(from, inputs.to) });
-            }}
-          >
-            {options}
-          </Select>
-        )}
-      </Field>
-      <Field label="to layer" className="min-w-48 flex-1">
-        {(c) => (
-          <Select
-            {...c}
-            value={inputs.to}
-            className="py-1.5 text-sm"
-            onChange={(e) => {
-              const to = Number(e.target.value);
-              onChange({ ...inputs, to, from: Math.min(to, inputs.from) });
-            }}
-          >
-            {options}
-          </Select>
-        )}
-      </Field>
+      <LabelledSelect
+        label="Crosses from layer"
+        className="min-w-48 flex-1"
+        value={inputs.from}
+        onChange={(e) => {
+          const from = Number(e.target.value);
+          onChange({ ...inputs, from, to: Math.max(from, inputs.to) });
+        }}
+      >
+        {options}
+      </LabelledSelect>
+      <LabelledSelect
+        label="to layer"
+        className="min-w-48 flex-1"
+        value={inputs.to}
+        onChange={(e) => {
+          const to = Number(e.target.value);
+          onChange({ ...inputs, to, from: Math.min(to, inputs.from) });
+        }}
+      >
+        {options}
+      </LabelledSelect>
       <p className="pb-2 text-sm">
         {inputs.kind === 'girt' ? 'Girt depth' : inputs.kind === 'clip' ? 'Clip length' : 'Fastener length'}{' '}
         <span className="num font-semibold" data-testid="crossed-depth">
@@ -487,6 +475,67 @@ const layerOptions = (wall: TemplateLayer[], indices: number[]) =>
     </option>
   ));
 
+/** A number box of the dialog: the input it sets, its label, its measure (a length unless said), its width. */
+interface Box<T> {
+  key: { [K in keyof T]: T[K] extends number ? K : never }[keyof T];
+  label: string;
+  measure?: Measure;
+  className?: string;
+}
+
+const GIRT_BOXES: Box<GirtInputs>[] = [
+  { key: 'thickness', label: 'Steel thickness' },
+  { key: 'outerFlange', label: 'Outer flange', measure: 'spacing' },
+  { key: 'innerFlange', label: 'Inner flange', measure: 'spacing' },
+  { key: 'spacing', label: 'Girt spacing', measure: 'spacing' },
+];
+const CLIP_SIZE: Box<ClipInputs>[] = [
+  { key: 'width', label: 'Clip width (footprint)', measure: 'spacing' },
+  { key: 'thickness', label: 'Web thickness' },
+];
+const CLIP_SPACING: Box<ClipInputs>[] = [
+  { key: 'spacingX', label: 'Spacing along the girt', measure: 'spacing' },
+  { key: 'spacingZ', label: 'Spacing across', measure: 'spacing' },
+];
+const PAD_BOXES: Box<NonNullable<ClipInputs['pad']>>[] = [
+  { key: 'thickness', label: 'Pad thickness' },
+  { key: 'lambda', label: 'Pad λ', measure: 'conductivity' },
+];
+const FASTENER_BOXES: Box<FastenerInputs>[] = [
+  { key: 'diameter', label: 'Shank diameter', measure: 'diameter' },
+  { key: 'metalLambda', label: 'λ of the fastener', measure: 'conductivity' },
+  { key: 'recess', label: 'Head recess' },
+  { key: 'spacingX', label: 'Spacing along x', measure: 'spacing' },
+  { key: 'spacingZ', label: 'Spacing along z', measure: 'spacing' },
+];
+const SLAB_BOXES: Box<SlabInputs>[] = [
+  { key: 'thickness', label: 'Slab thickness', measure: 'spacing' },
+  { key: 'lambda', label: 'λ of the slab', measure: 'conductivity' },
+];
+const OPENING_BOXES: Box<OpeningInputs>[] = [
+  { key: 'width', label: 'Frame width' },
+  { key: 'depth', label: 'Frame depth' },
+  { key: 'offset', label: 'Frame set back from the outside face', className: 'w-56' },
+  { key: 'lambda', label: 'λ of the frame', measure: 'conductivity' },
+];
+
+/** The boxes of a table over one set of inputs (SI stored, shown in the person's units). */
+function Boxes<T>({ boxes, inputs, onChange }: { boxes: Box<T>[]; inputs: T; onChange: (next: T) => void }) {
+  return boxes.map((b) => (
+    <QuantityInput
+      key={String(b.key)}
+      label={b.label}
+      measure={measureInput(b.measure ?? 'thickness')}
+      value={inputs[b.key] as number}
+      onChange={(si) => onChange({ ...inputs, [b.key]: si ?? Number.NaN })}
+      size="sheet"
+      className={b.className ?? (b.measure === 'conductivity' ? 'w-48' : 'w-40')}
+    />
+  ));
+}
+
+const row = 'flex flex-wrap items-start gap-x-4 gap-y-2';
+
 /** The boxes of the detail being solved. */
 function DetailFields({
   inputs,
@@ -499,243 +548,72 @@ function DetailFields({
   indices: number[];
   onChange: (next: SolveInputs) => void;
 }) {
-  if (inputs.kind === 'girt') return <GirtFields inputs={inputs} onChange={onChange} />;
+  if (inputs.kind === 'girt')
+    return (
+      <div className={row}>
+        <LabelledSelect
+          label="Section"
+          className="w-40"
+          value={inputs.profile}
+          onChange={(e) => onChange({ ...inputs, profile: e.target.value as 'z' | 'c' })}
+        >
+          <option value="z">Z girt</option>
+          <option value="c">C girt</option>
+        </LabelledSelect>
+        <Boxes boxes={GIRT_BOXES} inputs={inputs} onChange={onChange} />
+      </div>
+    );
   if (inputs.kind === 'clip') return <ClipFields inputs={inputs} onChange={onChange} />;
-  if (inputs.kind === 'fastener') return <FastenerFields inputs={inputs} onChange={onChange} />;
+  if (inputs.kind === 'fastener')
+    return (
+      <div className={row}>
+        <Boxes boxes={FASTENER_BOXES} inputs={inputs} onChange={onChange} />
+      </div>
+    );
   if (inputs.kind === 'slab')
-    return <SlabFields inputs={inputs} wall={wall} indices={indices} onChange={onChange} />;
-  if (inputs.kind === 'opening') return <OpeningFields inputs={inputs} onChange={onChange} />;
+    return (
+      <div className={row}>
+        <LabelledSelect
+          label="Slab edge at the outside face of layer"
+          className="min-w-56 flex-1"
+          value={inputs.from}
+          onChange={(e) => onChange({ ...inputs, from: Number(e.target.value) })}
+        >
+          {layerOptions(wall, indices)}
+        </LabelledSelect>
+        <Boxes boxes={SLAB_BOXES} inputs={inputs} onChange={onChange} />
+      </div>
+    );
+  if (inputs.kind === 'opening')
+    return (
+      <div className={row}>
+        <Boxes boxes={OPENING_BOXES} inputs={inputs} onChange={onChange} />
+      </div>
+    );
   return <p className="text-sm">Both walls are this assembly's layers; the corner needs no other input.</p>;
-}
-
-/** A λ box of the dialog. */
-function Lambda({
-  label,
-  value,
-  onChange,
-}: {
-  label: string;
-  value: number;
-  onChange: (si: number) => void;
-}) {
-  return (
-    <QuantityInput
-      label={label}
-      measure={measureInput('conductivity')}
-      value={value}
-      onChange={(si) => onChange(si ?? Number.NaN)}
-      size="sheet"
-      className="w-48"
-    />
-  );
-}
-
-function FastenerFields({
-  inputs,
-  onChange,
-}: {
-  inputs: FastenerInputs;
-  onChange: (next: FastenerInputs) => void;
-}) {
-  const set = (patch: Partial<FastenerInputs>) => onChange({ ...inputs, ...patch });
-  return (
-    <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-      <Size
-        label="Shank diameter"
-        measure="diameter"
-        value={inputs.diameter}
-        onChange={(diameter) => set({ diameter })}
-      />
-      <Lambda
-        label="λ of the fastener"
-        value={inputs.metalLambda}
-        onChange={(metalLambda) => set({ metalLambda })}
-      />
-      <Size label="Head recess" value={inputs.recess} onChange={(recess) => set({ recess })} />
-      <Size
-        label="Spacing along x"
-        measure="spacing"
-        value={inputs.spacingX}
-        onChange={(spacingX) => set({ spacingX })}
-      />
-      <Size
-        label="Spacing along z"
-        measure="spacing"
-        value={inputs.spacingZ}
-        onChange={(spacingZ) => set({ spacingZ })}
-      />
-    </div>
-  );
-}
-
-function SlabFields({
-  inputs,
-  wall,
-  indices,
-  onChange,
-}: {
-  inputs: SlabInputs;
-  wall: TemplateLayer[];
-  indices: number[];
-  onChange: (next: SlabInputs) => void;
-}) {
-  const set = (patch: Partial<SlabInputs>) => onChange({ ...inputs, ...patch });
-  return (
-    <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-      <Field label="Slab edge at the outside face of layer" className="min-w-56 flex-1">
-        {(c) => (
-          <Select
-            {...c}
-            value={inputs.from}
-            className="py-1.5 text-sm"
-            onChange={(e) => set({ from: Number(e.target.value) })}
-          >
-            {layerOptions(wall, indices)}
-          </Select>
-        )}
-      </Field>
-      <Size
-        label="Slab thickness"
-        measure="spacing"
-        value={inputs.thickness}
-        onChange={(thickness) => set({ thickness })}
-      />
-      <Lambda label="λ of the slab" value={inputs.lambda} onChange={(lambda) => set({ lambda })} />
-    </div>
-  );
-}
-
-function OpeningFields({
-  inputs,
-  onChange,
-}: {
-  inputs: OpeningInputs;
-  onChange: (next: OpeningInputs) => void;
-}) {
-  const set = (patch: Partial<OpeningInputs>) => onChange({ ...inputs, ...patch });
-  return (
-    <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-      <Size label="Frame width" value={inputs.width} onChange={(width) => set({ width })} />
-      <Size label="Frame depth" value={inputs.depth} onChange={(depth) => set({ depth })} />
-      <Size
-        label="Frame set back from the outside face"
-        value={inputs.offset}
-        onChange={(offset) => set({ offset })}
-        className="w-56"
-      />
-      <Lambda label="λ of the frame" value={inputs.lambda} onChange={(lambda) => set({ lambda })} />
-    </div>
-  );
-}
-
-/** A length box of the dialog (SI stored, shown in the person's units). */
-function Size({
-  label,
-  measure = 'thickness',
-  value,
-  onChange,
-  className = 'w-40',
-}: {
-  label: string;
-  measure?: Measure;
-  value: number;
-  onChange: (si: number) => void;
-  className?: string;
-}) {
-  return (
-    <QuantityInput
-      label={label}
-      measure={measureInput(measure)}
-      value={value}
-      onChange={(si) => onChange(si ?? Number.NaN)}
-      size="sheet"
-      className={className}
-    />
-  );
-}
-
-function GirtFields({ inputs, onChange }: { inputs: GirtInputs; onChange: (next: GirtInputs) => void }) {
-  const set = (patch: Partial<GirtInputs>) => onChange({ ...inputs, ...patch });
-  return (
-    <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-      <Field label="Section" className="w-40">
-        {(c) => (
-          <Select
-            {...c}
-            value={inputs.profile}
-            className="py-1.5 text-sm"
-            onChange={(e) => set({ profile: e.target.value as 'z' | 'c' })}
-          >
-            <option value="z">Z girt</option>
-            <option value="c">C girt</option>
-          </Select>
-        )}
-      </Field>
-      <Size label="Steel thickness" value={inputs.thickness} onChange={(thickness) => set({ thickness })} />
-      <Size
-        label="Outer flange"
-        measure="spacing"
-        value={inputs.outerFlange}
-        onChange={(outerFlange) => set({ outerFlange })}
-      />
-      <Size
-        label="Inner flange"
-        measure="spacing"
-        value={inputs.innerFlange}
-        onChange={(innerFlange) => set({ innerFlange })}
-      />
-      <Size
-        label="Girt spacing"
-        measure="spacing"
-        value={inputs.spacing}
-        onChange={(spacing) => set({ spacing })}
-      />
-    </div>
-  );
 }
 
 function ClipFields({ inputs, onChange }: { inputs: ClipInputs; onChange: (next: ClipInputs) => void }) {
   const set = (patch: Partial<ClipInputs>) => onChange({ ...inputs, ...patch });
   return (
     <div className="flex flex-col gap-2">
-      <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-        <Size
-          label="Clip width (footprint)"
-          measure="spacing"
-          value={inputs.width}
-          onChange={(width) => set({ width })}
-        />
-        <Size label="Web thickness" value={inputs.thickness} onChange={(thickness) => set({ thickness })} />
-        <Field label="Material" className="w-48">
-          {(c) => (
-            <Select
-              {...c}
-              value={String(inputs.metalLambda)}
-              className="py-1.5 text-sm"
-              onChange={(e) => set({ metalLambda: Number(e.target.value) })}
-            >
-              {CLIP_METALS.map((m) => (
-                <option key={m.id} value={String(m.conductivity)}>
-                  {m.name} (λ {m.conductivity})
-                </option>
-              ))}
-            </Select>
-          )}
-        </Field>
-        <Size
-          label="Spacing along the girt"
-          measure="spacing"
-          value={inputs.spacingX}
-          onChange={(spacingX) => set({ spacingX })}
-        />
-        <Size
-          label="Spacing across"
-          measure="spacing"
-          value={inputs.spacingZ}
-          onChange={(spacingZ) => set({ spacingZ })}
-        />
+      <div className={row}>
+        <Boxes boxes={CLIP_SIZE} inputs={inputs} onChange={onChange} />
+        <LabelledSelect
+          label="Material"
+          className="w-48"
+          value={String(inputs.metalLambda)}
+          onChange={(e) => set({ metalLambda: Number(e.target.value) })}
+        >
+          {CLIP_METALS.map((m) => (
+            <option key={m.id} value={String(m.conductivity)}>
+              {m.name} (λ {m.conductivity})
+            </option>
+          ))}
+        </LabelledSelect>
+        <Boxes boxes={CLIP_SPACING} inputs={inputs} onChange={onChange} />
       </div>
-      <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
+      <div className={row}>
         <label className="flex items-center gap-2 pt-6 text-sm">
           <input
             type="checkbox"
@@ -745,20 +623,7 @@ function ClipFields({ inputs, onChange }: { inputs: ClipInputs; onChange: (next:
           />
           Thermal break pad
         </label>
-        {inputs.pad ? (
-          <>
-            <Size
-              label="Pad thickness"
-              value={inputs.pad.thickness}
-              onChange={(thickness) => set({ pad: { ...inputs.pad!, thickness } })}
-            />
-            <Lambda
-              label="Pad λ"
-              value={inputs.pad.lambda}
-              onChange={(lambda) => set({ pad: { ...inputs.pad!, lambda } })}
-            />
-          </>
-        ) : null}
+        {inputs.pad ? <Boxes boxes={PAD_BOXES} inputs={inputs.pad} onChange={(pad) => set({ pad })} /> : null}
       </div>
     </div>
   );

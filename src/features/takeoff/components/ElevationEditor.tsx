@@ -11,9 +11,9 @@ import { type ComponentProps, type ReactNode, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
 import { FieldGroup, GroupProblem } from '../../../components/ui/FieldGroup';
+import { LabelledSelect } from '../../../components/ui/LabelledSelect';
 import { Options } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
-import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { type FieldProblem, type FieldProblems, fieldDomId, problemText } from '../../../lib/field-problems';
 import type { ParsedEntry } from '../../../lib/input-measure';
@@ -165,27 +165,21 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                 setWall(i, { ...w, height }),
               )}
               {(['corners', 'abutments'] as const).map((k) => (
-                <Field
+                <LabelledSelect
                   key={k}
                   label={k === 'corners' ? 'Corners' : 'Abutments'}
                   id={id(`walls.${i}.${k}`)}
                   error={pr(`walls.${i}.${k}`) && problemText(pr(`walls.${i}.${k}`)!, undefined, 'SI')}
+                  selectClassName={small}
+                  value={w[k] ?? 0}
+                  onChange={(e) => setWall(i, { ...w, [k]: Number(e.target.value) })}
                 >
-                  {(c) => (
-                    <Select
-                      {...c}
-                      className={small}
-                      value={w[k] ?? 0}
-                      onChange={(e) => setWall(i, { ...w, [k]: Number(e.target.value) })}
-                    >
-                      {[0, 1, 2].map((n) => (
-                        <option key={n} value={n}>
-                          {n}
-                        </option>
-                      ))}
-                    </Select>
-                  )}
-                </Field>
+                  {[0, 1, 2].map((n) => (
+                    <option key={n} value={n}>
+                      {n}
+                    </option>
+                  ))}
+                </LabelledSelect>
               ))}
               <div className="flex items-start pt-6">
                 {input.walls.length > 1 ? (
@@ -214,19 +208,16 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                   {nameField(`${at}.name`, 'Opening', o.name ?? '', (name) =>
                     setO({ name: name || undefined }),
                   )}
-                  <Field label="Kind" id={id(`${at}.kind`)}>
-                    {(c) => (
-                      <Select
-                        {...c}
-                        className={small}
-                        value={o.kind ?? 'window'}
-                        onChange={(e) => setO({ kind: e.target.value as 'window' | 'door' })}
-                      >
-                        <option value="window">Window</option>
-                        <option value="door">Door (no sill)</option>
-                      </Select>
-                    )}
-                  </Field>
+                  <LabelledSelect
+                    label="Kind"
+                    id={id(`${at}.kind`)}
+                    selectClassName={small}
+                    value={o.kind ?? 'window'}
+                    onChange={(e) => setO({ kind: e.target.value as 'window' | 'door' })}
+                  >
+                    <option value="window">Window</option>
+                    <option value="door">Door (no sill)</option>
+                  </LabelledSelect>
                   {quantity(`${at}.width`, 'Width', 'length', o.width, (width) => setO({ width }))}
                   {quantity(`${at}.height`, 'Height', 'length', o.height, (height) => setO({ height }))}
                   <CountInput
@@ -287,23 +278,20 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             (length) => set({ module: { ...input.module, length } }),
             { hint: 'End joints occur where a run is longer.' },
           )}
-          <Field label="Panels span" id={id('module.orientation')}>
-            {(c) => (
-              <Select
-                {...c}
-                className={small}
-                value={input.module.orientation}
-                onChange={(e) =>
-                  set({
-                    module: { ...input.module, orientation: e.target.value as 'vertical' | 'horizontal' },
-                  })
-                }
-              >
-                <option value="vertical">Vertically (width runs along the wall)</option>
-                <option value="horizontal">Horizontally (width runs up the wall)</option>
-              </Select>
-            )}
-          </Field>
+          <LabelledSelect
+            label="Panels span"
+            id={id('module.orientation')}
+            selectClassName={small}
+            value={input.module.orientation}
+            onChange={(e) =>
+              set({
+                module: { ...input.module, orientation: e.target.value as 'vertical' | 'horizontal' },
+              })
+            }
+          >
+            <option value="vertical">Vertically (width runs along the wall)</option>
+            <option value="horizontal">Horizontally (width runs up the wall)</option>
+          </LabelledSelect>
         </div>
       </FieldGroup>
 
@@ -322,22 +310,16 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
                 aria-label={`Bead, ${TAKEOFF_TYPE_LABELS[t]}`}
               >
                 <p className="pt-7 text-sm font-semibold">{TAKEOFF_TYPE_LABELS[t]}</p>
-                <Field label="Profile" id={id(`beads.${t}.shape`)}>
-                  {(c) => (
-                    <Select
-                      {...c}
-                      className={small}
-                      value={bead?.shape ?? 'none'}
-                      onChange={(e) => changeShape(t, e.target.value)}
-                    >
-                      <option value="none">No sealant</option>
-                      <Options
-                        values={['rectangular', 'round', 'fillet'] as const}
-                        labels={BEAD_SHAPE_LABELS}
-                      />
-                    </Select>
-                  )}
-                </Field>
+                <LabelledSelect
+                  label="Profile"
+                  id={id(`beads.${t}.shape`)}
+                  selectClassName={small}
+                  value={bead?.shape ?? 'none'}
+                  onChange={(e) => changeShape(t, e.target.value)}
+                >
+                  <option value="none">No sealant</option>
+                  <Options values={['rectangular', 'round', 'fillet'] as const} labels={BEAD_SHAPE_LABELS} />
+                </LabelledSelect>
                 {bead?.shape === 'rectangular' ? (
                   <>
                     {quantity(`beads.${t}.width`, 'Width W', 'joint', bead.width, (width) =>
@@ -377,18 +359,15 @@ export function ElevationEditor({ input, onChange, problems }: ElevationEditorPr
             aria-label={`Trim ${k + 1}`}
           >
             {nameField(`trims.${k}.name`, 'Trim', t.name, (name) => setTrim(k, { ...t, name }))}
-            <Field label="Along" id={id(`trims.${k}.appliesTo`)}>
-              {(c) => (
-                <Select
-                  {...c}
-                  className={small}
-                  value={t.appliesTo}
-                  onChange={(e) => setTrim(k, { ...t, appliesTo: e.target.value as TakeoffJointType })}
-                >
-                  <Options values={TAKEOFF_JOINT_TYPES} labels={TAKEOFF_TYPE_LABELS} />
-                </Select>
-              )}
-            </Field>
+            <LabelledSelect
+              label="Along"
+              id={id(`trims.${k}.appliesTo`)}
+              selectClassName={small}
+              value={t.appliesTo}
+              onChange={(e) => setTrim(k, { ...t, appliesTo: e.target.value as TakeoffJointType })}
+            >
+              <Options values={TAKEOFF_JOINT_TYPES} labels={TAKEOFF_TYPE_LABELS} />
+            </LabelledSelect>
             {quantity(`trims.${k}.stockLength`, 'Stock length', 'length', t.stockLength, (stockLength) =>
               setTrim(k, { ...t, stockLength }),
             )}

@@ -9,8 +9,8 @@ import { useState } from 'react';
 import type { UseFormReturn } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
 import { Field } from '../../../components/ui/Field';
+import { LabelledSelect } from '../../../components/ui/LabelledSelect';
 import { NamedOptions } from '../../../components/ui/Options';
-import { Select } from '../../../components/ui/Select';
 import { TextInput } from '../../../components/ui/TextInput';
 import { isApiRequestError } from '../../../lib/api';
 import { issueLines } from '../../../lib/issue-words';
@@ -106,27 +106,20 @@ export function LibraryPick({ kind, form, values, errors, disabled, library }: P
     <div className="flex flex-col gap-3 rounded-sm border border-rule bg-paper-sunk/40 p-3">
       <div className="grid gap-x-6 gap-y-3 sm:grid-cols-2">
         {library && !disabled ? (
-          <Field
+          <LabelledSelect
             label={`Take from ${library.firmName}’s library`}
             hint={
               offered.length === 0
                 ? `No ${w.what}s in the library yet${library.save ? ' — enter one below and save it there' : ''}.`
                 : 'Copies the values and their source into this page; the library entry may change later, this revision will not.'
             }
+            value=""
+            onChange={(e) => take(e.target.value)}
+            disabled={offered.length === 0}
           >
-            {(c) => (
-              <Select
-                {...c}
-                value=""
-                onChange={(e) => take(e.target.value)}
-                disabled={offered.length === 0}
-                className="py-1.5 text-sm"
-              >
-                <option value="">Choose an entry…</option>
-                <NamedOptions items={offered} />
-              </Select>
-            )}
-          </Field>
+            <option value="">Choose an entry…</option>
+            <NamedOptions items={offered} />
+          </LabelledSelect>
         ) : null}
         <Field
           label={`Source of the ${w.what}`}

@@ -1,6 +1,7 @@
 import { can, canInFirm } from '@shared/auth/permissions';
 import type { BridgeValueInput } from '@shared/schemas/assembly';
 import type { Project } from '@shared/schemas/project';
+import { TitledSection } from '../../components/ui/TitledSection';
 import { AssemblyBuilder } from '../../features/assemblies/components/AssemblyBuilder';
 import { AssemblyView } from '../../features/assemblies/components/AssemblyView';
 import { DuplicateAssembly } from '../../features/assemblies/components/DuplicateAssembly';
@@ -84,12 +85,13 @@ export function AssemblyBuilderPage() {
         openRevision={a.revision}
       />
       {project.archivedAt === null && targets.length > 0 ? (
-        <section aria-labelledby="duplicate-heading" className="flex flex-col items-start gap-3">
-          <h2 id="duplicate-heading" className="w-full border-b border-ink pb-2 text-2xl">
-            Duplicate
-          </h2>
+        <TitledSection
+          title="Duplicate"
+          heading="w-full border-b border-ink pb-2 text-2xl"
+          className="flex flex-col items-start gap-3"
+        >
           <DuplicateAssembly key={a.id} assembly={a} projectId={project.id} targets={targets} />
-        </section>
+        </TitledSection>
       ) : null}
     </>
   );

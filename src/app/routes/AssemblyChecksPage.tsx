@@ -2,6 +2,7 @@ import { can } from '@shared/auth/permissions';
 import { useSearchParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
+import { TitledSection } from '../../components/ui/TitledSection';
 import { useCheckRun } from '../../features/checks/api/get-check-run';
 import { useCheckRuns } from '../../features/checks/api/get-check-runs';
 import { CheckReportView } from '../../features/checks/components/CheckReportView';
@@ -85,10 +86,7 @@ export function AssemblyChecksPage() {
       </section>
 
       {runs.data && runs.data.length > 0 ? (
-        <section aria-labelledby="past-heading" className="flex flex-col gap-3">
-          <h2 id="past-heading" className="border-b border-ink pb-2 text-2xl">
-            Runs of this assembly
-          </h2>
+        <TitledSection title="Runs of this assembly">
           <PastRuns
             projectId={project.id}
             runs={runs.data}
@@ -96,7 +94,7 @@ export function AssemblyChecksPage() {
             hrefFor={(runId) => `?run=${runId}`}
             units={system}
           />
-        </section>
+        </TitledSection>
       ) : null}
     </>
   );

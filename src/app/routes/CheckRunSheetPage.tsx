@@ -4,6 +4,7 @@ import { Link, useParams } from 'react-router';
 import { Cautions } from '../../components/ui/Cautions';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
+import { TitledSection } from '../../components/ui/TitledSection';
 import { useCheckRun } from '../../features/checks/api/get-check-run';
 import { useProject } from '../../features/projects/api/get-project';
 import { SheetPreview } from '../../features/sheets/components/SheetPreview';
@@ -38,10 +39,7 @@ export function CheckRunSheetPage() {
         <span aria-hidden="true">/</span> <Link to={checks}>Checks</Link> <span aria-hidden="true">/</span>{' '}
         Compliance sheet
       </nav>
-      <section aria-labelledby="sheet-heading" className="flex flex-col gap-3">
-        <h2 id="sheet-heading" className="border-b border-ink pb-2 text-2xl">
-          Compliance sheet
-        </h2>
+      <TitledSection title="Compliance sheet">
         <dl className="grid gap-x-8 gap-y-1 text-sm sm:grid-cols-[12rem_1fr]">
           <dt className="font-semibold">Assembly</dt>
           <dd>
@@ -85,7 +83,7 @@ export function CheckRunSheetPage() {
             </label>
           ))}
         </fieldset>
-      </section>
+      </TitledSection>
       <SheetPreview runId={r.id} units={units} />
       <Cautions
         items={[

@@ -1,29 +1,25 @@
-import { useNavigate, useParams, useSearchParams } from 'react-router';
+import { useNavigate, useSearchParams } from 'react-router';
 import { Loaded } from '../../components/ui/Loaded';
 import { useAssemblies } from '../../features/assemblies/api/get-assemblies';
 import { compareSearch, parseCompareParams } from '../../features/assemblies/compare-params';
 import { AssemblyCompare } from '../../features/assemblies/components/AssemblyCompare';
-import { useProject } from '../../features/projects/api/get-project';
+import { ProjectPage, useRouteProject } from './project-page';
 
 export function CompareAssembliesPage() {
-  const { projectId = '' } = useParams();
+  const { projectId, project } = useRouteProject();
   const [params] = useSearchParams();
   const navigate = useNavigate();
-  const { data: project } = useProject(projectId);
   const list = useAssemblies(projectId);
   const items = parseCompareParams(params);
   if (!project) return null;
 
   return (
-    <div className="flex flex-col gap-6">
-      <title>{`Compare assemblies · ${project.name} · Skinwright`}</title>
-      <div>
-        <h2 className="text-2xl">Compare assemblies</h2>
-        <p className="mt-1 max-w-prose text-ink-muted">
-          Set two or more assemblies — or two revisions of one — side by side. Column A is the baseline; every
-          figure that differs from it is marked ▲ higher or ▼ lower, with the difference in words.
-        </p>
-      </div>
+    <ProjectPage
+      project={project}
+      title="Compare assemblies"
+      ruled={false}
+      intro="Set two or more assemblies — or two revisions of one — side by side. Column A is the baseline; every figure that differs from it is marked ▲ higher or ▼ lower, with the difference in words."
+    >
       <Loaded
         query={list}
         what="Loading the assemblies"
@@ -38,6 +34,6 @@ export function CompareAssembliesPage() {
           />
         )}
       </Loaded>
-    </div>
+    </ProjectPage>
   );
 }

@@ -7,6 +7,7 @@ import { Button } from '../../components/ui/Button';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
+import { TitledSection } from '../../components/ui/TitledSection';
 import { useDeleteCriteriaSet } from '../../features/criteria/api/delete-criteria-set';
 import { useCriteriaSet } from '../../features/criteria/api/get-criteria-set';
 import { useCriteriaVersions } from '../../features/criteria/api/get-criteria-versions';
@@ -140,10 +141,7 @@ export function CriteriaSetPage() {
         )}
       </section>
 
-      <section aria-labelledby="rows-heading" className="flex flex-col gap-3">
-        <h2 id="rows-heading" className="border-b border-ink pb-2 text-2xl">
-          Criteria
-        </h2>
+      <TitledSection title="Criteria">
         <p className="max-w-prose text-sm text-ink-muted">
           One row per criterion for a climate zone (or all zones) and a wall category; a row naming the zone
           wins over an all-zones row. Values are shown in {system === 'IP' ? 'IP' : 'SI'} units and stored in
@@ -164,21 +162,15 @@ export function CriteriaSetPage() {
           </Notice>
         ) : null}
         <CriteriaRowsEditor set={s} system={system} onSaved={onSaved} starter={starter} />
-      </section>
+      </TitledSection>
 
       {mayWrite ? (
-        <section aria-labelledby="import-heading" className="flex flex-col gap-3">
-          <h2 id="import-heading" className="border-b border-ink pb-2 text-2xl">
-            Import from CSV
-          </h2>
+        <TitledSection title="Import from CSV">
           <CsvImport set={s} onSaved={onSaved} />
-        </section>
+        </TitledSection>
       ) : null}
 
-      <section aria-labelledby="versions-heading" className="flex flex-col gap-3">
-        <h2 id="versions-heading" className="border-b border-ink pb-2 text-2xl">
-          Versions
-        </h2>
+      <TitledSection title="Versions">
         <p className="max-w-prose text-sm text-ink-muted">
           A version that a stored check run used is frozen: it never changes again, and editing it creates the
           next version.
@@ -188,13 +180,14 @@ export function CriteriaSetPage() {
         ) : (
           <Loading what="Loading the versions" />
         )}
-      </section>
+      </TitledSection>
 
       {s.myAccess === 'admin' && !s.frozenAt && s.isLatest ? (
-        <section aria-labelledby="delete-heading" className="flex flex-col gap-3 border-t border-rule pt-6">
-          <h2 id="delete-heading" className="text-lg">
-            Delete this version
-          </h2>
+        <TitledSection
+          title="Delete this version"
+          heading="text-lg"
+          className="flex flex-col gap-3 border-t border-rule pt-6"
+        >
           <p className="text-sm">No check run has used version {s.version}, so it may be deleted.</p>
           {remove.isError ? <Notice tone="caution" title={errorMessage(remove.error)} live /> : null}
           <div>
@@ -211,7 +204,7 @@ export function CriteriaSetPage() {
               Delete version {s.version}
             </Button>
           </div>
-        </section>
+        </TitledSection>
       ) : null}
     </div>
   );

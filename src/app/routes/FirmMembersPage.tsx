@@ -4,6 +4,7 @@ import { Loaded } from '../../components/ui/Loaded';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
+import { TitledSection } from '../../components/ui/TitledSection';
 import { useFirmMembers } from '../../features/firm-members/api/get-firm-members';
 import { AddFirmMemberForm } from '../../features/firm-members/components/AddFirmMemberForm';
 import { FirmMembersTable } from '../../features/firm-members/components/FirmMembersTable';
@@ -44,10 +45,7 @@ export function FirmMembersPage() {
       ) : (
         <>
           <FirmPicker firms={orgs} value={org.id} onChange={(id) => setParams({ org: id })} />
-          <section aria-labelledby="roles-heading" className="flex flex-col gap-2">
-            <h2 id="roles-heading" className="text-xl">
-              Firm roles
-            </h2>
+          <TitledSection title="Firm roles" heading="text-xl" className="flex flex-col gap-2">
             <dl className="grid gap-x-6 gap-y-1 sm:grid-cols-[auto_1fr]">
               {FIRM_ROLES.map((r) => (
                 <div key={r} className="contents">
@@ -60,11 +58,8 @@ export function FirmMembersPage() {
               Your role in {org.name}: <strong>{FIRM_ROLE_LABELS[org.role]}</strong>
               {isAdmin ? '.' : '. A firm administrator changes roles.'}
             </p>
-          </section>
-          <section aria-labelledby="people-heading" className="flex flex-col gap-3">
-            <h2 id="people-heading" className="sr-only">
-              People
-            </h2>
+          </TitledSection>
+          <TitledSection title="People" heading="sr-only">
             <Loaded query={members} what="Loading the firm's people">
               {(data) => (
                 <FirmMembersTable
@@ -76,7 +71,7 @@ export function FirmMembersPage() {
                 />
               )}
             </Loaded>
-          </section>
+          </TitledSection>
           {isAdmin ? (
             <section className="border-t border-ink pt-6">
               <AddFirmMemberForm key={org.id} orgId={org.id} firmName={org.name} />

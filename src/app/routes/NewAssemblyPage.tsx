@@ -5,6 +5,7 @@ import { useMemo } from 'react';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import { ButtonLink } from '../../components/ui/Button';
 import { Notice } from '../../components/ui/Notice';
+import { TitledSection } from '../../components/ui/TitledSection';
 import { AssemblyBuilder } from '../../features/assemblies/components/AssemblyBuilder';
 import { startingInput } from '../../features/assemblies/form';
 import { useProject } from '../../features/projects/api/get-project';
@@ -50,10 +51,7 @@ export function NewAssemblyPage() {
       <nav aria-label="Breadcrumb" className="-mt-2 text-sm">
         <Link to={base}>Assemblies</Link> <span aria-hidden="true">/</span> New
       </nav>
-      <section aria-labelledby="start-heading" className="flex flex-col gap-2">
-        <h2 id="start-heading" className="label-caps">
-          Start from
-        </h2>
+      <TitledSection title="Start from" heading="label-caps" className="flex flex-col gap-2">
         <ul className="flex flex-wrap gap-2">
           {choices.map((c) => (
             <li key={c.id}>
@@ -74,7 +72,7 @@ export function NewAssemblyPage() {
             ? `Template: ${TEMPLATE_NOTE} Check every layer, bridge and joint against the project before relying on it.`
             : 'Starting blank: choose the wall category, then add the layers from the outside in.'}
         </p>
-      </section>
+      </TitledSection>
       <AssemblyBuilder
         key={chosen}
         projectId={project.id}

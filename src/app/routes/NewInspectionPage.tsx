@@ -1,21 +1,18 @@
-import { useNavigate, useParams } from 'react-router';
+import { useNavigate } from 'react-router';
 import { Loaded } from '../../components/ui/Loaded';
 import { useAssemblies } from '../../features/assemblies/api/get-assemblies';
 import { useCreateInspection } from '../../features/inspections/api/mutations';
 import { NewInspectionForm } from '../../features/inspections/components/NewInspectionForm';
-import { useProject } from '../../features/projects/api/get-project';
+import { ProjectPage, useRouteProject } from './project-page';
 
 export function NewInspectionPage() {
-  const { projectId = '' } = useParams();
+  const { projectId, project } = useRouteProject();
   const navigate = useNavigate();
-  const { data: project } = useProject(projectId);
   const assemblies = useAssemblies(projectId);
   const create = useCreateInspection(projectId);
   if (!project) return null;
   return (
-    <div className="flex flex-col gap-6">
-      <title>{`New inspection · ${project.name} · Skinwright`}</title>
-      <h2 className="border-b border-ink pb-2 text-2xl">New inspection</h2>
+    <ProjectPage project={project} title="New inspection">
       <Loaded
         query={assemblies}
         what="Loading the assemblies"
@@ -34,6 +31,6 @@ export function NewInspectionPage() {
           />
         )}
       </Loaded>
-    </div>
+    </ProjectPage>
   );
 }

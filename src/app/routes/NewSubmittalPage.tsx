@@ -1,17 +1,16 @@
 import { can } from '@shared/auth/permissions';
-import { Link, useNavigate, useParams } from 'react-router';
+import { Link, useNavigate } from 'react-router';
 import { Loaded } from '../../components/ui/Loaded';
 import { Notice } from '../../components/ui/Notice';
 import { useMembers } from '../../features/members/api/get-members';
-import { useProject } from '../../features/projects/api/get-project';
 import { useCreateSubmittal } from '../../features/submittals/api/mutations';
 import { SubmittalForm } from '../../features/submittals/components/SubmittalForm';
+import { ProjectPage, useRouteProject } from './project-page';
 
 /** Start a submittal: its details and reviewers; items are added on its page. */
 export function NewSubmittalPage() {
-  const { projectId = '' } = useParams();
+  const { projectId, project } = useRouteProject();
   const navigate = useNavigate();
-  const { data: project } = useProject(projectId);
   const members = useMembers(projectId);
   const create = useCreateSubmittal(projectId);
   if (!project) return null;
@@ -19,13 +18,16 @@ export function NewSubmittalPage() {
     return <Notice tone="caution" title="Your role on this project does not start submittals." />;
 
   return (
-    <div className="flex flex-col gap-6">
-      <title>{`New submittal · ${project.name} · Skinwright`}</title>
-      <nav aria-label="Breadcrumb" className="-mt-2 text-sm">
-        <Link to={`/projects/${project.id}/submittals`}>Submittals</Link> <span aria-hidden="true">/</span>{' '}
-        New
-      </nav>
-      <h2 className="border-b border-ink pb-2 text-2xl">New submittal</h2>
+    <ProjectPage
+      project={project}
+      title="New submittal"
+      breadcrumb={
+        <nav aria-label="Breadcrumb" className="-mt-2 text-sm">
+          <Link to={`/projects/${project.id}/submittals`}>Submittals</Link> <span aria-hidden="true">/</span>{' '}
+          New
+        </nav>
+      }
+    >
       <Loaded query={members} what="Loading the people of the project">
         {(data) => (
           <SubmittalForm
@@ -41,6 +43,6 @@ export function NewSubmittalPage() {
           />
         )}
       </Loaded>
-    </div>
+    </ProjectPage>
   );
 }

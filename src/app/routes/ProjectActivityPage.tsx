@@ -1,29 +1,22 @@
 import { can } from '@shared/auth/permissions';
-import { useParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { useAudit } from '../../features/audit/api/get-audit';
 import { AuditLog } from '../../features/audit/components/AuditLog';
-import { useProject } from '../../features/projects/api/get-project';
 import { errorMessage } from '../../lib/api';
+import { ProjectPage, useRouteProject } from './project-page';
 
 export function ProjectActivityPage() {
-  const { projectId = '' } = useParams();
-  const { data: project } = useProject(projectId);
-  const allowed = can(project?.myRole, 'audit.read');
+  const { project } = useRouteProject();
   if (!project) return null;
   return (
-    <section aria-labelledby="activity-heading" className="flex flex-col gap-3">
-      <title>{`Activity · ${project.name} · Skinwright`}</title>
-      <h2 id="activity-heading" className="text-2xl">
-        Activity
-      </h2>
-      {allowed ? (
-        <AuditSection projectId={projectId} />
+    <ProjectPage project={project} title="Activity" ruled={false} className="gap-3">
+      {can(project.myRole, 'audit.read') ? (
+        <AuditSection projectId={project.id} />
       ) : (
         <Notice tone="info" title="Your role on this project does not include the activity record." />
       )}
-    </section>
+    </ProjectPage>
   );
 }
 

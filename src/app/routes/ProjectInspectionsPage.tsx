@@ -1,5 +1,4 @@
 import { can } from '@shared/auth/permissions';
-import { useParams } from 'react-router';
 import { ButtonLink } from '../../components/ui/Button';
 import { Loaded } from '../../components/ui/Loaded';
 import { Notice } from '../../components/ui/Notice';
@@ -8,27 +7,27 @@ import { ElevationDrawing } from '../../features/inspections/components/Elevatio
 import { InspectionList } from '../../features/inspections/components/InspectionList';
 import { WaitingToSend } from '../../features/inspections/components/WaitingToSend';
 import { byElevation } from '../../features/inspections/scope';
-import { useProject } from '../../features/projects/api/get-project';
+import { ProjectPage, useRouteProject } from './project-page';
 
 /** The project's field inspections: each elevation drawn by state, then the list. */
 export function ProjectInspectionsPage() {
-  const { projectId = '' } = useParams();
-  const { data: project } = useProject(projectId);
+  const { projectId, project } = useRouteProject();
   const list = useInspections(projectId);
   if (!project) return null;
   const mayCreate = can(project.myRole, 'inspection.create') && project.archivedAt === null;
 
   return (
-    <div className="flex flex-col gap-6">
-      <title>{`Inspections · ${project.name} · Skinwright`}</title>
-      <div className="flex flex-wrap items-end justify-between gap-4 border-b border-ink pb-2">
-        <h2 className="text-2xl">Inspections</h2>
-        {mayCreate ? (
+    <ProjectPage
+      project={project}
+      title="Inspections"
+      action={
+        mayCreate ? (
           <ButtonLink variant="primary" className="min-h-11" to={`/projects/${project.id}/inspections/new`}>
             New inspection
           </ButtonLink>
-        ) : null}
-      </div>
+        ) : null
+      }
+    >
       <p className="max-w-prose text-sm text-ink-muted">
         The wall as built, walked against what was proved: a checklist generated from an assembly revision for
         an elevation and a range of grid lines or a wind zone. An inspection opened once on a phone keeps
@@ -65,6 +64,6 @@ export function ProjectInspectionsPage() {
           </>
         )}
       </Loaded>
-    </div>
+    </ProjectPage>
   );
 }

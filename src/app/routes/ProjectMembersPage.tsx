@@ -1,6 +1,7 @@
 import { can } from '@shared/auth/permissions';
 import { useParams } from 'react-router';
 import { Loaded } from '../../components/ui/Loaded';
+import { TitledSection } from '../../components/ui/TitledSection';
 import { useMe } from '../../features/me/api/get-me';
 import { useMembers } from '../../features/members/api/get-members';
 import { InviteForm } from '../../features/members/components/InviteForm';
@@ -20,10 +21,7 @@ export function ProjectMembersPage() {
   return (
     <div className="flex flex-col gap-10">
       <title>{`People · ${project.name} · Skinwright`}</title>
-      <section aria-labelledby="people-heading" className="flex flex-col gap-3">
-        <h2 id="people-heading" className="text-2xl">
-          People and roles
-        </h2>
+      <TitledSection title="People and roles" heading="text-2xl">
         <Loaded query={members} what="Loading people">
           {(data) => (
             <MembersTable
@@ -34,19 +32,16 @@ export function ProjectMembersPage() {
             />
           )}
         </Loaded>
-      </section>
+      </TitledSection>
 
       {mayInvite ? (
         <>
           <section className="border-t border-ink pt-6">
             <InviteForm projectId={projectId} myRole={project.myRole} />
           </section>
-          <section aria-labelledby="pending-heading" className="flex flex-col gap-3">
-            <h2 id="pending-heading" className="text-xl">
-              Waiting for an answer
-            </h2>
+          <TitledSection title="Waiting for an answer" heading="text-xl">
             {members.data ? <PendingInvitations invitations={members.data.invitations} /> : null}
-          </section>
+          </TitledSection>
         </>
       ) : null}
     </div>

@@ -1,4 +1,5 @@
 import { can } from '@shared/auth/permissions';
+import { TitledSection } from '../../components/ui/TitledSection';
 import { AssembliesOverview } from '../../features/assemblies/components/AssembliesOverview';
 import { ArchiveControl } from '../../features/projects/components/ArchiveControl';
 import { DuplicateProject } from '../../features/projects/components/DuplicateProject';
@@ -30,15 +31,12 @@ export function ProjectOverviewPage() {
         )}
       </section>
 
-      <section aria-labelledby="assemblies-heading" className="flex flex-col gap-3">
-        <h2 id="assemblies-heading" className="border-b border-ink pb-2 text-2xl">
-          Assemblies
-        </h2>
+      <TitledSection title="Assemblies">
         <AssembliesOverview
           projectId={project.id}
           mayWrite={can(project.myRole, 'assembly.write') && !archived}
         />
-      </section>
+      </TitledSection>
 
       {can(project.myRole, 'project.update') && !archived && !editing ? (
         <section

@@ -1,37 +1,37 @@
 import { can } from '@shared/auth/permissions';
 import { SUBMITTAL_STATUS_TEXT, SUBMITTAL_STATUSES } from '@shared/schemas/submittals';
 import { useId } from 'react';
-import { useParams, useSearchParams } from 'react-router';
+import { useSearchParams } from 'react-router';
 import { ButtonLink } from '../../components/ui/Button';
 import { Loaded } from '../../components/ui/Loaded';
 import { Select } from '../../components/ui/Select';
-import { useProject } from '../../features/projects/api/get-project';
 import { useSubmittals } from '../../features/submittals/api/get-submittals';
 import { SubmittalTable } from '../../features/submittals/components/SubmittalTable';
 import { submittalStatusOf } from '../route-params';
+import { ProjectPage, useRouteProject } from './project-page';
 
 /** The project's submittals, filtered by status (kept in the address so it can be shared). */
 export function ProjectSubmittalsPage() {
-  const { projectId = '' } = useParams();
   const filterId = useId();
   const [params, setParams] = useSearchParams();
   const status = submittalStatusOf(params);
-  const { data: project } = useProject(projectId);
+  const { projectId, project } = useRouteProject();
   const list = useSubmittals(projectId, status);
   if (!project) return null;
   const mayCreate = can(project.myRole, 'submittal.create') && project.archivedAt === null;
 
   return (
-    <div className="flex flex-col gap-6">
-      <title>{`Submittals · ${project.name} · Skinwright`}</title>
-      <div className="flex flex-wrap items-end justify-between gap-4 border-b border-ink pb-2">
-        <h2 className="text-2xl">Submittals</h2>
-        {mayCreate ? (
+    <ProjectPage
+      project={project}
+      title="Submittals"
+      action={
+        mayCreate ? (
           <ButtonLink variant="primary" to={`/projects/${project.id}/submittals/new`}>
             New submittal
           </ButtonLink>
-        ) : null}
-      </div>
+        ) : null
+      }
+    >
       <p className="max-w-prose text-sm text-ink-muted">
         Packages sent by the cladding subcontractor for the design team’s review: compliance sheets of stored
         check runs and uploaded product data, test reports and shop drawings, each under a specification
@@ -69,6 +69,6 @@ export function ProjectSubmittalsPage() {
       >
         {(data) => <SubmittalTable projectId={project.id} submittals={data} />}
       </Loaded>
-    </div>
+    </ProjectPage>
   );
 }

@@ -4,6 +4,7 @@ import { Link } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
+import { TitledSection } from '../../components/ui/TitledSection';
 import { useMe } from '../../features/me/api/get-me';
 import { useUpdatePreferences } from '../../features/me/api/update-preferences';
 import { errorMessage } from '../../lib/api';
@@ -59,10 +60,11 @@ export function SettingsPage() {
         ) : null}
       </fieldset>
 
-      <section aria-labelledby="account-heading" className="mt-10 flex flex-col gap-3">
-        <h2 id="account-heading" className="border-b border-ink pb-2 text-xl">
-          Account
-        </h2>
+      <TitledSection
+        title="Account"
+        heading="border-b border-ink pb-2 text-xl"
+        className="mt-10 flex flex-col gap-3"
+      >
         <dl className="grid grid-cols-[auto_1fr] gap-x-6 gap-y-2">
           <dt className="label-caps pt-1">Name</dt>
           <dd>{me.data.name}</dd>
@@ -96,7 +98,7 @@ export function SettingsPage() {
             )}
           </dd>
         </dl>
-      </section>
+      </TitledSection>
     </div>
   );
 }

@@ -11,16 +11,12 @@ import {
   pgTable,
   primaryKey,
   text,
-  timestamp,
   uniqueIndex,
   uuid,
 } from 'drizzle-orm/pg-core';
 import { user } from './auth';
+import { at, createdAt, stamps } from './columns';
 
-/** A moment, with its time zone. */
-const at = (name: string) => timestamp(name, { withTimezone: true });
-const createdAt = () => at('created_at').notNull().defaultNow();
-const updatedAt = () => at('updated_at').notNull().defaultNow();
 /** A row's own key: a random uuid. */
 const id = () => uuid('id').primaryKey().defaultRandom();
 /** A required link to the row of another table that this one is part of: deleted with it. */
@@ -40,7 +36,10 @@ const created = (onDelete?: 'set null') => ({
   createdAt: createdAt(),
 });
 /** Who made the row, when, and when it last changed. */
-const edited = (onDelete?: 'set null') => ({ ...created(onDelete), updatedAt: updatedAt() });
+const edited = (onDelete?: 'set null') => ({
+  createdBy: account('created_by', onDelete),
+  ...stamps(),
+});
 /** Optimistic concurrency: every update names the `version` it read; with who made the row and when. */
 const versioned = (onDelete?: 'set null') => ({
   version: integer('version').notNull().default(1),

@@ -1,7 +1,15 @@
 import { boolean, index, integer, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { stamps } from './columns';
 
 // better-auth core tables (user, session, account, verification), written by hand to match
 // better-auth 1.7's core schema, plus our additional user fields (`role`, `unitSystem`).
+
+/** The user a session or sign-in method belongs to: it goes with them. */
+const ofUser = () => ({
+  userId: text('user_id')
+    .notNull()
+    .references(() => user.id, { onDelete: 'cascade' }),
+});
 
 export const user = pgTable('user', {
   id: text('id').primaryKey(),
@@ -9,8 +17,7 @@ export const user = pgTable('user', {
   email: text('email').notNull().unique(),
   emailVerified: boolean('email_verified').notNull().default(false),
   image: text('image'),
-  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  ...stamps(),
   /** Site-wide role: `admin` may read the mail outbox and manage every organisation; everyone else `user`. */
   role: text('role').notNull().default('user'),
   /** Display unit preference, `SI` or `IP`. */
@@ -23,13 +30,10 @@ export const session = pgTable(
     id: text('id').primaryKey(),
     expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
     token: text('token').notNull().unique(),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    ...stamps(),
     ipAddress: text('ip_address'),
     userAgent: text('user_agent'),
-    userId: text('user_id')
-      .notNull()
-      .references(() => user.id, { onDelete: 'cascade' }),
+    ...ofUser(),
   },
   (t) => [index('session_user_idx').on(t.userId)],
 );
@@ -40,9 +44,7 @@ export const account = pgTable(
     id: text('id').primaryKey(),
     accountId: text('account_id').notNull(),
     providerId: text('provider_id').notNull(),
-    userId: text('user_id')
-      .notNull()
-      .references(() => user.id, { onDelete: 'cascade' }),
+    ...ofUser(),
     accessToken: text('access_token'),
     refreshToken: text('refresh_token'),
     idToken: text('id_token'),
@@ -50,8 +52,7 @@ export const account = pgTable(
     refreshTokenExpiresAt: timestamp('refresh_token_expires_at', { withTimezone: true }),
     scope: text('scope'),
     password: text('password'),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    ...stamps(),
   },
   (t) => [index('account_user_idx').on(t.userId)],
 );
@@ -63,8 +64,7 @@ export const verification = pgTable(
     identifier: text('identifier').notNull(),
     value: text('value').notNull(),
     expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
-    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    ...stamps(),
   },
   (t) => [index('verification_identifier_idx').on(t.identifier)],
 );

@@ -21,15 +21,23 @@ export interface QuantityDef {
   also?: Record<string, UnitDef>;
 }
 
-const u = (symbol: string, mathExpr: string, decimals: number, interval?: string): UnitDef => ({
+const u = <const S extends string>(symbol: S, mathExpr: string, decimals: number, interval?: string) => ({
   symbol,
   math: mathExpr,
   decimals,
   ...(interval ? { interval } : {}),
 });
 
+/** A quantity stored in its SI unit as shown: the stored symbol and mathjs unit are the shown SI unit's. */
+const storedAsShown = <const S extends string>(
+  name: string,
+  SI: UnitDef & { symbol: S },
+  IP: UnitDef,
+  also?: Record<string, UnitDef>,
+) => ({ name, si: SI.symbol, stored: SI.math, SI, IP, ...(also ? { also } : {}) });
+
 export const DEFS = {
-  length: { name: 'length', si: 'm', stored: 'm', SI: u('m', 'm', 3), IP: u('ft', 'ft', 2) },
+  length: storedAsShown('length', u('m', 'm', 3), u('ft', 'ft', 2)),
   /** Thicknesses, spacings, joint widths: stored in m, shown in mm / in. */
   shortLength: {
     name: 'short length',
@@ -39,73 +47,41 @@ export const DEFS = {
     IP: u('in', 'in', 3),
     also: { m: u('m', 'm', 3), ft: u('ft', 'ft', 2) },
   },
-  area: { name: 'area', si: 'm²', stored: 'm^2', SI: u('m²', 'm^2', 2), IP: u('ft²', 'ft^2', 1) },
+  area: storedAsShown('area', u('m²', 'm^2', 2), u('ft²', 'ft^2', 1)),
   volume: { name: 'volume', si: 'm³', stored: 'm^3', SI: u('L', 'L', 2), IP: u('US gal', 'gallon', 2) },
-  temperature: {
-    name: 'temperature',
-    si: '°C',
-    stored: 'degC',
-    SI: u('°C', 'degC', 1, 'K'),
-    IP: u('°F', 'degF', 1, 'degR'),
-  },
-  temperatureDifference: {
-    name: 'temperature difference',
-    si: 'K',
-    stored: 'K',
-    SI: u('K', 'K', 1),
-    IP: u('°F', 'degR', 1),
-  },
+  temperature: storedAsShown('temperature', u('°C', 'degC', 1, 'K'), u('°F', 'degF', 1, 'degR')),
+  temperatureDifference: storedAsShown('temperature difference', u('K', 'K', 1), u('°F', 'degR', 1)),
   /** Linear expansion α, per kelvin (tables print it in units of 10⁻⁶). */
-  expansion: {
-    name: 'coefficient of linear expansion α',
-    si: '1/K',
-    stored: 'K^-1',
-    SI: u('1/K', 'K^-1', 8),
-    IP: u('1/°F', 'degR^-1', 8),
-  },
-  resistance: {
-    name: 'thermal resistance R',
-    si: 'm²·K/W',
-    stored: 'm^2 K / W',
-    SI: u('m²·K/W', 'm^2 K / W', 2),
-    IP: u('h·ft²·°F/Btu', 'h ft^2 degR / BTU', 1),
-  },
-  transmittance: {
-    name: 'thermal transmittance U',
-    si: 'W/(m²·K)',
-    stored: 'W / (m^2 K)',
-    SI: u('W/(m²·K)', 'W / (m^2 K)', 3),
-    IP: u('Btu/(h·ft²·°F)', 'BTU / (h ft^2 degR)', 3),
-  },
-  conductivity: {
-    name: 'thermal conductivity λ',
-    si: 'W/(m·K)',
-    stored: 'W / (m K)',
-    SI: u('W/(m·K)', 'W / (m K)', 4),
-    IP: u('Btu·in/(h·ft²·°F)', 'BTU in / (h ft^2 degR)', 4),
-  },
-  psi: {
-    name: 'linear thermal transmittance ψ',
-    si: 'W/(m·K)',
-    stored: 'W / (m K)',
-    SI: u('W/(m·K)', 'W / (m K)', 4),
-    IP: u('Btu/(h·ft·°F)', 'BTU / (h ft degR)', 4),
-  },
-  chi: {
-    name: 'point thermal transmittance χ',
-    si: 'W/K',
-    stored: 'W / K',
-    SI: u('W/K', 'W / K', 4),
-    IP: u('Btu/(h·°F)', 'BTU / (h degR)', 4),
-  },
-  pressure: {
-    name: 'pressure',
-    si: 'Pa',
-    stored: 'Pa',
-    SI: u('Pa', 'Pa', 0),
-    IP: u('psf', 'lbf / ft^2', 1),
-    also: { kPa: u('kPa', 'kPa', 3), psi: u('psi', 'lbf / in^2', 2) },
-  },
+  expansion: storedAsShown('coefficient of linear expansion α', u('1/K', 'K^-1', 8), u('1/°F', 'degR^-1', 8)),
+  resistance: storedAsShown(
+    'thermal resistance R',
+    u('m²·K/W', 'm^2 K / W', 2),
+    u('h·ft²·°F/Btu', 'h ft^2 degR / BTU', 1),
+  ),
+  transmittance: storedAsShown(
+    'thermal transmittance U',
+    u('W/(m²·K)', 'W / (m^2 K)', 3),
+    u('Btu/(h·ft²·°F)', 'BTU / (h ft^2 degR)', 3),
+  ),
+  conductivity: storedAsShown(
+    'thermal conductivity λ',
+    u('W/(m·K)', 'W / (m K)', 4),
+    u('Btu·in/(h·ft²·°F)', 'BTU in / (h ft^2 degR)', 4),
+  ),
+  psi: storedAsShown(
+    'linear thermal transmittance ψ',
+    u('W/(m·K)', 'W / (m K)', 4),
+    u('Btu/(h·ft·°F)', 'BTU / (h ft degR)', 4),
+  ),
+  chi: storedAsShown(
+    'point thermal transmittance χ',
+    u('W/K', 'W / K', 4),
+    u('Btu/(h·°F)', 'BTU / (h degR)', 4),
+  ),
+  pressure: storedAsShown('pressure', u('Pa', 'Pa', 0), u('psf', 'lbf / ft^2', 1), {
+    kPa: u('kPa', 'kPa', 3),
+    psi: u('psi', 'lbf / in^2', 2),
+  }),
   vapourPermeance: {
     name: 'water vapour permeance',
     si: 'kg/(Pa·s·m²)',
@@ -114,38 +90,16 @@ export const DEFS = {
     IP: u('perm', 'perm23C', 2),
     also: { perm0C: u('perm (0 °C)', 'perm0C', 2) },
   },
-  force: { name: 'force', si: 'N', stored: 'N', SI: u('N', 'N', 0), IP: u('lbf', 'lbf', 1) },
-  forcePerLength: {
-    name: 'force per length',
-    si: 'N/m',
-    stored: 'N / m',
-    SI: u('N/m', 'N / m', 0),
-    IP: u('lbf/ft', 'lbf / ft', 1),
-  },
-  massPerArea: {
-    name: 'mass per area',
-    si: 'kg/m²',
-    stored: 'kg / m^2',
-    SI: u('kg/m²', 'kg / m^2', 3),
-    IP: u('lb/ft²', 'lbm / ft^2', 4),
-    also: { gPerM2: u('g/m²', 'g / m^2', 0), ozPerFt2: u('oz/ft²', 'oz / ft^2', 2) },
-  },
-  speed: { name: 'speed', si: 'm/s', stored: 'm / s', SI: u('m/s', 'm / s', 1), IP: u('mph', 'mi / h', 0) },
-  density: {
-    name: 'density',
-    si: 'kg/m³',
-    stored: 'kg / m^3',
-    SI: u('kg/m³', 'kg / m^3', 2),
-    IP: u('lb/ft³', 'lbm / ft^3', 2),
-  },
+  force: storedAsShown('force', u('N', 'N', 0), u('lbf', 'lbf', 1)),
+  forcePerLength: storedAsShown('force per length', u('N/m', 'N / m', 0), u('lbf/ft', 'lbf / ft', 1)),
+  massPerArea: storedAsShown('mass per area', u('kg/m²', 'kg / m^2', 3), u('lb/ft²', 'lbm / ft^2', 4), {
+    gPerM2: u('g/m²', 'g / m^2', 0),
+    ozPerFt2: u('oz/ft²', 'oz / ft^2', 2),
+  }),
+  speed: storedAsShown('speed', u('m/s', 'm / s', 1), u('mph', 'mi / h', 0)),
+  density: storedAsShown('density', u('kg/m³', 'kg / m^3', 2), u('lb/ft³', 'lbm / ft^3', 2)),
   /** Vent area of an air layer per length, stored in mm²/m as ISO 6946 §6.9.3 states it. */
-  ventArea: {
-    name: 'vent area per length',
-    si: 'mm²/m',
-    stored: 'mm^2 / m',
-    SI: u('mm²/m', 'mm^2 / m', 0),
-    IP: u('in²/ft', 'in^2 / ft', 3),
-  },
+  ventArea: storedAsShown('vent area per length', u('mm²/m', 'mm^2 / m', 0), u('in²/ft', 'in^2 / ft', 3)),
 } as const satisfies Record<string, QuantityDef>;
 
 export type Quantity = keyof typeof DEFS;

@@ -27,11 +27,14 @@ const IP_PER_SI: Record<CostMeasure, number> = {
   wall: FOOT * FOOT,
 };
 
+/** Girts and sealant are priced per length. */
+const PER_LENGTH = { SI: 'per m', IP: 'per ft' };
+
 const UNIT: Record<CostMeasure, Record<UnitSystem, string>> = {
   insulation: { SI: 'per m² of wall per 25 mm', IP: 'per ft² of wall per inch' },
   clip: { SI: 'per clip', IP: 'per clip' },
-  girt: { SI: 'per m', IP: 'per ft' },
-  sealant: { SI: 'per m', IP: 'per ft' },
+  girt: PER_LENGTH,
+  sealant: PER_LENGTH,
   sealantMetres: { SI: 'm per m² of wall', IP: 'ft per ft² of wall' },
   wall: { SI: 'per m² of wall', IP: 'per ft² of wall' },
 };

@@ -1,7 +1,4 @@
 import { apiErrorSchema } from '@shared/schemas/common';
-import { z } from 'zod';
-import type { Services } from '../services';
-import type { Access } from './route';
 
 /** A documented error response: every error body is `{ error: { code, message, fields? } }`. */
 export const errorResponse = (description: string) => ({ description, schema: apiErrorSchema });
@@ -43,21 +40,3 @@ export function refusals(
   if (who !== 'siteAdmin' && notFound) out[404] = errorResponse(`No such ${notFound}, ${NOT_SEEN[who]}`);
   return out;
 }
-
-type ProjectAccess = Extract<Access, { kind: 'project' }>;
-
-/**
- * The `projectId` resolver of a project route whose path names a record of the project by `param` (an
- * assembly, a run, a sweep, …): the project it belongs to, or null (→ 404) for a malformed or unknown id.
- */
-export const via = (
-  param: string,
-  projectOf: (services: Services, id: string) => Promise<string | null>,
-): Pick<ProjectAccess, 'projectId'> => ({
-  projectId: ({ params, services }) => {
-    const id = params[param];
-    return id !== undefined && z.uuid().safeParse(id).success
-      ? projectOf(services, id)
-      : Promise.resolve(null);
-  },
-});

@@ -33,7 +33,8 @@ import { demoSweep } from '@shared/sweep/examples';
 import { sweepRequestSchema, sweepResultSchema } from '@shared/sweep/schema';
 import { z } from 'zod';
 import { errorResponse } from '../http/responses';
-import { defineRoute, FileAnswer, type WorkLimit } from '../http/route';
+import { FileAnswer, type WorkLimit } from '../http/route';
+import { anyone, routeGroup } from '../http/route-group';
 
 const calcErrors = {
   400: errorResponse('The request does not match the schema; `fields` names each field and the reason'),
@@ -91,15 +92,13 @@ const overWork = (...limits: WorkLimit[]) => ({
   ),
 });
 
+const route = routeGroup('Calculations', calcErrors);
+
 /** The public, stateless calculation API (versioned). */
 export const calcRoutes = [
-  defineRoute({
-    method: 'post',
-    path: '/v1/calc/thermal',
+  route.post('/v1/calc/thermal', anyone, {
     summary:
       'Clear-field and effective R-value / U-factor of a wall with its clip, girt and fastener bridges',
-    tag: 'Calculations',
-    access: { kind: 'public' },
     stateless: true,
     query: traceQuery,
     body: thermalInputSchema,
@@ -109,17 +108,12 @@ export const calcRoutes = [
         description: 'Result; with `?trace=true` a trace of every figure',
         schema: thermalResultSchema.partial({ trace: true }),
       },
-      ...calcErrors,
     },
     handler: async ({ body, query }) => traced(query, calculateThermal(body)),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/v1/calc/moisture',
+  route.post('/v1/calc/moisture', anyone, {
     summary:
       'Interstitial condensation by month (ISO 13788 Glaser method) and the interior-surface (mould) check',
-    tag: 'Calculations',
-    access: { kind: 'public' },
     stateless: true,
     query: traceQuery,
     body: moistureInputSchema,
@@ -129,17 +123,12 @@ export const calcRoutes = [
         description: 'Month-by-month profile, accumulation and verdict; with `?trace=true` a trace',
         schema: moistureResultSchema.partial({ trace: true }),
       },
-      ...calcErrors,
     },
     handler: async ({ body, query }) => traced(query, calculateMoisture(body)),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/v1/calc/wind',
+  route.post('/v1/calc/wind', anyone, {
     summary:
       'Wall components-and-cladding pressures (ASCE 7-16 / 7-22) and the girt and clip spacing per zone',
-    tag: 'Calculations',
-    access: { kind: 'public' },
     stateless: true,
     query: traceQuery,
     body: windScheduleInputSchema.extend({
@@ -156,7 +145,6 @@ export const calcRoutes = [
           .partial({ trace: true })
           .extend({ design: designSpacingResultSchema.partial({ trace: true }).nullable() }),
       },
-      ...calcErrors,
     },
     handler: async ({ body, query }) => {
       const schedule = calculateWindSchedule(body);
@@ -167,12 +155,8 @@ export const calcRoutes = [
       });
     },
   }),
-  defineRoute({
-    method: 'post',
-    path: '/v1/calc/joints',
+  route.post('/v1/calc/joints', anyone, {
     summary: 'Sealant joint schedule: movement, required width and depth, backer, verdict',
-    tag: 'Calculations',
-    access: { kind: 'public' },
     stateless: true,
     query: traceQuery,
     body: jointScheduleInputSchema,
@@ -185,17 +169,12 @@ export const calcRoutes = [
           joints: z.array(jointResultSchema.partial({ trace: true })),
         }),
       },
-      ...calcErrors,
       ...overWork(CALC_WORK_LIMITS.joints),
     },
     handler: async ({ body, query }) => traced(query, calculateJointSchedule(body.joints)),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/v1/calc/takeoff',
+  route.post('/v1/calc/takeoff', anyone, {
     summary: 'Material takeoff from a simple elevation (joints, sealant packages, tape, trim, fasteners)',
-    tag: 'Calculations',
-    access: { kind: 'public' },
     stateless: true,
     query: traceQuery,
     body: takeoffInputSchema,
@@ -206,17 +185,12 @@ export const calcRoutes = [
         description: 'Quantities, each line with its formula; with `?trace=true` every step',
         schema: takeoffResultSchema.partial({ trace: true }),
       },
-      ...calcErrors,
       ...overWork(CALC_WORK_LIMITS.openings),
     },
     handler: async ({ body, query }) => traced(query, calculateTakeoff(body)),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/v1/calc/takeoff.csv',
+  route.post('/v1/calc/takeoff.csv', anyone, {
     summary: 'The same takeoff as a CSV download (`?units=IP`: ft, ft², US gal)',
-    tag: 'Calculations',
-    access: { kind: 'public' },
     stateless: true,
     query: z.object({ units: unitSystemSchema.default('SI') }),
     body: takeoffInputSchema,
@@ -224,7 +198,6 @@ export const calcRoutes = [
     example: demoElevation(),
     responses: {
       200: { description: 'The takeoff lines as CSV', contentType: 'text/csv' },
-      ...calcErrors,
       ...overWork(CALC_WORK_LIMITS.openings),
     },
     handler: async ({ body, query }) =>
@@ -234,13 +207,9 @@ export const calcRoutes = [
         'takeoff.csv',
       ),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/v1/calc/bridge',
+  route.post('/v1/calc/bridge', anyone, {
     summary:
       'Thermal bridge by 2-D/3-D steady conduction (ISO 10211): heat flow, ψ or χ, lowest inside surface temperature and f_Rsi',
-    tag: 'Calculations',
-    access: { kind: 'public' },
     stateless: true,
     body: bridgeModelSchema,
     example: demoGirtModel(),
@@ -250,20 +219,15 @@ export const calcRoutes = [
           'Heat flows per environment, ψ/χ against the reference U values, solver figures (iterations, residual, energy balance)',
         schema: bridgeResultSchema,
       },
-      ...calcErrors,
       413: errorResponse(
         'The grid would pass `BRIDGE_MAX_CELLS` cells; `fields.mesh` gives the cap and the count',
       ),
     },
     handler: async ({ body, services }) => services.bridge.solve(body),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/v1/calc/sweep',
+  route.post('/v1/calc/sweep', anyone, {
     summary:
       'Sweep: every combination of one to three parameters of an assembly checked by every check module against a code table’s rows; with costs, the passing variants ranked',
-    tag: 'Calculations',
-    access: { kind: 'public' },
     stateless: true,
     body: sweepRequestSchema,
     example: demoSweep(),
@@ -273,19 +237,14 @@ export const calcRoutes = [
           'Each variant’s values, verdict, governing check and the margin of every check; the ranking when costs are given',
         schema: sweepResultSchema,
       },
-      ...calcErrors,
       413: errorResponse(
         'More variants than `SWEEP_MAX_VARIANTS`; `fields.parameters` gives the cap and the count',
       ),
     },
     handler: async ({ body, services }) => services.sweep.run(body),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/reference/materials',
+  routeGroup('Calculations').get('/reference/materials', anyone, {
     summary: 'Generic material library (λ, ρ, μ) with the published table each value comes from',
-    tag: 'Calculations',
-    access: { kind: 'public' },
     responses: {
       200: { description: 'Materials', schema: z.object({ materials: z.array(materialSchema) }) },
     },

@@ -1,5 +1,5 @@
 import { CSV_COLUMNS } from '@shared/checks/criteria-csv';
-import { projectParams, versionConflictSchema } from '@shared/schemas/common';
+import { versionConflictSchema } from '@shared/schemas/common';
 import {
   criteriaDiffQuerySchema,
   criteriaDiffSchema,
@@ -17,12 +17,12 @@ import {
 } from '@shared/schemas/criteria';
 import { z } from 'zod';
 import { errorResponse, refusals } from '../http/responses';
-import { defineRoute } from '../http/route';
+import { codeTables, member, routeGroup } from '../http/route-group';
 
-const orgParams = z.object({ orgId: z.uuid() });
-const setParams = z.object({ setId: z.uuid() });
-const errors = refusals('criteria', 'firm or code table');
-const conflict = {
+const route = routeGroup('Code tables', refusals('criteria', 'firm or code table'));
+/** The answer of a save: the table as saved, or 409 with the table as it now stands. */
+const saved = {
+  200: { description: 'The table as saved', schema: criteriaSaveSchema },
   409: {
     description:
       'Someone saved first, or a newer version exists; `current` holds the table as it now stands. Nothing was written.',
@@ -46,67 +46,37 @@ const exampleMeta = {
 const exampleCsv = `${CSV_COLUMNS.join(',')}\r\n5A,steel_framed,max_u_factor,0.35,W/(m²·K),\r\n`;
 
 export const criteriaRoutes = [
-  defineRoute({
-    method: 'get',
-    path: '/organisations/:orgId/criteria-sets',
+  route.get('/organisations/:orgId/criteria-sets', codeTables('read'), {
     summary: 'The firm’s code tables (latest version of each)',
-    tag: 'Code tables',
-    access: { kind: 'criteria', need: 'read' },
-    params: orgParams,
-    responses: { 200: { description: 'Code tables', schema: criteriaSetListSchema }, ...errors },
+    responses: { 200: { description: 'Code tables', schema: criteriaSetListSchema } },
     handler: async ({ params, services }) => ({ criteriaSets: await services.criteria.list(params.orgId) }),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/organisations/:orgId/criteria-sets',
+  route.post('/organisations/:orgId/criteria-sets', codeTables('write'), {
     summary: 'Create a code table (version 1) with its rows; values in SI',
-    tag: 'Code tables',
-    access: { kind: 'criteria', need: 'write' },
-    params: orgParams,
     body: criteriaSetCreateSchema,
     example: { ...exampleMeta, rows: exampleRows },
-    responses: { 201: { description: 'The new table', schema: criteriaSetSchema }, ...errors },
+    responses: { 201: { description: 'The new table', schema: criteriaSetSchema } },
     handler: ({ params, user, body, criteria, services }) =>
       services.criteria.create(params.orgId, user.id, body, criteria.access),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/criteria-sets/:setId',
+  route.get('/criteria-sets/:setId', codeTables('read'), {
     summary: 'One version of a code table with its rows',
-    tag: 'Code tables',
-    access: { kind: 'criteria', need: 'read' },
-    params: setParams,
-    responses: { 200: { description: 'The table', schema: criteriaSetSchema }, ...errors },
+    responses: { 200: { description: 'The table', schema: criteriaSetSchema } },
     handler: ({ params, criteria, services }) => services.criteria.get(params.setId, criteria.access),
   }),
-  defineRoute({
-    method: 'put',
-    path: '/criteria-sets/:setId',
+  route.put('/criteria-sets/:setId', codeTables('write'), {
     summary:
       'Change the name, jurisdiction, edition, dates, notes or category names (a frozen version becomes a new version)',
-    tag: 'Code tables',
-    access: { kind: 'criteria', need: 'write' },
-    params: setParams,
     body: criteriaSetMetaUpdateSchema,
     example: { revision: 1, changes: exampleMeta },
-    responses: {
-      200: { description: 'The table as saved', schema: criteriaSaveSchema },
-      ...errors,
-      ...conflict,
-    },
+    responses: saved,
     handler: ({ params, user, body, criteria, services }) =>
       services.criteria.updateMeta(params.setId, user.id, body.revision, body.changes, criteria.access),
   }),
-  defineRoute({
-    method: 'delete',
-    path: '/criteria-sets/:setId',
+  route.delete('/criteria-sets/:setId', codeTables('admin'), {
     summary: 'Delete a version that no check run used and no newer version is based on (firm administrators)',
-    tag: 'Code tables',
-    access: { kind: 'criteria', need: 'admin' },
-    params: setParams,
     responses: {
       204: { description: 'Deleted' },
-      ...errors,
       409: errorResponse('Used by a stored check run, or a newer version exists'),
     },
     handler: async ({ params, user, services }) => {
@@ -114,38 +84,22 @@ export const criteriaRoutes = [
       return undefined;
     },
   }),
-  defineRoute({
-    method: 'put',
-    path: '/criteria-sets/:setId/rows',
+  route.put('/criteria-sets/:setId/rows', codeTables('write'), {
     summary:
       'Replace every row of the table (the grid saves all rows at once; a frozen version becomes a new version)',
-    tag: 'Code tables',
-    access: { kind: 'criteria', need: 'write' },
-    params: setParams,
     body: criteriaRowsUpdateSchema,
     example: { revision: 1, rows: exampleRows },
-    responses: {
-      200: { description: 'The table as saved', schema: criteriaSaveSchema },
-      ...errors,
-      ...conflict,
-    },
+    responses: saved,
     handler: ({ params, user, body, criteria, services }) =>
       services.criteria.replaceRows(params.setId, user.id, body.revision, body.rows, criteria.access),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/criteria-sets/:setId/import',
+  route.post('/criteria-sets/:setId/import', codeTables('write'), {
     summary: `Replace the rows from CSV (text/csv body, or JSON { csv }), all or nothing; columns ${CSV_COLUMNS.join(', ')}`,
-    tag: 'Code tables',
-    access: { kind: 'criteria', need: 'write' },
-    params: setParams,
     query: criteriaImportQuerySchema,
     body: criteriaImportBodySchema,
     example: { csv: exampleCsv },
     responses: {
-      200: { description: 'The table as saved', schema: criteriaSaveSchema },
-      ...errors,
-      ...conflict,
+      ...saved,
       422: {
         description: 'The CSV has problems (each with its line); nothing was written',
         schema: csvImportErrorSchema,
@@ -160,17 +114,11 @@ export const criteriaRoutes = [
         criteria.access,
       ),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/criteria-sets/:setId/export.csv',
+  route.get('/criteria-sets/:setId/export.csv', codeTables('read'), {
     summary: 'The rows as CSV (`?units=IP` for IP values; SI by default)',
-    tag: 'Code tables',
-    access: { kind: 'criteria', need: 'read' },
-    params: setParams,
     query: criteriaExportQuerySchema,
     responses: {
       200: { description: 'CSV (RFC 4180)', schema: z.string(), contentType: 'text/csv' },
-      ...errors,
     },
     handler: async ({ params, query, res, services }) => {
       const { csv, filename } = await services.criteria.exportCsv(params.setId, query.units);
@@ -178,35 +126,20 @@ export const criteriaRoutes = [
       return undefined;
     },
   }),
-  defineRoute({
-    method: 'get',
-    path: '/criteria-sets/:setId/versions',
+  route.get('/criteria-sets/:setId/versions', codeTables('read'), {
     summary: 'Every version of the table, newest first',
-    tag: 'Code tables',
-    access: { kind: 'criteria', need: 'read' },
-    params: setParams,
-    responses: { 200: { description: 'Versions', schema: criteriaVersionListSchema }, ...errors },
+    responses: { 200: { description: 'Versions', schema: criteriaVersionListSchema } },
     handler: async ({ params, services }) => ({ versions: await services.criteria.versions(params.setId) }),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/criteria-sets/:setId/diff',
+  route.get('/criteria-sets/:setId/diff', codeTables('read'), {
     summary: 'What changed between two versions of the table (`?from=1&to=2`): rows added, removed, changed',
-    tag: 'Code tables',
-    access: { kind: 'criteria', need: 'read' },
-    params: setParams,
     query: criteriaDiffQuerySchema,
-    responses: { 200: { description: 'The differences', schema: criteriaDiffSchema }, ...errors },
+    responses: { 200: { description: 'The differences', schema: criteriaDiffSchema } },
     handler: ({ params, query, services }) => services.criteria.diff(params.setId, query.from, query.to),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/projects/:projectId/criteria-sets',
+  route.get('/projects/:projectId/criteria-sets', member('project.read'), {
     summary: 'Code tables a project member may check against: the project firm’s and the caller’s own firms’',
-    tag: 'Code tables',
-    access: { kind: 'project', action: 'project.read' },
-    params: projectParams,
-    responses: { 200: { description: 'Code tables', schema: criteriaSetListSchema }, ...errors },
+    responses: { 200: { description: 'Code tables', schema: criteriaSetListSchema } },
     handler: async ({ project, user, services }) => ({
       criteriaSets: await services.criteria.forProject(project.id, user.id),
     }),

@@ -1,11 +1,9 @@
 import { versionConflictSchema } from '@shared/schemas/common';
-import { z } from 'zod';
+import type { z } from 'zod';
 import { refusals } from '../http/responses';
-import { type AnyRoute, defineRoute } from '../http/route';
+import type { AnyRoute } from '../http/route';
+import { firm, routeGroup } from '../http/route-group';
 import type { Services } from '../services';
-
-export const orgParams = z.object({ orgId: z.uuid() });
-export const itemParams = orgParams.extend({ itemId: z.uuid() });
 
 /** One resource of a firm library, its routes' words and the service calls behind them. */
 export interface FirmLibrarySpec<B, U> {
@@ -42,47 +40,30 @@ export interface FirmLibrarySpec<B, U> {
  * (`firm.read`), add and update (`firm.write`), remove (`firm.admin`), all tagged `Libraries`.
  */
 export function firmLibraryRoutes<B, U = never>(spec: FirmLibrarySpec<B, U>): AnyRoute[] {
-  const path = `/organisations/:orgId/${spec.segment}`;
-  const errors = refusals('firmLibrary', `firm or ${spec.entry}`);
-  const tag = 'Libraries';
+  const path = `/organisations/:orgId/${spec.segment}` as const;
+  const route = routeGroup('Libraries', refusals('firmLibrary', `firm or ${spec.entry}`));
   const { list, add, update, remove } = spec;
   return [
-    defineRoute({
-      method: 'get',
-      path,
+    route.get(path, firm('firm.read'), {
       summary: list.summary,
-      tag,
-      access: { kind: 'organisation', action: 'firm.read' },
-      params: orgParams,
-      responses: { 200: { description: list.description, schema: list.schema }, ...errors },
+      responses: { 200: { description: list.description, schema: list.schema } },
       handler: ({ params, services }) => list.read(services, params.orgId),
     }),
-    defineRoute({
-      method: 'post',
-      path,
+    route.post(path, firm('firm.write'), {
       summary: add.summary,
-      tag,
-      access: { kind: 'organisation', action: 'firm.write' },
-      params: orgParams,
       body: add.body,
       example: add.example,
-      responses: { 201: { description: add.description, schema: add.schema }, ...errors },
+      responses: { 201: { description: add.description, schema: add.schema } },
       handler: ({ params, body, user, services }) => add.write(services, params.orgId, body, user.id),
     }),
     ...(update
       ? [
-          defineRoute({
-            method: 'put',
-            path: `${path}/:itemId`,
+          route.put(`${path}/:itemId`, firm('firm.write'), {
             summary: update.summary,
-            tag,
-            access: { kind: 'organisation', action: 'firm.write' },
-            params: itemParams,
             body: update.body,
             example: update.example,
             responses: {
               200: { description: add.description, schema: add.schema },
-              ...errors,
               409: {
                 description: 'Changed by someone else since: `current` is the entry now',
                 schema: versionConflictSchema(add.schema),
@@ -93,14 +74,9 @@ export function firmLibraryRoutes<B, U = never>(spec: FirmLibrarySpec<B, U>): An
           }),
         ]
       : []),
-    defineRoute({
-      method: 'delete',
-      path: `${path}/:itemId`,
+    route.delete(`${path}/:itemId`, firm('firm.admin'), {
       summary: remove.summary,
-      tag,
-      access: { kind: 'organisation', action: 'firm.admin' },
-      params: itemParams,
-      responses: { 204: { description: 'Removed' }, ...errors },
+      responses: { 204: { description: 'Removed' } },
       handler: async ({ params, services }) => {
         await remove.write(services, params.orgId, params.itemId);
         return undefined;

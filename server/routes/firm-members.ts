@@ -6,71 +6,48 @@ import {
 } from '@shared/schemas/firm-members';
 import { z } from 'zod';
 import { errorResponse, refusals } from '../http/responses';
-import { defineRoute } from '../http/route';
+import { firm, routeGroup } from '../http/route-group';
 
-const orgParams = z.object({ orgId: z.uuid() });
-const errors = refusals('organisation', 'firm or member');
+const route = routeGroup('Firm members', refusals('organisation', 'firm or member'));
 
 /** The firm members page: who is in the firm with which firm role (admin, editor, reader). */
 export const firmMemberRoutes = [
-  defineRoute({
-    method: 'get',
-    path: '/organisations/:orgId/members',
+  route.get('/organisations/:orgId/members', firm('firm.read'), {
     summary: 'The people of the firm with their firm roles',
-    tag: 'Firm members',
-    access: { kind: 'organisation', action: 'firm.read' },
-    params: orgParams,
     responses: {
       200: { description: 'Members', schema: z.object({ members: z.array(firmMemberSchema) }) },
-      ...errors,
     },
     handler: async ({ params, services }) => ({ members: await services.firmMembers.list(params.orgId) }),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/organisations/:orgId/members',
+  route.post('/organisations/:orgId/members', firm('firm.admin'), {
     summary:
       'Add someone who has an account (by e-mail) to the firm with a firm role; they are told by e-mail',
-    tag: 'Firm members',
-    access: { kind: 'organisation', action: 'firm.admin' },
-    params: orgParams,
     body: firmMemberAddSchema,
     example: { email: 'colleague@example.com', role: 'reader' },
     responses: {
       201: { description: 'The new member', schema: firmMemberSchema },
-      ...errors,
       409: errorResponse('Already in the firm'),
       422: errorResponse('No account uses this address'),
     },
     handler: ({ params, body, user, services }) => services.firmMembers.add(params.orgId, user, body),
   }),
-  defineRoute({
-    method: 'put',
-    path: '/organisations/:orgId/members/:userId',
+  route.put('/organisations/:orgId/members/:userId', firm('firm.admin'), {
     summary: 'Change a member’s firm role',
-    tag: 'Firm members',
-    access: { kind: 'organisation', action: 'firm.admin' },
     params: firmMemberParams,
     body: firmMemberRoleUpdateSchema,
     example: { role: 'editor' },
     responses: {
       200: { description: 'The member', schema: firmMemberSchema },
-      ...errors,
       409: errorResponse('Would leave the firm without an administrator'),
     },
     handler: ({ params, body, user, services }) =>
       services.firmMembers.setRole(params.orgId, params.userId, body.role, user.id),
   }),
-  defineRoute({
-    method: 'delete',
-    path: '/organisations/:orgId/members/:userId',
+  route.delete('/organisations/:orgId/members/:userId', firm('firm.admin'), {
     summary: 'Take someone out of the firm',
-    tag: 'Firm members',
-    access: { kind: 'organisation', action: 'firm.admin' },
     params: firmMemberParams,
     responses: {
       204: { description: 'Removed' },
-      ...errors,
       409: errorResponse('The firm’s last administrator'),
     },
     handler: async ({ params, user, services }) => {

@@ -9,7 +9,7 @@ import { inspectionRoutes } from './inspections';
 import { libraryRoutes } from './library';
 import { meRoutes } from './me';
 import { memberRoutes } from './members';
-import { organisationAdminRoutes } from './organisations';
+import { adminRoutes } from './organisations';
 import { projectRoutes } from './projects';
 import { sheetRoutes } from './sheets';
 import { submittalRoutes } from './submittals';
@@ -19,7 +19,7 @@ import { sweepRoutes } from './sweeps';
 export const apiRoutes: AnyRoute[] = [
   ...healthRoutes,
   ...meRoutes,
-  ...organisationAdminRoutes,
+  ...adminRoutes,
   ...projectRoutes,
   ...memberRoutes,
   ...assemblyRoutes,

@@ -7,11 +7,11 @@ import {
 import { attachmentProductInputSchema, attachmentProductSchema } from '@shared/schemas/attachment-library';
 import { z } from 'zod';
 import { errorResponse, refusals } from '../http/responses';
-import { defineRoute } from '../http/route';
+import { firm, routeGroup } from '../http/route-group';
 import { receiveUpload, sendStoredFile } from '../http/upload';
-import { firmLibraryRoutes, itemParams } from './firm-library';
+import { firmLibraryRoutes } from './firm-library';
 
-const errors = refusals('firmLibrary', 'firm or item');
+const route = routeGroup('Libraries', refusals('firmLibrary', 'firm or item'));
 
 export const libraryRoutes = [
   ...firmLibraryRoutes({
@@ -108,17 +108,11 @@ export const libraryRoutes = [
       write: (services, orgId, itemId) => services.library.removeAttachmentProduct(orgId, itemId),
     },
   }),
-  defineRoute({
-    method: 'post',
-    path: '/organisations/:orgId/attachment-products/:itemId/data-sheet',
+  route.post('/organisations/:orgId/attachment-products/:itemId/data-sheet', firm('firm.write'), {
     summary:
       'Upload the maker’s data sheet of an entry (multipart/form-data, field "files", one PDF, PNG or JPEG by content); replaces the one before',
-    tag: 'Libraries',
-    access: { kind: 'organisation', action: 'firm.write' },
-    params: itemParams,
     responses: {
       201: { description: 'The entry with its data sheet', schema: attachmentProductSchema },
-      ...errors,
       413: errorResponse('The file is too large, or the firm’s library storage is full'),
       415: errorResponse('Not multipart, or not a PDF, PNG or JPEG by content'),
       503: errorResponse('Too many uploads at once: try again after `Retry-After` seconds'),
@@ -126,16 +120,10 @@ export const libraryRoutes = [
     handler: async ({ req, res, params, services }) =>
       services.library.uploadDataSheet(params.orgId, params.itemId, receiveUpload(req, res)),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/organisations/:orgId/attachment-products/:itemId/data-sheet',
+  route.get('/organisations/:orgId/attachment-products/:itemId/data-sheet', firm('firm.read'), {
     summary: 'Download the data sheet of an entry, byte for byte',
-    tag: 'Libraries',
-    access: { kind: 'organisation', action: 'firm.read' },
-    params: itemParams,
     responses: {
       200: { description: 'The file', contentType: 'application/octet-stream', schema: z.string() },
-      ...errors,
     },
     handler: async ({ params, res, services }) =>
       sendStoredFile(res, await services.library.dataSheet(params.orgId, params.itemId)),

@@ -1,5 +1,4 @@
 import { can } from '@shared/auth/permissions';
-import { projectParams } from '@shared/schemas/common';
 import {
   invitationInputSchema,
   invitationPreviewSchema,
@@ -10,29 +9,27 @@ import {
 } from '@shared/schemas/members';
 import { z } from 'zod';
 import { errorResponse, refusals } from '../http/responses';
-import { defineRoute } from '../http/route';
+import { anyone, member, routeGroup, signedIn } from '../http/route-group';
 
 const errors = refusals('project', 'project, member or invitation', {
   invalid: false,
   forbidden:
     'Your role does not allow this, or does not allow granting that role (`role_not_grantable`: see `mayGrant` in shared/auth)',
 });
-const memberParams = projectParams.extend({ memberId: z.uuid() });
+const route = routeGroup('Members', errors);
+/** Invitations as seen by the invited: their own refusals. */
+const invited = routeGroup('Members');
+// Taking someone's access away (or narrowing it) stays possible on an archived project.
+const managing = member('members.manage', { whenArchived: 'allow' });
 
 export const memberRoutes = [
-  defineRoute({
-    method: 'get',
-    path: '/projects/:projectId/members',
+  route.get('/projects/:projectId/members', member('members.read'), {
     summary: 'Members and pending invitations',
-    tag: 'Members',
-    access: { kind: 'project', action: 'members.read' },
-    params: projectParams,
     responses: {
       200: {
         description: 'Members',
         schema: z.object({ members: z.array(memberSchema), invitations: z.array(invitationSchema) }),
       },
-      ...errors,
     },
     handler: async ({ project, services }) => {
       const { members, invitations } = await services.members.list(project.id);
@@ -40,13 +37,8 @@ export const memberRoutes = [
       return { members, invitations: can(project.role, 'members.invite') ? invitations : [] };
     },
   }),
-  defineRoute({
-    method: 'post',
-    path: '/projects/:projectId/invitations',
+  route.post('/projects/:projectId/invitations', member('members.invite'), {
     summary: 'Invite someone by e-mail with a role on this project',
-    tag: 'Members',
-    access: { kind: 'project', action: 'members.invite' },
-    params: projectParams,
     body: invitationInputSchema,
     example: { email: 'engineer@example.com', role: 'engineer' },
     responses: {
@@ -54,24 +46,16 @@ export const memberRoutes = [
         description: 'The invitation (an e-mail with the accept link was sent)',
         schema: invitationSchema,
       },
-      ...errors,
       409: errorResponse('Already a member, or the project is archived'),
     },
     handler: ({ user, project, body, services }) =>
       services.members.invite(project.id, { ...user, role: project.role }, body),
   }),
-  defineRoute({
-    method: 'put',
-    path: '/projects/:projectId/members/:memberId',
+  route.put('/projects/:projectId/members/:memberId', managing, {
     summary: 'Change a member’s role',
-    tag: 'Members',
-    // Taking someone's access away (or narrowing it) stays possible on an archived project.
-    access: { kind: 'project', action: 'members.manage', whenArchived: 'allow' },
-    params: memberParams,
     body: memberRoleUpdateSchema,
     responses: {
       200: { description: 'The member', schema: memberSchema },
-      ...errors,
       409: errorResponse('Would leave the project without an owner'),
     },
     handler: ({ user, project, params, body, services }) =>
@@ -80,17 +64,10 @@ export const memberRoutes = [
         role: project.role,
       }),
   }),
-  defineRoute({
-    method: 'delete',
-    path: '/projects/:projectId/members/:memberId',
+  route.delete('/projects/:projectId/members/:memberId', managing, {
     summary: 'Remove a member from the project',
-    tag: 'Members',
-    // Taking someone's access away (or narrowing it) stays possible on an archived project.
-    access: { kind: 'project', action: 'members.manage', whenArchived: 'allow' },
-    params: memberParams,
     responses: {
       204: { description: 'Removed' },
-      ...errors,
       409: errorResponse('Last owner'),
     },
     handler: async ({ user, project, params, services }) => {
@@ -98,12 +75,8 @@ export const memberRoutes = [
       return undefined;
     },
   }),
-  defineRoute({
-    method: 'get',
-    path: '/invitations/:token',
+  invited.get('/invitations/:token', anyone, {
     summary: 'What an invitation offers (no sign-in needed)',
-    tag: 'Members',
-    access: { kind: 'public' },
     params: invitationTokenParam,
     responses: {
       200: { description: 'Invitation preview', schema: invitationPreviewSchema },
@@ -111,12 +84,8 @@ export const memberRoutes = [
     },
     handler: ({ params, services }) => services.members.preview(params.token),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/invitations/:token/accept',
+  invited.post('/invitations/:token/accept', signedIn, {
     summary: 'Accept an invitation (signed in with the invited address)',
-    tag: 'Members',
-    access: { kind: 'user' },
     params: invitationTokenParam,
     responses: {
       200: { description: 'Joined', schema: z.object({ projectId: z.uuid() }) },

@@ -1,5 +1,5 @@
 import type { ProjectAction } from '@shared/auth/permissions';
-import { projectParams, versionConflictSchema } from '@shared/schemas/common';
+import { versionConflictSchema } from '@shared/schemas/common';
 import { auditEntrySchema } from '@shared/schemas/me';
 import {
   projectClimateUpdateSchema,
@@ -12,10 +12,14 @@ import {
 } from '@shared/schemas/project';
 import { z } from 'zod';
 import { errorResponse, refusals } from '../http/responses';
-import { defineRoute } from '../http/route';
+import { member, routeGroup, signedIn } from '../http/route-group';
 import type { ProjectPartChange } from '../services/projects';
 
-const errors = refusals('project', 'project', { invalid: false });
+const route = routeGroup('Projects', refusals('project', 'project', { invalid: false }));
+/** A project route with a body: invalid fields are refused too. */
+const edit = routeGroup('Projects', refusals('project', 'project'));
+/** The caller's own projects: no project to refuse yet. */
+const own = routeGroup('Projects', refusals('user', undefined, { invalid: false }));
 
 const example = {
   name: 'Example distribution centre',
@@ -42,19 +46,12 @@ function partRoute<B extends { version: number }>(def: {
   example: unknown;
   change: (body: B) => ProjectPartChange;
 }) {
-  return defineRoute({
-    method: 'put',
-    path: `/projects/:projectId/${def.part}`,
+  return edit.put(`/projects/:projectId/${def.part}`, member(def.action), {
     summary: def.summary,
-    tag: 'Projects',
-    access: { kind: 'project', action: def.action },
-    params: projectParams,
     body: def.body,
     example: def.example,
     responses: {
       200: { description: 'The updated project', schema: projectSchema },
-      400: errorResponse('Invalid fields'),
-      ...errors,
       409: {
         description: 'Someone saved the same part first, or archived',
         schema: versionConflictSchema(projectSchema),
@@ -66,62 +63,40 @@ function partRoute<B extends { version: number }>(def: {
 }
 
 export const projectRoutes = [
-  defineRoute({
-    method: 'get',
-    path: '/projects',
+  own.get('/projects', signedIn, {
     summary: 'Projects the caller is a member of',
-    tag: 'Projects',
-    access: { kind: 'user' },
     query: projectListQuerySchema,
     responses: {
       200: { description: 'Projects', schema: z.object({ projects: z.array(projectSchema) }) },
-      401: errors[401],
     },
     handler: async ({ user, query, services }) => ({
       projects: await services.projects.list(user.id, query.archived === 'true'),
     }),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/projects',
+  own.post('/projects', signedIn, {
     summary: 'Create a project (the caller becomes its owner)',
-    tag: 'Projects',
-    access: { kind: 'user' },
     body: projectInputSchema,
     example,
     responses: {
       201: { description: 'The new project', schema: projectSchema },
       400: errorResponse('Invalid fields'),
-      401: errors[401],
       422: errorResponse('The caller has no firm'),
     },
     handler: ({ user, body, services }) => services.projects.create(user.id, body),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/projects/:projectId',
+  route.get('/projects/:projectId', member('project.read'), {
     summary: 'One project with its site data and the caller’s role',
-    tag: 'Projects',
-    access: { kind: 'project', action: 'project.read' },
-    params: projectParams,
-    responses: { 200: { description: 'The project', schema: projectSchema }, ...errors },
+    responses: { 200: { description: 'The project', schema: projectSchema } },
     // The access check has read the project with the caller's role.
     handler: async ({ project }) => project.record,
   }),
-  defineRoute({
-    method: 'put',
-    path: '/projects/:projectId',
+  edit.put('/projects/:projectId', member('project.update'), {
     summary:
       'Update the project’s site data (name the version you read; 409 if someone saved the site data after it)',
-    tag: 'Projects',
-    access: { kind: 'project', action: 'project.update' },
-    params: projectParams,
     body: projectUpdateSchema,
     example: { version: 1, changes: example },
     responses: {
       200: { description: 'The updated project', schema: projectSchema },
-      400: errorResponse('Invalid fields'),
-      ...errors,
       409: {
         description:
           'Someone saved the site data after the version you read (or the project is archived); `current` holds their version',
@@ -167,57 +142,34 @@ export const projectRoutes = [
     },
     change: (body) => ({ part: 'climate', changes: { climate: body.climate } }),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/projects/:projectId/duplicate',
+  edit.post('/projects/:projectId/duplicate', member('project.update'), {
     summary:
       'Copy the project — site data, wind, climate and every assembly’s current revision as revision 1 — with you as its only member (owner)',
-    tag: 'Projects',
-    access: { kind: 'project', action: 'project.update' },
-    params: projectParams,
     body: projectDuplicateSchema,
     example: { name: 'Example distribution centre, phase 2', number: 'EX-02' },
     responses: {
       201: { description: 'The copy', schema: projectSchema },
-      400: errorResponse('Invalid fields'),
-      ...errors,
       409: errorResponse('The project is archived'),
     },
     handler: ({ user, project, body, services }) => services.projects.duplicate(project.id, user.id, body),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/projects/:projectId/archive',
+  route.post('/projects/:projectId/archive', member('project.archive', { whenArchived: 'allow' }), {
     summary: 'Archive a project',
-    tag: 'Projects',
-    access: { kind: 'project', action: 'project.archive', whenArchived: 'allow' },
-    params: projectParams,
-    responses: { 200: { description: 'The archived project', schema: projectSchema }, ...errors },
+    responses: { 200: { description: 'The archived project', schema: projectSchema } },
     handler: ({ user, project, services }) => services.projects.setArchived(project.id, user.id, true),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/projects/:projectId/unarchive',
+  route.post('/projects/:projectId/unarchive', member('project.archive', { whenArchived: 'allow' }), {
     summary: 'Bring an archived project back',
-    tag: 'Projects',
-    access: { kind: 'project', action: 'project.archive', whenArchived: 'allow' },
-    params: projectParams,
-    responses: { 200: { description: 'The project', schema: projectSchema }, ...errors },
+    responses: { 200: { description: 'The project', schema: projectSchema } },
     handler: ({ user, project, services }) => services.projects.setArchived(project.id, user.id, false),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/projects/:projectId/audit',
+  route.get('/projects/:projectId/audit', member('audit.read'), {
     summary: 'Who changed what on this project',
-    tag: 'Projects',
-    access: { kind: 'project', action: 'audit.read' },
-    params: projectParams,
     responses: {
       200: {
         description: 'Audit entries, newest first',
         schema: z.object({ entries: z.array(auditEntrySchema) }),
       },
-      ...errors,
     },
     handler: async ({ project, services }) => ({ entries: await services.audit.forProject(project.id) }),
   }),

@@ -1,19 +1,15 @@
 import { sheetQuerySchema, verificationSchema, verifyParamsSchema } from '@shared/schemas/sheets';
 import { z } from 'zod';
-import { errorResponse, refusals, via } from '../http/responses';
-import { defineRoute, sendPdf } from '../http/route';
+import { errorResponse, refusals } from '../http/responses';
+import { sendPdf } from '../http/route';
+import { anyone, member, routeGroup } from '../http/route-group';
 
-const viaRun = via('runId', (s, id) => s.checkRuns.projectOf(id));
+const route = routeGroup('Compliance sheets');
 
 export const sheetRoutes = [
-  defineRoute({
-    method: 'get',
-    path: '/check-runs/:runId/sheet.pdf',
+  route.get('/check-runs/:runId/sheet.pdf', member('assembly.read'), {
     summary:
       'The compliance sheet of a stored check run (PDF: title block, inputs, section to scale, results, charts, checks, cautions, verification code); `?sweep=` adds a saved sweep of the same assembly as an appendix',
-    tag: 'Compliance sheets',
-    access: { kind: 'project', action: 'assembly.read', ...viaRun },
-    params: z.object({ runId: z.uuid() }),
     query: sheetQuerySchema,
     responses: {
       200: {
@@ -33,13 +29,9 @@ export const sheetRoutes = [
       );
     },
   }),
-  defineRoute({
-    method: 'get',
-    path: '/verify/:code',
+  route.get('/verify/:code', anyone, {
     summary:
       'Confirm a compliance sheet or a field report by its verification code (no sign-in): issuer, project, assembly, date, verdict or inspection state',
-    tag: 'Compliance sheets',
-    access: { kind: 'public' },
     params: verifyParamsSchema,
     responses: {
       200: {

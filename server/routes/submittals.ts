@@ -1,4 +1,4 @@
-import { projectParams, versionConflictSchema } from '@shared/schemas/common';
+import { versionConflictSchema } from '@shared/schemas/common';
 import {
   attachSheetSchema,
   commentCreateSchema,
@@ -13,8 +13,8 @@ import {
   uploadResultSchema,
 } from '@shared/schemas/submittals';
 import { z } from 'zod';
-import { errorResponse, refusals, via } from '../http/responses';
-import { defineRoute } from '../http/route';
+import { errorResponse, refusals } from '../http/responses';
+import { member, routeGroup } from '../http/route-group';
 import { receiveUpload, sendStoredFile } from '../http/upload';
 
 const errors = refusals('project', 'project, submittal or item', {
@@ -28,9 +28,7 @@ const stateErrors = {
   },
 };
 
-const viaSubmittal = via('submittalId', (s, id) => s.submittals.projectOf(id));
-const submittalParams = z.object({ submittalId: z.uuid() });
-const itemParams = submittalParams.extend({ submittalItemId: z.uuid() });
+const route = routeGroup('Submittals', errors);
 const actor = (u: { id: string; name: string }) => ({ id: u.id, name: u.name });
 
 const exampleFields = {
@@ -43,91 +41,57 @@ const exampleFields = {
 };
 
 export const submittalRoutes = [
-  defineRoute({
-    method: 'get',
-    path: '/projects/:projectId/submittals',
+  route.get('/projects/:projectId/submittals', member('submittal.read'), {
     summary: 'Submittals of a project, latest revision of each (`?status=` to filter)',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.read' },
-    params: projectParams,
     query: submittalListQuerySchema,
-    responses: { 200: { description: 'Submittals', schema: submittalListSchema }, ...errors },
+    responses: { 200: { description: 'Submittals', schema: submittalListSchema } },
     handler: async ({ project, query, services }) => ({
       submittals: await services.submittals.list(project.id, query.status),
     }),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/projects/:projectId/submittals',
+  route.post('/projects/:projectId/submittals', member('submittal.create'), {
     summary: 'Start a submittal (revision 1, draft); the number defaults to "<section>-<next>"',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.create' },
-    params: projectParams,
     body: submittalCreateSchema,
     example: exampleFields,
     responses: {
       201: { description: 'The new draft', schema: submittalSchema },
-      ...errors,
       409: errorResponse('Archived project or number already used'),
       422: errorResponse('A reviewer is not a project member who reviews submittals'),
     },
     handler: ({ project, user, body, services }) => services.submittals.create(project.id, actor(user), body),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/submittals/:submittalId',
+  route.get('/submittals/:submittalId', member('submittal.read'), {
     summary: 'One submittal revision: items, reviewers, comments, decision and the revision chain',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.read', ...viaSubmittal },
-    params: submittalParams,
-    responses: { 200: { description: 'The submittal', schema: submittalSchema }, ...errors },
+    responses: { 200: { description: 'The submittal', schema: submittalSchema } },
     handler: ({ params, services }) => services.submittals.get(params.submittalId),
   }),
-  defineRoute({
-    method: 'put',
-    path: '/submittals/:submittalId',
+  route.put('/submittals/:submittalId', member('submittal.create'), {
     summary: 'Edit a draft (title, section, due date, reviewers) naming the version it was based on',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.create', ...viaSubmittal },
-    params: submittalParams,
     body: submittalUpdateSchema,
     example: { version: 1, changes: exampleFields },
     responses: {
       200: { description: 'The edited draft', schema: submittalSchema },
-      ...errors,
       ...stateErrors,
       422: errorResponse('A reviewer is not a project member who reviews submittals'),
     },
     handler: ({ params, user, body, services }) =>
       services.submittals.update(params.submittalId, actor(user), body.version, body.changes),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/submittals/:submittalId/sheets',
+  route.post('/submittals/:submittalId/sheets', member('submittal.create'), {
     summary: 'Attach the compliance sheet of a stored check run of the same project',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.create', ...viaSubmittal },
-    params: submittalParams,
     body: attachSheetSchema,
     example: { checkRunId: '00000000-0000-4000-8000-000000000000' },
     responses: {
       201: { description: 'The submittal with the sheet', schema: submittalSchema },
-      ...errors,
       ...stateErrors,
     },
     handler: ({ params, user, body, services }) =>
       services.submittals.attachSheet(params.submittalId, actor(user), body.checkRunId),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/submittals/:submittalId/files',
+  route.post('/submittals/:submittalId/files', member('submittal.create'), {
     summary: `Upload files (multipart/form-data, field "files"): PDF, PNG, JPEG or DWG by content, at most ${UPLOAD_LIMITS.maxFiles} files of ${UPLOAD_LIMITS.maxFileBytes / 1024 / 1024} MB each; all or nothing`,
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.create', ...viaSubmittal },
-    params: submittalParams,
     responses: {
       201: { description: 'The stored files and the submittal', schema: uploadResultSchema },
-      ...errors,
       ...stateErrors,
       413: errorResponse('A file too large, too many files, or the project’s storage quota reached'),
       415: errorResponse('Not multipart, or a file whose content is not an accepted type'),
@@ -136,74 +100,46 @@ export const submittalRoutes = [
     handler: ({ req, res, params, user, services }) =>
       services.submittals.upload(params.submittalId, actor(user), receiveUpload(req, res)),
   }),
-  defineRoute({
-    method: 'delete',
-    path: '/submittals/:submittalId/items/:submittalItemId',
+  route.delete('/submittals/:submittalId/items/:submittalItemId', member('submittal.create'), {
     summary: 'Remove an item from a draft',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.create', ...viaSubmittal },
-    params: itemParams,
     responses: {
       200: { description: 'The submittal without the item', schema: submittalSchema },
-      ...errors,
       ...stateErrors,
     },
     handler: ({ params, user, services }) =>
       services.submittals.removeItem(params.submittalId, actor(user), params.submittalItemId),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/submittals/:submittalId/items/:submittalItemId/file',
+  route.get('/submittals/:submittalId/items/:submittalItemId/file', member('submittal.read'), {
     summary: 'Download an uploaded file, byte for byte, with its detected type',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.read', ...viaSubmittal },
-    params: itemParams,
     responses: {
       200: { description: 'The file', contentType: 'application/octet-stream', schema: z.string() },
-      ...errors,
     },
     handler: async ({ params, res, services }) =>
       sendStoredFile(res, await services.submittals.file(params.submittalId, params.submittalItemId)),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/submittals/:submittalId/submit',
+  route.post('/submittals/:submittalId/submit', member('submittal.submit'), {
     summary: 'Submit a draft to its reviewers (e-mails them)',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.submit', ...viaSubmittal },
-    params: submittalParams,
     body: submittalStepSchema,
     example: {},
     responses: {
       200: { description: 'The submitted revision', schema: submittalSchema },
-      ...errors,
       ...stateErrors,
       422: errorResponse('No item or no reviewer yet'),
     },
     handler: ({ params, user, body, services }) =>
       services.submittals.submit(params.submittalId, actor(user), body.version),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/submittals/:submittalId/review',
+  route.post('/submittals/:submittalId/review', member('submittal.review'), {
     summary: 'Take a submitted revision under review (a named reviewer)',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.review', ...viaSubmittal },
-    params: submittalParams,
     body: submittalStepSchema,
     example: {},
     responses: { 200: { description: 'Under review', schema: submittalSchema }, ...errors, ...stateErrors },
     handler: ({ params, user, body, services }) =>
       services.submittals.startReview(params.submittalId, actor(user), body.version),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/submittals/:submittalId/decision',
+  route.post('/submittals/:submittalId/decision', member('submittal.review'), {
     summary:
       'Record a named reviewer’s decision: approved, approved as noted, revise and resubmit or rejected. Every named reviewer decides; the last one closes the revision with the most severe decision (revise and resubmit opens the next revision) and the submitter is e-mailed',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.review', ...viaSubmittal },
-    params: submittalParams,
     body: submittalDecisionInputSchema,
     example: {
       decision: 'approved_as_noted',
@@ -214,7 +150,6 @@ export const submittalRoutes = [
         description: 'The revision with the decision (closed once every reviewer has decided)',
         schema: submittalSchema,
       },
-      ...errors,
       ...stateErrors,
       422: errorResponse(
         'Approving a package whose attached compliance sheet fails without `failingSheetConfirmation`',
@@ -223,18 +158,12 @@ export const submittalRoutes = [
     handler: ({ params, user, body, services }) =>
       services.submittals.decide(params.submittalId, actor(user), body),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/submittals/:submittalId/comments',
+  route.post('/submittals/:submittalId/comments', member('submittal.comment'), {
     summary: 'Comment on the submittal or on one of its items (while it is undecided)',
-    tag: 'Submittals',
-    access: { kind: 'project', action: 'submittal.comment', ...viaSubmittal },
-    params: submittalParams,
     body: commentCreateSchema,
     example: { body: 'Please add the clip test report.', itemId: null },
     responses: {
       201: { description: 'The submittal with the comment', schema: submittalSchema },
-      ...errors,
       ...stateErrors,
     },
     handler: ({ params, user, body, services }) =>

@@ -9,9 +9,8 @@ import {
   sweepCostUpdateSchema,
   sweepSaveSchema,
 } from '@shared/schemas/sweeps';
-import { z } from 'zod';
-import { errorResponse, refusals, via } from '../http/responses';
-import { defineRoute } from '../http/route';
+import { errorResponse, refusals } from '../http/responses';
+import { member, routeGroup } from '../http/route-group';
 import { firmLibraryRoutes } from './firm-library';
 
 /*
@@ -19,11 +18,7 @@ import { firmLibraryRoutes } from './firm-library';
  * removed by its administrators) and an assembly's saved sweeps (read and written as the assembly is).
  */
 
-const assemblyParams = z.object({ assemblyId: z.uuid() });
-const sweepParams = z.object({ sweepId: z.uuid() });
-const errors = refusals('project', 'project, assembly, sweep or code table');
-const viaAssembly = via('assemblyId', (s, id) => s.assemblies.projectOf(id));
-const viaSweep = via('sweepId', (s, id) => s.sweeps.projectOf(id));
+const route = routeGroup('Sweeps', refusals('project', 'project, assembly, sweep or code table'));
 const costExample = {
   kind: 'insulation',
   name: 'Mineral wool board 45 kg/m³ (example)',
@@ -64,24 +59,14 @@ export const sweepRoutes = [
     },
   }),
 
-  defineRoute({
-    method: 'get',
-    path: '/assemblies/:assemblyId/sweeps',
+  route.get('/assemblies/:assemblyId/sweeps', member('assembly.read'), {
     summary: 'Saved sweeps of an assembly, newest first; `stale` when the assembly has changed since',
-    tag: 'Sweeps',
-    access: { kind: 'project', action: 'assembly.read', ...viaAssembly },
-    params: assemblyParams,
-    responses: { 200: { description: 'Saved sweeps', schema: savedSweepListSchema }, ...errors },
+    responses: { 200: { description: 'Saved sweeps', schema: savedSweepListSchema } },
     handler: async ({ params, services }) => ({ sweeps: await services.sweeps.list(params.assemblyId) }),
   }),
-  defineRoute({
-    method: 'post',
-    path: '/assemblies/:assemblyId/sweeps',
+  route.post('/assemblies/:assemblyId/sweeps', member('assembly.write'), {
     summary:
       'Run a sweep of the assembly’s current revision against a code table version (frozen by it) on the server and save it with its costs and a summary of its results; more variants than `SWEEP_MAX_VARIANTS` are searched within that many',
-    tag: 'Sweeps',
-    access: { kind: 'project', action: 'assembly.write', ...viaAssembly },
-    params: assemblyParams,
     body: sweepSaveSchema,
     example: {
       name: 'Insulation × clip spacing',
@@ -93,7 +78,6 @@ export const sweepRoutes = [
     },
     responses: {
       201: { description: 'The saved sweep', schema: savedSweepSchema },
-      ...errors,
       409: errorResponse('The project is archived'),
       422: errorResponse(
         'A parameter the assembly does not have, a bad range or list, a deleted or foreign cost entry, library material or χ value (`parameters.<i>.products.<j>.libraryEntryId`, `parameters.<i>.entries.<j>.source.libraryEntryId`), or a varied thing without a cost — the field named, before anything runs',
@@ -101,39 +85,23 @@ export const sweepRoutes = [
     },
     handler: ({ params, body, user, services }) => services.sweeps.create(params.assemblyId, user.id, body),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/assemblies/:assemblyId/sweeps/compare',
+  route.get('/assemblies/:assemblyId/sweeps/compare', member('assembly.read'), {
     summary: 'Two saved sweeps of the assembly side by side (`?from=&to=`), with what changed between them',
-    tag: 'Sweeps',
-    access: { kind: 'project', action: 'assembly.read', ...viaAssembly },
-    params: assemblyParams,
     query: sweepCompareQuerySchema,
-    responses: { 200: { description: 'The comparison', schema: sweepComparisonSchema }, ...errors },
+    responses: { 200: { description: 'The comparison', schema: sweepComparisonSchema } },
     handler: ({ params, query, services }) =>
       services.sweeps.compare(params.assemblyId, query.from, query.to),
   }),
-  defineRoute({
-    method: 'get',
-    path: '/sweeps/:sweepId',
+  route.get('/sweeps/:sweepId', member('assembly.read'), {
     summary:
       'One saved sweep: parameters, costs, the revision and code table version it ran against, its summary, and `stale`',
-    tag: 'Sweeps',
-    access: { kind: 'project', action: 'assembly.read', ...viaSweep },
-    params: sweepParams,
-    responses: { 200: { description: 'The saved sweep', schema: savedSweepSchema }, ...errors },
+    responses: { 200: { description: 'The saved sweep', schema: savedSweepSchema } },
     handler: ({ params, services }) => services.sweeps.get(params.sweepId),
   }),
-  defineRoute({
-    method: 'delete',
-    path: '/sweeps/:sweepId',
+  route.delete('/sweeps/:sweepId', member('assembly.write'), {
     summary: 'Delete a saved sweep',
-    tag: 'Sweeps',
-    access: { kind: 'project', action: 'assembly.write', ...viaSweep },
-    params: sweepParams,
     responses: {
       204: { description: 'Deleted' },
-      ...errors,
       409: errorResponse('The project is archived'),
     },
     handler: async ({ params, user, services }) => {

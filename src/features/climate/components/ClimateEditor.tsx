@@ -3,6 +3,7 @@ import { Notice } from '../../../components/ui/Notice';
 import { formatDateTime } from '../../../lib/format';
 import { useConflictEdit } from '../../../lib/use-conflict-edit';
 import { CarriedNotice, ConflictChoice, useConflictChoice } from '../../projects/components/ConflictChoice';
+import { editFormProps } from '../../projects/edit-form';
 import { conflictingProject, useUpdateClimate } from '../api/update-climate';
 import { type ClimateFormValues, climateToForm, mergeClimate } from '../climate-form';
 import { ClimateForm } from './ClimateForm';
@@ -75,12 +76,8 @@ export function ClimateEditor({
     <ClimateForm
       key={formKey}
       project={base}
-      defaultValues={values}
-      onSubmit={save}
-      onCancel={onDone}
-      banner={banner}
-      submitDisabled={conflict !== null}
       indoorHref={indoorHref}
+      {...editFormProps(values, save, onDone, banner, conflict !== null)}
     />
   );
 }

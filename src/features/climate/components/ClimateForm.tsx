@@ -4,11 +4,10 @@ import { monthlyClimateFromEpw, weatherFileSource } from '@shared/calc/moisture/
 import { saturationPressureIso13788 } from '@shared/calc/moisture/psychrometrics';
 import { TEXT_MAX } from '@shared/schemas/common';
 import type { Project, ProjectClimate } from '@shared/schemas/project';
-import { type ReactNode, useState } from 'react';
+import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { Link } from 'react-router';
 import { Field } from '../../../components/ui/Field';
-import { FormSaveBar } from '../../../components/ui/FormSaveBar';
 import { Notice } from '../../../components/ui/Notice';
 import { NotSaved } from '../../../components/ui/NotSaved';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
@@ -18,6 +17,7 @@ import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
 import { formatQuantity, parseInput, type Quantity, quantityInput, unitOf } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
+import { EditFormFoot, type EditFormProps } from '../../projects/edit-form';
 import { type ClimateFormValues, climateErrorMap, climateFormSchema, MONTH_NAMES } from '../climate-form';
 import { HUMIDITY_CLASSES, isInventedClimate } from '../humidity-classes';
 
@@ -36,13 +36,8 @@ const MAX_WEATHER_FILE_BYTES = 20 * 1024 * 1024;
 
 export const cellId = (month: number, field: Column) => `climate-${month}-${field}`;
 
-interface ClimateFormProps {
+interface ClimateFormProps extends EditFormProps<ClimateFormValues, ProjectClimate> {
   project: Project;
-  defaultValues: ClimateFormValues;
-  onSubmit: (climate: ProjectClimate) => Promise<void>;
-  onCancel?: () => void;
-  banner?: ReactNode;
-  submitDisabled?: boolean;
   /** Where the project's indoor design conditions are edited, when this person may. */
   indoorHref?: string;
 }
@@ -53,15 +48,8 @@ interface ClimateFormProps {
  * humidity class or the project's fixed indoor design conditions. A column pasted from a spreadsheet fills
  * the rows below the box it is pasted into.
  */
-export function ClimateForm({
-  project,
-  defaultValues,
-  onSubmit,
-  onCancel,
-  banner,
-  submitDisabled = false,
-  indoorHref,
-}: ClimateFormProps) {
+export function ClimateForm({ project, indoorHref, ...edit }: ClimateFormProps) {
+  const { defaultValues, onSubmit } = edit;
   const system = useUnitSystem();
   const [formError, setFormError] = useState<string[] | null>(null);
   const [pasted, setPasted] = useState<string | null>(null);
@@ -335,11 +323,9 @@ export function ClimateForm({
         </div>
       </fieldset>
 
-      {banner}
-
-      <FormSaveBar busy={isSubmitting} disabled={submitDisabled} onCancel={onCancel} errorCount={errorCount}>
+      <EditFormFoot edit={edit} busy={isSubmitting} errorCount={errorCount}>
         Save the climate
-      </FormSaveBar>
+      </EditFormFoot>
     </form>
   );
 }

@@ -10,6 +10,7 @@ import {
 import { useUnitSystem } from '../../../lib/unit-system';
 import { useConflictEdit } from '../../../lib/use-conflict-edit';
 import { conflictingProject, useUpdateProject } from '../api/update-project';
+import { editFormProps } from '../edit-form';
 import { CarriedNotice, ConflictChoice, useConflictChoice } from './ConflictChoice';
 import { ProjectForm, type ProjectFormValues, projectToFormValues } from './ProjectForm';
 
@@ -137,12 +138,8 @@ export function ProjectEditor({ project, onDone }: { project: Project; onDone: (
   return (
     <ProjectForm
       key={formKey}
-      defaultValues={formValues}
       submitLabel="Save site data"
-      onSubmit={save}
-      onCancel={onDone}
-      banner={banner}
-      submitDisabled={conflict !== null}
+      {...editFormProps(formValues, save, onDone, banner, conflict !== null)}
     />
   );
 }

@@ -1,10 +1,9 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { CLIMATE_ZONES, type ProjectInput, projectInputSchema } from '@shared/schemas/project';
-import { type ReactNode, useState } from 'react';
+import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Field } from '../../../components/ui/Field';
-import { FormSaveBar } from '../../../components/ui/FormSaveBar';
 import { NotSaved } from '../../../components/ui/NotSaved';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
@@ -19,6 +18,7 @@ import {
 } from '../../../lib/project-fields';
 import { quantityInput as quantityMeasure } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
+import { EditFormFoot, type EditFormProps } from '../edit-form';
 
 export type ProjectFormValues = z.input<typeof projectInputSchema>;
 
@@ -37,32 +37,17 @@ const GROUPS: { legend: string; fields: ProjectQuantityField[] }[] = [
   },
 ];
 
-interface ProjectFormProps {
-  defaultValues: Partial<ProjectFormValues>;
+interface ProjectFormProps extends EditFormProps<Partial<ProjectFormValues>, ProjectInput> {
   submitLabel: string;
   busyLabel?: string;
-  /** Throw to report a failure; field reasons from the server are put onto the fields. */
-  onSubmit: (values: ProjectInput) => Promise<void>;
-  onCancel?: () => void;
-  /** Rendered above the buttons (e.g. the "someone else saved first" notice). */
-  banner?: ReactNode;
-  /** Disable saving while the parent resolves something (e.g. a version conflict). */
-  submitDisabled?: boolean;
 }
 
 const fieldset = 'border-t border-ink pt-3';
 const legend = 'pr-3 font-serif text-lg font-semibold';
 const grid = 'mt-3 grid gap-x-6 gap-y-5 sm:grid-cols-2';
 
-export function ProjectForm({
-  defaultValues,
-  submitLabel,
-  busyLabel = 'Saving…',
-  onSubmit,
-  onCancel,
-  banner,
-  submitDisabled = false,
-}: ProjectFormProps) {
+export function ProjectForm({ submitLabel, busyLabel, ...edit }: ProjectFormProps) {
+  const { defaultValues, onSubmit } = edit;
   const system = useUnitSystem();
   const [formError, setFormError] = useState<string[] | null>(null);
   const {
@@ -174,17 +159,9 @@ export function ProjectForm({
         </fieldset>
       ))}
 
-      {banner}
-
-      <FormSaveBar
-        busy={isSubmitting}
-        busyLabel={busyLabel}
-        disabled={submitDisabled}
-        onCancel={onCancel}
-        errorCount={errorCount}
-      >
+      <EditFormFoot edit={edit} busy={isSubmitting} busyLabel={busyLabel} errorCount={errorCount}>
         {submitLabel}
-      </FormSaveBar>
+      </EditFormFoot>
     </form>
   );
 }

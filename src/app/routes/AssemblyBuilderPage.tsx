@@ -1,6 +1,7 @@
 import { can, canInFirm } from '@shared/auth/permissions';
-import type { BridgeValueInput } from '@shared/schemas/assembly';
+import type { AssemblyRevision, BridgeValue, BridgeValueInput } from '@shared/schemas/assembly';
 import type { Project } from '@shared/schemas/project';
+import type { ReactNode } from 'react';
 import { TitledSection } from '../../components/ui/TitledSection';
 import { AssemblyBuilder } from '../../features/assemblies/components/AssemblyBuilder';
 import { AssemblyView } from '../../features/assemblies/components/AssemblyView';
@@ -36,6 +37,48 @@ export function useBuilderLibrary(project: Project | undefined) {
   };
 }
 
+/**
+ * A saved revision read-only, exactly as it was stored (input and stored result), under a heading: what it is,
+ * when and by whom it was saved, its name, a `detail` line under the name and `children` below (a notice).
+ */
+export function SavedRevisionView({
+  revision: r,
+  what,
+  name,
+  bridgeValues,
+  detail,
+  children,
+}: {
+  revision: AssemblyRevision;
+  what: string;
+  name: string;
+  bridgeValues: readonly BridgeValue[];
+  detail?: ReactNode;
+  children?: ReactNode;
+}) {
+  return (
+    <AssemblyView
+      input={r.input}
+      storedResult={r.thermalResult}
+      engineVersion={r.engineVersion}
+      bridgeValues={bridgeValues}
+      heading={
+        <header className="flex flex-col gap-3">
+          <div>
+            <p className="label-caps">
+              {what} saved {formatDateTime(r.createdAt)}
+              {r.createdBy ? ` by ${r.createdBy}` : ''} · read-only
+            </p>
+            <h2 className="text-3xl">{name}</h2>
+            {detail}
+          </div>
+          {children}
+        </header>
+      }
+    />
+  );
+}
+
 export function AssemblyBuilderPage() {
   const { project, assembly: a } = useAssemblyFrame();
   const library = useBuilderLibrary(project);
@@ -57,24 +100,17 @@ export function AssemblyBuilderPage() {
           saveBridgeValue={library.saveBridgeValue}
         />
       ) : (
-        <AssemblyView
-          input={a.current.input}
-          storedResult={a.current.thermalResult}
-          engineVersion={a.current.engineVersion}
+        <SavedRevisionView
+          revision={a.current}
+          what={`Assembly · revision ${a.revision}`}
+          name={a.name}
           bridgeValues={library.bridgeValues}
-          heading={
-            <header className="flex flex-col gap-1">
-              <p className="label-caps">
-                Assembly · revision {a.revision} saved {formatDateTime(a.current.createdAt)}
-                {a.current.createdBy ? ` by ${a.current.createdBy}` : ''} · read-only
-              </p>
-              <h2 className="text-3xl">{a.name}</h2>
-              <p className="text-sm text-ink-muted">
-                {project.archivedAt
-                  ? 'The project is archived, so its assemblies are shown read-only.'
-                  : 'Your role on this project shows assemblies read-only.'}
-              </p>
-            </header>
+          detail={
+            <p className="mt-1 text-sm text-ink-muted">
+              {project.archivedAt
+                ? 'The project is archived, so its assemblies are shown read-only.'
+                : 'Your role on this project shows assemblies read-only.'}
+            </p>
           }
         />
       )}

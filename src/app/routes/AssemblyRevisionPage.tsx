@@ -2,13 +2,11 @@ import { Link, useParams } from 'react-router';
 import { Loading } from '../../components/ui/Loading';
 import { Notice } from '../../components/ui/Notice';
 import { useRevision } from '../../features/assemblies/api/get-revision';
-import { AssemblyView } from '../../features/assemblies/components/AssemblyView';
 import { RevisionHistory } from '../../features/assemblies/components/RevisionHistory';
 import { errorMessage } from '../../lib/api';
-import { formatDateTime } from '../../lib/format';
 import { useAssemblyFrame } from '../layout/AssemblyLayout';
 import { revisionOf } from '../route-params';
-import { useBuilderLibrary } from './AssemblyBuilderPage';
+import { SavedRevisionView, useBuilderLibrary } from './AssemblyBuilderPage';
 
 /** An older revision, read-only, exactly as it was saved (input and stored result). */
 export function AssemblyRevisionPage() {
@@ -28,35 +26,25 @@ export function AssemblyRevisionPage() {
   return (
     <>
       <title>{`${r.input.name}, rev. ${r.revision} · ${project.name} · Skinwright`}</title>
-      <AssemblyView
-        input={r.input}
-        storedResult={r.thermalResult}
-        engineVersion={r.engineVersion}
+      <SavedRevisionView
+        revision={r}
+        what={`Revision ${r.revision} of ${a.revision} ·`}
+        name={r.input.name}
         bridgeValues={library.bridgeValues}
-        heading={
-          <header className="flex flex-col gap-3">
-            <div>
-              <p className="label-caps">
-                Revision {r.revision} of {a.revision} · saved {formatDateTime(r.createdAt)}
-                {r.createdBy ? ` by ${r.createdBy}` : ''} · read-only
-              </p>
-              <h2 className="text-3xl">{r.input.name}</h2>
-              {r.note ? <p className="mt-1 italic">“{r.note}”</p> : null}
-            </div>
-            {isCurrent ? null : (
-              <Notice tone="warning" title={`An older revision — revision ${a.revision} is current.`}>
-                <p>
-                  <Link to={`${base}/${a.id}`}>Open the current revision</Link>
-                  <span aria-hidden="true"> · </span>
-                  <Link to={`${base}/compare?ids=${a.id},${a.id}&rev=${r.revision},`}>
-                    Compare this revision with the current one
-                  </Link>
-                </p>
-              </Notice>
-            )}
-          </header>
-        }
-      />
+        detail={r.note ? <p className="mt-1 italic">“{r.note}”</p> : null}
+      >
+        {isCurrent ? null : (
+          <Notice tone="warning" title={`An older revision — revision ${a.revision} is current.`}>
+            <p>
+              <Link to={`${base}/${a.id}`}>Open the current revision</Link>
+              <span aria-hidden="true"> · </span>
+              <Link to={`${base}/compare?ids=${a.id},${a.id}&rev=${r.revision},`}>
+                Compare this revision with the current one
+              </Link>
+            </p>
+          </Notice>
+        )}
+      </SavedRevisionView>
       <RevisionHistory
         projectId={project.id}
         assemblyId={a.id}

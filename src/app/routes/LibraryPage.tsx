@@ -1,5 +1,5 @@
 import { canInFirm, FIRM_ROLE_LABELS } from '@shared/auth/permissions';
-import { useState } from 'react';
+import { type ReactNode, useId, useState } from 'react';
 import { Loaded } from '../../components/ui/Loaded';
 import { Notice } from '../../components/ui/Notice';
 import { PageHeader } from '../../components/ui/PageHeader';
@@ -56,34 +56,32 @@ export function LibraryPage() {
             />
           ) : null}
 
-          <section aria-labelledby="firm-bridges-heading" className="flex flex-col gap-4">
-            <div className="border-b border-ink pb-1">
-              <h2 id="firm-bridges-heading" className="text-2xl">
-                χ and ψ values — {org?.name}
-              </h2>
-              <p className="text-sm text-ink-muted">
+          <LibrarySection
+            title={<>χ and ψ values — {org?.name}</>}
+            intro={
+              <>
                 Clips and brackets (point bridges χ) and girts and rails (linear bridges ψ), as tested or
                 published. The builder offers them on every clip and girt.
                 {isAdmin ? '' : ' Firm administrators can remove entries.'}
-              </p>
-            </div>
+              </>
+            }
+          >
             <Loaded query={bridgeValues} what="Loading the firm's χ and ψ values">
               {(data) => <BridgeValuesTable orgId={org!.id} values={data} isAdmin={isAdmin} />}
             </Loaded>
             {org && mayWrite ? <AddBridgeValueForm orgId={org.id} /> : null}
-          </section>
+          </LibrarySection>
 
-          <section aria-labelledby="firm-attachment-heading" className="flex flex-col gap-4">
-            <div className="border-b border-ink pb-1">
-              <h2 id="firm-attachment-heading" className="text-2xl">
-                Panel tables and clips — {org?.name}
-              </h2>
-              <p className="text-sm text-ink-muted">
+          <LibrarySection
+            title={<>Panel tables and clips — {org?.name}</>}
+            intro={
+              <>
                 The makers’ load–span tables and clip capacities (ASD) for the wind attachment check, each
                 with its source and, once uploaded, the data sheet itself. The Attachment &amp; wind page of
                 every assembly offers them. The manufacturer’s current tested values govern.
-              </p>
-            </div>
+              </>
+            }
+          >
             <Loaded query={products} what="Loading the firm's panel tables and clips">
               {(data) => (
                 <AttachmentProductsTable
@@ -94,57 +92,76 @@ export function LibraryPage() {
                 />
               )}
             </Loaded>
-          </section>
+          </LibrarySection>
 
-          <section aria-labelledby="firm-materials-heading" className="flex flex-col gap-4">
-            <div className="border-b border-ink pb-1">
-              <h2 id="firm-materials-heading" className="text-2xl">
-                Materials — {org?.name}
-              </h2>
-              <p className="text-sm text-ink-muted">
-                Product values from data sheets and test reports; they override the generic values below.
-              </p>
-            </div>
+          <LibrarySection
+            title={<>Materials — {org?.name}</>}
+            intro={
+              <>Product values from data sheets and test reports; they override the generic values below.</>
+            }
+          >
             <Loaded query={materials} what="Loading the firm's materials">
               {(data) => <FirmMaterialsTable orgId={org!.id} materials={data} isAdmin={isAdmin} />}
             </Loaded>
             {org && mayWrite ? <AddFirmMaterialForm orgId={org.id} /> : null}
-          </section>
+          </LibrarySection>
 
-          <section aria-labelledby="firm-checklist-heading" className="flex flex-col gap-4">
-            <div className="border-b border-ink pb-1">
-              <h2 id="firm-checklist-heading" className="text-2xl">
-                Inspection checklist — {org?.name}
-              </h2>
-              <p className="text-sm text-ink-muted">
+          <LibrarySection
+            title={<>Inspection checklist — {org?.name}</>}
+            intro={
+              <>
                 The firm’s own items, added after the generated ones to every new inspection of its projects:
                 each is looked at on the wall and passed, failed or marked not applicable. Versioned like the
                 code tables: an inspection keeps the version it was made with.
-              </p>
-            </div>
+              </>
+            }
+          >
             <Loaded query={checklist} what="Loading the firm's inspection checklist">
               {(data) => (
                 <InspectionTemplateEditor key={org!.id} orgId={org!.id} template={data} mayWrite={mayWrite} />
               )}
             </Loaded>
-          </section>
+          </LibrarySection>
         </>
       )}
 
-      <section aria-labelledby="generic-heading" className="flex flex-col gap-4">
-        <div className="border-b border-ink pb-1">
-          <h2 id="generic-heading" className="text-2xl">
-            Generic materials
-          </h2>
-          <p className="text-sm text-ink-muted">
+      <LibrarySection
+        title="Generic materials"
+        intro={
+          <>
             Design values for early checks only; a product's declared value overrides them. Each row names the
             table it belongs to and whether it has been checked against that table.
-          </p>
-        </div>
+          </>
+        }
+      >
         <Loaded query={reference} what="Loading the generic materials">
           {(data) => <GenericMaterialsTable materials={data} />}
         </Loaded>
-      </section>
+      </LibrarySection>
     </div>
+  );
+}
+
+/** A part of the library: its heading with what it holds in a line under it, ruled, then its table. */
+function LibrarySection({
+  title,
+  intro,
+  children,
+}: {
+  title: string;
+  intro: ReactNode;
+  children: ReactNode;
+}) {
+  const id = useId();
+  return (
+    <section aria-labelledby={id} className="flex flex-col gap-4">
+      <div className="border-b border-ink pb-1">
+        <h2 id={id} className="text-2xl">
+          {title}
+        </h2>
+        <p className="text-sm text-ink-muted">{intro}</p>
+      </div>
+      {children}
+    </section>
   );
 }

@@ -188,6 +188,14 @@ export const engineMessageSchema = z.discriminatedUnion('code', [
 export type EngineMessage = z.infer<typeof engineMessageSchema>;
 export type EngineMessageCode = EngineMessage['code'];
 
+/** An engine result's `warnings`: its own codes. */
+export const warningsSchema = <T extends z.ZodType>(codes: T) =>
+  z
+    .array(codes)
+    .describe(
+      'What to read with the result: messages `{ code, path, values }` (SI values) worded by the client',
+    );
+
 /** A message built in code, its values checked against its code. */
 export const engineMessage = <C extends EngineMessageCode>(
   code: C,

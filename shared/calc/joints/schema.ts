@@ -1,7 +1,7 @@
 import { measure } from '@shared/calc/answer';
 import { traceStepSchema } from '@shared/calc/trace';
 import { K, M, PER_K } from '@shared/calc/trace-units';
-import { jointWarningSchema } from '@shared/format/message-schema';
+import { jointWarningSchema, warningsSchema } from '@shared/format/message-schema';
 import type { Unbranded } from '@shared/units/brands';
 import { z } from 'zod';
 
@@ -150,11 +150,7 @@ export const jointResultSchema = z.object({
   verdict: z.enum(['pass', 'fail']),
   margin: z.number().describe('(designWidth − requiredWidth)/requiredWidth, dimensionless'),
   marginText: z.string().describe('"meets — margin 12 %" or "short by 3.2 mm"'),
-  warnings: z
-    .array(jointWarningSchema)
-    .describe(
-      'What to read with the result: messages `{ code, path, values }` (SI values) worded by the client',
-    ),
+  warnings: warningsSchema(jointWarningSchema),
   trace: z.array(traceStepSchema),
 });
 

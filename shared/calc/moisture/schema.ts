@@ -1,6 +1,6 @@
 import { heatFlowSchema, layerSchema } from '@shared/calc/thermal/schema';
 import { traceStepSchema } from '@shared/calc/trace';
-import { moistureWarningSchema, storedMessageSchema } from '@shared/format/message-schema';
+import { moistureWarningSchema, storedMessageSchema, warningsSchema } from '@shared/format/message-schema';
 import { PERM_0C_TO_SI, PERM_23C_TO_SI, QUANTITIES, type Unbranded } from '@shared/units';
 import { trimmedFixed } from '@shared/units/rounding';
 import { z } from 'zod';
@@ -278,11 +278,7 @@ export const moistureResultSchema = z.object({
     'The result as a `moisture_verdict` message (`{ code, path, values }`, SI values), worded by the client; plain words in results stored before',
   ),
   trace: z.array(traceStepSchema),
-  warnings: z
-    .array(moistureWarningSchema)
-    .describe(
-      'What to read with the result: messages `{ code, path, values }` (SI values) worded by the client',
-    ),
+  warnings: warningsSchema(moistureWarningSchema),
 });
 
 export type Vapour = z.infer<typeof vapourSchema>;

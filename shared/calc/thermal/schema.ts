@@ -1,7 +1,7 @@
 import { computedBridgeSchema } from '@shared/calc/bridge/computed';
 import { valueSourceSchema } from '@shared/calc/source';
 import { traceStepSchema } from '@shared/calc/trace';
-import { thermalWarningSchema } from '@shared/format/message-schema';
+import { thermalWarningSchema, warningsSchema } from '@shared/format/message-schema';
 import type { Unbranded } from '@shared/units/brands';
 import { z } from 'zod';
 
@@ -340,11 +340,7 @@ export const thermalResultSchema = z.object({
   clearFieldShare: z.number().describe('U0 / Ueff, dimensionless (0–1)'),
   sharesSum: z.number().describe('clearFieldShare + Σ bridge shares, dimensionless (1 by construction)'),
   trace: z.array(traceStepSchema),
-  warnings: z
-    .array(thermalWarningSchema)
-    .describe(
-      'What to read with the result: messages `{ code, path, values }` (SI values) worded by the client',
-    ),
+  warnings: warningsSchema(thermalWarningSchema),
 });
 
 /** What the schemas parse: SI by type (lengths `Metre`, λ, R branded — D-028). */

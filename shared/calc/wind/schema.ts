@@ -1,7 +1,7 @@
 import { measure } from '@shared/calc/answer';
 import { traceStepSchema } from '@shared/calc/trace';
 import { M, M2, N, PA } from '@shared/calc/trace-units';
-import { designReasonSchema, windWarningSchema } from '@shared/format/message-schema';
+import { designReasonSchema, warningsSchema, windWarningSchema } from '@shared/format/message-schema';
 import type { Unbranded } from '@shared/units/brands';
 import { z } from 'zod';
 
@@ -263,11 +263,7 @@ export const windScheduleResultSchema = z.object({
   minimumPressure: measure('Minimum net C&C pressure (strength level)', PA),
   zones: z.array(zoneResultSchema),
   trace: z.array(traceStepSchema),
-  warnings: z
-    .array(windWarningSchema)
-    .describe(
-      'What to read with the result: messages `{ code, path, values }` (SI values) worded by the client',
-    ),
+  warnings: warningsSchema(windWarningSchema),
   cautions: z.array(z.string()),
 });
 

@@ -2,11 +2,9 @@ import {
   type CategoryLabels,
   CRITERIA_ZONES,
   CRITERION_TYPE_KEYS,
-  type CriteriaZone,
   type CriterionType,
   categoryLabel,
   criterionSpec,
-  type WallCategory,
   zoneLabel,
 } from '@shared/checks/criteria';
 import { WALL_CATEGORIES } from '@shared/schemas/assembly';
@@ -60,38 +58,38 @@ function CellError({ rowKey, field }: { rowKey: string; field: DraftField }) {
   );
 }
 
-function ZoneCell({ row }: Ctx) {
-  const g = useGrid();
-  const d = row.original;
-  if (g.readOnly) return <span className="num">{zoneLabel(d.climateZone)}</span>;
-  return (
-    <select
-      aria-label={`Row ${g.rowNumber(d.key)}: climate zone`}
-      className={cellControl}
-      value={d.climateZone}
-      onChange={(e) => g.update(d.key, { climateZone: e.target.value as CriteriaZone })}
-    >
-      <Options values={CRITERIA_ZONES} labels={zoneLabel} />
-    </select>
-  );
-}
+type ChoiceField = 'climateZone' | 'wallCategory';
 
-function CategoryCell({ row }: Ctx) {
+/** The closed lists a cell picks from: what the box is, the choices, their words (read-only, the words alone). */
+const CHOICES: {
+  [K in ChoiceField]: {
+    what: string;
+    values: readonly DraftRow[K][];
+    words: (value: DraftRow[K], labels: CategoryLabels) => string;
+    readOnlyClass?: string;
+  };
+} = {
+  climateZone: { what: 'climate zone', values: CRITERIA_ZONES, words: zoneLabel, readOnlyClass: 'num' },
+  wallCategory: {
+    what: 'wall category',
+    values: WALL_CATEGORIES,
+    words: (c, labels) => categoryLabel(labels, c),
+  },
+};
+
+function ChoiceCell<K extends ChoiceField>({ draft: d, field }: { draft: DraftRow; field: K }) {
   const g = useGrid();
-  const d = row.original;
-  if (g.readOnly) return <span>{categoryLabel(g.labels, d.wallCategory)}</span>;
+  const { what, values, words, readOnlyClass } = CHOICES[field];
+  const word = (value: DraftRow[K]) => words(value, g.labels);
+  if (g.readOnly) return <span className={readOnlyClass}>{word(d[field])}</span>;
   return (
     <select
-      aria-label={`Row ${g.rowNumber(d.key)}: wall category`}
+      aria-label={`Row ${g.rowNumber(d.key)}: ${what}`}
       className={cellControl}
-      value={d.wallCategory}
-      onChange={(e) => g.update(d.key, { wallCategory: e.target.value as WallCategory })}
+      value={d[field]}
+      onChange={(e) => g.update(d.key, { [field]: e.target.value })}
     >
-      {WALL_CATEGORIES.map((c) => (
-        <option key={c} value={c}>
-          {categoryLabel(g.labels, c)}
-        </option>
-      ))}
+      <Options values={values} labels={word} />
     </select>
   );
 }
@@ -214,8 +212,16 @@ function RemoveCell({ row }: Ctx) {
 }
 
 const columns = helper.columns([
-  helper.display({ id: 'zone', header: 'Climate zone', cell: ZoneCell }),
-  helper.display({ id: 'category', header: 'Wall category', cell: CategoryCell }),
+  helper.display({
+    id: 'zone',
+    header: 'Climate zone',
+    cell: ({ row }) => <ChoiceCell draft={row.original} field="climateZone" />,
+  }),
+  helper.display({
+    id: 'category',
+    header: 'Wall category',
+    cell: ({ row }) => <ChoiceCell draft={row.original} field="wallCategory" />,
+  }),
   helper.display({ id: 'criterion', header: 'Criterion', cell: CriterionCell }),
   helper.display({ id: 'value', header: 'Value', cell: ValueCell }),
   helper.display({ id: 'unit', header: 'Unit', cell: UnitCell }),

@@ -6,7 +6,11 @@ import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
 import { TextArea, TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
+import { submitShowingError } from '../../../lib/submit-showing-error';
 import { useSaveCriteriaMeta } from '../api/save-criteria';
+import { CriteriaTextFields } from './CriteriaTextFields';
+
+const KEYS_BEFORE_DATE = ['name', 'jurisdiction', 'edition'] as const;
 
 const metaOf = (s: CriteriaSet): CriteriaSetMeta => ({
   name: s.name,
@@ -29,24 +33,15 @@ export function CriteriaMetaForm({
   onCancel: () => void;
 }) {
   const [meta, setMeta] = useState<CriteriaSetMeta>(() => metaOf(set));
+  const edit = (patch: Partial<CriteriaSetMeta>) => setMeta({ ...meta, ...patch });
   const save = useSaveCriteriaMeta();
   const fields = isApiRequestError(save.error) ? (save.error.fields ?? {}) : {};
-  const text = (k: 'name' | 'jurisdiction' | 'edition' | 'sourceReference') => ({
-    value: meta[k],
-    onChange: (e: { target: { value: string } }) => setMeta({ ...meta, [k]: e.target.value }),
-  });
-
   return (
     <form
       className="flex max-w-form flex-col gap-4"
-      onSubmit={async (e) => {
-        e.preventDefault();
-        try {
-          onSaved(await save.mutateAsync({ setId: set.id, revision: set.revision, changes: meta }));
-        } catch {
-          // shown below
-        }
-      }}
+      onSubmit={submitShowingError(async () =>
+        onSaved(await save.mutateAsync({ setId: set.id, revision: set.revision, changes: meta })),
+      )}
     >
       {set.frozenAt ? (
         <Notice
@@ -54,40 +49,30 @@ export function CriteriaMetaForm({
           title={`Saving creates version ${set.version + 1}; version ${set.version} is frozen.`}
         />
       ) : null}
-      <Field label="Name" required error={fields['changes.name']}>
-        {(c) => <TextInput {...c} {...text('name')} />}
-      </Field>
-      <Field
-        label="Jurisdiction"
-        hint="Where the adopted code applies, in your words."
-        error={fields['changes.jurisdiction']}
-      >
-        {(c) => <TextInput {...c} {...text('jurisdiction')} />}
-      </Field>
-      <Field label="Edition and amendments" error={fields['changes.edition']}>
-        {(c) => <TextInput {...c} {...text('edition')} />}
-      </Field>
+      <CriteriaTextFields
+        keys={KEYS_BEFORE_DATE}
+        values={meta}
+        onChange={edit}
+        errorOf={(k) => fields[`changes.${k}`]}
+      />
       <Field label="Effective date" error={fields['changes.effectiveDate']}>
         {(c) => (
           <TextInput
             {...c}
             type="date"
             value={meta.effectiveDate ?? ''}
-            onChange={(e) => setMeta({ ...meta, effectiveDate: e.target.value || null })}
+            onChange={(e) => edit({ effectiveDate: e.target.value || null })}
           />
         )}
       </Field>
-      <Field
-        label="Source reference"
-        hint="Section and table numbers of the adopted code."
-        error={fields['changes.sourceReference']}
-      >
-        {(c) => <TextInput {...c} {...text('sourceReference')} />}
-      </Field>
+      <CriteriaTextFields
+        keys={['sourceReference']}
+        values={meta}
+        onChange={edit}
+        errorOf={(k) => fields[`changes.${k}`]}
+      />
       <Field label="Notes" error={fields['changes.notes']}>
-        {(c) => (
-          <TextArea {...c} value={meta.notes} onChange={(e) => setMeta({ ...meta, notes: e.target.value })} />
-        )}
+        {(c) => <TextArea {...c} value={meta.notes} onChange={(e) => edit({ notes: e.target.value })} />}
       </Field>
       <fieldset className="flex flex-col gap-3 border-t border-rule pt-3">
         <legend className="text-sm font-semibold">The table’s names for the wall categories</legend>
@@ -105,7 +90,7 @@ export function CriteriaMetaForm({
                   const labels = { ...meta.categoryLabels };
                   if (e.target.value.trim() === '') delete labels[c];
                   else labels[c] = e.target.value;
-                  setMeta({ ...meta, categoryLabels: labels });
+                  edit({ categoryLabels: labels });
                 }}
               />
             )}

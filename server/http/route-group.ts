@@ -82,7 +82,10 @@ function accessAt<A extends Access>(path: string, access: A): A {
   return { ...access, projectId };
 }
 
-/** What a route of a group says itself; its tag, its standard refusals and (by default) its params come from the group and the path. */
+/**
+ * What a route of a group says itself; its tag, its standard refusals and (by default) its params come from the
+ * group and the path.
+ */
 type GroupRoute<P, Q, B, A extends Access> = Omit<
   RouteDef<P, Q, B, A>,
   'method' | 'path' | 'tag' | 'access' | 'params'

@@ -58,6 +58,16 @@ function toMe(rows: MeRow[]): Me {
   };
 }
 
+/** The user's own columns of the answer, from the user table or from the row an update returned. */
+type PersonColumn = 'id' | 'name' | 'email' | 'role' | 'unitSystem';
+const personColumns = <T extends Record<PersonColumn, unknown>>(t: T): Pick<T, PersonColumn> => ({
+  id: t.id,
+  name: t.name,
+  email: t.email,
+  role: t.role,
+  unitSystem: t.unitSystem,
+});
+
 /** Each of the user's firms (one row per membership; none: nulls from the left joins). */
 const firmColumns = {
   orgId: organisations.id,
@@ -71,14 +81,7 @@ export function createMeService(db: Db) {
   // Prepared once (no query building per request; a PostgreSQL server plans them once per connection), and
   // one statement each: the user with their firms, and the preference write returning the same rows.
   const meQuery = db
-    .select({
-      id: user.id,
-      name: user.name,
-      email: user.email,
-      role: user.role,
-      unitSystem: user.unitSystem,
-      ...firmColumns,
-    })
+    .select({ ...personColumns(user), ...firmColumns })
     .from(user)
     .leftJoin(organisationMembers, eq(organisationMembers.userId, user.id))
     .leftJoin(organisations, eq(organisations.id, organisationMembers.organisationId))
@@ -90,24 +93,11 @@ export function createMeService(db: Db) {
       .update(user)
       .set({ unitSystem: sql`${sql.placeholder('unitSystem')}`, updatedAt: sql`now()` })
       .where(eq(user.id, sql.placeholder('userId')))
-      .returning({
-        id: user.id,
-        name: user.name,
-        email: user.email,
-        role: user.role,
-        unitSystem: user.unitSystem,
-      }),
+      .returning(personColumns(user)),
   );
   const setUnitSystemQuery = db
     .with(updated)
-    .select({
-      id: updated.id,
-      name: updated.name,
-      email: updated.email,
-      role: updated.role,
-      unitSystem: updated.unitSystem,
-      ...firmColumns,
-    })
+    .select({ ...personColumns(updated), ...firmColumns })
     .from(updated)
     .leftJoin(organisationMembers, eq(organisationMembers.userId, updated.id))
     .leftJoin(organisations, eq(organisations.id, organisationMembers.organisationId))

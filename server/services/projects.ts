@@ -36,6 +36,29 @@ function toProject(row: ProjectRow, organisationName: string, myRole: ProjectRol
   };
 }
 
+/** Opens a project in a firm with the caller as its owner, and its audit entry (`after`); the new row. */
+async function openProject(
+  tx: Db,
+  userId: string,
+  values: Omit<typeof projects.$inferInsert, 'createdBy'>,
+  after: unknown,
+): Promise<ProjectRow> {
+  const [row] = await tx
+    .insert(projects)
+    .values({ ...values, createdBy: userId })
+    .returning();
+  await tx.insert(projectMembers).values({ projectId: row!.id, userId, role: 'owner' });
+  await recordAudit(tx, {
+    actorId: userId,
+    projectId: row!.id,
+    entity: 'project',
+    entityId: row!.id,
+    action: 'create',
+    after,
+  });
+  return row!;
+}
+
 /** A save of one part of a project: its site data, its wind data or its climate. */
 export type ProjectPartChange =
   | { part: 'site'; changes: ProjectInput }
@@ -147,21 +170,17 @@ export function createProjectService(db: Db, readCache: ReadCache) {
         ...data
       } = src;
       const id = await db.transaction(async (tx) => {
-        const [row] = await tx
-          .insert(projects)
-          .values({
-            ...data,
-            name: input.name ?? copyName(src.name),
-            number: input.number ?? src.number,
-            organisationId: orgId,
-            createdBy: userId,
-          })
-          .returning();
-        await tx.insert(projectMembers).values({ projectId: row!.id, userId, role: 'owner' });
+        const name = input.name ?? copyName(src.name);
+        const row = await openProject(
+          tx,
+          userId,
+          { ...data, name, number: input.number ?? src.number, organisationId: orgId },
+          { name, copiedFrom: { project: src.name, assemblies: current.length } },
+        );
         for (const { a, r } of current) {
           const [copy] = await tx
             .insert(assemblies)
-            .values({ projectId: row!.id, name: a.name, wallCategory: a.wallCategory, createdBy: userId })
+            .values({ projectId: row.id, name: a.name, wallCategory: a.wallCategory, createdBy: userId })
             .returning({ id: assemblies.id });
           await tx.insert(assemblyRevisions).values({
             assemblyId: copy!.id,
@@ -173,15 +192,7 @@ export function createProjectService(db: Db, readCache: ReadCache) {
             createdBy: userId,
           });
         }
-        await recordAudit(tx, {
-          actorId: userId,
-          projectId: row!.id,
-          entity: 'project',
-          entityId: row!.id,
-          action: 'create',
-          after: { name: row!.name, copiedFrom: { project: src.name, assemblies: current.length } },
-        });
-        return row!.id;
+        return row.id;
       });
       return get(id, userId);
     },
@@ -202,22 +213,9 @@ export function createProjectService(db: Db, readCache: ReadCache) {
             organisationId: 'you are not a member of this firm',
           },
         );
-      const id = await db.transaction(async (tx) => {
-        const [row] = await tx
-          .insert(projects)
-          .values({ ...input, organisationId: orgId, createdBy: userId })
-          .returning();
-        await tx.insert(projectMembers).values({ projectId: row!.id, userId, role: 'owner' });
-        await recordAudit(tx, {
-          actorId: userId,
-          projectId: row!.id,
-          entity: 'project',
-          entityId: row!.id,
-          action: 'create',
-          after: input,
-        });
-        return row!.id;
-      });
+      const id = await db.transaction(
+        async (tx) => (await openProject(tx, userId, { ...input, organisationId: orgId }, input)).id,
+      );
       return get(id, userId);
     },
 

@@ -1,8 +1,7 @@
 import type { Project, ProjectClimate } from '@shared/schemas/project';
-import { Notice } from '../../../components/ui/Notice';
 import { formatDateTime } from '../../../lib/format';
 import { useConflictEdit } from '../../../lib/use-conflict-edit';
-import { CarriedNotice, ConflictChoice, useConflictChoice } from '../../projects/components/ConflictChoice';
+import { ConflictBanner, ConflictChoice, useConflictChoice } from '../../projects/components/ConflictChoice';
 import { editFormProps } from '../../projects/edit-form';
 import { conflictingProject, useUpdateClimate } from '../api/update-climate';
 import { type ClimateFormValues, climateToForm, mergeClimate } from '../climate-form';
@@ -35,42 +34,43 @@ export function ClimateEditor({
     (p) => climateToForm(p.climate),
     conflictingProject,
   );
-  const choice = useConflictChoice(restart);
+  const choice = useConflictChoice(conflict, restart);
 
   const save = (climate: ProjectClimate) =>
     saveVersion(climate, (version) => update.mutateAsync({ id: project.id, version, climate }), onDone);
 
   const merge = conflict ? mergeClimate(conflict.base.climate, conflict.mine, conflict.theirs.climate) : null;
 
-  const banner =
-    conflict && merge ? (
-      <Notice tone="warning" title="Someone else saved the climate first." live>
-        <p>
-          Version <span className="num">{conflict.theirs.version}</span> was saved at{' '}
-          <span className="num">{formatDateTime(conflict.theirs.updatedAt)}</span> while you were editing
-          version <span className="num">{conflict.base.version}</span>.{' '}
-          {merge.theirsChanged.length === 0
-            ? 'They saved the climate without changing a value.'
-            : `They changed the climate: ${merge.theirsChanged.slice(0, 6).join(', ')}${merge.theirsChanged.length > 6 ? ` and ${merge.theirsChanged.length - 6} more` : ''}.`}{' '}
-          Nothing of yours has been saved, and your entries are still in the form.
-        </p>
-        <p>
-          <strong>Carry my changes over</strong> puts every value you changed on top of version{' '}
-          {conflict.theirs.version} and keeps theirs elsewhere
-          {merge.bothChanged.length > 0
-            ? `; where you both changed a value (${merge.bothChanged.join(', ')}), yours is kept`
-            : ''}
-          . Nothing is saved until you press Save.
-        </p>
-        <ConflictChoice
-          onCarry={() => choice.carry(conflict.theirs, climateToForm(merge.merged))}
-          onLoad={() => choice.load(conflict.theirs, climateToForm(conflict.theirs.climate))}
-          loadLabel="Load the saved climate (discard my edits)"
-        />
-      </Notice>
-    ) : choice.carriedOnto !== null ? (
-      <CarriedNotice onto={choice.carriedOnto} version="version" />
-    ) : null;
+  const banner = (
+    <ConflictBanner choice={choice} title="Someone else saved the climate first." version="version">
+      {conflict && merge ? (
+        <>
+          <p>
+            Version <span className="num">{conflict.theirs.version}</span> was saved at{' '}
+            <span className="num">{formatDateTime(conflict.theirs.updatedAt)}</span> while you were editing
+            version <span className="num">{conflict.base.version}</span>.{' '}
+            {merge.theirsChanged.length === 0
+              ? 'They saved the climate without changing a value.'
+              : `They changed the climate: ${merge.theirsChanged.slice(0, 6).join(', ')}${merge.theirsChanged.length > 6 ? ` and ${merge.theirsChanged.length - 6} more` : ''}.`}{' '}
+            Nothing of yours has been saved, and your entries are still in the form.
+          </p>
+          <p>
+            <strong>Carry my changes over</strong> puts every value you changed on top of version{' '}
+            {conflict.theirs.version} and keeps theirs elsewhere
+            {merge.bothChanged.length > 0
+              ? `; where you both changed a value (${merge.bothChanged.join(', ')}), yours is kept`
+              : ''}
+            . Nothing is saved until you press Save.
+          </p>
+          <ConflictChoice
+            onCarry={() => choice.carry(conflict.theirs, climateToForm(merge.merged))}
+            onLoad={() => choice.load(conflict.theirs, climateToForm(conflict.theirs.climate))}
+            loadLabel="Load the saved climate (discard my edits)"
+          />
+        </>
+      ) : null}
+    </ConflictBanner>
+  );
 
   return (
     <ClimateForm

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { type ReactNode, useState } from 'react';
 import { Button } from '../../../components/ui/Button';
 import { Notice } from '../../../components/ui/Notice';
 
@@ -6,9 +6,14 @@ import { Notice } from '../../../components/ui/Notice';
  * The two ways on after someone saved first (project and climate editors): carry this person's changes onto
  * the saved version, or load that version; `carriedOnto` remembers the version carried onto, for the notice.
  */
-export function useConflictChoice<R extends { version: number }, F>(restart: (next: R, form: F) => void) {
+export function useConflictChoice<R extends { version: number }, F>(
+  conflict: unknown,
+  restart: (next: R, form: F) => void,
+) {
   const [carriedOnto, setCarriedOnto] = useState<number | null>(null);
   return {
+    /** A conflict is open. */
+    open: conflict !== null,
     carriedOnto,
     carry: (theirs: R, form: F) => {
       setCarriedOnto(theirs.version);
@@ -44,15 +49,30 @@ export function ConflictChoice({
   );
 }
 
-/** After carrying over: the changes now sit on the saved version and still need saving. */
-export function CarriedNotice({
-  onto,
+/**
+ * An editor's banner above its save bar: while a conflict is open, the warning with what happened and the two
+ * ways on (children); after carrying over, the note that the changes still need saving; else nothing.
+ */
+export function ConflictBanner({
+  choice: { open, carriedOnto },
+  title,
   version,
+  children,
 }: {
-  onto: number /** "version", "revision" */;
+  choice: { open: boolean; carriedOnto: number | null };
+  title: string;
+  /** What the record's numbers are called: "version", "revision". */
   version: string;
+  children: ReactNode;
 }) {
-  return (
-    <Notice tone="info" title={`Your changes are now on top of ${version} ${onto}. Check them, then save.`} />
-  );
+  return open ? (
+    <Notice tone="warning" title={title} live>
+      {children}
+    </Notice>
+  ) : carriedOnto !== null ? (
+    <Notice
+      tone="info"
+      title={`Your changes are now on top of ${version} ${carriedOnto}. Check them, then save.`}
+    />
+  ) : null;
 }

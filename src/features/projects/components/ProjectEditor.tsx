@@ -1,5 +1,4 @@
 import type { Project, ProjectInput } from '@shared/schemas/project';
-import { Notice } from '../../../components/ui/Notice';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format';
 import {
@@ -11,7 +10,7 @@ import { useUnitSystem } from '../../../lib/unit-system';
 import { useConflictEdit } from '../../../lib/use-conflict-edit';
 import { conflictingProject, useUpdateProject } from '../api/update-project';
 import { editFormProps } from '../edit-form';
-import { CarriedNotice, ConflictChoice, useConflictChoice } from './ConflictChoice';
+import { ConflictBanner, ConflictChoice, useConflictChoice } from './ConflictChoice';
 import { ProjectForm, type ProjectFormValues, projectToFormValues } from './ProjectForm';
 
 type Field = keyof ProjectInput;
@@ -54,7 +53,7 @@ export function ProjectEditor({ project, onDone }: { project: Project; onDone: (
     projectToFormValues,
     conflictingProject,
   );
-  const choice = useConflictChoice(restart);
+  const choice = useConflictChoice(conflict, restart);
 
   const save = (values: ProjectInput) =>
     saveVersion(
@@ -74,66 +73,68 @@ export function ProjectEditor({ project, onDone }: { project: Project; onDone: (
 
   const show = (f: Field, v: unknown) => formatProjectFieldValue(f, v, system);
 
-  const banner = conflict ? (
-    <Notice tone="warning" title="Someone else saved the site data first." live>
-      <p>
-        Revision <span className="num">{conflict.theirs.version}</span> was saved at{' '}
-        <span className="num">{formatDateTime(conflict.theirs.updatedAt)}</span> while you were editing
-        revision <span className="num">{conflict.base.version}</span>. Nothing of yours has been saved yet,
-        and your edits are still in the form above.
-      </p>
-      {rows.length > 0 ? (
-        <Table
-          caption="Where your edits and the saved revision differ"
-          head={[
-            'Field',
-            <>You started from (rev. {conflict.base.version})</>,
-            'Yours, not saved',
-            <>Saved (rev. {conflict.theirs.version})</>,
-          ]}
-        >
-          <tbody>
-            {rows.map((r) => (
-              <tr key={r.field}>
-                <Th scope="row" className="border-b border-rule font-normal">
-                  {projectFieldLabel(r.field)}
-                  {r.mineChanged && r.theirsChanged ? (
-                    <span className="block text-xs font-semibold">changed by both</span>
-                  ) : null}
-                </Th>
-                <Td className="num">{show(r.field, conflict.base[r.field])}</Td>
-                <Td className={`num ${r.mineChanged ? 'font-semibold' : ''}`}>
-                  {show(r.field, conflict.mine[r.field])}
-                  {r.mineChanged ? <span className="sr-only"> (your change)</span> : null}
-                </Td>
-                <Td className={`num ${r.theirsChanged ? 'font-semibold' : ''}`}>
-                  {show(r.field, conflict.theirs[r.field])}
-                  {r.theirsChanged ? <span className="sr-only"> (their change)</span> : null}
-                </Td>
-              </tr>
-            ))}
-          </tbody>
-        </Table>
-      ) : (
-        <p>Your values and the saved revision are the same.</p>
-      )}
-      <p>
-        <strong>Carry my changes over</strong> puts your changes on top of the saved revision and keeps theirs
-        elsewhere
-        {bothChanged.length > 0
-          ? `; where you both changed a field (${bothChanged.map((r) => projectFieldLabel(r.field)).join(', ')}), yours is kept`
-          : ''}
-        . Nothing is saved until you press Save.
-      </p>
-      <ConflictChoice
-        onCarry={() => choice.carry(conflict.theirs, mergeEdits(conflict))}
-        onLoad={() => choice.load(conflict.theirs, projectToFormValues(conflict.theirs))}
-        loadLabel="Load the saved revision (discard my edits)"
-      />
-    </Notice>
-  ) : choice.carriedOnto !== null ? (
-    <CarriedNotice onto={choice.carriedOnto} version="revision" />
-  ) : null;
+  const banner = (
+    <ConflictBanner choice={choice} title="Someone else saved the site data first." version="revision">
+      {conflict ? (
+        <>
+          <p>
+            Revision <span className="num">{conflict.theirs.version}</span> was saved at{' '}
+            <span className="num">{formatDateTime(conflict.theirs.updatedAt)}</span> while you were editing
+            revision <span className="num">{conflict.base.version}</span>. Nothing of yours has been saved
+            yet, and your edits are still in the form above.
+          </p>
+          {rows.length > 0 ? (
+            <Table
+              caption="Where your edits and the saved revision differ"
+              head={[
+                'Field',
+                <>You started from (rev. {conflict.base.version})</>,
+                'Yours, not saved',
+                <>Saved (rev. {conflict.theirs.version})</>,
+              ]}
+            >
+              <tbody>
+                {rows.map((r) => (
+                  <tr key={r.field}>
+                    <Th scope="row" className="border-b border-rule font-normal">
+                      {projectFieldLabel(r.field)}
+                      {r.mineChanged && r.theirsChanged ? (
+                        <span className="block text-xs font-semibold">changed by both</span>
+                      ) : null}
+                    </Th>
+                    <Td className="num">{show(r.field, conflict.base[r.field])}</Td>
+                    <Td className={`num ${r.mineChanged ? 'font-semibold' : ''}`}>
+                      {show(r.field, conflict.mine[r.field])}
+                      {r.mineChanged ? <span className="sr-only"> (your change)</span> : null}
+                    </Td>
+                    <Td className={`num ${r.theirsChanged ? 'font-semibold' : ''}`}>
+                      {show(r.field, conflict.theirs[r.field])}
+                      {r.theirsChanged ? <span className="sr-only"> (their change)</span> : null}
+                    </Td>
+                  </tr>
+                ))}
+              </tbody>
+            </Table>
+          ) : (
+            <p>Your values and the saved revision are the same.</p>
+          )}
+          <p>
+            <strong>Carry my changes over</strong> puts your changes on top of the saved revision and keeps
+            theirs elsewhere
+            {bothChanged.length > 0
+              ? `; where you both changed a field (${bothChanged.map((r) => projectFieldLabel(r.field)).join(', ')}), yours is kept`
+              : ''}
+            . Nothing is saved until you press Save.
+          </p>
+          <ConflictChoice
+            onCarry={() => choice.carry(conflict.theirs, mergeEdits(conflict))}
+            onLoad={() => choice.load(conflict.theirs, projectToFormValues(conflict.theirs))}
+            loadLabel="Load the saved revision (discard my edits)"
+          />
+        </>
+      ) : null}
+    </ConflictBanner>
+  );
 
   return (
     <ProjectForm

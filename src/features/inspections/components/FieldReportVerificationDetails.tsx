@@ -1,7 +1,7 @@
 import { ITEM_STATE_TEXT } from '@shared/inspections/schema';
 import type { FieldReportVerification } from '@shared/schemas/sheets';
 import { formatDateTime } from '../../../lib/format';
-import { VerifiedBy } from '../../sheets/components/SheetVerificationDetails';
+import { AssemblyRow, VerifiedBy } from '../../sheets/components/SheetVerificationDetails';
 import { areaText } from '../scope';
 
 /**
@@ -22,33 +22,18 @@ export function FieldReportVerificationDetails({ report }: { report: FieldReport
       what="field report"
       code={report.code}
       issuer={report.issuer}
+      by={{ term: 'Printed by', account: issuedBy }}
+      project={report.project}
+      hash={{ term: 'Report hash (SHA-256)', value: report.hash }}
       footer="Compare the handle and the hash with the report you were given: a copy may carry the same firm and project names. This confirms that a report with this content was issued as of the date above; the wall may have changed since. It is an inspection record, not an approval: the licensed professional of record, the local code and the authority having jurisdiction govern."
     >
-      <dt className="font-semibold">Printed by</dt>
-      <dd>
-        {issuedBy ? (
-          <>
-            {issuedBy.name}, e-mail at <span className="break-words">{issuedBy.emailDomain}</span>
-          </>
-        ) : (
-          'an account since removed'
-        )}
-      </dd>
-      <dt className="font-semibold">Project</dt>
-      <dd>
-        {report.project.name}
-        {report.project.number ? ` · No. ${report.project.number}` : ''}
-      </dd>
       <dt className="font-semibold">Inspection</dt>
       <dd data-testid="report-inspection">
         No. <span className="num">{inspection.number}</span> — {inspection.title}
         <br />
         {inspection.elevation} · {areaText(inspection.area)}
       </dd>
-      <dt className="font-semibold">Assembly</dt>
-      <dd>
-        {report.assembly.name}, revision <span className="num">{report.assembly.revision}</span>
-      </dd>
+      <AssemblyRow assembly={report.assembly} />
       <dt className="font-semibold">State in the report</dt>
       <dd>
         <span className="font-semibold">{inspection.status === 'closed' ? 'Closed' : 'In progress'}</span>
@@ -61,10 +46,6 @@ export function FieldReportVerificationDetails({ report }: { report: FieldReport
       <dd>{formatDateTime(report.asOf)}</dd>
       <dt className="font-semibold">First printed</dt>
       <dd>{formatDateTime(report.issuedAt)}</dd>
-      <dt className="font-semibold">Report hash (SHA-256)</dt>
-      <dd className="num break-all text-xs" data-testid="run-hash">
-        {report.hash}
-      </dd>
     </VerifiedBy>
   );
 }

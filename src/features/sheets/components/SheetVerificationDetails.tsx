@@ -8,19 +8,28 @@ import { formatDate, formatDateTime } from '../../../lib/format';
 /**
  * What a verification code confirms, framed by who issued it. A firm's name proves nothing (anyone may make a
  * firm of any name), so the issuer is shown with its unique handle and whether a site administrator has
- * verified it; a sheet or report from an unverified firm is not presented as vouched for. `children` are the
- * rows of what the code confirms (a `<dt>`/`<dd>` pair each), `footer` how to compare it with the paper.
+ * verified it; a sheet or report from an unverified firm is not presented as vouched for. Who made the
+ * record, its project and its hash frame `children`, the rows of what else the code confirms (a `<dt>`/`<dd>`
+ * pair each); `footer` says how to compare it with the paper.
  */
 export function VerifiedBy({
   what,
   code,
   issuer,
+  by,
+  project,
+  hash,
   children,
   footer,
 }: {
   what: string;
   code: string;
   issuer: SheetIssuer;
+  /** Who made the record under the code ("Checks run by", "Printed by"); `null` once the account is removed. */
+  by: { term: string; account: SheetVerification['ranBy'] };
+  project: SheetVerification['project'];
+  /** The record's hash, the last row, under `term` ("Run hash (SHA-256)"). */
+  hash: { term: string; value: string };
   children: ReactNode;
   footer: ReactNode;
 }) {
@@ -74,7 +83,26 @@ export function VerifiedBy({
             </span>
           )}
         </dd>
+        <dt className="font-semibold">{by.term}</dt>
+        <dd>
+          {by.account ? (
+            <>
+              {by.account.name}, e-mail at <span className="break-words">{by.account.emailDomain}</span>
+            </>
+          ) : (
+            'an account since removed'
+          )}
+        </dd>
+        <dt className="font-semibold">Project</dt>
+        <dd>
+          {project.name}
+          {project.number ? ` · No. ${project.number}` : ''}
+        </dd>
         {children}
+        <dt className="font-semibold">{hash.term}</dt>
+        <dd className="num break-all text-xs" data-testid="run-hash">
+          {hash.value}
+        </dd>
       </dl>
       <p className="text-xs text-ink-muted">{footer}</p>
     </section>
@@ -83,34 +111,18 @@ export function VerifiedBy({
 
 /** What a compliance sheet's code confirms: the check run it prints. */
 export function SheetVerificationDetails({ sheet }: { sheet: SheetVerification }) {
-  const { ranBy } = sheet;
   const verdict = VERDICT_TEXT[sheet.verdict];
   return (
     <VerifiedBy
       what="sheet"
       code={sheet.code}
       issuer={sheet.issuer}
+      by={{ term: 'Checks run by', account: sheet.ranBy }}
+      project={sheet.project}
+      hash={{ term: 'Run hash (SHA-256)', value: sheet.hash }}
       footer="Compare the handle and the hash with the sheet you were given: a copy may carry the same firm and project names. This confirms that a sheet with this content was issued; it does not approve the design. The licensed professional of record, the local code and the authority having jurisdiction govern."
     >
-      <dt className="font-semibold">Checks run by</dt>
-      <dd>
-        {ranBy ? (
-          <>
-            {ranBy.name}, e-mail at <span className="break-words">{ranBy.emailDomain}</span>
-          </>
-        ) : (
-          'an account since removed'
-        )}
-      </dd>
-      <dt className="font-semibold">Project</dt>
-      <dd>
-        {sheet.project.name}
-        {sheet.project.number ? ` · No. ${sheet.project.number}` : ''}
-      </dd>
-      <dt className="font-semibold">Assembly</dt>
-      <dd>
-        {sheet.assembly.name}, revision <span className="num">{sheet.assembly.revision}</span>
-      </dd>
+      <AssemblyRow assembly={sheet.assembly} />
       <dt className="font-semibold">Code table</dt>
       <dd>
         {sheet.criteriaSet.name}, version <span className="num">{sheet.criteriaSet.version}</span>
@@ -123,10 +135,18 @@ export function SheetVerificationDetails({ sheet }: { sheet: SheetVerification }
         <span className="uppercase tracking-wide">{verdict.word}</span>
         <span className="font-normal text-ink"> — {verdict.sentence}</span>
       </dd>
-      <dt className="font-semibold">Run hash (SHA-256)</dt>
-      <dd className="num break-all text-xs" data-testid="run-hash">
-        {sheet.hash}
-      </dd>
     </VerifiedBy>
+  );
+}
+
+/** The assembly a verified record is of, by name and revision. */
+export function AssemblyRow({ assembly }: { assembly: SheetVerification['assembly'] }) {
+  return (
+    <>
+      <dt className="font-semibold">Assembly</dt>
+      <dd>
+        {assembly.name}, revision <span className="num">{assembly.revision}</span>
+      </dd>
+    </>
   );
 }

@@ -56,7 +56,7 @@ export function useUpdateSubmittal(id: string) {
   });
 }
 
-type Step =
+export type SubmittalStep =
   | { kind: 'submit'; version: number }
   | { kind: 'review'; version: number }
   | ({ kind: 'decision' } & SubmittalDecisionInput)
@@ -70,7 +70,7 @@ export function useSubmittalStep(id: string) {
   const settle = useSettle();
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ kind, ...body }: Step) => {
+    mutationFn: ({ kind, ...body }: SubmittalStep) => {
       switch (kind) {
         case 'submit':
         case 'review':

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
-import { Controller, useFormContext } from 'react-hook-form';
-import { Field } from '../../../components/ui/Field';
+import { Controller, type UseFormRegisterReturn, useFormContext } from 'react-hook-form';
+import { Field, type FieldControlProps } from '../../../components/ui/Field';
 import { LabelledOptions } from '../../../components/ui/Options';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { Select } from '../../../components/ui/Select';
@@ -67,83 +67,109 @@ export function MeasureField({
   );
 }
 
-/** A text box wired to the form. */
-export function TextField({
-  path,
-  label,
-  hint,
-  required,
-  className,
-  maxLength,
-}: {
+/** A number box of a table: the field under the row's path, its measure, label, width and hint. */
+export type MeasureBox = readonly [
+  key: string,
+  measure: Measure,
+  label: string,
+  className: string,
+  hint?: string,
+];
+
+/** A table's number boxes, each at `base`.`key`. */
+export function MeasureFields({ base, boxes }: { base: string; boxes: readonly MeasureBox[] }) {
+  return boxes.map(([key, measure, label, className, hint]) => (
+    <MeasureField
+      key={key}
+      path={`${base}.${key}`}
+      measure={measure}
+      label={label}
+      className={className}
+      hint={hint}
+    />
+  ));
+}
+
+interface WiredProps {
   path: string;
   label: ReactNode;
   hint?: ReactNode;
   required?: boolean;
   className?: string;
-  maxLength?: number;
-}) {
+}
+
+/** A `Field` at the form's `path`: its reason and its id (for the problem links) come from the path. */
+function WiredField({
+  path,
+  children,
+  ...field
+}: WiredProps & { children: (control: FieldControlProps & UseFormRegisterReturn) => ReactNode }) {
   const { register } = useFormContext<AssemblyFormValues>();
   const error = useFieldError(path);
   return (
-    <Field
-      label={label}
-      hint={hint}
-      error={error}
-      required={required}
-      id={fieldDomId(path)}
-      className={className}
-    >
-      {(c) => (
-        <TextInput
-          {...c}
-          {...register(p(path))}
-          autoComplete="off"
-          maxLength={maxLength}
-          className="py-1.5 text-sm"
-        />
-      )}
+    <Field {...field} error={error} id={fieldDomId(path)}>
+      {(c) => children({ ...c, ...register(p(path)) })}
     </Field>
+  );
+}
+
+/** A text box wired to the form. */
+export function TextField({ maxLength, ...wired }: WiredProps & { maxLength?: number }) {
+  return (
+    <WiredField {...wired}>
+      {(c) => <TextInput {...c} autoComplete="off" maxLength={maxLength} className="py-1.5 text-sm" />}
+    </WiredField>
   );
 }
 
 /** A select wired to the form. */
 export function SelectField({
-  path,
-  label,
   options,
-  hint,
-  className,
   placeholder,
-  required,
-}: {
-  path: string;
-  label: ReactNode;
+  ...wired
+}: WiredProps & {
   options: readonly { value: string; label: string }[];
-  hint?: ReactNode;
-  className?: string;
   /** A first, empty choice ("Choose…") for a required choice with no default. */
   placeholder?: string;
-  required?: boolean;
 }) {
-  const { register } = useFormContext<AssemblyFormValues>();
-  const error = useFieldError(path);
   return (
-    <Field
-      label={label}
-      hint={hint}
-      error={error}
-      required={required}
-      id={fieldDomId(path)}
-      className={className}
-    >
+    <WiredField {...wired}>
       {(c) => (
-        <Select {...c} {...register(p(path))} className="py-1.5 text-sm">
+        <Select {...c} className="py-1.5 text-sm">
           {placeholder === undefined ? null : <option value="">{placeholder}</option>}
           <LabelledOptions options={options} />
         </Select>
       )}
-    </Field>
+    </WiredField>
+  );
+}
+
+/** A small bordered button of the editors' rows (move, remove). */
+export const iconButton =
+  'inline-flex h-8 min-w-8 items-center justify-center rounded-sm border border-rule-strong bg-paper-raised px-2 ' +
+  'text-sm hover:bg-paper-sunk disabled:cursor-not-allowed disabled:opacity-40';
+
+interface CheckBoxProps {
+  label: ReactNode;
+  checked: boolean;
+  onChange: (checked: boolean) => void;
+}
+
+/** A checkbox with its words, set beside the boxes of a row. */
+export function CheckBox({ label, checked, onChange }: CheckBoxProps) {
+  const box = (
+    <input
+      type="checkbox"
+      className="accent-ink"
+      checked={checked}
+      onChange={(e) => onChange(e.target.checked)}
+    />
+  );
+  return (
+    <label className="flex items-center gap-2 pt-6 text-sm">
+      {box}
+      {label}
+    </label>
   );
 }
 

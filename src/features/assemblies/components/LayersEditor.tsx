@@ -25,9 +25,25 @@ import {
 } from '../form';
 import { CATEGORY_LABELS } from '../layer-class';
 import { formatMeasure } from '../units';
-import { BlockError, MeasureField, TextField, useFieldError } from './FormFields';
+import {
+  BlockError,
+  CheckBox,
+  iconButton,
+  type MeasureBox,
+  MeasureField,
+  MeasureFields,
+  TextField,
+  useFieldError,
+} from './FormFields';
 
 type LayersArray = UseFieldArrayReturn<AssemblyFormValues, 'thermal.layers', 'key'>;
+
+/** The boxes of one layer kind: the layer at `index` of the list. */
+type KindProps<K extends Layer['kind']> = {
+  index: number;
+  layer: Extract<Layer, { kind: K }>;
+  array: LayersArray;
+};
 
 const VENTILATION = [
   { value: 'unventilated', label: 'Unventilated' },
@@ -35,9 +51,41 @@ const VENTILATION = [
   { value: 'well', label: 'Well ventilated (layers outside it are disregarded)' },
 ] as const;
 
-const iconButton =
-  'inline-flex h-8 min-w-8 items-center justify-center rounded-sm border border-rule-strong bg-paper-raised px-2 ' +
-  'text-sm text-ink hover:bg-paper-sunk disabled:cursor-not-allowed disabled:opacity-40';
+/** Each kind's number boxes (a layer's field, measure, label, width, hint). */
+const BOXES: Record<string, readonly MeasureBox[]> = {
+  homogeneous: [
+    ['thickness', 'thickness', 'Thickness d', 'w-36'],
+    ['conductivity', 'conductivity', 'λ', 'w-52'],
+  ],
+  resistance: [
+    ['resistance', 'resistance', 'Declared R', 'w-48', "From the maker's declaration."],
+    [
+      'thickness',
+      'thickness',
+      'Thickness d',
+      'w-36',
+      'Needed with metal framing: the zone method measures through every layer.',
+    ],
+  ],
+  airDepth: [['thickness', 'thickness', 'Depth in the heat-flow direction', 'w-48']],
+  ventArea: [
+    [
+      'ventArea',
+      'ventArea',
+      'Vent area A_v',
+      'w-56',
+      'Openings per m of length (vertical layer) or per m² (horizontal); ISO 6946 §6.9.3 blends R between unventilated and well ventilated.',
+    ],
+  ],
+  emittance: [
+    ['emissivityFactor', 'emittance', 'Intersurface emittance E', 'w-52', 'E = 1/(1/ε₁ + 1/ε₂ − 1)'],
+  ],
+  framedDepth: [['thickness', 'thickness', 'Depth d', 'w-36']],
+  metal: [
+    ['flangeWidth', 'spacing', 'Flange width m', 'w-40'],
+    ['spacing', 'spacing', 'Spacing s (on centre)', 'w-44'],
+  ],
+};
 
 /** Layers outside → inside: add from a library or by hand, reorder with buttons, remove, edit by kind. */
 export function LayersEditor() {
@@ -209,7 +257,7 @@ function LayerRow({
             <button
               type="button"
               id={`layer-${rowKey}-out`}
-              className={iconButton}
+              className={`${iconButton} text-ink`}
               disabled={i === 0}
               aria-label={`Move ${label} outward (up)`}
               title="Move outward"
@@ -220,7 +268,7 @@ function LayerRow({
             <button
               type="button"
               id={`layer-${rowKey}-in`}
-              className={iconButton}
+              className={`${iconButton} text-ink`}
               disabled={i === count - 1}
               aria-label={`Move ${label} inward (down)`}
               title="Move inward"
@@ -230,7 +278,7 @@ function LayerRow({
             </button>
             <button
               type="button"
-              className={`${iconButton} text-caution`}
+              className={`${iconButton} text-ink text-caution`}
               aria-label={`Remove ${label}`}
               title="Remove"
               onClick={onRemove}
@@ -242,33 +290,14 @@ function LayerRow({
 
         {layer.kind === 'homogeneous' ? (
           <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-            <MeasureField
-              path={`${base}.thickness`}
-              measure="thickness"
-              label="Thickness d"
-              className="w-36"
-            />
-            <MeasureField path={`${base}.conductivity`} measure="conductivity" label="λ" className="w-52" />
+            <MeasureFields base={base} boxes={BOXES.homogeneous} />
             <MaterialSource materialId={layer.materialId} conductivity={layer.conductivity} />
           </div>
         ) : null}
 
         {layer.kind === 'resistance' ? (
           <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-            <MeasureField
-              path={`${base}.resistance`}
-              measure="resistance"
-              label="Declared R"
-              className="w-48"
-              hint="From the maker's declaration."
-            />
-            <MeasureField
-              path={`${base}.thickness`}
-              measure="thickness"
-              label="Thickness d"
-              className="w-36"
-              hint="Needed with metal framing: the zone method measures through every layer."
-            />
+            <MeasureFields base={base} boxes={BOXES.resistance} />
           </div>
         ) : null}
 
@@ -312,25 +341,12 @@ function MaterialSource({ materialId, conductivity }: { materialId?: string; con
   );
 }
 
-function AirFields({
-  index: i,
-  layer,
-  array,
-}: {
-  index: number;
-  layer: Extract<Layer, { kind: 'air' }>;
-  array: LayersArray;
-}) {
+function AirFields({ index: i, layer, array }: KindProps<'air'>) {
   const base = `thermal.layers.${i}`;
   const lowE = layer.emissivityFactor !== undefined;
   return (
     <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-      <MeasureField
-        path={`${base}.thickness`}
-        measure="thickness"
-        label="Depth in the heat-flow direction"
-        className="w-48"
-      />
+      <MeasureFields base={base} boxes={BOXES.airDepth} />
       <LabelledSelect
         label="Ventilation"
         className="min-w-64"
@@ -347,51 +363,23 @@ function AirFields({
       >
         <LabelledOptions options={VENTILATION} />
       </LabelledSelect>
-      {layer.ventilation === 'slightly' ? (
-        <MeasureField
-          path={`${base}.ventArea`}
-          measure="ventArea"
-          label="Vent area A_v"
-          hint="Openings per m of length (vertical layer) or per m² (horizontal); ISO 6946 §6.9.3 blends R between unventilated and well ventilated."
-          className="w-56"
-        />
-      ) : null}
+      {layer.ventilation === 'slightly' ? <MeasureFields base={base} boxes={BOXES.ventArea} /> : null}
       <div className="flex flex-col gap-2">
-        <label className="flex items-center gap-2 pt-6 text-sm">
-          <input
-            type="checkbox"
-            className="accent-ink"
-            checked={lowE}
-            onChange={(e) => {
-              const { emissivityFactor: _drop, ...rest } = layer;
-              array.update(i, e.target.checked ? { ...rest, emissivityFactor: 0.05 } : rest);
-            }}
-          />
-          Low-emissivity face (give E)
-        </label>
-      </div>
-      {lowE ? (
-        <MeasureField
-          path={`${base}.emissivityFactor`}
-          measure="emittance"
-          label="Intersurface emittance E"
-          hint="E = 1/(1/ε₁ + 1/ε₂ − 1)"
-          className="w-52"
+        <CheckBox
+          label="Low-emissivity face (give E)"
+          checked={lowE}
+          onChange={(checked) => {
+            const { emissivityFactor: _drop, ...rest } = layer;
+            array.update(i, checked ? { ...rest, emissivityFactor: 0.05 } : rest);
+          }}
         />
-      ) : null}
+      </div>
+      {lowE ? <MeasureFields base={base} boxes={BOXES.emittance} /> : null}
     </div>
   );
 }
 
-function FramedFields({
-  index: i,
-  layer,
-  array,
-}: {
-  index: number;
-  layer: Extract<Layer, { kind: 'framed' }>;
-  array: LayersArray;
-}) {
+function FramedFields({ index: i, layer, array }: KindProps<'framed'>) {
   const base = `thermal.layers.${i}`;
   const { control, setValue } = useFormContext<AssemblyFormValues>();
   const sections = useFieldArray({
@@ -407,45 +395,26 @@ function FramedFields({
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-        <MeasureField path={`${base}.thickness`} measure="thickness" label="Depth d" className="w-36" />
-        <label className="flex items-center gap-2 pt-6 text-sm">
-          <input
-            type="checkbox"
-            className="accent-ink"
-            checked={layer.metal}
-            onChange={(e) => {
-              const { flangeWidth, spacing, ...restOf } = layer;
-              array.update(
-                i,
-                e.target.checked
-                  ? {
-                      ...restOf,
-                      metal: true,
-                      flangeWidth: Number.isFinite(flangeWidth) ? flangeWidth : 0.041,
-                      spacing: Number.isFinite(spacing) ? spacing : 0.406,
-                    }
-                  : { ...restOf, metal: false },
-              );
-            }}
-          />
-          Metal framing (zone method)
-        </label>
-        {layer.metal ? (
-          <>
-            <MeasureField
-              path={`${base}.flangeWidth`}
-              measure="spacing"
-              label="Flange width m"
-              className="w-40"
-            />
-            <MeasureField
-              path={`${base}.spacing`}
-              measure="spacing"
-              label="Spacing s (on centre)"
-              className="w-44"
-            />
-          </>
-        ) : null}
+        <MeasureFields base={base} boxes={BOXES.framedDepth} />
+        <CheckBox
+          label="Metal framing (zone method)"
+          checked={layer.metal}
+          onChange={(checked) => {
+            const { flangeWidth, spacing, ...restOf } = layer;
+            array.update(
+              i,
+              checked
+                ? {
+                    ...restOf,
+                    metal: true,
+                    flangeWidth: Number.isFinite(flangeWidth) ? flangeWidth : 0.041,
+                    spacing: Number.isFinite(spacing) ? spacing : 0.406,
+                  }
+                : { ...restOf, metal: false },
+            );
+          }}
+        />
+        {layer.metal ? <MeasureFields base={base} boxes={BOXES.metal} /> : null}
       </div>
 
       <fieldset className="border-l-2 border-rule pl-3">
@@ -474,7 +443,7 @@ function FramedFields({
               />
               <button
                 type="button"
-                className={`${iconButton} mt-6 text-caution`}
+                className={`${iconButton} mt-6 text-ink text-caution`}
                 aria-label={`Remove section ${q + 1}`}
                 disabled={sections.fields.length <= 1}
                 onClick={() => sections.remove(q)}

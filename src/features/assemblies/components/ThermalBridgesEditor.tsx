@@ -1,18 +1,27 @@
 import type { Bridge, Layer } from '@shared/calc/thermal/schema';
 import type { BridgeValue } from '@shared/schemas/assembly';
 import { isInsulation } from '@shared/sheets/layer-class';
-import { lazy, Suspense, useState } from 'react';
+import { Fragment, lazy, Suspense, useState } from 'react';
 import { type UseFieldArrayReturn, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { Button } from '../../../components/ui/Button';
 import { LabelledSelect } from '../../../components/ui/LabelledSelect';
 import { Loading } from '../../../components/ui/Loading';
+import { LabelledOptions } from '../../../components/ui/Options';
 import { RadioGroup } from '../../../components/ui/RadioGroup';
 import { useUnitSystem } from '../../../lib/unit-system';
 import { fieldDomId } from '../evaluate';
 import { type AssemblyFormValues, type BridgeRole, newBridge, p, useBuilder } from '../form';
 import type { SolvedSource } from '../solve/BridgeSolveDialog';
 import { formatMeasure } from '../units';
-import { BlockError, MeasureField, TextField, useFieldError } from './FormFields';
+import {
+  BlockError,
+  CheckBox,
+  iconButton,
+  type MeasureBox,
+  MeasureFields,
+  TextField,
+  useFieldError,
+} from './FormFields';
 
 type BridgesArray = UseFieldArrayReturn<AssemblyFormValues, 'thermal.bridges', 'key'>;
 
@@ -30,10 +39,6 @@ const ROLE_TITLES: Record<Bridge['kind'], string> = {
   linear: 'Girts or rails — linear bridges ψ',
   fastener: 'Fasteners through the insulation — ISO 6946 Annex F',
 };
-
-const iconButton =
-  'inline-flex h-8 min-w-8 items-center justify-center rounded-sm border border-rule-strong bg-paper-raised px-2 ' +
-  'text-sm hover:bg-paper-sunk';
 
 /** How the cladding is held, and the bridges it makes through the insulation. */
 export function ThermalBridgesEditor() {
@@ -137,8 +142,7 @@ function BridgeRow({ index: j, array }: { index: number; array: BridgesArray }) 
             <span aria-hidden="true">✕</span>
           </button>
         </div>
-        {bridge.kind === 'point' ? <PointFields index={j} bridge={bridge} array={array} /> : null}
-        {bridge.kind === 'linear' ? <LinearFields index={j} bridge={bridge} array={array} /> : null}
+        {bridge.kind === 'fastener' ? null : <RatedFields index={j} bridge={bridge} array={array} />}
         {bridge.kind === 'fastener' ? <FastenerFields index={j} bridge={bridge} array={array} /> : null}
         <BlockError path={base} />
       </div>
@@ -150,130 +154,108 @@ type PointBridge = Extract<Bridge, { kind: 'point' }>;
 type LinearBridge = Extract<Bridge, { kind: 'linear' }>;
 type FastenerBridge = Extract<Bridge, { kind: 'fastener' }>;
 
-function PointFields({
-  index: j,
-  bridge,
-  array,
-}: {
-  index: number;
-  bridge: PointBridge;
-  array: BridgesArray;
-}) {
-  const base = `thermal.bridges.${j}`;
-  const bySpacing = 'spacingHorizontal' in bridge;
-  return (
-    <div className="flex flex-col gap-2">
-      <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-        <MeasureField path={`${base}.chi`} measure="chi" label="χ per clip" className="w-44" />
-        <SolveButton index={j} bridge={bridge} array={array} />
-        <LabelledSelect
-          label="Given by"
-          className="w-48"
-          value={bySpacing ? 'spacing' : 'count'}
-          onChange={(e) =>
-            array.update(
-              j,
-              e.target.value === 'spacing'
-                ? {
-                    kind: 'point',
-                    name: bridge.name,
-                    chi: bridge.chi,
-                    spacingHorizontal: 0.406,
-                    spacingVertical: 0.6,
-                  }
-                : { kind: 'point', name: bridge.name, chi: bridge.chi, countPerArea: 4 },
-            )
-          }
-        >
-          <option value="spacing">Spacing, horizontal × vertical</option>
-          <option value="count">Count per area</option>
-        </LabelledSelect>
-        {bySpacing ? (
-          <>
-            <MeasureField
-              path={`${base}.spacingHorizontal`}
-              measure="spacing"
-              label="Horizontal spacing"
-              className="w-40"
-            />
-            <span aria-hidden="true" className="pt-7 text-ink-muted">
-              ×
-            </span>
-            <MeasureField
-              path={`${base}.spacingVertical`}
-              measure="spacing"
-              label="Vertical spacing"
-              className="w-40"
-            />
-          </>
-        ) : (
-          <MeasureField path={`${base}.countPerArea`} measure="countPerArea" label="Clips" className="w-40" />
-        )}
-      </div>
-      <LibraryPick
-        index={j}
-        kind="point"
-        value={bridge.chi}
-        name={bridge.name}
-        array={array}
-        bridge={bridge}
-      />
-    </div>
-  );
-}
+/**
+ * How a point or linear bridge is given: its χ or ψ, then either of two ways of saying how many there are (the
+ * first box of each way is the field that tells which way a bridge is given; `make` switches a bridge to it).
+ */
+const RATES: Record<
+  'point' | 'linear',
+  {
+    rate: MeasureBox;
+    by: { value: string; label: string; boxes: MeasureBox[]; make: (b: RatedBridge) => Bridge }[];
+  }
+> = {
+  point: {
+    rate: ['chi', 'chi', 'χ per clip', 'w-44'],
+    by: [
+      {
+        value: 'spacing',
+        label: 'Spacing, horizontal × vertical',
+        boxes: [
+          ['spacingHorizontal', 'spacing', 'Horizontal spacing', 'w-40'],
+          ['spacingVertical', 'spacing', 'Vertical spacing', 'w-40'],
+        ],
+        make: (b) => ({ ...rated(b), spacingHorizontal: 0.406, spacingVertical: 0.6 }) as Bridge,
+      },
+      {
+        value: 'count',
+        label: 'Count per area',
+        boxes: [['countPerArea', 'countPerArea', 'Clips', 'w-40']],
+        make: (b) => ({ ...rated(b), countPerArea: 4 }) as Bridge,
+      },
+    ],
+  },
+  linear: {
+    rate: ['psi', 'psi', 'ψ per length', 'w-44'],
+    by: [
+      {
+        value: 'spacing',
+        label: 'Spacing on centre',
+        boxes: [['spacing', 'spacing', 'Spacing on centre', 'w-44']],
+        make: (b) => ({ ...rated(b), spacing: 1.2 }) as Bridge,
+      },
+      {
+        value: 'length',
+        label: 'Length per area',
+        boxes: [['lengthPerArea', 'lengthPerArea', 'Length per area', 'w-44']],
+        make: (b) => ({ ...rated(b), lengthPerArea: 0.8 }) as Bridge,
+      },
+    ],
+  },
+};
 
-function LinearFields({
+type RatedBridge = PointBridge | LinearBridge;
+
+/** The bridge's kind, name and χ or ψ, without how many there are. */
+const rated = (b: RatedBridge) =>
+  b.kind === 'point'
+    ? { kind: b.kind, name: b.name, chi: b.chi }
+    : { kind: b.kind, name: b.name, psi: b.psi };
+
+/** A point (clip) or linear (girt) bridge: χ or ψ, how many, and the firm library's values. */
+function RatedFields({
   index: j,
   bridge,
   array,
 }: {
   index: number;
-  bridge: LinearBridge;
+  bridge: RatedBridge;
   array: BridgesArray;
 }) {
   const base = `thermal.bridges.${j}`;
-  const bySpacing = 'spacing' in bridge;
+  const { rate, by } = RATES[bridge.kind];
+  const way = by.find((w) => w.boxes[0]![0] in bridge) ?? by[1]!;
+  const box = (b: MeasureBox) => <MeasureFields key={b[0]} base={base} boxes={[b]} />;
   return (
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-        <MeasureField path={`${base}.psi`} measure="psi" label="ψ per length" className="w-44" />
+        {box(rate)}
         <SolveButton index={j} bridge={bridge} array={array} />
         <LabelledSelect
           label="Given by"
           className="w-48"
-          value={bySpacing ? 'spacing' : 'length'}
-          onChange={(e) =>
-            array.update(
-              j,
-              e.target.value === 'spacing'
-                ? { kind: 'linear', name: bridge.name, psi: bridge.psi, spacing: 1.2 }
-                : { kind: 'linear', name: bridge.name, psi: bridge.psi, lengthPerArea: 0.8 },
-            )
-          }
+          value={way.value}
+          onChange={(e) => array.update(j, by.find((w) => w.value === e.target.value)!.make(bridge))}
         >
-          <option value="spacing">Spacing on centre</option>
-          <option value="length">Length per area</option>
+          <LabelledOptions options={by} />
         </LabelledSelect>
-        {bySpacing ? (
-          <MeasureField
-            path={`${base}.spacing`}
-            measure="spacing"
-            label="Spacing on centre"
-            className="w-44"
-          />
-        ) : (
-          <MeasureField
-            path={`${base}.lengthPerArea`}
-            measure="lengthPerArea"
-            label="Length per area"
-            className="w-44"
-          />
+        {way.boxes.map((b, k) =>
+          k === 0 ? (
+            box(b)
+          ) : (
+            <Fragment key={b[0]}>
+              <span aria-hidden="true" className="pt-7 text-ink-muted">
+                ×
+              </span>
+              {box(b)}
+            </Fragment>
+          ),
         )}
       </div>
       <LibraryPick
         index={j}
-        kind="linear"
-        value={bridge.psi}
+        kind={bridge.kind}
+        value={bridge.kind === 'point' ? bridge.chi : bridge.psi}
         name={bridge.name}
         array={array}
         bridge={bridge}
@@ -427,6 +409,14 @@ function LibraryPick({
   );
 }
 
+/** A fastener's number boxes; the recess depth only for a recessed head. */
+const FASTENER_BOXES: readonly MeasureBox[] = [
+  ['conductivity', 'conductivity', 'λ_f of the fastener', 'w-48'],
+  ['diameter', 'diameter', 'Shank diameter', 'w-36'],
+  ['countPerArea', 'countPerArea', 'Fasteners', 'w-36'],
+];
+const RECESS: readonly MeasureBox[] = [['recessDepth', 'thickness', 'Recess depth', 'w-36']];
+
 function FastenerFields({
   index: j,
   bridge,
@@ -442,14 +432,7 @@ function FastenerFields({
   const layerError = useFieldError(`${base}.layerIndex`);
   return (
     <div className="flex flex-wrap items-start gap-x-4 gap-y-2">
-      <MeasureField
-        path={`${base}.conductivity`}
-        measure="conductivity"
-        label="λ_f of the fastener"
-        className="w-48"
-      />
-      <MeasureField path={`${base}.diameter`} measure="diameter" label="Shank diameter" className="w-36" />
-      <MeasureField path={`${base}.countPerArea`} measure="countPerArea" label="Fasteners" className="w-36" />
+      <MeasureFields base={base} boxes={FASTENER_BOXES} />
       <LabelledSelect
         label="Layer crossed"
         error={layerError}
@@ -491,26 +474,15 @@ function FastenerFields({
         <option value="full">Through the whole layer</option>
         <option value="recessed">Recessed head</option>
       </LabelledSelect>
-      {bridge.penetration === 'recessed' ? (
-        <MeasureField
-          path={`${base}.recessDepth`}
-          measure="thickness"
-          label="Recess depth"
-          className="w-36"
-        />
-      ) : null}
-      <label className="flex items-center gap-2 pt-6 text-sm">
-        <input
-          type="checkbox"
-          className="accent-ink"
-          checked={bridge.bothEndsMetal === true}
-          onChange={(e) => {
-            const { bothEndsMetal: _was, ...rest } = bridge;
-            array.update(j, e.target.checked ? { ...rest, bothEndsMetal: true } : rest);
-          }}
-        />
-        Both ends touch metal sheets
-      </label>
+      {bridge.penetration === 'recessed' ? <MeasureFields base={base} boxes={RECESS} /> : null}
+      <CheckBox
+        label="Both ends touch metal sheets"
+        checked={bridge.bothEndsMetal === true}
+        onChange={(checked) => {
+          const { bothEndsMetal: _was, ...rest } = bridge;
+          array.update(j, checked ? { ...rest, bothEndsMetal: true } : rest);
+        }}
+      />
       <SolveButton index={j} bridge={bridge} array={array} />
       <BlockError path={`${base}.bothEndsMetal`} className="basis-full" />
     </div>

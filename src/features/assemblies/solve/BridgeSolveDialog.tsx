@@ -17,6 +17,7 @@ import { QuantityInput } from '../../../components/ui/QuantityInput';
 import { TextInput } from '../../../components/ui/TextInput';
 import { formatQuantity } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
+import { CheckBox } from '../components/FormFields';
 import { formatMeasure, type Measure, measureInput } from '../units';
 import {
   annexFChi,
@@ -434,28 +435,17 @@ function CrossedLayers({
   const options = layerOptions(wall, indices);
   return (
     <div className="flex flex-wrap items-end gap-x-4 gap-y-2">
-      <LabelledSelect
-        label="Crosses from layer"
-        className="min-w-48 flex-1"
-        value={inputs.from}
-        onChange={(e) => {
-          const from = Number(e.target.value);
-          onChange({ ...inputs, from, to: Math.max(from, inputs.to) });
-        }}
-      >
-        {options}
-      </LabelledSelect>
-      <LabelledSelect
-        label="to layer"
-        className="min-w-48 flex-1"
-        value={inputs.to}
-        onChange={(e) => {
-          const to = Number(e.target.value);
-          onChange({ ...inputs, to, from: Math.min(to, inputs.from) });
-        }}
-      >
-        {options}
-      </LabelledSelect>
+      {(['from', 'to'] as const).map((end) => (
+        <LabelledSelect
+          key={end}
+          label={end === 'from' ? 'Crosses from layer' : 'to layer'}
+          className="min-w-48 flex-1"
+          value={inputs[end]}
+          onChange={(e) => onChange(crossedTo(inputs, end, Number(e.target.value)))}
+        >
+          {options}
+        </LabelledSelect>
+      ))}
       <p className="pb-2 text-sm">
         {inputs.kind === 'girt' ? 'Girt depth' : inputs.kind === 'clip' ? 'Clip length' : 'Fastener length'}{' '}
         <span className="num font-semibold" data-testid="crossed-depth">
@@ -465,6 +455,12 @@ function CrossedLayers({
     </div>
   );
 }
+
+/** The crossing with one end moved to layer `k`; the other end follows so that from ≤ to. */
+const crossedTo = (inputs: Crossing, end: 'from' | 'to', k: number): Crossing =>
+  end === 'from'
+    ? { ...inputs, from: k, to: Math.max(k, inputs.to) }
+    : { ...inputs, to: k, from: Math.min(k, inputs.from) };
 
 /** The template wall's layers as options, numbered as on the build-up page. */
 const layerOptions = (wall: TemplateLayer[], indices: number[]) =>
@@ -614,15 +610,11 @@ function ClipFields({ inputs, onChange }: { inputs: ClipInputs; onChange: (next:
         <Boxes boxes={CLIP_SPACING} inputs={inputs} onChange={onChange} />
       </div>
       <div className={row}>
-        <label className="flex items-center gap-2 pt-6 text-sm">
-          <input
-            type="checkbox"
-            className="accent-ink"
-            checked={inputs.pad !== null}
-            onChange={(e) => set({ pad: e.target.checked ? { ...GENERIC.pad } : null })}
-          />
-          Thermal break pad
-        </label>
+        <CheckBox
+          label="Thermal break pad"
+          checked={inputs.pad !== null}
+          onChange={(checked) => set({ pad: checked ? { ...GENERIC.pad } : null })}
+        />
         {inputs.pad ? <Boxes boxes={PAD_BOXES} inputs={inputs.pad} onChange={(pad) => set({ pad })} /> : null}
       </div>
     </div>

@@ -86,7 +86,7 @@ export function AddBridgeValueForm({ orgId }: { orgId: string }) {
   );
 }
 
-function BridgeValueFields({ form }: { form: UseFormReturn<Values, unknown, BridgeValueInput> }) {
+function BridgeValueFields<Output>({ form }: { form: UseFormReturn<Values, unknown, Output> }) {
   const kind = useWatch({ control: form.control, name: 'kind' });
   return (
     <>

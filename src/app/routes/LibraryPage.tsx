@@ -148,7 +148,7 @@ function LibrarySection({
   intro,
   children,
 }: {
-  title: string;
+  title: ReactNode;
   intro: ReactNode;
   children: ReactNode;
 }) {

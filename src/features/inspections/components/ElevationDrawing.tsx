@@ -1,4 +1,5 @@
 import type { InspectionSummary } from '@shared/inspections/schema';
+import type { ReactNode } from 'react';
 import { Link } from 'react-router';
 import { areaText, type ElevationState, elevationState } from '../scope';
 
@@ -55,36 +56,15 @@ export function ElevationDrawing({
               {JOINTS.map((y) => (
                 <line key={y} x1={x + 2} x2={x + w - 2} y1={y} y2={y} stroke="var(--color-rule-strong)" />
               ))}
-              <text
-                x={x + w / 2}
-                y={height / 2 - 6}
-                textAnchor="middle"
-                fontSize={44}
-                fill="var(--color-ink)"
-              >
+              <CentredText x={x + w / 2} y={height / 2 - 6} size={44}>
                 {look.glyph}
-              </text>
-              <text
-                x={x + w / 2}
-                y={height / 2 + 26}
-                textAnchor="middle"
-                fontSize={w < 150 ? 16 : 24}
-                fill="var(--color-ink)"
-                stroke="var(--color-paper-raised)"
-                strokeWidth={5}
-                paintOrder="stroke"
-              >
+              </CentredText>
+              <CentredText x={x + w / 2} y={height / 2 + 26} size={w < 150 ? 16 : 24} halo>
                 {look.words}
-              </text>
-              <text
-                x={x + w / 2}
-                y={height + 24}
-                textAnchor="middle"
-                fontSize={w < 150 ? 16 : 24}
-                fill="var(--color-ink)"
-              >
+              </CentredText>
+              <CentredText x={x + w / 2} y={height + 24} size={w < 150 ? 16 : 24}>
                 {areaText(i.scope.area)}
-              </text>
+              </CentredText>
             </g>
           );
         })}
@@ -104,5 +84,33 @@ export function ElevationDrawing({
         })}
       </ul>
     </figure>
+  );
+}
+
+/** Ink text centred on x; `halo` outlines it in the paper colour so it reads over the state's fill. */
+function CentredText({
+  x,
+  y,
+  size,
+  halo = false,
+  children,
+}: {
+  x: number;
+  y: number;
+  size: number;
+  halo?: boolean;
+  children: ReactNode;
+}) {
+  return (
+    <text
+      x={x}
+      y={y}
+      textAnchor="middle"
+      fontSize={size}
+      fill="var(--color-ink)"
+      {...(halo ? { stroke: 'var(--color-paper-raised)', strokeWidth: 5, paintOrder: 'stroke' } : {})}
+    >
+      {children}
+    </text>
   );
 }

@@ -1,8 +1,8 @@
 import type { Project, ProjectClimate } from '@shared/schemas/project';
+import { ConflictBanner, ConflictChoice, useConflictChoice } from '../../../components/ui/ConflictChoice';
+import { editFormProps } from '../../../components/ui/EditForm';
 import { formatDateTime } from '../../../lib/format';
 import { useConflictEdit } from '../../../lib/use-conflict-edit';
-import { ConflictBanner, ConflictChoice, useConflictChoice } from '../../projects/components/ConflictChoice';
-import { editFormProps } from '../../projects/edit-form';
 import { conflictingProject, useUpdateClimate } from '../api/update-climate';
 import { type ClimateFormValues, climateToForm, mergeClimate } from '../climate-form';
 import { ClimateForm } from './ClimateForm';

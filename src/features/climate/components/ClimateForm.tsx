@@ -7,6 +7,7 @@ import type { Project, ProjectClimate } from '@shared/schemas/project';
 import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { Link } from 'react-router';
+import { EditFormFoot, type EditFormProps } from '../../../components/ui/EditForm';
 import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
 import { NotSaved } from '../../../components/ui/NotSaved';
@@ -17,7 +18,6 @@ import { TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
 import { formatQuantity, parseInput, type Quantity, quantityInput, unitOf } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
-import { EditFormFoot, type EditFormProps } from '../../projects/edit-form';
 import { type ClimateFormValues, climateErrorMap, climateFormSchema, MONTH_NAMES } from '../climate-form';
 import { HUMIDITY_CLASSES, isInventedClimate } from '../humidity-classes';
 

@@ -1,4 +1,6 @@
 import type { Project, ProjectInput } from '@shared/schemas/project';
+import { ConflictBanner, ConflictChoice, useConflictChoice } from '../../../components/ui/ConflictChoice';
+import { editFormProps } from '../../../components/ui/EditForm';
 import { Table, Td, Th } from '../../../components/ui/Table';
 import { formatDateTime } from '../../../lib/format';
 import {
@@ -9,8 +11,6 @@ import {
 import { useUnitSystem } from '../../../lib/unit-system';
 import { useConflictEdit } from '../../../lib/use-conflict-edit';
 import { conflictingProject, useUpdateProject } from '../api/update-project';
-import { editFormProps } from '../edit-form';
-import { ConflictBanner, ConflictChoice, useConflictChoice } from './ConflictChoice';
 import { ProjectForm, type ProjectFormValues, projectToFormValues } from './ProjectForm';
 
 type Field = keyof ProjectInput;

@@ -3,6 +3,7 @@ import { CLIMATE_ZONES, type ProjectInput, projectInputSchema } from '@shared/sc
 import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import type { z } from 'zod';
+import { EditFormFoot, type EditFormProps } from '../../../components/ui/EditForm';
 import { Field } from '../../../components/ui/Field';
 import { NotSaved } from '../../../components/ui/NotSaved';
 import { QuantityInput } from '../../../components/ui/QuantityInput';
@@ -18,7 +19,6 @@ import {
 } from '../../../lib/project-fields';
 import { quantityInput as quantityMeasure } from '../../../lib/quantities';
 import { useUnitSystem } from '../../../lib/unit-system';
-import { EditFormFoot, type EditFormProps } from '../edit-form';
 
 export type ProjectFormValues = z.input<typeof projectInputSchema>;
 

@@ -1,6 +1,6 @@
 import { type ReactNode, useState } from 'react';
-import { Button } from '../../../components/ui/Button';
-import { Notice } from '../../../components/ui/Notice';
+import { Button } from './Button';
+import { Notice } from './Notice';
 
 /**
  * The two ways on after someone saved first (project and climate editors): carry this person's changes onto

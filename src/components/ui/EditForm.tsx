@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { FormSaveBar } from '../../components/ui/FormSaveBar';
+import { FormSaveBar } from './FormSaveBar';
 
 /** What an editor hands the form it shows (site data, climate); a new project's page hands the same. */
 export interface EditFormProps<V, Out> {

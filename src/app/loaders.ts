@@ -21,8 +21,7 @@ import { inspectionQueryOptions } from '../features/inspections/api/get-inspecti
 import { inspectionsQueryOptions } from '../features/inspections/api/get-inspections';
 import { invitationQueryOptions } from '../features/invitations/api/get-invitation';
 import { attachmentProductsQueryOptions } from '../features/library/api/attachment-products';
-import { bridgeValuesQueryOptions } from '../features/library/api/get-bridge-values';
-import { firmMaterialsQueryOptions } from '../features/library/api/get-firm-materials';
+import { bridgeValuesQueryOptions, firmMaterialsQueryOptions } from '../features/library/api/firm-lists';
 import { referenceMaterialsQueryOptions } from '../features/library/api/get-reference-materials';
 import { meQueryOptions } from '../features/me/api/get-me';
 import { firmOf } from '../features/me/firm';

@@ -7,9 +7,7 @@ import { AssemblyBuilder } from '../../features/assemblies/components/AssemblyBu
 import { AssemblyView } from '../../features/assemblies/components/AssemblyView';
 import { DuplicateAssembly } from '../../features/assemblies/components/DuplicateAssembly';
 import { RevisionHistory } from '../../features/assemblies/components/RevisionHistory';
-import { useAddBridgeValue } from '../../features/library/api/add-bridge-value';
-import { useBridgeValues } from '../../features/library/api/get-bridge-values';
-import { useFirmMaterials } from '../../features/library/api/get-firm-materials';
+import { useAddBridgeValue, useBridgeValues, useFirmMaterials } from '../../features/library/api/firm-lists';
 import { useMe } from '../../features/me/api/get-me';
 import { firmOf } from '../../features/me/firm';
 import { useAssemblyCopyTargets } from '../../features/projects/api/get-projects';

@@ -2,7 +2,7 @@ import { bridgeValueInputSchema } from '@shared/schemas/assembly';
 import type { UnitSystem } from '@shared/units';
 import { type UseFormReturn, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
-import { useAddBridgeValue } from '../api/add-bridge-value';
+import { useAddBridgeValue } from '../api/firm-lists';
 import { parseLibraryNumber } from '../units';
 import { AddEntryForm, type EntryField, EntryFields, libraryResolver, shownIn } from './AddEntryForm';
 

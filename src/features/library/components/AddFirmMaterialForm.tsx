@@ -1,6 +1,6 @@
 import { orgMaterialInputSchema } from '@shared/schemas/assembly';
 import type { UnitSystem } from '@shared/units';
-import { type FirmMaterialInput, useAddFirmMaterial } from '../api/add-firm-material';
+import { type FirmMaterialInput, useAddFirmMaterial } from '../api/firm-lists';
 import { type LibraryMeasure, parseLibraryNumber } from '../units';
 import { AddEntryForm, type EntryField, EntryFields, libraryResolver, shownIn } from './AddEntryForm';
 

@@ -1,8 +1,7 @@
 import { GENERIC_MATERIAL_NOTE, type Material } from '@shared/calc/thermal/materials';
 import type { BridgeValue, OrgMaterial } from '@shared/schemas/assembly';
 import { useUnitSystem } from '../../../lib/unit-system';
-import { useDeleteBridgeValue } from '../api/delete-bridge-value';
-import { useDeleteFirmMaterial } from '../api/delete-firm-material';
+import { useDeleteBridgeValue, useDeleteFirmMaterial } from '../api/firm-lists';
 import { libraryNumber, libraryUnit } from '../units';
 import {
   addedColumn,

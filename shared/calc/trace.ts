@@ -44,7 +44,7 @@ export function step(
 export const v = (value: number, unit: string): TraceInput => ({ value, unit });
 
 /** Version of the shared calculation engine; stored with every result and printed on every sheet. */
-export const ENGINE_VERSION = '0.5.0';
+export const ENGINE_VERSION = '0.6.0';
 
 /**
  * The same result without its trace steps: every `trace` member, at any depth (a joint schedule has one per

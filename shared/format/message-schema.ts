@@ -109,6 +109,16 @@ const windWarnings = [
 export const windWarningSchema = z.discriminatedUnion('code', [...windWarnings]);
 export type WindWarning = z.infer<typeof windWarningSchema>;
 
+/** The takeoff's notes on how it counted (fixed statements; which apply depends on the input). */
+const takeoffNotes = [
+  message('joints_gross_through_openings', none),
+  message('waste_on_sealant_and_tape', none),
+  message('base_net_of_doors', none),
+  message('fasteners_counted_on_girt_lines', none),
+] as const;
+export const takeoffNoteSchema = z.discriminatedUnion('code', [...takeoffNotes]);
+export type TakeoffNote = z.infer<typeof takeoffNoteSchema>;
+
 const failedCheck = z.object({ check: z.string(), utilisation: z.number() });
 
 export const engineMessageSchema = z.discriminatedUnion('code', [
@@ -162,6 +172,7 @@ export const engineMessageSchema = z.discriminatedUnion('code', [
   ...moistureWarnings,
   ...jointWarnings,
   ...windWarnings,
+  ...takeoffNotes,
   /** A joint's warning among a check run's cautions: the joint's name and the warning. */
   message('joint_warning', z.object({ joint: z.string(), warning: jointWarningSchema })),
 

@@ -194,6 +194,23 @@ const WORDS: [EngineMessage, string][] = [
     }),
     'Interstitial condensation builds up: it peaks at 0.5\u202fkg/m² in March and 0.2\u202fkg/m² remain after the 12 months, so water accumulates year on year — the wall fails the ISO 13788 balance. Mould risk: the clear-field interior surface exceeds 80 % RH in January, February (f_Rsi 0.700). Mould risk at clip (f_Rsi 0.600): below f_Rsi,max 0.750.',
   ],
+  // The takeoff's notes: the words the engine wrote before they became codes (D-035).
+  [
+    m('joints_gross_through_openings', '', {}),
+    'Panel joints are measured gross through openings (opening positions are not part of the input).',
+  ],
+  [
+    m('waste_on_sealant_and_tape', '', {}),
+    'Waste applies to sealant and tape; trim pieces and fasteners are net geometric counts.',
+  ],
+  [
+    m('base_net_of_doors', 'walls', {}),
+    'The base is taken as one run net of door widths; each door splits it on site.',
+  ],
+  [
+    m('fasteners_counted_on_girt_lines', 'fasteners', {}),
+    'Fasteners: girt lines from the base to the top at the girt spacing, fasteners end to end; only points certainly inside an opening are deducted.',
+  ],
 ];
 
 /*

@@ -176,6 +176,14 @@ export function messageText(m: EngineMessage, system: UnitSystem = 'SI'): string
       return moistureVerdict(m.values, system);
     case 'joint_warning':
       return `${m.values.joint}: ${messageText(m.values.warning, system)}`;
+    case 'joints_gross_through_openings':
+      return 'Panel joints are measured gross through openings (opening positions are not part of the input).';
+    case 'waste_on_sealant_and_tape':
+      return 'Waste applies to sealant and tape; trim pieces and fasteners are net geometric counts.';
+    case 'base_net_of_doors':
+      return 'The base is taken as one run net of door widths; each door splits it on site.';
+    case 'fasteners_counted_on_girt_lines':
+      return 'Fasteners: girt lines from the base to the top at the girt spacing, fasteners end to end; only points certainly inside an opening are deducted.';
     default:
       return warningText(m, system);
   }

@@ -1,6 +1,7 @@
 import { measure } from '@shared/calc/answer';
 import { traceStepSchema } from '@shared/calc/trace';
 import { M, M2, M3 } from '@shared/calc/trace-units';
+import { takeoffNoteSchema } from '@shared/format/message-schema';
 import { z } from 'zod';
 
 /**
@@ -163,7 +164,9 @@ export const takeoffResultSchema = z.object({
   fasteners: count('Fasteners').nullable(),
   lines: z.array(traceStepSchema).describe('The takeoff lines (quantities), each with its formula'),
   trace: z.array(traceStepSchema).describe('Every step, per wall and in total'),
-  notes: z.array(z.string()),
+  notes: z
+    .array(takeoffNoteSchema)
+    .describe('How the takeoff counted: messages `{ code, path, values }` worded by the client'),
 });
 
 export type TakeoffJointType = z.infer<typeof takeoffJointTypeSchema>;

@@ -92,7 +92,7 @@ describe('a single wall by hand (derived)', () => {
     const r = calculateTakeoff(input({}, { openings: [{ width: 2, height: 2.4, count: 1, kind: 'door' }] }));
     expect(r.lengths.opening).toBeCloseTo(2 + 2 * 2.4, 12);
     expect(r.lengths.base).toBe(8);
-    expect(r.notes.join(' ')).toMatch(/door/);
+    expect(r.notes.map((n) => n.code)).toContain('base_net_of_doors');
   });
   it('sealant volume, waste and packages', () => {
     const bead = { shape: 'rectangular', width: 0.02, depth: 0.01 } as const;

@@ -1,6 +1,7 @@
 import { CalcInputError, requireInRange, requireNonNegative, requirePositive } from '@shared/calc/errors';
 import { step, type TraceStep, v } from '@shared/calc/trace';
 import { M, M2, M3, PCS } from '@shared/calc/trace-units';
+import { engineMessage, type TakeoffNote } from '@shared/format/message-schema';
 import { INCH } from '@shared/units';
 import {
   type BeadProfile,
@@ -508,16 +509,13 @@ export function calculateTakeoff(input: TakeoffInput): TakeoffResult {
     );
   }
 
-  const notes = [
-    'Panel joints are measured gross through openings (opening positions are not part of the input).',
-    'Waste applies to sealant and tape; trim pieces and fasteners are net geometric counts.',
+  const notes: TakeoffNote[] = [
+    engineMessage('joints_gross_through_openings', '', {}),
+    engineMessage('waste_on_sealant_and_tape', '', {}),
   ];
   if (input.walls.some((w) => w.openings.some((o) => o.kind === 'door')))
-    notes.push('The base is taken as one run net of door widths; each door splits it on site.');
-  if (input.fasteners)
-    notes.push(
-      'Fasteners: girt lines from the base to the top at the girt spacing, fasteners end to end; only points certainly inside an opening are deducted.',
-    );
+    notes.push(engineMessage('base_net_of_doors', 'walls', {}));
+  if (input.fasteners) notes.push(engineMessage('fasteners_counted_on_girt_lines', 'fasteners', {}));
 
   return {
     lengths,

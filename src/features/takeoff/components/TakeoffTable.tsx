@@ -1,4 +1,5 @@
 import { TAKEOFF_JOINT_TYPES, type TakeoffInput, type TakeoffResult } from '@shared/calc/takeoff/schema';
+import { messageText } from '@shared/format/messages';
 import { formatJointDimension, formatPageMeasure } from '@shared/format/page-measures';
 import type { UnitSystem } from '@shared/units';
 import { useState } from 'react';
@@ -181,7 +182,7 @@ export function TakeoffTable({ input, result, assemblyName }: TakeoffTableProps)
 
       <ul className="list-disc pl-5 text-sm text-ink-muted">
         {result.notes.map((n) => (
-          <li key={n}>{n}</li>
+          <li key={n.code}>{messageText(n)}</li>
         ))}
       </ul>
 

@@ -6,7 +6,7 @@ import { Field } from '../../../components/ui/Field';
 import { Notice } from '../../../components/ui/Notice';
 import { TextArea, TextInput } from '../../../components/ui/TextInput';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
-import { submitShowingError } from '../../../lib/submit-showing-error';
+import { submitting } from '../../../lib/form-submit';
 import { useSaveCriteriaMeta } from '../api/save-criteria';
 import { CriteriaTextFields } from './CriteriaTextFields';
 
@@ -39,7 +39,7 @@ export function CriteriaMetaForm({
   return (
     <form
       className="flex max-w-form flex-col gap-4"
-      onSubmit={submitShowingError(async () =>
+      onSubmit={submitting(async () =>
         onSaved(await save.mutateAsync({ setId: set.id, revision: set.revision, changes: meta })),
       )}
     >

@@ -3,7 +3,7 @@ import { useNavigate } from 'react-router';
 import { Button } from '../../../components/ui/Button';
 import { Notice } from '../../../components/ui/Notice';
 import { errorMessage, isApiRequestError } from '../../../lib/api';
-import { submitShowingError } from '../../../lib/submit-showing-error';
+import { submitting } from '../../../lib/form-submit';
 import { useCreateCriteriaSet } from '../api/create-criteria-set';
 import { CriteriaTextFields } from './CriteriaTextFields';
 
@@ -16,7 +16,7 @@ export function NewCriteriaSetForm({ orgId }: { orgId: string }) {
   return (
     <form
       className="flex max-w-form flex-col gap-4"
-      onSubmit={submitShowingError(async () => {
+      onSubmit={submitting(async () => {
         const set = await create.mutateAsync({ orgId, input });
         navigate(`/code-tables/${set.id}`);
       })}
